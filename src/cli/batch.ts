@@ -1,0 +1,65 @@
+/**
+ * Drives a command over its inputs: one result or one error per input, in
+ * order, written as they come; returns how many failed.
+ */
+import { fail, PondusError } from '../errors/pondus-error.js';
+import type { InputItem } from './input/inputs.js';
+import type { OutputFormat } from './output/format.js';
+import type { Presenter } from './output/presenter.js';
+import { createWriter } from './output/writers.js';
+import type { Sink } from './output/sink.js';
+import type { ChalkInstance } from 'chalk';
+
+export interface BatchIo {
+  out: Sink;
+  err: Sink;
+  outStyle: ChalkInstance;
+  errStyle: ChalkInstance;
+}
+
+export interface BatchSummary {
+  total: number;
+  failed: number;
+  failedLines: number[];
+}
+
+/**
+ * Runs a presenter over batches of inputs, writing each result as it comes.
+ *
+ * @example
+ * await runBatch(massPresenter({}), inputBatches(['H2O'], process.stdin), 'json', io, false)
+ */
+export async function runBatch<R>(p: Presenter<R>, batches: AsyncIterable<InputItem[]>, format: OutputFormat, io: BatchIo, numbered: boolean): Promise<BatchSummary> {
+  const writer = createWriter(format, p, { ...io, numbered });
+  const summary: BatchSummary = { total: 0, failed: 0, failedLines: [] };
+  for await (const batch of batches) {
+    for (const item of batch) {
+      summary.total++;
+      let result: R;
+      try {
+        result = p.compute(item.text);
+      } catch (e) {
+        summary.failed++;
+        if (summary.failedLines.length < 10) summary.failedLines.push(item.line);
+        writer.fail(item, asPondusError(e, item.text));
+        continue;
+      }
+      writer.ok(item, result);
+    }
+    writer.endBatch(false);
+    await io.out.flush();
+    await io.err.flush();
+  }
+  writer.endBatch(true);
+  return summary;
+}
+
+/** Any error becomes a PondusError: bad input is reported, a defect is reported too, never as a stack trace. */
+export function asPondusError(e: unknown, input: string): PondusError {
+  if (e instanceof PondusError) return e;
+  if (e instanceof RangeError && /call stack/i.test(e.message)) {
+    return fail({ code: 'INPUT_TOO_LONG', message: 'the input is too deeply nested to process' }, input);
+  }
+  const msg = e instanceof Error ? e.message : String(e);
+  return fail({ code: 'INTERNAL_ERROR', message: `internal error (please report it): ${msg}` }, input);
+}

@@ -1,0 +1,50 @@
+import type { Command } from 'commander';
+import { composition, type CompositionResult } from '../../composition/element-shares.js';
+import { compositionJson } from '../../composition/composition-json.js';
+import { amountText } from '../../formula/amount.js';
+import { displayMolarMass, displayPercent, fixedTable } from '../output/display.js';
+import type { Presenter } from '../output/presenter.js';
+import { withFormulaOptions, type FormulaOptions } from './common.js';
+import type { CommandRunner } from './runner.js';
+
+interface CompositionCliOptions extends FormulaOptions {
+  part?: string;
+}
+
+/** The presenter for `pondus composition`. */
+export function compositionPresenter(o: CompositionCliOptions): Presenter<CompositionResult> {
+  const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations, part: o.part };
+  const columns = ['input', 'formula', 'molarMass', 'massPercent'];
+  if (o.part !== undefined) columns.push('part', 'partCount', 'partMassPercent');
+  return {
+    compute: (input) => composition(input, opts),
+    json: compositionJson,
+    columns,
+    cells: (r) => {
+      const cells = [r.input, r.formula, r.molarMass.toFixed(), r.elements.map((e) => `${e.symbol}=${e.massPercent.toDecimalPlaces(6).toFixed()}`).join(' ')];
+      if (r.part) cells.push(r.part.part, amountText(r.part.count), r.part.massPercent.toDecimalPlaces(6).toFixed());
+      return cells;
+    },
+    block: (r) => {
+      const rows = r.elements.map((e) => [e.symbol, amountText(e.count), e.mass.toFixed(), displayPercent(e.massPercent)]);
+      const lines = [`${r.input}  →  ${r.formula}   M = ${displayMolarMass(r.mass)} g/mol`];
+      lines.push(fixedTable(['element', 'count', 'mass g/mol', 'mass %'], rows, ['left', 'right', 'right', 'right']));
+      if (r.part) {
+        lines.push(`${r.part.part}: ${amountText(r.part.count)} × ${r.part.unitMass.toFixed()} g/mol = ${r.part.mass.toFixed()} g/mol, ${displayPercent(r.part.massPercent)} % by mass`);
+      }
+      return lines.join('\n');
+    },
+    notes: (r) => r.notes.map((n) => n.message),
+  };
+}
+
+/** Registers `pondus composition`. */
+export function registerComposition(program: Command, run: CommandRunner): void {
+  withFormulaOptions(
+    program
+      .command('composition')
+      .description('percent by mass of each element, and of a fragment with --part')
+      .argument('[formulas...]', 'formulas; - reads one per line from standard input')
+      .option('--part <fragment>', 'also the mass fraction of a fragment: H2O in a hydrate, SO4 in a salt, Fe in an iron salt'),
+  ).action((formulas: string[], o: CompositionCliOptions) => run(formulas, o, compositionPresenter(o)));
+}

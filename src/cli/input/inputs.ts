@@ -1,0 +1,33 @@
+import { readLineBatches } from './read-lines.js';
+
+/** One input to a command, with its 1-based position in the whole input sequence. */
+export interface InputItem {
+  text: string;
+  line: number;
+}
+
+/**
+ * The inputs of a command as batches: the arguments in order, with `-` replaced
+ * by the lines of standard input.
+ *
+ * @example
+ * for await (const batch of inputBatches(['H2O', '-'], () => process.stdin)) …
+ */
+export async function* inputBatches(args: string[], stdin: () => AsyncIterable<string | Buffer>): AsyncGenerator<InputItem[]> {
+  let line = 0;
+  let pending: InputItem[] = [];
+  for (const a of args) {
+    if (a === '-') {
+      if (pending.length) yield pending;
+      pending = [];
+      for await (const batch of readLineBatches(stdin())) {
+        const items = new Array<InputItem>(batch.length);
+        for (let i = 0; i < batch.length; i++) items[i] = { text: batch[i], line: ++line };
+        yield items;
+      }
+    } else {
+      pending.push({ text: a, line: ++line });
+    }
+  }
+  if (pending.length) yield pending;
+}

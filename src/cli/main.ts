@@ -1,0 +1,94 @@
+/**
+ * The pondus command line: a thin layer that parses arguments, feeds inputs
+ * to the library through a presenter, and sets the exit status
+ * (0 all inputs succeeded, 1 some failed, 2 usage error).
+ */
+import { Command, CommanderError } from 'commander';
+import type { Writable } from 'node:stream';
+import { PondusError } from '../errors/pondus-error.js';
+import { renderError } from '../errors/render.js';
+import { runBatch } from './batch.js';
+import { registerComposition } from './commands/composition.js';
+import { outputFormat } from './commands/common.js';
+import { registerMass } from './commands/mass.js';
+import type { CommandRunner } from './commands/runner.js';
+import { inputBatches } from './input/inputs.js';
+import { Sink } from './output/sink.js';
+import { styleFor } from './output/style.js';
+
+export const VERSION = '0.1.0';
+
+/** The streams a run uses; tests pass their own. */
+export interface CliIo {
+  /** Standard input, asked for only when an input is `-` (opening it costs start-up time). */
+  stdin: () => AsyncIterable<string | Buffer>;
+  stdout: Writable & { isTTY?: boolean };
+  stderr: Writable & { isTTY?: boolean };
+}
+
+/**
+ * Runs pondus with the given arguments (without `node` and the script path) and returns the exit status.
+ *
+ * @example
+ * await main(['mass', 'H2O', '--json'], { stdin: () => process.stdin, stdout: process.stdout, stderr: process.stderr }) // 0
+ */
+export async function main(args: string[], io: CliIo): Promise<number> {
+  const out = new Sink(io.stdout);
+  const err = new Sink(io.stderr);
+  const outStyle = styleFor(io.stdout);
+  const errStyle = styleFor(io.stderr);
+  let status = 0;
+
+  const run: CommandRunner = async (inputs, options, presenter) => {
+    const format = outputFormat(options);
+    if (inputs.length === 0) {
+      throw new PondusError([{ code: 'USAGE', message: 'no inputs: give them as arguments, or - to read one per line from standard input' }]);
+    }
+    const summary = await runBatch(presenter, inputBatches(inputs, io.stdin), format, { out, err, outStyle, errStyle }, inputs.includes('-') || inputs.length > 1);
+    if (summary.failed > 0) {
+      status = 1;
+      if (format !== 'table' || summary.total > 1) {
+        const lines = summary.failedLines.join(', ') + (summary.failed > summary.failedLines.length ? ', …' : '');
+        err.write(`pondus: ${summary.failed} of ${summary.total} input${summary.total === 1 ? '' : 's'} failed (line${summary.failed === 1 ? '' : 's'} ${lines})\n`);
+      }
+    }
+  };
+
+  const program = new Command()
+    .name('pondus')
+    .description('Quantitative chemistry for the bench: molar masses, composition, formulas from measurements, elemental analysis, reactions and solutions.')
+    .version(VERSION)
+    .exitOverride()
+    .showSuggestionAfterError(true)
+    .configureOutput({
+      writeOut: (s) => out.write(s),
+      writeErr: (s) => err.write(s),
+      outputError: (s, write) => write(errStyle.red(s)),
+    });
+  registerMass(program, run);
+  registerComposition(program, run);
+
+  try {
+    await program.parseAsync(args, { from: 'user' });
+  } catch (e) {
+    if (e instanceof CommanderError) {
+      status = e.exitCode === 0 ? 0 : 2;
+    } else if (e instanceof PondusError && e.first.code === 'USAGE') {
+      err.write(`pondus: ${e.first.message}\n`);
+      status = 2;
+    } else if (e instanceof PondusError) {
+      err.write(renderError(e, { emphasis: errStyle.red }) + '\n');
+      status = 2;
+    } else {
+      err.write(`pondus: internal error (please report it): ${e instanceof Error ? e.message : String(e)}\n`);
+      status = 2;
+    }
+  }
+  if (args.length === 0) {
+    program.outputHelp();
+    status = 2;
+  }
+  await out.flush(true);
+  await err.flush(true);
+  return status;
+}

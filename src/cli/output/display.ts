@@ -1,0 +1,38 @@
+/**
+ * How numbers look in tables: reported figures, not raw digits. JSON and
+ * CSV carry full precision; tables show what a chemist would write down.
+ */
+import Table from 'cli-table3';
+import type { Decimal } from '../../exact/decimal.js';
+import type { MassResult } from '../../mass/formula-mass.js';
+import { reportedMolarMass } from '../../mass/reported-mass.js';
+import { displayMeasured } from '../../sigfig/round.js';
+import type { Cell } from './format.js';
+
+/** The molar mass to the precision the atomic weights support. */
+export function displayMolarMass(r: MassResult): string {
+  return displayMeasured(reportedMolarMass(r)).text;
+}
+
+/** Monoisotopic mass to six decimals (accurate-mass practice). */
+export function displayMonoisotopic(r: MassResult): string {
+  return r.monoisotopicMass.toFixed(6);
+}
+
+/** A percentage to two decimals, as analysis reports give it. */
+export function displayPercent(p: Decimal): string {
+  return p.toFixed(2);
+}
+
+/** A charge as chemists write it: 2+, 1-, 0. */
+export function chargeLabel(charge: number): string {
+  if (charge === 0) return '0';
+  return `${Math.abs(charge)}${charge > 0 ? '+' : '-'}`;
+}
+
+/** A plain aligned table without borders between rows. */
+export function fixedTable(head: string[], rows: Cell[][], align?: ('left' | 'right')[]): string {
+  const t = new Table({ head, colAligns: align, style: { head: [], border: [] }, chars: { mid: '', 'left-mid': '', 'mid-mid': '', 'right-mid': '' } });
+  for (const r of rows) t.push(r.map((c) => (c === null || c === undefined ? '' : String(c))));
+  return t.toString();
+}

@@ -1,0 +1,24 @@
+import type { Cell } from './format.js';
+
+/**
+ * How one command turns inputs into results and results into each output
+ * format. The batch runner drives it; commands only describe.
+ */
+export interface Presenter<R> {
+  /** Computes the result for one input; throws PondusError on bad input. */
+  compute(input: string): R;
+  /** The JSON Lines object for a result. */
+  json(result: R): unknown;
+  /** CSV/TSV header (first column is the input). */
+  columns: string[];
+  /** CSV/TSV cells for a result, matching `columns`. */
+  cells(result: R): Cell[];
+  /** Row-style table: header and cells. */
+  table?: { head: string[]; row(result: R): Cell[]; align?: ('left' | 'right')[] };
+  /** Block-style table output: a block of text per result. */
+  block?(result: R): string;
+  /** Remarks to print under the table for a result. */
+  notes?(result: R): string[];
+  /** A caution printed once after table output (results someone will act on). */
+  caution?: string;
+}

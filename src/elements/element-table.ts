@@ -1,0 +1,80 @@
+import data from './data/atomic-weights.json' with { type: 'json' };
+
+/** How CIAAW states an element's standard atomic weight. */
+export type StandardWeight =
+  | { kind: 'value'; value: string; uncertainty: string }
+  | { kind: 'interval'; low: string; high: string; conventional: string }
+  | { kind: 'none'; massNumber: number };
+
+/** One chemical element with its CIAAW data. Values are decimal strings, exactly as published. */
+export interface ElementData {
+  z: number;
+  symbol: string;
+  name: string;
+  standard: StandardWeight;
+  /** The abridged (five-figure) value and its uncertainty; null for elements without a standard atomic weight. */
+  abridged: { value: string; uncertainty: string } | null;
+  /** CIAAW footnotes: g, m, r. */
+  footnotes: string[];
+  /** Year of a revision after the 2021 table (2024 for Gd, Lu, Zr). */
+  revised: number | null;
+}
+
+interface RawElement {
+  z: number;
+  symbol: string;
+  name: string;
+  value?: string;
+  uncertainty?: string;
+  interval?: string[];
+  conventional?: string;
+  massNumber?: number;
+  abridged?: string;
+  abridgedUncertainty?: string;
+  footnotes?: string[];
+  revised?: number;
+}
+
+function toElement(r: RawElement): ElementData {
+  let standard: StandardWeight;
+  if (r.interval) standard = { kind: 'interval', low: r.interval[0], high: r.interval[1], conventional: r.conventional! };
+  else if (r.value) standard = { kind: 'value', value: r.value, uncertainty: r.uncertainty! };
+  else standard = { kind: 'none', massNumber: r.massNumber! };
+  return {
+    z: r.z,
+    symbol: r.symbol,
+    name: r.name,
+    standard,
+    abridged: r.abridged ? { value: r.abridged, uncertainty: r.abridgedUncertainty! } : null,
+    footnotes: r.footnotes ?? [],
+    revised: r.revised ?? null,
+  };
+}
+
+/** All 118 elements in order of atomic number. */
+export const ELEMENTS: readonly ElementData[] = Object.freeze((data.elements as RawElement[]).map(toElement));
+
+/** Where the element data come from, as stated in the data file. */
+export const ATOMIC_WEIGHT_PROVENANCE: Readonly<Record<string, string>> = Object.freeze({ ...data.provenance });
+
+const BY_SYMBOL: ReadonlyMap<string, ElementData> = new Map(ELEMENTS.map((e) => [e.symbol, e]));
+
+/**
+ * Looks up an element by its symbol (case-sensitive, as symbols are).
+ *
+ * @example
+ * getElement('Fe')?.name // 'iron'
+ */
+export function getElement(symbol: string): ElementData | undefined {
+  return BY_SYMBOL.get(symbol);
+}
+
+/**
+ * True when `symbol` is one of the 118 element symbols.
+ *
+ * @example
+ * isElementSymbol('Co') // true; isElementSymbol('CO') // false
+ */
+export function isElementSymbol(symbol: string): boolean {
+  return BY_SYMBOL.has(symbol);
+}

@@ -1,0 +1,86 @@
+import { readFileSync } from 'node:fs';
+import isotopes from './data/isotopes.json' with { type: 'json' };
+
+/** A nuclide with its AME2020 atomic mass (decimal string, in u). */
+export interface Nuclide {
+  symbol: string;
+  massNumber: number;
+  mass: string;
+}
+
+/** A naturally occurring isotope with its CIAAW ICE 2013 amount fraction and AME2020 mass. */
+export interface NaturalIsotope {
+  massNumber: number;
+  abundance: string;
+  uncertainty: string;
+  mass: string;
+}
+
+interface IsotopeEntry {
+  natural?: [number, string, string, string][];
+  longestLived?: [number, string];
+}
+
+const TABLE = isotopes.isotopes as unknown as Record<string, IsotopeEntry>;
+
+/** Where the isotope data come from. */
+export const NUCLIDE_PROVENANCE: Readonly<Record<string, string>> = Object.freeze({ ...isotopes.provenance });
+
+let fullTable: Map<string, string> | null = null;
+
+/**
+ * The complete AME2020 table (3,557 nuclides) is read from its data file only
+ * when a formula names a nuclide that is not a natural isotope ([14C], [18F]):
+ * it is large, and most runs never need it.
+ */
+function allNuclides(): Map<string, string> {
+  if (fullTable) return fullTable;
+  const url = new URL('./data/nuclide-masses.json', import.meta.url);
+  const data = JSON.parse(readFileSync(url, 'utf8')) as { nuclides: [string, number, string, string][] };
+  fullTable = new Map();
+  for (const [symbol, a, mass] of data.nuclides) fullTable.set(`${a}${symbol}`, mass);
+  return fullTable;
+}
+
+/**
+ * The AME2020 atomic mass of a nuclide, or undefined when AME2020 lists no such nuclide.
+ *
+ * @example
+ * getNuclide('C', 13)?.mass // '13.00335483507'
+ */
+export function getNuclide(symbol: string, massNumber: number): Nuclide | undefined {
+  const entry = TABLE[symbol];
+  if (!entry) return undefined;
+  for (const [a, , , mass] of entry.natural ?? []) if (a === massNumber) return { symbol, massNumber, mass };
+  if (entry.longestLived && entry.longestLived[0] === massNumber) return { symbol, massNumber, mass: entry.longestLived[1] };
+  const mass = allNuclides().get(`${massNumber}${symbol}`);
+  return mass === undefined ? undefined : { symbol, massNumber, mass };
+}
+
+/**
+ * The naturally occurring isotopes of an element (empty for elements with none in ICE 2013).
+ *
+ * @example
+ * naturalIsotopes('Cl').map(i => i.massNumber) // [35, 37]
+ */
+export function naturalIsotopes(symbol: string): NaturalIsotope[] {
+  return (TABLE[symbol]?.natural ?? []).map(([massNumber, abundance, uncertainty, mass]) => ({ massNumber, abundance, uncertainty, mass }));
+}
+
+/**
+ * The isotope used for monoisotopic mass: the most abundant natural isotope or,
+ * for elements without a natural composition, the longest-lived isotope.
+ *
+ * @example
+ * principalIsotope('Br').massNumber // 79
+ */
+export function principalIsotope(symbol: string): Nuclide {
+  const entry = TABLE[symbol];
+  if (!entry) throw new Error(`no isotope data for ${symbol}`);
+  if (entry.natural && entry.natural.length > 0) {
+    const best = entry.natural.reduce((a, b) => (Number(b[1]) > Number(a[1]) ? b : a));
+    return { symbol, massNumber: best[0], mass: best[3] };
+  }
+  const [massNumber, mass] = entry.longestLived!;
+  return { symbol, massNumber, mass };
+}

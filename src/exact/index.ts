@@ -1,0 +1,2 @@
+export { Decimal } from './decimal.js';
+export { toScaled, fromScaled, scaledToString, SCALE_DIGITS } from './scaled.js';

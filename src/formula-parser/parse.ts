@@ -1,0 +1,134 @@
+/**
+ * Entry points of the formula parser: text in, typed tree or PondusError out.
+ * Parsing never computes masses; see ../mass and ../composition for that.
+ */
+import type { IRecognitionException, IToken } from 'chevrotain';
+import type { Issue } from '../errors/issue.js';
+import { PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { ABBREVIATIONS } from './abbreviations.js';
+import { formulaGrammar } from './grammar.js';
+import { columnOf, MAX_FORMULA_LENGTH, prescan } from './prescan.js';
+import { ABBREVIATION_MODE, formulaLexer, PLAIN_MODE } from './tokens.js';
+import { end, type ComponentNode, type FormulaTree, type GroupNode, type PartNode, type Span } from './tree.js';
+import { TreeBuilder } from './visitor.js';
+
+/** Options for {@link parseFormula}. */
+export interface ParseOptions {
+  /** Read group abbreviations (Me, Et, Ph, Boc, …). Off by default, because Pr, Ac and Ts are also element symbols. */
+  abbreviations?: boolean;
+  /** Longest input accepted (default 10,000 characters). */
+  maxLength?: number;
+}
+
+let builder: TreeBuilder | null = null;
+
+/**
+ * Parses a chemical formula into a typed tree. Throws a {@link PondusError} on bad input.
+ *
+ * @example
+ * parseFormula('CuSO4·5H2O').components.length // 2
+ * parseFormula('[Fe(CN)6]^4-').charge          // -4
+ */
+export function parseFormula(input: string, options: ParseOptions = {}): FormulaTree {
+  const pre = prescan(input, options.maxLength ?? MAX_FORMULA_LENGTH);
+  if (pre) throw new PondusError([pre], input);
+
+  const lexed = formulaLexer.tokenize(input, options.abbreviations ? ABBREVIATION_MODE : PLAIN_MODE);
+  if (lexed.errors.length > 0) {
+    const e = lexed.errors[0];
+    throw new PondusError([unexpectedCharacter(input, e.offset)], input);
+  }
+  const grammar = formulaGrammar();
+  grammar.input = lexed.tokens;
+  const cst = grammar.formula();
+  if (grammar.errors.length > 0) throw new PondusError([syntaxIssue(input, grammar.errors[0], lexed.tokens)], input);
+
+  builder ??= new TreeBuilder();
+  const built = builder.build(cst, input, expandAbbreviation);
+  if (built.issues.length > 0) throw new PondusError(built.issues, input);
+  return { kind: 'formula', input, components: built.components, charge: built.charge, notes: built.notes };
+}
+
+/**
+ * Like {@link parseFormula} but never throws for bad input: returns `{ success, data | error }`.
+ *
+ * @example
+ * safeParseFormula('Xx').success // false
+ */
+export function safeParseFormula(input: string, options: ParseOptions = {}): SafeResult<FormulaTree> {
+  return toSafe(() => parseFormula(input, options));
+}
+
+const CHAR_HINTS: Record<string, string> = {
+  ',': 'give one formula per argument or per line',
+  ';': 'give one formula per argument or per line',
+  '/': 'a formula has no division; for a fraction of a unit use a decimal count such as ·0.5H2O',
+  '^': "a caret starts a charge such as ^2+ or ^-",
+  '=': 'equations go to the balance command',
+  '>': 'equations go to the balance command',
+  '→': 'equations go to the balance command',
+  '_': 'write counts directly after the symbol: H2O',
+};
+
+function unexpectedCharacter(input: string, offset: number): Issue {
+  const ch = String.fromCodePoint(input.codePointAt(offset)!);
+  const i: Issue = { code: 'UNEXPECTED_CHARACTER', message: `unexpected character '${ch}' at column ${columnOf(input, offset)}`, column: columnOf(input, offset), length: 1 };
+  const hint = CHAR_HINTS[ch];
+  if (hint) i.hint = hint;
+  return i;
+}
+
+const CHARGE_TOKENS = new Set(['CaretCharge', 'SuperscriptCharge']);
+
+function syntaxIssue(input: string, err: IRecognitionException, tokens: IToken[]): Issue {
+  const t = err.token;
+  const isEof = t.tokenType.name === 'EOF' || Number.isNaN(t.startOffset);
+  if (isEof) {
+    const last = tokens[tokens.length - 1];
+    const offset = last ? end(last) : input.length;
+    const after = last ? ` after '${last.image}'` : '';
+    return { code: 'UNEXPECTED_TOKEN', message: `the formula ends too early${after}: expected an element symbol or an opening bracket`, column: columnOf(input, offset), length: 1 };
+  }
+  const column = columnOf(input, t.startOffset);
+  const length = Math.max(1, end(t) - t.startOffset);
+  const name = t.tokenType.name;
+  const prev = tokens[tokens.indexOf(t) - 1];
+  if (prev && (CHARGE_TOKENS.has(prev.tokenType.name) || prev.tokenType.name === 'Sign')) {
+    return { code: 'MISPLACED_CHARGE', message: `a charge must come at the end of the formula; '${t.image}' follows the charge '${prev.image}'`, column: columnOf(input, prev.startOffset), length: prev.image.length };
+  }
+  if (CHARGE_TOKENS.has(name) || name === 'Sign') {
+    return { code: 'MISPLACED_CHARGE', message: `a charge must come at the end of the formula, after a symbol, count or bracket; unexpected '${t.image}' at column ${column}`, column, length };
+  }
+  if (name === 'Number' || name === 'SubscriptDigits') {
+    return { code: 'UNEXPECTED_TOKEN', message: `unexpected count '${t.image}' at column ${column}: a count follows an element symbol or a closing bracket`, column, length };
+  }
+  if (name === 'Separator') {
+    return { code: 'UNEXPECTED_TOKEN', message: `unexpected '${t.image}' at column ${column}: the addition dot stands between two formulas, as in CuSO4·5H2O`, column, length };
+  }
+  if (name === 'SuperscriptDigits') {
+    return { code: 'UNEXPECTED_TOKEN', message: `superscript digits at column ${column} must be a mass number before an element symbol (¹³C) or a charge ending in ⁺ or ⁻`, column, length };
+  }
+  return { code: 'UNEXPECTED_TOKEN', message: `unexpected '${t.image}' at column ${column}`, column, length };
+}
+
+const expansions = new Map<string, ComponentNode[]>();
+
+/** Parses an abbreviation's formula once and re-spans it onto the abbreviation in the input. */
+function expandAbbreviation(name: string, span: Span): ComponentNode[] {
+  let body = expansions.get(name);
+  if (!body) {
+    body = parseFormula(ABBREVIATIONS[name].formula).components;
+    expansions.set(name, body);
+  }
+  return body.map((c) => respanComponent(c, span));
+}
+
+function respanComponent(c: ComponentNode, span: Span): ComponentNode {
+  return { ...c, span, parts: c.parts.map((p) => respanPart(p, span)) };
+}
+
+function respanPart(p: PartNode, span: Span): PartNode {
+  if (p.kind === 'atom') return { ...p, span };
+  const g: GroupNode = { ...p, span, body: p.body.map((c) => respanComponent(c, span)) };
+  return g;
+}

@@ -1,0 +1,89 @@
+/**
+ * Checks run on the raw text before lexing: length, control characters, and
+ * bracket matching with a depth limit. They give precise messages for the
+ * problems a grammar reports poorly, and keep hostile input (a 20,000-deep
+ * nesting, a megabyte line) away from the recursive-descent parser.
+ */
+import type { Issue } from '../errors/issue.js';
+
+/** Longest formula text accepted, in UTF-16 code units. */
+export const MAX_FORMULA_LENGTH = 10_000;
+/** Deepest bracket nesting accepted. Real formulas rarely go past four. */
+export const MAX_NESTING = 32;
+
+const ISOTOPE_LABEL = /\[[0-9]+[A-Za-z]+\]/y;
+const OPEN: Record<string, string> = { '(': ')', '[': ']', '{': '}' };
+const CLOSE: Record<string, string> = { ')': '(', ']': '[', '}': '{' };
+
+/**
+ * 1-based column (in code points) of a UTF-16 offset.
+ *
+ * @example
+ * columnOf('H₂O', 2) // 3
+ */
+export function columnOf(text: string, offset: number): number {
+  let col = 1;
+  for (let i = 0; i < offset && i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c >= 0xd800 && c <= 0xdbff) i++;
+    col++;
+  }
+  return col;
+}
+
+/**
+ * Returns the first problem found in the raw formula text, or null.
+ *
+ * @example
+ * prescan('Ca(OH2') // { code: 'UNCLOSED_GROUP', column: 3, … }
+ */
+export function prescan(text: string, maxLength = MAX_FORMULA_LENGTH): Issue | null {
+  if (text.trim() === '') return { code: 'EMPTY_INPUT', message: 'the formula is empty' };
+  if (text.length > maxLength) {
+    return { code: 'INPUT_TOO_LONG', message: `the formula is ${text.length.toLocaleString('en-US')} characters long; the limit is ${maxLength.toLocaleString('en-US')}`, column: maxLength + 1 };
+  }
+  const stack: number[] = [];
+  for (let i = 0; i < text.length; i++) {
+    const ch = text[i];
+    const code = text.charCodeAt(i);
+    if ((code < 0x20 && code !== 0x09) || code === 0x7f || (code >= 0x80 && code < 0xa0)) {
+      return { code: 'CONTROL_CHARACTER', message: `control character U+${code.toString(16).toUpperCase().padStart(4, '0')} in the formula`, column: columnOf(text, i) };
+    }
+    if (ch === '[') {
+      ISOTOPE_LABEL.lastIndex = i;
+      const label = ISOTOPE_LABEL.exec(text);
+      if (label) {
+        i += label[0].length - 1;
+        continue;
+      }
+    }
+    if (OPEN[ch]) {
+      if (stack.length >= MAX_NESTING) {
+        return { code: 'NESTING_TOO_DEEP', message: `brackets nested more than ${MAX_NESTING} deep`, column: columnOf(text, i) };
+      }
+      let j = i + 1;
+      while (text[j] === ' ' || text[j] === '\t') j++;
+      if (text[j] === OPEN[ch]) {
+        return { code: 'EMPTY_GROUP', message: `empty brackets '${ch}${OPEN[ch]}'`, column: columnOf(text, i), length: 2 };
+      }
+      stack.push(i);
+    } else if (CLOSE[ch]) {
+      if (stack.length === 0) {
+        return { code: 'UNMATCHED_CLOSING', message: `'${ch}' has no opening '${CLOSE[ch]}'`, column: columnOf(text, i) };
+      }
+      const open = stack.pop()!;
+      if (text[open] !== CLOSE[ch]) {
+        return {
+          code: 'MISMATCHED_BRACKET',
+          message: `'${ch}' at column ${columnOf(text, i)} closes '${text[open]}' from column ${columnOf(text, open)}; expected '${OPEN[text[open]]}'`,
+          column: columnOf(text, i),
+        };
+      }
+    }
+  }
+  if (stack.length > 0) {
+    const open = stack[stack.length - 1];
+    return { code: 'UNCLOSED_GROUP', message: `'${text[open]}' at column ${columnOf(text, open)} is never closed`, column: columnOf(text, open) };
+  }
+  return null;
+}

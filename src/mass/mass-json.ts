@@ -1,0 +1,31 @@
+import type { MassResult } from './formula-mass.js';
+
+/** The stable JSON shape of a mass result (the `mass --json` contract). */
+export interface MassJson {
+  input: string;
+  formula: string;
+  molarMass: number;
+  monoisotopicMass: number;
+  nominalMass: number | null;
+  charge: number;
+  notes?: string[];
+}
+
+/**
+ * The JSON object `pondus mass --json` writes for one result; numbers at full precision.
+ *
+ * @example
+ * massJson(formulaMass('H2O')) // { input: 'H2O', formula: 'H2O', molarMass: 18.015, monoisotopicMass: 18.010564683056, nominalMass: 18, charge: 0 }
+ */
+export function massJson(r: MassResult): MassJson {
+  const o: MassJson = {
+    input: r.input,
+    formula: r.formula,
+    molarMass: r.molarMass.toNumber(),
+    monoisotopicMass: r.monoisotopicMass.toNumber(),
+    nominalMass: r.nominalMass,
+    charge: r.charge,
+  };
+  if (r.notes.length > 0) o.notes = r.notes.map((n) => n.message);
+  return o;
+}

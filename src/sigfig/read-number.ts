@@ -1,0 +1,60 @@
+/**
+ * Reads a number as written and counts its significant figures by the textbook
+ * rules (OpenStax Chemistry 2e §1.5): all non-zero digits count; zeros between
+ * them count; leading zeros do not; trailing zeros count after a decimal point
+ * (`8.80`, `250.`) and are ambiguous without one (`1300`: read as two
+ * significant figures, with a note).
+ */
+import { Decimal } from '../exact/decimal.js';
+import { fail } from '../errors/pondus-error.js';
+import type { Measured } from './measured.js';
+
+/** A number read from text, with the remark when its precision was ambiguous. */
+export interface ReadNumber extends Measured {
+  text: string;
+  /** Set when trailing zeros made the precision ambiguous. */
+  ambiguous: boolean;
+}
+
+const NUMBER = /^([+-]?)(\d*)(?:\.(\d*))?(?:[eE]([+-]?\d+))?$/;
+/** Largest decimal exponent accepted in input. */
+export const MAX_EXPONENT = 1000;
+
+/**
+ * Reads a measured number from its text.
+ *
+ * @example
+ * readNumber('0.00340').lsd  // -5  (3 significant figures)
+ * readNumber('1300').lsd     // 2   (2 significant figures, ambiguous)
+ * readNumber('2.50e2').lsd   // 0   (3 significant figures)
+ */
+export function readNumber(text: string, column?: number): ReadNumber {
+  const t = text.trim();
+  const m = NUMBER.exec(t);
+  if (!m || (m[2] === '' && (m[3] === undefined || m[3] === ''))) {
+    throw fail({ code: 'BAD_NUMBER', message: `'${text}' is not a number`, column });
+  }
+  const [, sign, int, frac, expText] = m;
+  const exp = expText ? Number(expText) : 0;
+  if (!Number.isSafeInteger(exp) || Math.abs(exp) > MAX_EXPONENT) {
+    throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `'${text}' is out of range (exponents up to ±${MAX_EXPONENT})`, column });
+  }
+  const value = new Decimal(`${sign}${int || '0'}${frac ? '.' + frac : ''}`).times(new Decimal(10).pow(exp));
+  const hasPoint = frac !== undefined;
+  const digits = (int + (frac ?? '')).replace(/^0+/, '');
+  let lsd: number;
+  let ambiguous = false;
+  if (hasPoint) {
+    lsd = -(frac ?? '').length + exp;
+  } else {
+    // no decimal point: trailing zeros of the integer are not significant
+    const trailing = /0*$/.exec(int)![0].length;
+    if (digits === '') {
+      lsd = exp; // '0'
+    } else {
+      lsd = trailing + exp;
+      ambiguous = trailing > 0;
+    }
+  }
+  return { value, lsd, text: t, ambiguous };
+}
