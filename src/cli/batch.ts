@@ -6,7 +6,7 @@ import { fail, PondusError } from '../errors/pondus-error.js';
 import type { InputItem } from './input/inputs.js';
 import type { OutputFormat } from './output/format.js';
 import type { Presenter } from './output/presenter.js';
-import { createWriter } from './output/writers.js';
+import { createWriter, type ResultWriter } from './output/writers.js';
 import type { Sink } from './output/sink.js';
 import type { ChalkInstance } from 'chalk';
 
@@ -33,25 +33,35 @@ export async function runBatch<R>(p: Presenter<R>, batches: AsyncIterable<InputI
   const writer = createWriter(format, p, { ...io, numbered });
   const summary: BatchSummary = { total: 0, failed: 0, failedLines: [] };
   for await (const batch of batches) {
-    for (const item of batch) {
-      summary.total++;
-      let result: R;
-      try {
-        result = p.compute(item.text);
-      } catch (e) {
-        summary.failed++;
-        if (summary.failedLines.length < 10) summary.failedLines.push(item.line);
-        writer.fail(item, asPondusError(e, item.text));
-        continue;
-      }
-      writer.ok(item, result);
-    }
+    processItems(p, batch, writer, summary);
     writer.endBatch(false);
     await io.out.flush();
     await io.err.flush();
   }
   writer.endBatch(true);
   return summary;
+}
+
+/**
+ * Computes and writes the results of one batch, in order, counting failures.
+ *
+ * @example
+ * processItems(massPresenter({}), [{ text: 'H2O', line: 1 }], writer, summary)
+ */
+export function processItems<R>(p: Presenter<R>, items: InputItem[], writer: ResultWriter<R>, summary: BatchSummary): void {
+  for (const item of items) {
+    summary.total++;
+    let result: R;
+    try {
+      result = p.compute(item.text);
+    } catch (e) {
+      summary.failed++;
+      if (summary.failedLines.length < 10) summary.failedLines.push(item.line);
+      writer.fail(item, asPondusError(e, item.text));
+      continue;
+    }
+    writer.ok(item, result);
+  }
 }
 
 /** Any error becomes a PondusError: bad input is reported, a defect is reported too, never as a stack trace. */

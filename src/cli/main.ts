@@ -12,6 +12,7 @@ import { registerComposition } from './commands/composition.js';
 import { outputFormat } from './commands/common.js';
 import { registerMass } from './commands/mass.js';
 import type { CommandRunner } from './commands/runner.js';
+import { PRESENTERS } from './commands/registry.js';
 import { inputBatches } from './input/inputs.js';
 import { Sink } from './output/sink.js';
 import { styleFor } from './output/style.js';
@@ -39,12 +40,14 @@ export async function main(args: string[], io: CliIo): Promise<number> {
   const errStyle = styleFor(io.stderr);
   let status = 0;
 
-  const run: CommandRunner = async (inputs, options, presenter) => {
+  const run: CommandRunner = async (command, inputs, options) => {
+    const presenter = PRESENTERS[command](options);
     const format = outputFormat(options);
     if (inputs.length === 0) {
       throw new PondusError([{ code: 'USAGE', message: 'no inputs: give them as arguments, or - to read one per line from standard input' }]);
     }
-    const summary = await runBatch(presenter, inputBatches(inputs, io.stdin), format, { out, err, outStyle, errStyle }, inputs.includes('-') || inputs.length > 1);
+    const numbered = inputs.includes('-') || inputs.length > 1;
+    const summary = await runBatch(presenter, inputBatches(inputs, io.stdin), format, { out, err, outStyle, errStyle }, numbered);
     if (summary.failed > 0) {
       status = 1;
       if (format !== 'table' || summary.total > 1) {

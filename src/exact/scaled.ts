@@ -45,10 +45,16 @@ export function fromScaled(n: number): Decimal {
  * scaledToString(18015000000000) // '18.015'
  */
 export function scaledToString(n: number): string {
-  const neg = n < 0;
-  let s = String(Math.abs(n));
-  if (s.length <= SCALE_DIGITS) s = s.padStart(SCALE_DIGITS + 1, '0');
-  const int = s.slice(0, s.length - SCALE_DIGITS);
-  const frac = s.slice(s.length - SCALE_DIGITS).replace(/0+$/, '');
-  return (neg ? '-' : '') + (frac ? `${int}.${frac}` : int);
+  const abs = Math.abs(n);
+  const int = Math.floor(abs / 1e12);
+  const frac = abs - int * 1e12; // exact: both are integers below 2^53
+  const sign = n < 0 ? '-' : '';
+  if (frac === 0) return sign + int;
+  let f = String(frac);
+  if (f.length < SCALE_DIGITS) f = ZEROS.slice(f.length) + f;
+  let end = SCALE_DIGITS;
+  while (f.charCodeAt(end - 1) === 48) end--;
+  return `${sign}${int}.${end === SCALE_DIGITS ? f : f.slice(0, end)}`;
 }
+
+const ZEROS = '000000000000';

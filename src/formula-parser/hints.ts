@@ -2,7 +2,8 @@
  * Suggestions for words that are not element symbols: the ways the same letters
  * split into real symbols (`co` → `CO` or `Co`, `nacl` → `NaCl`).
  */
-import { isElementSymbol } from '../elements/element-table.js';
+import { getElement, isElementSymbol } from '../elements/element-table.js';
+import type { Note } from '../errors/issue.js';
 import { ABBREVIATIONS } from './abbreviations.js';
 
 const MAX_SUGGESTIONS = 4;
@@ -85,4 +86,31 @@ export function caseTrapNote(symbol: string, elementName: string, others: Iterab
   for (const o of others) if (o === 'C' || o === 'H') organic = true;
   if (!organic) return undefined;
   return `'${symbol}' is read as ${elementName}; if you meant the two atoms, write '${alt}'`;
+}
+
+/**
+ * The case-check notes for the set of element symbols in a formula.
+ *
+ * @example
+ * caseTrapNotes(new Set(['Co', 'H'])) // [{ code: 'CASE_CHECK', message: "'Co' is read as cobalt; …" }]
+ */
+export function caseTrapNotes(symbols: Set<string>): Note[] {
+  const notes: Note[] = [];
+  if (symbols.size < 2) return notes;
+  for (const s of symbols) {
+    if (!CASE_TRAPS[s]) continue;
+    const msg = caseTrapNote(s, getElement(s)!.name, [...symbols].filter((o) => o !== s));
+    if (msg) notes.push({ code: 'CASE_CHECK', message: msg });
+  }
+  return notes;
+}
+
+/**
+ * True when a symbol is one of the two-letter symbols checked for a slip of case.
+ *
+ * @example
+ * isCaseTrap('Co') // true
+ */
+export function isCaseTrap(symbol: string): boolean {
+  return Object.hasOwn(CASE_TRAPS, symbol);
 }

@@ -6,6 +6,7 @@ import type { IRecognitionException, IToken } from 'chevrotain';
 import type { Issue } from '../errors/issue.js';
 import { PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { ABBREVIATIONS } from './abbreviations.js';
+import { fastParse } from './fast-path.js';
 import { formulaGrammar } from './grammar.js';
 import { columnOf, MAX_FORMULA_LENGTH, prescan } from './prescan.js';
 import { ABBREVIATION_MODE, formulaLexer, PLAIN_MODE } from './tokens.js';
@@ -30,6 +31,10 @@ let builder: TreeBuilder | null = null;
  * parseFormula('[Fe(CN)6]^4-').charge          // -4
  */
 export function parseFormula(input: string, options: ParseOptions = {}): FormulaTree {
+  if (!options.abbreviations && (options.maxLength === undefined || input.length <= options.maxLength)) {
+    const fast = fastParse(input);
+    if (fast) return fast;
+  }
   const pre = prescan(input, options.maxLength ?? MAX_FORMULA_LENGTH);
   if (pre) throw new PondusError([pre], input);
 

@@ -4,10 +4,10 @@
  */
 import type { CstNode, IToken } from 'chevrotain';
 import type { Issue, Note } from '../errors/issue.js';
-import { getElement, isElementSymbol } from '../elements/element-table.js';
+import { isElementSymbol } from '../elements/element-table.js';
 import { getNuclide } from '../elements/nuclides.js';
 import { formulaGrammar } from './grammar.js';
-import { caseTrapNote, unknownSymbolHint } from './hints.js';
+import { caseTrapNotes, unknownSymbolHint } from './hints.js';
 import { columnOf } from './prescan.js';
 import { end as endOf, type AtomNode, type ComponentNode, type CountNode, type GroupNode, type PartNode, type Span } from './tree.js';
 
@@ -63,7 +63,7 @@ export class TreeBuilder extends BaseVisitor {
     this.symbols = new Set();
     this.expand = expand;
     const { components, charge } = this.visit(cst) as { components: ComponentNode[]; charge: number };
-    this.caseTraps();
+    this.notes.push(...caseTrapNotes(this.symbols));
     return { components, charge, issues: this.issues, notes: this.notes };
   }
 
@@ -212,13 +212,6 @@ export class TreeBuilder extends BaseVisitor {
     return sign * magnitude;
   }
 
-  private caseTraps(): void {
-    for (const s of this.symbols) {
-      const others = [...this.symbols].filter((o) => o !== s);
-      const msg = caseTrapNote(s, getElement(s)!.name, others);
-      if (msg) this.notes.push({ code: 'CASE_CHECK', message: msg });
-    }
-  }
 }
 
 function placeholder(start: number, end: number): AtomNode {

@@ -5,6 +5,7 @@
  * and D and T count as hydrogen.
  */
 import { getAtomData } from '../elements/atom-data.js';
+import { ELEMENTS } from '../elements/element-table.js';
 import { amountText, type Amount } from './amount.js';
 import type { AtomCounts } from './flatten.js';
 
@@ -13,7 +14,17 @@ interface Keyed {
   symbol: string;
   massNumber: number;
   label: string;
+  /** Sort rank without carbon: alphabetical by symbol, then mass number (natural composition first). */
+  plain: number;
+  /** Sort rank with carbon present: C first, then H, then as `plain`. */
+  organic: number;
 }
+
+const SYMBOL_RANK = new Map(
+  ELEMENTS.map((e) => e.symbol)
+    .sort((a, b) => (a < b ? -1 : a > b ? 1 : 0))
+    .map((s, i) => [s, i] as const),
+);
 
 const described = new Map<string, Keyed>();
 
@@ -22,8 +33,11 @@ function describe(key: string): Keyed {
   if (hit) return hit;
   const m = /^([0-9]*)([A-Za-z]+)$/.exec(key)!;
   const massNumber = m[1] ? Number(m[1]) : 0;
-  const data = getAtomData(m[2], m[1] ? massNumber : null);
-  const k: Keyed = { key, symbol: m[2], massNumber, label: data ? data.label : key };
+  const symbol = m[2];
+  const data = getAtomData(symbol, m[1] ? massNumber : null);
+  const plain = (SYMBOL_RANK.get(symbol) ?? 999) * 1000 + massNumber;
+  const organic = symbol === 'C' ? massNumber - 2000 : symbol === 'H' ? massNumber - 1000 : plain;
+  const k: Keyed = { key, symbol, massNumber, label: data ? data.label : key, plain, organic };
   described.set(key, k);
   return k;
 }
@@ -32,14 +46,30 @@ function describe(key: string): Keyed {
  * The atom keys of a count map in Hill order.
  *
  * @example
- * hillOrder(new Map([['O', 1], ['H', 2]])) // ['H', 'O']
+ * hillOrder(new Map([['O', 1], ['H', 2]]).keys()) // ['H', 'O']
  */
 export function hillOrder(counts: Iterable<string>): string[] {
-  const items = [...counts].map(describe);
-  const hasCarbon = items.some((i) => i.symbol === 'C');
-  const rank = (i: Keyed): number => (hasCarbon ? (i.symbol === 'C' ? 0 : i.symbol === 'H' ? 1 : 2) : 2);
-  items.sort((a, b) => rank(a) - rank(b) || (a.symbol < b.symbol ? -1 : a.symbol > b.symbol ? 1 : 0) || a.massNumber - b.massNumber);
-  return items.map((i) => i.key);
+  const items: Keyed[] = [];
+  let hasCarbon = false;
+  for (const key of counts) {
+    const k = describe(key);
+    if (k.symbol === 'C') hasCarbon = true;
+    items.push(k);
+  }
+  // insertion sort: formulas have few kinds of atom
+  for (let i = 1; i < items.length; i++) {
+    const it = items[i];
+    const r = hasCarbon ? it.organic : it.plain;
+    let j = i - 1;
+    while (j >= 0 && (hasCarbon ? items[j].organic : items[j].plain) > r) {
+      items[j + 1] = items[j];
+      j--;
+    }
+    items[j + 1] = it;
+  }
+  const out = new Array<string>(items.length);
+  for (let i = 0; i < items.length; i++) out[i] = items[i].key;
+  return out;
 }
 
 /**
@@ -60,9 +90,9 @@ export function chargeText(charge: number): string {
  * @example
  * hillFormula(flattenFormula(parseFormula('CuSO4·5H2O')), 0) // 'H10CuO9S'
  */
-export function hillFormula(counts: AtomCounts, charge = 0): string {
+export function hillFormula(counts: AtomCounts, charge = 0, order: readonly string[] = hillOrder(counts.keys())): string {
   let s = '';
-  for (const key of hillOrder(counts.keys())) {
+  for (const key of order) {
     const n: Amount = counts.get(key)!;
     s += describe(key).label;
     if (!(typeof n === 'number' && n === 1)) s += amountText(n);

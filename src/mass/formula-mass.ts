@@ -1,13 +1,16 @@
 /**
  * Molar mass, monoisotopic mass and nominal mass of a formula, computed
- * exactly: scaled integers on the fast path, Decimal otherwise.
+ * exactly: in scaled integers (10^-12 u) on the fast path, in Decimal where
+ * counts are decimal or sums grow past the exact integer range. Decimal values
+ * and per-element contributions are built only when asked for, which keeps
+ * million-line batches fast.
  */
 import type { Note } from '../errors/issue.js';
 import { toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { ELECTRON_MASS } from '../elements/constants.js';
 import { getAtomData, type AtomData, type WeightTable } from '../elements/atom-data.js';
 import { Decimal } from '../exact/decimal.js';
-import { fromScaled } from '../exact/scaled.js';
+import { fromScaled, scaledToString, SCALE_DIGITS } from '../exact/scaled.js';
 import { isWhole, toDecimal, type Amount } from '../formula/amount.js';
 import { flattenFormula, type AtomCounts } from '../formula/flatten.js';
 import { hillFormula, hillOrder } from '../formula/hill.js';
@@ -38,24 +41,127 @@ export interface Contribution {
 
 /** Everything pondus computes about the mass of one formula. */
 export interface MassResult {
-  input: string;
+  readonly input: string;
   /** Hill formula with charge. */
-  formula: string;
-  charge: number;
-  /** Average molar mass in g/mol (numerically the relative formula mass), exact sum of the tabulated weights. */
-  molarMass: Decimal;
-  /** Monoisotopic mass in u: principal isotopes (AME2020), less the electrons of a cation or plus those of an anion. */
-  monoisotopicMass: Decimal;
+  readonly formula: string;
+  readonly charge: number;
+  /** Average molar mass in g/mol (numerically the relative formula mass), the exact sum of the tabulated weights. */
+  readonly molarMass: Decimal;
+  /** Monoisotopic mass in u: principal isotopes (AME2020), less the electrons of a cation or plus those of an anion (CODATA). */
+  readonly monoisotopicMass: Decimal;
   /** Nominal mass: the sum of the principal isotopes' mass numbers (null with non-integer counts). */
-  nominalMass: number | null;
+  readonly nominalMass: number | null;
   /** Per-atom contributions in Hill order. */
-  contributions: Contribution[];
+  readonly contributions: Contribution[];
   /** The atom totals. */
-  atoms: AtomCounts;
+  readonly atoms: AtomCounts;
   /** Assumptions and flags (elements without a standard atomic weight, how an ambiguous '.' was read, …). */
-  notes: Note[];
-  weights: WeightTable;
-  tree: FormulaTree;
+  readonly notes: Note[];
+  readonly weights: WeightTable;
+  readonly tree: FormulaTree;
+  /** The molar mass as the nearest JavaScript number. */
+  molarMassNumber(): number;
+  /** The monoisotopic mass as the nearest JavaScript number. */
+  monoisotopicMassNumber(): number;
+  /** The molar mass as exact decimal text ('18.015'). */
+  molarMassText(): string;
+  /** The monoisotopic mass as exact decimal text. */
+  monoisotopicMassText(): string;
+}
+
+const SCALE = 10 ** SCALE_DIGITS;
+const NO_NOTES: Note[] = Object.freeze([]) as unknown as Note[];
+
+class Computed implements MassResult {
+  readonly formula: string;
+  readonly nominalMass: number | null;
+  readonly notes: Note[];
+  private molarCache: Decimal | null = null;
+  private monoCache: Decimal | null = null;
+  private contributionsCache: Contribution[] | null = null;
+
+  constructor(
+    readonly tree: FormulaTree,
+    readonly atoms: AtomCounts,
+    private readonly data: AtomData[],
+    private readonly counts: Amount[],
+    readonly weights: WeightTable,
+    order: readonly string[],
+    /** Exact sums in 10^-12 u, or null when they need Decimal. */
+    private readonly molarScaled: number | null,
+    private readonly monoScaled: number | null,
+  ) {
+    this.formula = hillFormula(atoms, tree.charge, order);
+    let nominal: number | null = 0;
+    let notes: Note[] = tree.notes.length ? [...tree.notes] : NO_NOTES;
+    for (let i = 0; i < data.length; i++) {
+      const c = counts[i];
+      if (nominal !== null) nominal = typeof c === 'number' ? nominal + c * data[i].nominal : null;
+      if (data[i].noStandardWeight) {
+        const d = data[i];
+        if (notes === NO_NOTES) notes = [];
+        notes.push({ code: 'NO_STANDARD_WEIGHT', message: `${d.element.name} (${d.symbol}) has no standard atomic weight; the mass number of its longest-lived isotope, ${d.average.standard.text}, stands in for it` });
+      }
+    }
+    this.nominalMass = nominal !== null && Number.isSafeInteger(nominal) ? nominal : null;
+    if (this.nominalMass === null && counts.some((c) => !isWhole(c))) {
+      if (notes === NO_NOTES) notes = [];
+      notes.push({ code: 'NON_INTEGER_COUNTS', message: 'the formula has non-integer counts; the nominal mass is not defined' });
+    }
+    this.notes = notes;
+  }
+
+  get input(): string {
+    return this.tree.input;
+  }
+
+  get charge(): number {
+    return this.tree.charge;
+  }
+
+  get molarMass(): Decimal {
+    this.molarCache ??= this.molarScaled !== null ? fromScaled(this.molarScaled) : decimalSum(this.data, this.counts, (d) => d.average[this.weights].text);
+    return this.molarCache;
+  }
+
+  get monoisotopicMass(): Decimal {
+    if (this.monoCache) return this.monoCache;
+    let m = this.monoScaled !== null ? fromScaled(this.monoScaled) : decimalSum(this.data, this.counts, (d) => d.monoisotopic.text);
+    if (this.tree.charge !== 0) m = m.minus(new Decimal(ELECTRON_MASS).times(this.tree.charge));
+    this.monoCache = m;
+    return m;
+  }
+
+  molarMassNumber(): number {
+    // an exact integer divided by 10^12 is the correctly rounded double of the exact decimal
+    return this.molarScaled !== null ? this.molarScaled / SCALE : this.molarMass.toNumber();
+  }
+
+  monoisotopicMassNumber(): number {
+    return this.monoScaled !== null && this.tree.charge === 0 ? this.monoScaled / SCALE : this.monoisotopicMass.toNumber();
+  }
+
+  molarMassText(): string {
+    return this.molarScaled !== null ? scaledToString(this.molarScaled) : this.molarMass.toFixed();
+  }
+
+  monoisotopicMassText(): string {
+    return this.monoScaled !== null && this.tree.charge === 0 ? scaledToString(this.monoScaled) : this.monoisotopicMass.toFixed();
+  }
+
+  get contributions(): Contribution[] {
+    this.contributionsCache ??= this.data.map((d, i) => ({
+      key: d.key,
+      label: d.label,
+      symbol: d.symbol,
+      massNumber: d.massNumber,
+      count: this.counts[i],
+      atomicWeight: d.average[this.weights].text,
+      mass: toDecimal(this.counts[i]).times(d.average[this.weights].text),
+      atom: d,
+    }));
+    return this.contributionsCache;
+  }
 }
 
 /**
@@ -64,64 +170,33 @@ export interface MassResult {
  *
  * @example
  * formulaMass('H2O').molarMass.toString()        // '18.015'
- * formulaMass('H2O').monoisotopicMass.toString() // '18.010564683704'
+ * formulaMass('H2O').monoisotopicMass.toString() // '18.010564683056'
  */
 export function formulaMass(input: string | FormulaTree, options: MassOptions = {}): MassResult {
   const tree = typeof input === 'string' ? parseFormula(input, options) : input;
   const atoms = flattenFormula(tree);
   const weights = options.weights ?? 'standard';
-  const keys = hillOrder(atoms.keys());
-  const data: AtomData[] = keys.map((k) => atomDataOf(k));
-  const counts: Amount[] = keys.map((k) => atoms.get(k)!);
-
-  const molar = sum(data, counts, (d) => d.average[weights].scaled, (d) => d.average[weights].text);
-  let mono = sum(data, counts, (d) => d.monoisotopic.scaled, (d) => d.monoisotopic.text);
-  if (tree.charge !== 0) mono = mono.minus(new Decimal(ELECTRON_MASS).times(tree.charge));
-
-  let nominal: number | null = 0;
-  for (let i = 0; i < data.length; i++) {
-    const c = counts[i];
-    if (typeof c !== 'number') {
-      nominal = null;
-      break;
+  const order = hillOrder(atoms.keys());
+  const n = order.length;
+  const data = new Array<AtomData>(n);
+  const counts = new Array<Amount>(n);
+  let molar: number | null = 0;
+  let mono: number | null = 0;
+  for (let i = 0; i < n; i++) {
+    const d = (data[i] = atomDataOf(order[i]));
+    const c = (counts[i] = atoms.get(order[i])!);
+    if (typeof c === 'number') {
+      if (molar !== null) molar = safe(molar + c * d.average[weights].scaled);
+      if (mono !== null) mono = safe(mono + c * d.monoisotopic.scaled);
+    } else {
+      molar = mono = null;
     }
-    nominal += c * data[i].nominal;
   }
-  if (nominal !== null && !Number.isSafeInteger(nominal)) nominal = null;
+  return new Computed(tree, atoms, data, counts, weights, order, molar, mono);
+}
 
-  const notes: Note[] = [...tree.notes];
-  const contributions: Contribution[] = data.map((d, i) => {
-    if (d.noStandardWeight) {
-      notes.push({ code: 'NO_STANDARD_WEIGHT', message: `${d.element.name} (${d.symbol}) has no standard atomic weight; the mass number of its longest-lived isotope, ${d.average.standard.text}, stands in for it` });
-    }
-    return {
-      key: d.key,
-      label: d.label,
-      symbol: d.symbol,
-      massNumber: d.massNumber,
-      count: counts[i],
-      atomicWeight: d.average[weights].text,
-      mass: toDecimal(counts[i]).times(d.average[weights].text),
-      atom: d,
-    };
-  });
-  if (counts.some((c) => !isWhole(c))) {
-    notes.push({ code: 'NON_INTEGER_COUNTS', message: 'the formula has non-integer counts; the nominal mass is not defined' });
-  }
-
-  return {
-    input: tree.input,
-    formula: hillFormula(atoms, tree.charge),
-    charge: tree.charge,
-    molarMass: molar,
-    monoisotopicMass: mono,
-    nominalMass: nominal,
-    contributions,
-    atoms,
-    notes,
-    weights,
-    tree,
-  };
+function safe(n: number): number | null {
+  return Number.isSafeInteger(n) ? n : null;
 }
 
 /**
@@ -144,28 +219,19 @@ export function molarMass(input: string | FormulaTree, options: MassOptions = {}
   return formulaMass(input, options).molarMass;
 }
 
+const keyData = new Map<string, AtomData>();
+
 function atomDataOf(key: string): AtomData {
-  const m = /^([0-9]*)([A-Za-z]+)$/.exec(key)!;
-  return getAtomData(m[2], m[1] ? Number(m[1]) : null)!;
+  let d = keyData.get(key);
+  if (!d) {
+    const m = /^([0-9]*)([A-Za-z]+)$/.exec(key)!;
+    d = getAtomData(m[2], m[1] ? Number(m[1]) : null)!;
+    keyData.set(key, d);
+  }
+  return d;
 }
 
-/** Σ count × value, exactly: in scaled integers while safe, else in Decimal. */
-function sum(data: AtomData[], counts: Amount[], scaled: (d: AtomData) => number, text: (d: AtomData) => string): Decimal {
-  let acc = 0;
-  let exact = true;
-  for (let i = 0; i < data.length; i++) {
-    const c = counts[i];
-    if (typeof c !== 'number') {
-      exact = false;
-      break;
-    }
-    acc += c * scaled(data[i]);
-    if (!Number.isSafeInteger(acc)) {
-      exact = false;
-      break;
-    }
-  }
-  if (exact) return fromScaled(acc);
+function decimalSum(data: AtomData[], counts: Amount[], text: (d: AtomData) => string): Decimal {
   let d = new Decimal(0);
   for (let i = 0; i < data.length; i++) d = d.plus(toDecimal(counts[i]).times(text(data[i])));
   return d;

@@ -1,3 +1,3 @@
 export { formulaMass, safeFormulaMass, molarMass, type MassOptions, type MassResult, type Contribution } from './formula-mass.js';
-export { massJson, type MassJson } from './mass-json.js';
+export { massJson, massJsonLine, type MassJson } from './mass-json.js';
 export { reportedMolarMass } from './reported-mass.js';

@@ -21,11 +21,24 @@ export function massJson(r: MassResult): MassJson {
   const o: MassJson = {
     input: r.input,
     formula: r.formula,
-    molarMass: r.molarMass.toNumber(),
-    monoisotopicMass: r.monoisotopicMass.toNumber(),
+    molarMass: r.molarMassNumber(),
+    monoisotopicMass: r.monoisotopicMassNumber(),
     nominalMass: r.nominalMass,
     charge: r.charge,
   };
   if (r.notes.length > 0) o.notes = r.notes.map((n) => n.message);
   return o;
+}
+
+/**
+ * The same text as JSON.stringify(massJson(r)), written straight to one JSON
+ * line: the batch hot path, without an intermediate object.
+ *
+ * @example
+ * massJsonLine(formulaMass('H2O')) // '{"input":"H2O","formula":"H2O","molarMass":18.015,…}'
+ */
+export function massJsonLine(r: MassResult): string {
+  if (r.notes.length > 0) return JSON.stringify(massJson(r));
+  // Hill formulas hold only letters, digits, brackets, '.', '^', '+' and '-': nothing to escape
+  return `{"input":${JSON.stringify(r.input)},"formula":"${r.formula}","molarMass":${r.molarMassNumber()},"monoisotopicMass":${r.monoisotopicMassNumber()},"nominalMass":${r.nominalMass},"charge":${r.charge}}`;
 }

@@ -46,5 +46,5 @@ export function registerComposition(program: Command, run: CommandRunner): void 
       .description('percent by mass of each element, and of a fragment with --part')
       .argument('[formulas...]', 'formulas; - reads one per line from standard input')
       .option('--part <fragment>', 'also the mass fraction of a fragment: H2O in a hydrate, SO4 in a salt, Fe in an iron salt'),
-  ).action((formulas: string[], o: CompositionCliOptions) => run(formulas, o, compositionPresenter(o)));
+  ).action((formulas: string[], o: CompositionCliOptions) => run('composition', formulas, o));
 }

@@ -1,6 +1,6 @@
 import type { Command } from 'commander';
 import { formulaMass, type MassResult } from '../../mass/formula-mass.js';
-import { massJson } from '../../mass/mass-json.js';
+import { massJson, massJsonLine } from '../../mass/mass-json.js';
 import { chargeLabel, displayMolarMass, displayMonoisotopic } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { withFormulaOptions, type FormulaOptions } from './common.js';
@@ -12,6 +12,7 @@ export function massPresenter(o: FormulaOptions): Presenter<MassResult> {
   return {
     compute: (input) => formulaMass(input, opts),
     json: massJson,
+    jsonLine: massJsonLine,
     columns: ['input', 'formula', 'molarMass', 'monoisotopicMass', 'nominalMass', 'charge'],
     cells: (r) => [r.input, r.formula, r.molarMass.toFixed(), r.monoisotopicMass.toFixed(), r.nominalMass, r.charge],
     table: {
@@ -30,5 +31,5 @@ export function registerMass(program: Command, run: CommandRunner): void {
       .command('mass')
       .description('molar mass, monoisotopic mass and nominal mass of formulas')
       .argument('[formulas...]', 'formulas; - reads one per line from standard input'),
-  ).action((formulas: string[], o: FormulaOptions) => run(formulas, o, massPresenter(o)));
+  ).action((formulas: string[], o: FormulaOptions) => run('mass', formulas, o));
 }

@@ -9,6 +9,8 @@ export interface Presenter<R> {
   compute(input: string): R;
   /** The JSON Lines object for a result. */
   json(result: R): unknown;
+  /** Optional: the JSON line for a result, written directly (must equal JSON.stringify(json(result))). */
+  jsonLine?(result: R): string;
   /** CSV/TSV header (first column is the input). */
   columns: string[];
   /** CSV/TSV cells for a result, matching `columns`. */

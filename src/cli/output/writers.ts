@@ -9,7 +9,6 @@ import type { PondusError } from '../../errors/pondus-error.js';
 import type { InputItem } from '../input/inputs.js';
 import { delimitedCell, type Cell, type OutputFormat } from './format.js';
 import type { Presenter } from './presenter.js';
-import type { Sink } from './sink.js';
 
 export interface ResultWriter<R> {
   ok(item: InputItem, result: R): void;
@@ -18,13 +17,20 @@ export interface ResultWriter<R> {
   endBatch(final: boolean): void;
 }
 
-interface WriterContext {
-  out: Sink;
-  err: Sink;
+/** Where writers put text: a Sink, or a collector in a worker thread. */
+export interface TextOut {
+  write(text: string): void;
+}
+
+export interface WriterContext {
+  out: TextOut;
+  err: TextOut;
   errStyle: ChalkInstance;
   outStyle: ChalkInstance;
   /** True when inputs came from standard input or there are several: errors then say which line. */
   numbered: boolean;
+  /** False when someone else has written the CSV/TSV header already. */
+  header?: boolean;
 }
 
 /** Creates the writer for a format. */
@@ -42,9 +48,12 @@ export function createWriter<R>(format: OutputFormat, p: Presenter<R>, ctx: Writ
 }
 
 class JsonLinesWriter<R> implements ResultWriter<R> {
-  constructor(private readonly p: Presenter<R>, private readonly ctx: WriterContext) {}
+  private readonly line: (result: R) => string;
+  constructor(private readonly p: Presenter<R>, private readonly ctx: WriterContext) {
+    this.line = p.jsonLine ?? ((r) => JSON.stringify(p.json(r)));
+  }
   ok(_item: InputItem, result: R): void {
-    this.ctx.out.write(JSON.stringify(this.p.json(result)) + '\n');
+    this.ctx.out.write(this.line(result) + '\n');
   }
   fail(item: InputItem, error: PondusError): void {
     this.ctx.out.write(JSON.stringify({ input: item.text, line: item.line, error: errorJson(error) }) + '\n');
@@ -52,13 +61,25 @@ class JsonLinesWriter<R> implements ResultWriter<R> {
   endBatch(): void {}
 }
 
+/**
+ * The CSV/TSV header line for a presenter.
+ *
+ * @example
+ * delimitedHeader(massPresenter({}), ',') // 'input,formula,molarMass,…,error,message\n'
+ */
+export function delimitedHeader(p: Presenter<unknown>, sep: string): string {
+  return [...p.columns, 'error', 'message'].map((c) => delimitedCell(c, sep)).join(sep) + '\n';
+}
+
 class DelimitedWriter<R> implements ResultWriter<R> {
-  private headerDone = false;
-  constructor(private readonly p: Presenter<R>, private readonly ctx: WriterContext, private readonly sep: string) {}
+  private headerDone: boolean;
+  constructor(private readonly p: Presenter<R>, private readonly ctx: WriterContext, private readonly sep: string) {
+    this.headerDone = ctx.header === false;
+  }
   private line(cells: Cell[]): void {
     if (!this.headerDone) {
       this.headerDone = true;
-      this.line([...this.p.columns, 'error', 'message']);
+      this.ctx.out.write(delimitedHeader(this.p as Presenter<unknown>, this.sep));
     }
     let s = '';
     for (let i = 0; i < cells.length; i++) s += (i ? this.sep : '') + delimitedCell(cells[i], this.sep);
