@@ -102,6 +102,8 @@ class Scanner {
     if (depth >= MAX_NESTING) throw GIVE_UP;
     const start = this.pos;
     const open = this.text[start] as GroupNode['bracket'];
+    const after = this.text.charCodeAt(start + 1);
+    if (open === '[' && after >= 48 && after <= 57) throw GIVE_UP; // '[13C]' is a nuclide label
     this.pos++;
     const body = this.body(depth + 1, CLOSE_OF[open]);
     if (this.text[this.pos] !== CLOSE_OF[open]) throw GIVE_UP;

@@ -35,7 +35,17 @@ export function parseFormula(input: string, options: ParseOptions = {}): Formula
     const fast = fastParse(input);
     if (fast) return fast;
   }
-  const pre = prescan(input, options.maxLength ?? MAX_FORMULA_LENGTH);
+  return parseWithGrammar(input, options);
+}
+
+/**
+ * The full parser (Chevrotain lexer, grammar and visitor), without the fast path.
+ * parseFormula uses it for everything the fast path declines; tests compare the two.
+ *
+ * @example
+ * parseWithGrammar('H2O').components[0].parts.length // 2
+ */
+export function parseWithGrammar(input: string, options: ParseOptions = {}): FormulaTree {  const pre = prescan(input, options.maxLength ?? MAX_FORMULA_LENGTH);
   if (pre) throw new PondusError([pre], input);
 
   const lexed = formulaLexer.tokenize(input, options.abbreviations ? ABBREVIATION_MODE : PLAIN_MODE);

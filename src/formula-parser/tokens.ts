@@ -43,7 +43,7 @@ export const SuperscriptDigits = createToken({ name: 'SuperscriptDigits', patter
 /** `₂`: a count in Unicode subscripts. */
 export const SubscriptDigits = createToken({ name: 'SubscriptDigits', pattern: /[₀₁₂₃₄₅₆₇₈₉]+/ });
 /** `^2+`, `^-`, `^+3`: a charge after a caret. */
-export const CaretCharge = createToken({ name: 'CaretCharge', pattern: /\^(?:[0-9]*[+\-−]|[+\-−][0-9]*)/, start_chars_hint: ['^'] });
+export const CaretCharge = createToken({ name: 'CaretCharge', pattern: /\^(?:[+\-−][0-9]+|[0-9]*[+\-−])/, start_chars_hint: ['^'] });
 /** `12`, `0.5`: a count or a multiplier. */
 export const NumberToken = createToken({
   name: 'Number',

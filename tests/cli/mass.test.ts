@@ -1,0 +1,83 @@
+import { describe, expect, it } from 'vitest';
+import { jsonLines, pondus } from './run-cli.js';
+
+describe('pondus mass', () => {
+  it('prints a table by default', () => {
+    const r = pondus(['mass', 'H2O', 'CuSO4·5H2O']);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toMatch(/H2O\s+│\s+H2O\s+│\s+18\.015/);
+    expect(r.stdout).toContain('CuH10O9S');
+    expect(r.stdout).toContain('249.68');
+    expect(r.stdout).not.toMatch(/\u001b\[/); // NO_COLOR
+  });
+
+  it('writes one JSON object per input with the contract keys', () => {
+    const r = pondus(['mass', '--json', 'H2O', 'SO4^2-']);
+    expect(r.status).toBe(0);
+    const [w, s] = jsonLines(r.stdout);
+    // exact sums of CIAAW weights; monoisotopic mass from AME2020 (1H, 16O)
+    expect(w).toEqual({ input: 'H2O', formula: 'H2O', molarMass: 18.015, monoisotopicMass: 18.010564683056, nominalMass: 18, charge: 0 });
+    expect(s.charge).toBe(-2);
+    expect(s.formula).toBe('O4S^2-');
+  });
+
+  it('reads a batch from standard input, keeps order, and reports a bad line in place', () => {
+    const r = pondus(['mass', '--json', '-'], 'H2O\nNaCl\nXx2\n\nC6H12O6\n');
+    expect(r.status).toBe(1);
+    const out = jsonLines(r.stdout);
+    expect(out).toHaveLength(5);
+    expect(out.map((o) => o.input)).toEqual(['H2O', 'NaCl', 'Xx2', '', 'C6H12O6']);
+    expect(out[2]).toEqual({ input: 'Xx2', line: 3, error: { code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Xx'", column: 1 } });
+    expect(out[3].error.code).toBe('EMPTY_INPUT');
+    expect(out[4].molarMass).toBe(180.156);
+    expect(r.stderr).toContain('2 of 5 inputs failed (lines 3, 4)');
+  });
+
+  it('handles CRLF line ends and a byte-order mark', () => {
+    const r = pondus(['mass', '--json', '-'], '\ufeffH2O\r\nNaCl\r\n');
+    expect(jsonLines(r.stdout).map((o) => o.formula)).toEqual(['H2O', 'ClNa']);
+  });
+
+  it('writes CSV and TSV with a header and one row per input', () => {
+    const csv = pondus(['mass', '--csv', 'H2O', 'Q']);
+    expect(csv.stdout.split('\n')[0]).toBe('input,formula,molarMass,monoisotopicMass,nominalMass,charge,error,message');
+    expect(csv.stdout.split('\n')[1]).toBe('H2O,H2O,18.015,18.010564683056,18,0,,');
+    expect(csv.stdout.split('\n')[2]).toBe("Q,,,,,,UNKNOWN_ELEMENT,unknown element symbol 'Q'");
+    const tsv = pondus(['mass', '--tsv', 'NaCl']);
+    expect(tsv.stdout.split('\n')[1].split('\t').slice(0, 3)).toEqual(['NaCl', 'ClNa', '58.43976928']);
+  });
+
+  it('shows a bad formula with a caret, on standard error, exit 1', () => {
+    const r = pondus(['mass', 'Ca(OH2']);
+    expect(r.status).toBe(1);
+    expect(r.stdout).toBe('');
+    expect(r.stderr).toContain("error UNCLOSED_GROUP: '(' at column 3 is never closed\n  Ca(OH2\n    ^");
+  });
+
+  it('uses exit status 2 for usage errors', () => {
+    expect(pondus(['mass']).status).toBe(2);
+    expect(pondus(['mass', '--json', '--csv', 'H2O']).status).toBe(2);
+    expect(pondus(['mass', '--nope', 'H2O']).status).toBe(2);
+    expect(pondus(['weigh', 'H2O']).status).toBe(2);
+    expect(pondus(['mass', '--weights', 'old', 'H2O']).status).toBe(2);
+    expect(pondus([]).status).toBe(2);
+  });
+
+  it('never prints a stack trace, whatever the input', () => {
+    const hostile = ['('.repeat(5000) + 'H' + ')'.repeat(4000), 'C'.repeat(200000), '\u0000\u0001', '__proto__', 'constructor', 'C99999999999999999999', '💧'.repeat(50), '^'.repeat(100)].join('\n');
+    const r = pondus(['mass', '--json', '-'], hostile);
+    expect(r.status).toBe(1);
+    expect(jsonLines(r.stdout)).toHaveLength(8);
+    expect(r.stderr).not.toMatch(/\bat .*\(.*:\d+:\d+\)/);
+    const t = pondus(['mass', '-'], hostile);
+    expect(t.stderr).not.toMatch(/\bat .*\(.*:\d+:\d+\)/);
+    expect(t.stderr).toContain('NESTING_TOO_DEEP');
+  });
+
+  it('says which atomic weight stood in for an element without a standard one', () => {
+    const r = pondus(['mass', 'PuO2']);
+    expect(r.stdout).toContain('plutonium (Pu) has no standard atomic weight');
+    const j = jsonLines(pondus(['mass', '--json', 'PuO2']).stdout)[0];
+    expect(j.notes[0]).toContain('244');
+  });
+});

@@ -1,0 +1,68 @@
+import { describe, expect, it } from 'vitest';
+import { PondusError } from '../../src/errors/pondus-error.js';
+import { renderError } from '../../src/errors/render.js';
+import { parseFormula } from '../../src/formula-parser/parse.js';
+
+function issue(input: string, options = {}) {
+  try {
+    parseFormula(input, options);
+  } catch (e) {
+    if (e instanceof PondusError) return { ...e.first, rendered: renderError(e) };
+    throw e;
+  }
+  throw new Error(`expected ${input} to fail`);
+}
+
+describe('parse errors name the problem and the column', () => {
+  it.each([
+    ['', 'EMPTY_INPUT', undefined],
+    ['   ', 'EMPTY_INPUT', undefined],
+    ['Xx2', 'UNKNOWN_ELEMENT', 1],
+    ['NaXy', 'UNKNOWN_ELEMENT', 3],
+    ['co2', 'UNKNOWN_ELEMENT', 1],
+    ['Ca(OH2', 'UNCLOSED_GROUP', 3],
+    ['Ca(OH)2]', 'UNMATCHED_CLOSING', 8],
+    ['K4[Fe(CN)6)', 'MISMATCHED_BRACKET', 11],
+    ['Ca()2', 'EMPTY_GROUP', 3],
+    ['H0', 'BAD_COUNT', 2],
+    ['H02', 'BAD_COUNT', 2],
+    ['C1234567890', 'COUNT_TOO_LARGE', 2],
+    ['H1.1234567', 'BAD_COUNT', 2],
+    ['NH4+', 'AMBIGUOUS_CHARGE', 4],
+    ['SO42-', 'AMBIGUOUS_CHARGE', 5],
+    ['SO4^2-H', 'MISPLACED_CHARGE', 4],
+    ['Fe^0+', 'BAD_CHARGE', 3],
+    ['H2O·', 'UNEXPECTED_TOKEN', 5],
+    ['·H2O', 'UNEXPECTED_TOKEN', 1],
+    ['H2O,NaCl', 'UNEXPECTED_CHARACTER', 4],
+    ['H2O\u0000', 'CONTROL_CHARACTER', 4],
+    ['[99C]', 'UNKNOWN_ISOTOPE', 1],
+    ['²D', 'UNKNOWN_ISOTOPE', 1],
+    ['Me', 'UNKNOWN_ELEMENT', 1],
+    ['2', 'UNEXPECTED_TOKEN', 2],
+  ])('%j → %s at column %s', (input, code, column) => {
+    const i = issue(input);
+    expect(i.code).toBe(code);
+    expect(i.column).toBe(column);
+  });
+
+  it('draws a caret under the column', () => {
+    expect(issue('NaXy').rendered).toBe("error UNKNOWN_ELEMENT: unknown element symbol 'Xy'\n  NaXy\n    ^^");
+  });
+
+  it('hints at the intended symbols when the case slipped', () => {
+    expect(issue('co2').hint).toContain("'CO'");
+    expect(issue('co2').hint).toContain("'Co'");
+    expect(issue('nacl').hint).toContain("'NaCl'");
+    expect(issue('Me').hint).toContain('abbreviations');
+  });
+
+  it('offers both readings of an ambiguous charge', () => {
+    const i = issue('NH4+');
+    expect(i.hint).toBe('write NH4^+ for a charge of 1+, or NH^4+ for 4+');
+  });
+
+  it('counts columns in characters, not UTF-16 units', () => {
+    expect(issue('H₂O₂Xx').column).toBe(5);
+  });
+});

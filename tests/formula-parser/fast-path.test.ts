@@ -1,0 +1,63 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { fastParse } from '../../src/formula-parser/fast-path.js';
+import { parseWithGrammar } from '../../src/formula-parser/parse.js';
+import { toSafe } from '../../src/errors/pondus-error.js';
+
+/** The fast path must build exactly the grammar's tree, or decline. */
+function agree(input: string): void {
+  const fast = fastParse(input);
+  if (fast === null) return;
+  const full = toSafe(() => parseWithGrammar(input));
+  expect(full.success, `fast path accepted ${JSON.stringify(input)} but the grammar rejects it`).toBe(true);
+  if (full.success) expect(fast).toEqual(full.data);
+}
+
+const pieces = [
+  'C', 'H', 'O', 'N', 'Cl', 'Na', 'Co', 'Fe', 'D', 'T', 'Xx', 'c', 'Uue',
+  '(', ')', '[', ']', '{', '}', '·', '*', '.', ' ',
+  '2', '3', '0', '12', '05', '0.5', '1', '999999999', '1000000000',
+  '^2+', '+', '-', '¹³', '₂', '²⁻', '[13C]', '[2H]',
+];
+
+const element = fc.constantFrom('C', 'H', 'O', 'N', 'S', 'P', 'Cl', 'Br', 'Na', 'K', 'Ca', 'Fe', 'Cu', 'Co', 'Pt', 'Uuo', 'Nh');
+const count = fc.oneof(fc.constant(''), fc.integer({ min: 1, max: 40 }).map(String));
+const formula: fc.Arbitrary<string> = fc.letrec((tie) => ({
+  part: fc.oneof(
+    { weight: 4, arbitrary: fc.tuple(element, count).map(([e, c]) => e + c) },
+    { weight: 1, arbitrary: fc.tuple(fc.constantFrom(['(', ')'], ['[', ']'], ['{', '}']), tie('body'), count).map(([[o, c], b, n]) => `${o}${b}${c}${n}`) },
+  ),
+  component: fc.tuple(fc.oneof(fc.constant(''), fc.integer({ min: 1, max: 12 }).map(String)), fc.array(tie('part') as fc.Arbitrary<string>, { minLength: 1, maxLength: 4 })).map(([m, ps]) => m + ps.join('')),
+  body: fc.array(tie('component') as fc.Arbitrary<string>, { minLength: 1, maxLength: 3 }).chain((cs) => fc.constantFrom('·', '*').map((sep) => cs.join(sep))),
+})).body as fc.Arbitrary<string>;
+
+describe('the fast path and the grammar agree', () => {
+  it('on well-formed formulas (and the fast path takes most of them)', () => {
+    let taken = 0;
+    let total = 0;
+    fc.assert(
+      fc.property(formula, (f) => {
+        total++;
+        if (fastParse(f)) taken++;
+        agree(f);
+      }),
+      { numRuns: 3000 },
+    );
+    expect(taken / total).toBeGreaterThan(0.3);
+  });
+
+  it('on arbitrary strings built from formula pieces', () => {
+    fc.assert(
+      fc.property(fc.array(fc.constantFrom(...pieces), { minLength: 1, maxLength: 14 }), (ps) => agree(ps.join(''))),
+      { numRuns: 5000 },
+    );
+  });
+
+  it('on arbitrary Unicode text', () => {
+    fc.assert(fc.property(fc.string({ unit: 'grapheme', maxLength: 20 }), (s) => agree(s)), { numRuns: 2000 });
+  });
+
+  it('on the examples of the other tests', () => {
+    for (const s of ['CuSO4·5H2O', '[13C]H4', 'K4[Fe(CN)6]', 'CH3(CH2)16COOH', 'CH3Co', 'Co2', 'C1234567890', '(((H)))', 'H2O·', '2']) agree(s);
+  });
+});
