@@ -130,16 +130,7 @@ class Scanner {
   }
 
   notes(components: ComponentNode[]): Note[] {
-    return this.trap ? caseTrapNotes(symbolsIn(components)) : [];
+    return this.trap ? caseTrapNotes(components) : [];
   }
 }
 
-function symbolsIn(components: ComponentNode[], out = new Set<string>()): Set<string> {
-  for (const c of components) {
-    for (const p of c.parts) {
-      if (p.kind === 'atom') out.add(p.symbol);
-      else symbolsIn(p.body, out);
-    }
-  }
-  return out;
-}

@@ -4,6 +4,7 @@
  */
 import { getElement, isElementSymbol } from '../elements/element-table.js';
 import type { Note } from '../errors/issue.js';
+import type { AtomNode, ComponentNode } from './tree.js';
 import { ABBREVIATIONS } from './abbreviations.js';
 
 const MAX_SUGGESTIONS = 4;
@@ -56,7 +57,7 @@ export function unknownSymbolHint(word: string, abbreviationsOn: boolean): strin
   return `did you mean ${list}? Element symbols are one capital letter, or a capital and one lower-case letter`;
 }
 
-/** Two-letter symbols that read as two common organic atoms when the case slips (Co vs CO). */
+/** Two-letter symbols that read as two common light atoms when the case slips (Co vs CO). */
 const CASE_TRAPS: Readonly<Record<string, string>> = Object.freeze({
   Co: 'CO',
   Cs: 'CS',
@@ -72,38 +73,7 @@ const CASE_TRAPS: Readonly<Record<string, string>> = Object.freeze({
   Cn: 'CN',
 });
 
-/**
- * A gentle note when a formula contains a metal symbol that may be a slip of case
- * for two light atoms (`Co` for `CO`), given the other symbols in the formula.
- *
- * @example
- * caseTrapNote('Co', ['C', 'H']) // "'Co' is read as cobalt; carbon and oxygen is 'CO'"
- */
-export function caseTrapNote(symbol: string, elementName: string, others: Iterable<string>): string | undefined {
-  const alt = CASE_TRAPS[symbol];
-  if (!alt) return undefined;
-  let organic = false;
-  for (const o of others) if (o === 'C' || o === 'H') organic = true;
-  if (!organic) return undefined;
-  return `'${symbol}' is read as ${elementName}; if you meant the two atoms, write '${alt}'`;
-}
-
-/**
- * The case-check notes for the set of element symbols in a formula.
- *
- * @example
- * caseTrapNotes(new Set(['Co', 'H'])) // [{ code: 'CASE_CHECK', message: "'Co' is read as cobalt; …" }]
- */
-export function caseTrapNotes(symbols: Set<string>): Note[] {
-  const notes: Note[] = [];
-  if (symbols.size < 2) return notes;
-  for (const s of symbols) {
-    if (!CASE_TRAPS[s]) continue;
-    const msg = caseTrapNote(s, getElement(s)!.name, [...symbols].filter((o) => o !== s));
-    if (msg) notes.push({ code: 'CASE_CHECK', message: msg });
-  }
-  return notes;
-}
+const ORGANIC = new Set(['C', 'H', 'N', 'O', 'S', 'P', 'F', 'Cl', 'Br', 'I']);
 
 /**
  * True when a symbol is one of the two-letter symbols checked for a slip of case.
@@ -113,4 +83,38 @@ export function caseTrapNotes(symbols: Set<string>): Note[] {
  */
 export function isCaseTrap(symbol: string): boolean {
   return Object.hasOwn(CASE_TRAPS, symbol);
+}
+
+/**
+ * Gentle notes where a metal symbol is probably a slip of case for two light
+ * atoms: a lone `Co2` or `No2` (surely CO2, NO2), or an organic formula without
+ * brackets where the symbol sits among C, H, N, O, S, P and halogens (`CH3Co`).
+ * Cobalt salts, complexes and organometallics written with brackets get no note.
+ *
+ * @example
+ * caseTrapNotes(parseFormula('Co2').components) // [{ code: 'CASE_CHECK', message: "'Co' is read as cobalt; …" }]
+ */
+export function caseTrapNotes(components: ComponentNode[]): Note[] {
+  const atoms: AtomNode[] = [];
+  let brackets = false;
+  for (const c of components) {
+    for (const p of c.parts) {
+      if (p.kind === 'atom') atoms.push(p);
+      else brackets = true;
+    }
+  }
+  const traps = atoms.filter((a) => a.massNumber === null && isCaseTrap(a.symbol));
+  if (traps.length === 0) return [];
+  const symbols = new Set(atoms.map((a) => a.symbol));
+  const lone = symbols.size === 1 && components.length === 1 && atoms.length === 1 && atoms[0].count !== null && !brackets;
+  const organic = !brackets && components.length === 1 && symbols.has('C') && [...symbols].every((s) => ORGANIC.has(s) || isCaseTrap(s));
+  if (!lone && !organic) return [];
+  const seen = new Set<string>();
+  const notes: Note[] = [];
+  for (const t of traps) {
+    if (seen.has(t.symbol)) continue;
+    seen.add(t.symbol);
+    notes.push({ code: 'CASE_CHECK', message: `'${t.symbol}' is read as ${getElement(t.symbol)!.name}; if you meant the two atoms, write '${CASE_TRAPS[t.symbol]}'` });
+  }
+  return notes;
 }

@@ -47,7 +47,6 @@ export class TreeBuilder extends BaseVisitor {
   private text = '';
   private issues: Issue[] = [];
   private notes: Note[] = [];
-  private symbols = new Set<string>();
   private expand: (name: string, span: Span) => ComponentNode[] = () => [];
 
   constructor() {
@@ -60,10 +59,9 @@ export class TreeBuilder extends BaseVisitor {
     this.text = text;
     this.issues = [];
     this.notes = [];
-    this.symbols = new Set();
     this.expand = expand;
     const { components, charge } = this.visit(cst) as { components: ComponentNode[]; charge: number };
-    this.notes.push(...caseTrapNotes(this.symbols));
+    this.notes.push(...caseTrapNotes(components));
     return { components, charge, issues: this.issues, notes: this.notes };
   }
 
@@ -116,7 +114,6 @@ export class TreeBuilder extends BaseVisitor {
     if (abbr) {
       const span = { start: abbr.startOffset, end: endOf(abbr) };
       const group: GroupNode = { kind: 'group', bracket: '(', body: this.expand(abbr.image, span), count: null, span, abbreviation: abbr.image };
-      for (const s of symbolsOf(group.body)) this.symbols.add(s);
       return group;
     }
     const sup = tok(ctx, 'SuperscriptDigits');
@@ -131,7 +128,6 @@ export class TreeBuilder extends BaseVisitor {
       return this.makeAtom(word.image, Number(fromSuperscript(sup.image)), word.startOffset, start, end);
     }
     if (word.image === 'D' || word.image === 'T') {
-      this.symbols.add('H');
       return { kind: 'atom', symbol: 'H', massNumber: word.image === 'D' ? 2 : 3, count: null, span: { start, end } };
     }
     return this.makeAtom(word.image, null, word.startOffset, start, end);
@@ -143,8 +139,6 @@ export class TreeBuilder extends BaseVisitor {
       this.issue('UNKNOWN_ELEMENT', `unknown element symbol '${symbol}'`, symbolOffset, symbol.length, hint);
     } else if (massNumber !== null && !getNuclide(symbol, massNumber)) {
       this.issue('UNKNOWN_ISOTOPE', `no nuclide ${symbol}-${massNumber} is known (AME2020 lists none)`, start, end - start);
-    } else {
-      this.symbols.add(symbol);
     }
     return { kind: 'atom', symbol, massNumber, count: null, span: { start, end } };
   }
@@ -216,16 +210,4 @@ export class TreeBuilder extends BaseVisitor {
 
 function placeholder(start: number, end: number): AtomNode {
   return { kind: 'atom', symbol: 'H', massNumber: null, count: null, span: { start, end } };
-}
-
-function symbolsOf(body: ComponentNode[]): string[] {
-  const out: string[] = [];
-  const walk = (parts: PartNode[]) => {
-    for (const p of parts) {
-      if (p.kind === 'atom') out.push(p.symbol);
-      else for (const c of p.body) walk(c.parts);
-    }
-  };
-  for (const c of body) walk(c.parts);
-  return out;
 }

@@ -1,12 +1,13 @@
 /**
  * The molar mass as a measured number: each atomic weight carries the
- * precision it is tabulated to, counts are exact, and the sum keeps the
- * fewest decimal places (OpenStax Chemistry 2e §1.5). So NaCl reports as
- * 58.44 g/mol (Cl 35.45 limits it), water as 18.015 g/mol.
+ * precision it is tabulated to, and the sum keeps the fewest decimal places
+ * (OpenStax Chemistry 2e §1.5). A count is exact and stands for repeated
+ * addition, so n × 35.45 keeps two decimals (as chemists write molar masses)
+ * rather than four significant figures. So NaCl reports as 58.44 g/mol
+ * (Cl 35.45 limits it), water as 18.015 g/mol.
  */
-import { plus, times, exact, type Measured } from '../sigfig/measured.js';
+import type { Measured } from '../sigfig/measured.js';
 import { readNumber } from '../sigfig/read-number.js';
-import { toDecimal } from '../formula/amount.js';
 import type { MassResult } from './formula-mass.js';
 
 /**
@@ -16,12 +17,11 @@ import type { MassResult } from './formula-mass.js';
  * displayMeasured(reportedMolarMass(formulaMass('NaCl'))).text // '58.44'
  */
 export function reportedMolarMass(r: MassResult): Measured {
-  let acc: Measured = exact(0);
+  let lsd: number | null = null;
   for (const c of r.contributions) {
-    const w: Measured = c.atom.noStandardWeight && c.massNumber === null
-      ? { value: toDecimal(Number(c.atomicWeight)), lsd: 0 }
-      : readNumber(c.atomicWeight);
-    acc = plus(acc, times(w, exact(toDecimal(c.count))));
+    // a mass number standing in for an atomic weight is good to the unit
+    const w = c.atom.noStandardWeight && c.massNumber === null ? 0 : readNumber(c.atomicWeight).lsd!;
+    lsd = lsd === null ? w : Math.max(lsd, w);
   }
-  return { value: r.molarMass, lsd: acc.lsd };
+  return { value: r.molarMass, lsd };
 }

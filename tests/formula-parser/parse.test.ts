@@ -106,10 +106,11 @@ describe('formula language', () => {
     expect(hill('Np', { abbreviations: true })).toBe('Np'); // neptunium either way
   });
 
-  it('notes a likely slip of case between Co and CO', () => {
-    const t = parseFormula('CH3Co');
-    expect(t.notes.map((n) => n.code)).toEqual(['CASE_CHECK']);
-    expect(parseFormula('CoCl2').notes).toEqual([]);
+  it('notes a likely slip of case between Co and CO, but not in cobalt compounds', () => {
+    expect(parseFormula('CH3Co').notes.map((n) => n.code)).toEqual(['CASE_CHECK']);
+    expect(parseFormula('Co2').notes.map((n) => n.message)).toEqual(["'Co' is read as cobalt; if you meant the two atoms, write 'CO'"]);
+    expect(parseFormula('No2').notes.map((n) => n.code)).toEqual(['CASE_CHECK']);
+    for (const f of ['Co', 'CoCl2', 'CoCl2·6H2O', 'NiSO4·6H2O', 'Co(C5H5)2', '[Co(NH3)6]Cl3', 'Co2(CO)8']) expect(parseFormula(f).notes).toEqual([]);
   });
 
   it('offers a non-throwing entry point', () => {

@@ -12,7 +12,7 @@ describe('molar mass', () => {
     // exact sums of the CIAAW 2021 standard/conventional atomic weights (checked by hand); handbook values from memory
     ['H2O', '18.015', '18.015'],
     ['NaCl', '58.43976928', '58.44'],
-    ['C6H12O6', '180.156', '180.16'],
+    ['C6H12O6', '180.156', '180.156'],
     ['CuSO4·5H2O', '249.677', '249.68'],
     ['CO2', '44.009', '44.009'],
     ['H2SO4', '98.072', '98.07'],

@@ -2,7 +2,7 @@ import type { Command } from 'commander';
 import { composition, type CompositionResult } from '../../composition/element-shares.js';
 import { compositionJson } from '../../composition/composition-json.js';
 import { amountText } from '../../formula/amount.js';
-import { displayMolarMass, displayPercent, fixedTable } from '../output/display.js';
+import { displayContribution, displayMolarMass, displayPercent, fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { withFormulaOptions, type FormulaOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
@@ -26,7 +26,7 @@ export function compositionPresenter(o: CompositionCliOptions): Presenter<Compos
       return cells;
     },
     block: (r) => {
-      const rows = r.elements.map((e) => [e.symbol, amountText(e.count), e.mass.toFixed(), displayPercent(e.massPercent)]);
+      const rows = r.elements.map((e, i) => [e.symbol, amountText(e.count), displayContribution(r.mass.contributions[i]), displayPercent(e.massPercent)]);
       const lines = [`${r.input}  →  ${r.formula}   M = ${displayMolarMass(r.mass)} g/mol`];
       lines.push(fixedTable(['element', 'count', 'mass g/mol', 'mass %'], rows, ['left', 'right', 'right', 'right']));
       if (r.part) {

@@ -4,7 +4,7 @@
  */
 import Table from 'cli-table3';
 import type { Decimal } from '../../exact/decimal.js';
-import type { MassResult } from '../../mass/formula-mass.js';
+import type { Contribution, MassResult } from '../../mass/formula-mass.js';
 import { reportedMolarMass } from '../../mass/reported-mass.js';
 import { displayMeasured } from '../../sigfig/round.js';
 import type { Cell } from './format.js';
@@ -12,6 +12,12 @@ import type { Cell } from './format.js';
 /** The molar mass to the precision the atomic weights support. */
 export function displayMolarMass(r: MassResult): string {
   return displayMeasured(reportedMolarMass(r)).text;
+}
+
+/** An element's mass in one mole of the formula, to the decimals of its atomic weight (a count is repeated addition). */
+export function displayContribution(c: Contribution): string {
+  const dot = c.atomicWeight.indexOf('.');
+  return c.mass.toFixed(dot < 0 ? 0 : c.atomicWeight.length - dot - 1);
 }
 
 /** Monoisotopic mass to six decimals (accurate-mass practice). */

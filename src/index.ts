@@ -1,0 +1,49 @@
+/**
+ * pondus: quantitative chemistry for the bench, as a library.
+ *
+ * One curated public API. Every function that can fail on bad input throws a
+ * {@link PondusError} (errors as data: codes, messages, columns); the `safe…`
+ * variants return `{ success, data | error }` instead.
+ *
+ * @example
+ * import { formulaMass, composition } from 'pondus';
+ * formulaMass('CuSO4·5H2O').molarMass.toString();            // '249.677'
+ * composition('CuSO4·5H2O', { part: 'H2O' }).part?.massPercent // 36.08… %
+ */
+
+// errors
+export { PondusError, toSafe, type SafeResult } from './errors/pondus-error.js';
+export { renderError, errorJson, type RenderOptions } from './errors/render.js';
+export type { Issue, IssueCode, Note } from './errors/issue.js';
+
+// exact decimals
+export { Decimal } from './exact/decimal.js';
+
+// formula language
+export { parseFormula, safeParseFormula, type ParseOptions } from './formula-parser/parse.js';
+export { ABBREVIATIONS, ABBREVIATION_CLASHES } from './formula-parser/abbreviations.js';
+export type { FormulaTree, ComponentNode, PartNode, AtomNode, GroupNode, CountNode, Span } from './formula-parser/tree.js';
+export { flattenFormula, type AtomCounts } from './formula/flatten.js';
+export { hillFormula, hillOrder } from './formula/hill.js';
+export type { Amount } from './formula/amount.js';
+
+// element data
+export { ELEMENTS, ATOMIC_WEIGHT_PROVENANCE, getElement, isElementSymbol, type ElementData, type StandardWeight } from './elements/element-table.js';
+export { getNuclide, naturalIsotopes, principalIsotope, NUCLIDE_PROVENANCE, type Nuclide, type NaturalIsotope } from './elements/nuclides.js';
+export { ELECTRON_MASS, CONSTANTS_PROVENANCE } from './elements/constants.js';
+export type { WeightTable } from './elements/atom-data.js';
+
+// molar mass
+export { formulaMass, safeFormulaMass, molarMass, type MassOptions, type MassResult, type Contribution } from './mass/formula-mass.js';
+export { reportedMolarMass } from './mass/reported-mass.js';
+export { massJson, type MassJson } from './mass/mass-json.js';
+
+// composition
+export { composition, safeComposition, type CompositionResult, type CompositionOptions, type ElementShare } from './composition/element-shares.js';
+export { partShare, type PartShare } from './composition/part-share.js';
+export { compositionJson, type CompositionJson } from './composition/composition-json.js';
+
+// measured numbers and significant figures
+export { exact, times, dividedBy, plus, minus, sumMeasured, sigFigsOf, type Measured } from './sigfig/measured.js';
+export { readNumber, type ReadNumber } from './sigfig/read-number.js';
+export { roundToSigFigs, roundToPosition, displayMeasured, type Display, type RoundingMode } from './sigfig/round.js';
