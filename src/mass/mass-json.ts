@@ -40,5 +40,12 @@ export function massJson(r: MassResult): MassJson {
 export function massJsonLine(r: MassResult): string {
   if (r.notes.length > 0) return JSON.stringify(massJson(r));
   // Hill formulas hold only letters, digits, brackets, '.', '^', '+' and '-': nothing to escape
-  return `{"input":${JSON.stringify(r.input)},"formula":"${r.formula}","molarMass":${r.molarMassNumber()},"monoisotopicMass":${r.monoisotopicMassNumber()},"nominalMass":${r.nominalMass},"charge":${r.charge}}`;
+  return `{"input":${jsonString(r.input)},"formula":"${r.formula}","molarMass":${r.molarMassNumber()},"monoisotopicMass":${r.monoisotopicMassNumber()},"nominalMass":${r.nominalMass},"charge":${r.charge}}`;
+}
+
+const NEEDS_ESCAPE = /["\\\u0000-\u001f\u2028\u2029\ud800-\udfff]/;
+
+/** A JSON string literal; plain text (the usual formula) skips JSON.stringify. */
+function jsonString(s: string): string {
+  return NEEDS_ESCAPE.test(s) ? JSON.stringify(s) : `"${s}"`;
 }
