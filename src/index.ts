@@ -47,3 +47,14 @@ export { compositionJson, type CompositionJson } from './composition/composition
 export { exact, times, dividedBy, plus, minus, sumMeasured, sigFigsOf, type Measured } from './sigfig/measured.js';
 export { readNumber, type ReadNumber } from './sigfig/read-number.js';
 export { roundToSigFigs, roundToPosition, displayMeasured, type Display, type RoundingMode } from './sigfig/round.js';
+
+// quantities, units and the calculator
+export { quantity, add, subtract, multiply, divide, power, negate, standardUncertainty, type Quantity } from './sigfig/quantity.js';
+export { unitOf, UNIT_SYMBOLS, type Unit, type Dims } from './sigfig/units.js';
+export { calc, safeCalc, calcJson, type CalcResult, type CalcOptions, type CalcJson } from './calc/calc.js';
+export { parseExpression } from './calc/parse-expression.js';
+export type { CalcStep } from './calc/evaluate.js';
+
+// uncertainty of molar masses, mixtures
+export { molarMassUncertainty, formatWithUncertainty, type MolarMassUncertainty, type UncertaintyTerm } from './mass/uncertainty.js';
+export { mixtureComposition, safeMixtureComposition, mixtureJson, type MixtureResult, type Share } from './composition/mixture.js';

@@ -8,6 +8,7 @@ import type { Writable } from 'node:stream';
 import { PondusError } from '../errors/pondus-error.js';
 import { renderError } from '../errors/render.js';
 import { runBatch } from './batch.js';
+import { registerCalc } from './commands/calc.js';
 import { registerComposition } from './commands/composition.js';
 import { outputFormat } from './commands/common.js';
 import { registerMass } from './commands/mass.js';
@@ -70,6 +71,7 @@ export async function main(args: string[], io: CliIo): Promise<number> {
     });
   registerMass(program, run);
   registerComposition(program, run);
+  registerCalc(program, run);
 
   try {
     await program.parseAsync(args, { from: 'user' });

@@ -70,7 +70,9 @@ export function displayMeasured(m: Measured, rounding: RoundingMode = 'half-even
   const value = roundToPosition(m.value, m.lsd, rounding);
   const n = sigFigsOf({ value, lsd: m.lsd });
   const e = msd(value);
-  const ambiguousZeros = m.lsd > 0;
+  // trailing zeros before the decimal point would be read as not significant:
+  // 2400 (2 s.f.) and 1300 known to the unit (4 s.f.) both go to scientific notation
+  const ambiguousZeros = m.lsd > 0 || (m.lsd === 0 && !value.isZero() && value.mod(10).isZero());
   if (ambiguousZeros || e >= 6 || e <= -5) {
     const mantissa = value.isZero() ? new Decimal(0) : value.div(new Decimal(10).pow(e));
     const mText = mantissa.toFixed(Math.max(0, n - 1));

@@ -1,5 +1,7 @@
 import type { Command } from 'commander';
 import { composition, type CompositionResult } from '../../composition/element-shares.js';
+import { mixtureComposition, mixtureJson, type MixtureResult } from '../../composition/mixture.js';
+import { displayMeasured } from '../../sigfig/round.js';
 import { compositionJson } from '../../composition/composition-json.js';
 import { amountText } from '../../formula/amount.js';
 import { displayContribution, displayMolarMass, displayPercent, fixedTable } from '../output/display.js';
@@ -9,10 +11,35 @@ import type { CommandRunner } from './runner.js';
 
 interface CompositionCliOptions extends FormulaOptions {
   part?: string;
+  mixture?: boolean;
+}
+
+/** The presenter for `pondus composition --mixture`: inputs are `formula=mass` lists. */
+export function mixturePresenter(o: CompositionCliOptions): Presenter<MixtureResult> {
+  const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations };
+  const list = (shares: MixtureResult['components']) => shares.map((s) => `${s.name}=${displayMeasured(s.massPercent).text}`).join(' ');
+  return {
+    compute: (input) => mixtureComposition(input, opts),
+    json: mixtureJson,
+    columns: ['input', 'totalMass', 'byComponent', 'byElement'],
+    cells: (r) => [r.input, r.total.value.toFixed(), list(r.components), list(r.elements)],
+    block: (r) => {
+      const rows = (shares: MixtureResult['components']) => shares.map((s) => [s.name, displayMeasured(s.mass).text, displayMeasured(s.massPercent).text]);
+      return [
+        `${r.input}   total ${displayMeasured(r.total).text} g`,
+        fixedTable(['component', 'mass g', 'mass %'], rows(r.components), ['left', 'right', 'right']),
+        fixedTable(['element', 'mass g', 'mass %'], rows(r.elements), ['left', 'right', 'right']),
+      ].join('\n');
+    },
+  };
 }
 
 /** The presenter for `pondus composition`. */
-export function compositionPresenter(o: CompositionCliOptions): Presenter<CompositionResult> {
+export function compositionPresenter(o: CompositionCliOptions): Presenter<CompositionResult> | Presenter<MixtureResult> {
+  return o.mixture ? mixturePresenter(o) : formulaPresenter(o);
+}
+
+function formulaPresenter(o: CompositionCliOptions): Presenter<CompositionResult> {
   const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations, part: o.part };
   const columns = ['input', 'formula', 'molarMass', 'massPercent'];
   if (o.part !== undefined) columns.push('part', 'partCount', 'partMassPercent');
@@ -45,6 +72,7 @@ export function registerComposition(program: Command, run: CommandRunner): void 
       .command('composition')
       .description('percent by mass of each element, and of a fragment with --part')
       .argument('[formulas...]', 'formulas; - reads one per line from standard input')
-      .option('--part <fragment>', 'also the mass fraction of a fragment: H2O in a hydrate, SO4 in a salt, Fe in an iron salt'),
+      .option('--part <fragment>', 'also the mass fraction of a fragment: H2O in a hydrate, SO4 in a salt, Fe in an iron salt')
+      .option('--mixture', "inputs are measured masses, 'NaCl=5.00 g, KCl=3.00 g' or 'C=7.34 g H=1.85 g N=2.85 g': percent by component and by element"),
   ).action((formulas: string[], o: CompositionCliOptions) => run('composition', formulas, o));
 }

@@ -1,26 +1,63 @@
 import type { Command } from 'commander';
 import { formulaMass, type MassResult } from '../../mass/formula-mass.js';
 import { massJson, massJsonLine } from '../../mass/mass-json.js';
+import { formatWithUncertainty, molarMassUncertainty, type MolarMassUncertainty } from '../../mass/uncertainty.js';
 import { chargeLabel, displayMolarMass, displayMonoisotopic } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { withFormulaOptions, type FormulaOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
-/** The presenter for `pondus mass`. */
-export function massPresenter(o: FormulaOptions): Presenter<MassResult> {
+interface MassCliOptions extends FormulaOptions {
+  uncertainty?: boolean;
+}
+
+/** A mass result, with its uncertainty when asked for. */
+export interface MassRow {
+  mass: MassResult;
+  u: MolarMassUncertainty | null;
+}
+
+const columns = ['input', 'formula', 'molarMass', 'monoisotopicMass', 'nominalMass', 'charge'];
+const head = ['input', 'formula (Hill)', 'molar mass g/mol', 'monoisotopic u', 'nominal', 'charge'];
+const align: ('left' | 'right')[] = ['left', 'left', 'right', 'right', 'right', 'right'];
+const cells = (r: MassResult) => [r.input, r.formula, r.molarMass.toFixed(), r.monoisotopicMass.toFixed(), r.nominalMass, r.charge];
+const row = (r: MassResult) => [r.input, r.formula, displayMolarMass(r), displayMonoisotopic(r), r.nominalMass ?? '—', chargeLabel(r.charge)];
+
+/** The presenter for `pondus mass` (with --uncertainty, {@link uncertaintyPresenter}). */
+export function massPresenter(o: MassCliOptions): Presenter<MassResult> | Presenter<MassRow> {
+  return o.uncertainty ? uncertaintyPresenter(o) : plainPresenter(o);
+}
+
+function plainPresenter(o: MassCliOptions): Presenter<MassResult> {
   const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations };
   return {
     compute: (input) => formulaMass(input, opts),
     json: massJson,
     jsonLine: massJsonLine,
-    columns: ['input', 'formula', 'molarMass', 'monoisotopicMass', 'nominalMass', 'charge'],
-    cells: (r) => [r.input, r.formula, r.molarMass.toFixed(), r.monoisotopicMass.toFixed(), r.nominalMass, r.charge],
-    table: {
-      head: ['input', 'formula (Hill)', 'molar mass g/mol', 'monoisotopic u', 'nominal', 'charge'],
-      align: ['left', 'left', 'right', 'right', 'right', 'right'],
-      row: (r) => [r.input, r.formula, displayMolarMass(r), displayMonoisotopic(r), r.nominalMass ?? '—', chargeLabel(r.charge)],
-    },
+    columns,
+    cells,
+    table: { head, align, row },
     notes: (r) => r.notes.map((n) => n.message),
+  };
+}
+
+function uncertaintyPresenter(o: MassCliOptions): Presenter<MassRow> {
+  const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations };
+  return {
+    compute: (input) => {
+      const mass = formulaMass(input, opts);
+      return { mass, u: molarMassUncertainty(mass) };
+    },
+    json: (r) => ({ ...massJson(r.mass), molarMassUncertainty: { value: r.u!.value.toNumber(), standardUncertainty: r.u!.standardUncertainty.toNumber() } }),
+    columns: [...columns, 'uncertaintyValue', 'standardUncertainty'],
+    cells: (r) => [...cells(r.mass), r.u!.value.toFixed(), r.u!.standardUncertainty.toFixed()],
+    table: {
+      head: [...head, 'M ± u g/mol (k = 1)'],
+      align: [...align, 'right'],
+      row: (r) => [...row(r.mass), formatWithUncertainty(r.u!.value, r.u!.standardUncertainty)],
+    },
+    notes: (r) => r.mass.notes.map((n) => n.message),
+    caution: 'u from the CIAAW atomic-weight intervals and uncertainties read as rectangular distributions (van der Veen et al., Pure Appl. Chem. 93 (2021) 629); the value is the centre of those distributions',
   };
 }
 
@@ -30,6 +67,7 @@ export function registerMass(program: Command, run: CommandRunner): void {
     program
       .command('mass')
       .description('molar mass, monoisotopic mass and nominal mass of formulas')
-      .argument('[formulas...]', 'formulas; - reads one per line from standard input'),
-  ).action((formulas: string[], o: FormulaOptions) => run('mass', formulas, o));
+      .argument('[formulas...]', 'formulas; - reads one per line from standard input')
+      .option('--uncertainty', 'also the standard uncertainty of the molar mass from the atomic-weight intervals'),
+  ).action((formulas: string[], o: MassCliOptions) => run('mass', formulas, o));
 }

@@ -3,6 +3,7 @@
  * command uses from the command's name and its (plain) options.
  */
 import type { Presenter } from '../output/presenter.js';
+import { calcPresenter } from './calc.js';
 import { compositionPresenter } from './composition.js';
 import { massPresenter } from './mass.js';
 
@@ -12,4 +13,5 @@ type Factory = (options: any) => Presenter<any>;
 export const PRESENTERS: Readonly<Record<string, Factory>> = Object.freeze({
   mass: massPresenter,
   composition: compositionPresenter,
+  calc: calcPresenter,
 });

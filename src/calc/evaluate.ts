@@ -1,0 +1,162 @@
+/**
+ * Evaluates a calculator tree with measured quantities: the textbook rules for
+ * significant figures at each step (no rounding until the end), units checked
+ * and carried, and — when any input is written `value ± u` — first-order
+ * uncertainty propagation. Records each step for --explain.
+ */
+import { Decimal } from '../exact/decimal.js';
+import { fail, PondusError } from '../errors/pondus-error.js';
+import { columnOf } from '../formula-parser/prescan.js';
+import { formulaMass } from '../mass/formula-mass.js';
+import { reportedMolarMass } from '../mass/reported-mass.js';
+import { molarMassUncertainty } from '../mass/uncertainty.js';
+import { sigFigsOf } from '../sigfig/measured.js';
+import { add, divide, multiply, negate, power, quantity, standardUncertainty, subtract, type Quantity } from '../sigfig/quantity.js';
+import { readNumber } from '../sigfig/read-number.js';
+import { unitOf } from '../sigfig/units.js';
+import type { CalcTree, ExprNode } from './tree.js';
+
+/** One step of a calculation, for --explain. */
+export interface CalcStep {
+  /** What was done, in words and figures. */
+  text: string;
+  /** The rule that set the precision of the result. */
+  rule: string;
+}
+
+export interface Evaluation {
+  result: Quantity;
+  /** Standard uncertainties of the inputs written with ±, by input number. */
+  inputs: Map<number, Decimal>;
+  steps: CalcStep[];
+  notes: string[];
+}
+
+interface Ctx {
+  input: string;
+  inputs: Map<number, Decimal>;
+  steps: CalcStep[];
+  notes: string[];
+  uncertain: boolean;
+}
+
+/**
+ * Evaluates a parsed calculation.
+ *
+ * @example
+ * evaluate(parseExpression('8.80 g + 2.1 g')).result.lsd // -1
+ */
+export function evaluate(tree: CalcTree): Evaluation {
+  const ctx: Ctx = { input: tree.input, inputs: new Map(), steps: [], notes: [], uncertain: hasPlusMinus(tree.expr) };
+  const result = evalNode(tree.expr, ctx);
+  return { result, inputs: ctx.inputs, steps: ctx.steps, notes: ctx.notes };
+}
+
+function hasPlusMinus(n: ExprNode): boolean {
+  switch (n.kind) {
+    case 'number':
+      return n.plusMinus !== null;
+    case 'formulaMass':
+      return false;
+    case 'binary':
+      return hasPlusMinus(n.left) || hasPlusMinus(n.right);
+    case 'negate':
+      return hasPlusMinus(n.operand);
+    case 'power':
+      return hasPlusMinus(n.base);
+  }
+}
+
+const src = (ctx: Ctx, n: ExprNode) => ctx.input.slice(n.start, n.end).trim();
+const col = (ctx: Ctx, offset: number) => columnOf(ctx.input, offset);
+
+function withInput<T>(ctx: Ctx, fn: () => T): T {
+  try {
+    return fn();
+  } catch (e) {
+    if (e instanceof PondusError && e.input === undefined) throw new PondusError(e.issues, ctx.input);
+    throw e;
+  }
+}
+
+function evalNode(n: ExprNode, ctx: Ctx): Quantity {
+  switch (n.kind) {
+    case 'number':
+      return withInput(ctx, () => literal(n, ctx));
+    case 'formulaMass':
+      return withInput(ctx, () => formulaMassQuantity(n, ctx));
+    case 'negate':
+      return negate(evalNode(n.operand, ctx));
+    case 'power': {
+      const b = evalNode(n.base, ctx);
+      const r = withInput(ctx, () => power(b, n.exponent, col(ctx, n.start)));
+      ctx.steps.push({ text: `(${src(ctx, n.base)})^${n.exponent}`, rule: b.lsd === null ? 'exact' : `a power keeps the significant figures of its base (${sigFigsOf(b)})` });
+      return r;
+    }
+    case 'binary': {
+      const a = evalNode(n.left, ctx);
+      const b = evalNode(n.right, ctx);
+      const c = col(ctx, n.opStart);
+      const r = withInput(ctx, () => (n.op === '+' ? add(a, b, c) : n.op === '-' ? subtract(a, b, c) : n.op === '*' ? multiply(a, b) : divide(a, b, c)));
+      ctx.steps.push({ text: `${src(ctx, n.left)} ${n.op === '*' ? '×' : n.op === '/' ? '÷' : n.op} ${src(ctx, n.right)}`, rule: ruleFor(n, a, b, ctx) });
+      return r;
+    }
+  }
+}
+
+function ruleFor(n: Extract<ExprNode, { kind: 'binary' }>, a: Quantity, b: Quantity, ctx: Ctx): string {
+  if (a.lsd === null && b.lsd === null) return 'both exact: no limit on precision';
+  if (n.op === '+' || n.op === '-') {
+    const [lim, name] = a.lsd === null ? [b, n.right] : b.lsd === null ? [a, n.left] : a.lsd >= b.lsd ? [a, n.left] : [b, n.right];
+    return `a ${n.op === '+' ? 'sum' : 'difference'} keeps the fewest decimal places: last digit at 10^${lim.lsd}, set by ${src(ctx, name)}`;
+  }
+  const sa = sigFigsOf(a);
+  const sb = sigFigsOf(b);
+  const [lim, name] = sa <= sb ? [sa, n.left] : [sb, n.right];
+  const exactNote = a.lsd === null || b.lsd === null ? ' (the exact number does not limit it)' : '';
+  return `a ${n.op === '*' ? 'product' : 'quotient'} keeps the fewest significant figures: ${lim}, set by ${src(ctx, name)}${exactNote}`;
+}
+
+function literal(n: Extract<ExprNode, { kind: 'number' }>, ctx: Ctx): Quantity {
+  const column = col(ctx, n.start);
+  const num = readNumber(n.text, column);
+  const unit = n.unit ? unitOf(n.unit, column) : null;
+  // a bare integer without a unit is an exact number (a count, a factor, the 100 of a percentage)
+  const isExact = !unit && /^[0-9]+$/.test(n.text) && n.plusMinus === null;
+  if (num.ambiguous && !isExact) ctx.notes.push(`the trailing zeros of ${n.text} are read as not significant (${sigFigsOf(num)} significant figure${sigFigsOf(num) === 1 ? '' : 's'}); write ${n.text}. or use scientific notation if they are`);
+  const q = quantity(isExact ? { value: num.value, lsd: null } : num, unit);
+  if (n.plusMinus !== null) {
+    const u = readNumber(n.plusMinus, column);
+    if (u.value.isNegative()) throw fail({ code: 'BAD_NUMBER', message: 'an uncertainty cannot be negative', column });
+    const id = ctx.inputs.size;
+    const scale = unit ? new Decimal(10).pow(unit.exp10) : new Decimal(1);
+    ctx.inputs.set(id, u.value.times(scale));
+    q.grad.set(id, new Decimal(1));
+  }
+  return q;
+}
+
+function formulaMassQuantity(n: Extract<ExprNode, { kind: 'formulaMass' }>, ctx: Ctx): Quantity {
+  let r;
+  try {
+    r = formulaMass(n.formula);
+  } catch (e) {
+    if (e instanceof PondusError) {
+      // point the caret into the expression: the formula starts 2 characters after M(
+      const shift = col(ctx, n.start) + 1;
+      throw new PondusError(e.issues.map((i) => ({ ...i, column: i.column !== undefined ? i.column + shift : col(ctx, n.start) })), ctx.input);
+    }
+    throw e;
+  }
+  const unit = unitOf('g/mol');
+  if (ctx.uncertain) {
+    const u = molarMassUncertainty(r);
+    const id = 1_000_000 + ctx.inputs.size;
+    ctx.inputs.set(id, u.standardUncertainty);
+    const q = quantity({ value: u.value, lsd: reportedMolarMass(r).lsd }, unit);
+    q.grad.set(id, new Decimal(1));
+    return q;
+  }
+  for (const note of r.notes) ctx.notes.push(note.message);
+  return quantity(reportedMolarMass(r), unit);
+}

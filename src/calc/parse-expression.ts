@@ -1,0 +1,82 @@
+/**
+ * Parses a calculator expression into a tree; no evaluation here.
+ */
+import type { IRecognitionException } from 'chevrotain';
+import type { Issue } from '../errors/issue.js';
+import { PondusError } from '../errors/pondus-error.js';
+import { columnOf } from '../formula-parser/prescan.js';
+import { calcGrammar } from './grammar.js';
+import { calcLexer } from './tokens.js';
+import type { CalcTree } from './tree.js';
+import { ExprBuilder } from './visitor.js';
+
+/** Longest expression accepted. */
+export const MAX_EXPRESSION_LENGTH = 10_000;
+/** Deepest parenthesis nesting accepted. */
+export const MAX_EXPRESSION_NESTING = 64;
+
+let builder: ExprBuilder | null = null;
+
+/**
+ * Parses a calculation such as `0.100 M * 250.0 mL * M(CuSO4·5H2O) to g`.
+ *
+ * @example
+ * parseExpression('8.80 g + 2.1 g').expr.kind // 'binary'
+ */
+export function parseExpression(input: string): CalcTree {
+  const pre = prescanExpression(input);
+  if (pre) throw new PondusError([pre], input);
+  const lexed = calcLexer.tokenize(input);
+  if (lexed.errors.length > 0) {
+    const o = lexed.errors[0].offset;
+    const word = /^[A-Za-zµμ/%]+/.exec(input.slice(o));
+    if (word) {
+      throw new PondusError([{ code: 'UNKNOWN_UNIT', message: `unknown unit or word '${word[0]}' at column ${columnOf(input, o)}`, column: columnOf(input, o), length: word[0].length, hint: 'write a molar mass as M(formula); units: g, mg, µg, kg, mol, mmol, µmol, L, mL, µL, M, mM, mol/L, g/L, mg/mL, g/mol, %, ppm' }], input);
+    }
+    const ch = String.fromCodePoint(input.codePointAt(o)!);
+    throw new PondusError([{ code: 'UNEXPECTED_CHARACTER', message: `unexpected character '${ch}' at column ${columnOf(input, o)}`, column: columnOf(input, o), length: 1 }], input);
+  }
+  const g = calcGrammar();
+  g.input = lexed.tokens;
+  const cst = g.calculation();
+  if (g.errors.length > 0) throw new PondusError([syntaxIssue(input, g.errors[0])], input);
+  builder ??= new ExprBuilder();
+  const { expr, target } = builder.build(cst, input);
+  return { input, expr, target };
+}
+
+function prescanExpression(text: string): Issue | null {
+  if (text.trim() === '') return { code: 'EMPTY_INPUT', message: 'the expression is empty' };
+  if (text.length > MAX_EXPRESSION_LENGTH) return { code: 'INPUT_TOO_LONG', message: `the expression is ${text.length.toLocaleString('en-US')} characters long; the limit is ${MAX_EXPRESSION_LENGTH.toLocaleString('en-US')}` };
+  let depth = 0;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if ((c < 0x20 && c !== 0x09) || c === 0x7f || (c >= 0x80 && c < 0xa0)) {
+      return { code: 'CONTROL_CHARACTER', message: `control character U+${c.toString(16).toUpperCase().padStart(4, '0')} in the expression`, column: columnOf(text, i) };
+    }
+    if (c === 40) {
+      depth++;
+      if (depth > MAX_EXPRESSION_NESTING) return { code: 'NESTING_TOO_DEEP', message: `parentheses nested more than ${MAX_EXPRESSION_NESTING} deep`, column: columnOf(text, i) };
+    } else if (c === 41) {
+      depth--;
+      if (depth < 0) return { code: 'UNMATCHED_CLOSING', message: "')' has no opening '('", column: columnOf(text, i) };
+    }
+  }
+  if (depth > 0) return { code: 'UNCLOSED_GROUP', message: "a '(' is never closed" };
+  return null;
+}
+
+function syntaxIssue(input: string, err: IRecognitionException): Issue {
+  const t = err.token;
+  if (t.tokenType.name === 'EOF' || Number.isNaN(t.startOffset)) {
+    return { code: 'BAD_EXPRESSION', message: 'the expression ends too early: expected a number, M(formula) or (', column: columnOf(input, input.trimEnd().length), length: 1 };
+  }
+  const column = columnOf(input, t.startOffset);
+  if (t.tokenType.name === 'Unit') {
+    return { code: 'BAD_EXPRESSION', message: `unit '${t.image}' at column ${column} must follow a number`, column, length: t.image.length };
+  }
+  if (t.tokenType.name === 'NumberLiteral') {
+    return { code: 'BAD_EXPRESSION', message: `a number at column ${column} follows another value: put an operator (+ - * /) between them`, column, length: t.image.length };
+  }
+  return { code: 'BAD_EXPRESSION', message: `unexpected '${t.image}' at column ${column}`, column, length: t.image.length };
+}

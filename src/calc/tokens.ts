@@ -1,0 +1,43 @@
+/**
+ * Tokens of the calculator's expression language. Patterns only.
+ */
+import { createToken, Lexer, type TokenType } from 'chevrotain';
+import { UNIT_SYMBOLS } from '../sigfig/units.js';
+
+/** `M(CuSO4·5H2O)`: the molar mass of a formula, brackets inside it balanced. */
+function matchFormulaMass(text: string, offset: number): RegExpExecArray | null {
+  if (text[offset] !== 'M' || text[offset + 1] !== '(') return null;
+  let depth = 0;
+  for (let i = offset + 1; i < text.length; i++) {
+    const ch = text[i];
+    if (ch === '(') depth++;
+    else if (ch === ')') {
+      depth--;
+      if (depth === 0) return [text.slice(offset, i + 1)] as unknown as RegExpExecArray;
+    }
+  }
+  return null;
+}
+
+const unitSpellings = [...UNIT_SYMBOLS, 'ug', 'μg', 'umol', 'μmol', 'uL', 'μL', 'ul', 'ml', 'l', 'uM', 'μM', 'mol/l', 'g/l', 'mg/l', 'mg/ml', 'ug/mL', 'g/ml']
+  .sort((a, b) => b.length - a.length)
+  .map((s) => s.replace(/[/%]/g, (c) => `\\${c}`));
+
+export const WhiteSpace = createToken({ name: 'WhiteSpace', pattern: /[ \t\u00a0]+/, group: Lexer.SKIPPED });
+export const FormulaMass = createToken({ name: 'FormulaMass', pattern: { exec: matchFormulaMass }, line_breaks: false, start_chars_hint: ['M'] });
+export const NumberLiteral = createToken({ name: 'NumberLiteral', pattern: /(?:[0-9]+\.?[0-9]*|\.[0-9]+)(?:[eE][+-]?[0-9]+)?/ });
+export const PlusMinus = createToken({ name: 'PlusMinus', pattern: /±|\+\/-|\+-/ });
+export const To = createToken({ name: 'To', pattern: /(?:to|in)(?![A-Za-z])/ });
+export const UnitToken = createToken({ name: 'Unit', pattern: new RegExp(`(?:${unitSpellings.join('|')})(?![A-Za-zµμ])`) });
+export const Plus = createToken({ name: 'Plus', pattern: /\+/ });
+export const Minus = createToken({ name: 'Minus', pattern: /[-−]/ });
+export const Times = createToken({ name: 'Times', pattern: /[*×·]/ });
+export const Divide = createToken({ name: 'Divide', pattern: /[/÷]/ });
+export const Caret = createToken({ name: 'Caret', pattern: /\^/ });
+export const LParen = createToken({ name: 'LParen', pattern: /\(/ });
+export const RParen = createToken({ name: 'RParen', pattern: /\)/ });
+
+export const calcTokens: TokenType[] = [WhiteSpace, FormulaMass, NumberLiteral, PlusMinus, To, UnitToken, Plus, Minus, Times, Divide, Caret, LParen, RParen];
+
+/** The calculator's lexer. */
+export const calcLexer = new Lexer(calcTokens, { positionTracking: 'onlyOffset', skipValidations: true, safeMode: true });

@@ -1,0 +1,45 @@
+import { Option, type Command } from 'commander';
+import { calc, calcJson, type CalcResult } from '../../calc/calc.js';
+import type { RoundingMode } from '../../sigfig/round.js';
+import type { Presenter } from '../output/presenter.js';
+import { withOutputOptions, type OutputOptions } from './common.js';
+import type { CommandRunner } from './runner.js';
+
+interface CalcCliOptions extends OutputOptions {
+  explain?: boolean;
+  rounding?: RoundingMode;
+}
+
+/** The presenter for `pondus calc`. */
+export function calcPresenter(o: CalcCliOptions): Presenter<CalcResult> {
+  const opts = { rounding: o.rounding ?? 'half-even' };
+  return {
+    compute: (input) => calc(input, opts),
+    json: calcJson,
+    columns: ['input', 'value', 'display', 'sigFigs', 'unit', 'uncertainty'],
+    cells: (r) => [r.input, r.value.toFixed(), r.display, r.sigFigs, r.unit, r.uncertainty?.toFixed() ?? ''],
+    block: (r) => {
+      const sf = r.sigFigs === null ? (r.uncertainty ? 'standard uncertainty, k = 1' : 'exact') : `${r.sigFigs} significant figure${r.sigFigs === 1 ? '' : 's'}`;
+      const lines = [`${r.input}  =  ${r.display}   (${sf})`];
+      if (o.explain) {
+        r.steps.forEach((s, i) => lines.push(`  ${i + 1}. ${s.text}: ${s.rule}`));
+        if (r.steps.length === 0) lines.push('  a single value: its precision is as written');
+        lines.push(`  unrounded: ${r.value.toFixed()} ${r.unit}`.trimEnd() + `; rounded once, ${opts.rounding === 'half-up' ? 'half up' : 'half to even'}`);
+      }
+      return lines.join('\n');
+    },
+    notes: (r) => r.notes,
+  };
+}
+
+/** Registers `pondus calc`. */
+export function registerCalc(program: Command, run: CommandRunner): void {
+  withOutputOptions(
+    program
+      .command('calc')
+      .description('calculate with measured quantities: significant figures, units, molar masses M(formula), ± uncertainties')
+      .argument('[expressions...]', "expressions such as '0.100 M * 250.0 mL * M(CuSO4·5H2O) to g'; - reads one per line")
+      .option('--explain', 'show each step and which input limited the precision')
+      .addOption(new Option('--rounding <mode>', 'rounding of the reported figure').choices(['half-even', 'half-up']).default('half-even')),
+  ).action((inputs: string[], o: CalcCliOptions) => run('calc', inputs, o));
+}

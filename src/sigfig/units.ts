@@ -1,0 +1,140 @@
+/**
+ * Units of the bench: mass, amount, volume, and what divides them (molar and
+ * mass concentration, molar mass), plus percent and parts per million. Every
+ * factor is a power of ten, so converting never changes a value's precision:
+ * only the position of its last significant digit moves.
+ */
+import { fail } from '../errors/pondus-error.js';
+
+/** Exponents of the base dimensions [mass (g), amount (mol), volume (L)]. */
+export type Dims = readonly [number, number, number];
+
+export interface Unit {
+  symbol: string;
+  /** Power of ten from this unit to the base unit (mg → -3). */
+  exp10: number;
+  dims: Dims;
+  name: string;
+}
+
+const MASS: Dims = [1, 0, 0];
+const AMOUNT: Dims = [0, 1, 0];
+const VOLUME: Dims = [0, 0, 1];
+const NONE: Dims = [0, 0, 0];
+
+const TABLE: Unit[] = [
+  { symbol: 'kg', exp10: 3, dims: MASS, name: 'kilogram' },
+  { symbol: 'g', exp10: 0, dims: MASS, name: 'gram' },
+  { symbol: 'mg', exp10: -3, dims: MASS, name: 'milligram' },
+  { symbol: 'µg', exp10: -6, dims: MASS, name: 'microgram' },
+  { symbol: 'ng', exp10: -9, dims: MASS, name: 'nanogram' },
+  { symbol: 'mol', exp10: 0, dims: AMOUNT, name: 'mole' },
+  { symbol: 'mmol', exp10: -3, dims: AMOUNT, name: 'millimole' },
+  { symbol: 'µmol', exp10: -6, dims: AMOUNT, name: 'micromole' },
+  { symbol: 'nmol', exp10: -9, dims: AMOUNT, name: 'nanomole' },
+  { symbol: 'L', exp10: 0, dims: VOLUME, name: 'litre' },
+  { symbol: 'mL', exp10: -3, dims: VOLUME, name: 'millilitre' },
+  { symbol: 'µL', exp10: -6, dims: VOLUME, name: 'microlitre' },
+  { symbol: 'M', exp10: 0, dims: [0, 1, -1], name: 'mole per litre' },
+  { symbol: 'mM', exp10: -3, dims: [0, 1, -1], name: 'millimole per litre' },
+  { symbol: 'µM', exp10: -6, dims: [0, 1, -1], name: 'micromole per litre' },
+  { symbol: 'mol/L', exp10: 0, dims: [0, 1, -1], name: 'mole per litre' },
+  { symbol: 'mmol/L', exp10: -3, dims: [0, 1, -1], name: 'millimole per litre' },
+  { symbol: 'g/L', exp10: 0, dims: [1, 0, -1], name: 'gram per litre' },
+  { symbol: 'mg/L', exp10: -3, dims: [1, 0, -1], name: 'milligram per litre' },
+  { symbol: 'mg/mL', exp10: 0, dims: [1, 0, -1], name: 'milligram per millilitre' },
+  { symbol: 'µg/mL', exp10: -3, dims: [1, 0, -1], name: 'microgram per millilitre' },
+  { symbol: 'g/mL', exp10: 3, dims: [1, 0, -1], name: 'gram per millilitre' },
+  { symbol: 'g/mol', exp10: 0, dims: [1, -1, 0], name: 'gram per mole' },
+  { symbol: 'kg/mol', exp10: 3, dims: [1, -1, 0], name: 'kilogram per mole' },
+  { symbol: '%', exp10: -2, dims: NONE, name: 'percent' },
+  { symbol: 'ppm', exp10: -6, dims: NONE, name: 'part per million' },
+  { symbol: 'ppb', exp10: -9, dims: NONE, name: 'part per billion' },
+];
+
+const ALIASES: Record<string, string> = {
+  ug: 'µg',
+  'μg': 'µg', // Greek mu
+  umol: 'µmol',
+  'μmol': 'µmol',
+  uL: 'µL',
+  'μL': 'µL',
+  ul: 'µL',
+  ml: 'mL',
+  l: 'L',
+  uM: 'µM',
+  'μM': 'µM',
+  'mol/l': 'mol/L',
+  'g/l': 'g/L',
+  'mg/l': 'mg/L',
+  'mg/ml': 'mg/mL',
+  'ug/mL': 'µg/mL',
+  'g/ml': 'g/mL',
+  'mol·L⁻¹': 'mol/L',
+  'g·mol⁻¹': 'g/mol',
+};
+
+const BY_SYMBOL = new Map(TABLE.map((u) => [u.symbol, u]));
+
+/** The symbols the calculator and the commands accept, for help and error messages. */
+export const UNIT_SYMBOLS: readonly string[] = Object.freeze(TABLE.map((u) => u.symbol));
+
+/**
+ * Looks up a unit by symbol or accepted spelling; throws UNKNOWN_UNIT otherwise.
+ *
+ * @example
+ * unitOf('mg').exp10 // -3
+ * unitOf('ug').symbol // 'µg'
+ */
+export function unitOf(symbol: string, column?: number): Unit {
+  const u = BY_SYMBOL.get(symbol) ?? BY_SYMBOL.get(ALIASES[symbol] ?? '');
+  if (!u) {
+    throw fail({ code: 'UNKNOWN_UNIT', message: `unknown unit '${symbol}'`, column, hint: `units: ${UNIT_SYMBOLS.join(', ')}` });
+  }
+  return u;
+}
+
+/** True when two dimension vectors are equal. */
+export function sameDims(a: Dims, b: Dims): boolean {
+  return a[0] === b[0] && a[1] === b[1] && a[2] === b[2];
+}
+
+const DIM_NAMES: [Dims, string, string][] = [
+  [[0, 0, 0], 'a pure number', ''],
+  [[1, 0, 0], 'a mass', 'g'],
+  [[0, 1, 0], 'an amount of substance', 'mol'],
+  [[0, 0, 1], 'a volume', 'L'],
+  [[0, 1, -1], 'a molar concentration', 'M'],
+  [[1, 0, -1], 'a mass concentration', 'g/L'],
+  [[1, -1, 0], 'a molar mass', 'g/mol'],
+  [[0, -1, 1], 'a volume per amount', 'L/mol'],
+  [[-1, 1, 0], 'an amount per mass', 'mol/g'],
+  [[0, 0, -1], 'a reciprocal volume', '1/L'],
+];
+
+/**
+ * A plain-English name for a dimension ('a mass', 'a molar concentration').
+ *
+ * @example
+ * dimsName([1, 0, 0]) // 'a mass'
+ */
+export function dimsName(d: Dims): string {
+  return DIM_NAMES.find(([x]) => sameDims(x, d))?.[1] ?? `a quantity in ${baseUnitText(d)}`;
+}
+
+/**
+ * The base-unit symbol for a dimension: 'g', 'M', 'g/mol', or a product of powers.
+ *
+ * @example
+ * baseUnitText([0, 1, -1]) // 'M'
+ */
+export function baseUnitText(d: Dims): string {
+  const named = DIM_NAMES.find(([x]) => sameDims(x, d));
+  if (named) return named[2];
+  const parts: string[] = [];
+  (['g', 'mol', 'L'] as const).forEach((s, i) => {
+    if (d[i] === 1) parts.push(s);
+    else if (d[i] !== 0) parts.push(`${s}^${d[i]}`);
+  });
+  return parts.join('·');
+}
