@@ -58,3 +58,11 @@ export type { CalcStep } from './calc/evaluate.js';
 // uncertainty of molar masses, mixtures
 export { molarMassUncertainty, formatWithUncertainty, type MolarMassUncertainty, type UncertaintyTerm } from './mass/uncertainty.js';
 export { mixtureComposition, safeMixtureComposition, mixtureJson, type MixtureResult, type Share } from './composition/mixture.js';
+
+// elemental analysis
+export { analysis, safeAnalysis, type AnalysisResult, type AnalysisOptions, type Fit, type Partner } from './analysis/check.js';
+export { analysisJson } from './analysis/analysis-json.js';
+export { readFound } from './analysis/found-values.js';
+export { readSheet, type SheetRow } from './analysis/lab-sheet.js';
+export { SOLVENTS, solventByName } from './analysis/solvents.js';
+export { PARTNER_PENALTY } from './analysis/solvate-fit.js';

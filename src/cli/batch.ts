@@ -21,6 +21,8 @@ export interface BatchSummary {
   total: number;
   failed: number;
   failedLines: number[];
+  /** How many results the presenter's tally counted. */
+  tallied: number;
 }
 
 /**
@@ -31,7 +33,7 @@ export interface BatchSummary {
  */
 export async function runBatch<R>(p: Presenter<R>, batches: AsyncIterable<InputItem[]>, format: OutputFormat, io: BatchIo, numbered: boolean): Promise<BatchSummary> {
   const writer = createWriter(format, p, { ...io, numbered });
-  const summary: BatchSummary = { total: 0, failed: 0, failedLines: [] };
+  const summary: BatchSummary = { total: 0, failed: 0, failedLines: [], tallied: 0 };
   for await (const batch of batches) {
     processItems(p, batch, writer, summary);
     writer.endBatch(false);
@@ -60,6 +62,7 @@ export function processItems<R>(p: Presenter<R>, items: InputItem[], writer: Res
       writer.fail(item, asPondusError(e, item.text));
       continue;
     }
+    if (p.tally?.count(result)) summary.tallied++;
     writer.ok(item, result);
   }
 }

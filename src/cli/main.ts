@@ -8,13 +8,14 @@ import type { Writable } from 'node:stream';
 import { PondusError } from '../errors/pondus-error.js';
 import { renderError } from '../errors/render.js';
 import { runBatch } from './batch.js';
+import { registerAnalysis } from './commands/analysis.js';
 import { registerCalc } from './commands/calc.js';
 import { registerComposition } from './commands/composition.js';
 import { outputFormat } from './commands/common.js';
 import { registerMass } from './commands/mass.js';
 import type { CommandRunner } from './commands/runner.js';
 import { PRESENTERS } from './commands/registry.js';
-import { inputBatches } from './input/inputs.js';
+import { fixedBatch, inputBatches } from './input/inputs.js';
 import { Sink } from './output/sink.js';
 import { styleFor } from './output/style.js';
 
@@ -41,14 +42,20 @@ export async function main(args: string[], io: CliIo): Promise<number> {
   const errStyle = styleFor(io.stderr);
   let status = 0;
 
-  const run: CommandRunner = async (command, inputs, options) => {
+  const run: CommandRunner = async (command, inputs, options, lineNumbers) => {
     const presenter = PRESENTERS[command](options);
     const format = outputFormat(options);
     if (inputs.length === 0) {
       throw new PondusError([{ code: 'USAGE', message: 'no inputs: give them as arguments, or - to read one per line from standard input' }]);
     }
     const numbered = inputs.includes('-') || inputs.length > 1;
-    const summary = await runBatch(presenter, inputBatches(inputs, io.stdin), format, { out, err, outStyle, errStyle }, numbered);
+    const batches = lineNumbers ? fixedBatch(inputs, lineNumbers) : inputBatches(inputs, io.stdin);
+    const summary = await runBatch(presenter, batches, format, { out, err, outStyle, errStyle }, numbered || !!lineNumbers);
+    if (presenter.tally) {
+      const line = `${summary.tallied} of ${summary.total} ${presenter.tally.words}\n`;
+      if (format === 'table') out.write(line);
+      else err.write(`pondus: ${line}`);
+    }
     if (summary.failed > 0) {
       status = 1;
       if (format !== 'table' || summary.total > 1) {
@@ -72,6 +79,7 @@ export async function main(args: string[], io: CliIo): Promise<number> {
   registerMass(program, run);
   registerComposition(program, run);
   registerCalc(program, run);
+  registerAnalysis(program, run, io.stdin);
 
   try {
     await program.parseAsync(args, { from: 'user' });

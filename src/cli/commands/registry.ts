@@ -3,6 +3,7 @@
  * command uses from the command's name and its (plain) options.
  */
 import type { Presenter } from '../output/presenter.js';
+import { analysisPresenter } from './analysis.js';
 import { calcPresenter } from './calc.js';
 import { compositionPresenter } from './composition.js';
 import { massPresenter } from './mass.js';
@@ -14,4 +15,5 @@ export const PRESENTERS: Readonly<Record<string, Factory>> = Object.freeze({
   mass: massPresenter,
   composition: compositionPresenter,
   calc: calcPresenter,
+  analysis: analysisPresenter,
 });

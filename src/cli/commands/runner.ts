@@ -2,6 +2,7 @@ import type { OutputOptions } from './common.js';
 
 /**
  * What a command's action calls: run the named command's presenter (see
- * registry.ts) over the inputs, with the chosen output.
+ * registry.ts) over the inputs, with the chosen output. Inputs read from a file
+ * by the command itself come with their line numbers.
  */
-export type CommandRunner = (command: string, inputs: string[], options: OutputOptions) => Promise<void>;
+export type CommandRunner = (command: string, inputs: string[], options: OutputOptions, lineNumbers?: number[]) => Promise<void>;

@@ -31,3 +31,13 @@ export async function* inputBatches(args: string[], stdin: () => AsyncIterable<s
   }
   if (pending.length) yield pending;
 }
+
+/**
+ * Inputs already read (a lab sheet's rows), with their own line numbers, as one batch.
+ *
+ * @example
+ * for await (const b of fixedBatch(['row'], [2])) b[0].line // 2
+ */
+export async function* fixedBatch(texts: string[], lines: number[]): AsyncGenerator<InputItem[]> {
+  yield texts.map((text, i) => ({ text, line: lines[i] }));
+}

@@ -21,6 +21,8 @@ export interface Presenter<R> {
   block?(result: R): string;
   /** Remarks to print under the table for a result. */
   notes?(result: R): string[];
+  /** Counts a result toward a closing tally ('3 of 4 compounds pass'), with the words for it. */
+  tally?: { count(result: R): boolean; words: string };
   /** A caution printed once after table output (results someone will act on). */
   caution?: string;
 }

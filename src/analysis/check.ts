@@ -1,0 +1,215 @@
+/**
+ * Elemental analysis: calculated against found mass percents, the verdict at a
+ * tolerance, the solvates or salt partners that explain a miss, and the line
+ * for the experimental section.
+ *
+ * The verdict rule: calculated values are rounded to two decimals (half to
+ * even), as they are reported; the deviation is found − calculated, exactly;
+ * an element passes when |deviation| ≤ tolerance. At the default 0.4, a
+ * deviation of exactly 0.40 passes and 0.41 fails.
+ */
+import { Decimal } from '../exact/decimal.js';
+import { fail, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import type { Note } from '../errors/issue.js';
+import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { hillOrder } from '../formula/hill.js';
+import { readFound } from './found-values.js';
+import { solventByName } from './solvents.js';
+import { continuousAmount, searchSolvates, type MassVector } from './solvate-fit.js';
+
+export interface AnalysisOptions extends MassOptions {
+  /** Allowed |found − calculated| in percentage points (default 0.4, the common journal rule). */
+  tolerance?: Decimal | string | number;
+  /** Solvents and salt partners to try: names (water, DCM, EtOAc, TFA, …) or formulas. */
+  solvents?: string[];
+  /** Grid step for solvate amounts (default 0.05). */
+  step?: number;
+  /** Largest amount of each partner (default 2). */
+  max?: number;
+  /** How many fits to report (default 5). */
+  top?: number;
+}
+
+export interface Partner {
+  /** As given: 'DCM', 'H2O'. */
+  given: string;
+  /** Its formula in Hill order. */
+  formula: string;
+  name: string | null;
+}
+
+export interface Fit {
+  /** The formula with its solvates, as written in a report: 'C20H25N3O·0.5H2O'. */
+  formula: string;
+  solvates: { formula: string; name: string | null; amount: Decimal }[];
+  calculated: Map<string, Decimal>;
+  deviation: Map<string, Decimal>;
+  maxDeviation: Decimal;
+  pass: boolean;
+  reportLine: string;
+}
+
+export interface AnalysisResult {
+  input: string;
+  /** The compound's formula in Hill order. */
+  formula: string;
+  calculated: Map<string, Decimal>;
+  /** Found values as given. */
+  found: Map<string, Decimal>;
+  foundText: Map<string, string>;
+  deviation: Map<string, Decimal>;
+  maxDeviation: Decimal;
+  pass: boolean;
+  tolerance: Decimal;
+  reportLine: string;
+  /** Best fits with solvates (the bare formula included), best first; empty without solvents. */
+  fits: Fit[];
+  /** The least-squares amount of each single partner. */
+  continuous: { formula: string; name: string | null; amount: Decimal; maxDeviation: Decimal }[];
+  notes: Note[];
+}
+
+/**
+ * Checks found percents against a formula, and fits solvates when asked.
+ *
+ * @example
+ * analysis('C20H25N3O', 'C=72.30, H=7.91, N=12.60', { solvents: ['water'] }).fits[0].formula // 'C20H25N3O·0.5H2O'
+ */
+export function analysis(formula: string, foundText: string, options: AnalysisOptions = {}): AnalysisResult {
+  const found = readFound(foundText);
+  const tolerance = new Decimal(options.tolerance ?? '0.4');
+  if (tolerance.isNegative() || tolerance.gt(100)) throw fail({ code: 'BAD_OPTION', message: `tolerance ${tolerance.toFixed()} is out of range` });
+  const base = formulaMass(formula, options);
+  if (base.charge !== 0) throw fail({ code: 'BAD_MEASUREMENT', message: 'elemental analysis is of a neutral compound; give the whole salt, e.g. C12H14N2^2+ with its counter-ions' }, formula);
+  const partners = (options.solvents ?? []).map((s) => partnerOf(s, options));
+  const partnerMasses = partners.map((p) => formulaMass(p.formula, options));
+  for (const symbol of found.keys()) {
+    if (!base.atoms.has(symbol) && !partnerMasses.some((m) => m.atoms.has(symbol))) {
+      throw fail({ code: 'BAD_MEASUREMENT', message: `a found value for ${symbol}, which ${base.formula} does not contain${partners.length ? ' (nor any solvent given)' : ''}` }, foundText);
+    }
+  }
+  const symbols = hillOrder(found.keys());
+  const textOf = new Map(symbols.map((s) => [s, found.get(s)!.toFixed(Math.max(2, decimalsOf(foundText, s)))]));
+  const bare = evaluateFit(base.formula, base, [], symbols, found, tolerance, textOf);
+
+  let fits: Fit[] = [];
+  const continuous: AnalysisResult['continuous'] = [];
+  if (partners.length > 0) {
+    const step = options.step ?? 0.05;
+    const max = options.max ?? 2;
+    if (!(step > 0 && step <= max && max <= 20 && max / step <= 2000)) throw fail({ code: 'BAD_OPTION', message: `step ${step} and max ${max} make no sensible grid (0 < step ≤ max ≤ 20, at most 2000 steps)` });
+    const foundNums = symbols.map((s) => found.get(s)!.toNumber());
+    const vec = (m: MassResult): MassVector => ({ masses: symbols.map((s) => massOf(m, s)), total: m.molarMass.toNumber() });
+    const baseVec = vec(base);
+    const partnerVecs = partnerMasses.map(vec);
+    const candidates = searchSolvates(foundNums, baseVec, partnerVecs, step, max, options.top ?? 5, partners.length <= 12);
+    fits = candidates.map((c) => {
+      const used = c.amounts.map((a, j) => ({ a, j })).filter((x) => x.a > 0);
+      return evaluateFit(
+        base.formula,
+        base,
+        used.map((u) => ({ amount: new Decimal(u.a.toFixed(6)), partner: partners[u.j], mass: partnerMasses[u.j] })),
+        symbols,
+        found,
+        tolerance,
+        textOf,
+      );
+    });
+    partners.forEach((p, j) => {
+      const x = continuousAmount(foundNums, baseVec, partnerVecs[j], max);
+      const amount = new Decimal(x.toFixed(3));
+      const f = evaluateFit(base.formula, base, [{ amount, partner: p, mass: partnerMasses[j] }], symbols, found, tolerance, textOf);
+      continuous.push({ formula: p.formula, name: p.name, amount, maxDeviation: f.maxDeviation });
+    });
+  }
+  return {
+    input: formula,
+    formula: base.formula,
+    calculated: bare.calculated,
+    found,
+    foundText: textOf,
+    deviation: bare.deviation,
+    maxDeviation: bare.maxDeviation,
+    pass: bare.pass,
+    tolerance,
+    reportLine: bare.reportLine,
+    fits,
+    continuous,
+    notes: base.notes,
+  };
+}
+
+/**
+ * Non-throwing {@link analysis}.
+ *
+ * @example
+ * safeAnalysis('C6H6', 'C=92.26,Cl=1.00').success // false
+ */
+export function safeAnalysis(formula: string, foundText: string, options: AnalysisOptions = {}): SafeResult<AnalysisResult> {
+  return toSafe(() => analysis(formula, foundText, options));
+}
+
+function decimalsOf(text: string, symbol: string): number {
+  const m = new RegExp(`(?:^|[^A-Za-z])${symbol}\\s*[=:]\\s*[0-9]+(?:\\.([0-9]+))?`).exec(text);
+  return m && m[1] ? m[1].length : 0;
+}
+
+function massOf(m: MassResult, symbol: string): number {
+  return m.contributions.filter((c) => c.symbol === symbol).reduce((s, c) => s + c.mass.toNumber(), 0);
+}
+
+function partnerOf(given: string, options: MassOptions): Partner {
+  const named = solventByName(given);
+  const formulaText = named ? named.formula : given;
+  try {
+    const m = formulaMass(formulaText, options);
+    return { given, formula: m.formula, name: named ? named.name : null };
+  } catch (e) {
+    if (e instanceof PondusError && !named) {
+      throw fail({ code: 'BAD_OPTION', message: `unknown solvent '${given}': give a name (water, DCM, chloroform, MeOH, EtOH, EtOAc, ether, THF, acetone, MeCN, DMF, DMSO, toluene, hexane, HCl, TFA, …) or a formula` }, given);
+    }
+    throw e;
+  }
+}
+
+interface Used {
+  amount: Decimal;
+  partner: Partner;
+  mass: MassResult;
+}
+
+function evaluateFit(baseHill: string, base: MassResult, used: Used[], symbols: readonly string[], found: Map<string, Decimal>, tolerance: Decimal, textOf: Map<string, string>): Fit {
+  let total = base.molarMass;
+  const elementMass = new Map<string, Decimal>();
+  for (const s of symbols) elementMass.set(s, exactMass(base, s));
+  for (const u of used) {
+    total = total.plus(u.mass.molarMass.times(u.amount));
+    for (const s of symbols) elementMass.set(s, elementMass.get(s)!.plus(exactMass(u.mass, s).times(u.amount)));
+  }
+  const calculated = new Map<string, Decimal>();
+  const deviation = new Map<string, Decimal>();
+  let maxDeviation = new Decimal(0);
+  for (const s of symbols) {
+    const c = elementMass.get(s)!.div(total).times(100).toDecimalPlaces(2, Decimal.ROUND_HALF_EVEN);
+    calculated.set(s, c);
+    const d = found.get(s)!.minus(c);
+    deviation.set(s, d);
+    if (d.abs().gt(maxDeviation)) maxDeviation = d.abs();
+  }
+  const formula = baseHill + used.map((u) => `·${u.amount.eq(1) ? '' : u.amount.toFixed()}${u.partner.formula}`).join('');
+  const list = (m: Map<string, string>) => symbols.map((s) => `${s}, ${m.get(s)}`).join('; ');
+  const reportLine = `Anal. Calcd for ${formula}: ${list(new Map(symbols.map((s) => [s, calculated.get(s)!.toFixed(2)])))}. Found: ${list(textOf)}.`;
+  return {
+    formula,
+    solvates: used.map((u) => ({ formula: u.partner.formula, name: u.partner.name, amount: u.amount })),
+    calculated,
+    deviation,
+    maxDeviation,
+    pass: maxDeviation.lte(tolerance),
+    reportLine,
+  };
+}
+
+function exactMass(m: MassResult, symbol: string): Decimal {
+  return m.contributions.filter((c) => c.symbol === symbol).reduce((s, c) => s.plus(c.mass), new Decimal(0));
+}
