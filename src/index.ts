@@ -66,3 +66,20 @@ export { readFound } from './analysis/found-values.js';
 export { readSheet, type SheetRow } from './analysis/lab-sheet.js';
 export { SOLVENTS, solventByName } from './analysis/solvents.js';
 export { PARTNER_PENALTY } from './analysis/solvate-fit.js';
+
+// reactions
+export { balance, safeBalance, balanceJson, equationText, type BalanceResult } from './reactions/balance.js';
+export { parseEquation, type Equation, type Species } from './reactions/equation.js';
+export { react, safeReact, type ReactResult, type ReactOptions, type SpeciesLine } from './reactions/react.js';
+export { Rational, nullSpace, smallestIntegers } from './reactions/rational.js';
+
+// bench preparation
+export { measure, measureAs } from './calc/measure.js';
+export { displayQuantity, reportUnit, type QuantityDisplay } from './sigfig/display-quantity.js';
+export { prepareSolution, safePrepareSolution, type SolutionResult, type SolutionOptions } from './preparation/solution.js';
+export { substituteForm, safeSubstituteForm, type SubstituteResult } from './preparation/substitute.js';
+export { dilute, safeDilute, type DilutionResult } from './preparation/dilution.js';
+export { conversionFactor, type ConversionFactor } from './preparation/conversion-factor.js';
+export { gravimetric, safeGravimetric, type GravimetricResult, type GravimetricOptions } from './preparation/gravimetric.js';
+export { saltFactor, safeSaltFactor, type SaltFactorResult } from './preparation/salt-factor.js';
+export { BENCH_CAUTION, DOSE_CAUTION } from './preparation/caution.js';

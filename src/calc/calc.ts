@@ -3,12 +3,11 @@
  * masses in, the reported figure out.
  */
 import { Decimal } from '../exact/decimal.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { formatWithUncertainty } from '../mass/uncertainty.js';
-import { sigFigsOf } from '../sigfig/measured.js';
 import { standardUncertainty } from '../sigfig/quantity.js';
-import { displayMeasured, type RoundingMode } from '../sigfig/round.js';
-import { baseUnitText, sameDims, unitOf, type Unit } from '../sigfig/units.js';
+import { displayQuantity, reportUnit } from '../sigfig/display-quantity.js';
+import type { RoundingMode } from '../sigfig/round.js';
 import { evaluate, type CalcStep } from './evaluate.js';
 import { parseExpression } from './parse-expression.js';
 
@@ -47,48 +46,22 @@ export function calc(input: string, options: CalcOptions = {}): CalcResult {
   const tree = parseExpression(input);
   const ev = evaluate(tree);
   const q = ev.result;
-  let unit: Unit | null = q.unit && sameDims(q.unit.dims, q.dims) ? q.unit : null;
-  if (tree.target) {
-    const t = unitOf(tree.target.unit);
-    if (!sameDims(t.dims, q.dims)) {
-      throw fail({ code: 'INCOMPATIBLE_UNITS', message: `the result is ${baseUnitText(q.dims) || 'a pure number'}, not convertible to ${t.symbol}` }, input);
-    }
-    unit = t;
-  }
-  if (!unit) {
-    const base = baseUnitText(q.dims);
-    unit = base === '' ? null : safeUnit(base);
-  }
-  const exp10 = unit ? unit.exp10 : 0;
-  const scale = new Decimal(10).pow(exp10);
-  const value = q.value.div(scale);
-  const lsd = q.lsd === null ? null : q.lsd - exp10;
-  const unitText = unit ? unit.symbol : baseUnitText(q.dims);
+  const unit = reportUnit(q, tree.target ? tree.target.unit : null);
+  const shown = displayQuantity(q, unit, options.rounding);
+  const scale = new Decimal(10).pow(unit ? unit.exp10 : 0);
   const uncertainty = ev.inputs.size > 0 ? standardUncertainty(q, ev.inputs).div(scale) : null;
-  let display: string;
-  let rounded: Decimal;
-  let sigFigs: number | null;
+  const value = shown.value;
+  const unitText = shown.unit;
+  let display = shown.text;
+  let rounded = shown.rounded;
+  let sigFigs = shown.sigFigs;
   if (uncertainty) {
-    display = formatWithUncertainty(value, uncertainty);
-    rounded = new Decimal(display.split(' ± ')[0]);
+    const figure = formatWithUncertainty(value, uncertainty);
+    display = unitText ? `${figure} ${unitText}` : figure;
+    rounded = new Decimal(figure.split(' ± ')[0]);
     sigFigs = null;
-  } else {
-    const d = displayMeasured({ value, lsd }, options.rounding);
-    display = d.text;
-    rounded = d.value;
-    sigFigs = d.sigFigs;
   }
-  if (unitText) display += ` ${unitText}`;
-  if (lsd !== null && sigFigsOf({ value, lsd }) > 0 && sigFigs === null && !uncertainty) sigFigs = sigFigsOf({ value, lsd });
   return { input, value, rounded, display, sigFigs, unit: unitText, uncertainty, steps: ev.steps, notes: ev.notes };
-}
-
-function safeUnit(symbol: string): Unit | null {
-  try {
-    return unitOf(symbol);
-  } catch {
-    return null;
-  }
 }
 
 /**

@@ -9,7 +9,11 @@ import { PondusError } from '../errors/pondus-error.js';
 import { renderError } from '../errors/render.js';
 import { runBatch } from './batch.js';
 import { registerAnalysis } from './commands/analysis.js';
+import { registerBalance } from './commands/balance.js';
 import { registerCalc } from './commands/calc.js';
+import { registerConversions } from './commands/conversions.js';
+import { registerPrepare } from './commands/prepare.js';
+import { registerReact } from './commands/react.js';
 import { registerComposition } from './commands/composition.js';
 import { outputFormat } from './commands/common.js';
 import { registerMass } from './commands/mass.js';
@@ -80,6 +84,10 @@ export async function main(args: string[], io: CliIo): Promise<number> {
   registerComposition(program, run);
   registerCalc(program, run);
   registerAnalysis(program, run, io.stdin);
+  registerBalance(program, run);
+  registerReact(program, run);
+  registerPrepare(program, run);
+  registerConversions(program, run);
 
   try {
     await program.parseAsync(args, { from: 'user' });

@@ -4,6 +4,10 @@
  */
 import type { Presenter } from '../output/presenter.js';
 import { analysisPresenter } from './analysis.js';
+import { balancePresenter } from './balance.js';
+import { basisPresenter, dilutePresenter, gravimetricPresenter, saltPresenter } from './conversions.js';
+import { preparePresenter } from './prepare.js';
+import { reactPresenter } from './react.js';
 import { calcPresenter } from './calc.js';
 import { compositionPresenter } from './composition.js';
 import { massPresenter } from './mass.js';
@@ -16,4 +20,11 @@ export const PRESENTERS: Readonly<Record<string, Factory>> = Object.freeze({
   composition: compositionPresenter,
   calc: calcPresenter,
   analysis: analysisPresenter,
+  balance: balancePresenter,
+  react: reactPresenter,
+  prepare: preparePresenter,
+  dilute: dilutePresenter,
+  gravimetric: gravimetricPresenter,
+  basis: basisPresenter,
+  salt: saltPresenter,
 });

@@ -38,7 +38,7 @@ export function chargeLabel(charge: number): string {
 
 /** A plain aligned table without borders between rows. */
 export function fixedTable(head: string[], rows: Cell[][], align?: ('left' | 'right')[]): string {
-  const t = new Table({ head, colAligns: align, style: { head: [], border: [] }, chars: { mid: '', 'left-mid': '', 'mid-mid': '', 'right-mid': '' } });
+  const t = new Table({ head, colAligns: align ?? head.map(() => 'left' as const), style: { head: [], border: [] }, chars: { mid: '', 'left-mid': '', 'mid-mid': '', 'right-mid': '' } });
   for (const r of rows) t.push(r.map((c) => (c === null || c === undefined ? '' : String(c))));
   return t.toString();
 }

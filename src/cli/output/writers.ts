@@ -129,7 +129,7 @@ class TableWriter<R> implements ResultWriter<R> {
       const t = this.p.table!;
       const table = new Table({
         head: t.head.map((h) => s.bold(h)),
-        colAligns: t.align,
+        colAligns: t.align ?? t.head.map(() => 'left' as const),
         style: { head: [], border: [] },
         chars: { mid: '', 'left-mid': '', 'mid-mid': '', 'right-mid': '' },
       });

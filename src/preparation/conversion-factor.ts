@@ -1,0 +1,66 @@
+/**
+ * The stoichiometric mass factor between two substances that share an element:
+ * mass of `sought` per unit mass of `given`. For a precipitate this is the
+ * gravimetric factor (IUPAC Gold Book: the ratio of the molar mass of the
+ * substance sought to that of the substance weighed, each multiplied by the
+ * number of formula units that hold the same amount of the key element); for
+ * fertilizer, ceramic and geochemical work it converts between an element and
+ * its oxide basis (P ↔ P2O5, K ↔ K2O, Si ↔ SiO2, Al ↔ Al2O3).
+ */
+import { fail } from '../errors/pondus-error.js';
+import { Decimal } from '../exact/decimal.js';
+import { toDecimal } from '../formula/amount.js';
+import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { reportedMolarMass } from '../mass/reported-mass.js';
+import { dividedBy, exact, times, type Measured } from '../sigfig/measured.js';
+import { gcd } from '../reactions/rational.js';
+
+export interface ConversionFactor {
+  sought: MassResult;
+  given: MassResult;
+  /** The element both contain, on which the factor rests. */
+  element: string;
+  /** Formula units of the sought substance … */
+  a: bigint;
+  /** … per formula units of the given one. */
+  b: bigint;
+  /** a·M(sought) / (b·M(given)), exact. */
+  factor: Decimal;
+  /** The factor with the precision of the molar masses. */
+  reported: Measured;
+}
+
+/**
+ * The mass of `sought` that corresponds to a unit mass of `given`.
+ *
+ * @example
+ * conversionFactor('Fe', 'Fe2O3').factor.toFixed(4) // '0.6994'
+ * conversionFactor('P', 'P2O5').factor.toFixed(4)   // '0.4364'
+ */
+export function conversionFactor(sought: string, given: string, element?: string, options: MassOptions = {}): ConversionFactor {
+  const s = formulaMass(sought, options);
+  const g = formulaMass(given, options);
+  const shared = [...s.atoms.keys()].filter((k) => g.atoms.has(k));
+  let key = element;
+  if (key === undefined) {
+    const candidates = shared.length > 1 ? shared.filter((k) => k !== 'O' && k !== 'H') : shared;
+    if (candidates.length !== 1) {
+      throw fail({
+        code: 'BAD_OPTION',
+        message: candidates.length === 0 ? `${s.formula} and ${g.formula} share no element` : `${s.formula} and ${g.formula} share ${candidates.join(', ')}: say which element the factor rests on (--element)`,
+      });
+    }
+    key = candidates[0];
+  }
+  if (!s.atoms.has(key) || !g.atoms.has(key)) throw fail({ code: 'BAD_OPTION', message: `${key} is not in both ${s.formula} and ${g.formula}` });
+  const ns = toDecimal(s.atoms.get(key)!);
+  const ng = toDecimal(g.atoms.get(key)!);
+  if (!ns.isInteger() || !ng.isInteger()) throw fail({ code: 'BAD_OPTION', message: 'the factor needs whole counts of the key element' });
+  // a·ns = b·ng  →  a = ng/d, b = ns/d
+  const d = gcd(BigInt(ns.toFixed()), BigInt(ng.toFixed()));
+  const a = BigInt(ng.toFixed()) / d;
+  const b = BigInt(ns.toFixed()) / d;
+  const factor = s.molarMass.times(String(a)).div(g.molarMass.times(String(b)));
+  const reported = dividedBy(times(reportedMolarMass(s), exact(String(a))), times(reportedMolarMass(g), exact(String(b))));
+  return { sought: s, given: g, element: key, a, b, factor, reported };
+}

@@ -1,0 +1,61 @@
+/**
+ * Gravimetric analysis: the mass of analyte from the mass of the weighed form,
+ * and its mass fraction in the sample.
+ */
+import type { Note } from '../errors/issue.js';
+import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { MASS, measureAs } from '../calc/measure.js';
+import type { MassOptions } from '../mass/formula-mass.js';
+import { exact } from '../sigfig/measured.js';
+import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
+import { conversionFactor, type ConversionFactor } from './conversion-factor.js';
+
+export interface GravimetricOptions extends MassOptions {
+  /** Element the factor rests on, when the two share more than one. */
+  element?: string;
+  /** Mass of the weighed form: '0.2345 g'. */
+  weighedMass?: string;
+  /** Mass of the sample taken: '1.0012 g'. */
+  sampleMass?: string;
+}
+
+export interface GravimetricResult {
+  analyte: string;
+  weighed: string;
+  factor: ConversionFactor;
+  analyteMass: Quantity | null;
+  /** Percent by mass of analyte in the sample. */
+  massPercent: Quantity | null;
+  notes: Note[];
+}
+
+/**
+ * Gravimetric factor, analyte mass and mass fraction.
+ *
+ * @example
+ * gravimetric('Cl', 'AgCl', { weighedMass: '0.2866 g' }).analyteMass // 0.07090 g
+ */
+export function gravimetric(analyte: string, weighed: string, options: GravimetricOptions = {}): GravimetricResult {
+  const factor = conversionFactor(analyte, weighed, options.element, options);
+  let analyteMass: Quantity | null = null;
+  let massPercent: Quantity | null = null;
+  const notes: Note[] = [];
+  if (options.weighedMass !== undefined) {
+    const m = measureAs(options.weighedMass, [MASS], 'the mass of the weighed form', notes);
+    analyteMass = multiply(m, quantity(factor.reported, null));
+    if (options.sampleMass !== undefined) {
+      const s = measureAs(options.sampleMass, [MASS], 'the sample mass', notes);
+      if (s.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the sample mass must be positive' });
+      massPercent = multiply(divide(analyteMass, s), quantity(exact(100), null));
+      if (massPercent.value.gt(100)) throw fail({ code: 'BAD_AMOUNT', message: `the analyte would be ${massPercent.value.toFixed(1)} % of the sample: check the masses` });
+    }
+  } else if (options.sampleMass !== undefined) {
+    throw fail({ code: 'BAD_OPTION', message: 'a sample mass needs the mass of the weighed form too' });
+  }
+  return { analyte, weighed, factor, analyteMass, massPercent, notes };
+}
+
+/** Non-throwing {@link gravimetric}. */
+export function safeGravimetric(analyte: string, weighed: string, options: GravimetricOptions = {}): SafeResult<GravimetricResult> {
+  return toSafe(() => gravimetric(analyte, weighed, options));
+}

@@ -1,0 +1,133 @@
+/**
+ * Reads a chemical equation: species separated by `+`, sides by `->`, `→`,
+ * `=` (or `<=>`, `⇌`). Coefficients written in front of species are set
+ * aside (balancing computes its own). Electrons are written `e-`, `e^-` or `e⁻`.
+ */
+import type { Note } from '../errors/issue.js';
+import { fail, PondusError } from '../errors/pondus-error.js';
+import { flattenFormula, type AtomCounts } from '../formula/flatten.js';
+import { hillFormula } from '../formula/hill.js';
+import { parseFormula, type ParseOptions } from '../formula-parser/parse.js';
+import { columnOf } from '../formula-parser/prescan.js';
+
+/** Most species in one equation. */
+export const MAX_SPECIES = 100;
+/** Longest equation text accepted. */
+export const MAX_EQUATION_LENGTH = 20_000;
+
+export interface Species {
+  /** As written, without a coefficient: 'H2O', 'Fe^3+', 'e-'. */
+  text: string;
+  /** Hill formula with charge; 'e-' for the electron. */
+  formula: string;
+  atoms: AtomCounts;
+  charge: number;
+  side: 'reactant' | 'product';
+  /** 0-based offset of the species in the equation. */
+  start: number;
+  /** The coefficient written in front of it, if any. */
+  written: string | null;
+}
+
+export interface Equation {
+  input: string;
+  reactants: Species[];
+  products: Species[];
+  notes: Note[];
+}
+
+const ARROWS = /<=>|<->|⇌|⇄|->|→|⟶|=>|=/g;
+const ELECTRON = /^e(?:\^?-|⁻|−|\^−)$/;
+const COEFFICIENT = /^([0-9]+(?:\.[0-9]+)?|[0-9]+\/[0-9]+)\s*(?=[A-Z([{¹²³⁴⁵⁶⁷⁸⁹⁰]|e\b)/;
+
+/** Splits one side into species texts with their offsets. */
+function splitSide(side: string, base: number): { text: string; start: number }[] {
+  const out: { text: string; start: number }[] = [];
+  let start = 0;
+  const spaced = /\s/.test(side.trim());
+  for (let i = 0; i <= side.length; i++) {
+    const ch = side[i];
+    let split = false;
+    if (i === side.length) split = true;
+    else if (ch === '+') {
+      const before = side[i - 1];
+      const after = side[i + 1];
+      if (spaced) split = /\s/.test(before ?? '') && /\s/.test(after ?? '');
+      // unspaced: a '+' before the start of a species separates; '^+', and a sign before another sign, do not ('Na++Cl-')
+      else split = before !== '^' && after !== undefined && /[A-Za-z0-9([{¹²³⁴⁵⁶⁷⁸⁹⁰]/.test(after);
+    }
+    if (split) {
+      const raw = side.slice(start, i);
+      const lead = raw.length - raw.trimStart().length;
+      out.push({ text: raw.trim(), start: base + start + lead });
+      start = i + 1;
+    }
+  }
+  return out;
+}
+
+/**
+ * Parses an equation into its species.
+ *
+ * @example
+ * parseEquation('H2 + O2 -> H2O').products[0].formula // 'H2O'
+ */
+export function parseEquation(input: string, options: ParseOptions = {}): Equation {
+  if (input.trim() === '') throw fail({ code: 'EMPTY_INPUT', message: 'the equation is empty' });
+  if (input.length > MAX_EQUATION_LENGTH) throw fail({ code: 'INPUT_TOO_LONG', message: `the equation is ${input.length.toLocaleString('en-US')} characters long; the limit is ${MAX_EQUATION_LENGTH.toLocaleString('en-US')}` });
+  const arrows = [...input.matchAll(ARROWS)];
+  if (arrows.length === 0) throw fail({ code: 'BAD_EQUATION', message: 'no arrow between the sides: write -> (or →, =) between reactants and products' }, input);
+  if (arrows.length > 1) {
+    const second = arrows[1].index!;
+    throw fail({ code: 'BAD_EQUATION', message: `more than one arrow (another '${arrows[1][0]}' at column ${columnOf(input, second)})`, column: columnOf(input, second), length: arrows[1][0].length }, input);
+  }
+  const a = arrows[0];
+  const left = input.slice(0, a.index);
+  const right = input.slice(a.index! + a[0].length);
+  const notes: Note[] = [];
+  const read = (side: string, base: number, which: Species['side']): Species[] => {
+    const parts = splitSide(side, base);
+    return parts.map(({ text, start }) => {
+      if (text === '') {
+        throw fail({ code: 'BAD_EQUATION', message: which === 'reactant' ? 'a reactant is missing (nothing before the arrow, or a stray +)' : 'a product is missing (nothing after the arrow, or a stray +)', column: columnOf(input, start) }, input);
+      }
+      let written: string | null = null;
+      let body = text;
+      let offset = start;
+      const m = COEFFICIENT.exec(text);
+      if (m) {
+        written = m[1];
+        body = text.slice(m[0].length);
+        offset = start + m[0].length;
+      }
+      if (ELECTRON.test(body) || body === 'e') {
+        return { text: body, formula: 'e-', atoms: new Map(), charge: -1, side: which, start: offset, written };
+      }
+      try {
+        const tree = parseFormula(body, options);
+        const atoms = flattenFormula(tree);
+        return { text: body, formula: hillFormula(atoms, tree.charge), atoms, charge: tree.charge, side: which, start: offset, written };
+      } catch (e) {
+        if (e instanceof PondusError) {
+          const shift = columnOf(input, offset) - 1;
+          throw new PondusError(e.issues.map((i) => ({ ...i, column: i.column !== undefined ? i.column + shift : columnOf(input, offset) })), input);
+        }
+        throw e;
+      }
+    });
+  };
+  const reactants = read(left, 0, 'reactant');
+  const products = read(right, a.index! + a[0].length, 'product');
+  const total = reactants.length + products.length;
+  if (total > MAX_SPECIES) throw fail({ code: 'BAD_EQUATION', message: `${total} species; pondus balances up to ${MAX_SPECIES}` }, input);
+  for (const r of reactants) {
+    const p = products.find((x) => x.formula === r.formula);
+    if (p) {
+      throw fail({ code: 'BAD_EQUATION', message: `${r.text} appears on both sides; cancel it, or write the two forms differently`, column: columnOf(input, p.start), length: p.text.length }, input);
+    }
+  }
+  if ([...reactants, ...products].some((s) => s.written !== null)) {
+    notes.push({ code: 'COEFFICIENTS_REPLACED', message: 'the coefficients written in the equation were set aside; the balanced ones are computed' });
+  }
+  return { input, reactants, products, notes };
+}

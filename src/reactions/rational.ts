@@ -1,0 +1,140 @@
+/**
+ * Exact rational numbers on BigInt, for balancing equations without floats.
+ */
+export class Rational {
+  readonly num: bigint;
+  readonly den: bigint;
+
+  private constructor(num: bigint, den: bigint) {
+    this.num = num;
+    this.den = den;
+  }
+
+  /**
+   * A normalised fraction num/den.
+   *
+   * @example
+   * Rational.of(2n, 4n).toString() // '1/2'
+   */
+  static of(num: bigint, den = 1n): Rational {
+    if (den === 0n) throw new RangeError('zero denominator');
+    if (den < 0n) {
+      num = -num;
+      den = -den;
+    }
+    const g = gcd(num < 0n ? -num : num, den);
+    return new Rational(g > 1n ? num / g : num, g > 1n ? den / g : den);
+  }
+
+  /**
+   * An exact decimal as a fraction ('0.95' → 19/20).
+   *
+   * @example
+   * Rational.fromDecimal('0.95').toString() // '19/20'
+   */
+  static fromDecimal(text: string): Rational {
+    const neg = text.startsWith('-');
+    const t = neg ? text.slice(1) : text;
+    const [int, frac = ''] = t.split('.');
+    const r = Rational.of(BigInt(int + frac || '0'), 10n ** BigInt(frac.length));
+    return neg ? r.neg() : r;
+  }
+
+  static readonly ZERO = new Rational(0n, 1n);
+  static readonly ONE = new Rational(1n, 1n);
+
+  isZero(): boolean {
+    return this.num === 0n;
+  }
+  sign(): number {
+    return this.num > 0n ? 1 : this.num < 0n ? -1 : 0;
+  }
+  neg(): Rational {
+    return new Rational(-this.num, this.den);
+  }
+  plus(o: Rational): Rational {
+    return Rational.of(this.num * o.den + o.num * this.den, this.den * o.den);
+  }
+  minus(o: Rational): Rational {
+    return this.plus(o.neg());
+  }
+  times(o: Rational): Rational {
+    return Rational.of(this.num * o.num, this.den * o.den);
+  }
+  div(o: Rational): Rational {
+    if (o.num === 0n) throw new RangeError('division by zero');
+    return Rational.of(this.num * o.den, this.den * o.num);
+  }
+  toString(): string {
+    return this.den === 1n ? String(this.num) : `${this.num}/${this.den}`;
+  }
+}
+
+/**
+ * Greatest common divisor of two non-negative BigInts.
+ *
+ * @example
+ * gcd(12n, 18n) // 6n
+ */
+export function gcd(a: bigint, b: bigint): bigint {
+  while (b !== 0n) [a, b] = [b, a % b];
+  return a;
+}
+
+/** Least common multiple of two positive BigInts. */
+export function lcm(a: bigint, b: bigint): bigint {
+  return (a / gcd(a, b)) * b;
+}
+
+/**
+ * A basis of the null space of a rational matrix (rows × columns), by reduction
+ * to reduced row echelon form. Each basis vector has one free column set to 1.
+ *
+ * @example
+ * nullSpace([[r(2), r(0), r(-2)], [r(0), r(2), r(-1)]]) // [[1, 1/2, 1]]
+ */
+export function nullSpace(matrix: Rational[][], columns: number): Rational[][] {
+  const m = matrix.map((row) => [...row]);
+  const pivots: number[] = [];
+  let r = 0;
+  for (let c = 0; c < columns && r < m.length; c++) {
+    let p = r;
+    while (p < m.length && m[p][c].isZero()) p++;
+    if (p === m.length) continue;
+    [m[r], m[p]] = [m[p], m[r]];
+    const inv = Rational.ONE.div(m[r][c]);
+    m[r] = m[r].map((x) => x.times(inv));
+    for (let i = 0; i < m.length; i++) {
+      if (i === r || m[i][c].isZero()) continue;
+      const f = m[i][c];
+      m[i] = m[i].map((x, j) => x.minus(f.times(m[r][j])));
+    }
+    pivots.push(c);
+    r++;
+  }
+  const free: number[] = [];
+  for (let c = 0; c < columns; c++) if (!pivots.includes(c)) free.push(c);
+  return free.map((f) => {
+    const v = new Array<Rational>(columns).fill(Rational.ZERO);
+    v[f] = Rational.ONE;
+    pivots.forEach((pc, i) => {
+      v[pc] = m[i][f].neg();
+    });
+    return v;
+  });
+}
+
+/**
+ * Scales a rational vector to the smallest whole numbers with the same ratios.
+ *
+ * @example
+ * smallestIntegers([Rational.of(1n, 2n), Rational.ONE]) // [1n, 2n]
+ */
+export function smallestIntegers(v: Rational[]): bigint[] {
+  let l = 1n;
+  for (const x of v) l = lcm(l, x.den);
+  const ints = v.map((x) => (x.num * l) / x.den);
+  let g = 0n;
+  for (const x of ints) g = gcd(g, x < 0n ? -x : x);
+  return g > 1n ? ints.map((x) => x / g) : ints;
+}

@@ -1,0 +1,61 @@
+/**
+ * How a quantity is reported: converted to a unit (its own, a requested one, or
+ * the base unit of its dimension), rounded once to its significant figures.
+ */
+import { Decimal } from '../exact/decimal.js';
+import { fail } from '../errors/pondus-error.js';
+import type { Quantity } from './quantity.js';
+import { displayMeasured, type RoundingMode } from './round.js';
+import { baseUnitText, sameDims, unitOf, type Unit } from './units.js';
+
+export interface QuantityDisplay {
+  /** The reported figure then the unit: '6.24 g'. */
+  text: string;
+  /** The reported figure alone: '6.24'. */
+  figure: string;
+  /** The unrounded value in the reported unit. */
+  value: Decimal;
+  /** The rounded value in the reported unit. */
+  rounded: Decimal;
+  sigFigs: number | null;
+  /** Unit symbol ('' for a pure number). */
+  unit: string;
+}
+
+/**
+ * The unit a quantity is reported in: the one asked for, else its own, else the base unit of its dimension.
+ *
+ * @example
+ * reportUnit(q, 'mL')?.symbol // 'mL'
+ */
+export function reportUnit(q: Quantity, wanted?: string | Unit | null): Unit | null {
+  if (wanted) {
+    const u = typeof wanted === 'string' ? unitOf(wanted) : wanted;
+    if (!sameDims(u.dims, q.dims)) throw fail({ code: 'INCOMPATIBLE_UNITS', message: `the result is ${baseUnitText(q.dims) || 'a pure number'}, not convertible to ${u.symbol}` });
+    return u;
+  }
+  if (q.unit && sameDims(q.unit.dims, q.dims)) return q.unit;
+  const base = baseUnitText(q.dims);
+  if (base === '') return null;
+  try {
+    return unitOf(base);
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * Reports a quantity in a unit, rounded once.
+ *
+ * @example
+ * displayQuantity(measure('250. mg'), 'g').text // '0.250 g'
+ */
+export function displayQuantity(q: Quantity, wanted?: string | Unit | null, rounding: RoundingMode = 'half-even'): QuantityDisplay {
+  const unit = reportUnit(q, wanted);
+  const exp10 = unit ? unit.exp10 : 0;
+  const value = q.value.div(new Decimal(10).pow(exp10));
+  const lsd = q.lsd === null ? null : q.lsd - exp10;
+  const d = displayMeasured({ value, lsd }, rounding);
+  const unitText = unit ? unit.symbol : baseUnitText(q.dims);
+  return { text: unitText ? `${d.text} ${unitText}` : d.text, figure: d.text, value, rounded: d.value, sigFigs: d.sigFigs, unit: unitText };
+}
