@@ -26,7 +26,7 @@ let builder: ExprBuilder | null = null;
 export function parseExpression(input: string): CalcTree {
   const pre = prescanExpression(input);
   if (pre) throw new PondusError([pre], input);
-  const lexed = calcLexer.tokenize(input);
+  const lexed = calcLexer().tokenize(input);
   if (lexed.errors.length > 0) {
     const o = lexed.errors[0].offset;
     const word = /^[A-Za-zµμ/%]+/.exec(input.slice(o));

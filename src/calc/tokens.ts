@@ -39,5 +39,10 @@ export const RParen = createToken({ name: 'RParen', pattern: /\)/ });
 
 export const calcTokens: TokenType[] = [WhiteSpace, FormulaMass, NumberLiteral, PlusMinus, To, UnitToken, Plus, Minus, Times, Divide, Caret, LParen, RParen];
 
-/** The calculator's lexer. */
-export const calcLexer = new Lexer(calcTokens, { positionTracking: 'onlyOffset', skipValidations: true, safeMode: true });
+let lexer: Lexer | null = null;
+
+/** The calculator's lexer, built on first use. */
+export function calcLexer(): Lexer {
+  lexer ??= new Lexer(calcTokens, { positionTracking: 'onlyOffset', skipValidations: true, safeMode: true });
+  return lexer;
+}

@@ -4,7 +4,6 @@
 import type { CstNode, IToken } from 'chevrotain';
 import { fail } from '../errors/pondus-error.js';
 import { columnOf } from '../formula-parser/prescan.js';
-import { calcGrammar } from './grammar.js';
 import type { ExprNode } from './tree.js';
 
 type Ctx = Record<string, (CstNode | IToken)[] | undefined>;
@@ -15,14 +14,18 @@ const end = (t: IToken) => t.startOffset + t.image.length;
 /** Largest integer exponent accepted after ^. */
 export const MAX_POWER = 100;
 
-const BaseVisitor = calcGrammar().getBaseCstVisitorConstructor();
-
-export class ExprBuilder extends BaseVisitor {
+/**
+ * A CST visitor: each grammar rule has a method of the same name that receives
+ * the rule's children. (It dispatches on the node name itself rather than
+ * extending Chevrotain's generated base class, so that the grammar is built only
+ * when a formula actually needs it.)
+ */
+export class ExprBuilder {
   private text = '';
 
-  constructor() {
-    super();
-    this.validateVisitor();
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any
+  private visit(node: CstNode): any {
+    return (this as unknown as Record<string, (ctx: Ctx) => unknown>)[node.name](node.children as Ctx);
   }
 
   build(cst: CstNode, text: string): { expr: ExprNode; target: { unit: string; start: number } | null } {

@@ -48,7 +48,7 @@ export function parseFormula(input: string, options: ParseOptions = {}): Formula
 export function parseWithGrammar(input: string, options: ParseOptions = {}): FormulaTree {  const pre = prescan(input, options.maxLength ?? MAX_FORMULA_LENGTH);
   if (pre) throw new PondusError([pre], input);
 
-  const lexed = formulaLexer.tokenize(input, options.abbreviations ? ABBREVIATION_MODE : PLAIN_MODE);
+  const lexed = formulaLexer().tokenize(input, options.abbreviations ? ABBREVIATION_MODE : PLAIN_MODE);
   if (lexed.errors.length > 0) {
     const e = lexed.errors[0];
     throw new PondusError([unexpectedCharacter(input, e.offset)], input);

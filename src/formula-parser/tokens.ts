@@ -92,8 +92,13 @@ export const allTokens: TokenType[] = [
 export const PLAIN_MODE = 'plain';
 export const ABBREVIATION_MODE = 'abbreviations';
 
-/** The formula lexer. Positions are tracked as offsets only, which is all the error messages need. */
-export const formulaLexer = new Lexer(
-  { modes: { [PLAIN_MODE]: allTokens.slice(1), [ABBREVIATION_MODE]: allTokens }, defaultMode: PLAIN_MODE },
-  { positionTracking: 'onlyOffset', skipValidations: true, safeMode: true },
-);
+let lexer: Lexer | null = null;
+
+/** The formula lexer, built on first use. Positions are tracked as offsets only, which is all the error messages need. */
+export function formulaLexer(): Lexer {
+  lexer ??= new Lexer(
+    { modes: { [PLAIN_MODE]: allTokens.slice(1), [ABBREVIATION_MODE]: allTokens }, defaultMode: PLAIN_MODE },
+    { positionTracking: 'onlyOffset', skipValidations: true, safeMode: true },
+  );
+  return lexer;
+}

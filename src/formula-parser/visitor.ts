@@ -6,7 +6,6 @@ import type { CstNode, IToken } from 'chevrotain';
 import type { Issue, Note } from '../errors/issue.js';
 import { isElementSymbol } from '../elements/element-table.js';
 import { getNuclide } from '../elements/nuclides.js';
-import { formulaGrammar } from './grammar.js';
 import { caseTrapNotes, unknownSymbolHint } from './hints.js';
 import { columnOf } from './prescan.js';
 import { end as endOf, type AtomNode, type ComponentNode, type CountNode, type GroupNode, type PartNode, type Span } from './tree.js';
@@ -40,18 +39,22 @@ const tok = (ctx: Ctx, name: string): IToken | undefined => ctx[name]?.[0] as IT
 const node = (ctx: Ctx, name: string): CstNode | undefined => ctx[name]?.[0] as CstNode | undefined;
 const nodes = (ctx: Ctx, name: string): CstNode[] => (ctx[name] ?? []) as CstNode[];
 
-const BaseVisitor = formulaGrammar().getBaseCstVisitorConstructor();
-
 /** Builds the typed tree; one instance is reused, with per-call state reset by {@link TreeBuilder.build}. */
-export class TreeBuilder extends BaseVisitor {
+/**
+ * A CST visitor: each grammar rule has a method of the same name that receives
+ * the rule's children. (It dispatches on the node name itself rather than
+ * extending Chevrotain's generated base class, so that the grammar is built only
+ * when a formula actually needs it.)
+ */
+export class TreeBuilder {
   private text = '';
   private issues: Issue[] = [];
   private notes: Note[] = [];
   private expand: (name: string, span: Span) => ComponentNode[] = () => [];
 
-  constructor() {
-    super();
-    this.validateVisitor();
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any
+  private visit(node: CstNode): any {
+    return (this as unknown as Record<string, (ctx: Ctx) => unknown>)[node.name](node.children as Ctx);
   }
 
   /** Builds the tree for one parsed formula. Issues found are returned, not thrown. */
