@@ -89,7 +89,18 @@ for (let i = 0; i < reps; i++) {
 const peakSmall = (await timeBatch([bin, 'mass', '--json', '-'], small)).peakMB;
 const batchRatio = median(batch) / median(bare);
 
+// --- candidate formulas up to 1,000 Da (library, in this process) -----------------
+const { candidateFormulas, formulaMass } = await import(`${root}dist/lib/index.js`);
+const candidateRuns = [];
+for (const formula of ['C43H66N12O12S2', 'C50H73N15O11', 'C45H57ClF3N7O9S']) {
+  const mass = formulaMass(formula).monoisotopicMass.toFixed(5);
+  const t0 = process.hrtime.bigint();
+  const r = candidateFormulas({ mass, ppm: 5, limit: 100000 });
+  candidateRuns.push({ formula, ms: ms(t0), n: r.candidates.length });
+}
+
 const f = (x) => x.toFixed(1);
 console.log(`start-up  node -e 0: ${f(median(node0))} ms   pondus mass H2O: ${f(median(mass))} ms   ratio ${startRatio.toFixed(2)}× (goal ≤ 1.5×)`);
 console.log(`batch     bare loop: ${f(median(bare))} ms   pondus mass --json: ${f(median(batch))} ms for 300,000 formulas   ratio ${batchRatio.toFixed(2)}× (goal ≤ 3×)`);
+console.log(`candidates  every CHNOPS+halogen formula within 5 ppm near 1,000 Da (default ranges): ${candidateRuns.map((c) => `${c.formula} ${f(c.ms)} ms (${c.n} fits)`).join('; ')} (goal < 1000 ms each)`);
 console.log(`memory    peak ${peakSmall ? f(peakSmall) : 'n/a'} MB for 30,000 lines, ${peakBig ? f(peakBig) : 'n/a'} MB for 300,000 lines`);

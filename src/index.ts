@@ -83,3 +83,10 @@ export { conversionFactor, type ConversionFactor } from './preparation/conversio
 export { gravimetric, safeGravimetric, type GravimetricResult, type GravimetricOptions } from './preparation/gravimetric.js';
 export { saltFactor, safeSaltFactor, type SaltFactorResult } from './preparation/salt-factor.js';
 export { BENCH_CAUTION, DOSE_CAUTION } from './preparation/caution.js';
+
+// formulas from measurements
+export { readMeasurements, type Measurements, type ElementMeasurement } from './empirical/measurements.js';
+export { searchFormula, type FormulaFit, type SearchResult, MAX_SCALE } from './empirical/formula-search.js';
+export { empirical, safeEmpirical, empiricalJson, type EmpiricalResult, type EmpiricalOptions } from './empirical/empirical-formula.js';
+export { combustion, safeCombustion, PRODUCTS, type CombustionResult, type CombustionOptions } from './empirical/combustion.js';
+export { candidateFormulas, safeCandidateFormulas, rdbe, readRanges, DEFAULT_RANGES, type Candidate, type CandidateResult, type CandidateOptions } from './empirical/candidates.js';

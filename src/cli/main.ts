@@ -12,6 +12,7 @@ import { registerAnalysis } from './commands/analysis.js';
 import { registerBalance } from './commands/balance.js';
 import { registerCalc } from './commands/calc.js';
 import { registerConversions } from './commands/conversions.js';
+import { registerEmpirical } from './commands/empirical.js';
 import { registerPrepare } from './commands/prepare.js';
 import { registerReact } from './commands/react.js';
 import { registerComposition } from './commands/composition.js';
@@ -84,6 +85,7 @@ export async function main(args: string[], io: CliIo): Promise<number> {
   registerComposition(program, run);
   registerCalc(program, run);
   registerAnalysis(program, run, io.stdin);
+  registerEmpirical(program, run);
   registerBalance(program, run);
   registerReact(program, run);
   registerPrepare(program, run);

@@ -50,3 +50,26 @@ describe('pondus react, prepare, dilute, gravimetric, basis, salt', () => {
     expect(s.stdout).toContain('dosing decisions follow licensed practice');
   });
 });
+
+describe('pondus empirical, combustion, candidates', () => {
+  it('writes the contract keys empirical and molecular', () => {
+    const [j] = jsonLines(pondus(['empirical', '--json', 'C=40.00 H=6.71 O=53.29', '--molar-mass', '180.16']).stdout);
+    expect(j).toMatchObject({ empirical: 'CH2O', molecular: 'C6H12O6' });
+  });
+
+  it('reads one measurement set per line, JSON objects too, with errors in place', () => {
+    const r = pondus(['empirical', '--json', '-'], 'C=40.00 H=6.71 O=53.29\n{"Fe": "34.97 g", "O": "15.03 g"}\nC=130 H=5\n');
+    expect(r.status).toBe(1);
+    expect(jsonLines(r.stdout).map((o) => o.empirical ?? o.error.code)).toEqual(['CH2O', 'Fe2O3', 'BAD_MEASUREMENT']);
+  });
+
+  it('works out a combustion analysis', () => {
+    const r = pondus(['combustion', '1.000 g', '--co2', '1.499 g', '--h2o', '0.4091 g']);
+    expect(r.stdout).toContain('empirical formula: C3H4O3');
+  });
+
+  it('lists candidate formulas for an accurate mass', () => {
+    const [j] = jsonLines(pondus(['candidates', '--json', '180.06339', '--ppm', '3']).stdout);
+    expect(j.candidates[0]).toMatchObject({ formula: 'C6H12O6', rdbe: 1 });
+  });
+});

@@ -6,6 +6,7 @@ import type { Presenter } from '../output/presenter.js';
 import { analysisPresenter } from './analysis.js';
 import { balancePresenter } from './balance.js';
 import { basisPresenter, dilutePresenter, gravimetricPresenter, saltPresenter } from './conversions.js';
+import { candidatesPresenter, combustionPresenter, empiricalPresenter } from './empirical.js';
 import { preparePresenter } from './prepare.js';
 import { reactPresenter } from './react.js';
 import { calcPresenter } from './calc.js';
@@ -27,4 +28,7 @@ export const PRESENTERS: Readonly<Record<string, Factory>> = Object.freeze({
   gravimetric: gravimetricPresenter,
   basis: basisPresenter,
   salt: saltPresenter,
+  empirical: empiricalPresenter,
+  combustion: combustionPresenter,
+  candidates: candidatesPresenter,
 });

@@ -1,0 +1,89 @@
+/**
+ * Combustion analysis: from the mass of a sample and the masses of CO2 and H2O
+ * collected (and optionally N2, SO2, or a silver halide precipitate), the mass
+ * and percent of each element — oxygen by difference — with significant
+ * figures, and the empirical formula.
+ */
+import type { Note } from '../errors/issue.js';
+import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { Decimal } from '../exact/decimal.js';
+import { MASS, measureAs } from '../calc/measure.js';
+import { conversionFactor } from '../preparation/conversion-factor.js';
+import { exact } from '../sigfig/measured.js';
+import { add, divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
+import { searchFormula, type FormulaFit } from './formula-search.js';
+import type { Measurements } from './measurements.js';
+
+/** What was collected, and the element it carries. */
+export const PRODUCTS: Readonly<Record<string, { formula: string; element: string }>> = Object.freeze({
+  co2: { formula: 'CO2', element: 'C' },
+  h2o: { formula: 'H2O', element: 'H' },
+  n2: { formula: 'N2', element: 'N' },
+  so2: { formula: 'SO2', element: 'S' },
+  agcl: { formula: 'AgCl', element: 'Cl' },
+  agbr: { formula: 'AgBr', element: 'Br' },
+  agi: { formula: 'AgI', element: 'I' },
+});
+
+export interface CombustionOptions {
+  /** Sample mass: '0.1000 g'. */
+  sample: string;
+  /** Masses collected, by product: { co2: '0.2000 g', h2o: '0.0819 g' }. */
+  collected: Partial<Record<keyof typeof PRODUCTS, string>>;
+}
+
+export interface CombustionResult {
+  sample: Quantity;
+  /** Mass and percent of each element, in the order C, H, N, S, halogens, O. */
+  elements: { symbol: string; mass: Quantity; percent: Quantity; byDifference: boolean }[];
+  empirical: string;
+  fit: FormulaFit;
+  alternatives: FormulaFit[];
+  notes: Note[];
+}
+
+/**
+ * Element masses, percents and the empirical formula from a combustion analysis.
+ *
+ * @example
+ * combustion({ sample: '1.000 g', collected: { co2: '1.499 g', h2o: '0.4091 g' } }).empirical // 'C3H4O3'
+ */
+export function combustion(options: CombustionOptions): CombustionResult {
+  const notes: Note[] = [];
+  const sample = measureAs(options.sample, [MASS], 'the sample mass', notes);
+  if (sample.value.lte(0)) throw fail({ code: 'BAD_MEASUREMENT', message: 'the sample mass must be positive' });
+  const hundred = quantity(exact(100), null);
+  const elements: CombustionResult['elements'] = [];
+  for (const [key, text] of Object.entries(options.collected)) {
+    if (text === undefined) continue;
+    const p = PRODUCTS[key];
+    const m = measureAs(text, [MASS], `the mass of ${p.formula}`, notes);
+    if (m.value.isNegative()) throw fail({ code: 'BAD_MEASUREMENT', message: `the mass of ${p.formula} cannot be negative` });
+    const f = conversionFactor(p.element, p.formula);
+    const mass = multiply(m, quantity(f.reported, null));
+    elements.push({ symbol: p.element, mass, percent: multiply(divide(mass, sample), hundred), byDifference: false });
+  }
+  if (elements.length === 0) throw fail({ code: 'BAD_MEASUREMENT', message: 'give the masses collected: at least CO2 (and H2O, N2, SO2, AgCl, …)' });
+  const found = elements.slice(1).reduce((acc, e) => add(acc, e.mass), elements[0].mass);
+  const rest = subtract(sample, found);
+  if (rest.value.isNegative() && rest.value.abs().gt(new Decimal(10).pow(rest.lsd ?? 0))) {
+    throw fail({ code: 'BAD_MEASUREMENT', message: `the elements found weigh more than the sample (${found.value.toFixed(5)} g > ${sample.value.toFixed()} g): check the masses` });
+  }
+  if (rest.value.gt(new Decimal(10).pow(rest.lsd ?? 0))) {
+    elements.push({ symbol: 'O', mass: rest, percent: multiply(divide(rest, sample), hundred), byDifference: true });
+    notes.push({ code: 'BY_DIFFERENCE', message: `oxygen by difference: ${rest.value.toFixed(6)} g (the sample less the elements found)` });
+  }
+  const measurements: Measurements = {
+    kind: 'mass',
+    elements: elements.map((e) => ({ symbol: e.symbol, value: e.mass.value, halfUnit: new Decimal(10).pow(e.mass.lsd ?? -12).div(2), byDifference: e.byDifference })),
+    sample: sample.value,
+    sampleHalfUnit: new Decimal(10).pow(sample.lsd ?? -12).div(2),
+  };
+  const s = searchFormula(measurements);
+  return { sample, elements, empirical: s.best.formula, fit: s.best, alternatives: s.alternatives, notes };
+}
+
+/** Non-throwing {@link combustion}. */
+export function safeCombustion(options: CombustionOptions): SafeResult<CombustionResult> {
+  return toSafe(() => combustion(options));
+}

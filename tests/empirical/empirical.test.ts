@@ -1,0 +1,157 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { candidateFormulas, rdbe } from '../../src/empirical/candidates.js';
+import { combustion } from '../../src/empirical/combustion.js';
+import { empirical } from '../../src/empirical/empirical-formula.js';
+import { composition } from '../../src/composition/element-shares.js';
+import { formulaMass } from '../../src/mass/formula-mass.js';
+import { PondusError } from '../../src/errors/pondus-error.js';
+import { displayQuantity } from '../../src/sigfig/display-quantity.js';
+
+describe('empirical formula from measurements', () => {
+  it('from percents: C 40.00, H 6.71, O 53.29 is CH2O; with M = 180.16 g/mol, C6H12O6', () => {
+    // source: OpenStax Chemistry 2e §3.4 (empirical and molecular formula of glucose), from memory
+    const r = empirical('C=40.00 H=6.71 O=53.29', { molarMass: '180.16' });
+    expect(r.empirical).toBe('CH2O');
+    expect(r.molecular).toBe('C6H12O6');
+  });
+
+  it('from element masses: 34.97 g Fe and 15.03 g O is Fe2O3', () => {
+    // source: OpenStax Chemistry 2e §3.4 (hematite), from memory
+    expect(empirical('Fe=34.97 g O=15.03 g').empirical).toBe('Fe2O3');
+  });
+
+  it('with one element by difference, to 100 % or to the sample mass', () => {
+    expect(empirical('C=40.00 H=6.71 O=rest').empirical).toBe('CH2O');
+    // source: OpenStax Chemistry 2e §3.2, Example 3.9 masses (7.34 g C, 1.85 g H, 2.85 g N in 12.04 g), from memory
+    expect(empirical('C=7.34 g H=1.85 g N=rest sample=12.04 g').empirical).toBe('C3H9N');
+  });
+
+  it('recovers large formulas and hydrates from percents rounded to 0.01 %', () => {
+    for (const f of ['C24H30N2O4S', 'C27H35FN4O5', 'C21H22ClN3O2', 'CuSO4·5H2O', 'Na2B4O7·10H2O', 'C29H31N7O', 'C22H24ClFN4O3']) {
+      const c = composition(f);
+      const r = empirical(c.elements.map((e) => `${e.symbol}=${e.massPercent.toFixed(2)}`).join(' '));
+      expect(r.empirical).toBe(c.formula);
+    }
+  });
+
+  it('says when the molar mass is not a near-whole multiple, and handles a range', () => {
+    expect(empirical('C=40.00 H=6.71 O=53.29', { molarMass: '100' }).notes.map((n) => n.code)).toEqual(['NOT_A_MULTIPLE']);
+    expect(empirical('C=40.00 H=6.71 O=53.29', { molarMass: '170-190' }).molecular).toBe('C6H12O6');
+  });
+
+  it('refuses what cannot be a formula', () => {
+    const code = (s: string) => {
+      try {
+        empirical(s);
+      } catch (e) {
+        return (e as PondusError).first.code;
+      }
+      return null;
+    };
+    expect(code('C=70.00 H=30.00 O=30.00')).toBe('BAD_MEASUREMENT'); // 130 %
+    expect(code('C=-5 H=105')).toBe('BAD_MEASUREMENT');
+    expect(code('Xq=50 H=50')).toBe('UNKNOWN_ELEMENT');
+    expect(code('C=rest H=rest')).toBe('BAD_MEASUREMENT');
+    expect(code('C=7.34 g H=rest')).toBe('BAD_MEASUREMENT'); // no sample mass
+    expect(code('C=99.99 H=0.01')).toBe('NO_FORMULA_FITS'); // would need hundreds of C per H
+  });
+
+  it('percents computed by pondus and rounded to 0.01 % lead back to the empirical formula', () => {
+    const gcd = (a: number, b: number): number => (b ? gcd(b, a % b) : a);
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 1, max: 30 }),
+        fc.integer({ min: 0, max: 4 }),
+        fc.integer({ min: 0, max: 6 }),
+        fc.integer({ min: 0, max: 1 }),
+        fc.integer({ min: 0, max: 2 }),
+        fc.nat(),
+        (c, n, o, s, cl, seed) => {
+          const hMax = 2 * c + n + 2 - cl;
+          const h = Math.max(1, hMax - 2 * (seed % Math.max(1, Math.floor(hMax / 2))));
+          const counts: [string, number][] = [['C', c], ['H', h], ['N', n], ['O', o], ['S', s], ['Cl', cl]].filter(([, k]) => (k as number) > 0) as [string, number][];
+          const g = counts.reduce((a, [, k]) => gcd(a, k), 0);
+          const reduced = counts.map(([e, k]) => `${e}${k / g}`).join('');
+          const expected = formulaMass(reduced).formula;
+          const comp = composition(counts.map(([e, k]) => `${e}${k}`).join(''));
+          const r = empirical(comp.elements.map((e) => `${e.symbol}=${e.massPercent.toFixed(2)}`).join(' '));
+          expect(r.empirical).toBe(expected);
+        },
+      ),
+      { numRuns: 150 },
+    );
+  });
+});
+
+describe('combustion analysis', () => {
+  it('ascorbic acid: CO2 and H2O from a 1.000 g sample give C3H4O3', () => {
+    // masses computed by hand for C6H8O6 (1.000 g → 1.499 g CO2, 0.4091 g H2O); the empirical formula of
+    // ascorbic acid, C3H4O3: OpenStax Chemistry 2e §3.4, from memory
+    const r = combustion({ sample: '1.000 g', collected: { co2: '1.499 g', h2o: '0.4091 g' } });
+    expect(r.empirical).toBe('C3H4O3');
+    expect(r.elements.map((e) => [e.symbol, displayQuantity(e.percent).figure, e.byDifference])).toEqual([
+      ['C', '40.91', false],
+      ['H', '4.578', false],
+      ['O', '54.5', true],
+    ]);
+  });
+
+  it('nitrogen, sulfur and chlorine from their products', () => {
+    // sulfanilamide C6H8N2O2S, 0.2000 g: masses computed by hand (common practice)
+    const m = formulaMass('C6H8N2O2S').molarMass.toNumber();
+    const n = 0.2 / m;
+    const r = combustion({ sample: '0.2000 g', collected: { co2: `${(n * 6 * 44.009).toFixed(4)} g`, h2o: `${(n * 4 * 18.015).toFixed(4)} g`, n2: `${(n * 28.014).toFixed(4)} g`, so2: `${(n * 64.058).toFixed(4)} g` } });
+    expect(r.empirical).toBe('C6H8N2O2S');
+  });
+
+  it('refuses element masses over the sample mass', () => {
+    expect(() => combustion({ sample: '0.1000 g', collected: { co2: '1.000 g' } })).toThrow(/more than the sample/);
+  });
+});
+
+describe('candidate formulas', () => {
+  it.each([
+    // source: IUPAC Gold Book, ring-plus-double-bond equivalents (degree of unsaturation); values common practice
+    ['C6H6', 4],
+    ['C6H12O6', 1],
+    ['C5H5N', 4],
+    ['CHCl3', 0],
+    ['C2H4', 1],
+    ['C60', 61],
+  ])('RDBE of %s is %i', (f, v) => {
+    const counts = new Map([...formulaMass(f).atoms].map(([k, n]) => [k, Number(n)]));
+    expect(rdbe(counts)).toBe(v);
+  });
+
+  it('finds glucose, caffeine and a drug-sized molecule by accurate mass', () => {
+    for (const f of ['C6H12O6', 'C8H10N4O2', 'C20H25N3O']) {
+      const mass = formulaMass(f).monoisotopicMass.toFixed(5);
+      const r = candidateFormulas({ mass, ppm: 3 });
+      expect(r.candidates[0].formula).toBe(formulaMass(f).formula);
+    }
+  });
+
+  it('narrows the candidates with found percents', () => {
+    const mass = formulaMass('C20H25N3O').monoisotopicMass.toFixed(3);
+    const wide = candidateFormulas({ mass, ppm: 10 }).candidates.length;
+    const r = candidateFormulas({ mass, ppm: 10, found: 'C=74.27,H=7.79,N=12.99' });
+    expect(r.candidates.map((c) => c.formula)).toEqual(['C20H25N3O']);
+    expect(wide).toBeGreaterThan(1);
+  });
+
+  it('filters out implausible formulas (odd-electron, negative RDBE, extreme ratios)', () => {
+    const r = candidateFormulas({ mass: '100.0', ppm: 1000, elements: 'C0-10 H0-30 N0-3 O0-4' });
+    for (const c of r.candidates) {
+      expect(c.rdbe).toBeGreaterThanOrEqual(0);
+      expect(Number.isInteger(c.rdbe)).toBe(true);
+      const h = c.counts.get('H') ?? 0;
+      const cc = c.counts.get('C') ?? 0;
+      expect(h / cc).toBeLessThanOrEqual(3.1);
+    }
+  });
+
+  it('needs a mass window', () => {
+    expect(() => candidateFormulas({ found: 'C=40.00' })).toThrow(/mass window/);
+  });
+});
