@@ -6,22 +6,19 @@ import type { Writable } from 'node:stream';
  * out in blocks of about 64 kB, waiting for the stream to drain when it asks.
  */
 export class Sink {
-  private parts: string[] = [];
-  private size = 0;
+  private text = '';
 
   constructor(private readonly stream: Writable) {}
 
   write(text: string): void {
-    this.parts.push(text);
-    this.size += text.length;
+    this.text += text;
   }
 
   /** Flushes when enough has accumulated (or always, with force). */
   async flush(force = false): Promise<void> {
-    if (this.size === 0 || (!force && this.size < 65536)) return;
-    const text = this.parts.join('');
-    this.parts = [];
-    this.size = 0;
+    if (this.text.length === 0 || (!force && this.text.length < 65536)) return;
+    const text = this.text;
+    this.text = '';
     if (!this.stream.write(text)) await once(this.stream, 'drain');
   }
 }
