@@ -1,9 +1,9 @@
 import fc from 'fast-check';
+import { errorCode } from '../support/error-code.js';
 import { describe, expect, it } from 'vitest';
 import { analysis } from '../../src/analysis/check.js';
 import { readSheet } from '../../src/analysis/lab-sheet.js';
 import { composition } from '../../src/composition/element-shares.js';
-import { PondusError } from '../../src/errors/pondus-error.js';
 
 const calcd = (f: string, found: string) => Object.fromEntries([...analysis(f, found).calculated].map(([k, v]) => [k, v.toFixed(2)]));
 
@@ -50,14 +50,7 @@ describe('calculated against found', () => {
   });
 
   it('rejects bad input with a clear message', () => {
-    const code = (f: () => unknown) => {
-      try {
-        f();
-      } catch (e) {
-        return (e as PondusError).first.code;
-      }
-      return null;
-    };
+    const code = errorCode;
     expect(code(() => analysis('C6H6', 'C=120.0'))).toBe('BAD_MEASUREMENT');
     expect(code(() => analysis('C6H6', 'C=60,H=50'))).toBe('BAD_MEASUREMENT');
     expect(code(() => analysis('C6H6', 'C=92.26,N=1.00'))).toBe('BAD_MEASUREMENT');

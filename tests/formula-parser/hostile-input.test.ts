@@ -1,16 +1,8 @@
+import { errorCode } from '../support/error-code.js';
 import { describe, expect, it } from 'vitest';
-import { PondusError } from '../../src/errors/pondus-error.js';
 import { formulaMass } from '../../src/mass/formula-mass.js';
 
-function code(input: string): string | null {
-  try {
-    formulaMass(input);
-    return null;
-  } catch (e) {
-    expect(e).toBeInstanceOf(PondusError);
-    return (e as PondusError).first.code;
-  }
-}
+const code = (input: string) => errorCode(() => formulaMass(input));
 
 describe('hostile input gets a clear error, never a crash or a hang', () => {
   it('20,000-deep nesting', () => {

@@ -1,4 +1,5 @@
 import fc from 'fast-check';
+import { errorCode } from '../support/error-code.js';
 import { describe, expect, it } from 'vitest';
 import { balance } from '../../src/reactions/balance.js';
 import { PondusError } from '../../src/errors/pondus-error.js';
@@ -36,14 +37,7 @@ describe('balancing', () => {
     expect(balance('Na++Cl-->NaCl').coefficients).toEqual([1n, 1n, 1n]);
   });
 
-  const code = (e: string) => {
-    try {
-      balance(e);
-      return null;
-    } catch (x) {
-      return (x as PondusError).first.code;
-    }
-  };
+  const code = (e: string) => errorCode(() => balance(e));
 
   it('says when there is no balance, and why', () => {
     expect(code('H2 -> O2')).toBe('NO_BALANCE');

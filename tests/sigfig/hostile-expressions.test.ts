@@ -1,16 +1,8 @@
+import { errorCode } from '../support/error-code.js';
 import { describe, expect, it } from 'vitest';
 import { calc } from '../../src/calc/calc.js';
-import { PondusError } from '../../src/errors/pondus-error.js';
 
-const code = (e: string) => {
-  try {
-    calc(e);
-    return null;
-  } catch (x) {
-    expect(x).toBeInstanceOf(PondusError);
-    return (x as PondusError).first.code;
-  }
-};
+const code = (e: string) => errorCode(() => calc(e));
 
 describe('hostile expressions get clear errors', () => {
   it('division by zero', () => {
