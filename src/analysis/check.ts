@@ -14,6 +14,7 @@ import type { Note } from '../errors/issue.js';
 import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
 import { hillOrder } from '../formula/hill.js';
 import { readFound } from './found-values.js';
+import { readNumber } from '../sigfig/read-number.js';
 import { solventByName } from './solvents.js';
 import { continuousAmount, searchSolvates, type MassVector } from './solvate-fit.js';
 
@@ -77,7 +78,7 @@ export interface AnalysisResult {
  */
 export function analysis(formula: string, foundText: string, options: AnalysisOptions = {}): AnalysisResult {
   const found = readFound(foundText);
-  const tolerance = new Decimal(options.tolerance ?? '0.4');
+  const tolerance = options.tolerance instanceof Decimal ? options.tolerance : readNumber(String(options.tolerance ?? '0.4')).value;
   if (tolerance.isNegative() || tolerance.gt(100)) throw fail({ code: 'BAD_OPTION', message: `tolerance ${tolerance.toFixed()} is out of range` });
   const base = formulaMass(formula, options);
   if (base.charge !== 0) throw fail({ code: 'BAD_MEASUREMENT', message: 'elemental analysis is of a neutral compound; give the whole salt, e.g. C12H14N2^2+ with its counter-ions' }, formula);

@@ -12,11 +12,11 @@
  * (H/C 0.2–3.1, N/C ≤ 1.3, O/C ≤ 1.2, P/C ≤ 0.3, S/C ≤ 0.8, F/C ≤ 1.5,
  * Cl/C ≤ 0.8, Br/C ≤ 0.8; values from memory of the paper's table).
  */
-import { Decimal } from '../exact/decimal.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { getAtomData } from '../elements/atom-data.js';
 import { hillFormula } from '../formula/hill.js';
 import { readFound } from '../analysis/found-values.js';
+import { readNumber } from '../sigfig/read-number.js';
 
 export interface CandidateOptions {
   /** Neutral monoisotopic mass, u. */
@@ -117,8 +117,8 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
   let target: number | null = null;
   let massOf: (s: string) => number = mono;
   if (options.mass !== undefined) {
-    const m = new Decimal(options.mass);
-    if (!m.isFinite() || m.lte(0) || m.gt(5000)) throw fail({ code: 'BAD_OPTION', message: 'the accurate mass must be between 0 and 5000 u' });
+    const m = readNumber(options.mass).value;
+    if (m.lte(0) || m.gt(5000)) throw fail({ code: 'BAD_OPTION', message: 'the accurate mass must be between 0 and 5000 u' });
     target = m.toNumber();
     lo = target * (1 - ppm * 1e-6);
     hi = target * (1 + ppm * 1e-6);
