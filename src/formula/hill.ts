@@ -4,16 +4,19 @@
  * all elements alphabetically. Nuclides follow their element, lightest first,
  * and D and T count as hydrogen.
  */
-import { getAtomData } from '../elements/atom-data.js';
+import { getAtomData, type AtomData } from '../elements/atom-data.js';
 import { ELEMENTS } from '../elements/element-table.js';
 import { amountText, type Amount } from './amount.js';
 import type { AtomCounts } from './flatten.js';
 
-interface Keyed {
+/** An atom key with what ordering and printing it need. */
+export interface HillEntry {
   key: string;
   symbol: string;
   massNumber: number;
   label: string;
+  /** The atom's mass data (undefined only for keys no element has). */
+  atom: AtomData | undefined;
   /** Sort rank without carbon: alphabetical by symbol, then mass number (natural composition first). */
   plain: number;
   /** Sort rank with carbon present: C first, then H, then as `plain`. */
@@ -26,9 +29,9 @@ const SYMBOL_RANK = new Map(
     .map((s, i) => [s, i] as const),
 );
 
-const described = new Map<string, Keyed>();
+const described = new Map<string, HillEntry>();
 
-function describe(key: string): Keyed {
+function describe(key: string): HillEntry {
   const hit = described.get(key);
   if (hit) return hit;
   const m = /^([0-9]*)([A-Za-z]+)$/.exec(key)!;
@@ -37,7 +40,7 @@ function describe(key: string): Keyed {
   const data = getAtomData(symbol, m[1] ? massNumber : null);
   const plain = (SYMBOL_RANK.get(symbol) ?? 999) * 1000 + massNumber;
   const organic = symbol === 'C' ? massNumber - 2000 : symbol === 'H' ? massNumber - 1000 : plain;
-  const k: Keyed = { key, symbol, massNumber, label: data ? data.label : key, plain, organic };
+  const k: HillEntry = { key, symbol, massNumber, label: data ? data.label : key, atom: data, plain, organic };
   described.set(key, k);
   return k;
 }
@@ -49,7 +52,20 @@ function describe(key: string): Keyed {
  * hillOrder(new Map([['O', 1], ['H', 2]]).keys()) // ['H', 'O']
  */
 export function hillOrder(counts: Iterable<string>): string[] {
-  const items: Keyed[] = [];
+  const items = hillEntries(counts);
+  const out = new Array<string>(items.length);
+  for (let i = 0; i < items.length; i++) out[i] = items[i].key;
+  return out;
+}
+
+/**
+ * The atom keys of a count map in Hill order, with their labels and mass data.
+ *
+ * @example
+ * hillEntries(['O', 'H']).map((e) => e.label) // ['H', 'O']
+ */
+export function hillEntries(counts: Iterable<string>): HillEntry[] {
+  const items: HillEntry[] = [];
   let hasCarbon = false;
   for (const key of counts) {
     const k = describe(key);
@@ -67,9 +83,7 @@ export function hillOrder(counts: Iterable<string>): string[] {
     }
     items[j + 1] = it;
   }
-  const out = new Array<string>(items.length);
-  for (let i = 0; i < items.length; i++) out[i] = items[i].key;
-  return out;
+  return items;
 }
 
 /**
@@ -91,11 +105,25 @@ export function chargeText(charge: number): string {
  * hillFormula(flattenFormula(parseFormula('CuSO4·5H2O')), 0) // 'H10CuO9S'
  */
 export function hillFormula(counts: AtomCounts, charge = 0, order: readonly string[] = hillOrder(counts.keys())): string {
+  return formatFormula(
+    order.map((key) => describe(key).label),
+    order.map((key) => counts.get(key)!),
+    charge,
+  );
+}
+
+/**
+ * Writes labels and counts already in order as a formula: 'C6H12O6', 'O4S^2-'.
+ *
+ * @example
+ * formatFormula(['H', 'O'], [2, 1], 0) // 'H2O'
+ */
+export function formatFormula(labels: readonly string[], counts: readonly Amount[], charge = 0): string {
   let s = '';
-  for (const key of order) {
-    const n: Amount = counts.get(key)!;
-    s += describe(key).label;
-    if (!(typeof n === 'number' && n === 1)) s += amountText(n);
+  for (let i = 0; i < labels.length; i++) {
+    const n = counts[i];
+    s += labels[i];
+    if (!(typeof n === 'number' && n === 1)) s += typeof n === 'number' ? n : amountText(n);
   }
-  return s + chargeText(charge);
+  return charge === 0 ? s : s + chargeText(charge);
 }

@@ -8,12 +8,12 @@
 import type { Note } from '../errors/issue.js';
 import { toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { ELECTRON_MASS } from '../elements/constants.js';
-import { getAtomData, type AtomData, type WeightTable } from '../elements/atom-data.js';
+import type { AtomData, WeightTable } from '../elements/atom-data.js';
 import { Decimal } from '../exact/decimal.js';
 import { fromScaled, scaledToString, SCALE_DIGITS } from '../exact/scaled.js';
 import { isWhole, toDecimal, type Amount } from '../formula/amount.js';
 import { flattenFormula, type AtomCounts } from '../formula/flatten.js';
-import { hillFormula, hillOrder } from '../formula/hill.js';
+import { formatFormula, hillEntries } from '../formula/hill.js';
 import { parseFormula, type ParseOptions } from '../formula-parser/parse.js';
 import type { FormulaTree } from '../formula-parser/tree.js';
 
@@ -86,12 +86,11 @@ class Computed implements MassResult {
     private readonly data: AtomData[],
     private readonly counts: Amount[],
     readonly weights: WeightTable,
-    order: readonly string[],
     /** Exact sums in 10^-12 u, or null when they need Decimal. */
     private readonly molarScaled: number | null,
     private readonly monoScaled: number | null,
   ) {
-    this.formula = hillFormula(atoms, tree.charge, order);
+    this.formula = formatFormula(data.map((d) => d.label), counts, tree.charge);
     let nominal: number | null = 0;
     let notes: Note[] = tree.notes.length ? [...tree.notes] : NO_NOTES;
     for (let i = 0; i < data.length; i++) {
@@ -176,15 +175,15 @@ export function formulaMass(input: string | FormulaTree, options: MassOptions = 
   const tree = typeof input === 'string' ? parseFormula(input, options) : input;
   const atoms = flattenFormula(tree);
   const weights = options.weights ?? 'standard';
-  const order = hillOrder(atoms.keys());
+  const order = hillEntries(atoms.keys());
   const n = order.length;
   const data = new Array<AtomData>(n);
   const counts = new Array<Amount>(n);
   let molar: number | null = 0;
   let mono: number | null = 0;
   for (let i = 0; i < n; i++) {
-    const d = (data[i] = atomDataOf(order[i]));
-    const c = (counts[i] = atoms.get(order[i])!);
+    const d = (data[i] = order[i].atom!);
+    const c = (counts[i] = atoms.get(order[i].key)!);
     if (typeof c === 'number') {
       if (molar !== null) molar = safe(molar + c * d.average[weights].scaled);
       if (mono !== null) mono = safe(mono + c * d.monoisotopic.scaled);
@@ -192,7 +191,7 @@ export function formulaMass(input: string | FormulaTree, options: MassOptions = 
       molar = mono = null;
     }
   }
-  return new Computed(tree, atoms, data, counts, weights, order, molar, mono);
+  return new Computed(tree, atoms, data, counts, weights, molar, mono);
 }
 
 function safe(n: number): number | null {
@@ -217,18 +216,6 @@ export function safeFormulaMass(input: string, options: MassOptions = {}): SafeR
  */
 export function molarMass(input: string | FormulaTree, options: MassOptions = {}): Decimal {
   return formulaMass(input, options).molarMass;
-}
-
-const keyData = new Map<string, AtomData>();
-
-function atomDataOf(key: string): AtomData {
-  let d = keyData.get(key);
-  if (!d) {
-    const m = /^([0-9]*)([A-Za-z]+)$/.exec(key)!;
-    d = getAtomData(m[2], m[1] ? Number(m[1]) : null)!;
-    keyData.set(key, d);
-  }
-  return d;
 }
 
 function decimalSum(data: AtomData[], counts: Amount[], text: (d: AtomData) => string): Decimal {
