@@ -75,7 +75,7 @@ export function preparePresenter(o: PrepareCliOptions): Presenter<Prepared> {
       const r = p.r;
       const lines = [`${r.reagent.input}  (${r.reagent.formula}, M = ${displayMolarMass(r.reagent)} g/mol)`];
       lines.push(`  target: ${fig(r.concentration, r.concentration.unit?.symbol)}${r.target.formula !== r.reagent.formula ? ` of ${r.target.formula} (${r.target.perReagent} per formula unit)` : ''} in ${fig(r.volume, r.volume.unit?.symbol)}`);
-      lines.push(`  amount of ${r.reagent.formula}: ${fig(r.moles, 'mol')}; pure mass ${fig(r.pureMass, 'g')}`);
+      lines.push(`  amount of ${r.reagent.input}: ${fig(r.moles, 'mol')}; pure mass ${fig(r.pureMass, 'g')}`);
       if (r.purity) lines.push(`  assay ${displayQuantity(r.purity, '%').text}: ${fig(r.pureMass, 'g')} ÷ ${displayQuantity(r.purity, '%').text}`);
       lines.push(`  weigh ${fig(r.mass, 'g')} of ${r.reagent.input}, dissolve, and make up to ${fig(r.volume, r.volume.unit?.symbol)}`);
       return lines.join('\n');
