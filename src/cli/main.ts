@@ -85,7 +85,7 @@ export async function main(args: string[], io: CliIo): Promise<number> {
   registerComposition(program, run);
   registerCalc(program, run);
   registerAnalysis(program, run, io.stdin);
-  registerEmpirical(program, run);
+  registerEmpirical(program, run, io.stdin);
   registerBalance(program, run);
   registerReact(program, run);
   registerPrepare(program, run);

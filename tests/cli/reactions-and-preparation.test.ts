@@ -73,3 +73,11 @@ describe('pondus empirical, combustion, candidates', () => {
     expect(j.candidates[0]).toMatchObject({ formula: 'C6H12O6', rdbe: 1 });
   });
 });
+
+describe('pondus empirical --sheet', () => {
+  it('gives one result per row, in order, errors in place', () => {
+    const r = pondus(['empirical', '--sheet', '-', '--json'], 'id,C,H,O,molar mass\nS1,40.00,6.71,53.29,180.16\nS2,abc,1,1,\nS3,40.0,6.7,53.3,\n');
+    expect(r.status).toBe(1);
+    expect(jsonLines(r.stdout).map((o) => o.molecular ?? o.empirical ?? o.error.code)).toEqual(['C6H12O6', 'BAD_MEASUREMENT', 'CH2O']);
+  });
+});

@@ -148,3 +148,15 @@ describe('candidate formulas', () => {
     expect(() => candidateFormulas({ found: 'C=40.00' })).toThrow(/mass window/);
   });
 });
+
+describe('measurement sheets', () => {
+  it('turns each row into a measurement set, with sample and molar-mass columns', async () => {
+    const { readMeasurementSheet } = await import('../../src/empirical/measurement-sheet.js');
+    const rows = readMeasurementSheet('id,C,H,O,N,sample,molar mass\nS1,40.00,6.71,53.29,,,180.16\nS2,7.34 g,1.85 g,,rest,12.04 g,\n');
+    expect(rows.map((r) => [r.line, r.id, r.measurements, r.molarMass])).toEqual([
+      [2, 'S1', 'C=40.00 H=6.71 O=53.29', '180.16'],
+      [3, 'S2', 'C=7.34 g H=1.85 g N=rest sample=12.04 g', undefined],
+    ]);
+    expect(rows.map((r) => empirical(r.measurements, { molarMass: r.molarMass }).molecular ?? empirical(r.measurements).empirical)).toEqual(['C6H12O6', 'C3H9N']);
+  });
+});

@@ -1,9 +1,9 @@
-import { readFileSync } from 'node:fs';
 import { Option, type Command } from 'commander';
 import { analysis, type AnalysisResult } from '../../analysis/check.js';
 import { analysisJson } from '../../analysis/analysis-json.js';
 import { readSheet, type SheetRow } from '../../analysis/lab-sheet.js';
 import { fail } from '../../errors/pondus-error.js';
+import { readAllText } from '../input/read-all.js';
 import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { withOutputOptions, type OutputOptions } from './common.js';
@@ -106,20 +106,6 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
   };
 }
 
-/** Reads a lab sheet from a file or standard input. */
-async function readSheetText(path: string, stdin: () => AsyncIterable<string | Buffer>): Promise<string> {
-  if (path !== '-') {
-    try {
-      return readFileSync(path, 'utf8');
-    } catch (e) {
-      throw fail({ code: 'USAGE', message: `cannot read the sheet ${path}: ${(e as NodeJS.ErrnoException).code ?? String(e)}` });
-    }
-  }
-  let text = '';
-  for await (const chunk of stdin()) text += typeof chunk === 'string' ? chunk : chunk.toString('utf8');
-  return text;
-}
-
 /** Registers `pondus analysis`. */
 export function registerAnalysis(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void {
   withOutputOptions(
@@ -138,7 +124,7 @@ export function registerAnalysis(program: Command, run: CommandRunner, stdin: ()
   ).action(async (formulas: string[], o: AnalysisCliOptions) => {
     if (o.sheet !== undefined) {
       if (formulas.length > 0) throw fail({ code: 'USAGE', message: 'give either formulas or --sheet, not both' });
-      const rows = readSheet(await readSheetText(o.sheet, stdin));
+      const rows = readSheet(await readAllText(o.sheet, stdin));
       const sheetRows: Record<string, SheetRow> = Object.create(null);
       for (const r of rows) sheetRows[r.raw] = r;
       const withRows: AnalysisCliOptions = { ...o, sheetRows };

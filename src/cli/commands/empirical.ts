@@ -3,6 +3,8 @@ import { fail } from '../../errors/pondus-error.js';
 import { candidateFormulas, type CandidateResult } from '../../empirical/candidates.js';
 import { combustion, PRODUCTS, type CombustionResult } from '../../empirical/combustion.js';
 import { empirical, empiricalJson, type EmpiricalResult } from '../../empirical/empirical-formula.js';
+import { readMeasurementSheet, type MeasurementRow } from '../../empirical/measurement-sheet.js';
+import { readAllText } from '../input/read-all.js';
 import { displayQuantity } from '../../sigfig/display-quantity.js';
 import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
@@ -15,18 +17,29 @@ const residualText = (m: Map<string, number>) => [...m].map(([s, r]) => `${s} ${
 
 interface EmpiricalCliOptions extends OutputOptions {
   molarMass?: string;
+  sheet?: string;
+  /** Rows of a measurement sheet, keyed by their raw text (set by the command). */
+  sheetRows?: Record<string, MeasurementRow>;
+}
+
+interface EmpiricalRow extends EmpiricalResult {
+  id?: string;
 }
 
 /** The presenter for `pondus empirical`. */
-export function empiricalPresenter(o: EmpiricalCliOptions): Presenter<EmpiricalResult> {
+export function empiricalPresenter(o: EmpiricalCliOptions): Presenter<EmpiricalRow> {
   return {
-    compute: (input) => empirical(input, { molarMass: o.molarMass }),
-    json: empiricalJson,
+    compute: (input) => {
+      const row = o.sheetRows?.[input];
+      if (row) return { ...empirical(row.measurements, { molarMass: row.molarMass ?? o.molarMass }), id: row.id };
+      return empirical(input, { molarMass: o.molarMass });
+    },
+    json: (r) => (r.id !== undefined ? { id: r.id, ...empiricalJson(r) } : empiricalJson(r)),
     columns: ['input', 'empirical', 'molecular', 'residuals', 'alternatives'],
     cells: (r) => [r.input, r.empirical, r.molecular ?? '', residualText(r.fit.residuals), r.alternatives.map((a) => a.formula).join(' ')],
     block: (r) => {
       const rows = [...r.percents].map(([s, p]) => [s, p.toFixed(3), `±${r.limits.get(s)!.toFixed(3)}`, (p + r.fit.residuals.get(s)!).toFixed(3), `${r.fit.residuals.get(s)! >= 0 ? '+' : ''}${r.fit.residuals.get(s)!.toFixed(3)}`]);
-      const lines = [`${r.input}`, `empirical formula: ${r.empirical}  (${r.empiricalMass.toFixed(3)} g/mol)`];
+      const lines = [`${r.id ? `${r.id}: ` : ''}${r.input}`, `empirical formula: ${r.empirical}  (${r.empiricalMass.toFixed(3)} g/mol)`];
       if (r.molecular) lines.push(`molecular formula: ${r.molecular}  (× ${r.multiple})`);
       lines.push(fixedTable(['element', 'measured %', 'limit', 'calculated %', 'residual'], rows, ['left', 'right', 'right', 'right', 'right']));
       if (r.alternatives.length) lines.push(`also within the limits: ${r.alternatives.map((a) => `${a.formula} (${residualText(a.residuals)})`).join('; ')}`);
@@ -104,14 +117,26 @@ export function candidatesPresenter(o: CandidatesCliOptions): Presenter<Candidat
 }
 
 /** Registers `pondus empirical`, `combustion` and `candidates`. */
-export function registerEmpirical(program: Command, run: CommandRunner): void {
+export function registerEmpirical(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void {
   withOutputOptions(
     program
       .command('empirical')
       .description('empirical (and molecular) formula from mass percents or element masses')
       .argument('[measurements...]', "'C=40.00 H=6.71 O=53.29', 'Fe=34.97 g O=15.03 g', 'C=40.00 H=6.71 O=rest'; - reads one set per line (or a JSON object per line)")
-      .option('--molar-mass <M>', 'molar mass in g/mol (or a range such as 170-190) for the molecular formula'),
-  ).action((inputs: string[], o: EmpiricalCliOptions) => run('empirical', inputs, o));
+      .option('--molar-mass <M>', 'molar mass in g/mol (or a range such as 170-190) for the molecular formula')
+      .option('--sheet <file>', "a CSV of measurements: element columns (C, H, N, …), optional id, 'sample' and 'molar mass' columns; - reads it from standard input"),
+  ).action(async (inputs: string[], o: EmpiricalCliOptions) => {
+    if (o.sheet !== undefined) {
+      if (inputs.length > 0) throw fail({ code: 'USAGE', message: 'give either measurements or --sheet, not both' });
+      const rows = readMeasurementSheet(await readAllText(o.sheet, stdin));
+      const sheetRows: Record<string, MeasurementRow> = Object.create(null);
+      for (const r of rows) sheetRows[r.raw] = r;
+      const withRows: EmpiricalCliOptions = { ...o, sheetRows };
+      await run('empirical', rows.map((r) => r.raw), withRows, rows.map((r) => r.line));
+      return;
+    }
+    await run('empirical', inputs, o);
+  });
   const combustionCmd = program
     .command('combustion')
     .description('combustion analysis: element percents and the empirical formula from the masses collected')

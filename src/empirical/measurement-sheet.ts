@@ -1,0 +1,38 @@
+/**
+ * Measurement sheets for empirical formulas: a CSV with an optional id column,
+ * one column per element (percents, or masses with a unit in the cell, or
+ * 'rest'), optionally a sample-mass column and a molar-mass column.
+ */
+import { fail } from '../errors/pondus-error.js';
+import { columnIndex, elementColumns, readCsvSheet } from '../sheets/read-sheet.js';
+
+export interface MeasurementRow {
+  line: number;
+  raw: string;
+  id: string;
+  /** The row as a measurement set: 'C=40.00 H=6.71 O=rest'. */
+  measurements: string;
+  /** Molar mass for the molecular formula, if the sheet gives one. */
+  molarMass: string | undefined;
+}
+
+/**
+ * Reads a measurement sheet into measurement sets, one per row.
+ *
+ * @example
+ * readMeasurementSheet('id,C,H,O,molar mass\nS1,40.00,6.71,53.29,180.16\n')[0].measurements // 'C=40.00 H=6.71 O=53.29'
+ */
+export function readMeasurementSheet(text: string): MeasurementRow[] {
+  const { header, rows } = readCsvSheet(text);
+  const elementCols = elementColumns(header);
+  if (elementCols.length === 0) throw fail({ code: 'BAD_RECORD', message: 'the sheet has no element columns (C, H, N, O, …)' });
+  const idCol = columnIndex(header, /^(id|compound|name)$/i);
+  const sampleCol = columnIndex(header, /^sample( mass)?$/i);
+  const molarCol = columnIndex(header, /^(molar mass|M|MW|molecular weight)$/i);
+  return rows.map(({ line, raw, cells }) => {
+    const parts = elementCols.filter(([, i]) => (cells[i] ?? '') !== '').map(([s, i]) => `${s}=${cells[i]}`);
+    if (sampleCol >= 0 && (cells[sampleCol] ?? '') !== '') parts.push(`sample=${cells[sampleCol]}`);
+    const molar = molarCol >= 0 ? cells[molarCol] : undefined;
+    return { line, raw, id: idCol >= 0 ? (cells[idCol] ?? '') : '', measurements: parts.join(' '), molarMass: molar === '' ? undefined : molar };
+  });
+}
