@@ -41,6 +41,6 @@ describe('pondus analysis', () => {
     expect(pondus(['analysis', 'C6H6', '--found', 'C=101']).stderr).toContain('over 100 %');
     expect(pondus(['analysis', 'C6H6', '--found', 'C=92.26', '--solvents', 'unobtainium']).stderr).toContain("unknown solvent 'unobtainium'");
     expect(pondus(['analysis', 'C6H6', '--found', 'C=92.26,N=1']).stderr).toContain('a found value for N');
-    expect(pondus(['analysis', 'C6H6']).status).toBe(1);
+    expect(pondus(['analysis', 'C6H6']).status).toBe(2); // no found values: a usage error
   });
 });

@@ -3,7 +3,7 @@ import { analysis, type AnalysisResult } from '../../analysis/check.js';
 import { analysisJson } from '../../analysis/analysis-json.js';
 import { readSheet, type SheetRow } from '../../analysis/lab-sheet.js';
 import { fail } from '../../errors/pondus-error.js';
-import { readAllText } from '../input/read-all.js';
+import { runWithSheet } from './sheet-runner.js';
 import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { withOutputOptions, type OutputOptions } from './common.js';
@@ -121,16 +121,10 @@ export function registerAnalysis(program: Command, run: CommandRunner, stdin: ()
       .option('--top <n>', 'how many fits to list', '5')
       .option('--abbreviations', 'read group abbreviations (Me, Et, Ph, Boc, …) in formulas')
       .addOption(new Option('--sheet <file>', 'a lab sheet (CSV: id, formula, and found % in columns C, H, N, S, …); - reads it from standard input')),
-  ).action(async (formulas: string[], o: AnalysisCliOptions) => {
-    if (o.sheet !== undefined) {
-      if (formulas.length > 0) throw fail({ code: 'USAGE', message: 'give either formulas or --sheet, not both' });
-      const rows = readSheet(await readAllText(o.sheet, stdin));
-      const sheetRows: Record<string, SheetRow> = Object.create(null);
-      for (const r of rows) sheetRows[r.raw] = r;
-      const withRows: AnalysisCliOptions = { ...o, sheetRows };
-      await run('analysis', rows.map((r) => r.raw), withRows, rows.map((r) => r.line));
-      return;
+  ).action((formulas: string[], o: AnalysisCliOptions) => {
+    if (o.found === undefined && o.sheet === undefined && formulas.length > 0 && formulas.every((f) => f !== '-' && !WITH_FOUND.test(f.trim()))) {
+      throw fail({ code: 'USAGE', message: 'give the found values: --found C=72.30,H=7.91,N=12.60 (or after each formula)' });
     }
-    await run('analysis', formulas, o);
+    return runWithSheet(run, 'analysis', formulas, o, stdin, readSheet);
   });
 }

@@ -4,7 +4,7 @@ import { candidateFormulas, type CandidateResult } from '../../empirical/candida
 import { combustion, PRODUCTS, type CombustionResult } from '../../empirical/combustion.js';
 import { empirical, empiricalJson, type EmpiricalResult } from '../../empirical/empirical-formula.js';
 import { readMeasurementSheet, type MeasurementRow } from '../../empirical/measurement-sheet.js';
-import { readAllText } from '../input/read-all.js';
+import { runWithSheet } from './sheet-runner.js';
 import { displayQuantity } from '../../sigfig/display-quantity.js';
 import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
@@ -125,18 +125,7 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
       .argument('[measurements...]', "'C=40.00 H=6.71 O=53.29', 'Fe=34.97 g O=15.03 g', 'C=40.00 H=6.71 O=rest'; - reads one set per line (or a JSON object per line)")
       .option('--molar-mass <M>', 'molar mass in g/mol (or a range such as 170-190) for the molecular formula')
       .option('--sheet <file>', "a CSV of measurements: element columns (C, H, N, …), optional id, 'sample' and 'molar mass' columns; - reads it from standard input"),
-  ).action(async (inputs: string[], o: EmpiricalCliOptions) => {
-    if (o.sheet !== undefined) {
-      if (inputs.length > 0) throw fail({ code: 'USAGE', message: 'give either measurements or --sheet, not both' });
-      const rows = readMeasurementSheet(await readAllText(o.sheet, stdin));
-      const sheetRows: Record<string, MeasurementRow> = Object.create(null);
-      for (const r of rows) sheetRows[r.raw] = r;
-      const withRows: EmpiricalCliOptions = { ...o, sheetRows };
-      await run('empirical', rows.map((r) => r.raw), withRows, rows.map((r) => r.line));
-      return;
-    }
-    await run('empirical', inputs, o);
-  });
+  ).action((inputs: string[], o: EmpiricalCliOptions) => runWithSheet(run, 'empirical', inputs, o, stdin, readMeasurementSheet));
   const combustionCmd = program
     .command('combustion')
     .description('combustion analysis: element percents and the empirical formula from the masses collected')
