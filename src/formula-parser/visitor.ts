@@ -4,7 +4,8 @@
  */
 import type { CstNode, IToken } from 'chevrotain';
 import type { Issue, Note } from '../errors/issue.js';
-import { isElementSymbol } from '../elements/element-table.js';
+import { getElement, isElementSymbol } from '../elements/element-table.js';
+import { ABBREVIATION_CLASHES, ABBREVIATIONS } from './abbreviations.js';
 import { getNuclide } from '../elements/nuclides.js';
 import { caseTrapNotes, unknownSymbolHint } from './hints.js';
 import { columnOf } from './prescan.js';
@@ -116,6 +117,13 @@ export class TreeBuilder {
     const abbr = tok(ctx, 'Abbreviation');
     if (abbr) {
       const span = { start: abbr.startOffset, end: endOf(abbr) };
+      if (ABBREVIATION_CLASHES.includes(abbr.image)) {
+        this.notes.push({
+          code: 'ABBREVIATION_CLASH',
+          message: `'${abbr.image}' is read as ${ABBREVIATIONS[abbr.image].name} (${ABBREVIATIONS[abbr.image].formula}); with abbreviations off it is the element ${getElement(abbr.image)!.name}`,
+          column: columnOf(this.text, abbr.startOffset),
+        });
+      }
       const group: GroupNode = { kind: 'group', bracket: '(', body: this.expand(abbr.image, span), count: null, span, abbreviation: abbr.image };
       return group;
     }

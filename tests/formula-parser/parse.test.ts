@@ -104,6 +104,8 @@ describe('formula language', () => {
     expect(hill('TsCl', { abbreviations: true })).toBe('C7H7ClO2S');
     expect(hill('tBuOH', { abbreviations: true })).toBe('C4H10O');
     expect(hill('Np', { abbreviations: true })).toBe('Np'); // neptunium either way
+    expect(parseFormula('Pr2O3', { abbreviations: true }).notes.map((n) => n.code)).toEqual(['ABBREVIATION_CLASH']);
+    expect(parseFormula('Me3SiCl', { abbreviations: true }).notes).toEqual([]);
   });
 
   it('notes a likely slip of case between Co and CO, but not in cobalt compounds', () => {

@@ -17,7 +17,8 @@ export function displayMolarMass(r: MassResult): string {
 /** An element's mass in one mole of the formula, to the decimals of its atomic weight (a count is repeated addition). */
 export function displayContribution(c: Contribution): string {
   const dot = c.atomicWeight.indexOf('.');
-  return c.mass.toFixed(dot < 0 ? 0 : c.atomicWeight.length - dot - 1);
+  // nuclide masses carry up to 12 decimals; six are plenty on screen (JSON keeps them all)
+  return c.mass.toFixed(dot < 0 ? 0 : Math.min(6, c.atomicWeight.length - dot - 1));
 }
 
 /** Monoisotopic mass to six decimals (accurate-mass practice). */
