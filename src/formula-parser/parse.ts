@@ -132,7 +132,11 @@ const expansions = new Map<string, ComponentNode[]>();
 function expandAbbreviation(name: string, span: Span): ComponentNode[] {
   let body = expansions.get(name);
   if (!body) {
-    body = parseFormula(ABBREVIATIONS[name].formula).components;
+    // abbreviation formulas are plain, so the fast path reads them (and the shared visitor, busy
+    // with the formula that holds the abbreviation, is not re-entered)
+    const tree = fastParse(ABBREVIATIONS[name].formula);
+    if (!tree) throw new Error(`abbreviation ${name} has a formula the fast path cannot read`);
+    body = tree.components;
     expansions.set(name, body);
   }
   return body.map((c) => respanComponent(c, span));

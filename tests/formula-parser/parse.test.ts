@@ -123,3 +123,11 @@ describe('formula language', () => {
     if (!bad.success) expect(bad.error.first.code).toBe('UNKNOWN_ELEMENT');
   });
 });
+
+describe('abbreviation table', () => {
+  it('every abbreviation expands to a plain formula', async () => {
+    const { ABBREVIATIONS } = await import('../../src/formula-parser/abbreviations.js');
+    const { fastParse } = await import('../../src/formula-parser/fast-path.js');
+    for (const [name, a] of Object.entries(ABBREVIATIONS)) expect(fastParse(a.formula), name).not.toBeNull();
+  });
+});
