@@ -40,7 +40,7 @@ export function massJson(r: MassResult): MassJson {
 export function massJsonLine(r: MassResult): string {
   if (r.notes.length > 0) return JSON.stringify(massJson(r));
   // Hill formulas hold only letters, digits, brackets, '.', '^', '+' and '-': nothing to escape
-  return `{"input":${jsonString(r.input)},"formula":"${r.formula}","molarMass":${r.molarMassNumber()},"monoisotopicMass":${r.monoisotopicMassNumber()},"nominalMass":${r.nominalMass},"charge":${r.charge}}`;
+  return `{"input":${jsonString(r.input)},"formula":"${r.formula}","molarMass":${r.molarMassJson()},"monoisotopicMass":${r.monoisotopicMassJson()},"nominalMass":${r.nominalMass},"charge":${r.charge}}`;
 }
 
 const NEEDS_ESCAPE = /["\\\u0000-\u001f\u2028\u2029\ud800-\udfff]/;
