@@ -118,3 +118,43 @@ export function caseTrapNotes(components: ComponentNode[]): Note[] {
   }
   return notes;
 }
+
+/**
+ * Whole-formula suggestions when the letter case slipped throughout (`h2o`, `NACL`): every run of
+ * letters re-read as element symbols, keeping the readings that parse. Best first: readings with
+ * more symbols (CO2 before Co2), as a lower-case formula is usually made of light elements.
+ *
+ * @example
+ * formulaReadings('nacl', (s) => true) // ['NaCl']
+ */
+export function formulaReadings(input: string, parses: (s: string) => boolean): string[] {
+  const runs = [...input.matchAll(/[A-Za-z]+/g)];
+  if (runs.length === 0 || runs.length > 20) return [];
+  const options = runs.map((m) => {
+    const r = symbolReadings(m[0]);
+    return isWordOfSymbols(m[0]) ? [m[0], ...r] : r;
+  });
+  if (options.some((o) => o.length === 0)) return [];
+  const build = (pick: (i: number) => string) => {
+    let out = '';
+    let last = 0;
+    runs.forEach((m, i) => {
+      out += input.slice(last, m.index) + pick(i);
+      last = m.index! + m[0].length;
+    });
+    return out + input.slice(last);
+  };
+  const candidates = new Set<string>();
+  const symbolsIn = (s: string) => (s.match(/[A-Z]/g) ?? []).length;
+  const most = (o: string[]) => [...o].sort((a, b) => symbolsIn(b) - symbolsIn(a));
+  candidates.add(build((i) => most(options[i])[0]));
+  const first = options.findIndex((o) => o.length > 1);
+  if (first >= 0) candidates.add(build((i) => (i === first ? most(options[i])[1] : most(options[i])[0])));
+  return [...candidates].filter((c) => c !== input && parses(c)).slice(0, 2);
+}
+
+/** True when a word is already a run of correctly written element symbols. */
+function isWordOfSymbols(word: string): boolean {
+  const parts = word.match(/[A-Z][a-z]?/g);
+  return parts !== null && parts.join('') === word && parts.every((p) => isElementSymbol(p));
+}

@@ -7,6 +7,7 @@ import type { Issue } from '../errors/issue.js';
 import { PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { ABBREVIATIONS } from './abbreviations.js';
 import { fastParse } from './fast-path.js';
+import { formulaReadings } from './hints.js';
 import { formulaGrammar } from './grammar.js';
 import { columnOf, MAX_FORMULA_LENGTH, prescan } from './prescan.js';
 import { ABBREVIATION_MODE, formulaLexer, PLAIN_MODE } from './tokens.js';
@@ -60,7 +61,14 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
 
   builder ??= new TreeBuilder();
   const built = builder.build(cst, input, expandAbbreviation);
-  if (built.issues.length > 0) throw new PondusError(built.issues, input);
+  if (built.issues.length > 0) {
+    const unknown = built.issues.find((i) => i.code === 'UNKNOWN_ELEMENT');
+    if (unknown) {
+      const readings = formulaReadings(input, (s) => safeParseFormula(s, { ...options, abbreviations: false }).success);
+      if (readings.length > 0) unknown.hint = `did you mean ${readings.map((r) => `'${r}'`).join(' or ')}? Element symbols are one capital letter, or a capital and one lower-case letter`;
+    }
+    throw new PondusError(built.issues, input);
+  }
   return { kind: 'formula', input, components: built.components, charge: built.charge, notes: built.notes };
 }
 

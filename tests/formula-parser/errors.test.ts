@@ -51,8 +51,9 @@ describe('parse errors name the problem and the column', () => {
   });
 
   it('hints at the intended symbols when the case slipped', () => {
-    expect(issue('co2').hint).toContain("'CO'");
-    expect(issue('co2').hint).toContain("'Co'");
+    expect(issue('co2').hint).toContain("'CO2' or 'Co2'");
+    expect(issue('NACL').hint).toContain("'NaCl'");
+    expect(issue('h2o').hint).toContain("'H2O'");
     expect(issue('nacl').hint).toContain("'NaCl'");
     expect(issue('Me').hint).toContain('abbreviations');
   });
