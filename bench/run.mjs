@@ -76,7 +76,7 @@ function require_proc(pid) {
 
 const big = dataFile(300_000);
 const small = dataFile(30_000);
-const reps = quick ? 1 : 3;
+const reps = quick ? 1 : 5;
 const bare = [];
 const batch = [];
 let peakBig = 0;

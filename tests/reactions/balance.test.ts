@@ -58,11 +58,9 @@ describe('balancing', () => {
     expect(code('Xx -> Xx2')).toBe('UNKNOWN_ELEMENT');
   });
 
-  it('rejects 200 species quickly', () => {
+  it('rejects 200 species with a clear error (a hang would hit the test timeout)', () => {
     const big = Array.from({ length: 100 }, (_, i) => `C${i + 1}H${2 * i + 4}`).join(' + ') + ' -> ' + Array.from({ length: 100 }, (_, i) => `C${i + 1}H${2 * i + 2}`).join(' + ');
-    const t = performance.now();
     expect(code(big)).toBe('BAD_EQUATION');
-    expect(performance.now() - t).toBeLessThan(5000); // generous: a hang would be minutes
   });
 
   it('any balance returned conserves every element and the charge', () => {
