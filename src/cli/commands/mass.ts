@@ -1,6 +1,7 @@
 import type { Command } from 'commander';
 import { formulaMass, type MassResult } from '../../mass/formula-mass.js';
 import { massJson, massJsonLine } from '../../mass/mass-json.js';
+import { plainMassJsonLine } from '../../mass/plain-mass-json.js';
 import { formatWithUncertainty, molarMassUncertainty, type MolarMassUncertainty } from '../../mass/uncertainty.js';
 import { chargeLabel, displayMolarMass, displayMonoisotopic } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
@@ -34,6 +35,7 @@ function plainPresenter(o: MassCliOptions): Presenter<MassResult> {
     compute: (input) => formulaMass(input, opts),
     json: massJson,
     jsonLine: massJsonLine,
+    fastJsonLine: opts.weights === 'standard' && !opts.abbreviations ? plainMassJsonLine : undefined,
     columns,
     cells,
     table: { head, align, row },

@@ -11,6 +11,11 @@ export interface Presenter<R> {
   json(result: R): unknown;
   /** Optional: the JSON line for a result, written directly (must equal JSON.stringify(json(result))). */
   jsonLine?(result: R): string;
+  /**
+   * Optional hot path for JSON Lines: the line for an input straight from its text, or null to
+   * go the general way (compute, then jsonLine). Must give exactly the general path's text.
+   */
+  fastJsonLine?(input: string): string | null;
   /** CSV/TSV header (first column is the input). */
   columns: string[];
   /** CSV/TSV cells for a result, matching `columns`. */

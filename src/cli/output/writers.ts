@@ -12,6 +12,8 @@ import type { Presenter } from './presenter.js';
 
 export interface ResultWriter<R> {
   ok(item: InputItem, result: R): void;
+  /** A finished JSON line from the presenter's hot path (JSON Lines only). */
+  okLine?(line: string): void;
   fail(item: InputItem, error: PondusError): void;
   /** Called after each batch; table output prints what it holds here when enough has gathered. */
   endBatch(final: boolean): void;
@@ -54,6 +56,9 @@ class JsonLinesWriter<R> implements ResultWriter<R> {
   }
   ok(_item: InputItem, result: R): void {
     this.ctx.out.write(this.line(result) + '\n');
+  }
+  okLine(line: string): void {
+    this.ctx.out.write(line + '\n');
   }
   fail(item: InputItem, error: PondusError): void {
     this.ctx.out.write(JSON.stringify({ input: item.text, line: item.line, error: errorJson(error) }) + '\n');
