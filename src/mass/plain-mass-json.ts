@@ -33,6 +33,9 @@ for (const e of ELEMENTS) {
 [...ELEMENTS].sort((a, b) => (a.symbol < b.symbol ? -1 : a.symbol > b.symbol ? 1 : 0)).forEach((e, i) => (PLAIN[e.z] = i + 2));
 const C = Z_OF.get('C')!;
 const H = Z_OF.get('H')!;
+const ORGANIC = Float64Array.from(PLAIN);
+ORGANIC[C] = 0;
+ORGANIC[H] = 1;
 
 // reused between calls: the batch loop is single-threaded
 const counts = new Float64Array(N);
@@ -76,8 +79,16 @@ export function plainMassJsonLine(input: string): string | null {
       if (z === C) organic = true;
     }
     // Hill order: C, H, then alphabetical when carbon is present; alphabetical otherwise
-    const rank = (z: number) => (organic ? (z === C ? 0 : z === H ? 1 : PLAIN[z]) : PLAIN[z]);
-    touched.sort((a, b) => rank(a) - rank(b));
+    const rank = organic ? ORGANIC : PLAIN;
+    for (let i = 1; i < touched.length; i++) {
+      const z = touched[i];
+      let j = i - 1;
+      while (j >= 0 && rank[touched[j]] > rank[z]) {
+        touched[j + 1] = touched[j];
+        j--;
+      }
+      touched[j + 1] = z;
+    }
     let formula = '';
     let molar = 0;
     let mono = 0;
