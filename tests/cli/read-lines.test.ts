@@ -1,0 +1,37 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { readLineBatches } from '../../src/cli/input/read-lines.js';
+
+async function collect(chunks: string[]): Promise<string[][]> {
+  async function* source() {
+    for (const c of chunks) yield c;
+  }
+  const out: string[][] = [];
+  for await (const b of readLineBatches(source())) out.push(b);
+  return out;
+}
+
+describe('reading lines in batches', () => {
+  it('gives every line once, in order, however the input is cut into chunks', async () => {
+    await fc.assert(
+      fc.asyncProperty(fc.array(fc.string({ maxLength: 8 }).map((s) => s.replace(/[\r\n]/g, '')), { maxLength: 1500 }), fc.array(fc.integer({ min: 1, max: 4000 }), { maxLength: 6 }), async (lines, cuts) => {
+        const text = lines.map((l) => l + '\n').join('');
+        const chunks: string[] = [];
+        let at = 0;
+        for (const c of cuts) {
+          chunks.push(text.slice(at, at + c));
+          at += c;
+        }
+        chunks.push(text.slice(at));
+        const batches = await collect(chunks);
+        expect(batches.flat()).toEqual(lines);
+        for (const b of batches) expect(b.length).toBeLessThanOrEqual(512);
+      }),
+      { numRuns: 100 },
+    );
+  });
+
+  it('handles CRLF, a byte-order mark and a last line without a newline', async () => {
+    expect((await collect(['\ufeffH2O\r\nNa', 'Cl\r\n\r\nXx'])).flat()).toEqual(['H2O', 'NaCl', '', 'Xx']);
+  });
+});
