@@ -29,6 +29,17 @@ const SYMBOL_RANK = new Map(
     .map((s, i) => [s, i] as const),
 );
 
+/**
+ * Position of an element symbol in alphabetical order (0 for Ac): the Hill order of the elements
+ * other than carbon and hydrogen.
+ *
+ * @example
+ * alphabeticalRank('Ag') < alphabeticalRank('Al') // true
+ */
+export function alphabeticalRank(symbol: string): number {
+  return SYMBOL_RANK.get(symbol) ?? 999;
+}
+
 const described = new Map<string, HillEntry>();
 
 function describe(key: string): HillEntry {
@@ -38,7 +49,7 @@ function describe(key: string): HillEntry {
   const massNumber = m[1] ? Number(m[1]) : 0;
   const symbol = m[2];
   const data = getAtomData(symbol, m[1] ? massNumber : null);
-  const plain = (SYMBOL_RANK.get(symbol) ?? 999) * 1000 + massNumber;
+  const plain = alphabeticalRank(symbol) * 1000 + massNumber;
   const organic = symbol === 'C' ? massNumber - 2000 : symbol === 'H' ? massNumber - 1000 : plain;
   const k: HillEntry = { key, symbol, massNumber, label: data ? data.label : key, atom: data, plain, organic };
   described.set(key, k);

@@ -43,7 +43,8 @@ export function massJsonLine(r: MassResult): string {
   return `{"input":${jsonString(r.input)},"formula":"${r.formula}","molarMass":${r.molarMassJson()},"monoisotopicMass":${r.monoisotopicMassJson()},"nominalMass":${r.nominalMass},"charge":${r.charge}}`;
 }
 
-const NEEDS_ESCAPE = /["\\\u0000-\u001f\u2028\u2029\ud800-\udfff]/;
+/** Characters JSON.stringify would escape (and lone surrogates): strings without them are quoted as they are. */
+export const NEEDS_ESCAPE = /["\\\u0000-\u001f\u2028\u2029\ud800-\udfff]/;
 
 /** A JSON string literal; plain text (the usual formula) skips JSON.stringify. */
 function jsonString(s: string): string {

@@ -13,6 +13,8 @@ import { scaledToJson } from '../exact/scaled.js';
 import { fastParse } from '../formula-parser/fast-path.js';
 import type { ComponentNode } from '../formula-parser/tree.js';
 import { MAX_ATOMS } from '../formula/flatten.js';
+import { alphabeticalRank } from '../formula/hill.js';
+import { NEEDS_ESCAPE } from './mass-json.js';
 
 const N = ELEMENTS.length + 1;
 const Z_OF = new Map(ELEMENTS.map((e) => [e.symbol, e.z]));
@@ -30,7 +32,7 @@ for (const e of ELEMENTS) {
   NOMINAL[e.z] = d.nominal;
   USABLE[e.z] = d.noStandardWeight ? 0 : 1;
 }
-[...ELEMENTS].sort((a, b) => (a.symbol < b.symbol ? -1 : a.symbol > b.symbol ? 1 : 0)).forEach((e, i) => (PLAIN[e.z] = i + 2));
+for (const e of ELEMENTS) PLAIN[e.z] = alphabeticalRank(e.symbol) + 2; // C and H take 0 and 1 in ORGANIC
 const C = Z_OF.get('C')!;
 const H = Z_OF.get('H')!;
 const ORGANIC = Float64Array.from(PLAIN);
@@ -40,8 +42,6 @@ ORGANIC[H] = 1;
 // reused between calls: the batch loop is single-threaded
 const counts = new Float64Array(N);
 const touched: number[] = [];
-
-const NEEDS_ESCAPE = /["\\\u0000-\u001f\u2028\u2029\ud800-\udfff]/;
 
 function add(components: ComponentNode[], factor: number): boolean {
   for (const c of components) {
