@@ -46,7 +46,8 @@ export function parseFormula(input: string, options: ParseOptions = {}): Formula
  * @example
  * parseWithGrammar('H2O').components[0].parts.length // 2
  */
-export function parseWithGrammar(input: string, options: ParseOptions = {}): FormulaTree {  const pre = prescan(input, options.maxLength ?? MAX_FORMULA_LENGTH);
+export function parseWithGrammar(input: string, options: ParseOptions = {}): FormulaTree {
+  const pre = prescan(input, options.maxLength ?? MAX_FORMULA_LENGTH);
   if (pre) throw new PondusError([pre], input);
 
   const lexed = formulaLexer().tokenize(input, options.abbreviations ? ABBREVIATION_MODE : PLAIN_MODE);

@@ -21,7 +21,7 @@ export interface MassRow {
 const columns = ['input', 'formula', 'molarMass', 'monoisotopicMass', 'nominalMass', 'charge'];
 const head = ['input', 'formula (Hill)', 'molar mass g/mol', 'monoisotopic u', 'nominal', 'charge'];
 const align: ('left' | 'right')[] = ['left', 'left', 'right', 'right', 'right', 'right'];
-const cells = (r: MassResult) => [r.input, r.formula, r.molarMass.toFixed(), r.monoisotopicMass.toFixed(), r.nominalMass, r.charge];
+const cells = (r: MassResult) => [r.input, r.formula, r.molarMassText(), r.monoisotopicMassText(), r.nominalMass, r.charge];
 const row = (r: MassResult) => [r.input, r.formula, displayMolarMass(r), displayMonoisotopic(r), r.nominalMass ?? '—', chargeLabel(r.charge)];
 
 /** The presenter for `pondus mass` (with --uncertainty, {@link uncertaintyPresenter}). */

@@ -1,6 +1,6 @@
 /**
- * Presenters by command name, so a worker thread can rebuild the presenter a
- * command uses from the command's name and its (plain) options.
+ * Presenters by command name: a command's action names itself and passes its
+ * options; the runner builds the presenter here.
  */
 import type { Presenter } from '../output/presenter.js';
 import { analysisPresenter } from './analysis.js';

@@ -19,7 +19,7 @@ export interface ResultWriter<R> {
   endBatch(final: boolean): void;
 }
 
-/** Where writers put text: a Sink, or a collector in a worker thread. */
+/** Where writers put text (a Sink in the CLI). */
 export interface TextOut {
   write(text: string): void;
 }
@@ -31,8 +31,6 @@ export interface WriterContext {
   outStyle: ChalkInstance;
   /** True when inputs came from standard input or there are several: errors then say which line. */
   numbered: boolean;
-  /** False when someone else has written the CSV/TSV header already. */
-  header?: boolean;
 }
 
 /** Creates the writer for a format. */
@@ -66,25 +64,13 @@ class JsonLinesWriter<R> implements ResultWriter<R> {
   endBatch(): void {}
 }
 
-/**
- * The CSV/TSV header line for a presenter.
- *
- * @example
- * delimitedHeader(massPresenter({}), ',') // 'input,formula,molarMass,…,error,message\n'
- */
-export function delimitedHeader(p: Presenter<unknown>, sep: string): string {
-  return [...p.columns, 'error', 'message'].map((c) => delimitedCell(c, sep)).join(sep) + '\n';
-}
-
 class DelimitedWriter<R> implements ResultWriter<R> {
-  private headerDone: boolean;
-  constructor(private readonly p: Presenter<R>, private readonly ctx: WriterContext, private readonly sep: string) {
-    this.headerDone = ctx.header === false;
-  }
+  private headerDone = false;
+  constructor(private readonly p: Presenter<R>, private readonly ctx: WriterContext, private readonly sep: string) {}
   private line(cells: Cell[]): void {
     if (!this.headerDone) {
       this.headerDone = true;
-      this.ctx.out.write(delimitedHeader(this.p as Presenter<unknown>, this.sep));
+      this.line([...this.p.columns, 'error', 'message']);
     }
     let s = '';
     for (let i = 0; i < cells.length; i++) s += (i ? this.sep : '') + delimitedCell(cells[i], this.sep);
