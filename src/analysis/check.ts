@@ -100,7 +100,7 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
     const max = options.max ?? 2;
     if (!(step > 0 && step <= max && max <= 20 && max / step <= 2000)) throw fail({ code: 'BAD_OPTION', message: `step ${step} and max ${max} make no sensible grid (0 < step ≤ max ≤ 20, at most 2000 steps)` });
     const foundNums = symbols.map((s) => found.get(s)!.toNumber());
-    const vec = (m: MassResult): MassVector => ({ masses: symbols.map((s) => massOf(m, s)), total: m.molarMass.toNumber() });
+    const vec = (m: MassResult): MassVector => ({ masses: symbols.map((s) => exactMass(m, s).toNumber()), total: m.molarMass.toNumber() });
     const baseVec = vec(base);
     const partnerVecs = partnerMasses.map(vec);
     const candidates = searchSolvates(foundNums, baseVec, partnerVecs, step, max, options.top ?? 5, partners.length <= 12);
@@ -155,10 +155,6 @@ function decimalsOf(text: string, symbol: string): number {
   return m && m[1] ? m[1].length : 0;
 }
 
-function massOf(m: MassResult, symbol: string): number {
-  return m.contributions.filter((c) => c.symbol === symbol).reduce((s, c) => s + c.mass.toNumber(), 0);
-}
-
 function partnerOf(given: string, options: MassOptions): Partner {
   const named = solventByName(given);
   const formulaText = named ? named.formula : given;
@@ -211,6 +207,7 @@ function evaluateFit(baseHill: string, base: MassResult, used: Used[], symbols: 
   };
 }
 
+/** Mass of one element in a formula unit, g/mol, exactly. */
 function exactMass(m: MassResult, symbol: string): Decimal {
   return m.contributions.filter((c) => c.symbol === symbol).reduce((s, c) => s.plus(c.mass), new Decimal(0));
 }
