@@ -24,20 +24,26 @@ const MONO = new Float64Array(N);
 const NOMINAL = new Float64Array(N);
 const PLAIN = new Float64Array(N); // alphabetical rank
 const USABLE = new Uint8Array(N); // has a standard atomic weight
-for (const e of ELEMENTS) {
-  const d = getAtomData(e.symbol, null)!;
-  LABEL[e.z] = e.symbol;
-  STANDARD[e.z] = d.average.standard.scaled;
-  MONO[e.z] = d.monoisotopic.scaled;
-  NOMINAL[e.z] = d.nominal;
-  USABLE[e.z] = d.noStandardWeight ? 0 : 1;
+const ORGANIC = new Float64Array(N); // C, H, then alphabetical
+let tablesReady = false;
+
+/** Fills the per-element tables on first use (not at start-up: most runs never need them). */
+function fillTables(): void {
+  for (const e of ELEMENTS) {
+    const d = getAtomData(e.symbol, null)!;
+    LABEL[e.z] = e.symbol;
+    STANDARD[e.z] = d.average.standard.scaled;
+    MONO[e.z] = d.monoisotopic.scaled;
+    NOMINAL[e.z] = d.nominal;
+    USABLE[e.z] = d.noStandardWeight ? 0 : 1;
+    PLAIN[e.z] = ORGANIC[e.z] = alphabeticalRank(e.symbol) + 2;
+  }
+  ORGANIC[C] = 0;
+  ORGANIC[H] = 1;
+  tablesReady = true;
 }
-for (const e of ELEMENTS) PLAIN[e.z] = alphabeticalRank(e.symbol) + 2; // C and H take 0 and 1 in ORGANIC
 const C = Z_OF.get('C')!;
 const H = Z_OF.get('H')!;
-const ORGANIC = Float64Array.from(PLAIN);
-ORGANIC[C] = 0;
-ORGANIC[H] = 1;
 
 // reused between calls: the batch loop is single-threaded
 const counts = new Float64Array(N);
@@ -70,6 +76,7 @@ function add(components: ComponentNode[], factor: number): boolean {
 export function plainMassJsonLine(input: string): string | null {
   const tree = fastParse(input);
   if (!tree || tree.notes.length > 0 || NEEDS_ESCAPE.test(input)) return null;
+  if (!tablesReady) fillTables();
   touched.length = 0;
   try {
     if (!add(tree.components, 1)) return null;
