@@ -11,7 +11,7 @@ import { formulaMass } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { molarMassUncertainty } from '../mass/uncertainty.js';
 import { sigFigsOf } from '../sigfig/measured.js';
-import { add, divide, multiply, negate, power, quantity, standardUncertainty, subtract, type Quantity } from '../sigfig/quantity.js';
+import { add, divide, multiply, negate, power, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
 import { readNumber } from '../sigfig/read-number.js';
 import { unitOf } from '../sigfig/units.js';
 import type { CalcTree, ExprNode } from './tree.js';

@@ -147,7 +147,7 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
   const out: Candidate[] = [];
   let examined = 0;
 
-  const consider = (c: number, h: number, mass: number) => {
+  const consider = (c: number, h: number) => {
     examined++;
     const all = new Map<string, number>();
     if (c) all.set('C', c);
@@ -208,7 +208,7 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
         const rest = cum + c * mC;
         const hFrom = Math.max(hMin, Math.ceil((lo - rest) / mH - 1e-9));
         const hTo = Math.min(hMax, Math.floor((hi - rest) / mH + 1e-9));
-        for (let h = hFrom; h <= hTo; h++) consider(c, h, rest + h * mH);
+        for (let h = hFrom; h <= hTo; h++) consider(c, h);
       }
       return;
     }

@@ -61,7 +61,7 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
   };
   const verdict = (r: AnalysisResult) => (r.pass ? 'passes' : 'fails');
   const sheet = o.sheetRows !== undefined;
-  const listOf = (r: AnalysisResult, m: Map<string, { toFixed(n: number): string }> | Map<string, string>) =>
+  const listOf = (m: Map<string, { toFixed(n: number): string }> | Map<string, string>) =>
     [...m].map(([s, v]) => `${s} ${typeof v === 'string' ? v : v.toFixed(2)}`).join(', ');
   return {
     compute,
@@ -72,7 +72,7 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
           align: ['left', 'left', 'left', 'left', 'right', 'left', 'left'],
           row: ({ result: r, id }) => {
             const best = r.fits.find((f) => f.solvates.length > 0 && f.pass);
-            return [id ?? '', r.formula, listOf(r, r.calculated), listOf(r, r.foundText), r.maxDeviation.toFixed(2), verdict(r), !r.pass && best ? `${best.formula} (${best.maxDeviation.toFixed(2)})` : ''];
+            return [id ?? '', r.formula, listOf(r.calculated), listOf(r.foundText), r.maxDeviation.toFixed(2), verdict(r), !r.pass && best ? `${best.formula} (${best.maxDeviation.toFixed(2)})` : ''];
           },
         }
       : undefined,

@@ -49,7 +49,7 @@ export function createWriter<R>(format: OutputFormat, p: Presenter<R>, ctx: Writ
 
 class JsonLinesWriter<R> implements ResultWriter<R> {
   private readonly line: (result: R) => string;
-  constructor(private readonly p: Presenter<R>, private readonly ctx: WriterContext) {
+  constructor(p: Presenter<R>, private readonly ctx: WriterContext) {
     this.line = p.jsonLine ?? ((r) => JSON.stringify(p.json(r)));
   }
   ok(_item: InputItem, result: R): void {
