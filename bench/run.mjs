@@ -35,6 +35,13 @@ for (let i = 0; i < runs; i++) {
   mass.push(timeSpawn([bin, 'mass', 'H2O']));
 }
 const startRatio = median(mass) / median(node0);
+// library import: ESM and CommonJS entry points, over the same node start-up
+const esmImport = [];
+const cjsImport = [];
+for (let i = 0; i < runs; i++) {
+  esmImport.push(timeSpawn(['-e', `import(${JSON.stringify(`${root}dist/lib/index.js`)})`]));
+  cjsImport.push(timeSpawn(['-e', `require(${JSON.stringify(`${root}dist/lib/index.cjs`)})`]));
+}
 
 // --- batch -----------------------------------------------------------------
 const dataDir = `${root}bench/.data`;
@@ -101,6 +108,7 @@ for (const formula of ['C43H66N12O12S2', 'C50H73N15O11', 'C45H57ClF3N7O9S']) {
 
 const f = (x) => x.toFixed(1);
 console.log(`start-up  node -e 0: ${f(median(node0))} ms   pondus mass H2O: ${f(median(mass))} ms   ratio ${startRatio.toFixed(2)}× (goal ≤ 1.5×)`);
+console.log(`import    library (over node -e 0): ESM ${f(median(esmImport) - median(node0))} ms, require ${f(median(cjsImport) - median(node0))} ms (goal ≤ 100 ms)`);
 console.log(`batch     bare loop: ${f(median(bare))} ms   pondus mass --json: ${f(median(batch))} ms for 300,000 formulas   ratio ${batchRatio.toFixed(2)}× (goal ≤ 3×)`);
 console.log(`candidates  every CHNOPS+halogen formula within 5 ppm near 1,000 Da (default ranges): ${candidateRuns.map((c) => `${c.formula} ${f(c.ms)} ms (${c.n} fits)`).join('; ')} (goal < 1000 ms each)`);
 console.log(`memory    peak ${peakSmall ? f(peakSmall) : 'n/a'} MB for 30,000 lines, ${peakBig ? f(peakBig) : 'n/a'} MB for 300,000 lines`);

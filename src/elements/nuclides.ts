@@ -1,5 +1,5 @@
-import { readFileSync } from 'node:fs';
 import isotopes from './data/isotopes.json' with { type: 'json' };
+import nuclideMasses from './data/nuclide-masses.json' with { type: 'json' };
 
 /** A nuclide with its AME2020 atomic mass (decimal string, in u). */
 export interface Nuclide {
@@ -29,14 +29,13 @@ export const NUCLIDE_PROVENANCE: Readonly<Record<string, string>> = Object.freez
 let fullTable: Map<string, string> | null = null;
 
 /**
- * The complete AME2020 table (3,557 nuclides) is read from its data file only
- * when a formula names a nuclide that is not a natural isotope ([14C], [18F]):
- * it is large, and most runs never need it.
+ * The complete AME2020 table (3,557 nuclides), indexed on first use: only a formula that names a
+ * nuclide outside the natural set ([14C], [18F]) needs it. It is part of the library's data, so
+ * the library reads no file and runs wherever JavaScript runs.
  */
 function allNuclides(): Map<string, string> {
   if (fullTable) return fullTable;
-  const url = new URL('./data/nuclide-masses.json', import.meta.url);
-  const data = JSON.parse(readFileSync(url, 'utf8')) as { nuclides: [string, number, string, string][] };
+  const data = nuclideMasses as unknown as { nuclides: [string, number, string, string][] };
   fullTable = new Map();
   for (const [symbol, a, mass] of data.nuclides) fullTable.set(`${a}${symbol}`, mass);
   return fullTable;
@@ -46,7 +45,7 @@ function allNuclides(): Map<string, string> {
  * The AME2020 atomic mass of a nuclide, or undefined when AME2020 lists no such nuclide.
  *
  * @example
- * getNuclide('C', 13)?.mass // '13.00335483507'
+ * getNuclide('C', 13)?.mass // '13.00335483534'
  */
 export function getNuclide(symbol: string, massNumber: number): Nuclide | undefined {
   const entry = TABLE[symbol];
