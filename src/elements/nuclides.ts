@@ -1,5 +1,6 @@
 import isotopes from './data/isotopes.json' with { type: 'json' };
 import nuclideMasses from './data/nuclide-masses.json' with { type: 'json' };
+import { fail } from '../errors/pondus-error.js';
 
 /** A nuclide with its AME2020 atomic mass (decimal string, in u). */
 export interface Nuclide {
@@ -26,6 +27,11 @@ const TABLE = isotopes.isotopes as unknown as Record<string, IsotopeEntry>;
 /** Where the isotope data come from. */
 export const NUCLIDE_PROVENANCE: Readonly<Record<string, string>> = Object.freeze({ ...isotopes.provenance });
 
+/** The table's entry for an element symbol; undefined for anything else, '__proto__' included. */
+function entryFor(symbol: string): IsotopeEntry | undefined {
+  return typeof symbol === 'string' && Object.hasOwn(TABLE, symbol) ? TABLE[symbol] : undefined;
+}
+
 let fullTable: Map<string, string> | null = null;
 
 /**
@@ -48,7 +54,7 @@ function allNuclides(): Map<string, string> {
  * getNuclide('C', 13)?.mass // '13.00335483534'
  */
 export function getNuclide(symbol: string, massNumber: number): Nuclide | undefined {
-  const entry = TABLE[symbol];
+  const entry = entryFor(symbol);
   if (!entry) return undefined;
   for (const [a, , , mass] of entry.natural ?? []) if (a === massNumber) return { symbol, massNumber, mass };
   if (entry.longestLived && entry.longestLived[0] === massNumber) return { symbol, massNumber, mass: entry.longestLived[1] };
@@ -63,7 +69,7 @@ export function getNuclide(symbol: string, massNumber: number): Nuclide | undefi
  * naturalIsotopes('Cl').map(i => i.massNumber) // [35, 37]
  */
 export function naturalIsotopes(symbol: string): NaturalIsotope[] {
-  return (TABLE[symbol]?.natural ?? []).map(([massNumber, abundance, uncertainty, mass]) => ({ massNumber, abundance, uncertainty, mass }));
+  return (entryFor(symbol)?.natural ?? []).map(([massNumber, abundance, uncertainty, mass]) => ({ massNumber, abundance, uncertainty, mass }));
 }
 
 /**
@@ -74,12 +80,16 @@ export function naturalIsotopes(symbol: string): NaturalIsotope[] {
  * principalIsotope('Br').massNumber // 79
  */
 export function principalIsotope(symbol: string): Nuclide {
-  const entry = TABLE[symbol];
-  if (!entry) throw new Error(`no isotope data for ${symbol}`);
+  const entry = entryFor(symbol);
+  if (!entry) {
+    const known = symbol === 'D' || symbol === 'T' ? `; write the nuclide as [${symbol === 'D' ? 2 : 3}H]` : '';
+    throw fail({ code: 'UNKNOWN_ELEMENT', message: `no isotope data for '${symbol}': not an element symbol${known}` });
+  }
   if (entry.natural && entry.natural.length > 0) {
     const best = entry.natural.reduce((a, b) => (Number(b[1]) > Number(a[1]) ? b : a));
     return { symbol, massNumber: best[0], mass: best[3] };
   }
-  const [massNumber, mass] = entry.longestLived!;
+  if (!entry.longestLived) throw fail({ code: 'INTERNAL_ERROR', message: `the isotope data for '${symbol}' have neither a natural composition nor a longest-lived isotope` });
+  const [massNumber, mass] = entry.longestLived;
   return { symbol, massNumber, mass };
 }

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { Decimal } from '../../src/exact/decimal.js';
-import { ELEMENTS } from '../../src/elements/element-table.js';
 import { getNuclide, naturalIsotopes, principalIsotope } from '../../src/elements/nuclides.js';
+import { PondusError } from '../../src/errors/pondus-error.js';
 
 describe('nuclide masses and isotopic compositions', () => {
   it.each([
@@ -32,5 +31,26 @@ describe('nuclide masses and isotopic compositions', () => {
     expect(principalIsotope('Fe').massNumber).toBe(56);
     expect(principalIsotope('Hg').massNumber).toBe(202);
     expect(principalIsotope('Tc').massNumber).toBe(98); // no natural composition: the flagged longest-lived isotope
+  });
+});
+
+describe('nuclide look-ups with text that is not an element symbol', () => {
+  it.each(['Xx', 'D', '', '__proto__', 'constructor', 'toString'])('principalIsotope(%j) throws a PondusError', (s) => {
+    expect(() => principalIsotope(s)).toThrow(PondusError);
+    try {
+      principalIsotope(s);
+    } catch (e) {
+      expect((e as PondusError).issues[0].code).toBe('UNKNOWN_ELEMENT');
+    }
+  });
+
+  it('D points to the bracket form of the nuclide', () => {
+    expect(() => principalIsotope('D')).toThrow(/\[2H\]/);
+  });
+
+  it('getNuclide and naturalIsotopes answer nothing for names of object properties', () => {
+    expect(getNuclide('constructor', 1)).toBeUndefined();
+    expect(getNuclide('__proto__', 1)).toBeUndefined();
+    expect(naturalIsotopes('hasOwnProperty')).toEqual([]);
   });
 });
