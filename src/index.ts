@@ -7,8 +7,8 @@
  *
  * @example
  * import { formulaMass, composition } from 'pondus';
- * formulaMass('CuSO4·5H2O').molarMass.toString();            // '249.677'
- * composition('CuSO4·5H2O', { part: 'H2O' }).part?.massPercent // 36.08… %
+ * formulaMass('CuSO4·5H2O').molarMass.toString()                         // '249.677'
+ * composition('CuSO4·5H2O', { part: 'H2O' }).part?.massPercent.toFixed(2) // '36.08'
  */
 
 // errors

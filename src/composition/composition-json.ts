@@ -15,7 +15,8 @@ export interface CompositionJson {
  * The JSON object `pondus composition --json` writes for one result.
  *
  * @example
- * compositionJson(composition('H2O')).elements[0] // { symbol: 'H', count: 2, mass: 2.016, massPercent: 11.190674… }
+ * compositionJson(composition('H2O')).elements[0].symbol // 'H'
+ * String(compositionJson(composition('H2O')).elements[0].massPercent) // '11.19…'
  */
 export function compositionJson(r: CompositionResult): CompositionJson {
   const o: CompositionJson = {

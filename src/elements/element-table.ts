@@ -73,7 +73,8 @@ export function getElement(symbol: string): ElementData | undefined {
  * True when `symbol` is one of the 118 element symbols.
  *
  * @example
- * isElementSymbol('Co') // true; isElementSymbol('CO') // false
+ * isElementSymbol('Co') // true
+ * isElementSymbol('CO') // false
  */
 export function isElementSymbol(symbol: string): boolean {
   return BY_SYMBOL.has(symbol);

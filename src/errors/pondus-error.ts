@@ -5,7 +5,9 @@ import type { Issue } from './issue.js';
  * list of issues found in it; render it with {@link renderError}.
  *
  * @example
- * try { parseFormula('Xx2') } catch (e) { if (e instanceof PondusError) e.issues[0].code } // 'UNKNOWN_ELEMENT'
+ * let code = ''
+ * try { parseFormula('Xx2') } catch (e) { if (e instanceof PondusError) code = e.issues[0].code }
+ * code // 'UNKNOWN_ELEMENT'
  */
 export class PondusError extends Error {
   readonly issues: Issue[];
@@ -31,7 +33,7 @@ export type SafeResult<T> = { success: true; data: T } | { success: false; error
  * Creates a PondusError with a single issue.
  *
  * @example
- * throw fail({ code: 'BAD_COUNT', message: 'a count of zero', column: 3 }, 'H0')
+ * fail({ code: 'BAD_COUNT', message: 'a count of zero', column: 3 }, 'H0').issues[0].column // 3
  */
 export function fail(issue: Issue, input?: string): PondusError {
   return new PondusError([issue], input);
@@ -41,7 +43,8 @@ export function fail(issue: Issue, input?: string): PondusError {
  * Runs `fn` and turns a thrown PondusError into a failed SafeResult; other errors propagate.
  *
  * @example
- * const r = toSafe(() => parseFormula('H2O')); // { success: true, data: … }
+ * toSafe(() => parseFormula('H2O')).success // true
+ * toSafe(() => parseFormula('Xx')).success  // false
  */
 export function toSafe<T>(fn: () => T): SafeResult<T> {
   try {

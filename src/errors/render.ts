@@ -16,7 +16,7 @@ const MAX_SHOWN = 100;
  * column, and any hint. This is the only place errors are turned into text.
  *
  * @example
- * renderError(err) // "error UNKNOWN_ELEMENT: unknown element symbol 'Xx' at column 1\n  Xx2\n  ^^"
+ * renderError(safeParseFormula('Xx2').error) // "error UNKNOWN_ELEMENT: unknown element symbol 'Xx'\n  Xx2\n  ^^"
  */
 export function renderError(error: PondusError, options: RenderOptions = {}): string {
   const em = options.emphasis ?? ((s: string) => s);
@@ -56,7 +56,7 @@ function visible(ch: string): string {
  * The JSON form of an error, as written in place of a failed result in batch output.
  *
  * @example
- * errorJson(err) // { code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Xx'", column: 1 }
+ * errorJson(safeParseFormula('Xx2').error) // { code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Xx'", column: 1 }
  */
 export function errorJson(error: PondusError): { code: string; message: string; column: number | null; hint?: string } {
   const i: Issue = error.first;

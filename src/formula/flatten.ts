@@ -17,7 +17,7 @@ export type AtomCounts = Map<string, Amount>;
  * Totals the atoms of a formula tree.
  *
  * @example
- * flattenFormula(parseFormula('CuSO4·5H2O')) // Map { 'Cu' => 1, 'S' => 1, 'O' => 9, 'H' => 10 }
+ * [...flattenFormula(parseFormula('CuSO4·5H2O'))] // [['Cu', 1], ['S', 1], ['O', 9], ['H', 10]]
  */
 export function flattenFormula(tree: FormulaTree): AtomCounts {
   const out: AtomCounts = new Map();

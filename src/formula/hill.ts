@@ -113,7 +113,7 @@ export function chargeText(charge: number): string {
  * The Hill formula of a count map, with its charge.
  *
  * @example
- * hillFormula(flattenFormula(parseFormula('CuSO4·5H2O')), 0) // 'H10CuO9S'
+ * hillFormula(flattenFormula(parseFormula('CuSO4·5H2O')), 0) // 'CuH10O9S'
  */
 export function hillFormula(counts: AtomCounts, charge = 0, order: readonly string[] = hillOrder(counts.keys())): string {
   return formatFormula(
