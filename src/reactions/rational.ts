@@ -1,6 +1,9 @@
 /**
  * Exact rational numbers on BigInt, for balancing equations without floats.
  */
+import { Decimal } from '../exact/decimal.js';
+import { fail } from '../errors/pondus-error.js';
+
 export class Rational {
   readonly num: bigint;
   readonly den: bigint;
@@ -17,7 +20,7 @@ export class Rational {
    * Rational.of(2n, 4n).toString() // '1/2'
    */
   static of(num: bigint, den = 1n): Rational {
-    if (den === 0n) throw new RangeError('zero denominator');
+    if (den === 0n) throw fail({ code: 'DIVISION_BY_ZERO', message: 'a fraction with a zero denominator' });
     if (den < 0n) {
       num = -num;
       den = -den;
@@ -27,17 +30,23 @@ export class Rational {
   }
 
   /**
-   * An exact decimal as a fraction ('0.95' → 19/20).
+   * An exact decimal as a fraction ('0.95' → 19/20; '1e21' and '2.5E-3' too).
    *
    * @example
    * Rational.fromDecimal('0.95').toString() // '19/20'
+   * Rational.fromDecimal('1e21').toString() // '1000000000000000000000'
    */
   static fromDecimal(text: string): Rational {
-    const neg = text.startsWith('-');
-    const t = neg ? text.slice(1) : text;
-    const [int, frac = ''] = t.split('.');
-    const r = Rational.of(BigInt(int + frac || '0'), 10n ** BigInt(frac.length));
-    return neg ? r.neg() : r;
+    let d: Decimal;
+    try {
+      d = new Decimal(text);
+    } catch {
+      d = new Decimal(NaN);
+    }
+    if (!d.isFinite()) throw fail({ code: 'BAD_NUMBER', message: `'${text}' is not a finite decimal number` });
+    if (d.abs().gt('1e1000') || (!d.isZero() && d.abs().lt('1e-1000'))) throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `'${text}' is beyond the range of exact fractions (10^±1000)` });
+    const [num, den] = d.toFraction();
+    return Rational.of(BigInt(num.toFixed()), BigInt(den.toFixed()));
   }
 
   static readonly ZERO = new Rational(0n, 1n);
@@ -62,7 +71,7 @@ export class Rational {
     return Rational.of(this.num * o.num, this.den * o.den);
   }
   div(o: Rational): Rational {
-    if (o.num === 0n) throw new RangeError('division by zero');
+    if (o.num === 0n) throw fail({ code: 'DIVISION_BY_ZERO', message: 'division by zero' });
     return Rational.of(this.num * o.den, this.den * o.num);
   }
   toString(): string {
@@ -91,7 +100,8 @@ export function lcm(a: bigint, b: bigint): bigint {
  * to reduced row echelon form. Each basis vector has one free column set to 1.
  *
  * @example
- * nullSpace([[r(2), r(0), r(-2)], [r(0), r(2), r(-1)]]) // [[1, 1/2, 1]]
+ * const r = (n) => Rational.of(BigInt(n))
+ * nullSpace([[r(2), r(0), r(-2)], [r(0), r(2), r(-1)]], 3).map((v) => v.map(String)) // [['1', '1/2', '1']]
  */
 export function nullSpace(matrix: Rational[][], columns: number): Rational[][] {
   const m = matrix.map((row) => [...row]);

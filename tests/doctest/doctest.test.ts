@@ -62,6 +62,17 @@ function splitCheck(line: string): [string, string] | null {
   return [line.slice(0, at).trim().replace(/;$/, ''), line.slice(at + 2).trim()];
 }
 
+/** The value of a JS literal, or undefined when the text is not one. */
+function literal(text: string): { value: unknown } | undefined {
+  try {
+    return { value: new Function(`return (${text});`)() };
+  } catch {
+    return undefined;
+  }
+}
+
+const show = (v: unknown) => JSON.stringify(v, (_k, x) => (typeof x === 'bigint' ? `${x}n` : x));
+
 function plain(v: unknown): unknown {
   if (v instanceof Decimal) return v.toString();
   return v;
@@ -114,14 +125,11 @@ describe('doc-comment examples', () => {
         continue;
       }
       const [code, expectedText] = check;
-      let expected: unknown;
-      try {
-        expected = new Function(`return (${expectedText});`)();
-      } catch {
-        throw new Error(`${ex.file}:${ex.line}: the expected value '${expectedText}' is not a literal`);
-      }
+      // a remark in brackets may follow the expected value: `// false (no arrow)`
+      const expected = literal(expectedText) ?? literal(expectedText.replace(/\s*\([^()]*\)$/, ''));
+      if (expected === undefined) throw new Error(`${ex.file}:${ex.line}: the expected value '${expectedText}' is not a literal`);
       const actual = new Function(...names, `${prelude}\nreturn (${code});`)(...values);
-      expect(matches(actual, expected), `${ex.file}:${ex.line}: ${code} gave ${JSON.stringify(plain(actual))}, the example says ${expectedText}`).toBe(true);
+      expect(matches(actual, expected.value), `${ex.file}:${ex.line}: ${code} gave ${show(plain(actual))}, the example says ${expectedText}`).toBe(true);
       checks++;
     }
     expect(checks, `${ex.file}:${ex.line}: the example checks nothing`).toBeGreaterThan(0);
