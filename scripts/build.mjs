@@ -19,7 +19,8 @@ writeFileSync(`${root}dist/types-cjs/package.json`, '{ "type": "commonjs" }\n');
 // The full AME2020 table (3,557 nuclides) is needed only when a formula names a nuclide outside
 // the natural set. The library carries it as a JSON string, parsed on first use, so it reads no
 // file and runs wherever JavaScript runs. The CLI, which may touch the file system, reads it from
-// dist/data on first use instead: that keeps 115 kB out of every start-up.
+// dist/data on first use instead (`where` is that folder, from the bundle's): that keeps 115 kB
+// out of every start-up.
 const lazyNuclideTable = (where) => ({
   name: 'lazy-nuclide-table',
   setup(b) {
@@ -27,7 +28,7 @@ const lazyNuclideTable = (where) => ({
       contents:
         where === 'embedded'
           ? `const text = ${JSON.stringify(readFileSync(args.path, 'utf8'))};\nlet data;\nexport default { get nuclides() { return (data ??= JSON.parse(text)).nuclides; } };`
-          : "let data;\nexport default { get nuclides() { return (data ??= JSON.parse(require('node:fs').readFileSync(require('node:path').join(__dirname, 'data', 'nuclide-masses.json'), 'utf8'))).nuclides; } };",
+          : `let data;\nexport default { get nuclides() { return (data ??= JSON.parse(require('node:fs').readFileSync(require('node:path').join(__dirname, ${JSON.stringify(where)}, 'nuclide-masses.json'), 'utf8'))).nuclides; } };`,
       loader: 'js',
     }));
   },
@@ -84,7 +85,20 @@ await build({
   minifySyntax: true,
   minifyIdentifiers: !process.env.PONDUS_NO_MINIFY,
   legalComments: 'none',
-  plugins: [lazyChildProcess, plainSupportsColor, lazyNuclideTable('file')],
+  plugins: [lazyChildProcess, plainSupportsColor, lazyNuclideTable('data')],
+  logLevel: 'warning',
+});
+
+// The same CLI with its `main(argv, io)` exported, for the fuzz harness, which runs it in a
+// worker thread it can stop when an input hangs.
+await build({
+  entryPoints: [`${root}src/cli/main.ts`],
+  outfile: `${root}dist/test/cli-main.cjs`,
+  bundle: true,
+  platform: 'node',
+  format: 'cjs',
+  target: 'node20',
+  plugins: [lazyNuclideTable('../data')],
   logLevel: 'warning',
 });
 

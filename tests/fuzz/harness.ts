@@ -1,0 +1,160 @@
+// The fuzz harness: generated inputs for every command, run through the CLI in a worker thread
+// (stopped and replaced when an input hangs), each run checked against the batch contract.
+import fc from 'fast-check';
+import { join } from 'node:path';
+import { Worker } from 'node:worker_threads';
+import { anyText, equationText, expressionText, formulaText, jsonLine, keyValueSet, quantityText } from './generators.js';
+
+export interface Case {
+  command: string;
+  args: string[];
+  input?: string;
+}
+
+export interface Outcome {
+  status: number;
+  stdout: string;
+  stderr: string;
+  ms: number;
+  hung?: boolean;
+}
+
+/** What a run may not do. Each kind is counted separately. */
+export type Violation = 'hang' | 'slow' | 'bad-exit' | 'internal-error' | 'thrown' | 'stack-overflow' | 'bad-json' | 'null-or-nan' | 'row-count' | 'control-in-table' | 'formula-trigger';
+
+const either = <T>(...a: fc.Arbitrary<T>[]) => fc.oneof(...a);
+const formulaOrText = either(formulaText, formulaText, anyText);
+
+/** A command case for each command: arguments, or standard input with '-'. */
+export const COMMANDS: Record<string, fc.Arbitrary<Case>> = {
+  mass: fc.tuple(fc.array(formulaOrText, { minLength: 1, maxLength: 4 }), fc.constantFrom('--json', '--csv', '--table', '--abbreviations'), fc.boolean()).map(([xs, fmt, stdin]) => (stdin ? { command: 'mass', args: ['mass', fmt === '--table' ? '--json' : fmt, '-'], input: xs.join('\n') } : { command: 'mass', args: ['mass', ...(fmt === '--table' ? [] : [fmt]), '--', ...xs] })),
+  composition: fc.tuple(formulaOrText, fc.constantFrom([], ['--part', 'H2O'], ['--part', 'SO4'], ['--mixture']), fc.constantFrom('--json', '--csv')).map(([x, extra, fmt]) => ({ command: 'composition', args: ['composition', fmt, ...extra, '--', x] })),
+  calc: fc.tuple(either(expressionText, anyText), fc.constantFrom('--json', '--csv', '--explain')).map(([x, fmt]) => ({ command: 'calc', args: ['calc', fmt, '--', x] })),
+  empirical: fc.tuple(either(keyValueSet, jsonLine, anyText), fc.boolean()).map(([x, stdin]) => (stdin ? { command: 'empirical', args: ['empirical', '--json', '-'], input: x } : { command: 'empirical', args: ['empirical', '--json', '--', x] })),
+  analysis: fc.tuple(formulaOrText, either(keyValueSet, anyText), fc.constantFrom([], ['--solvents', 'water,DCM'], ['--solvents', 'THF', '--max', '1'])).map(([f, found, extra]) => ({ command: 'analysis', args: ['analysis', '--json', '--found', found, ...extra, '--', f] })),
+  balance: either(equationText, anyText).map((x) => ({ command: 'balance', args: ['balance', '--json', '--', x] })),
+  react: fc.tuple(equationText, fc.tuple(formulaText, quantityText)).map(([eq, [s, q]]) => ({ command: 'react', args: ['react', '--json', eq, '--amount', `${s}=${q}`] })),
+  prepare: fc.tuple(formulaOrText, quantityText, quantityText, fc.option(quantityText, { nil: undefined })).map(([f, c, v, p]) => ({ command: 'prepare', args: ['prepare', '--json', f, '--concentration', c, '--volume', v, ...(p ? ['--purity', p] : [])] })),
+  dilute: fc.tuple(quantityText, quantityText, quantityText).map(([a, b, v]) => ({ command: 'dilute', args: ['dilute', '--json', '--', a, '--to', b, '--volume', v] })),
+  gravimetric: fc.tuple(formulaOrText, formulaOrText, fc.option(quantityText, { nil: undefined })).map(([a, w, m]) => ({ command: 'gravimetric', args: ['gravimetric', '--json', a, '--weighed', w, ...(m ? ['--mass', m] : [])] })),
+  basis: fc.tuple(formulaOrText, formulaOrText, fc.option(quantityText, { nil: undefined })).map(([a, b, v]) => ({ command: 'basis', args: ['basis', '--json', a, '--to', b, ...(v ? ['--value', v] : [])] })),
+  salt: fc.tuple(formulaOrText, formulaOrText, fc.option(quantityText, { nil: undefined })).map(([s, p, d]) => ({ command: 'salt', args: ['salt', '--json', s, '--parent', p, ...(d ? ['--dose', d] : [])] })),
+  combustion: fc.tuple(quantityText, quantityText, quantityText).map(([s, c, h]) => ({ command: 'combustion', args: ['combustion', '--json', s, '--co2', c, '--h2o', h] })),
+  candidates: fc.tuple(fc.double({ min: -10, max: 1200, noNaN: true }), fc.constantFrom('1', '3', '10', '0', '-1', 'x')).map(([m, ppm]) => ({ command: 'candidates', args: ['candidates', '--json', String(Math.round(m * 1e5) / 1e5), '--ppm', ppm, '--limit', '20'] })),
+};
+
+/** Checks one run against the contract; returns what it broke. */
+export function violations(c: Case, o: Outcome, slowMs: number): Violation[] {
+  const v: Violation[] = [];
+  if (o.hung) return ['hang'];
+  if (o.ms > slowMs) v.push('slow');
+  if (o.status === -1) v.push('thrown');
+  else if (![0, 1, 2].includes(o.status)) v.push('bad-exit');
+  if (/internal error|INTERNAL_ERROR/.test(o.stderr + o.stdout)) v.push('internal-error');
+  if (/Maximum call stack|RangeError/.test(o.stderr + o.stdout)) v.push('stack-overflow');
+  const json = c.args.includes('--json');
+  if (json && o.stdout.trim() !== '') {
+    const lines = o.stdout.split('\n').filter((l) => l.trim() !== '' && l.startsWith('{'));
+    for (const l of lines) {
+      try {
+        const row = JSON.parse(l) as unknown;
+        if (hasNullOrNaN(row)) v.push('null-or-nan');
+      } catch {
+        v.push('bad-json');
+        break;
+      }
+    }
+    if (c.input !== undefined && c.args.includes('-') && o.status !== 2) {
+      const expected = c.input.replace(/\r?\n$/, '').split(/\r?\n/).length;
+      if (lines.length !== expected) v.push('row-count');
+    }
+  }
+  if (c.args.includes('--csv') && /(^|[,\n])["]?[=+@\t\r]/.test(o.stdout)) v.push('formula-trigger');
+  if (!json && !c.args.includes('--csv') && /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/.test(o.stdout)) v.push('control-in-table');
+  return [...new Set(v)];
+}
+
+function hasNullOrNaN(x: unknown, key = ''): boolean {
+  // null only where the contract gives it a meaning: an error without a column, a nominal mass
+  // that is not defined for non-integer counts (with a note)
+  if (x === null) return key !== 'column' && key !== 'nominalMass';
+  if (typeof x === 'number') return !Number.isFinite(x);
+  if (Array.isArray(x)) return x.some((y) => hasNullOrNaN(y));
+  if (typeof x === 'object') return Object.entries(x as object).some(([k, y]) => hasNullOrNaN(y, k));
+  return false;
+}
+
+/** A worker running the CLI, replaced when a run takes longer than `hangMs`. */
+export class CliWorker {
+  private worker: Worker | null = null;
+  private next = 0;
+
+  constructor(private readonly hangMs: number) {}
+
+  private start(): Worker {
+    this.worker ??= new Worker(join(__dirname, 'worker.cjs'), { resourceLimits: { maxOldGenerationSizeMb: 1024, stackSizeMb: 4 } });
+    return this.worker;
+  }
+
+  run(c: Case): Promise<Outcome> {
+    const w = this.start();
+    const id = this.next++;
+    return new Promise((resolve) => {
+      const timer = setTimeout(() => {
+        w.removeAllListeners('message');
+        void w.terminate();
+        this.worker = null;
+        resolve({ status: -1, stdout: '', stderr: '', ms: this.hangMs, hung: true });
+      }, this.hangMs);
+      const onError = (e: Error) => {
+        clearTimeout(timer);
+        this.worker = null;
+        resolve({ status: -1, stdout: '', stderr: `worker died: ${e.message}`, ms: 0 });
+      };
+      w.once('error', onError);
+      w.on('message', (m: Outcome & { id: number }) => {
+        if (m.id !== id) return;
+        clearTimeout(timer);
+        w.removeAllListeners('message');
+        w.off('error', onError);
+        resolve(m);
+      });
+      w.postMessage({ id, args: c.args, input: c.input ?? '' });
+    });
+  }
+
+  async close(): Promise<void> {
+    if (this.worker) await this.worker.terminate();
+    this.worker = null;
+  }
+}
+
+export interface FuzzReport {
+  runs: number;
+  counts: Partial<Record<Violation, number>>;
+  examples: { violation: Violation; case: Case; stderr: string }[];
+}
+
+/** Runs `runsPerCommand` generated cases for each command and counts the violations. */
+export async function fuzz(options: { seed: number; runsPerCommand: number; slowMs: number; hangMs: number; commands?: string[] }): Promise<FuzzReport> {
+  const worker = new CliWorker(options.hangMs);
+  const report: FuzzReport = { runs: 0, counts: {}, examples: [] };
+  try {
+    for (const [name, arb] of Object.entries(COMMANDS)) {
+      if (options.commands && !options.commands.includes(name)) continue;
+      const runs = name === 'candidates' ? Math.max(1, Math.round(options.runsPerCommand / 20)) : options.runsPerCommand;
+      const cases = fc.sample(arb, { seed: options.seed + name.length * 7919, numRuns: runs });
+      for (const c of cases) {
+        const o = await worker.run(c);
+        report.runs++;
+        for (const v of violations(c, o, options.slowMs)) {
+          report.counts[v] = (report.counts[v] ?? 0) + 1;
+          if (report.examples.filter((e) => e.violation === v).length < 5) report.examples.push({ violation: v, case: c, stderr: o.stderr.slice(0, 300) });
+        }
+      }
+    }
+  } finally {
+    await worker.close();
+  }
+  return report;
+}
