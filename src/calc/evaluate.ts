@@ -13,6 +13,7 @@ import { molarMassUncertainty } from '../mass/uncertainty.js';
 import { dividedBy, sigFigsOf, type Measured } from '../sigfig/measured.js';
 import { add, divide, multiply, negate, power, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
 import { readNumber } from '../sigfig/read-number.js';
+import { displayMeasured } from '../sigfig/round.js';
 import { isPercent, unitOf } from '../sigfig/units.js';
 import type { CalcTree, ExprNode } from './tree.js';
 
@@ -161,7 +162,7 @@ function ratio(n: Extract<ExprNode, { kind: 'ratio' }>, ctx: Ctx): Quantity {
   const value = dividedBy(a, b);
   const q = quantity(value, unit);
   const exact = a.lsd === null && b.lsd === null;
-  const shown = `${value.value.toFixed()}${unit ? ` ${unit.symbol}` : ''}`;
+  const shown = `${displayMeasured(value).text}${unit ? ` ${unit.symbol}` : ''}`;
   const wv = unit ? '' : `; for a solid in a liquid (${n.parts} g in ${n.whole} mL) write ${n.parts}:${n.whole} g/mL`;
   ctx.notes.push(`${n.text} is read as the ratio ${n.parts}/${n.whole} = ${shown}, ${exact ? 'exact (the numbers of a ratio are defined)' : 'with the figures of its measured part'}${wv}`);
   return q;

@@ -54,6 +54,9 @@ export interface Display {
   belowPrecision: boolean;
 }
 
+/** Exact values with this many significant digits are taken as non-terminating (1/3) when shown. */
+const EXACT_DIGITS_LIMIT = 40;
+
 const SUPERSCRIPT_DIGITS = '⁰¹²³⁴⁵⁶⁷⁸⁹';
 
 function superscript(n: number): string {
@@ -83,7 +86,10 @@ function superscript(n: number): string {
  */
 export function displayMeasured(m: Measured, rounding: RoundingMode = 'half-even'): Display {
   if (m.lsd === null) {
-    return { text: m.value.toFixed(), value: m.value, sigFigs: null, lsd: null, belowPrecision: false };
+    // an exact quotient that does not terminate (1/3) fills the working precision: show
+    // 12 figures and an ellipsis rather than 50 digits that look exact
+    const text = m.value.sd() >= EXACT_DIGITS_LIMIT ? `${m.value.toSignificantDigits(12, mode(rounding)).toFixed()}…` : m.value.toFixed();
+    return { text, value: m.value, sigFigs: null, lsd: null, belowPrecision: false };
   }
   let value: Decimal;
   let lsd: number;

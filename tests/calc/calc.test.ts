@@ -91,6 +91,16 @@ describe('calc: defined numbers are exact', () => {
   });
 });
 
+describe('calc: exact results', () => {
+  it('an exact quotient that does not terminate is shown cut, with an ellipsis', () => {
+    // 1/3 = 0.333…; 1/8 = 0.125 terminates
+    expect(calc('1/3').display).toBe('0.333333333333…');
+    expect(calc('1:3').display).toBe('0.333333333333…');
+    expect(calc('1/8').display).toBe('0.125');
+    expect(calc('1/3').sigFigs).toBeNull();
+  });
+});
+
 describe('the shared quantity reader', () => {
   it('passes the ambiguous-zeros note to every command that gives it a list', () => {
     const notes: Note[] = [];
