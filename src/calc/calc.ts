@@ -66,7 +66,7 @@ export function calc(input: string, options: CalcOptions = {}): CalcResult {
     rounded = new Decimal(figure.split(' ± ')[0]);
     sigFigs = null;
   }
-  const notes = [...ev.notes];
+  const notes = [...new Set(ev.notes)]; // the same remark about a number written twice is said once
   if (shown.belowPrecision && !uncertainty) {
     const top = tree.expr.kind === 'binary' ? tree.expr.op : null;
     notes.push(belowPrecisionNote(value, shown.lsd ?? 0, unitText, top === '-' ? 'the difference' : top === '+' ? 'the sum' : 'the result'));

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { calc, calcJson } from '../../src/calc/calc.js';
-import { MASS, measure, measureAs, PURE } from '../../src/calc/measure.js';
+import { MASS, measure, measureAs, PURE, readQuantity } from '../../src/calc/measure.js';
 import type { Note } from '../../src/errors/issue.js';
 import { displayQuantity } from '../../src/sigfig/display-quantity.js';
 
@@ -117,5 +117,23 @@ describe('the shared quantity reader', () => {
 
   it('reads the figures of a product as rounded', () => {
     expect(displayQuantity(measure('99.96 mL of 0.100 M'), 'mol').text).toBe('0.0100 mol');
+  });
+});
+
+describe('calc: notes', () => {
+  it('says the same remark once when a number is written twice', () => {
+    const r = calc('1300 g - 1300 g');
+    expect(r.notes.filter((n) => n.includes('trailing zeros of 1300'))).toHaveLength(1);
+    expect(r.sigFigs).toBe(0);
+  });
+});
+
+describe('readQuantity', () => {
+  it('returns the reading notes with the quantity', () => {
+    const r = readQuantity('1300 mg', [MASS], 'the dose');
+    expect(displayQuantity(r.quantity, 'mg').text).toBe('1.3 × 10³ mg');
+    expect(r.notes.map((n) => n.message)).toEqual(['the dose: the trailing zeros of 1300 are read as not significant (2 significant figures); write 1300. or use scientific notation if they are']);
+    expect(readQuantity('13.0 mg', [MASS], 'the dose').notes).toEqual([]);
+    expect(() => readQuantity('13.0 mL', [MASS], 'the dose')).toThrow(/the dose must be a mass/);
   });
 });
