@@ -164,6 +164,7 @@ function ratio(n: Extract<ExprNode, { kind: 'ratio' }>, ctx: Ctx): Quantity {
   const exact = a.lsd === null && b.lsd === null;
   const shown = `${displayMeasured(value).text}${unit ? ` ${unit.symbol}` : ''}`;
   const wv = unit ? '' : `; for a solid in a liquid (${n.parts} g in ${n.whole} mL) write ${n.parts}:${n.whole} g/mL`;
+  ctx.steps.push({ text: `${n.text} = ${n.parts} ÷ ${n.whole}`, rule: exact ? 'a ratio of whole numbers is defined: exact' : `a quotient keeps the fewest significant figures: ${sigFigsOf(value)}` });
   ctx.notes.push(`${n.text} is read as the ratio ${n.parts}/${n.whole} = ${shown}, ${exact ? 'exact (the numbers of a ratio are defined)' : 'with the figures of its measured part'}${wv}`);
   return q;
 }
