@@ -24,7 +24,12 @@ export interface CalcResult {
   rounded: Decimal;
   /** The reported figure then the unit: '10.9 g', '2.4 × 10³ mg'. */
   display: string;
-  /** Significant figures of the reported figure (null for an exact result). */
+  /**
+   * Significant figures of the reported figure, counted on the rounded value:
+   * null for an exact result (or one given with ± uncertainty); 0 when a
+   * measured result rounds to zero (`10.0 g - 9.95 g`), which is below the
+   * precision of the data — a note then says so.
+   */
   sigFigs: number | null;
   /** Unit symbol ('' for a pure number). */
   unit: string;
@@ -61,7 +66,24 @@ export function calc(input: string, options: CalcOptions = {}): CalcResult {
     rounded = new Decimal(figure.split(' ± ')[0]);
     sigFigs = null;
   }
-  return { input, value, rounded, display, sigFigs, unit: unitText, uncertainty, steps: ev.steps, notes: ev.notes };
+  const notes = [...new Set(ev.notes)]; // the same remark about a number written twice is said once
+  if (shown.belowPrecision && !uncertainty) {
+    const top = tree.expr.kind === 'binary' ? tree.expr.op : null;
+    notes.push(belowPrecisionNote(value, shown.lsd ?? 0, unitText, top === '-' ? 'the difference' : top === '+' ? 'the sum' : 'the result'));
+  }
+  return { input, value, rounded, display, sigFigs, unit: unitText, uncertainty, steps: ev.steps, notes };
+}
+
+/**
+ * The note for a measured result that rounds to zero: no significant figure is left.
+ *
+ * @example
+ * belowPrecisionNote(new Decimal('0.05'), -1, 'g')
+ * // 'the result (0.05 g unrounded) is below the precision of the data (its last significant digit is at 0.1 g): it rounds to zero and has no significant figures'
+ */
+export function belowPrecisionNote(value: Decimal, lsd: number, unit: string, what = 'the result'): string {
+  const u = unit ? ` ${unit}` : '';
+  return `${what} (${value.toFixed()}${u} unrounded) is below the precision of the data (its last significant digit is at ${new Decimal(10).pow(lsd).toFixed()}${u}): it rounds to zero and has no significant figures`;
 }
 
 /**

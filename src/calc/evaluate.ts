@@ -10,10 +10,11 @@ import { columnOf } from '../formula-parser/prescan.js';
 import { formulaMass } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { molarMassUncertainty } from '../mass/uncertainty.js';
-import { sigFigsOf } from '../sigfig/measured.js';
+import { dividedBy, sigFigsOf, type Measured } from '../sigfig/measured.js';
 import { add, divide, multiply, negate, power, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
 import { readNumber } from '../sigfig/read-number.js';
-import { unitOf } from '../sigfig/units.js';
+import { displayMeasured } from '../sigfig/round.js';
+import { isPercent, unitOf } from '../sigfig/units.js';
 import type { CalcTree, ExprNode } from './tree.js';
 
 /** One step of a calculation, for --explain. */
@@ -57,6 +58,7 @@ function hasPlusMinus(n: ExprNode): boolean {
     case 'number':
       return n.plusMinus !== null;
     case 'formulaMass':
+    case 'ratio':
       return false;
     case 'binary':
       return hasPlusMinus(n.left) || hasPlusMinus(n.right);
@@ -85,6 +87,8 @@ function evalNode(n: ExprNode, ctx: Ctx): Quantity {
       return withInput(ctx, () => literal(n, ctx));
     case 'formulaMass':
       return withInput(ctx, () => formulaMassQuantity(n, ctx));
+    case 'ratio':
+      return withInput(ctx, () => ratio(n, ctx));
     case 'negate':
       return negate(evalNode(n.operand, ctx));
     case 'power': {
@@ -121,8 +125,12 @@ function literal(n: Extract<ExprNode, { kind: 'number' }>, ctx: Ctx): Quantity {
   const column = col(ctx, n.start);
   const num = readNumber(n.text, column);
   const unit = n.unit ? unitOf(n.unit, column) : null;
-  // a bare integer without a unit is an exact number (a count, a factor, the 100 of a percentage)
-  const isExact = !unit && /^[0-9]+$/.test(n.text) && n.plusMinus === null;
+  const whole = /^[0-9]+$/.test(n.text) && n.plusMinus === null;
+  // a bare integer without a unit is an exact number (a count, a factor, the 100 of a percentage);
+  // so is 100 % written without a decimal point: the defined whole of a percentage
+  const definedHundred = whole && unit !== null && isPercent(unit) && n.text === '100';
+  const isExact = (whole && !unit) || definedHundred;
+  if (definedHundred) ctx.notes.push(`${n.text} ${unit.symbol} is read as exactly 100 ${unit.symbol} (the defined whole of a percentage, it does not limit the figures); write 100.0 ${unit.symbol} for a measured value`);
   if (num.ambiguous && !isExact) ctx.notes.push(`the trailing zeros of ${n.text} are read as not significant (${sigFigsOf(num)} significant figure${sigFigsOf(num) === 1 ? '' : 's'}); write ${n.text}. or use scientific notation if they are`);
   const q = quantity(isExact ? { value: num.value, lsd: null } : num, unit);
   if (n.plusMinus !== null) {
@@ -133,6 +141,31 @@ function literal(n: Extract<ExprNode, { kind: 'number' }>, ctx: Ctx): Quantity {
     ctx.inputs.set(id, u.value.times(scale));
     q.grad.set(id, new Decimal(1));
   }
+  return q;
+}
+
+/**
+ * A ratio `a:b` is a / b. Whole numbers in a ratio are defined (ratio strength
+ * 1:1000 is 1 part in 1000 exactly); a part written with a decimal point is a
+ * measured number and keeps its figures.
+ */
+function ratio(n: Extract<ExprNode, { kind: 'ratio' }>, ctx: Ctx): Quantity {
+  const column = col(ctx, n.start);
+  const part = (text: string): Measured => {
+    const r = readNumber(text, column);
+    return /^[0-9]+$/.test(text) ? { value: r.value, lsd: null } : r;
+  };
+  const a = part(n.parts);
+  const b = part(n.whole);
+  if (b.value.isZero()) throw fail({ code: 'DIVISION_BY_ZERO', message: `the ratio ${n.text} has 0 as its second number`, column });
+  const unit = n.unit ? unitOf(n.unit, column) : null;
+  const value = dividedBy(a, b);
+  const q = quantity(value, unit);
+  const exact = a.lsd === null && b.lsd === null;
+  const shown = `${displayMeasured(value).text}${unit ? ` ${unit.symbol}` : ''}`;
+  const wv = unit ? '' : `; for a solid in a liquid (${n.parts} g in ${n.whole} mL) write ${n.parts}:${n.whole} g/mL`;
+  ctx.steps.push({ text: `${n.text} = ${n.parts} ÷ ${n.whole}`, rule: exact ? 'a ratio of whole numbers is defined: exact' : `a quotient keeps the fewest significant figures: ${sigFigsOf(value)}` });
+  ctx.notes.push(`${n.text} is read as the ratio ${n.parts}/${n.whole} = ${shown}, ${exact ? 'exact (the numbers of a ratio are defined)' : 'with the figures of its measured part'}${wv}`);
   return q;
 }
 

@@ -6,11 +6,12 @@
  *   product     := unary ((Times | Divide) unary)*
  *   unary       := (Minus | Plus) unary | power
  *   power       := atom (Caret Minus? NumberLiteral)?
- *   atom        := quantity | FormulaMass | '(' sum ')'
+ *   atom        := quantity | ratio | FormulaMass | '(' sum ')'
  *   quantity    := NumberLiteral (PlusMinus NumberLiteral)? Unit?
+ *   ratio       := Ratio Unit?            (1:1000, a ratio strength)
  */
 import { CstParser } from 'chevrotain';
-import { calcTokens, Caret, Divide, FormulaMass, LParen, Minus, NumberLiteral, Plus, PlusMinus, RParen, Times, To, UnitToken } from './tokens.js';
+import { calcTokens, Caret, Divide, FormulaMass, LParen, Minus, NumberLiteral, Plus, PlusMinus, Ratio, RParen, Times, To, UnitToken } from './tokens.js';
 
 export class CalcGrammar extends CstParser {
   constructor() {
@@ -66,6 +67,7 @@ export class CalcGrammar extends CstParser {
   public atom = this.RULE('atom', () => {
     this.OR([
       { ALT: () => this.SUBRULE(this.quantity) },
+      { ALT: () => this.SUBRULE(this.ratio) },
       { ALT: () => this.CONSUME(FormulaMass) },
       {
         ALT: () => {
@@ -84,6 +86,11 @@ export class CalcGrammar extends CstParser {
       this.CONSUME2(NumberLiteral);
     });
     this.OPTION2(() => this.CONSUME(UnitToken));
+  });
+
+  public ratio = this.RULE('ratio', () => {
+    this.CONSUME(Ratio);
+    this.OPTION(() => this.CONSUME(UnitToken));
   });
 }
 

@@ -20,7 +20,7 @@ export function measure(text: string, what = 'the quantity', notes?: Note[]): Qu
   const expr = text.replace(/\s+of\s+/g, ' * ');
   try {
     const ev = evaluate(parseExpression(expr));
-    for (const n of ev.notes) notes?.push({ code: 'MEASUREMENT', message: `${what}: ${n}` });
+    for (const n of new Set(ev.notes)) notes?.push({ code: 'MEASUREMENT', message: `${what}: ${n}` });
     return ev.result;
   } catch (e) {
     if (e instanceof PondusError) throw new PondusError(e.issues.map((i) => ({ ...i, message: `${what}: ${i.message}` })), text);
@@ -40,6 +40,33 @@ export function measureAs(text: string, dims: Dims[], what: string, notes?: Note
     throw fail({ code: 'BAD_AMOUNT', message: `${what} must be ${dims.map(dimsName).join(' or ')}; '${text}' is ${dimsName(q.dims)}${baseUnitText(q.dims) ? ` (${baseUnitText(q.dims)})` : ''}` }, text);
   }
   return q;
+}
+
+/** A quantity read from text, with the remarks made while reading it. */
+export interface ReadQuantity {
+  quantity: Quantity;
+  /**
+   * How the text was read, where it could be read two ways: trailing zeros
+   * without a decimal point (`1300 mg`), 100 % taken as the defined whole, a
+   * ratio such as 1:1000. Each message starts with `what`. A command must show
+   * these with its result (text, JSON and CSV).
+   */
+  notes: Note[];
+}
+
+/**
+ * Reads a quantity of one of the given dimensions and returns the notes with
+ * it, so that they cannot be dropped by forgetting to pass a list: prefer this
+ * to {@link measureAs} in new code.
+ *
+ * @example
+ * readQuantity('1300 mg', [MASS], 'the dose').notes[0].message
+ * // 'the dose: the trailing zeros of 1300 are read as not significant (2 significant figures); write 1300. or use scientific notation if they are'
+ */
+export function readQuantity(text: string, dims: Dims[], what: string): ReadQuantity {
+  const notes: Note[] = [];
+  const quantity = measureAs(text, dims, what, notes);
+  return { quantity, notes };
 }
 
 export const MASS: Dims = [1, 0, 0];

@@ -2,7 +2,7 @@
  * Tokens of the calculator's expression language. Patterns only.
  */
 import { createToken, Lexer, type TokenType } from 'chevrotain';
-import { UNIT_SYMBOLS } from '../sigfig/units.js';
+import { UNIT_SPELLINGS } from '../sigfig/units.js';
 
 /** `M(CuSO4·5H2O)`: the molar mass of a formula, brackets inside it balanced. */
 function matchFormulaMass(text: string, offset: number): RegExpExecArray | null {
@@ -19,12 +19,16 @@ function matchFormulaMass(text: string, offset: number): RegExpExecArray | null 
   return null;
 }
 
-const unitSpellings = [...UNIT_SYMBOLS, 'ug', 'μg', 'umol', 'μmol', 'uL', 'μL', 'ul', 'ml', 'l', 'uM', 'μM', 'mol/l', 'g/l', 'mg/l', 'mg/ml', 'ug/mL', 'g/ml']
+// every spelling the unit table accepts except the ones with symbols the calculator uses as operators
+const unitSpellings = [...new Set(UNIT_SPELLINGS)]
+  .filter((s) => !/[·⁻¹]/.test(s))
   .sort((a, b) => b.length - a.length)
-  .map((s) => s.replace(/[/%]/g, (c) => `\\${c}`));
+  .map((s) => s.replace(/[.*+?^${}()|[\]\\/%]/g, (c) => `\\${c}`));
 
 export const WhiteSpace = createToken({ name: 'WhiteSpace', pattern: /[ \t\u00a0]+/, group: Lexer.SKIPPED });
 export const FormulaMass = createToken({ name: 'FormulaMass', pattern: { exec: matchFormulaMass }, line_breaks: false, start_chars_hint: ['M'] });
+/** A ratio such as `1:1000` (ratio strength): two numbers around a colon. */
+export const Ratio = createToken({ name: 'Ratio', pattern: /(?:[0-9]+\.?[0-9]*|\.[0-9]+)[ \t]*:[ \t]*(?:[0-9]+\.?[0-9]*|\.[0-9]+)/ });
 export const NumberLiteral = createToken({ name: 'NumberLiteral', pattern: /(?:[0-9]+\.?[0-9]*|\.[0-9]+)(?:[eE][+-]?[0-9]+)?/ });
 export const PlusMinus = createToken({ name: 'PlusMinus', pattern: /±|\+\/-|\+-/ });
 export const To = createToken({ name: 'To', pattern: /(?:to|in)(?![A-Za-z])/ });
@@ -37,7 +41,7 @@ export const Caret = createToken({ name: 'Caret', pattern: /\^/ });
 export const LParen = createToken({ name: 'LParen', pattern: /\(/ });
 export const RParen = createToken({ name: 'RParen', pattern: /\)/ });
 
-export const calcTokens: TokenType[] = [WhiteSpace, FormulaMass, NumberLiteral, PlusMinus, To, UnitToken, Plus, Minus, Times, Divide, Caret, LParen, RParen];
+export const calcTokens: TokenType[] = [WhiteSpace, FormulaMass, Ratio, NumberLiteral, PlusMinus, To, UnitToken, Plus, Minus, Times, Divide, Caret, LParen, RParen];
 
 let lexer: Lexer | null = null;
 

@@ -85,12 +85,21 @@ export class ExprBuilder {
   atom(ctx: Ctx): ExprNode {
     const q = nodes(ctx, 'quantity')[0];
     if (q) return this.visit(q) as ExprNode;
+    const r = nodes(ctx, 'ratio')[0];
+    if (r) return this.visit(r) as ExprNode;
     const fm = toks(ctx, 'FormulaMass')[0];
     if (fm) return { kind: 'formulaMass', formula: fm.image.slice(2, -1), start: fm.startOffset, end: end(fm) };
     const open = toks(ctx, 'LParen')[0];
     const close = toks(ctx, 'RParen')[0];
     const inner = this.visit(nodes(ctx, 'sum')[0]) as ExprNode;
     return { ...inner, start: open.startOffset, end: end(close) };
+  }
+
+  ratio(ctx: Ctx): ExprNode {
+    const r = toks(ctx, 'Ratio')[0];
+    const unit = toks(ctx, 'Unit')[0];
+    const [parts, whole] = r.image.split(':').map((x) => x.trim());
+    return { kind: 'ratio', text: r.image, parts, whole, unit: unit?.image ?? null, start: r.startOffset, end: end(unit ?? r) };
   }
 
   quantity(ctx: Ctx): ExprNode {

@@ -17,9 +17,14 @@ export interface QuantityDisplay {
   value: Decimal;
   /** The rounded value in the reported unit. */
   rounded: Decimal;
+  /** Significant figures of the reported figure; 0 when it rounds to zero (see belowPrecision); null when exact. */
   sigFigs: number | null;
   /** Unit symbol ('' for a pure number). */
   unit: string;
+  /** Power of ten of the last digit shown, in the reported unit (null when exact). */
+  lsd: number | null;
+  /** True when a measured value rounds to zero: it is smaller than the precision of the data. */
+  belowPrecision: boolean;
 }
 
 /**
@@ -55,7 +60,7 @@ export function displayQuantity(q: Quantity, wanted?: string | Unit | null, roun
   const exp10 = unit ? unit.exp10 : 0;
   const value = q.value.div(new Decimal(10).pow(exp10));
   const lsd = q.lsd === null ? null : q.lsd - exp10;
-  const d = displayMeasured({ value, lsd }, rounding);
+  const d = displayMeasured(q.sigFigs !== undefined && lsd !== null ? { value, lsd, sigFigs: q.sigFigs } : { value, lsd }, rounding);
   const unitText = unit ? unit.symbol : baseUnitText(q.dims);
-  return { text: unitText ? `${d.text} ${unitText}` : d.text, figure: d.text, value, rounded: d.value, sigFigs: d.sigFigs, unit: unitText };
+  return { text: unitText ? `${d.text} ${unitText}` : d.text, figure: d.text, value, rounded: d.value, sigFigs: d.sigFigs, unit: unitText, lsd: d.lsd, belowPrecision: d.belowPrecision };
 }

@@ -7,6 +7,13 @@
  * significant figures; sums and differences keep the fewest decimal places.
  * Values are never rounded inside a calculation; see round.ts for the one
  * rounding at the end.
+ *
+ * The figures always come from the rounded value. A product or quotient is
+ * limited to a number of significant figures, so it carries that count
+ * (`sigFigs`) and its last-digit position is taken from the value as it will
+ * be rounded: 0.9996 × 1.00 keeps 3 figures and rounds to 1.00 (last digit at
+ * 10⁻²), not 1.000. A sum keeps decimal places instead, so a carry in a sum
+ * does not move its last digit: 9.96 + 0.05 = 10.01.
  */
 import { Decimal } from '../exact/decimal.js';
 
@@ -16,9 +23,17 @@ export interface Measured {
   /**
    * Power of ten of the last significant digit: -3 for 18.015, 2 for 1300
    * (trailing zeros without a decimal point are not significant), 0 for '250.'.
-   * null for exact numbers.
+   * null for exact numbers. For a value limited by significant figures this
+   * is the position in the value as rounded to those figures (it moves up one
+   * place when rounding carries into the next power of ten).
    */
   lsd: number | null;
+  /**
+   * Set when the precision is a number of significant figures (products,
+   * quotients, powers): the figures to round to. Absent for numbers read from
+   * text, sums and differences, whose precision is a decimal place.
+   */
+  sigFigs?: number;
 }
 
 /**
@@ -43,20 +58,61 @@ export function msd(value: Decimal): number {
 }
 
 /**
- * Significant figures of a measured number (Infinity for exact numbers).
+ * Significant figures of a measured number (Infinity for exact numbers),
+ * counted on the value as it will be rounded: a value with its last digit at
+ * 10⁻³ that rounds from 9.9996 to 10.000 has 5. A value that rounds to zero
+ * counts as 1 here, so that arithmetic with it stays defined; the reported
+ * figure says it has none (see displayMeasured).
  *
  * @example
  * sigFigsOf({ value: new Decimal('18.015'), lsd: -3 }) // 5
+ * sigFigsOf(times(read('0.9996'), read('1.00')))        // 3
  */
 export function sigFigsOf(m: Measured): number {
   if (m.lsd === null) return Infinity;
+  if (m.sigFigs !== undefined) return m.sigFigs;
   if (m.value.isZero()) return Math.max(1, -m.lsd); // '0.00' has its decimals as precision
-  return Math.max(1, msd(m.value) - m.lsd + 1);
+  const r = roundAt(m.value, m.lsd);
+  if (r.isZero()) return Math.max(1, msd(m.value) - m.lsd + 1);
+  return Math.max(1, msd(r) - m.lsd + 1);
 }
 
-/** Last-significant-digit position for a value kept to n significant figures. */
+/**
+ * Rounds so that the last digit kept is at 10^lsd, halves away from zero. Used
+ * here only to find where the last digit of a rounded value falls: a carry
+ * into the next power of ten happens only when every kept digit is 9, and
+ * then half-to-even and half-up agree, so the position does not depend on
+ * the rounding mode.
+ */
+function roundAt(value: Decimal, lsd: number): Decimal {
+  if (lsd <= 0) return value.toDecimalPlaces(-lsd, Decimal.ROUND_HALF_UP);
+  const f = new Decimal(10).pow(lsd);
+  return value.div(f).toDecimalPlaces(0, Decimal.ROUND_HALF_UP).times(f);
+}
+
+/**
+ * Last-significant-digit position for a value kept to n significant figures,
+ * taken from the value as rounded to n figures: 0.9996 to 3 figures is 1.00,
+ * last digit at 10⁻².
+ *
+ * @example
+ * lsdForSigFigs(new Decimal('0.9996'), 3) // -2
+ * lsdForSigFigs(new Decimal('0.9994'), 3) // -3
+ */
 export function lsdForSigFigs(value: Decimal, n: number): number {
-  return msd(value) - n + 1;
+  if (value.isZero()) return msd(value) - n + 1;
+  return msd(value.toSignificantDigits(n, Decimal.ROUND_HALF_UP)) - n + 1;
+}
+
+/**
+ * A value limited to n significant figures (n = Infinity gives an exact number).
+ *
+ * @example
+ * withSigFigs(new Decimal('0.9996'), 3) // { value: 0.9996, lsd: -2, sigFigs: 3 }
+ */
+export function withSigFigs(value: Decimal, n: number): Measured {
+  if (n === Infinity) return { value, lsd: null };
+  return { value, lsd: lsdForSigFigs(value, n), sigFigs: n };
 }
 
 /**
@@ -81,8 +137,7 @@ export function dividedBy(a: Measured, b: Measured): Measured {
 }
 
 function byFigures(value: Decimal, a: Measured, b: Measured): Measured {
-  const n = Math.min(sigFigsOf(a), sigFigsOf(b));
-  return { value, lsd: n === Infinity ? null : lsdForSigFigs(value, n) };
+  return withSigFigs(value, Math.min(sigFigsOf(a), sigFigsOf(b)));
 }
 
 /**

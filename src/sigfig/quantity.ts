@@ -6,7 +6,7 @@
  */
 import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
-import { dividedBy, lsdForSigFigs, minus as minusM, plus as plusM, sigFigsOf, times as timesM, type Measured } from './measured.js';
+import { dividedBy, minus as minusM, plus as plusM, sigFigsOf, times as timesM, withSigFigs, type Measured } from './measured.js';
 import { baseUnitText, dimsName, sameDims, type Dims, type Unit } from './units.js';
 
 export interface Quantity extends Measured {
@@ -24,9 +24,11 @@ export interface Quantity extends Measured {
  * quantity(readNumber('250.'), unitOf('mg')) // 0.250 g, last digit at 10^-3
  */
 export function quantity(m: Measured, unit: Unit | null): Quantity {
-  if (!unit) return { value: m.value, lsd: m.lsd, dims: [0, 0, 0], unit: null, grad: new Map() };
+  // a unit is a power of ten: the value and its last digit move, the significant figures stay
+  const figures = m.sigFigs !== undefined && m.lsd !== null ? { sigFigs: m.sigFigs } : {};
+  if (!unit) return { value: m.value, lsd: m.lsd, ...figures, dims: [0, 0, 0], unit: null, grad: new Map() };
   const f = new Decimal(10).pow(unit.exp10);
-  return { value: m.value.times(f), lsd: m.lsd === null ? null : m.lsd + unit.exp10, dims: unit.dims, unit, grad: new Map() };
+  return { value: m.value.times(f), lsd: m.lsd === null ? null : m.lsd + unit.exp10, ...figures, dims: unit.dims, unit, grad: new Map() };
 }
 
 function mapGrad(a: Map<number, Decimal>, f: (g: Decimal) => Decimal): Map<number, Decimal> {
@@ -118,9 +120,9 @@ export function power(a: Quantity, n: number, column?: number): Quantity {
   if (n < 0 && a.value.isZero()) throw fail({ code: 'DIVISION_BY_ZERO', message: 'zero to a negative power', column });
   const value = a.value.pow(n);
   if (!value.isFinite() || Math.abs(value.e) > 10_000) throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: 'the result is out of range', column });
-  const lsd = a.lsd === null ? null : value.isZero() ? a.lsd : lsdForSigFigs(value, sigFigsOf(a));
+  const m: Measured = a.lsd === null ? { value, lsd: null } : value.isZero() ? { value, lsd: a.lsd } : withSigFigs(value, sigFigsOf(a));
   const d = new Decimal(n).times(a.value.pow(n - 1));
-  return { value, lsd, dims: [a.dims[0] * n, a.dims[1] * n, a.dims[2] * n], unit: null, grad: mapGrad(a.grad, (g) => g.times(d)) };
+  return { ...m, dims: [a.dims[0] * n, a.dims[1] * n, a.dims[2] * n], unit: null, grad: mapGrad(a.grad, (g) => g.times(d)) };
 }
 
 /**

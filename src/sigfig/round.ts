@@ -3,7 +3,7 @@
  * (ASTM E29; ISO 80000-1 Annex B, rule A), half-up on request.
  */
 import { Decimal } from '../exact/decimal.js';
-import { msd, sigFigsOf, type Measured } from './measured.js';
+import { msd, type Measured } from './measured.js';
 
 export type RoundingMode = 'half-even' | 'half-up';
 
@@ -42,9 +42,20 @@ export interface Display {
   text: string;
   /** The rounded value. */
   value: Decimal;
-  /** Significant figures reported (null for exact numbers). */
+  /**
+   * Significant figures reported, counted on the rounded value (null for
+   * exact numbers). 0 when a measured value rounds to zero: it is below the
+   * precision of the data and no figure of it is significant.
+   */
   sigFigs: number | null;
+  /** Power of ten of the last digit shown (null for exact numbers). */
+  lsd: number | null;
+  /** True when a measured value rounds to zero: smaller than the precision of the data. */
+  belowPrecision: boolean;
 }
+
+/** Exact values with this many significant digits are taken as non-terminating (1/3) when shown. */
+const EXACT_DIGITS_LIMIT = 40;
 
 const SUPERSCRIPT_DIGITS = '⁰¹²³⁴⁵⁶⁷⁸⁹';
 
@@ -60,23 +71,50 @@ function superscript(n: number): string {
  * figures, in scientific notation when trailing zeros would be ambiguous
  * (2.4 × 10³, not 2400) or the number is very large or small.
  *
+ * The figures come from the rounded value. A value limited by significant
+ * figures (a product or quotient) is rounded to that many figures, and when
+ * rounding carries into the next power of ten the last digit moves up one
+ * place, so no figure is gained: 0.9996 × 1.00 shows 1.00. A value limited by
+ * a decimal place (a number as written, a sum) keeps that place: 9.9996 with
+ * its last digit at 10⁻³ shows 10.000. A measured value that rounds to zero
+ * reports 0 significant figures and sets `belowPrecision`.
+ *
  * @example
  * displayMeasured({ value: new Decimal('2437.2'), lsd: 2 }).text // '2.4 × 10³'
+ * displayMeasured(times(read('0.9996'), read('1.00'))).text      // '1.00'
+ * displayMeasured({ value: new Decimal('2.45'), lsd: -1 }, 'half-up').text // '2.5'
  */
 export function displayMeasured(m: Measured, rounding: RoundingMode = 'half-even'): Display {
   if (m.lsd === null) {
-    return { text: m.value.toFixed(), value: m.value, sigFigs: null };
+    // an exact quotient that does not terminate (1/3) fills the working precision: show
+    // 12 figures and an ellipsis rather than 50 digits that look exact
+    const text = m.value.sd() >= EXACT_DIGITS_LIMIT ? `${m.value.toSignificantDigits(12, mode(rounding)).toFixed()}…` : m.value.toFixed();
+    return { text, value: m.value, sigFigs: null, lsd: null, belowPrecision: false };
   }
-  const value = roundToPosition(m.value, m.lsd, rounding);
-  const n = sigFigsOf({ value, lsd: m.lsd });
+  let value: Decimal;
+  let lsd: number;
+  if (m.sigFigs !== undefined && !m.value.isZero()) {
+    value = roundToSigFigs(m.value, m.sigFigs, rounding);
+    lsd = msd(value) - m.sigFigs + 1;
+  } else {
+    value = roundToPosition(m.value, m.lsd, rounding);
+    lsd = m.lsd;
+  }
+  if (value.isZero()) {
+    // below the precision of the data: shown with its last decimal place, no significant figure
+    value = new Decimal(0);
+    const text = lsd > 0 ? `0 × 10${superscript(lsd)}` : value.toFixed(Math.max(0, -lsd));
+    return { text, value, sigFigs: 0, lsd, belowPrecision: true };
+  }
   const e = msd(value);
+  const n = e - lsd + 1;
   // trailing zeros before the decimal point would be read as not significant:
   // 2400 (2 s.f.) and 1300 known to the unit (4 s.f.) both go to scientific notation
-  const ambiguousZeros = m.lsd > 0 || (m.lsd === 0 && !value.isZero() && value.mod(10).isZero());
+  const ambiguousZeros = lsd > 0 || (lsd === 0 && value.mod(10).isZero());
   if (ambiguousZeros || e >= 6 || e <= -5) {
-    const mantissa = value.isZero() ? new Decimal(0) : value.div(new Decimal(10).pow(e));
+    const mantissa = value.div(new Decimal(10).pow(e));
     const mText = mantissa.toFixed(Math.max(0, n - 1));
-    return { text: `${mText} × 10${superscript(e)}`, value, sigFigs: n };
+    return { text: `${mText} × 10${superscript(e)}`, value, sigFigs: n, lsd, belowPrecision: false };
   }
-  return { text: value.toFixed(Math.max(0, -m.lsd)), value, sigFigs: n };
+  return { text: value.toFixed(Math.max(0, -lsd)), value, sigFigs: n, lsd, belowPrecision: false };
 }

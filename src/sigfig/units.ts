@@ -45,9 +45,18 @@ const TABLE: Unit[] = [
   { symbol: 'mg/mL', exp10: 0, dims: [1, 0, -1], name: 'milligram per millilitre' },
   { symbol: 'µg/mL', exp10: -3, dims: [1, 0, -1], name: 'microgram per millilitre' },
   { symbol: 'g/mL', exp10: 3, dims: [1, 0, -1], name: 'gram per millilitre' },
+  // per 100 mL: the 100 is defined, exact (clinical and food labels; pharmacopoeial % w/v)
+  { symbol: 'g/100 mL', exp10: 1, dims: [1, 0, -1], name: 'gram per 100 millilitres' },
+  { symbol: 'mg/100 mL', exp10: -2, dims: [1, 0, -1], name: 'milligram per 100 millilitres' },
+  { symbol: 'g/dL', exp10: 1, dims: [1, 0, -1], name: 'gram per decilitre' },
+  { symbol: 'mg/dL', exp10: -2, dims: [1, 0, -1], name: 'milligram per decilitre' },
+  // percent weight in volume: grams of solute in 100 mL of solution (pharmacopoeial usage)
+  { symbol: '% w/v', exp10: 1, dims: [1, 0, -1], name: 'percent weight in volume (g per 100 mL)' },
   { symbol: 'g/mol', exp10: 0, dims: [1, -1, 0], name: 'gram per mole' },
   { symbol: 'kg/mol', exp10: 3, dims: [1, -1, 0], name: 'kilogram per mole' },
   { symbol: '%', exp10: -2, dims: NONE, name: 'percent' },
+  { symbol: '% w/w', exp10: -2, dims: NONE, name: 'percent by mass' },
+  { symbol: '% v/v', exp10: -2, dims: NONE, name: 'percent by volume' },
   { symbol: 'ppm', exp10: -6, dims: NONE, name: 'part per million' },
   { symbol: 'ppb', exp10: -9, dims: NONE, name: 'part per billion' },
 ];
@@ -72,7 +81,33 @@ const ALIASES: Record<string, string> = {
   'g/ml': 'g/mL',
   'mol·L⁻¹': 'mol/L',
   'g·mol⁻¹': 'g/mol',
+  'g/100mL': 'g/100 mL',
+  'g/100 ml': 'g/100 mL',
+  'g/100ml': 'g/100 mL',
+  'mg/100mL': 'mg/100 mL',
+  'mg/100 ml': 'mg/100 mL',
+  'mg/100ml': 'mg/100 mL',
+  'g/dl': 'g/dL',
+  'mg/dl': 'mg/dL',
+  '%w/v': '% w/v',
+  '%w/w': '% w/w',
+  '%v/v': '% v/v',
 };
+
+/** Every spelling {@link unitOf} accepts: the symbols and their aliases. */
+export const UNIT_SPELLINGS: readonly string[] = Object.freeze([...TABLE.map((u) => u.symbol), ...Object.keys(ALIASES)]);
+
+/**
+ * True for the percent units (%, % w/w, % v/v): a fraction of a whole, where
+ * the 100 is defined.
+ *
+ * @example
+ * isPercent(unitOf('%')) // true
+ * isPercent(unitOf('% w/v')) // false (a mass concentration, g per 100 mL)
+ */
+export function isPercent(u: Unit): boolean {
+  return u.exp10 === -2 && sameDims(u.dims, NONE);
+}
 
 const BY_SYMBOL = new Map(TABLE.map((u) => [u.symbol, u]));
 

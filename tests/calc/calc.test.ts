@@ -1,0 +1,139 @@
+import { describe, expect, it } from 'vitest';
+import { calc, calcJson } from '../../src/calc/calc.js';
+import { MASS, measure, measureAs, PURE, readQuantity } from '../../src/calc/measure.js';
+import type { Note } from '../../src/errors/issue.js';
+import { displayQuantity } from '../../src/sigfig/display-quantity.js';
+
+// Rules: OpenStax Chemistry 2e §1.5 (significant figures in calculations; exact numbers,
+// including defined quantities, never limit), from memory. Rounding: ASTM E29 (half to even),
+// from memory. Each expected figure is worked by hand from those rules.
+
+describe('calc: the figures come from the rounded value', () => {
+  it.each([
+    // [expression, display, significant figures]
+    ['0.9996 * 1.00', '1.00', 3], // 0.9996 → 3 s.f. → 1.00
+    ['0.99 * 1.01 g', '1.0 g', 2], // 0.9999 g → 2 s.f. → 1.0 g
+    ['0.250 M * 100.0 mL * 39.997 g/mol to g', '1.00 g', 3], // 0.999925 g → 1.00 g
+    ['8.30 % * 1.2046', '10.0 %', 3], // 9.99818 % → 10.0 %
+    ['99.96 mL * 0.100 M to mol', '0.0100 mol', 3], // 0.009996 mol → 0.0100 mol
+    ['9.96 + 0.05', '10.01', 4], // a sum keeps 2 decimals
+  ])('%s = %s', (expr, display, sf) => {
+    const r = calc(expr);
+    expect(r.display).toBe(display);
+    expect(r.sigFigs).toBe(sf);
+  });
+
+  it('the explanation and the result agree on the figures', () => {
+    const r = calc('0.99 * 1.01 g');
+    expect(r.steps[0].rule).toContain('fewest significant figures: 2');
+    expect(r.sigFigs).toBe(2);
+  });
+});
+
+describe('calc: a result below the precision of the data', () => {
+  it('a difference that rounds to zero has no significant figures, and a note says why', () => {
+    // 10.0 g − 9.95 g = 0.05 g; the last digit is at 0.1 g, so 0.0 g
+    const r = calc('10.0 g - 9.95 g');
+    expect(r.display).toBe('0.0 g');
+    expect(r.sigFigs).toBe(0);
+    expect(r.notes.join('\n')).toMatch(/the difference \(0\.05 g unrounded\) is below the precision of the data .*0\.1 g/);
+    expect(calcJson(r)).toMatchObject({ sigFigs: 0, display: '0.0 g', notes: [expect.stringContaining('below the precision')] });
+  });
+
+  it('says nothing when the result keeps a figure', () => {
+    expect(calc('10.0 g - 9.8 g').notes).toEqual([]);
+    expect(calc('10.0 g - 9.95 g', { rounding: 'half-up' }).display).toBe('0.1 g');
+  });
+});
+
+describe('calc: defined numbers are exact', () => {
+  it('the 100 of a percentage does not limit the figures', () => {
+    // 5.63 / 8.80 × 100 % = 63.977… % → 3 s.f. → 64.0 %
+    const r = calc('5.63 g / 8.80 g * 100 %');
+    expect(r.display).toBe('64.0 %');
+    expect(r.sigFigs).toBe(3);
+    expect(r.notes.join('\n')).toMatch(/100 % is read as exactly 100 %/);
+    expect(r.notes.join('\n')).not.toMatch(/trailing zeros/);
+    // written with a decimal point it is a measurement
+    expect(calc('100.0 % - 2.35 %').display).toBe('97.6 %');
+    expect(calc('100 % - 2.35 %').display).toBe('97.65 %');
+  });
+
+  it('other percentages keep their textbook reading', () => {
+    // 50 % has an ambiguous trailing zero: 1 significant figure, with a note
+    const r = calc('50 % * 2.000');
+    expect(r.sigFigs).toBe(1);
+    expect(r.notes.join('\n')).toMatch(/trailing zeros of 50/);
+  });
+
+  it('reads per-100 mL units with an exact 100', () => {
+    // 2.50 g/100 mL = 25.0 g/L; 250. mg/100 mL × 20.0 mL = 50.0 mg; 0.9 % w/v = 0.9 g per 100 mL (pharmacopoeial)
+    expect(calc('2.50 g/100 mL').display).toBe('2.50 g/100 mL');
+    expect(calc('2.50 g/100 mL to g/L').display).toBe('25.0 g/L');
+    expect(calc('250. mg/100mL * 20.0 mL to mg').display).toBe('50.0 mg');
+    expect(calc('0.90 % w/v * 500. mL to g').display).toBe('4.5 g');
+    expect(calc('12.0 mg/dL to mg/L').display).toBe('1.20 × 10² mg/L');
+    expect(calc('2.50 g/100 mL').notes).toEqual([]);
+  });
+
+  it('reads a ratio such as 1:1000 as an exact fraction, with a note', () => {
+    // ratio strength 1:1000 = 1 part in 1000 (pharmacy; from memory)
+    const r = calc('1:1000');
+    expect(r.display).toBe('0.001');
+    expect(r.sigFigs).toBeNull();
+    expect(r.notes[0]).toMatch(/1:1000 is read as the ratio 1\/1000 = 0\.001, exact/);
+    expect(calc('1:1000 * 250.0 mL').display).toBe('0.2500 mL');
+    // as weight in volume: 1 g in 1000 mL
+    expect(calc('1:1000 g/mL * 30.0 mL to mg').display).toBe('30.0 mg');
+    // a part written with a decimal point keeps its figures
+    expect(calc('1.5:1000').sigFigs).toBe(2);
+    expect(() => calc('1:0')).toThrow(/second number/);
+  });
+});
+
+describe('calc: exact results', () => {
+  it('an exact quotient that does not terminate is shown cut, with an ellipsis', () => {
+    // 1/3 = 0.333…; 1/8 = 0.125 terminates
+    expect(calc('1/3').display).toBe('0.333333333333…');
+    expect(calc('1:3').display).toBe('0.333333333333…');
+    expect(calc('1/8').display).toBe('0.125');
+    expect(calc('1/3').sigFigs).toBeNull();
+  });
+});
+
+describe('the shared quantity reader', () => {
+  it('passes the ambiguous-zeros note to every command that gives it a list', () => {
+    const notes: Note[] = [];
+    const q = measureAs('1300 mg', [MASS], 'the parent mass', notes);
+    expect(displayQuantity(q, 'mg').text).toBe('1.3 × 10³ mg');
+    expect(notes).toEqual([{ code: 'MEASUREMENT', message: expect.stringMatching(/^the parent mass: the trailing zeros of 1300 are read as not significant \(2 significant figures\)/) }]);
+  });
+
+  it('passes the defined-100 note too', () => {
+    const notes: Note[] = [];
+    measureAs('100 %', [PURE], 'the purity', notes);
+    expect(notes[0].message).toMatch(/^the purity: 100 % is read as exactly 100 %/);
+  });
+
+  it('reads the figures of a product as rounded', () => {
+    expect(displayQuantity(measure('99.96 mL of 0.100 M'), 'mol').text).toBe('0.0100 mol');
+  });
+});
+
+describe('calc: notes', () => {
+  it('says the same remark once when a number is written twice', () => {
+    const r = calc('1300 g - 1300 g');
+    expect(r.notes.filter((n) => n.includes('trailing zeros of 1300'))).toHaveLength(1);
+    expect(r.sigFigs).toBe(0);
+  });
+});
+
+describe('readQuantity', () => {
+  it('returns the reading notes with the quantity', () => {
+    const r = readQuantity('1300 mg', [MASS], 'the dose');
+    expect(displayQuantity(r.quantity, 'mg').text).toBe('1.3 × 10³ mg');
+    expect(r.notes.map((n) => n.message)).toEqual(['the dose: the trailing zeros of 1300 are read as not significant (2 significant figures); write 1300. or use scientific notation if they are']);
+    expect(readQuantity('13.0 mg', [MASS], 'the dose').notes).toEqual([]);
+    expect(() => readQuantity('13.0 mL', [MASS], 'the dose')).toThrow(/the dose must be a mass/);
+  });
+});
