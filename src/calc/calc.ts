@@ -112,7 +112,7 @@ export interface CalcJson {
  * The JSON object `pondus calc --json` writes.
  *
  * @example
- * calcJson(calc('8.80 g + 2.1 g')) // { input: '8.80 g + 2.1 g', value: 10.9, display: '10.9 g', sigFigs: 3, unit: 'g' }
+ * calcJson(calc('8.80 g + 2.1 g')) // { input: '8.80 g + 2.1 g', value: 10.9, rounded: 10.9, display: '10.9 g', sigFigs: 3, unit: 'g' }
  */
 export function calcJson(r: CalcResult): CalcJson {
   const o: CalcJson = { input: r.input, value: r.value.toNumber(), rounded: r.rounded.toNumber(), display: r.display, sigFigs: r.sigFigs, unit: r.unit };

@@ -32,7 +32,7 @@ export function measure(text: string, what = 'the quantity', notes?: Note[]): Qu
  * Evaluates a quantity that must have one of the given dimensions.
  *
  * @example
- * measureAs('250.0 mL', [[0, 0, 1]], 'the volume')
+ * measureAs('250.0 mL', [VOLUME], 'the volume').value.toString() // '0.25' (litres)
  */
 export function measureAs(text: string, dims: Dims[], what: string, notes?: Note[]): Quantity {
   const q = measure(text, what, notes);

@@ -31,7 +31,7 @@ export interface QuantityDisplay {
  * The unit a quantity is reported in: the one asked for, else its own, else the base unit of its dimension.
  *
  * @example
- * reportUnit(q, 'mL')?.symbol // 'mL'
+ * reportUnit(quantity(readNumber('0.250'), unitOf('L')), 'mL')?.symbol // 'mL'
  */
 export function reportUnit(q: Quantity, wanted?: string | Unit | null): Unit | null {
   if (wanted) {

@@ -66,7 +66,7 @@ export function msd(value: Decimal): number {
  *
  * @example
  * sigFigsOf({ value: new Decimal('18.015'), lsd: -3 }) // 5
- * sigFigsOf(times(read('0.9996'), read('1.00')))        // 3
+ * sigFigsOf(times(readNumber('0.9996'), readNumber('1.00')))        // 3
  */
 export function sigFigsOf(m: Measured): number {
   if (m.lsd === null) return Infinity;
@@ -108,7 +108,7 @@ export function lsdForSigFigs(value: Decimal, n: number): number {
  * A value limited to n significant figures (n = Infinity gives an exact number).
  *
  * @example
- * withSigFigs(new Decimal('0.9996'), 3) // { value: 0.9996, lsd: -2, sigFigs: 3 }
+ * withSigFigs(new Decimal('0.9996'), 3).lsd // -2 (re-anchored: it rounds to 1.00)
  */
 export function withSigFigs(value: Decimal, n: number): Measured {
   if (n === Infinity) return { value, lsd: null };
@@ -119,7 +119,7 @@ export function withSigFigs(value: Decimal, n: number): Measured {
  * Product: the result keeps the fewest significant figures of the measured factors.
  *
  * @example
- * times(read('1.008'), exact(2)) // 2.016, 4 significant figures
+ * sigFigsOf(times(readNumber('1.008'), exact(2))) // 4
  */
 export function times(a: Measured, b: Measured): Measured {
   return byFigures(a.value.times(b.value), a, b);
@@ -129,7 +129,7 @@ export function times(a: Measured, b: Measured): Measured {
  * Quotient: the result keeps the fewest significant figures. Throws RangeError on division by zero.
  *
  * @example
- * dividedBy(read('8.80'), read('2.0')) // 4.4, 2 significant figures
+ * displayMeasured(dividedBy(readNumber('8.80'), readNumber('2.0'))).text // '4.4'
  */
 export function dividedBy(a: Measured, b: Measured): Measured {
   if (b.value.isZero()) throw new RangeError('division by zero');
@@ -144,7 +144,7 @@ function byFigures(value: Decimal, a: Measured, b: Measured): Measured {
  * Sum: the result keeps the fewest decimal places (the highest last-digit position).
  *
  * @example
- * plus(read('2.016'), read('15.999')) // 18.015, last digit at 10^-3
+ * plus(readNumber('2.016'), readNumber('15.999')).lsd // -3
  */
 export function plus(a: Measured, b: Measured): Measured {
   return { value: a.value.plus(b.value), lsd: maxLsd(a.lsd, b.lsd) };
@@ -154,7 +154,7 @@ export function plus(a: Measured, b: Measured): Measured {
  * Difference: as for sums.
  *
  * @example
- * minus(read('10.0'), read('2.25')) // 7.75, last digit at 10^-1
+ * displayMeasured(minus(readNumber('10.0'), readNumber('2.25'))).text // '7.8'
  */
 export function minus(a: Measured, b: Measured): Measured {
   return { value: a.value.minus(b.value), lsd: maxLsd(a.lsd, b.lsd) };
@@ -170,7 +170,7 @@ function maxLsd(a: number | null, b: number | null): number | null {
  * Sum of many measured numbers.
  *
  * @example
- * sumMeasured([read('1.0'), read('2.25')]) // 3.25, last digit at 10^-1
+ * sumMeasured([readNumber('1.0'), readNumber('2.25')]).lsd // -1
  */
 export function sumMeasured(items: Measured[]): Measured {
   let acc: Measured = exact(0);

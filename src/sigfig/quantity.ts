@@ -21,7 +21,7 @@ export interface Quantity extends Measured {
  * A quantity from a measured number and an optional unit.
  *
  * @example
- * quantity(readNumber('250.'), unitOf('mg')) // 0.250 g, last digit at 10^-3
+ * displayQuantity(quantity(readNumber('250.'), unitOf('mg')), 'g').text // '0.250 g'
  */
 export function quantity(m: Measured, unit: Unit | null): Quantity {
   // a unit is a power of ten: the value and its last digit move, the significant figures stay
@@ -51,7 +51,7 @@ function describe(q: Quantity): string {
  * Sum of two quantities of the same dimension; fewest decimal places.
  *
  * @example
- * add(quantity(readNumber('8.80'), unitOf('g')), quantity(readNumber('2.1'), unitOf('g'))) // 10.9 g
+ * displayQuantity(add(quantity(readNumber('8.80'), unitOf('g')), quantity(readNumber('2.1'), unitOf('g')))).text // '10.9 g'
  */
 export function add(a: Quantity, b: Quantity, column?: number): Quantity {
   if (!sameDims(a.dims, b.dims)) {
@@ -84,7 +84,7 @@ function productUnit(a: Quantity, b: Quantity): Unit | null {
  * Product; fewest significant figures, exact numbers never limit.
  *
  * @example
- * multiply(quantity(readNumber('0.100'), unitOf('M')), quantity(readNumber('250.0'), unitOf('mL'))) // 0.0250 mol
+ * displayQuantity(multiply(quantity(readNumber('0.100'), unitOf('M')), quantity(readNumber('250.0'), unitOf('mL'))), 'mol').text // '0.0250 mol'
  */
 export function multiply(a: Quantity, b: Quantity): Quantity {
   const m = timesM(a, b);
@@ -95,7 +95,7 @@ export function multiply(a: Quantity, b: Quantity): Quantity {
  * Quotient; fewest significant figures. Division by zero is an error.
  *
  * @example
- * divide(quantity(readNumber('5.00'), unitOf('g')), quantity(readNumber('58.44'), unitOf('g/mol'))) // 0.0856 mol
+ * displayQuantity(divide(quantity(readNumber('5.00'), unitOf('g')), quantity(readNumber('58.44'), unitOf('g/mol')))).text // '0.0856 mol'
  */
 export function divide(a: Quantity, b: Quantity, column?: number): Quantity {
   if (b.value.isZero()) throw fail({ code: 'DIVISION_BY_ZERO', message: 'division by zero', column });
@@ -114,7 +114,7 @@ export function negate(a: Quantity): Quantity {
  * Whole-number power: the result keeps the base's significant figures.
  *
  * @example
- * power(quantity(readNumber('1.50'), null), 2) // 2.25
+ * displayQuantity(power(quantity(readNumber('1.50'), null), 2)).text // '2.25'
  */
 export function power(a: Quantity, n: number, column?: number): Quantity {
   if (n < 0 && a.value.isZero()) throw fail({ code: 'DIVISION_BY_ZERO', message: 'zero to a negative power', column });
@@ -129,7 +129,8 @@ export function power(a: Quantity, n: number, column?: number): Quantity {
  * Standard uncertainty of a quantity from its sensitivities and the inputs' standard uncertainties.
  *
  * @example
- * standardUncertainty(q, new Map([[0, new Decimal('0.05')]]))
+ * const q = { ...quantity(readNumber('8.80'), unitOf('g')), grad: new Map([[0, new Decimal(2)]]) }
+ * standardUncertainty(q, new Map([[0, new Decimal('0.05')]])).toString() // '0.1'
  */
 export function standardUncertainty(q: Quantity, inputs: Map<number, Decimal>): Decimal {
   let s = new Decimal(0);

@@ -81,7 +81,7 @@ function superscript(n: number): string {
  *
  * @example
  * displayMeasured({ value: new Decimal('2437.2'), lsd: 2 }).text // '2.4 × 10³'
- * displayMeasured(times(read('0.9996'), read('1.00'))).text      // '1.00'
+ * displayMeasured(times(readNumber('0.9996'), readNumber('1.00'))).text      // '1.00'
  * displayMeasured({ value: new Decimal('2.45'), lsd: -1 }, 'half-up').text // '2.5'
  */
 export function displayMeasured(m: Measured, rounding: RoundingMode = 'half-even'): Display {

@@ -117,13 +117,21 @@ describe('doc-comment examples', () => {
     const values = names.map((n) => scope[n]);
     let prelude = '';
     let checks = 0;
+    let last = '';
     for (const raw of ex.lines) {
       if (/^\s*import\b/.test(raw)) continue;
-      const check = splitCheck(raw);
+      let check = splitCheck(raw);
+      // an expected value on a line of its own checks the statement before it
+      if (check && check[0] === '' && last !== '') {
+        prelude = prelude.slice(0, prelude.length - last.length - 1);
+        check = [last.trim().replace(/;$/, ''), check[1]];
+      }
       if (!check || check[0] === '') {
         prelude += `${raw}\n`;
+        last = check ? '' : raw;
         continue;
       }
+      last = '';
       const [code, expectedText] = check;
       // a remark in brackets may follow the expected value: `// false (no arrow)`
       const expected = literal(expectedText) ?? literal(expectedText.replace(/\s*\([^()]*\)$/, ''));
