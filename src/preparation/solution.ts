@@ -151,6 +151,9 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
     if (basis === 'part' && purity.value.gt(share.times(POTENCY_SLACK))) {
       throw fail({ code: 'BAD_AMOUNT', message: `a content of ${options.purity.trim()} ${targetName} is more than pure ${reagent.input} holds (${pct(share)}): check the assay and its basis` });
     }
+    if (basis === 'reagent' && options.as !== undefined && options.purityBasis === undefined) {
+      notes.push({ code: 'PURITY_OF_REAGENT', message: `the assay ${options.purity.trim()} is read as the purity of ${reagent.input} itself: pure ${reagent.input} holds only ${pct(share)} ${targetName}, so it cannot be a content of ${targetName}` });
+    }
     if (basis === 'part') notes.push({ code: 'PURITY_OF_PART', message: `the assay ${options.purity.trim()} is read as the content of ${targetName} per mass of ${reagent.input} as weighed (a potency 'as ${targetName}'); the formula's own ${targetName} share is not applied again` });
   }
 

@@ -101,6 +101,7 @@ describe('an assay with --as: of the reagent, or a potency of the part', () => {
   it('an assay above the part’s share can only be of the reagent', () => {
     const r = prepareSolution('CuSO4·5H2O', { concentration: '1000. ppm', volume: '1.000 L', as: 'Cu', purity: '98.0 %' });
     expect(g(r.mass)).toBe('4.009 g');
+    expect(codes(r.notes)).toContain('PURITY_OF_REAGENT');
     expect(() => prepareSolution('CuSO4·5H2O', { concentration: '1000. ppm', volume: '1.000 L', as: 'Cu', purity: '98.0 %', purityBasis: 'part' })).toThrow(/more than pure CuSO4·5H2O holds/);
   });
 });
