@@ -71,7 +71,7 @@ export function saltFactor(saltText: string, parentText: string, options: SaltOp
     saltMass = instruction(m, [inputFigures('the dose', options.parentMass, dose)]);
     const few = fewFiguresNote(saltMass, 'the salt mass', `the dose given is ${options.parentMass.trim()} of parent`);
     if (few) notes.push(few);
-    const small = smallMassWarning(m, `${displayInstruction(saltMass, massUnitFor(m)).text} of salt`, 'if it is to be weighed, weigh a larger amount and take an aliquot of a solution or trituration');
+    const small = smallMassWarning(m, `the salt mass, ${displayInstruction(saltMass, massUnitFor(m)).text},`, 'if it is to be weighed, weigh a larger amount and take an aliquot of a solution or trituration');
     if (small) notes.push(small);
   }
   if (options.saltMass !== undefined) {

@@ -184,7 +184,7 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
     const few = fewFiguresNote(mass, 'the mass to weigh', `the solution made is ${options.concentration!.trim()}`);
     if (few) notes.push(few);
     const shown = displayInstruction(mass, massUnitFor(mass.quantity)).text;
-    const small = smallMassWarning(mass.quantity, `weigh ${shown}`);
+    const small = smallMassWarning(mass.quantity, `the mass to weigh, ${shown},`);
     if (small) notes.push(small);
   }
 

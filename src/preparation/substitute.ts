@@ -85,7 +85,7 @@ export function substituteForm(use: string, instead: string, amount: string, opt
   const mass = instruction(purity ? divide(pm, purity) : pm, inputs);
   const few = fewFiguresNote(mass, 'the mass to weigh', null);
   if (few) notes.push(few);
-  const small = smallMassWarning(mass.quantity, `weigh ${displayInstruction(mass, massUnitFor(mass.quantity)).text}`, 'weigh a larger batch, or make a stock solution');
+  const small = smallMassWarning(mass.quantity, `the mass to weigh, ${displayInstruction(mass, massUnitFor(mass.quantity)).text},`, 'weigh a larger batch, or make a stock solution');
   if (small) notes.push(small);
   const a = core(u, options);
   const b = core(i, options);
