@@ -9,6 +9,7 @@ import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { MASS, MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
 import { Decimal } from '../exact/decimal.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type InputFigures, type Instruction } from './instruction.js';
+import { readPurity } from './purity.js';
 import { smallMassWarning } from './warnings.js';
 import { partShare } from '../composition/part-share.js';
 import { toDecimal } from '../formula/amount.js';
@@ -134,8 +135,7 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   if (options.purityBasis !== undefined && options.purity === undefined) throw fail({ code: 'BAD_OPTION', message: 'a purity basis needs the purity (assay) it describes' });
   if (options.purityBasis === 'part' && options.as === undefined) throw fail({ code: 'BAD_OPTION', message: "an assay of the part needs the part: give --as (e.g. --as C17H19NO3 for a potency 'as base')" });
   if (options.purity !== undefined) {
-    purity = measureAs(options.purity, [PURE], 'the purity', notes);
-    if (purity.value.lte(0) || purity.value.gt(1)) throw fail({ code: 'BAD_AMOUNT', message: `the purity must be above 0 and at most 100 %: '${options.purity}'` });
+    purity = readPurity(options.purity, notes);
     basis = options.purityBasis ?? 'reagent';
     if (options.as !== undefined && options.purityBasis === undefined && purity.value.lte(share.times(POTENCY_SLACK))) {
       // both readings possible: refuse, with both

@@ -5,8 +5,9 @@
  */
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
-import { AMOUNT, MASS, PURE, measureAs } from '../calc/measure.js';
+import { AMOUNT, MASS, measureAs } from '../calc/measure.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type InputFigures, type Instruction } from './instruction.js';
+import { readPurity } from './purity.js';
 import { smallMassWarning } from './warnings.js';
 import { partShare } from '../composition/part-share.js';
 import { toDecimal } from '../formula/amount.js';
@@ -75,8 +76,7 @@ export function substituteForm(use: string, instead: string, amount: string, opt
   let purity: Quantity | null = null;
   const inputs: InputFigures[] = [inputFigures(`the amount of ${instead.trim()}`, amount, asked)];
   if (options.purity !== undefined) {
-    purity = measureAs(options.purity, [PURE], 'the purity', notes);
-    if (purity.value.lte(0) || purity.value.gt(1)) throw fail({ code: 'BAD_AMOUNT', message: `the purity must be above 0 and at most 100 %: '${options.purity}'` });
+    purity = readPurity(options.purity, notes);
     inputs.push(inputFigures('the assay', options.purity, purity));
     notes.push({ code: 'PURITY_OF_FORM_WEIGHED', message: `the assay ${options.purity.trim()} is read as that of ${use.trim()}, the form weighed; the ${amount.trim()} of ${instead.trim()} is taken as pure` });
   }

@@ -64,6 +64,13 @@ describe('making up solutions: the mass to weigh is an instruction', () => {
     expect(g(prepareSolution('NaOH', { concentration: '0.250 M', volume: '100.0 mL' }).mass)).toBe('0.9999 g');
   });
 
+  it('reads a purity without a unit as a fraction, and says so', () => {
+    const r = prepareSolution('CuSO4·5H2O', { concentration: '0.100 M', volume: '250.0 mL', purity: '0.985' });
+    expect(g(r.mass)).toBe('6.337 g');
+    expect(codes(r.notes)).toContain('PURITY_AS_FRACTION');
+    expect(() => prepareSolution('NaCl', { concentration: '0.100 M', volume: '1.00 L', purity: '98.5' })).toThrow(/at most 100 %/);
+  });
+
   it('refuses nonsense', () => {
     expect(() => prepareSolution('NaCl', { concentration: '0.1 g', volume: '1.00 L' })).toThrow(/concentration must be/);
     expect(() => prepareSolution('NaCl', { concentration: '0.100 M', volume: '1.00 L', purity: '120 %' })).toThrow(/purity/);

@@ -1,4 +1,4 @@
-import { InvalidArgumentError, Option, type Command } from 'commander';
+import { Option, type Command } from 'commander';
 import type { RoundingMode } from '../../sigfig/round.js';
 import type { WeightTable } from '../../elements/atom-data.js';
 import { fail } from '../../errors/pondus-error.js';
@@ -72,8 +72,8 @@ export function roundingOf(o: RoundingOptions): RoundingMode {
 
 /**
  * Makes every option of a command that takes one value refuse to be given twice
- * (`dilute --to A --to B` would otherwise silently use B): commander then exits
- * with a usage error naming the option. Options listed in `repeatable` (those
+ * (`dilute --to A --to B` would otherwise silently use B): a usage error
+ * (exit status 2) naming the option. Options listed in `repeatable` (those
  * that collect values, such as `react --amount`) are left alone. Call it after
  * all options are added.
  *
@@ -88,7 +88,7 @@ export function refuseRepeatedOptions(cmd: Command, repeatable: string[] = []): 
     const flag = opt.long ?? opt.short ?? opt.flags;
     opt.argParser((value: string, previous: unknown) => {
       if (cmd.getOptionValueSource(key) === 'cli') {
-        throw new InvalidArgumentError(`${flag} is given twice ('${String(previous)}' and '${value}'): it takes one value, give it once`);
+        throw fail({ code: 'USAGE', message: `${flag} is given twice ('${String(previous)}' and '${value}'): it takes one value, give it once` });
       }
       return inner ? inner(value, previous) : value;
     });
