@@ -47,6 +47,12 @@ describe('options are never silently ignored', () => {
     expect(r.stderr).toContain(`${flag} is given twice`);
   });
 
+  it('calc --explain with --json gives the steps in JSON', () => {
+    const [j] = jsonLines(pondus(['calc', '--json', '--explain', '2.45 g * 1.000']).stdout);
+    expect(j.steps[0].rule).toContain('fewest significant figures: 3');
+    expect(j.rounding).toBe('half-even');
+  });
+
   it('--amount of react may be repeated: one per reactant', () => {
     expect(pondus(['react', 'H2 + O2 -> H2O', '--amount', 'H2=4.00 g', '--amount', 'O2=16.0 g']).status).toBe(0);
   });
@@ -66,6 +72,8 @@ describe('options are never silently ignored', () => {
     [['react', 'H2 + O2 -> H2O', '--actual', 'H2O=15.0 g'], 'give the amount of at least one reactant'],
     [['prepare', 'NaCl', '--concentration', '0.1 M', '--volume', '1 L', '--json', '--csv'], 'choose one output format'],
     [['prepare', 'NaCl', '--concentration', '0.1 M', '--volume', '1 L', '--rounding', 'up'], "Allowed choices are half-even, half-up"],
+    [['react', 'H2 + O2 -> H2O', '--amount', 'H2=4.00 g', '--amount', 'H2=5.00 g'], '--amount gives H2 twice'],
+    [['calc', '2.45 g * 1.000', '--explain', '--csv'], '--explain cannot be combined with --csv or --tsv'],
   ])('%j is a usage error: %s', (args, message) => {
     const r = pondus(args);
     expect(r.status).toBe(2);

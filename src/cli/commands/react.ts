@@ -43,6 +43,9 @@ function reactJson(r: ReactResult, rounding: RoundingMode) {
 /** The presenter for `pondus react`. */
 export function reactPresenter(o: ReactCliOptions): Presenter<ReactResult> {
   if (!o.amount || o.amount.length === 0) throw fail({ code: 'USAGE', message: "give the amount of at least one reactant: --amount 'H2=4.00 g' (repeat for each)" });
+  const keys = o.amount.map((a) => a.slice(0, Math.max(0, a.indexOf('='))).trim());
+  const twice = keys.find((k, i) => k !== '' && keys.indexOf(k) !== i);
+  if (twice !== undefined) throw fail({ code: 'USAGE', message: `--amount gives ${twice} twice: give one amount per reactant` });
   const rounding = roundingOf(o);
   const show = (q: Quantity | null, unit: string) => (q ? displayQuantity(q, unit, rounding).figure : '');
   const opts = { amounts: o.amount, actual: o.actual, abbreviations: !!o.abbreviations };
