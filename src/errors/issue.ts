@@ -42,6 +42,7 @@ export type IssueCode =
   | 'NOT_UNIQUE'
   | 'BAD_AMOUNT'
   | 'BAD_OPTION'
+  | 'AMBIGUOUS_PURITY'
   | 'BAD_RECORD'
   | 'USAGE'
   | 'INTERNAL_ERROR';

@@ -1,23 +1,42 @@
 /**
  * Dilution, C1·V1 = C2·V2: the volume of stock to take for a final volume of
- * a weaker solution.
+ * a weaker solution (an instruction, at working precision), and from the
+ * volume actually taken, the concentration made (a result).
  */
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
 import { divide, multiply, subtract, type Quantity } from '../sigfig/quantity.js';
 import { sameDims } from '../sigfig/units.js';
+import { displayInstruction, fewFiguresNote, inputFigures, instruction, volumeUnitFor, type Instruction } from './instruction.js';
+import { dilutionWarning } from './warnings.js';
+
+export interface DilutionOptions {
+  /** The target concentration: '0.100 M'. Optional when `taken` is given. */
+  target?: string;
+  /** The final volume: '250.0 mL'. */
+  volume: string;
+  /** The volume of stock actually taken: '25.00 mL'. Gives the concentration made (a result). */
+  taken?: string;
+}
 
 export interface DilutionResult {
   stock: Quantity;
-  target: Quantity;
+  /** The target concentration (null when only the volume taken was given). */
+  target: Quantity | null;
   finalVolume: Quantity;
-  /** Volume of stock to take. */
-  stockVolume: Quantity;
-  /** Volume of solvent to make up with (approximately: volumes need not be additive). */
-  solventVolume: Quantity;
-  /** The dilution factor C1/C2. */
+  /** Volume of stock to take (an instruction). */
+  stockVolume: Instruction | null;
+  /** Volume of solvent to make up with (approximately: volumes need not be additive); an instruction. */
+  solventVolume: Instruction | null;
+  /** The dilution factor C1/C2 (for the target), or V2/V1 (for the volume taken). */
   factor: Quantity;
+  /** The volume of stock actually taken. */
+  taken: Quantity | null;
+  /** The concentration made from the volume taken (a result). */
+  made: Quantity | null;
+  /** The inputs as written. */
+  written: { stock: string; target: string | null; volume: string; taken: string | null };
   notes: Note[];
 }
 
@@ -25,24 +44,51 @@ export interface DilutionResult {
  * The stock volume for a dilution.
  *
  * @example
- * dilute('1.00 M', '0.100 M', '250.0 mL').stockVolume // 25.0 mL
+ * displayInstruction(dilute('1.00 M', '0.100 M', '250.0 mL').stockVolume!).text // '25.00 mL'
  */
-export function dilute(stockText: string, targetText: string, volumeText: string): DilutionResult {
+export function dilute(stockText: string, targetText: string | undefined, volumeText: string, takenText?: string): DilutionResult {
   const kinds = [MOLARITY, MASS_CONCENTRATION, PURE];
   const notes: Note[] = [];
   const stock = measureAs(stockText, kinds, 'the stock concentration', notes);
-  const target = measureAs(targetText, kinds, 'the target concentration', notes);
-  if (!sameDims(stock.dims, target.dims)) throw fail({ code: 'INCOMPATIBLE_UNITS', message: 'the stock and target concentrations must be of the same kind (both molar, both mass per volume, or both %)' });
+  if (targetText === undefined && takenText === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the target concentration, or the volume of stock taken (or both)' });
+  const target = targetText !== undefined ? measureAs(targetText, kinds, 'the target concentration', notes) : null;
+  if (target && !sameDims(stock.dims, target.dims)) throw fail({ code: 'INCOMPATIBLE_UNITS', message: 'the stock and target concentrations must be of the same kind (both molar, both mass per volume, or both %)' });
   const finalVolume = measureAs(volumeText, [VOLUME], 'the final volume', notes);
-  if (stock.value.lte(0) || target.value.lte(0) || finalVolume.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'concentrations and volume must be positive' });
-  if (target.value.gt(stock.value)) throw fail({ code: 'BAD_AMOUNT', message: 'the target is more concentrated than the stock: a dilution cannot get there' });
-  const stockVolume = divide(multiply(target, finalVolume), stock);
-  stockVolume.unit = finalVolume.unit;
-  const solventVolume = subtract(finalVolume, stockVolume);
-  return { stock, target, finalVolume, stockVolume, solventVolume, factor: divide(stock, target), notes };
+  if (stock.value.lte(0) || (target && target.value.lte(0)) || finalVolume.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'concentrations and volume must be positive' });
+  if (target && target.value.gt(stock.value)) throw fail({ code: 'BAD_AMOUNT', message: 'the target is more concentrated than the stock: a dilution cannot get there' });
+
+  let stockVolume: Instruction | null = null;
+  let solventVolume: Instruction | null = null;
+  let factor: Quantity | null = null;
+  if (target) {
+    const inputs = [inputFigures('the stock', stockText, stock), inputFigures('the target', targetText!, target), inputFigures('the final volume', volumeText, finalVolume)];
+    const v1 = divide(multiply(target, finalVolume), stock);
+    v1.unit = finalVolume.unit;
+    stockVolume = instruction(v1, inputs);
+    solventVolume = instruction(subtract(finalVolume, v1), inputs);
+    factor = divide(stock, target);
+    const few = fewFiguresNote(stockVolume, 'the volume to take', `the solution made is ${targetText!.trim()}`);
+    if (few) notes.push(few);
+    const shown = displayInstruction(stockVolume, volumeUnitFor(v1, finalVolume.unit)).text;
+    const w = dilutionWarning(v1, factor.value, shown);
+    if (w) notes.push(w);
+  }
+  let taken: Quantity | null = null;
+  let made: Quantity | null = null;
+  if (takenText !== undefined) {
+    taken = measureAs(takenText, [VOLUME], 'the volume taken', notes);
+    if (taken.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the volume taken must be positive' });
+    if (taken.value.gt(finalVolume.value)) throw fail({ code: 'BAD_AMOUNT', message: 'the volume taken is more than the final volume' });
+    made = divide(multiply(stock, taken), finalVolume);
+    made.unit = stock.unit;
+    if (!factor) factor = divide(finalVolume, taken);
+    notes.push({ code: 'MADE_FROM_TAKEN', message: `the concentration made is computed from the volume taken, ${takenText.trim()}: a result, with the figures of the measurements` });
+  }
+  const written = { stock: stockText.trim(), target: targetText?.trim() ?? null, volume: volumeText.trim(), taken: takenText?.trim() ?? null };
+  return { stock, target, finalVolume, stockVolume, solventVolume, factor: factor!, taken, made, written, notes };
 }
 
 /** Non-throwing {@link dilute}. */
-export function safeDilute(stock: string, target: string, volume: string): SafeResult<DilutionResult> {
-  return toSafe(() => dilute(stock, target, volume));
+export function safeDilute(stock: string, target: string | undefined, volume: string, taken?: string): SafeResult<DilutionResult> {
+  return toSafe(() => dilute(stock, target, volume, taken));
 }

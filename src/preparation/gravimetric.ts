@@ -9,6 +9,7 @@ import type { MassOptions } from '../mass/formula-mass.js';
 import { exact } from '../sigfig/measured.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
 import { conversionFactor, type ConversionFactor } from './conversion-factor.js';
+import { over100Warning } from './warnings.js';
 
 export interface GravimetricOptions extends MassOptions {
   /** Element the factor rests on, when the two share more than one. */
@@ -33,7 +34,8 @@ export interface GravimetricResult {
  * Gravimetric factor, analyte mass and mass fraction.
  *
  * @example
- * gravimetric('Cl', 'AgCl', { weighedMass: '0.2866 g' }).analyteMass // 0.07090 g
+ * gravimetric('Cl', 'AgCl', { weighedMass: '0.2866 g' }).analyteMass // 0.07090 g (a result: textbook figures)
+ * // a mass percent over 100 % is computed, with a RESULT_OVER_100 note
  */
 export function gravimetric(analyte: string, weighed: string, options: GravimetricOptions = {}): GravimetricResult {
   const factor = conversionFactor(analyte, weighed, options.element, options);
@@ -42,12 +44,14 @@ export function gravimetric(analyte: string, weighed: string, options: Gravimetr
   const notes: Note[] = [];
   if (options.weighedMass !== undefined) {
     const m = measureAs(options.weighedMass, [MASS], 'the mass of the weighed form', notes);
+    if (m.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the mass of the weighed form must be positive' });
     analyteMass = multiply(m, quantity(factor.reported, null));
     if (options.sampleMass !== undefined) {
       const s = measureAs(options.sampleMass, [MASS], 'the sample mass', notes);
       if (s.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the sample mass must be positive' });
       massPercent = multiply(divide(analyteMass, s), quantity(exact(100), null));
-      if (massPercent.value.gt(100)) throw fail({ code: 'BAD_AMOUNT', message: `the analyte would be ${massPercent.value.toFixed(1)} % of the sample: check the masses` });
+      const w = over100Warning(massPercent.value, `${analyte.trim()} in the sample`, 'check the masses, the weighed form (dried and ignited to constant mass?) and the analyte');
+      if (w) notes.push(w);
     }
   } else if (options.sampleMass !== undefined) {
     throw fail({ code: 'BAD_OPTION', message: 'a sample mass needs the mass of the weighed form too' });

@@ -3,7 +3,10 @@
  * parent (free base or free acid), and the salt mass that carries a given mass
  * of parent.
  */
+import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type Instruction } from './instruction.js';
+import { smallMassWarning } from './warnings.js';
 import { MASS, measureAs } from '../calc/measure.js';
 import { partShare } from '../composition/part-share.js';
 import { Decimal } from '../exact/decimal.js';
@@ -21,19 +24,34 @@ export interface SaltFactorResult {
   /** M(salt) / (n · M(parent)): grams of salt per gram of parent. */
   factor: Decimal;
   reported: Measured;
-  /** Salt mass carrying the parent mass asked about, g. */
-  saltMass: Quantity | null;
-  /** Parent mass carried by the salt mass asked about, g. */
+  /** The dose of parent asked about. */
+  dose: Quantity | null;
+  /** Salt mass carrying the dose of parent, g (an instruction, at working precision). */
+  saltMass: Instruction | null;
+  /** The salt mass given. */
+  saltGiven: Quantity | null;
+  /** Parent mass carried by the salt mass given, g (a result). */
   parentMass: Quantity | null;
+  notes: Note[];
+}
+
+export interface SaltOptions extends MassOptions {
+  /** A mass of parent (a dose): the salt mass that carries it is an instruction. */
+  parentMass?: string;
+  /** A mass of salt: the parent mass it carries is a result. */
+  saltMass?: string;
 }
 
 /**
- * The salt/parent factor, and conversions of masses either way.
+ * The salt/parent factor, and conversions of masses either way: the salt mass
+ * for a dose of parent (an instruction), the parent carried by a salt mass (a
+ * result).
  *
  * @example
- * saltFactor('C17H19NO3·HCl·3H2O', 'C17H19NO3').factor.toFixed(4) // '1.3158'
+ * saltFactor('C17H19NO3·HCl·3H2O', 'C17H19NO3').factor.toFixed(4) // '1.3172'
  */
-export function saltFactor(saltText: string, parentText: string, options: MassOptions & { parentMass?: string; saltMass?: string } = {}): SaltFactorResult {
+export function saltFactor(saltText: string, parentText: string, options: SaltOptions = {}): SaltFactorResult {
+  const notes: Note[] = [];
   const salt = formulaMass(saltText, options);
   const parent = formulaMass(parentText, options);
   const share = partShare(salt, parentText, options);
@@ -41,14 +59,31 @@ export function saltFactor(saltText: string, parentText: string, options: MassOp
   if (share.countedFrom !== 'written') throw fail({ code: 'BAD_OPTION', message: `${parent.formula} is not written as a part of ${saltText}; write the salt as parent·acid (e.g. C17H19NO3·HCl)` });
   const factor = salt.molarMass.div(parent.molarMass.times(perSalt));
   const reported = dividedBy(reportedMolarMass(salt), times(reportedMolarMass(parent), exact(perSalt)));
-  let saltMass: Quantity | null = null;
+  let dose: Quantity | null = null;
+  let saltMass: Instruction | null = null;
+  let saltGiven: Quantity | null = null;
   let parentMass: Quantity | null = null;
-  if (options.parentMass !== undefined) saltMass = multiply(measureAs(options.parentMass, [MASS], 'the parent mass'), quantity(reported, null));
-  if (options.saltMass !== undefined) parentMass = divide(measureAs(options.saltMass, [MASS], 'the salt mass'), quantity(reported, null));
-  return { salt, parent, perSalt, factor, reported, saltMass, parentMass };
+  if (options.parentMass !== undefined) {
+    dose = measureAs(options.parentMass, [MASS], 'the dose', notes);
+    if (dose.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the dose must be positive' });
+    const m = multiply(dose, quantity(reported, null));
+    m.unit = dose.unit;
+    saltMass = instruction(m, [inputFigures('the dose', options.parentMass, dose)]);
+    const few = fewFiguresNote(saltMass, 'the salt mass', `the dose given is ${options.parentMass.trim()} of parent`);
+    if (few) notes.push(few);
+    const small = smallMassWarning(m, `the salt mass, ${displayInstruction(saltMass, massUnitFor(m)).text},`, 'if it is to be weighed, weigh a larger amount and take an aliquot of a solution or trituration');
+    if (small) notes.push(small);
+  }
+  if (options.saltMass !== undefined) {
+    saltGiven = measureAs(options.saltMass, [MASS], 'the salt mass', notes);
+    if (saltGiven.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the salt mass must be positive' });
+    parentMass = divide(saltGiven, quantity(reported, null));
+    parentMass.unit = saltGiven.unit;
+  }
+  return { salt, parent, perSalt, factor, reported, dose, saltMass, saltGiven, parentMass, notes };
 }
 
 /** Non-throwing {@link saltFactor}. */
-export function safeSaltFactor(salt: string, parent: string, options: MassOptions = {}): SafeResult<SaltFactorResult> {
+export function safeSaltFactor(salt: string, parent: string, options: SaltOptions = {}): SafeResult<SaltFactorResult> {
   return toSafe(() => saltFactor(salt, parent, options));
 }

@@ -6,7 +6,11 @@
  */
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
-import { MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
+import { MASS, MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
+import { Decimal } from '../exact/decimal.js';
+import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type InputFigures, type Instruction } from './instruction.js';
+import { readPurity } from './purity.js';
+import { smallMassWarning } from './warnings.js';
 import { partShare } from '../composition/part-share.js';
 import { toDecimal } from '../formula/amount.js';
 import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
@@ -16,57 +20,96 @@ import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js
 import { sameDims, unitOf } from '../sigfig/units.js';
 
 export interface SolutionOptions extends MassOptions {
-  /** Target concentration: '0.100 M', '5.00 g/L', '1000 ppm' (read as mg/L), '2.0 %' (read as g/100 mL). */
-  concentration: string;
+  /** Target concentration: '0.100 M', '5.00 g/L', '1000 ppm' (read as mg/L), '2.0 %' (read as g/100 mL). Optional when `weighed` is given. */
+  concentration?: string;
   /** Final volume: '250.0 mL'. */
   volume: string;
   /** Assay of the reagent: '98.5 %'. */
   purity?: string;
+  /**
+   * What the assay is of: 'reagent' (the reagent itself, as weighed) or 'part'
+   * (the content of the `as` species per mass of reagent, a potency "as base").
+   * Needed when the assay is no more than the part's share of the formula, where
+   * both readings are possible.
+   */
+  purityBasis?: PurityBasis;
   /** The species the concentration refers to, when not the reagent itself: 'Cu', 'Cl', 'CuSO4'. */
   as?: string;
+  /** The mass actually weighed: '1.4587 g'. Gives the concentration actually made (a result). */
+  weighed?: string;
 }
+
+export type PurityBasis = 'reagent' | 'part';
 
 export interface SolutionResult {
   reagent: MassResult;
   /** What the concentration counts, and how many of it one formula unit of reagent holds. */
   target: { formula: string; perReagent: string; molarMass: Quantity };
-  concentration: Quantity;
+  /** The target concentration (null when only the mass weighed was given). */
+  concentration: Quantity | null;
   volume: Quantity;
   purity: Quantity | null;
-  /** Amount of reagent, mol. */
-  moles: Quantity;
-  /** Mass of pure reagent, g. */
-  pureMass: Quantity;
-  /** Mass to weigh out, g (allowing for purity). */
-  mass: Quantity;
+  /** What the assay was read as being of (null without an assay). */
+  purityBasis: PurityBasis | null;
+  /** Amount of the target species the solution holds, mol (an instruction). */
+  targetMoles: Instruction | null;
+  /** Amount of reagent, mol (an instruction; null when the assay is a potency of the part). */
+  moles: Instruction | null;
+  /** Mass of pure reagent, g (or of the part, for a potency): an instruction. */
+  pureMass: Instruction | null;
+  /** Mass to weigh out, g (allowing for purity): an instruction. */
+  mass: Instruction | null;
+  /** The mass actually weighed. */
+  weighed: Quantity | null;
+  /** The concentration actually made from the mass weighed (a result), in the target's kind. */
+  made: Quantity | null;
+  /** The unit the target was written in (mg/L for ppm, g/L for %). */
+  unit: string;
   notes: Note[];
 }
 
 const G_PER_MOL = unitOf('g/mol');
 
+/** Assays of pharmacopoeial materials run up to 102.0 % (common practice): a potency can exceed the share by that much. */
+const POTENCY_SLACK = new Decimal('1.02');
+
+function readConcentration(text: string, notes: Note[]): { conc: Quantity; unit: string } {
+  let conc = measureAs(text, [MOLARITY, MASS_CONCENTRATION, PURE], 'the concentration', notes);
+  let unit = conc.unit?.symbol ?? (sameDims(conc.dims, MOLARITY) ? 'M' : 'g/L');
+  if (sameDims(conc.dims, PURE)) {
+    const t = text.trim();
+    if (/ppm$/.test(t)) {
+      conc = multiply(conc, quantity(exact(1000), unitOf('g/L'))); // 1 ppm ≈ 1 mg/L for dilute aqueous solutions
+      notes.push({ code: 'PPM_AS_MG_PER_L', message: 'ppm is read as mg/L, which holds for dilute aqueous solutions (density 1.00 g/mL)' });
+      unit = 'mg/L';
+    } else if (/%$/.test(t)) {
+      conc = multiply(conc, quantity(exact(1000), unitOf('g/L')));
+      notes.push({ code: 'PERCENT_AS_W_V', message: '% is read as % w/v (grams per 100 mL)' });
+      unit = 'g/L';
+    } else {
+      throw fail({ code: 'BAD_AMOUNT', message: `the concentration needs a unit (M, mM, g/L, mg/mL, ppm, %): '${text}'` });
+    }
+  }
+  if (conc.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the concentration must be positive' });
+  return { conc, unit };
+}
+
+const pct = (d: Decimal) => `${d.times(100).toSignificantDigits(4).toFixed()} %`;
+
 /**
- * The mass of a reagent to weigh for a solution.
+ * The mass of a reagent to weigh for a solution (an instruction, at working
+ * precision), and from the mass actually weighed, the concentration made (a
+ * result, with the figures of the measurements).
  *
  * @example
- * prepareSolution('CuSO4·5H2O', { concentration: '0.100 M', volume: '250.0 mL' }).mass // 6.24 g
+ * displayInstruction(prepareSolution('CuSO4·5H2O', { concentration: '0.100 M', volume: '250.0 mL' }).mass!, 'g').text // '6.242 g'
  */
 export function prepareSolution(reagentText: string, options: SolutionOptions): SolutionResult {
   const notes: Note[] = [];
   const reagent = formulaMass(reagentText, options);
-  let conc = measureAs(options.concentration, [MOLARITY, MASS_CONCENTRATION, PURE], 'the concentration', notes);
-  if (sameDims(conc.dims, PURE)) {
-    const text = options.concentration.trim();
-    if (/ppm$/.test(text)) {
-      conc = multiply(conc, quantity(exact(1000), unitOf('g/L'))); // 1 ppm ≈ 1 mg/L for dilute aqueous solutions
-      notes.push({ code: 'PPM_AS_MG_PER_L', message: 'ppm is read as mg/L, which holds for dilute aqueous solutions (density 1.00 g/mL)' });
-    } else if (/%$/.test(text)) {
-      conc = multiply(conc, quantity(exact(1000), unitOf('g/L')));
-      notes.push({ code: 'PERCENT_AS_W_V', message: '% is read as % w/v (grams per 100 mL)' });
-    } else {
-      throw fail({ code: 'BAD_AMOUNT', message: `the concentration needs a unit (M, mM, g/L, mg/mL, ppm, %): '${options.concentration}'` });
-    }
-  }
-  if (conc.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the concentration must be positive' });
+  if (options.concentration === undefined && options.weighed === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the target concentration, or the mass weighed (or both)' });
+  const target = options.concentration !== undefined ? readConcentration(options.concentration, notes) : null;
+  const conc = target?.conc ?? null;
   const volume = measureAs(options.volume, [VOLUME], 'the volume', notes);
   if (volume.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the volume must be positive' });
 
@@ -74,28 +117,95 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   let targetM = reagentM;
   let perReagent = quantity(exact(1), null);
   let targetFormula = reagent.formula;
+  let targetName = reagent.input;
   if (options.as !== undefined) {
     const share = partShare(reagent, options.as, options);
-    const target = formulaMass(options.as, options);
-    targetM = quantity(reportedMolarMass(target), G_PER_MOL);
+    const t = formulaMass(options.as, options);
+    targetM = quantity(reportedMolarMass(t), G_PER_MOL);
     perReagent = quantity(exact(toDecimal(share.count)), null);
-    targetFormula = target.formula;
+    targetFormula = t.formula;
+    targetName = options.as.trim();
     notes.push(...share.notes);
   }
-  // amount of the target species, then of reagent
-  const targetMoles = sameDims(conc.dims, MOLARITY) ? multiply(conc, volume) : divide(multiply(conc, volume), targetM);
-  const moles = divide(targetMoles, perReagent);
-  const pureMass = multiply(moles, reagentM);
-  let purity: Quantity | null = null;
-  let mass = pureMass;
-  if (options.purity !== undefined) {
-    purity = measureAs(options.purity, [PURE], 'the purity', notes);
-    if (purity.value.lte(0) || purity.value.gt(1)) throw fail({ code: 'BAD_AMOUNT', message: `the purity must be above 0 and at most 100 %: '${options.purity}'` });
-    mass = divide(pureMass, purity);
-  }
-  return { reagent, target: { formula: targetFormula, perReagent: toDecimal(perReagent.value).toFixed(), molarMass: targetM }, concentration: conc, volume, purity, moles, pureMass, mass, notes };
-}
+  // mass fraction of the target species in the pure reagent
+  const share = perReagent.value.times(targetM.value).div(reagentM.value);
 
+  let purity: Quantity | null = null;
+  let basis: PurityBasis | null = null;
+  if (options.purityBasis !== undefined && options.purity === undefined) throw fail({ code: 'BAD_OPTION', message: 'a purity basis needs the purity (assay) it describes' });
+  if (options.purityBasis === 'part' && options.as === undefined) throw fail({ code: 'BAD_OPTION', message: "an assay of the part needs the part: give --as (e.g. --as C17H19NO3 for a potency 'as base')" });
+  if (options.purity !== undefined) {
+    purity = readPurity(options.purity, notes);
+    basis = options.purityBasis ?? 'reagent';
+    if (options.as !== undefined && options.purityBasis === undefined && purity.value.lte(share.times(POTENCY_SLACK))) {
+      // both readings possible: refuse, with both
+      const asReagent = prepareSolution(reagentText, { ...options, purityBasis: 'reagent', weighed: undefined });
+      const asPart = prepareSolution(reagentText, { ...options, purityBasis: 'part', weighed: undefined });
+      const m = (r: SolutionResult) => (r.mass ? ` (weigh ${displayInstruction(r.mass, massUnitFor(r.mass.quantity)).text})` : '');
+      throw fail({
+        code: 'AMBIGUOUS_PURITY',
+        message: `the assay ${options.purity.trim()} could be of ${reagent.input} itself${m(asReagent)} or of the ${targetName} it holds, a potency 'as ${targetName}'${m(asPart)}; pure ${reagent.input} holds ${pct(share)} ${targetName}, so both readings are possible`,
+        hint: "say which: --purity-basis reagent (the assay of the reagent as weighed) or --purity-basis part (the content of the --as species, as on a label 'potency as base')",
+      });
+    }
+    if (basis === 'part' && purity.value.gt(share.times(POTENCY_SLACK))) {
+      throw fail({ code: 'BAD_AMOUNT', message: `a content of ${options.purity.trim()} ${targetName} is more than pure ${reagent.input} holds (${pct(share)}): check the assay and its basis` });
+    }
+    if (basis === 'reagent' && options.as !== undefined && options.purityBasis === undefined) {
+      notes.push({ code: 'PURITY_OF_REAGENT', message: `the assay ${options.purity.trim()} is read as the purity of ${reagent.input} itself: pure ${reagent.input} holds only ${pct(share)} ${targetName}, so it cannot be a content of ${targetName}` });
+    }
+    if (basis === 'part') notes.push({ code: 'PURITY_OF_PART', message: `the assay ${options.purity.trim()} is read as the content of ${targetName} per mass of ${reagent.input} as weighed (a potency 'as ${targetName}'); the formula's own ${targetName} share is not applied again` });
+  }
+
+  const inputs: InputFigures[] = [];
+  if (conc && options.concentration !== undefined) inputs.push(inputFigures('the target', options.concentration, conc));
+  inputs.push(inputFigures('the volume', options.volume, volume));
+  if (purity && options.purity !== undefined) inputs.push(inputFigures('the assay', options.purity, purity));
+
+  let targetMoles: Instruction | null = null;
+  let moles: Instruction | null = null;
+  let pureMass: Instruction | null = null;
+  let mass: Instruction | null = null;
+  if (conc) {
+    // amount of the target species, then of reagent
+    const tm = sameDims(conc.dims, MOLARITY) ? multiply(conc, volume) : divide(multiply(conc, volume), targetM);
+    targetMoles = instruction(tm, inputs);
+    if (basis === 'part') {
+      const partMass = multiply(tm, targetM);
+      pureMass = instruction(partMass, inputs);
+      mass = instruction(divide(partMass, purity!), inputs);
+    } else {
+      const n = divide(tm, perReagent);
+      moles = instruction(n, inputs);
+      const pm = multiply(n, reagentM);
+      pureMass = instruction(pm, inputs);
+      mass = instruction(purity ? divide(pm, purity) : pm, inputs);
+    }
+    const few = fewFiguresNote(mass, 'the mass to weigh', `the solution made is ${options.concentration!.trim()}`);
+    if (few) notes.push(few);
+    const shown = displayInstruction(mass, massUnitFor(mass.quantity)).text;
+    const small = smallMassWarning(mass.quantity, `the mass to weigh, ${shown},`);
+    if (small) notes.push(small);
+  }
+
+  let weighed: Quantity | null = null;
+  let made: Quantity | null = null;
+  if (options.weighed !== undefined) {
+    weighed = measureAs(options.weighed, [MASS], 'the mass weighed', notes);
+    if (weighed.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the mass weighed must be positive' });
+    let nTarget: Quantity;
+    if (basis === 'part') nTarget = divide(multiply(weighed, purity!), targetM);
+    else {
+      const pure = purity ? multiply(weighed, purity) : weighed;
+      nTarget = multiply(divide(pure, reagentM), perReagent);
+    }
+    const molar = !conc || sameDims(conc.dims, MOLARITY);
+    made = molar ? divide(nTarget, volume) : divide(multiply(nTarget, targetM), volume);
+    notes.push({ code: 'MADE_FROM_WEIGHED', message: `the concentration made is computed from the mass weighed, ${options.weighed.trim()}, and the volume, ${options.volume.trim()}: a result, with the figures of those measurements` });
+  }
+  const unit = target?.unit ?? 'M';
+  return { reagent, target: { formula: targetFormula, perReagent: toDecimal(perReagent.value).toFixed(), molarMass: targetM }, concentration: conc, volume, purity, purityBasis: basis, targetMoles, moles, pureMass, mass, weighed, made, unit, notes };
+}
 /** Non-throwing {@link prepareSolution}. */
 export function safePrepareSolution(reagent: string, options: SolutionOptions): SafeResult<SolutionResult> {
   return toSafe(() => prepareSolution(reagent, options));

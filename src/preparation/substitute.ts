@@ -6,6 +6,9 @@
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { AMOUNT, MASS, measureAs } from '../calc/measure.js';
+import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type InputFigures, type Instruction } from './instruction.js';
+import { readPurity } from './purity.js';
+import { smallMassWarning } from './warnings.js';
 import { partShare } from '../composition/part-share.js';
 import { toDecimal } from '../formula/amount.js';
 import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
@@ -20,10 +23,20 @@ export interface SubstituteResult {
   instead: MassResult;
   /** The amount the recipe asks for. */
   asked: Quantity;
-  moles: Quantity;
-  /** Mass of the form in hand to weigh, g. */
-  mass: Quantity;
+  /** Amount of formula units, mol (an instruction). */
+  moles: Instruction;
+  /** The assay of the form in hand (null when none given). */
+  purity: Quantity | null;
+  /** Mass of the pure form in hand, g (an instruction). */
+  pureMass: Instruction;
+  /** Mass of the form in hand to weigh, g, allowing for its assay (an instruction). */
+  mass: Instruction;
   notes: Note[];
+}
+
+export interface SubstituteOptions extends MassOptions {
+  /** The assay of the form in hand, the one weighed: '98.0 %'. The amount asked for is of the pure form named. */
+  purity?: string;
 }
 
 /** Atoms other than the water written in the formula (water of crystallisation). */
@@ -44,28 +57,44 @@ function core(m: MassResult, options: MassOptions): Map<string, string> {
 }
 
 /**
- * How much of `use` to weigh in place of an amount of `instead`.
+ * How much of `use` to weigh in place of an amount of `instead` (an
+ * instruction, at working precision). An assay given is that of `use`, the
+ * form in hand that is weighed; the amount asked for is of pure `instead`.
  *
  * @example
- * substituteForm('CuSO4·5H2O', 'CuSO4', '10.00 g').mass // 15.64 g
+ * displayInstruction(substituteForm('MgSO4', 'MgSO4·7H2O', '24.65 g', { purity: '98.0 %' }).mass, 'g').text // '12.28 g'
  */
-export function substituteForm(use: string, instead: string, amount: string, options: MassOptions = {}): SubstituteResult {
+export function substituteForm(use: string, instead: string, amount: string, options: SubstituteOptions = {}): SubstituteResult {
   const u = formulaMass(use, options);
   const i = formulaMass(instead, options);
   const notes: Note[] = [];
   const asked = measureAs(amount, [MASS, AMOUNT], `the amount of ${instead}`, notes);
   if (asked.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the amount must be positive' });
   const gPerMol = unitOf('g/mol');
-  const moles = sameDims(asked.dims, MASS) ? divide(asked, quantity(reportedMolarMass(i), gPerMol)) : asked;
-  const mass = multiply(moles, quantity(reportedMolarMass(u), gPerMol));
+  const n = sameDims(asked.dims, MASS) ? divide(asked, quantity(reportedMolarMass(i), gPerMol)) : asked;
+  const pm = multiply(n, quantity(reportedMolarMass(u), gPerMol));
+  let purity: Quantity | null = null;
+  const inputs: InputFigures[] = [inputFigures(`the amount of ${instead.trim()}`, amount, asked)];
+  if (options.purity !== undefined) {
+    purity = readPurity(options.purity, notes);
+    inputs.push(inputFigures('the assay', options.purity, purity));
+    notes.push({ code: 'PURITY_OF_FORM_WEIGHED', message: `the assay ${options.purity.trim()} is read as that of ${use.trim()}, the form weighed; the ${amount.trim()} of ${instead.trim()} is taken as pure` });
+  }
+  const moles = instruction(n, inputs);
+  const pureMass = instruction(pm, inputs);
+  const mass = instruction(purity ? divide(pm, purity) : pm, inputs);
+  const few = fewFiguresNote(mass, 'the mass to weigh', null);
+  if (few) notes.push(few);
+  const small = smallMassWarning(mass.quantity, `the mass to weigh, ${displayInstruction(mass, massUnitFor(mass.quantity)).text},`, 'weigh a larger batch, or make a stock solution');
+  if (small) notes.push(small);
   const a = core(u, options);
   const b = core(i, options);
   const same = a.size === b.size && [...a].every(([k, v]) => b.get(k) === v);
   if (!same) notes.push({ code: 'FORMS_DIFFER', message: `${u.formula} and ${i.formula} differ by more than water of crystallisation; the substitution keeps equal amounts of formula units` });
-  return { use: u, instead: i, asked, moles, mass, notes };
+  return { use: u, instead: i, asked, moles, purity, pureMass, mass, notes };
 }
 
 /** Non-throwing {@link substituteForm}. */
-export function safeSubstituteForm(use: string, instead: string, amount: string, options: MassOptions = {}): SafeResult<SubstituteResult> {
+export function safeSubstituteForm(use: string, instead: string, amount: string, options: SubstituteOptions = {}): SafeResult<SubstituteResult> {
   return toSafe(() => substituteForm(use, instead, amount, options));
 }

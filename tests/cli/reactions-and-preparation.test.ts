@@ -33,20 +33,20 @@ describe('pondus react, prepare, dilute, gravimetric, basis, salt', () => {
 
   it('gives the mass to weigh for a solution, allowing for assay', () => {
     const r = pondus(['prepare', 'CuSO4·5H2O', '--concentration', '0.100 M', '--volume', '250.0 mL', '--purity', '98.5 %']);
-    expect(r.stdout).toContain('weigh 6.34 g of CuSO4·5H2O');
+    expect(r.stdout).toContain('weigh 6.337 g of CuSO4·5H2O'); // an instruction: working precision
     expect(r.stdout).toContain('caution:');
     const [j] = jsonLines(pondus(['prepare', '--json', 'NaCl', '--concentration', '5.30 M', '--volume', '0.250 L']).stdout);
-    expect(j.display).toBe('77.4 g');
+    expect(j.mass).toMatchObject({ kind: 'instruction', display: '77.43 g', unit: 'g', textbookSigFigs: 3 });
     expect(j.caution).toMatch(/lab's procedures/);
     expect(pondus(['prepare', 'NaCl']).stderr).toContain('give --concentration and --volume');
   });
 
   it('dilutes, converts bases, and computes gravimetric and salt factors', () => {
-    expect(pondus(['dilute', '1.59 M', '--to', '0.100 M', '--volume', '5.00 L']).stdout).toContain('take 0.314 L of the stock');
+    expect(pondus(['dilute', '1.59 M', '--to', '0.100 M', '--volume', '5.00 L']).stdout).toContain('take 314.5 mL of the stock');
     expect(pondus(['basis', 'P2O5', '--to', 'P', '--value', '12.5 %']).stdout).toContain('12.5 % P2O5 = 5.46 % P');
     expect(pondus(['gravimetric', 'Cl', '--weighed', 'AgCl', '--mass', '0.2866 g']).stdout).toContain('= 0.2474');
     const s = pondus(['salt', 'C17H19NO3·HCl·3H2O', '--parent', 'C17H19NO3', '--dose', '10.0 mg']);
-    expect(s.stdout).toContain('13.2 mg of the salt');
+    expect(s.stdout).toContain('13.17 mg of the salt');
     expect(s.stdout).toContain('dosing decisions follow licensed practice');
   });
 });

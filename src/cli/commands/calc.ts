@@ -1,21 +1,22 @@
-import { Option, type Command } from 'commander';
+import type { Command } from 'commander';
 import { calc, calcJson, type CalcResult } from '../../calc/calc.js';
 import type { RoundingMode } from '../../sigfig/round.js';
+import { fail } from '../../errors/pondus-error.js';
 import type { Presenter } from '../output/presenter.js';
-import { withOutputOptions, type OutputOptions } from './common.js';
+import { refuseRepeatedOptions, roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
-interface CalcCliOptions extends OutputOptions {
+interface CalcCliOptions extends OutputOptions, RoundingOptions {
   explain?: boolean;
-  rounding?: RoundingMode;
 }
 
 /** The presenter for `pondus calc`. */
 export function calcPresenter(o: CalcCliOptions): Presenter<CalcResult> {
-  const opts = { rounding: o.rounding ?? 'half-even' };
+  const opts: { rounding: RoundingMode } = { rounding: roundingOf(o) };
+  if (o.explain && (o.csv || o.tsv)) throw fail({ code: 'USAGE', message: '--explain cannot be combined with --csv or --tsv: the steps are shown in the table, and in JSON as `steps`' });
   return {
     compute: (input) => calc(input, opts),
-    json: calcJson,
+    json: (r) => (o.explain ? { ...calcJson(r), steps: r.steps, rounding: opts.rounding } : calcJson(r)),
     columns: ['input', 'value', 'display', 'sigFigs', 'unit', 'uncertainty'],
     cells: (r) => [r.input, r.value.toFixed(), r.display, r.sigFigs, r.unit, r.uncertainty?.toFixed() ?? ''],
     block: (r) => {
@@ -34,12 +35,12 @@ export function calcPresenter(o: CalcCliOptions): Presenter<CalcResult> {
 
 /** Registers `pondus calc`. */
 export function registerCalc(program: Command, run: CommandRunner): void {
-  withOutputOptions(
+  const cmd = withRoundingOption(withOutputOptions(
     program
       .command('calc')
       .description('calculate with measured quantities: significant figures, units, molar masses M(formula), ± uncertainties')
       .argument('[expressions...]', "expressions such as '0.100 M * 250.0 mL * M(CuSO4·5H2O) to g'; - reads one per line")
-      .option('--explain', 'show each step and which input limited the precision')
-      .addOption(new Option('--rounding <mode>', 'rounding of the reported figure').choices(['half-even', 'half-up']).default('half-even')),
-  ).action((inputs: string[], o: CalcCliOptions) => run('calc', inputs, o));
+      .option('--explain', 'show each step and which input limited the precision'),
+  ));
+  refuseRepeatedOptions(cmd).action((inputs: string[], o: CalcCliOptions) => run('calc', inputs, o));
 }

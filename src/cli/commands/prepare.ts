@@ -1,83 +1,137 @@
 import type { Command } from 'commander';
+import { Option } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
+import type { Note } from '../../errors/issue.js';
 import { BENCH_CAUTION } from '../../preparation/caution.js';
-import { prepareSolution, type SolutionResult } from '../../preparation/solution.js';
+import { displayInstruction, displayResult, instructionJson, massUnitFor, resultJson, type Instruction } from '../../preparation/instruction.js';
+import { prepareSolution, type PurityBasis, type SolutionResult } from '../../preparation/solution.js';
 import { substituteForm, type SubstituteResult } from '../../preparation/substitute.js';
-import { displayQuantity } from '../../sigfig/display-quantity.js';
+import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
-import { withOutputOptions, type OutputOptions } from './common.js';
+import { conflict, given, refuseRepeatedOptions, roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
-interface PrepareCliOptions extends OutputOptions {
+interface PrepareCliOptions extends OutputOptions, RoundingOptions {
   concentration?: string;
   volume?: string;
   purity?: string;
+  purityBasis?: PurityBasis;
   as?: string;
   replace?: string;
+  weighed?: string;
   abbreviations?: boolean;
 }
 
 type Prepared = { kind: 'solution'; r: SolutionResult } | { kind: 'substitute'; r: SubstituteResult };
 
-const fig = (q: Parameters<typeof displayQuantity>[0], unit?: string) => displayQuantity(q, unit).text;
+const notesJson = (notes: Note[]) => notes.map((n) => ({ code: n.code, message: n.message }));
+
+/**
+ * Checks which options of `prepare` go together; a conflict is a usage error (exit status 2).
+ *
+ * @example
+ * checkPrepareOptions({ replace: 'CuSO4=10.00 g', volume: '1 L' }) // throws USAGE
+ */
+export function checkPrepareOptions(o: PrepareCliOptions): void {
+  if (o.replace !== undefined) {
+    const clash = given(o, { concentration: '--concentration', volume: '--volume', as: '--as', weighed: '--weighed', purityBasis: '--purity-basis' });
+    if (clash.length) throw conflict('--replace', clash, 'it weighs one form of a reagent in place of an amount of another; to make up a solution, name the form in hand and give --concentration and --volume without --replace');
+    if (o.replace.indexOf('=') <= 0) throw fail({ code: 'USAGE', message: "--replace takes FORM=AMOUNT, e.g. --replace 'CuSO4=10.00 g'" });
+    return;
+  }
+  if (o.volume === undefined || (o.concentration === undefined && o.weighed === undefined)) {
+    throw fail({ code: 'USAGE', message: "give --concentration and --volume (e.g. --concentration '0.100 M' --volume '250.0 mL'), --weighed and --volume for the concentration made, or --replace FORM=AMOUNT" });
+  }
+  if (o.purityBasis !== undefined && o.purity === undefined) throw fail({ code: 'USAGE', message: '--purity-basis needs --purity: it says what the assay is of' });
+  if (o.purityBasis === 'part' && o.as === undefined) throw fail({ code: 'USAGE', message: "--purity-basis part needs --as: the assay is of that part (e.g. --as C17H19NO3 for a potency 'as base')" });
+}
+
+function solutionJson(r: SolutionResult, o: PrepareCliOptions, rounding: RoundingMode) {
+  const ins = (i: Instruction | null, unit: string) => (i ? instructionJson(i, unit, rounding) : null);
+  return {
+    input: r.reagent.input,
+    formula: r.reagent.formula,
+    molarMass: r.reagent.molarMass.toNumber(),
+    target: r.target.formula,
+    concentration: o.concentration?.trim() ?? null,
+    volume: o.volume?.trim() ?? null,
+    purity: r.purity ? displayResult(r.purity, '%', rounding).text : null,
+    purityBasis: r.purityBasis,
+    moles: ins(r.moles, 'mol'),
+    mass: r.mass ? instructionJson(r.mass, massUnitFor(r.mass.quantity), rounding) : null,
+    weighed: o.weighed?.trim() ?? null,
+    made: r.made ? resultJson(r.made, r.unit, rounding) : null,
+    notes: notesJson(r.notes),
+    caution: BENCH_CAUTION,
+  };
+}
+
+function substituteJson(r: SubstituteResult, o: PrepareCliOptions, rounding: RoundingMode) {
+  return {
+    input: r.use.input,
+    formula: r.use.formula,
+    instead: r.instead.formula,
+    asked: o.replace!.slice(o.replace!.indexOf('=') + 1).trim(),
+    purity: r.purity ? displayResult(r.purity, '%', rounding).text : null,
+    moles: instructionJson(r.moles, 'mol', rounding),
+    mass: instructionJson(r.mass, massUnitFor(r.mass.quantity), rounding),
+    notes: notesJson(r.notes),
+    caution: BENCH_CAUTION,
+  };
+}
 
 /** The presenter for `pondus prepare`. */
 export function preparePresenter(o: PrepareCliOptions): Presenter<Prepared> {
+  checkPrepareOptions(o);
+  const rounding = roundingOf(o);
   const options = { abbreviations: !!o.abbreviations };
+  const w = (i: Instruction, unit?: string) => displayInstruction(i, unit ?? i.quantity.unit?.symbol, rounding).text;
+  const wm = (i: Instruction) => w(i, massUnitFor(i.quantity));
+  const res = (q: Parameters<typeof displayResult>[0], unit?: string) => displayResult(q, unit ?? q.unit?.symbol, rounding).text;
   const compute = (input: string): Prepared => {
     if (o.replace !== undefined) {
       const eq = o.replace.indexOf('=');
-      if (eq <= 0) throw fail({ code: 'USAGE', message: "--replace takes FORM=AMOUNT, e.g. --replace 'CuSO4=10.00 g'" });
-      return { kind: 'substitute', r: substituteForm(input, o.replace.slice(0, eq).trim(), o.replace.slice(eq + 1), options) };
+      return { kind: 'substitute', r: substituteForm(input, o.replace.slice(0, eq).trim(), o.replace.slice(eq + 1), { ...options, purity: o.purity }) };
     }
-    if (o.concentration === undefined || o.volume === undefined) throw fail({ code: 'USAGE', message: "give --concentration and --volume (e.g. --concentration '0.100 M' --volume '250.0 mL'), or --replace FORM=AMOUNT" });
-    return { kind: 'solution', r: prepareSolution(input, { ...options, concentration: o.concentration, volume: o.volume, purity: o.purity, as: o.as }) };
+    return { kind: 'solution', r: prepareSolution(input, { ...options, concentration: o.concentration, volume: o.volume!, purity: o.purity, purityBasis: o.purityBasis, as: o.as, weighed: o.weighed }) };
   };
   return {
     compute,
-    json: (p) =>
+    json: (p) => (p.kind === 'solution' ? solutionJson(p.r, o, rounding) : substituteJson(p.r, o, rounding)),
+    columns: ['input', 'formula', 'mass', 'display', 'made'],
+    cells: (p) =>
       p.kind === 'solution'
-        ? {
-            input: p.r.reagent.input,
-            formula: p.r.reagent.formula,
-            molarMass: p.r.reagent.molarMass.toNumber(),
-            concentration: fig(p.r.concentration, p.r.concentration.unit?.symbol),
-            volume: fig(p.r.volume, p.r.volume.unit?.symbol),
-            purity: p.r.purity ? displayQuantity(p.r.purity, '%').text : null,
-            moles: displayQuantity(p.r.moles, 'mol').value.toNumber(),
-            mass: displayQuantity(p.r.mass, 'g').value.toNumber(),
-            display: fig(p.r.mass, 'g'),
-            notes: p.r.notes.map((n) => n.message),
-            caution: BENCH_CAUTION,
-          }
-        : {
-            input: p.r.use.input,
-            formula: p.r.use.formula,
-            instead: p.r.instead.formula,
-            moles: displayQuantity(p.r.moles, 'mol').value.toNumber(),
-            mass: displayQuantity(p.r.mass, 'g').value.toNumber(),
-            display: fig(p.r.mass, 'g'),
-            notes: p.r.notes.map((n) => n.message),
-            caution: BENCH_CAUTION,
-          },
-    columns: ['input', 'formula', 'mass', 'display'],
-    cells: (p) => (p.kind === 'solution' ? [p.r.reagent.input, p.r.reagent.formula, displayQuantity(p.r.mass, 'g').value.toFixed(), fig(p.r.mass, 'g')] : [p.r.use.input, p.r.use.formula, displayQuantity(p.r.mass, 'g').value.toFixed(), fig(p.r.mass, 'g')]),
+        ? [p.r.reagent.input, p.r.reagent.formula, p.r.mass ? p.r.mass.quantity.value.toFixed() : '', p.r.mass ? wm(p.r.mass) : '', p.r.made ? res(p.r.made, p.r.unit) : '']
+        : [p.r.use.input, p.r.use.formula, p.r.mass.quantity.value.toFixed(), wm(p.r.mass), ''],
     block: (p) => {
       if (p.kind === 'substitute') {
         const r = p.r;
-        return [
+        const lines = [
           `use ${r.use.input} (M = ${displayMolarMass(r.use)} g/mol) instead of ${r.instead.input} (M = ${displayMolarMass(r.instead)} g/mol):`,
-          `  ${fig(r.asked, r.asked.unit?.symbol)} of ${r.instead.input} = ${fig(r.moles, 'mol')}`,
-          `  weigh ${fig(r.mass, 'g')} of ${r.use.input}`,
-        ].join('\n');
+          `  ${o.replace!.slice(o.replace!.indexOf('=') + 1).trim()} of ${r.instead.input} = ${w(r.moles, 'mol')}`,
+        ];
+        if (r.purity) lines.push(`  assay of ${r.use.input} ${res(r.purity, '%')}: ${wm(r.pureMass)} ÷ ${res(r.purity, '%')}`);
+        lines.push(`  weigh ${wm(r.mass)} of ${r.use.input}`);
+        return lines.join('\n');
       }
       const r = p.r;
       const lines = [`${r.reagent.input}  (${r.reagent.formula}, M = ${displayMolarMass(r.reagent)} g/mol)`];
-      lines.push(`  target: ${fig(r.concentration, r.concentration.unit?.symbol)}${r.target.formula !== r.reagent.formula ? ` of ${r.target.formula} (${r.target.perReagent} per formula unit)` : ''} in ${fig(r.volume, r.volume.unit?.symbol)}`);
-      lines.push(`  amount of ${r.reagent.input}: ${fig(r.moles, 'mol')}; pure mass ${fig(r.pureMass, 'g')}`);
-      if (r.purity) lines.push(`  assay ${displayQuantity(r.purity, '%').text}: ${fig(r.pureMass, 'g')} ÷ ${displayQuantity(r.purity, '%').text}`);
-      lines.push(`  weigh ${fig(r.mass, 'g')} of ${r.reagent.input}, dissolve, and make up to ${fig(r.volume, r.volume.unit?.symbol)}`);
+      const of = r.target.formula !== r.reagent.formula ? ` of ${r.target.formula} (${r.target.perReagent} per formula unit)` : '';
+      if (r.concentration && r.mass) {
+        lines.push(`  target: ${o.concentration!.trim()}${of} in ${o.volume!.trim()}`);
+        if (r.purityBasis === 'part') {
+          lines.push(`  amount of ${r.target.formula}: ${w(r.targetMoles!, 'mol')}; mass of ${r.target.formula} ${wm(r.pureMass!)}`);
+          lines.push(`  content of ${r.target.formula} ${res(r.purity!, '%')} (potency): ${wm(r.pureMass!)} ÷ ${res(r.purity!, '%')}`);
+        } else {
+          lines.push(`  amount of ${r.reagent.input}: ${w(r.moles!, 'mol')}; pure mass ${wm(r.pureMass!)}`);
+          if (r.purity) lines.push(`  assay ${res(r.purity, '%')}: ${wm(r.pureMass!)} ÷ ${res(r.purity, '%')}`);
+        }
+        lines.push(`  weigh ${wm(r.mass)} of ${r.reagent.input}, dissolve, and make up to ${o.volume!.trim()}`);
+      }
+      if (r.made && r.weighed) {
+        lines.push(`  made: ${o.weighed!.trim()} of ${r.reagent.input}${r.purity ? ` (assay ${o.purity!.trim()})` : ''} in ${o.volume!.trim()} gives ${res(r.made, r.unit)}${r.made && of ? ` of ${r.target.formula}` : ''}`);
+      }
       return lines.join('\n');
     },
     notes: (p) => p.r.notes.map((n) => n.message),
@@ -87,16 +141,21 @@ export function preparePresenter(o: PrepareCliOptions): Presenter<Prepared> {
 
 /** Registers `pondus prepare`. */
 export function registerPrepare(program: Command, run: CommandRunner): void {
-  withOutputOptions(
-    program
-      .command('prepare')
-      .description('mass of a reagent to weigh for a solution (with assay and hydrate form), or to replace another form')
-      .argument('[reagents...]', 'the reagent as it is in the bottle, e.g. CuSO4·5H2O; - reads one per line')
-      .option('--concentration <c>', "target concentration: '0.100 M', '5.00 g/L', '1000 ppm' (mg/L), '2.0 %' (w/v)")
-      .option('--volume <v>', "final volume: '250.0 mL'")
-      .option('--purity <p>', "the reagent's assay: '98.5 %'")
-      .option('--as <species>', 'the concentration is of this part of the reagent: Cu, Cl, CuSO4, …')
-      .option('--replace <form=amount>', "weigh this reagent in place of another form: --replace 'CuSO4=10.00 g'")
-      .option('--abbreviations', 'read group abbreviations in formulas'),
-  ).action((inputs: string[], o: PrepareCliOptions) => run('prepare', inputs, o));
+  const cmd = withRoundingOption(
+    withOutputOptions(
+      program
+        .command('prepare')
+        .description('mass of a reagent to weigh for a solution (with assay and hydrate form), the concentration made from the mass weighed, or the mass to replace another form')
+        .argument('[reagents...]', 'the reagent as it is in the bottle, e.g. CuSO4·5H2O; - reads one per line')
+        .option('--concentration <c>', "target concentration: '0.100 M', '5.00 g/L', '1000 ppm' (mg/L), '2.0 %' (w/v)")
+        .option('--volume <v>', "final volume: '250.0 mL'")
+        .option('--purity <p>', "the assay of the reagent as weighed: '98.5 %' (with --replace: of the form in hand)")
+        .addOption(new Option('--purity-basis <basis>', "what the assay is of: reagent (the reagent itself) or part (the content of the --as species, a potency 'as base')").choices(['reagent', 'part']))
+        .option('--as <species>', 'the concentration is of this part of the reagent: Cu, Cl, CuSO4, a free base, …')
+        .option('--weighed <m>', "the mass actually weighed: '1.4587 g'; gives the concentration made (a result)")
+        .option('--replace <form=amount>', "weigh this reagent in place of another form: --replace 'CuSO4=10.00 g'")
+        .option('--abbreviations', 'read group abbreviations in formulas'),
+    ),
+  );
+  refuseRepeatedOptions(cmd).action((inputs: string[], o: PrepareCliOptions) => run('prepare', inputs, o));
 }

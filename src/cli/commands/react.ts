@@ -5,19 +5,20 @@ import { displayQuantity } from '../../sigfig/display-quantity.js';
 import type { Quantity } from '../../sigfig/quantity.js';
 import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
-import { withOutputOptions, type OutputOptions } from './common.js';
+import { fail } from '../../errors/pondus-error.js';
+import type { RoundingMode } from '../../sigfig/round.js';
+import { refuseRepeatedOptions, roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
-interface ReactCliOptions extends OutputOptions {
+interface ReactCliOptions extends OutputOptions, RoundingOptions {
   amount?: string[];
   actual?: string;
   abbreviations?: boolean;
 }
 
-const show = (q: Quantity | null, unit: string) => (q ? displayQuantity(q, unit).figure : '');
-const num = (q: Quantity | null, unit: string) => (q ? displayQuantity(q, unit).value.toNumber() : null);
-
-function reactJson(r: ReactResult) {
+function reactJson(r: ReactResult, rounding: RoundingMode) {
+  const show = (q: Quantity | null, unit: string) => (q ? displayQuantity(q, unit, rounding).figure : '');
+  const num = (q: Quantity | null, unit: string) => (q ? displayQuantity(q, unit, rounding).value.toNumber() : null);
   const line = (l: ReactResult['reactants'][number]) => ({
     species: l.species,
     coefficient: Number(l.coefficient),
@@ -34,19 +35,25 @@ function reactJson(r: ReactResult) {
     reactants: r.reactants.map(line),
     products: r.products.map(line),
     excess: r.excess.map((e) => ({ species: e.species, moles: num(e.moles, 'mol'), molesDisplay: show(e.moles, 'mol'), mass: num(e.mass, 'g'), massDisplay: show(e.mass, 'g') })),
-    percentYield: r.percentYield ? { species: r.percentYield.species, percent: r.percentYield.percent.value.toNumber(), display: displayQuantity(r.percentYield.percent).figure } : null,
-    notes: r.notes.map((n) => n.message),
+    percentYield: r.percentYield ? { species: r.percentYield.species, percent: r.percentYield.percent.value.toNumber(), display: displayQuantity(r.percentYield.percent, undefined, rounding).figure } : null,
+    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
   };
 }
 
 /** The presenter for `pondus react`. */
 export function reactPresenter(o: ReactCliOptions): Presenter<ReactResult> {
-  const opts = { amounts: o.amount ?? [], actual: o.actual, abbreviations: !!o.abbreviations };
+  if (!o.amount || o.amount.length === 0) throw fail({ code: 'USAGE', message: "give the amount of at least one reactant: --amount 'H2=4.00 g' (repeat for each)" });
+  const keys = o.amount.map((a) => a.slice(0, Math.max(0, a.indexOf('='))).trim());
+  const twice = keys.find((k, i) => k !== '' && keys.indexOf(k) !== i);
+  if (twice !== undefined) throw fail({ code: 'USAGE', message: `--amount gives ${twice} twice: give one amount per reactant` });
+  const rounding = roundingOf(o);
+  const show = (q: Quantity | null, unit: string) => (q ? displayQuantity(q, unit, rounding).figure : '');
+  const opts = { amounts: o.amount, actual: o.actual, abbreviations: !!o.abbreviations };
   return {
     compute: (input) => react(input, opts),
-    json: reactJson,
+    json: (r) => reactJson(r, rounding),
     columns: ['input', 'balanced', 'limiting', 'products', 'percentYield'],
-    cells: (r) => [r.input, r.balanced, r.limiting, r.products.map((p) => `${p.species}=${show(p.mass, 'g')} g`).join(' '), r.percentYield ? displayQuantity(r.percentYield.percent).figure : ''],
+    cells: (r) => [r.input, r.balanced, r.limiting, r.products.map((p) => `${p.species}=${show(p.mass, 'g')} g`).join(' '), r.percentYield ? displayQuantity(r.percentYield.percent, undefined, rounding).figure : ''],
     block: (r) => {
       const row = (l: ReactResult['reactants'][number], role: string) => [l.species, String(l.coefficient), role, show(l.moles, 'mol'), show(l.mass, 'g')];
       const lines = [r.balanced];
@@ -59,7 +66,7 @@ export function reactPresenter(o: ReactCliOptions): Presenter<ReactResult> {
       );
       lines.push(`limiting reagent: ${r.limiting}`);
       for (const e of r.excess) lines.push(`left over: ${e.species} ${show(e.moles, 'mol')} mol${e.mass ? ` (${show(e.mass, 'g')} g)` : ''}`);
-      if (r.percentYield) lines.push(`percent yield of ${r.percentYield.species}: ${displayQuantity(r.percentYield.percent).figure} %`);
+      if (r.percentYield) lines.push(`percent yield of ${r.percentYield.species}: ${displayQuantity(r.percentYield.percent, undefined, rounding).figure} %`);
       return lines.join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
@@ -71,7 +78,7 @@ const collect = (v: string, prev: string[] = []) => [...prev, v];
 
 /** Registers `pondus react`. */
 export function registerReact(program: Command, run: CommandRunner): void {
-  withOutputOptions(
+  const cmd = withRoundingOption(withOutputOptions(
     program
       .command('react')
       .description('limiting reagent, theoretical yield, excess left and percent yield of a reaction')
@@ -79,5 +86,6 @@ export function registerReact(program: Command, run: CommandRunner): void {
       .option('--amount <species=amount>', "an amount of a reactant: 'H2=4.00 g', 'O2=0.500 mol', 'HCl=25.0 mL of 0.100 M' (repeat for each)", collect)
       .option('--actual <species=amount>', "the amount of a product obtained, for percent yield: 'H2O=30.1 g'")
       .option('--abbreviations', 'read group abbreviations (Me, Et, Ph, …) in formulas'),
-  ).action((inputs: string[], o: ReactCliOptions) => run('react', inputs, o));
+  ));
+  refuseRepeatedOptions(cmd, ['--amount']).action((inputs: string[], o: ReactCliOptions) => run('react', inputs, o));
 }

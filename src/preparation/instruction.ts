@@ -1,0 +1,234 @@
+/**
+ * Instructions versus results. A result computed from measurements (the
+ * concentration actually made, a gravimetric result, a yield) keeps the
+ * textbook significant figures. An instruction computed from a target (a mass
+ * to weigh, a volume to take, a salt mass for a dose) is a different thing: the
+ * target is a specification, not a measurement, so the instruction is shown at
+ * working precision — at least {@link WORKING_FIGURES} significant figures, and
+ * more when the data carry more — with a note when a target has few figures.
+ */
+import { Decimal } from '../exact/decimal.js';
+import type { Note } from '../errors/issue.js';
+import { msd, sigFigsOf } from '../sigfig/measured.js';
+import type { Quantity } from '../sigfig/quantity.js';
+import { displayQuantity, reportUnit } from '../sigfig/display-quantity.js';
+import { displayMeasured, roundToSigFigs, type RoundingMode } from '../sigfig/round.js';
+import { baseUnitText, sameDims, unitOf, type Unit } from '../sigfig/units.js';
+
+/** Significant figures an instruction is shown to, at the least. */
+export const WORKING_FIGURES = 4;
+
+/**
+ * An input with fewer figures than this is a target with few figures, and the
+ * instruction says so in a note. Three-figure targets (0.100 M, 250. mL) are the
+ * usual bench specification and get no note.
+ */
+export const FEW_FIGURES = 3;
+
+/** An input an instruction was computed from, with the figures it was written to. */
+export interface InputFigures {
+  /** What it is: 'the target', 'the volume', 'the assay'. */
+  what: string;
+  /** As written: '0.1 M'. */
+  text: string;
+  /** Its significant figures (null for an exact number). */
+  sigFigs: number | null;
+}
+
+/** An amount to act on, computed from a target: shown at working precision. */
+export interface Instruction {
+  kind: 'instruction';
+  /** The full value, with the precision the textbook rules would give it. */
+  quantity: Quantity;
+  /** Figures the textbook rules give (null when every input is exact). */
+  textbookSigFigs: number | null;
+  /** The inputs it was computed from. */
+  inputs: InputFigures[];
+}
+
+/** A value computed from measurements: textbook significant figures. */
+export interface Result {
+  kind: 'result';
+  quantity: Quantity;
+}
+
+/** How an amount is shown. */
+export interface AmountDisplay {
+  /** Figure and unit: '1.461 g'. */
+  text: string;
+  /** The figure alone: '1.461'. */
+  figure: string;
+  /** The unrounded value in the unit shown. */
+  value: Decimal;
+  /** The rounded value in the unit shown. */
+  rounded: Decimal;
+  /** Significant figures shown (null for an exact number). */
+  sigFigs: number | null;
+  /** Unit symbol shown ('' for a pure number). */
+  unit: string;
+}
+
+const figuresOf = (q: Quantity): number | null => (q.lsd === null ? null : sigFigsOf(q));
+
+/**
+ * An input's record for an instruction.
+ *
+ * @example
+ * inputFigures('the target', '0.1 M', measure('0.1 M')).sigFigs // 1
+ */
+export function inputFigures(what: string, text: string, q: Quantity): InputFigures {
+  return { what, text: text.trim(), sigFigs: figuresOf(q) };
+}
+
+/**
+ * Marks a computed quantity as an instruction.
+ *
+ * @example
+ * instruction(massToWeigh, [inputFigures('the target', '0.1 M', c)]).kind // 'instruction'
+ */
+export function instruction(quantity: Quantity, inputs: InputFigures[]): Instruction {
+  return { kind: 'instruction', quantity, textbookSigFigs: figuresOf(quantity), inputs };
+}
+
+/**
+ * Marks a computed quantity as a result (textbook figures).
+ *
+ * @example
+ * result(madeConcentration).kind // 'result'
+ */
+export function result(quantity: Quantity): Result {
+  return { kind: 'result', quantity };
+}
+
+/**
+ * The figures an instruction is shown to: the textbook figures, but never fewer than four.
+ *
+ * @example
+ * workingFigures(instruction(q1sf, [])) // 4
+ */
+export function workingFigures(ins: Instruction): number {
+  return Math.max(WORKING_FIGURES, ins.textbookSigFigs ?? WORKING_FIGURES);
+}
+
+function show(value: Decimal, n: number | null, unit: Unit | null, q: Quantity, rounding: RoundingMode): AmountDisplay {
+  const unitText = unit ? unit.symbol : baseUnitText(q.dims);
+  if (n === null) {
+    return { text: unitText ? `${value.toFixed()} ${unitText}` : value.toFixed(), figure: value.toFixed(), value, rounded: value, sigFigs: null, unit: unitText };
+  }
+  // the figures come from the rounded value: 9.9996 to 4 figures is 10.00, not 10.000
+  const rounded = roundToSigFigs(value, n, rounding);
+  const lsd = msd(rounded) - n + 1;
+  const d = displayMeasured({ value: rounded, lsd }, rounding);
+  return { text: unitText ? `${d.text} ${unitText}` : d.text, figure: d.text, value, rounded, sigFigs: n, unit: unitText };
+}
+
+function inUnit(q: Quantity, wanted?: string | Unit | null): { unit: Unit | null; value: Decimal } {
+  const unit = reportUnit(q, wanted);
+  return { unit, value: q.value.div(new Decimal(10).pow(unit ? unit.exp10 : 0)) };
+}
+
+/**
+ * An instruction at working precision, in a unit.
+ *
+ * @example
+ * displayInstruction(prepareSolution('NaCl', { concentration: '0.1 M', volume: '250 mL' }).mass, 'g').text // '1.461 g'
+ */
+export function displayInstruction(ins: Instruction, wanted?: string | Unit | null, rounding: RoundingMode = 'half-even'): AmountDisplay {
+  const { unit, value } = inUnit(ins.quantity, wanted);
+  return show(value, workingFigures(ins), unit, ins.quantity, rounding);
+}
+
+/**
+ * A result with its textbook figures, in a unit (the sig-fig engine's own display).
+ *
+ * @example
+ * displayResult(measure('0.09984 M')).text // '0.09984 M'
+ */
+export function displayResult(q: Quantity, wanted?: string | Unit | null, rounding: RoundingMode = 'half-even'): AmountDisplay {
+  const d = displayQuantity(q, wanted, rounding);
+  return { text: d.text, figure: d.figure, value: d.value, rounded: d.rounded, sigFigs: d.sigFigs, unit: d.unit };
+}
+
+/**
+ * The unit a mass to weigh reads best in: g from 0.1 g up, mg from 0.1 mg, µg below.
+ *
+ * @example
+ * massUnitFor(measure('0.0499 g')) // 'mg'
+ */
+export function massUnitFor(q: Quantity): string {
+  const g = q.value.abs();
+  if (g.gte('0.1')) return 'g';
+  if (g.gte('0.0001')) return 'mg';
+  return 'µg';
+}
+
+/**
+ * The unit a volume to take reads best in: the preferred unit, or the next smaller one below 1 of it.
+ *
+ * @example
+ * volumeUnitFor(measure('0.0500 mL'), 'mL') // 'µL'
+ */
+export function volumeUnitFor(q: Quantity, preferred: Unit | null): string {
+  const u = preferred && sameDims(preferred.dims, q.dims) ? preferred : unitOf('L');
+  const inU = q.value.div(new Decimal(10).pow(u.exp10));
+  if (inU.abs().gte(1) || q.value.isZero()) return u.symbol;
+  if (u.symbol === 'L') return inU.abs().gte('0.001') ? 'mL' : 'µL';
+  if (u.symbol === 'mL') return 'µL';
+  return u.symbol;
+}
+
+const plural = (n: number) => `${n} significant figure${n === 1 ? '' : 's'}`;
+
+/**
+ * The note for an instruction computed from an input with few figures (fewer than {@link FEW_FIGURES}), or null.
+ *
+ * @example
+ * fewFiguresNote(ins, 'the mass to weigh', 'the solution made')?.code // 'WORKING_PRECISION'
+ */
+export function fewFiguresNote(ins: Instruction, what: string, outcome: string | null): Note | null {
+  const few = ins.inputs.filter((i) => i.sigFigs !== null && i.sigFigs < FEW_FIGURES);
+  if (few.length === 0) return null;
+  const list = few.map((i) => `${i.what} ${i.text} has ${plural(i.sigFigs!)}`).join(', ');
+  const tail = outcome ? `; ${outcome} only as well as ${few.length === 1 ? 'that figure says' : 'those figures say'}` : '';
+  return {
+    code: 'WORKING_PRECISION',
+    message: `${list}: ${what} is given at working precision (${plural(workingFigures(ins))}), not rounded to ${few.length === 1 ? 'its' : 'their'} figures${tail}`,
+  };
+}
+
+/** The JSON form of an instruction or a result: the unrounded value in the base unit, and the figure shown. */
+export interface AmountJson {
+  kind: 'instruction' | 'result';
+  /** Unrounded, in `unit`. */
+  value: number;
+  /** The base unit of the value: 'g', 'L', 'M', 'g/L', '' for a pure number. */
+  unit: string;
+  /** What is shown: '1.461 g' (possibly in another unit, such as mg). */
+  display: string;
+  /** Significant figures shown. */
+  sigFigs: number | null;
+  /** For an instruction: the figures the textbook rules would give. */
+  textbookSigFigs?: number | null;
+}
+
+/**
+ * The JSON of an instruction.
+ *
+ * @example
+ * instructionJson(ins, 'g').display // '1.461 g'
+ */
+export function instructionJson(ins: Instruction, wanted?: string | Unit | null, rounding: RoundingMode = 'half-even'): AmountJson {
+  const d = displayInstruction(ins, wanted, rounding);
+  return { kind: 'instruction', value: ins.quantity.value.toNumber(), unit: baseUnitText(ins.quantity.dims), display: d.text, sigFigs: d.sigFigs, textbookSigFigs: ins.textbookSigFigs };
+}
+
+/**
+ * The JSON of a result.
+ *
+ * @example
+ * resultJson(made, 'M').display // '0.09984 M'
+ */
+export function resultJson(q: Quantity, wanted?: string | Unit | null, rounding: RoundingMode = 'half-even'): AmountJson {
+  const d = displayResult(q, wanted, rounding);
+  return { kind: 'result', value: q.value.toNumber(), unit: baseUnitText(q.dims), display: d.text, sigFigs: d.sigFigs };
+}
