@@ -14,10 +14,10 @@ describe('a carry into the next power of ten does not add a figure', () => {
     expect(j).toMatchObject({ display: '1.00', sigFigs: 3, rounded: 1 });
   });
 
-  it('prepare reports the mass as a result with 3 figures', () => {
-    // 0.250 M × 0.1000 L × 39.997 g/mol = 0.999925 g → 1.00 g
+  it('prepare gives the mass to weigh at working precision, its figures counted on the rounded value', () => {
+    // 0.250 M × 0.1000 L × 39.997 g/mol = 0.999925 g: an instruction, 4 figures → 0.9999 g (not 1.000 g)
     const r = pondus(['prepare', 'NaOH', '--concentration', '0.250 M', '--volume', '100.0 mL']);
-    expect(r.stdout).toContain('1.00 g');
+    expect(r.stdout).toContain('weigh 0.9999 g');
     expect(r.stdout).not.toContain('1.000 g');
   });
 

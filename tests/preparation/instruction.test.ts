@@ -12,6 +12,7 @@ describe('instructions at working precision', () => {
   it('shows four figures from a one-figure target, and the figures come from the rounded value', () => {
     const q = measure('0.99996 g * 1', 'x');
     q.lsd = -1; // one figure, as from a one-figure target
+    q.sigFigs = 1;
     const ins = instruction(q, []);
     expect(ins.textbookSigFigs).toBe(1);
     expect(displayInstruction(ins, 'g').text).toBe('1.000 g'); // 0.99996 to 4 figures, not 1.0000
@@ -23,6 +24,7 @@ describe('instructions at working precision', () => {
         const value = new Decimal(mantissa).times(new Decimal(10).pow(exp));
         const q = measure(`${value.toFixed()} g`, 'x');
         q.lsd = value.e - sf + 1; // sf figures by the textbook rules
+        q.sigFigs = sf;
         const d = displayInstruction(instruction(q, []), 'g');
         expect(d.sigFigs).toBe(Math.max(WORKING_FIGURES, sf));
         expect(digits(d.figure)).toBe(Math.max(WORKING_FIGURES, sf));
