@@ -46,7 +46,9 @@ export function empirical(input: string, options: EmpiricalOptions = {}): Empiri
   const s = searchFormula(m);
   const empiricalMass = formulaMass(s.best.formula).molarMass;
   const notes: Note[] = [];
-  for (const e of m.elements.filter((x) => x.byDifference)) notes.push({ code: 'BY_DIFFERENCE', message: `${e.symbol} by difference: ${e.value!.toFixed()}${m.kind === 'percent' ? ' %' : ' g'}` });
+  const d = m.difference;
+  if (d) notes.push({ code: 'BY_DIFFERENCE', message: `${d.symbol} by difference: ${d.value.toFixed()}${m.kind === 'percent' ? ' %' : ' g'}` });
+  notes.push(...(m.notes ?? []));
   let molecular: string | null = null;
   let multiple: number | null = null;
   if (options.molarMass !== undefined) {
