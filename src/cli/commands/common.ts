@@ -42,3 +42,18 @@ export function outputFormat(o: OutputOptions): OutputFormat {
   if (chosen.length > 1) throw fail({ code: 'USAGE', message: `choose one output format, not ${chosen.map((c) => `--${c}`).join(' and ')}` });
   return chosen[0] ?? 'table';
 }
+
+/** The rounding option of commands that round reported values. */
+export interface RoundingOptions {
+  rounding?: 'half-even' | 'half-up';
+}
+
+/**
+ * Adds --rounding half-even|half-up (half-even by default).
+ *
+ * @example
+ * withRoundingOption(program.command('composition'))
+ */
+export function withRoundingOption(cmd: Command): Command {
+  return cmd.addOption(new Option('--rounding <rule>', 'how reported values are rounded: half-even (default; ASTM E29, ISO 80000-1) or half-up (a house or pharmacopoeial rule)').choices(['half-even', 'half-up']).default('half-even'));
+}

@@ -1,0 +1,114 @@
+/**
+ * KEY=VALUE sets typed without quotes. The shell splits `empirical C=40.00 H=6.71
+ * O=53.29` into three arguments; they are one measurement set. The rule:
+ *
+ * - an argument that is exactly one KEY=VALUE pair (one shell word) is a *pair*;
+ *   with `units`, a following argument that is only a unit (`g`, `mg`, `%`) belongs
+ *   to the pair before it (`NaCl=5.00 g` typed unquoted);
+ * - consecutive pairs form one set, joined with spaces, and the result says so;
+ * - an argument holding several pairs (quoted) is a set of its own and ends a run,
+ *   so `'C=40 H=6.7 O=53.3' 'C=85.6 H=14.4'` stays two sets;
+ * - a key repeated within a run means two sets were typed unquoted: refused as a
+ *   usage error, since where one set ends is not known.
+ */
+import { fail } from '../../errors/pondus-error.js';
+import { isSinglePair } from '../../key-values/read-key-values.js';
+
+export interface JoinedArgs {
+  /** The inputs, with each run of pairs joined into one. */
+  inputs: string[];
+  /** For each joined input, the note saying which arguments it was made of. */
+  joined: Record<string, string>;
+}
+
+const UNIT_ONLY = /^(%|[A-Za-zµμ]+(?:\/[A-Za-zµμ]+)?)$/;
+
+/** One run of consecutive pair arguments (with their units attached). */
+export interface PairRun {
+  /** Index in the argument list of the run's first argument. */
+  start: number;
+  /** Index after the run's last argument. */
+  end: number;
+  /** The pairs, each with its unit when one followed. */
+  pairs: string[];
+}
+
+/**
+ * Finds the runs of single KEY=VALUE arguments; with `units`, a unit-only argument after a pair
+ * whose value is a bare number joins it.
+ *
+ * @example
+ * pairRuns(['C=40', 'H=6.7', 'X'], false) // [{ start: 0, end: 2, pairs: ['C=40', 'H=6.7'] }]
+ */
+export function pairRuns(args: string[], units: boolean): PairRun[] {
+  const runs: PairRun[] = [];
+  let current: PairRun | null = null;
+  for (let i = 0; i < args.length; i++) {
+    const a = args[i];
+    if (isSinglePair(a)) {
+      current ??= { start: i, end: i, pairs: [] };
+      current.pairs.push(a);
+      current.end = i + 1;
+      continue;
+    }
+    if (units && current && current.end === i && UNIT_ONLY.test(a) && /[0-9.]$/.test(current.pairs[current.pairs.length - 1])) {
+      current.pairs[current.pairs.length - 1] += ` ${a}`;
+      current.end = i + 1;
+      continue;
+    }
+    if (current) runs.push(current);
+    current = null;
+  }
+  if (current) runs.push(current);
+  return runs;
+}
+
+/**
+ * Refuses a run that repeats a key: two sets typed without quotes.
+ *
+ * @example
+ * checkRun({ start: 0, end: 2, pairs: ['C=40', 'C=41'] }, 'measurement set') // throws USAGE
+ */
+export function checkRun(run: PairRun, what: string): void {
+  const seen = new Set<string>();
+  for (const p of run.pairs) {
+    const key = p.slice(0, p.indexOf('='));
+    if (seen.has(key)) {
+      throw fail({ code: 'USAGE', message: `the arguments ${run.pairs.join(' ')} give ${key} twice: they cannot be one ${what}. Quote each ${what}, e.g. 'C=40.00 H=6.71 O=53.29' 'C=85.6 H=14.4'` });
+    }
+    seen.add(key);
+  }
+}
+
+/** The note for a run joined into one set. */
+export function joinedNote(run: PairRun, what: string): string {
+  const n = run.end - run.start;
+  return `${n} arguments (${run.pairs.join(', ')}) were read as one ${what}: typed without quotes, each argument held one KEY=VALUE pair${n > run.pairs.length ? ' or its unit' : ''}; quote a set ('…') to keep sets apart`;
+}
+
+/**
+ * Joins runs of single KEY=VALUE arguments into one input each (see the module comment).
+ *
+ * @example
+ * joinPairArgs(['C=40.00', 'H=6.71', 'O=53.29'], { what: 'measurement set' }).inputs // ['C=40.00 H=6.71 O=53.29']
+ */
+export function joinPairArgs(args: string[], options: { what: string; units?: boolean }): JoinedArgs {
+  const runs = pairRuns(args, options.units ?? false);
+  const inputs: string[] = [];
+  const joined: Record<string, string> = Object.create(null);
+  let i = 0;
+  for (const run of runs) {
+    inputs.push(...args.slice(i, run.start));
+    const single = run.end - run.start === 1;
+    if (single) inputs.push(args[run.start]);
+    else {
+      checkRun(run, options.what);
+      const text = run.pairs.join(' ');
+      inputs.push(text);
+      joined[text] = joinedNote(run, options.what);
+    }
+    i = run.end;
+  }
+  inputs.push(...args.slice(i));
+  return { inputs, joined };
+}
