@@ -77,7 +77,7 @@ class DelimitedWriter<R> implements ResultWriter<R> {
     this.ctx.out.write(s + '\n');
   }
   ok(_item: InputItem, result: R): void {
-    const items = this.p.noteItems?.(result) ?? (this.p.notes?.(result) ?? []).map((message) => ({ code: '', message }));
+    const items = [...(this.p.noteItems?.(result) ?? (this.p.notes?.(result) ?? []).map((message) => ({ code: '', message })))];
     // a caution goes with every row: in a spreadsheet each row may be read alone
     if (this.p.caution) items.push({ code: 'CAUTION', message: this.p.caution });
     this.line([...this.p.cells(result), notesCell(items), '', ''], true);
