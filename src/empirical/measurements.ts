@@ -84,6 +84,16 @@ function readKey(key: string, column: number, text: string): { symbol: string; s
  * readMeasurements('MgO=57.30 SiO2=42.70').elements.map((e) => e.symbol) // ['Mg', 'O', 'Si']
  */
 export function readMeasurements(text: string): Measurements {
+  try {
+    return readSet(text);
+  } catch (e) {
+    // number and unit readers know the column but not the line: give them the set's text
+    if (e instanceof PondusError && e.input === undefined) throw new PondusError(e.issues, text);
+    throw e;
+  }
+}
+
+function readSet(text: string): Measurements {
   const entries = readKeyValues(text, { colon: true, json: true, example: 'C=40.00 H=6.71 O=53.29 (percent), Fe=34.97 g O=15.03 g, or oxides SiO2=42.70 MgO=57.30' });
   const elements: ElementMeasurement[] = [];
   const conversions: Conversion[] = [];

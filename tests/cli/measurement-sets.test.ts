@@ -58,6 +58,29 @@ describe('KEY=VALUE sets typed without quotes', () => {
   });
 });
 
+describe('masses typed without quotes in combustion', () => {
+  it('0.1000 g --co2 … g: each unit joins its number, with a note', () => {
+    // the docs example of combustion(): 1.000 g sample, 1.499 g CO2, 0.4091 g H2O gives C3H4O3
+    const quoted = jsonLines(pondus(['combustion', '--json', '1.000 g', '--co2', '1.499 g', '--h2o', '0.4091 g']).stdout)[0];
+    const r = pondus(['combustion', '--json', '1.000', 'g', '--co2', '1.499', 'g', '--h2o', '0.4091', 'g']);
+    expect(r.status).toBe(0);
+    const j = jsonLines(r.stdout)[0];
+    expect(j.empirical).toBe(quoted.empirical);
+    expect(j.elements).toEqual(quoted.elements);
+    expect(j.notes[0]).toContain('--co2 1.499 g');
+    const lone = pondus(['combustion', '1.000', 'g', 'g', '--co2', '1.499']);
+    expect(lone.status).toBe(2);
+  });
+});
+
+describe('oxide columns in a measurement sheet', () => {
+  it('SiO2 and MgO columns are read as compound keys', () => {
+    // source: ideal forsterite composition MgO 57.30 %, SiO2 42.70 % (from memory)
+    const r = jsonLines(pondus(['empirical', '--json', '--sheet', '-'], 'id,SiO2,MgO\nFo,42.70,57.30\n').stdout);
+    expect(r[0]).toMatchObject({ id: 'Fo', empirical: 'Mg2O4Si' });
+  });
+});
+
 describe('option combinations: honoured, or refused with exit 2 naming the conflict', () => {
   it.each([
     [['empirical', '--sheet', '-', 'C=40 H=6.7 O=53.3'], 'not both'],

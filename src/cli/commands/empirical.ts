@@ -1,5 +1,5 @@
 import type { Command } from 'commander';
-import { checkRun, joinPairArgs, joinedNote, pairRuns } from '../input/key-value-args.js';
+import { checkRun, joinPairArgs, joinedNote, joinUnitWords, pairRuns } from '../input/key-value-args.js';
 import { fail } from '../../errors/pondus-error.js';
 import { candidateFormulas, DEFAULT_RANGES, readRanges, type CandidateResult } from '../../empirical/candidates.js';
 import { readFound } from '../../analysis/found-values.js';
@@ -8,6 +8,7 @@ import { combustion, PRODUCTS, type CombustionResult } from '../../empirical/com
 import { empirical, empiricalJson, type EmpiricalResult } from '../../empirical/empirical-formula.js';
 import { readMeasurementSheet, type MeasurementRow } from '../../empirical/measurement-sheet.js';
 import { runWithSheet } from './sheet-runner.js';
+import { hillOrder } from '../../formula/hill.js';
 import { displayQuantity } from '../../sigfig/display-quantity.js';
 import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
@@ -62,7 +63,7 @@ export function empiricalPresenter(o: EmpiricalCliOptions): Presenter<EmpiricalR
     columns: ['input', 'empirical', 'molecular', 'residuals', 'alternatives'],
     cells: (r) => [r.input, r.empirical, r.molecular ?? '', residualText(r.fit.residuals), r.alternatives.map((a) => a.formula).join(' ')],
     block: (r) => {
-      const rows = [...r.percents].map(([s, p]) => [s, p.toFixed(3), `±${r.limits.get(s)!.toFixed(3)}`, (p + r.fit.residuals.get(s)!).toFixed(3), `${r.fit.residuals.get(s)! >= 0 ? '+' : ''}${r.fit.residuals.get(s)!.toFixed(3)}`]);
+      const rows = hillOrder(r.percents.keys()).map((s) => [s, r.percents.get(s)!] as const).map(([s, p]) => [s, p.toFixed(3), `±${r.limits.get(s)!.toFixed(3)}`, (p + r.fit.residuals.get(s)!).toFixed(3), `${r.fit.residuals.get(s)! >= 0 ? '+' : ''}${r.fit.residuals.get(s)!.toFixed(3)}`]);
       const lines = [`${r.id ? `${r.id}: ` : ''}${r.input}`, `empirical formula: ${r.empirical}  (${r.empiricalMass.toFixed(3)} g/mol)`];
       if (r.molecular) lines.push(`molecular formula: ${r.molecular}  (× ${r.multiple})`);
       lines.push(fixedTable(['element', 'measured %', 'limit', 'calculated %', 'residual'], rows, ['left', 'right', 'right', 'right', 'right']));
@@ -76,7 +77,10 @@ export function empiricalPresenter(o: EmpiricalCliOptions): Presenter<EmpiricalR
 
 // --- combustion ---------------------------------------------------------------
 
-type CombustionCliOptions = OutputOptions & Partial<Record<keyof typeof PRODUCTS, string>>;
+type CombustionCliOptions = OutputOptions & Partial<Record<keyof typeof PRODUCTS, string>> & {
+  /** Set by the command: the note when units typed as separate words were joined. */
+  unitNote?: string;
+};
 
 /** The presenter for `pondus combustion`: inputs are sample masses. */
 export function combustionPresenter(o: CombustionCliOptions): Presenter<CombustionResult> {
@@ -84,7 +88,11 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
   if (Object.keys(collected).length === 0) throw fail({ code: 'USAGE', message: `give the masses collected: --co2 (and --h2o, ${Object.keys(PRODUCTS).filter((k) => k !== 'co2' && k !== 'h2o').map((k) => `--${k}`).join(', ')})` });
   if (collected.co2 === undefined) throw fail({ code: 'USAGE', message: 'give the mass of CO2 collected (--co2): the carbon of the sample' });
   return {
-    compute: (sample) => combustion({ sample, collected }),
+    compute: (sample) => {
+      const r = combustion({ sample, collected });
+      if (o.unitNote) r.notes.unshift({ code: 'JOINED_ARGUMENTS', message: o.unitNote });
+      return r;
+    },
     json: (r) => ({
       sample: displayQuantity(r.sample, 'g').text,
       elements: r.elements.map((e) => ({ symbol: e.symbol, mass: displayQuantity(e.mass, 'g').value.toNumber(), massDisplay: displayQuantity(e.mass, 'g').text, percent: e.percent.value.toNumber(), percentDisplay: displayQuantity(e.percent).figure, byDifference: e.byDifference })),
@@ -177,7 +185,19 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
     .description('combustion analysis: element percents and the empirical formula from the masses collected')
     .argument('[sample...]', "sample mass, e.g. '0.1000 g'");
   for (const [key, p] of Object.entries(PRODUCTS)) combustionCmd.option(`--${key} <mass>`, `mass of ${p.formula} collected (gives ${p.element})`);
-  withOutputOptions(combustionCmd).action((inputs: string[], o: CombustionCliOptions) => run('combustion', inputs, o));
+  withOutputOptions(combustionCmd).action((inputs: string[], o: CombustionCliOptions, cmd: Command) => {
+    // masses typed without quotes: `0.1000 g --co2 0.2000 g` leaves the units among the samples
+    if (inputs.some((a) => /^[A-Za-zµμ]+$/.test(a))) {
+      const raw = (cmd.parent as (Command & { rawArgs?: string[] }) | null)?.rawArgs ?? [];
+      const re = joinUnitWords(raw, 'combustion', new Set(Object.keys(PRODUCTS)));
+      if (re && re.joined.length > 0 && !re.positionals.some((a) => /^[A-Za-zµμ]+$/.test(a))) {
+        const options = { ...o, ...re.values, unitNote: `units typed as separate words were joined to their numbers: ${re.joined.join('; ')}` } as CombustionCliOptions;
+        return run('combustion', re.positionals, options);
+      }
+      throw fail({ code: 'USAGE', message: "a unit stands alone among the sample masses: quote each mass with its unit, e.g. combustion '0.1000 g' --co2 '0.2000 g'" });
+    }
+    return run('combustion', inputs, o);
+  });
   withOutputOptions(
     program
       .command('candidates')

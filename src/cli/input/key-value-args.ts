@@ -112,3 +112,63 @@ export function joinPairArgs(args: string[], options: { what: string; units?: bo
   inputs.push(...args.slice(i));
   return { inputs, joined };
 }
+
+/** Arguments of one command re-read with unit words joined to the number before them. */
+export interface UnitJoined {
+  positionals: string[];
+  /** Option values (by option name without dashes), with their units joined. */
+  values: Record<string, string>;
+  /** What was joined, for the note: '0.1000 g', '--co2 0.2000 g'. */
+  joined: string[];
+}
+
+/**
+ * Re-reads a command's raw arguments so that a unit typed as a word of its own (`0.1000 g`
+ * unquoted) joins the number before it, whether that number is an argument or an option value.
+ *
+ * @example
+ * joinUnitWords(['combustion', '0.1000', 'g', '--co2', '0.2000', 'g'], 'combustion', new Set(['co2'])).values.co2 // '0.2000 g'
+ */
+export function joinUnitWords(raw: string[], command: string, valueOptions: Set<string>): UnitJoined | null {
+  const at = raw.indexOf(command);
+  if (at < 0) return null;
+  const positionals: string[] = [];
+  const values: Record<string, string> = Object.create(null);
+  const joined: string[] = [];
+  let last: { option: string } | { index: number } | null = null;
+  for (let i = at + 1; i < raw.length; i++) {
+    const t = raw[i];
+    if (t === '--') {
+      positionals.push(...raw.slice(i + 1));
+      break;
+    }
+    if (t.startsWith('--')) {
+      const eq = t.indexOf('=');
+      const name = eq >= 0 ? t.slice(2, eq) : t.slice(2);
+      if (!valueOptions.has(name)) {
+        last = null;
+        continue;
+      }
+      if (eq >= 0) values[name] = t.slice(eq + 1);
+      else if (i + 1 < raw.length) values[name] = raw[++i];
+      last = { option: name };
+      continue;
+    }
+    const previous = last === null ? null : 'option' in last ? values[last.option] : positionals[last.index];
+    if (previous !== null && UNIT_ONLY.test(t) && /[0-9.]$/.test(previous)) {
+      const text = `${previous} ${t}`;
+      if (last !== null && 'option' in last) {
+        values[last.option] = text;
+        joined.push(`--${last.option} ${text}`);
+      } else if (last !== null) {
+        positionals[last.index] = text;
+        joined.push(text);
+      }
+      last = null;
+      continue;
+    }
+    positionals.push(t);
+    last = { index: positionals.length - 1 };
+  }
+  return { positionals, values, joined };
+}
