@@ -98,6 +98,10 @@ describe('option combinations: honoured, or refused with exit 2 naming the confl
     [['composition', '--mixture', '--part', 'Na', 'NaCl=5.00 g'], '--part'],
     [['mass', '--uncertainty', '--weights', 'abridged', 'H2O'], '--uncertainty'],
     [['composition', '--rounding', 'up', 'NaCl'], 'rounding'],
+    [['empirical', '--molar-mass', '190-170', 'C=40.00 H=6.71 O=53.29'], 'lower to the higher'],
+    [['empirical', '--molar-mass', '0', 'C=40.00 H=6.71 O=53.29'], 'positive'],
+    [['candidates', '--ppm', '5000', '180.06'], '--ppm 5000'],
+    [['analysis', 'C6H6', '--found', 'C=92.26', '--tolerance', '200'], '--tolerance 200'],
   ])('%j', (args, words) => {
     const r = pondus(args as string[], 'id,formula,C\nA,C6H6,92.26\n');
     expect(r.status).toBe(2);

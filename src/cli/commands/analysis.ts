@@ -115,6 +115,7 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
   if (o.found !== undefined && o.sheetRows !== undefined) throw fail({ code: 'USAGE', message: '--found and --sheet both give found values: the sheet has them per row; drop --found' });
   const withNotes = (result: AnalysisResult, extra: Note[]): AnalysisResult => (extra.length ? { ...result, notes: [...extra, ...result.notes] } : result);
   if (!/^[0-9]+(\.[0-9]+)?$/.test(opts.tolerance)) throw fail({ code: 'USAGE', message: `--tolerance takes a number of percentage points, not '${opts.tolerance}'` });
+  if (Number(opts.tolerance) > 100) throw fail({ code: 'USAGE', message: `--tolerance ${opts.tolerance} is more than 100 percentage points` });
   const compute = (input: string): Row => {
     const sheetRow = o.sheetRows?.[input];
     if (sheetRow) {

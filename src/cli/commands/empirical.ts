@@ -47,6 +47,9 @@ export function empiricalPresenter(o: EmpiricalCliOptions): Presenter<EmpiricalR
   if (o.molarMass !== undefined && !/^\s*[0-9]+(\.[0-9]+)?\s*(g\/mol)?\s*$|^\s*([0-9.]+)\s*(?:-|–|\.\.)\s*([0-9.]+)\s*$/.test(o.molarMass)) {
     throw fail({ code: 'USAGE', message: `--molar-mass takes a number of g/mol or a range such as 170-190, not '${o.molarMass}'` });
   }
+  const range = o.molarMass === undefined ? null : /^\s*([0-9.]+)\s*(?:-|–|\.\.)\s*([0-9.]+)\s*$/.exec(o.molarMass);
+  if (range && !(Number(range[1]) > 0 && Number(range[1]) < Number(range[2]))) throw fail({ code: 'USAGE', message: `--molar-mass ${o.molarMass}: a range goes from the lower to the higher molar mass, both above zero` });
+  if (o.molarMass !== undefined && !range && !(parseFloat(o.molarMass) > 0)) throw fail({ code: 'USAGE', message: 'the molar mass must be positive' });
   if (o.molarMass !== undefined && o.sheetRows && Object.values(o.sheetRows).some((r) => r.molarMass !== undefined)) {
     throw fail({ code: 'USAGE', message: "the sheet has a molar-mass column and --molar-mass was given too: use one (the column for each row, or --molar-mass for all)" });
   }
@@ -135,6 +138,7 @@ export function candidatesPresenter(o: CandidatesCliOptions): Presenter<Candidat
     return n;
   };
   const opts = { ppm: num(o.ppm, 'ppm'), found: o.found, tolerance: num(o.tolerance, 'tolerance'), elements: o.elements, ratios: o.ratios !== false, limit: num(o.limit, 'limit') };
+  if (opts.ppm !== undefined && opts.ppm > 1000) throw fail({ code: 'USAGE', message: `--ppm ${o.ppm} is too wide a window: at most 1000 ppm` });
   if (opts.limit !== undefined && !Number.isInteger(opts.limit)) throw fail({ code: 'USAGE', message: `--limit takes a whole number, not '${o.limit}'` });
   // options read once, before any input: a bad range or found value is a usage error
   usage(() => readRanges(opts.elements ?? DEFAULT_RANGES));
