@@ -28,6 +28,10 @@ describe('KEY=VALUE sets typed without quotes', () => {
     expect(mix).toHaveLength(1);
     expect(mix[0].components.map((c: { massPercentDisplay: string }) => c.massPercentDisplay)).toEqual(['62.5', '37.5']);
     expect(mix[0].notes[0]).toContain('one mixture');
+    // single pairs quoted with their unit join too: a one-component 'mixture' is never meant
+    const quoted = jsonLines(pondus(['composition', '--mixture', '--json', 'NaCl=5.00 g', 'KCl=3.00 g']).stdout);
+    expect(quoted).toHaveLength(1);
+    expect(quoted[0].components).toHaveLength(2);
   });
 
   it('analysis: --found C=72.30 H=7.91 N=12.60 unquoted is one set of found values', () => {

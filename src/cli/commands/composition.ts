@@ -88,7 +88,7 @@ export function registerComposition(program: Command, run: CommandRunner): void 
       .description('percent by mass of each element, and of a fragment with --part')
       .argument('[formulas...]', 'formulas; - reads one per line from standard input')
       .option('--part <fragment>', 'also the mass fraction of a fragment: H2O in a hydrate, SO4 in a salt, Fe in an iron salt')
-      .option('--mixture', "inputs are measured masses, 'NaCl=5.00 g, KCl=3.00 g' or 'C=7.34 g H=1.85 g N=2.85 g': percent by component and by element"),
+      .option('--mixture', "inputs are measured masses, 'NaCl=5.00 g, KCl=3.00 g' or 'C=7.34 g H=1.85 g N=2.85 g' (unquoted NaCl=5.00 g KCl=3.00 g is one mixture): percent by component and by element"),
   )).action((formulas: string[], o: CompositionCliOptions) => {
     if (!o.mixture) return run('composition', formulas, o);
     const { inputs, joined } = joinPairArgs(formulas, { what: 'mixture', units: true });

@@ -175,7 +175,7 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
     program
       .command('empirical')
       .description('empirical (and molecular) formula from mass percents or element masses')
-      .argument('[measurements...]', "'C=40.00 H=6.71 O=53.29', 'Fe=34.97 g O=15.03 g', 'C=40.00 H=6.71 O=rest'; - reads one set per line (or a JSON object per line)")
+      .argument('[measurements...]', "'C=40.00 H=6.71 O=53.29', 'Fe=34.97 g O=15.03 g', 'C=40.00 H=6.71 O=rest', oxides 'SiO2=42.70 MgO=57.30'; unquoted C=40.00 H=6.71 O=53.29 is one set; - reads one set per line (or a JSON object per line)")
       .option('--molar-mass <M>', 'molar mass in g/mol (or a range such as 170-190) for the molecular formula')
       .option('--sheet <file>', "a CSV of measurements: element columns (C, H, N, …), optional id, 'sample' and 'molar mass' columns; - reads it from standard input"),
   ).action((inputs: string[], o: EmpiricalCliOptions) => {
@@ -209,7 +209,7 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
       .argument('[masses...]', 'neutral monoisotopic masses in u (or molar masses with --molar-mass)')
       .option('--ppm <ppm>', 'mass tolerance in ppm', '5')
       .option('--molar-mass', 'the masses are average molar masses (window ±0.5 g/mol)')
-      .option('--found <values>', 'found percents to match too: C=64.85,H=5.44,N=6.30')
+      .option('--found <values>', 'found percents to match too: C=64.85,H=5.44,N=6.30 (unquoted C=64.85 H=5.44 also works)')
       .option('--tolerance <points>', 'allowed |found − calculated| in percentage points', '0.4')
       .option('--elements <ranges>', 'element ranges', 'C0-80 H0-160 N0-10 O0-20 S0-4 P0-2 F0-6 Cl0-4 Br0-3 I0-2')
       .option('--no-ratios', 'do not apply the element-ratio limits')

@@ -4,7 +4,8 @@
  *
  * - an argument that is exactly one KEY=VALUE pair (one shell word) is a *pair*;
  *   with `units`, a following argument that is only a unit (`g`, `mg`, `%`) belongs
- *   to the pair before it (`NaCl=5.00 g` typed unquoted);
+ *   to the pair before it (`NaCl=5.00 g` typed unquoted), and a quoted single pair
+ *   with its unit (`'NaCl=5.00 g'`) is a pair too;
  * - consecutive pairs form one set, joined with spaces, and the result says so;
  * - an argument holding several pairs (quoted) is a set of its own and ends a run,
  *   so `'C=40 H=6.7 O=53.3' 'C=85.6 H=14.4'` stays two sets;
@@ -22,6 +23,7 @@ export interface JoinedArgs {
 }
 
 const UNIT_ONLY = /^(%|[A-Za-zµμ]+(?:\/[A-Za-zµμ]+)?)$/;
+const PAIR_WITH_UNIT = /^[^\s=,;:{}]+=\s*[-+]?[0-9.]+(?:[eE][-+]?[0-9]+)?\s*(%|[A-Za-zµμ]+(?:\/[A-Za-zµμ]+)?)$/;
 
 /** One run of consecutive pair arguments (with their units attached). */
 export interface PairRun {
@@ -45,7 +47,7 @@ export function pairRuns(args: string[], units: boolean): PairRun[] {
   let current: PairRun | null = null;
   for (let i = 0; i < args.length; i++) {
     const a = args[i];
-    if (isSinglePair(a)) {
+    if (isSinglePair(a) || (units && PAIR_WITH_UNIT.test(a))) {
       current ??= { start: i, end: i, pairs: [] };
       current.pairs.push(a);
       current.end = i + 1;
@@ -83,7 +85,7 @@ export function checkRun(run: PairRun, what: string): void {
 /** The note for a run joined into one set. */
 export function joinedNote(run: PairRun, what: string): string {
   const n = run.end - run.start;
-  return `${n} arguments (${run.pairs.join(', ')}) were read as one ${what}: typed without quotes, each argument held one KEY=VALUE pair${n > run.pairs.length ? ' or its unit' : ''}; quote a set ('…') to keep sets apart`;
+  return `${n} arguments (${run.pairs.join(', ')}) were read as one ${what}: each argument held one KEY=VALUE pair${n > run.pairs.length ? ' or its unit' : ''}; quote a whole set ('…') to keep sets apart`;
 }
 
 /**
