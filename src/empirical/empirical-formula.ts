@@ -101,5 +101,8 @@ export function empiricalJson(r: EmpiricalResult) {
     residuals: obj(r.fit.residuals),
     alternatives: r.alternatives.map((a) => ({ formula: a.formula, residuals: obj(a.residuals) })),
     notes: r.notes.map((n) => n.message),
+    ...(r.measurements.conversions?.length
+      ? { conversions: r.measurements.conversions.map((c) => ({ key: c.key, formula: c.formula, value: c.value.toNumber(), elements: Object.fromEntries(c.parts.map((p) => [p.symbol, p.value.toNumber()])) })) }
+      : {}),
   };
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { errorCode } from '../support/error-code.js';
-import { empirical } from '../../src/empirical/empirical-formula.js';
+import { empirical, empiricalJson } from '../../src/empirical/empirical-formula.js';
 import { readMeasurements } from '../../src/empirical/measurements.js';
 import { formulaMass } from '../../src/mass/formula-mass.js';
 import { Decimal } from '../../src/exact/decimal.js';
@@ -18,6 +18,10 @@ describe('compound (oxide) keys', () => {
     const r = empirical('MgO=57.30 SiO2=42.70');
     expect(r.empirical).toBe('Mg2O4Si');
     expect(r.notes.map((n) => n.code)).toContain('COMPOUND_CONVERTED');
+    const j = empiricalJson(r);
+    expect(j.conversions!.map((c) => c.key)).toEqual(['MgO', 'SiO2']);
+    expect(j.conversions![0].elements.Mg + j.conversions![0].elements.O).toBeCloseTo(57.3, 10);
+    expect(empiricalJson(empirical('C=40.00 H=6.71 O=53.29')).conversions).toBeUndefined();
   });
 
   it('albite: Na2O 11.82, Al2O3 19.44, SiO2 68.74 gives NaAlSi3O8 (round trip)', () => {
