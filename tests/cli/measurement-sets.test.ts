@@ -11,6 +11,11 @@ describe('KEY=VALUE sets typed without quotes', () => {
     expect(j.notes[0]).toContain('were read as one measurement set');
   });
 
+  it('a line of standard input with the same text as a joined set gets no joining note', () => {
+    const r = jsonLines(pondus(['empirical', '--json', 'C=40.00', 'H=6.71', 'O=53.29', '-'], 'C=40.00 H=6.71 O=53.29\n').stdout);
+    expect(r.map((j) => j.notes.length)).toEqual([1, 0]);
+  });
+
   it('quoted sets stay apart; a key repeated in an unquoted run is refused as a usage error', () => {
     const two = jsonLines(pondus(['empirical', '--json', 'C=40 H=6.7 O=53.3', 'C=85.6 H=14.4']).stdout);
     expect(two.map((j) => j.empirical)).toEqual(['CH2O', 'CH2']);

@@ -7,6 +7,7 @@ import { runWithSheet } from './sheet-runner.js';
 import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { splitTrailingValues } from '../../key-values/read-key-values.js';
+import { takeJoinedNote } from '../input/key-value-args.js';
 import type { Note } from '../../errors/issue.js';
 import { withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
@@ -125,7 +126,7 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
     const m = splitTrailingValues(input);
     if (m) {
       const extra: Note[] = [];
-      const joined = o.joined?.[input];
+      const joined = takeJoinedNote(o.joined, input);
       if (joined) extra.push({ code: 'JOINED_ARGUMENTS', message: joined });
       if (o.found !== undefined) extra.push({ code: 'OWN_FOUND_VALUES', message: `this input gives its own found values (${m[1]}); --found is used only for inputs without them` });
       return { result: withNotes(analysis(m[0], m[1], opts), extra), id: null };

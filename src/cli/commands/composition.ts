@@ -7,7 +7,7 @@ import { amountText } from '../../formula/amount.js';
 import { displayContribution, displayMolarMass, displayPercent, fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { fail } from '../../errors/pondus-error.js';
-import { joinPairArgs } from '../input/key-value-args.js';
+import { joinPairArgs, takeJoinedNote } from '../input/key-value-args.js';
 import { withFormulaOptions, withRoundingOption, type FormulaOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
@@ -26,7 +26,7 @@ export function mixturePresenter(o: CompositionCliOptions): Presenter<MixtureRes
   return {
     compute: (input) => {
       const r = mixtureComposition(input, opts);
-      const joined = o.joined?.[input];
+      const joined = takeJoinedNote(o.joined, input);
       if (joined) r.notes.unshift({ code: 'JOINED_ARGUMENTS', message: joined });
       return r;
     },

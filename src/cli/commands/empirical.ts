@@ -1,5 +1,5 @@
 import type { Command } from 'commander';
-import { checkRun, joinPairArgs, joinedNote, joinUnitWords, pairRuns } from '../input/key-value-args.js';
+import { checkRun, joinPairArgs, joinedNote, joinUnitWords, pairRuns, takeJoinedNote } from '../input/key-value-args.js';
 import { fail } from '../../errors/pondus-error.js';
 import { candidateFormulas, DEFAULT_RANGES, readRanges, type CandidateResult } from '../../empirical/candidates.js';
 import { readFound } from '../../analysis/found-values.js';
@@ -58,7 +58,7 @@ export function empiricalPresenter(o: EmpiricalCliOptions): Presenter<EmpiricalR
       const row = o.sheetRows?.[input];
       if (row) return { ...empirical(row.measurements, { molarMass: row.molarMass ?? o.molarMass }), id: row.id };
       const r = empirical(input, { molarMass: o.molarMass });
-      const joined = o.joined?.[input];
+      const joined = takeJoinedNote(o.joined, input);
       if (joined) r.notes.unshift({ code: 'JOINED_ARGUMENTS', message: joined });
       return r;
     },

@@ -174,3 +174,17 @@ export function joinUnitWords(raw: string[], command: string, valueOptions: Set<
   }
   return { positionals, values, joined };
 }
+
+/**
+ * The note for a joined input, given once: a later line of standard input with the same text was
+ * not joined from arguments and gets no note.
+ *
+ * @example
+ * takeJoinedNote({ 'C=40 H=6.7': 'joined' }, 'C=40 H=6.7') // 'joined' (then undefined)
+ */
+export function takeJoinedNote(joined: Record<string, string> | undefined, input: string): string | undefined {
+  if (!joined || !Object.hasOwn(joined, input)) return undefined;
+  const note = joined[input];
+  delete joined[input];
+  return note;
+}
