@@ -117,7 +117,13 @@ function jsonEntries(text: string, code: IssueCode): KeyValue[] {
   });
 }
 
-/** Is this text exactly one KEY=VALUE entry with no white space (one shell word)? */
+/**
+ * Is this text exactly one KEY=VALUE entry with no white space (one shell word)?
+ *
+ * @example
+ * isSinglePair('C=40.00') // true
+ * isSinglePair('C=40.00 H=6.71') // false
+ */
 export function isSinglePair(text: string): boolean {
   return /^[^\s=,;:{}]+=[^\s=,;]+$/.test(text);
 }

@@ -82,7 +82,12 @@ export function checkRun(run: PairRun, what: string): void {
   }
 }
 
-/** The note for a run joined into one set. */
+/**
+ * The note for a run joined into one set.
+ *
+ * @example
+ * joinedNote({ start: 0, end: 2, pairs: ['C=40', 'H=6.7'] }, 'measurement set') // '2 arguments (C=40, H=6.7) were read as one measurement set: …'
+ */
 export function joinedNote(run: PairRun, what: string): string {
   const n = run.end - run.start;
   return `${n} arguments (${run.pairs.join(', ')}) were read as one ${what}: each argument held one KEY=VALUE pair${n > run.pairs.length ? ' or its unit' : ''}; quote a whole set ('…') to keep sets apart`;
