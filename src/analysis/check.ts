@@ -6,14 +6,18 @@
  * The verdict rule: calculated values are rounded to two decimals (half to
  * even), as they are reported; the deviation is found − calculated, exactly;
  * an element passes when |deviation| ≤ tolerance. At the default 0.4, a
- * deviation of exactly 0.40 passes and 0.41 fails.
+ * deviation of exactly 0.40 passes and 0.41 fails. With `rounding: 'half-up'`
+ * (a house or pharmacopoeial rule) the calculated values are rounded half up
+ * instead, and the verdict follows those reported values.
  */
 import { Decimal } from '../exact/decimal.js';
 import { fail, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import type { Note } from '../errors/issue.js';
 import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
 import { hillOrder } from '../formula/hill.js';
-import { readFound } from './found-values.js';
+import { readFoundValues } from './found-values.js';
+import type { RoundingMode } from '../sigfig/round.js';
+import { SOLVENTS } from './solvents.js';
 import { readNumber } from '../sigfig/read-number.js';
 import { solventByName } from './solvents.js';
 import { continuousAmount, searchSolvates, type MassVector } from './solvate-fit.js';
@@ -29,6 +33,8 @@ export interface AnalysisOptions extends MassOptions {
   max?: number;
   /** How many fits to report (default 5). */
   top?: number;
+  /** How calculated percents are rounded to two decimals (default half-even). */
+  rounding?: RoundingMode;
 }
 
 export interface Partner {
@@ -77,7 +83,9 @@ export interface AnalysisResult {
  * analysis('C20H25N3O', 'C=72.30, H=7.91, N=12.60', { solvents: ['water'] }).fits[0].formula // 'C20H25N3O·0.5H2O'
  */
 export function analysis(formula: string, foundText: string, options: AnalysisOptions = {}): AnalysisResult {
-  const found = readFound(foundText);
+  const read = readFoundValues(foundText);
+  const found = read.values;
+  const rounding = options.rounding ?? 'half-even';
   const tolerance = options.tolerance instanceof Decimal ? options.tolerance : readNumber(String(options.tolerance ?? '0.4')).value;
   if (tolerance.isNegative() || tolerance.gt(100)) throw fail({ code: 'BAD_OPTION', message: `tolerance ${tolerance.toFixed()} is out of range` });
   const base = formulaMass(formula, options);
@@ -90,8 +98,9 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
     }
   }
   const symbols = hillOrder(found.keys());
-  const textOf = new Map(symbols.map((s) => [s, found.get(s)!.toFixed(Math.max(2, decimalsOf(foundText, s)))]));
-  const bare = evaluateFit(base.formula, base, [], symbols, found, tolerance, textOf);
+  const textOf = new Map(symbols.map((s) => [s, found.get(s)!.toFixed(Math.max(2, decimalsOf(read.text.get(s)!)))]));
+  const bare = evaluateFit(base.formula, base, [], symbols, found, tolerance, textOf, rounding);
+  const notes: Note[] = [...base.notes, ...read.notes, ...impossibleNotes(base, partners, partnerMasses, symbols, found, tolerance, options)];
 
   let fits: Fit[] = [];
   const continuous: AnalysisResult['continuous'] = [];
@@ -114,12 +123,13 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
         found,
         tolerance,
         textOf,
+        rounding,
       );
     });
     partners.forEach((p, j) => {
       const x = continuousAmount(foundNums, baseVec, partnerVecs[j], max);
       const amount = new Decimal(x.toFixed(3));
-      const f = evaluateFit(base.formula, base, [{ amount, partner: p, mass: partnerMasses[j] }], symbols, found, tolerance, textOf);
+      const f = evaluateFit(base.formula, base, [{ amount, partner: p, mass: partnerMasses[j] }], symbols, found, tolerance, textOf, rounding);
       continuous.push({ formula: p.formula, name: p.name, amount, maxDeviation: f.maxDeviation });
     });
   }
@@ -136,7 +146,7 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
     reportLine: bare.reportLine,
     fits,
     continuous,
-    notes: base.notes,
+    notes,
   };
 }
 
@@ -150,9 +160,53 @@ export function safeAnalysis(formula: string, foundText: string, options: Analys
   return toSafe(() => analysis(formula, foundText, options));
 }
 
-function decimalsOf(text: string, symbol: string): number {
-  const m = new RegExp(`(?:^|[^A-Za-z])${symbol}\\s*[=:]\\s*[0-9]+(?:\\.([0-9]+))?`).exec(text);
-  return m && m[1] ? m[1].length : 0;
+function decimalsOf(written: string): number {
+  const dot = written.indexOf('.');
+  return dot < 0 ? 0 : written.length - dot - 1;
+}
+
+const solventShares = new Map<string, Map<string, { share: Decimal; name: string }>>();
+
+/** The largest mass share of each element among the common solvents and salt partners (cached per weight table). */
+function commonPartnerShares(options: MassOptions): Map<string, { share: Decimal; name: string }> {
+  const key = options.weights ?? 'standard';
+  let out = solventShares.get(key);
+  if (out) return out;
+  out = new Map();
+  for (const { formula, name } of Object.values(SOLVENTS)) {
+    const m = formulaMass(formula, { weights: options.weights });
+    for (const s of m.atoms.keys()) {
+      const share = exactMass(m, s).div(m.molarMass);
+      const prev = out.get(s);
+      if (!prev || share.gt(prev.share)) out.set(s, { share, name });
+    }
+  }
+  solventShares.set(key, out);
+  return out;
+}
+
+/**
+ * Found values no solvate or salt partner could explain: more of an element than the formula,
+ * the partners given or any common solvent contains (a mixture's percent lies between its parts').
+ */
+function impossibleNotes(base: MassResult, partners: Partner[], partnerMasses: MassResult[], symbols: string[], found: Map<string, Decimal>, tolerance: Decimal, options: MassOptions): Note[] {
+  const notes: Note[] = [];
+  for (const s of symbols) {
+    const own = exactMass(base, s).div(base.molarMass).times(100);
+    const v = found.get(s)!;
+    if (v.minus(own).lte(tolerance)) continue;
+    let most = { percent: own, what: base.formula };
+    partnerMasses.forEach((m, j) => {
+      const p = exactMass(m, s).div(m.molarMass).times(100);
+      if (p.gt(most.percent)) most = { percent: p, what: partners[j].name ?? partners[j].formula };
+    });
+    const common = commonPartnerShares(options).get(s);
+    if (common && common.share.times(100).gt(most.percent)) most = { percent: common.share.times(100), what: common.name };
+    if (v.minus(most.percent).gt(tolerance)) {
+      notes.push({ code: 'IMPOSSIBLE_PERCENT', message: `${s} found at ${v.toFixed()} % is more than ${base.formula} (${own.toFixed(2)} %) with any solvate or salt partner could contain (at most ${most.percent.toFixed(2)} %, ${most.what}): check the value and the formula` });
+    }
+  }
+  return notes;
 }
 
 function partnerOf(given: string, options: MassOptions): Partner {
@@ -175,7 +229,7 @@ interface Used {
   mass: MassResult;
 }
 
-function evaluateFit(baseHill: string, base: MassResult, used: Used[], symbols: readonly string[], found: Map<string, Decimal>, tolerance: Decimal, textOf: Map<string, string>): Fit {
+function evaluateFit(baseHill: string, base: MassResult, used: Used[], symbols: readonly string[], found: Map<string, Decimal>, tolerance: Decimal, textOf: Map<string, string>, rounding: RoundingMode): Fit {
   let total = base.molarMass;
   const elementMass = new Map<string, Decimal>();
   for (const s of symbols) elementMass.set(s, exactMass(base, s));
@@ -187,7 +241,7 @@ function evaluateFit(baseHill: string, base: MassResult, used: Used[], symbols: 
   const deviation = new Map<string, Decimal>();
   let maxDeviation = new Decimal(0);
   for (const s of symbols) {
-    const c = elementMass.get(s)!.div(total).times(100).toDecimalPlaces(2, Decimal.ROUND_HALF_EVEN);
+    const c = elementMass.get(s)!.div(total).times(100).toDecimalPlaces(2, rounding === 'half-up' ? Decimal.ROUND_HALF_UP : Decimal.ROUND_HALF_EVEN);
     calculated.set(s, c);
     const d = found.get(s)!.minus(c);
     deviation.set(s, d);

@@ -2,10 +2,53 @@
  * Found values of an elemental analysis: `C=72.30, H=7.91, N=12.60`.
  */
 import { Decimal } from '../exact/decimal.js';
+import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
 import { isElementSymbol } from '../elements/element-table.js';
+import { readKeyValues } from '../key-values/read-key-values.js';
 
-const ENTRY = /^([A-Z][a-z]?)\s*[=:]\s*([0-9]+(?:\.[0-9]+)?)\s*%?$/;
+const NUMBER = /^([-+]?[0-9]+(?:\.[0-9]+)?|[-+]?\.[0-9]+)\s*%?$/;
+
+/** Above this sum the found values cannot be percents of one compound, whatever the analysis error. */
+export const FOUND_SUM_LIMIT = 105;
+/** Above this sum a warning: the values add up to more than 100 % beyond rounding. */
+export const FOUND_SUM_WARNING = 100.5;
+
+/** Found values with the text each was written with, and remarks. */
+export interface FoundValues {
+  values: Map<string, Decimal>;
+  /** Each value as written ('72.30'). */
+  text: Map<string, string>;
+  notes: Note[];
+}
+
+/**
+ * Reads found mass percents with their written text and remarks: every key must be an element
+ * symbol, every value a number from 0 to 100; a sum over 100.5 % is noted, over 105 % refused.
+ *
+ * @example
+ * readFoundValues('C=72.30, H=7.91, N=12.60').text.get('C') // '72.30'
+ */
+export function readFoundValues(text: string): FoundValues {
+  const entries = readKeyValues(text, { colon: true, example: 'C=72.30,H=7.91,N=12.60' });
+  const values = new Map<string, Decimal>();
+  const written = new Map<string, string>();
+  const notes: Note[] = [];
+  for (const { key, value, column, valueColumn } of entries) {
+    if (!isElementSymbol(key)) throw fail({ code: 'UNKNOWN_ELEMENT', message: `unknown element symbol '${key}'`, column, length: key.length }, text);
+    const m = NUMBER.exec(value);
+    if (!m) throw fail({ code: 'BAD_MEASUREMENT', message: `'${key}=${value}' is not a found value such as C=72.30`, column: valueColumn }, text);
+    const v = new Decimal(m[1]);
+    if (v.isNegative()) throw fail({ code: 'BAD_MEASUREMENT', message: `${key} found at ${m[1]} %: a percent cannot be negative`, column: valueColumn }, text);
+    if (v.gt(100)) throw fail({ code: 'BAD_MEASUREMENT', message: `${key} found at ${m[1]} %, over 100 %`, column: valueColumn }, text);
+    values.set(key, v);
+    written.set(key, m[1].replace(/^\+/, ''));
+  }
+  const total = [...values.values()].reduce((a, b) => a.plus(b), new Decimal(0));
+  if (total.gt(FOUND_SUM_LIMIT)) throw fail({ code: 'BAD_MEASUREMENT', message: `the found values add up to ${total.toFixed()} %, over 100 % by more than any analysis error` }, text);
+  if (total.gt(FOUND_SUM_WARNING)) notes.push({ code: 'SUM_OVER_100', message: `the found values add up to ${total.toFixed()} %, over 100 %: check them` });
+  return { values, text: written, notes };
+}
 
 /**
  * Reads found mass percents; every symbol must be an element, every value 0–100.
@@ -14,24 +57,5 @@ const ENTRY = /^([A-Z][a-z]?)\s*[=:]\s*([0-9]+(?:\.[0-9]+)?)\s*%?$/;
  * readFound('C=72.30, H=7.91, N=12.60').get('C')?.toString() // '72.3'
  */
 export function readFound(text: string): Map<string, Decimal> {
-  const out = new Map<string, Decimal>();
-  const entries = text.split(/[,;\s]+/).filter((s) => s !== '');
-  if (entries.length === 0) throw fail({ code: 'BAD_MEASUREMENT', message: 'no found values: give them as C=72.30,H=7.91,N=12.60' }, text);
-  let offset = 0;
-  for (const e of entries) {
-    const at = text.indexOf(e, offset);
-    offset = at + e.length;
-    const m = ENTRY.exec(e);
-    const column = at + 1;
-    if (!m) throw fail({ code: 'BAD_MEASUREMENT', message: `'${e}' is not a found value such as C=72.30`, column }, text);
-    const [, symbol, value] = m;
-    if (!isElementSymbol(symbol)) throw fail({ code: 'UNKNOWN_ELEMENT', message: `unknown element symbol '${symbol}'`, column }, text);
-    const v = new Decimal(value);
-    if (v.gt(100)) throw fail({ code: 'BAD_MEASUREMENT', message: `${symbol} found at ${value} %, over 100 %`, column }, text);
-    if (out.has(symbol)) throw fail({ code: 'BAD_MEASUREMENT', message: `${symbol} is given twice`, column }, text);
-    out.set(symbol, v);
-  }
-  const total = [...out.values()].reduce((a, b) => a.plus(b), new Decimal(0));
-  if (total.gt(100.5)) throw fail({ code: 'BAD_MEASUREMENT', message: `the found values add up to ${total.toFixed()} %, over 100 %` }, text);
-  return out;
+  return readFoundValues(text).values;
 }

@@ -7,10 +7,12 @@ import { Decimal } from '../exact/decimal.js';
 import { fail, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { formulaMass, type MassOptions } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
+import type { Note } from '../errors/issue.js';
+import { readKeyValues } from '../key-values/read-key-values.js';
 import { exact, type Measured } from '../sigfig/measured.js';
 import { add, divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
 import { readNumber } from '../sigfig/read-number.js';
-import { displayMeasured } from '../sigfig/round.js';
+import { displayMeasured, type RoundingMode } from '../sigfig/round.js';
 import { sameDims, unitOf } from '../sigfig/units.js';
 
 /** One share of a mixture: a component or an element. */
@@ -29,9 +31,11 @@ export interface MixtureResult {
   total: Measured;
   components: Share[];
   elements: Share[];
+  /** Remarks (notes from reading the component formulas, each with its formula). */
+  notes: Note[];
 }
 
-const ENTRY = /^\s*([^=\s,;]+)\s*=\s*([-+]?[0-9.]+(?:[eE][-+]?[0-9]+)?)\s*([A-Za-zµμ]+)?\s*$/;
+const AMOUNT = /^([-+]?[0-9.]+(?:[eE][-+]?[0-9]+)?)\s*([A-Za-zµμ]+)?$/;
 
 /**
  * Splits `NaCl=5.00 g, KCl=3.00 g` (commas, semicolons or spaces between entries).
@@ -40,10 +44,7 @@ const ENTRY = /^\s*([^=\s,;]+)\s*=\s*([-+]?[0-9.]+(?:[eE][-+]?[0-9]+)?)\s*([A-Za
  * splitEntries('C=7.34 g H=1.85 g') // ['C=7.34 g', 'H=1.85 g']
  */
 export function splitEntries(input: string): string[] {
-  return input
-    .split(/[,;]|\s+(?=[^\s=,;]+\s*=)/)
-    .map((s) => s.trim())
-    .filter((s) => s !== '');
+  return readKeyValues(input, { code: 'BAD_AMOUNT', example: 'NaCl=5.00 g, KCl=3.00 g' }).map((e) => `${e.key}=${e.value}`);
 }
 
 const pct = (part: Quantity, total: Quantity): Measured => {
@@ -59,18 +60,15 @@ const pct = (part: Quantity, total: Quantity): Measured => {
  * mixtureComposition('C=7.34 g, H=1.85 g, N=2.85 g').components.map(c => displayMeasured(c.massPercent).text) // ['61.0', '15.4', '23.7']
  */
 export function mixtureComposition(input: string, options: MassOptions = {}): MixtureResult {
-  const entries = splitEntries(input);
-  if (entries.length === 0) throw fail({ code: 'BAD_AMOUNT', message: 'no components: write them as formula=mass, e.g. NaCl=5.00 g, KCl=3.00 g' }, input);
+  const entries = readKeyValues(input, { code: 'BAD_AMOUNT', example: 'NaCl=5.00 g, KCl=3.00 g' });
   const parts: { name: string; mass: Quantity; fractions: { symbol: string; fraction: Decimal }[] }[] = [];
-  let offset = 0;
-  for (const entry of entries) {
-    const at = input.indexOf(entry, offset);
-    offset = at + entry.length;
-    const column = at + 1;
-    const m = ENTRY.exec(entry);
-    if (!m) throw fail({ code: 'BAD_AMOUNT', message: `'${entry}' is not formula=amount (e.g. NaCl=5.00 g)`, column }, input);
-    const [, formula, number, unitText] = m;
-    if (!unitText) throw fail({ code: 'BAD_AMOUNT', message: `give a unit for ${formula}: ${formula}=${number} g`, column }, input);
+  const notes: Note[] = [];
+  for (const { key: formula, value, column, valueColumn } of entries) {
+    const at = column - 1;
+    const m = AMOUNT.exec(value);
+    if (!m) throw fail({ code: 'BAD_AMOUNT', message: `'${formula}=${value}' is not formula=amount (e.g. NaCl=5.00 g)`, column: valueColumn }, input);
+    const [, number, unitText] = m;
+    if (!unitText) throw fail({ code: 'BAD_AMOUNT', message: `give a unit for ${formula}: ${formula}=${number} g`, column: valueColumn }, input);
     let mr;
     try {
       mr = formulaMass(formula, options);
@@ -78,12 +76,13 @@ export function mixtureComposition(input: string, options: MassOptions = {}): Mi
       if (e instanceof PondusError) throw new PondusError(e.issues.map((i) => ({ ...i, column: (i.column ?? 1) + at })), input);
       throw e;
     }
-    const unit = unitOf(unitText, column + formula.length + 1);
-    const num = readNumber(number, column);
-    if (num.value.isNegative()) throw fail({ code: 'BAD_AMOUNT', message: `a mass cannot be negative: ${entry}`, column }, input);
+    for (const n of mr.notes) notes.push({ ...n, message: `${formula}: ${n.message}` });
+    const unit = unitOf(unitText, valueColumn + number.length);
+    const num = readNumber(number, valueColumn);
+    if (num.value.isNegative()) throw fail({ code: 'BAD_AMOUNT', message: `a mass cannot be negative: ${formula}=${value}`, column: valueColumn }, input);
     let mass = quantity(num, unit);
     if (sameDims(unit.dims, [0, 1, 0])) mass = multiply(mass, quantity(reportedMolarMass(mr), unitOf('g/mol')));
-    else if (!sameDims(unit.dims, [1, 0, 0])) throw fail({ code: 'BAD_AMOUNT', message: `${formula}: give a mass (g, mg, kg) or an amount (mol, mmol), not ${unitText}`, column }, input);
+    else if (!sameDims(unit.dims, [1, 0, 0])) throw fail({ code: 'BAD_AMOUNT', message: `${formula}: give a mass (g, mg, kg) or an amount (mol, mmol), not ${unitText}`, column: valueColumn }, input);
     const fractions = mr.contributions.map((c) => ({ symbol: c.label, fraction: c.mass.div(mr.molarMass) }));
     parts.push({ name: formula, mass, fractions });
   }
@@ -102,7 +101,7 @@ export function mixtureComposition(input: string, options: MassOptions = {}): Mi
     }
   }
   const elements: Share[] = [...byElement].map(([name, q]) => ({ name, mass: { value: q.value, lsd: q.lsd }, massPercent: pct(q, total) }));
-  return { input, total: { value: total.value, lsd: total.lsd }, components, elements };
+  return { input, total: { value: total.value, lsd: total.lsd }, components, elements, notes };
 }
 
 /** Non-throwing {@link mixtureComposition}. */
@@ -116,19 +115,20 @@ export function safeMixtureComposition(input: string, options: MassOptions = {})
  * @example
  * mixtureJson(mixtureComposition('NaCl=5.00 g, KCl=3.00 g')).components[0].massPercentDisplay // '62.5'
  */
-export function mixtureJson(r: MixtureResult) {
+export function mixtureJson(r: MixtureResult, rounding: RoundingMode = 'half-even') {
   const share = (s: Share) => ({
     name: s.name,
     mass: s.mass.value.toNumber(),
-    massDisplay: displayMeasured(s.mass).text,
+    massDisplay: displayMeasured(s.mass, rounding).text,
     massPercent: s.massPercent.value.toNumber(),
-    massPercentDisplay: displayMeasured(s.massPercent).text,
+    massPercentDisplay: displayMeasured(s.massPercent, rounding).text,
   });
   return {
     input: r.input,
     totalMass: r.total.value.toNumber(),
-    totalMassDisplay: displayMeasured(r.total).text,
+    totalMassDisplay: displayMeasured(r.total, rounding).text,
     components: r.components.map(share),
     elements: r.elements.map(share),
+    notes: r.notes.map((n) => n.message),
   };
 }

@@ -12,10 +12,11 @@
  * (H/C 0.2–3.1, N/C ≤ 1.3, O/C ≤ 1.2, P/C ≤ 0.3, S/C ≤ 0.8, F/C ≤ 1.5,
  * Cl/C ≤ 0.8, Br/C ≤ 0.8; values from memory of the paper's table).
  */
+import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { getAtomData } from '../elements/atom-data.js';
 import { hillFormula } from '../formula/hill.js';
-import { readFound } from '../analysis/found-values.js';
+import { readFoundValues } from '../analysis/found-values.js';
 import { readNumber } from '../sigfig/read-number.js';
 
 export interface CandidateOptions {
@@ -58,6 +59,8 @@ export interface CandidateResult {
   examined: number;
   /** More candidates fit than were returned. */
   truncated: boolean;
+  /** Remarks (found values summing over 100 %, …). */
+  notes: Note[];
 }
 
 export const DEFAULT_RANGES = 'C0-80 H0-160 N0-10 O0-20 S0-4 P0-2 F0-6 Cl0-4 Br0-3 I0-2';
@@ -132,7 +135,8 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
   } else {
     throw fail({ code: 'BAD_OPTION', message: 'give an accurate mass (--mass, with --ppm) or a molar mass (--molar-mass): the search needs a mass window' });
   }
-  const found = options.found ? readFound(options.found) : null;
+  const read = options.found ? readFoundValues(options.found) : null;
+  const found = read ? read.values : null;
   const tolerance = options.tolerance ?? 0.4;
   const useRatios = options.ratios ?? true;
   const limit = options.limit ?? 50;
@@ -225,7 +229,7 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
 
   const key = (c: Candidate) => (c.ppm !== null ? Math.abs(c.ppm) : 0) + (c.maxDeviation ?? 0);
   out.sort((p, q) => key(p) - key(q) || (p.maxDeviation ?? 0) - (q.maxDeviation ?? 0));
-  return { input: describe(options), candidates: out.slice(0, limit), examined, truncated: out.length > limit };
+  return { input: describe(options), candidates: out.slice(0, limit), examined, truncated: out.length > limit, notes: read ? [...read.notes] : [] };
 }
 
 function describe(o: CandidateOptions): string {

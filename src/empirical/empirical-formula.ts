@@ -46,7 +46,9 @@ export function empirical(input: string, options: EmpiricalOptions = {}): Empiri
   const s = searchFormula(m);
   const empiricalMass = formulaMass(s.best.formula).molarMass;
   const notes: Note[] = [];
-  for (const e of m.elements.filter((x) => x.byDifference)) notes.push({ code: 'BY_DIFFERENCE', message: `${e.symbol} by difference: ${e.value!.toFixed()}${m.kind === 'percent' ? ' %' : ' g'}` });
+  const d = m.difference;
+  if (d) notes.push({ code: 'BY_DIFFERENCE', message: `${d.symbol} by difference: ${d.value.toFixed()}${m.kind === 'percent' ? ' %' : ' g'}` });
+  notes.push(...(m.notes ?? []));
   let molecular: string | null = null;
   let multiple: number | null = null;
   if (options.molarMass !== undefined) {
@@ -99,5 +101,8 @@ export function empiricalJson(r: EmpiricalResult) {
     residuals: obj(r.fit.residuals),
     alternatives: r.alternatives.map((a) => ({ formula: a.formula, residuals: obj(a.residuals) })),
     notes: r.notes.map((n) => n.message),
+    ...(r.measurements.conversions?.length
+      ? { conversions: r.measurements.conversions.map((c) => ({ key: c.key, formula: c.formula, value: c.value.toNumber(), elements: Object.fromEntries(c.parts.map((p) => [p.symbol, p.value.toNumber()])) })) }
+      : {}),
   };
 }

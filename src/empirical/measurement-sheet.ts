@@ -1,7 +1,9 @@
 /**
  * Measurement sheets for empirical formulas: a CSV with an optional id column,
  * one column per element (percents, or masses with a unit in the cell, or
- * 'rest'), optionally a sample-mass column and a molar-mass column.
+ * 'rest'), optionally a sample-mass column and a molar-mass column. Oxide
+ * columns (SiO2, Al2O3, MgO, Na2O, …: a header of element symbols and counts
+ * ending in O) are read as compound keys, like `SiO2=42.70` in a set.
  */
 import { fail } from '../errors/pondus-error.js';
 import { columnIndex, elementColumns, readCsvSheet } from '../sheets/read-sheet.js';
@@ -24,11 +26,15 @@ export interface MeasurementRow {
  */
 export function readMeasurementSheet(text: string): MeasurementRow[] {
   const { header, rows } = readCsvSheet(text);
-  const elementCols = elementColumns(header);
-  if (elementCols.length === 0) throw fail({ code: 'BAD_RECORD', message: 'the sheet has no element columns (C, H, N, O, …)' });
   const idCol = columnIndex(header, /^(id|compound|name)$/i);
   const sampleCol = columnIndex(header, /^sample( mass)?$/i);
   const molarCol = columnIndex(header, /^(molar mass|M|MW|molecular weight)$/i);
+  const taken = new Set([idCol, sampleCol, molarCol]);
+  const oxideCols: [string, number][] = header
+    .map((h, i) => [h.trim(), i] as [string, number])
+    .filter(([h, i]) => !taken.has(i) && /^(?:[A-Z][a-z]?[0-9]*)+O[0-9]*$/.test(h) && !/^[A-Z][a-z]?$/.test(h));
+  const elementCols = [...elementColumns(header).filter(([, i]) => !taken.has(i)), ...oxideCols].sort((a, b) => a[1] - b[1]);
+  if (elementCols.length === 0) throw fail({ code: 'BAD_RECORD', message: 'the sheet has no element columns (C, H, N, O, …) or oxide columns (SiO2, MgO, …)' });
   return rows.map(({ line, raw, cells }) => {
     const parts = elementCols.filter(([, i]) => (cells[i] ?? '') !== '').map(([s, i]) => `${s}=${cells[i]}`);
     if (sampleCol >= 0 && (cells[sampleCol] ?? '') !== '') parts.push(`sample=${cells[sampleCol]}`);

@@ -4,10 +4,19 @@
  * one element by difference (`O=rest`), and for masses an optional sample mass
  * (`sample=12.04 g`). Also a JSON object per line (`{"C": "40.00", …}`).
  * Each value keeps the precision it was written with.
+ *
+ * A key may be a compound, as geochemists and ceramicists report analyses
+ * (`SiO2=42.70 MgO=57.30`): its value is split into its elements by the
+ * formula's mass shares (Si is 46.74 % of SiO2), and so is its precision (half
+ * a unit of 42.70, times the share). An element reached from several keys
+ * (O from every oxide, or O from oxides plus `O=rest`) gets the sum.
  */
 import { Decimal } from '../exact/decimal.js';
-import { fail } from '../errors/pondus-error.js';
+import type { Note } from '../errors/issue.js';
+import { fail, PondusError } from '../errors/pondus-error.js';
 import { isElementSymbol } from '../elements/element-table.js';
+import { readKeyValues } from '../key-values/read-key-values.js';
+import { formulaMass } from '../mass/formula-mass.js';
 import { readNumber } from '../sigfig/read-number.js';
 import { unitOf } from '../sigfig/units.js';
 
@@ -26,30 +35,45 @@ export interface Measurements {
   /** Sample mass in g (masses only). */
   sample: Decimal | null;
   sampleHalfUnit: Decimal | null;
+  /** Compound keys and how they were split into elements (empty for element keys only). */
+  conversions?: Conversion[];
+  /** The element by difference and the value found for it, before anything from compounds was added. */
+  difference?: { symbol: string; value: Decimal } | null;
+  /** Remarks: the conversions, a sum over 100 %, notes from reading the compound formulas. */
+  notes?: Note[];
 }
 
 const DIFFERENCE = /^(rest|diff|difference|by difference|\*|\?)$/i;
 
-function entriesOf(text: string): [string, string, number][] {
-  const t = text.trim();
-  if (t.startsWith('{')) {
-    let obj: unknown;
-    try {
-      obj = JSON.parse(t);
-    } catch {
-      throw fail({ code: 'BAD_MEASUREMENT', message: 'the line starts with { but is not valid JSON' }, text);
-    }
-    if (obj === null || typeof obj !== 'object' || Array.isArray(obj)) throw fail({ code: 'BAD_MEASUREMENT', message: 'a JSON line must be an object such as {"C": "40.00", "H": "6.71", "O": "rest"}' }, text);
-    return Object.entries(obj as Record<string, unknown>).map(([k, v]) => [k, String(v), 1]);
+/** A compound key (an oxide) converted to its elements with the formula's mass shares. */
+export interface Conversion {
+  /** The key as written: 'SiO2'. */
+  key: string;
+  /** Its Hill formula. */
+  formula: string;
+  /** The value given (percent, or g), and as written. */
+  value: Decimal;
+  text: string;
+  /** Each element's part of the value. */
+  parts: { symbol: string; value: Decimal; share: Decimal }[];
+}
+
+/** What a key of a measurement set stands for: an element, or a compound split into its elements. */
+function readKey(key: string, column: number, text: string): { symbol: string; share: Decimal }[] | { formula: string; parts: { symbol: string; share: Decimal }[]; notes: Note[] } {
+  if (isElementSymbol(key)) return [{ symbol: key, share: new Decimal(1) }];
+  let m;
+  try {
+    m = formulaMass(key);
+  } catch (e) {
+    if (/^[A-Z][a-z]?$/.test(key) || /^[A-Za-z][a-z]?$/.test(key)) throw fail({ code: 'UNKNOWN_ELEMENT', message: `unknown element symbol '${key}'`, column, length: key.length }, text);
+    const why = e instanceof PondusError ? `: ${e.first.message}` : '';
+    throw fail({ code: 'BAD_MEASUREMENT', message: `'${key}' is neither an element symbol nor a formula such as SiO2 or Al2O3${why}`, column, length: key.length }, text);
   }
-  const out: [string, string, number][] = [];
-  const re = /([A-Za-z]+)\s*[=:]\s*([^=,;]*?)(?=\s*(?:[,;]|\s+[A-Za-z]+\s*[=:]|$))/g;
-  let m: RegExpExecArray | null;
-  while ((m = re.exec(t)) !== null) {
-    out.push([m[1], m[2].trim(), m.index + 1]);
-  }
-  if (out.length === 0) throw fail({ code: 'BAD_MEASUREMENT', message: 'no measurements: write them as C=40.00 H=6.71 O=53.29 (percent) or Fe=34.97 g O=15.03 g' }, text);
-  return out;
+  if (m.charge !== 0) throw fail({ code: 'BAD_MEASUREMENT', message: `'${key}' is an ion: give element or oxide percents (SiO2, Al2O3, Na2O, …)`, column, length: key.length }, text);
+  if (m.contributions.some((c) => c.massNumber !== null)) throw fail({ code: 'BAD_MEASUREMENT', message: `'${key}' names an isotope: give element or oxide percents with natural atomic weights`, column, length: key.length }, text);
+  const bySymbol = new Map<string, Decimal>();
+  for (const c of m.contributions) bySymbol.set(c.symbol, (bySymbol.get(c.symbol) ?? new Decimal(0)).plus(c.mass));
+  return { formula: m.formula, parts: [...bySymbol].map(([symbol, mass]) => ({ symbol, share: mass.div(m.molarMass) })), notes: m.notes };
 }
 
 /**
@@ -57,68 +81,122 @@ function entriesOf(text: string): [string, string, number][] {
  *
  * @example
  * readMeasurements('C=40.00 H=6.71 O=rest').elements[2].byDifference // true
+ * readMeasurements('MgO=57.30 SiO2=42.70').elements.map((e) => e.symbol) // ['Mg', 'O', 'Si']
  */
 export function readMeasurements(text: string): Measurements {
-  const entries = entriesOf(text);
+  try {
+    return readSet(text);
+  } catch (e) {
+    // number and unit readers know the column but not the line: give them the set's text
+    if (e instanceof PondusError && e.input === undefined) throw new PondusError(e.issues, text);
+    throw e;
+  }
+}
+
+function readSet(text: string): Measurements {
+  const entries = readKeyValues(text, { colon: true, json: true, example: 'C=40.00 H=6.71 O=53.29 (percent), Fe=34.97 g O=15.03 g, or oxides SiO2=42.70 MgO=57.30' });
   const elements: ElementMeasurement[] = [];
+  const conversions: Conversion[] = [];
+  const notes: Note[] = [];
   let kind: Measurements['kind'] | null = null;
   let sample: Decimal | null = null;
   let sampleHalfUnit: Decimal | null = null;
-  for (const [key, raw, column] of entries) {
+  let diffSymbol: string | null = null;
+  let diffColumn = 0;
+  // what was given, key by key: the sum of the values, and of their half-units
+  let sum = new Decimal(0);
+  let slack = new Decimal(0);
+  const add = (symbol: string, value: Decimal, halfUnit: Decimal) => {
+    const e = elements.find((x) => x.symbol === symbol);
+    if (e) {
+      e.value = e.value!.plus(value);
+      e.halfUnit = e.halfUnit.plus(halfUnit);
+    } else elements.push({ symbol, value, halfUnit, byDifference: false });
+  };
+  for (const { key, value: raw, column, valueColumn } of entries) {
     if (/^sample$/i.test(key)) {
       const m = /^([-+]?[0-9.eE+-]+)\s*([A-Za-zµ]+)$/.exec(raw);
       if (!m) throw fail({ code: 'BAD_MEASUREMENT', message: `the sample mass needs a unit: sample=${raw} g`, column }, text);
-      const n = readNumber(m[1], column);
-      const u = unitOf(m[2], column);
-      if (u.dims[0] !== 1 || u.dims[1] !== 0 || u.dims[2] !== 0) throw fail({ code: 'BAD_MEASUREMENT', message: 'the sample must be a mass', column }, text);
+      const n = readNumber(m[1], valueColumn);
+      const u = unitOf(m[2], valueColumn);
+      if (u.dims[0] !== 1 || u.dims[1] !== 0 || u.dims[2] !== 0) throw fail({ code: 'BAD_MEASUREMENT', message: 'the sample must be a mass', column: valueColumn }, text);
       const f = new Decimal(10).pow(u.exp10);
       sample = n.value.times(f);
       sampleHalfUnit = new Decimal(10).pow(n.lsd! + u.exp10).div(2);
+      if (sample.lte(0)) throw fail({ code: 'BAD_MEASUREMENT', message: 'the sample mass must be positive', column: valueColumn }, text);
       continue;
     }
-    if (!isElementSymbol(key)) throw fail({ code: 'UNKNOWN_ELEMENT', message: `unknown element symbol '${key}'`, column }, text);
-    if (elements.some((e) => e.symbol === key)) throw fail({ code: 'BAD_MEASUREMENT', message: `${key} is given twice`, column }, text);
+    const read = readKey(key, column, text);
     if (DIFFERENCE.test(raw)) {
-      elements.push({ symbol: key, value: null, halfUnit: new Decimal(0), byDifference: true });
+      if (!Array.isArray(read)) throw fail({ code: 'BAD_MEASUREMENT', message: `only an element can be found by difference, not the compound ${key}`, column }, text);
+      if (diffSymbol) throw fail({ code: 'BAD_MEASUREMENT', message: 'only one element can be found by difference', column }, text);
+      diffSymbol = key;
+      diffColumn = column;
       continue;
     }
     const m = /^([-+]?[0-9.]+(?:[eE][-+]?[0-9]+)?)\s*(%|[A-Za-zµ]+)?$/.exec(raw);
-    if (!m) throw fail({ code: 'BAD_MEASUREMENT', message: `'${key}=${raw}' is not a number, a mass or 'rest'`, column }, text);
-    const n = readNumber(m[1], column);
-    const unit = m[2] && m[2] !== '%' ? unitOf(m[2], column) : null;
+    if (!m) throw fail({ code: 'BAD_MEASUREMENT', message: `'${key}=${raw}' is not a number, a mass or 'rest'`, column: valueColumn }, text);
+    const n = readNumber(m[1], valueColumn);
+    const unit = m[2] && m[2] !== '%' ? unitOf(m[2], valueColumn) : null;
     const thisKind = unit ? 'mass' : 'percent';
-    if (unit && (unit.dims[0] !== 1 || unit.dims[1] !== 0 || unit.dims[2] !== 0)) throw fail({ code: 'BAD_MEASUREMENT', message: `${key}: give a mass (g, mg) or a percent, not ${m[2]}`, column }, text);
-    if (kind && kind !== thisKind) throw fail({ code: 'BAD_MEASUREMENT', message: 'give all values as percents or all as masses, not a mix', column }, text);
+    if (unit && (unit.dims[0] !== 1 || unit.dims[1] !== 0 || unit.dims[2] !== 0)) throw fail({ code: 'BAD_MEASUREMENT', message: `${key}: give a mass (g, mg) or a percent, not ${m[2]}`, column: valueColumn }, text);
+    if (kind && kind !== thisKind) throw fail({ code: 'BAD_MEASUREMENT', message: 'give all values as percents or all as masses, not a mix', column: valueColumn }, text);
     kind = thisKind;
     const f = unit ? new Decimal(10).pow(unit.exp10) : new Decimal(1);
     const value = n.value.times(f);
-    if (value.isNegative()) throw fail({ code: 'BAD_MEASUREMENT', message: `${key} is negative`, column }, text);
-    if (thisKind === 'percent' && value.gt(100)) throw fail({ code: 'BAD_MEASUREMENT', message: `${key} is over 100 %`, column }, text);
+    if (value.isNegative()) throw fail({ code: 'BAD_MEASUREMENT', message: `${key} is negative`, column: valueColumn }, text);
+    if (thisKind === 'percent' && value.gt(100)) throw fail({ code: 'BAD_MEASUREMENT', message: `${key} is over 100 %`, column: valueColumn }, text);
     // a bare integer like 40 is read as known to the unit (it is a measurement here, not a count)
     const lsd = n.lsd! + (unit ? unit.exp10 : 0);
-    elements.push({ symbol: key, value, halfUnit: new Decimal(10).pow(lsd).div(2), byDifference: false });
+    const halfUnit = new Decimal(10).pow(lsd).div(2);
+    sum = sum.plus(value);
+    slack = slack.plus(halfUnit);
+    if (Array.isArray(read)) {
+      add(key, value, halfUnit);
+    } else {
+      conversions.push({ key, formula: read.formula, value, text: m[1], parts: read.parts.map((p) => ({ symbol: p.symbol, value: value.times(p.share), share: p.share })) });
+      // the limit of each element's value scales with its share of the compound
+      for (const p of read.parts) add(p.symbol, value.times(p.share), halfUnit.times(p.share));
+      for (const note of read.notes) notes.push({ ...note, message: `${key}: ${note.message}` });
+    }
   }
-  if (elements.length === 0) throw fail({ code: 'BAD_MEASUREMENT', message: 'no elements given' }, text);
+  if (elements.length === 0 && diffSymbol === null) throw fail({ code: 'BAD_MEASUREMENT', message: 'no elements given' }, text);
   kind ??= 'percent';
-  const diffs = elements.filter((e) => e.byDifference);
-  if (diffs.length > 1) throw fail({ code: 'BAD_MEASUREMENT', message: 'only one element can be found by difference' }, text);
   if (sample && kind !== 'mass') throw fail({ code: 'BAD_MEASUREMENT', message: 'a sample mass goes with element masses, not percents' }, text);
-  const known = elements.filter((e) => !e.byDifference);
-  const sum = known.reduce((s, e) => s.plus(e.value!), new Decimal(0));
-  const slack = known.reduce((s, e) => s.plus(e.halfUnit), new Decimal(0));
+  const unitText = kind === 'percent' ? ' %' : ' g';
   const total = kind === 'percent' ? new Decimal(100) : sample;
-  if (diffs.length === 1) {
-    if (!total) throw fail({ code: 'BAD_MEASUREMENT', message: `${diffs[0].symbol} by difference needs the sample mass: add sample=… g` }, text);
-    const rest = total.minus(sum);
-    if (rest.lte(slack)) throw fail({ code: 'BAD_MEASUREMENT', message: `nothing is left for ${diffs[0].symbol}: the others add up to ${sum.toFixed()}${kind === 'percent' ? ' %' : ' g'}` }, text);
-    diffs[0].value = rest;
-    diffs[0].halfUnit = slack.plus(kind === 'mass' && sampleHalfUnit ? sampleHalfUnit : 0);
+  let difference: Measurements['difference'] = null;
+  if (diffSymbol !== null) {
+    if (!total) throw fail({ code: 'BAD_MEASUREMENT', message: `${diffSymbol} by difference needs the sample mass: add sample=… g`, column: diffColumn }, text);
+    let rest = total.minus(sum);
+    const fromCompounds = elements.some((e) => e.symbol === diffSymbol);
+    const restSlack = slack.plus(kind === 'mass' && sampleHalfUnit ? sampleHalfUnit : 0);
+    // with oxides, the oxygen by difference may be nothing at all (the oxides sum to 100 %)
+    if (fromCompounds && rest.abs().lte(restSlack)) rest = Decimal.max(rest, 0);
+    else if (rest.lte(slack)) throw fail({ code: 'BAD_MEASUREMENT', message: `nothing is left for ${diffSymbol}: the others add up to ${sum.toFixed()}${unitText}`, column: diffColumn }, text);
+    difference = { symbol: diffSymbol, value: rest };
+    const e = elements.find((x) => x.symbol === diffSymbol);
+    if (e) {
+      e.value = e.value!.plus(rest);
+      e.halfUnit = e.halfUnit.plus(restSlack);
+      e.byDifference = true;
+    } else elements.push({ symbol: diffSymbol, value: rest, halfUnit: restSlack, byDifference: true });
   } else if (kind === 'percent') {
     if (sum.minus(100).abs().gt(slack.plus('1.0'))) {
       throw fail({ code: 'BAD_MEASUREMENT', message: `the percents add up to ${sum.toFixed()} %, not 100 %: is an element missing (give it as X=rest)?` }, text);
     }
+    if (sum.gt('100.5')) notes.push({ code: 'SUM_OVER_100', message: `the percents add up to ${sum.toFixed()} %, over 100 %: the formula is fitted to the values as given; check them` });
   } else if (total && sum.gt(total.plus(slack))) {
     throw fail({ code: 'BAD_MEASUREMENT', message: `the element masses add up to ${sum.toFixed()} g, more than the sample` }, text);
   }
-  return { kind, elements, sample, sampleHalfUnit };
+  if (conversions.length > 0) {
+    const fmt = (d: Decimal) => d.toDecimalPlaces(3).toFixed();
+    const each = conversions.map((c) => `${c.key} ${c.text}${unitText} → ${c.parts.map((p) => `${p.symbol} ${fmt(p.value)}`).join(' + ')}`).join('; ');
+    notes.unshift({ code: 'COMPOUND_CONVERTED', message: `compound values split into element values by the formulas' mass shares (standard atomic weights): ${each}` });
+    if (difference) {
+      const own = conversions.flatMap((c) => c.parts).filter((p) => p.symbol === difference!.symbol);
+      if (own.length > 0) notes.push({ code: 'DIFFERENCE_ADDED', message: `${difference.symbol} by difference (${fmt(difference.value)}${unitText}) is added to the ${difference.symbol} carried by the compounds (${fmt(own.reduce((a, p) => a.plus(p.value), new Decimal(0)))}${unitText})` });
+    }
+  }
+  return { kind, elements, sample, sampleHalfUnit, conversions, difference, notes };
 }

@@ -6,10 +6,13 @@ import { fail } from '../../errors/pondus-error.js';
 import { runWithSheet } from './sheet-runner.js';
 import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
-import { withOutputOptions, type OutputOptions } from './common.js';
+import { splitTrailingValues } from '../../key-values/read-key-values.js';
+import { takeJoinedNote } from '../input/key-value-args.js';
+import type { Note } from '../../errors/issue.js';
+import { withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
-export interface AnalysisCliOptions extends OutputOptions {
+export interface AnalysisCliOptions extends OutputOptions, RoundingOptions {
   found?: string;
   solvents?: string;
   tolerance?: string;
@@ -20,10 +23,68 @@ export interface AnalysisCliOptions extends OutputOptions {
   sheet?: string;
   /** Rows of a lab sheet, keyed by their raw text (set by the command, not by the user). */
   sheetRows?: Record<string, SheetRow>;
+  /** Notes for inputs whose found values came from separate arguments (set by the command). */
+  joined?: Record<string, string>;
+  /** The note when --found was joined with the arguments after it (set by the command). */
+  foundNote?: string;
 }
 
-/** A line of batch input: `FORMULA` alone, or `FORMULA  C=72.30 H=7.91 N=12.60`. */
-const WITH_FOUND = /^(.*?)[\s;]+((?:[A-Z][a-z]?\s*=\s*[0-9.]+%?[\s,;]*)+)$/;
+/** An argument made only of found values: `C=72.30`, `C=72.30,H=7.91`, `'C=72.30 H=7.91'`. */
+const FOUND_ONLY = /^(?:\s*[A-Z][a-z]?\s*[=:]\s*[-+]?[0-9.]+\s*%?\s*[,;]?)+\s*$/;
+
+/**
+ * Arguments of `analysis` with found values typed unquoted (see {@link groupAnalysisArgs}).
+ */
+export interface AnalysisArgs {
+  inputs: string[];
+  found: string | undefined;
+  joined: Record<string, string>;
+  foundNote: string | undefined;
+}
+
+/**
+ * Groups analysis arguments: a run of arguments made only of `El=value` pairs gives found values.
+ * After a formula, they are that formula's (`C20H25N3O C=72.30 H=7.91`); with --found as well they
+ * join it, when one formula is given (`--found C=72.30 H=7.91` typed unquoted) or when they come
+ * before any formula; with several formulas and --found, where they belong is not known: refused.
+ *
+ * @example
+ * groupAnalysisArgs(['C20H25N3O', 'H=7.91', 'N=12.60'], 'C=72.30').found // 'C=72.30 H=7.91 N=12.60'
+ */
+export function groupAnalysisArgs(args: string[], found: string | undefined): AnalysisArgs {
+  const isFormula = (a: string) => a !== '-' && !FOUND_ONLY.test(a);
+  const formulas = args.filter(isFormula).length;
+  const inputs: string[] = [];
+  const joined: Record<string, string> = Object.create(null);
+  const toFound: string[] = [];
+  for (let i = 0; i < args.length; ) {
+    if (!FOUND_ONLY.test(args[i])) {
+      inputs.push(args[i++]);
+      continue;
+    }
+    const start = i;
+    while (i < args.length && FOUND_ONLY.test(args[i])) i++;
+    const run = args.slice(start, i).map((a) => a.trim());
+    const prev = start > 0 ? args[start - 1] : null;
+    if (prev !== null && isFormula(prev) && found === undefined) {
+      const line = `${inputs.pop()}  ${run.join(' ')}`;
+      inputs.push(line);
+      joined[line] = `found values for ${prev} read from the argument${run.length === 1 ? '' : 's'} after it: ${run.join(' ')}`;
+    } else if (found !== undefined && (formulas <= 1 || prev === null || !isFormula(prev))) {
+      toFound.push(...run);
+    } else if (found !== undefined) {
+      throw fail({ code: 'USAGE', message: `${run.join(' ')}: found values after ${prev} and --found for several formulas; quote the --found values (--found 'C=72.30 H=7.91 N=12.60') or give each formula its own ('C20H25N3O C=72.30 H=7.91')` });
+    } else {
+      throw fail({ code: 'USAGE', message: `${run.join(' ')}: found values before any formula; put them after the formula, or use --found` });
+    }
+  }
+  if (toFound.length === 0) return { inputs, found, joined, foundNote: undefined };
+  const all = [found!, ...toFound].join(' ');
+  const keys: string[] = all.match(/[A-Z][a-z]?(?=\s*[=:])/g) ?? [];
+  const twice = keys.find((k, j) => keys.indexOf(k) !== j);
+  if (twice) throw fail({ code: 'USAGE', message: `${twice} is given twice in --found ${found} and the arguments ${toFound.join(' ')}: quote the --found values` });
+  return { inputs, found: all, joined, foundNote: `--found ${found} and the argument${toFound.length === 1 ? '' : 's'} ${toFound.join(' ')} were read as one set of found values (typed without quotes)` };
+}
 
 interface Row {
   result: AnalysisResult;
@@ -46,18 +107,32 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
     step: numberOption(o.step, 'step'),
     max: numberOption(o.max, 'max'),
     top: numberOption(o.top, 'top'),
+    rounding: o.rounding ?? 'half-even',
   };
+  if (opts.top !== undefined && !Number.isInteger(opts.top)) throw fail({ code: 'USAGE', message: `--top takes a whole number, not '${o.top}'` });
+  if (opts.step !== undefined && opts.max !== undefined && (opts.step > opts.max || opts.max > 20 || opts.max / opts.step > 2000)) {
+    throw fail({ code: 'USAGE', message: `--step ${o.step} and --max ${o.max} make no sensible grid: the step must not exceed the largest amount, --max at most 20, at most 2000 steps` });
+  }
+  if (o.found !== undefined && o.sheetRows !== undefined) throw fail({ code: 'USAGE', message: '--found and --sheet both give found values: the sheet has them per row; drop --found' });
+  const withNotes = (result: AnalysisResult, extra: Note[]): AnalysisResult => (extra.length ? { ...result, notes: [...extra, ...result.notes] } : result);
   if (!/^[0-9]+(\.[0-9]+)?$/.test(opts.tolerance)) throw fail({ code: 'USAGE', message: `--tolerance takes a number of percentage points, not '${opts.tolerance}'` });
+  if (Number(opts.tolerance) > 100) throw fail({ code: 'USAGE', message: `--tolerance ${opts.tolerance} is more than 100 percentage points` });
   const compute = (input: string): Row => {
     const sheetRow = o.sheetRows?.[input];
     if (sheetRow) {
       if (sheetRow.formula === '') throw fail({ code: 'BAD_RECORD', message: `row ${sheetRow.id || sheetRow.line} has no formula` }, input);
       return { result: analysis(sheetRow.formula, sheetRow.found, opts), id: sheetRow.id };
     }
-    const m = WITH_FOUND.exec(input.trim());
-    if (m) return { result: analysis(m[1].trim(), m[2], opts), id: null };
+    const m = splitTrailingValues(input);
+    if (m) {
+      const extra: Note[] = [];
+      const joined = takeJoinedNote(o.joined, input);
+      if (joined) extra.push({ code: 'JOINED_ARGUMENTS', message: joined });
+      if (o.found !== undefined) extra.push({ code: 'OWN_FOUND_VALUES', message: `this input gives its own found values (${m[1]}); --found is used only for inputs without them` });
+      return { result: withNotes(analysis(m[0], m[1], opts), extra), id: null };
+    }
     if (!o.found) throw fail({ code: 'USAGE', message: 'give the found values: --found C=72.30,H=7.91,N=12.60 (or after the formula on the line)' }, input);
-    return { result: analysis(input, o.found, opts), id: null };
+    return { result: withNotes(analysis(input, o.found, opts), o.foundNote ? [{ code: 'JOINED_ARGUMENTS', message: o.foundNote }] : []), id: null };
   };
   const verdict = (r: AnalysisResult) => (r.pass ? 'passes' : 'fails');
   const sheet = o.sheetRows !== undefined;
@@ -76,7 +151,7 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
           },
         }
       : undefined,
-    json: (row) => analysisJson(row.result, row.id !== null ? { id: row.id } : {}),
+    json: (row) => ({ ...analysisJson(row.result, row.id !== null ? { id: row.id } : {}), rounding: opts.rounding, notes: row.result.notes.map((n) => n.message) }),
     columns: ['input', 'id', 'formula', 'calculated', 'found', 'maxDeviation', 'pass', 'bestFit', 'bestFitMaxDeviation'],
     cells: ({ result: r, id }) => {
       const list = (m: Map<string, { toFixed(n: number): string }>) => [...m].map(([s, v]) => `${s}=${v.toFixed(2)}`).join(' ');
@@ -103,17 +178,18 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
       return lines.join('\n');
     },
     notes: ({ result: r }) => r.notes.map((n) => n.message),
+    noteItems: ({ result: r }) => r.notes,
   };
 }
 
 /** Registers `pondus analysis`. */
 export function registerAnalysis(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void {
-  withOutputOptions(
+  withRoundingOption(withOutputOptions(
     program
       .command('analysis')
       .description('elemental analysis: calculated vs found, verdict at a tolerance, solvate fits, the report line')
       .argument('[formulas...]', "formulas; - reads one per line ('FORMULA' or 'FORMULA C=… H=… N=…')")
-      .option('--found <values>', 'found mass percents, e.g. C=72.30,H=7.91,N=12.60')
+      .option('--found <values>', 'found mass percents, e.g. C=72.30,H=7.91,N=12.60 (unquoted --found C=72.30 H=7.91 N=12.60 works for one formula)')
       .option('--solvents <list>', 'solvents and salt partners to fit: water,DCM,CHCl3,MeOH,EtOH,EtOAc,ether,THF,acetone,MeCN,DMF,DMSO,toluene,hexane,HCl,TFA,… or formulas')
       .option('--tolerance <points>', 'allowed |found − calculated| in percentage points', '0.4')
       .option('--step <amount>', 'step of the solvate amounts searched', '0.05')
@@ -121,10 +197,16 @@ export function registerAnalysis(program: Command, run: CommandRunner, stdin: ()
       .option('--top <n>', 'how many fits to list', '5')
       .option('--abbreviations', 'read group abbreviations (Me, Et, Ph, Boc, …) in formulas')
       .addOption(new Option('--sheet <file>', 'a lab sheet (CSV: id, formula, and found % in columns C, H, N, S, …); - reads it from standard input')),
-  ).action((formulas: string[], o: AnalysisCliOptions) => {
-    if (o.found === undefined && o.sheet === undefined && formulas.length > 0 && formulas.every((f) => f !== '-' && !WITH_FOUND.test(f.trim()))) {
+  )).action((args: string[], o: AnalysisCliOptions, cmd: Command) => {
+    const given = (name: string) => cmd.getOptionValueSource(name) === 'cli';
+    const unused = ['step', 'max', 'top'].filter(given);
+    if (o.solvents === undefined && unused.length > 0) throw fail({ code: 'USAGE', message: `${unused.map((u) => `--${u}`).join(', ')} set${unused.length === 1 ? 's' : ''} the solvate search: give --solvents too, or drop ${unused.length === 1 ? 'it' : 'them'}` });
+    if (o.sheet !== undefined) return runWithSheet(run, 'analysis', args, o, stdin, readSheet);
+    const g = groupAnalysisArgs(args, o.found);
+    if (g.found === undefined && g.inputs.length > 0 && g.inputs.every((f) => f !== '-' && !splitTrailingValues(f))) {
       throw fail({ code: 'USAGE', message: 'give the found values: --found C=72.30,H=7.91,N=12.60 (or after each formula)' });
     }
-    return runWithSheet(run, 'analysis', formulas, o, stdin, readSheet);
+    const options: AnalysisCliOptions = { ...o, found: g.found, joined: g.joined, foundNote: g.foundNote };
+    return run('analysis', g.inputs, options);
   });
 }

@@ -17,6 +17,7 @@ export function balancePresenter(o: BalanceCliOptions): Presenter<BalanceResult>
     cells: (r) => [r.input, r.balanced, r.species.join(' '), r.coefficients.join(' ')],
     table: { head: ['equation', 'balanced'], row: (r) => [r.input, r.balanced] },
     notes: (r) => r.notes.map((n) => n.message),
+    noteItems: (r) => r.notes,
   };
 }
 

@@ -1,10 +1,14 @@
 import type { Command } from 'commander';
+import { checkRun, joinPairArgs, joinedNote, joinUnitWords, pairRuns, takeJoinedNote } from '../input/key-value-args.js';
 import { fail } from '../../errors/pondus-error.js';
-import { candidateFormulas, type CandidateResult } from '../../empirical/candidates.js';
+import { candidateFormulas, DEFAULT_RANGES, readRanges, type CandidateResult } from '../../empirical/candidates.js';
+import { readFound } from '../../analysis/found-values.js';
+import { PondusError } from '../../errors/pondus-error.js';
 import { combustion, PRODUCTS, type CombustionResult } from '../../empirical/combustion.js';
 import { empirical, empiricalJson, type EmpiricalResult } from '../../empirical/empirical-formula.js';
 import { readMeasurementSheet, type MeasurementRow } from '../../empirical/measurement-sheet.js';
 import { runWithSheet } from './sheet-runner.js';
+import { hillOrder } from '../../formula/hill.js';
 import { displayQuantity } from '../../sigfig/display-quantity.js';
 import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
@@ -13,11 +17,23 @@ import type { CommandRunner } from './runner.js';
 
 const residualText = (m: Map<string, number>) => [...m].map(([s, r]) => `${s} ${r >= 0 ? '+' : ''}${r.toFixed(3)}`).join(', ');
 
+/** Runs a check of an option; its PondusError becomes a usage error (exit 2) with the same message. */
+function usage(check: () => unknown): void {
+  try {
+    check();
+  } catch (e) {
+    if (e instanceof PondusError) throw fail({ code: 'USAGE', message: e.first.message });
+    throw e;
+  }
+}
+
 // --- empirical ----------------------------------------------------------------
 
 interface EmpiricalCliOptions extends OutputOptions {
   molarMass?: string;
   sheet?: string;
+  /** Inputs joined from single KEY=VALUE arguments, with the note saying so (set by the command). */
+  joined?: Record<string, string>;
   /** Rows of a measurement sheet, keyed by their raw text (set by the command). */
   sheetRows?: Record<string, MeasurementRow>;
 }
@@ -28,17 +44,29 @@ interface EmpiricalRow extends EmpiricalResult {
 
 /** The presenter for `pondus empirical`. */
 export function empiricalPresenter(o: EmpiricalCliOptions): Presenter<EmpiricalRow> {
+  if (o.molarMass !== undefined && !/^\s*[0-9]+(\.[0-9]+)?\s*(g\/mol)?\s*$|^\s*([0-9.]+)\s*(?:-|–|\.\.)\s*([0-9.]+)\s*$/.test(o.molarMass)) {
+    throw fail({ code: 'USAGE', message: `--molar-mass takes a number of g/mol or a range such as 170-190, not '${o.molarMass}'` });
+  }
+  const range = o.molarMass === undefined ? null : /^\s*([0-9.]+)\s*(?:-|–|\.\.)\s*([0-9.]+)\s*$/.exec(o.molarMass);
+  if (range && !(Number(range[1]) > 0 && Number(range[1]) < Number(range[2]))) throw fail({ code: 'USAGE', message: `--molar-mass ${o.molarMass}: a range goes from the lower to the higher molar mass, both above zero` });
+  if (o.molarMass !== undefined && !range && !(parseFloat(o.molarMass) > 0)) throw fail({ code: 'USAGE', message: 'the molar mass must be positive' });
+  if (o.molarMass !== undefined && o.sheetRows && Object.values(o.sheetRows).some((r) => r.molarMass !== undefined)) {
+    throw fail({ code: 'USAGE', message: "the sheet has a molar-mass column and --molar-mass was given too: use one (the column for each row, or --molar-mass for all)" });
+  }
   return {
     compute: (input) => {
       const row = o.sheetRows?.[input];
       if (row) return { ...empirical(row.measurements, { molarMass: row.molarMass ?? o.molarMass }), id: row.id };
-      return empirical(input, { molarMass: o.molarMass });
+      const r = empirical(input, { molarMass: o.molarMass });
+      const joined = takeJoinedNote(o.joined, input);
+      if (joined) r.notes.unshift({ code: 'JOINED_ARGUMENTS', message: joined });
+      return r;
     },
     json: (r) => (r.id !== undefined ? { id: r.id, ...empiricalJson(r) } : empiricalJson(r)),
     columns: ['input', 'empirical', 'molecular', 'residuals', 'alternatives'],
     cells: (r) => [r.input, r.empirical, r.molecular ?? '', residualText(r.fit.residuals), r.alternatives.map((a) => a.formula).join(' ')],
     block: (r) => {
-      const rows = [...r.percents].map(([s, p]) => [s, p.toFixed(3), `±${r.limits.get(s)!.toFixed(3)}`, (p + r.fit.residuals.get(s)!).toFixed(3), `${r.fit.residuals.get(s)! >= 0 ? '+' : ''}${r.fit.residuals.get(s)!.toFixed(3)}`]);
+      const rows = hillOrder(r.percents.keys()).map((s) => [s, r.percents.get(s)!] as const).map(([s, p]) => [s, p.toFixed(3), `±${r.limits.get(s)!.toFixed(3)}`, (p + r.fit.residuals.get(s)!).toFixed(3), `${r.fit.residuals.get(s)! >= 0 ? '+' : ''}${r.fit.residuals.get(s)!.toFixed(3)}`]);
       const lines = [`${r.id ? `${r.id}: ` : ''}${r.input}`, `empirical formula: ${r.empirical}  (${r.empiricalMass.toFixed(3)} g/mol)`];
       if (r.molecular) lines.push(`molecular formula: ${r.molecular}  (× ${r.multiple})`);
       lines.push(fixedTable(['element', 'measured %', 'limit', 'calculated %', 'residual'], rows, ['left', 'right', 'right', 'right', 'right']));
@@ -46,18 +74,28 @@ export function empiricalPresenter(o: EmpiricalCliOptions): Presenter<EmpiricalR
       return lines.join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
+    noteItems: (r) => r.notes,
   };
 }
 
 // --- combustion ---------------------------------------------------------------
 
-type CombustionCliOptions = OutputOptions & Partial<Record<keyof typeof PRODUCTS, string>>;
+type CombustionCliOptions = OutputOptions & Partial<Record<keyof typeof PRODUCTS, string>> & {
+  /** Set by the command: the note when units typed as separate words were joined. */
+  unitNote?: string;
+};
 
 /** The presenter for `pondus combustion`: inputs are sample masses. */
 export function combustionPresenter(o: CombustionCliOptions): Presenter<CombustionResult> {
   const collected = Object.fromEntries(Object.keys(PRODUCTS).filter((k) => o[k as keyof typeof PRODUCTS] !== undefined).map((k) => [k, o[k as keyof typeof PRODUCTS]]));
+  if (Object.keys(collected).length === 0) throw fail({ code: 'USAGE', message: `give the masses collected: --co2 (and --h2o, ${Object.keys(PRODUCTS).filter((k) => k !== 'co2' && k !== 'h2o').map((k) => `--${k}`).join(', ')})` });
+  if (collected.co2 === undefined) throw fail({ code: 'USAGE', message: 'give the mass of CO2 collected (--co2): the carbon of the sample' });
   return {
-    compute: (sample) => combustion({ sample, collected }),
+    compute: (sample) => {
+      const r = combustion({ sample, collected });
+      if (o.unitNote) r.notes.unshift({ code: 'JOINED_ARGUMENTS', message: o.unitNote });
+      return r;
+    },
     json: (r) => ({
       sample: displayQuantity(r.sample, 'g').text,
       elements: r.elements.map((e) => ({ symbol: e.symbol, mass: displayQuantity(e.mass, 'g').value.toNumber(), massDisplay: displayQuantity(e.mass, 'g').text, percent: e.percent.value.toNumber(), percentDisplay: displayQuantity(e.percent).figure, byDifference: e.byDifference })),
@@ -66,6 +104,7 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
       alternatives: r.alternatives.map((a) => a.formula),
       notes: r.notes.map((n) => n.message),
     }),
+    noteItems: (r) => r.notes,
     columns: ['sample', 'empirical', 'percents'],
     cells: (r) => [displayQuantity(r.sample, 'g').text, r.empirical, r.elements.map((e) => `${e.symbol}=${displayQuantity(e.percent).figure}`).join(' ')],
     block: (r) => {
@@ -86,6 +125,8 @@ interface CandidatesCliOptions extends OutputOptions {
   ratios?: boolean;
   limit?: string;
   molarMass?: boolean;
+  /** Set by the command: the note when found values came from several arguments. */
+  foundNote?: string;
 }
 
 /** The presenter for `pondus candidates`: inputs are masses. */
@@ -97,14 +138,26 @@ export function candidatesPresenter(o: CandidatesCliOptions): Presenter<Candidat
     return n;
   };
   const opts = { ppm: num(o.ppm, 'ppm'), found: o.found, tolerance: num(o.tolerance, 'tolerance'), elements: o.elements, ratios: o.ratios !== false, limit: num(o.limit, 'limit') };
+  if (opts.ppm !== undefined && opts.ppm > 1000) throw fail({ code: 'USAGE', message: `--ppm ${o.ppm} is too wide a window: at most 1000 ppm` });
+  if (opts.limit !== undefined && !Number.isInteger(opts.limit)) throw fail({ code: 'USAGE', message: `--limit takes a whole number, not '${o.limit}'` });
+  // options read once, before any input: a bad range or found value is a usage error
+  usage(() => readRanges(opts.elements ?? DEFAULT_RANGES));
+  if (opts.found !== undefined) usage(() => readFound(opts.found!));
   return {
-    compute: (mass) => candidateFormulas(o.molarMass ? { ...opts, molarMass: mass } : { ...opts, mass }),
+    compute: (mass) => {
+      const r = candidateFormulas(o.molarMass ? { ...opts, molarMass: mass } : { ...opts, mass });
+      if (o.foundNote) r.notes.unshift({ code: 'JOINED_ARGUMENTS', message: o.foundNote });
+      return r;
+    },
     json: (r) => ({
       input: r.input,
       candidates: r.candidates.map((c) => ({ formula: c.formula, monoisotopicMass: c.monoisotopicMass, molarMass: c.molarMass, ppm: c.ppm, rdbe: c.rdbe, maxDeviation: c.maxDeviation })),
       examined: r.examined,
       truncated: r.truncated,
+      notes: r.notes.map((n) => n.message),
     }),
+    notes: (r) => r.notes.map((n) => n.message),
+    noteItems: (r) => r.notes,
     columns: ['input', 'candidates'],
     cells: (r) => [r.input, r.candidates.map((c) => c.formula).join(' ')],
     block: (r) => {
@@ -122,16 +175,33 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
     program
       .command('empirical')
       .description('empirical (and molecular) formula from mass percents or element masses')
-      .argument('[measurements...]', "'C=40.00 H=6.71 O=53.29', 'Fe=34.97 g O=15.03 g', 'C=40.00 H=6.71 O=rest'; - reads one set per line (or a JSON object per line)")
+      .argument('[measurements...]', "'C=40.00 H=6.71 O=53.29', 'Fe=34.97 g O=15.03 g', 'C=40.00 H=6.71 O=rest', oxides 'SiO2=42.70 MgO=57.30'; unquoted C=40.00 H=6.71 O=53.29 is one set; - reads one set per line (or a JSON object per line)")
       .option('--molar-mass <M>', 'molar mass in g/mol (or a range such as 170-190) for the molecular formula')
       .option('--sheet <file>', "a CSV of measurements: element columns (C, H, N, …), optional id, 'sample' and 'molar mass' columns; - reads it from standard input"),
-  ).action((inputs: string[], o: EmpiricalCliOptions) => runWithSheet(run, 'empirical', inputs, o, stdin, readMeasurementSheet));
+  ).action((inputs: string[], o: EmpiricalCliOptions) => {
+    if (o.sheet !== undefined) return runWithSheet(run, 'empirical', inputs, o, stdin, readMeasurementSheet);
+    const { inputs: sets, joined } = joinPairArgs(inputs, { what: 'measurement set', units: true });
+    const options: EmpiricalCliOptions = { ...o, joined };
+    return run('empirical', sets, options);
+  });
   const combustionCmd = program
     .command('combustion')
     .description('combustion analysis: element percents and the empirical formula from the masses collected')
     .argument('[sample...]', "sample mass, e.g. '0.1000 g'");
   for (const [key, p] of Object.entries(PRODUCTS)) combustionCmd.option(`--${key} <mass>`, `mass of ${p.formula} collected (gives ${p.element})`);
-  withOutputOptions(combustionCmd).action((inputs: string[], o: CombustionCliOptions) => run('combustion', inputs, o));
+  withOutputOptions(combustionCmd).action((inputs: string[], o: CombustionCliOptions, cmd: Command) => {
+    // masses typed without quotes: `0.1000 g --co2 0.2000 g` leaves the units among the samples
+    if (inputs.some((a) => /^[A-Za-zµμ]+$/.test(a))) {
+      const raw = (cmd.parent as (Command & { rawArgs?: string[] }) | null)?.rawArgs ?? [];
+      const re = joinUnitWords(raw, 'combustion', new Set(Object.keys(PRODUCTS)));
+      if (re && re.joined.length > 0 && !re.positionals.some((a) => /^[A-Za-zµμ]+$/.test(a))) {
+        const options = { ...o, ...re.values, unitNote: `units typed as separate words were joined to their numbers: ${re.joined.join('; ')}` } as CombustionCliOptions;
+        return run('combustion', re.positionals, options);
+      }
+      throw fail({ code: 'USAGE', message: "a unit stands alone among the sample masses: quote each mass with its unit, e.g. combustion '0.1000 g' --co2 '0.2000 g'" });
+    }
+    return run('combustion', inputs, o);
+  });
   withOutputOptions(
     program
       .command('candidates')
@@ -139,10 +209,26 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
       .argument('[masses...]', 'neutral monoisotopic masses in u (or molar masses with --molar-mass)')
       .option('--ppm <ppm>', 'mass tolerance in ppm', '5')
       .option('--molar-mass', 'the masses are average molar masses (window ±0.5 g/mol)')
-      .option('--found <values>', 'found percents to match too: C=64.85,H=5.44,N=6.30')
+      .option('--found <values>', 'found percents to match too: C=64.85,H=5.44,N=6.30 (unquoted C=64.85 H=5.44 also works)')
       .option('--tolerance <points>', 'allowed |found − calculated| in percentage points', '0.4')
       .option('--elements <ranges>', 'element ranges', 'C0-80 H0-160 N0-10 O0-20 S0-4 P0-2 F0-6 Cl0-4 Br0-3 I0-2')
       .option('--no-ratios', 'do not apply the element-ratio limits')
       .option('--limit <n>', 'most candidates to list', '50'),
-  ).action((inputs: string[], o: CandidatesCliOptions) => run('candidates', inputs, o));
+  ).action((inputs: string[], o: CandidatesCliOptions, cmd: Command) => {
+    const given = (name: string) => cmd.getOptionValueSource(name) === 'cli';
+    if (o.molarMass && given('ppm')) throw fail({ code: 'USAGE', message: '--ppm sets the window of an accurate (monoisotopic) mass; with --molar-mass the window is ±0.5 g/mol: drop one' });
+    if (o.found === undefined && given('tolerance')) throw fail({ code: 'USAGE', message: '--tolerance applies to found percents: give --found too, or drop --tolerance' });
+    // found values typed unquoted: --found C=40.00 H=6.71 leaves H=6.71 among the masses
+    const runs = pairRuns(inputs, false);
+    if (runs.length > 0) {
+      if (o.found === undefined) throw fail({ code: 'USAGE', message: `${runs[0].pairs.join(' ')}: found percents go with --found, e.g. --found 'C=40.00 H=6.71'` });
+      if (runs.length > 1) throw fail({ code: 'USAGE', message: `found values are scattered among the masses (${runs.map((r) => r.pairs.join(' ')).join('; ')}): quote them, --found 'C=40.00 H=6.71'` });
+      const run0 = { ...runs[0], pairs: [o.found, ...runs[0].pairs], start: runs[0].start - 1 };
+      checkRun(run0, 'set of found values');
+      const masses = inputs.filter((_, i) => i < runs[0].start || i >= runs[0].end);
+      const options: CandidatesCliOptions = { ...o, found: run0.pairs.join(' '), foundNote: joinedNote(run0, 'set of found values (with --found)') };
+      return run('candidates', masses, options);
+    }
+    return run('candidates', inputs, o);
+  });
 }

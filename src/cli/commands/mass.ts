@@ -1,14 +1,15 @@
 import type { Command } from 'commander';
+import { fail } from '../../errors/pondus-error.js';
 import { formulaMass, type MassResult } from '../../mass/formula-mass.js';
 import { massJson, massJsonLine } from '../../mass/mass-json.js';
 import { plainMassJsonLine } from '../../mass/plain-mass-json.js';
 import { formatWithUncertainty, molarMassUncertainty, type MolarMassUncertainty } from '../../mass/uncertainty.js';
 import { chargeLabel, displayMolarMass, displayMonoisotopic } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
-import { withFormulaOptions, type FormulaOptions } from './common.js';
+import { withFormulaOptions, withRoundingOption, type FormulaOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
-interface MassCliOptions extends FormulaOptions {
+interface MassCliOptions extends FormulaOptions, RoundingOptions {
   uncertainty?: boolean;
 }
 
@@ -22,10 +23,11 @@ const columns = ['input', 'formula', 'molarMass', 'monoisotopicMass', 'nominalMa
 const head = ['input', 'formula (Hill)', 'molar mass g/mol', 'monoisotopic u', 'nominal', 'charge'];
 const align: ('left' | 'right')[] = ['left', 'left', 'right', 'right', 'right', 'right'];
 const cells = (r: MassResult) => [r.input, r.formula, r.molarMassText(), r.monoisotopicMassText(), r.nominalMass, r.charge];
-const row = (r: MassResult) => [r.input, r.formula, displayMolarMass(r), displayMonoisotopic(r), r.nominalMass ?? '—', chargeLabel(r.charge)];
+const rowWith = (rounding: 'half-even' | 'half-up') => (r: MassResult) => [r.input, r.formula, displayMolarMass(r, rounding), displayMonoisotopic(r), r.nominalMass ?? '—', chargeLabel(r.charge)];
 
 /** The presenter for `pondus mass` (with --uncertainty, {@link uncertaintyPresenter}). */
 export function massPresenter(o: MassCliOptions): Presenter<MassResult> | Presenter<MassRow> {
+  if (o.uncertainty && o.weights === 'abridged') throw fail({ code: 'USAGE', message: '--uncertainty comes from the standard atomic weights and their intervals, not from the abridged table: drop --weights abridged or --uncertainty' });
   return o.uncertainty ? uncertaintyPresenter(o) : plainPresenter(o);
 }
 
@@ -38,8 +40,9 @@ function plainPresenter(o: MassCliOptions): Presenter<MassResult> {
     fastJsonLine: opts.weights === 'standard' && !opts.abbreviations ? plainMassJsonLine : undefined,
     columns,
     cells,
-    table: { head, align, row },
+    table: { head, align, row: rowWith(o.rounding ?? 'half-even') },
     notes: (r) => r.notes.map((n) => n.message),
+    noteItems: (r) => r.notes,
   };
 }
 
@@ -56,20 +59,21 @@ function uncertaintyPresenter(o: MassCliOptions): Presenter<MassRow> {
     table: {
       head: [...head, 'M ± u g/mol (k = 1)'],
       align: [...align, 'right'],
-      row: (r) => [...row(r.mass), formatWithUncertainty(r.u!.value, r.u!.standardUncertainty)],
+      row: (r) => [...rowWith(o.rounding ?? 'half-even')(r.mass), formatWithUncertainty(r.u!.value, r.u!.standardUncertainty)],
     },
     notes: (r) => r.mass.notes.map((n) => n.message),
+    noteItems: (r) => r.mass.notes,
     caution: 'u from the CIAAW atomic-weight intervals and uncertainties read as rectangular distributions (van der Veen et al., Pure Appl. Chem. 93 (2021) 629); the value is the centre of those distributions',
   };
 }
 
 /** Registers `pondus mass`. */
 export function registerMass(program: Command, run: CommandRunner): void {
-  withFormulaOptions(
+  withRoundingOption(withFormulaOptions(
     program
       .command('mass')
       .description('molar mass, monoisotopic mass and nominal mass of formulas')
       .argument('[formulas...]', 'formulas; - reads one per line from standard input')
       .option('--uncertainty', 'also the standard uncertainty of the molar mass from the atomic-weight intervals'),
-  ).action((formulas: string[], o: MassCliOptions) => run('mass', formulas, o));
+  )).action((formulas: string[], o: MassCliOptions) => run('mass', formulas, o));
 }

@@ -6,12 +6,12 @@ import Table from 'cli-table3';
 import type { Decimal } from '../../exact/decimal.js';
 import type { Contribution, MassResult } from '../../mass/formula-mass.js';
 import { reportedMolarMass } from '../../mass/reported-mass.js';
-import { displayMeasured } from '../../sigfig/round.js';
+import { displayMeasured, roundToPosition, type RoundingMode } from '../../sigfig/round.js';
 import type { Cell } from './format.js';
 
 /** The molar mass to the precision the atomic weights support. */
-export function displayMolarMass(r: MassResult): string {
-  return displayMeasured(reportedMolarMass(r)).text;
+export function displayMolarMass(r: MassResult, rounding: RoundingMode = 'half-even'): string {
+  return displayMeasured(reportedMolarMass(r), rounding).text;
 }
 
 /** An element's mass in one mole of the formula, to the decimals of its atomic weight (a count is repeated addition). */
@@ -27,8 +27,8 @@ export function displayMonoisotopic(r: MassResult): string {
 }
 
 /** A percentage to two decimals, as analysis reports give it. */
-export function displayPercent(p: Decimal): string {
-  return p.toFixed(2);
+export function displayPercent(p: Decimal, rounding: RoundingMode = 'half-even'): string {
+  return roundToPosition(p, -2, rounding).toFixed(2);
 }
 
 /** A charge as chemists write it: 2+, 1-, 0. */

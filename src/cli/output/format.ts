@@ -16,3 +16,33 @@ export function delimitedCell(v: Cell, sep: string): string {
   if (sep === '\t') return s.replace(/[\t\r\n]/g, ' ');
   return /[",\r\n]/.test(s) || /^\s|\s$/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
 }
+
+/**
+ * The CSV/TSV `notes` cell: each remark as `CODE: message` (the message alone when it has no code),
+ * joined with ` | `.
+ *
+ * @example
+ * notesCell([{ code: 'BY_DIFFERENCE', message: 'O by difference: 53.29 %' }]) // 'BY_DIFFERENCE: O by difference: 53.29 %'
+ */
+export function notesCell(notes: readonly { code: string; message: string }[]): string {
+  return notes.map((n) => (n.code ? `${n.code}: ${n.message}` : n.message)).join(' | ');
+}
+
+const NUMBER_TEXT = /^[-+]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)(?:[eE][-+]?[0-9]+)?$/;
+
+/**
+ * Guards a text cell against formula injection in spreadsheets: a text starting with
+ * `=`, `+`, `-`, `@`, a tab or a carriage return gets a leading apostrophe. Numbers
+ * (`-0.39`, `+1.5e3`) are left as they are, so they stay numbers.
+ *
+ * @example
+ * guardCell('=HYPERLINK("x")') // "'=HYPERLINK(\"x\")"
+ * guardCell('-0.39') // '-0.39'
+ */
+export function guardCell(v: Cell): Cell {
+  if (typeof v !== 'string' || v === '') return v;
+  const c = v.charCodeAt(0);
+  // = + - @ tab CR
+  if (c !== 61 && c !== 43 && c !== 45 && c !== 64 && c !== 9 && c !== 13) return v;
+  return NUMBER_TEXT.test(v) ? v : `'${v}`;
+}

@@ -26,6 +26,8 @@ export interface Presenter<R> {
   block?(result: R): string;
   /** Remarks to print under the table for a result. */
   notes?(result: R): string[];
+  /** Optional: the remarks with their codes, for the CSV/TSV `notes` column (`CODE: message`); else `notes` is used. */
+  noteItems?(result: R): { code: string; message: string }[];
   /** Counts a result toward a closing tally ('3 of 4 compounds pass'), with the words for it. */
   tally?: { count(result: R): boolean; words: string };
   /** A caution printed once after table output (results someone will act on). */

@@ -7,7 +7,7 @@ import type { ChalkInstance } from 'chalk';
 import { errorJson, renderError } from '../../errors/render.js';
 import type { PondusError } from '../../errors/pondus-error.js';
 import type { InputItem } from '../input/inputs.js';
-import { delimitedCell, type Cell, type OutputFormat } from './format.js';
+import { delimitedCell, guardCell, notesCell, type Cell, type OutputFormat } from './format.js';
 import type { Presenter } from './presenter.js';
 
 export interface ResultWriter<R> {
@@ -67,21 +67,24 @@ class JsonLinesWriter<R> implements ResultWriter<R> {
 class DelimitedWriter<R> implements ResultWriter<R> {
   private headerDone = false;
   constructor(private readonly p: Presenter<R>, private readonly ctx: WriterContext, private readonly sep: string) {}
-  private line(cells: Cell[]): void {
+  private line(cells: Cell[], guard: boolean): void {
     if (!this.headerDone) {
       this.headerDone = true;
-      this.line([...this.p.columns, 'error', 'message']);
+      this.line([...this.p.columns, 'notes', 'error', 'message'], false);
     }
     let s = '';
-    for (let i = 0; i < cells.length; i++) s += (i ? this.sep : '') + delimitedCell(cells[i], this.sep);
+    for (let i = 0; i < cells.length; i++) s += (i ? this.sep : '') + delimitedCell(guard ? guardCell(cells[i]) : cells[i], this.sep);
     this.ctx.out.write(s + '\n');
   }
   ok(_item: InputItem, result: R): void {
-    this.line([...this.p.cells(result), '', '']);
+    const items = [...(this.p.noteItems?.(result) ?? (this.p.notes?.(result) ?? []).map((message) => ({ code: '', message })))];
+    // a caution goes with every row: in a spreadsheet each row may be read alone
+    if (this.p.caution) items.push({ code: 'CAUTION', message: this.p.caution });
+    this.line([...this.p.cells(result), notesCell(items), '', ''], true);
   }
   fail(item: InputItem, error: PondusError): void {
     const blanks = new Array<Cell>(this.p.columns.length - 1).fill('');
-    this.line([item.text, ...blanks, error.first.code, error.first.message]);
+    this.line([item.text, ...blanks, '', error.first.code, error.first.message], true);
   }
   endBatch(): void {}
 }

@@ -1,0 +1,141 @@
+/**
+ * The one reader of KEY=VALUE lists: measurement sets (`C=40.00 H=6.71 O=rest`),
+ * found values (`C=72.30, H=7.91, N=12.60`), mixtures (`NaCl=5.00 g, KCl=3.00 g`).
+ *
+ * The rule: entries are separated by a comma, a semicolon, or white space that
+ * is followed by the next `KEY=`; a key is a run of characters without white
+ * space, `=`, `,` or `;` (`:` also separates key and value where the caller
+ * allows it); a value runs to the next separator and may contain spaces
+ * (`5.00 g`). Every entry keeps the column where its key starts and the column
+ * of its value, so errors can point at them. Parsing only: no value is read as
+ * a number here.
+ */
+import { fail } from '../errors/pondus-error.js';
+import type { IssueCode } from '../errors/issue.js';
+
+/** One KEY=VALUE entry as written. */
+export interface KeyValue {
+  key: string;
+  /** The value as written, trimmed ('' when nothing follows the `=`). */
+  value: string;
+  /** 1-based column of the key. */
+  column: number;
+  /** 1-based column of the value (of where it would be, when empty). */
+  valueColumn: number;
+}
+
+export interface KeyValueOptions {
+  /** Also accept `KEY: VALUE` (measurement sets do; formulas keys do not). */
+  colon?: boolean;
+  /** Also accept a JSON object on the line: `{"C": "40.00", "H": "6.71"}`. */
+  json?: boolean;
+  /** The code of the errors thrown (default BAD_MEASUREMENT). */
+  code?: IssueCode;
+  /** An example for the messages: 'C=40.00 H=6.71 O=53.29'. */
+  example?: string;
+}
+
+/**
+ * Reads a KEY=VALUE list. Keys must be unique; an entry without `=` is refused
+ * with its column.
+ *
+ * @example
+ * readKeyValues('C=40.00, H=6.71 O=rest').map((e) => `${e.key}:${e.value}`) // ['C:40.00', 'H:6.71', 'O:rest']
+ * readKeyValues('NaCl=5.00 g KCl=3.00 g')[1] // { key: 'KCl', value: '3.00 g', column: 13, valueColumn: 17 }
+ */
+export function readKeyValues(text: string, options: KeyValueOptions = {}): KeyValue[] {
+  const code = options.code ?? 'BAD_MEASUREMENT';
+  const example = options.example ?? 'C=40.00 H=6.71 O=53.29';
+  const trimmed = text.trim();
+  if (options.json && trimmed.startsWith('{')) return jsonEntries(text, code);
+  const sep = options.colon ? '[=:]' : '=';
+  const keyChars = options.colon ? '[^\\s=:,;]' : '[^\\s=,;]';
+  // a new entry starts at the text start, after , or ;, or after white space followed by KEY=
+  const starts: number[] = [];
+  const startRe = new RegExp(`(^|[,;]|\\s)\\s*(${keyChars}+\\s*${sep})`, 'g');
+  let m: RegExpExecArray | null;
+  while ((m = startRe.exec(text)) !== null) {
+    starts.push(m.index + m[0].length - m[2].length);
+    startRe.lastIndex = m.index + m[0].length;
+  }
+  const out: KeyValue[] = [];
+  // pieces between separators: each must be KEY=VALUE
+  const pieces: { text: string; at: number }[] = [];
+  let from = 0;
+  const cut = (to: number) => {
+    const chunk = text.slice(from, to);
+    for (const part of splitCommas(chunk, from)) pieces.push(part);
+    from = to;
+  };
+  for (const s of starts) if (s > from) cut(s);
+  cut(text.length);
+  const pairRe = new RegExp(`^(${keyChars}+)\\s*${sep}\\s*(.*)$`, 's');
+  for (const piece of pieces) {
+    const lead = piece.text.length - piece.text.trimStart().length;
+    const body = piece.text.trim();
+    if (body === '') continue;
+    const column = piece.at + lead + 1;
+    const pm = pairRe.exec(body);
+    if (!pm) throw fail({ code, message: `'${body}' is not KEY=VALUE (write the set as ${example})`, column, length: body.length }, text);
+    const [, key, rawValue] = pm;
+    const value = rawValue.trim();
+    const valueColumn = column + body.length - rawValue.length + (rawValue.length - rawValue.trimStart().length);
+    if (out.some((e) => e.key === key)) throw fail({ code, message: `${key} is given twice`, column, length: key.length }, text);
+    out.push({ key, value, column, valueColumn });
+  }
+  if (out.length === 0) throw fail({ code, message: `nothing to read: write the values as ${example}` }, text);
+  return out;
+}
+
+function splitCommas(chunk: string, at: number): { text: string; at: number }[] {
+  const out: { text: string; at: number }[] = [];
+  let from = 0;
+  for (let i = 0; i <= chunk.length; i++) {
+    if (i === chunk.length || chunk[i] === ',' || chunk[i] === ';') {
+      out.push({ text: chunk.slice(from, i), at: at + from });
+      from = i + 1;
+    }
+  }
+  return out;
+}
+
+function jsonEntries(text: string, code: IssueCode): KeyValue[] {
+  let obj: unknown;
+  try {
+    obj = JSON.parse(text);
+  } catch {
+    throw fail({ code, message: 'the line starts with { but is not valid JSON' }, text);
+  }
+  if (obj === null || typeof obj !== 'object' || Array.isArray(obj)) throw fail({ code, message: 'a JSON line must be an object such as {"C": "40.00", "H": "6.71", "O": "rest"}' }, text);
+  const entries = Object.entries(obj as Record<string, unknown>);
+  if (entries.length === 0) throw fail({ code, message: 'the JSON object has no entries' }, text);
+  return entries.map(([key, v]) => {
+    const at = text.indexOf(JSON.stringify(key));
+    const column = at >= 0 ? at + 2 : 1;
+    if (typeof v !== 'string' && typeof v !== 'number') throw fail({ code, message: `the value of ${key} must be a number or a string`, column }, text);
+    return { key, value: String(v).trim(), column, valueColumn: column };
+  });
+}
+
+/**
+ * Is this text exactly one KEY=VALUE entry with no white space (one shell word)?
+ *
+ * @example
+ * isSinglePair('C=40.00') // true
+ * isSinglePair('C=40.00 H=6.71') // false
+ */
+export function isSinglePair(text: string): boolean {
+  return /^[^\s=,;:{}]+=[^\s=,;]+$/.test(text);
+}
+
+/**
+ * Splits a line `FORMULA  C=72.30 H=7.91 N=12.60` into the text before the first
+ * `El=value` entry and the entries' text; null when the line has no such entries.
+ *
+ * @example
+ * splitTrailingValues('C20H25N3O  C=72.30 H=7.91') // ['C20H25N3O', 'C=72.30 H=7.91']
+ */
+export function splitTrailingValues(line: string): [string, string] | null {
+  const m = /^(.*?)[\s;,]+((?:[A-Z][a-z]?\s*[=:]\s*[-+]?[0-9.]+\s*%?[\s,;]*)+)$/.exec(line.trim());
+  return m ? [m[1].trim(), m[2].trim()] : null;
+}
