@@ -64,7 +64,9 @@ function better(a: Candidate, b: Candidate): number {
  * The best candidates: no partner, one partner, or two, on a grid of amounts.
  *
  * @example
- * searchSolvates([60, 5], base, [water], 0.05, 2, 5)[0].amounts // [0.5]
+ * const base = { masses: [120.11, 10.08], total: 130.19 }
+ * const water = { masses: [0, 2.016], total: 18.015 }
+ * searchSolvates([86.29, 7.97], base, [water], 0.05, 2, 5)[0].amounts // [0.5]
  */
 export function searchSolvates(found: number[], base: MassVector, partners: MassVector[], step: number, max: number, top: number, pairs = true): Candidate[] {
   const grid: number[] = [];
@@ -111,7 +113,9 @@ export function searchSolvates(found: number[], base: MassVector, partners: Mass
  * The continuous amount of one partner that best fits (least squares), searched on [0, max].
  *
  * @example
- * continuousAmount(found, base, water, 2) // 0.497…
+ * const base = { masses: [120.11, 10.08], total: 130.19 }
+ * const water = { masses: [0, 2.016], total: 18.015 }
+ * continuousAmount([86.29, 7.97], base, water, 2).toFixed(1) // '0.5'
  */
 export function continuousAmount(found: number[], base: MassVector, partner: MassVector, max: number): number {
   const ss = (x: number) => score(found, percents(base, [partner], [x]))[1];

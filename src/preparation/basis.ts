@@ -32,7 +32,7 @@ export interface BasisResult {
  * A value on the basis `from`, converted to the basis `to`.
  *
  * @example
- * convertBasis('P2O5', 'P', { value: '12.5 %' }).converted // 5.46 %
+ * displayQuantity(convertBasis('P2O5', 'P', { value: '12.5 %' }).converted, '%').text // '5.46 %'
  */
 export function convertBasis(from: string, to: string, options: BasisOptions = {}): BasisResult {
   const factor = conversionFactor(to, from, options.element, options);

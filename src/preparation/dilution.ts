@@ -44,7 +44,7 @@ export interface DilutionResult {
  * The stock volume for a dilution.
  *
  * @example
- * displayInstruction(dilute('1.00 M', '0.100 M', '250.0 mL').stockVolume!).text // '25.00 mL'
+ * displayInstruction(dilute('1.00 M', '0.100 M', '250.0 mL').stockVolume).text // '25.00 mL'
  */
 export function dilute(stockText: string, targetText: string | undefined, volumeText: string, takenText?: string): DilutionResult {
   const kinds = [MOLARITY, MASS_CONCENTRATION, PURE];

@@ -34,8 +34,7 @@ export interface GravimetricResult {
  * Gravimetric factor, analyte mass and mass fraction.
  *
  * @example
- * gravimetric('Cl', 'AgCl', { weighedMass: '0.2866 g' }).analyteMass // 0.07090 g (a result: textbook figures)
- * // a mass percent over 100 % is computed, with a RESULT_OVER_100 note
+ * displayQuantity(gravimetric('Cl', 'AgCl', { weighedMass: '0.2866 g' }).analyteMass, 'g').text // '0.07089 g' (a result: textbook figures)
  */
 export function gravimetric(analyte: string, weighed: string, options: GravimetricOptions = {}): GravimetricResult {
   const factor = conversionFactor(analyte, weighed, options.element, options);

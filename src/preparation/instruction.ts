@@ -84,7 +84,7 @@ export function inputFigures(what: string, text: string, q: Quantity): InputFigu
  * Marks a computed quantity as an instruction.
  *
  * @example
- * instruction(massToWeigh, [inputFigures('the target', '0.1 M', c)]).kind // 'instruction'
+ * instruction(measure('1.461 g'), [inputFigures('the target', '0.1 M', measure('0.1 M'))]).kind // 'instruction'
  */
 export function instruction(quantity: Quantity, inputs: InputFigures[]): Instruction {
   return { kind: 'instruction', quantity, textbookSigFigs: figuresOf(quantity), inputs };
@@ -94,7 +94,7 @@ export function instruction(quantity: Quantity, inputs: InputFigures[]): Instruc
  * Marks a computed quantity as a result (textbook figures).
  *
  * @example
- * result(madeConcentration).kind // 'result'
+ * result(measure('0.09984 M')).kind // 'result'
  */
 export function result(quantity: Quantity): Result {
   return { kind: 'result', quantity };
@@ -104,7 +104,7 @@ export function result(quantity: Quantity): Result {
  * The figures an instruction is shown to: the textbook figures, but never fewer than four.
  *
  * @example
- * workingFigures(instruction(q1sf, [])) // 4
+ * workingFigures(instruction(measure('1 g'), [])) // 4
  */
 export function workingFigures(ins: Instruction): number {
   return Math.max(WORKING_FIGURES, ins.textbookSigFigs ?? WORKING_FIGURES);
@@ -166,7 +166,7 @@ export function massUnitFor(q: Quantity): string {
  * The unit a volume to take reads best in: the preferred unit, or the next smaller one below 1 of it.
  *
  * @example
- * volumeUnitFor(measure('0.0500 mL'), 'mL') // 'µL'
+ * volumeUnitFor(measure('0.0500 mL'), unitOf('mL')) // 'µL'
  */
 export function volumeUnitFor(q: Quantity, preferred: Unit | null): string {
   const u = preferred && sameDims(preferred.dims, q.dims) ? preferred : unitOf('L');
@@ -183,6 +183,7 @@ const plural = (n: number) => `${n} significant figure${n === 1 ? '' : 's'}`;
  * The note for an instruction computed from an input with few figures (fewer than {@link FEW_FIGURES}), or null.
  *
  * @example
+ * const ins = instruction(measure('1.461 g'), [inputFigures('the target', '0.1 M', measure('0.1 M'))])
  * fewFiguresNote(ins, 'the mass to weigh', 'the solution made')?.code // 'WORKING_PRECISION'
  */
 export function fewFiguresNote(ins: Instruction, what: string, outcome: string | null): Note | null {
@@ -215,7 +216,7 @@ export interface AmountJson {
  * The JSON of an instruction.
  *
  * @example
- * instructionJson(ins, 'g').display // '1.461 g'
+ * instructionJson(instruction(measure('0.1 M * 250 mL * 58.44 g/mol'), []), 'g').display // '1.461 g'
  */
 export function instructionJson(ins: Instruction, wanted?: string | Unit | null, rounding: RoundingMode = 'half-even'): AmountJson {
   const d = displayInstruction(ins, wanted, rounding);
@@ -226,7 +227,7 @@ export function instructionJson(ins: Instruction, wanted?: string | Unit | null,
  * The JSON of a result.
  *
  * @example
- * resultJson(made, 'M').display // '0.09984 M'
+ * resultJson(measure('1.4587 g / 58.44 g/mol / 250.0 mL'), 'M').display // '0.09984 M'
  */
 export function resultJson(q: Quantity, wanted?: string | Unit | null, rounding: RoundingMode = 'half-even'): AmountJson {
   const d = displayResult(q, wanted, rounding);

@@ -12,7 +12,9 @@ import type { Quantity } from '../sigfig/quantity.js';
  *
  * @example
  * readPurity('98.5 %', []).value.toString() // '0.985'
- * readPurity('0.985', notes) // 0.985, with a PURITY_AS_FRACTION note
+ * const notes = []
+ * readPurity('0.985', notes).value.toString() // '0.985'
+ * notes[0].code // 'PURITY_AS_FRACTION'
  */
 export function readPurity(text: string, notes: Note[]): Quantity {
   const purity = measureAs(text, [PURE], 'the purity', notes);

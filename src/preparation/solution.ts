@@ -102,7 +102,7 @@ const pct = (d: Decimal) => `${d.times(100).toSignificantDigits(4).toFixed()} %`
  * result, with the figures of the measurements).
  *
  * @example
- * displayInstruction(prepareSolution('CuSO4·5H2O', { concentration: '0.100 M', volume: '250.0 mL' }).mass!, 'g').text // '6.242 g'
+ * displayInstruction(prepareSolution('CuSO4·5H2O', { concentration: '0.100 M', volume: '250.0 mL' }).mass, 'g').text // '6.242 g'
  */
 export function prepareSolution(reagentText: string, options: SolutionOptions): SolutionResult {
   const notes: Note[] = [];

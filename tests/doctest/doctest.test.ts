@@ -115,19 +115,20 @@ describe('doc-comment examples', () => {
     const scope: Record<string, unknown> = { ...api, ...mod, Decimal, PondusError };
     const names = Object.keys(scope).filter((n) => /^[A-Za-z_$][\w$]*$/.test(n));
     const values = names.map((n) => scope[n]);
-    let prelude = '';
-    let checks = 0;
+    // one function runs the whole example in order; each check's value is collected as it comes
+    let body = '';
+    const checks: { code: string; expectedText: string; expected: { value: unknown } }[] = [];
     let last = '';
     for (const raw of ex.lines) {
       if (/^\s*import\b/.test(raw)) continue;
       let check = splitCheck(raw);
       // an expected value on a line of its own checks the statement before it
       if (check && check[0] === '' && last !== '') {
-        prelude = prelude.slice(0, prelude.length - last.length - 1);
+        body = body.slice(0, body.length - last.length - 1);
         check = [last.trim().replace(/;$/, ''), check[1]];
       }
       if (!check || check[0] === '') {
-        prelude += `${raw}\n`;
+        body += `${raw}\n`;
         last = check ? '' : raw;
         continue;
       }
@@ -136,10 +137,14 @@ describe('doc-comment examples', () => {
       // a remark in brackets may follow the expected value: `// false (no arrow)`
       const expected = literal(expectedText) ?? literal(expectedText.replace(/\s*\([^()]*\)$/, ''));
       if (expected === undefined) throw new Error(`${ex.file}:${ex.line}: the expected value '${expectedText}' is not a literal`);
-      const actual = new Function(...names, `${prelude}\nreturn (${code});`)(...values);
-      expect(matches(actual, expected.value), `${ex.file}:${ex.line}: ${code} gave ${show(plain(actual))}, the example says ${expectedText}`).toBe(true);
-      checks++;
+      body += `__seen.push((${code}));\n`;
+      checks.push({ code, expectedText, expected });
     }
-    expect(checks, `${ex.file}:${ex.line}: the example checks nothing`).toBeGreaterThan(0);
+    const seen: unknown[] = [];
+    new Function(...names, '__seen', body)(...values, seen);
+    checks.forEach((c, i) => {
+      expect(matches(seen[i], c.expected.value), `${ex.file}:${ex.line}: ${c.code} gave ${show(plain(seen[i]))}, the example says ${c.expectedText}`).toBe(true);
+    });
+    expect(checks.length, `${ex.file}:${ex.line}: the example checks nothing`).toBeGreaterThan(0);
   });
 });
