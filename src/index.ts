@@ -84,7 +84,7 @@ export { gravimetric, safeGravimetric, type GravimetricResult, type GravimetricO
 export { saltFactor, safeSaltFactor, type SaltFactorResult } from './preparation/salt-factor.js';
 export { BENCH_CAUTION, DOSE_CAUTION } from './preparation/caution.js';
 export { convertBasis, safeConvertBasis, type BasisResult, type BasisOptions } from './preparation/basis.js';
-export { displayInstruction, displayResult, instructionJson, resultJson, WORKING_FIGURES, type Instruction, type AmountJson } from './preparation/instruction.js';
+export { displayInstruction, displayResult, instructionJson, resultJson, WORKING_FIGURES, type Instruction, type AmountJson } from './sigfig/instruction.js';
 export { MIN_WEIGHABLE_G, MIN_TRANSFER_L, MAX_ONE_STEP_FACTOR } from './preparation/warnings.js';
 
 // formulas from measurements

@@ -8,7 +8,7 @@ import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
 import { divide, multiply, subtract, type Quantity } from '../sigfig/quantity.js';
 import { sameDims } from '../sigfig/units.js';
-import { displayInstruction, fewFiguresNote, inputFigures, instruction, volumeUnitFor, type Instruction } from './instruction.js';
+import { displayInstruction, fewFiguresNote, inputFigures, instruction, volumeUnitFor, type Instruction } from '../sigfig/instruction.js';
 import { dilutionWarning } from './warnings.js';
 
 export interface DilutionOptions {

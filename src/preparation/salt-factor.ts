@@ -5,7 +5,7 @@
  */
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
-import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type Instruction } from './instruction.js';
+import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type Instruction } from '../sigfig/instruction.js';
 import { smallMassWarning } from './warnings.js';
 import { MASS, measureAs } from '../calc/measure.js';
 import { partShare } from '../composition/part-share.js';

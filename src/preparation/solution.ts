@@ -8,7 +8,7 @@ import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { MASS, MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
 import { Decimal } from '../exact/decimal.js';
-import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type InputFigures, type Instruction } from './instruction.js';
+import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type InputFigures, type Instruction } from '../sigfig/instruction.js';
 import { readPurity } from './purity.js';
 import { smallMassWarning } from './warnings.js';
 import { partShare } from '../composition/part-share.js';

@@ -3,7 +3,7 @@ import { convertBasis } from '../../src/preparation/basis.js';
 import { conversionFactor } from '../../src/preparation/conversion-factor.js';
 import { dilute } from '../../src/preparation/dilution.js';
 import { gravimetric } from '../../src/preparation/gravimetric.js';
-import { displayInstruction, displayResult } from '../../src/preparation/instruction.js';
+import { displayInstruction, displayResult } from '../../src/sigfig/instruction.js';
 import { saltFactor } from '../../src/preparation/salt-factor.js';
 import { prepareSolution } from '../../src/preparation/solution.js';
 import { substituteForm } from '../../src/preparation/substitute.js';

@@ -6,7 +6,7 @@ import type { ConversionFactor } from '../../preparation/conversion-factor.js';
 import { BENCH_CAUTION, DOSE_CAUTION } from '../../preparation/caution.js';
 import { dilute, type DilutionResult } from '../../preparation/dilution.js';
 import { gravimetric, type GravimetricResult } from '../../preparation/gravimetric.js';
-import { displayInstruction, displayResult, instruction, instructionJson, resultJson, volumeUnitFor, type Instruction } from '../../preparation/instruction.js';
+import { displayInstruction, displayResult, instruction, instructionJson, resultJson, volumeUnitFor, type Instruction } from '../../sigfig/instruction.js';
 import { saltFactor, type SaltFactorResult } from '../../preparation/salt-factor.js';
 import type { Quantity } from '../../sigfig/quantity.js';
 import { displayMeasured, type RoundingMode } from '../../sigfig/round.js';

@@ -3,7 +3,7 @@ import { Option } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
 import type { Note } from '../../errors/issue.js';
 import { BENCH_CAUTION } from '../../preparation/caution.js';
-import { displayInstruction, displayResult, instructionJson, massUnitFor, resultJson, type Instruction } from '../../preparation/instruction.js';
+import { displayInstruction, displayResult, instructionJson, massUnitFor, resultJson, type Instruction } from '../../sigfig/instruction.js';
 import { prepareSolution, type PurityBasis, type SolutionResult } from '../../preparation/solution.js';
 import { substituteForm, type SubstituteResult } from '../../preparation/substitute.js';
 import type { RoundingMode } from '../../sigfig/round.js';

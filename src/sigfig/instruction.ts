@@ -9,11 +9,11 @@
  */
 import { Decimal } from '../exact/decimal.js';
 import type { Note } from '../errors/issue.js';
-import { msd, sigFigsOf } from '../sigfig/measured.js';
-import type { Quantity } from '../sigfig/quantity.js';
-import { displayQuantity, reportUnit } from '../sigfig/display-quantity.js';
-import { displayMeasured, roundToSigFigs, type RoundingMode } from '../sigfig/round.js';
-import { baseUnitText, sameDims, unitOf, type Unit } from '../sigfig/units.js';
+import { msd, sigFigsOf } from './measured.js';
+import type { Quantity } from './quantity.js';
+import { displayQuantity, reportUnit } from './display-quantity.js';
+import { displayMeasured, roundToSigFigs, type RoundingMode } from './round.js';
+import { baseUnitText, sameDims, unitOf, type Unit } from './units.js';
 
 /** Significant figures an instruction is shown to, at the least. */
 export const WORKING_FIGURES = 4;

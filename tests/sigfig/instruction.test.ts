@@ -2,9 +2,10 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { measure } from '../../src/calc/measure.js';
 import { Decimal } from '../../src/exact/decimal.js';
-import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, volumeUnitFor, WORKING_FIGURES } from '../../src/preparation/instruction.js';
+import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, volumeUnitFor, WORKING_FIGURES } from '../../src/sigfig/instruction.js';
 import { dilutionWarning, over100Warning, smallMassWarning } from '../../src/preparation/warnings.js';
 import { unitOf } from '../../src/sigfig/units.js';
+import { displayQuantity } from '../../src/sigfig/display-quantity.js';
 
 const digits = (figure: string) => figure.replace(/ × 10.*$/, '').replace(/[^0-9]/g, '').replace(/^0+/, '').length;
 
@@ -66,5 +67,47 @@ describe('warnings', () => {
   it('a percentage over 100', () => {
     expect(over100Warning(new Decimal('100.0'), 'x', 'check')).toBeNull();
     expect(over100Warning(new Decimal('100.04'), 'x', 'check')?.code).toBe('RESULT_OVER_100');
+  });
+});
+
+// Policy (pondus): an amount to act on computed from a target keeps working precision, at
+// least 4 significant figures (common practice); a result keeps the textbook figures
+// (OpenStax Chemistry 2e §1.5, from memory).
+describe('instructions against results, through the calculator', () => {
+  it('shows a mass to weigh to 4 figures when the target has fewer', () => {
+    // NaCl for 0.1 M in 250 mL: 0.1 × 0.250 × 58.44 = 1.461 g (M(NaCl) = 58.44 g/mol, CIAAW weights)
+    const q = measure('0.1 M * 250 mL * M(NaCl)');
+    expect(displayQuantity(q, 'g').text).toBe('1 g'); // the textbook figure of a result
+    const d = displayInstruction(instruction(q, []), 'g');
+    expect(d.text).toBe('1.461 g');
+    expect(d.sigFigs).toBe(4);
+  });
+
+  it('keeps more figures when the data carry more', () => {
+    // 0.100000 M × 250.000 mL × 58.4400 g/mol = 1.46100 g: 6 figures in every factor
+    expect(displayInstruction(instruction(measure('0.100000 M * 250.000 mL * 58.4400 g/mol'), []), 'g').text).toBe('1.46100 g');
+  });
+
+  it('counts figures on the rounded value (a carry does not add one)', () => {
+    expect(displayInstruction(instruction(measure('9.99996 g * 2.0'), []), 'g').text).toBe('20.00 g');
+    expect(displayInstruction(instruction(measure('0.99996 g * 1.0'), []), 'g').text).toBe('1.000 g');
+  });
+
+  it('rounds half up on request', () => {
+    expect(displayInstruction(instruction(measure('1.23450 g * 1.0'), []), 'g').text).toBe('1.234 g');
+    expect(displayInstruction(instruction(measure('1.23450 g * 1.0'), []), 'g', 'half-up').text).toBe('1.235 g');
+  });
+
+  it('always shows at least the working figures and never fewer than the data', () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 999_999 }), fc.integer({ min: 0, max: 6 }), fc.integer({ min: 1, max: 8 }), (m, dp, n) => {
+        const text = `${(m / 10 ** dp).toFixed(dp)}${dp === 0 ? '.' : ''}`;
+        const q = measure(`${text} g * 1.${'0'.repeat(n - 1)}`);
+        const d = displayInstruction(instruction(q, []), 'g');
+        const data = Math.min(n, displayQuantity(measure(`${text} g`), 'g').sigFigs!);
+        expect(d.sigFigs).toBe(Math.max(WORKING_FIGURES, data));
+      }),
+      { numRuns: 300 },
+    );
   });
 });
