@@ -40,6 +40,9 @@ const ARROWS = /<=>|<->|⇌|⇄|->|→|⟶|=>|=/g;
 const ELECTRON = /^e(?:\^?-|⁻|−|\^−)$/;
 const COEFFICIENT = /^([0-9]+(?:\.[0-9]+)?|[0-9]+\/[0-9]+)\s*(?=[A-Z([{¹²³⁴⁵⁶⁷⁸⁹⁰]|e\b)/;
 
+/** A state symbol, `(s)`, `(l)`, `(g)` or `(aq)`, ending a species. */
+const STATE_AFTER = /^\((?:s|l|g|aq)\)(?:$|\s|\+)/;
+
 /** Splits one side into species texts with their offsets. */
 function splitSide(side: string, base: number): { text: string; start: number }[] {
   const out: { text: string; start: number }[] = [];
@@ -54,7 +57,8 @@ function splitSide(side: string, base: number): { text: string; start: number }[
       const after = side[i + 1];
       if (spaced) split = /\s/.test(before ?? '') && /\s/.test(after ?? '');
       // unspaced: a '+' before the start of a species separates; '^+', and a sign before another sign, do not ('Na++Cl-')
-      else split = before !== '^' && after !== undefined && /[A-Za-z0-9([{¹²³⁴⁵⁶⁷⁸⁹⁰]/.test(after);
+      // nor a charge before a state symbol ('Fe^2+(aq)')
+      else split = before !== '^' && after !== undefined && /[A-Za-z0-9([{¹²³⁴⁵⁶⁷⁸⁹⁰]/.test(after) && !STATE_AFTER.test(side.slice(i + 1));
     }
     if (split) {
       const raw = side.slice(start, i);
