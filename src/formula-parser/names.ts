@@ -68,7 +68,8 @@ export const SOLVENTS: Readonly<Record<string, NamedSubstance>> = Object.freeze(
 /**
  * Reagent and ligand names as chemists spell them (case matters), common practice. Several
  * read as element symbols too (NBS as N, B, S; DBU as D, B, U), which is why the parser
- * refuses them rather than computing the elements.
+ * refuses them rather than computing the elements. NCS is left out on purpose: it is also
+ * how the thiocyanate ligand is written (Hg(NCS)2).
  *
  * @example
  * REAGENTS.NBS.formula // 'C4H4BrNO2'
@@ -91,7 +92,6 @@ export const REAGENTS: Readonly<Record<string, NamedSubstance>> = Object.freeze(
   DIC: { formula: 'C7H14N2', name: 'N,N′-diisopropylcarbodiimide' },
   CDI: { formula: 'C7H6N4O', name: '1,1′-carbonyldiimidazole' },
   NBS: { formula: 'C4H4BrNO2', name: 'N-bromosuccinimide' },
-  NCS: { formula: 'C4H4ClNO2', name: 'N-chlorosuccinimide' },
   NIS: { formula: 'C4H4INO2', name: 'N-iodosuccinimide' },
   PCC: { formula: 'C5H6ClCrNO3', name: 'pyridinium chlorochromate' },
   PPTS: { formula: 'C12H13NO3S', name: 'pyridinium p-toluenesulfonate' },
@@ -101,6 +101,8 @@ export const REAGENTS: Readonly<Record<string, NamedSubstance>> = Object.freeze(
   TBAF: { formula: 'C16H36FN', name: 'tetrabutylammonium fluoride' },
   LDA: { formula: 'C6H14LiN', name: 'lithium diisopropylamide' },
   DDQ: { formula: 'C8Cl2N2O2', name: '2,3-dichloro-5,6-dicyano-1,4-benzoquinone' },
+  THP: { formula: 'C5H10O', name: 'tetrahydropyran' },
+  DHP: { formula: 'C5H8O', name: '3,4-dihydro-2H-pyran' },
   COD: { formula: 'C8H12', name: 'cycloocta-1,5-diene (cod)' },
   NBD: { formula: 'C7H8', name: 'norbornadiene (nbd)' },
   DPPF: { formula: 'C34H28FeP2', name: '1,1′-bis(diphenylphosphino)ferrocene (dppf)' },

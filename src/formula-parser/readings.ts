@@ -6,7 +6,7 @@
  * `abbreviations: 'none'` reads element symbols only.
  */
 import type { Issue, Note } from '../errors/issue.js';
-import { ABBREVIATIONS } from './abbreviations.js';
+import { ABBREVIATIONS, readsAsElements } from './abbreviations.js';
 import { REAGENTS, SOLVENTS, type NamedSubstance } from './names.js';
 import { columnOf } from './prescan.js';
 import type { AtomNode, ComponentNode, PartNode } from './tree.js';
@@ -68,6 +68,9 @@ function eachLevel(components: ComponentNode[], visit: (parts: PartNode[]) => vo
   }
 }
 
+/** Metals that carry a propyl group in everyday reagents (PrMgBr, PrLi, Pr2Zn, Pr4Sn). */
+const ORGANOMETALLIC = new Set(['Li', 'Na', 'K', 'Mg', 'Zn', 'Cu', 'Sn', 'Hg', 'Cd']);
+
 const ANION_VALENCE: Readonly<Record<string, number>> = { F: 1, Cl: 1, Br: 1, I: 1, O: 2, S: 2, Se: 2, Te: 2, N: 3, P: 3 };
 
 /**
@@ -86,6 +89,7 @@ function praseodymiumFits(parts: PartNode[]): boolean {
     const n = a.count ? Number(a.count.text) : 1;
     if (a.symbol === 'Pr') pr += n;
     else if (Object.hasOwn(ANION_VALENCE, a.symbol)) anion += n * ANION_VALENCE[a.symbol];
+    else if (ORGANOMETALLIC.has(a.symbol)) return false; // PrMgBr, PrLi: propyl reagents
     else return true; // intermetallics and the like: not a propyl pattern
   }
   return anion >= 3 * pr && anion <= 4 * pr;
@@ -172,6 +176,14 @@ export function settleReadings(components: ComponentNode[], input: string): { is
       }
     }
   });
+  if (issues.length === 0) {
+    // a formula made of abbreviations alone (Ph3, Bn) may be a slip of case for the elements (PH3, BN)
+    const onlyGroups = components.length === 1 && components[0].parts.every((p) => p.kind === 'group' && p.abbreviation);
+    const upper = input.trim().toUpperCase();
+    if (onlyGroups && upper !== input.trim() && /^[A-Z0-9]+$/.test(upper) && readsAsElements(upper.replace(/[0-9]+/g, ''))) {
+      notes.push({ code: 'CASE_CHECK', message: `'${input.trim()}' is read as abbreviations only; if you meant the elements, write '${upper}'` });
+    }
+  }
   return { issues, notes };
 }
 

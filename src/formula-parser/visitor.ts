@@ -241,7 +241,7 @@ export class TreeBuilder {
       return { kind: 'atom', symbol: 'H', massNumber: word.image === 'D' ? 2 : 3, count: null, span: { start, end } };
     }
     if (Object.hasOwn(REFUSED_ABBREVIATIONS, word.image)) {
-      const asPy = this.text.replace(/Py(?![a-z])/g, 'py');
+      const asPy = this.text.replace(/Py(?![a-z])/g, (_m, at: number) => (/[A-Za-z]/.test(this.text[at - 1] ?? '') ? '(py)' : 'py'));
       const asPyridyl = this.text.replace(/Py(?![a-z])/g, '(C5H4N)').replace(/\(\((C5H4N)\)\)/g, '($1)');
       this.issue('AMBIGUOUS_READING', REFUSED_ABBREVIATIONS[word.image], start, end - start, `write ${asPy} for pyridine (py, C5H5N), or ${asPyridyl} for pyridyl`);
       return placeholder(start, end);

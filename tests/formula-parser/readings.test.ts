@@ -136,6 +136,13 @@ describe('abbreviations', () => {
     expect(i.hint).toContain('PdCl2(C5H4N)2');
     expect(refusal('PdCl2(Py)2', { abbreviations: true }).code).toBe('AMBIGUOUS_READING');
     expect(hill('PdCl2(py)2')).toBe('C10H10Cl2N2Pd');
+    expect(refusal('PhPy').hint).toBe('write Ph(py) for pyridine (py, C5H5N), or Ph(C5H4N) for pyridyl');
+  });
+
+  it('notes a formula of abbreviations alone that may be a slip of case for the elements', () => {
+    expect(parseFormula('Ph3').notes.map((n) => n.message)).toContain("'Ph3' is read as abbreviations only; if you meant the elements, write 'PH3'");
+    expect(codes('Bn')).toContain('CASE_CHECK');
+    expect(codes('PH3')).toEqual([]);
   });
 });
 
@@ -204,7 +211,8 @@ describe('readings that must be settled', () => {
     for (const [f, h] of [['Pr6O11', 'O11Pr6'], ['PrCl3', 'Cl3Pr'], ['Pr2O3', 'O3Pr2'], ['PrCl3·7H2O', 'Cl3H14O7Pr'], ['Pr(NO3)3·6H2O', 'H12N3O15Pr'], ['Pr(OH)3', 'H3O3Pr'], ['Pr2(SO4)3', 'O12Pr2S3'], ['PrF3', 'F3Pr'], ['PrN', 'NPr'], ['Pr', 'Pr'], ['Pr(acac)3', 'C15H21O6Pr']]) {
       expect(hill(f), f).toBe(h);
     }
-    for (const f of ['PrOH', 'PrNH2', 'Pr2NH', 'PrBr', 'Pr3N', 'Pr2O', 'PrCOOH', 'PrCH2OH']) {
+    expect(hill('PrNi5')).toBe('Ni5Pr'); // an intermetallic
+    for (const f of ['PrOH', 'PrNH2', 'Pr2NH', 'PrBr', 'Pr3N', 'Pr2O', 'PrCOOH', 'PrCH2OH', 'PrMgBr', 'PrLi', 'Pr4NBr']) {
       const i = refusal(f);
       expect(i.code, f).toBe('AMBIGUOUS_READING');
       expect(i.hint, f).toContain('nPr');
