@@ -78,7 +78,8 @@ export function unknownElementHint(text: string, issue: Issue, mode: 'elements' 
   const whole = namedSubstance(text.trim());
   if (whole && whole.formula.toLowerCase() !== text.trim().toLowerCase()) {
     const how = mode === 'abbreviations' || !/^[A-Z]+$/.test(text.trim()) ? '' : ', or read names with --abbreviations (or { abbreviations: true })';
-    return `'${text.trim()}' is the abbreviation for ${whole.name} (${whole.formula}); write its formula, ${whole.formula}${how}`;
+    const what = whole.name.toLowerCase() === text.trim().toLowerCase() ? `'${text.trim()}' is ${whole.formula}` : `'${text.trim()}' is the abbreviation for ${whole.name} (${whole.formula})`;
+    return `${what}; write its formula, ${whole.formula}${how}`;
   }
   // the unknown word's letter run, and any abbreviation written over it
   const offset = offsetOfColumn(text, issue.column ?? 1);

@@ -180,7 +180,8 @@ export function settleReadings(components: ComponentNode[], input: string): { is
     // a formula made of abbreviations alone (Ph3, Bn) may be a slip of case for the elements (PH3, BN)
     const onlyGroups = components.length === 1 && components[0].parts.every((p) => p.kind === 'group' && p.abbreviation);
     const upper = input.trim().toUpperCase();
-    if (onlyGroups && upper !== input.trim() && /^[A-Z0-9]+$/.test(upper) && readsAsElements(upper.replace(/[0-9]+/g, ''))) {
+    const capitalised = /^[A-Z]/.test(input.trim()) && !/[DT]/.test(upper); // not thf → THF (tritium), cod → COD
+    if (onlyGroups && capitalised && upper !== input.trim() && /^[A-Z0-9]+$/.test(upper) && readsAsElements(upper.replace(/[0-9]+/g, ''))) {
       notes.push({ code: 'CASE_CHECK', message: `'${input.trim()}' is read as abbreviations only; if you meant the elements, write '${upper}'` });
     }
   }

@@ -143,6 +143,7 @@ describe('abbreviations', () => {
     expect(parseFormula('Ph3').notes.map((n) => n.message)).toContain("'Ph3' is read as abbreviations only; if you meant the elements, write 'PH3'");
     expect(codes('Bn')).toContain('CASE_CHECK');
     expect(codes('PH3')).toEqual([]);
+    expect(codes('thf')).toEqual(['ABBREVIATION']); // THF would be tritium: no such note
   });
 });
 
@@ -234,6 +235,7 @@ describe('readings that must be settled', () => {
     expect(refusal('Thf').hint).toContain('tetrahydrofuran (C4H8O)');
     expect(hill('thf')).toBe('C4H8O'); // lower-case thf is the ligand abbreviation (IUPAC Red Book 2005)
     expect(refusal('EtOAc').message).toContain('ethyl acetate');
+    expect(refusal('benzene').hint).toBe("'benzene' is C6H6; write its formula, C6H6");
   });
 });
 
