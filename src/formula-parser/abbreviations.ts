@@ -93,7 +93,13 @@ export const ABBREVIATIONS: Readonly<Record<string, Abbreviation>> = Object.free
   dmso: { formula: 'C2H6OS', name: 'dimethyl sulfoxide', source: IUPAC_LIGANDS },
 });
 
-/** True when `text` can be read, in its exact case, as a run of element symbols (D and T included). */
+/**
+ * True when `text` can be read, in its exact case, as a run of element symbols (D and T included).
+ *
+ * @example
+ * readsAsElements('TBS') // true (T, B, S)
+ * readsAsElements('Ph') // false
+ */
 export function readsAsElements(text: string): boolean {
   const words = text.match(/[A-Z][a-z]*|[^A-Z]+/g);
   return words !== null && words.every((w) => w === 'D' || w === 'T' || (w.length <= 2 && isElementSymbol(w)));

@@ -80,7 +80,8 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
   builder ??= new TreeBuilder();
   const built = builder.build(cst, text, expandAbbreviation);
   if (built.issues.length > 0) {
-    for (const unknown of built.issues.filter((i) => i.code === 'UNKNOWN_ELEMENT')) {
+    // the first few unknown symbols get a hint that looks at the whole formula; the rest keep the visitor's short one
+    for (const unknown of built.issues.filter((i) => i.code === 'UNKNOWN_ELEMENT').slice(0, 3)) {
       const hint = unknownElementHint(text, unknown, mode, (s) => safeParseFormula(s, { ...options, abbreviations: mode === 'elements' ? 'none' : false }).success);
       if (hint) unknown.hint = hint;
       else delete unknown.hint;

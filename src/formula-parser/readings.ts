@@ -123,10 +123,11 @@ export function settleReadings(components: ComponentNode[], input: string): { is
   });
   const wholeName = REAGENTS[input.trim()];
   const named = wholeName ? ` (${input.trim()} is ${wholeName.name}, ${wholeName.formula})` : '';
-  const refuse = (key: string, offset: number, length: number, message: string, hint: string) => {
+  // each reading is refused once, and its message built only then (a long formula may repeat it thousands of times)
+  const refuse = (key: string, offset: number, length: number, message: () => string, hint: () => string) => {
     if (seen.has(key)) return;
     seen.add(key);
-    issues.push({ code: 'AMBIGUOUS_READING', message, column: columnOf(input, offset), length, hint });
+    issues.push({ code: 'AMBIGUOUS_READING', message: message(), column: columnOf(input, offset), length, hint: hint() });
   };
   eachLevel(components, (parts) => {
     for (const p of parts) {
@@ -142,11 +143,11 @@ export function settleReadings(components: ComponentNode[], input: string): { is
         const a = ABBREVIATIONS[p.symbol];
         const element = p.symbol === 'Ac' ? 'actinium' : 'tennessine';
         const nuclide = p.symbol === 'Ac' ? '[227Ac]' : '[294Ts]';
-        refuse(p.symbol, p.span.start, 2, `'${p.symbol}' could be ${a.name} (${a.formula}) or the element ${element}, which has no standard atomic weight${named}`,
-          `to read ${p.symbol} as ${a.name}, ${HOW_TO_ABBREVIATE}; for ${element}, write the nuclide: ${replaceSymbol(input, p.symbol, nuclide)}`);
-      } else if (p.symbol === 'Pr' && !praseodymiumFits(parts)) {
-        refuse('Pr', p.span.start, 2, `'Pr' could be propyl (C3H7) or the element praseodymium; beside these symbols it reads as an organic formula`,
-          `to read Pr as propyl, write nPr or iPr (${replaceSymbol(input, 'Pr', 'nPr')}) or ${HOW_TO_ABBREVIATE}; for praseodymium, write its one nuclide: ${replaceSymbol(input, 'Pr', '[141Pr]')}`);
+        refuse(p.symbol, p.span.start, 2, () => `'${p.symbol}' could be ${a.name} (${a.formula}) or the element ${element}, which has no standard atomic weight${named}`,
+          () => `to read ${p.symbol} as ${a.name}, ${HOW_TO_ABBREVIATE}; for ${element}, write the nuclide: ${replaceSymbol(input, p.symbol, nuclide)}`);
+      } else if (p.symbol === 'Pr' && !seen.has('Pr') && !praseodymiumFits(parts)) {
+        refuse('Pr', p.span.start, 2, () => `'Pr' could be propyl (C3H7) or the element praseodymium; beside these symbols it reads as an organic formula`,
+          () => `to read Pr as propyl, write nPr or iPr (${replaceSymbol(input, 'Pr', 'nPr')}) or ${HOW_TO_ABBREVIATE}; for praseodymium, write its one nuclide: ${replaceSymbol(input, 'Pr', '[141Pr]')}`);
       } else if (p.symbol === 'Np' && !seen.has('Np')) {
         seen.add('Np');
         notes.push({ code: 'ELEMENT_NOT_ABBREVIATION', message: "'Np' is read as the element neptunium; for naphthyl (C10H7) or neopentyl (C5H11) write the formula", column: columnOf(input, p.span.start) });
@@ -158,21 +159,21 @@ export function settleReadings(components: ComponentNode[], input: string): { is
       if (name && name.formula !== run.text) {
         const elements = run.atoms.map((a) => written(input, a)).join(', ');
         const other = hasIsotope ? asElementsText(run.text) : [...run.atoms.map((a) => written(input, a))].sort().join('');
-        refuse(`run:${run.text}`, run.start, run.text.length, `'${run.text}' reads as the elements ${elements}, but ${run.text} is also the abbreviation for ${name.name} (${name.formula})`,
-          `for ${name.name}, write ${name.formula} or ${HOW_TO_ABBREVIATE}; for the elements, write ${other}${hasIsotope ? ' (hydrogen isotopes in brackets)' : ' (another order)'}`);
+        refuse(`run:${run.text}`, run.start, run.text.length, () => `'${run.text}' reads as the elements ${elements}, but ${run.text} is also the abbreviation for ${name.name} (${name.formula})`,
+          () => `for ${name.name}, write ${name.formula} or ${HOW_TO_ABBREVIATE}; for the elements, write ${other}${hasIsotope ? ' (hydrogen isotopes in brackets)' : ' (another order)'}`);
         continue;
       }
       for (const g of GROUP_RUNS) {
         const at = run.text.indexOf(g);
         if (at < 0) continue;
         const a = ABBREVIATIONS[g];
-        refuse(`group:${g}`, run.start + at, g.length, `'${g}' reads as the elements ${g.split('').join(', ')} (with tritium), but ${g} is also the abbreviation for ${a.name} (${a.formula})`,
-          `for ${a.name}, write ${a.formula} or ${HOW_TO_ABBREVIATE}; for the elements, write ${asElementsText(g)}`);
+        refuse(`group:${g}`, run.start + at, g.length, () => `'${g}' reads as the elements ${g.split('').join(', ')} (with tritium), but ${g} is also the abbreviation for ${a.name} (${a.formula})`,
+          () => `for ${a.name}, write ${a.formula} or ${HOW_TO_ABBREVIATE}; for the elements, write ${asElementsText(g)}`);
         break;
       }
       if (/^BOC/.test(run.text)) {
-        refuse('BOC', run.start, 3, "'BOC' reads as the elements B, O, C, but is also a spelling of Boc, tert-butoxycarbonyl (C5H9O2)",
-          `for the Boc group write Boc (${replaceSymbol(input, 'BOC', 'Boc')}); for the elements, write them in another order (CBO)`);
+        refuse('BOC', run.start, 3, () => "'BOC' reads as the elements B, O, C, but is also a spelling of Boc, tert-butoxycarbonyl (C5H9O2)",
+          () => `for the Boc group write Boc (${replaceSymbol(input, 'BOC', 'Boc')}); for the elements, write them in another order (CBO)`);
       }
     }
   });

@@ -240,6 +240,9 @@ export class TreeBuilder {
     if (word.image === 'D' || word.image === 'T') {
       return { kind: 'atom', symbol: 'H', massNumber: word.image === 'D' ? 2 : 3, count: null, span: { start, end } };
     }
+    if (Object.hasOwn(REFUSED_ABBREVIATIONS, word.image) && this.issues.some((i) => i.code === 'AMBIGUOUS_READING' && i.message === REFUSED_ABBREVIATIONS[word.image])) {
+      return placeholder(start, end); // said once
+    }
     if (Object.hasOwn(REFUSED_ABBREVIATIONS, word.image)) {
       const asPy = this.text.replace(/Py(?![a-z])/g, (_m, at: number) => (/[A-Za-z]/.test(this.text[at - 1] ?? '') ? '(py)' : 'py'));
       const asPyridyl = this.text.replace(/Py(?![a-z])/g, '(C5H4N)').replace(/\(\((C5H4N)\)\)/g, '($1)');
