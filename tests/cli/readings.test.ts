@@ -70,4 +70,11 @@ describe('readings at the command line', () => {
     expect(o.coefficients).toEqual([1, 2, 1, 1]);
     expect(o.notes).toEqual(['the state symbols (s), (aq), (g) are set aside: they do not change the balance']);
   });
+
+  it('still finds empirical formulas with praseodymium beside carbon and hydrogen (element symbols written by pondus itself)', () => {
+    // invented percentages, chosen so that the search has a clean answer
+    const r = pondus(['empirical', '--json', 'C=30.00 H=6.00 Pr=64.00']);
+    expect(r.status).toBe(0);
+    expect(jsonLines(r.stdout)[0].empirical).toBe('C55H131Pr10');
+  });
 });
