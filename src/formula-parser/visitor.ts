@@ -218,7 +218,7 @@ export class TreeBuilder {
         if (ABBREVIATION_CLASHES.includes(abbr.image)) {
           const element = getElement(abbr.image);
           const other = element ? `the element ${element.name}` : `the elements ${abbr.image.match(/[A-Z][a-z]?/g)!.join(', ')}`;
-          this.notes.push({ code: 'ABBREVIATION_CLASH', message: `'${abbr.image}' is read as ${known.name} (${known.formula}); with abbreviations off it is ${other}`, column });
+          this.notes.push({ code: 'ABBREVIATION_CLASH', message: `'${abbr.image}' is read as ${known.name} (${known.formula}), not as ${other}`, column });
         } else {
           this.notes.push({ code: 'ABBREVIATION', message: `'${abbr.image}' is read as ${known.name} (${known.formula})`, column });
         }
