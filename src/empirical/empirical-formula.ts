@@ -32,7 +32,7 @@ export interface EmpiricalResult {
 
 function multiply(f: FormulaFit, k: number): string {
   const m = new Map([...f.counts].map(([s, c]) => [s, c * k]));
-  return formulaMass([...m].map(([s, c]) => `${s}${c}`).join('')).formula;
+  return formulaMass([...m].map(([s, c]) => `${s}${c}`).join(''), { abbreviations: 'none' }).formula; // element symbols written by code
 }
 
 /**
@@ -44,7 +44,7 @@ function multiply(f: FormulaFit, k: number): string {
 export function empirical(input: string, options: EmpiricalOptions = {}): EmpiricalResult {
   const m = readMeasurements(input);
   const s = searchFormula(m);
-  const empiricalMass = formulaMass(s.best.formula).molarMass;
+  const empiricalMass = formulaMass(s.best.formula, { abbreviations: 'none' }).molarMass; // a Hill formula: element symbols only
   const notes: Note[] = [];
   const d = m.difference;
   if (d) notes.push({ code: 'BY_DIFFERENCE', message: `${d.symbol} by difference: ${d.value.toFixed()}${m.kind === 'percent' ? ' %' : ' g'}` });

@@ -24,6 +24,8 @@ export type IssueCode =
   | 'AMBIGUOUS_CHARGE'
   | 'MISPLACED_CHARGE'
   | 'UNKNOWN_ABBREVIATION'
+  | 'AMBIGUOUS_READING'
+  | 'INEXACT_FRACTION'
   // computing with formulas
   | 'NO_STANDARD_WEIGHT'
   | 'PART_NOT_IN_FORMULA'

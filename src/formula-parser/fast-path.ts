@@ -11,6 +11,7 @@ import { ELEMENTS } from '../elements/element-table.js';
 import type { Note } from '../errors/issue.js';
 import { caseTrapNotes, isCaseTrap } from './hints.js';
 import { MAX_FORMULA_LENGTH, MAX_NESTING } from './prescan.js';
+import { mayNeedSettling } from './readings.js';
 import type { AtomNode, ComponentNode, CountNode, FormulaTree, GroupNode, PartNode } from './tree.js';
 import { MAX_COUNT_DIGITS } from './visitor.js';
 
@@ -19,7 +20,10 @@ const CLOSE_OF: Record<string, string> = { '(': ')', '[': ']', '{': '}' };
 /** Element symbols indexed by their letters' char codes, so the scanner finds a symbol without slicing the text. */
 const ONE_LETTER: (string | undefined)[] = [];
 const TWO_LETTER: (string | undefined)[] = [];
+/** Symbols whose reading must be settled by the full parser: Ac, Ts and Pr are also abbreviations, Np gets a note. */
+const SETTLE = new Set(['Ac', 'Ts', 'Pr', 'Np']);
 for (const e of ELEMENTS) {
+  if (SETTLE.has(e.symbol)) continue;
   const a = e.symbol.charCodeAt(0) - 65;
   if (e.symbol.length === 1) ONE_LETTER[a] = e.symbol;
   else TWO_LETTER[a * 26 + e.symbol.charCodeAt(1) - 97] = e.symbol;
@@ -41,6 +45,7 @@ export function fastParse(input: string): FormulaTree | null {
   try {
     const components = scanner.body(0, '');
     if (scanner.pos !== input.length) return null;
+    if (scanner.longRun && mayNeedSettling(input)) return null;
     return { kind: 'formula', input, components, charge: 0, notes: scanner.notes(components) };
   } catch (e) {
     if (e === GIVE_UP) return null;
@@ -50,6 +55,9 @@ export function fastParse(input: string): FormulaTree | null {
 
 class Scanner {
   pos = 0;
+  /** Set when three atoms stand next to each other with no count between them (a run such as THF or NBS). */
+  longRun = false;
+  private run = 0;
   private trap = false;
   constructor(private readonly text: string) {}
 
@@ -95,6 +103,8 @@ class Scanner {
     if (end - start === 2 && isCaseTrap(symbol)) this.trap = true;
     this.pos = end;
     const count = this.count();
+    if (++this.run >= 3) this.longRun = true;
+    if (count) this.run = 0;
     return { kind: 'atom', symbol, massNumber: null, count, span: { start, end: count ? count.span.end : end } };
   }
 

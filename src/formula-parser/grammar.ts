@@ -4,7 +4,7 @@
  *
  *   formula   := body charge?
  *   body      := component (Separator component)*
- *   component := Number? part+
+ *   component := (Number | Fraction)? part+
  *   part      := (atom | group) count?
  *   atom      := IsotopeLabel | Abbreviation | SuperscriptDigits? Word
  *   group     := '(' body ')' | '[' body ']' | '{' body '}'
@@ -16,6 +16,7 @@ import {
   Abbreviation,
   allTokens,
   CaretCharge,
+  Fraction,
   IsotopeLabel,
   LCurly,
   LParen,
@@ -52,7 +53,7 @@ export class FormulaGrammar extends CstParser {
   });
 
   public component = this.RULE('component', () => {
-    this.OPTION(() => this.CONSUME(NumberToken));
+    this.OPTION(() => this.OR([{ ALT: () => this.CONSUME(NumberToken) }, { ALT: () => this.CONSUME(Fraction) }]));
     this.AT_LEAST_ONE(() => this.SUBRULE(this.part));
   });
 

@@ -3,9 +3,10 @@
  * split into real symbols (`co` → `CO` or `Co`, `nacl` → `NaCl`).
  */
 import { getElement, isElementSymbol } from '../elements/element-table.js';
-import type { Note } from '../errors/issue.js';
+import type { Issue, Note } from '../errors/issue.js';
 import type { AtomNode, ComponentNode } from './tree.js';
 import { ABBREVIATIONS } from './abbreviations.js';
+import { namedSubstance } from './names.js';
 
 const MAX_SUGGESTIONS = 4;
 
@@ -37,24 +38,78 @@ export function symbolReadings(word: string): string[] {
 }
 
 /**
- * A hint for an unknown element symbol, or undefined when there is nothing useful to say.
+ * A hint for an unknown element symbol on its own, or undefined when there is nothing useful to say.
+ * (parse.ts replaces it with {@link unknownElementHint}, which sees the whole formula.)
  *
  * @example
- * unknownSymbolHint('co', 'co2') // "did you mean CO2 (carbon and oxygen) or Co2 (cobalt)? Symbols start with a capital letter"
+ * unknownSymbolHint('Xx', false) // undefined
  */
 export function unknownSymbolHint(word: string, abbreviationsOn: boolean): string | undefined {
   if (!abbreviationsOn && Object.hasOwn(ABBREVIATIONS, word)) {
     const a = ABBREVIATIONS[word];
-    return `'${word}' is the abbreviation for ${a.name} (${a.formula}); turn abbreviations on to read it (--abbreviations, or { abbreviations: true })`;
+    return `'${word}' is the abbreviation for ${a.name} (${a.formula})`;
   }
-  const readings = symbolReadings(word);
-  if (readings.length === 0) {
-    if (/^[a-z]/.test(word)) return 'element symbols start with a capital letter';
-    return undefined;
+  if (/^[a-z]/.test(word)) return 'element symbols start with a capital letter';
+  return undefined;
+}
+
+/** The abbreviation spelled (exact case) in `run` over the letters from `from` to `to`, if any. */
+function abbreviationOver(run: string, from: number, to: number): string | null {
+  let best: string | null = null;
+  for (const name of Object.keys(ABBREVIATIONS)) {
+    for (let at = run.indexOf(name); at >= 0; at = run.indexOf(name, at + 1)) {
+      if (at < to && at + name.length > from && (best === null || name.length > best.length)) best = name;
+    }
   }
-  const quoted = readings.map((r) => `'${r}'`);
-  const list = quoted.length === 1 ? quoted[0] : `${quoted.slice(0, -1).join(', ')} or ${quoted[quoted.length - 1]}`;
-  return `did you mean ${list}? Element symbols are one capital letter, or a capital and one lower-case letter`;
+  return best;
+}
+
+/**
+ * The hint for an unknown element symbol in a formula: what a name or abbreviation stands for,
+ * or the formula re-read with the letter case of the unknown words changed. Hints never re-case
+ * letters that already read as element symbols (unless their whole run is in one case, like
+ * NACL or h2o, which carries no case information), and never re-case an abbreviation (Ph, tBu,
+ * Boc, Cp): so a hint cannot turn Pd(PPh3)4 into Pd(PPH3)4.
+ *
+ * @example
+ * unknownElementHint('DMF', { code: 'UNKNOWN_ELEMENT', message: '', column: 2 }, 'plain', () => true) // "'DMF' is the abbreviation for N,N-dimethylformamide (C3H7NO); …"
+ */
+export function unknownElementHint(text: string, issue: Issue, mode: 'elements' | 'plain' | 'abbreviations', parses: (s: string) => boolean): string | undefined {
+  const whole = namedSubstance(text.trim());
+  if (whole && whole.formula.toLowerCase() !== text.trim().toLowerCase()) {
+    const how = mode === 'abbreviations' || !/^[A-Z]+$/.test(text.trim()) ? '' : ', or read names with --abbreviations (or { abbreviations: true })';
+    const what = whole.name.toLowerCase() === text.trim().toLowerCase() ? `'${text.trim()}' is ${whole.formula}` : `'${text.trim()}' is the abbreviation for ${whole.name} (${whole.formula})`;
+    return `${what}; write its formula, ${whole.formula}${how}`;
+  }
+  // the unknown word's letter run, and any abbreviation written over it
+  const offset = offsetOfColumn(text, issue.column ?? 1);
+  for (const m of text.matchAll(/[A-Za-z*]+/g)) {
+    const from = m.index!;
+    if (offset < from || offset >= from + m[0].length) continue;
+    const abbr = abbreviationOver(m[0], offset - from, offset - from + (issue.length ?? 1));
+    if (abbr) {
+      const a = ABBREVIATIONS[abbr];
+      const why = mode === 'elements' ? 'the element-only reading does not expand it' : Object.hasOwn(ABBREVIATIONS, abbr) ? 'read it with --abbreviations (or { abbreviations: true })' : '';
+      return `'${abbr}' is the abbreviation for ${a.name} (${a.formula})${why ? `; ${why}` : ''}`;
+    }
+    const name = namedSubstance(m[0]);
+    if (name && name.formula.toLowerCase() !== m[0].toLowerCase()) return `'${m[0]}' is the abbreviation for ${name.name} (${name.formula}); write its formula, ${name.formula}`;
+  }
+  const readings = formulaReadings(text, parses);
+  if (readings.length > 0) return `did you mean ${readings.map((r) => `'${r}'`).join(' or ')}? Element symbols are one capital letter, or a capital and one lower-case letter`;
+  return unknownSymbolHint(text.slice(offset, offset + (issue.length ?? 1)), true);
+}
+
+/** UTF-16 offset of a 1-based code-point column. */
+function offsetOfColumn(text: string, column: number): number {
+  let col = 1;
+  let i = 0;
+  while (i < text.length && col < column) {
+    const c = text.charCodeAt(i);
+    i += c >= 0xd800 && c <= 0xdbff ? 2 : 1;
+    col++;
+  }
+  return i;
 }
 
 /** Two-letter symbols that read as two common light atoms when the case slips (Co vs CO). */
@@ -120,9 +175,43 @@ export function caseTrapNotes(components: ComponentNode[]): Note[] {
 }
 
 /**
- * Whole-formula suggestions when the letter case slipped throughout (`h2o`, `NACL`): every run of
- * letters re-read as element symbols, keeping the readings that parse. Best first: readings with
- * more symbols (CO2 before Co2), as a lower-case formula is usually made of light elements.
+ * Re-readings of one run of letters as element symbols, changing the case of the letters marked
+ * free only (the others must keep their case), best first: more symbols first.
+ *
+ * @example
+ * recaseRun('NACL', [true, true, true, true]) // ['NaCl']
+ * recaseRun('NaCL', [false, false, false, true]) // ['NaCl']
+ */
+export function recaseRun(run: string, free: boolean[]): string[] {
+  if (run.length > 24) return [];
+  const out: string[] = [];
+  const walk = (i: number, acc: string) => {
+    if (out.length >= MAX_SUGGESTIONS) return;
+    if (i === run.length) {
+      out.push(acc);
+      return;
+    }
+    for (const len of [1, 2]) {
+      if (i + len > run.length) continue;
+      const piece = run.slice(i, i + len);
+      const sym = piece[0].toUpperCase() + piece.slice(1).toLowerCase();
+      let keeps = true;
+      for (let k = 0; k < len; k++) if (!free[i + k] && run[i + k] !== sym[k]) keeps = false;
+      if (!keeps) continue;
+      const fixed = !free.slice(i, i + len).some(Boolean);
+      if (isElementSymbol(sym) || (fixed && (sym === 'D' || sym === 'T'))) walk(i + len, acc + sym);
+    }
+  };
+  walk(0, '');
+  const symbolsIn = (s: string) => (s.match(/[A-Z]/g) ?? []).length;
+  return out.sort((a, b) => symbolsIn(b) - symbolsIn(a));
+}
+
+/**
+ * Whole-formula suggestions when letter case slipped (`h2o`, `NACL`, `NaCL`): each run of letters
+ * re-read as element symbols, keeping the readings that parse. Only the letters of words that are
+ * not element symbols may change case, or every letter of a run written in one case throughout
+ * (`NACL`, `h`); a run with an abbreviation over an unknown word gets no suggestion.
  *
  * @example
  * formulaReadings('nacl', (s) => true) // ['NaCl']
@@ -130,11 +219,27 @@ export function caseTrapNotes(components: ComponentNode[]): Note[] {
 export function formulaReadings(input: string, parses: (s: string) => boolean): string[] {
   const runs = [...input.matchAll(/[A-Za-z]+/g)];
   if (runs.length === 0 || runs.length > 20) return [];
-  const options = runs.map((m) => {
-    const r = symbolReadings(m[0]);
-    return isWordOfSymbols(m[0]) ? [m[0], ...r] : r;
-  });
-  if (options.some((o) => o.length === 0)) return [];
+  const options: string[][] = [];
+  for (const m of runs) {
+    const run = m[0];
+    const words = [...run.matchAll(/[A-Z][a-z]*|[a-z]+/g)];
+    const bad = words.filter((w) => !(w[0] === 'D' || w[0] === 'T' || isElementSymbol(w[0])));
+    if (bad.length === 0) {
+      options.push([run]);
+      continue;
+    }
+    const oneCase = run === run.toUpperCase() || run === run.toLowerCase();
+    const free = new Array<boolean>(run.length).fill(oneCase);
+    if (!oneCase) {
+      for (const w of bad) {
+        if (abbreviationOver(run, w.index!, w.index! + w[0].length)) return [];
+        for (let k = 0; k < w[0].length; k++) free[w.index! + k] = true;
+      }
+    }
+    const r = recaseRun(run, free);
+    if (r.length === 0) return [];
+    options.push(r);
+  }
   const build = (pick: (i: number) => string) => {
     let out = '';
     let last = 0;
@@ -145,16 +250,8 @@ export function formulaReadings(input: string, parses: (s: string) => boolean): 
     return out + input.slice(last);
   };
   const candidates = new Set<string>();
-  const symbolsIn = (s: string) => (s.match(/[A-Z]/g) ?? []).length;
-  const most = (o: string[]) => [...o].sort((a, b) => symbolsIn(b) - symbolsIn(a));
-  candidates.add(build((i) => most(options[i])[0]));
+  candidates.add(build((i) => options[i][0]));
   const first = options.findIndex((o) => o.length > 1);
-  if (first >= 0) candidates.add(build((i) => (i === first ? most(options[i])[1] : most(options[i])[0])));
+  if (first >= 0) candidates.add(build((i) => (i === first ? options[i][1] : options[i][0])));
   return [...candidates].filter((c) => c !== input && parses(c)).slice(0, 2);
-}
-
-/** True when a word is already a run of correctly written element symbols. */
-function isWordOfSymbols(word: string): boolean {
-  const parts = word.match(/[A-Z][a-z]?/g);
-  return parts !== null && parts.join('') === word && parts.every((p) => isElementSymbol(p));
 }

@@ -5,19 +5,31 @@
 import type { IRecognitionException, IToken } from 'chevrotain';
 import type { Issue } from '../errors/issue.js';
 import { PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import type { Note } from '../errors/issue.js';
 import { ABBREVIATIONS } from './abbreviations.js';
 import { fastParse } from './fast-path.js';
-import { formulaReadings } from './hints.js';
+import { unknownElementHint } from './hints.js';
 import { formulaGrammar } from './grammar.js';
+import { REAGENTS } from './names.js';
 import { columnOf, MAX_FORMULA_LENGTH, prescan } from './prescan.js';
-import { ABBREVIATION_MODE, formulaLexer, PLAIN_MODE } from './tokens.js';
+import { settleReadings } from './readings.js';
+import { ABBREVIATION_MODE, ELEMENTS_MODE, formulaLexer, PLAIN_MODE } from './tokens.js';
 import { end, type ComponentNode, type FormulaTree, type GroupNode, type PartNode, type Span } from './tree.js';
-import { TreeBuilder } from './visitor.js';
+import { TreeBuilder, type ReadingMode } from './visitor.js';
 
 /** Options for {@link parseFormula}. */
 export interface ParseOptions {
-  /** Read group abbreviations (Me, Et, Ph, Boc, …). Off by default, because Pr, Ac and Ts are also element symbols. */
-  abbreviations?: boolean;
+  /**
+   * How letters that could be an abbreviation are read.
+   * - default (`false` or left out): abbreviations that no element symbol can be confused with
+   *   (Me, Ph, Boc, Cp*, dba, py, …) are read, each with a note; letters that are element symbols
+   *   and also an abbreviation or reagent name (Ac, Ts, Pr beside C and H, THF, NBS, TBS) are refused
+   *   with both readings offered; `Py` (pyridyl or pyridine) is always refused.
+   * - `true`: every abbreviation is read, the clashing ones too (Pr propyl, Ac acetyl, Ts tosyl), and
+   *   all-capitals reagent names (THF, DMF, NBS, COD) stand for their formulas, each with a note.
+   * - `'none'`: element symbols only; nothing is expanded and nothing is refused for looking like a name.
+   */
+  abbreviations?: boolean | 'none';
   /** Longest input accepted (default 10,000 characters). */
   maxLength?: number;
 }
@@ -32,7 +44,7 @@ let builder: TreeBuilder | null = null;
  * parseFormula('[Fe(CN)6]^4-').charge          // -4
  */
 export function parseFormula(input: string, options: ParseOptions = {}): FormulaTree {
-  if (!options.abbreviations && (options.maxLength === undefined || input.length <= options.maxLength)) {
+  if (options.abbreviations !== true && (options.maxLength === undefined || input.length <= options.maxLength)) {
     const fast = fastParse(input);
     if (fast) return fast;
   }
@@ -47,10 +59,15 @@ export function parseFormula(input: string, options: ParseOptions = {}): Formula
  * parseWithGrammar('H2O').components[0].parts.length // 2
  */
 export function parseWithGrammar(input: string, options: ParseOptions = {}): FormulaTree {
+  const mode: ReadingMode = options.abbreviations === true ? 'abbreviations' : options.abbreviations === 'none' ? 'elements' : 'plain';
   const pre = prescan(input, options.maxLength ?? MAX_FORMULA_LENGTH);
   if (pre) throw new PondusError([pre], input);
 
-  const lexed = formulaLexer().tokenize(input, options.abbreviations ? ABBREVIATION_MODE : PLAIN_MODE);
+  const state = stateSymbol(input);
+  const text = state ? input.slice(0, state.offset) : input;
+  if (state && text.trim() === '') throw new PondusError([{ code: 'EMPTY_INPUT', message: `only a state symbol, '${state.symbol}', and no formula` }], input);
+
+  const lexed = formulaLexer().tokenize(text, mode === 'abbreviations' ? ABBREVIATION_MODE : mode === 'elements' ? ELEMENTS_MODE : PLAIN_MODE);
   if (lexed.errors.length > 0) {
     const e = lexed.errors[0];
     throw new PondusError([unexpectedCharacter(input, e.offset)], input);
@@ -58,19 +75,35 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
   const grammar = formulaGrammar();
   grammar.input = lexed.tokens;
   const cst = grammar.formula();
-  if (grammar.errors.length > 0) throw new PondusError([syntaxIssue(input, grammar.errors[0], lexed.tokens)], input);
+  if (grammar.errors.length > 0) throw new PondusError([syntaxIssue(text, grammar.errors[0], lexed.tokens)], input);
 
   builder ??= new TreeBuilder();
-  const built = builder.build(cst, input, expandAbbreviation);
+  const built = builder.build(cst, text, expandAbbreviation);
   if (built.issues.length > 0) {
-    const unknown = built.issues.find((i) => i.code === 'UNKNOWN_ELEMENT');
-    if (unknown) {
-      const readings = formulaReadings(input, (s) => safeParseFormula(s, { ...options, abbreviations: false }).success);
-      if (readings.length > 0) unknown.hint = `did you mean ${readings.map((r) => `'${r}'`).join(' or ')}? Element symbols are one capital letter, or a capital and one lower-case letter`;
+    // the first few unknown symbols get a hint that looks at the whole formula; the rest keep the visitor's short one
+    for (const unknown of built.issues.filter((i) => i.code === 'UNKNOWN_ELEMENT').slice(0, 3)) {
+      const hint = unknownElementHint(text, unknown, mode, (s) => safeParseFormula(s, { ...options, abbreviations: mode === 'elements' ? 'none' : false }).success);
+      if (hint) unknown.hint = hint;
+      else delete unknown.hint;
     }
     throw new PondusError(built.issues, input);
   }
-  return { kind: 'formula', input, components: built.components, charge: built.charge, notes: built.notes };
+  const notes: Note[] = built.notes;
+  if (mode === 'plain') {
+    const settled = settleReadings(built.components, text);
+    if (settled.issues.length > 0) throw new PondusError(settled.issues, input);
+    notes.push(...settled.notes);
+  }
+  if (state) notes.push({ code: 'STATE_SYMBOL', message: `'${state.symbol}' is a state symbol (${STATES[state.letters]}) and is set aside`, column: columnOf(input, state.offset) });
+  return { kind: 'formula', input, components: built.components, charge: built.charge, notes };
+}
+
+const STATES: Record<string, string> = { s: 'solid', l: 'liquid', g: 'gas', aq: 'aqueous solution' };
+
+/** A trailing state symbol, `(s)`, `(l)`, `(g)` or `(aq)`, in lower case (`(S)` is sulfur). */
+function stateSymbol(input: string): { offset: number; symbol: string; letters: string } | null {
+  const m = /\((s|l|g|aq)\)\s*$/.exec(input);
+  return m ? { offset: m.index, symbol: `(${m[1]})`, letters: m[1] } : null;
 }
 
 /**
@@ -143,7 +176,7 @@ function expandAbbreviation(name: string, span: Span): ComponentNode[] {
   if (!body) {
     // abbreviation formulas are plain, so the fast path reads them (and the shared visitor, busy
     // with the formula that holds the abbreviation, is not re-entered)
-    const tree = fastParse(ABBREVIATIONS[name].formula);
+    const tree = fastParse((ABBREVIATIONS[name] ?? REAGENTS[name]).formula);
     if (!tree) throw new Error(`abbreviation ${name} has a formula the fast path cannot read`);
     body = tree.components;
     expansions.set(name, body);

@@ -5,7 +5,8 @@
 import type { CstNode, IToken } from 'chevrotain';
 import type { Issue, Note } from '../errors/issue.js';
 import { getElement, isElementSymbol } from '../elements/element-table.js';
-import { ABBREVIATION_CLASHES, ABBREVIATIONS } from './abbreviations.js';
+import { ABBREVIATION_CLASHES, ABBREVIATIONS, REFUSED_ABBREVIATIONS } from './abbreviations.js';
+import { REAGENTS } from './names.js';
 import { getNuclide } from '../elements/nuclides.js';
 import { caseTrapNotes, unknownSymbolHint } from './hints.js';
 import { columnOf } from './prescan.js';
@@ -17,6 +18,18 @@ export const MAX_COUNT_DIGITS = 9;
 export const MAX_COUNT_DECIMALS = 6;
 /** Largest charge magnitude accepted. */
 export const MAX_CHARGE = 99;
+
+/** How letters that could be abbreviations are read: elements only, the default, or every abbreviation. */
+export type ReadingMode = 'elements' | 'plain' | 'abbreviations';
+
+/** Unicode vulgar fractions as numerator and denominator. */
+const VULGAR_FRACTIONS: Record<string, [number, number]> = {
+  '½': [1, 2], '⅓': [1, 3], '⅔': [2, 3], '¼': [1, 4], '¾': [3, 4], '⅕': [1, 5], '⅖': [2, 5], '⅗': [3, 5], '⅘': [4, 5],
+  '⅙': [1, 6], '⅚': [5, 6], '⅐': [1, 7], '⅛': [1, 8], '⅜': [3, 8], '⅝': [5, 8], '⅞': [7, 8], '⅑': [1, 9], '⅒': [1, 10],
+};
+
+/** Adducts read after the `CuSO4.5H2O` shorthand dot without asking: water, heavy water, ammonia. */
+const SHORTHAND_ADDUCT = /^(?:H2O|D2O|NH3)(?![a-z0-9₀-₉])/;
 
 const SUPERSCRIPT: Record<string, string> = {
   '⁰': '0', '¹': '1', '²': '2', '³': '3', '⁴': '4', '⁵': '5', '⁶': '6', '⁷': '7', '⁸': '8', '⁹': '9', '⁺': '+', '⁻': '-',
@@ -52,6 +65,9 @@ export class TreeBuilder {
   private issues: Issue[] = [];
   private notes: Note[] = [];
   private expand: (name: string, span: Span) => ComponentNode[] = () => [];
+  private abbreviationsRead = new Set<string>();
+  /** Denominators of fractional multipliers with no exact decimal form (⅓), per component offset. */
+  private inexact = new Map<number, [number, number]>();
 
   // eslint-disable-next-line @typescript-eslint/no-explicit-any
   private visit(node: CstNode): any {
@@ -64,6 +80,8 @@ export class TreeBuilder {
     this.issues = [];
     this.notes = [];
     this.expand = expand;
+    this.abbreviationsRead = new Set();
+    this.inexact = new Map();
     const { components, charge } = this.visit(cst) as { components: ComponentNode[]; charge: number };
     this.notes.push(...caseTrapNotes(components));
     return { components, charge, issues: this.issues, notes: this.notes };
@@ -82,20 +100,96 @@ export class TreeBuilder {
   }
 
   body(ctx: Ctx): ComponentNode[] {
+    const components = nodes(ctx, 'component').map((c) => this.visit(c) as ComponentNode);
     for (const sep of (ctx.Separator ?? []) as IToken[]) {
       const o = sep.startOffset;
-      if (sep.image === '.' && /[0-9]/.test(this.text[o - 1] ?? '') && /[0-9]/.test(this.text[o + 1] ?? '')) {
-        this.notes.push({ code: 'DOT_AS_ADDITION', message: `'.' at column ${columnOf(this.text, o)} is read as the addition dot '·' (as in CuSO4·5H2O)`, column: columnOf(this.text, o) });
-      }
+      if (sep.image === '.' && /[0-9]/.test(this.text[o - 1] ?? '') && /[0-9½⅓⅔¼¾⅕⅖⅗⅘⅙⅚⅐⅛⅜⅝⅞⅑⅒]/.test(this.text[o + 1] ?? '')) this.dotBetweenDigits(o, components);
     }
-    return nodes(ctx, 'component').map((c) => this.visit(c) as ComponentNode);
+    if (this.inexact.size > 0 && components.some((c) => this.inexact.has(c.span.start))) this.refuseInexact(components);
+    return components;
+  }
+
+  /** A '.' between a count and a multiplier: the addition dot, said in a note, or refused when a decimal count fits as well. */
+  private dotBetweenDigits(o: number, components: ComponentNode[]): void {
+    const col = columnOf(this.text, o);
+    const next = components.find((c) => c.span.start === o + 1);
+    const asDot = `${this.text.slice(0, o)}·${this.text.slice(o + 1)}`;
+    if (!next?.multiplier || !next.multiplier.integer || /^[0-9]+[./]/.test(this.text.slice(o + 1))) {
+      // `CaSO4.0.5H2O`, `CaSO4.1/2H2O`: no decimal count can be meant
+      this.notes.push({ code: 'DOT_AS_ADDITION', message: `'.' at column ${col} is read as the addition dot: ${asDot}`, column: col });
+      return;
+    }
+    const before = /[0-9]+$/.exec(this.text.slice(0, o))![0];
+    const decimal = `${before}.${next.multiplier.text}`;
+    if (SHORTHAND_ADDUCT.test(this.text.slice(next.multiplier.span.end))) {
+      this.notes.push({ code: 'DOT_AS_ADDITION', message: `'.' at column ${col} is read as the addition dot: ${asDot} (not a count of ${decimal})`, column: col });
+      return;
+    }
+    const end = next.multiplier.span.end;
+    this.issue('AMBIGUOUS_READING', `'.' at column ${col} could be a decimal point (a count of ${decimal}) or the addition dot (${asDot})`, o, 1,
+      `write ${asDot} for the addition compound, or put a space after a decimal count (${this.text.slice(0, end)} ${this.text.slice(end)})`);
+  }
+
+  /** Thirds, sixths, …: no exact decimal, so the formula is refused with the whole-number form to write instead. */
+  private refuseInexact(components: ComponentNode[]): void {
+    let scale = 1;
+    for (const [, [, d]] of this.inexact) scale = lcm(scale, d);
+    const texts: string[] = [];
+    let whole = true;
+    for (const c of components) {
+      const f = this.inexact.get(c.span.start);
+      const body = this.text.slice(c.parts[0].span.start, c.span.end);
+      let m: number;
+      if (f) m = (f[0] * scale) / f[1];
+      else if (c.multiplier) m = Number(c.multiplier.text) * scale;
+      else m = scale;
+      if (!Number.isInteger(m)) whole = false;
+      texts.push(m === 1 ? body : `${m}${body}`);
+    }
+    const [first] = [...this.inexact.keys()];
+    const [n, d] = this.inexact.get(first)!;
+    const hint = whole ? `write whole multipliers instead: ${texts.join('·')} has the same proportions` : 'write whole multipliers instead (multiply every component by the same number)';
+    this.issue('INEXACT_FRACTION', `the multiplier ${n}/${d} has no exact decimal form, and pondus keeps counts exact`, first, 1, hint);
   }
 
   component(ctx: Ctx): ComponentNode {
     const m = tok(ctx, 'Number');
+    const f = tok(ctx, 'Fraction');
     const parts = nodes(ctx, 'part').map((p) => this.visit(p) as PartNode);
-    const start = m ? m.startOffset : parts[0].span.start;
-    return { kind: 'component', multiplier: m ? this.countOf(m.image, m) : null, parts, span: { start, end: parts[parts.length - 1].span.end } };
+    const start = m ? m.startOffset : f ? f.startOffset : parts[0].span.start;
+    const multiplier = m ? this.countOf(m.image, m) : f ? this.fractionOf(f) : null;
+    return { kind: 'component', multiplier, parts, span: { start, end: parts[parts.length - 1].span.end } };
+  }
+
+  /** A fraction as an exact decimal multiplier (½ → 0.5, 3/2 → 1.5); thirds and the like are refused by body(). */
+  private fractionOf(t: IToken): CountNode {
+    const span = { start: t.startOffset, end: endOf(t) };
+    const [n, d] = VULGAR_FRACTIONS[t.image] ?? (t.image.split('/').map(Number) as [number, number]);
+    const len = span.end - span.start;
+    if (d === 0) {
+      this.issue('BAD_COUNT', `the fraction '${t.image}' divides by zero`, span.start, len);
+      return { text: '1', integer: true, span };
+    }
+    if (n === 0) {
+      this.issue('BAD_COUNT', 'a multiplier of zero; leave the part out instead', span.start, len);
+      return { text: '1', integer: true, span };
+    }
+    let rest = d;
+    let twos = 0;
+    let fives = 0;
+    while (rest % 2 === 0) { rest /= 2; twos++; }
+    while (rest % 5 === 0) { rest /= 5; fives++; }
+    const places = Math.max(twos, fives);
+    if (rest !== 1 || places > MAX_COUNT_DECIMALS || !Number.isSafeInteger(n * 10 ** places) || String(n).length > MAX_COUNT_DIGITS) {
+      if (rest !== 1) this.inexact.set(span.start, [n, d]);
+      else this.issue('BAD_COUNT', `the fraction '${t.image}' has more than ${MAX_COUNT_DECIMALS} decimals`, span.start, len);
+      return { text: '1', integer: true, span };
+    }
+    const scaled = (n * 10 ** places) / d; // exact: d divides 10^places
+    const digits = String(scaled).padStart(places + 1, '0');
+    const text = places === 0 ? digits : `${digits.slice(0, -places)}.${digits.slice(-places)}`;
+    const normal = text.includes('.') ? text.replace(/0+$/, '').replace(/\.$/, '') : text;
+    return { text: normal, integer: !normal.includes('.'), span };
   }
 
   part(ctx: Ctx): PartNode {
@@ -117,12 +211,17 @@ export class TreeBuilder {
     const abbr = tok(ctx, 'Abbreviation');
     if (abbr) {
       const span = { start: abbr.startOffset, end: endOf(abbr) };
-      if (ABBREVIATION_CLASHES.includes(abbr.image)) {
-        this.notes.push({
-          code: 'ABBREVIATION_CLASH',
-          message: `'${abbr.image}' is read as ${ABBREVIATIONS[abbr.image].name} (${ABBREVIATIONS[abbr.image].formula}); with abbreviations off it is the element ${getElement(abbr.image)!.name}`,
-          column: columnOf(this.text, abbr.startOffset),
-        });
+      const known = ABBREVIATIONS[abbr.image] ?? REAGENTS[abbr.image];
+      if (!this.abbreviationsRead.has(abbr.image)) {
+        this.abbreviationsRead.add(abbr.image);
+        const column = columnOf(this.text, abbr.startOffset);
+        if (ABBREVIATION_CLASHES.includes(abbr.image)) {
+          const element = getElement(abbr.image);
+          const other = element ? `the element ${element.name}` : `the elements ${abbr.image.match(/[A-Z][a-z]?/g)!.join(', ')}`;
+          this.notes.push({ code: 'ABBREVIATION_CLASH', message: `'${abbr.image}' is read as ${known.name} (${known.formula}), not as ${other}`, column });
+        } else {
+          this.notes.push({ code: 'ABBREVIATION', message: `'${abbr.image}' is read as ${known.name} (${known.formula})`, column });
+        }
       }
       const group: GroupNode = { kind: 'group', bracket: '(', body: this.expand(abbr.image, span), count: null, span, abbreviation: abbr.image };
       return group;
@@ -140,6 +239,15 @@ export class TreeBuilder {
     }
     if (word.image === 'D' || word.image === 'T') {
       return { kind: 'atom', symbol: 'H', massNumber: word.image === 'D' ? 2 : 3, count: null, span: { start, end } };
+    }
+    if (Object.hasOwn(REFUSED_ABBREVIATIONS, word.image) && this.issues.some((i) => i.code === 'AMBIGUOUS_READING' && i.message === REFUSED_ABBREVIATIONS[word.image])) {
+      return placeholder(start, end); // said once
+    }
+    if (Object.hasOwn(REFUSED_ABBREVIATIONS, word.image)) {
+      const asPy = this.text.replace(/Py(?![a-z])/g, (_m, at: number) => (/[A-Za-z]/.test(this.text[at - 1] ?? '') ? '(py)' : 'py'));
+      const asPyridyl = this.text.replace(/Py(?![a-z])/g, '(C5H4N)').replace(/\(\((C5H4N)\)\)/g, '($1)');
+      this.issue('AMBIGUOUS_READING', REFUSED_ABBREVIATIONS[word.image], start, end - start, `write ${asPy} for pyridine (py, C5H5N), or ${asPyridyl} for pyridyl`);
+      return placeholder(start, end);
     }
     return this.makeAtom(word.image, null, word.startOffset, start, end);
   }
@@ -217,6 +325,14 @@ export class TreeBuilder {
     return sign * magnitude;
   }
 
+}
+
+function gcd(a: number, b: number): number {
+  return b === 0 ? a : gcd(b, a % b);
+}
+
+function lcm(a: number, b: number): number {
+  return (a / gcd(a, b)) * b;
 }
 
 function placeholder(start: number, end: number): AtomNode {

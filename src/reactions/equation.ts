@@ -40,6 +40,9 @@ const ARROWS = /<=>|<->|⇌|⇄|->|→|⟶|=>|=/g;
 const ELECTRON = /^e(?:\^?-|⁻|−|\^−)$/;
 const COEFFICIENT = /^([0-9]+(?:\.[0-9]+)?|[0-9]+\/[0-9]+)\s*(?=[A-Z([{¹²³⁴⁵⁶⁷⁸⁹⁰]|e\b)/;
 
+/** A state symbol, `(s)`, `(l)`, `(g)` or `(aq)`, ending a species. */
+const STATE_AFTER = /^\((?:s|l|g|aq)\)(?:$|\s|\+)/;
+
 /** Splits one side into species texts with their offsets. */
 function splitSide(side: string, base: number): { text: string; start: number }[] {
   const out: { text: string; start: number }[] = [];
@@ -54,7 +57,8 @@ function splitSide(side: string, base: number): { text: string; start: number }[
       const after = side[i + 1];
       if (spaced) split = /\s/.test(before ?? '') && /\s/.test(after ?? '');
       // unspaced: a '+' before the start of a species separates; '^+', and a sign before another sign, do not ('Na++Cl-')
-      else split = before !== '^' && after !== undefined && /[A-Za-z0-9([{¹²³⁴⁵⁶⁷⁸⁹⁰]/.test(after);
+      // nor a charge before a state symbol ('Fe^2+(aq)')
+      else split = before !== '^' && after !== undefined && /[A-Za-z0-9([{¹²³⁴⁵⁶⁷⁸⁹⁰]/.test(after) && !STATE_AFTER.test(side.slice(i + 1));
     }
     if (split) {
       const raw = side.slice(start, i);
@@ -85,6 +89,7 @@ export function parseEquation(input: string, options: ParseOptions = {}): Equati
   const left = input.slice(0, a.index);
   const right = input.slice(a.index! + a[0].length);
   const notes: Note[] = [];
+  const states = new Set<string>();
   const read = (side: string, base: number, which: Species['side']): Species[] => {
     const parts = splitSide(side, base);
     return parts.map(({ text, start }) => {
@@ -105,6 +110,11 @@ export function parseEquation(input: string, options: ParseOptions = {}): Equati
       }
       try {
         const tree = parseFormula(body, options);
+        const shift = columnOf(input, offset) - 1;
+        for (const n of tree.notes) {
+          if (n.code === 'STATE_SYMBOL') states.add(body.slice(body.lastIndexOf('(')));
+          else notes.push({ ...n, message: `${body}: ${n.message}`, ...(n.column !== undefined ? { column: n.column + shift } : {}) });
+        }
         const atoms = flattenFormula(tree);
         return { text: body, formula: hillFormula(atoms, tree.charge), atoms, charge: tree.charge, side: which, start: offset, written };
       } catch (e) {
@@ -118,6 +128,9 @@ export function parseEquation(input: string, options: ParseOptions = {}): Equati
   };
   const reactants = read(left, 0, 'reactant');
   const products = read(right, a.index! + a[0].length, 'product');
+  if (states.size > 0) {
+    notes.unshift({ code: 'STATE_SYMBOL', message: `the state symbols ${[...states].join(', ')} are set aside: they do not change the balance` });
+  }
   const total = reactants.length + products.length;
   if (total > MAX_SPECIES) throw fail({ code: 'BAD_EQUATION', message: `${total} species; pondus balances up to ${MAX_SPECIES}` }, input);
   for (const r of reactants) {

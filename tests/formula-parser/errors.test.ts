@@ -38,7 +38,8 @@ describe('parse errors name the problem and the column', () => {
     ['H2O\u0000', 'CONTROL_CHARACTER', 4],
     ['[99C]', 'UNKNOWN_ISOTOPE', 1],
     ['²D', 'UNKNOWN_ISOTOPE', 1],
-    ['Me', 'UNKNOWN_ELEMENT', 1],
+    ['Ac2O', 'AMBIGUOUS_READING', 1],
+    ['DMF', 'UNKNOWN_ELEMENT', 2],
     ['2', 'UNEXPECTED_TOKEN', 2],
   ])('%j → %s at column %s', (input, code, column) => {
     const i = issue(input);
@@ -55,7 +56,7 @@ describe('parse errors name the problem and the column', () => {
     expect(issue('NACL').hint).toContain("'NaCl'");
     expect(issue('h2o').hint).toContain("'H2O'");
     expect(issue('nacl').hint).toContain("'NaCl'");
-    expect(issue('Me').hint).toContain('abbreviations');
+    expect(issue('DMF').hint).toContain('N,N-dimethylformamide (C3H7NO)');
   });
 
   it('offers both readings of an ambiguous charge', () => {

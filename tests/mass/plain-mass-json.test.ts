@@ -50,3 +50,9 @@ describe('the mass JSON hot path', () => {
     expect(JSON.parse(plainMassJsonLine('H2O')!)).toEqual({ input: 'H2O', formula: 'H2O', molarMass: 18.015, monoisotopicMass: 18.010564683056, nominalMass: 18, charge: 0 });
   });
 });
+
+describe('the hot path declines readings that carry a note or need settling', () => {
+  it.each(['Pd(PPh3)4', 'Cp*2Fe', 'CaSO4.0.5H2O', 'CaSO4·½H2O', 'Zn(s)', 'PrCl3', 'NpO2', 'AcOH', 'THF', 'NBS', 'CuSO4.5H2O'])('%s', (f) => {
+    expect(plainMassJsonLine(f)).toBeNull();
+  });
+});

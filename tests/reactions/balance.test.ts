@@ -93,3 +93,30 @@ describe('balancing', () => {
     );
   });
 });
+
+describe('state symbols in equations', () => {
+  it('are set aside, with one note', () => {
+    // Zn + 2HCl → ZnCl2 + H2 (OpenStax Chemistry 2e, ch. 4), coefficients from memory
+    const r = balance('Zn(s) + HCl(aq) -> ZnCl2(aq) + H2(g)');
+    expect(r.coefficients.map(Number)).toEqual([1, 2, 1, 1]);
+    expect(r.balanced).toBe('Zn(s) + 2 HCl(aq) → ZnCl2(aq) + H2(g)');
+    expect(r.notes.map((n) => n.code)).toEqual(['STATE_SYMBOL']);
+    expect(r.notes[0].message).toContain('(s), (aq), (g)');
+  });
+
+  it('do not turn (s) into sulfur', () => {
+    expect(balance('Zn(s) + S(s) -> ZnS(s)').coefficients.map(Number)).toEqual([1, 1, 1]);
+    expect(balance('Fe^3+(aq) + e- -> Fe^2+(aq)').coefficients.map(Number)).toEqual([1, 1, 1]);
+    expect(balance('Fe^3+(aq)+e-->Fe^2+(aq)').coefficients.map(Number)).toEqual([1, 1, 1]);
+    expect(balance('Zn(s)+HCl(aq)->ZnCl2(aq)+H2(g)').coefficients.map(Number)).toEqual([1, 2, 1, 1]);
+  });
+
+  it('carry the notes of the formulas, and refuse a reading that must be settled', () => {
+    const r = balance('CuSO4.5H2O -> CuSO4 + H2O');
+    expect(r.notes.map((n) => n.code)).toContain('DOT_AS_ADDITION');
+    expect(r.notes[0].message).toMatch(/^CuSO4\.5H2O: /);
+    expect(() => balance('AcOH + NaOH -> NaOAc + H2O')).toThrow(PondusError);
+    expect(balance('AcOH + NaOH -> NaOAc + H2O', { abbreviations: true }).coefficients.map(Number)).toEqual([1, 1, 1, 1]);
+    expect(balance('PhCOOH + NaOH -> PhCOONa + H2O').coefficients.map(Number)).toEqual([1, 1, 1, 1]);
+  });
+});
