@@ -135,7 +135,7 @@ function escape(s: string): string {
  * A regular expression matching any of `names`, longest first, not followed by a lower-case letter.
  *
  * @example
- * abbreviationPattern(['Me', 'Mes']).exec('Mes')![0] // 'Mes'
+ * abbreviationPattern(['Me', 'Mes']).exec('Mes')[0] // 'Mes'
  */
 export function abbreviationPattern(names: readonly string[] = Object.keys(ABBREVIATIONS)): RegExp {
   const sorted = [...names].sort((a, b) => b.length - a.length || (a < b ? -1 : a > b ? 1 : 0));

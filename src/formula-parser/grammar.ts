@@ -116,7 +116,7 @@ let instance: FormulaGrammar | null = null;
  * The shared grammar instance, built on first use (building it costs a few milliseconds).
  *
  * @example
- * const g = formulaGrammar(); g.input = tokens; const cst = g.formula();
+ * formulaGrammar() === formulaGrammar() // true (one shared instance)
  */
 export function formulaGrammar(): FormulaGrammar {
   instance ??= new FormulaGrammar();

@@ -147,7 +147,7 @@ export function isCaseTrap(symbol: string): boolean {
  * Cobalt salts, complexes and organometallics written with brackets get no note.
  *
  * @example
- * caseTrapNotes(parseFormula('Co2').components) // [{ code: 'CASE_CHECK', message: "'Co' is read as cobalt; …" }]
+ * caseTrapNotes(parseFormula('Co2').components)[0].message // "'Co' is read as cobalt; …"
  */
 export function caseTrapNotes(components: ComponentNode[]): Note[] {
   const atoms: AtomNode[] = [];

@@ -35,7 +35,8 @@ export function columnOf(text: string, offset: number): number {
  * Returns the first problem found in the raw formula text, or null.
  *
  * @example
- * prescan('Ca(OH2') // { code: 'UNCLOSED_GROUP', column: 3, … }
+ * prescan('Ca(OH2').code   // 'UNCLOSED_GROUP'
+ * prescan('Ca(OH2').column // 3
  */
 export function prescan(text: string, maxLength = MAX_FORMULA_LENGTH): Issue | null {
   if (text.trim() === '') return { code: 'EMPTY_INPUT', message: 'the formula is empty' };
