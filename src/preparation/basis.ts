@@ -4,6 +4,7 @@
  * the other. The value is a measurement or a label figure, so the converted
  * value is a result with textbook significant figures.
  */
+import { formulaNotes } from '../mass/formula-notes.js';
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { MASS, PURE, measureAs } from '../calc/measure.js';
@@ -52,6 +53,7 @@ export function convertBasis(from: string, to: string, options: BasisOptions = {
       }
     }
   }
+  notes.unshift(...formulaNotes(factor.given, true), ...formulaNotes(factor.sought, true));
   return { factor, value, converted, notes };
 }
 

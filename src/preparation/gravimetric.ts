@@ -2,6 +2,7 @@
  * Gravimetric analysis: the mass of analyte from the mass of the weighed form,
  * and its mass fraction in the sample.
  */
+import { formulaNotes } from '../mass/formula-notes.js';
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { MASS, measureAs } from '../calc/measure.js';
@@ -55,6 +56,7 @@ export function gravimetric(analyte: string, weighed: string, options: Gravimetr
   } else if (options.sampleMass !== undefined) {
     throw fail({ code: 'BAD_OPTION', message: 'a sample mass needs the mass of the weighed form too' });
   }
+  notes.unshift(...formulaNotes(factor.sought, true), ...formulaNotes(factor.given, true));
   return { analyte, weighed, factor, analyteMass, massPercent, notes };
 }
 

@@ -3,6 +3,7 @@
  * parent (free base or free acid), and the salt mass that carries a given mass
  * of parent.
  */
+import { formulaNotes } from '../mass/formula-notes.js';
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type Instruction } from '../sigfig/instruction.js';
@@ -80,6 +81,7 @@ export function saltFactor(saltText: string, parentText: string, options: SaltOp
     parentMass = divide(saltGiven, quantity(reported, null));
     parentMass.unit = saltGiven.unit;
   }
+  notes.unshift(...formulaNotes(salt, true), ...formulaNotes(parent, true));
   return { salt, parent, perSalt, factor, reported, dose, saltMass, saltGiven, parentMass, notes };
 }
 

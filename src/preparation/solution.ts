@@ -4,6 +4,7 @@
  * its hydrate form, or for a concentration stated for one part of it (Cu from
  * CuSO4·5H2O, Cl⁻ from CaCl2·2H2O).
  */
+import { formulaNotes } from '../mass/formula-notes.js';
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { MASS, MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
@@ -114,6 +115,7 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   if (volume.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the volume must be positive' });
 
   const reagentM = quantity(reportedMolarMass(reagent), G_PER_MOL);
+  let asMass: MassResult | null = null;
   let targetM = reagentM;
   let perReagent = quantity(exact(1), null);
   let targetFormula = reagent.formula;
@@ -121,6 +123,7 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   if (options.as !== undefined) {
     const share = partShare(reagent, options.as, options);
     const t = formulaMass(options.as, options);
+    asMass = t;
     targetM = quantity(reportedMolarMass(t), G_PER_MOL);
     perReagent = quantity(exact(toDecimal(share.count)), null);
     targetFormula = t.formula;
@@ -204,6 +207,7 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
     notes.push({ code: 'MADE_FROM_WEIGHED', message: `the concentration made is computed from the mass weighed, ${options.weighed.trim()}, and the volume, ${options.volume.trim()}: a result, with the figures of those measurements` });
   }
   const unit = target?.unit ?? 'M';
+  notes.unshift(...formulaNotes(reagent, options.as !== undefined), ...(asMass ? formulaNotes(asMass, true) : []));
   return { reagent, target: { formula: targetFormula, perReagent: toDecimal(perReagent.value).toFixed(), molarMass: targetM }, concentration: conc, volume, purity, purityBasis: basis, targetMoles, moles, pureMass, mass, weighed, made, unit, notes };
 }
 /** Non-throwing {@link prepareSolution}. */

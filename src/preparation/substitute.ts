@@ -3,6 +3,7 @@
  * salt, or one hydrate for another. Equal amounts of formula units, so the
  * mass scales with the molar masses.
  */
+import { formulaNotes } from '../mass/formula-notes.js';
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { AMOUNT, MASS, measureAs } from '../calc/measure.js';
@@ -91,6 +92,7 @@ export function substituteForm(use: string, instead: string, amount: string, opt
   const b = core(i, options);
   const same = a.size === b.size && [...a].every(([k, v]) => b.get(k) === v);
   if (!same) notes.push({ code: 'FORMS_DIFFER', message: `${u.formula} and ${i.formula} differ by more than water of crystallisation; the substitution keeps equal amounts of formula units` });
+  notes.unshift(...formulaNotes(u, true), ...formulaNotes(i, true));
   return { use: u, instead: i, asked, moles, purity, pureMass, mass, notes };
 }
 
