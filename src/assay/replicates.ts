@@ -49,8 +49,12 @@ export interface ReplicateResult {
   halfWidthRounded: Decimal;
   /** The mean rounded to the decimal place of the rounded half-width. */
   meanRounded: Decimal;
-  /** The reported value: 'x̄ ± h'. */
+  /** The reported value: 'x̄ ± h' with the unit. */
   reported: string;
+  /** The reported mean as text. */
+  meanReported: string;
+  /** The reported half-width as text. */
+  halfWidthReported: string;
   rounding: RoundingMode;
   notes: Note[];
 }
@@ -139,8 +143,10 @@ export function replicates(text: string, o: ReplicateOptions = {}): ReplicateRes
   notes.push({ code: 'REPORTED_TO_UNCERTAINTY', message: `reported value: the half-width rounded ${rounding} to two significant figures (GUM §7.2.6), the mean to the same decimal place` });
   notes.push({ code: 'NO_OUTLIER_TEST', message: 'every value is used; no outlier test is applied' });
   const u = unit ? ` ${unit}` : '';
-  const reported = `${meanRounded.toFixed(decimals)} ± ${halfWidthRounded.toFixed(decimals)}${u}`;
-  return { values, unit, exp10, n, mean, sd, rsdPercent, level, df, t, halfWidth, halfWidthRounded, meanRounded, reported, rounding, notes };
+  const meanReported = meanRounded.toFixed(decimals);
+  const halfWidthReported = halfWidthRounded.toFixed(decimals);
+  const reported = `${meanReported} ± ${halfWidthReported}${u}`;
+  return { values, unit, exp10, n, mean, sd, rsdPercent, level, df, t, halfWidth, halfWidthRounded, meanRounded, reported, meanReported, halfWidthReported, rounding, notes };
 }
 
 /**

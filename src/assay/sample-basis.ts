@@ -55,7 +55,7 @@ export function readBasis(text: string): SampleBasis {
   return basis as SampleBasis;
 }
 
-const NAMES: Record<SampleBasis, string> = { 'as-is': 'as is', dried: 'dried', anhydrous: 'anhydrous', 'solvent-free': 'solvent-free', 'anhydrous-solvent-free': 'anhydrous and solvent-free' };
+const NAMES: Record<SampleBasis, string> = { 'as-is': 'as-is', dried: 'dried', anhydrous: 'anhydrous', 'solvent-free': 'solvent-free', 'anhydrous-solvent-free': 'anhydrous and solvent-free' };
 
 /**
  * The fraction removed for a basis (null for as is), read from the content, with a note of the reading.

@@ -67,7 +67,7 @@ const G_PER_MOL = unitOf('g/mol');
  *
  * @example
  * const r = titrationAssay('KHC8H4O4', { sample: '0.5000 g', titrant: '0.1000 M', volume: '24.40 mL' })
- * displayQuantity(r.assay, '%').text // '99.65 %'
+ * displayQuantity(r.assay, '%').text // '99.66 %'
  */
 export function titrationAssay(analyteText: string, o: TitrationAssayOptions): TitrationAssayResult {
   const notes: Note[] = [];
