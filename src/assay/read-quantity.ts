@@ -20,5 +20,21 @@ export function readPositive(text: string, dims: Dims[], what: string, notes: No
   if (q.value.isNeg() || (!allowZero && q.value.isZero())) {
     throw fail({ code: 'BAD_AMOUNT', message: `${what} must be ${allowZero ? 'zero or more' : 'positive'}: '${text}'` }, text);
   }
+  return inRange(q, text, what);
+}
+
+/** Largest power of ten accepted in a bench quantity (in base units), either way. */
+export const MAX_MAGNITUDE = 60;
+
+/**
+ * Refuses a quantity beyond 10^±60 of its base unit: no bench measurement is, and results stay finite JSON numbers.
+ *
+ * @example
+ * inRange(measure('2.0 g'), '2.0 g', 'the mass').value.toString() // '2'
+ */
+export function inRange(q: Quantity, text: string, what: string): Quantity {
+  if (!q.value.isZero() && Math.abs(q.value.e) > MAX_MAGNITUDE) {
+    throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `${what} is out of the range pondus takes for a measurement (10^±${MAX_MAGNITUDE} of the base unit): '${text}'` }, text);
+  }
   return q;
 }

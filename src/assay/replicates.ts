@@ -16,6 +16,7 @@ import type { Quantity } from '../sigfig/quantity.js';
 import { roundToPosition, roundToSigFigs, type RoundingMode } from '../sigfig/round.js';
 import { msd } from '../sigfig/measured.js';
 import { tCritical } from './student-t.js';
+import { inRange } from './read-quantity.js';
 
 /** More values than this in one list is refused (a list is one set of replicates, not a data file). */
 export const MAX_REPLICATES = 10_000;
@@ -107,6 +108,7 @@ export function replicates(text: string, o: ReplicateOptions = {}): ReplicateRes
   if (texts.length < 2) throw fail({ code: 'BAD_MEASUREMENT', message: `replicate statistics need at least two values; got ${texts.length}` }, text);
   const first = measureAs(texts[0], [[0, 0, 0], [1, 0, 0], [0, 1, 0], [0, 0, 1], [0, 1, -1], [1, 0, -1]], 'the first value', notes);
   const values = texts.map((t, i) => (i === 0 ? first : measureAs(t, [first.dims], `value ${i + 1}`, notes)));
+  values.forEach((v, i) => inRange(v, texts[i], `value ${i + 1}`));
   for (const v of values) if (v.lsd === null) throw fail({ code: 'BAD_MEASUREMENT', message: 'replicate values are measurements; an exact number has no place here' }, text);
   const unit = first.unit?.symbol ?? '';
   const exp10 = first.unit?.exp10 ?? 0;

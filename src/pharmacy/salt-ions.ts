@@ -59,6 +59,7 @@ function sameCounts(target: Map<string, number>, parts: [AtomCounts, number][]):
  * saltIons(formulaMass('CaCl2·2H2O'), undefined, []).equivalentsPerMole // 2
  */
 export function saltIons(salt: MassResult, given: string | undefined, notes: Note[], options: MassOptions = {}): SaltIons {
+  if (salt.charge !== 0) throw fail({ code: 'BAD_CHARGE', message: `${salt.input} carries a charge; write the neutral salt, e.g. Na2SO4` }, salt.input);
   const water = hydrateWater(salt);
   const target = new Map<string, number>();
   for (const [k, n] of salt.atoms) {

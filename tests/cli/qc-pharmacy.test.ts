@@ -111,3 +111,25 @@ describe('pondus meq, osmolarity, alligation', () => {
     expect(pondus(['alligation', '10 %', '--higher', '20 %', '--lower', '5 %']).status).toBe(2);
   });
 });
+
+describe('bad input to the QC and pharmacy commands', () => {
+  it('gets a coded error in place, never an internal error, and the good lines still answer', () => {
+    const cases: [string[], string][] = [
+      [['replicates', '--json', '-'], '__proto__\n1e999 2\n\u0007\n99.1 99.3\n'],
+      [['meq', '--json', '--mass', '1.000 g', '-'], 'Na2SO4^2-\nH2O\n((\nKCl\n'],
+      [['osmolarity', '--json', '-'], '=,=\n__proto__=1 %\nNaCl=1e500 %\nNaCl=0.9 %\n'],
+      [['alligation', '--json', '--higher', '20 %', '--lower', '5 %', '--by', 'mass', '-'], '30 %\n5\nabc\n10 %\n'],
+      [['sample-basis', '--json', '--to', 'dried', '--loss', '0.5 %', '-'], '-5 %\n1e99 %\nx\n99.0 %\n'],
+    ];
+    for (const [args, input] of cases) {
+      const r = pondus(args, input);
+      expect(r.status, args.join(' ')).toBe(1);
+      expect(r.stdout + r.stderr).not.toMatch(/internal error|INTERNAL_ERROR|RangeError/);
+      const rows = jsonLines(r.stdout);
+      expect(rows).toHaveLength(4);
+      expect(rows.slice(0, 3).every((x) => typeof x.error?.code === 'string')).toBe(true);
+      expect(rows[3].error).toBeUndefined();
+      expect(rows.map((x) => x.line)).toEqual([1, 2, 3, 4]);
+    }
+  });
+});
