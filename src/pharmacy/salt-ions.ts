@@ -97,7 +97,7 @@ export function saltIons(salt: MassResult, given: string | undefined, notes: Not
     }
   }
   if (found.length === 0) {
-    throw fail({ code: 'BAD_OPTION', message: `${salt.input} does not split into a cation and an anion pondus knows; give its ions, e.g. --ions '2K^+,HPO4^2-'` }, salt.input);
+    throw fail({ code: 'BAD_OPTION', message: `${salt.input} does not split into a cation and an anion pondus knows; give its ions with --ions: each ion with its charge, a count before it when more than one, separated by commas` }, salt.input);
   }
   if (found.length > 1) {
     throw fail({ code: 'AMBIGUOUS_CHARGE', message: `${salt.input} splits into ions more than one way: ${found.map(describe).join(' or ')}; give the one you mean with --ions` }, salt.input);

@@ -63,6 +63,8 @@ function chooseBasis(o: BasisCli, from: SampleBasis): { basis: SampleBasis; infe
     inferred = true;
   } else throw fail({ code: 'USAGE', message: `${given.map((k) => OPTION_OF[k]).join(' and ')} given: say which basis to report on with --on (dried, anhydrous, solvent-free, anhydrous-solvent-free)` });
   const used = new Set([...CONTENT_FOR[from], ...CONTENT_FOR[basis]]);
+  const lacking = [...used].filter((k) => o[k] === undefined);
+  if (lacking.length) throw fail({ code: 'USAGE', message: `converting from ${from} to ${basis} needs ${lacking.map((k) => OPTION_OF[k]).join(' and ')} (e.g. ${OPTION_OF[lacking[0]]} '0.50 %')` });
   const unused = given.filter((k) => !used.has(k));
   if (unused.length) throw fail({ code: 'USAGE', message: `${unused.map((k) => OPTION_OF[k]).join(' and ')} would be ignored converting from ${from} to ${basis}: leave ${unused.length === 1 ? 'it' : 'them'} out or choose another --on` });
   return { basis, inferred };
@@ -211,7 +213,7 @@ export function standardisePresenter(o: StandardiseCli): RowPresenter<Standardis
     block: ({ input, r }) =>
       [
         `${input}  (${r.standard.formula}, M = ${displayMolarMass(r.standard)} g/mol) as primary standard`,
-        `  ${qtext(r.mass, 'g', rounding)}${r.purity ? ` × ${qtext(r.purity, '%', rounding)}` : ''} ÷ M = ${qtext(r.moles, 'mmol', rounding)}; titrant = standard × ${r.ratio.second}/${r.ratio.first}`,
+        `  ${qtext(r.mass, 'g', rounding)}${r.purity ? ` × ${qtext(r.purity, '%', rounding)}` : ''} ÷ M = ${qtext(r.moles, 'mmol', rounding)} of standard; mol titrant = mol standard × ${r.ratio.second}/${r.ratio.first}`,
         `  titre ${qtext(r.netTitre, 'mL', rounding)}${r.blank ? ` (blank ${qtext(r.blank, 'mL', rounding)} subtracted)` : ''}: titrant molarity ${qtext(r.molarity, 'M', rounding)}`,
       ].join('\n'),
     notes: ({ r }) => r.notes.map((n) => n.message),
