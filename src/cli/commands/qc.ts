@@ -62,11 +62,11 @@ function chooseBasis(o: BasisCli, from: SampleBasis): { basis: SampleBasis; infe
     basis = given[0] === 'loss' ? 'dried' : given[0] === 'water' ? 'anhydrous' : 'solvent-free';
     inferred = true;
   } else throw fail({ code: 'USAGE', message: `${given.map((k) => OPTION_OF[k]).join(' and ')} given: say which basis to report on with --on (dried, anhydrous, solvent-free, anhydrous-solvent-free)` });
-  const used = new Set([...CONTENT_FOR[from], ...CONTENT_FOR[basis]]);
-  const lacking = [...used].filter((k) => o[k] === undefined);
-  if (lacking.length) throw fail({ code: 'USAGE', message: `converting from ${from} to ${basis} needs ${lacking.map((k) => OPTION_OF[k]).join(' and ')} (e.g. ${OPTION_OF[lacking[0]]} '0.50 %')` });
+  const used = new Set<keyof SampleContent>(basis === from ? [] : [...CONTENT_FOR[from], ...CONTENT_FOR[basis]]);
   const unused = given.filter((k) => !used.has(k));
   if (unused.length) throw fail({ code: 'USAGE', message: `${unused.map((k) => OPTION_OF[k]).join(' and ')} would be ignored converting from ${from} to ${basis}: leave ${unused.length === 1 ? 'it' : 'them'} out or choose another --on` });
+  const lacking = basis === from ? [] : [...used].filter((k) => o[k] === undefined);
+  if (lacking.length) throw fail({ code: 'USAGE', message: `converting from ${from} to ${basis} needs ${lacking.map((k) => OPTION_OF[k]).join(' and ')} (e.g. ${OPTION_OF[lacking[0]]} '0.50 %')` });
   return { basis, inferred };
 }
 
