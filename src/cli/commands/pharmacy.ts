@@ -180,7 +180,8 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
       const u = sUnit(r);
       const hp = qtext({ ...r.higherParts, lsd: null }, u, rounding);
       const lp = qtext({ ...r.lowerParts, lsd: null }, u, rounding);
-      const lines = [`${o.higher} and ${o.lower} to ${input}, by ${r.by}: ${hp.replace(/ .*/, '')} parts of ${o.higher} to ${lp.replace(/ .*/, '')} parts of ${o.lower}`];
+      const parts = (t: string) => `${t.replace(/ .*/, '')} part${t.replace(/ .*/, '') === '1' ? '' : 's'}`;
+      const lines = [`${o.higher} and ${o.lower} to ${input}, by ${r.by}: ${parts(hp)} of ${o.higher} to ${parts(lp)} of ${o.lower}`];
       if (r.total && r.higherAmount && r.lowerAmount) {
         const unit = amountUnit(r);
         lines.push(`  for ${qtext(atWorkingPrecision({ ...r.total, lsd: null }), unit, rounding)}: take ${qtext(r.higherAmount, unit, rounding)} of ${o.higher} and ${qtext(r.lowerAmount, unit, rounding)} of ${o.lower}`);

@@ -163,7 +163,7 @@ export function titrationPresenter(o: TitrationCli): RowPresenter<Titration> {
       } else {
         lines.push(`  ${qtext(t.titrant, 'M', rounding)} × (blank ${qtext(t.blank!, 'mL', rounding)} − titre ${qtext(t.titre, 'mL', rounding)}) × ${t.reagentRatio!.text} × ${t.ratio.text} = ${qtext(t.moles, 'mmol', rounding)} of ${input}`);
       }
-      lines.push(`  ${qtext(t.mass, 'mg', rounding)} in ${qtext(t.sample, 'g', rounding)} of sample: assay ${pct(t.assay)} (as is)`);
+      lines.push(`  ${qtext(t.mass, t.mass.value.gte(1) ? 'g' : 'mg', rounding)} in ${qtext(t.sample, 'g', rounding)} of sample: assay ${pct(t.assay)} (as is)`);
       if (rep.conversion) lines.push(`  on the ${rep.basis} basis: ${pct(rep.value)}`);
       if (rep.spec) lines.push(`  ${verdict(rep.spec, rep.basis)}`);
       return lines.join('\n');
