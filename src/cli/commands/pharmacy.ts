@@ -13,7 +13,7 @@ import { osmolarity, type OsmolarityResult } from '../../pharmacy/osmolarity.js'
 import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
 import { withFormulaOptions, withOutputOptions, type FormulaOptions, type OutputOptions } from './common.js';
-import { notesCell, notesJson, numbered, qtext, quantityJson, withRounding, type RowPresenter } from './qc-rows.js';
+import { notesCell, notesJson, numbered, qtext, quantityJson, withProtectedCells, withRounding, type RowPresenter } from './qc-rows.js';
 import type { CommandRunner } from './runner.js';
 
 // --- meq --------------------------------------------------------------------------
@@ -238,7 +238,7 @@ export function registerPharmacy(program: Command, run: CommandRunner): void {
 
 /** Presenters of the compounding commands, by name. */
 export const PHARMACY_PRESENTERS = {
-  meq: meqPresenter,
-  osmolarity: osmolarityPresenter,
-  alligation: alligationPresenter,
+  meq: (o: MeqCli) => withProtectedCells(meqPresenter(o)),
+  osmolarity: (o: OsmolarityCli) => withProtectedCells(osmolarityPresenter(o)),
+  alligation: (o: AlligationCli) => withProtectedCells(alligationPresenter(o)),
 };

@@ -68,3 +68,19 @@ export function withRounding(cmd: Command): Command {
 }
 
 export type RowPresenter<R> = Presenter<Row<R>>;
+
+/**
+ * A text cell a spreadsheet could run as a formula (starting with =, +, @, a tab or a carriage
+ * return, or - not followed by a digit) gets a leading apostrophe; numbers are left alone.
+ *
+ * @example
+ * protectCell('=1+2') // "'=1+2"
+ */
+export function protectCell<C>(c: C): C | string {
+  return typeof c === 'string' && /^(?:[=+@\t\r]|-(?![\d.]))/.test(c) ? `'${c}` : c;
+}
+
+/** The presenter with its CSV/TSV cells protected (see {@link protectCell}). */
+export function withProtectedCells<R>(p: Presenter<R>): Presenter<R> {
+  return { ...p, cells: (r) => p.cells(r).map(protectCell) };
+}

@@ -20,7 +20,7 @@ import type { Quantity } from '../../sigfig/quantity.js';
 import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
 import { withFormulaOptions, withOutputOptions, type FormulaOptions, type OutputOptions } from './common.js';
-import { notesCell, notesJson, numbered, qtext, quantityJson, withRounding, type RowPresenter } from './qc-rows.js';
+import { notesCell, notesJson, numbered, qtext, quantityJson, withProtectedCells, withRounding, type RowPresenter } from './qc-rows.js';
 import type { CommandRunner } from './runner.js';
 
 interface BasisCli {
@@ -393,8 +393,8 @@ export function registerQc(program: Command, run: CommandRunner): void {
 
 /** Presenters of the QC commands, by name. */
 export const QC_PRESENTERS = {
-  titration: titrationPresenter,
-  standardise: standardisePresenter,
-  'sample-basis': sampleBasisPresenter,
-  replicates: replicatesPresenter,
+  titration: (o: TitrationCli) => withProtectedCells(titrationPresenter(o)),
+  standardise: (o: StandardiseCli) => withProtectedCells(standardisePresenter(o)),
+  'sample-basis': (o: SampleBasisCli) => withProtectedCells(sampleBasisPresenter(o)),
+  replicates: (o: ReplicatesCli) => withProtectedCells(replicatesPresenter(o)),
 };
