@@ -95,3 +95,24 @@ export { combustion, safeCombustion, PRODUCTS, type CombustionResult, type Combu
 export { candidateFormulas, safeCandidateFormulas, rdbe, readRanges, DEFAULT_RANGES, type Candidate, type CandidateResult, type CandidateOptions } from './empirical/candidates.js';
 export { readMeasurementSheet, type MeasurementRow } from './empirical/measurement-sheet.js';
 export { readCsvSheet, elementColumns, type CsvSheet, type CsvRow } from './sheets/read-sheet.js';
+
+// assay and QC
+export { titrationAssay, safeTitrationAssay, type TitrationAssayResult, type TitrationAssayOptions } from './assay/titration-assay.js';
+export { standardise, safeStandardise, type StandardiseResult, type StandardiseOptions } from './assay/standardise.js';
+export { convertBasis, safeConvertBasis, readBasis, removedFraction, SAMPLE_BASES, type SampleBasis, type SampleContent, type BasisConversion } from './assay/sample-basis.js';
+export { checkSpecification, readLimits, type Limits, type SpecificationCheck } from './assay/specification.js';
+export { replicates, safeReplicates, splitValues, MAX_REPLICATES, type ReplicateResult, type ReplicateOptions } from './assay/replicates.js';
+export { tCritical, twoSidedP, incompleteBeta, logGamma } from './assay/student-t.js';
+export { readMoleRatio, type MoleRatio } from './assay/stoichiometric-ratio.js';
+export { hydrateWater } from './assay/hydrate-note.js';
+export { QC_CAUTION } from './assay/caution.js';
+
+// compounding pharmacy
+export { milliequivalents, safeMilliequivalents, readEquivalents, type MilliequivalentResult, type MilliequivalentOptions, type IonAmount } from './pharmacy/milliequivalents.js';
+export { osmolarity, safeOsmolarity, MAX_COMPONENTS, type OsmolarityResult, type OsmolarityOptions, type IonTotal } from './pharmacy/osmolarity.js';
+export { alligation, safeAlligation, type AlligationResult, type AlligationOptions } from './pharmacy/alligation.js';
+export { saltIons, type SaltIons, type SaltIon } from './pharmacy/salt-ions.js';
+export { CATIONS, ANIONS, type IonEntry } from './pharmacy/ions.js';
+export { readStrength, type Strength, type PercentKind } from './pharmacy/strength.js';
+export { atWorkingPrecision, noteFewFigures, WORKING_FIGURES } from './pharmacy/working-precision.js';
+export { PHARMACY_CAUTION } from './pharmacy/caution.js';

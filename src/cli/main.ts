@@ -18,6 +18,8 @@ import { registerReact } from './commands/react.js';
 import { registerComposition } from './commands/composition.js';
 import { outputFormat } from './commands/common.js';
 import { registerMass } from './commands/mass.js';
+import { registerQc } from './commands/qc.js';
+import { registerPharmacy } from './commands/pharmacy.js';
 import type { CommandRunner } from './commands/runner.js';
 import { PRESENTERS } from './commands/registry.js';
 import { fixedBatch, inputBatches } from './input/inputs.js';
@@ -90,6 +92,8 @@ export async function main(args: string[], io: CliIo): Promise<number> {
   registerReact(program, run);
   registerPrepare(program, run);
   registerConversions(program, run);
+  registerQc(program, run);
+  registerPharmacy(program, run);
 
   try {
     await program.parseAsync(args, { from: 'user' });

@@ -1,0 +1,42 @@
+/**
+ * A note when a formula carries water of crystallisation, so a result based on
+ * its molar mass says that the water was counted.
+ */
+import type { Note } from '../errors/issue.js';
+import type { MassResult } from '../mass/formula-mass.js';
+import { reportedMolarMass } from '../mass/reported-mass.js';
+import { displayMeasured } from '../sigfig/round.js';
+import { flattenFormula } from '../formula/flatten.js';
+import { toDecimal } from '../formula/amount.js';
+import type { ComponentNode } from '../formula-parser/tree.js';
+
+/**
+ * Moles of water of crystallisation per formula unit: components after the first that are whole multiples of H2O.
+ *
+ * @example
+ * hydrateWater(formulaMass('CaCl2·2H2O')) // 2
+ */
+export function hydrateWater(m: MassResult): number {
+  let water = 0;
+  m.tree.components.slice(1).forEach((c: ComponentNode) => {
+    const counts = flattenFormula({ kind: 'formula', input: '', components: [c], charge: 0, notes: [] });
+    const h = counts.get('H');
+    const o = counts.get('O');
+    if (counts.size === 2 && h !== undefined && o !== undefined && toDecimal(h).eq(toDecimal(o).times(2))) water += toDecimal(o).toNumber();
+  });
+  return water;
+}
+
+/**
+ * Adds a HYDRATE_WATER_COUNTED note when the formula holds water of crystallisation.
+ *
+ * @example
+ * const notes = []
+ * noteHydrateWater(formulaMass('MgSO4·7H2O'), notes)
+ * notes[0].code // 'HYDRATE_WATER_COUNTED'
+ */
+export function noteHydrateWater(m: MassResult, notes: Note[]): void {
+  const w = hydrateWater(m);
+  if (w > 0) notes.push({ code: 'HYDRATE_WATER_COUNTED', message: `the molar mass of ${m.input} counts its ${w} H2O of crystallisation (M = ${displayMeasured(reportedMolarMass(m)).text} g/mol); write the anhydrous formula for a result on the anhydrous substance` });
+}
+

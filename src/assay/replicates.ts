@@ -1,0 +1,162 @@
+/**
+ * Replicate results: mean, sample standard deviation (n − 1), relative
+ * standard deviation, and the confidence interval of the mean with Student's t
+ * (x̄ ± t·s/√n; Harvey, Analytical Chemistry 2.1, §4.4). The mean follows the
+ * significant-figure rules of its sum; the reported value is rounded to fit
+ * its uncertainty: the half-width of the interval to two significant figures
+ * (GUM, JCGM 100:2008 §7.2.6: at most two) and the mean to the same decimal
+ * place. No outlier test is offered: none is applied, and none is implied.
+ */
+import type { Note } from '../errors/issue.js';
+import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { measureAs } from '../calc/measure.js';
+import { Decimal } from '../exact/decimal.js';
+import { dividedBy, exact, sumMeasured, type Measured } from '../sigfig/measured.js';
+import type { Quantity } from '../sigfig/quantity.js';
+import { roundToPosition, roundToSigFigs, type RoundingMode } from '../sigfig/round.js';
+import { msd } from '../sigfig/measured.js';
+import { tCritical } from './student-t.js';
+import { inRange } from './read-quantity.js';
+
+/** More values than this in one list is refused (a list is one set of replicates, not a data file). */
+export const MAX_REPLICATES = 10_000;
+
+export interface ReplicateOptions {
+  /** Confidence level in percent: 95 (default), 90, 99, or any from 50 to 99.9. */
+  level?: number;
+  rounding?: RoundingMode;
+}
+
+export interface ReplicateResult {
+  /** The values as read, in base units. */
+  values: Quantity[];
+  /** The unit the values were written in ('' for a pure number), used for reporting. */
+  unit: string;
+  /** Power of ten from the reporting unit to the base unit. */
+  exp10: number;
+  n: number;
+  /** The mean with its precision from the sum rules. */
+  mean: Measured;
+  /** Sample standard deviation (n − 1), in the reporting unit. */
+  sd: Decimal;
+  /** s ÷ x̄ × 100. */
+  rsdPercent: Decimal;
+  level: number;
+  df: number;
+  t: number;
+  /** t·s/√n, in the reporting unit. */
+  halfWidth: Decimal;
+  /** The half-width rounded to two significant figures. */
+  halfWidthRounded: Decimal;
+  /** The mean rounded to the decimal place of the rounded half-width. */
+  meanRounded: Decimal;
+  /** The reported value: 'x̄ ± h' with the unit. */
+  reported: string;
+  /** The reported mean as text. */
+  meanReported: string;
+  /** The reported half-width as text. */
+  halfWidthReported: string;
+  rounding: RoundingMode;
+  notes: Note[];
+}
+
+/**
+ * Splits a list of values ('99.2, 99.5, 99.1 %' or '3.080 g 3.094 g') into value texts, each with its unit if written.
+ *
+ * @example
+ * splitValues('99.2, 99.5 99.1 %', []) // ['99.2 %', '99.5 %', '99.1 %']
+ */
+export function splitValues(text: string, notes: Note[]): string[] {
+  const tokens = text.trim().split(/[\s,;]+/).filter((t) => t !== '');
+  const values: { num: string; unit: string | null }[] = [];
+  for (const t of tokens) {
+    if (/^[-+]?(\d|\.\d)/.test(t)) {
+      const m = /^([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)(.*)$/.exec(t)!;
+      values.push({ num: m[1], unit: m[2] === '' ? null : m[2] });
+    } else if (values.length && values[values.length - 1].unit === null) {
+      values[values.length - 1].unit = t;
+    } else {
+      throw fail({ code: 'BAD_NUMBER', message: `'${t}' is not a number${values.length ? ' (or a unit after one)' : ''}`, column: text.indexOf(t) + 1 }, text);
+    }
+  }
+  if (values.length > MAX_REPLICATES) throw fail({ code: 'INPUT_TOO_LONG', message: `more than ${MAX_REPLICATES} values in one list` }, text);
+  const withUnit = values.filter((v) => v.unit !== null);
+  if (withUnit.length > 0 && withUnit.length < values.length) {
+    const last = values[values.length - 1];
+    if (withUnit.length === 1 && last.unit !== null) {
+      notes.push({ code: 'UNIT_APPLIED_TO_ALL', message: `the unit written after the last value (${last.unit}) is taken for every value` });
+      for (const v of values) v.unit = last.unit;
+    } else {
+      throw fail({ code: 'BAD_MEASUREMENT', message: 'some values have a unit and some do not: write the unit after each value, or once after the last' }, text);
+    }
+  }
+  return values.map((v) => (v.unit === null ? v.num : `${v.num} ${v.unit}`));
+}
+
+/**
+ * Statistics of a list of replicate results.
+ *
+ * @example
+ * const r = replicates('3.080 3.094 3.107 3.056 3.112 3.174 3.198 g')
+ * r.reported // '3.117 ± 0.047 g'
+ */
+export function replicates(text: string, o: ReplicateOptions = {}): ReplicateResult {
+  const notes: Note[] = [];
+  const rounding = o.rounding ?? 'half-even';
+  const level = o.level ?? 95;
+  const texts = splitValues(text, notes);
+  if (texts.length < 2) throw fail({ code: 'BAD_MEASUREMENT', message: `replicate statistics need at least two values; got ${texts.length}` }, text);
+  const first = measureAs(texts[0], [[0, 0, 0], [1, 0, 0], [0, 1, 0], [0, 0, 1], [0, 1, -1], [1, 0, -1]], 'the first value', notes);
+  const values = texts.map((t, i) => (i === 0 ? first : measureAs(t, [first.dims], `value ${i + 1}`, notes)));
+  values.forEach((v, i) => inRange(v, texts[i], `value ${i + 1}`));
+  for (const v of values) if (v.lsd === null) throw fail({ code: 'BAD_MEASUREMENT', message: 'replicate values are measurements; an exact number has no place here' }, text);
+  const unit = first.unit?.symbol ?? '';
+  const exp10 = first.unit?.exp10 ?? 0;
+  const scale = new Decimal(10).pow(exp10);
+  const n = values.length;
+  const inUnit = values.map((v) => ({ value: v.value.div(scale), lsd: v.lsd === null ? null : v.lsd - exp10 }));
+  const mean = dividedBy(sumMeasured(inUnit), exact(n));
+  let ss = new Decimal(0);
+  for (const v of inUnit) ss = ss.plus(v.value.minus(mean.value).pow(2));
+  const sd = ss.div(n - 1).sqrt();
+  if (mean.value.isZero()) throw fail({ code: 'BAD_MEASUREMENT', message: 'the mean is zero: a relative standard deviation has no meaning' }, text);
+  const rsdPercent = sd.div(mean.value.abs()).times(100);
+  const df = n - 1;
+  const t = tCritical(level, df);
+  const tD = new Decimal(t.toPrecision(15));
+  const halfWidth = tD.times(sd).div(new Decimal(n).sqrt());
+  notes.push({ code: 'STUDENT_T', message: `t = ${t.toFixed(3)} for ${df} degree${df === 1 ? '' : 's'} of freedom at ${level} % confidence (two-sided; computed from the incomplete beta function)` });
+  let halfWidthRounded: Decimal;
+  let meanRounded: Decimal;
+  let decimals: number;
+  if (halfWidth.isZero()) {
+    halfWidthRounded = halfWidth;
+    meanRounded = mean.value;
+    decimals = Math.max(0, -(mean.lsd ?? 0));
+    meanRounded = roundToPosition(mean.value, -decimals, rounding);
+    notes.push({ code: 'NO_SPREAD', message: 'the values are all equal: the standard deviation is zero, and the interval says nothing about the method' });
+  } else {
+    halfWidthRounded = roundToSigFigs(halfWidth, 2, rounding);
+    const pos = msd(halfWidthRounded) - 1;
+    decimals = Math.max(0, -pos);
+    meanRounded = roundToPosition(mean.value, pos, rounding);
+    if (mean.lsd !== null && pos < mean.lsd) notes.push({ code: 'INTERVAL_FINER_THAN_DATA', message: 'the interval is narrower than the last digit of the data; the reported value keeps the digit the interval supports' });
+  }
+  notes.push({ code: 'REPORTED_TO_UNCERTAINTY', message: `reported value: the half-width rounded ${rounding} to two significant figures (GUM §7.2.6), the mean to the same decimal place` });
+  notes.push({ code: 'NO_OUTLIER_TEST', message: 'every value is used; no outlier test is applied' });
+  const u = unit ? ` ${unit}` : '';
+  const meanReported = meanRounded.toFixed(decimals);
+  const halfWidthReported = halfWidthRounded.toFixed(decimals);
+  const reported = `${meanReported} ± ${halfWidthReported}${u}`;
+  return { values, unit, exp10, n, mean, sd, rsdPercent, level, df, t, halfWidth, halfWidthRounded, meanRounded, reported, meanReported, halfWidthReported, rounding, notes };
+}
+
+/**
+ * {@link replicates} without throwing.
+ *
+ * @example
+ * safeReplicates('99.2').success // false (one value)
+ */
+export function safeReplicates(text: string, o: ReplicateOptions = {}): SafeResult<ReplicateResult> {
+  return toSafe(() => replicates(text, o));
+}

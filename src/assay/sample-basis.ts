@@ -1,0 +1,121 @@
+/**
+ * A result on another basis of the sample: as is, dried (after loss on
+ * drying), anhydrous (water by Karl Fischer removed), solvent-free (residual
+ * solvent removed), or anhydrous and solvent-free. A basis with a fraction r
+ * removed relates to the as-is value by value(basis) = value(as is) ÷ (1 − r),
+ * so value(to) = value(from) × (1 − r_from) ÷ (1 − r_to). 1 is exact; the
+ * difference 1 − r keeps the decimals of r (OpenStax Chemistry 2e §1.5).
+ */
+import type { Note } from '../errors/issue.js';
+import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { PURE } from '../calc/measure.js';
+import { exact } from '../sigfig/measured.js';
+import { displayQuantity } from '../sigfig/display-quantity.js';
+import { add, divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
+import { readPositive } from './read-quantity.js';
+
+export type SampleBasis = 'as-is' | 'dried' | 'anhydrous' | 'solvent-free' | 'anhydrous-solvent-free';
+
+export const SAMPLE_BASES: readonly SampleBasis[] = Object.freeze(['as-is', 'dried', 'anhydrous', 'solvent-free', 'anhydrous-solvent-free']);
+
+/** What the sample loses or holds, as read (fractions, pure numbers). */
+export interface SampleContent {
+  /** Loss on drying: '0.45 %'. */
+  loss?: string;
+  /** Water content (Karl Fischer): '0.32 %'. */
+  water?: string;
+  /** Residual solvent: '0.10 %'. */
+  solvent?: string;
+}
+
+export interface BasisConversion {
+  from: SampleBasis;
+  to: SampleBasis;
+  /** The value as given. */
+  value: Quantity;
+  /** The value on the new basis. */
+  converted: Quantity;
+  /** The multiplying factor (1 − r_from) ÷ (1 − r_to). */
+  factor: Quantity;
+  notes: Note[];
+}
+
+const ONE = quantity(exact(1), null);
+
+/**
+ * Reads a basis name; throws BAD_OPTION for an unknown one.
+ *
+ * @example
+ * readBasis('dried') // 'dried'
+ */
+export function readBasis(text: string): SampleBasis {
+  const t = text.trim().toLowerCase().replace(/[\s_]+/g, '-');
+  const basis = t === 'as-is' || t === 'asis' ? 'as-is' : t === 'dry' ? 'dried' : t;
+  if (!(SAMPLE_BASES as readonly string[]).includes(basis)) throw fail({ code: 'BAD_OPTION', message: `unknown basis '${text}': choose one of ${SAMPLE_BASES.join(', ')}` }, text);
+  return basis as SampleBasis;
+}
+
+const NAMES: Record<SampleBasis, string> = { 'as-is': 'as-is', dried: 'dried', anhydrous: 'anhydrous', 'solvent-free': 'solvent-free', 'anhydrous-solvent-free': 'anhydrous and solvent-free' };
+
+/**
+ * The fraction removed for a basis (null for as is), read from the content, with a note of the reading.
+ *
+ * @example
+ * removedFraction('dried', { loss: '0.50 %' }, [])?.value.toString() // '0.005'
+ */
+export function removedFraction(basis: SampleBasis, content: SampleContent, notes: Note[]): Quantity | null {
+  const need = (key: keyof SampleContent, label: string, option: string): Quantity => {
+    const text = content[key];
+    if (text === undefined) throw fail({ code: 'USAGE', message: `the ${NAMES[basis]} basis needs the ${label}: give ${option} (e.g. ${option} '0.50 %')` });
+    const q = readPositive(text, [PURE], `the ${label}`, notes, true);
+    if (q.value.gte(1)) throw fail({ code: 'BAD_AMOUNT', message: `the ${label} must be below 100 %: '${text}'` }, text);
+    return q;
+  };
+  switch (basis) {
+    case 'as-is':
+      return null;
+    case 'dried':
+      return need('loss', 'loss on drying', '--loss');
+    case 'anhydrous':
+      return need('water', 'water content', '--water');
+    case 'solvent-free':
+      return need('solvent', 'residual solvent', '--solvent');
+    case 'anhydrous-solvent-free':
+      return add(need('water', 'water content', '--water'), need('solvent', 'residual solvent', '--solvent'));
+  }
+}
+
+const pct = (q: Quantity) => displayQuantity(q, '%').text;
+
+/**
+ * Converts a result (a fraction, e.g. an assay) from one basis of the sample to another.
+ *
+ * @example
+ * const r = convertBasis('99.1 %', 'as-is', 'dried', { loss: '0.50 %' })
+ * displayQuantity(r.converted, '%').text // '99.6 %'
+ */
+export function convertBasis(valueText: string | Quantity, from: SampleBasis, to: SampleBasis, content: SampleContent): BasisConversion {
+  const notes: Note[] = [];
+  const value = typeof valueText === 'string' ? readPositive(valueText, [PURE], 'the result', notes) : valueText;
+  if (from === to) throw fail({ code: 'USAGE', message: `the result is already on the ${NAMES[to]} basis: choose another --to` });
+  const rFrom = removedFraction(from, content, notes);
+  const rTo = removedFraction(to, content, notes);
+  const keepFrom = rFrom ? subtract(ONE, rFrom) : ONE;
+  const keepTo = rTo ? subtract(ONE, rTo) : ONE;
+  const factor = divide(keepFrom, keepTo);
+  const converted = multiply(value, factor);
+  const removed = (b: SampleBasis, r: Quantity | null) => (r ? `${NAMES[b]} (${pct(r)} removed)` : NAMES[b]);
+  notes.push({ code: 'BASIS_CONVERTED', message: `from the ${removed(from, rFrom)} to the ${removed(to, rTo)} basis: × ${rFrom ? `(100 % − ${pct(rFrom)})` : '100 %'} ÷ ${rTo ? `(100 % − ${pct(rTo)})` : '100 %'}` });
+  if (converted.value.gt(1)) notes.push({ code: 'ABOVE_100_PERCENT', message: `the result on the ${NAMES[to]} basis is above 100 % (${pct(converted)}); this is possible for an assay within its method's uncertainty` });
+  return { from, to, value, converted, factor, notes };
+}
+
+/**
+ * {@link convertBasis} without throwing.
+ *
+ * @example
+ * safeConvertBasis('99.1 %', 'as-is', 'dried', {}).success // false (no loss on drying given)
+ */
+export function safeConvertBasis(valueText: string, from: SampleBasis, to: SampleBasis, content: SampleContent): SafeResult<BasisConversion> {
+  return toSafe(() => convertBasis(valueText, from, to, content));
+}

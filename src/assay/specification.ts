@@ -1,0 +1,70 @@
+/**
+ * A result checked against specification limits such as 98.0–102.0 %. The
+ * result is first rounded to the last digit of the limits and then compared,
+ * limits included (the pharmacopoeial convention: USP General Notices 7.20,
+ * from memory). Rounding is half-to-even unless half-up is asked for; many
+ * pharmacopoeias and house rules round half up.
+ */
+import type { Note } from '../errors/issue.js';
+import { fail } from '../errors/pondus-error.js';
+import { Decimal } from '../exact/decimal.js';
+import { readNumber } from '../sigfig/read-number.js';
+import { roundToPosition, type RoundingMode } from '../sigfig/round.js';
+import type { Quantity } from '../sigfig/quantity.js';
+
+export interface Limits {
+  /** Lower limit in %, as written. */
+  low: string;
+  /** Upper limit in %, as written. */
+  high: string;
+  /** Power of ten of the last digit written in the limits (-1 for 98.0–102.0). */
+  lsd: number;
+}
+
+export interface SpecificationCheck {
+  limits: Limits;
+  /** The result in %, rounded to the limits' last digit. */
+  rounded: Decimal;
+  /** The rounded result as text ('99.6'). */
+  roundedText: string;
+  complies: boolean;
+  rounding: RoundingMode;
+  notes: Note[];
+}
+
+/**
+ * Reads limits written `98.0-102.0` (an en dash or `to` also do; a trailing % is optional).
+ *
+ * @example
+ * readLimits('98.0–102.0 %').lsd // -1
+ */
+export function readLimits(text: string): Limits {
+  const m = /^\s*(\d+(?:\.\d*)?)\s*%?\s*(?:-|–|to|\.\.)\s*(\d+(?:\.\d*)?)\s*%?\s*$/.exec(text);
+  if (!m) throw fail({ code: 'BAD_OPTION', message: `limits are written LOW-HIGH in percent, e.g. 98.0-102.0; got '${text}'` }, text);
+  const lo = readNumber(m[1]);
+  const hi = readNumber(m[2]);
+  if (lo.value.gt(hi.value)) throw fail({ code: 'BAD_OPTION', message: `the lower limit ${m[1]} is above the upper limit ${m[2]}` }, text);
+  return { low: m[1], high: m[2], lsd: Math.min(Math.min(0, lo.lsd ?? 0), Math.min(0, hi.lsd ?? 0)) };
+}
+
+/**
+ * Checks a result (a fraction) against limits in percent.
+ *
+ * @example
+ * const q = measure('0.99462')
+ * checkSpecification(q, '98.0-102.0').roundedText // '99.5'
+ */
+export function checkSpecification(result: Quantity, limitsText: string, rounding: RoundingMode = 'half-even', basisName = 'the reported'): SpecificationCheck {
+  const limits = readLimits(limitsText);
+  const percent = result.value.times(100);
+  const rounded = roundToPosition(percent, limits.lsd, rounding);
+  const roundedText = rounded.toFixed(Math.max(0, -limits.lsd));
+  const complies = rounded.gte(limits.low) && rounded.lte(limits.high);
+  const notes: Note[] = [
+    {
+      code: 'LIMITS_ROUNDING',
+      message: `${basisName} result ${percent.toSignificantDigits(8).toFixed()} % is rounded ${rounding} to the last digit of the limits (${roundedText} %) before comparison with ${limits.low}–${limits.high} % (limits included; USP General Notices 7.20, from memory)`,
+    },
+  ];
+  return { limits, rounded, roundedText, complies, rounding, notes };
+}

@@ -1,0 +1,95 @@
+/**
+ * Standardising a titrant against a weighed primary standard (potassium
+ * hydrogen phthalate for a base, sodium carbonate or tris for an acid): its
+ * molarity from the standard's mass, purity and molar mass, the mole ratio of
+ * the reaction, and the titre less any blank. A result from measurements, so
+ * it keeps their significant figures.
+ */
+import type { Note } from '../errors/issue.js';
+import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { MASS, PURE, VOLUME } from '../calc/measure.js';
+import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { reportedMolarMass } from '../mass/reported-mass.js';
+import { displayQuantity } from '../sigfig/display-quantity.js';
+import { divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
+import { unitOf } from '../sigfig/units.js';
+import { noteHydrateWater } from './hydrate-note.js';
+import { readPositive } from './read-quantity.js';
+import { readMoleRatio, type MoleRatio } from './stoichiometric-ratio.js';
+
+export interface StandardiseOptions extends MassOptions {
+  /** Mass of primary standard weighed: '0.5105 g'. */
+  mass: string;
+  /** Titre: '24.95 mL'. */
+  volume: string;
+  /** Blank titre, subtracted: '0.03 mL'. */
+  blank?: string;
+  /** Mole ratio standard:titrant ('1:2' for Na2CO3 with HCl to CO2); 1:1 assumed with a note. */
+  ratio?: string;
+  /** Assay of the standard: '99.95 %'; taken as 100 % with a note when not given. */
+  purity?: string;
+}
+
+export interface StandardiseResult {
+  standard: MassResult;
+  mass: Quantity;
+  purity: Quantity | null;
+  titre: Quantity;
+  blank: Quantity | null;
+  netTitre: Quantity;
+  ratio: MoleRatio;
+  /** Moles of standard titrated. */
+  moles: Quantity;
+  /** The titrant's molarity, mol/L. */
+  molarity: Quantity;
+  notes: Note[];
+}
+
+/**
+ * The molarity of a titrant from a primary-standard titration.
+ *
+ * @example
+ * const r = standardise('KHC8H4O4', { mass: '0.5105 g', volume: '24.95 mL' })
+ * displayQuantity(r.molarity, 'M').text // '0.1002 M'
+ */
+export function standardise(standardText: string, o: StandardiseOptions): StandardiseResult {
+  const notes: Note[] = [];
+  const standard = formulaMass(standardText, o);
+  for (const n of standard.notes) notes.push(n);
+  noteHydrateWater(standard, notes);
+  const mass = readPositive(o.mass, [MASS], 'the mass of standard', notes);
+  const titre = readPositive(o.volume, [VOLUME], 'the titre', notes);
+  const blank = o.blank === undefined ? null : readPositive(o.blank, [VOLUME], 'the blank titre', notes, true);
+  let purity: Quantity | null = null;
+  if (o.purity !== undefined) {
+    purity = readPositive(o.purity, [PURE], 'the purity of the standard', notes);
+    if (purity.value.gt(1)) throw fail({ code: 'BAD_AMOUNT', message: `the purity must be at most 100 %: '${o.purity}'` }, o.purity);
+    notes.push({ code: 'PURITY_APPLIED', message: `the standard's assay ${displayQuantity(purity, '%').text} applied to its mass` });
+  } else {
+    notes.push({ code: 'PURITY_ASSUMED', message: 'the standard is taken as 100 % pure; give --purity with its certified assay' });
+  }
+  const ratio = readMoleRatio(o.ratio, standard.input, 'titrant', notes);
+  let netTitre = titre;
+  const v = (q: Quantity) => displayQuantity(q, 'mL').text;
+  if (blank) {
+    netTitre = subtract(titre, blank);
+    notes.push({ code: 'BLANK_SUBTRACTED', message: `blank ${v(blank)} subtracted from the titre ${v(titre)}: ${v(netTitre)}` });
+    if (netTitre.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: `the titre less the blank is not positive (${v(netTitre)})` });
+  } else {
+    notes.push({ code: 'NO_BLANK', message: 'no blank given: the titre is used as read' });
+  }
+  const pure = purity ? multiply(mass, purity) : mass;
+  const moles = divide(pure, quantity(reportedMolarMass(standard), unitOf('g/mol')));
+  const molarity = divide(divide(moles, ratio.factor), netTitre);
+  return { standard, mass, purity, titre, blank, netTitre, ratio, moles, molarity, notes };
+}
+
+/**
+ * {@link standardise} without throwing.
+ *
+ * @example
+ * safeStandardise('Na2CO3', { mass: '0.2500 g', volume: '23.40 mL', ratio: '1:2' }).success // true
+ */
+export function safeStandardise(standardText: string, o: StandardiseOptions): SafeResult<StandardiseResult> {
+  return toSafe(() => standardise(standardText, o));
+}

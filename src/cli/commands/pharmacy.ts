@@ -1,0 +1,244 @@
+/**
+ * The compounding commands: `meq` (mmol, mEq and mOsm of a salt from a mass,
+ * a target or a strength), `osmolarity` (mOsm/L and mEq/L of a solution of
+ * salts) and `alligation` (two strengths mixed to a target).
+ */
+import type { Command } from 'commander';
+import { fail } from '../../errors/pondus-error.js';
+import { alligation, type AlligationResult } from '../../pharmacy/alligation.js';
+import { PHARMACY_CAUTION } from '../../pharmacy/caution.js';
+import { atWorkingPrecision } from '../../pharmacy/working-precision.js';
+import { milliequivalents, type MilliequivalentResult } from '../../pharmacy/milliequivalents.js';
+import { osmolarity, type OsmolarityResult } from '../../pharmacy/osmolarity.js';
+import type { RoundingMode } from '../../sigfig/round.js';
+import { displayMolarMass } from '../output/display.js';
+import { withFormulaOptions, withOutputOptions, type FormulaOptions, type OutputOptions } from './common.js';
+import { notesCell, notesJson, numbered, qtext, quantityJson, withProtectedCells, withRounding, type RowPresenter } from './qc-rows.js';
+import type { CommandRunner } from './runner.js';
+
+// --- meq --------------------------------------------------------------------------
+
+interface MeqCli extends FormulaOptions {
+  mass?: string;
+  meq?: string;
+  mmol?: string;
+  concentration?: string;
+  measured?: boolean;
+  ions?: string;
+  rounding?: RoundingMode;
+}
+
+/** The presenter for `pondus meq`. */
+export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
+  const given = (['mass', 'meq', 'mmol', 'concentration'] as const).filter((k) => o[k] !== undefined);
+  if (given.length !== 1) throw fail({ code: 'USAGE', message: given.length === 0 ? "give one of --mass '1.000 g', --meq '20 mEq', --mmol '10 mmol' or --concentration '10 % w/v'" : `give only one of ${given.map((k) => `--${k}`).join(', ')}` });
+  if (o.measured && o.concentration === undefined) throw fail({ code: 'USAGE', message: '--measured applies to --concentration only' });
+  const rounding = o.rounding ?? 'half-even';
+  const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations, mass: o.mass, meq: o.meq, mmol: o.mmol, concentration: o.concentration, measured: o.measured, ions: o.ions };
+  const strength = o.concentration !== undefined;
+  return {
+    compute: numbered((input) => milliequivalents(input, opts)),
+    json: ({ input, line, r }) => ({
+      input,
+      line,
+      salt: r.salt.formula,
+      molarMass: r.salt.molarMass.toNumber(),
+      mode: r.mode,
+      ions: r.ions.ions.map((i) => ({ ion: i.ion, charge: i.charge, count: i.count })),
+      meqPerMmol: r.ions.equivalentsPerMole,
+      mOsmPerMmol: r.ions.particles,
+      ...(strength
+        ? {
+            mmolPerMl: quantityJson(r.moles, 'M', rounding, 'mmol/mL'),
+            meqPerMl: quantityJson(r.equivalents, 'M', rounding, 'mEq/mL'),
+            meqPerL: quantityJson(r.equivalents, 'mM', rounding, 'mEq/L'),
+            mOsmPerL: quantityJson(r.osmoles, 'mM', rounding, 'mOsm/L'),
+            perIon: r.perIon.map((i) => ({ ion: i.ion, meqPerL: quantityJson(i.equivalents, 'mM', rounding, 'mEq/L') })),
+          }
+        : {
+            mass: quantityJson(r.mass!, 'g', rounding),
+            mmol: quantityJson(r.moles, 'mmol', rounding),
+            meq: quantityJson(r.equivalents, 'mmol', rounding, 'mEq'),
+            mOsm: quantityJson(r.osmoles, 'mmol', rounding, 'mOsm'),
+            perIon: r.perIon.map((i) => ({ ion: i.ion, mmol: quantityJson(i.amount, 'mmol', rounding), meq: quantityJson(i.equivalents, 'mmol', rounding, 'mEq') })),
+          }),
+      rounding,
+      notes: notesJson(r.notes),
+      caution: PHARMACY_CAUTION,
+    }),
+    columns: strength ? ['input', 'line', 'salt', 'mmol_per_mL', 'mEq_per_mL', 'mEq_per_L', 'mOsm_per_L', 'notes'] : ['input', 'line', 'salt', 'mass_g', 'mmol', 'mEq', 'mOsm', 'notes'],
+    cells: ({ input, line, r }) =>
+      strength
+        ? [input, line, r.salt.formula, quantityJson(r.moles, 'M', rounding).reported, quantityJson(r.equivalents, 'M', rounding).reported, quantityJson(r.equivalents, 'mM', rounding).reported, quantityJson(r.osmoles, 'mM', rounding).reported, notesCell(r.notes)]
+        : [input, line, r.salt.formula, quantityJson(r.mass!, 'g', rounding).reported, quantityJson(r.moles, 'mmol', rounding).reported, quantityJson(r.equivalents, 'mmol', rounding).reported, quantityJson(r.osmoles, 'mmol', rounding).reported, notesCell(r.notes)],
+    block: ({ input, r }) => {
+      const head = `${input}  (${r.salt.formula}, M = ${displayMolarMass(r.salt)} g/mol): 1 mmol = ${r.ions.equivalentsPerMole} mEq = ${r.ions.particles} mOsm`;
+      const ions = r.perIon.map((i) => `${i.ion} ${strength ? qtext(i.equivalents, 'mM', rounding, 'mEq/L') : qtext(i.equivalents, 'mmol', rounding, 'mEq')}`).join(', ');
+      if (r.mode === 'strength') {
+        return [head, `  ${o.concentration}: ${qtext(r.moles, 'M', rounding, 'mmol/mL')}, ${qtext(r.equivalents, 'M', rounding, 'mEq/mL')} (${qtext(r.equivalents, 'mM', rounding, 'mEq/L')}), ${qtext(r.osmoles, 'mM', rounding, 'mOsm/L')}`, `  by ion: ${ions}`].join('\n');
+      }
+      if (r.mode === 'target') {
+        return [head, `  for ${o.meq ?? o.mmol}: ${qtext(r.moles, 'mmol', rounding)} of ${input}; weigh ${qtext(r.mass!, 'g', rounding)}`, `  by ion: ${ions}`].join('\n');
+      }
+      return [head, `  ${qtext(r.mass!, 'g', rounding)}: ${qtext(r.moles, 'mmol', rounding)}, ${qtext(r.equivalents, 'mmol', rounding, 'mEq')}, ${qtext(r.osmoles, 'mmol', rounding, 'mOsm')}`, `  by ion: ${ions}`].join('\n');
+    },
+    notes: ({ r }) => r.notes.map((n) => n.message),
+    caution: PHARMACY_CAUTION,
+  };
+}
+
+// --- osmolarity -------------------------------------------------------------------
+
+interface OsmolarityCli extends FormulaOptions {
+  measured?: boolean;
+  rounding?: RoundingMode;
+}
+
+/** The presenter for `pondus osmolarity`. */
+export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityResult> {
+  const rounding = o.rounding ?? 'half-even';
+  const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations, measured: o.measured };
+  return {
+    compute: numbered((input) => osmolarity(input, opts)),
+    json: ({ input, line, r }) => ({
+      input,
+      line,
+      components: r.components.map((c) => ({ salt: c.result.salt.formula, strength: c.strength, mOsmPerL: quantityJson(c.result.osmoles, 'mM', rounding, 'mOsm/L') })),
+      mOsmPerL: quantityJson(r.osmolarity, 'mM', rounding, 'mOsm/L'),
+      ions: r.ions.map((i) => ({ ion: i.ion, charge: i.charge, mmolPerL: quantityJson(i.molarity, 'mM', rounding, 'mmol/L'), meqPerL: quantityJson(i.equivalents, 'mM', rounding, 'mEq/L') })),
+      rounding,
+      notes: notesJson(r.notes),
+      caution: PHARMACY_CAUTION,
+    }),
+    columns: ['input', 'line', 'mOsm_per_L', 'ions_mEq_per_L', 'notes'],
+    cells: ({ input, line, r }) => [input, line, quantityJson(r.osmolarity, 'mM', rounding).reported, r.ions.map((i) => `${i.ion}=${quantityJson(i.equivalents, 'mM', rounding).reported}`).join(' '), notesCell(r.notes)],
+    block: ({ input, r }) => {
+      const lines = [`${input}`];
+      for (const c of r.components) lines.push(`  ${c.salt} ${c.strength}: ${qtext(c.result.moles, 'mM', rounding, 'mmol/L')} × ${c.result.ions.particles} = ${qtext(c.result.osmoles, 'mM', rounding, 'mOsm/L')}`);
+      lines.push(`  osmolarity ${qtext(r.osmolarity, 'mM', rounding, 'mOsm/L')} (ideal, complete dissociation)`);
+      lines.push(`  mEq/L: ${r.ions.map((i) => `${i.ion} ${qtext(i.equivalents, 'mM', rounding, '')}`.trimEnd()).join(', ')}`);
+      return lines.join('\n');
+    },
+    notes: ({ r }) => r.notes.map((n) => n.message),
+    caution: PHARMACY_CAUTION,
+  };
+}
+
+// --- alligation -------------------------------------------------------------------
+
+interface AlligationCli extends OutputOptions {
+  higher?: string;
+  lower?: string;
+  total?: string;
+  by?: 'mass' | 'volume';
+  rounding?: RoundingMode;
+}
+
+/** The presenter for `pondus alligation`. */
+export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationResult> {
+  const missing = (['higher', 'lower'] as const).filter((k) => o[k] === undefined);
+  if (missing.length) throw fail({ code: 'USAGE', message: `give ${missing.map((k) => `--${k}`).join(' and ')}: pondus alligation '10 %' --higher '20 %' --lower '5 %' --total '300 g'` });
+  if (o.total === undefined && o.by === undefined) throw fail({ code: 'USAGE', message: "say how the strengths are mixed: --total '500 g' (by mass) or --total '250 mL' (by volume), or --by mass|volume for parts only" });
+  if (o.by !== undefined && o.by !== 'mass' && o.by !== 'volume') throw fail({ code: 'USAGE', message: `--by is mass or volume; got '${o.by}'` });
+  const rounding = o.rounding ?? 'half-even';
+  const opts = { higher: o.higher!, lower: o.lower!, total: o.total, by: o.by };
+  const amountUnit = (r: AlligationResult) => r.total?.unit?.symbol ?? (r.by === 'mass' ? 'g' : 'mL');
+  const sUnit = (r: AlligationResult) => r.target.value.unit?.symbol;
+  return {
+    compute: numbered((input) => {
+      const r = alligation(input, opts);
+      if (o.by !== undefined && r.total !== null && r.by !== o.by) throw fail({ code: 'USAGE', message: `--by ${o.by} conflicts with the total` });
+      return r;
+    }),
+    json: ({ input, line, r }) => ({
+      input,
+      line,
+      by: r.by,
+      higherParts: quantityJson({ ...r.higherParts, lsd: null }, sUnit(r), rounding).value,
+      lowerParts: quantityJson({ ...r.lowerParts, lsd: null }, sUnit(r), rounding).value,
+      higherFraction: r.higherFraction.value.toNumber(),
+      total: r.total ? quantityJson(atWorkingPrecision({ ...r.total, lsd: null }), amountUnit(r), rounding) : null,
+      higher: r.higherAmount ? quantityJson(r.higherAmount, amountUnit(r), rounding) : null,
+      lower: r.lowerAmount ? quantityJson(r.lowerAmount, amountUnit(r), rounding) : null,
+      rounding,
+      notes: notesJson(r.notes),
+      caution: PHARMACY_CAUTION,
+    }),
+    columns: ['input', 'line', 'by', 'higher_parts', 'lower_parts', 'higher_amount', 'lower_amount', 'unit', 'notes'],
+    cells: ({ input, line, r }) => [
+      input,
+      line,
+      r.by,
+      quantityJson({ ...r.higherParts, lsd: null }, sUnit(r), rounding).value,
+      quantityJson({ ...r.lowerParts, lsd: null }, sUnit(r), rounding).value,
+      r.higherAmount ? quantityJson(r.higherAmount, amountUnit(r), rounding).reported : '',
+      r.lowerAmount ? quantityJson(r.lowerAmount, amountUnit(r), rounding).reported : '',
+      r.total ? amountUnit(r) : '',
+      notesCell(r.notes),
+    ],
+    block: ({ input, r }) => {
+      const u = sUnit(r);
+      const hp = qtext({ ...r.higherParts, lsd: null }, u, rounding);
+      const lp = qtext({ ...r.lowerParts, lsd: null }, u, rounding);
+      const parts = (t: string) => `${t.replace(/ .*/, '')} part${t.replace(/ .*/, '') === '1' ? '' : 's'}`;
+      const lines = [`${o.higher} and ${o.lower} to ${input}, by ${r.by}: ${parts(hp)} of ${o.higher} to ${parts(lp)} of ${o.lower}`];
+      if (r.total && r.higherAmount && r.lowerAmount) {
+        const unit = amountUnit(r);
+        lines.push(`  for ${qtext(atWorkingPrecision({ ...r.total, lsd: null }), unit, rounding)}: take ${qtext(r.higherAmount, unit, rounding)} of ${o.higher} and ${qtext(r.lowerAmount, unit, rounding)} of ${o.lower}`);
+      }
+      return lines.join('\n');
+    },
+    notes: ({ r }) => r.notes.map((n) => n.message),
+    caution: PHARMACY_CAUTION,
+  };
+}
+
+// --- registration -----------------------------------------------------------------
+
+/** Registers `meq`, `osmolarity` and `alligation`. */
+export function registerPharmacy(program: Command, run: CommandRunner): void {
+  withRounding(
+    withFormulaOptions(
+      program
+        .command('meq')
+        .description('mmol, mEq and mOsm of a salt: for a weighed mass, the mass for a target, or per mL of a strength')
+        .argument('[salts...]', 'the salt, e.g. KCl, CaCl2·2H2O, K2HPO4; - reads one per line')
+        .option('--mass <m>', "a weighed mass: '1.500 g'")
+        .option('--meq <n>', "a target: '20 mEq' (gives the mass to weigh)")
+        .option('--mmol <n>', "a target: '10 mmol' (gives the mass to weigh)")
+        .option('--concentration <c>', "a strength: '10 % w/v', '84 g/L', '0.154 M' (gives mEq/mL, mEq/L, mOsm/L)")
+        .option('--measured', 'the strength is measured (keep its significant figures), not a nominal label value')
+        .option('--ions <list>', "the ions, when not read from the formula: '2K^+,HPO4^2-'"),
+    ),
+  ).action((inputs: string[], o: MeqCli) => run('meq', inputs, o));
+
+  withRounding(
+    withFormulaOptions(
+      program
+        .command('osmolarity')
+        .description('mOsm/L and mEq/L of a solution of salts (complete dissociation)')
+        .argument('[solutions...]', "salts and strengths: 'NaCl=0.9 %' or 'NaCl=0.6 %, KCl=0.03 %'; - reads one solution per line")
+        .option('--measured', 'the strengths are measured (keep their significant figures), not nominal label values'),
+    ),
+  ).action((inputs: string[], o: OsmolarityCli) => run('osmolarity', inputs, o));
+
+  withRounding(
+    withOutputOptions(
+      program
+        .command('alligation')
+        .description('amounts of a higher and a lower strength to mix for a target strength, by mass or by volume')
+        .argument('[targets...]', "the target strength: '10 %'; - reads one per line")
+        .option('--higher <s>', "the higher strength: '20 %'")
+        .option('--lower <s>', "the lower strength, or '0 %' for a diluent or base")
+        .option('--total <amount>', "the total to make: '300 g' (by mass) or '250 mL' (by volume)")
+        .option('--by <how>', 'mass or volume, for parts only (no total)'),
+    ),
+  ).action((inputs: string[], o: AlligationCli) => run('alligation', inputs, o));
+}
+
+/** Presenters of the compounding commands, by name. */
+export const PHARMACY_PRESENTERS = {
+  meq: (o: MeqCli) => withProtectedCells(meqPresenter(o)),
+  osmolarity: (o: OsmolarityCli) => withProtectedCells(osmolarityPresenter(o)),
+  alligation: (o: AlligationCli) => withProtectedCells(alligationPresenter(o)),
+};

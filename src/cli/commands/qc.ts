@@ -1,0 +1,400 @@
+/**
+ * The QC and assay commands: `titration` (assay by direct or back-titration),
+ * `standardise` (a titrant against a primary standard), `sample-basis`
+ * (as is ↔ dried / anhydrous / solvent-free, with a specification check) and
+ * `replicates` (mean, SD, RSD, confidence interval).
+ */
+import type { Command } from 'commander';
+import type { Note } from '../../errors/issue.js';
+import { fail } from '../../errors/pondus-error.js';
+import { QC_CAUTION } from '../../assay/caution.js';
+import { readPositive } from '../../assay/read-quantity.js';
+import { PURE } from '../../calc/measure.js';
+import { replicates, type ReplicateResult } from '../../assay/replicates.js';
+import { convertBasis, readBasis, type BasisConversion, type SampleBasis, type SampleContent } from '../../assay/sample-basis.js';
+import { checkSpecification, readLimits, type SpecificationCheck } from '../../assay/specification.js';
+import { standardise, type StandardiseResult } from '../../assay/standardise.js';
+import { titrationAssay, type TitrationAssayResult } from '../../assay/titration-assay.js';
+import { BENCH_CAUTION } from '../../preparation/caution.js';
+import type { Quantity } from '../../sigfig/quantity.js';
+import type { RoundingMode } from '../../sigfig/round.js';
+import { displayMolarMass } from '../output/display.js';
+import { withFormulaOptions, withOutputOptions, type FormulaOptions, type OutputOptions } from './common.js';
+import { notesCell, notesJson, numbered, qtext, quantityJson, withProtectedCells, withRounding, type RowPresenter } from './qc-rows.js';
+import type { CommandRunner } from './runner.js';
+
+interface BasisCli {
+  loss?: string;
+  water?: string;
+  solvent?: string;
+  limits?: string;
+  on?: string;
+  rounding?: RoundingMode;
+}
+
+/** The basis a result is reported on, the content it needs, and the check against limits. */
+interface Reported {
+  basis: SampleBasis;
+  conversion: BasisConversion | null;
+  value: Quantity;
+  spec: SpecificationCheck | null;
+  notes: Note[];
+}
+
+const CONTENT_FOR: Record<SampleBasis, (keyof SampleContent)[]> = {
+  'as-is': [],
+  dried: ['loss'],
+  anhydrous: ['water'],
+  'solvent-free': ['solvent'],
+  'anhydrous-solvent-free': ['water', 'solvent'],
+};
+
+const OPTION_OF: Record<keyof SampleContent, string> = { loss: '--loss', water: '--water', solvent: '--solvent' };
+
+/** Which basis to report on: --on, or the one basis the content given implies; unused content is a usage error. */
+function chooseBasis(o: BasisCli, from: SampleBasis): { basis: SampleBasis; inferred: boolean } {
+  const given = (['loss', 'water', 'solvent'] as const).filter((k) => o[k] !== undefined);
+  let basis: SampleBasis;
+  let inferred = false;
+  if (o.on !== undefined) basis = readBasis(o.on);
+  else if (given.length === 0) basis = from;
+  else if (given.length === 1) {
+    basis = given[0] === 'loss' ? 'dried' : given[0] === 'water' ? 'anhydrous' : 'solvent-free';
+    inferred = true;
+  } else throw fail({ code: 'USAGE', message: `${given.map((k) => OPTION_OF[k]).join(' and ')} given: say which basis to report on with --on (dried, anhydrous, solvent-free, anhydrous-solvent-free)` });
+  const used = new Set<keyof SampleContent>(basis === from ? [] : [...CONTENT_FOR[from], ...CONTENT_FOR[basis]]);
+  const unused = given.filter((k) => !used.has(k));
+  if (unused.length) throw fail({ code: 'USAGE', message: `${unused.map((k) => OPTION_OF[k]).join(' and ')} would be ignored converting from ${from} to ${basis}: leave ${unused.length === 1 ? 'it' : 'them'} out or choose another --on` });
+  const lacking = basis === from ? [] : [...used].filter((k) => o[k] === undefined);
+  if (lacking.length) throw fail({ code: 'USAGE', message: `converting from ${from} to ${basis} needs ${lacking.map((k) => OPTION_OF[k]).join(' and ')} (e.g. ${OPTION_OF[lacking[0]]} '0.50 %')` });
+  return { basis, inferred };
+}
+
+function validateBasisOptions(o: BasisCli, from: SampleBasis): { basis: SampleBasis; inferred: boolean } {
+  const b = chooseBasis(o, from);
+  if (o.limits !== undefined) readLimits(o.limits);
+  return b;
+}
+
+function report(value: Quantity, from: SampleBasis, choice: { basis: SampleBasis; inferred: boolean }, o: BasisCli): Reported {
+  const notes: Note[] = [];
+  let conversion: BasisConversion | null = null;
+  let v = value;
+  if (choice.basis !== from) {
+    conversion = convertBasis(value, from, choice.basis, { loss: o.loss, water: o.water, solvent: o.solvent });
+    notes.push(...conversion.notes);
+    if (choice.inferred) notes.push({ code: 'BASIS_INFERRED', message: `reported on the ${choice.basis} basis, the one the content given implies; give --on to choose` });
+    v = conversion.converted;
+  }
+  let spec: SpecificationCheck | null = null;
+  if (o.limits !== undefined) {
+    spec = checkSpecification(v, o.limits, o.rounding ?? 'half-even', `the ${choice.basis === 'as-is' ? 'as-is' : choice.basis}`);
+    notes.push(...spec.notes);
+  }
+  return { basis: choice.basis, conversion, value: v, spec, notes };
+}
+
+const specJson = (s: SpecificationCheck | null, basis: SampleBasis) => (s ? { limits: `${s.limits.low}–${s.limits.high} %`, basis, rounded: s.roundedText, complies: s.complies, rounding: s.rounding } : null);
+const verdict = (s: SpecificationCheck, basis: SampleBasis) => `specification ${s.limits.low}–${s.limits.high} % on the ${basis} basis: ${s.roundedText} % ${s.complies ? 'complies' : 'does NOT comply'}`;
+
+// --- titration ------------------------------------------------------------------
+
+interface TitrationCli extends FormulaOptions, BasisCli {
+  sample?: string;
+  titrant?: string;
+  volume?: string;
+  blank?: string;
+  ratio?: string;
+  added?: string;
+  reagentRatio?: string;
+  back?: boolean;
+}
+
+type Titration = { t: TitrationAssayResult; rep: Reported };
+
+/** The presenter for `pondus titration`. */
+export function titrationPresenter(o: TitrationCli): RowPresenter<Titration> {
+  const missing = (['sample', 'titrant', 'volume'] as const).filter((k) => o[k] === undefined);
+  if (missing.length) throw fail({ code: 'USAGE', message: `give ${missing.map((k) => `--${k}`).join(', ')}: pondus titration KHC8H4O4 --sample '0.5000 g' --titrant '0.1000 M' --volume '24.40 mL'` });
+  if (o.added !== undefined && o.blank !== undefined) throw fail({ code: 'USAGE', message: 'a back-titration takes either --added (the excess reagent) or --blank (the titre of the reagent alone), not both' });
+  if (o.reagentRatio !== undefined && o.added === undefined && !o.back) throw fail({ code: 'USAGE', message: '--reagent-ratio belongs to a back-titration: give --added or --back too' });
+  if (o.back && o.added === undefined && o.blank === undefined) throw fail({ code: 'USAGE', message: 'a back-titration needs --added (the excess reagent) or --blank (the titre of the reagent alone)' });
+  const rounding = o.rounding ?? 'half-even';
+  const choice = validateBasisOptions(o, 'as-is');
+  const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations, sample: o.sample!, titrant: o.titrant!, volume: o.volume!, blank: o.blank, ratio: o.ratio, added: o.added, reagentRatio: o.reagentRatio, back: o.back };
+  const allNotes = (x: Titration) => [...x.t.notes, ...x.rep.notes];
+  const pct = (q: Quantity) => qtext(q, '%', rounding);
+  return {
+    compute: numbered((input) => {
+      const t = titrationAssay(input, opts);
+      return { t, rep: report(t.assay, 'as-is', choice, o) };
+    }),
+    json: ({ input, line, r: { t, rep } }) => ({
+      input,
+      line,
+      analyte: t.analyte.formula,
+      molarMass: t.analyte.molarMass.toNumber(),
+      kind: t.kind,
+      ratio: t.ratio.text,
+      reagentRatio: t.reagentRatio?.text ?? null,
+      netTitre: quantityJson(t.netTitre, 'mL', rounding),
+      moles: quantityJson(t.moles, 'mmol', rounding),
+      analyteMass: quantityJson(t.mass, 'mg', rounding),
+      assay: quantityJson(t.assay, '%', rounding),
+      basis: rep.basis,
+      reported: quantityJson(rep.value, '%', rounding),
+      specification: specJson(rep.spec, rep.basis),
+      rounding,
+      notes: notesJson([...t.notes, ...rep.notes]),
+      caution: QC_CAUTION,
+    }),
+    columns: ['input', 'line', 'analyte', 'kind', 'ratio', 'moles_mmol', 'assay_percent', 'assay_reported', 'basis', 'reported_percent', 'reported', 'limits', 'complies', 'notes'],
+    cells: ({ input, line, r }) => {
+      const a = quantityJson(r.t.assay, '%', rounding);
+      const b = quantityJson(r.rep.value, '%', rounding);
+      return [input, line, r.t.analyte.formula, r.t.kind, r.t.ratio.text, quantityJson(r.t.moles, 'mmol', rounding).reported, a.value, a.reported, r.rep.basis, b.value, b.reported, r.rep.spec ? `${r.rep.spec.limits.low}-${r.rep.spec.limits.high}` : '', r.rep.spec ? (r.rep.spec.complies ? 'yes' : 'no') : '', notesCell(allNotes(r))];
+    },
+    block: ({ input, r: { t, rep } }) => {
+      const lines = [`${input}  (${t.analyte.formula}, M = ${displayMolarMass(t.analyte)} g/mol), ${t.kind === 'back' ? 'back-titration' : 'direct titration'}`];
+      if (t.kind === 'direct') {
+        lines.push(`  ${qtext(t.titrant, 'M', rounding)} × ${qtext(t.netTitre, 'mL', rounding)}${t.blank ? ` (titre ${qtext(t.titre, 'mL', rounding)} − blank ${qtext(t.blank, 'mL', rounding)})` : ''} × ${t.ratio.text} = ${qtext(t.moles, 'mmol', rounding)} of ${input}`);
+      } else if (t.added) {
+        lines.push(`  reagent added ${qtext(t.added, 'mmol', rounding)}; left ${qtext(t.titrant, 'M', rounding)} × ${qtext(t.titre, 'mL', rounding)} × ${t.reagentRatio!.text}; ${input} = reacted × ${t.ratio.text} = ${qtext(t.moles, 'mmol', rounding)}`);
+      } else {
+        lines.push(`  ${qtext(t.titrant, 'M', rounding)} × (blank ${qtext(t.blank!, 'mL', rounding)} − titre ${qtext(t.titre, 'mL', rounding)}) × ${t.reagentRatio!.text} × ${t.ratio.text} = ${qtext(t.moles, 'mmol', rounding)} of ${input}`);
+      }
+      lines.push(`  ${qtext(t.mass, t.mass.value.gte(1) ? 'g' : 'mg', rounding)} in ${qtext(t.sample, 'g', rounding)} of sample: assay ${pct(t.assay)} (as is)`);
+      if (rep.conversion) lines.push(`  on the ${rep.basis} basis: ${pct(rep.value)}`);
+      if (rep.spec) lines.push(`  ${verdict(rep.spec, rep.basis)}`);
+      return lines.join('\n');
+    },
+    notes: ({ r }) => allNotes(r).map((n) => n.message),
+    caution: QC_CAUTION,
+  };
+}
+
+// --- standardise ------------------------------------------------------------------
+
+interface StandardiseCli extends FormulaOptions {
+  mass?: string;
+  volume?: string;
+  blank?: string;
+  ratio?: string;
+  purity?: string;
+  rounding?: RoundingMode;
+}
+
+/** The presenter for `pondus standardise`. */
+export function standardisePresenter(o: StandardiseCli): RowPresenter<StandardiseResult> {
+  const missing = (['mass', 'volume'] as const).filter((k) => o[k] === undefined);
+  if (missing.length) throw fail({ code: 'USAGE', message: `give ${missing.map((k) => `--${k}`).join(' and ')}: pondus standardise KHC8H4O4 --mass '0.5105 g' --volume '24.95 mL'` });
+  const rounding = o.rounding ?? 'half-even';
+  const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations, mass: o.mass!, volume: o.volume!, blank: o.blank, ratio: o.ratio, purity: o.purity };
+  return {
+    compute: numbered((input) => standardise(input, opts)),
+    json: ({ input, line, r }) => ({
+      input,
+      line,
+      standard: r.standard.formula,
+      molarMass: r.standard.molarMass.toNumber(),
+      ratio: r.ratio.text,
+      moles: quantityJson(r.moles, 'mmol', rounding),
+      netTitre: quantityJson(r.netTitre, 'mL', rounding),
+      molarity: quantityJson(r.molarity, 'M', rounding),
+      rounding,
+      notes: notesJson(r.notes),
+      caution: BENCH_CAUTION,
+    }),
+    columns: ['input', 'line', 'standard', 'ratio', 'moles_mmol', 'molarity_M', 'molarity', 'notes'],
+    cells: ({ input, line, r }) => {
+      const m = quantityJson(r.molarity, 'M', rounding);
+      return [input, line, r.standard.formula, r.ratio.text, quantityJson(r.moles, 'mmol', rounding).reported, m.value, m.reported, notesCell(r.notes)];
+    },
+    block: ({ input, r }) =>
+      [
+        `${input}  (${r.standard.formula}, M = ${displayMolarMass(r.standard)} g/mol) as primary standard`,
+        `  ${qtext(r.mass, 'g', rounding)}${r.purity ? ` × ${qtext(r.purity, '%', rounding)}` : ''} ÷ M = ${qtext(r.moles, 'mmol', rounding)} of standard; mol titrant = mol standard × ${r.ratio.second}/${r.ratio.first}`,
+        `  titre ${qtext(r.netTitre, 'mL', rounding)}${r.blank ? ` (blank ${qtext(r.blank, 'mL', rounding)} subtracted)` : ''}: titrant molarity ${qtext(r.molarity, 'M', rounding)}`,
+      ].join('\n'),
+    notes: ({ r }) => r.notes.map((n) => n.message),
+    caution: BENCH_CAUTION,
+  };
+}
+
+// --- sample-basis -----------------------------------------------------------------
+
+interface SampleBasisCli extends OutputOptions, BasisCli {
+  from?: string;
+  to?: string;
+}
+
+type BasisRow = { rep: Reported; value: Quantity; from: SampleBasis; notes: Note[] };
+
+/** The presenter for `pondus sample-basis`. */
+export function sampleBasisPresenter(o: SampleBasisCli): RowPresenter<BasisRow> {
+  const rounding = o.rounding ?? 'half-even';
+  if (o.to !== undefined && o.on !== undefined) throw fail({ code: 'USAGE', message: '--to and --on say the same thing: give one' });
+  const from = o.from === undefined ? 'as-is' : readBasis(o.from);
+  const to = o.to ?? o.on;
+  if (to === undefined && o.limits === undefined) throw fail({ code: 'USAGE', message: "give --to (dried, anhydrous, solvent-free, anhydrous-solvent-free, as-is) and the content it needs, e.g. --to dried --loss '0.50 %'" });
+  const choice = validateBasisOptions({ ...o, on: to }, from);
+  if (choice.basis === from && o.limits === undefined) throw fail({ code: 'USAGE', message: `the result is already on the ${from} basis: choose another --to` });
+  return {
+    compute: numbered((input) => {
+      const notes: Note[] = [];
+      if (o.from === undefined) notes.push({ code: 'FROM_AS_IS', message: 'the result is taken as on the as-is basis; give --from otherwise' });
+      const value = readPositive(input, [PURE], 'the result', notes);
+      const rep = report(value, from, choice, o);
+      return { rep, value, from, notes };
+    }),
+    json: ({ input, line, r }) => ({
+      input,
+      line,
+      from: r.from,
+      to: r.rep.basis,
+      value: quantityJson(r.value, '%', rounding),
+      factor: r.rep.conversion ? r.rep.conversion.factor.value.toNumber() : 1,
+      converted: quantityJson(r.rep.value, '%', rounding),
+      specification: specJson(r.rep.spec, r.rep.basis),
+      rounding,
+      notes: notesJson([...r.notes, ...r.rep.notes]),
+      caution: QC_CAUTION,
+    }),
+    columns: ['input', 'line', 'from', 'to', 'converted_percent', 'converted', 'limits', 'complies', 'notes'],
+    cells: ({ input, line, r }) => {
+      const c = quantityJson(r.rep.value, '%', rounding);
+      return [input, line, r.from, r.rep.basis, c.value, c.reported, r.rep.spec ? `${r.rep.spec.limits.low}-${r.rep.spec.limits.high}` : '', r.rep.spec ? (r.rep.spec.complies ? 'yes' : 'no') : '', notesCell([...r.notes, ...r.rep.notes])];
+    },
+    block: ({ input, r }) => {
+      const lines = [`${input} (${r.from})${r.rep.conversion ? ` → ${qtext(r.rep.value, '%', rounding)} on the ${r.rep.basis} basis` : ''}`];
+      if (r.rep.spec) lines.push(`  ${verdict(r.rep.spec, r.rep.basis)}`);
+      return lines.join('\n');
+    },
+    notes: ({ r }) => [...r.notes, ...r.rep.notes].map((n) => n.message),
+    caution: QC_CAUTION,
+  };
+}
+
+// --- replicates -----------------------------------------------------------------
+
+interface ReplicatesCli extends OutputOptions {
+  level?: string;
+  rounding?: RoundingMode;
+}
+
+/** The presenter for `pondus replicates`. */
+export function replicatesPresenter(o: ReplicatesCli): RowPresenter<ReplicateResult> {
+  const rounding = o.rounding ?? 'half-even';
+  const level = o.level === undefined ? 95 : Number(o.level.replace(/\s*%$/, ''));
+  if (!(level >= 50 && level <= 99.9)) throw fail({ code: 'USAGE', message: `--level is a confidence level in percent between 50 and 99.9 (90, 95, 99); got '${o.level}'` });
+  const fig2 = (d: { toSignificantDigits(n: number): { toFixed(): string } }) => d.toSignificantDigits(2).toFixed();
+  return {
+    compute: numbered((input) => replicates(input, { level, rounding })),
+    json: ({ input, line, r }) => ({
+      input,
+      line,
+      n: r.n,
+      unit: r.unit,
+      mean: r.mean.value.toNumber(),
+      meanReported: r.meanReported,
+      halfWidthReported: r.halfWidthReported,
+      sd: r.sd.toNumber(),
+      rsdPercent: r.rsdPercent.toNumber(),
+      level: r.level,
+      df: r.df,
+      t: r.t,
+      halfWidth: r.halfWidth.toNumber(),
+      reported: r.reported,
+      rounding,
+      notes: notesJson(r.notes),
+    }),
+    columns: ['input', 'line', 'n', 'mean', 'sd', 'rsd_percent', 'level', 't', 'half_width', 'reported', 'notes'],
+    cells: ({ input, line, r }) => [input, line, r.n, r.mean.value.toNumber(), r.sd.toNumber(), r.rsdPercent.toNumber(), r.level, r.t, r.halfWidth.toNumber(), r.reported, notesCell(r.notes)],
+    block: ({ input, r }) => {
+      const u = r.unit ? ` ${r.unit}` : '';
+      return [
+        `${input}`,
+        `  n = ${r.n}; mean ${r.mean.value.toSignificantDigits(10).toFixed()}${u}; s = ${fig2(r.sd)}${u}; RSD = ${fig2(r.rsdPercent)} %`,
+        `  ${r.level} % confidence interval (t = ${r.t.toFixed(3)}, ${r.df} df): ${r.reported}`,
+      ].join('\n');
+    },
+    notes: ({ r }) => r.notes.map((n) => n.message),
+  };
+}
+
+// --- registration -----------------------------------------------------------------
+
+function withBasisOptions(cmd: Command): Command {
+  return cmd
+    .option('--loss <p>', "loss on drying: '0.50 %'")
+    .option('--water <p>', "water content (Karl Fischer): '0.32 %'")
+    .option('--solvent <p>', "residual solvent: '0.10 %'")
+    .option('--limits <range>', 'specification limits in %, checked on the reported basis: 98.0-102.0');
+}
+
+/** Registers `titration`, `standardise`, `sample-basis` and `replicates`. */
+export function registerQc(program: Command, run: CommandRunner): void {
+  withRounding(
+    withBasisOptions(
+      withFormulaOptions(
+        program
+          .command('titration')
+          .description('% assay of a sample by titration (direct, with a blank, or back-titration), on the as-is or another basis, checked against limits')
+          .argument('[analytes...]', 'the analyte formula, e.g. C9H8O4; - reads one per line')
+          .option('--sample <mass>', "mass of sample: '0.5012 g'")
+          .option('--titrant <molarity>', "titrant molarity: '0.1000 M'")
+          .option('--volume <v>', "titre: '24.85 mL'")
+          .option('--blank <v>', 'blank titre: subtracted (direct); the reagent alone (with --back)')
+          .option('--ratio <a:b>', 'mol analyte : mol titrant (direct) or : mol reagent (back-titration); 1:1 assumed with a note')
+          .option('--added <amount>', "back-titration: excess reagent added, '50.00 mL of 0.5000 M'")
+          .option('--reagent-ratio <a:b>', 'back-titration: mol reagent : mol titrant; 1:1 assumed with a note')
+          .option('--back', 'back-titration against a blank (give --blank)'),
+      ),
+    ).option('--on <basis>', 'report on: as-is, dried, anhydrous, solvent-free, anhydrous-solvent-free'),
+  ).action((inputs: string[], o: TitrationCli) => run('titration', inputs, o));
+
+  withRounding(
+    withFormulaOptions(
+      program
+        .command('standardise')
+        .description('molarity of a titrant from a weighed primary standard (KHC8H4O4, Na2CO3, …)')
+        .argument('[standards...]', 'the primary standard formula; - reads one per line')
+        .option('--mass <m>', "mass of standard weighed: '0.5105 g'")
+        .option('--volume <v>', "titre: '24.95 mL'")
+        .option('--blank <v>', 'blank titre, subtracted')
+        .option('--ratio <a:b>', 'mol standard : mol titrant (1:2 for Na2CO3 with HCl); 1:1 assumed with a note')
+        .option('--purity <p>', "certified assay of the standard: '99.95 %'"),
+    ),
+  ).action((inputs: string[], o: StandardiseCli) => run('standardise', inputs, o));
+
+  withRounding(
+    withBasisOptions(
+      withOutputOptions(
+        program
+          .command('sample-basis')
+          .description('a result (an assay %) on another basis of the sample: as is ↔ dried, anhydrous, solvent-free; optional check against limits')
+          .argument('[results...]', "results such as '99.1 %'; - reads one per line")
+          .option('--from <basis>', 'the basis the result is on (as-is unless given)')
+          .option('--to <basis>', 'the basis wanted: dried, anhydrous, solvent-free, anhydrous-solvent-free, as-is'),
+      ),
+    ).option('--on <basis>', 'same as --to'),
+  ).action((inputs: string[], o: SampleBasisCli) => run('sample-basis', inputs, o));
+
+  withRounding(
+    withOutputOptions(
+      program
+        .command('replicates')
+        .description('mean, standard deviation, RSD and Student-t confidence interval of replicate results, reported to fit the uncertainty')
+        .argument('[lists...]', "one list per argument or line: '99.2 99.5 99.1 %'; - reads one list per line")
+        .option('--level <percent>', 'confidence level: 90, 95 (default) or 99'),
+    ),
+  ).action((inputs: string[], o: ReplicatesCli) => run('replicates', inputs, o));
+}
+
+/** Presenters of the QC commands, by name. */
+export const QC_PRESENTERS = {
+  titration: (o: TitrationCli) => withProtectedCells(titrationPresenter(o)),
+  standardise: (o: StandardiseCli) => withProtectedCells(standardisePresenter(o)),
+  'sample-basis': (o: SampleBasisCli) => withProtectedCells(sampleBasisPresenter(o)),
+  replicates: (o: ReplicatesCli) => withProtectedCells(replicatesPresenter(o)),
+};

@@ -1,0 +1,160 @@
+/**
+ * Milliequivalents, millimoles and milliosmoles of a salt. For a salt that
+ * splits into ions (see salt-ions.ts): mmol = mass ÷ M; mEq = mmol × the
+ * total charge of its cations per formula unit (for each ion, mmol of ion ×
+ * |charge|); mOsm = mmol × the particles per formula unit, assuming complete
+ * dissociation. Three directions:
+ *
+ * - a weighed mass → mmol, mEq, mOsm: a result, with the mass's figures;
+ * - a target mEq or mmol → the mass of salt to weigh: an instruction, at
+ *   working precision (four figures at least), with a note when the target has few;
+ * - a label strength → mmol/mL, mEq/mL, mEq/L and mOsm/L: the label's nominal
+ *   strength is taken as exact (noted) and the result kept at working
+ *   precision, unless the strength is marked as measured.
+ */
+import type { Note } from '../errors/issue.js';
+import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { AMOUNT, MASS } from '../calc/measure.js';
+import { readPositive } from '../assay/read-quantity.js';
+import { noteHydrateWater } from '../assay/hydrate-note.js';
+import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { reportedMolarMass } from '../mass/reported-mass.js';
+import { exact } from '../sigfig/measured.js';
+import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
+import { unitOf } from '../sigfig/units.js';
+import { saltIons, type SaltIons } from './salt-ions.js';
+import { readStrength, type Strength } from './strength.js';
+import { atWorkingPrecision, noteFewFigures } from './working-precision.js';
+
+export interface MilliequivalentOptions extends MassOptions {
+  /** A weighed mass of the salt: '1.500 g'. */
+  mass?: string;
+  /** A target in milliequivalents: '20 mEq' (or '0.020 Eq'). */
+  meq?: string;
+  /** A target in millimoles: '10 mmol'. */
+  mmol?: string;
+  /** A solution strength: '10 % w/v', '2 mg/mL', '0.154 M'. */
+  concentration?: string;
+  /** The strength was measured (keep its significant figures) rather than a label's nominal value. */
+  measured?: boolean;
+  /** The ions, when the salt is not split automatically: '2K^+,HPO4^2-'. */
+  ions?: string;
+}
+
+export interface IonAmount {
+  ion: string;
+  charge: number;
+  /** mmol (amount mode), or mmol per mL (strength mode), in base units of mol or mol/L. */
+  amount: Quantity;
+  /** mEq of this ion (as an amount of charge, stored in mol). */
+  equivalents: Quantity;
+}
+
+export interface MilliequivalentResult {
+  salt: MassResult;
+  ions: SaltIons;
+  mode: 'mass' | 'target' | 'strength';
+  /** The mass (given, or to weigh), g; null in strength mode. */
+  mass: Quantity | null;
+  /** Amount of salt (mol) or its molar concentration (mol/L). */
+  moles: Quantity;
+  /** Equivalents (mol of charge) or equivalents per litre. */
+  equivalents: Quantity;
+  /** Osmoles or osmoles per litre (complete dissociation). */
+  osmoles: Quantity;
+  perIon: IonAmount[];
+  strength: Strength | null;
+  notes: Note[];
+}
+
+/**
+ * Reads an amount written in mEq/Eq (as an amount of charge, in mol) or in mmol.
+ *
+ * @example
+ * readEquivalents('20 mEq', []).value.toString() // '0.02'
+ */
+export function readEquivalents(text: string, notes: Note[]): Quantity {
+  const m = /^(.*?)\s*(mEq|Eq)\s*$/.exec(text.trim());
+  if (!m) throw fail({ code: 'BAD_AMOUNT', message: `a milliequivalent target is written like '20 mEq'; got '${text}'` }, text);
+  return readPositive(`${m[1]} ${m[2] === 'mEq' ? 'mmol' : 'mol'}`, [AMOUNT], 'the target', notes);
+}
+
+const G_PER_MOL = unitOf('g/mol');
+
+/**
+ * mmol, mEq and mOsm of a salt from a mass, a target, or a strength.
+ *
+ * @example
+ * const r = milliequivalents('KCl', { concentration: '10 %' })
+ * displayQuantity(r.equivalents, 'M').text // '1.341 M'
+ */
+export function milliequivalents(saltText: string, o: MilliequivalentOptions): MilliequivalentResult {
+  const given = [o.mass, o.meq, o.mmol, o.concentration].filter((x) => x !== undefined).length;
+  if (given !== 1) throw fail({ code: 'USAGE', message: given === 0 ? 'give one of --mass, --meq, --mmol or --concentration' : 'give only one of --mass, --meq, --mmol and --concentration' });
+  const notes: Note[] = [];
+  const salt = formulaMass(saltText, o);
+  for (const n of salt.notes) notes.push(n);
+  noteHydrateWater(salt, notes);
+  const ions = saltIons(salt, o.ions, notes, o);
+  const M = quantity(reportedMolarMass(salt), G_PER_MOL);
+  const eqPer = quantity(exact(ions.equivalentsPerMole), null);
+  const osmPer = quantity(exact(ions.particles), null);
+  let mode: MilliequivalentResult['mode'];
+  let mass: Quantity | null = null;
+  let moles: Quantity;
+  let strength: Strength | null = null;
+  if (o.mass !== undefined) {
+    mode = 'mass';
+    mass = readPositive(o.mass, [MASS], 'the mass', notes);
+    moles = divide(mass, M);
+  } else if (o.concentration !== undefined) {
+    mode = 'strength';
+    strength = readStrength(o.concentration, 'w/v', notes, 'the strength');
+    if (strength.percent === 'w/w' || strength.percent === 'v/v') throw fail({ code: 'BAD_AMOUNT', message: `a % ${strength.percent} strength needs the solution's density to give mEq per mL; give it as % w/v, g/L or M` }, o.concentration);
+    const q = strength.value;
+    const perL = q.dims[1] === 1 ? q : divide(q.dims[0] === 0 ? multiply(q, quantity(exact(1000), unitOf('g/L'))) : q, M);
+    moles = o.measured ? perL : atWorkingPrecision(perL);
+    notes.push(
+      o.measured
+        ? { code: 'MEASURED_STRENGTH', message: 'the strength is a measured value: the results keep its significant figures' }
+        : { code: 'NOMINAL_STRENGTH', message: `the strength '${o.concentration.trim()}' is read as a label's nominal value, taken as exact; results keep working precision (4 figures); use --measured for a measured strength` },
+    );
+  } else {
+    mode = 'target';
+    let target: Quantity;
+    let text: string;
+    if (o.meq !== undefined) {
+      text = o.meq;
+      const eq = readEquivalents(o.meq, notes);
+      moles = divide(eq, eqPer);
+      target = eq;
+    } else {
+      text = o.mmol!;
+      moles = readPositive(o.mmol!, [AMOUNT], 'the target', notes);
+      target = moles;
+    }
+    noteFewFigures(target, text, 'the target', notes);
+    mass = atWorkingPrecision(multiply(moles, M));
+    if (o.meq !== undefined) moles = atWorkingPrecision(moles);
+  }
+  const fix = mode === 'mass' || (mode === 'strength' && o.measured) ? (q: Quantity) => q : atWorkingPrecision;
+  const equivalents = fix(multiply(moles, eqPer));
+  const osmoles = fix(multiply(moles, osmPer));
+  const perIon = ions.ions.map((i) => {
+    const amount = fix(multiply(moles, quantity(exact(i.count), null)));
+    return { ion: i.ion, charge: i.charge, amount, equivalents: fix(multiply(amount, quantity(exact(Math.abs(i.charge)), null))) };
+  });
+  notes.push({ code: 'MEQ_PER_MMOL', message: `1 mmol of ${salt.input} = ${ions.equivalentsPerMole} mEq (${ions.ions.map((i) => `${i.count === 1 ? '' : `${i.count} × `}${i.ion}`).join(', ')}) and ${ions.particles} mOsm` });
+  notes.push({ code: 'COMPLETE_DISSOCIATION', message: 'milliosmoles assume complete dissociation into the ions named; a measured osmolality is lower' });
+  return { salt, ions, mode, mass, moles, equivalents, osmoles, perIon, strength, notes };
+}
+
+/**
+ * {@link milliequivalents} without throwing.
+ *
+ * @example
+ * safeMilliequivalents('NaCl', { mass: '0.900 g' }).success // true
+ */
+export function safeMilliequivalents(saltText: string, o: MilliequivalentOptions): SafeResult<MilliequivalentResult> {
+  return toSafe(() => milliequivalents(saltText, o));
+}

@@ -1,0 +1,109 @@
+/**
+ * The osmolarity and the milliequivalents per litre of a solution of one or
+ * more salts, each given with its strength: 'NaCl=0.9 %' or
+ * 'NaCl=0.6 %, KCl=0.03 %, CaCl2·2H2O=0.02 %'. Each salt contributes its
+ * mmol/L × particles per formula unit (complete dissociation, noted); each ion
+ * its mmol/L × |charge|, summed over the salts that give it. Label strengths
+ * are taken as nominal (exact) and results kept at working precision unless
+ * the strengths are marked measured.
+ */
+import type { Note } from '../errors/issue.js';
+import { fail, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { Decimal } from '../exact/decimal.js';
+import type { MassOptions } from '../mass/formula-mass.js';
+import { add, type Quantity } from '../sigfig/quantity.js';
+import { milliequivalents, type MilliequivalentResult } from './milliequivalents.js';
+import { atWorkingPrecision } from './working-precision.js';
+
+export interface OsmolarityOptions extends MassOptions {
+  /** Strengths are measured values (keep their figures) rather than nominal label values. */
+  measured?: boolean;
+}
+
+export interface OsmolarityComponent {
+  salt: string;
+  strength: string;
+  result: MilliequivalentResult;
+}
+
+export interface IonTotal {
+  ion: string;
+  charge: number;
+  /** mmol/L of the ion, in mol/L. */
+  molarity: Quantity;
+  /** mEq/L of the ion, in mol/L of charge. */
+  equivalents: Quantity;
+}
+
+export interface OsmolarityResult {
+  components: OsmolarityComponent[];
+  /** Total osmolarity, osmol/L (complete dissociation). */
+  osmolarity: Quantity;
+  ions: IonTotal[];
+  notes: Note[];
+}
+
+/** Most salts in one solution. */
+export const MAX_COMPONENTS = 50;
+
+/**
+ * Osmolarity and mEq/L of a solution of salts.
+ *
+ * @example
+ * const r = osmolarity('NaCl=0.9 %')
+ * displayQuantity(r.osmolarity, 'mM').figure // '308.0'
+ */
+export function osmolarity(text: string, o: OsmolarityOptions = {}): OsmolarityResult {
+  const pieces = text.split(/[;,]/).map((s) => s.trim()).filter((s) => s !== '');
+  if (pieces.length === 0) throw fail({ code: 'EMPTY_INPUT', message: "give the salts and their strengths: 'NaCl=0.9 %'" }, text);
+  if (pieces.length > MAX_COMPONENTS) throw fail({ code: 'INPUT_TOO_LONG', message: `more than ${MAX_COMPONENTS} salts in one solution` }, text);
+  const notes: Note[] = [];
+  const components: OsmolarityComponent[] = [];
+  for (const piece of pieces) {
+    const eq = piece.indexOf('=');
+    if (eq <= 0) throw fail({ code: 'BAD_RECORD', message: `each salt is written SALT=STRENGTH, e.g. 'NaCl=0.9 %'; got '${piece}'`, column: text.indexOf(piece) + 1 }, text);
+    const salt = piece.slice(0, eq).trim();
+    const strength = piece.slice(eq + 1).trim();
+    let result: MilliequivalentResult;
+    try {
+      result = milliequivalents(salt, { ...o, concentration: strength, measured: o.measured });
+    } catch (e) {
+      if (e instanceof PondusError && e.first.code !== 'USAGE') throw fail({ code: e.first.code, message: `${salt}: ${e.first.message}`, column: text.indexOf(piece) + 1, hint: e.first.hint }, text);
+      throw e;
+    }
+    for (const n of result.notes) if (n.code !== 'COMPLETE_DISSOCIATION' && n.code !== 'NOMINAL_STRENGTH' && n.code !== 'MEASURED_STRENGTH') notes.push({ ...n, message: n.message.startsWith(salt) ? n.message : `${salt}: ${n.message}` });
+    components.push({ salt, strength, result });
+  }
+  let total: Quantity | null = null;
+  const byIon = new Map<string, IonTotal>();
+  for (const c of components) {
+    total = total ? add(total, c.result.osmoles) : c.result.osmoles;
+    for (const i of c.result.perIon) {
+      const key = `${i.ion}`;
+      const prev = byIon.get(key);
+      byIon.set(key, prev ? { ...prev, molarity: add(prev.molarity, i.amount), equivalents: add(prev.equivalents, i.equivalents) } : { ion: i.ion, charge: i.charge, molarity: i.amount, equivalents: i.equivalents });
+    }
+  }
+  const fix = o.measured ? (q: Quantity) => q : atWorkingPrecision;
+  const ions = [...byIon.values()].map((i) => ({ ...i, molarity: fix(i.molarity), equivalents: fix(i.equivalents) }));
+  const cations = ions.filter((i) => i.charge > 0).reduce((s, i) => s.plus(i.equivalents.value), new Decimal(0));
+  const anions = ions.filter((i) => i.charge < 0).reduce((s, i) => s.plus(i.equivalents.value), new Decimal(0));
+  if (!cations.minus(anions).abs().lte(cations.times('1e-9'))) notes.push({ code: 'CHARGE_IMBALANCE', message: 'the cations and anions do not balance: check the ions read' });
+  notes.push(
+    o.measured
+      ? { code: 'MEASURED_STRENGTH', message: 'the strengths are measured values: the results keep their significant figures' }
+      : { code: 'NOMINAL_STRENGTH', message: 'the strengths are read as nominal label values, taken as exact; results keep working precision (4 figures); use --measured for measured strengths' },
+  );
+  notes.push({ code: 'COMPLETE_DISSOCIATION', message: 'the osmolarity assumes complete dissociation into the ions named (ideal); a measured osmolality is lower' });
+  return { components, osmolarity: fix(total!), ions, notes };
+}
+
+/**
+ * {@link osmolarity} without throwing.
+ *
+ * @example
+ * safeOsmolarity('NaCl').success // false
+ */
+export function safeOsmolarity(text: string, o: OsmolarityOptions = {}): SafeResult<OsmolarityResult> {
+  return toSafe(() => osmolarity(text, o));
+}

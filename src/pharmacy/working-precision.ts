@@ -1,0 +1,39 @@
+/**
+ * Instructions computed from targets (a salt mass for a target mEq, the
+ * amounts to mix in alligation) keep working precision: at least four
+ * significant figures, whatever the figures of the target, with a note when
+ * the target was written with fewer.
+ */
+import type { Note } from '../errors/issue.js';
+import { lsdForSigFigs, sigFigsOf } from '../sigfig/measured.js';
+import type { Quantity } from '../sigfig/quantity.js';
+
+/** Significant figures an instruction keeps at least. */
+export const WORKING_FIGURES = 4;
+
+/**
+ * The quantity shown with at least four significant figures (more when its inputs carry more).
+ *
+ * @example
+ * displayQuantity(atWorkingPrecision(measure('2.0 g')), 'g').text // '2.000 g'
+ */
+export function atWorkingPrecision(q: Quantity): Quantity {
+  if (q.value.isZero()) return { ...q, lsd: -WORKING_FIGURES };
+  const n = q.lsd === null ? WORKING_FIGURES : Math.max(WORKING_FIGURES, sigFigsOf(q));
+  return { ...q, lsd: lsdForSigFigs(q.value, n) };
+}
+
+/**
+ * Adds a TARGET_FEW_FIGURES note when a target has fewer than four significant figures.
+ *
+ * @example
+ * const notes = []
+ * noteFewFigures(measure('20 mmol'), '20 mmol', 'the target', notes)
+ * notes[0].code // 'TARGET_FEW_FIGURES'
+ */
+export function noteFewFigures(target: Quantity, text: string, what: string, notes: Note[]): void {
+  const n = sigFigsOf(target);
+  if (n < WORKING_FIGURES) {
+    notes.push({ code: 'TARGET_FEW_FIGURES', message: `${what} '${text.trim()}' has ${n} significant figure${n === 1 ? '' : 's'}; the instruction keeps working precision (${WORKING_FIGURES} figures), which does not make the target more exact` });
+  }
+}
