@@ -18,6 +18,7 @@ import { registerReact } from './commands/react.js';
 import { registerComposition } from './commands/composition.js';
 import { outputFormat } from './commands/common.js';
 import { registerMass } from './commands/mass.js';
+import { registerIonCommands } from './commands/ion.js';
 import type { CommandRunner } from './commands/runner.js';
 import { PRESENTERS } from './commands/registry.js';
 import { fixedBatch, inputBatches } from './input/inputs.js';
@@ -90,6 +91,7 @@ export async function main(args: string[], io: CliIo): Promise<number> {
   registerReact(program, run);
   registerPrepare(program, run);
   registerConversions(program, run);
+  registerIonCommands(program, run, io.stdin);
 
   try {
     await program.parseAsync(args, { from: 'user' });

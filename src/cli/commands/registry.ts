@@ -12,6 +12,8 @@ import { reactPresenter } from './react.js';
 import { calcPresenter } from './calc.js';
 import { compositionPresenter } from './composition.js';
 import { massPresenter } from './mass.js';
+import { ionPresenter } from './ion.js';
+import { patternPresenter } from './pattern.js';
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
 type Factory = (options: any) => Presenter<any>;
@@ -31,4 +33,6 @@ export const PRESENTERS: Readonly<Record<string, Factory>> = Object.freeze({
   empirical: empiricalPresenter,
   combustion: combustionPresenter,
   candidates: candidatesPresenter,
+  ion: ionPresenter,
+  pattern: patternPresenter,
 });
