@@ -92,3 +92,22 @@ export { combustion, safeCombustion, PRODUCTS, type CombustionResult, type Combu
 export { candidateFormulas, safeCandidateFormulas, rdbe, readRanges, DEFAULT_RANGES, type Candidate, type CandidateResult, type CandidateOptions } from './empirical/candidates.js';
 export { readMeasurementSheet, type MeasurementRow } from './empirical/measurement-sheet.js';
 export { readCsvSheet, elementColumns, type CsvSheet, type CsvRow } from './sheets/read-sheet.js';
+
+// ions and isotope patterns
+export { readIonNotation, isIonNotation } from './ions/read-ion-notation.js';
+export type { IonNotation, IonTerm } from './ions/ion-notation.js';
+export { ionMass, safeIonMass, type IonResult, type IonOptions } from './ions/ion-mass.js';
+export { massError, type MassError } from './ions/mass-error.js';
+export { hrmsLine, type HrmsLineParts } from './ions/hrms-line.js';
+export { ionJson, type IonJson } from './ions/ion-json.js';
+export { readIonLine, type IonLine } from './ions/read-ion-line.js';
+export { readIonSheet, type IonSheetRow } from './ions/ion-sheet.js';
+export { USUAL_CHARGE } from './ions/usual-charges.js';
+export { isotopePattern, safeIsotopePattern, type PatternResult, type PatternOptions, type PatternPeak } from './isotope-pattern/pattern.js';
+export { patternJson, type PatternJson } from './isotope-pattern/pattern-json.js';
+export { patternSvg, type SvgOptions } from './isotope-pattern/pattern-svg.js';
+export { stickPlot, type StickPlotOptions } from './isotope-pattern/stick-plot.js';
+export { resolvePeaks, type Stick } from './isotope-pattern/resolve-peaks.js';
+export { fineStructure, MAX_ISOTOPOLOGUES, type FineStructure, type Isotopologue } from './isotope-pattern/fine-structure.js';
+export { aggregatedDistribution, MAX_BINS, type NominalDistribution } from './isotope-pattern/aggregated.js';
+export { atomIsotopes, isotopeAverage, type AtomIsotopes } from './isotope-pattern/isotope-table.js';

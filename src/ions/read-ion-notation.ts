@@ -208,7 +208,15 @@ function readTermText(r: Reader): string {
   let s = '';
   let depth = 0;
   while (r.cur() !== undefined && !isSpace(r.cur())) {
-    const c = r.cur();
+    const c = r.cur()!;
+    if (c === '^') {
+      // a charge written on the term: keep it with the term, so the term is refused as charged
+      s += c;
+      r.i++;
+      while (isDigit(r.cur())) s += r.chars[r.i++];
+      if (isSign(r.cur())) s += r.chars[r.i++];
+      continue;
+    }
     if (c === '(' || c === '{') depth++;
     if (c === ')' || c === '}') depth--;
     if (depth <= 0 && (isSign(c) || c === ']')) {

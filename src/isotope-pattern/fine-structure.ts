@@ -10,6 +10,7 @@
  * isotopologues that reaches the coverage is kept.
  */
 import { fail } from '../errors/pondus-error.js';
+import { atomIsotopes } from './isotope-table.js';
 import { marginal, MODE_ONLY, type Marginal } from './marginal.js';
 
 /** One isotopologue. */
@@ -37,7 +38,7 @@ export const MAX_ISOTOPOLOGUES = 300_000;
  * @example
  * fineStructure(new Map([['C', 1], ['H', 4]]), 0.999).isotopologues[0].label // '' (12C 1H4)
  */
-export function fineStructure(atoms: Map<string, number>, coverage: number, principal: (key: string) => number, isotopeNames: (key: string) => string[], input?: string): FineStructure {
+export function fineStructure(atoms: Map<string, number>, coverage: number, input?: string): FineStructure {
   const keys = [...atoms.keys()].filter((k) => atoms.get(k)! > 0);
   // the best configuration of each element: its probability bounds the others' thresholds
   const modes = keys.map((k) => marginal(k, atoms.get(k)!, MODE_ONLY).probs[0]);
@@ -47,7 +48,7 @@ export function fineStructure(atoms: Map<string, number>, coverage: number, prin
     const target = coverage >= 1 ? 0 : t;
     const margs: Marginal[] = keys.map((k, e) => marginal(k, atoms.get(k)!, target === 0 ? 0 : target / (modeProduct / modes[e]) / 1.000001, input));
     const found = enumerate(margs, target, input);
-    if (found.total >= coverage - 1e-12 || coverage >= 1 || t < 1e-300) return keep(found, margs, coverage, principal, isotopeNames);
+    if (found.total >= coverage - 1e-12 || coverage >= 1 || t < 1e-300) return keep(found, margs, coverage);
     t /= 10;
   }
   throw fail({ code: 'PATTERN_TOO_LARGE', message: 'the fine structure did not reach the coverage asked for' }, input);
@@ -93,7 +94,9 @@ function enumerate(margs: Marginal[], t: number, input?: string): Found {
   return out;
 }
 
-function keep(f: Found, margs: Marginal[], coverage: number, principal: (key: string) => number, isotopeNames: (key: string) => string[]): FineStructure {
+function keep(f: Found, margs: Marginal[], coverage: number): FineStructure {
+  const principal = (key: string) => atomIsotopes(key).principal;
+  const isotopeNames = (key: string) => atomIsotopes(key).massNumbers.map((a) => `${a}${atomIsotopes(key).symbol}`);
   const E = margs.length;
   const order = f.probs.map((_, i) => i).sort((a, b) => f.probs[b] - f.probs[a]);
   const out: Isotopologue[] = [];

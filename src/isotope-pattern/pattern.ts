@@ -7,7 +7,7 @@
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { ELECTRON_MASS } from '../elements/constants.js';
-import { Decimal } from '../exact/decimal.js';
+import type { Decimal } from '../exact/decimal.js';
 import { isWhole } from '../formula/amount.js';
 import { flattenFormula } from '../formula/flatten.js';
 import { hillFormula } from '../formula/hill.js';
@@ -152,7 +152,7 @@ export function isotopePattern(formula: string | null, options: PatternOptions =
       all.push({ mz: toMz(d.pm[i] / d.p[i]), abundance: d.p[i], relative: (d.p[i] / max) * 100, shift: d.offset + i - monoNominal, label: null, isotopologues: null });
     }
   } else {
-    const fs = fineStructure(atoms, coverage, (k) => atomIsotopes(k).principal, (k) => atomIsotopes(k).massNumbers.map((a) => `${a}${atomIsotopes(k).symbol}`), input);
+    const fs = fineStructure(atoms, coverage, input);
     covered = fs.coverage;
     let sticks: Stick[] = fs.isotopologues.map((i) => ({ mz: toMz(i.mass), abundance: i.probability, label: i.label, members: 1 }));
     sticks = R !== undefined ? resolvePeaks(sticks, R) : sticks.sort((a, b) => a.mz - b.mz);
@@ -199,9 +199,3 @@ export function isotopePattern(formula: string | null, options: PatternOptions =
 export function safeIsotopePattern(formula: string | null, options: PatternOptions = {}): SafeResult<PatternResult> {
   return toSafe(() => isotopePattern(formula, options));
 }
-
-/** Exact decimal text of a monoisotopic m/z, for JSON. */
-export function exactText(d: Decimal): string {
-  return d.toDecimalPlaces(15).toFixed();
-}
-void Decimal;
