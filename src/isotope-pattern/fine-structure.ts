@@ -18,8 +18,8 @@ export interface Isotopologue {
   /** Neutral mass in u. */
   mass: number;
   probability: number;
-  /** Heavy isotopes beyond each element's principal one, e.g. '[13C]2[37Cl]'; '' for the monoisotopic species. */
-  label: string;
+  /** Heavy isotopes beyond each element's principal one, e.g. '[13C]2[37Cl]'; '' for the monoisotopic species; null beyond the 5,000 most probable. */
+  label: string | null;
 }
 
 /** The isotopologues kept, most probable first, with the share of probability they hold. */
@@ -29,7 +29,7 @@ export interface FineStructure {
 }
 
 /** Most isotopologues a fine structure may hold (the bound on time and memory). */
-export const MAX_ISOTOPOLOGUES = 300_000;
+export const MAX_ISOTOPOLOGUES = 131_072;
 
 /**
  * The fine structure of a set of atoms to a coverage (0 < coverage ≤ 1; 1 lists every
@@ -55,68 +55,104 @@ export function fineStructure(atoms: Map<string, number>, coverage: number, inpu
 }
 
 interface Found {
-  probs: number[];
-  masses: number[];
+  probs: Float64Array;
+  masses: Float64Array;
   /** marginal indices, margs.length per isotopologue */
-  idx: number[];
+  idx: Int32Array;
+  n: number;
   total: number;
 }
 
 function enumerate(margs: Marginal[], t: number, input?: string): Found {
   const E = margs.length;
+  if (E === 0) return { probs: Float64Array.of(1), masses: Float64Array.of(0), idx: new Int32Array(0), n: 1, total: 1 };
   const suffix = new Float64Array(E + 1);
   suffix[E] = 1;
   for (let e = E - 1; e >= 0; e--) suffix[e] = suffix[e + 1] * margs[e].probs[0];
-  const out: Found = { probs: [], masses: [], idx: [], total: 0 };
+  let cap = 1024;
+  const out: Found = { probs: new Float64Array(cap), masses: new Float64Array(cap), idx: new Int32Array(cap * E), n: 0, total: 0 };
   const chosen = new Int32Array(E);
-  const walk = (e: number, p: number, m: number) => {
+  const grow = () => {
+    cap *= 2;
+    const p = new Float64Array(cap);
+    p.set(out.probs);
+    const m = new Float64Array(cap);
+    m.set(out.masses);
+    const ix = new Int32Array(cap * E);
+    ix.set(out.idx);
+    out.probs = p;
+    out.masses = m;
+    out.idx = ix;
+  };
+  const last = margs[E - 1];
+  const walk = (e: number, p: number, m: number): void => {
+    if (e === E - 1) {
+      const probs = last.probs;
+      const masses = last.masses;
+      for (let i = 0; i < probs.length; i++) {
+        const q = p * probs[i];
+        if (q < t) break;
+        if (out.n === cap) {
+          if (cap >= MAX_ISOTOPOLOGUES) {
+            throw fail({ code: 'PATTERN_TOO_LARGE', message: `more than ${MAX_ISOTOPOLOGUES.toLocaleString('en-US')} isotopologues are needed for this coverage (those found so far hold ${(out.total * 100).toFixed(2)} %); ask for a lower --coverage, or the aggregated pattern` }, input);
+          }
+          grow();
+        }
+        const k = out.n++;
+        out.probs[k] = q;
+        out.masses[k] = m + masses[i];
+        const base = k * E;
+        for (let f = 0; f < E - 1; f++) out.idx[base + f] = chosen[f];
+        out.idx[base + E - 1] = i;
+        out.total += q;
+      }
+      return;
+    }
     const mg = margs[e];
     const rest = suffix[e + 1];
     for (let i = 0; i < mg.probs.length; i++) {
       const q = p * mg.probs[i];
       if (q * rest < t) break;
       chosen[e] = i;
-      if (e === E - 1) {
-        out.probs.push(q);
-        out.masses.push(m + mg.masses[i]);
-        for (let f = 0; f < E; f++) out.idx.push(chosen[f]);
-        out.total += q;
-        if (out.probs.length > MAX_ISOTOPOLOGUES) {
-          throw fail({ code: 'PATTERN_TOO_LARGE', message: `more than ${MAX_ISOTOPOLOGUES.toLocaleString('en-US')} isotopologues are needed for this coverage (those found so far hold ${(out.total * 100).toFixed(2)} %); ask for a lower --coverage, or the aggregated pattern` }, input);
-        }
-      } else {
-        walk(e + 1, q, m + mg.masses[i]);
-      }
+      walk(e + 1, q, m + mg.masses[i]);
     }
   };
-  if (E === 0) return { probs: [1], masses: [0], idx: [], total: 1 };
   walk(0, 1, 0);
   return out;
 }
 
+/** Isotopologues beyond this many (the least probable) are kept without a label. */
+const LABELLED = 5000;
+
 function keep(f: Found, margs: Marginal[], coverage: number): FineStructure {
-  const principal = (key: string) => atomIsotopes(key).principal;
-  const isotopeNames = (key: string) => atomIsotopes(key).massNumbers.map((a) => `${a}${atomIsotopes(key).symbol}`);
   const E = margs.length;
-  const order = f.probs.map((_, i) => i).sort((a, b) => f.probs[b] - f.probs[a]);
+  const order = new Uint32Array(f.n);
+  for (let i = 0; i < f.n; i++) order[i] = i;
+  const probs = f.probs;
+  const sorted = Array.from(order).sort((a, b) => probs[b] - probs[a]);
+  const info = margs.map((mg) => {
+    const iso = atomIsotopes(mg.key);
+    return { principal: iso.principal, names: iso.massNumbers.map((a) => `${a}${iso.symbol}`) };
+  });
   const out: Isotopologue[] = [];
   let total = 0;
-  for (const i of order) {
+  for (const i of sorted) {
     if (total >= coverage && coverage < 1) break;
-    let label = '';
-    for (let e = 0; e < E; e++) {
-      const mg = margs[e];
-      const c = f.idx[i * E + e];
-      const names = isotopeNames(mg.key);
-      const pr = principal(mg.key);
-      for (let j = 0; j < mg.k; j++) {
-        if (j === pr) continue;
-        const n = mg.counts[c * mg.k + j];
-        if (n > 0) label += `[${names[j]}]${n === 1 ? '' : n}`;
+    let label: string | null = null;
+    if (out.length < LABELLED) {
+      label = '';
+      for (let e = 0; e < E; e++) {
+        const mg = margs[e];
+        const c = f.idx[i * E + e];
+        for (let j = 0; j < mg.k; j++) {
+          if (j === info[e].principal) continue;
+          const n = mg.counts[c * mg.k + j];
+          if (n > 0) label += `[${info[e].names[j]}]${n === 1 ? '' : n}`;
+        }
       }
     }
-    out.push({ mass: f.masses[i], probability: f.probs[i], label });
-    total += f.probs[i];
+    out.push({ mass: f.masses[i], probability: probs[i], label });
+    total += probs[i];
   }
   return { isotopologues: out, coverage: total };
 }

@@ -122,7 +122,11 @@ export function isotopePattern(formula: string | null, options: PatternOptions =
   const z = Math.abs(charge) || 1;
   const electrons = Number(ELECTRON_MASS) * charge;
   const toMz = (mass: number) => (mass - electrons) / z;
-  const monoNominal = Math.round(mono.times(z).toNumber());
+  let monoNominal = 0;
+  for (const [key, n] of atoms) {
+    const iso = atomIsotopes(key);
+    monoNominal += n * iso.massNumbers[iso.principal];
+  }
 
   // notes on the isotope data used
   const labels: string[] = [];

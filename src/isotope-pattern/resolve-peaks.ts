@@ -11,8 +11,8 @@
 export interface Stick {
   mz: number;
   abundance: number;
-  /** The most abundant member's label (heavy isotopes). */
-  label: string;
+  /** The most abundant member's label (heavy isotopes), or null when not known. */
+  label: string | null;
   /** How many isotopologues it holds. */
   members: number;
 }
