@@ -18,6 +18,8 @@ import type { IonNotation } from './ion-notation.js';
 import { readIonNotation } from './read-ion-notation.js';
 import { usualCharge } from './usual-charges.js';
 import { hrmsLine } from './hrms-line.js';
+import { aggregatedDistribution, estimatedBins, MAX_BINS } from '../isotope-pattern/aggregated.js';
+import { atomIsotopes } from '../isotope-pattern/isotope-table.js';
 
 /** Options for {@link ionMass}. */
 export interface IonOptions extends ParseOptions {
@@ -157,6 +159,10 @@ export function ionMass(formula: string | null, ion: string | IonNotation | null
   const ionMassValue = monoisotopic(ionAtoms).minus(new Decimal(ELECTRON_MASS).times(charge));
   const mz = ionMassValue.div(Math.abs(charge));
   const calculatedText = mz.toFixed(decimals);
+  const top = mostAbundantPeak(ionAtoms as Map<string, number>, charge);
+  if (top && top.shift !== 0) {
+    notes.push({ code: 'MOST_ABUNDANT_PEAK', message: `the m/z given is the monoisotopic ion's; the most intense peak of the isotope cluster is M${top.shift > 0 ? '+' : '-'}${Math.abs(top.shift)} at m/z ${top.mz.toFixed(decimals)} (see the pattern command)` });
+  }
   let found: MassError | null = null;
   let reportLine: string | null = null;
   if (options.found !== undefined) {
@@ -229,6 +235,21 @@ export function monoisotopic(atoms: AtomCounts): Decimal {
     m = m.plus(new Decimal(d.monoisotopic.text).times(n as number));
   }
   return m;
+}
+
+/** The largest peak of the aggregated pattern, as a nominal shift from the monoisotopic ion and its centroid m/z. */
+function mostAbundantPeak(atoms: Map<string, number>, charge: number): { shift: number; mz: number } | null {
+  if (estimatedBins(atoms) > MAX_BINS) return null;
+  const d = aggregatedDistribution(atoms);
+  let best = 0;
+  for (let i = 1; i < d.p.length; i++) if (d.p[i] > d.p[best]) best = i;
+  let nominal = 0;
+  for (const [key, n] of atoms) {
+    const iso = atomIsotopes(key);
+    nominal += n * iso.massNumbers[iso.principal];
+  }
+  const z = Math.abs(charge);
+  return { shift: (d.offset + best - nominal) / z, mz: (d.pm[best] / d.p[best] - Number(ELECTRON_MASS) * charge) / z };
 }
 
 /** Electrons of the neutral atoms: the sum of atomic numbers. */

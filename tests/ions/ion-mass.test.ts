@@ -104,6 +104,13 @@ describe('never silent about charges', () => {
     expect(ionMass('NO2', 'M+•').notes.map((n) => n.code)).toContain('ELECTRON_PARITY');
   });
 
+  it('points to the most intense peak of the cluster when it is not the monoisotopic one', () => {
+    const br = ionMass('Br2', 'M+•');
+    expect(br.notes.map((n) => n.code)).toEqual(['MOST_ABUNDANT_PEAK']);
+    expect(br.notes[0].message).toContain('M+2 at m/z 159.8341');
+    expect(ionMass('C15H15NO2', '[M+H]+').notes).toEqual([]);
+  });
+
   it('notes a formula of several components and refuses neutral formulas without an ion', () => {
     expect(ionMass('C11H15N·HCl', '[M+H]+').notes[0].code).toBe('WHOLE_FORMULA');
     expect(errorCode(() => ionMass('C6H6', null))).toBe('BAD_ION');
