@@ -27,7 +27,7 @@ export interface IonJson {
  * rounded to one decimal as reported; `errorPpmExact` keeps the unrounded value.
  *
  * @example
- * ionJson(ionMass('C15H15NO2', '[M+H]+', { found: '242.1172' })).errorPpm // -1.6
+ * ionJson(ionMass('C15H15NO2', '[M+H]+', { found: '242.1172' })).errorPpm // -1.5
  */
 export function ionJson(r: IonResult, extra: Record<string, unknown> = {}): IonJson & Record<string, unknown> {
   return {

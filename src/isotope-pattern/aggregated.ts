@@ -101,7 +101,7 @@ export function power(d: NominalDistribution, n: number): NominalDistribution {
  * widest single-atom spread.
  *
  * @example
- * estimatedBins(new Map([['C', 60]])) // 13
+ * estimatedBins(new Map([['C', 60]])) // 15
  */
 export function estimatedBins(atoms: Map<string, number>): number {
   let variance = 0;

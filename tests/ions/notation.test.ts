@@ -127,3 +127,19 @@ describe('batch lines and sheets', () => {
     expect(errorCode(() => readIonSheet('id,ion\nA,[M+H]+\n'))).toBe('BAD_RECORD');
   });
 });
+
+describe('any text', () => {
+  it('is read or refused with a PondusError, never a crash', async () => {
+    const fc = (await import('fast-check')).default;
+    const { ionMass } = await import('../../src/ions/ion-mass.js');
+    const pieces = fc.constantFrom('[', ']', 'M', '2', '+', '-', '−', '•', '.', 'H', 'Na', 'H2O', ' ', '(', ')', '^', '⁺', '²', 'm', 'Cl', 'x', '\u0000', '[13C]');
+    fc.assert(
+      fc.property(fc.oneof(fc.string(), fc.array(pieces, { maxLength: 14 }).map((a) => a.join(''))), (text) => {
+        expect(errorCode(() => readIonNotation(text))).not.toBe('INTERNAL_ERROR');
+        expect(errorCode(() => ionMass('C6H6', text))).not.toBe('INTERNAL_ERROR');
+        expect(errorCode(() => readIonLine(text))).not.toBe('INTERNAL_ERROR');
+      }),
+      { numRuns: 1500 },
+    );
+  });
+});

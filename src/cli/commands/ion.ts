@@ -39,7 +39,12 @@ function fields(input: string, o: IonCliOptions): { formula: string | null; ion:
   return { formula: line.formula, ion: line.ion ?? o.adduct ?? null, found: line.found ?? o.found, id: row ? row.id : null };
 }
 
-/** The presenter for `pondus ion`. */
+/**
+ * The presenter for `pondus ion`.
+ *
+ * @example
+ * ionPresenter({ adduct: '[M+H]+' }).compute('C15H15NO2').result.calculatedText // '242.1176'
+ */
 export function ionPresenter(o: IonCliOptions): Presenter<IonRow> {
   const decimals = o.decimals === undefined ? 4 : Number(o.decimals);
   if (!Number.isInteger(decimals) || decimals < 0 || decimals > 8) throw fail({ code: 'USAGE', message: `--decimals takes a whole number from 0 to 8, not '${o.decimals}'` });
@@ -65,7 +70,12 @@ export function ionPresenter(o: IonCliOptions): Presenter<IonRow> {
   };
 }
 
-/** Registers `pondus ion` and `pondus pattern`. */
+/**
+ * Registers `pondus ion` and `pondus pattern`.
+ *
+ * @example
+ * registerIonCommands(program, run, () => process.stdin)
+ */
 export function registerIonCommands(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void {
   withOutputOptions(
     program

@@ -32,7 +32,12 @@ function positive(text: string | undefined, name: string, max: number): number |
   return n;
 }
 
-/** The presenter for `pondus pattern`. */
+/**
+ * The presenter for `pondus pattern`.
+ *
+ * @example
+ * patternPresenter({ resolution: '60000' }).compute('C15H15NO2 [M+H]+').kind // 'fine'
+ */
 export function patternPresenter(o: PatternCliOptions): Presenter<PatternResult> {
   const resolvingPower = positive(o.resolution, 'resolution', 1e8);
   const coveragePercent = positive(o.coverage, 'coverage', 100);
@@ -90,7 +95,12 @@ export function patternPresenter(o: PatternCliOptions): Presenter<PatternResult>
   };
 }
 
-/** Registers `pondus pattern`. */
+/**
+ * Registers `pondus pattern`.
+ *
+ * @example
+ * registerPattern(program, run)
+ */
 export function registerPattern(program: Command, run: CommandRunner): void {
   withOutputOptions(
     program
