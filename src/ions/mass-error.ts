@@ -2,7 +2,11 @@
  * The error of a found m/z against the calculated one, with the sign used in
  * accurate-mass reports (common practice): error = found − calculated, in ppm
  * relative to the calculated value, (found − calculated)/calculated × 10⁶, and in mDa.
- * A found value above the calculated one gives a positive error.
+ * A found value above the calculated one gives a positive error. Brenton & Godfrey, "Accurate
+ * mass measurement: terminology and treatment of data", J. Am. Soc. Mass Spectrom. 21 (2010)
+ * 1821, define the mass measurement error this way (measured less theoretical, relative to the
+ * theoretical value; the formula as we recall it, from memory). The ppm error is computed from
+ * the unrounded calculated m/z, not from the four decimals printed.
  */
 import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';

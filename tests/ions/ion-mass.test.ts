@@ -129,6 +129,7 @@ describe('never silent about charges', () => {
 });
 
 describe('mass error and the report line', () => {
+  // common practice; source: Brenton & Godfrey, J. Am. Soc. Mass Spectrom. 21 (2010) 1821 (from memory)
   it('uses (found − calculated)/calculated × 10⁶ (common practice), positive when found is higher', () => {
     const calc = new Decimal('500.0000');
     expect(massError('500.0010', calc).ppm.toNumber()).toBeCloseTo(2, 12);
