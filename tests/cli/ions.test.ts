@@ -28,7 +28,8 @@ describe('pondus ion', () => {
     const r = pondus(['ion', '--json', '-'], 'C15H15NO2 [M+H]+ 242.1172\nC6H6 [M+Q]+\n[C6H12O6+Na]+ 203.0524\nC6H12O6 [M + Na]+\n');
     expect(r.status).toBe(1);
     const out = jsonLines(r.stdout);
-    expect(out.map((o) => o.input)).toEqual(['C15H15NO2', 'C6H6 [M+Q]+', '[C6H12O6+Na]+', 'C6H12O6']);
+    expect(out.map((o) => o.input)).toEqual(['C15H15NO2 [M+H]+ 242.1172', 'C6H6 [M+Q]+', '[C6H12O6+Na]+ 203.0524', 'C6H12O6 [M + Na]+']);
+    expect(out[0].formula).toBe('C15H15NO2');
     expect(out[0].errorPpm).toBe(-1.5);
     expect(out[1]).toMatchObject({ line: 2, error: { code: 'UNKNOWN_ELEMENT', column: 4 } });
     expect(out[2].reportLine).toBe('HRMS (ESI) m/z: [M + Na]+ calcd for C6H12NaO6 203.0526; found 203.0524.');
@@ -43,7 +44,7 @@ describe('pondus ion', () => {
     const r = pondus(['ion', '--sheet', sheet, '--json']);
     expect(r.status).toBe(1);
     const out = jsonLines(r.stdout);
-    expect(out[0]).toMatchObject({ id: 'JK-1', errorPpm: -1.5 });
+    expect(out[0]).toMatchObject({ id: 'JK-1', input: 'C15H15NO2', errorPpm: -1.5 });
     expect(out[1]).toMatchObject({ id: 'JK-2', errorPpm: 0.8, errorMDa: 0.2 });
     expect(out[2]).toMatchObject({ line: 4, error: { code: 'BAD_ION' } });
     const csv = pondus(['ion', '--sheet', sheet, '--csv']).stdout.split('\n');
@@ -102,7 +103,7 @@ describe('pondus pattern', () => {
     expect(rows).toHaveLength(4);
     expect(rows[0].startsWith('input,formula,ion,speciesFormula,charge,kind,resolvingPower,coverage,monoisotopicMz,averageMz,mz1,relative1,')).toBe(true);
     expect(rows[1]).toMatch(/^Cl2,Cl2,,Cl2,0,aggregated,,1,69\.937705388,/);
-    expect(rows[2]).toContain('[M+H]+,C6H7^+,1,');
+    expect(rows[2]).toMatch(/^C6H6 \[M\+H\]\+,C6H6,\[M\+H\]\+,C6H7\^\+,1,/);
     expect(rows[3]).toContain('UNKNOWN_ELEMENT');
   });
 

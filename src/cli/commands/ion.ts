@@ -22,6 +22,8 @@ export interface IonCliOptions extends SheetOptions<IonSheetRow> {
 interface IonRow {
   result: IonResult;
   id: string | null;
+  /** The input as given (a batch line keeps its ion and found m/z); a sheet row gives its formula. */
+  input: string;
 }
 
 /**
@@ -54,11 +56,12 @@ export function ionPresenter(o: IonCliOptions): Presenter<IonRow> {
   return {
     compute: (input) => {
       const f = fields(input, o);
-      return { result: ionMass(f.formula, f.ion, { ...opts, found: f.found }), id: f.id };
+      const result = ionMass(f.formula, f.ion, { ...opts, found: f.found });
+      return { result, id: f.id, input: o.sheetRows?.[input] ? result.input : input };
     },
-    json: ({ result, id }) => ionJson(result, id !== null ? { id } : {}),
+    json: ({ result, id, input }) => ({ ...ionJson(result, id !== null ? { id } : {}), input }),
     columns: ['input', 'id', 'formula', 'ion', 'ionFormula', 'charge', 'mz', 'calculated', 'found', 'errorPpm', 'errorMDa', 'reportLine', 'notes'],
-    cells: ({ result: r, id }) => [r.input, id ?? '', r.formula, r.notation ?? '', r.ionFormula, r.charge, r.mz.toDecimalPlaces(12).toFixed(), r.calculatedText, r.found?.text ?? '', ppm(r), mda(r), r.reportLine ?? '', r.notes.map((n) => `${n.code}: ${n.message}`).join(' | ')],
+    cells: ({ result: r, id, input }) => [input, id ?? '', r.formula, r.notation ?? '', r.ionFormula, r.charge, r.mz.toDecimalPlaces(12).toFixed(), r.calculatedText, r.found?.text ?? '', ppm(r), mda(r), r.reportLine ?? '', r.notes.map((n) => `${n.code}: ${n.message}`).join(' | ')],
     block: ({ result: r, id }) => {
       const z = `${Math.abs(r.charge)}${r.charge > 0 ? '+' : '-'}`;
       const lines = [`${id ? `${id}: ` : ''}${r.formula}  ${r.notation ?? r.journalNotation}  →  ${r.ionFormula}   m/z ${r.calculatedText}  (charge ${z}${r.oddElectron ? ', odd-electron' : ''})`];

@@ -54,6 +54,8 @@ export function patternPresenter(o: PatternCliOptions): Presenter<PatternResult>
     abbreviations: !!o.abbreviations,
   };
   const paint = styleFor(process.stdout).cyan;
+  // the input as given (a line with its ion), for the JSON and CSV rows
+  const raw = new WeakMap<PatternResult, string>();
   const describe = (r: PatternResult) =>
     r.kind === 'aggregated'
       ? 'aggregated pattern: one peak per nominal mass, at its centroid'
@@ -74,6 +76,7 @@ export function patternPresenter(o: PatternCliOptions): Presenter<PatternResult>
       if (line.found !== null) throw fail({ code: 'BAD_OPTION', message: `a pattern takes a formula and optionally an ion, not a found m/z ('${line.found}')` }, input);
       if (line.ion !== null && o.adduct !== undefined) throw fail({ code: 'ION_CONFLICT', message: `the input names the ion ${line.ion} and --adduct gives ${o.adduct}: give one of them` }, input);
       const r = isotopePattern(line.formula, { ...opts, ion: line.ion ?? o.adduct });
+      raw.set(r, input);
       if (o.svg !== undefined) {
         try {
           writeFileSync(o.svg, patternSvg(r));
@@ -84,9 +87,9 @@ export function patternPresenter(o: PatternCliOptions): Presenter<PatternResult>
       }
       return r;
     },
-    json: (r) => patternJson(r),
+    json: (r) => ({ ...patternJson(r), input: raw.get(r) ?? r.input }),
     columns: ['input', 'formula', 'ion', 'speciesFormula', 'charge', 'kind', 'resolvingPower', 'coverage', 'monoisotopicMz', 'averageMz', ...peakColumns, 'notes'],
-    cells: (r) => [r.input, r.formula, r.ion ?? '', r.speciesFormula, r.charge, r.kind, r.resolvingPower ?? '', r.coverage, r.monoisotopicMz.toDecimalPlaces(12).toFixed(), r.averageMz, ...csvPeaks(r), r.notes.map((n) => `${n.code}: ${n.message}`).join(' | ')],
+    cells: (r) => [raw.get(r) ?? r.input, r.formula, r.ion ?? '', r.speciesFormula, r.charge, r.kind, r.resolvingPower ?? '', r.coverage, r.monoisotopicMz.toDecimalPlaces(12).toFixed(), r.averageMz, ...csvPeaks(r), r.notes.map((n) => `${n.code}: ${n.message}`).join(' | ')],
     block: (r) => {
       const head = `${r.ion ? `${r.ion} of ${r.formula}: ` : ''}${r.speciesFormula}   monoisotopic ${r.charge !== 0 ? 'm/z' : 'mass'} ${r.monoisotopicMz.toFixed(4)}, average ${r.averageMz.toFixed(4)}`;
       return [head, `${describe(r)}; peaks of at least ${r.minRelative} % of the largest`, ...stickPlot(r.peaks, { paint })].join('\n');
