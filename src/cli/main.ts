@@ -20,6 +20,7 @@ import { outputFormat } from './commands/common.js';
 import { registerMass } from './commands/mass.js';
 import { registerQc } from './commands/qc.js';
 import { registerPharmacy } from './commands/pharmacy.js';
+import { registerIonCommands } from './commands/ion.js';
 import type { CommandRunner } from './commands/runner.js';
 import { PRESENTERS } from './commands/registry.js';
 import { fixedBatch, inputBatches } from './input/inputs.js';
@@ -94,6 +95,7 @@ export async function main(args: string[], io: CliIo): Promise<number> {
   registerConversions(program, run);
   registerQc(program, run);
   registerPharmacy(program, run);
+  registerIonCommands(program, run, io.stdin);
 
   try {
     await program.parseAsync(args, { from: 'user' });

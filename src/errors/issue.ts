@@ -29,6 +29,10 @@ export type IssueCode =
   // computing with formulas
   | 'NO_STANDARD_WEIGHT'
   | 'PART_NOT_IN_FORMULA'
+  // ions and isotope patterns
+  | 'BAD_ION'
+  | 'ION_CONFLICT'
+  | 'PATTERN_TOO_LARGE'
   // quantities, units and expressions
   | 'BAD_NUMBER'
   | 'UNKNOWN_UNIT'

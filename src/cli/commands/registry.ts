@@ -14,6 +14,8 @@ import { compositionPresenter } from './composition.js';
 import { massPresenter } from './mass.js';
 import { QC_PRESENTERS } from './qc.js';
 import { PHARMACY_PRESENTERS } from './pharmacy.js';
+import { ionPresenter } from './ion.js';
+import { patternPresenter } from './pattern.js';
 
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
 type Factory = (options: any) => Presenter<any>;
@@ -35,4 +37,6 @@ export const PRESENTERS: Readonly<Record<string, Factory>> = Object.freeze({
   candidates: candidatesPresenter,
   ...QC_PRESENTERS,
   ...PHARMACY_PRESENTERS,
+  ion: ionPresenter,
+  pattern: patternPresenter,
 });

@@ -1,0 +1,101 @@
+import type { Command } from 'commander';
+import { fail } from '../../errors/pondus-error.js';
+import { ionJson } from '../../ions/ion-json.js';
+import { ionMass, type IonResult } from '../../ions/ion-mass.js';
+import { readIonSheet, type IonSheetRow } from '../../ions/ion-sheet.js';
+import { readIonLine } from '../../ions/read-ion-line.js';
+import { signedFixed } from '../../ions/mass-error.js';
+import type { Presenter } from '../output/presenter.js';
+import { withOutputOptions } from './common.js';
+import { registerPattern } from './pattern.js';
+import type { CommandRunner } from './runner.js';
+import { runWithSheet, type SheetOptions } from './sheet-runner.js';
+
+export interface IonCliOptions extends SheetOptions<IonSheetRow> {
+  adduct?: string;
+  found?: string;
+  ionisation?: string;
+  decimals?: string;
+  abbreviations?: boolean;
+}
+
+interface IonRow {
+  result: IonResult;
+  id: string | null;
+  /** The input as given (a batch line keeps its ion and found m/z); a sheet row gives its formula. */
+  input: string;
+}
+
+/**
+ * The fields of one input: a sheet row, or a line / argument `FORMULA [ION] [FOUND]`, with the
+ * options filling what the input leaves out (and refusing when both give the same field).
+ */
+function fields(input: string, o: IonCliOptions): { formula: string | null; ion: string | null; found: string | undefined; id: string | null } {
+  const row = o.sheetRows?.[input];
+  const line = row
+    ? { formula: row.formula === '' ? null : row.formula, ion: row.ion === '' ? null : row.ion, found: row.found === '' ? null : row.found }
+    : readIonLine(input);
+  if (row && line.formula === null && !(line.ion ?? '').startsWith('[')) throw fail({ code: 'BAD_RECORD', message: `row ${row.id || row.line} has no formula` }, input);
+  if (line.ion !== null && o.adduct !== undefined) throw fail({ code: 'ION_CONFLICT', message: `the input names the ion ${line.ion} and --adduct gives ${o.adduct}: give one of them` }, input);
+  if (line.found !== null && o.found !== undefined) throw fail({ code: 'ION_CONFLICT', message: `the input gives a found m/z (${line.found}) and --found gives ${o.found}: give one of them` }, input);
+  return { formula: line.formula, ion: line.ion ?? o.adduct ?? null, found: line.found ?? o.found, id: row ? row.id : null };
+}
+
+/**
+ * The presenter for `pondus ion`.
+ *
+ * @example
+ * ionPresenter({ adduct: '[M+H]+' }).compute('C15H15NO2').result.calculatedText // '242.1176'
+ */
+export function ionPresenter(o: IonCliOptions): Presenter<IonRow> {
+  const decimals = o.decimals === undefined ? 4 : Number(o.decimals);
+  if (!Number.isInteger(decimals) || decimals < 0 || decimals > 8) throw fail({ code: 'USAGE', message: `--decimals takes a whole number from 0 to 8, not '${o.decimals}'` });
+  const opts = { ionisation: o.ionisation ?? 'ESI', decimals, abbreviations: !!o.abbreviations };
+  const ppm = (r: IonResult) => (r.found ? signedFixed(r.found.ppm, 1) : '');
+  const mda = (r: IonResult) => (r.found ? signedFixed(r.found.mDa, 1) : '');
+  return {
+    compute: (input) => {
+      const f = fields(input, o);
+      const result = ionMass(f.formula, f.ion, { ...opts, found: f.found });
+      return { result, id: f.id, input: o.sheetRows?.[input] ? result.input : input };
+    },
+    json: ({ result, id, input }) => ({ ...ionJson(result, id !== null ? { id } : {}), input }),
+    columns: ['input', 'id', 'formula', 'ion', 'ionFormula', 'charge', 'mz', 'calculated', 'found', 'errorPpm', 'errorMDa', 'reportLine', 'notes'],
+    cells: ({ result: r, id, input }) => [input, id ?? '', r.formula, r.notation ?? '', r.ionFormula, r.charge, r.mz.toDecimalPlaces(12).toFixed(), r.calculatedText, r.found?.text ?? '', ppm(r), mda(r), r.reportLine ?? '', r.notes.map((n) => `${n.code}: ${n.message}`).join(' | ')],
+    block: ({ result: r, id }) => {
+      const z = `${Math.abs(r.charge)}${r.charge > 0 ? '+' : '-'}`;
+      const lines = [`${id ? `${id}: ` : ''}${r.formula}  ${r.notation ?? r.journalNotation}  →  ${r.ionFormula}   m/z ${r.calculatedText}  (charge ${z}${r.oddElectron ? ', odd-electron' : ''})`];
+      if (r.found) lines.push(`  found ${r.found.text}: error ${ppm(r)} ppm (${mda(r)} mDa), as (found − calculated)/calculated`);
+      lines.push(`  ${r.reportLine ?? `HRMS (${r.ionisation}) m/z: ${r.journalNotation} calcd for ${r.ionFormulaPlain} ${r.calculatedText}`}`);
+      return lines.join('\n');
+    },
+    notes: ({ result: r }) => r.notes.map((n) => n.message),
+  };
+}
+
+/**
+ * Registers `pondus ion` and `pondus pattern`.
+ *
+ * @example
+ * registerIonCommands(program, run, () => process.stdin)
+ */
+export function registerIonCommands(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void {
+  withOutputOptions(
+    program
+      .command('ion')
+      .description('m/z of an ion ([M+H]+, [M+Na]+, [M-H]-, [M+2H]2+, [2M+Na]+, M+•) with the electron mass, the error against a found m/z, the HRMS report line')
+      .argument('[inputs...]', "formulas, or lines 'FORMULA ION [FOUND]' ('[C15H15NO2+H]+ 242.1172' also works); - reads one per line from standard input")
+      .option('--adduct <ion>', "the ion, in the usual notation: '[M+H]+', '[M+Na]+', '[M-H]-', '[M+2H]2+', '[M+H-H2O]+', '[2M+Na]+', 'M+.'")
+      .option('--found <m/z>', 'the measured m/z (one input only): gives the error in ppm and mDa and the report line')
+      .option('--ionisation <method>', 'ionisation named in the report line', 'ESI')
+      .option('--decimals <n>', 'decimals of the calculated m/z in the report line', '4')
+      .option('--abbreviations', 'read group abbreviations (Me, Et, Ph, Boc, …) in formulas')
+      .option('--sheet <file>', 'a lab sheet (CSV with columns id, formula, ion, found); - reads it from standard input'),
+  ).action((inputs: string[], o: IonCliOptions) => {
+    if (o.found !== undefined && (inputs.length > 1 || inputs.includes('-') || o.sheet !== undefined)) {
+      throw fail({ code: 'USAGE', message: '--found goes with one input; in a batch, give the found m/z on each line (FORMULA ION FOUND)' });
+    }
+    return runWithSheet(run, 'ion', inputs, o, stdin, readIonSheet);
+  });
+  registerPattern(program, run);
+}

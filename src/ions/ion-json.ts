@@ -1,0 +1,54 @@
+import type { IonResult } from './ion-mass.js';
+
+/** The JSON shape of an ion result (`pondus ion --json`): numbers as numbers, exact values as decimal text beside them. */
+export interface IonJson {
+  input: string;
+  formula: string;
+  ion: string | null;
+  ionFormula: string;
+  charge: number;
+  mz: number;
+  mzExact: string;
+  ionMass: number;
+  neutralMass: number;
+  oddElectron: boolean;
+  calculated: string;
+  found: number | null;
+  foundText: string | null;
+  errorPpm: number | null;
+  errorPpmExact: string | null;
+  errorMDa: number | null;
+  reportLine: string | null;
+  notes: { code: string; message: string }[];
+}
+
+/**
+ * The JSON object `pondus ion --json` writes for one ion. `errorPpm` and `errorMDa` are
+ * rounded to one decimal as reported; `errorPpmExact` keeps the unrounded value.
+ *
+ * @example
+ * ionJson(ionMass('C15H15NO2', '[M+H]+', { found: '242.1172' })).errorPpm // -1.5
+ */
+export function ionJson(r: IonResult, extra: Record<string, unknown> = {}): IonJson & Record<string, unknown> {
+  return {
+    ...extra,
+    input: r.input,
+    formula: r.formula,
+    ion: r.notation,
+    ionFormula: r.ionFormula,
+    charge: r.charge,
+    mz: r.mz.toNumber(),
+    mzExact: r.mz.toDecimalPlaces(15).toFixed(),
+    ionMass: r.ionMass.toNumber(),
+    neutralMass: r.neutralMass.toNumber(),
+    oddElectron: r.oddElectron,
+    calculated: r.calculatedText,
+    found: r.found ? r.found.value.toNumber() : null,
+    foundText: r.found ? r.found.text : null,
+    errorPpm: r.found ? r.found.ppm.toDecimalPlaces(1).toNumber() : null,
+    errorPpmExact: r.found ? r.found.ppm.toSignificantDigits(12).toFixed() : null,
+    errorMDa: r.found ? r.found.mDa.toDecimalPlaces(1).toNumber() : null,
+    reportLine: r.reportLine,
+    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+  };
+}

@@ -1,0 +1,53 @@
+import type { PatternResult } from './pattern.js';
+
+/** The JSON shape of an isotope pattern (`pondus pattern --json`). */
+export interface PatternJson {
+  input: string;
+  formula: string;
+  ion: string | null;
+  speciesFormula: string;
+  charge: number;
+  kind: 'aggregated' | 'fine';
+  resolvingPower: number | null;
+  coverage: number;
+  monoisotopicMz: number;
+  monoisotopicMzExact: string;
+  averageMz: number;
+  isotopeAverageMz: number;
+  minRelative: number;
+  peaks: { mz: number; abundance: number; relative: number; shift: number; label?: string; isotopologues?: number }[];
+  notes: { code: string; message: string }[];
+}
+
+/**
+ * The JSON object `pondus pattern --json` writes: the listed peaks by m/z, with their share of
+ * all molecules (`abundance`) and their percentage of the largest (`relative`).
+ *
+ * @example
+ * patternJson(isotopePattern('Br2')).peaks[1].relative // 100
+ */
+export function patternJson(r: PatternResult, extra: Record<string, unknown> = {}): PatternJson & Record<string, unknown> {
+  return {
+    ...extra,
+    input: r.input,
+    formula: r.formula,
+    ion: r.ion,
+    speciesFormula: r.speciesFormula,
+    charge: r.charge,
+    kind: r.kind,
+    resolvingPower: r.resolvingPower,
+    coverage: r.coverage,
+    monoisotopicMz: r.monoisotopicMz.toNumber(),
+    monoisotopicMzExact: r.monoisotopicMz.toDecimalPlaces(15).toFixed(),
+    averageMz: r.averageMz,
+    isotopeAverageMz: r.isotopeAverageMz,
+    minRelative: r.minRelative,
+    peaks: r.peaks.map((p) => {
+      const o: PatternJson['peaks'][number] = { mz: p.mz, abundance: p.abundance, relative: p.relative, shift: p.shift };
+      if (p.label !== null) o.label = p.label;
+      if (p.isotopologues !== null) o.isotopologues = p.isotopologues;
+      return o;
+    }),
+    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+  };
+}

@@ -1,0 +1,52 @@
+/**
+ * What an instrument of a given resolving power shows: isotopologues closer together than the
+ * peak width merge into one peak. pondus takes the width as the full width at half maximum,
+ * FWHM = m/R at the peaks' m/z (the usual definition of resolving power, R = m/Δm at FWHM), and
+ * merges neighbours (sorted by m/z) whose separation is below the FWHM, chaining through a run
+ * of close neighbours. A merged peak sits at the abundance-weighted centroid of its members and
+ * holds their summed abundance, as a centroided spectrum reports it.
+ */
+
+/** A stick of a spectrum. */
+export interface Stick {
+  mz: number;
+  abundance: number;
+  /** The most abundant member's label (heavy isotopes), or null when not known. */
+  label: string | null;
+  /** How many isotopologues it holds. */
+  members: number;
+}
+
+/**
+ * Merges sticks closer than FWHM = m/R. Sticks come in any order; they go out by m/z.
+ *
+ * @example
+ * resolvePeaks([{ mz: 100, abundance: 1, label: '', members: 1 }, { mz: 100.0005, abundance: 1, label: 'x', members: 1 }], 100000).length // 1
+ */
+export function resolvePeaks(sticks: readonly Stick[], resolvingPower: number): Stick[] {
+  const sorted = [...sticks].sort((a, b) => a.mz - b.mz);
+  const out: Stick[] = [];
+  let group: Stick[] = [];
+  const flush = () => {
+    if (group.length === 0) return;
+    let a = 0;
+    let am = 0;
+    let top = group[0];
+    let members = 0;
+    for (const s of group) {
+      a += s.abundance;
+      am += s.abundance * s.mz;
+      members += s.members;
+      if (s.abundance > top.abundance) top = s;
+    }
+    out.push({ mz: a > 0 ? am / a : group[0].mz, abundance: a, label: top.label, members });
+    group = [];
+  };
+  for (const s of sorted) {
+    const prev = group[group.length - 1];
+    if (prev && s.mz - prev.mz >= prev.mz / resolvingPower) flush();
+    group.push(s);
+  }
+  flush();
+  return out;
+}
