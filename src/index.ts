@@ -99,7 +99,7 @@ export { readCsvSheet, elementColumns, type CsvSheet, type CsvRow } from './shee
 // assay and QC
 export { titrationAssay, safeTitrationAssay, type TitrationAssayResult, type TitrationAssayOptions } from './assay/titration-assay.js';
 export { standardise, safeStandardise, type StandardiseResult, type StandardiseOptions } from './assay/standardise.js';
-export { convertBasis, safeConvertBasis, readBasis, removedFraction, SAMPLE_BASES, type SampleBasis, type SampleContent, type BasisConversion } from './assay/sample-basis.js';
+export { convertSampleBasis, safeConvertSampleBasis, readBasis, removedFraction, SAMPLE_BASES, type SampleBasis, type SampleContent, type BasisConversion } from './assay/sample-basis.js';
 export { checkSpecification, readLimits, type Limits, type SpecificationCheck } from './assay/specification.js';
 export { replicates, safeReplicates, splitValues, MAX_REPLICATES, type ReplicateResult, type ReplicateOptions } from './assay/replicates.js';
 export { tCritical, twoSidedP, incompleteBeta, logGamma } from './assay/student-t.js';
@@ -114,7 +114,7 @@ export { alligation, safeAlligation, type AlligationResult, type AlligationOptio
 export { saltIons, type SaltIons, type SaltIon } from './pharmacy/salt-ions.js';
 export { CATIONS, ANIONS, type IonEntry } from './pharmacy/ions.js';
 export { readStrength, type Strength, type PercentKind } from './pharmacy/strength.js';
-export { atWorkingPrecision, noteFewFigures, WORKING_FIGURES } from './pharmacy/working-precision.js';
+export { atWorkingPrecision, noteFewFigures } from './pharmacy/working-precision.js';
 export { PHARMACY_CAUTION } from './pharmacy/caution.js';
 // ions and isotope patterns
 export { readIonNotation, isIonNotation } from './ions/read-ion-notation.js';

@@ -91,10 +91,10 @@ const pct = (q: Quantity) => displayQuantity(q, '%').text;
  * Converts a result (a fraction, e.g. an assay) from one basis of the sample to another.
  *
  * @example
- * const r = convertBasis('99.1 %', 'as-is', 'dried', { loss: '0.50 %' })
+ * const r = convertSampleBasis('99.1 %', 'as-is', 'dried', { loss: '0.50 %' })
  * displayQuantity(r.converted, '%').text // '99.6 %'
  */
-export function convertBasis(valueText: string | Quantity, from: SampleBasis, to: SampleBasis, content: SampleContent): BasisConversion {
+export function convertSampleBasis(valueText: string | Quantity, from: SampleBasis, to: SampleBasis, content: SampleContent): BasisConversion {
   const notes: Note[] = [];
   const value = typeof valueText === 'string' ? readPositive(valueText, [PURE], 'the result', notes) : valueText;
   if (from === to) throw fail({ code: 'USAGE', message: `the result is already on the ${NAMES[to]} basis: choose another --to` });
@@ -111,11 +111,11 @@ export function convertBasis(valueText: string | Quantity, from: SampleBasis, to
 }
 
 /**
- * {@link convertBasis} without throwing.
+ * {@link convertSampleBasis} without throwing.
  *
  * @example
- * safeConvertBasis('99.1 %', 'as-is', 'dried', {}).success // false (no loss on drying given)
+ * safeConvertSampleBasis('99.1 %', 'as-is', 'dried', {}).success // false (no loss on drying given)
  */
-export function safeConvertBasis(valueText: string, from: SampleBasis, to: SampleBasis, content: SampleContent): SafeResult<BasisConversion> {
-  return toSafe(() => convertBasis(valueText, from, to, content));
+export function safeConvertSampleBasis(valueText: string, from: SampleBasis, to: SampleBasis, content: SampleContent): SafeResult<BasisConversion> {
+  return toSafe(() => convertSampleBasis(valueText, from, to, content));
 }

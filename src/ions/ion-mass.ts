@@ -75,7 +75,7 @@ const IONISATION = /^[A-Za-z0-9][A-Za-z0-9 /+()-]{0,29}$/;
  *
  * @example
  * ionMass('C15H15NO2', '[M+H]+').mz.toFixed(4)                               // '242.1176'
- * ionMass('C15H15NO2', '[M+H]+', { found: '242.1172' }).found!.ppm.toFixed(1) // '-1.5'
+ * ionMass('C15H15NO2', '[M+H]+', { found: '242.1172' }).found.ppm.toFixed(1)  // '-1.5'
  * ionMass(null, '[C6H12O6+Na]+').ionFormula                                    // 'C6H12NaO6^+'
  */
 export function ionMass(formula: string | null, ion: string | IonNotation | null, options: IonOptions = {}): IonResult {

@@ -64,7 +64,7 @@ export function atomIsotopes(key: string): AtomIsotopes {
  * CIAAW standard atomic weight.
  *
  * @example
- * isotopeAverage(atomIsotopes('Cl')) // 35.4529…
+ * isotopeAverage(atomIsotopes('Cl')) // 35.4528…
  */
 export function isotopeAverage(a: AtomIsotopes): number {
   let m = 0;

@@ -9,7 +9,7 @@ let table: Float64Array | null = null;
  * The natural logarithm of n factorial.
  *
  * @example
- * Math.exp(logFactorial(5)) // 120 (to rounding)
+ * Math.round(Math.exp(logFactorial(5))) // 120
  */
 export function logFactorial(n: number): number {
   if (n < TABLE_SIZE) {

@@ -166,7 +166,7 @@ export function marginal(key: string, n: number, threshold: number, input?: stri
  * refuse early a set far too large to enumerate.
  *
  * @example
- * estimatedCount(40, [0.5, 0.5], Math.log(1000)) // ≈ 23
+ * Math.round(estimatedCount(40, [0.5, 0.5], Math.log(1000))) // 24
  */
 export function estimatedCount(n: number, fractions: number[], logRatio: number): number {
   const p = fractions.filter((f) => f > 0);

@@ -37,8 +37,7 @@ export function bar(cells: number): string {
  * The rows of the terminal stick plot.
  *
  * @example
- * stickPlot(isotopePattern('Br2').peaks)
- * // ['     m/z  rel. %  peak', '157.8367    51.4  M     ████████████████████▌', …]
+ * stickPlot(isotopePattern('Br2').peaks)[1] // '157.8367    51.4  M     ████████████████████▌'
  */
 export function stickPlot(peaks: readonly PatternPeak[], options: StickPlotOptions = {}): string[] {
   const width = options.width ?? 40;

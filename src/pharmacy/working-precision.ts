@@ -1,15 +1,15 @@
 /**
  * Instructions computed from targets (a salt mass for a target mEq, the
- * amounts to mix in alligation) keep working precision: at least four
- * significant figures, whatever the figures of the target, with a note when
- * the target was written with fewer.
+ * amounts to mix in alligation) keep working precision, by the one policy of
+ * ../sigfig/instruction.ts: at least WORKING_FIGURES significant figures,
+ * whatever the figures of the target, with a note when the target was written
+ * with fewer than FEW_FIGURES. These two helpers apply it to quantities that
+ * pharmacy results carry on.
  */
 import type { Note } from '../errors/issue.js';
+import { FEW_FIGURES, WORKING_FIGURES } from '../sigfig/instruction.js';
 import { lsdForSigFigs, sigFigsOf } from '../sigfig/measured.js';
 import type { Quantity } from '../sigfig/quantity.js';
-
-/** Significant figures an instruction keeps at least. */
-export const WORKING_FIGURES = 4;
 
 /**
  * The quantity shown with at least four significant figures (more when its inputs carry more).
@@ -18,13 +18,13 @@ export const WORKING_FIGURES = 4;
  * displayQuantity(atWorkingPrecision(measure('2.0 g')), 'g').text // '2.000 g'
  */
 export function atWorkingPrecision(q: Quantity): Quantity {
-  if (q.value.isZero()) return { ...q, lsd: -WORKING_FIGURES };
+  if (q.value.isZero()) return { ...q, lsd: -WORKING_FIGURES, sigFigs: undefined };
   const n = q.lsd === null ? WORKING_FIGURES : Math.max(WORKING_FIGURES, sigFigsOf(q));
-  return { ...q, lsd: lsdForSigFigs(q.value, n) };
+  return { ...q, lsd: lsdForSigFigs(q.value, n), sigFigs: n };
 }
 
 /**
- * Adds a TARGET_FEW_FIGURES note when a target has fewer than four significant figures.
+ * Adds a TARGET_FEW_FIGURES note when a target has fewer than {@link FEW_FIGURES} significant figures.
  *
  * @example
  * const notes = []
@@ -33,7 +33,7 @@ export function atWorkingPrecision(q: Quantity): Quantity {
  */
 export function noteFewFigures(target: Quantity, text: string, what: string, notes: Note[]): void {
   const n = sigFigsOf(target);
-  if (n < WORKING_FIGURES) {
+  if (n < FEW_FIGURES) {
     notes.push({ code: 'TARGET_FEW_FIGURES', message: `${what} '${text.trim()}' has ${n} significant figure${n === 1 ? '' : 's'}; the instruction keeps working precision (${WORKING_FIGURES} figures), which does not make the target more exact` });
   }
 }

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { convertBasis, readBasis } from '../../src/assay/sample-basis.js';
+import { convertSampleBasis, readBasis } from '../../src/assay/sample-basis.js';
 import { checkSpecification, readLimits } from '../../src/assay/specification.js';
 import { measure } from '../../src/calc/measure.js';
 import { displayQuantity } from '../../src/sigfig/display-quantity.js';
@@ -11,33 +11,33 @@ describe('results on another basis of the sample', () => {
   it('as is → dried: divides by (100 % − loss on drying)', () => {
     // source: definition of "calculated on the dried basis" (USP General Notices 5.60.10 / Ph. Eur. 1.2), from memory;
     // 98.5 % as is with 0.8 % loss on drying is 98.5 / 0.992 = 99.29… %
-    const r = convertBasis('98.5 %', 'as-is', 'dried', { loss: '0.8 %' });
+    const r = convertSampleBasis('98.5 %', 'as-is', 'dried', { loss: '0.8 %' });
     expect(r.converted.value.toNumber()).toBeCloseTo(0.985 / 0.992, 12);
     expect(pct(r.converted)).toBe('99.3 %');
   });
 
   it('anhydrous (Karl Fischer water) and anhydrous-solvent-free', () => {
-    const a = convertBasis('97.62 %', 'as-is', 'anhydrous', { water: '2.35 %' });
+    const a = convertSampleBasis('97.62 %', 'as-is', 'anhydrous', { water: '2.35 %' });
     expect(a.converted.value.toNumber()).toBeCloseTo(0.9762 / 0.9765, 12);
-    const b = convertBasis('97.62 %', 'as-is', 'anhydrous-solvent-free', { water: '2.35 %', solvent: '0.12 %' });
+    const b = convertSampleBasis('97.62 %', 'as-is', 'anhydrous-solvent-free', { water: '2.35 %', solvent: '0.12 %' });
     expect(b.converted.value.toNumber()).toBeCloseTo(0.9762 / (1 - 0.0235 - 0.0012), 12);
     expect(b.notes.map((n) => n.code)).toEqual(['BASIS_CONVERTED', 'ABOVE_100_PERCENT']);
   });
 
   it('from one basis to another goes through the as-is value', () => {
-    const r = convertBasis('100.4 %', 'anhydrous', 'dried', { water: '0.50 %', loss: '0.30 %' });
+    const r = convertSampleBasis('100.4 %', 'anhydrous', 'dried', { water: '0.50 %', loss: '0.30 %' });
     expect(r.converted.value.toNumber()).toBeCloseTo((1.004 * 0.995) / 0.997, 12);
   });
 
   it('says when the result goes above 100 %, and keeps it (potency on the anhydrous basis can)', () => {
-    const r = convertBasis('99.5 %', 'as-is', 'anhydrous', { water: '1.2 %' });
+    const r = convertSampleBasis('99.5 %', 'as-is', 'anhydrous', { water: '1.2 %' });
     expect(r.converted.value.gt(1)).toBe(true);
     expect(r.notes.map((n) => n.code)).toContain('ABOVE_100_PERCENT');
   });
 
   it('refuses a missing content, a content of 100 % and an unknown basis', () => {
-    expect(() => convertBasis('99 %', 'as-is', 'dried', {})).toThrow(/--loss/);
-    expect(() => convertBasis('99 %', 'as-is', 'dried', { loss: '100 %' })).toThrow(/below 100/);
+    expect(() => convertSampleBasis('99 %', 'as-is', 'dried', {})).toThrow(/--loss/);
+    expect(() => convertSampleBasis('99 %', 'as-is', 'dried', { loss: '100 %' })).toThrow(/below 100/);
     expect(() => readBasis('wet')).toThrow(/unknown basis/);
     expect(readBasis('As is')).toBe('as-is');
   });
@@ -47,11 +47,11 @@ describe('results on another basis of the sample', () => {
       fc.property(fc.integer({ min: 5000, max: 11000 }), fc.integer({ min: 0, max: 2000 }), (v, r) => {
         const value = `${(v / 100).toFixed(2)} %`;
         const content = `${(r / 100).toFixed(2)} %`;
-        const there = convertBasis(value, 'as-is', 'dried', { loss: content });
-        const back = convertBasis(there.converted, 'dried', 'as-is', { loss: content });
+        const there = convertSampleBasis(value, 'as-is', 'dried', { loss: content });
+        const back = convertSampleBasis(there.converted, 'dried', 'as-is', { loss: content });
         expect(back.converted.value.minus(v / 10000).abs().lt('1e-40')).toBe(true);
-        const a = convertBasis(value, 'as-is', 'anhydrous', { water: content });
-        expect(convertBasis(a.converted, 'anhydrous', 'as-is', { water: content }).converted.value.minus(v / 10000).abs().lt('1e-40')).toBe(true);
+        const a = convertSampleBasis(value, 'as-is', 'anhydrous', { water: content });
+        expect(convertSampleBasis(a.converted, 'anhydrous', 'as-is', { water: content }).converted.value.minus(v / 10000).abs().lt('1e-40')).toBe(true);
       }),
       { numRuns: 300 },
     );
@@ -69,7 +69,7 @@ describe('specification check', () => {
   });
 
   it('a result on the dried basis against 98.0–102.0 %', () => {
-    const r = convertBasis('97.6 %', 'as-is', 'dried', { loss: '0.55 %' });
+    const r = convertSampleBasis('97.6 %', 'as-is', 'dried', { loss: '0.55 %' });
     const s = checkSpecification(r.converted, '98.0-102.0', 'half-even', 'the dried');
     expect(s.roundedText).toBe('98.1');
     expect(s.complies).toBe(true);

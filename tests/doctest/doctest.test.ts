@@ -90,7 +90,13 @@ function wildcard(actual: string, expected: string): boolean {
   return pieces[pieces.length - 1] === '' || actual.endsWith(pieces[pieces.length - 1]);
 }
 
+/** The leading digits of a number, written in an example as `0.574…`. */
+class NumberPrefix {
+  constructor(readonly digits: string) {}
+}
+
 function matches(actual: unknown, expected: unknown): boolean {
+  if (expected instanceof NumberPrefix) return (typeof actual === 'number' || actual instanceof Decimal) && String(actual).startsWith(expected.digits);
   if (actual instanceof Decimal && typeof expected === 'number') return actual.eq(expected);
   const a = plain(actual);
   if (typeof expected === 'string' && typeof a === 'string' && expected.includes('…')) return wildcard(a, expected);
@@ -135,7 +141,9 @@ describe('doc-comment examples', () => {
       last = '';
       const [code, expectedText] = check;
       // a remark in brackets may follow the expected value: `// false (no arrow)`
-      const expected = literal(expectedText) ?? literal(expectedText.replace(/\s*\([^()]*\)$/, ''));
+      // a number ending in '…' matches any number whose digits start so: `// 0.574… (35Cl2)`
+      const prefix = /^(-?\d[\d.]*)…(\s*\([^()]*\))?$/.exec(expectedText);
+      const expected = prefix ? { value: new NumberPrefix(prefix[1]) } : (literal(expectedText) ?? literal(expectedText.replace(/\s*\([^()]*\)$/, '')));
       if (expected === undefined) throw new Error(`${ex.file}:${ex.line}: the expected value '${expectedText}' is not a literal`);
       body += `__seen.push((${code}));\n`;
       checks.push({ code, expectedText, expected });

@@ -11,7 +11,7 @@ import { QC_CAUTION } from '../../assay/caution.js';
 import { readPositive } from '../../assay/read-quantity.js';
 import { PURE } from '../../calc/measure.js';
 import { replicates, type ReplicateResult } from '../../assay/replicates.js';
-import { convertBasis, readBasis, type BasisConversion, type SampleBasis, type SampleContent } from '../../assay/sample-basis.js';
+import { convertSampleBasis, readBasis, type BasisConversion, type SampleBasis, type SampleContent } from '../../assay/sample-basis.js';
 import { checkSpecification, readLimits, type SpecificationCheck } from '../../assay/specification.js';
 import { standardise, type StandardiseResult } from '../../assay/standardise.js';
 import { titrationAssay, type TitrationAssayResult } from '../../assay/titration-assay.js';
@@ -81,7 +81,7 @@ function report(value: Quantity, from: SampleBasis, choice: { basis: SampleBasis
   let conversion: BasisConversion | null = null;
   let v = value;
   if (choice.basis !== from) {
-    conversion = convertBasis(value, from, choice.basis, { loss: o.loss, water: o.water, solvent: o.solvent });
+    conversion = convertSampleBasis(value, from, choice.basis, { loss: o.loss, water: o.water, solvent: o.solvent });
     notes.push(...conversion.notes);
     if (choice.inferred) notes.push({ code: 'BASIS_INFERRED', message: `reported on the ${choice.basis} basis, the one the content given implies; give --on to choose` });
     v = conversion.converted;

@@ -66,11 +66,15 @@ class JsonLinesWriter<R> implements ResultWriter<R> {
 
 class DelimitedWriter<R> implements ResultWriter<R> {
   private headerDone = false;
-  constructor(private readonly p: Presenter<R>, private readonly ctx: WriterContext, private readonly sep: string) {}
+  /** A presenter may write its own notes column (with its codes and caution); otherwise the writer adds one. */
+  private readonly ownNotes: boolean;
+  constructor(private readonly p: Presenter<R>, private readonly ctx: WriterContext, private readonly sep: string) {
+    this.ownNotes = p.columns.includes('notes');
+  }
   private line(cells: Cell[], guard: boolean): void {
     if (!this.headerDone) {
       this.headerDone = true;
-      this.line([...this.p.columns, 'notes', 'error', 'message'], false);
+      this.line([...this.p.columns, ...(this.ownNotes ? [] : ['notes']), 'error', 'message'], false);
     }
     let s = '';
     for (let i = 0; i < cells.length; i++) s += (i ? this.sep : '') + delimitedCell(guard ? guardCell(cells[i]) : cells[i], this.sep);
@@ -80,11 +84,11 @@ class DelimitedWriter<R> implements ResultWriter<R> {
     const items = [...(this.p.noteItems?.(result) ?? (this.p.notes?.(result) ?? []).map((message) => ({ code: '', message })))];
     // a caution goes with every row: in a spreadsheet each row may be read alone
     if (this.p.caution) items.push({ code: 'CAUTION', message: this.p.caution });
-    this.line([...this.p.cells(result), notesCell(items), '', ''], true);
+    this.line([...this.p.cells(result), ...(this.ownNotes ? [] : [notesCell(items)]), '', ''], true);
   }
   fail(item: InputItem, error: PondusError): void {
-    const blanks = new Array<Cell>(this.p.columns.length - 1).fill('');
-    this.line([item.text, ...blanks, '', error.first.code, error.first.message], true);
+    const blanks = new Array<Cell>(this.p.columns.length - 1 + (this.ownNotes ? 0 : 1)).fill('');
+    this.line([item.text, ...blanks, error.first.code, error.first.message], true);
   }
   endBatch(): void {}
 }
