@@ -2,6 +2,7 @@
  * The calculator: an expression of measured quantities, units and formula
  * masses in, the reported figure out.
  */
+import { fail } from '../errors/pondus-error.js';
 import { Decimal } from '../exact/decimal.js';
 import { toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { formatWithUncertainty } from '../mass/uncertainty.js';
@@ -51,6 +52,9 @@ export function calc(input: string, options: CalcOptions = {}): CalcResult {
   const tree = parseExpression(input);
   const ev = evaluate(tree);
   const q = ev.result;
+  if (!q.value.isZero() && (q.value.abs().gt('1e300') || q.value.abs().lt('1e-300'))) {
+    throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `the result, about ${q.value.toSignificantDigits(3).toExponential()}, is beyond the range of numbers pondus reports (1e-300 to 1e300)` }, input);
+  }
   const unit = reportUnit(q, tree.target ? tree.target.unit : null);
   const shown = displayQuantity(q, unit, options.rounding);
   const scale = new Decimal(10).pow(unit ? unit.exp10 : 0);

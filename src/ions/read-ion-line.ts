@@ -27,12 +27,12 @@ export function readIonLine(line: string): IonLine {
   if (text === '') throw fail({ code: 'EMPTY_INPUT', message: 'the line is empty' }, line);
   let rest = text;
   let found: string | null = null;
-  const m = /^(.*?)\s+(\S+)$/.exec(text);
+  const m = /^(.*?)\s+(\S+)$/s.exec(text);
   if (m && NUMBER.test(m[2])) {
     rest = m[1].trim();
     found = m[2];
   }
   if (rest.startsWith('[') && isIonNotation(rest)) return { formula: null, ion: rest, found };
-  const f = /^(\S+)(?:\s+(.*))?$/.exec(rest)!;
+  const f = /^(\S+)(?:\s+(.*))?$/s.exec(rest)!;
   return { formula: f[1], ion: f[2] !== undefined && f[2].trim() !== '' ? f[2].trim() : null, found };
 }

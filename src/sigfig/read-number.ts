@@ -20,6 +20,11 @@ const NUMBER = /^([+-]?)(\d*)(?:\.(\d*))?(?:[eE]([+-]?\d+))?$/;
 /** Largest decimal exponent accepted in input. */
 export const MAX_EXPONENT = 1000;
 
+/** Numbers are read up to this size (no bench quantity comes near it; results stay finite doubles). */
+export const MAX_MAGNITUDE = new Decimal('1e100');
+/** …and down to this size, zero apart. */
+export const MIN_MAGNITUDE = new Decimal('1e-100');
+
 /**
  * Reads a measured number from its text.
  *
@@ -40,6 +45,9 @@ export function readNumber(text: string, column?: number): ReadNumber {
     throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `'${text}' is out of range (exponents up to ±${MAX_EXPONENT})`, column });
   }
   const value = new Decimal(`${sign}${int || '0'}${frac ? '.' + frac : ''}`).times(new Decimal(10).pow(exp));
+  if (!value.isZero() && (value.abs().gte(MAX_MAGNITUDE) || value.abs().lt(MIN_MAGNITUDE))) {
+    throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `'${text.trim()}' is out of range: numbers are read from 1e-100 to 1e100 in size, so that every result is a finite JSON number`, column });
+  }
   const hasPoint = frac !== undefined;
   const digits = (int + (frac ?? '')).replace(/^0+/, '');
   let lsd: number;

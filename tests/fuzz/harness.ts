@@ -1,5 +1,6 @@
 // The fuzz harness: generated inputs for every command, run through the CLI in a worker thread
 // (stopped and replaced when an input hangs), each run checked against the batch contract.
+import { parse as parseCsv } from 'csv-parse/sync';
 import fc from 'fast-check';
 import { join } from 'node:path';
 import { Worker } from 'node:worker_threads';
@@ -20,7 +21,7 @@ export interface Outcome {
 }
 
 /** What a run may not do. Each kind is counted separately. */
-export type Violation = 'hang' | 'slow' | 'bad-exit' | 'internal-error' | 'thrown' | 'stack-overflow' | 'bad-json' | 'null-or-nan' | 'row-count' | 'control-in-table' | 'formula-trigger';
+export type Violation = 'hang' | 'slow' | 'bad-exit' | 'internal-error' | 'thrown' | 'stack-overflow' | 'bad-json' | 'bad-csv' | 'null-or-nan' | 'row-count' | 'control-in-table' | 'formula-trigger';
 
 const either = <T>(...a: fc.Arbitrary<T>[]) => fc.oneof(...a);
 const formulaOrText = either(formulaText, formulaText, anyText);
@@ -35,11 +36,20 @@ export const COMMANDS: Record<string, fc.Arbitrary<Case>> = {
   balance: either(equationText, anyText).map((x) => ({ command: 'balance', args: ['balance', '--json', '--', x] })),
   react: fc.tuple(equationText, fc.tuple(formulaText, quantityText)).map(([eq, [s, q]]) => ({ command: 'react', args: ['react', '--json', eq, '--amount', `${s}=${q}`] })),
   prepare: fc.tuple(formulaOrText, quantityText, quantityText, fc.option(quantityText, { nil: undefined })).map(([f, c, v, p]) => ({ command: 'prepare', args: ['prepare', '--json', f, '--concentration', c, '--volume', v, ...(p ? ['--purity', p] : [])] })),
-  dilute: fc.tuple(quantityText, quantityText, quantityText).map(([a, b, v]) => ({ command: 'dilute', args: ['dilute', '--json', '--', a, '--to', b, '--volume', v] })),
+  dilute: fc.tuple(quantityText, quantityText, quantityText).map(([a, b, v]) => ({ command: 'dilute', args: ['dilute', '--json', '--to', b, '--volume', v, '--', a] })),
   gravimetric: fc.tuple(formulaOrText, formulaOrText, fc.option(quantityText, { nil: undefined })).map(([a, w, m]) => ({ command: 'gravimetric', args: ['gravimetric', '--json', a, '--weighed', w, ...(m ? ['--mass', m] : [])] })),
   basis: fc.tuple(formulaOrText, formulaOrText, fc.option(quantityText, { nil: undefined })).map(([a, b, v]) => ({ command: 'basis', args: ['basis', '--json', a, '--to', b, ...(v ? ['--value', v] : [])] })),
   salt: fc.tuple(formulaOrText, formulaOrText, fc.option(quantityText, { nil: undefined })).map(([s, p, d]) => ({ command: 'salt', args: ['salt', '--json', s, '--parent', p, ...(d ? ['--dose', d] : [])] })),
   combustion: fc.tuple(quantityText, quantityText, quantityText).map(([s, c, h]) => ({ command: 'combustion', args: ['combustion', '--json', s, '--co2', c, '--h2o', h] })),
+  ion: fc.tuple(formulaOrText, fc.constantFrom('[M+H]+', '[M+Na]+', '[M-H]-', '[M+2H]2+', '[2M+Na]+', 'M+•', '[M+H-H2O]+', '[M+Xx]+', '[M', '', '[M+H]3-'), fc.option(fc.constantFrom('242.1172', '1e309', '-5', 'x', '0'), { nil: undefined })).map(([f, a, found]) => ({ command: 'ion', args: ['ion', '--json', '--adduct', a, ...(found ? ['--found', found] : []), '--', f] })),
+  pattern: fc.tuple(formulaOrText, fc.constantFrom([], ['--fine'], ['--resolution', '60000'], ['--resolution', '0'], ['--coverage', '99.99'], ['--adduct', '[M+H]+'])).map(([f, extra]) => ({ command: 'pattern', args: ['pattern', '--json', ...extra, '--', f] })),
+  titration: fc.tuple(formulaOrText, quantityText, quantityText, quantityText, fc.option(quantityText, { nil: undefined })).map(([a, s, t, v, b]) => ({ command: 'titration', args: ['titration', '--json', a, '--sample', s, '--titrant', t, '--volume', v, ...(b ? ['--blank', b] : [])] })),
+  standardise: fc.tuple(formulaOrText, quantityText, quantityText).map(([std, m, v]) => ({ command: 'standardise', args: ['standardise', '--json', std, '--mass', m, '--volume', v] })),
+  'sample-basis': fc.tuple(quantityText, fc.constantFrom('dried', 'anhydrous', 'as-is', 'solvent-free', 'x'), quantityText).map(([v, to, c]) => ({ command: 'sample-basis', args: ['sample-basis', '--json', '--to', to, '--loss', c, '--water', c, '--', v] })),
+  replicates: fc.array(fc.constantFrom(...['99.42', '99.61', '1e309', '-1', 'x', '%', '100', '']), { minLength: 0, maxLength: 8 }).map((xs) => ({ command: 'replicates', args: ['replicates', '--json', '-'], input: xs.join(' ') })),
+  meq: fc.tuple(formulaOrText, fc.constantFrom('--mass', '--meq', '--mmol', '--concentration'), quantityText).map(([salt, opt, q]) => ({ command: 'meq', args: ['meq', '--json', salt, opt, q] })),
+  osmolarity: keyValueSet.map((x) => ({ command: 'osmolarity', args: ['osmolarity', '--json', '--', x] })),
+  alligation: fc.tuple(quantityText, quantityText, quantityText, quantityText).map(([t, h, l, total]) => ({ command: 'alligation', args: ['alligation', '--json', '--higher', h, '--lower', l, '--total', total, '--', t] })),
   candidates: fc.tuple(fc.double({ min: -10, max: 1200, noNaN: true }), fc.constantFrom('1', '3', '10', '0', '-1', 'x')).map(([m, ppm]) => ({ command: 'candidates', args: ['candidates', '--json', String(Math.round(m * 1e5) / 1e5), '--ppm', ppm, '--limit', '20'] })),
 };
 
@@ -58,7 +68,7 @@ export function violations(c: Case, o: Outcome, slowMs: number): Violation[] {
     for (const l of lines) {
       try {
         const row = JSON.parse(l) as unknown;
-        if (hasNullOrNaN(row)) v.push('null-or-nan');
+        if (hasNullOrNaN(row, '', c.command)) v.push('null-or-nan');
       } catch {
         v.push('bad-json');
         break;
@@ -69,18 +79,29 @@ export function violations(c: Case, o: Outcome, slowMs: number): Violation[] {
       if (lines.length !== expected) v.push('row-count');
     }
   }
-  if (c.args.includes('--csv') && /(^|[,\n])["]?[=+@\t\r]/.test(o.stdout)) v.push('formula-trigger');
+  if (c.args.includes('--csv') && o.stdout.trim() !== '') {
+    try {
+      const rows = parseCsv(o.stdout, { relax_column_count: true }) as string[][];
+      // a text cell a spreadsheet would run as a formula; numbers such as -0.39 are numbers
+      if (rows.some((r) => r.some((cell) => /^[=+@\t\r-]/.test(cell) && !/^[-+]?\d/.test(cell)))) v.push('formula-trigger');
+    } catch {
+      v.push('bad-csv');
+    }
+  }
   if (!json && !c.args.includes('--csv') && /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/.test(o.stdout)) v.push('control-in-table');
   return [...new Set(v)];
 }
 
-function hasNullOrNaN(x: unknown, key = ''): boolean {
-  // null only where the contract gives it a meaning: an error without a column, a nominal mass
-  // that is not defined for non-integer counts (with a note)
-  if (x === null) return key !== 'column' && key !== 'nominalMass';
+/**
+ * A number JSON cannot carry (Infinity, NaN: written as null), or a calculator value that came out
+ * null: elsewhere null is a documented "not applicable" (no molar mass given, an error without a
+ * column, a nominal mass undefined for decimal counts).
+ */
+function hasNullOrNaN(x: unknown, key: string, command: string): boolean {
+  if (x === null) return command === 'calc' && (key === 'value' || key === 'rounded');
   if (typeof x === 'number') return !Number.isFinite(x);
-  if (Array.isArray(x)) return x.some((y) => hasNullOrNaN(y));
-  if (typeof x === 'object') return Object.entries(x as object).some(([k, y]) => hasNullOrNaN(y, k));
+  if (Array.isArray(x)) return x.some((y) => hasNullOrNaN(y, key, command));
+  if (typeof x === 'object') return Object.entries(x as object).some(([k, y]) => hasNullOrNaN(y, k, command));
   return false;
 }
 

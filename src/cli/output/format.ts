@@ -46,3 +46,23 @@ export function guardCell(v: Cell): Cell {
   if (c !== 61 && c !== 43 && c !== 45 && c !== 64 && c !== 9 && c !== 13) return v;
   return NUMBER_TEXT.test(v) ? v : `'${v}`;
 }
+
+/**
+ * Text echoed from the input, made harmless for a terminal: control characters (C0, DEL, C1,
+ * escape sequences included) are shown as ␦, and a carriage return cannot overwrite a row.
+ * With `keepColour`, colour sequences (ESC [ … m, which only change colours) are left for the
+ * styled output pondus writes itself on a colour terminal.
+ *
+ * @param text text that may hold control characters
+ * @param keepColour whether colour sequences stay
+ * @returns the same text with each other control character replaced by ␦
+ * @example
+ * visibleControls('JK-9 fails\rJK-9 passes') // 'JK-9 fails␦JK-9 passes'
+ */
+export function visibleControls(text: string, keepColour = false): string {
+  // eslint-disable-next-line no-control-regex
+  if (!/[\u0000-\u001f\u007f-\u009f]/.test(text)) return text;
+  // eslint-disable-next-line no-control-regex
+  const pattern = keepColour ? /\u001b\[[0-9;]*m|[\u0000-\u001f\u007f-\u009f]/g : /[\u0000-\u001f\u007f-\u009f]/g;
+  return text.replace(pattern, (m) => (m.length > 1 ? m : '\u2426'));
+}

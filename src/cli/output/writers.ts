@@ -7,7 +7,7 @@ import type { ChalkInstance } from 'chalk';
 import { errorJson, renderError } from '../../errors/render.js';
 import type { PondusError } from '../../errors/pondus-error.js';
 import type { InputItem } from '../input/inputs.js';
-import { delimitedCell, guardCell, notesCell, type Cell, type OutputFormat } from './format.js';
+import { delimitedCell, guardCell, notesCell, visibleControls, type Cell, type OutputFormat } from './format.js';
 import type { Presenter } from './presenter.js';
 
 export interface ResultWriter<R> {
@@ -122,7 +122,7 @@ class TableWriter<R> implements ResultWriter<R> {
   endBatch(final: boolean): void {
     if (!final && this.rows.length < TABLE_CHUNK && this.blocks.length < TABLE_CHUNK) return;
     const s = this.ctx.outStyle;
-    if (this.blocks.length) this.ctx.out.write(this.blocks.join('\n') + '\n');
+    if (this.blocks.length) this.ctx.out.write(this.blocks.map((b) => b.split('\n').map((l) => visibleControls(l, s.level > 0)).join('\n')).join('\n') + '\n');
     if (this.rows.length && this.okCount > 0) {
       const t = this.p.table!;
       const table = new Table({
@@ -131,10 +131,10 @@ class TableWriter<R> implements ResultWriter<R> {
         style: { head: [], border: [] },
         chars: { mid: '', 'left-mid': '', 'mid-mid': '', 'right-mid': '' },
       });
-      for (const r of this.rows) table.push(r.map((c) => (c === null || c === undefined ? '' : String(c))));
+      for (const r of this.rows) table.push(r.map((c) => (c === null || c === undefined ? '' : visibleControls(String(c)))));
       this.ctx.out.write(table.toString() + '\n');
     }
-    if (this.notes.length) this.ctx.out.write(this.notes.map((n) => s.dim(`note: ${n}`)).join('\n') + '\n');
+    if (this.notes.length) this.ctx.out.write(this.notes.map((n) => s.dim(`note: ${visibleControls(n)}`)).join('\n') + '\n');
     if (final && this.p.caution && this.okCount > 0) this.ctx.out.write(s.yellow(`caution: ${this.p.caution}`) + '\n');
     this.rows = [];
     this.blocks = [];
