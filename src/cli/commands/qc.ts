@@ -4,6 +4,7 @@
  * (as is ↔ dried / anhydrous / solvent-free, with a specification check) and
  * `replicates` (mean, SD, RSD, confidence interval).
  */
+import { displayMeasured } from '../../sigfig/round.js';
 import type { Command } from 'commander';
 import type { Note } from '../../errors/issue.js';
 import { fail } from '../../errors/pondus-error.js';
@@ -314,7 +315,7 @@ export function replicatesPresenter(o: ReplicatesCli): RowPresenter<ReplicateRes
       const u = r.unit ? ` ${r.unit}` : '';
       return [
         `${input}`,
-        `  n = ${r.n}; mean ${r.mean.value.toSignificantDigits(10).toFixed()}${u}; s = ${fig2(r.sd)}${u}; RSD = ${fig2(r.rsdPercent)} %`,
+        `  n = ${r.n}; mean ${displayMeasured(r.mean, r.rounding).text}${u}; s = ${fig2(r.sd)}${u}; RSD = ${fig2(r.rsdPercent)} %`,
         `  ${r.level} % confidence interval (t = ${r.t.toFixed(3)}, ${r.df} df): ${r.reported}`,
       ].join('\n');
     },
