@@ -3,7 +3,7 @@ import { fileURLToPath } from 'node:url';
 import { MessageChannel, receiveMessageOnPort, Worker, type MessagePort } from 'node:worker_threads';
 
 const BIN = fileURLToPath(new URL('../../bin/pondus.cjs', import.meta.url));
-const WORKER = fileURLToPath(new URL('./cli-worker.cjs', import.meta.url));
+const WORKER = fileURLToPath(new URL('../support/cli-worker.cjs', import.meta.url));
 const TIMEOUT_MS = 60_000;
 
 export interface CliRun {

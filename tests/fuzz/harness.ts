@@ -113,7 +113,7 @@ export class CliWorker {
   constructor(private readonly hangMs: number) {}
 
   private start(): Worker {
-    this.worker ??= new Worker(join(__dirname, 'worker.cjs'), { resourceLimits: { maxOldGenerationSizeMb: 1024, stackSizeMb: 4 } });
+    this.worker ??= new Worker(join(__dirname, '..', 'support', 'cli-worker.cjs'), { resourceLimits: { maxOldGenerationSizeMb: 1024, stackSizeMb: 4 } });
     return this.worker;
   }
 

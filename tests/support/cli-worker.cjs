@@ -1,14 +1,13 @@
-// Runs pondus's CLI (the bundle built for tests, dist/test/cli-main.cjs) in a worker thread for
-// run-cli.ts: each request { args, input, env } gets { status, stdout, stderr } back on the port,
-// and the waiting test thread is woken through the shared flag.
+// Runs pondus's CLI (the bundle built for tests, dist/test/cli-main.cjs) in a worker thread.
+// Each request { id, args, input, env } gets { id, status, stdout, stderr, ms } back. Two ways in:
+// - with workerData { port, flag } (tests/cli/run-cli.ts): answers on that port and wakes the
+//   test thread, which waits on the shared flag;
+// - without (the fuzz harness): answers on parentPort; the harness replaces a worker that hangs.
 'use strict';
-const { workerData } = require('node:worker_threads');
+const { parentPort, workerData } = require('node:worker_threads');
 const { Writable } = require('node:stream');
 const { join } = require('node:path');
 const { main } = require(join(__dirname, '..', '..', 'dist', 'test', 'cli-main.cjs'));
-
-const { port, flag } = workerData;
-const signal = new Int32Array(flag);
 
 class Capture extends Writable {
   constructor() {
@@ -22,7 +21,7 @@ class Capture extends Writable {
   }
 }
 
-async function serve({ args, input, env }) {
+async function serve({ id, args, input, env = {} }) {
   const saved = {};
   for (const [k, v] of Object.entries(env)) {
     saved[k] = process.env[k];
@@ -31,6 +30,7 @@ async function serve({ args, input, env }) {
   }
   const stdout = new Capture();
   const stderr = new Capture();
+  const t0 = performance.now();
   let status;
   try {
     status = await main(args, {
@@ -42,7 +42,7 @@ async function serve({ args, input, env }) {
       stderr,
     });
   } catch (e) {
-    status = 70;
+    status = -1;
     stderr.text += `thrown out of main: ${e && e.stack ? e.stack : String(e)}`;
   } finally {
     for (const [k, v] of Object.entries(saved)) {
@@ -50,12 +50,17 @@ async function serve({ args, input, env }) {
       else process.env[k] = v;
     }
   }
-  return { status, stdout: stdout.text, stderr: stderr.text };
+  return { id, status, stdout: stdout.text, stderr: stderr.text, ms: performance.now() - t0 };
 }
 
-port.on('message', async (request) => {
-  const result = await serve(request);
-  port.postMessage(result);
-  Atomics.store(signal, 0, 1);
-  Atomics.notify(signal, 0);
-});
+if (workerData && workerData.port) {
+  const { port, flag } = workerData;
+  const signal = new Int32Array(flag);
+  port.on('message', async (request) => {
+    port.postMessage(await serve(request));
+    Atomics.store(signal, 0, 1);
+    Atomics.notify(signal, 0);
+  });
+} else {
+  parentPort.on('message', async (request) => parentPort.postMessage(await serve(request)));
+}
