@@ -12,7 +12,7 @@ import { hillOrder } from '../../formula/hill.js';
 import { displayQuantity } from '../../sigfig/display-quantity.js';
 import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
-import { withOutputOptions, type OutputOptions } from './common.js';
+import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
 const residualText = (m: Map<string, number>) => [...m].map(([s, r]) => `${s} ${r >= 0 ? '+' : ''}${r.toFixed(3)}`).join(', ');
@@ -80,7 +80,7 @@ export function empiricalPresenter(o: EmpiricalCliOptions): Presenter<EmpiricalR
 
 // --- combustion ---------------------------------------------------------------
 
-type CombustionCliOptions = OutputOptions & Partial<Record<keyof typeof PRODUCTS, string>> & {
+type CombustionCliOptions = OutputOptions & RoundingOptions & Partial<Record<keyof typeof PRODUCTS, string>> & {
   /** Set by the command: the note when units typed as separate words were joined. */
   unitNote?: string;
 };
@@ -90,6 +90,7 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
   const collected = Object.fromEntries(Object.keys(PRODUCTS).filter((k) => o[k as keyof typeof PRODUCTS] !== undefined).map((k) => [k, o[k as keyof typeof PRODUCTS]]));
   if (Object.keys(collected).length === 0) throw fail({ code: 'USAGE', message: `give the masses collected: --co2 (and --h2o, ${Object.keys(PRODUCTS).filter((k) => k !== 'co2' && k !== 'h2o').map((k) => `--${k}`).join(', ')})` });
   if (collected.co2 === undefined) throw fail({ code: 'USAGE', message: 'give the mass of CO2 collected (--co2): the carbon of the sample' });
+  const rounding = roundingOf(o);
   return {
     compute: (sample) => {
       const r = combustion({ sample, collected });
@@ -97,8 +98,8 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
       return r;
     },
     json: (r) => ({
-      sample: displayQuantity(r.sample, 'g').text,
-      elements: r.elements.map((e) => ({ symbol: e.symbol, mass: displayQuantity(e.mass, 'g').value.toNumber(), massDisplay: displayQuantity(e.mass, 'g').text, percent: e.percent.value.toNumber(), percentDisplay: displayQuantity(e.percent).figure, byDifference: e.byDifference })),
+      sample: displayQuantity(r.sample, 'g', rounding).text,
+      elements: r.elements.map((e) => ({ symbol: e.symbol, mass: displayQuantity(e.mass, 'g', rounding).value.toNumber(), massDisplay: displayQuantity(e.mass, 'g', rounding).text, percent: e.percent.value.toNumber(), percentDisplay: displayQuantity(e.percent, undefined, rounding).figure, byDifference: e.byDifference })),
       empirical: r.empirical,
       residuals: Object.fromEntries(r.fit.residuals),
       alternatives: r.alternatives.map((a) => a.formula),
@@ -106,10 +107,10 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
     }),
     noteItems: (r) => r.notes,
     columns: ['sample', 'empirical', 'percents'],
-    cells: (r) => [displayQuantity(r.sample, 'g').text, r.empirical, r.elements.map((e) => `${e.symbol}=${displayQuantity(e.percent).figure}`).join(' ')],
+    cells: (r) => [displayQuantity(r.sample, 'g', rounding).text, r.empirical, r.elements.map((e) => `${e.symbol}=${displayQuantity(e.percent, undefined, rounding).figure}`).join(' ')],
     block: (r) => {
-      const rows = r.elements.map((e) => [e.symbol + (e.byDifference ? ' (by difference)' : ''), displayQuantity(e.mass, 'g').figure, displayQuantity(e.percent).figure]);
-      return [`sample ${displayQuantity(r.sample, 'g').text}`, fixedTable(['element', 'mass g', 'mass %'], rows, ['left', 'right', 'right']), `empirical formula: ${r.empirical}`, ...(r.alternatives.length ? [`also within the limits: ${r.alternatives.map((a) => a.formula).join(', ')}`] : [])].join('\n');
+      const rows = r.elements.map((e) => [e.symbol + (e.byDifference ? ' (by difference)' : ''), displayQuantity(e.mass, 'g', rounding).figure, displayQuantity(e.percent, undefined, rounding).figure]);
+      return [`sample ${displayQuantity(r.sample, 'g', rounding).text}`, fixedTable(['element', 'mass g', 'mass %'], rows, ['left', 'right', 'right']), `empirical formula: ${r.empirical}`, ...(r.alternatives.length ? [`also within the limits: ${r.alternatives.map((a) => a.formula).join(', ')}`] : [])].join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
   };
@@ -189,7 +190,7 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
     .description('combustion analysis: element percents and the empirical formula from the masses collected')
     .argument('[sample...]', "sample mass, e.g. '0.1000 g'");
   for (const [key, p] of Object.entries(PRODUCTS)) combustionCmd.option(`--${key} <mass>`, `mass of ${p.formula} collected (gives ${p.element})`);
-  withOutputOptions(combustionCmd).action((inputs: string[], o: CombustionCliOptions, cmd: Command) => {
+  withRoundingOption(withOutputOptions(combustionCmd)).action((inputs: string[], o: CombustionCliOptions, cmd: Command) => {
     // masses typed without quotes: `0.1000 g --co2 0.2000 g` leaves the units among the samples
     if (inputs.some((a) => /^[A-Za-zµμ]+$/.test(a))) {
       const raw = (cmd.parent as (Command & { rawArgs?: string[] }) | null)?.rawArgs ?? [];
