@@ -16,7 +16,7 @@ import { registerEmpirical } from './commands/empirical.js';
 import { registerPrepare } from './commands/prepare.js';
 import { registerReact } from './commands/react.js';
 import { registerComposition } from './commands/composition.js';
-import { outputFormat } from './commands/common.js';
+import { outputFormat, refuseRepeatedOptions } from './commands/common.js';
 import { registerMass } from './commands/mass.js';
 import { registerQc } from './commands/qc.js';
 import { registerPharmacy } from './commands/pharmacy.js';
@@ -28,6 +28,9 @@ import { Sink } from './output/sink.js';
 import { styleFor } from './output/style.js';
 
 export const VERSION = '0.1.0';
+
+/** Options that collect a value each time they are given; every other option takes one value. */
+const REPEATABLE: Record<string, string[]> = { react: ['--amount'] };
 
 /** The streams a run uses; tests pass their own. */
 export interface CliIo {
@@ -96,6 +99,9 @@ export async function main(args: string[], io: CliIo): Promise<number> {
   registerQc(program, run);
   registerPharmacy(program, run);
   registerIonCommands(program, run, io.stdin);
+
+  // an option that takes one value is never silently overridden by a second one (exit 2)
+  for (const cmd of program.commands) refuseRepeatedOptions(cmd, REPEATABLE[cmd.name()] ?? []);
 
   try {
     await program.parseAsync(args, { from: 'user' });

@@ -24,6 +24,7 @@ export type IssueCode =
   | 'AMBIGUOUS_CHARGE'
   | 'MISPLACED_CHARGE'
   | 'UNKNOWN_ABBREVIATION'
+  | 'SPACE_IN_FORMULA'
   | 'AMBIGUOUS_READING'
   | 'INEXACT_FRACTION'
   // computing with formulas

@@ -86,5 +86,39 @@ export function prescan(text: string, maxLength = MAX_FORMULA_LENGTH): Issue | n
     const open = stack[stack.length - 1];
     return { code: 'UNCLOSED_GROUP', message: `'${text[open]}' at column ${columnOf(text, open)} is never closed`, column: columnOf(text, open) };
   }
+  return spaceIssue(text);
+}
+
+const SPACES = /[ \t\u00a0\u2009\u202f]+/g;
+const ADDITION_DOTS = '·•∙⋅*.';
+
+/**
+ * A space inside a formula joins nothing silently: 'H2O 2' would read as H2O2, 'H2O NaCl' as one
+ * substance, a tab-separated line as one formula. Spaces are fine at the ends, beside an addition
+ * dot ('CuSO4 · 5H2O'), before a state symbol ('Zn (s)'), and after a decimal count ('Fe2.5 O',
+ * which settles that the '.' is a decimal point).
+ */
+function spaceIssue(text: string): Issue | null {
+  const first = text.search(/[^ \t\u00a0\u2009\u202f]/);
+  const trimmedEnd = text.replace(/[ \t\u00a0\u2009\u202f]+$/, '').length;
+  SPACES.lastIndex = 0;
+  for (let m = SPACES.exec(text); m !== null; m = SPACES.exec(text)) {
+    const at = m.index;
+    const after = at + m[0].length;
+    if (at < first || after >= trimmedEnd) continue;
+    if (ADDITION_DOTS.includes(text[at - 1]) || ADDITION_DOTS.includes(text[after])) continue;
+    if (/[0-9]\.[0-9]+$/.test(text.slice(Math.max(0, at - 24), at))) continue;
+    if (/^\((?:s|l|g|aq)\)/.test(text.slice(after, after + 4))) continue; // 'Zn (s)': a state symbol
+    if (/(?:^|[·•∙⋅*.])[ \t\u00a0\u2009\u202f]*[0-9]+(?:\.[0-9]+)?$/.test(text.slice(0, at))) continue; // '· 5 H2O': a component's multiplier
+    const column = columnOf(text, at);
+    const joined = text.slice(first, trimmedEnd).replace(SPACES, '');
+    return {
+      code: 'SPACE_IN_FORMULA',
+      message: `a space at column ${column} inside the formula: pondus does not join the pieces around it, because '${joined}' may be a different substance from what was meant`,
+      column,
+      length: m[0].length,
+      hint: 'give one formula per argument or per line; write · between the parts of an addition compound (CuSO4·5H2O)',
+    };
+  }
   return null;
 }

@@ -79,6 +79,10 @@ describe('solvate fitting ranks the true solvate first', () => {
           const truth = composition(`${base}·${amount}${formulas[solvent as keyof typeof formulas]}`);
           const found = truth.elements.filter((e) => ['C', 'H', 'N'].includes(e.symbol)).map((e) => `${e.symbol}=${e.massPercent.toFixed(6)}`).join(',');
           const r = analysis(base, found, { solvents });
+          // by design each partner costs 0.05 points in the ranking: a solvate that moves the
+          // percents less than that does not beat the bare formula (the simpler explanation)
+          const bare = r.fits.find((f) => f.solvates.length === 0);
+          fc.pre(bare === undefined || bare.maxDeviation > 0.06);
           const best = r.fits[0];
           expect(best.solvates).toHaveLength(1);
           expect(best.solvates[0].formula).toBe(composition(formulas[solvent as keyof typeof formulas]).formula);
