@@ -5,7 +5,7 @@
  * figures, and the empirical formula.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { Decimal } from '../exact/decimal.js';
 import { MASS, measureAs } from '../calc/measure.js';
 import { conversionFactor } from '../preparation/conversion-factor.js';
@@ -36,8 +36,9 @@ export interface CombustionResult {
   sample: Quantity;
   /** Mass and percent of each element, in the order C, H, N, S, halogens, O. */
   elements: { symbol: string; mass: Quantity; percent: Quantity; byDifference: boolean }[];
-  empirical: string;
-  fit: FormulaFit;
+  /** The empirical formula, or null when none fits within the precision of the data (a note says so). */
+  empirical: string | null;
+  fit: FormulaFit | null;
   alternatives: FormulaFit[];
   notes: Note[];
 }
@@ -79,7 +80,15 @@ export function combustion(options: CombustionOptions): CombustionResult {
     sample: sample.value,
     sampleHalfUnit: new Decimal(10).pow(sample.lsd ?? -12).div(2),
   };
-  const s = searchFormula(measurements);
+  // the element masses and percents are results of the measurements, whether or not a formula fits
+  let s: ReturnType<typeof searchFormula>;
+  try {
+    s = searchFormula(measurements);
+  } catch (e) {
+    if (!(e instanceof PondusError) || e.first.code !== 'NO_FORMULA_FITS') throw e;
+    notes.push({ code: 'NO_FORMULA_FITS', message: e.first.message });
+    return { sample, elements, empirical: null, fit: null, alternatives: [], notes };
+  }
   return { sample, elements, empirical: s.best.formula, fit: s.best, alternatives: s.alternatives, notes };
 }
 

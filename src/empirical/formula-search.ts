@@ -60,6 +60,29 @@ function fitOf(symbols: string[], counts: number[], percents: number[], limits: 
   return { formula: hillFormula(map), counts: map, residuals, worst };
 }
 
+/** Valences for the saturation check of formulas made only of these elements (common practice). */
+const VALENCE: Readonly<Record<string, number>> = { C: 4, Si: 4, N: 3, P: 3, B: 3, O: 2, S: 2, H: 1, D: 1, F: 1, Cl: 1, Br: 1, I: 1 };
+
+/**
+ * Whether a formula of covalent elements can exist: its ring-plus-double-bond equivalents
+ * (IUPAC Gold Book, "RDBE"; 1 + Σ nᵢ(vᵢ − 2)/2) are not negative. An empirical formula must pass too:
+ * a molecular formula k times its counts has RDBE k·(r − 1) + 1, so it is negative for every k
+ * when r is. Formulas with any other element (salts, metals) are not judged.
+ *
+ * @example
+ * plausible(['C', 'H', 'O'], [2, 6, 1])       // true (ethanol)
+ * plausible(['C', 'H', 'O'], [100, 299, 50])  // false (more H than any molecule of 100 C can hold)
+ */
+export function plausible(symbols: readonly string[], counts: readonly number[]): boolean {
+  let r2 = 2;
+  for (let i = 0; i < symbols.length; i++) {
+    const v = VALENCE[symbols[i]];
+    if (v === undefined) return true;
+    r2 += counts[i] * (v - 2);
+  }
+  return r2 >= 0;
+}
+
 function reduce(counts: number[]): number[] {
   let g = 0n;
   for (const c of counts) g = gcd(g, BigInt(c));
@@ -102,7 +125,7 @@ export function searchFormula(m: Measurements): SearchResult {
       if (i === symbols.length) {
         const reduced = reduce(counts);
         const key = reduced.join(',');
-        if (seen.has(key)) return;
+        if (seen.has(key) || !plausible(symbols, reduced)) return;
         const f = fitOf(symbols, reduced, percents, limits);
         if (!closest || f.worst < closest.worst) closest = f;
         if (f.worst <= 1) {

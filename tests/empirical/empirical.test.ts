@@ -3,7 +3,8 @@ import { errorCode } from '../support/error-code.js';
 import { describe, expect, it } from 'vitest';
 import { candidateFormulas, rdbe } from '../../src/empirical/candidates.js';
 import { combustion } from '../../src/empirical/combustion.js';
-import { empirical } from '../../src/empirical/empirical-formula.js';
+import { empirical, safeEmpirical } from '../../src/empirical/empirical-formula.js';
+import { plausible } from '../../src/empirical/formula-search.js';
 import { composition } from '../../src/composition/element-shares.js';
 import { formulaMass } from '../../src/mass/formula-mass.js';
 import { displayQuantity } from '../../src/sigfig/display-quantity.js';
@@ -158,5 +159,26 @@ describe('measurement sheets', () => {
       [3, 'S2', 'C=7.34 g H=1.85 g N=rest sample=12.04 g', undefined],
     ]);
     expect(rows.map((r) => empirical(r.measurements, { molarMass: r.molarMass }).molecular ?? empirical(r.measurements).empirical)).toEqual(['C6H12O6', 'C3H9N']);
+  });
+});
+
+describe('formulas that cannot exist are never returned', () => {
+  it('refuses rather than return C100H299O50 for ethanol-like data given to one decimal', () => {
+    // C 52.14, H 13.13, O 34.73 % for C2H6O (computed from CIAAW weights); to one decimal the limits
+    // exclude it, and before the saturation check the search drifted to C100H299O50 (RDBE < 0)
+    const r = safeEmpirical('C=52.1 H=13.1 O=34.8');
+    expect(r.success).toBe(false);
+    if (!r.success) {
+      expect(r.error.first.code).toBe('NO_FORMULA_FITS');
+      expect(r.error.first.message).toContain('the closest, C2H6O');
+    }
+  });
+
+  it('every returned formula of C, H, N, O and halogens has RDBE ≥ 0', () => {
+    // source: IUPAC Gold Book, ring-plus-double-bond equivalents
+    for (const set of ['C=40.00 H=6.71 O=53.29', 'C=52.14 H=13.13 O=34.73', 'C=85.63 H=14.37', 'C=24.27 H=4.07 Cl=71.66']) {
+      const e = empirical(set);
+      expect(plausible([...e.fit.counts.keys()], [...e.fit.counts.values()])).toBe(true);
+    }
   });
 });

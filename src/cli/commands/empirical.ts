@@ -101,16 +101,16 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
       sample: displayQuantity(r.sample, 'g', rounding).text,
       elements: r.elements.map((e) => ({ symbol: e.symbol, mass: displayQuantity(e.mass, 'g', rounding).value.toNumber(), massDisplay: displayQuantity(e.mass, 'g', rounding).text, percent: e.percent.value.toNumber(), percentDisplay: displayQuantity(e.percent, undefined, rounding).figure, byDifference: e.byDifference })),
       empirical: r.empirical,
-      residuals: Object.fromEntries(r.fit.residuals),
+      residuals: r.fit ? Object.fromEntries(r.fit.residuals) : null,
       alternatives: r.alternatives.map((a) => a.formula),
       notes: r.notes.map((n) => n.message),
     }),
     noteItems: (r) => r.notes,
     columns: ['sample', 'empirical', 'percents'],
-    cells: (r) => [displayQuantity(r.sample, 'g', rounding).text, r.empirical, r.elements.map((e) => `${e.symbol}=${displayQuantity(e.percent, undefined, rounding).figure}`).join(' ')],
+    cells: (r) => [displayQuantity(r.sample, 'g', rounding).text, r.empirical ?? '', r.elements.map((e) => `${e.symbol}=${displayQuantity(e.percent, undefined, rounding).figure}`).join(' ')],
     block: (r) => {
       const rows = r.elements.map((e) => [e.symbol + (e.byDifference ? ' (by difference)' : ''), displayQuantity(e.mass, 'g', rounding).figure, displayQuantity(e.percent, undefined, rounding).figure]);
-      return [`sample ${displayQuantity(r.sample, 'g', rounding).text}`, fixedTable(['element', 'mass g', 'mass %'], rows, ['left', 'right', 'right']), `empirical formula: ${r.empirical}`, ...(r.alternatives.length ? [`also within the limits: ${r.alternatives.map((a) => a.formula).join(', ')}`] : [])].join('\n');
+      return [`sample ${displayQuantity(r.sample, 'g', rounding).text}`, fixedTable(['element', 'mass g', 'mass %'], rows, ['left', 'right', 'right']), `empirical formula: ${r.empirical ?? 'none within the precision of the data (see the note)'}`, ...(r.alternatives.length ? [`also within the limits: ${r.alternatives.map((a) => a.formula).join(', ')}`] : [])].join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
   };
