@@ -276,7 +276,15 @@ export class TreeBuilder {
 
   count(ctx: Ctx): CountNode {
     const n = tok(ctx, 'Number');
-    if (n) return this.countOf(n.image, n);
+    if (n) {
+      // a decimal count is read as written (Fe0.95O, YBa2Cu3O6.5), and said: 'CuSO4.5' may be a
+      // hydrate cut short as well as 4.5 O
+      if (/^[1-9][0-9]*\.[0-9]{1,2}$/.test(n.image)) {
+        const col = columnOf(this.text, n.startOffset);
+        this.notes.push({ code: 'DECIMAL_COUNT', message: `'${n.image}' at column ${col} is read as a decimal count; for an addition compound write the dot and its part (CuSO4·5H2O)`, column: col });
+      }
+      return this.countOf(n.image, n);
+    }
     const s = tok(ctx, 'SubscriptDigits')!;
     return this.countOf(fromSubscript(s.image), s);
   }
