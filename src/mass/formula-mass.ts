@@ -111,6 +111,15 @@ class Computed implements MassResult {
       if (notes === NO_NOTES) notes = [];
       notes.push({ code: 'NON_INTEGER_COUNTS', message: 'the formula has non-integer counts; the nominal mass is not defined' });
     }
+    if (tree.charge !== 0) {
+      if (notes === NO_NOTES) notes = [];
+      const z = Math.abs(tree.charge);
+      const e = (Number(ELECTRON_MASS) * z).toPrecision(2);
+      notes.push({
+        code: 'ION_MOLAR_MASS',
+        message: `the molar mass is the sum of the atomic weights (neutral atoms): the ${z} electron${z === 1 ? '' : 's'} ${tree.charge > 0 ? 'missing from' : 'added to'} the ion (${e} g/mol) ${z === 1 ? 'is' : 'are'} not counted (common practice for molar masses); the monoisotopic mass counts ${z === 1 ? 'it' : 'them'}`,
+      });
+    }
     this.notes = notes;
   }
 

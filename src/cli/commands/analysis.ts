@@ -195,7 +195,7 @@ export function registerAnalysis(program: Command, run: CommandRunner, stdin: ()
       .option('--step <amount>', 'step of the solvate amounts searched', '0.05')
       .option('--max <amount>', 'largest amount of each solvate searched', '2')
       .option('--top <n>', 'how many fits to list', '5')
-      .option('--abbreviations', 'read group abbreviations (Me, Et, Ph, Boc, …) in formulas')
+      .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)')
       .addOption(new Option('--sheet <file>', 'a lab sheet (CSV: id, formula, and found % in columns C, H, N, S, …); - reads it from standard input')),
   )).action((args: string[], o: AnalysisCliOptions, cmd: Command) => {
     const given = (name: string) => cmd.getOptionValueSource(name) === 'cli';

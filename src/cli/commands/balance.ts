@@ -28,6 +28,6 @@ export function registerBalance(program: Command, run: CommandRunner): void {
       .command('balance')
       .description('balance chemical equations exactly (ions and electrons included)')
       .argument('[equations...]', "equations such as 'Fe^2+ + MnO4^- + H^+ -> Fe^3+ + Mn^2+ + H2O'; - reads one per line")
-      .option('--abbreviations', 'read group abbreviations (Me, Et, Ph, …) in formulas'),
+      .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)'),
   ).action((inputs: string[], o: BalanceCliOptions) => run('balance', inputs, o));
 }

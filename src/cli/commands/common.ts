@@ -29,7 +29,7 @@ export function withOutputOptions(cmd: Command): Command {
 export function withFormulaOptions(cmd: Command): Command {
   return withOutputOptions(cmd)
     .addOption(new Option('--weights <table>', 'atomic weights: standard (CIAAW 2021 + 2024 revisions) or abridged (five figures)').choices(['standard', 'abridged']).default('standard'))
-    .option('--abbreviations', 'read group abbreviations (Me, Et, Ph, Bn, Ac, Boc, Ts, …); Pr, Ac and Ts then mean propyl, acetyl and tosyl');
+    .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)');
 }
 
 /**

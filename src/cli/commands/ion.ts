@@ -89,7 +89,7 @@ export function registerIonCommands(program: Command, run: CommandRunner, stdin:
       .option('--found <m/z>', 'the measured m/z (one input only): gives the error in ppm and mDa and the report line')
       .option('--ionisation <method>', 'ionisation named in the report line', 'ESI')
       .option('--decimals <n>', 'decimals of the calculated m/z in the report line', '4')
-      .option('--abbreviations', 'read group abbreviations (Me, Et, Ph, Boc, …) in formulas')
+      .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)')
       .option('--sheet <file>', 'a lab sheet (CSV with columns id, formula, ion, found); - reads it from standard input'),
   ).action((inputs: string[], o: IonCliOptions) => {
     if (o.found !== undefined && (inputs.length > 1 || inputs.includes('-') || o.sheet !== undefined)) {

@@ -116,7 +116,7 @@ export function registerPattern(program: Command, run: CommandRunner): void {
       .option('--coverage <percent>', 'share of the probability the fine structure holds', undefined)
       .option('--min-relative <percent>', 'leave out peaks below this percentage of the largest', '0.1')
       .option('--svg <file>', 'also draw the pattern as an SVG picture (one input)')
-      .option('--abbreviations', 'read group abbreviations (Me, Et, Ph, Boc, …) in formulas'),
+      .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)'),
   ).action((inputs: string[], o: PatternCliOptions) => {
     if (o.svg !== undefined && (inputs.length !== 1 || inputs[0] === '-')) throw fail({ code: 'USAGE', message: '--svg draws one pattern: give one input' });
     return run('pattern', inputs, o);

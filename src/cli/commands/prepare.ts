@@ -154,7 +154,7 @@ export function registerPrepare(program: Command, run: CommandRunner): void {
         .option('--as <species>', 'the concentration is of this part of the reagent: Cu, Cl, CuSO4, a free base, …')
         .option('--weighed <m>', "the mass actually weighed: '1.4587 g'; gives the concentration made (a result)")
         .option('--replace <form=amount>', "weigh this reagent in place of another form: --replace 'CuSO4=10.00 g'")
-        .option('--abbreviations', 'read group abbreviations in formulas'),
+        .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)'),
     ),
   );
   refuseRepeatedOptions(cmd).action((inputs: string[], o: PrepareCliOptions) => run('prepare', inputs, o));

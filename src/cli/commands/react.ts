@@ -85,7 +85,7 @@ export function registerReact(program: Command, run: CommandRunner): void {
       .argument('[equations...]', 'equations (balanced here if they are not); - reads one per line')
       .option('--amount <species=amount>', "an amount of a reactant: 'H2=4.00 g', 'O2=0.500 mol', 'HCl=25.0 mL of 0.100 M' (repeat for each)", collect)
       .option('--actual <species=amount>', "the amount of a product obtained, for percent yield: 'H2O=30.1 g'")
-      .option('--abbreviations', 'read group abbreviations (Me, Et, Ph, …) in formulas'),
+      .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)'),
   ));
   refuseRepeatedOptions(cmd, ['--amount']).action((inputs: string[], o: ReactCliOptions) => run('react', inputs, o));
 }
