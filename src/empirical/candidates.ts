@@ -19,6 +19,9 @@ import { hillFormula } from '../formula/hill.js';
 import { readFoundValues } from '../analysis/found-values.js';
 import { readNumber } from '../sigfig/read-number.js';
 
+/** Formulas a candidate search may visit: about a second of work; a larger search is refused up front in effect. */
+export const MAX_WORK = 600_000;
+
 export interface CandidateOptions {
   /** Neutral monoisotopic mass, u. */
   mass?: string;
@@ -148,11 +151,21 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
   const mC = massOf('C');
   const mH = massOf('H');
   const counts = new Array<number>(heavy.length).fill(0);
-  const out: Candidate[] = [];
+  let out: Candidate[] = [];
   let examined = 0;
+  let work = 0;
+  let cut = false;
+  const rank = (c: Candidate) => (c.ppm !== null ? Math.abs(c.ppm) : 0) + (c.maxDeviation ?? 0);
+  const byRank = (p: Candidate, q: Candidate) => rank(p) - rank(q) || (p.maxDeviation ?? 0) - (q.maxDeviation ?? 0);
+  const tooLarge = () =>
+    fail({
+      code: 'SEARCH_TOO_LARGE',
+      message: `the search visits more than ${MAX_WORK.toLocaleString('en-US')} formulas (${describe(options)}), more than pondus answers within about a second: narrow the window (--ppm), the element ranges (--elements), or add found percents (--found)`,
+    });
 
   const consider = (c: number, h: number) => {
     examined++;
+    if (++work > MAX_WORK) throw tooLarge();
     const all = new Map<string, number>();
     if (c) all.set('C', c);
     if (h) all.set('H', h);
@@ -191,6 +204,12 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
       }
     }
     const monoMass = [...all].reduce((a, [s, n]) => a + n * mono(s), 0);
+    // memory stays bounded: only the best `limit` are kept once the list grows
+    if (out.length >= 4 * limit + 10_000) {
+      out.sort(byRank);
+      out = out.slice(0, limit);
+      cut = true;
+    }
     out.push({
       formula: hillFormula(all),
       counts: all,
@@ -216,6 +235,7 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
       }
       return;
     }
+    if (++work > MAX_WORK) throw tooLarge();
     const [a, b] = ranges.get(heavy[i])!;
     for (let n = a; n <= b; n++) {
       const next = cum + n * heavyMass[i];
@@ -227,9 +247,8 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
   };
   walk(0, 0);
 
-  const key = (c: Candidate) => (c.ppm !== null ? Math.abs(c.ppm) : 0) + (c.maxDeviation ?? 0);
-  out.sort((p, q) => key(p) - key(q) || (p.maxDeviation ?? 0) - (q.maxDeviation ?? 0));
-  return { input: describe(options), candidates: out.slice(0, limit), examined, truncated: out.length > limit, notes: read ? [...read.notes] : [] };
+  out.sort(byRank);
+  return { input: describe(options), candidates: out.slice(0, limit), examined, truncated: cut || out.length > limit, notes: read ? [...read.notes] : [] };
 }
 
 function describe(o: CandidateOptions): string {

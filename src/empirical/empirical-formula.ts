@@ -8,6 +8,9 @@ import { formulaMass } from '../mass/formula-mass.js';
 import { readMeasurements, type Measurements } from './measurements.js';
 import { searchFormula, type FormulaFit } from './formula-search.js';
 
+/** An empirical formula with more atoms than this gets a note: such a fit says more about the data's precision than about the compound. */
+export const LARGE_EMPIRICAL = 60;
+
 export interface EmpiricalOptions {
   /** Molar mass (g/mol) or a range '170-190', for the molecular formula. */
   molarMass?: string;
@@ -79,6 +82,10 @@ export function empirical(input: string, options: EmpiricalOptions = {}): Empiri
       }
     }
     if (multiple !== null) molecular = multiply(s.best, multiple);
+  }
+  const atoms = [...s.best.counts.values()].reduce((a, b) => a + b, 0);
+  if (atoms > LARGE_EMPIRICAL) {
+    notes.push({ code: 'LARGE_FORMULA', message: `the smallest formula within the limits has ${atoms} atoms: the values are given more precisely than an analysis usually is (about ±0.3 points for combustion analysis, common practice), or the compound is not what the values suggest; check them, or search near a measured mass with the candidates command` });
   }
   return { input, measurements: m, empirical: s.best.formula, fit: s.best, alternatives: s.alternatives, percents: s.percents, limits: s.limits, empiricalMass, molecular, multiple, notes };
 }

@@ -60,6 +60,9 @@ function fitOf(symbols: string[], counts: number[], percents: number[], limits: 
   return { formula: hillFormula(map), counts: map, residuals, worst };
 }
 
+/** Count combinations a formula search may visit: about a second of work. */
+export const MAX_SEARCH_WORK = 400_000;
+
 /** Valences for the saturation check of formulas made only of these elements (common practice). */
 const VALENCE: Readonly<Record<string, number>> = { C: 4, Si: 4, N: 3, P: 3, B: 3, O: 2, S: 2, H: 1, D: 1, F: 1, Cl: 1, Br: 1, I: 1 };
 
@@ -108,6 +111,7 @@ export function searchFormula(m: Measurements): SearchResult {
   const fits: FormulaFit[] = [];
   const seen = new Set<string>();
   let closest: FormulaFit | null = null;
+  let work = 0;
   for (let s = 1; s <= MAX_SCALE; s++) {
     // candidate counts for each element at this scale, from the uncertainty of the ratios
     const options = moles.map((n, i) => {
@@ -122,6 +126,12 @@ export function searchFormula(m: Measurements): SearchResult {
     });
     const counts = new Array<number>(symbols.length).fill(0);
     const walk = (i: number) => {
+      if (++work > MAX_SEARCH_WORK) {
+        throw fail({
+          code: 'SEARCH_TOO_LARGE',
+          message: `the search for a formula of ${symbols.length} elements at these precisions visits more than ${MAX_SEARCH_WORK.toLocaleString('en-US')} count combinations, more than pondus answers within about a second: give the values to fewer decimals only if they are not known better, or give a molar mass and use the candidates command`,
+        });
+      }
       if (i === symbols.length) {
         const reduced = reduce(counts);
         const key = reduced.join(',');

@@ -44,6 +44,7 @@ export type IssueCode =
   // measurements and results
   | 'BAD_MEASUREMENT'
   | 'NO_FORMULA_FITS'
+  | 'SEARCH_TOO_LARGE'
   | 'BAD_EQUATION'
   | 'NO_BALANCE'
   | 'NOT_UNIQUE'

@@ -1,0 +1,32 @@
+import { describe, expect, it } from 'vitest';
+import { safeCandidateFormulas } from '../../src/empirical/candidates.js';
+import { empirical, safeEmpirical } from '../../src/empirical/empirical-formula.js';
+
+// Every search answers or refuses within about a second (no timing is asserted here: the refusal
+// comes from a count of the work done, so it is the same on any machine).
+describe('searches are bounded', () => {
+  it('an empirical search over many elements at fine precision is refused, not run for minutes', () => {
+    const r = safeEmpirical('C=20 H=5 N=10 O=10 S=10 P=10 Cl=10 Br=10 F=10 Si=5');
+    expect(r.success).toBe(false);
+    if (!r.success) expect(r.error.first.code).toBe('SEARCH_TOO_LARGE');
+  });
+
+  it('a candidate window holding millions of formulas is refused with what to narrow', () => {
+    const r = safeCandidateFormulas({ mass: '1200.5', ppm: 100 });
+    expect(r.success).toBe(false);
+    if (!r.success) {
+      expect(r.error.first.code).toBe('SEARCH_TOO_LARGE');
+      expect(r.error.first.message).toMatch(/--ppm/);
+    }
+  });
+
+  it('an ordinary search still answers', () => {
+    const r = safeCandidateFormulas({ mass: '323.19976', ppm: 3 });
+    expect(r.success && r.data.candidates.map((c) => c.formula)).toContain('C20H25N3O');
+  });
+
+  it('a fit with hundreds of atoms carries a note pointing elsewhere', () => {
+    const e = empirical('C=72.15 H=7.12 N=4.72 O=rest');
+    expect(e.notes.map((n) => n.code)).toContain('LARGE_FORMULA');
+  });
+});
