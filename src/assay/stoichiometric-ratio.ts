@@ -20,14 +20,15 @@ export interface MoleRatio {
 }
 
 /**
- * Reads a mole ratio `A:B` of whole or decimal numbers; with no text, 1:1 with a note saying it was assumed.
+ * Reads a mole ratio `A:B` of whole or decimal numbers; with no text, 1:1 with a note saying it was
+ * assumed and which option (`option`) gives it.
  *
  * @example
  * readMoleRatio('1:2', 'Na2CO3', 'HCl', []).factor.value.toString() // '0.5'
  */
-export function readMoleRatio(text: string | undefined, first: string, second: string, notes: Note[]): MoleRatio {
+export function readMoleRatio(text: string | undefined, first: string, second: string, notes: Note[], option = '--ratio'): MoleRatio {
   if (text === undefined) {
-    notes.push({ code: 'RATIO_ASSUMED', message: `1:1 mole ratio assumed between ${first} and ${second}; give --ratio if the reaction is otherwise` });
+    notes.push({ code: 'RATIO_ASSUMED', message: `1:1 mole ratio assumed between ${first} and ${second}; give ${option} if the reaction is otherwise` });
     return { first: 1, second: 1, factor: quantity(exact(1), null), text: '1:1' };
   }
   const m = /^\s*(\d+(?:\.\d+)?)\s*:\s*(\d+(?:\.\d+)?)\s*$/.exec(text);

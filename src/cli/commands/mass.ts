@@ -46,6 +46,9 @@ function plainPresenter(o: MassCliOptions): Presenter<MassResult> {
   };
 }
 
+/** How the uncertainty is obtained, said wherever it is shown (table, JSON, CSV). */
+const UNCERTAINTY_BASIS = 'u from the CIAAW atomic-weight intervals and uncertainties read as rectangular distributions (van der Veen et al., Pure Appl. Chem. 93 (2021) 629); the value is the centre of those distributions, not the molar mass from the conventional weights';
+
 function uncertaintyPresenter(o: MassCliOptions): Presenter<MassRow> {
   const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations };
   return {
@@ -53,7 +56,7 @@ function uncertaintyPresenter(o: MassCliOptions): Presenter<MassRow> {
       const mass = formulaMass(input, opts);
       return { mass, u: molarMassUncertainty(mass) };
     },
-    json: (r) => ({ ...massJson(r.mass), molarMassUncertainty: { value: r.u!.value.toNumber(), standardUncertainty: r.u!.standardUncertainty.toNumber() } }),
+    json: (r) => ({ ...massJson(r.mass), molarMassUncertainty: { value: r.u!.value.toNumber(), standardUncertainty: r.u!.standardUncertainty.toNumber() }, caution: UNCERTAINTY_BASIS }),
     columns: [...columns, 'uncertaintyValue', 'standardUncertainty'],
     cells: (r) => [...cells(r.mass), r.u!.value.toFixed(), r.u!.standardUncertainty.toFixed()],
     table: {
@@ -63,7 +66,7 @@ function uncertaintyPresenter(o: MassCliOptions): Presenter<MassRow> {
     },
     notes: (r) => r.mass.notes.map((n) => n.message),
     noteItems: (r) => r.mass.notes,
-    caution: 'u from the CIAAW atomic-weight intervals and uncertainties read as rectangular distributions (van der Veen et al., Pure Appl. Chem. 93 (2021) 629); the value is the centre of those distributions',
+    caution: UNCERTAINTY_BASIS,
   };
 }
 
