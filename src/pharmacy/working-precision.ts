@@ -7,7 +7,7 @@
  * pharmacy results carry on.
  */
 import type { Note } from '../errors/issue.js';
-import { FEW_FIGURES, WORKING_FIGURES } from '../sigfig/instruction.js';
+import { FEW_FIGURES, instruction, WORKING_FIGURES, workingFigures } from '../sigfig/instruction.js';
 import { lsdForSigFigs, sigFigsOf } from '../sigfig/measured.js';
 import type { Quantity } from '../sigfig/quantity.js';
 
@@ -19,7 +19,7 @@ import type { Quantity } from '../sigfig/quantity.js';
  */
 export function atWorkingPrecision(q: Quantity): Quantity {
   if (q.value.isZero()) return { ...q, lsd: -WORKING_FIGURES, sigFigs: undefined };
-  const n = q.lsd === null ? WORKING_FIGURES : Math.max(WORKING_FIGURES, sigFigsOf(q));
+  const n = workingFigures(instruction(q, []));
   return { ...q, lsd: lsdForSigFigs(q.value, n), sigFigs: n };
 }
 

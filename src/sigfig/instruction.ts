@@ -11,7 +11,7 @@ import { Decimal } from '../exact/decimal.js';
 import type { Note } from '../errors/issue.js';
 import { msd, sigFigsOf } from './measured.js';
 import type { Quantity } from './quantity.js';
-import { displayQuantity, reportUnit } from './display-quantity.js';
+import { displayQuantity, reportUnit, type QuantityDisplay } from './display-quantity.js';
 import { displayMeasured, roundToSigFigs, type RoundingMode } from './round.js';
 import { baseUnitText, sameDims, unitOf, type Unit } from './units.js';
 
@@ -52,21 +52,8 @@ export interface Result {
   quantity: Quantity;
 }
 
-/** How an amount is shown. */
-export interface AmountDisplay {
-  /** Figure and unit: '1.461 g'. */
-  text: string;
-  /** The figure alone: '1.461'. */
-  figure: string;
-  /** The unrounded value in the unit shown. */
-  value: Decimal;
-  /** The rounded value in the unit shown. */
-  rounded: Decimal;
-  /** Significant figures shown (null for an exact number). */
-  sigFigs: number | null;
-  /** Unit symbol shown ('' for a pure number). */
-  unit: string;
-}
+/** How an amount is shown: the fields of a reported quantity that instructions and results share. */
+export type AmountDisplay = Pick<QuantityDisplay, 'text' | 'figure' | 'value' | 'rounded' | 'sigFigs' | 'unit'>;
 
 const figuresOf = (q: Quantity): number | null => (q.lsd === null ? null : sigFigsOf(q));
 

@@ -3,7 +3,7 @@ import { calc, calcJson, type CalcResult } from '../../calc/calc.js';
 import type { RoundingMode } from '../../sigfig/round.js';
 import { fail } from '../../errors/pondus-error.js';
 import type { Presenter } from '../output/presenter.js';
-import { refuseRepeatedOptions, roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
+import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
 interface CalcCliOptions extends OutputOptions, RoundingOptions {
@@ -42,5 +42,5 @@ export function registerCalc(program: Command, run: CommandRunner): void {
       .argument('[expressions...]', "expressions such as '0.100 M * 250.0 mL * M(CuSO4·5H2O) to g'; - reads one per line")
       .option('--explain', 'show each step and which input limited the precision'),
   ));
-  refuseRepeatedOptions(cmd).action((inputs: string[], o: CalcCliOptions) => run('calc', inputs, o));
+  cmd.action((inputs: string[], o: CalcCliOptions) => run('calc', inputs, o));
 }

@@ -11,7 +11,7 @@ import { saltFactor, type SaltFactorResult } from '../../preparation/salt-factor
 import type { Quantity } from '../../sigfig/quantity.js';
 import { displayMeasured, type RoundingMode } from '../../sigfig/round.js';
 import type { Presenter } from '../output/presenter.js';
-import { refuseRepeatedOptions, roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
+import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
 const factorText = (f: ConversionFactor) => `${f.a === 1n ? '' : `${f.a} × `}M(${f.sought.input}) / ${f.b === 1n ? `M(${f.given.input})` : `(${f.b} × M(${f.given.input}))`}`;
@@ -206,7 +206,7 @@ export function registerConversions(program: Command, run: CommandRunner): void 
         .option('--taken <v>', "the volume of stock actually taken, e.g. '25.00 mL': gives the concentration made (a result)"),
     ),
   );
-  refuseRepeatedOptions(dil).action((inputs: string[], o: DiluteCliOptions) => run('dilute', inputs, o));
+  dil.action((inputs: string[], o: DiluteCliOptions) => run('dilute', inputs, o));
   const grav = withRoundingOption(
     withOutputOptions(
       program
@@ -219,7 +219,7 @@ export function registerConversions(program: Command, run: CommandRunner): void 
         .option('--element <symbol>', 'the element the factor rests on, when the two share several'),
     ),
   );
-  refuseRepeatedOptions(grav).action((inputs: string[], o: GravimetricCliOptions) => run('gravimetric', inputs, o));
+  grav.action((inputs: string[], o: GravimetricCliOptions) => run('gravimetric', inputs, o));
   const basis = withRoundingOption(
     withOutputOptions(
       program
@@ -231,7 +231,7 @@ export function registerConversions(program: Command, run: CommandRunner): void 
         .option('--element <symbol>', 'the element the conversion rests on, when the two share several'),
     ),
   );
-  refuseRepeatedOptions(basis).action((inputs: string[], o: BasisCliOptions) => run('basis', inputs, o));
+  basis.action((inputs: string[], o: BasisCliOptions) => run('basis', inputs, o));
   const salt = withRoundingOption(
     withOutputOptions(
       program
@@ -243,6 +243,6 @@ export function registerConversions(program: Command, run: CommandRunner): void 
         .option('--salt-mass <m>', 'a mass of salt: the parent mass it carries (a result)'),
     ),
   );
-  refuseRepeatedOptions(salt).action((inputs: string[], o: SaltCliOptions) => run('salt', inputs, o));
+  salt.action((inputs: string[], o: SaltCliOptions) => run('salt', inputs, o));
 }
 

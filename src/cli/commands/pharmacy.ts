@@ -8,23 +8,18 @@ import { fail } from '../../errors/pondus-error.js';
 import { alligation, type AlligationResult } from '../../pharmacy/alligation.js';
 import { PHARMACY_CAUTION } from '../../pharmacy/caution.js';
 import { atWorkingPrecision } from '../../pharmacy/working-precision.js';
-import { milliequivalents, type MilliequivalentResult } from '../../pharmacy/milliequivalents.js';
+import { milliequivalents, type MilliequivalentOptions, type MilliequivalentResult } from '../../pharmacy/milliequivalents.js';
 import { osmolarity, type OsmolarityResult } from '../../pharmacy/osmolarity.js';
 import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
-import { withFormulaOptions, withOutputOptions, type FormulaOptions, type OutputOptions } from './common.js';
-import { notesCell, notesJson, numbered, qtext, quantityJson, withProtectedCells, withRounding, type RowPresenter } from './qc-rows.js';
+import { withFormulaOptions, withOutputOptions, withRoundingOption, type FormulaOptions, type OutputOptions } from './common.js';
+import { notesJson, numbered, qtext, quantityJson, type RowPresenter } from './qc-rows.js';
+import { notesCell } from '../output/format.js';
 import type { CommandRunner } from './runner.js';
 
 // --- meq --------------------------------------------------------------------------
 
-interface MeqCli extends FormulaOptions {
-  mass?: string;
-  meq?: string;
-  mmol?: string;
-  concentration?: string;
-  measured?: boolean;
-  ions?: string;
+interface MeqCli extends FormulaOptions, Pick<MilliequivalentOptions, 'mass' | 'meq' | 'mmol' | 'concentration' | 'measured' | 'ions'> {
   rounding?: RoundingMode;
 }
 
@@ -197,7 +192,7 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
 
 /** Registers `meq`, `osmolarity` and `alligation`. */
 export function registerPharmacy(program: Command, run: CommandRunner): void {
-  withRounding(
+  withRoundingOption(
     withFormulaOptions(
       program
         .command('meq')
@@ -212,7 +207,7 @@ export function registerPharmacy(program: Command, run: CommandRunner): void {
     ),
   ).action((inputs: string[], o: MeqCli) => run('meq', inputs, o));
 
-  withRounding(
+  withRoundingOption(
     withFormulaOptions(
       program
         .command('osmolarity')
@@ -222,7 +217,7 @@ export function registerPharmacy(program: Command, run: CommandRunner): void {
     ),
   ).action((inputs: string[], o: OsmolarityCli) => run('osmolarity', inputs, o));
 
-  withRounding(
+  withRoundingOption(
     withOutputOptions(
       program
         .command('alligation')
@@ -238,7 +233,7 @@ export function registerPharmacy(program: Command, run: CommandRunner): void {
 
 /** Presenters of the compounding commands, by name. */
 export const PHARMACY_PRESENTERS = {
-  meq: (o: MeqCli) => withProtectedCells(meqPresenter(o)),
-  osmolarity: (o: OsmolarityCli) => withProtectedCells(osmolarityPresenter(o)),
-  alligation: (o: AlligationCli) => withProtectedCells(alligationPresenter(o)),
+  meq: (o: MeqCli) => (meqPresenter(o)),
+  osmolarity: (o: OsmolarityCli) => (osmolarityPresenter(o)),
+  alligation: (o: AlligationCli) => (alligationPresenter(o)),
 };

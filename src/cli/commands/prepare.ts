@@ -9,7 +9,7 @@ import { substituteForm, type SubstituteResult } from '../../preparation/substit
 import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
-import { conflict, given, refuseRepeatedOptions, roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
+import { conflict, given, roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
 interface PrepareCliOptions extends OutputOptions, RoundingOptions {
@@ -157,5 +157,5 @@ export function registerPrepare(program: Command, run: CommandRunner): void {
         .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)'),
     ),
   );
-  refuseRepeatedOptions(cmd).action((inputs: string[], o: PrepareCliOptions) => run('prepare', inputs, o));
+  cmd.action((inputs: string[], o: PrepareCliOptions) => run('prepare', inputs, o));
 }

@@ -2,9 +2,9 @@
  * Shared pieces of the QC and pharmacy commands: each result row carries its
  * input and line, notes as {code, message}, and the caution; quantities are
  * written as a JSON number (unrounded, in the reported unit) beside the
- * reported figure as text.
+ * reported figure as text. CSV cells are guarded and the notes cell written by the shared
+ * output writers (../output/format.ts).
  */
-import { Option, type Command } from 'commander';
 import type { Note } from '../../errors/issue.js';
 import type { Quantity } from '../../sigfig/quantity.js';
 import { displayQuantity } from '../../sigfig/display-quantity.js';
@@ -45,9 +45,6 @@ export function qtext(q: Quantity, unit: string | undefined, rounding: RoundingM
 /** Notes as JSON. */
 export const notesJson = (notes: Note[]) => notes.map((n) => ({ code: n.code, message: n.message }));
 
-/** Notes in one CSV cell. */
-export const notesCell = (notes: Note[]) => notes.map((n) => `${n.code}: ${n.message}`).join(' | ');
-
 /**
  * Wraps a computation so each result knows its input and line (results come in input order).
  *
@@ -62,25 +59,4 @@ export function numbered<R>(f: (input: string) => R): (input: string) => Row<R> 
   };
 }
 
-/** Adds --rounding. */
-export function withRounding(cmd: Command): Command {
-  return cmd.addOption(new Option('--rounding <mode>', 'rounding of reported figures: half-even (default) or half-up (many pharmacopoeias and house rules)').choices(['half-even', 'half-up']).default('half-even'));
-}
-
 export type RowPresenter<R> = Presenter<Row<R>>;
-
-/**
- * A text cell a spreadsheet could run as a formula (starting with =, +, @, a tab or a carriage
- * return, or - not followed by a digit) gets a leading apostrophe; numbers are left alone.
- *
- * @example
- * protectCell('=1+2') // "'=1+2"
- */
-export function protectCell<C>(c: C): C | string {
-  return typeof c === 'string' && /^(?:[=+@\t\r]|-(?![\d.]))/.test(c) ? `'${c}` : c;
-}
-
-/** The presenter with its CSV/TSV cells protected (see {@link protectCell}). */
-export function withProtectedCells<R>(p: Presenter<R>): Presenter<R> {
-  return { ...p, cells: (r) => p.cells(r).map(protectCell) };
-}

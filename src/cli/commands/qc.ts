@@ -20,8 +20,9 @@ import { BENCH_CAUTION } from '../../preparation/caution.js';
 import type { Quantity } from '../../sigfig/quantity.js';
 import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
-import { withFormulaOptions, withOutputOptions, type FormulaOptions, type OutputOptions } from './common.js';
-import { notesCell, notesJson, numbered, qtext, quantityJson, withProtectedCells, withRounding, type RowPresenter } from './qc-rows.js';
+import { withFormulaOptions, withOutputOptions, withRoundingOption, type FormulaOptions, type OutputOptions } from './common.js';
+import { notesJson, numbered, qtext, quantityJson, type RowPresenter } from './qc-rows.js';
+import { notesCell } from '../output/format.js';
 import type { CommandRunner } from './runner.js';
 
 interface BasisCli {
@@ -335,7 +336,7 @@ function withBasisOptions(cmd: Command): Command {
 
 /** Registers `titration`, `standardise`, `sample-basis` and `replicates`. */
 export function registerQc(program: Command, run: CommandRunner): void {
-  withRounding(
+  withRoundingOption(
     withBasisOptions(
       withFormulaOptions(
         program
@@ -354,7 +355,7 @@ export function registerQc(program: Command, run: CommandRunner): void {
     ).option('--on <basis>', 'report on: as-is, dried, anhydrous, solvent-free, anhydrous-solvent-free'),
   ).action((inputs: string[], o: TitrationCli) => run('titration', inputs, o));
 
-  withRounding(
+  withRoundingOption(
     withFormulaOptions(
       program
         .command('standardise')
@@ -368,7 +369,7 @@ export function registerQc(program: Command, run: CommandRunner): void {
     ),
   ).action((inputs: string[], o: StandardiseCli) => run('standardise', inputs, o));
 
-  withRounding(
+  withRoundingOption(
     withBasisOptions(
       withOutputOptions(
         program
@@ -381,7 +382,7 @@ export function registerQc(program: Command, run: CommandRunner): void {
     ).option('--on <basis>', 'same as --to'),
   ).action((inputs: string[], o: SampleBasisCli) => run('sample-basis', inputs, o));
 
-  withRounding(
+  withRoundingOption(
     withOutputOptions(
       program
         .command('replicates')
@@ -394,8 +395,8 @@ export function registerQc(program: Command, run: CommandRunner): void {
 
 /** Presenters of the QC commands, by name. */
 export const QC_PRESENTERS = {
-  titration: (o: TitrationCli) => withProtectedCells(titrationPresenter(o)),
-  standardise: (o: StandardiseCli) => withProtectedCells(standardisePresenter(o)),
-  'sample-basis': (o: SampleBasisCli) => withProtectedCells(sampleBasisPresenter(o)),
-  replicates: (o: ReplicatesCli) => withProtectedCells(replicatesPresenter(o)),
+  titration: (o: TitrationCli) => (titrationPresenter(o)),
+  standardise: (o: StandardiseCli) => (standardisePresenter(o)),
+  'sample-basis': (o: SampleBasisCli) => (sampleBasisPresenter(o)),
+  replicates: (o: ReplicatesCli) => (replicatesPresenter(o)),
 };

@@ -7,7 +7,7 @@ import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { fail } from '../../errors/pondus-error.js';
 import type { RoundingMode } from '../../sigfig/round.js';
-import { refuseRepeatedOptions, roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
+import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
 interface ReactCliOptions extends OutputOptions, RoundingOptions {
@@ -87,5 +87,5 @@ export function registerReact(program: Command, run: CommandRunner): void {
       .option('--actual <species=amount>', "the amount of a product obtained, for percent yield: 'H2O=30.1 g'")
       .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)'),
   ));
-  refuseRepeatedOptions(cmd, ['--amount']).action((inputs: string[], o: ReactCliOptions) => run('react', inputs, o));
+  cmd.action((inputs: string[], o: ReactCliOptions) => run('react', inputs, o));
 }
