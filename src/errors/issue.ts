@@ -53,6 +53,8 @@ export type IssueCode =
   | 'AMBIGUOUS_PURITY'
   | 'BAD_RECORD'
   | 'USAGE'
+  // a public function called with an argument of the wrong kind (a number for a formula, null options)
+  | 'BAD_ARGUMENT'
   | 'INTERNAL_ERROR';
 
 /** One problem found in an input. `column` is 1-based and counts Unicode code points. */
