@@ -82,7 +82,7 @@ export const compositionJson = /* @__PURE__ */ guarded('compositionJson', compos
 // measured numbers and significant figures
 export { type Measured } from './sigfig/measured.js';
 import { exact as exact_, times as times_, dividedBy as dividedBy_, plus as plus_, minus as minus_, sumMeasured as sumMeasured_, sigFigsOf as sigFigsOf_ } from './sigfig/measured.js';
-export const exact = /* @__PURE__ */ guarded('exact', exact_, ['any']);
+export const exact = /* @__PURE__ */ guarded('exact', exact_, ['numeric']);
 export const times = /* @__PURE__ */ guarded('times', times_, ['object', 'object']);
 export const dividedBy = /* @__PURE__ */ guarded('dividedBy', dividedBy_, ['object', 'object']);
 export const plus = /* @__PURE__ */ guarded('plus', plus_, ['object', 'object']);
@@ -310,7 +310,7 @@ export const isIonNotation = /* @__PURE__ */ guarded('isIonNotation', isIonNotat
 export type { IonNotation, IonTerm } from './ions/ion-notation.js';
 export { type IonResult, type IonOptions } from './ions/ion-mass.js';
 import { ionMass as ionMass_ } from './ions/ion-mass.js';
-export const ionMass = /* @__PURE__ */ guarded('ionMass', ionMass_, ['tree|null', 'any', 'options?']);
+export const ionMass = /* @__PURE__ */ guarded('ionMass', ionMass_, ['tree|null', 'notation|null', 'options?']);
 export const safeIonMass = /* @__PURE__ */ safely(ionMass);
 export { type MassError } from './ions/mass-error.js';
 import { massError as massError_ } from './ions/mass-error.js';

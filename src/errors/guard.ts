@@ -3,7 +3,8 @@ import { PondusError, toSafe, type SafeResult } from './pondus-error.js';
 
 /**
  * The kind of value a public function's parameter takes, checked at the public API's boundary:
- * `text` a string; `tree` a string or a parsed formula (an object); `number` a number; `decimal` a
+ * `text` a string; `tree` a string or a parsed formula (an object); `numeric` a number, Decimal or string;
+ * `notation` a string or a read ion notation; `number` a number; `decimal` a
  * Decimal; `object` a non-null object (an options object, or a value the library returned);
  * `options` an options object whose `weights` and `rounding`, when given, are among their values;
  * `posint` a whole number of at least 1; `rounding` 'half-even' or 'half-up'; `array`, `map`,
@@ -11,12 +12,14 @@ import { PondusError, toSafe, type SafeResult } from './pondus-error.js';
  * omitted argument); `|null` also accepts null.
  */
 export type ParamKind =
-  | `${'text' | 'tree' | 'number' | 'posint' | 'rounding' | 'decimal' | 'object' | 'options' | 'array' | 'map' | 'function' | 'bigint' | 'iterable'}${'' | '?' | '|null' | '|null?'}`
+  | `${'text' | 'tree' | 'numeric' | 'notation' | 'number' | 'posint' | 'rounding' | 'decimal' | 'object' | 'options' | 'array' | 'map' | 'function' | 'bigint' | 'iterable'}${'' | '?' | '|null' | '|null?'}`
   | 'any';
 
 const NAMES: Record<string, string> = {
   text: 'a string',
   tree: 'a formula (a string or a parsed formula)',
+  numeric: 'a number, a Decimal or a numeric string',
+  notation: 'an ion notation (a string or a read notation)',
   number: 'a number',
   posint: 'a whole number of at least 1',
   rounding: "'half-even' or 'half-up'",
@@ -46,6 +49,10 @@ function fits(base: string, v: unknown): boolean {
       return typeof v === 'string';
     case 'tree':
       return typeof v === 'string' || (typeof v === 'object' && v !== null && Array.isArray((v as { components?: unknown }).components));
+    case 'numeric':
+      return typeof v === 'number' || typeof v === 'string' || Decimal.isDecimal(v);
+    case 'notation':
+      return typeof v === 'string' || (typeof v === 'object' && v !== null && Array.isArray((v as { terms?: unknown }).terms));
     case 'number':
       return typeof v === 'number';
     case 'posint':
