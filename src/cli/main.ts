@@ -26,6 +26,7 @@ import { PRESENTERS } from './commands/registry.js';
 import { fixedBatch, inputBatches } from './input/inputs.js';
 import { Sink } from './output/sink.js';
 import { styleFor } from './output/style.js';
+import { finishProgram } from './program-setup.js';
 
 export const VERSION = '0.1.0';
 
@@ -102,9 +103,15 @@ export async function main(args: string[], io: CliIo): Promise<number> {
 
   // an option that takes one value is never silently overridden by a second one (exit 2)
   for (const cmd of program.commands) refuseRepeatedOptions(cmd, REPEATABLE[cmd.name()] ?? []);
+  // completion and manual commands, the examples at the end of every --help
+  finishProgram(program, (s) => out.write(s), VERSION);
 
   try {
-    await program.parseAsync(args, { from: 'user' });
+    // bare `pondus`: its help, once, on standard output, and the usage status
+    if (args.length === 0) {
+      program.outputHelp();
+      status = 2;
+    } else await program.parseAsync(args, { from: 'user' });
   } catch (e) {
     if (e instanceof CommanderError) {
       status = e.exitCode === 0 ? 0 : 2;
@@ -118,10 +125,6 @@ export async function main(args: string[], io: CliIo): Promise<number> {
       err.write(`pondus: internal error (please report it): ${e instanceof Error ? e.message : String(e)}\n`);
       status = 2;
     }
-  }
-  if (args.length === 0) {
-    program.outputHelp();
-    status = 2;
   }
   await out.flush(true);
   await err.flush(true);
