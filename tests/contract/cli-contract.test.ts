@@ -2,7 +2,7 @@
 // examples, colour that obeys the environment, shell completion and a manual page generated from
 // the program itself.
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -235,5 +235,10 @@ describe('shell completion and the manual page', () => {
     const r = pondusProcess([]);
     expect(r.status).toBe(2);
     expect(r.stdout.match(/Usage: pondus/g)).toHaveLength(1);
+    // npm run build writes dist/pondus.1 (shipped, and named in package.json "man") from the same text
+    expect(readFileSync(new URL('../../dist/pondus.1', import.meta.url), 'utf8')).toBe(pondus(['manual']).stdout);
+    const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8'));
+    expect(pkg.files).toContain('dist/pondus.1');
+    expect(pkg.man).toEqual(['./dist/pondus.1']);
   });
 });
