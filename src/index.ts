@@ -41,6 +41,10 @@ import { hillFormula as hillFormula_, hillOrder as hillOrder_ } from './formula/
 export const hillFormula = /* @__PURE__ */ guarded('hillFormula', hillFormula_, ['map', 'number?', 'array?']);
 export const hillOrder = /* @__PURE__ */ guarded('hillOrder', hillOrder_, ['iterable']);
 export type { Amount } from './formula/amount.js';
+export { TABLE_VI_SEQUENCE, type WrittenOrderOptions } from './formula/written-order.js';
+import { writtenOrder as writtenOrder_, writtenFormula as writtenFormula_ } from './formula/written-order.js';
+export const writtenOrder = /* @__PURE__ */ guarded('writtenOrder', writtenOrder_, ['iterable', 'options?']);
+export const writtenFormula = /* @__PURE__ */ guarded('writtenFormula', writtenFormula_, ['map', 'number?', 'options?']);
 
 // element data
 export { ELEMENTS, ATOMIC_WEIGHT_PROVENANCE, type ElementData, type StandardWeight } from './elements/element-table.js';
