@@ -86,7 +86,8 @@ export async function main(args: string[], io: CliIo): Promise<number> {
     .configureOutput({
       writeOut: (s) => out.write(s),
       writeErr: (s) => err.write(s),
-      outputError: (s, write) => write(errStyle.red(s)),
+      // one message style: commander's own usage errors start 'pondus:' like every other message
+      outputError: (s, write) => write(errStyle.red(s.replace(/^error: /, 'pondus: '))),
     });
   registerMass(program, run);
   registerComposition(program, run);

@@ -70,7 +70,7 @@ describe('exit statuses: 0 all good, 1 some input failed, 2 usage', () => {
     it(`${what}: 2`, () => {
       const r = pondus(args);
       expect(r.status, r.stderr).toBe(2);
-      expect(r.stderr).toMatch(/\S/);
+      expect(r.stderr).toMatch(/^pondus: \S/); // one message style
       expect(r.stderr).not.toMatch(/\n\s+at /); // no stack trace
     });
   }
