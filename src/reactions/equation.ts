@@ -1,7 +1,7 @@
 /**
  * Reads a chemical equation: species separated by `+`, sides by `->`, `→`,
- * `=` (or `<=>`, `⇌`). Coefficients written in front of species are set
- * aside (balancing computes its own). Electrons are written `e-`, `e^-` or `e⁻`.
+ * `=` (or `<=>`, `⇌`). Coefficients written in front of species are kept
+ * with each species (`written`); balancing decides whether to use them. Electrons are written `e-`, `e^-` or `e⁻`.
  */
 import type { Note } from '../errors/issue.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
@@ -138,9 +138,6 @@ export function parseEquation(input: string, options: ParseOptions = {}): Equati
     if (p) {
       throw fail({ code: 'BAD_EQUATION', message: `${r.text} appears on both sides; cancel it, or write the two forms differently`, column: columnOf(input, p.start), length: p.text.length }, input);
     }
-  }
-  if ([...reactants, ...products].some((s) => s.written !== null)) {
-    notes.push({ code: 'COEFFICIENTS_REPLACED', message: 'the coefficients written in the equation were set aside; the balanced ones are computed' });
   }
   return { input, reactants, products, notes };
 }
