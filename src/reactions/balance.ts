@@ -119,7 +119,16 @@ function basisText(basis: Rational[][], reactantTexts: string[], productTexts: s
   return basis.map((v) => {
     let ints = smallestIntegers(v);
     if (ints.every((c) => c <= 0n)) ints = ints.map((c) => -c);
-    if (ints.some((c) => c < 0n)) return `coefficients in the order written: ${ints.join(', ')}`;
+    if (ints.some((c) => c < 0n)) {
+      // a relation among the species with some of them on the other side: write it as an equation
+      const all = [...reactantTexts, ...productTexts];
+      const sideOf = (i: number) => (i < reactantTexts.length) === ints[i] > 0n;
+      const left = all.map((t, i) => [t, ints[i], i] as const).filter(([, c, i]) => c !== 0n && sideOf(i));
+      const right = all.map((t, i) => [t, ints[i], i] as const).filter(([, c, i]) => c !== 0n && !sideOf(i));
+      const moved = all.filter((_, i) => ints[i] !== 0n && (i < reactantTexts.length) !== (ints[i] > 0n));
+      const abs = (c: bigint) => (c < 0n ? -c : c);
+      return `${equationText(left.map(([t]) => t), right.map(([t]) => t), [...left.map(([, c]) => abs(c)), ...right.map(([, c]) => abs(c))])} (with ${moved.join(', ')} on the other side)`;
+    }
     const keep = (list: string[], offset: number) => list.map((t, i) => [t, ints[offset + i]] as const).filter(([, c]) => c !== 0n);
     const r = keep(reactantTexts, 0);
     const p = keep(productTexts, reactantTexts.length);

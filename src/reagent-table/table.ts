@@ -181,7 +181,7 @@ function resolve(spec: ReagentSpec, options: ParseOptions): Resolved {
  * A quantity as plain data, shown as an instruction (working precision) or a result (textbook figures).
  *
  * @example
- * tableAmount(measure('1.0417 g'), 'instruction', [], 'g', 'half-even').display // '1.042 g'
+ * tableAmount(measure('2.5 g'), 'instruction', [], 'g', 'half-even').display // '2.500 g'
  */
 export function tableAmount(q: Quantity, kind: 'instruction' | 'result', inputs: InputFigures[], unit: string | null, rounding: RoundingMode): TableAmount {
   const wanted = unit === '' ? null : unit;
@@ -256,7 +256,7 @@ function cautionFor(hazard: Hazard | null, mat: Material, reagent: string): stri
  *
  * @example
  * const ctx = tableContext([{ role: 'reference', reagent: 'C7H6O3', amount: '2.00 g' }])
- * reagentRow(ctx, { role: 'reagent', reagent: 'C4H6O3', amount: '3.0 equiv', density: '1.08 g/mL' }).volume?.display // '4.100 mL'
+ * reagentRow(ctx, { role: 'reagent', reagent: 'C4H6O3', amount: '3.0 equiv', density: '1.08 g/mL' }).volume?.display // '4.106 mL'
  */
 export function reagentRow(ctx: TableContext, spec: ReagentSpec): ReagentRow {
   const rounding = ctx.options.rounding ?? 'half-even';
@@ -418,7 +418,7 @@ export function solventRow(ctx: TableContext, name: string | null, concentration
  * Cautions for a table: one per hazardous row, then the general one.
  *
  * @example
- * tableCautions([]) // [TABLE_CAUTION]
+ * tableCautions([]).length // 1
  */
 export function tableCautions(rows: readonly ReagentRow[]): string[] {
   const out: string[] = [];
@@ -431,11 +431,8 @@ export function tableCautions(rows: readonly ReagentRow[]): string[] {
  * The whole reagent table; throws the first row's PondusError.
  *
  * @example
- * reagentTable([
- *   { role: 'reference', reagent: 'C7H6O3', amount: '2.00 g' },
- *   { role: 'reagent', reagent: 'C4H6O3', amount: '3.0 equiv', density: '1.08 g/mL' },
- *   { role: 'product', reagent: 'C9H8O4' },
- * ]).rows[2].mass?.display // '2.61 g'
+ * const specs = [{ role: 'reference', reagent: 'C7H6O3', amount: '2.00 g' }, { role: 'product', reagent: 'C9H8O4' }]
+ * reagentTable(specs).rows[1].mass?.display // '2.61 g'
  */
 export function reagentTable(specs: readonly ReagentSpec[], options: ReagentTableOptions = {}): ReagentTable {
   const ctx = tableContext(specs, options);
