@@ -63,6 +63,9 @@ export function readAmount(text: string, what: string, notes: Note[]): WrittenAm
     if (value.gt(1e6)) throw fail({ code: 'BAD_AMOUNT', message: `${t} of ${what} is beyond any reagent table (more than a million equivalents)` }, text);
     return { kind: 'equiv', equiv: quantity(exact(value), null), written: mp ? 'mol %' : 'equiv' };
   }
+  if (/(?:equiv\.?|eq\.?|equivalents?|mol\s*%)$/i.test(t)) {
+    throw fail({ code: 'BAD_AMOUNT', message: `the equivalents of ${what} must be a positive number before equiv or mol % ('1.5 equiv', '5 mol %'); '${t}' is not` }, text);
+  }
   const q = measureAs(t, [MASS, AMOUNT, VOLUME], `the amount of ${what}`, notes);
   if (q.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: `the amount of ${what} must be positive: '${t}'` }, text);
   return { kind: 'quantity', quantity: q };
