@@ -36,7 +36,7 @@ export interface Material {
 }
 
 /** An amount as written: a measured quantity, or equivalents of the reference. */
-export type WrittenAmount = { kind: 'quantity'; quantity: Quantity } | { kind: 'equiv'; equiv: Quantity; written: 'equiv' | 'mol %' };
+export type WrittenAmount = { kind: 'quantity'; quantity: Quantity } | { kind: 'equiv'; equiv: Quantity; written: 'equiv' | 'mol %'; /** The number as written: '1.20'. */ number: string };
 
 const G_PER_ML = unitOf('g/mL');
 const EQUIV = /^([0-9]*\.?[0-9]+(?:[eE][+-]?[0-9]+)?)\s*(?:equiv\.?|eq\.?|equivalents?)$/i;
@@ -61,7 +61,7 @@ export function readAmount(text: string, what: string, notes: Note[]): WrittenAm
     const value = mp ? n.value.div(100) : n.value;
     if (value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: `the equivalents of ${what} must be positive: '${t}'` }, text);
     if (value.gt(1e6)) throw fail({ code: 'BAD_AMOUNT', message: `${t} of ${what} is beyond any reagent table (more than a million equivalents)` }, text);
-    return { kind: 'equiv', equiv: quantity(exact(value), null), written: mp ? 'mol %' : 'equiv' };
+    return { kind: 'equiv', equiv: quantity(exact(value), null), written: mp ? 'mol %' : 'equiv', number: (eq ?? mp)![1] };
   }
   if (/(?:equiv\.?|eq\.?|equivalents?|mol\s*%)$/i.test(t)) {
     throw fail({ code: 'BAD_AMOUNT', message: `the equivalents of ${what} must be a positive number before equiv or mol % ('1.5 equiv', '5 mol %'); '${t}' is not` }, text);

@@ -20,6 +20,9 @@ import type { ReagentRole, ReagentSpec, ReagentTableOptions } from './table.js';
 /** The columns a procedure file is written with, in order. */
 export const PROCEDURE_COLUMNS = Object.freeze(['role', 'reagent', 'formula', 'amount', 'purity', 'density', 'solution', 'form', 'actual'] as const);
 
+/** Read too when present: the equation may stand in a column (a table written as CSV puts it on the product row). */
+const EQUATION_COLUMN = 'equation';
+
 /** A row of a procedure file: a reagent, the solvent, or the equation. */
 export interface ProcedureRow {
   line: number;
@@ -64,6 +67,7 @@ export function readProcedure(text: string): Procedure {
   if (idx.amount < 0) throw fail({ code: 'BAD_RECORD', message: `a procedure file needs an amount column (columns: ${header.join(', ')})` });
   const out: ProcedureRow[] = [];
   const options: Procedure['options'] = {};
+  const eqCol = col(EQUATION_COLUMN);
   for (const r of rows) {
     const cell = (name: (typeof PROCEDURE_COLUMNS)[number]) => (idx[name] >= 0 ? (r.cells[idx[name]] ?? '').trim() : '');
     const roleText = cell('role').toLowerCase();
@@ -87,6 +91,11 @@ export function readProcedure(text: string): Procedure {
     for (const k of ['formula', 'amount', 'purity', 'density', 'solution', 'form'] as const) {
       const v = cell(k);
       if (v !== '') spec[k] = v;
+    }
+    const eqText = eqCol >= 0 ? (r.cells[eqCol] ?? '').trim() : '';
+    if (eqText !== '') {
+      if (options.equation !== undefined && options.equation !== eqText) throw fail({ code: 'BAD_RECORD', message: `line ${r.line}: a second, different equation` }, r.raw);
+      options.equation = eqText;
     }
     const actual = cell('actual');
     if (actual !== '') {

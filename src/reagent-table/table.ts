@@ -273,6 +273,7 @@ export function reagentRow(ctx: TableContext, spec: ReagentSpec): ReagentRow {
   let volume: TableAmount | null = null;
   let amountJson: TableAmount | null;
   let percentYield: TableAmount | null = null;
+  let writtenEquiv: string | null = null;
   const inputs = ctx.reference.inputs;
   if (spec.role === 'product') {
     if (spec.amount && spec.amount.trim()) throw fail({ code: 'BAD_AMOUNT', message: `the product ${what} takes no amount: its theoretical yield is computed (give what was obtained with --actual)` });
@@ -309,6 +310,7 @@ export function reagentRow(ctx: TableContext, spec: ReagentSpec): ReagentRow {
     const amount = readAmount(spec.amount ?? '', what, notes);
     if (amount.kind === 'equiv') {
       equiv = amount.equiv;
+      if (amount.written === 'equiv') writtenEquiv = amount.number;
       moles = multiply(nRef, equiv);
       const ins: Instruction = instruction(moles, inputs);
       amountJson = tableAmount(moles, 'instruction', inputs, 'mmol', rounding);
@@ -346,7 +348,7 @@ export function reagentRow(ctx: TableContext, spec: ReagentSpec): ReagentRow {
     molarMass: mm.value.toNumber(),
     molarMassDisplay: displayResult(mm, null, rounding).figure,
     equiv: equiv ? equiv.value.toNumber() : null,
-    equivDisplay: equiv ? equivText(equiv, rounding) : '',
+    equivDisplay: writtenEquiv ?? (equiv ? equivText(equiv, rounding) : ''),
     amount: amountJson,
     mass,
     volume,

@@ -46,6 +46,7 @@ const ALIGN: ('left' | 'right')[] = ['left', 'left', 'right', 'right', 'right', 
 function remarks(r: ReagentRow): string {
   const out: string[] = [];
   if (r.role !== 'reagent') out.push(r.role === 'reference' ? 'reference (limiting)' : r.role);
+  if (/mol\s*%$/i.test(r.spec.amount)) out.push(r.spec.amount);
   if (r.spec.purity) out.push(`${r.spec.purity} pure`);
   if (r.spec.solution) out.push(r.spec.solution);
   if (r.spec.density) out.push(`d ${r.spec.density}`);
@@ -127,19 +128,22 @@ export function reagentsPresenter(o: ReagentsCliOptions): Presenter<ReagentRow> 
       return r;
     },
     json: (r) => ({ ...reagentRowJson(r), notes: [...(r.input === firstInput ? tableNotes : []), ...r.notes].map((n) => ({ code: n.code, message: n.message })), caution: TABLE_CAUTION }),
-    columns: ['input', 'role', 'reagent', 'formula', 'amount', 'purity', 'density', 'solution', 'form', 'actual', 'name', 'M_g_per_mol', 'equiv', 'n_mmol', 'mass', 'mass_unit', 'volume', 'volume_unit', 'percent_yield'],
+    // the written columns first (a procedure file reads them back), then what was computed
+    columns: ['input', 'role', 'reagent', 'formula', 'amount', 'purity', 'density', 'solution', 'form', 'actual', 'equation', 'name', 'hill_formula', 'M_g_per_mol', 'equiv', 'n_mmol', 'mass', 'mass_unit', 'volume', 'volume_unit', 'percent_yield'],
     cells: (r): Cell[] => [
       r.input,
       r.role,
       r.reagent,
-      r.role === 'solvent' ? '' : r.formula,
+      r.spec.formula,
       r.spec.amount,
       r.spec.purity,
       r.spec.density,
       r.spec.solution,
       r.spec.form,
       r.role === 'product' && options.actual ? options.actual : '',
+      r.role === 'product' && options.equation ? options.equation : '',
       r.name ?? '',
+      r.role === 'solvent' ? '' : r.formula,
       r.molarMassDisplay,
       r.equivDisplay,
       r.amount ? r.amount.figure : '',
@@ -213,7 +217,7 @@ export function registerReagents(program: Command, run: CommandRunner, stdin: ()
       .option('--concentration <c>', "target concentration of the reference in the solvent: '0.2 M' (gives the solvent volume)")
       .option('--solvent <name>', "the solvent's name, for its row: 'THF' (with --concentration)")
       .option('--actual <amount>', "the amount of product obtained, for the percent yield: '2.10 g'")
-      .addOption(new Option('--procedure <file>', 'a procedure file (CSV: role, reagent, formula, amount, purity, density, solution, form, actual); - reads it from standard input'))
+      .addOption(new Option('--procedure <file>', 'a procedure file (CSV: role, reagent, formula, amount, purity, density, solution, form, actual, equation); - reads it from standard input'))
       .option('--markdown', 'a Markdown table, for electronic notebooks')
       .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS'),
   )).action(async (o: ReagentsCliOptions) => {
