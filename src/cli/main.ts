@@ -31,7 +31,7 @@ import { styleFor } from './output/style.js';
 export const VERSION = '0.1.0';
 
 /** Options that collect a value each time they are given; every other option takes one value. */
-const REPEATABLE: Record<string, string[]> = { react: ['--amount', '--fix'], balance: ['--fix'], reagents: ['--reagent', '--catalyst', '--additive', '--product'] };
+const REPEATABLE: Record<string, string[]> = { react: ['--amount', '--fix', '--catalyst'], balance: ['--fix', '--catalyst'], reagents: ['--reagent', '--catalyst', '--additive', '--product'] };
 
 /** The streams a run uses; tests pass their own. */
 export interface CliIo {

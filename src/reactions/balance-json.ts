@@ -15,6 +15,7 @@ export interface BalanceJson {
   independentBalances: number;
   basis: string[];
   settledBy: BalanceResult['settledBy'];
+  catalysts: string[];
   notes: { code: string; message: string }[];
 }
 
@@ -36,6 +37,7 @@ export function balanceJson(r: BalanceResult): BalanceJson {
     independentBalances: r.independentBalances,
     basis: [...r.basis],
     settledBy: r.settledBy,
+    catalysts: [...r.catalysts],
     notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
   };
 }

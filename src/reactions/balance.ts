@@ -10,7 +10,7 @@
  * or by fixing those of chosen species.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { amountText } from '../formula/amount.js';
 import type { ParseOptions } from '../formula-parser/parse.js';
 import { parseEquation, type Equation, type Species } from './equation.js';
@@ -25,6 +25,8 @@ export interface BalanceOptions extends ParseOptions {
    * written in the equation, `{ C4H6O3: 5 }` those of chosen species; the rest are solved for.
    */
   fix?: FixedCoefficients;
+  /** Species written on one side that are catalysts or additives: left out of the balance ('H2SO4'). */
+  catalysts?: readonly string[];
 }
 
 /** A balanced equation, as plain data. */
@@ -52,6 +54,8 @@ export interface BalanceResult {
   basis: string[];
   /** How the coefficients were settled. */
   settledBy: 'as written' | 'computed' | 'fixed';
+  /** Species left out of the balance as catalysts (written on both sides, or named), as written. */
+  catalysts: string[];
   notes: Note[];
 }
 
@@ -207,7 +211,44 @@ function fixedMap(fix: FixedCoefficients, all: Species[], input: string): Map<nu
  * @example
  * balanceParsed(parseEquation('H2 + O2 -> H2O')).result.coefficients // [2, 1, 2]
  */
-export function balanceParsed(eq: Equation, options: BalanceOptions = {}): Balanced {
+export function balanceParsed(written: Equation, options: BalanceOptions = {}): Balanced {
+  const eq = withCatalysts(written, options.catalysts ?? []);
+  try {
+    return balanceReduced(eq, options);
+  } catch (e) {
+    if (e instanceof PondusError && eq.catalysts.length > 0 && (e.first.code === 'NO_BALANCE' || e.first.code === 'NOT_UNIQUE')) {
+      const names = eq.catalysts.map((c) => c.text).join(', ');
+      throw new PondusError(e.issues.map((i) => ({ ...i, message: `${i.message} (${names} left out of the balance as ${eq.catalysts.length === 1 ? 'a catalyst' : 'catalysts'})` })), e.input);
+    }
+    throw e;
+  }
+}
+
+/** Takes named catalysts out of the sides of an equation. */
+function withCatalysts(eq: Equation, names: readonly string[]): Equation {
+  if (names.length === 0) return eq;
+  const reactants = [...eq.reactants];
+  const products = [...eq.products];
+  const catalysts = [...eq.catalysts];
+  const notes = [...eq.notes];
+  for (const raw of names) {
+    const name = raw.trim();
+    const find = (list: Species[]) => list.findIndex((s) => s.text === name || s.formula === name);
+    const r = find(reactants);
+    const p = find(products);
+    if (r < 0 && p < 0) {
+      if (catalysts.some((c) => c.text === name || c.formula === name)) continue;
+      throw fail({ code: 'BAD_OPTION', message: `the catalyst '${name}' is not a species of the equation (${[...reactants, ...products].map((s) => s.text).join(', ')})` }, eq.input);
+    }
+    const [s] = r >= 0 ? reactants.splice(r, 1) : products.splice(p, 1);
+    catalysts.push(s);
+    notes.push({ code: 'CATALYST', message: `${s.text} is named a catalyst: left out of the balance` });
+  }
+  if (reactants.length === 0 || products.length === 0) throw fail({ code: 'BAD_OPTION', message: 'with the catalysts left out, a side of the equation is empty' }, eq.input);
+  return { ...eq, reactants, products, catalysts, notes };
+}
+
+function balanceReduced(eq: Equation, options: BalanceOptions): Balanced {
   const input = eq.input;
   const all: Species[] = [...eq.reactants, ...eq.products];
   const texts = all.map((s) => s.text);
@@ -294,6 +335,7 @@ export function balanceParsed(eq: Equation, options: BalanceOptions = {}): Balan
     independentBalances: basis.length,
     basis: shownBasis,
     settledBy,
+    catalysts: eq.catalysts.map((c) => c.text),
     notes,
   };
   return { result, equation: eq, exact: coefficients };

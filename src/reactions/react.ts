@@ -15,7 +15,7 @@ import { divide, multiply, quantity, subtract, type Quantity } from '../sigfig/q
 import type { RoundingMode } from '../sigfig/round.js';
 import { sameDims, unitOf } from '../sigfig/units.js';
 import { Decimal } from '../exact/decimal.js';
-import { molesFromQuantity, readAmount, readMaterial } from '../reagent-table/material.js';
+import { materialForMoles, molesFromQuantity, readAmount, readMaterial } from '../reagent-table/material.js';
 import { readRowText } from '../reagent-table/row-text.js';
 import { tableAmount, type TableAmount } from '../reagent-table/table.js';
 import { balanceParsed, type BalanceOptions, type BalanceResult } from './balance.js';
@@ -59,6 +59,8 @@ export interface ReactResult {
   /** Reagents left over at completion, with the amount and mass left. */
   excess: { species: string; moles: TableAmount; mass: TableAmount | null }[];
   percentYield: { species: string; actual: TableAmount; theoretical: TableAmount; percent: TableAmount } | null;
+  /** Catalysts (left out of the balance) with the amounts given for them. */
+  catalysts: { species: string; formula: string; equiv: number | null; moles: TableAmount | null; mass: TableAmount | null }[];
   balance: BalanceResult;
   notes: Note[];
 }
@@ -111,13 +113,20 @@ export function react(equation: string, options: ReactOptions): ReactResult {
   const notes: Note[] = [...bal.result.notes];
   if (!options.amounts || options.amounts.length === 0) throw fail({ code: 'BAD_AMOUNT', message: 'give the amount of at least one reactant: --amount H2=4.00 g' }, equation);
   // read every amount first; equivalents are of the first reactant given by its own amount
-  const read = options.amounts.map((a) => {
+  const catalystAmounts: { a: string; s: Species; spec: ReturnType<typeof readRowText>; amount: ReturnType<typeof readAmount> }[] = [];
+  const read = options.amounts.flatMap((a) => {
     const [key] = splitAmount(a);
+    const cat = eq.catalysts.find((c) => c.text === key.trim() || c.formula === safeHill(key.trim()));
+    if (cat) {
+      const spec = readRowText(a, 'catalyst');
+      catalystAmounts.push({ a, s: cat, spec, amount: readAmount(spec.amount ?? '', cat.text, notes) });
+      return [];
+    }
     const s = findSpecies(key, all, a);
     if (s.side !== 'reactant') throw fail({ code: 'BAD_AMOUNT', message: `${s.text} is a product; give amounts of reactants (and the product obtained with --actual)` }, a);
     const spec = readRowText(a, 'reagent');
     const amount = readAmount(spec.amount ?? '', s.text, notes);
-    return { a, s, spec, amount };
+    return [{ a, s, spec, amount }];
   });
   const given = new Map<Species, Quantity>();
   let reference: Species | null = null;
@@ -135,8 +144,9 @@ export function react(equation: string, options: ReactOptions): ReactResult {
     if (!reference) throw fail({ code: 'BAD_AMOUNT', message: `${s.text} is given in ${amount.written}, but no reactant is given by its own amount to take them of` }, a);
     if (given.has(s)) throw fail({ code: 'BAD_AMOUNT', message: `${s.text} is given twice` }, a);
     given.set(s, multiply(given.get(reference)!, amount.equiv));
-    notes.push({ code: 'EQUIV_OF', message: `${s.text}: ${amount.equiv.value.toFixed()} equiv of ${reference.text} (the first reactant given by its own amount), ${amount.equiv.value.toFixed()} mol per mol` });
+    notes.push({ code: 'EQUIV_OF', message: `${s.text}: ${amount.number} ${amount.written} of ${reference.text} (the first reactant given by its own amount)` });
   }
+  const firstGiven = reference ? given.get(reference)! : null;
   for (const r of eq.reactants) {
     if (!given.has(r)) notes.push({ code: 'ASSUMED_EXCESS', message: `no amount given for ${r.text}: taken to be in excess` });
   }
@@ -175,6 +185,24 @@ export function react(equation: string, options: ReactOptions): ReactResult {
       const mm = molarMassOf(s, options);
       return { species: s.text, moles: amt(left, 'mol')!, mass: amt(mm ? multiply(left, mm) : null, 'g') };
     });
+  const catalysts: ReactResult['catalysts'] = eq.catalysts.map((c) => {
+    const given = catalystAmounts.find((x) => x.s === c);
+    const mm = molarMassOf(c, options);
+    if (!given) return { species: c.text, formula: c.formula, equiv: null, moles: null, mass: null };
+    const mat = readMaterial(given.spec, c.text, notes);
+    let moles: Quantity;
+    let equiv: number | null = null;
+    if (given.amount.kind === 'equiv') {
+      if (!reference) throw fail({ code: 'BAD_AMOUNT', message: `${c.text} is given in ${given.amount.written}, but no reactant is given by its own amount to take them of` }, given.a);
+      moles = multiply(firstGiven!, given.amount.equiv);
+      equiv = given.amount.equiv.value.toNumber();
+    } else {
+      moles = molesFromQuantity(given.amount.quantity, mm, mat, c.text).moles;
+      if (firstGiven) equiv = moles.value.div(firstGiven.value).toNumber();
+    }
+    const m = materialForMoles(moles, mm, mat);
+    return { species: c.text, formula: c.formula, equiv, moles: amt(moles, 'mol'), mass: m.mass ? amt(m.mass, 'g') : null };
+  });
   let percentYield: ReactResult['percentYield'] = null;
   if (options.actual) {
     const [key, value] = splitAmount(options.actual);
@@ -197,7 +225,7 @@ export function react(equation: string, options: ReactOptions): ReactResult {
     };
     if (percent.value.gt(100)) notes.push({ code: 'YIELD_OVER_100', message: `a yield over 100 % (${percent.value.toFixed(1)} %): the product may be wet or impure, or an amount is wrong` });
   }
-  return { input: equation, balanced: bal.result.balanced, reactants, products, limiting: limiting!.text, extent: amt(extent!, 'mol')!, excess, percentYield, balance: bal.result, notes };
+  return { input: equation, balanced: bal.result.balanced, reactants, products, limiting: limiting!.text, extent: amt(extent!, 'mol')!, excess, percentYield, catalysts, balance: bal.result, notes };
 }
 
 /**

@@ -52,8 +52,11 @@ describe('balancing', () => {
     expect(() => balance('C + O2 -> CO + CO2')).toThrow(/\(1\) 2 C \+ O2 → 2 CO; \(2\) C \+ O2 → CO2/);
   });
 
-  it('refuses a species on both sides, and equations without exactly one arrow', () => {
-    expect(code('H2O + Na -> NaOH + H2 + H2O')).toBe('BAD_EQUATION');
+  it('reads a species on both sides as a catalyst, and refuses equations without exactly one arrow', () => {
+    expect(code('H2O + Na -> NaOH + H2 + H2O')).toBe('NO_BALANCE');
+    expect(() => balance('H2O + Na -> NaOH + H2 + H2O')).toThrow(/H2O left out of the balance as a catalyst/);
+    expect(code('2 H2O + Na -> NaOH + H2 + H2O')).toBe('BAD_EQUATION');
+    expect(code('H2O -> H2O')).toBe('BAD_EQUATION');
     expect(code('H2 + O2')).toBe('BAD_EQUATION');
     expect(code('H2 -> O2 -> H2O')).toBe('BAD_EQUATION');
     expect(code('-> H2O')).toBe('BAD_EQUATION');
@@ -187,3 +190,20 @@ describe('reactions as written', () => {
 });
 
 const code2 = (f: () => unknown) => errorCode(f);
+
+describe('catalysts', () => {
+  it('a species written on both sides is left out of the balance, with a note', () => {
+    // Fischer esterification of acetic acid with ethanol, acid-catalysed (common practice)
+    const r = balance('C2H4O2 + C2H6O + H2SO4 -> C4H8O2 + H2O + H2SO4');
+    expect(r.balanced).toBe('C2H4O2 + C2H6O → C4H8O2 + H2O');
+    expect(r.catalysts).toEqual(['H2SO4']);
+    expect(r.notes.map((n) => n.code)).toContain('CATALYST');
+  });
+
+  it('a catalyst written on one side is named by an option', () => {
+    expect(errorCode(() => balance('C2H4O2 + C2H6O + H2SO4 -> C4H8O2 + H2O'))).toBe('NO_BALANCE');
+    const r = balance('C2H4O2 + C2H6O + H2SO4 -> C4H8O2 + H2O', { catalysts: ['H2SO4'] });
+    expect(r.coefficients).toEqual([1, 1, 1, 1]);
+    expect(errorCode(() => balance('C2H4O2 + C2H6O -> C4H8O2 + H2O', { catalysts: ['Pd'] }))).toBe('BAD_OPTION');
+  });
+});

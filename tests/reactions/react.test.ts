@@ -86,3 +86,14 @@ describe('react on the reagent-table engine', () => {
     expect(r.balanced).toBe('3 C + 2 O2 → 2 CO + CO2');
   });
 });
+
+describe('react with a catalyst', () => {
+  it('gives the catalyst its amount from mol % and leaves it out of the stoichiometry', () => {
+    const r = react('C7H6O3 + C4H6O3 + H2SO4 -> C9H8O4 + C2H4O2 + H2SO4', { amounts: ['C7H6O3=2.00 g', 'C4H6O3=3.0 equiv', 'H2SO4=5 mol %'] });
+    expect(r.catalysts).toHaveLength(1);
+    expect(r.catalysts[0].equiv).toBe(0.05);
+    // 0.05 × 2.00 g / 138.12 g/mol = 0.724 mmol
+    expect(r.catalysts[0].moles!.display).toBe('0.000724 mol');
+    expect(r.products[0].mass!.display).toBe('2.61 g');
+  });
+});

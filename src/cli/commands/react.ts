@@ -13,6 +13,7 @@ interface ReactCliOptions extends OutputOptions, RoundingOptions {
   amount?: string[];
   actual?: string;
   fix?: string[];
+  catalyst?: string[];
   abbreviations?: boolean;
 }
 
@@ -24,6 +25,7 @@ export function reactPresenter(o: ReactCliOptions): Presenter<ReactResult> {
   if (twice !== undefined) throw fail({ code: 'USAGE', message: `--amount gives ${twice} twice: give one amount per reactant` });
   const opts: ReactOptions = { amounts: o.amount, actual: o.actual, abbreviations: !!o.abbreviations, rounding: roundingOf(o) };
   if (o.fix && o.fix.length) opts.fix = readFixOption(o.fix);
+  if (o.catalyst && o.catalyst.length) opts.catalysts = o.catalyst;
   const fig = (a: { figure: string } | null) => (a ? a.figure : '');
   return {
     compute: (input) => react(input, opts),
@@ -37,7 +39,11 @@ export function reactPresenter(o: ReactCliOptions): Presenter<ReactResult> {
       lines.push(
         fixedTable(
           ['species', 'coefficient', '', 'amount mol', 'mass g'],
-          [...r.reactants.map((l) => row(l, l.species === r.limiting ? 'limiting' : l.moles ? 'given' : 'in excess')), ...r.products.map((l) => row(l, 'theoretical yield'))],
+          [
+            ...r.reactants.map((l) => row(l, l.species === r.limiting ? 'limiting' : l.moles ? 'given' : 'in excess')),
+            ...r.catalysts.map((c) => [c.species, '', 'catalyst', fig(c.moles), fig(c.mass)]),
+            ...r.products.map((l) => row(l, 'theoretical yield')),
+          ],
           ['left', 'right', 'left', 'right', 'right'],
         ),
       );
@@ -64,6 +70,7 @@ export function registerReact(program: Command, run: CommandRunner): void {
       .option('--amount <species=amount>', "an amount of a reactant: 'H2=4.00 g', 'O2=0.500 mol', 'HCl=25.0 mL of 0.100 M', 'Ac2O=2.00 mL, density=1.08 g/mL', 'Ac2O=1.5 equiv' (of the first reactant given by its own amount); purity= and solution= as in a reagent table (repeat for each)", collect)
       .option('--actual <species=amount>', "the amount of a product obtained, for percent yield: 'H2O=30.1 g'")
       .option('--fix <coefficients>', "when atoms alone allow more than one balance: 'written' or SPECIES=N ('C4H6O3=5')", collect)
+      .option('--catalyst <species>', "a species written on one side that is a catalyst, left out of the balance: 'H2SO4' (its amount, if given with --amount, may be in mol %)", collect)
       .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)'),
   ));
   cmd.action((inputs: string[], o: ReactCliOptions) => run('react', inputs, o));
