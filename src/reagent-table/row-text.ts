@@ -8,7 +8,7 @@
  *   `CuSO4=5.00 mmol, form=CuSO4·5H2O`
  *
  * Keys: purity (or assay), density (or d), solution, form (or as), formula.
- * A product is written without an amount: `C9H8O4`.
+ * A product is written without an amount: `C9H8O4`, `4-butylanisole, formula=C11H16O`.
  */
 import { fail, PondusError } from '../errors/pondus-error.js';
 import { readKeyValues } from '../key-values/read-key-values.js';
@@ -37,9 +37,14 @@ export function readRowText(text: string, role: ReagentRole): ReagentSpec {
   if (t === '') throw fail({ code: 'BAD_RECORD', message: 'an empty reagent row' }, text);
   if (t.length > 2000) throw fail({ code: 'INPUT_TOO_LONG', message: `a reagent row of ${t.length} characters; the limit is 2,000` }, text.slice(0, 80));
   const eq = t.indexOf('=');
+  const comma = t.search(/[,;]/);
+  if (role === 'product' && (eq < 0 || (comma >= 0 && comma < eq))) {
+    // a product takes no amount: 'C9H8O4', or 'aspirin, formula=C9H8O4'
+    if (comma < 0) return { role, reagent: t, text };
+    return { ...readRowText(`${t.slice(0, comma)}=${t.slice(comma)}`, role), text };
+  }
   if (eq < 0) {
-    if (role !== 'product') throw fail({ code: 'BAD_RECORD', message: `'${t}' has no amount: write REAGENT=AMOUNT (e.g. 'Ac2O=1.5 equiv, density=1.08 g/mL')` }, text);
-    return { role, reagent: t, text };
+    throw fail({ code: 'BAD_RECORD', message: `'${t}' has no amount: write REAGENT=AMOUNT (e.g. 'Ac2O=1.5 equiv, density=1.08 g/mL')` }, text);
   }
   const reagent = t.slice(0, eq).trim();
   if (reagent === '') throw fail({ code: 'BAD_RECORD', message: 'a row starts with = : write REAGENT=AMOUNT', column: 1 }, text);

@@ -12,7 +12,7 @@ const fromOptions = [
   '--reagent', 'n-BuLi=1.20 equiv, solution=1.6 M in hexanes',
   '--catalyst', 'Pd(PPh3)4=5.0 mol %',
   '--additive', 'PPh3=10 mol %, purity=99 %',
-  '--product', '4-butylanisole=, formula=C11H16O',
+  '--product', '4-butylanisole, formula=C11H16O',
   '--equation', 'C7H7BrO + C4H9Li -> C11H16O + LiBr',
   '--concentration', '0.20 M', '--solvent', 'toluene',
   '--actual', '1.21 g',

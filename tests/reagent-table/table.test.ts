@@ -215,6 +215,7 @@ describe('rows written as text', () => {
     expect(readRowText('HCl=2.0 equiv, solution=37 % w/w, d=1.19', 'reagent')).toMatchObject({ solution: '37 % w/w', density: '1.19' });
     expect(errorCode(() => readRowText('Ac2O=1 equiv, colour=red', 'reagent'))).toBe('BAD_RECORD');
     expect(errorCode(() => readRowText('Ac2O', 'reagent'))).toBe('BAD_RECORD');
+    expect(readRowText('4-butylanisole, formula=C11H16O', 'product')).toMatchObject({ reagent: '4-butylanisole', formula: 'C11H16O', amount: '' });
   });
 
   it('a bare density is read as g/mL, with a note', () => {
