@@ -72,9 +72,11 @@ export { balance, safeBalance, balanceParsed, equationText, type BalanceResult, 
 export { balanceJson, type BalanceJson } from './reactions/balance-json.js';
 export { reactJson } from './reactions/react-json.js';
 export { readFixOption } from './reactions/fix-option.js';
-export { reagentTable, reagentRow, tableContext, solventVolume, tableCautions, tableAmount, TABLE_CAUTION, REAGENT_ROLES, type ReagentTable, type ReagentRow, type ReagentSpec, type ReagentRole, type ReagentTableOptions, type TableAmount } from './reagent-table/table.js';
+export { reagentTable, reagentRow, solventRow, tableContext, solventVolume, tableCautions, tableAmount, TABLE_CAUTION, REAGENT_ROLES, type ReagentTable, type ReagentRow, type ReagentSpec, type ReagentRole, type ReagentTableOptions, type TableAmount } from './reagent-table/table.js';
 export { readAmount, readMaterial, molesFromQuantity, materialForMoles, type MaterialSpec, type Material } from './reagent-table/material.js';
 export { readRowText } from './reagent-table/row-text.js';
+export { readProcedure, writeProcedure, PROCEDURE_COLUMNS, type Procedure, type ProcedureRow } from './reagent-table/procedure.js';
+export { reagentRowJson, type ReagentRowJson } from './reagent-table/reagent-table-json.js';
 export { lookUpName, hazardOf, COMMON_NAMES, type CommonName, type Hazard } from './reagent-table/names.js';
 export { parseEquation, type Equation, type Species } from './reactions/equation.js';
 export { react, safeReact, type ReactResult, type ReactOptions, type SpeciesLine } from './reactions/react.js';

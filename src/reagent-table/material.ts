@@ -198,7 +198,12 @@ export function materialForMoles(n: Quantity, molarMass: Quantity | null, m: Mat
   return { mass, volume: m.density ? divide(mass, m.density) : null };
 }
 
-/** True for a material that is a liquid or solution (the volume is the thing to measure). */
+/**
+ * True for a material that is a liquid or solution (the volume is the thing to measure).
+ *
+ * @example
+ * isLiquid(readMaterial({ density: '1.08 g/mL' }, 'Ac2O', [])) // true
+ */
 export function isLiquid(m: Material): boolean {
   return m.density !== null || m.molarity !== null;
 }

@@ -374,12 +374,19 @@ export function reagentRow(ctx: TableContext, spec: ReagentSpec): ReagentRow {
  * solventVolume(ctx, '0.2 M')?.display // '72.40 mL'
  */
 export function solventVolume(ctx: TableContext, concentration: string): TableAmount {
+  return solventInstruction(ctx, concentration).volume;
+}
+
+function solventInstruction(ctx: TableContext, concentration: string): { volume: TableAmount; notes: Note[] } {
   const notes: Note[] = [];
   const c = measureAs(concentration, [MOLARITY], 'the target concentration', notes);
   if (c.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: `the target concentration must be positive: '${concentration}'` });
   const v = divide(ctx.reference.moles, c);
   if (!sameDims(v.dims, VOLUME)) throw fail({ code: 'INTERNAL_ERROR', message: 'the solvent volume is not a volume' });
-  return tableAmount(v, 'instruction', [...ctx.reference.inputs, inputFigures('the target concentration', concentration, c)], volumeUnit(v), ctx.options.rounding ?? 'half-even');
+  const inputs = [...ctx.reference.inputs, inputFigures('the target concentration', concentration, c)];
+  const few = fewFiguresNote(instruction(v, inputs), 'the solvent volume', 'the concentration reached');
+  if (few) notes.push(few);
+  return { volume: tableAmount(v, 'instruction', inputs, volumeUnit(v), ctx.options.rounding ?? 'half-even'), notes };
 }
 
 /**
@@ -390,10 +397,9 @@ export function solventVolume(ctx: TableContext, concentration: string): TableAm
  * solventRow(ctx, 'toluene', '0.2 M').volume?.display // '72.40 mL'
  */
 export function solventRow(ctx: TableContext, name: string | null, concentration: string, text?: string): ReagentRow {
-  const volume = solventVolume(ctx, concentration);
+  const { volume, notes } = solventInstruction(ctx, concentration);
   const label = name && name.trim() ? name.trim() : 'solvent';
   const hit = name ? lookUpName(name) : null;
-  const notes: Note[] = [];
   if (hit) notes.push({ code: 'NAME_READ', message: `${label} is read as ${hit.name}, ${hit.formula} (${hit.source})` });
   notes.push({ code: 'SOLVENT_VOLUME', message: `${label}: ${volume.display} brings ${ctx.reference.spec.reagent.trim()} to ${concentration.trim()} (reagent volumes not counted)` });
   return {

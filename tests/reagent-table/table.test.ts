@@ -112,6 +112,19 @@ describe('the reagent table', () => {
   });
 });
 
+describe('instructions and results', () => {
+  it('a reference or target with few figures: instructions stay at working precision, with a note', () => {
+    const t = reagentTable([{ role: 'reference', reagent: 'C7H6O3', amount: '2 g' }, { role: 'reagent', reagent: 'Ac2O', amount: '3 equiv', density: '1.08 g/mL' }, { role: 'product', reagent: 'C9H8O4' }], { concentration: '0.2 M' });
+    const [, ac2o, solvent, product] = t.rows;
+    expect(ac2o.mass!.sigFigs).toBe(4);
+    expect(ac2o.notes.map((n) => n.code)).toContain('WORKING_PRECISION');
+    expect(solvent.volume!.display).toBe('72.40 mL');
+    expect(solvent.notes.map((n) => n.code)).toContain('WORKING_PRECISION');
+    // the theoretical yield is a result: the one figure of 2 g
+    expect(product.mass!.display).toBe('3 g');
+  });
+});
+
 describe('names and hazards', () => {
   it('reads common names and the formula language abbreviations, and says so', () => {
     expect(lookUpName('Acetic anhydride')?.formula).toBe('C4H6O3');
