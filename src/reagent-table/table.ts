@@ -162,7 +162,7 @@ function resolve(spec: ReagentSpec, options: ParseOptions): Resolved {
   try {
     mass = formulaMass(formulaText, options);
   } catch (e) {
-    if (e instanceof PondusError && !spec.formula) {
+    if (e instanceof PondusError && !spec.formula && /[a-z]{3,}|\s|-/.test(text)) {
       throw new PondusError(e.issues.map((i) => ({ ...i, message: `${text}: ${i.message}; a name the tool does not know needs its formula (formula=…)` })), e.input);
     }
     throw e;

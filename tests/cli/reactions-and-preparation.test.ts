@@ -15,6 +15,7 @@ describe('pondus balance', () => {
       independentBalances: 1,
       basis: [],
       settledBy: 'computed',
+      catalysts: [],
       notes: [],
     });
   });
