@@ -83,6 +83,17 @@ describe('pondus reagents', () => {
     expect(rows[2].volume.display).toBe('4.037 mL');
   });
 
+  it('hostile rows get a clear error in place, never an internal error', () => {
+    const hostile = ['__proto__=1 g', 'C7H6O3=1e999 g', 'C7H6O3=', '=2 g', 'C7H6O3=2 g, density=__proto__', 'C7H6O3=2 g, solution=1.6 M in', 'C7H6O3=2 g, purity=0 %', 'C7H6O3\u0007=2 g', 'C((((((((((H=2 g', 'C7H6O3=2 g, solution=5 % w/v', 'C7H6O3=2 g, density=-1 g/mL', 'C7H6O3=2 g, density=3 M'];
+    for (const ref of hostile) {
+      const r = pondus(['reagents', '--reference', ref, '--reagent', 'Ac2O=1e7 equiv', '--json']);
+      expect(r.status).toBe(1);
+      const rows = jsonLines(r.stdout);
+      expect(rows).toHaveLength(2);
+      for (const row of rows) expect(row.error.code).not.toBe('INTERNAL_ERROR');
+    }
+  });
+
   it('the example procedure file is a valid procedure', () => {
     expect(readFileSync(example, 'utf8').split('\n')[0]).toBe('role,reagent,formula,amount,purity,density,solution,form,actual');
   });
