@@ -15,6 +15,7 @@ import { registerConversions } from './commands/conversions.js';
 import { registerEmpirical } from './commands/empirical.js';
 import { registerPrepare } from './commands/prepare.js';
 import { registerReact } from './commands/react.js';
+import { registerReagents } from './commands/reagents.js';
 import { registerComposition } from './commands/composition.js';
 import { outputFormat, refuseRepeatedOptions } from './commands/common.js';
 import { registerMass } from './commands/mass.js';
@@ -31,7 +32,7 @@ import { finishProgram } from './program-setup.js';
 export const VERSION = '0.1.0';
 
 /** Options that collect a value each time they are given; every other option takes one value. */
-const REPEATABLE: Record<string, string[]> = { react: ['--amount'] };
+const REPEATABLE: Record<string, string[]> = { react: ['--amount', '--fix', '--catalyst'], balance: ['--fix', '--catalyst'], reagents: ['--reagent', '--catalyst', '--additive', '--product'] };
 
 /** The streams a run uses; tests pass their own. */
 export interface CliIo {
@@ -96,6 +97,7 @@ export async function main(args: string[], io: CliIo): Promise<number> {
   registerEmpirical(program, run, io.stdin);
   registerBalance(program, run);
   registerReact(program, run);
+  registerReagents(program, run, io.stdin);
   registerPrepare(program, run);
   registerConversions(program, run);
   registerQc(program, run);

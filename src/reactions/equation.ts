@@ -1,7 +1,7 @@
 /**
  * Reads a chemical equation: species separated by `+`, sides by `->`, `→`,
- * `=` (or `<=>`, `⇌`). Coefficients written in front of species are set
- * aside (balancing computes its own). Electrons are written `e-`, `e^-` or `e⁻`.
+ * `=` (or `<=>`, `⇌`). Coefficients written in front of species are kept
+ * with each species (`written`); balancing decides whether to use them. Electrons are written `e-`, `e^-` or `e⁻`.
  */
 import type { Note } from '../errors/issue.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
@@ -33,6 +33,8 @@ export interface Equation {
   input: string;
   reactants: Species[];
   products: Species[];
+  /** Species left out of the balance: written on both sides, or named as catalysts. */
+  catalysts: Species[];
   notes: Note[];
 }
 
@@ -133,14 +135,21 @@ export function parseEquation(input: string, options: ParseOptions = {}): Equati
   }
   const total = reactants.length + products.length;
   if (total > MAX_SPECIES) throw fail({ code: 'BAD_EQUATION', message: `${total} species; pondus balances up to ${MAX_SPECIES}` }, input);
-  for (const r of reactants) {
+  // a species written on both sides with the same coefficient is a catalyst: left out of the balance, with a note
+  const catalysts: Species[] = [];
+  for (const r of [...reactants]) {
     const p = products.find((x) => x.formula === r.formula);
-    if (p) {
-      throw fail({ code: 'BAD_EQUATION', message: `${r.text} appears on both sides; cancel it, or write the two forms differently`, column: columnOf(input, p.start), length: p.text.length }, input);
+    if (!p) continue;
+    if ((r.written ?? '1') !== (p.written ?? '1')) {
+      throw fail({ code: 'BAD_EQUATION', message: `${r.text} appears on both sides with different coefficients; cancel it, or write the two forms differently`, column: columnOf(input, p.start), length: p.text.length }, input);
     }
+    catalysts.push(r);
+    reactants.splice(reactants.indexOf(r), 1);
+    products.splice(products.indexOf(p), 1);
+    notes.push({ code: 'CATALYST', message: `${r.text} appears on both sides: read as a catalyst (or a spectator), left out of the balance` });
   }
-  if ([...reactants, ...products].some((s) => s.written !== null)) {
-    notes.push({ code: 'COEFFICIENTS_REPLACED', message: 'the coefficients written in the equation were set aside; the balanced ones are computed' });
+  if (reactants.length === 0 || products.length === 0) {
+    throw fail({ code: 'BAD_EQUATION', message: `every ${reactants.length === 0 ? 'reactant' : 'product'} appears on both sides: nothing is left to balance` }, input);
   }
-  return { input, reactants, products, notes };
+  return { input, reactants, products, catalysts, notes };
 }

@@ -20,6 +20,9 @@ export class Rational {
    * Rational.of(2n, 4n).toString() // '1/2'
    */
   static of(num: bigint, den = 1n): Rational {
+    if (typeof num !== 'bigint' || typeof den !== 'bigint') {
+      throw fail({ code: 'BAD_NUMBER', message: `a fraction takes whole numbers as BigInt (got ${typeof num} and ${typeof den}); use Rational.fromDecimal for text` });
+    }
     if (den === 0n) throw fail({ code: 'DIVISION_BY_ZERO', message: 'a fraction with a zero denominator' });
     if (den < 0n) {
       num = -num;
@@ -37,6 +40,7 @@ export class Rational {
    * Rational.fromDecimal('1e21').toString() // '1000000000000000000000'
    */
   static fromDecimal(text: string): Rational {
+    if (typeof text !== 'string' && typeof text !== 'number') throw fail({ code: 'BAD_NUMBER', message: `a decimal number must be given as text (got ${text === null ? 'null' : typeof text})` });
     let d: Decimal;
     try {
       d = new Decimal(text);
@@ -45,6 +49,7 @@ export class Rational {
     }
     if (!d.isFinite()) throw fail({ code: 'BAD_NUMBER', message: `'${text}' is not a finite decimal number` });
     if (d.abs().gt('1e1000') || (!d.isZero() && d.abs().lt('1e-1000'))) throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `'${text}' is beyond the range of exact fractions (10^±1000)` });
+    if (!/^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(String(text).trim())) throw fail({ code: 'BAD_NUMBER', message: `'${text}' is not a decimal number` });
     const [num, den] = d.toFraction();
     return Rational.of(BigInt(num.toFixed()), BigInt(den.toFixed()));
   }
@@ -62,21 +67,32 @@ export class Rational {
     return new Rational(-this.num, this.den);
   }
   plus(o: Rational): Rational {
+    operand(o);
     return Rational.of(this.num * o.den + o.num * this.den, this.den * o.den);
   }
   minus(o: Rational): Rational {
     return this.plus(o.neg());
   }
   times(o: Rational): Rational {
+    operand(o);
     return Rational.of(this.num * o.num, this.den * o.den);
   }
   div(o: Rational): Rational {
+    operand(o);
     if (o.num === 0n) throw fail({ code: 'DIVISION_BY_ZERO', message: 'division by zero' });
     return Rational.of(this.num * o.den, this.den * o.num);
+  }
+  /** The nearest float (for plain-data results). */
+  toNumber(): number {
+    return new Decimal(this.num.toString()).div(this.den.toString()).toNumber();
   }
   toString(): string {
     return this.den === 1n ? String(this.num) : `${this.num}/${this.den}`;
   }
+}
+
+function operand(o: unknown): void {
+  if (!(o instanceof Rational)) throw fail({ code: 'BAD_NUMBER', message: 'arithmetic on fractions takes another fraction (Rational.of or Rational.fromDecimal)' });
 }
 
 /**
@@ -86,6 +102,7 @@ export class Rational {
  * gcd(12n, 18n) // 6n
  */
 export function gcd(a: bigint, b: bigint): bigint {
+  if (typeof a !== 'bigint' || typeof b !== 'bigint') throw fail({ code: 'BAD_NUMBER', message: 'gcd takes two BigInts' });
   while (b !== 0n) [a, b] = [b, a % b];
   return a;
 }
@@ -104,6 +121,9 @@ export function lcm(a: bigint, b: bigint): bigint {
  * nullSpace([[r(2), r(0), r(-2)], [r(0), r(2), r(-1)]], 3).map((v) => v.map(String)) // [['1', '1/2', '1']]
  */
 export function nullSpace(matrix: Rational[][], columns: number): Rational[][] {
+  if (!Array.isArray(matrix) || !Number.isSafeInteger(columns) || columns < 0 || matrix.some((row) => !Array.isArray(row) || row.length < columns || row.slice(0, columns).some((x) => !(x instanceof Rational)))) {
+    throw fail({ code: 'BAD_NUMBER', message: `a null space needs a matrix of fractions with ${columns} columns` });
+  }
   const m = matrix.map((row) => [...row]);
   const pivots: number[] = [];
   let r = 0;
@@ -141,6 +161,7 @@ export function nullSpace(matrix: Rational[][], columns: number): Rational[][] {
  * smallestIntegers([Rational.of(1n, 2n), Rational.ONE]) // [1n, 2n]
  */
 export function smallestIntegers(v: Rational[]): bigint[] {
+  if (!Array.isArray(v) || v.some((x) => !(x instanceof Rational))) throw fail({ code: 'BAD_NUMBER', message: 'smallestIntegers takes a list of fractions' });
   let l = 1n;
   for (const x of v) l = lcm(l, x.den);
   const ints = v.map((x) => (x.num * l) / x.den);

@@ -1,36 +1,50 @@
 /**
  * Reaction stoichiometry: limiting reagent, theoretical yield of each product,
- * excess reagent left, percent yield. Amounts are measured quantities (mass,
- * moles, or volume × concentration) and carry their significant figures.
+ * excess reagent left, percent yield. Amounts are read by the reagent-table
+ * engine (`reagent-table/material.ts`): mass, moles, volume × concentration,
+ * a volume of a neat liquid with its density, equivalents or mol % of the
+ * first reactant given by its own amount. Results are plain data.
  */
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { AMOUNT, MASS, measureAs } from '../calc/measure.js';
 import { formulaMass } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
-import type { ParseOptions } from '../formula-parser/parse.js';
 import { exact } from '../sigfig/measured.js';
 import { divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
+import type { RoundingMode } from '../sigfig/round.js';
 import { sameDims, unitOf } from '../sigfig/units.js';
-import { balance, type BalanceResult } from './balance.js';
-import type { Species } from './equation.js';
+import { Decimal } from '../exact/decimal.js';
+import { materialForMoles, molesFromQuantity, readAmount, readMaterial } from '../reagent-table/material.js';
+import { readRowText } from '../reagent-table/row-text.js';
+import { tableAmount, type TableAmount } from '../reagent-table/table.js';
+import { balanceParsed, type BalanceOptions, type BalanceResult } from './balance.js';
+import { parseEquation, type Species } from './equation.js';
+import type { Rational } from './rational.js';
 
-export interface ReactOptions extends ParseOptions {
-  /** Amounts of reactants: 'H2=4.00 g', 'HCl=25.0 mL of 0.100 M', 'O2=0.500 mol'. */
+export interface ReactOptions extends BalanceOptions {
+  /**
+   * Amounts of reactants: 'H2=4.00 g', 'HCl=25.0 mL of 0.100 M', 'O2=0.500 mol',
+   * 'Ac2O=2.00 mL, density=1.08 g/mL', 'Ac2O=1.5 equiv', with purity=, solution= as in a reagent table.
+   */
   amounts: string[];
   /** The amount of a product actually obtained, for percent yield: 'H2O=30.1 g'. */
   actual?: string;
+  rounding?: RoundingMode;
 }
 
+/** A species with its coefficient and amounts, as plain data (amounts in mol and g). */
 export interface SpeciesLine {
   species: string;
-  coefficient: bigint;
+  formula: string;
+  coefficient: number;
+  exactCoefficient: string;
   /** Molar mass, g/mol (null for the electron). */
-  molarMass: Quantity | null;
-  /** Amount given (reactants), or produced (products), mol. */
-  moles: Quantity | null;
-  /** Mass given or produced, g. */
-  mass: Quantity | null;
+  molarMass: number | null;
+  /** Amount given (reactants), or produced (products). */
+  moles: TableAmount | null;
+  /** Mass given or produced. */
+  mass: TableAmount | null;
 }
 
 export interface ReactResult {
@@ -40,18 +54,20 @@ export interface ReactResult {
   products: SpeciesLine[];
   /** The limiting reagent as written. */
   limiting: string;
-  /** Extent of reaction at completion, mol. */
-  extent: Quantity;
+  /** Extent of reaction at completion. */
+  extent: TableAmount;
   /** Reagents left over at completion, with the amount and mass left. */
-  excess: { species: string; moles: Quantity; mass: Quantity | null }[];
-  percentYield: { species: string; actual: Quantity; theoretical: Quantity; percent: Quantity } | null;
+  excess: { species: string; moles: TableAmount; mass: TableAmount | null }[];
+  percentYield: { species: string; actual: TableAmount; theoretical: TableAmount; percent: TableAmount } | null;
+  /** Catalysts (left out of the balance) with the amounts given for them. */
+  catalysts: { species: string; formula: string; equiv: number | null; moles: TableAmount | null; mass: TableAmount | null }[];
   balance: BalanceResult;
   notes: Note[];
 }
 
 const G_PER_MOL = unitOf('g/mol');
 
-function molarMassOf(s: Species, options: ParseOptions): Quantity | null {
+function molarMassOf(s: Species, options: ReactOptions): Quantity | null {
   if (s.formula === 'e-') return null;
   return quantity(reportedMolarMass(formulaMass(s.text, options)), G_PER_MOL);
 }
@@ -77,31 +93,60 @@ function splitAmount(text: string): [string, string] {
   return [text.slice(0, eq), text.slice(eq + 1)];
 }
 
+function ratioQuantity(r: Rational): Quantity {
+  return quantity(exact(new Decimal(r.num.toString()).div(r.den.toString())), null);
+}
+
 /**
  * Limiting reagent, theoretical yields and excess for amounts of reactants.
  *
  * @example
  * react('H2 + O2 -> H2O', { amounts: ['H2=4.00 g', 'O2=16.0 g'] }).limiting // 'O2'
+ * react('C7H6O3 + C4H6O3 -> C9H8O4 + C2H4O2', { amounts: ['C7H6O3=2.00 g', 'C4H6O3=3.0 equiv'] }).products[0].mass?.display // '2.61 g'
  */
 export function react(equation: string, options: ReactOptions): ReactResult {
-  const bal = balance(equation, options);
+  const rounding = options.rounding ?? 'half-even';
+  const bal = balanceParsed(parseEquation(equation, options), options);
   const eq = bal.equation;
   const all = [...eq.reactants, ...eq.products];
-  const coef = new Map<Species, bigint>(all.map((s, i) => [s, bal.coefficients[i]]));
-  const notes: Note[] = [...bal.notes];
-  if (options.amounts.length === 0) throw fail({ code: 'BAD_AMOUNT', message: 'give the amount of at least one reactant: --amount H2=4.00 g' }, equation);
-  const given = new Map<Species, Quantity>();
-  for (const a of options.amounts) {
-    const [key, value] = splitAmount(a);
+  const coef = new Map<Species, Rational>(all.map((s, i) => [s, bal.exact[i]]));
+  const notes: Note[] = [...bal.result.notes];
+  if (!options.amounts || options.amounts.length === 0) throw fail({ code: 'BAD_AMOUNT', message: 'give the amount of at least one reactant: --amount H2=4.00 g' }, equation);
+  // read every amount first; equivalents are of the first reactant given by its own amount
+  const catalystAmounts: { a: string; s: Species; spec: ReturnType<typeof readRowText>; amount: ReturnType<typeof readAmount> }[] = [];
+  const read = options.amounts.flatMap((a) => {
+    const [key] = splitAmount(a);
+    const cat = eq.catalysts.find((c) => c.text === key.trim() || c.formula === safeHill(key.trim()));
+    if (cat) {
+      const spec = readRowText(a, 'catalyst');
+      catalystAmounts.push({ a, s: cat, spec, amount: readAmount(spec.amount ?? '', cat.text, notes) });
+      return [];
+    }
     const s = findSpecies(key, all, a);
     if (s.side !== 'reactant') throw fail({ code: 'BAD_AMOUNT', message: `${s.text} is a product; give amounts of reactants (and the product obtained with --actual)` }, a);
+    const spec = readRowText(a, 'reagent');
+    const amount = readAmount(spec.amount ?? '', s.text, notes);
+    return [{ a, s, spec, amount }];
+  });
+  const given = new Map<Species, Quantity>();
+  let reference: Species | null = null;
+  for (const { a, s, spec, amount } of read) {
     if (given.has(s)) throw fail({ code: 'BAD_AMOUNT', message: `${s.text} is given twice` }, a);
-    const q = measureAs(value, [MASS, AMOUNT], `the amount of ${s.text}`, notes);
-    if (q.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: `the amount of ${s.text} must be positive` }, a);
+    if (amount.kind !== 'quantity') continue;
     const m = molarMassOf(s, options);
-    if (sameDims(q.dims, MASS) && !m) throw fail({ code: 'BAD_AMOUNT', message: 'electrons have no molar mass here: give their amount in mol' }, a);
-    given.set(s, sameDims(q.dims, MASS) ? divide(q, m!) : q);
+    if (sameDims(amount.quantity.dims, MASS) && !m) throw fail({ code: 'BAD_AMOUNT', message: 'electrons have no molar mass here: give their amount in mol' }, a);
+    const mat = readMaterial(spec, s.text, notes);
+    given.set(s, molesFromQuantity(amount.quantity, m, mat, s.text).moles);
+    reference ??= s;
   }
+  for (const { a, s, amount } of read) {
+    if (amount.kind !== 'equiv') continue;
+    if (!reference) throw fail({ code: 'BAD_AMOUNT', message: `${s.text} is given in ${amount.written}, but no reactant is given by its own amount to take them of` }, a);
+    if (given.has(s)) throw fail({ code: 'BAD_AMOUNT', message: `${s.text} is given twice` }, a);
+    given.set(s, multiply(given.get(reference)!, amount.equiv));
+    notes.push({ code: 'EQUIV_OF', message: `${s.text}: ${amount.number} ${amount.written} of ${reference.text} (the first reactant given by its own amount)` });
+  }
+  const firstGiven = reference ? given.get(reference)! : null;
   for (const r of eq.reactants) {
     if (!given.has(r)) notes.push({ code: 'ASSUMED_EXCESS', message: `no amount given for ${r.text}: taken to be in excess` });
   }
@@ -109,42 +154,86 @@ export function react(equation: string, options: ReactOptions): ReactResult {
   let limiting: Species | null = null;
   let extent: Quantity | null = null;
   for (const [s, n] of given) {
-    const x = divide(n, quantity(exact(String(coef.get(s)!)), null));
+    const x = divide(n, ratioQuantity(coef.get(s)!));
     if (!extent || x.value.lt(extent.value)) {
       extent = x;
       limiting = s;
     }
   }
+  const nu = (s: Species) => ratioQuantity(coef.get(s)!);
+  const amt = (q: Quantity | null, unit: string) => (q ? tableAmount(q, 'result', [], unit, rounding) : null);
   const line = (s: Species, moles: Quantity | null): SpeciesLine => {
     const mm = molarMassOf(s, options);
-    return { species: s.text, coefficient: coef.get(s)!, molarMass: mm, moles, mass: moles && mm ? multiply(moles, mm) : null };
+    const c = coef.get(s)!;
+    return {
+      species: s.text,
+      formula: s.formula,
+      coefficient: c.toNumber(),
+      exactCoefficient: c.toString(),
+      molarMass: mm ? mm.value.toNumber() : null,
+      moles: amt(moles, 'mol'),
+      mass: amt(moles && mm ? multiply(moles, mm) : null, 'g'),
+    };
   };
-  const nu = (s: Species) => quantity(exact(String(coef.get(s)!)), null);
+  const productMoles = new Map<Species, Quantity>(eq.products.map((s) => [s, multiply(extent!, nu(s))]));
   const reactants = eq.reactants.map((s) => line(s, given.get(s) ?? null));
-  const products = eq.products.map((s) => line(s, multiply(extent!, nu(s))));
+  const products = eq.products.map((s) => line(s, productMoles.get(s)!));
   const excess = eq.reactants
     .filter((s) => given.has(s) && s !== limiting)
     .map((s) => {
       const left = subtract(given.get(s)!, multiply(extent!, nu(s)));
       const mm = molarMassOf(s, options);
-      return { species: s.text, moles: left, mass: mm ? multiply(left, mm) : null };
+      return { species: s.text, moles: amt(left, 'mol')!, mass: amt(mm ? multiply(left, mm) : null, 'g') };
     });
+  const catalysts: ReactResult['catalysts'] = eq.catalysts.map((c) => {
+    const given = catalystAmounts.find((x) => x.s === c);
+    const mm = molarMassOf(c, options);
+    if (!given) return { species: c.text, formula: c.formula, equiv: null, moles: null, mass: null };
+    const mat = readMaterial(given.spec, c.text, notes);
+    let moles: Quantity;
+    let equiv: number | null = null;
+    if (given.amount.kind === 'equiv') {
+      if (!reference) throw fail({ code: 'BAD_AMOUNT', message: `${c.text} is given in ${given.amount.written}, but no reactant is given by its own amount to take them of` }, given.a);
+      moles = multiply(firstGiven!, given.amount.equiv);
+      equiv = given.amount.equiv.value.toNumber();
+    } else {
+      moles = molesFromQuantity(given.amount.quantity, mm, mat, c.text).moles;
+      if (firstGiven) equiv = moles.value.div(firstGiven.value).toNumber();
+    }
+    const m = materialForMoles(moles, mm, mat);
+    return { species: c.text, formula: c.formula, equiv, moles: amt(moles, 'mol'), mass: m.mass ? amt(m.mass, 'g') : null };
+  });
   let percentYield: ReactResult['percentYield'] = null;
   if (options.actual) {
     const [key, value] = splitAmount(options.actual);
     const s = findSpecies(key, all, options.actual);
     if (s.side !== 'product') throw fail({ code: 'BAD_AMOUNT', message: `${s.text} is not a product` }, options.actual);
     const q = measureAs(value, [MASS, AMOUNT], `the amount of ${s.text} obtained`, notes);
-    const p = products[eq.products.indexOf(s)];
-    const theoretical = sameDims(q.dims, MASS) ? p.mass! : p.moles!;
+    if (q.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: `the amount of ${s.text} obtained must be positive` }, options.actual);
+    const n = productMoles.get(s)!;
+    const mm = molarMassOf(s, options);
+    const isMass = sameDims(q.dims, MASS);
+    if (isMass && !mm) throw fail({ code: 'BAD_AMOUNT', message: 'electrons have no molar mass here: give their amount in mol' }, options.actual);
+    const theoretical = isMass ? multiply(n, mm!) : n;
     const percent = multiply(divide(q, theoretical), quantity(exact(100), null));
-    percentYield = { species: s.text, actual: q, theoretical, percent };
+    const pct = tableAmount(percent, 'result', [], '', rounding);
+    percentYield = {
+      species: s.text,
+      actual: tableAmount(q, 'result', [], isMass ? 'g' : 'mol', rounding),
+      theoretical: tableAmount(theoretical, 'result', [], isMass ? 'g' : 'mol', rounding),
+      percent: { ...pct, displayUnit: '%', display: `${pct.figure} %` },
+    };
     if (percent.value.gt(100)) notes.push({ code: 'YIELD_OVER_100', message: `a yield over 100 % (${percent.value.toFixed(1)} %): the product may be wet or impure, or an amount is wrong` });
   }
-  return { input: equation, balanced: bal.balanced, reactants, products, limiting: limiting!.text, extent: extent!, excess, percentYield, balance: bal, notes };
+  return { input: equation, balanced: bal.result.balanced, reactants, products, limiting: limiting!.text, extent: amt(extent!, 'mol')!, excess, percentYield, catalysts, balance: bal.result, notes };
 }
 
-/** Non-throwing {@link react}. */
+/**
+ * Non-throwing {@link react}.
+ *
+ * @example
+ * safeReact('H2 + O2 -> H2O', { amounts: [] }).success // false
+ */
 export function safeReact(equation: string, options: ReactOptions): SafeResult<ReactResult> {
   return toSafe(() => react(equation, options));
 }

@@ -9,6 +9,14 @@ describe('pondus balance', () => {
       balanced: '5 Fe^2+ + MnO4^- + 8 H^+ → 5 Fe^3+ + Mn^2+ + 4 H2O',
       species: ['Fe^2+', 'MnO4^-', 'H^+', 'Fe^3+', 'Mn^2+', 'H2O'],
       coefficients: [5, 1, 8, 5, 1, 4],
+      exactCoefficients: ['5', '1', '8', '5', '1', '4'],
+      balancedAsWritten: false,
+      unique: true,
+      independentBalances: 1,
+      basis: [],
+      settledBy: 'computed',
+      catalysts: [],
+      notes: [],
     });
   });
 

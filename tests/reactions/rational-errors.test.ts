@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { Rational } from '../../src/reactions/rational.js';
+import { gcd, nullSpace, Rational, smallestIntegers } from '../../src/reactions/rational.js';
 import { PondusError } from '../../src/errors/pondus-error.js';
 
 const codeOf = (f: () => unknown) => {
@@ -29,5 +29,31 @@ describe('exact fractions from text', () => {
   it('a zero denominator and division by zero are PondusErrors', () => {
     expect(codeOf(() => Rational.of(1n, 0n))).toBe('DIVISION_BY_ZERO');
     expect(codeOf(() => Rational.ONE.div(Rational.ZERO))).toBe('DIVISION_BY_ZERO');
+  });
+});
+
+describe('misuse of the fraction helpers is a PondusError, never a TypeError', () => {
+  /* eslint-disable @typescript-eslint/no-explicit-any */
+  it.each([
+    ['a float numerator', () => Rational.of(1.5 as any)],
+    ['a number denominator', () => Rational.of(1n, 2 as any)],
+    ['a number operand', () => Rational.ONE.plus(3 as any)],
+    ['a null operand', () => Rational.ONE.times(null as any)],
+    ['a string operand', () => Rational.ONE.div('2' as any)],
+    ['a null decimal', () => Rational.fromDecimal(null as any)],
+    ['an object decimal', () => Rational.fromDecimal({} as any)],
+    ['a fraction as text', () => Rational.fromDecimal('1/2')],
+    ['hex text', () => Rational.fromDecimal('0x10')],
+    ['gcd of numbers', () => gcd(4 as any, 6 as any)],
+    ['a ragged matrix', () => nullSpace([[Rational.ONE], []], 1)],
+    ['a matrix of numbers', () => nullSpace([[1 as any, 2 as any]], 2)],
+    ['a list of numbers', () => smallestIntegers([1 as any])],
+  ])('%s', (_what, f) => {
+    expect(codeOf(f)).toBe('BAD_NUMBER');
+  });
+
+  it('converts exactly to a plain number', () => {
+    expect(Rational.of(1n, 2n).toNumber()).toBe(0.5);
+    expect(Rational.fromDecimal('1e21').toNumber()).toBe(1e21);
   });
 });

@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
 import { react } from '../../src/reactions/react.js';
-import { displayQuantity } from '../../src/sigfig/display-quantity.js';
 
 describe('limiting reagent, yields and excess', () => {
   it('silicon nitride from 2.00 g Si and 1.50 g N2: silicon limits', () => {
@@ -9,22 +8,22 @@ describe('limiting reagent, yields and excess', () => {
     expect(r.balanced).toBe('3 Si + 2 N2 → Si3N4');
     expect(r.limiting).toBe('Si');
     // by the rules: 2.00 g / 28.085 g/mol / 3 × 140.283 g/mol = 3.33 g
-    expect(displayQuantity(r.products[0].mass!, 'g').text).toBe('3.33 g');
+    expect(r.products[0].mass!.display).toBe('3.33 g');
   });
 
   it('hydrogen and oxygen: excess left and percent yield', () => {
     const r = react('H2 + O2 -> H2O', { amounts: ['H2=4.00 g', 'O2=16.0 g'], actual: 'H2O=15.0 g' });
     expect(r.limiting).toBe('O2');
-    expect(displayQuantity(r.products[0].moles!, 'mol').text).toBe('1.00 mol');
-    expect(displayQuantity(r.products[0].mass!, 'g').text).toBe('18.0 g');
-    expect(displayQuantity(r.excess[0].moles, 'mol').text).toBe('0.98 mol');
-    expect(displayQuantity(r.percentYield!.percent).figure).toBe('83.3');
+    expect(r.products[0].moles!.display).toBe('1.00 mol');
+    expect(r.products[0].mass!.display).toBe('18.0 g');
+    expect(r.excess[0].moles.display).toBe('0.98 mol');
+    expect(r.percentYield!.percent.figure).toBe('83.3');
   });
 
   it('takes amounts as volume × concentration and as moles', () => {
     const r = react('NaOH + HCl -> NaCl + H2O', { amounts: ['HCl=25.0 mL of 0.100 M', 'NaOH=0.00300 mol'] });
     expect(r.limiting).toBe('HCl');
-    expect(displayQuantity(r.excess[0].moles, 'mol').text).toBe('0.00050 mol');
+    expect(r.excess[0].moles.display).toBe('0.00050 mol');
   });
 
   it('notes reactants taken to be in excess and yields over 100 %', () => {
@@ -35,7 +34,66 @@ describe('limiting reagent, yields and excess', () => {
   it('refuses amounts of products, unknown species and non-amounts', () => {
     expect(() => react('H2 + O2 -> H2O', { amounts: ['H2O=1.0 g'] })).toThrow(/is a product/);
     expect(() => react('H2 + O2 -> H2O', { amounts: ['N2=1.0 g'] })).toThrow(/not a species/);
-    expect(() => react('H2 + O2 -> H2O', { amounts: ['H2=1.0 mL'] })).toThrow(/must be a mass or an amount of substance/);
+    expect(() => react('H2 + O2 -> H2O', { amounts: ['H2=1.0 mL'] })).toThrow(/needs a density/);
+    expect(() => react('H2 + O2 -> H2O', { amounts: ['H2=1.0 M'] })).toThrow(/must be a mass or an amount of substance or a volume/);
     expect(() => react('H2 + O2 -> H2O', { amounts: [] })).toThrow(/at least one reactant/);
+  });
+});
+
+describe('react on the reagent-table engine', () => {
+  it('is plain data: JSON, spread and structuredClone keep everything', () => {
+    const r = react('H2 + O2 -> H2O', { amounts: ['H2=4.00 g', 'O2=16.0 g'], actual: 'H2O=15.0 g' });
+    expect(JSON.parse(JSON.stringify(r))).toEqual(r);
+    expect(structuredClone(r)).toEqual(r);
+    expect(typeof r.balance.coefficients[0]).toBe('number');
+  });
+
+  it('the teaching-lab aspirin synthesis, written 1:1:1:1, with acetic anhydride by volume and density', () => {
+    // the salicylic acid + acetic anhydride synthesis of aspirin (a common teaching-lab experiment), from memory;
+    // density of acetic anhydride 1.08 g/mL (CRC Handbook of Chemistry and Physics, from memory)
+    const r = react('C7H6O3 + C4H6O3 -> C9H8O4 + C2H4O2', { amounts: ['C7H6O3=2.00 g', 'C4H6O3=5.00 mL, density=1.08 g/mL'] });
+    expect(r.balance.balancedAsWritten).toBe(true);
+    expect(r.balance.unique).toBe(false);
+    expect(r.limiting).toBe('C7H6O3');
+    // 2.00 g / 138.12 g/mol × 180.16 g/mol = 2.61 g
+    expect(r.products[0].mass!.display).toBe('2.61 g');
+  });
+
+  it('reads equivalents of the first reactant given by its own amount', () => {
+    const r = react('C7H6O3 + C4H6O3 -> C9H8O4 + C2H4O2', { amounts: ['C7H6O3=2.00 g', 'C4H6O3=0.50 equiv'] });
+    expect(r.limiting).toBe('C4H6O3');
+    expect(r.notes.map((n) => n.code)).toContain('EQUIV_OF');
+    expect(() => react('C7H6O3 + C4H6O3 -> C9H8O4 + C2H4O2', { amounts: ['C4H6O3=1.5 equiv'] })).toThrow(/no reactant is given by its own amount/);
+  });
+
+  it('percent yield of copper from copper(II) sulfate and excess zinc', () => {
+    // source: OpenStax Chemistry 2e §4.4 (Reaction Yields), worked example on percent yield (1.274 g CuSO4, 0.392 g Cu obtained, 77.3 %), from memory
+    const r = react('CuSO4 + Zn -> Cu + ZnSO4', { amounts: ['CuSO4=1.274 g'], actual: 'Cu=0.392 g' });
+    expect(r.products[0].mass!.display).toBe('0.5072 g');
+    expect(r.percentYield!.percent.figure).toBe('77.3');
+  });
+
+  it('percent yield of Freon-12 from carbon tetrachloride', () => {
+    // source: OpenStax Chemistry 2e §4.4 (Reaction Yields), percent-yield example (32.9 g CCl4, 12.5 g CF2Cl2, 48.3 %), from memory
+    const r = react('CCl4 + HF -> CF2Cl2 + HCl', { amounts: ['CCl4=32.9 g'], actual: 'CF2Cl2=12.5 g' });
+    expect(r.balanced).toBe('CCl4 + 2 HF → CF2Cl2 + 2 HCl');
+    expect(r.percentYield!.percent.figure).toBe('48.3');
+  });
+
+  it('fixes the coefficients of chosen species when atoms alone do not', () => {
+    expect(() => react('C + O2 -> CO + CO2', { amounts: ['C=12.0 g'] })).toThrow(/more than one independent balance/);
+    const r = react('C + O2 -> CO + CO2', { amounts: ['C=12.0 g'], fix: { CO: '2', CO2: '1' } });
+    expect(r.balanced).toBe('3 C + 2 O2 → 2 CO + CO2');
+  });
+});
+
+describe('react with a catalyst', () => {
+  it('gives the catalyst its amount from mol % and leaves it out of the stoichiometry', () => {
+    const r = react('C7H6O3 + C4H6O3 + H2SO4 -> C9H8O4 + C2H4O2 + H2SO4', { amounts: ['C7H6O3=2.00 g', 'C4H6O3=3.0 equiv', 'H2SO4=5 mol %'] });
+    expect(r.catalysts).toHaveLength(1);
+    expect(r.catalysts[0].equiv).toBe(0.05);
+    // 0.05 × 2.00 g / 138.12 g/mol = 0.724 mmol
+    expect(r.catalysts[0].moles!.display).toBe('0.000724 mol');
+    expect(r.products[0].mass!.display).toBe('2.61 g');
   });
 });

@@ -1,43 +1,20 @@
 import type { Command } from 'commander';
-import { react, type ReactResult } from '../../reactions/react.js';
+import { react, type ReactOptions, type ReactResult } from '../../reactions/react.js';
+import { reactJson } from '../../reactions/react-json.js';
+import { readFixOption } from '../../reactions/fix-option.js';
 import { BENCH_CAUTION } from '../../preparation/caution.js';
-import { displayQuantity } from '../../sigfig/display-quantity.js';
-import type { Quantity } from '../../sigfig/quantity.js';
 import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { fail } from '../../errors/pondus-error.js';
-import type { RoundingMode } from '../../sigfig/round.js';
 import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
 interface ReactCliOptions extends OutputOptions, RoundingOptions {
   amount?: string[];
   actual?: string;
+  fix?: string[];
+  catalyst?: string[];
   abbreviations?: boolean;
-}
-
-function reactJson(r: ReactResult, rounding: RoundingMode) {
-  const show = (q: Quantity | null, unit: string) => (q ? displayQuantity(q, unit, rounding).figure : '');
-  const num = (q: Quantity | null, unit: string) => (q ? displayQuantity(q, unit, rounding).value.toNumber() : null);
-  const line = (l: ReactResult['reactants'][number]) => ({
-    species: l.species,
-    coefficient: Number(l.coefficient),
-    moles: num(l.moles, 'mol'),
-    molesDisplay: show(l.moles, 'mol'),
-    mass: num(l.mass, 'g'),
-    massDisplay: show(l.mass, 'g'),
-  });
-  return {
-    input: r.input,
-    balanced: r.balanced,
-    limiting: r.limiting,
-    extent: num(r.extent, 'mol'),
-    reactants: r.reactants.map(line),
-    products: r.products.map(line),
-    excess: r.excess.map((e) => ({ species: e.species, moles: num(e.moles, 'mol'), molesDisplay: show(e.moles, 'mol'), mass: num(e.mass, 'g'), massDisplay: show(e.mass, 'g') })),
-    percentYield: r.percentYield ? { species: r.percentYield.species, percent: r.percentYield.percent.value.toNumber(), display: displayQuantity(r.percentYield.percent, undefined, rounding).figure } : null,
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
-  };
 }
 
 /** The presenter for `pondus react`. */
@@ -46,30 +23,37 @@ export function reactPresenter(o: ReactCliOptions): Presenter<ReactResult> {
   const keys = o.amount.map((a) => a.slice(0, Math.max(0, a.indexOf('='))).trim());
   const twice = keys.find((k, i) => k !== '' && keys.indexOf(k) !== i);
   if (twice !== undefined) throw fail({ code: 'USAGE', message: `--amount gives ${twice} twice: give one amount per reactant` });
-  const rounding = roundingOf(o);
-  const show = (q: Quantity | null, unit: string) => (q ? displayQuantity(q, unit, rounding).figure : '');
-  const opts = { amounts: o.amount, actual: o.actual, abbreviations: !!o.abbreviations };
+  const opts: ReactOptions = { amounts: o.amount, actual: o.actual, abbreviations: !!o.abbreviations, rounding: roundingOf(o) };
+  if (o.fix && o.fix.length) opts.fix = readFixOption(o.fix);
+  if (o.catalyst && o.catalyst.length) opts.catalysts = o.catalyst;
+  const fig = (a: { figure: string } | null) => (a ? a.figure : '');
   return {
     compute: (input) => react(input, opts),
-    json: (r) => reactJson(r, rounding),
-    columns: ['input', 'balanced', 'limiting', 'products', 'percentYield'],
-    cells: (r) => [r.input, r.balanced, r.limiting, r.products.map((p) => `${p.species}=${show(p.mass, 'g')} g`).join(' '), r.percentYield ? displayQuantity(r.percentYield.percent, undefined, rounding).figure : ''],
+    json: reactJson,
+    // one row per equation, flat: the first product written is the one the yield is of
+    columns: ['input', 'balanced', 'limiting', 'product', 'theoretical_mol', 'theoretical_g', 'percentYield'],
+    cells: (r) => [r.input, r.balanced, r.limiting, r.products[0].species, fig(r.products[0].moles), fig(r.products[0].mass), r.percentYield ? r.percentYield.percent.figure : ''],
     block: (r) => {
-      const row = (l: ReactResult['reactants'][number], role: string) => [l.species, String(l.coefficient), role, show(l.moles, 'mol'), show(l.mass, 'g')];
+      const row = (l: ReactResult['reactants'][number], role: string) => [l.species, l.exactCoefficient, role, fig(l.moles), fig(l.mass)];
       const lines = [r.balanced];
       lines.push(
         fixedTable(
           ['species', 'coefficient', '', 'amount mol', 'mass g'],
-          [...r.reactants.map((l) => row(l, l.species === r.limiting ? 'limiting' : l.moles ? 'given' : 'in excess')), ...r.products.map((l) => row(l, 'theoretical yield'))],
+          [
+            ...r.reactants.map((l) => row(l, l.species === r.limiting ? 'limiting' : l.moles ? 'given' : 'in excess')),
+            ...r.catalysts.map((c) => [c.species, '', 'catalyst', fig(c.moles), fig(c.mass)]),
+            ...r.products.map((l) => row(l, 'theoretical yield')),
+          ],
           ['left', 'right', 'left', 'right', 'right'],
         ),
       );
       lines.push(`limiting reagent: ${r.limiting}`);
-      for (const e of r.excess) lines.push(`left over: ${e.species} ${show(e.moles, 'mol')} mol${e.mass ? ` (${show(e.mass, 'g')} g)` : ''}`);
-      if (r.percentYield) lines.push(`percent yield of ${r.percentYield.species}: ${displayQuantity(r.percentYield.percent, undefined, rounding).figure} %`);
+      for (const e of r.excess) lines.push(`left over: ${e.species} ${e.moles.figure} mol${e.mass ? ` (${e.mass.figure} g)` : ''}`);
+      if (r.percentYield) lines.push(`percent yield of ${r.percentYield.species}: ${r.percentYield.percent.figure} %`);
       return lines.join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
+    noteItems: (r) => r.notes,
     caution: BENCH_CAUTION,
   };
 }
@@ -82,9 +66,11 @@ export function registerReact(program: Command, run: CommandRunner): void {
     program
       .command('react')
       .description('limiting reagent, theoretical yield, excess left and percent yield of a reaction')
-      .argument('[equations...]', 'equations (balanced here if they are not); - reads one per line')
-      .option('--amount <species=amount>', "an amount of a reactant: 'H2=4.00 g', 'O2=0.500 mol', 'HCl=25.0 mL of 0.100 M' (repeat for each)", collect)
+      .argument('[equations...]', 'equations (coefficients as written are used when they balance; balanced here if not); - reads one per line')
+      .option('--amount <species=amount>', "an amount of a reactant: 'H2=4.00 g', 'O2=0.500 mol', 'HCl=25.0 mL of 0.100 M', 'Ac2O=2.00 mL, density=1.08 g/mL', 'Ac2O=1.5 equiv' (of the first reactant given by its own amount); purity= and solution= as in a reagent table (repeat for each)", collect)
       .option('--actual <species=amount>', "the amount of a product obtained, for percent yield: 'H2O=30.1 g'")
+      .option('--fix <coefficients>', "when atoms alone allow more than one balance: 'written' or SPECIES=N ('C4H6O3=5')", collect)
+      .option('--catalyst <species>', "a species written on one side that is a catalyst, left out of the balance: 'H2SO4' (its amount, if given with --amount, may be in mol %)", collect)
       .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)'),
   ));
   cmd.action((inputs: string[], o: ReactCliOptions) => run('react', inputs, o));

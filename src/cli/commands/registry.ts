@@ -9,6 +9,7 @@ import { basisPresenter, dilutePresenter, gravimetricPresenter, saltPresenter } 
 import { candidatesPresenter, combustionPresenter, empiricalPresenter } from './empirical.js';
 import { preparePresenter } from './prepare.js';
 import { reactPresenter } from './react.js';
+import { reagentsPresenter } from './reagents.js';
 import { calcPresenter } from './calc.js';
 import { compositionPresenter } from './composition.js';
 import { massPresenter } from './mass.js';
@@ -27,6 +28,7 @@ export const PRESENTERS: Readonly<Record<string, Factory>> = Object.freeze({
   analysis: analysisPresenter,
   balance: balancePresenter,
   react: reactPresenter,
+  reagents: reagentsPresenter,
   prepare: preparePresenter,
   dilute: dilutePresenter,
   gravimetric: gravimetricPresenter,

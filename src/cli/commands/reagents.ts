@@ -1,0 +1,253 @@
+import { Option, type Command } from 'commander';
+import { fail, PondusError } from '../../errors/pondus-error.js';
+import type { Note } from '../../errors/issue.js';
+import { readProcedure, type ProcedureRow } from '../../reagent-table/procedure.js';
+import { reagentRowJson } from '../../reagent-table/reagent-table-json.js';
+import { readRowText } from '../../reagent-table/row-text.js';
+import { reagentRow, solventRow, TABLE_CAUTION, tableCautions, tableContext, type ReagentRole, type ReagentRow, type ReagentSpec, type ReagentTableOptions, type TableContext } from '../../reagent-table/table.js';
+import { readAllText } from '../input/read-all.js';
+import type { Cell } from '../output/format.js';
+import type { Presenter } from '../output/presenter.js';
+import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
+import type { CommandRunner } from './runner.js';
+
+/** One line of the table as planned by the command: a reagent row or the solvent row. */
+interface PlannedRow {
+  input: string;
+  kind: 'reagent' | 'solvent';
+  spec: ReagentSpec;
+  /** A row that could not be read: reported in its place. */
+  error?: PondusError;
+}
+
+interface ReagentsCliOptions extends OutputOptions, RoundingOptions {
+  reference?: string;
+  reagent?: string[];
+  catalyst?: string[];
+  additive?: string[];
+  product?: string[];
+  concentration?: string;
+  solvent?: string;
+  equation?: string;
+  actual?: string;
+  procedure?: string;
+  markdown?: boolean;
+  abbreviations?: boolean;
+  /** Set by the command: the rows, in order. */
+  plan?: PlannedRow[];
+  /** Set by the command: table options from a procedure file. */
+  fileOptions?: Pick<ReagentTableOptions, 'concentration' | 'solvent' | 'equation' | 'actual'>;
+}
+
+const HEAD = ['reagent', 'formula', 'M g/mol', 'equiv', 'n mmol', 'mass', 'volume', 'notes'];
+const ALIGN: ('left' | 'right')[] = ['left', 'left', 'right', 'right', 'right', 'right', 'right', 'left'];
+
+/** Short words for how a row comes: the table's notes column. */
+function remarks(r: ReagentRow): string {
+  const out: string[] = [];
+  if (r.role !== 'reagent') out.push(r.role === 'reference' ? 'reference (limiting)' : r.role);
+  if (/mol\s*%$/i.test(r.spec.amount)) out.push(r.spec.amount);
+  if (r.spec.purity) out.push(`${r.spec.purity} pure`);
+  if (r.spec.solution) out.push(r.spec.solution);
+  if (r.spec.density) out.push(`d ${r.spec.density}`);
+  if (r.spec.form) out.push(`as ${r.spec.form}`);
+  if (r.role === 'solvent') out.push(`to ${r.spec.amount}`);
+  if (r.percentYield) out.push(`yield ${r.percentYield.figure} %`);
+  if (r.role === 'product') out.push('theoretical yield');
+  if (r.hazard) out.push(r.hazard.replace('-', ' '));
+  return out.join('; ');
+}
+
+function cellsOf(r: ReagentRow): string[] {
+  return [
+    r.reagent,
+    r.name && r.formula ? `${r.formula} (${r.name})` : r.formula,
+    r.molarMassDisplay,
+    r.equivDisplay,
+    r.amount ? r.amount.figure : '',
+    r.mass ? r.mass.display : '',
+    r.volume ? r.volume.display : '',
+    remarks(r),
+  ];
+}
+
+const mdCell = (c: string) => c.replace(/\|/g, '\\|');
+
+/** The presenter for `pondus reagents`: one result per row of the table, in order. */
+export function reagentsPresenter(o: ReagentsCliOptions): Presenter<ReagentRow> {
+  const plan = o.plan ?? [];
+  const file = o.fileOptions ?? {};
+  const options: ReagentTableOptions = {
+    abbreviations: !!o.abbreviations,
+    rounding: roundingOf(o),
+    concentration: o.concentration ?? file.concentration,
+    solvent: o.solvent ?? file.solvent,
+    equation: o.equation ?? file.equation,
+    actual: o.actual ?? file.actual,
+  };
+  const specs = plan.filter((p) => p.kind === 'reagent' && !(p.error && p.spec.role !== 'reference')).map((p) => p.spec);
+  let ctx: TableContext | null = null;
+  let ctxError: PondusError | null = null;
+  const refError = plan.find((p) => p.error && p.spec.role === 'reference')?.error;
+  try {
+    if (refError) throw refError;
+    ctx = tableContext(specs, options);
+  } catch (e) {
+    if (!(e instanceof PondusError)) throw e;
+    ctxError = e;
+  }
+  const results = new Map<string, ReagentRow | PondusError>();
+  for (const p of plan) {
+    if (p.error) {
+      results.set(p.input, p.error);
+      continue;
+    }
+    if (ctxError || !ctx) {
+      results.set(p.input, p.spec.role === 'reference' ? ctxError! : fail({ code: ctxError!.first.code, message: `no table without its reference: ${ctxError!.first.message}` }, p.input));
+      continue;
+    }
+    try {
+      results.set(p.input, p.kind === 'solvent' ? solventRow(ctx, options.solvent ?? null, options.concentration ?? '', p.input) : { ...reagentRow(ctx, p.spec), input: p.input });
+    } catch (e) {
+      if (!(e instanceof PondusError)) throw e;
+      results.set(p.input, e);
+    }
+  }
+  const ok = [...results.values()].filter((r): r is ReagentRow => !(r instanceof PondusError));
+  const tableNotes: Note[] = ctx ? ctx.notes : [];
+  const caution = tableCautions(ok).join('; ');
+  const rowNotes = (r: ReagentRow, first: boolean): Note[] => [...(first ? tableNotes : []), ...r.notes.filter((n) => n.code !== 'CAUTION')];
+  const firstInput = plan[0]?.input;
+  const lastInput = plan[plan.length - 1]?.input;
+  let mdHeader = false;
+  return {
+    compute: (input) => {
+      const r = results.get(input);
+      if (!r) throw fail({ code: 'INTERNAL_ERROR', message: 'a row the table does not hold' }, input);
+      if (r instanceof PondusError) throw r;
+      return r;
+    },
+    json: (r) => ({ ...reagentRowJson(r), notes: [...(r.input === firstInput ? tableNotes : []), ...r.notes].map((n) => ({ code: n.code, message: n.message })), caution: TABLE_CAUTION }),
+    // the written columns first (a procedure file reads them back), then what was computed
+    columns: ['input', 'role', 'reagent', 'formula', 'amount', 'purity', 'density', 'solution', 'form', 'actual', 'equation', 'name', 'hill_formula', 'M_g_per_mol', 'equiv', 'n_mmol', 'mass', 'mass_unit', 'volume', 'volume_unit', 'percent_yield'],
+    cells: (r): Cell[] => [
+      r.input,
+      r.role,
+      r.reagent,
+      r.spec.formula,
+      r.spec.amount,
+      r.spec.purity,
+      r.spec.density,
+      r.spec.solution,
+      r.spec.form,
+      r.role === 'product' && options.actual ? options.actual : '',
+      r.role === 'product' && options.equation ? options.equation : '',
+      r.name ?? '',
+      r.role === 'solvent' ? '' : r.formula,
+      r.molarMassDisplay,
+      r.equivDisplay,
+      r.amount ? r.amount.figure : '',
+      r.mass ? r.mass.figure : '',
+      r.mass ? r.mass.displayUnit : '',
+      r.volume ? r.volume.figure : '',
+      r.volume ? r.volume.displayUnit : '',
+      r.percentYield ? r.percentYield.figure : '',
+    ],
+    ...(o.markdown
+      ? {
+          block: (r: ReagentRow) => {
+            const lines: string[] = [];
+            if (!mdHeader) {
+              mdHeader = true;
+              lines.push(`| ${HEAD.join(' | ')} |`, `| ${ALIGN.map((a) => (a === 'right' ? '---:' : '---')).join(' | ')} |`);
+            }
+            lines.push(`| ${cellsOf(r).map(mdCell).join(' | ')} |`);
+            if (r.input === lastInput) lines.push('');
+            return lines.join('\n');
+          },
+        }
+      : { table: { head: HEAD, row: (r: ReagentRow) => cellsOf(r), align: ALIGN } }),
+    notes: (r) => rowNotes(r, r.input === firstInput).map((n) => n.message),
+    noteItems: (r) => rowNotes(r, r.input === firstInput),
+    caution,
+  };
+}
+
+const collect = (v: string, prev: string[] = []) => [...prev, v];
+
+/** The rows given as options, in table order: reference, reagents, catalysts, additives, solvent, products. */
+function planFromOptions(o: ReagentsCliOptions): PlannedRow[] {
+  const rows: PlannedRow[] = [];
+  const add = (texts: string[] | undefined, role: ReagentRole) => {
+    for (const t of texts ?? []) {
+      try {
+        rows.push({ input: t, kind: 'reagent', spec: readRowText(t, role) });
+      } catch (e) {
+        if (!(e instanceof PondusError)) throw e;
+        rows.push({ input: t, kind: 'reagent', spec: { role, reagent: t, text: t }, error: e });
+      }
+    }
+  };
+  if (o.reference === undefined) throw fail({ code: 'USAGE', message: "give the reference reagent (the limiting one) with its amount: --reference 'C7H6O3=2.00 g' (or a procedure file: --procedure FILE)" });
+  add([o.reference], 'reference');
+  add(o.reagent, 'reagent');
+  add(o.catalyst, 'catalyst');
+  add(o.additive, 'additive');
+  if (o.concentration !== undefined) rows.push({ input: `${o.solvent ?? 'solvent'} to ${o.concentration}`, kind: 'solvent', spec: { role: 'reagent', reagent: o.solvent ?? '' } });
+  add(o.product, 'product');
+  return rows;
+}
+
+function planFromProcedure(rows: ProcedureRow[]): PlannedRow[] {
+  return rows.filter((r) => r.kind !== 'equation').map((r) => ({ input: r.raw, kind: r.kind === 'solvent' ? 'solvent' : 'reagent', spec: r.spec }));
+}
+
+/** Registers `pondus reagents`. */
+export function registerReagents(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void {
+  withRoundingOption(withOutputOptions(
+    program
+      .command('reagents')
+      .description('the reagent table of a synthesis: equivalents, mmol, mass to weigh, volume to take, solvent, theoretical and percent yield')
+      .option('--reference <reagent=amount>', "the reference (limiting) reagent and its amount: 'C7H6O3=2.00 g', 'PhBr=5.00 mmol', 'PhCHO=1.02 mL, density=1.044 g/mL'")
+      .option('--reagent <reagent=amount>', "a reagent by equivalents, mol % or its own amount, with purity=, density=, solution=, form= : 'Ac2O=3.0 equiv, density=1.08 g/mL', 'n-BuLi=1.1 equiv, solution=1.6 M in hexanes' (repeat for each)", collect)
+      .option('--catalyst <reagent=amount>', "a catalyst, shown and left out of the stoichiometry: 'Pd(PPh3)4=2 mol %' (repeat for each)", collect)
+      .option('--additive <reagent=amount>', 'an additive, shown and left out of the stoichiometry (repeat for each)', collect)
+      .option('--product <reagent>', "the product, for the theoretical yield: 'C9H8O4', or 'aspirin, formula=C9H8O4' (repeat for each)", collect)
+      .option('--equation <equation>', "the equation, for the product's coefficient per reference (1:1 when not given)")
+      .option('--concentration <c>', "target concentration of the reference in the solvent: '0.2 M' (gives the solvent volume)")
+      .option('--solvent <name>', "the solvent's name, for its row: 'THF' (with --concentration)")
+      .option('--actual <amount>', "the amount of product obtained, for the percent yield: '2.10 g'")
+      .addOption(new Option('--procedure <file>', 'a procedure file (CSV: role, reagent, formula, amount, purity, density, solution, form, actual, equation); - reads it from standard input'))
+      .option('--markdown', 'a Markdown table, for electronic notebooks')
+      .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS'),
+  )).action(async (o: ReagentsCliOptions) => {
+    if (o.markdown && (o.json || o.csv || o.tsv)) throw fail({ code: 'USAGE', message: 'choose one output format: --markdown, or --json, --csv, --tsv' });
+    if (o.solvent !== undefined && o.concentration === undefined && o.procedure === undefined) throw fail({ code: 'USAGE', message: '--solvent needs --concentration (the target concentration of the reference sets the solvent volume)' });
+    let plan: PlannedRow[];
+    let lines: number[] | undefined;
+    let fileOptions: ReagentsCliOptions['fileOptions'];
+    if (o.procedure !== undefined) {
+      const given = ['reference', 'reagent', 'catalyst', 'additive', 'product'].filter((k) => (o as Record<string, unknown>)[k] !== undefined);
+      if (given.length) throw fail({ code: 'USAGE', message: `--procedure gives the rows: drop ${given.map((g) => `--${g}`).join(', ')}` });
+      const proc = readProcedure(await readAllText(o.procedure, stdin));
+      const clash = (['concentration', 'equation', 'actual'] as const).filter((k) => proc.options[k] !== undefined && o[k] !== undefined);
+      if (clash.length) throw fail({ code: 'USAGE', message: `the procedure file already gives ${clash.join(', ')}: drop --${clash.join(', --')}` });
+      fileOptions = proc.options;
+      const rows = proc.rows.filter((r) => r.kind !== 'equation');
+      plan = planFromProcedure(proc.rows);
+      lines = rows.map((r) => r.line);
+      if (o.concentration !== undefined && proc.options.concentration === undefined) {
+        plan.push({ input: `${o.solvent ?? 'solvent'} to ${o.concentration}`, kind: 'solvent', spec: { role: 'reagent', reagent: o.solvent ?? '' } });
+        lines.push(Math.max(0, ...lines) + 1);
+      }
+    } else {
+      plan = planFromOptions(o);
+    }
+    const seen = new Set<string>();
+    for (const p of plan) {
+      if (seen.has(p.input)) throw fail({ code: 'USAGE', message: `the row '${p.input}' is given twice` });
+      seen.add(p.input);
+    }
+    return run('reagents', plan.map((p) => p.input), { ...o, plan, fileOptions } as ReagentsCliOptions, lines ?? plan.map((_, i) => i + 1));
+  });
+}

@@ -1,0 +1,43 @@
+/**
+ * The one JSON form of a balance result (what `pondus balance --json` prints).
+ */
+import type { BalanceResult } from './balance.js';
+
+/** The JSON row of a balance result. */
+export interface BalanceJson {
+  input: string;
+  balanced: string;
+  species: string[];
+  coefficients: number[];
+  exactCoefficients: string[];
+  balancedAsWritten: boolean;
+  unique: boolean;
+  independentBalances: number;
+  basis: string[];
+  settledBy: BalanceResult['settledBy'];
+  catalysts: string[];
+  notes: { code: string; message: string }[];
+}
+
+/**
+ * The stable JSON shape of a balance result.
+ *
+ * @example
+ * balanceJson(balance('H2 + O2 -> H2O')).coefficients // [2, 1, 2]
+ */
+export function balanceJson(r: BalanceResult): BalanceJson {
+  return {
+    input: r.input,
+    balanced: r.balanced,
+    species: [...r.species],
+    coefficients: [...r.coefficients],
+    exactCoefficients: [...r.exactCoefficients],
+    balancedAsWritten: r.balancedAsWritten,
+    unique: r.unique,
+    independentBalances: r.independentBalances,
+    basis: [...r.basis],
+    settledBy: r.settledBy,
+    catalysts: [...r.catalysts],
+    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+  };
+}

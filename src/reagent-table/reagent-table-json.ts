@@ -1,0 +1,54 @@
+/**
+ * The one JSON form of a reagent-table row (what `pondus reagents --json` prints, one line per row).
+ */
+import type { Note } from '../errors/issue.js';
+import type { ReagentRow, TableAmount } from './table.js';
+
+/** The JSON row of a reagent-table row. */
+export interface ReagentRowJson {
+  input: string;
+  role: ReagentRow['role'];
+  reagent: string;
+  formula: string;
+  name: string | null;
+  molarMass: number | null;
+  molarMassDisplay: string;
+  equiv: number | null;
+  equivDisplay: string;
+  amount: TableAmount | null;
+  mass: TableAmount | null;
+  volume: TableAmount | null;
+  percentYield: TableAmount | null;
+  written: ReagentRow['spec'];
+  hazard: ReagentRow['hazard'];
+  notes: { code: string; message: string }[];
+}
+
+const noteJson = (n: Note) => ({ code: n.code, message: n.message });
+
+/**
+ * The stable JSON shape of one row of a reagent table.
+ *
+ * @example
+ * reagentRowJson(reagentTable([{ role: 'reference', reagent: 'C7H6O3', amount: '2.00 g' }]).rows[0]).amount?.display // '14.5 mmol'
+ */
+export function reagentRowJson(r: ReagentRow): ReagentRowJson {
+  return {
+    input: r.input,
+    role: r.role,
+    reagent: r.reagent,
+    formula: r.formula,
+    name: r.name,
+    molarMass: r.molarMass,
+    molarMassDisplay: r.molarMassDisplay,
+    equiv: r.equiv,
+    equivDisplay: r.equivDisplay,
+    amount: r.amount ? { ...r.amount } : null,
+    mass: r.mass ? { ...r.mass } : null,
+    volume: r.volume ? { ...r.volume } : null,
+    percentYield: r.percentYield ? { ...r.percentYield } : null,
+    written: { ...r.spec },
+    hazard: r.hazard,
+    notes: r.notes.map(noteJson),
+  };
+}
