@@ -4,7 +4,7 @@ export const BENCH_CAUTION =
 
 /** The caution for salt/parent conversions used for doses. */
 export const DOSE_CAUTION =
-  'dosing decisions follow licensed practice, the product labelling and local regulations; a salt/parent factor does not account for bioavailability or formulation';
+  'a dose or a salt mass must be verified by the pharmacist; dosing decisions follow licensed practice, the product labelling and local regulations; a salt/parent factor does not account for bioavailability or formulation';
 
 /** The caution for volumes of concentrated acids and bases. */
 export const CONCENTRATED_CAUTION =

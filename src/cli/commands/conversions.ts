@@ -74,6 +74,7 @@ function oneStepPresenter(o: DiluteCliOptions): Presenter<DilutionResult> {
       return lines.join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
+    noteItems: (r) => notesJson(r.notes),
     caution: BENCH_CAUTION,
   };
 }
@@ -117,6 +118,7 @@ export function gravimetricPresenter(o: GravimetricCliOptions): Presenter<Gravim
       return lines.join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
+    noteItems: (r) => notesJson(r.notes),
   };
 }
 
@@ -154,6 +156,7 @@ export function basisPresenter(o: BasisCliOptions): Presenter<BasisResult> {
       return lines.join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
+    noteItems: (r) => notesJson(r.notes),
   };
 }
 
@@ -176,6 +179,8 @@ export function saltPresenter(o: SaltCliOptions): Presenter<SaltFactorResult> {
       input: r.salt.input,
       salt: r.salt.formula,
       parent: r.parent.formula,
+      form: r.form,
+      metalSalt: r.metalSalt,
       factor: r.factor.toNumber(),
       factorDisplay: displayMeasured(r.reported, rounding).text,
       dose: o.dose?.trim() ?? null,
@@ -194,6 +199,7 @@ export function saltPresenter(o: SaltCliOptions): Presenter<SaltFactorResult> {
       return lines.join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
+    noteItems: (r) => notesJson(r.notes),
     caution: DOSE_CAUTION,
   };
 }
