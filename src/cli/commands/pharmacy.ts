@@ -15,6 +15,11 @@ import { displayMolarMass } from '../output/display.js';
 import { withFormulaOptions, withOutputOptions, withRoundingOption, type FormulaOptions, type OutputOptions } from './common.js';
 import { notesJson, numbered, qtext, quantityJson, type RowPresenter } from './qc-rows.js';
 import { notesCell } from '../output/format.js';
+import { potency, type PotencyOptions, type PotencyResult } from '../../pharmacy/potency.js';
+import { strengthForms, type StrengthForms } from '../../pharmacy/ratio-strength.js';
+import { readBasis } from '../../assay/sample-basis.js';
+import { displayInstruction, instructionJson, massUnitFor } from '../../sigfig/instruction.js';
+import type { Decimal } from '../../exact/decimal.js';
 import type { CommandRunner } from './runner.js';
 
 // --- meq --------------------------------------------------------------------------
@@ -188,6 +193,83 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
   };
 }
 
+// --- potency ---------------------------------------------------------------------
+
+interface PotencyCli extends OutputOptions, Pick<PotencyOptions, 'water' | 'loss' | 'solvent' | 'need'> {
+  basis?: string;
+  rounding?: RoundingMode;
+}
+
+/** The presenter for `pondus potency`. */
+export function potencyPresenter(o: PotencyCli): RowPresenter<PotencyResult> {
+  const rounding = o.rounding ?? 'half-even';
+  const basis = o.basis !== undefined ? readBasis(o.basis) : undefined;
+  if (basis === undefined && (o.water !== undefined || o.loss !== undefined || o.solvent !== undefined)) {
+    throw fail({ code: 'USAGE', message: '--water, --loss and --solvent convert a potency given on another basis: say which with --basis anhydrous, dried or solvent-free' });
+  }
+  const unitOfGiven = (r: PotencyResult) => r.given.unit?.symbol ?? '%';
+  const alt = (r: PotencyResult) => (unitOfGiven(r) === '%' ? 'µg/mg' : '%');
+  return {
+    compute: numbered((input) => potency(input, { basis, water: o.water, loss: o.loss, solvent: o.solvent, need: o.need })),
+    json: ({ input, line, r }) => ({
+      input,
+      line,
+      basis: r.basis,
+      asIs: quantityJson(r.asIs, unitOfGiven(r), rounding),
+      asIsAlso: quantityJson(r.asIs, alt(r), rounding),
+      need: o.need?.trim() ?? null,
+      weigh: r.weigh ? instructionJson(r.weigh, massUnitFor(r.weigh.quantity), rounding) : null,
+      rounding,
+      notes: notesJson(r.notes),
+      caution: PHARMACY_CAUTION,
+    }),
+    columns: ['input', 'line', 'basis', 'as_is', 'as_is_also', 'weigh_g', 'weigh'],
+    cells: ({ input, line, r }) => [input, line, r.basis, qtext(r.asIs, unitOfGiven(r), rounding), qtext(r.asIs, alt(r), rounding), r.weigh ? r.weigh.quantity.value.toFixed() : '', r.weigh ? displayInstruction(r.weigh, massUnitFor(r.weigh.quantity), rounding).text : ''],
+    block: ({ input, r }) => {
+      const lines = [`potency ${input}${r.basis === 'as-is' ? ' (as is)' : ` (${r.basis} basis)`}: ${qtext(r.asIs, unitOfGiven(r), rounding)} as is (${qtext(r.asIs, alt(r), rounding)})`];
+      if (r.weigh) lines.push(`  for ${o.need!.trim()} of active: weigh ${displayInstruction(r.weigh, massUnitFor(r.weigh.quantity), rounding).text} of the material`);
+      return lines.join('\n');
+    },
+    notes: ({ r }) => r.notes.map((n) => n.message),
+    noteItems: ({ r }) => notesJson(r.notes),
+    caution: PHARMACY_CAUTION,
+  };
+}
+
+// --- strength (ratio strength, % w/v, mg/mL, mg/dL, % w/w, mg/kg) ------------------
+
+interface StrengthCli extends OutputOptions {
+  rounding?: RoundingMode;
+}
+
+function formText(value: Decimal): string {
+  // the forms differ from the strength written by powers of ten: the same digits, the point moved;
+  // only a repeating decimal (from a ratio such as 1:750) is cut, to 4 figures
+  const long = value.toSignificantDigits(12);
+  return long.eq(value) ? long.toFixed() : value.toSignificantDigits(4).toFixed();
+}
+
+/** The presenter for `pondus strength`. */
+export function strengthPresenter(o: StrengthCli): RowPresenter<StrengthForms> {
+  const rounding = o.rounding ?? 'half-even';
+  const ratioText = (r: StrengthForms) => `1:${r.ratio.isInteger() ? r.ratio.toFixed() : r.ratio.toSignificantDigits(4).toFixed()}`;
+  const shown = (r: StrengthForms) => r.forms.map((f) => ({ unit: f.unit, value: f.value.toNumber(), display: `${formText(f.value)} ${f.unit}` }));
+  const cols = ['% w/v', 'mg/mL', 'mg/dL', '% w/w', 'mg/g', 'mg/kg', '% v/v'];
+  return {
+    compute: numbered((input) => strengthForms(input)),
+    json: ({ input, line, r }) => ({ input, line, kind: r.kind, ratio: ratioText(r), forms: shown(r), rounding, notes: notesJson(r.notes), caution: PHARMACY_CAUTION }),
+    columns: ['input', 'line', 'kind', 'ratio', ...cols.map((c) => c.replace('% ', 'percent_').replace('/', '_per_'))],
+    cells: ({ input, line, r }) => {
+      const f = shown(r);
+      return [input, line, r.kind, ratioText(r), ...cols.map((c) => f.find((x) => x.unit === c)?.display.replace(` ${c}`, '') ?? '')];
+    },
+    block: ({ input, r }) => `${input} (${r.kind}): ${ratioText(r)} = ${shown(r).map((f) => f.display).join(' = ')}`,
+    notes: ({ r }) => r.notes.map((n) => n.message),
+    noteItems: ({ r }) => notesJson(r.notes),
+    caution: PHARMACY_CAUTION,
+  };
+}
+
 // --- registration -----------------------------------------------------------------
 
 /** Registers `meq`, `osmolarity` and `alligation`. */
@@ -229,10 +311,35 @@ export function registerPharmacy(program: Command, run: CommandRunner): void {
         .option('--by <how>', 'mass or volume, for parts only (no total)'),
     ),
   ).action((inputs: string[], o: AlligationCli) => run('alligation', inputs, o));
+
+  withRoundingOption(
+    withOutputOptions(
+      program
+        .command('potency')
+        .description('potency of a drug substance as is (from µg/mg or %, as is or on the anhydrous or dried basis), and the mass of it that holds an amount of active')
+        .argument('[potencies...]', "the potency from the certificate: '950 µg/mg', '98.7 %', '101.2 %' with --basis anhydrous; - reads one per line")
+        .option('--basis <basis>', 'the basis the potency is given on: as-is (the default), anhydrous, dried, solvent-free')
+        .option('--water <w>', "water content (Karl Fischer), for --basis anhydrous: '4.8 %'")
+        .option('--loss <l>', "loss on drying, for --basis dried: '0.50 %'")
+        .option('--solvent <s>', "residual solvent, for --basis solvent-free: '0.10 %'")
+        .option('--need <m>', "the mass of active needed: '500 mg' (gives the mass to weigh)"),
+    ),
+  ).action((inputs: string[], o: PotencyCli) => run('potency', inputs, o));
+
+  withRoundingOption(
+    withOutputOptions(
+      program
+        .command('strength')
+        .description('a strength in each of its forms: ratio strength 1:N, % w/v, mg/mL, mg/dL; % w/w, mg/g, mg/kg; % v/v')
+        .argument('[strengths...]', "'1:1000', '0.1 % w/v', '2.5 mg/mL', '0.5 % w/w', '1:750 w/w'; - reads one per line"),
+    ),
+  ).action((inputs: string[], o: StrengthCli) => run('strength', inputs, o));
 }
 
 /** Presenters of the compounding commands, by name. */
 export const PHARMACY_PRESENTERS = {
+  potency: (o: PotencyCli) => potencyPresenter(o),
+  strength: (o: StrengthCli) => strengthPresenter(o),
   meq: (o: MeqCli) => (meqPresenter(o)),
   osmolarity: (o: OsmolarityCli) => (osmolarityPresenter(o)),
   alligation: (o: AlligationCli) => (alligationPresenter(o)),
