@@ -94,7 +94,7 @@ export async function main(args: string[], io: CliIo): Promise<number> {
   registerEmpirical(program, run, io.stdin);
   registerBalance(program, run);
   registerReact(program, run);
-  registerPrepare(program, run);
+  registerPrepare(program, run, io.stdin);
   registerConversions(program, run);
   registerQc(program, run);
   registerPharmacy(program, run);

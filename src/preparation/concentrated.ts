@@ -30,6 +30,8 @@ export interface ConcentratedOptions extends MassOptions {
   concentration?: string;
   /** Final volume of the solution to make: '500.0 mL'. */
   volume?: string;
+  /** The volume of concentrated reagent actually taken: '41.5 mL'; gives the concentration made (a result). */
+  taken?: string;
 }
 
 export interface ConcentratedResult {
@@ -59,6 +61,10 @@ export interface ConcentratedResult {
   take: Instruction | null;
   /** Dilution factor from the concentrated reagent to the target. */
   factor: Decimal | null;
+  /** The volume actually taken. */
+  taken: Quantity | null;
+  /** The molarity made from the volume taken (a result, with the figures of the volumes and the nominal molarity). */
+  made: Quantity | null;
   /** True for the acids (add acid to water). */
   acid: boolean;
   notes: Note[];
@@ -148,9 +154,13 @@ export function concentratedReagent(reagentText: string, options: ConcentratedOp
   let volume: Quantity | null = null;
   let take: Instruction | null = null;
   let factor: Decimal | null = null;
-  if ((options.concentration === undefined) !== (options.volume === undefined)) {
+  if (options.concentration !== undefined && options.volume === undefined) {
     throw fail({ code: 'BAD_OPTION', message: 'the volume to take needs both the target concentration and the final volume' });
   }
+  if (options.volume !== undefined && options.concentration === undefined && options.taken === undefined) {
+    throw fail({ code: 'BAD_OPTION', message: 'a final volume needs the target concentration (for the volume to take) or the volume taken (for the concentration made)' });
+  }
+  if (options.volume !== undefined && options.concentration === undefined) volume = readPositive(options.volume, [VOLUME], 'the final volume', notes);
   if (options.concentration !== undefined && options.volume !== undefined) {
     target = readPositive(options.concentration, [MOLARITY, MASS_CONCENTRATION], 'the target concentration', notes);
     volume = readPositive(options.volume, [VOLUME], 'the final volume', notes);
@@ -176,8 +186,18 @@ export function concentratedReagent(reagentText: string, options: ConcentratedOp
     const water = subtract(volume, v);
     if (water.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the volume to take is the whole final volume' });
   }
+  let taken: Quantity | null = null;
+  let made: Quantity | null = null;
+  if (options.taken !== undefined) {
+    if (options.volume === undefined) throw fail({ code: 'BAD_OPTION', message: 'the concentration made from the volume taken needs the final volume' });
+    taken = readPositive(options.taken, [VOLUME], 'the volume taken', notes);
+    if (taken.value.gte(volume!.value)) throw fail({ code: 'BAD_AMOUNT', message: 'the volume taken is not less than the final volume' });
+    made = divide(multiply(molarity, taken), volume!);
+    made.unit = unitOf('M');
+    notes.push({ code: 'MADE_FROM_TAKEN', message: `the concentration made is computed from the volume taken, ${options.taken.trim()}, and the nominal molarity of the reagent: a result, with the figures of the volumes` });
+  }
   notes.unshift(...formulaNotes(reagent, true));
-  return { reagent, fraction, density, densitySource, grade, molarity, textbookSigFigs, massConcentration: massConc, target, volume, take, factor, acid, notes };
+  return { taken, made, reagent, fraction, density, densitySource, grade, molarity, textbookSigFigs, massConcentration: massConc, target, volume, take, factor, acid, notes };
 }
 
 /** Non-throwing {@link concentratedReagent}. */

@@ -13,8 +13,11 @@ import { displayMolarMass } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { conflict, given, roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
+import { prepSheetPresenter, readPrepSheet, type PrepSheetCliOptions } from './prep-sheet.js';
+import type { PrepRowResult } from '../../preparation/prep-sheet.js';
+import { runWithSheet } from './sheet-runner.js';
 
-interface PrepareCliOptions extends OutputOptions, RoundingOptions {
+interface PrepareCliOptions extends OutputOptions, RoundingOptions, PrepSheetCliOptions {
   concentration?: string;
   volume?: string;
   purity?: string;
@@ -112,8 +115,17 @@ function concentratedJson(r: ConcentratedResult, o: PrepareCliOptions, rounding:
   };
 }
 
-/** The presenter for `pondus prepare`. */
-export function preparePresenter(o: PrepareCliOptions): Presenter<Prepared> {
+/** The presenter for `pondus prepare` (a prep sheet with --sheet). */
+export function preparePresenter(o: PrepareCliOptions): Presenter<Prepared> | Presenter<PrepRowResult> {
+  if (o.sheet !== undefined) {
+    const clash = given(o, { concentration: '--concentration', volume: '--volume', purity: '--purity', purityBasis: '--purity-basis', as: '--as', replace: '--replace', weighed: '--weighed', fraction: '--fraction', density: '--density' });
+    if (clash.length) throw conflict('--sheet', clash, 'each row of the sheet gives its own reagent, purity, target and volume');
+    return prepSheetPresenter(o);
+  }
+  return oneSolutionPresenter(o);
+}
+
+function oneSolutionPresenter(o: PrepareCliOptions): Presenter<Prepared> {
   checkPrepareOptions(o);
   const rounding = roundingOf(o);
   const options = { abbreviations: !!o.abbreviations };
@@ -194,7 +206,7 @@ export function preparePresenter(o: PrepareCliOptions): Presenter<Prepared> {
 }
 
 /** Registers `pondus prepare`. */
-export function registerPrepare(program: Command, run: CommandRunner): void {
+export function registerPrepare(program: Command, run: CommandRunner, stdin?: () => AsyncIterable<string | Buffer>): void {
   const cmd = withRoundingOption(
     withOutputOptions(
       program
@@ -213,5 +225,6 @@ export function registerPrepare(program: Command, run: CommandRunner): void {
         .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)'),
     ),
   );
-  cmd.action((inputs: string[], o: PrepareCliOptions) => run('prepare', inputs, o));
+  cmd.option('--sheet <file>', 'a prep sheet: CSV with columns reagent, form, purity, density, target, volume (and id, as, weighed, taken): one instruction per row; - reads it from standard input');
+  cmd.action((inputs: string[], o: PrepareCliOptions) => (o.sheet !== undefined && stdin ? runWithSheet(run, 'prepare', inputs, o, stdin, readPrepSheet) : run('prepare', inputs, o)));
 }
