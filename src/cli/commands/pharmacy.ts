@@ -14,7 +14,7 @@ import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
 import { withFormulaOptions, withOutputOptions, withRoundingOption, type FormulaOptions, type OutputOptions } from './common.js';
 import { notesJson, numbered, qtext, quantityJson, type RowPresenter } from './qc-rows.js';
-import { notesCell } from '../output/format.js';
+import { ANIONS, CATIONS } from '../../pharmacy/ions.js';
 import { potency, type PotencyOptions, type PotencyResult } from '../../pharmacy/potency.js';
 import { strengthForms, type StrengthForms } from '../../pharmacy/ratio-strength.js';
 import { readBasis } from '../../assay/sample-basis.js';
@@ -66,11 +66,11 @@ export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
       notes: notesJson(r.notes),
       caution: PHARMACY_CAUTION,
     }),
-    columns: strength ? ['input', 'line', 'salt', 'mmol_per_mL', 'mEq_per_mL', 'mEq_per_L', 'mOsm_per_L', 'notes'] : ['input', 'line', 'salt', 'mass_g', 'mmol', 'mEq', 'mOsm', 'notes'],
+    columns: strength ? ['input', 'line', 'salt', 'mmol_per_mL', 'mEq_per_mL', 'mEq_per_L', 'mOsm_per_L'] : ['input', 'line', 'salt', 'mass_g', 'mmol', 'mEq', 'mOsm'],
     cells: ({ input, line, r }) =>
       strength
-        ? [input, line, r.salt.formula, quantityJson(r.moles, 'M', rounding).reported, quantityJson(r.equivalents, 'M', rounding).reported, quantityJson(r.equivalents, 'mM', rounding).reported, quantityJson(r.osmoles, 'mM', rounding).reported, notesCell(r.notes)]
-        : [input, line, r.salt.formula, quantityJson(r.mass!, 'g', rounding).reported, quantityJson(r.moles, 'mmol', rounding).reported, quantityJson(r.equivalents, 'mmol', rounding).reported, quantityJson(r.osmoles, 'mmol', rounding).reported, notesCell(r.notes)],
+        ? [input, line, r.salt.formula, quantityJson(r.moles, 'M', rounding).reported, quantityJson(r.equivalents, 'M', rounding).reported, quantityJson(r.equivalents, 'mM', rounding).reported, quantityJson(r.osmoles, 'mM', rounding).reported]
+        : [input, line, r.salt.formula, quantityJson(r.mass!, 'g', rounding).reported, quantityJson(r.moles, 'mmol', rounding).reported, quantityJson(r.equivalents, 'mmol', rounding).reported, quantityJson(r.osmoles, 'mmol', rounding).reported],
     block: ({ input, r }) => {
       const head = `${input}  (${r.salt.formula}, M = ${displayMolarMass(r.salt)} g/mol): 1 mmol = ${r.ions.equivalentsPerMole} mEq = ${r.ions.particles} mOsm`;
       const ions = r.perIon.map((i) => `${i.ion} ${strength ? qtext(i.equivalents, 'mM', rounding, 'mEq/L') : qtext(i.equivalents, 'mmol', rounding, 'mEq')}`).join(', ');
@@ -83,11 +83,14 @@ export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
       return [head, `  ${qtext(r.mass!, 'g', rounding)}: ${qtext(r.moles, 'mmol', rounding)}, ${qtext(r.equivalents, 'mmol', rounding, 'mEq')}, ${qtext(r.osmoles, 'mmol', rounding, 'mOsm')}`, `  by ion: ${ions}`].join('\n');
     },
     notes: ({ r }) => r.notes.map((n) => n.message),
+    noteItems: ({ r }) => notesJson(r.notes),
     caution: PHARMACY_CAUTION,
   };
 }
 
 // --- osmolarity -------------------------------------------------------------------
+
+const TABLE_IONS = [...CATIONS, ...ANIONS].map((i) => i.formula);
 
 interface OsmolarityCli extends FormulaOptions {
   measured?: boolean;
@@ -110,8 +113,17 @@ export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityRe
       notes: notesJson(r.notes),
       caution: PHARMACY_CAUTION,
     }),
-    columns: ['input', 'line', 'mOsm_per_L', 'ions_mEq_per_L', 'notes'],
-    cells: ({ input, line, r }) => [input, line, quantityJson(r.osmolarity, 'mM', rounding).reported, r.ions.map((i) => `${i.ion}=${quantityJson(i.equivalents, 'mM', rounding).reported}`).join(' '), notesCell(r.notes)],
+    // one column per ion of the table (wide form): an ion a solution does not hold is left empty
+    columns: ['input', 'line', 'mOsm_per_L', ...TABLE_IONS.map((i) => `${i}_mEq_per_L`)],
+    cells: ({ input, line, r }) => [
+      input,
+      line,
+      quantityJson(r.osmolarity, 'mM', rounding).reported,
+      ...TABLE_IONS.map((f) => {
+        const ion = r.ions.find((i) => i.ion.replace(/\^.*$/, '') === f);
+        return ion ? quantityJson(ion.equivalents, 'mM', rounding).reported : '';
+      }),
+    ],
     block: ({ input, r }) => {
       const lines = [`${input}`];
       for (const c of r.components) lines.push(`  ${c.salt} ${c.strength}: ${qtext(c.result.moles, 'mM', rounding, 'mmol/L')} × ${c.result.ions.particles} = ${qtext(c.result.osmoles, 'mM', rounding, 'mOsm/L')}`);
@@ -120,6 +132,7 @@ export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityRe
       return lines.join('\n');
     },
     notes: ({ r }) => r.notes.map((n) => n.message),
+    noteItems: ({ r }) => notesJson(r.notes),
     caution: PHARMACY_CAUTION,
   };
 }
@@ -164,7 +177,7 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
       notes: notesJson(r.notes),
       caution: PHARMACY_CAUTION,
     }),
-    columns: ['input', 'line', 'by', 'higher_parts', 'lower_parts', 'higher_amount', 'lower_amount', 'unit', 'notes'],
+    columns: ['input', 'line', 'by', 'higher_parts', 'lower_parts', 'higher_amount', 'lower_amount', 'unit'],
     cells: ({ input, line, r }) => [
       input,
       line,
@@ -174,7 +187,6 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
       r.higherAmount ? quantityJson(r.higherAmount, amountUnit(r), rounding).reported : '',
       r.lowerAmount ? quantityJson(r.lowerAmount, amountUnit(r), rounding).reported : '',
       r.total ? amountUnit(r) : '',
-      notesCell(r.notes),
     ],
     block: ({ input, r }) => {
       const u = sUnit(r);
@@ -189,6 +201,7 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
       return lines.join('\n');
     },
     notes: ({ r }) => r.notes.map((n) => n.message),
+    noteItems: ({ r }) => notesJson(r.notes),
     caution: PHARMACY_CAUTION,
   };
 }
@@ -211,9 +224,8 @@ export function potencyPresenter(o: PotencyCli): RowPresenter<PotencyResult> {
   const alt = (r: PotencyResult) => (unitOfGiven(r) === '%' ? 'µg/mg' : '%');
   return {
     compute: numbered((input) => potency(input, { basis, water: o.water, loss: o.loss, solvent: o.solvent, need: o.need })),
-    json: ({ input, line, r }) => ({
+    json: ({ input, r }) => ({
       input,
-      line,
       basis: r.basis,
       asIs: quantityJson(r.asIs, unitOfGiven(r), rounding),
       asIsAlso: quantityJson(r.asIs, alt(r), rounding),
@@ -257,7 +269,7 @@ export function strengthPresenter(o: StrengthCli): RowPresenter<StrengthForms> {
   const cols = ['% w/v', 'mg/mL', 'mg/dL', '% w/w', 'mg/g', 'mg/kg', '% v/v'];
   return {
     compute: numbered((input) => strengthForms(input)),
-    json: ({ input, line, r }) => ({ input, line, kind: r.kind, ratio: ratioText(r), forms: shown(r), rounding, notes: notesJson(r.notes), caution: PHARMACY_CAUTION }),
+    json: ({ input, r }) => ({ input, kind: r.kind, ratio: ratioText(r), forms: shown(r), rounding, notes: notesJson(r.notes), caution: PHARMACY_CAUTION }),
     columns: ['input', 'line', 'kind', 'ratio', ...cols.map((c) => c.replace('% ', 'percent_').replace('/', '_per_'))],
     cells: ({ input, line, r }) => {
       const f = shown(r);
