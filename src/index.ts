@@ -81,8 +81,13 @@ export { substituteForm, safeSubstituteForm, type SubstituteResult } from './pre
 export { dilute, safeDilute, type DilutionResult } from './preparation/dilution.js';
 export { conversionFactor, type ConversionFactor } from './preparation/conversion-factor.js';
 export { gravimetric, safeGravimetric, type GravimetricResult, type GravimetricOptions } from './preparation/gravimetric.js';
-export { saltFactor, safeSaltFactor, type SaltFactorResult } from './preparation/salt-factor.js';
-export { BENCH_CAUTION, DOSE_CAUTION } from './preparation/caution.js';
+export { saltFactor, safeSaltFactor, type SaltFactorResult, type SaltForm, type MetalSaltReading } from './preparation/salt-factor.js';
+export { BENCH_CAUTION, DOSE_CAUTION, CONCENTRATED_CAUTION } from './preparation/caution.js';
+export { concentratedReagent, safeConcentratedReagent, type ConcentratedResult, type ConcentratedOptions } from './preparation/concentrated.js';
+export { CONCENTRATED_GRADES, type ConcentratedGrade } from './preparation/concentrated-grades.js';
+export { dilutionSeries, safeDilutionSeries, planSteps, MAX_SERIES_STEPS, type SeriesResult, type SeriesStep, type SeriesOptions } from './preparation/dilution-series.js';
+export { diluteByMass, safeDiluteByMass, type MassDilutionResult } from './preparation/mass-dilution.js';
+export { readPrepSheet, prepRow, safePrepRow, type PrepSheetRow, type PrepRowResult } from './preparation/prep-sheet.js';
 export { convertBasis, safeConvertBasis, type BasisResult, type BasisOptions } from './preparation/basis.js';
 export { displayInstruction, displayResult, instructionJson, resultJson, WORKING_FIGURES, type Instruction, type AmountJson } from './sigfig/instruction.js';
 export { MIN_WEIGHABLE_G, MIN_TRANSFER_L, MAX_ONE_STEP_FACTOR } from './preparation/warnings.js';
@@ -116,6 +121,8 @@ export { CATIONS, ANIONS, type IonEntry } from './pharmacy/ions.js';
 export { readStrength, type Strength, type PercentKind } from './pharmacy/strength.js';
 export { atWorkingPrecision, noteFewFigures } from './pharmacy/working-precision.js';
 export { PHARMACY_CAUTION } from './pharmacy/caution.js';
+export { potency, safePotency, type PotencyResult, type PotencyOptions } from './pharmacy/potency.js';
+export { strengthForms, safeStrengthForms, type StrengthForms } from './pharmacy/ratio-strength.js';
 // ions and isotope patterns
 export { readIonNotation, isIonNotation } from './ions/read-ion-notation.js';
 export type { IonNotation, IonTerm } from './ions/ion-notation.js';

@@ -11,7 +11,7 @@ import { MASS, PURE } from '../calc/measure.js';
 import { readPositive } from '../assay/read-quantity.js';
 import { convertSampleBasis, type SampleBasis, type SampleContent } from '../assay/sample-basis.js';
 import { divide, type Quantity } from '../sigfig/quantity.js';
-import { fewFiguresNote, inputFigures, instruction, massUnitFor, type Instruction } from '../sigfig/instruction.js';
+import { fewFiguresNote, inputFigures, instruction, type Instruction } from '../sigfig/instruction.js';
 import { smallMassWarning } from '../preparation/warnings.js';
 
 export interface PotencyOptions extends SampleContent {
@@ -72,9 +72,6 @@ export function potency(text: string, options: PotencyOptions = {}): PotencyResu
   }
   return { given, basis, asIs, need, weigh, notes };
 }
-
-/** The unit a mass of powder reads best in. */
-export const potencyMassUnit = (w: Instruction) => massUnitFor(w.quantity);
 
 /** Non-throwing {@link potency}. */
 export function safePotency(text: string, options: PotencyOptions = {}): SafeResult<PotencyResult> {
