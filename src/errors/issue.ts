@@ -51,6 +51,7 @@ export type IssueCode =
   | 'BAD_AMOUNT'
   | 'BAD_OPTION'
   | 'AMBIGUOUS_PURITY'
+  | 'CONCENTRATED_REAGENT'
   | 'BAD_RECORD'
   | 'USAGE'
   | 'INTERNAL_ERROR';

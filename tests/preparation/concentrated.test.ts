@@ -59,3 +59,18 @@ describe('concentrated reagents by mass fraction and density', () => {
     expect(() => concentratedReagent('HCl', { fraction: '137 %', density: '1.19 g/mL' })).toThrow(/at most 100/);
   });
 });
+
+describe('a concentrated reagent is never weighed', () => {
+  it('prepare refuses to weigh HCl, H2SO4 or NH3 and points to the volume of the concentrated reagent', async () => {
+    const { prepareSolution } = await import('../../src/preparation/solution.js');
+    for (const f of ['HCl', 'H2SO4', 'NH3', 'HNO3', 'HBr']) {
+      try {
+        prepareSolution(f, { concentration: '1.00 M', volume: '500.0 mL' });
+        expect.unreachable();
+      } catch (e) {
+        expect((e as { first: { code: string; hint?: string } }).first.code).toBe('CONCENTRATED_REAGENT');
+        expect((e as { first: { hint?: string } }).first.hint).toContain('--fraction');
+      }
+    }
+  });
+});
