@@ -120,7 +120,7 @@ export { saltIons, type SaltIons, type SaltIon } from './pharmacy/salt-ions.js';
 export { CATIONS, ANIONS, type IonEntry } from './pharmacy/ions.js';
 export { readStrength, type Strength, type PercentKind } from './pharmacy/strength.js';
 export { atWorkingPrecision, noteFewFigures } from './pharmacy/working-precision.js';
-export { PHARMACY_CAUTION } from './pharmacy/caution.js';
+export { PHARMACY_CAUTION, POTENCY_CAUTION } from './pharmacy/caution.js';
 export { potency, safePotency, type PotencyResult, type PotencyOptions } from './pharmacy/potency.js';
 export { strengthForms, safeStrengthForms, type StrengthForms } from './pharmacy/ratio-strength.js';
 // ions and isotope patterns

@@ -6,7 +6,7 @@
 import type { Command } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
 import { alligation, type AlligationResult } from '../../pharmacy/alligation.js';
-import { PHARMACY_CAUTION } from '../../pharmacy/caution.js';
+import { PHARMACY_CAUTION, POTENCY_CAUTION } from '../../pharmacy/caution.js';
 import { atWorkingPrecision } from '../../pharmacy/working-precision.js';
 import { milliequivalents, type MilliequivalentOptions, type MilliequivalentResult } from '../../pharmacy/milliequivalents.js';
 import { osmolarity, type OsmolarityResult } from '../../pharmacy/osmolarity.js';
@@ -233,7 +233,7 @@ export function potencyPresenter(o: PotencyCli): RowPresenter<PotencyResult> {
       weigh: r.weigh ? instructionJson(r.weigh, massUnitFor(r.weigh.quantity), rounding) : null,
       rounding,
       notes: notesJson(r.notes),
-      caution: PHARMACY_CAUTION,
+      caution: POTENCY_CAUTION,
     }),
     columns: ['input', 'line', 'basis', 'as_is', 'as_is_also', 'weigh_g', 'weigh'],
     cells: ({ input, line, r }) => [input, line, r.basis, qtext(r.asIs, unitOfGiven(r), rounding), qtext(r.asIs, alt(r), rounding), r.weigh ? r.weigh.quantity.value.toFixed() : '', r.weigh ? displayInstruction(r.weigh, massUnitFor(r.weigh.quantity), rounding).text : ''],
@@ -244,7 +244,7 @@ export function potencyPresenter(o: PotencyCli): RowPresenter<PotencyResult> {
     },
     notes: ({ r }) => r.notes.map((n) => n.message),
     noteItems: ({ r }) => notesJson(r.notes),
-    caution: PHARMACY_CAUTION,
+    caution: POTENCY_CAUTION,
   };
 }
 
