@@ -251,8 +251,8 @@ export function registerConversions(program: Command, run: CommandRunner): void 
     withOutputOptions(
       program
         .command('salt')
-        .description('salt/parent factor of a salt form, and masses either way')
-        .argument('[salts...]', 'the salt, written parent·acid: C17H19NO3·HCl·3H2O')
+        .description('salt/parent factor of a salt form (parent·acid, or a sodium, potassium, calcium … salt with any hydrate), and masses either way')
+        .argument('[salts...]', 'the salt: parent·acid for a basic drug (C17H19NO3·HCl·3H2O), or a metal salt of an acidic drug (C14H13NaO3, (C33H34FN2O5)2Ca·3H2O)')
         .option('--parent <formula>', 'the parent compound (free base or acid)')
         .option('--dose <m>', "a mass of parent: the salt mass that carries it, e.g. '10.0 mg' (an instruction, at working precision)")
         .option('--salt-mass <m>', 'a mass of salt: the parent mass it carries (a result)'),
