@@ -240,6 +240,27 @@ export const displayInstruction = /* @__PURE__ */ guarded('displayInstruction', 
 export const displayResult = /* @__PURE__ */ guarded('displayResult', displayResult_, ['object', 'any', 'rounding?']);
 export const instructionJson = /* @__PURE__ */ guarded('instructionJson', instructionJson_, ['object', 'any', 'rounding?']);
 export const resultJson = /* @__PURE__ */ guarded('resultJson', resultJson_, ['object', 'any', 'rounding?']);
+export { type SaltForm, type MetalSaltReading } from './preparation/salt-factor.js';
+export { CONCENTRATED_CAUTION } from './preparation/caution.js';
+export { type ConcentratedResult, type ConcentratedOptions } from './preparation/concentrated.js';
+import { concentratedReagent as concentratedReagent_ } from './preparation/concentrated.js';
+export const concentratedReagent = /* @__PURE__ */ guarded('concentratedReagent', concentratedReagent_, ['text', 'options']);
+export const safeConcentratedReagent = /* @__PURE__ */ safely(concentratedReagent);
+export { CONCENTRATED_GRADES, type ConcentratedGrade } from './preparation/concentrated-grades.js';
+export { MAX_SERIES_STEPS, type SeriesResult, type SeriesStep, type SeriesOptions } from './preparation/dilution-series.js';
+import { dilutionSeries as dilutionSeries_, planSteps as planSteps_ } from './preparation/dilution-series.js';
+export const dilutionSeries = /* @__PURE__ */ guarded('dilutionSeries', dilutionSeries_, ['options']);
+export const planSteps = /* @__PURE__ */ guarded('planSteps', planSteps_, ['decimal', 'decimal']);
+export const safeDilutionSeries = /* @__PURE__ */ safely(dilutionSeries);
+export { type MassDilutionResult } from './preparation/mass-dilution.js';
+import { diluteByMass as diluteByMass_ } from './preparation/mass-dilution.js';
+export const diluteByMass = /* @__PURE__ */ guarded('diluteByMass', diluteByMass_, ['text', 'text', 'text']);
+export const safeDiluteByMass = /* @__PURE__ */ safely(diluteByMass);
+export { type PrepSheetRow, type PrepRowResult } from './preparation/prep-sheet.js';
+import { readPrepSheet as readPrepSheet_, prepRow as prepRow_ } from './preparation/prep-sheet.js';
+export const readPrepSheet = /* @__PURE__ */ guarded('readPrepSheet', readPrepSheet_, ['text']);
+export const prepRow = /* @__PURE__ */ guarded('prepRow', prepRow_, ['object', 'options?']);
+export const safePrepRow = /* @__PURE__ */ safely(prepRow);
 export { MIN_WEIGHABLE_G, MIN_TRANSFER_L, MAX_ONE_STEP_FACTOR } from './preparation/warnings.js';
 
 // formulas from measurements
@@ -333,6 +354,15 @@ import { atWorkingPrecision as atWorkingPrecision_, noteFewFigures as noteFewFig
 export const atWorkingPrecision = /* @__PURE__ */ guarded('atWorkingPrecision', atWorkingPrecision_, ['object']);
 export const noteFewFigures = /* @__PURE__ */ guarded('noteFewFigures', noteFewFigures_, ['object', 'text', 'text', 'array']);
 export { PHARMACY_CAUTION } from './pharmacy/caution.js';
+export { POTENCY_CAUTION } from './pharmacy/caution.js';
+export { type PotencyResult, type PotencyOptions } from './pharmacy/potency.js';
+import { potency as potency_ } from './pharmacy/potency.js';
+export const potency = /* @__PURE__ */ guarded('potency', potency_, ['text', 'options?']);
+export const safePotency = /* @__PURE__ */ safely(potency);
+export { type StrengthForms } from './pharmacy/ratio-strength.js';
+import { strengthForms as strengthForms_ } from './pharmacy/ratio-strength.js';
+export const strengthForms = /* @__PURE__ */ guarded('strengthForms', strengthForms_, ['text']);
+export const safeStrengthForms = /* @__PURE__ */ safely(strengthForms);
 // ions and isotope patterns
 import { readIonNotation as readIonNotation_, isIonNotation as isIonNotation_ } from './ions/read-ion-notation.js';
 export const readIonNotation = /* @__PURE__ */ guarded('readIonNotation', readIonNotation_, ['text']);

@@ -16,6 +16,8 @@ export const HELP_EXAMPLES: Readonly<Record<string, readonly string[]>> = {
   balance: ["pondus balance 'C3H8 + O2 -> CO2 + H2O'", "pondus balance 'Fe^2+ + MnO4^- + H^+ -> Fe^3+ + Mn^2+ + H2O'"],
   react: ["pondus react 'H2 + O2 -> H2O' --amount 'H2=4.00 g' --amount 'O2=16.0 g'", "pondus react 'Si + N2 -> Si3N4' --amount 'Si=2.00 g' --amount 'N2=1.50 g'"],
   reagents: ["pondus reagents --reference 'C7H6O3=2.00 g' --reagent 'C4H6O3=3.0 equiv, density=1.08 g/mL' --catalyst 'H2SO4=5 mol %' --product 'C9H8O4' --actual '2.10 g'", "pondus reagents --procedure examples/organolithium-coupling.csv --markdown"],
+  potency: ["pondus potency '950. µg/mg' --need '500. mg'", "pondus potency '101.2 %' --basis anhydrous --water '4.8 %' --need '250.0 mg'"],
+  strength: ["pondus strength 1:1000 1:750", "pondus strength '0.02 % w/v' '12 mg/dL'"],
   prepare: ["pondus prepare NaCl --concentration '0.100 M' --volume '250.0 mL'", "pondus prepare 'CuSO4·5H2O' --concentration '0.100 M' --volume '250.0 mL' --purity '98.5 %'"],
   dilute: ["pondus dilute '1.00 M' --to '0.100 M' --volume '250.0 mL'", "pondus dilute '1.00 M' --taken '25.00 mL' --volume '250.0 mL'"],
   gravimetric: ['pondus gravimetric Fe --weighed Fe2O3', "pondus gravimetric Cl --weighed AgCl --mass '0.2866 g' --sample '0.5000 g'"],

@@ -98,7 +98,7 @@ export async function main(args: string[], io: CliIo): Promise<number> {
   registerBalance(program, run);
   registerReact(program, run);
   registerReagents(program, run, io.stdin);
-  registerPrepare(program, run);
+  registerPrepare(program, run, io.stdin);
   registerConversions(program, run);
   registerQc(program, run);
   registerPharmacy(program, run);

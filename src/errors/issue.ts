@@ -51,6 +51,7 @@ export type IssueCode =
   | 'BAD_AMOUNT'
   | 'BAD_OPTION'
   | 'AMBIGUOUS_PURITY'
+  | 'CONCENTRATED_REAGENT'
   | 'BAD_RECORD'
   | 'USAGE'
   // a public function called with an argument of the wrong kind (a number for a formula, null options)

@@ -17,9 +17,31 @@ import { reportedMolarMass } from '../mass/reported-mass.js';
 import { dividedBy, exact, times, type Measured } from '../sigfig/measured.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
 
+/** How the salt is made from the parent. */
+export type SaltForm =
+  /** parent·acid (a basic drug's hydrochloride), written so: C17H19NO3·HCl·3H2O */
+  | 'addition'
+  /** a metal salt of an acidic drug: the parent less its acidic H plus the metal (C14H13NaO3), with any water */
+  | 'metal';
+
+export interface MetalSaltReading {
+  metal: string;
+  /** Metal atoms per salt formula unit. */
+  metalCount: number;
+  /** Charge of the metal ion. */
+  charge: number;
+  /** Acidic hydrogens each parent gives up. */
+  hydrogensReplaced: number;
+  /** Water per salt formula unit (0 for the anhydrous salt). */
+  water: string;
+}
+
 export interface SaltFactorResult {
   salt: MassResult;
   parent: MassResult;
+  form: SaltForm;
+  /** For a metal salt: how it was read. */
+  metalSalt: MetalSaltReading | null;
   /** Parent units per salt formula unit. */
   perSalt: Decimal;
   /** M(salt) / (n · M(parent)): grams of salt per gram of parent. */
@@ -50,14 +72,34 @@ export interface SaltOptions extends MassOptions {
  *
  * @example
  * saltFactor('C17H19NO3·HCl·3H2O', 'C17H19NO3').factor.toFixed(4) // '1.3172'
+ * saltFactor('C14H13NaO3', 'C14H14O3').form // 'metal' (naproxen sodium)
  */
 export function saltFactor(saltText: string, parentText: string, options: SaltOptions = {}): SaltFactorResult {
   const notes: Note[] = [];
   const salt = formulaMass(saltText, options);
   const parent = formulaMass(parentText, options);
-  const share = partShare(salt, parentText, options);
-  const perSalt = toDecimal(share.count);
-  if (share.countedFrom !== 'written') throw fail({ code: 'BAD_OPTION', message: `${parent.formula} is not written as a part of ${saltText}; write the salt as parent·acid (e.g. C17H19NO3·HCl)` });
+  let perSalt: Decimal;
+  let form: SaltForm = 'addition';
+  let metalSalt: MetalSaltReading | null = null;
+  const share = writtenShare(salt, parentText, options);
+  if (share) perSalt = share;
+  else {
+    const readings = metalSaltReadings(salt, parent);
+    if (readings.length === 0) {
+      throw fail({
+        code: 'BAD_OPTION',
+        message: `${saltText.trim()} is neither written as ${parentText.trim()}·acid nor a metal salt of it (${parent.formula} less its acidic H, plus Na, K, Li, Ca or Mg, with any water): check the two formulas`,
+        hint: 'write a basic drug\'s salt as parent·acid (C17H19NO3·HCl·3H2O), an acidic drug\'s as one formula (C14H13NaO3, (C33H34FN2O5)2Ca·3H2O)',
+      });
+    }
+    if (readings.length > 1) {
+      throw fail({ code: 'AMBIGUOUS_READING', message: `${saltText.trim()} could be read as a salt of ${parent.formula} in more than one way: ${readings.map(describeReading).join('; or ')}` });
+    }
+    metalSalt = readings[0];
+    form = 'metal';
+    perSalt = new Decimal(metalSalt.metalCount * metalSalt.charge).div(metalSalt.hydrogensReplaced);
+    notes.push({ code: 'METAL_SALT', message: `${saltText.trim()} is read as the ${describeReading(metalSalt)} of ${parent.formula}: ${perSalt.toFixed()} × (${parent.formula} − ${metalSalt.hydrogensReplaced === 1 ? '' : metalSalt.hydrogensReplaced}H) + ${metalSalt.metalCount === 1 ? '' : metalSalt.metalCount}${metalSalt.metal}${metalSalt.water !== '0' ? ` + ${metalSalt.water} H2O` : ''} per formula unit of salt` });
+  }
   const factor = salt.molarMass.div(parent.molarMass.times(perSalt));
   const reported = dividedBy(reportedMolarMass(salt), times(reportedMolarMass(parent), exact(perSalt)));
   let dose: Quantity | null = null;
@@ -82,7 +124,72 @@ export function saltFactor(saltText: string, parentText: string, options: SaltOp
     parentMass.unit = saltGiven.unit;
   }
   notes.unshift(...formulaNotes(salt, true), ...formulaNotes(parent, true));
-  return { salt, parent, perSalt, factor, reported, dose, saltMass, saltGiven, parentMass, notes };
+  return { salt, parent, form, metalSalt, perSalt, factor, reported, dose, saltMass, saltGiven, parentMass, notes };
+}
+
+/** Metals of the common salts of acidic drugs, with the charge of their ion. */
+const SALT_METALS: readonly [string, number][] = [
+  ['Na', 1],
+  ['K', 1],
+  ['Li', 1],
+  ['Ca', 2],
+  ['Mg', 2],
+];
+
+const METAL_NAMES: Record<string, string> = { Na: 'sodium', K: 'potassium', Li: 'lithium', Ca: 'calcium', Mg: 'magnesium' };
+
+function describeReading(r: MetalSaltReading): string {
+  const count = r.metalCount > 1 && r.charge === 1 ? (r.metalCount === 2 ? 'di' : r.metalCount === 3 ? 'tri' : `${r.metalCount}-`) : '';
+  const water = r.water === '0' ? '' : ` ${r.water === '1' ? 'mono' : ''}hydrate (${r.water} H2O)`;
+  return `${count}${METAL_NAMES[r.metal]} salt${water}`;
+}
+
+/** The parent count when the parent is written as a part of the salt (parent·acid), else null. */
+function writtenShare(salt: MassResult, parentText: string, options: MassOptions): Decimal | null {
+  try {
+    const share = partShare(salt, parentText, options);
+    return share.countedFrom === 'written' ? toDecimal(share.count) : null;
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * The readings of `salt` as a metal salt of `parent`: k parents each less h
+ * acidic hydrogens, plus m metal ions of charge z (k·h = m·z), plus water.
+ */
+function metalSaltReadings(salt: MassResult, parent: MassResult): MetalSaltReading[] {
+  const out: MetalSaltReading[] = [];
+  const count = (m: MassResult, el: string) => (m.atoms.has(el) ? toDecimal(m.atoms.get(el)!) : new Decimal(0));
+  for (const [metal, z] of SALT_METALS) {
+    const m = count(salt, metal);
+    if (m.isZero() || !m.isInteger() || !count(parent, metal).isZero()) continue;
+    const others = SALT_METALS.filter(([x]) => x !== metal && !count(salt, x).isZero() && count(parent, x).isZero());
+    if (others.length) continue;
+    for (let h = 1; h <= 3; h++) {
+      const kDec = m.times(z).div(h);
+      if (!kDec.isInteger() || count(parent, 'H').lt(h)) continue;
+      // what is left after k·(parent − hH) and m metal atoms must be water alone
+      const left = new Map<string, Decimal>();
+      for (const [el, n] of salt.atoms) left.set(el, toDecimal(n));
+      left.set(metal, left.get(metal)!.minus(m));
+      let fits = true;
+      for (const [el, n] of parent.atoms) {
+        const need = toDecimal(n).minus(el === 'H' ? h : 0).times(kDec);
+        const have = left.get(el) ?? new Decimal(0);
+        if (have.lt(need)) fits = false;
+        left.set(el, have.minus(need));
+      }
+      if (!fits) continue;
+      const rest = [...left].filter(([, n]) => !n.isZero());
+      const o = left.get('O') ?? new Decimal(0);
+      const hLeft = left.get('H') ?? new Decimal(0);
+      const onlyWater = rest.every(([el]) => el === 'H' || el === 'O') && hLeft.eq(o.times(2));
+      if (!onlyWater) continue;
+      out.push({ metal, metalCount: m.toNumber(), charge: z, hydrogensReplaced: h, water: o.toFixed() });
+    }
+  }
+  return out;
 }
 
 /** Non-throwing {@link saltFactor}. */

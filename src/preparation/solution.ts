@@ -11,6 +11,7 @@ import { MASS, MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../
 import { Decimal } from '../exact/decimal.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type InputFigures, type Instruction } from '../sigfig/instruction.js';
 import { readPurity } from './purity.js';
+import { CONCENTRATED_GRADES } from './concentrated-grades.js';
 import { smallMassWarning } from './warnings.js';
 import { partShare } from '../composition/part-share.js';
 import { toDecimal } from '../formula/amount.js';
@@ -79,7 +80,14 @@ function readConcentration(text: string, notes: Note[]): { conc: Quantity; unit:
   let unit = conc.unit?.symbol ?? (sameDims(conc.dims, MOLARITY) ? 'M' : 'g/L');
   if (sameDims(conc.dims, PURE)) {
     const t = text.trim();
-    if (/ppm$/.test(t)) {
+    const ratio = /^[0-9]+(?:\.[0-9]*)?\s*:\s*[0-9]+(?:\.[0-9]*)?$/.test(t);
+    if (ratio) {
+      conc = multiply(conc, quantity(exact(1000), unitOf('g/L')));
+      notes.push({ code: 'RATIO_AS_W_V', message: `the ratio strength ${t} is read as w/v: 1 g of solute in ${t.split(':')[1].trim()} mL of solution (the pharmacopoeial reading for a solid in a liquid)` });
+      unit = 'mg/mL';
+    } else if (/%\s*(w\/w|v\/v)$/i.test(t) || /(mg\/kg|mg\/g|µg\/g|µg\/mg|ug\/g)$/.test(t)) {
+      throw fail({ code: 'INCOMPATIBLE_UNITS', message: `'${t}' is a fraction by ${/v\/v$/i.test(t) ? 'volume' : 'mass'}: a solution made up to a volume needs a concentration per volume (% w/v, g/L, mg/mL, mg/dL, M), or the density of the solution; for a solid or semisolid let down by mass, use dilute --mass` }, text);
+    } else if (/ppm$/.test(t)) {
       conc = multiply(conc, quantity(exact(1000), unitOf('g/L'))); // 1 ppm ≈ 1 mg/L for dilute aqueous solutions
       notes.push({ code: 'PPM_AS_MG_PER_L', message: 'ppm is read as mg/L, which holds for dilute aqueous solutions (density 1.00 g/mL)' });
       unit = 'mg/L';
@@ -95,6 +103,26 @@ function readConcentration(text: string, notes: Note[]): { conc: Quantity; unit:
   return { conc, unit };
 }
 
+/**
+ * Reagents that come as a concentrated solution (or a gas): a mass of the solute is not
+ * something anyone can weigh out, so the instruction must be a volume of the concentrated reagent.
+ */
+function refuseConcentrated(reagent: MassResult): void {
+  // glacial acetic acid (99.7 %) is a liquid that can be weighed or measured: not refused
+  if (reagent.formula === 'C2H4O2') return;
+  const grades = CONCENTRATED_GRADES.filter((g) => g.formula === reagent.formula);
+  if (grades.length === 0 && !GAS_SOLUTIONS.has(reagent.formula)) return;
+  const g = grades[0];
+  throw fail({
+    code: 'CONCENTRATED_REAGENT',
+    message: `${reagent.input} comes as a concentrated solution${g ? ` (${g.percent} %, d ${g.density} g/mL)` : ''}: it is measured by volume, not weighed; give its mass fraction and density for the volume to take`,
+    hint: `pondus prepare ${reagent.input} --fraction '${g ? g.percent : '…'} %' --density '${g ? g.density : '…'} g/mL' --concentration … --volume … (from the label of the bottle)`,
+  });
+}
+
+/** Gases sold only as aqueous solutions, besides the grades in the table. */
+const GAS_SOLUTIONS = new Set(['BrH', 'HI', 'FH', 'H5NO']);
+
 const pct = (d: Decimal) => `${d.times(100).toSignificantDigits(4).toFixed()} %`;
 
 /**
@@ -108,6 +136,7 @@ const pct = (d: Decimal) => `${d.times(100).toSignificantDigits(4).toFixed()} %`
 export function prepareSolution(reagentText: string, options: SolutionOptions): SolutionResult {
   const notes: Note[] = [];
   const reagent = formulaMass(reagentText, options);
+  refuseConcentrated(reagent);
   if (options.concentration === undefined && options.weighed === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the target concentration, or the mass weighed (or both)' });
   const target = options.concentration !== undefined ? readConcentration(options.concentration, notes) : null;
   const conc = target?.conc ?? null;

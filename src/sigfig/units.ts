@@ -58,6 +58,11 @@ const TABLE: Unit[] = [
   { symbol: '% w/w', exp10: -2, dims: NONE, name: 'percent by mass' },
   { symbol: '% v/v', exp10: -2, dims: NONE, name: 'percent by volume' },
   { symbol: 'ppm', exp10: -6, dims: NONE, name: 'part per million' },
+  // mass per mass: potencies (µg per mg of powder) and contents of solids and semisolids
+  { symbol: 'mg/g', exp10: -3, dims: NONE, name: 'milligram per gram' },
+  { symbol: 'µg/mg', exp10: -3, dims: NONE, name: 'microgram per milligram' },
+  { symbol: 'mg/kg', exp10: -6, dims: NONE, name: 'milligram per kilogram' },
+  { symbol: 'µg/g', exp10: -6, dims: NONE, name: 'microgram per gram' },
   { symbol: 'ppb', exp10: -9, dims: NONE, name: 'part per billion' },
 ];
 
@@ -92,6 +97,11 @@ const ALIASES: Record<string, string> = {
   '%w/v': '% w/v',
   '%w/w': '% w/w',
   '%v/v': '% v/v',
+  'ug/mg': 'µg/mg',
+  'μg/mg': 'µg/mg',
+  'mcg/mg': 'µg/mg',
+  'ug/g': 'µg/g',
+  'μg/g': 'µg/g',
 };
 
 /** Every spelling {@link unitOf} accepts: the symbols and their aliases. */

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { jsonLines, pondus } from './run-cli.js';
+import { noteMessages } from '../support/notes.js';
 
 describe('KEY=VALUE sets typed without quotes', () => {
   it('empirical C=40.00 H=6.71 O=53.29 is one measurement set, and says so', () => {
@@ -32,7 +33,7 @@ describe('KEY=VALUE sets typed without quotes', () => {
     const mix = jsonLines(pondus(['composition', '--mixture', '--json', 'NaCl=5.00', 'g', 'KCl=3.00', 'g']).stdout);
     expect(mix).toHaveLength(1);
     expect(mix[0].components.map((c: { massPercentDisplay: string }) => c.massPercentDisplay)).toEqual(['62.5', '37.5']);
-    expect(mix[0].notes[0]).toContain('one mixture');
+    expect(noteMessages(mix[0])[0]).toContain('one mixture');
     // single pairs quoted with their unit join too: a one-component 'mixture' is never meant
     const quoted = jsonLines(pondus(['composition', '--mixture', '--json', 'NaCl=5.00 g', 'KCl=3.00 g']).stdout);
     expect(quoted).toHaveLength(1);

@@ -66,7 +66,9 @@ describe('pondus sample-basis', () => {
   it('CSV has flat columns and a notes column', () => {
     const lines = pondus(['sample-basis', '--csv', '99.1 %', '--to', 'dried', '--loss', '0.50 %']).stdout.trim().split('\n');
     expect(lines[0]).toBe('input,line,from,to,converted_percent,converted,limits,complies,notes,error,message');
-    expect(lines[1]).toMatch(/^99\.1 %,1,as-is,dried,99\.59798994974874\d*,99\.6,,,FROM_AS_IS: /);
+    expect(lines[1]).toMatch(/^99\.1 %,1,as-is,dried,99\.59798994974874\d*,99\.6,,,"FROM_AS_IS: /);
+    // the shared writer's notes column, with the caution on every row
+    expect(lines[1]).toContain('| CAUTION: a computed result and verdict do not release or reject a batch');
   });
 });
 

@@ -144,6 +144,12 @@ const SAFE_CASES: Record<string, { good: unknown[]; bad: unknown[] }> = {
   safeOsmolarity: { good: ['NaCl=0.9 %'], bad: ['NaCl'] },
   safeAlligation: { good: ['10 %', { higher: '20 %', lower: '5 %', total: '300 g' }], bad: ['30 %', { higher: '20 %', lower: '5 %', by: 'mass' }] },
   safeReagentTable: { good: [[{ role: 'reference', reagent: 'NaCl', amount: '1.00 g' }]], bad: [[{ role: 'reagent', reagent: 'NaCl', amount: '1.0 equiv' }]] },
+  safeConcentratedReagent: { good: ['HCl', { fraction: '37 %', density: '1.19 g/mL', concentration: '0.100 M', volume: '1.000 L' }], bad: ['HCl', { fraction: '137 %', density: '1.19 g/mL' }] },
+  safeDilutionSeries: { good: [{ factor: '1:1000', volume: '10.00 mL' }], bad: [{ factor: '1:0', volume: '10.00 mL' }] },
+  safeDiluteByMass: { good: ['10. % w/w', '2.5 % w/w', '60.0 g'], bad: ['2.5 % w/w', '10. % w/w', '60.0 g'] },
+  safePrepRow: { good: [{ line: 2, raw: 'P-1,NaCl', id: 'P-1', reagent: 'sodium chloride', formula: 'NaCl', purity: '', density: '', as: '', target: '0.100 M', volume: '250.0 mL', weighed: '', taken: '' }], bad: [{ line: 2, raw: 'P-1,NaCl', id: 'P-1', reagent: 'sodium chloride', formula: 'NaCl', purity: '', density: '', as: '', target: '0.100 q', volume: '250.0 mL', weighed: '', taken: '' }] },
+  safePotency: { good: ['950. µg/mg', { need: '500. mg' }], bad: ['heavy'] },
+  safeStrengthForms: { good: ['1:1000'], bad: ['1:'] },
   safeIonMass: { good: ['C15H15NO2', '[M+H]+'], bad: ['C6H6', '[M+Q]+'] },
   safeIsotopePattern: { good: ['Cl2'], bad: ['C6H6', { ion: '[M+Q]+' }] },
 };

@@ -39,7 +39,7 @@ export function mixturePresenter(o: CompositionCliOptions): Presenter<MixtureRes
       const rows = (shares: MixtureResult['components']) => shares.map((s) => [s.name, displayMeasured(s.mass, rounding).text, displayMeasured(s.massPercent, rounding).text]);
       return [
         `${r.input}   total ${displayMeasured(r.total, rounding).text} g`,
-        fixedTable(['component', 'mass g', 'mass %'], rows(r.components), ['left', 'right', 'right']),
+        fixedTable(['component', 'mass g', 'mass %'], rows(r.unaccounted ? [...r.components, r.unaccounted] : r.components), ['left', 'right', 'right']),
         fixedTable(['element', 'mass g', 'mass %'], rows(r.elements), ['left', 'right', 'right']),
       ].join('\n');
     },

@@ -13,6 +13,9 @@ import { displayMeasured, type RoundingMode } from '../../sigfig/round.js';
 import type { Presenter } from '../output/presenter.js';
 import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
+import { checkDilutePlanOptions, massDilutionPresenter, seriesPresenter, type DilutePlanCliOptions } from './dilute-plans.js';
+import type { SeriesResult } from '../../preparation/dilution-series.js';
+import type { MassDilutionResult } from '../../preparation/mass-dilution.js';
 
 const factorText = (f: ConversionFactor) => `${f.a === 1n ? '' : `${f.a} × `}M(${f.sought.input}) / ${f.b === 1n ? `M(${f.given.input})` : `(${f.b} × M(${f.given.input}))`}`;
 const notesJson = (notes: Note[]) => notes.map((n) => ({ code: n.code, message: n.message }));
@@ -28,14 +31,17 @@ function shows(rounding: RoundingMode) {
 
 // --- dilute -------------------------------------------------------------------
 
-interface DiluteCliOptions extends OutputOptions, RoundingOptions {
-  to?: string;
-  volume?: string;
-  taken?: string;
+type DiluteCliOptions = DilutePlanCliOptions;
+
+/** The presenter for `pondus dilute` (a serial plan with --series, by mass with --mass). */
+export function dilutePresenter(o: DiluteCliOptions): Presenter<DilutionResult> | Presenter<SeriesResult> | Presenter<MassDilutionResult> {
+  checkDilutePlanOptions(o);
+  if (o.mass !== undefined) return massDilutionPresenter(o);
+  if (o.series) return seriesPresenter(o);
+  return oneStepPresenter(o);
 }
 
-/** The presenter for `pondus dilute`. */
-export function dilutePresenter(o: DiluteCliOptions): Presenter<DilutionResult> {
+function oneStepPresenter(o: DiluteCliOptions): Presenter<DilutionResult> {
   if (o.volume === undefined || (o.to === undefined && o.taken === undefined)) {
     throw fail({ code: 'USAGE', message: "give --to (the target concentration) and --volume (the final volume): pondus dilute '1.00 M' --to '0.100 M' --volume '250.0 mL'; or --taken and --volume for the concentration made" });
   }
@@ -46,7 +52,6 @@ export function dilutePresenter(o: DiluteCliOptions): Presenter<DilutionResult> 
     compute: (stock) => dilute(stock, o.to, o.volume!, o.taken),
     json: (r) => ({
       input: r.written.stock,
-      stock: r.written.stock,
       target: r.written.target,
       finalVolume: r.written.volume,
       stockVolume: r.stockVolume ? instructionJson(r.stockVolume, vUnit(r), rounding) : null,
@@ -57,7 +62,7 @@ export function dilutePresenter(o: DiluteCliOptions): Presenter<DilutionResult> 
       notes: notesJson(r.notes),
       caution: BENCH_CAUTION,
     }),
-    columns: ['stock', 'target', 'finalVolume', 'stockVolume', 'display', 'made'],
+    columns: ['input', 'target', 'finalVolume', 'stockVolume', 'display', 'made'],
     cells: (r) => [r.written.stock, r.written.target, r.written.volume, r.stockVolume ? r.stockVolume.quantity.value.toFixed() : '', ins(r.stockVolume, vUnit(r)), text(r.made)],
     block: (r) => {
       const lines: string[] = [];
@@ -69,6 +74,7 @@ export function dilutePresenter(o: DiluteCliOptions): Presenter<DilutionResult> 
       return lines.join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
+    noteItems: (r) => notesJson(r.notes),
     caution: BENCH_CAUTION,
   };
 }
@@ -112,6 +118,7 @@ export function gravimetricPresenter(o: GravimetricCliOptions): Presenter<Gravim
       return lines.join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
+    noteItems: (r) => notesJson(r.notes),
   };
 }
 
@@ -149,6 +156,7 @@ export function basisPresenter(o: BasisCliOptions): Presenter<BasisResult> {
       return lines.join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
+    noteItems: (r) => notesJson(r.notes),
   };
 }
 
@@ -171,6 +179,8 @@ export function saltPresenter(o: SaltCliOptions): Presenter<SaltFactorResult> {
       input: r.salt.input,
       salt: r.salt.formula,
       parent: r.parent.formula,
+      form: r.form,
+      metalSalt: r.metalSalt,
       factor: r.factor.toNumber(),
       factorDisplay: displayMeasured(r.reported, rounding).text,
       dose: o.dose?.trim() ?? null,
@@ -189,6 +199,7 @@ export function saltPresenter(o: SaltCliOptions): Presenter<SaltFactorResult> {
       return lines.join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
+    noteItems: (r) => notesJson(r.notes),
     caution: DOSE_CAUTION,
   };
 }
@@ -200,10 +211,14 @@ export function registerConversions(program: Command, run: CommandRunner): void 
       program
         .command('dilute')
         .description('dilution, C1·V1 = C2·V2: how much stock to take, or the concentration made from the volume taken')
-        .argument('[stock...]', "stock concentration, e.g. '1.00 M'")
-        .option('--to <c>', "target concentration, e.g. '0.100 M'")
-        .option('--volume <v>', "final volume, e.g. '250.0 mL'")
-        .option('--taken <v>', "the volume of stock actually taken, e.g. '25.00 mL': gives the concentration made (a result)"),
+        .argument('[stock...]', "stock concentration, e.g. '1.00 M' (with --series and no --to: the dilution factor, '1:1000')")
+        .option('--to <c>', "target concentration, e.g. '0.100 M' (with --mass: the target content, '2.5 % w/w')")
+        .option('--volume <v>', "final volume, e.g. '250.0 mL' (with --series: of each step)")
+        .option('--taken <v>', "the volume of stock actually taken, e.g. '25.00 mL': gives the concentration made (a result)")
+        .option('--series', 'plan a serial dilution: steps of at most 1:100, each transfer at least --min-transfer')
+        .option('--min-transfer <v>', "smallest volume to pipette in a serial plan (default '100 µL')")
+        .option('--max-step <n>', 'largest dilution factor of one step in a serial plan (default 100)')
+        .option('--mass <m>', "dilute a solid or semisolid by mass to this total: --mass '60.0 g' (the input and --to in % w/w, mg/g, mg/kg)"),
     ),
   );
   dil.action((inputs: string[], o: DiluteCliOptions) => run('dilute', inputs, o));
@@ -236,8 +251,8 @@ export function registerConversions(program: Command, run: CommandRunner): void 
     withOutputOptions(
       program
         .command('salt')
-        .description('salt/parent factor of a salt form, and masses either way')
-        .argument('[salts...]', 'the salt, written parent·acid: C17H19NO3·HCl·3H2O')
+        .description('salt/parent factor of a salt form (parent·acid, or a sodium, potassium, calcium … salt with any hydrate), and masses either way')
+        .argument('[salts...]', 'the salt: parent·acid for a basic drug (C17H19NO3·HCl·3H2O), or a metal salt of an acidic drug (C14H13NaO3, (C33H34FN2O5)2Ca·3H2O)')
         .option('--parent <formula>', 'the parent compound (free base or acid)')
         .option('--dose <m>', "a mass of parent: the salt mass that carries it, e.g. '10.0 mg' (an instruction, at working precision)")
         .option('--salt-mass <m>', 'a mass of salt: the parent mass it carries (a result)'),

@@ -6,7 +6,7 @@
 import type { Command } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
 import { alligation, type AlligationResult } from '../../pharmacy/alligation.js';
-import { PHARMACY_CAUTION } from '../../pharmacy/caution.js';
+import { PHARMACY_CAUTION, POTENCY_CAUTION } from '../../pharmacy/caution.js';
 import { atWorkingPrecision } from '../../pharmacy/working-precision.js';
 import { milliequivalents, type MilliequivalentOptions, type MilliequivalentResult } from '../../pharmacy/milliequivalents.js';
 import { osmolarity, type OsmolarityResult } from '../../pharmacy/osmolarity.js';
@@ -14,7 +14,12 @@ import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
 import { withFormulaOptions, withOutputOptions, withRoundingOption, type FormulaOptions, type OutputOptions } from './common.js';
 import { notesJson, numbered, qtext, quantityJson, type RowPresenter } from './qc-rows.js';
-import { notesCell } from '../output/format.js';
+import { ANIONS, CATIONS } from '../../pharmacy/ions.js';
+import { potency, type PotencyOptions, type PotencyResult } from '../../pharmacy/potency.js';
+import { strengthForms, type StrengthForms } from '../../pharmacy/ratio-strength.js';
+import { readBasis } from '../../assay/sample-basis.js';
+import { displayInstruction, instructionJson, massUnitFor } from '../../sigfig/instruction.js';
+import type { Decimal } from '../../exact/decimal.js';
 import type { CommandRunner } from './runner.js';
 
 // --- meq --------------------------------------------------------------------------
@@ -61,11 +66,11 @@ export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
       notes: notesJson(r.notes),
       caution: PHARMACY_CAUTION,
     }),
-    columns: strength ? ['input', 'line', 'salt', 'mmol_per_mL', 'mEq_per_mL', 'mEq_per_L', 'mOsm_per_L', 'notes'] : ['input', 'line', 'salt', 'mass_g', 'mmol', 'mEq', 'mOsm', 'notes'],
+    columns: strength ? ['input', 'line', 'salt', 'mmol_per_mL', 'mEq_per_mL', 'mEq_per_L', 'mOsm_per_L'] : ['input', 'line', 'salt', 'mass_g', 'mmol', 'mEq', 'mOsm'],
     cells: ({ input, line, r }) =>
       strength
-        ? [input, line, r.salt.formula, quantityJson(r.moles, 'M', rounding).reported, quantityJson(r.equivalents, 'M', rounding).reported, quantityJson(r.equivalents, 'mM', rounding).reported, quantityJson(r.osmoles, 'mM', rounding).reported, notesCell(r.notes)]
-        : [input, line, r.salt.formula, quantityJson(r.mass!, 'g', rounding).reported, quantityJson(r.moles, 'mmol', rounding).reported, quantityJson(r.equivalents, 'mmol', rounding).reported, quantityJson(r.osmoles, 'mmol', rounding).reported, notesCell(r.notes)],
+        ? [input, line, r.salt.formula, quantityJson(r.moles, 'M', rounding).reported, quantityJson(r.equivalents, 'M', rounding).reported, quantityJson(r.equivalents, 'mM', rounding).reported, quantityJson(r.osmoles, 'mM', rounding).reported]
+        : [input, line, r.salt.formula, quantityJson(r.mass!, 'g', rounding).reported, quantityJson(r.moles, 'mmol', rounding).reported, quantityJson(r.equivalents, 'mmol', rounding).reported, quantityJson(r.osmoles, 'mmol', rounding).reported],
     block: ({ input, r }) => {
       const head = `${input}  (${r.salt.formula}, M = ${displayMolarMass(r.salt)} g/mol): 1 mmol = ${r.ions.equivalentsPerMole} mEq = ${r.ions.particles} mOsm`;
       const ions = r.perIon.map((i) => `${i.ion} ${strength ? qtext(i.equivalents, 'mM', rounding, 'mEq/L') : qtext(i.equivalents, 'mmol', rounding, 'mEq')}`).join(', ');
@@ -78,11 +83,14 @@ export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
       return [head, `  ${qtext(r.mass!, 'g', rounding)}: ${qtext(r.moles, 'mmol', rounding)}, ${qtext(r.equivalents, 'mmol', rounding, 'mEq')}, ${qtext(r.osmoles, 'mmol', rounding, 'mOsm')}`, `  by ion: ${ions}`].join('\n');
     },
     notes: ({ r }) => r.notes.map((n) => n.message),
+    noteItems: ({ r }) => notesJson(r.notes),
     caution: PHARMACY_CAUTION,
   };
 }
 
 // --- osmolarity -------------------------------------------------------------------
+
+const TABLE_IONS = [...CATIONS, ...ANIONS].map((i) => i.formula);
 
 interface OsmolarityCli extends FormulaOptions {
   measured?: boolean;
@@ -105,8 +113,17 @@ export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityRe
       notes: notesJson(r.notes),
       caution: PHARMACY_CAUTION,
     }),
-    columns: ['input', 'line', 'mOsm_per_L', 'ions_mEq_per_L', 'notes'],
-    cells: ({ input, line, r }) => [input, line, quantityJson(r.osmolarity, 'mM', rounding).reported, r.ions.map((i) => `${i.ion}=${quantityJson(i.equivalents, 'mM', rounding).reported}`).join(' '), notesCell(r.notes)],
+    // one column per ion of the table (wide form): an ion a solution does not hold is left empty
+    columns: ['input', 'line', 'mOsm_per_L', ...TABLE_IONS.map((i) => `${i}_mEq_per_L`)],
+    cells: ({ input, line, r }) => [
+      input,
+      line,
+      quantityJson(r.osmolarity, 'mM', rounding).reported,
+      ...TABLE_IONS.map((f) => {
+        const ion = r.ions.find((i) => i.ion.replace(/\^.*$/, '') === f);
+        return ion ? quantityJson(ion.equivalents, 'mM', rounding).reported : '';
+      }),
+    ],
     block: ({ input, r }) => {
       const lines = [`${input}`];
       for (const c of r.components) lines.push(`  ${c.salt} ${c.strength}: ${qtext(c.result.moles, 'mM', rounding, 'mmol/L')} × ${c.result.ions.particles} = ${qtext(c.result.osmoles, 'mM', rounding, 'mOsm/L')}`);
@@ -115,6 +132,7 @@ export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityRe
       return lines.join('\n');
     },
     notes: ({ r }) => r.notes.map((n) => n.message),
+    noteItems: ({ r }) => notesJson(r.notes),
     caution: PHARMACY_CAUTION,
   };
 }
@@ -159,7 +177,7 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
       notes: notesJson(r.notes),
       caution: PHARMACY_CAUTION,
     }),
-    columns: ['input', 'line', 'by', 'higher_parts', 'lower_parts', 'higher_amount', 'lower_amount', 'unit', 'notes'],
+    columns: ['input', 'line', 'by', 'higher_parts', 'lower_parts', 'higher_amount', 'lower_amount', 'unit'],
     cells: ({ input, line, r }) => [
       input,
       line,
@@ -169,7 +187,6 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
       r.higherAmount ? quantityJson(r.higherAmount, amountUnit(r), rounding).reported : '',
       r.lowerAmount ? quantityJson(r.lowerAmount, amountUnit(r), rounding).reported : '',
       r.total ? amountUnit(r) : '',
-      notesCell(r.notes),
     ],
     block: ({ input, r }) => {
       const u = sUnit(r);
@@ -184,6 +201,83 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
       return lines.join('\n');
     },
     notes: ({ r }) => r.notes.map((n) => n.message),
+    noteItems: ({ r }) => notesJson(r.notes),
+    caution: PHARMACY_CAUTION,
+  };
+}
+
+// --- potency ---------------------------------------------------------------------
+
+interface PotencyCli extends OutputOptions, Pick<PotencyOptions, 'water' | 'loss' | 'solvent' | 'need'> {
+  basis?: string;
+  rounding?: RoundingMode;
+}
+
+/** The presenter for `pondus potency`. */
+export function potencyPresenter(o: PotencyCli): RowPresenter<PotencyResult> {
+  const rounding = o.rounding ?? 'half-even';
+  const basis = o.basis !== undefined ? readBasis(o.basis) : undefined;
+  if (basis === undefined && (o.water !== undefined || o.loss !== undefined || o.solvent !== undefined)) {
+    throw fail({ code: 'USAGE', message: '--water, --loss and --solvent convert a potency given on another basis: say which with --basis anhydrous, dried or solvent-free' });
+  }
+  const unitOfGiven = (r: PotencyResult) => r.given.unit?.symbol ?? '%';
+  const alt = (r: PotencyResult) => (unitOfGiven(r) === '%' ? 'µg/mg' : '%');
+  return {
+    compute: numbered((input) => potency(input, { basis, water: o.water, loss: o.loss, solvent: o.solvent, need: o.need })),
+    json: ({ input, r }) => ({
+      input,
+      basis: r.basis,
+      asIs: quantityJson(r.asIs, unitOfGiven(r), rounding),
+      asIsAlso: quantityJson(r.asIs, alt(r), rounding),
+      need: o.need?.trim() ?? null,
+      weigh: r.weigh ? instructionJson(r.weigh, massUnitFor(r.weigh.quantity), rounding) : null,
+      rounding,
+      notes: notesJson(r.notes),
+      caution: POTENCY_CAUTION,
+    }),
+    columns: ['input', 'line', 'basis', 'as_is', 'as_is_also', 'weigh_g', 'weigh'],
+    cells: ({ input, line, r }) => [input, line, r.basis, qtext(r.asIs, unitOfGiven(r), rounding), qtext(r.asIs, alt(r), rounding), r.weigh ? r.weigh.quantity.value.toFixed() : '', r.weigh ? displayInstruction(r.weigh, massUnitFor(r.weigh.quantity), rounding).text : ''],
+    block: ({ input, r }) => {
+      const lines = [`potency ${input}${r.basis === 'as-is' ? ' (as is)' : ` (${r.basis} basis)`}: ${qtext(r.asIs, unitOfGiven(r), rounding)} as is (${qtext(r.asIs, alt(r), rounding)})`];
+      if (r.weigh) lines.push(`  for ${o.need!.trim()} of active: weigh ${displayInstruction(r.weigh, massUnitFor(r.weigh.quantity), rounding).text} of the material`);
+      return lines.join('\n');
+    },
+    notes: ({ r }) => r.notes.map((n) => n.message),
+    noteItems: ({ r }) => notesJson(r.notes),
+    caution: POTENCY_CAUTION,
+  };
+}
+
+// --- strength (ratio strength, % w/v, mg/mL, mg/dL, % w/w, mg/kg) ------------------
+
+interface StrengthCli extends OutputOptions {
+  rounding?: RoundingMode;
+}
+
+function formText(value: Decimal): string {
+  // the forms differ from the strength written by powers of ten: the same digits, the point moved;
+  // only a repeating decimal (from a ratio such as 1:750) is cut, to 4 figures
+  const long = value.toSignificantDigits(12);
+  return long.eq(value) ? long.toFixed() : value.toSignificantDigits(4).toFixed();
+}
+
+/** The presenter for `pondus strength`. */
+export function strengthPresenter(o: StrengthCli): RowPresenter<StrengthForms> {
+  const rounding = o.rounding ?? 'half-even';
+  const ratioText = (r: StrengthForms) => `1:${r.ratio.isInteger() ? r.ratio.toFixed() : r.ratio.toSignificantDigits(4).toFixed()}`;
+  const shown = (r: StrengthForms) => r.forms.map((f) => ({ unit: f.unit, value: f.value.toNumber(), display: `${formText(f.value)} ${f.unit}` }));
+  const cols = ['% w/v', 'mg/mL', 'mg/dL', '% w/w', 'mg/g', 'mg/kg', '% v/v'];
+  return {
+    compute: numbered((input) => strengthForms(input)),
+    json: ({ input, r }) => ({ input, kind: r.kind, ratio: ratioText(r), forms: shown(r), rounding, notes: notesJson(r.notes), caution: PHARMACY_CAUTION }),
+    columns: ['input', 'line', 'kind', 'ratio', ...cols.map((c) => c.replace('% ', 'percent_').replace('/', '_per_'))],
+    cells: ({ input, line, r }) => {
+      const f = shown(r);
+      return [input, line, r.kind, ratioText(r), ...cols.map((c) => f.find((x) => x.unit === c)?.display.replace(` ${c}`, '') ?? '')];
+    },
+    block: ({ input, r }) => `${input} (${r.kind}): ${ratioText(r)} = ${shown(r).map((f) => f.display).join(' = ')}`,
+    notes: ({ r }) => r.notes.map((n) => n.message),
+    noteItems: ({ r }) => notesJson(r.notes),
     caution: PHARMACY_CAUTION,
   };
 }
@@ -229,10 +323,35 @@ export function registerPharmacy(program: Command, run: CommandRunner): void {
         .option('--by <how>', 'mass or volume, for parts only (no total)'),
     ),
   ).action((inputs: string[], o: AlligationCli) => run('alligation', inputs, o));
+
+  withRoundingOption(
+    withOutputOptions(
+      program
+        .command('potency')
+        .description('potency of a drug substance as is (from µg/mg or %, as is or on the anhydrous or dried basis), and the mass of it that holds an amount of active')
+        .argument('[potencies...]', "the potency from the certificate: '950 µg/mg', '98.7 %', '101.2 %' with --basis anhydrous; - reads one per line")
+        .option('--basis <basis>', 'the basis the potency is given on: as-is (the default), anhydrous, dried, solvent-free')
+        .option('--water <w>', "water content (Karl Fischer), for --basis anhydrous: '4.8 %'")
+        .option('--loss <l>', "loss on drying, for --basis dried: '0.50 %'")
+        .option('--solvent <s>', "residual solvent, for --basis solvent-free: '0.10 %'")
+        .option('--need <m>', "the mass of active needed: '500 mg' (gives the mass to weigh)"),
+    ),
+  ).action((inputs: string[], o: PotencyCli) => run('potency', inputs, o));
+
+  withRoundingOption(
+    withOutputOptions(
+      program
+        .command('strength')
+        .description('a strength in each of its forms: ratio strength 1:N, % w/v, mg/mL, mg/dL; % w/w, mg/g, mg/kg; % v/v')
+        .argument('[strengths...]', "'1:1000', '0.1 % w/v', '2.5 mg/mL', '0.5 % w/w', '1:750 w/w'; - reads one per line"),
+    ),
+  ).action((inputs: string[], o: StrengthCli) => run('strength', inputs, o));
 }
 
 /** Presenters of the compounding commands, by name. */
 export const PHARMACY_PRESENTERS = {
+  potency: (o: PotencyCli) => potencyPresenter(o),
+  strength: (o: StrengthCli) => strengthPresenter(o),
   meq: (o: MeqCli) => (meqPresenter(o)),
   osmolarity: (o: OsmolarityCli) => (osmolarityPresenter(o)),
   alligation: (o: AlligationCli) => (alligationPresenter(o)),

@@ -3,16 +3,21 @@ import { Option } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
 import type { Note } from '../../errors/issue.js';
 import { BENCH_CAUTION } from '../../preparation/caution.js';
-import { displayInstruction, displayResult, instructionJson, massUnitFor, resultJson, type Instruction } from '../../sigfig/instruction.js';
+import { displayInstruction, displayResult, instructionJson, massUnitFor, resultJson, volumeUnitFor, type Instruction } from '../../sigfig/instruction.js';
 import { prepareSolution, type PurityBasis, type SolutionResult } from '../../preparation/solution.js';
 import { substituteForm, type SubstituteResult } from '../../preparation/substitute.js';
+import { concentratedReagent, type ConcentratedResult } from '../../preparation/concentrated.js';
+import { CONCENTRATED_CAUTION } from '../../preparation/caution.js';
 import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { conflict, given, roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
+import { prepSheetPresenter, readPrepSheet, type PrepSheetCliOptions } from './prep-sheet.js';
+import type { PrepRowResult } from '../../preparation/prep-sheet.js';
+import { runWithSheet } from './sheet-runner.js';
 
-interface PrepareCliOptions extends OutputOptions, RoundingOptions {
+interface PrepareCliOptions extends OutputOptions, RoundingOptions, PrepSheetCliOptions {
   concentration?: string;
   volume?: string;
   purity?: string;
@@ -20,10 +25,12 @@ interface PrepareCliOptions extends OutputOptions, RoundingOptions {
   as?: string;
   replace?: string;
   weighed?: string;
+  fraction?: string;
+  density?: string;
   abbreviations?: boolean;
 }
 
-type Prepared = { kind: 'solution'; r: SolutionResult } | { kind: 'substitute'; r: SubstituteResult };
+type Prepared = { kind: 'solution'; r: SolutionResult } | { kind: 'substitute'; r: SubstituteResult } | { kind: 'concentrated'; r: ConcentratedResult };
 
 const notesJson = (notes: Note[]) => notes.map((n) => ({ code: n.code, message: n.message }));
 
@@ -34,6 +41,13 @@ const notesJson = (notes: Note[]) => notes.map((n) => ({ code: n.code, message: 
  * checkPrepareOptions({ replace: 'CuSO4=10.00 g', volume: '1 L' }) // throws USAGE
  */
 export function checkPrepareOptions(o: PrepareCliOptions): void {
+  if (o.density !== undefined && o.fraction === undefined) throw fail({ code: 'USAGE', message: "--density is the density of a concentrated liquid reagent: give its mass fraction too (--fraction '37 %')" });
+  if (o.fraction !== undefined) {
+    const clash = given(o, { purity: '--purity', purityBasis: '--purity-basis', as: '--as', weighed: '--weighed', replace: '--replace' });
+    if (clash.length) throw conflict('--fraction', clash, 'a concentrated liquid reagent is measured by volume from its mass fraction and density; the options of a solid to weigh do not apply');
+    if ((o.concentration === undefined) !== (o.volume === undefined)) throw fail({ code: 'USAGE', message: "give both --concentration and --volume for the volume of concentrated reagent to take (or neither, for its molarity alone)" });
+    return;
+  }
   if (o.replace !== undefined) {
     const clash = given(o, { concentration: '--concentration', volume: '--volume', as: '--as', weighed: '--weighed', purityBasis: '--purity-basis' });
     if (clash.length) throw conflict('--replace', clash, 'it weighs one form of a reagent in place of an amount of another; to make up a solution, name the form in hand and give --concentration and --volume without --replace');
@@ -81,15 +95,47 @@ function substituteJson(r: SubstituteResult, o: PrepareCliOptions, rounding: Rou
   };
 }
 
-/** The presenter for `pondus prepare`. */
-export function preparePresenter(o: PrepareCliOptions): Presenter<Prepared> {
+function concentratedJson(r: ConcentratedResult, o: PrepareCliOptions, rounding: RoundingMode) {
+  return {
+    input: r.reagent.input,
+    formula: r.reagent.formula,
+    molarMass: r.reagent.molarMass.toNumber(),
+    form: 'concentrated',
+    fraction: o.fraction!.trim(),
+    density: o.density?.trim() ?? `${r.grade!.density} g/mL`,
+    densitySource: r.densitySource,
+    molarity: { ...resultJson(r.molarity, 'M', rounding), textbookSigFigs: r.textbookSigFigs },
+    massConcentration: resultJson(r.massConcentration, 'g/L', rounding),
+    concentration: o.concentration?.trim() ?? null,
+    volume: o.volume?.trim() ?? null,
+    take: r.take ? instructionJson(r.take, volumeUnitFor(r.take.quantity, r.volume!.unit), rounding) : null,
+    factor: r.factor ? r.factor.toNumber() : null,
+    notes: notesJson(r.notes),
+    caution: CONCENTRATED_CAUTION,
+  };
+}
+
+/** The presenter for `pondus prepare` (a prep sheet with --sheet). */
+export function preparePresenter(o: PrepareCliOptions): Presenter<Prepared> | Presenter<PrepRowResult> {
+  if (o.sheet !== undefined) {
+    const clash = given(o, { concentration: '--concentration', volume: '--volume', purity: '--purity', purityBasis: '--purity-basis', as: '--as', replace: '--replace', weighed: '--weighed', fraction: '--fraction', density: '--density' });
+    if (clash.length) throw conflict('--sheet', clash, 'each row of the sheet gives its own reagent, purity, target and volume');
+    return prepSheetPresenter(o);
+  }
+  return oneSolutionPresenter(o);
+}
+
+function oneSolutionPresenter(o: PrepareCliOptions): Presenter<Prepared> {
   checkPrepareOptions(o);
   const rounding = roundingOf(o);
   const options = { abbreviations: !!o.abbreviations };
   const w = (i: Instruction, unit?: string) => displayInstruction(i, unit ?? i.quantity.unit?.symbol, rounding).text;
   const wm = (i: Instruction) => w(i, massUnitFor(i.quantity));
   const res = (q: Parameters<typeof displayResult>[0], unit?: string) => displayResult(q, unit ?? q.unit?.symbol, rounding).text;
+  const concentrated = o.fraction !== undefined;
+  const takeText = (r: ConcentratedResult) => (r.take ? w(r.take, volumeUnitFor(r.take.quantity, r.volume!.unit)) : '');
   const compute = (input: string): Prepared => {
+    if (concentrated) return { kind: 'concentrated', r: concentratedReagent(input, { ...options, fraction: o.fraction!, density: o.density, concentration: o.concentration, volume: o.volume }) };
     if (o.replace !== undefined) {
       const eq = o.replace.indexOf('=');
       return { kind: 'substitute', r: substituteForm(input, o.replace.slice(0, eq).trim(), o.replace.slice(eq + 1), { ...options, purity: o.purity }) };
@@ -98,13 +144,32 @@ export function preparePresenter(o: PrepareCliOptions): Presenter<Prepared> {
   };
   return {
     compute,
-    json: (p) => (p.kind === 'solution' ? solutionJson(p.r, o, rounding) : substituteJson(p.r, o, rounding)),
-    columns: ['input', 'formula', 'mass', 'display', 'made'],
+    json: (p) => (p.kind === 'solution' ? solutionJson(p.r, o, rounding) : p.kind === 'concentrated' ? concentratedJson(p.r, o, rounding) : substituteJson(p.r, o, rounding)),
+    columns: concentrated ? ['input', 'formula', 'fraction', 'density_g_per_mL', 'molarity_M', 'molarity', 'take_L', 'take'] : ['input', 'formula', 'mass', 'display', 'made'],
     cells: (p) =>
-      p.kind === 'solution'
+      p.kind === 'concentrated'
+        ? [p.r.reagent.input, p.r.reagent.formula, o.fraction!.trim(), p.r.density.value.div(1000).toFixed(), p.r.molarity.value.toNumber(), res(p.r.molarity, 'M'), p.r.take ? p.r.take.quantity.value.toFixed() : '', takeText(p.r)]
+        : p.kind === 'solution'
         ? [p.r.reagent.input, p.r.reagent.formula, p.r.mass ? p.r.mass.quantity.value.toFixed() : '', p.r.mass ? wm(p.r.mass) : '', p.r.made ? res(p.r.made, p.r.unit) : '']
         : [p.r.use.input, p.r.use.formula, p.r.mass.quantity.value.toFixed(), wm(p.r.mass), ''],
     block: (p) => {
+      if (p.kind === 'concentrated') {
+        const r = p.r;
+        const dens = o.density?.trim() ?? `${r.grade!.density} g/mL`;
+        const lines = [
+          `${r.reagent.input}  (${r.reagent.formula}, M = ${displayMolarMass(r.reagent)} g/mol), concentrated reagent: ${o.fraction!.trim()}, density ${dens}${r.densitySource === 'table' ? ' (table of common grades)' : ''}`,
+          `  molarity w·ρ/M = ${res(r.molarity, 'M')} (${res(r.massConcentration, 'g/L')} of ${r.reagent.formula}; nominal, from the label values)`,
+        ];
+        if (r.take) {
+          lines.push(`  for ${o.concentration!.trim()} in ${o.volume!.trim()}: take ${takeText(r)} of the concentrated reagent (measure it by volume; do not weigh the solute)`);
+          lines.push(
+            r.acid
+              ? `  put about half of the water in the flask first, add the acid slowly with swirling, let it cool, then make up to ${o.volume!.trim()}`
+              : `  put most of the water in the flask first, add the reagent slowly, let it reach room temperature, then make up to ${o.volume!.trim()}`,
+          );
+        }
+        return lines.join('\n');
+      }
       if (p.kind === 'substitute') {
         const r = p.r;
         const lines = [
@@ -135,12 +200,13 @@ export function preparePresenter(o: PrepareCliOptions): Presenter<Prepared> {
       return lines.join('\n');
     },
     notes: (p) => p.r.notes.map((n) => n.message),
-    caution: BENCH_CAUTION,
+    noteItems: (p) => notesJson(p.r.notes),
+    caution: concentrated ? CONCENTRATED_CAUTION : BENCH_CAUTION,
   };
 }
 
 /** Registers `pondus prepare`. */
-export function registerPrepare(program: Command, run: CommandRunner): void {
+export function registerPrepare(program: Command, run: CommandRunner, stdin?: () => AsyncIterable<string | Buffer>): void {
   const cmd = withRoundingOption(
     withOutputOptions(
       program
@@ -153,9 +219,12 @@ export function registerPrepare(program: Command, run: CommandRunner): void {
         .addOption(new Option('--purity-basis <basis>', "what the assay is of: reagent (the reagent itself) or part (the content of the --as species, a potency 'as base')").choices(['reagent', 'part']))
         .option('--as <species>', 'the concentration is of this part of the reagent: Cu, Cl, CuSO4, a free base, …')
         .option('--weighed <m>', "the mass actually weighed: '1.4587 g'; gives the concentration made (a result)")
+        .option('--fraction <w>', "a concentrated liquid reagent by its mass fraction: '37 %' (% w/w, as on the label); gives its molarity and the volume to take")
+        .option('--density <d>', "density of the concentrated reagent: '1.19 g/mL' (from the label; common grades are in a table)")
         .option('--replace <form=amount>', "weigh this reagent in place of another form: --replace 'CuSO4=10.00 g'")
         .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)'),
     ),
   );
-  cmd.action((inputs: string[], o: PrepareCliOptions) => run('prepare', inputs, o));
+  cmd.option('--sheet <file>', 'a prep sheet: CSV with columns reagent, form, purity, density, target, volume (and id, as, weighed, taken): one instruction per row; - reads it from standard input');
+  cmd.action((inputs: string[], o: PrepareCliOptions) => (o.sheet !== undefined && stdin ? runWithSheet(run, 'prepare', inputs, o, stdin, readPrepSheet) : run('prepare', inputs, o)));
 }

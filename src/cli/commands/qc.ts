@@ -22,7 +22,6 @@ import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
 import { withFormulaOptions, withOutputOptions, withRoundingOption, type FormulaOptions, type OutputOptions } from './common.js';
 import { notesJson, numbered, qtext, quantityJson, type RowPresenter } from './qc-rows.js';
-import { notesCell } from '../output/format.js';
 import type { CommandRunner } from './runner.js';
 
 interface BasisCli {
@@ -150,11 +149,11 @@ export function titrationPresenter(o: TitrationCli): RowPresenter<Titration> {
       notes: notesJson([...t.notes, ...rep.notes]),
       caution: QC_CAUTION,
     }),
-    columns: ['input', 'line', 'analyte', 'kind', 'ratio', 'moles_mmol', 'assay_percent', 'assay_reported', 'basis', 'reported_percent', 'reported', 'limits', 'complies', 'notes'],
+    columns: ['input', 'line', 'analyte', 'kind', 'ratio', 'moles_mmol', 'assay_percent', 'assay_reported', 'basis', 'reported_percent', 'reported', 'limits', 'complies'],
     cells: ({ input, line, r }) => {
       const a = quantityJson(r.t.assay, '%', rounding);
       const b = quantityJson(r.rep.value, '%', rounding);
-      return [input, line, r.t.analyte.formula, r.t.kind, r.t.ratio.text, quantityJson(r.t.moles, 'mmol', rounding).reported, a.value, a.reported, r.rep.basis, b.value, b.reported, r.rep.spec ? `${r.rep.spec.limits.low}-${r.rep.spec.limits.high}` : '', r.rep.spec ? (r.rep.spec.complies ? 'yes' : 'no') : '', notesCell(allNotes(r))];
+      return [input, line, r.t.analyte.formula, r.t.kind, r.t.ratio.text, quantityJson(r.t.moles, 'mmol', rounding).reported, a.value, a.reported, r.rep.basis, b.value, b.reported, r.rep.spec ? `${r.rep.spec.limits.low}-${r.rep.spec.limits.high}` : '', r.rep.spec ? (r.rep.spec.complies ? 'yes' : 'no') : ''];
     },
     block: ({ input, r: { t, rep } }) => {
       const lines = [`${input}  (${t.analyte.formula}, M = ${displayMolarMass(t.analyte)} g/mol), ${t.kind === 'back' ? 'back-titration' : 'direct titration'}`];
@@ -171,6 +170,7 @@ export function titrationPresenter(o: TitrationCli): RowPresenter<Titration> {
       return lines.join('\n');
     },
     notes: ({ r }) => allNotes(r).map((n) => n.message),
+    noteItems: ({ r }) => notesJson(allNotes(r)),
     caution: QC_CAUTION,
   };
 }
@@ -207,10 +207,10 @@ export function standardisePresenter(o: StandardiseCli): RowPresenter<Standardis
       notes: notesJson(r.notes),
       caution: BENCH_CAUTION,
     }),
-    columns: ['input', 'line', 'standard', 'ratio', 'moles_mmol', 'molarity_M', 'molarity', 'notes'],
+    columns: ['input', 'line', 'standard', 'ratio', 'moles_mmol', 'molarity_M', 'molarity'],
     cells: ({ input, line, r }) => {
       const m = quantityJson(r.molarity, 'M', rounding);
-      return [input, line, r.standard.formula, r.ratio.text, quantityJson(r.moles, 'mmol', rounding).reported, m.value, m.reported, notesCell(r.notes)];
+      return [input, line, r.standard.formula, r.ratio.text, quantityJson(r.moles, 'mmol', rounding).reported, m.value, m.reported];
     },
     block: ({ input, r }) =>
       [
@@ -219,6 +219,7 @@ export function standardisePresenter(o: StandardiseCli): RowPresenter<Standardis
         `  titre ${qtext(r.netTitre, 'mL', rounding)}${r.blank ? ` (blank ${qtext(r.blank, 'mL', rounding)} subtracted)` : ''}: titrant molarity ${qtext(r.molarity, 'M', rounding)}`,
       ].join('\n'),
     notes: ({ r }) => r.notes.map((n) => n.message),
+    noteItems: ({ r }) => notesJson(r.notes),
     caution: BENCH_CAUTION,
   };
 }
@@ -262,10 +263,10 @@ export function sampleBasisPresenter(o: SampleBasisCli): RowPresenter<BasisRow> 
       notes: notesJson([...r.notes, ...r.rep.notes]),
       caution: QC_CAUTION,
     }),
-    columns: ['input', 'line', 'from', 'to', 'converted_percent', 'converted', 'limits', 'complies', 'notes'],
+    columns: ['input', 'line', 'from', 'to', 'converted_percent', 'converted', 'limits', 'complies'],
     cells: ({ input, line, r }) => {
       const c = quantityJson(r.rep.value, '%', rounding);
-      return [input, line, r.from, r.rep.basis, c.value, c.reported, r.rep.spec ? `${r.rep.spec.limits.low}-${r.rep.spec.limits.high}` : '', r.rep.spec ? (r.rep.spec.complies ? 'yes' : 'no') : '', notesCell([...r.notes, ...r.rep.notes])];
+      return [input, line, r.from, r.rep.basis, c.value, c.reported, r.rep.spec ? `${r.rep.spec.limits.low}-${r.rep.spec.limits.high}` : '', r.rep.spec ? (r.rep.spec.complies ? 'yes' : 'no') : ''];
     },
     block: ({ input, r }) => {
       const lines = [`${input} (${r.from})${r.rep.conversion ? ` → ${qtext(r.rep.value, '%', rounding)} on the ${r.rep.basis} basis` : ''}`];
@@ -273,6 +274,7 @@ export function sampleBasisPresenter(o: SampleBasisCli): RowPresenter<BasisRow> 
       return lines.join('\n');
     },
     notes: ({ r }) => [...r.notes, ...r.rep.notes].map((n) => n.message),
+    noteItems: ({ r }) => notesJson([...r.notes, ...r.rep.notes]),
     caution: QC_CAUTION,
   };
 }
@@ -310,8 +312,8 @@ export function replicatesPresenter(o: ReplicatesCli): RowPresenter<ReplicateRes
       rounding,
       notes: notesJson(r.notes),
     }),
-    columns: ['input', 'line', 'n', 'mean', 'sd', 'rsd_percent', 'level', 't', 'half_width', 'reported', 'notes'],
-    cells: ({ input, line, r }) => [input, line, r.n, r.mean.value.toNumber(), r.sd.toNumber(), r.rsdPercent.toNumber(), r.level, r.t, r.halfWidth.toNumber(), r.reported, notesCell(r.notes)],
+    columns: ['input', 'line', 'n', 'mean', 'sd', 'rsd_percent', 'level', 't', 'half_width', 'reported'],
+    cells: ({ input, line, r }) => [input, line, r.n, r.mean.value.toNumber(), r.sd.toNumber(), r.rsdPercent.toNumber(), r.level, r.t, r.halfWidth.toNumber(), r.reported],
     block: ({ input, r }) => {
       const u = r.unit ? ` ${r.unit}` : '';
       return [
@@ -321,6 +323,7 @@ export function replicatesPresenter(o: ReplicatesCli): RowPresenter<ReplicateRes
       ].join('\n');
     },
     notes: ({ r }) => r.notes.map((n) => n.message),
+    noteItems: ({ r }) => notesJson(r.notes),
   };
 }
 

@@ -1,0 +1,126 @@
+/**
+ * Prep sheets: a CSV of solutions to make, one per row — the reagent, the
+ * form in hand, its purity (or, for a concentrated liquid, its mass fraction
+ * and density), the target and the volume — becomes one instruction per row,
+ * computed exactly as `prepare` computes it; a row that gives the mass
+ * actually weighed (or the volume taken) also gets the concentration made.
+ *
+ * Columns (case-insensitive; only reagent, target and volume are needed):
+ * `id`, `reagent` (a formula, or a name when `form` gives the formula),
+ * `form` (the formula of the material in hand: CuSO4·5H2O), `purity` (assay,
+ * or mass fraction of a concentrated liquid), `density` (makes the row a
+ * concentrated liquid), `as`, `target` (or `concentration`), `volume`,
+ * `weighed` (a solid), `taken` (a liquid).
+ */
+import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { readCsvSheet } from '../sheets/read-sheet.js';
+import type { MassOptions } from '../mass/formula-mass.js';
+import { concentratedReagent, type ConcentratedResult } from './concentrated.js';
+import { prepareSolution, type SolutionResult } from './solution.js';
+
+/** One solution to make, as the sheet gives it. */
+export interface PrepSheetRow {
+  /** 1-based line number in the sheet. */
+  line: number;
+  /** The row as written. */
+  raw: string;
+  id: string;
+  /** What the row calls the reagent. */
+  reagent: string;
+  /** The formula to compute with: the form column, else the reagent. */
+  formula: string;
+  purity: string;
+  density: string;
+  as: string;
+  target: string;
+  volume: string;
+  weighed: string;
+  taken: string;
+}
+
+/** The instruction for one row: a solid to weigh, or a concentrated liquid to measure. */
+export type PrepRowResult = { row: PrepSheetRow; kind: 'solid'; solution: SolutionResult } | { row: PrepSheetRow; kind: 'concentrated'; concentrated: ConcentratedResult };
+
+const COLUMNS: Record<Exclude<keyof PrepSheetRow, 'line' | 'raw' | 'formula'> | 'form', RegExp> = {
+  id: /^(id|no\.?|#|label)$/i,
+  reagent: /^(reagent|substance|name)$/i,
+  form: /^(form|formula|form in hand|material)$/i,
+  purity: /^(purity|assay|fraction|strength|% ?w\/w)$/i,
+  density: /^(density|d|specific gravity)$/i,
+  as: /^(as|as species)$/i,
+  target: /^(target|concentration|conc\.?)$/i,
+  volume: /^(volume|final volume)$/i,
+  weighed: /^(weighed|mass weighed|actual mass)$/i,
+  taken: /^(taken|volume taken)$/i,
+};
+
+/**
+ * The rows of a sheet, through the one CSV reader (src/sheets). Kept as one call so that a
+ * streaming reader can take its place.
+ */
+function sheetRows(text: string) {
+  return readCsvSheet(text);
+}
+
+/**
+ * Reads a prep sheet. A row's own problems (a bad formula, a missing volume) surface when the row
+ * is computed, so one bad row never stops the others.
+ *
+ * @example
+ * readPrepSheet('reagent,target,volume\nNaCl,0.100 M,250.0 mL\n')[0].formula // 'NaCl'
+ */
+export function readPrepSheet(text: string): PrepSheetRow[] {
+  const { header, rows } = sheetRows(text);
+  const at = Object.fromEntries(Object.entries(COLUMNS).map(([k, re]) => [k, header.findIndex((h) => re.test(h.trim()))])) as Record<keyof typeof COLUMNS, number>;
+  if (at.reagent < 0 && at.form < 0) throw fail({ code: 'BAD_RECORD', message: `the prep sheet has no 'reagent' (or 'form') column (columns: ${header.join(', ')})` });
+  for (const need of ['target', 'volume'] as const) {
+    if (at[need] < 0) throw fail({ code: 'BAD_RECORD', message: `the prep sheet has no '${need}' column (columns: ${header.join(', ')})` });
+  }
+  const cell = (cells: string[], k: keyof typeof COLUMNS) => (at[k] >= 0 ? (cells[at[k]] ?? '').trim() : '');
+  return rows.map(({ line, raw, cells }) => {
+    const reagent = cell(cells, 'reagent');
+    const form = cell(cells, 'form');
+    return {
+      line,
+      raw,
+      id: cell(cells, 'id'),
+      reagent: reagent || form,
+      formula: form || reagent,
+      purity: cell(cells, 'purity'),
+      density: cell(cells, 'density'),
+      as: cell(cells, 'as'),
+      target: cell(cells, 'target'),
+      volume: cell(cells, 'volume'),
+      weighed: cell(cells, 'weighed'),
+      taken: cell(cells, 'taken'),
+    };
+  });
+}
+
+const opt = (s: string) => (s === '' ? undefined : s);
+
+/**
+ * The instruction for one row of a prep sheet, computed as `prepare` computes it.
+ *
+ * @example
+ * const [row] = readPrepSheet('reagent,form,purity,target,volume\ncopper sulfate,CuSO4·5H2O,98.5 %,0.100 M,250.0 mL\n')
+ * displayInstruction(prepRow(row).solution.mass, 'g').text // '6.337 g'
+ */
+export function prepRow(row: PrepSheetRow, options: MassOptions = {}): PrepRowResult {
+  if (row.formula === '') throw fail({ code: 'BAD_RECORD', message: `the row names no reagent` });
+  if (row.volume === '') throw fail({ code: 'BAD_RECORD', message: `the row gives no volume` });
+  if (row.target === '' && row.weighed === '' && row.taken === '') throw fail({ code: 'BAD_RECORD', message: `the row gives no target (nor a mass weighed or volume taken)` });
+  if (row.density !== '') {
+    if (row.purity === '') throw fail({ code: 'BAD_RECORD', message: `a concentrated liquid (a density is given) needs its mass fraction in the purity column ('37 %')` });
+    if (row.weighed !== '') throw fail({ code: 'BAD_RECORD', message: `a concentrated liquid is measured by volume: give the volume taken ('taken'), not a mass weighed` });
+    if (row.as !== '') throw fail({ code: 'BAD_RECORD', message: `'as' applies to a solid reagent, not to a concentrated liquid` });
+    return { row, kind: 'concentrated', concentrated: concentratedReagent(row.formula, { ...options, fraction: row.purity, density: row.density, concentration: opt(row.target), volume: row.volume, taken: opt(row.taken) }) };
+  }
+  if (row.taken !== '') throw fail({ code: 'BAD_RECORD', message: `a volume taken applies to a concentrated liquid (give its density); a solid is weighed ('weighed')` });
+  return { row, kind: 'solid', solution: prepareSolution(row.formula, { ...options, concentration: opt(row.target), volume: row.volume, purity: opt(row.purity), as: opt(row.as), weighed: opt(row.weighed) }) };
+}
+
+/** Non-throwing {@link prepRow}. */
+export function safePrepRow(row: PrepSheetRow, options: MassOptions = {}): SafeResult<PrepRowResult> {
+  return toSafe(() => prepRow(row, options));
+}
