@@ -93,6 +93,7 @@ export { searchFormula, type FormulaFit, type SearchResult, MAX_SCALE } from './
 export { empirical, safeEmpirical, empiricalJson, type EmpiricalResult, type EmpiricalOptions } from './empirical/empirical-formula.js';
 export { combustion, safeCombustion, PRODUCTS, type CombustionResult, type CombustionOptions } from './empirical/combustion.js';
 export { candidateFormulas, safeCandidateFormulas, candidateScore, rdbe, readRanges, DEFAULT_RANGES, RATIO_RANGES, MAX_VISITS, type Candidate, type CandidateResult, type CandidateOptions, type RatioRanges } from './empirical/candidates.js';
+export { candidatesJson } from './empirical/candidates-json.js';
 export { readMeasurementSheet, type MeasurementRow } from './empirical/measurement-sheet.js';
 export { readCsvSheet, elementColumns, type CsvSheet, type CsvRow } from './sheets/read-sheet.js';
 

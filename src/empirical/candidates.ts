@@ -200,7 +200,7 @@ export function readRanges(text: string): Map<string, [number, number]> {
  *
  * @example
  * candidateScore(1.5, 3, null, 0.4)          // 0.5
- * candidateScore(0, 3, [0.2, -0.2], 0.4)     // 0.35355339059327373
+ * candidateScore(0, 3, [0.2, -0.2], 0.4)     // 0.3535533905932738
  */
 export function candidateScore(massError: number | null, massAllowance: number, deviations: ArrayLike<number> | null, tolerance: number): number {
   let sum = 0;

@@ -61,7 +61,8 @@ describe('KEY=VALUE sets typed without quotes', () => {
     const r = pondus(['candidates', '--json', '180.0634', '--found', 'C=40.00', 'H=6.71', '--elements', 'C0-20 H0-40 O0-10']);
     expect(r.status).toBe(0);
     const [j] = jsonLines(r.stdout);
-    expect(j.input).toContain('found C=40.00 H=6.71');
+    expect(j.input).toBe('180.0634');
+    expect(j.search).toContain('found C=40.00 H=6.71');
     expect(j.candidates[0].formula).toBe('C6H12O6');
     expect(pondus(['candidates', '180.0634', 'C=40.00']).status).toBe(2);
   });

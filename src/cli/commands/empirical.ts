@@ -1,7 +1,9 @@
 import type { Command } from 'commander';
 import { checkRun, joinPairArgs, joinedNote, joinUnitWords, pairRuns, takeJoinedNote } from '../input/key-value-args.js';
 import { fail } from '../../errors/pondus-error.js';
-import { candidateFormulas, DEFAULT_RANGES, readRanges, type CandidateResult } from '../../empirical/candidates.js';
+import { candidateFormulas, DEFAULT_RANGES, MAX_LIMIT, readRanges, type CandidateResult } from '../../empirical/candidates.js';
+import { candidatesJson } from '../../empirical/candidates-json.js';
+import { readIonNotation } from '../../ions/read-ion-notation.js';
 import { readFound } from '../../analysis/found-values.js';
 import { PondusError } from '../../errors/pondus-error.js';
 import { combustion, PRODUCTS, type CombustionResult } from '../../empirical/combustion.js';
@@ -120,17 +122,38 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
 
 interface CandidatesCliOptions extends OutputOptions {
   ppm?: string;
+  ion?: string;
   found?: string;
   tolerance?: string;
   elements?: string;
-  ratios?: boolean;
+  /** 'extended' (default), 'common', 'none', or false from --no-ratios. */
+  ratios?: string | boolean;
   limit?: string;
   molarMass?: boolean;
   /** Set by the command: the note when found values came from several arguments. */
   foundNote?: string;
 }
 
-/** The presenter for `pondus candidates`: inputs are masses. */
+const RATIO_SETTINGS = ['extended', 'common', 'none'] as const;
+
+/** Progress of a long search on stderr, on a terminal only, once it has run about a second. */
+function progressLine(): { onProgress?: (done: number) => void; end(): void } {
+  if (!process.stderr.isTTY) return { end: () => undefined };
+  const start = Date.now();
+  let shown = false;
+  return {
+    onProgress: (done) => {
+      if (Date.now() - start < 1000) return;
+      shown = true;
+      process.stderr.write(`\rcandidates: searching… ${Math.floor(done * 100)} %`);
+    },
+    end: () => {
+      if (shown) process.stderr.write('\r\x1b[K');
+    },
+  };
+}
+
+/** The presenter for `pondus candidates`: inputs are masses (or m/z values with --ion). */
 export function candidatesPresenter(o: CandidatesCliOptions): Presenter<CandidateResult> {
   const num = (t: string | undefined, name: string) => {
     if (t === undefined) return undefined;
@@ -138,33 +161,75 @@ export function candidatesPresenter(o: CandidatesCliOptions): Presenter<Candidat
     if (!Number.isFinite(n) || n <= 0) throw fail({ code: 'USAGE', message: `--${name} takes a positive number, not '${t}'` });
     return n;
   };
-  const opts = { ppm: num(o.ppm, 'ppm'), found: o.found, tolerance: num(o.tolerance, 'tolerance'), elements: o.elements, ratios: o.ratios !== false, limit: num(o.limit, 'limit') };
+  const ratios = o.ratios === false ? 'none' : o.ratios === undefined || o.ratios === true ? 'extended' : o.ratios;
+  if (!(RATIO_SETTINGS as readonly string[]).includes(ratios)) throw fail({ code: 'USAGE', message: `--ratios takes extended, common or none, not '${ratios}'` });
+  const opts = {
+    ppm: num(o.ppm, 'ppm'),
+    ion: o.ion,
+    found: o.found,
+    tolerance: num(o.tolerance, 'tolerance'),
+    elements: o.elements,
+    ratios: ratios as (typeof RATIO_SETTINGS)[number],
+    limit: num(o.limit, 'limit'),
+  };
   if (opts.ppm !== undefined && opts.ppm > 1000) throw fail({ code: 'USAGE', message: `--ppm ${o.ppm} is too wide a window: at most 1000 ppm` });
-  if (opts.limit !== undefined && !Number.isInteger(opts.limit)) throw fail({ code: 'USAGE', message: `--limit takes a whole number, not '${o.limit}'` });
-  // options read once, before any input: a bad range or found value is a usage error
+  if (opts.limit !== undefined && (!Number.isInteger(opts.limit) || opts.limit > MAX_LIMIT)) throw fail({ code: 'USAGE', message: `--limit takes a whole number up to ${MAX_LIMIT}, not '${o.limit}'` });
+  if (o.ion !== undefined && o.molarMass) throw fail({ code: 'USAGE', message: '--ion says the masses are m/z values of that ion; --molar-mass says they are average molar masses of the neutral compound: drop one' });
+  // options read once, before any input: a bad range, ion or found value is a usage error
   usage(() => readRanges(opts.elements ?? DEFAULT_RANGES));
+  if (opts.ion !== undefined) usage(() => readIonNotation(opts.ion!));
   if (opts.found !== undefined) usage(() => readFound(opts.found!));
+  const limit = opts.limit ?? 50;
+  const withIon = opts.ion !== undefined;
+  const withFound = opts.found !== undefined;
+  const perCandidate = ['formula', ...(withIon ? ['mz'] : []), 'ppm', ...(withFound ? ['maxDeviation'] : []), 'score'];
+  const columns = ['input', 'ion', 'ratios', 'plausible', 'truncated'];
+  for (let k = 1; k <= limit; k++) for (const c of perCandidate) columns.push(`${c}_${k}`);
   return {
     compute: (mass) => {
-      const r = candidateFormulas(o.molarMass ? { ...opts, molarMass: mass } : { ...opts, mass });
-      if (o.foundNote) r.notes.unshift({ code: 'JOINED_ARGUMENTS', message: o.foundNote });
-      return r;
+      const progress = progressLine();
+      try {
+        const r = candidateFormulas(o.molarMass ? { ...opts, molarMass: mass, onProgress: progress.onProgress } : { ...opts, mass, onProgress: progress.onProgress });
+        if (o.foundNote) r.notes.unshift({ code: 'JOINED_ARGUMENTS', message: o.foundNote });
+        return r;
+      } finally {
+        progress.end();
+      }
     },
-    json: (r) => ({
-      input: r.input,
-      candidates: r.candidates.map((c) => ({ formula: c.formula, monoisotopicMass: c.monoisotopicMass, molarMass: c.molarMass, ppm: c.ppm, rdbe: c.rdbe, maxDeviation: c.maxDeviation })),
-      examined: r.examined,
-      truncated: r.truncated,
-      notes: r.notes.map((n) => n.message),
-    }),
+    json: (r) => candidatesJson(r),
     notes: (r) => r.notes.map((n) => n.message),
     noteItems: (r) => r.notes,
-    columns: ['input', 'candidates'],
-    cells: (r) => [r.input, r.candidates.map((c) => c.formula).join(' ')],
+    columns,
+    cells: (r) => {
+      const cells: (string | number)[] = [r.input, r.ion ?? '', r.ratios, r.plausible, r.truncated ? 'true' : 'false'];
+      for (let k = 0; k < limit; k++) {
+        const c = r.candidates[k];
+        if (!c) {
+          for (let j = 0; j < perCandidate.length; j++) cells.push('');
+          continue;
+        }
+        cells.push(c.formula);
+        if (withIon) cells.push(c.mz ?? '');
+        cells.push(c.ppm ?? '');
+        if (withFound) cells.push(c.maxDeviation ?? '');
+        cells.push(c.score);
+      }
+      return cells;
+    },
     block: (r) => {
-      const rows = r.candidates.map((c, i) => [i + 1, c.formula, c.monoisotopicMass.toFixed(5), c.ppm === null ? '' : c.ppm.toFixed(2), c.rdbe, c.maxDeviation === null ? '' : c.maxDeviation.toFixed(2)]);
-      const lines = [`${r.input}: ${r.candidates.length} candidate${r.candidates.length === 1 ? '' : 's'}${r.truncated ? ' shown (more fit: raise --limit)' : ''}, of ${r.examined} formulas in the window`];
-      if (rows.length) lines.push(fixedTable(['#', 'formula', 'monoisotopic u', 'ppm', 'RDBE', 'max dev %'], rows, ['right', 'left', 'right', 'right', 'right', 'right']));
+      const fixed = (x: number | null, d: number) => (x === null ? '' : x.toFixed(d));
+      const rows = r.candidates.map((c, i) => [
+        i + 1,
+        c.formula,
+        ...(r.ion ? [c.ionFormula ?? '', fixed(c.mz, 5)] : [fixed(c.monoisotopicMass, 5)]),
+        c.ppm === null ? fixed(c.molarMass, 3) : `${c.ppm >= 0 ? '+' : ''}${c.ppm.toFixed(2)}`,
+        c.rdbe === null ? '–' : c.rdbe,
+        ...(withFound ? [fixed(c.maxDeviation, 2)] : []),
+        c.score.toFixed(3),
+      ]);
+      const lines = [`${r.search}: ${r.candidates.length} candidate${r.candidates.length === 1 ? '' : 's'}${r.truncated ? ` shown of ${r.plausible} (raise --limit for more)` : ''}; ${r.examined} formulas in the window, ${r.ratios === 'none' ? 'no element-ratio limits' : `${r.ratios} element-ratio limits`}`];
+      const head = ['#', 'formula', ...(r.ion ? ['ion', 'm/z'] : ['monoisotopic u']), r.candidates[0]?.ppm === null ? 'molar mass' : 'ppm', 'RDBE', ...(withFound ? ['max dev %'] : []), 'score'];
+      if (rows.length) lines.push(fixedTable(head, rows, head.map((_, i) => (i === 1 || (r.ion && i === 2) ? 'left' : 'right'))));
       return lines.join('\n');
     },
   };
@@ -206,14 +271,16 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
   withOutputOptions(
     program
       .command('candidates')
-      .description('candidate formulas for an accurate mass and/or found percents, filtered for plausibility (RDBE, SENIOR, element ratios)')
-      .argument('[masses...]', 'neutral monoisotopic masses in u (or molar masses with --molar-mass)')
+      .description('candidate formulas for an accurate mass or m/z and/or found percents, any element, filtered for plausibility (RDBE, SENIOR, element ratios) and ranked by score')
+      .argument('[masses...]', 'neutral monoisotopic masses in u, or m/z values with --ion (or molar masses with --molar-mass)')
       .option('--ppm <ppm>', 'mass tolerance in ppm', '5')
+      .option('--ion <notation>', "the masses are m/z values of this ion: '[M+H]+', '[M+Na]+', '[M-H]-', '[M+2H]2+', …")
       .option('--molar-mass', 'the masses are average molar masses (window ±0.5 g/mol)')
       .option('--found <values>', 'found percents to match too: C=64.85,H=5.44,N=6.30 (unquoted C=64.85 H=5.44 also works)')
       .option('--tolerance <points>', 'allowed |found − calculated| in percentage points', '0.4')
-      .option('--elements <ranges>', 'element ranges', 'C0-80 H0-160 N0-10 O0-20 S0-4 P0-2 F0-6 Cl0-4 Br0-3 I0-2')
-      .option('--no-ratios', 'do not apply the element-ratio limits')
+      .option('--elements <ranges>', 'element ranges, any element (e.g. add Fe0-1 B0-2 Si0-2 Na0-1)', DEFAULT_RANGES)
+      .option('--ratios <set>', 'element-ratio ranges of Kind & Fiehn 2007: extended (default), common, or none', 'extended')
+      .option('--no-ratios', 'do not apply the element-ratio limits (as --ratios none)')
       .option('--limit <n>', 'most candidates to list', '50'),
   ).action((inputs: string[], o: CandidatesCliOptions, cmd: Command) => {
     const given = (name: string) => cmd.getOptionValueSource(name) === 'cli';
