@@ -38,9 +38,9 @@ import type { IonNotation } from '../ions/ion-notation.js';
  * Formulas a search may visit (the inner carbon-and-hydrogen steps plus the branches above them):
  * about a second of work on a 2-core laptop. A larger search is refused before it starts.
  */
-export const MAX_VISITS = 60_000_000;
-/** Branches counted by the up-front estimate before it gives up and refuses. */
-const MAX_ESTIMATE_BRANCHES = 4_000_000;
+export const MAX_VISITS = 100_000_000;
+/** Branches and leaves the up-front estimate counts before it gives up and refuses (a few tenths of a second). */
+const MAX_ESTIMATE_BRANCHES = 5_000_000;
 /** The cost of checking one formula in the window, in carbon steps (measured, roughly). */
 const CHECK_COST = 5;
 /** Most candidates a search returns. */
@@ -426,14 +426,14 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
   let branches = 0;
   let gaveUp = false;
   const count = (i: number, cum: number, cLow: number): void => {
+    if (++branches > MAX_ESTIMATE_BRANCHES) {
+      gaveUp = true;
+      return;
+    }
     if (i === iC) {
       const cFrom = Math.max(cLow, Math.ceil((lo - cum - hMaxMass) / mC - eps));
       const cTo = Math.min(max[iC], Math.floor((hi - cum - hMinMass) / mC + eps));
       if (cTo >= cFrom) estimate += (cTo - cFrom + 1) * perCarbon;
-      return;
-    }
-    if (++branches > MAX_ESTIMATE_BRANCHES) {
-      gaveUp = true;
       return;
     }
     const m = mass[i];
