@@ -46,7 +46,7 @@ describe('calculated against found', () => {
     const salt = composition('C17H19NO3·HCl');
     const found = salt.elements.filter((e) => e.symbol !== 'O').map((e) => `${e.symbol}=${e.massPercent.toFixed(2)}`).join(',');
     const r = analysis('C17H19NO3', found, { solvents: ['HCl', 'TFA', 'water'] });
-    expect(r.fits[0].formula).toBe('C17H19NO3·ClH');
+    expect(r.fits[0].formula).toBe('C17H19NO3·HCl');
   });
 
   it('rejects bad input with a clear message', () => {

@@ -44,3 +44,20 @@ describe('pondus analysis', () => {
     expect(pondus(['analysis', 'C6H6']).status).toBe(2); // no found values: a usage error
   });
 });
+
+describe('pondus analysis: report lines as written', () => {
+  it('writes the components and reads found values in the journal form', () => {
+    const r = pondus(['analysis', 'C11H15N·CF3COOH·0.5H2O', '--found', 'C, 54.77; H, 5.91; N, 4.90']);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toContain('Anal. Calcd for C11H15N·C2HF3O2·0.5H2O: C, 54.93; H, 6.03; N, 4.93. Found: C, 54.77; H, 5.91; N, 4.90.');
+  });
+
+  it('refuses a sheet cell holding two values, and analyses the other rows', () => {
+    const r = pondus(['analysis', '--sheet', '-', '--json'], 'id,formula,C,H\nJK-1,C20H25N3O,74.27 N=12.99,7.79\nJK-2,C20H25N3O,74.27,7.79\n');
+    expect(r.status).toBe(1);
+    const rows = jsonLines(r.stdout);
+    expect(rows[0].error.code).toBe('BAD_RECORD');
+    expect(rows[0].error.message).toContain('not one value');
+    expect(rows[1].pass).toBe(true);
+  });
+});

@@ -121,6 +121,7 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
     const sheetRow = o.sheetRows?.[input];
     if (sheetRow) {
       if (sheetRow.formula === '') throw fail({ code: 'BAD_RECORD', message: `row ${sheetRow.id || sheetRow.line} has no formula` }, input);
+      if (sheetRow.problem) throw fail({ code: 'BAD_RECORD', message: `row ${sheetRow.id || sheetRow.line}: ${sheetRow.problem}` }, input);
       return { result: analysis(sheetRow.formula, sheetRow.found, opts), id: sheetRow.id };
     }
     const m = splitTrailingValues(input);
@@ -164,7 +165,7 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
         const ok = d.abs().lte(r.tolerance);
         return [s, r.calculated.get(s)!.toFixed(2), r.foundText.get(s)!, `${d.isNegative() ? '' : '+'}${d.toFixed(2)}`, ok ? 'ok' : 'off'];
       });
-      const lines = [`${id ? `${id}: ` : ''}${r.formula}   tolerance ±${r.tolerance.toFixed(2)}`];
+      const lines = [`${id ? `${id}: ` : ''}${r.reportFormula}${r.reportFormula !== r.formula ? `  (${r.formula})` : ''}   tolerance ±${r.tolerance.toFixed(2)}`];
       lines.push(fixedTable(['element', 'calculated %', 'found %', 'deviation', ''], rows, ['left', 'right', 'right', 'right', 'left']));
       lines.push(`verdict: ${verdict(r)} (largest deviation ${r.maxDeviation.toFixed(2)})`);
       lines.push(r.reportLine);
@@ -173,7 +174,7 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
         for (const f of r.fits) lines.push(`  ${f.formula.padEnd(40)} largest deviation ${f.maxDeviation.toFixed(2)}  ${f.pass ? 'passes' : 'fails'}`);
         const best = r.fits.find((f) => f.pass && f.solvates.length > 0);
         if (best && !r.pass) lines.push(`  ${best.reportLine}`);
-        lines.push(`least-squares amounts: ${r.continuous.map((c) => `${c.amount.toFixed(2)} ${c.formula} (largest deviation ${c.maxDeviation.toFixed(2)})`).join('; ')}`);
+        lines.push(`least-squares amounts: ${r.continuous.map((c) => `${c.amount.toFixed(2)} ${c.written} (largest deviation ${c.maxDeviation.toFixed(2)})`).join('; ')}`);
       }
       return lines.join('\n');
     },
