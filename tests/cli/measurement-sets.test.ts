@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { jsonLines, pondus } from './run-cli.js';
+import { noteMessages } from '../support/notes.js';
 
 describe('KEY=VALUE sets typed without quotes', () => {
   it('empirical C=40.00 H=6.71 O=53.29 is one measurement set, and says so', () => {
@@ -8,7 +9,7 @@ describe('KEY=VALUE sets typed without quotes', () => {
     expect(r.status).toBe(0);
     const [j] = jsonLines(r.stdout);
     expect(j.empirical).toBe('CH2O');
-    expect(j.notes[0]).toContain('were read as one measurement set');
+    expect(noteMessages(j)[0]).toContain('were read as one measurement set');
   });
 
   it('a line of standard input with the same text as a joined set gets no joining note', () => {
@@ -145,7 +146,7 @@ describe('CSV and TSV carry the notes', () => {
   it('a notes column with CODE: message, joined by " | "', () => {
     const r = pondus(['empirical', '--csv', 'MgO=57.30 SiO2=42.70 O=rest']);
     const [head, row] = r.stdout.split('\n');
-    expect(head).toBe('input,empirical,molecular,residuals,alternatives,notes,error,message');
+    expect(head).toBe('input,id,empirical,molecular,multiple,empiricalMass,largestResidual,alternative_1,alternative_2,alternative_3,notes,error,message');
     expect(row).toContain('BY_DIFFERENCE: O by difference: 0 %');
     expect(row).toContain(' | COMPOUND_CONVERTED: ');
     expect(row).toContain(' | DIFFERENCE_ADDED: ');

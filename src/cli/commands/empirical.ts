@@ -17,7 +17,7 @@ import type { Presenter } from '../output/presenter.js';
 import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
-const residualText = (m: Map<string, number>) => [...m].map(([s, r]) => `${s} ${r >= 0 ? '+' : ''}${r.toFixed(3)}`).join(', ');
+const residualText = (m: Record<string, number>) => Object.entries(m).map(([s, r]) => `${s} ${r >= 0 ? '+' : ''}${r.toFixed(3)}`).join(', ');
 
 /** Runs a check of an option; its PondusError becomes a usage error (exit 2) with the same message. */
 function usage(check: () => unknown): void {
@@ -33,6 +33,7 @@ function usage(check: () => unknown): void {
 
 interface EmpiricalCliOptions extends OutputOptions {
   molarMass?: string;
+  tolerance?: string;
   sheet?: string;
   /** Inputs joined from single KEY=VALUE arguments, with the note saying so (set by the command). */
   joined?: Record<string, string>;
@@ -55,20 +56,26 @@ export function empiricalPresenter(o: EmpiricalCliOptions): Presenter<EmpiricalR
   if (o.molarMass !== undefined && o.sheetRows && Object.values(o.sheetRows).some((r) => r.molarMass !== undefined)) {
     throw fail({ code: 'USAGE', message: "the sheet has a molar-mass column and --molar-mass was given too: use one (the column for each row, or --molar-mass for all)" });
   }
+  const tolerance = o.tolerance === undefined ? undefined : Number(o.tolerance);
+  if (tolerance !== undefined && !(tolerance > 0 && tolerance <= 5)) throw fail({ code: 'USAGE', message: `--tolerance takes a number of percentage points above 0 and at most 5, not '${o.tolerance}'` });
   return {
     compute: (input) => {
       const row = o.sheetRows?.[input];
-      if (row) return { ...empirical(row.measurements, { molarMass: row.molarMass ?? o.molarMass }), id: row.id };
-      const r = empirical(input, { molarMass: o.molarMass });
+      if (row) return { ...empirical(row.measurements, { molarMass: row.molarMass ?? o.molarMass, tolerance }), id: row.id };
+      const r = empirical(input, { molarMass: o.molarMass, tolerance });
       const joined = takeJoinedNote(o.joined, input);
       if (joined) r.notes.unshift({ code: 'JOINED_ARGUMENTS', message: joined });
       return r;
     },
     json: (r) => (r.id !== undefined ? { id: r.id, ...empiricalJson(r) } : empiricalJson(r)),
-    columns: ['input', 'empirical', 'molecular', 'residuals', 'alternatives'],
-    cells: (r) => [r.input, r.empirical, r.molecular ?? '', residualText(r.fit.residuals), r.alternatives.map((a) => a.formula).join(' ')],
+    columns: ['input', 'id', 'empirical', 'molecular', 'multiple', 'empiricalMass', 'largestResidual', 'alternative_1', 'alternative_2', 'alternative_3'],
+    cells: (r) => {
+      const largest = Object.values(r.fit.residuals).reduce((a, x) => (Math.abs(x) > Math.abs(a) ? x : a), 0);
+      return [r.input, r.id ?? '', r.empirical, r.molecular ?? '', r.multiple ?? '', r.empiricalMass, largest, r.alternatives[0]?.formula ?? '', r.alternatives[1]?.formula ?? '', r.alternatives[2]?.formula ?? ''];
+    },
     block: (r) => {
-      const rows = hillOrder(r.percents.keys()).map((s) => [s, r.percents.get(s)!] as const).map(([s, p]) => [s, p.toFixed(3), `±${r.limits.get(s)!.toFixed(3)}`, (p + r.fit.residuals.get(s)!).toFixed(3), `${r.fit.residuals.get(s)! >= 0 ? '+' : ''}${r.fit.residuals.get(s)!.toFixed(3)}`]);
+      const sign = (x: number) => `${x >= 0 ? '+' : ''}${x.toFixed(3)}`;
+      const rows = hillOrder(Object.keys(r.percents)).map((s) => [s + (s === r.byDifference ? ' (by difference)' : ''), r.percents[s].toFixed(3), `±${r.limits[s].toFixed(3)}`, (r.percents[s] + r.fit.residuals[s]).toFixed(3), sign(r.fit.residuals[s])]);
       const lines = [`${r.id ? `${r.id}: ` : ''}${r.input}`, `empirical formula: ${r.empirical}  (${r.empiricalMass.toFixed(3)} g/mol)`];
       if (r.molecular) lines.push(`molecular formula: ${r.molecular}  (× ${r.multiple})`);
       lines.push(fixedTable(['element', 'measured %', 'limit', 'calculated %', 'residual'], rows, ['left', 'right', 'right', 'right', 'right']));
@@ -103,7 +110,7 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
       sample: displayQuantity(r.sample, 'g', rounding).text,
       elements: r.elements.map((e) => ({ symbol: e.symbol, mass: displayQuantity(e.mass, 'g', rounding).value.toNumber(), massDisplay: displayQuantity(e.mass, 'g', rounding).text, percent: e.percent.value.toNumber(), percentDisplay: displayQuantity(e.percent, undefined, rounding).figure, byDifference: e.byDifference })),
       empirical: r.empirical,
-      residuals: r.fit ? Object.fromEntries(r.fit.residuals) : null,
+      residuals: r.fit ? { ...r.fit.residuals } : null,
       alternatives: r.alternatives.map((a) => a.formula),
       notes: r.notes.map((n) => n.message),
     }),
@@ -242,7 +249,8 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
       .command('empirical')
       .description('empirical (and molecular) formula from mass percents or element masses')
       .argument('[measurements...]', "'C=40.00 H=6.71 O=53.29', 'Fe=34.97 g O=15.03 g', 'C=40.00 H=6.71 O=rest', oxides 'SiO2=42.70 MgO=57.30'; unquoted C=40.00 H=6.71 O=53.29 is one set; - reads one set per line (or a JSON object per line)")
-      .option('--molar-mass <M>', 'molar mass in g/mol (or a range such as 170-190) for the molecular formula')
+      .option('--molar-mass <M>', 'molar mass in g/mol (searched within ±1 %, or a range such as 170-190): the molecular formula is searched directly')
+      .option('--tolerance <points>', 'how far a calculated percent may be from the measured one, in percentage points (default 0.3, what combustion analysis is good to)')
       .option('--sheet <file>', "a CSV of measurements: element columns (C, H, N, …), optional id, 'sample' and 'molar mass' columns; - reads it from standard input"),
   ).action((inputs: string[], o: EmpiricalCliOptions) => {
     if (o.sheet !== undefined) return runWithSheet(run, 'empirical', inputs, o, stdin, readMeasurementSheet);
