@@ -63,10 +63,13 @@ export const SALT_ACIDS: ReadonlySet<string> = new Set(['ClH', 'BrH', 'HI', 'FH'
 export interface Fit {
   /** The formula with its solvates, as written in a report: 'C20H25N3O·0.5H2O'. */
   formula: string;
-  solvates: { formula: string; name: string | null; amount: Decimal }[];
-  calculated: Map<string, Decimal>;
-  deviation: Map<string, Decimal>;
-  maxDeviation: Decimal;
+  /** Each partner: Hill formula, as written, name, amount (number and exact text). */
+  solvates: { formula: string; written: string; name: string | null; amount: number; amountText: string }[];
+  /** Calculated percents, rounded to two decimals as reported, by element (Hill order). */
+  calculated: Record<string, number>;
+  /** found − calculated, exactly, by element. */
+  deviation: Record<string, number>;
+  maxDeviation: number;
   pass: boolean;
   reportLine: string;
 }
@@ -77,19 +80,25 @@ export interface AnalysisResult {
   formula: string;
   /** The formula as the report line writes it, component by component: 'C11H15N·C2HF3O2·0.5H2O'. */
   reportFormula: string;
-  calculated: Map<string, Decimal>;
-  /** Found values as given. */
-  found: Map<string, Decimal>;
-  foundText: Map<string, string>;
-  deviation: Map<string, Decimal>;
-  maxDeviation: Decimal;
+  /** Calculated percents, rounded to two decimals as reported, by element (Hill order). */
+  calculated: Record<string, number>;
+  /** Found values as given (numbers), and as written (at least two decimals). */
+  found: Record<string, number>;
+  foundText: Record<string, string>;
+  /** found − calculated, exactly, by element. */
+  deviation: Record<string, number>;
+  maxDeviation: number;
   pass: boolean;
-  tolerance: Decimal;
+  /** The tolerance, percentage points, and as written. */
+  tolerance: number;
+  toleranceText: string;
+  /** Whether each element is within the tolerance. */
+  within: Record<string, boolean>;
   reportLine: string;
   /** Best fits with solvates (the bare formula included), best first; empty without solvents. */
   fits: Fit[];
   /** The least-squares amount of each single partner. */
-  continuous: { formula: string; written: string; name: string | null; amount: Decimal; maxDeviation: Decimal }[];
+  continuous: { formula: string; written: string; name: string | null; amount: number; maxDeviation: number }[];
   notes: Note[];
 }
 
@@ -128,7 +137,7 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
     if (!offered[j]) notes.push({ code: 'PARTNER_NOT_OFFERED', message: `${p.written} is an acid that forms a salt with a basic site (nitrogen), and ${base.formula} has no nitrogen: it is not fitted` });
   });
 
-  let fits: Fit[] = [];
+  let exactFits: ExactFit[] = [];
   const continuous: AnalysisResult['continuous'] = [];
   if (partners.length > 0) {
     const step = options.step ?? 0.05;
@@ -143,7 +152,7 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
     const steps = partners.map((p) => (p.salt ? saltStep : step));
     const maxes = partners.map((p, j) => (!offered[j] ? 0 : p.salt ? Math.min(max, sites) : max));
     const candidates = searchSolvates(foundNums, baseVec, partnerVecs, steps, maxes, options.top ?? 5, partners.length <= 12);
-    fits = candidates.map((c) => {
+    exactFits = candidates.map((c) => {
       const used = c.amounts.map((a, j) => ({ a, j })).filter((x) => x.a > 0);
       return evaluateFit(
         written,
@@ -161,22 +170,25 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
       const x = continuousAmount(foundNums, baseVec, partnerVecs[j], maxes[j]);
       const amount = new Decimal(x.toFixed(3));
       const f = evaluateFit(written, base, [{ amount, partner: p, mass: partnerMasses[j] }], symbols, found, tolerance, textOf, rounding);
-      continuous.push({ formula: p.formula, written: p.written, name: p.name, amount, maxDeviation: f.maxDeviation });
+      continuous.push({ formula: p.formula, written: p.written, name: p.name, amount: amount.toNumber(), maxDeviation: f.maxDeviation.toNumber() });
     });
   }
+  const plain = plainFit(bare);
   return {
     input: formula,
     formula: base.formula,
     reportFormula: written,
-    calculated: bare.calculated,
-    found,
-    foundText: textOf,
-    deviation: bare.deviation,
-    maxDeviation: bare.maxDeviation,
+    calculated: plain.calculated,
+    found: Object.fromEntries(symbols.map((s) => [s, found.get(s)!.toNumber()])),
+    foundText: Object.fromEntries(symbols.map((s) => [s, textOf.get(s)!])),
+    deviation: plain.deviation,
+    maxDeviation: plain.maxDeviation,
     pass: bare.pass,
-    tolerance,
+    tolerance: tolerance.toNumber(),
+    toleranceText: tolerance.toFixed(),
+    within: Object.fromEntries(symbols.map((s) => [s, bare.deviation.get(s)!.abs().lte(tolerance)])),
     reportLine: bare.reportLine,
-    fits,
+    fits: exactFits.map(plainFit),
     continuous,
     notes,
   };
@@ -261,7 +273,32 @@ interface Used {
   mass: MassResult;
 }
 
-function evaluateFit(baseWritten: string, base: MassResult, used: Used[], symbols: readonly string[], found: Map<string, Decimal>, tolerance: Decimal, textOf: Map<string, string>, rounding: RoundingMode): Fit {
+/** A fit computed exactly, before it becomes plain data. */
+interface ExactFit {
+  formula: string;
+  solvates: { formula: string; written: string; name: string | null; amount: Decimal }[];
+  calculated: Map<string, Decimal>;
+  deviation: Map<string, Decimal>;
+  maxDeviation: Decimal;
+  pass: boolean;
+  reportLine: string;
+}
+
+/** The plain form of an exact fit: numbers are the shortest doubles of the exact decimals. */
+function plainFit(f: ExactFit): Fit {
+  const rec = (m: Map<string, Decimal>) => Object.fromEntries([...m].map(([k, v]) => [k, v.toNumber()]));
+  return {
+    formula: f.formula,
+    solvates: f.solvates.map((s) => ({ formula: s.formula, written: s.written, name: s.name, amount: s.amount.toNumber(), amountText: s.amount.toFixed() })),
+    calculated: rec(f.calculated),
+    deviation: rec(f.deviation),
+    maxDeviation: f.maxDeviation.toNumber(),
+    pass: f.pass,
+    reportLine: f.reportLine,
+  };
+}
+
+function evaluateFit(baseWritten: string, base: MassResult, used: Used[], symbols: readonly string[], found: Map<string, Decimal>, tolerance: Decimal, textOf: Map<string, string>, rounding: RoundingMode): ExactFit {
   let total = base.molarMass;
   const elementMass = new Map<string, Decimal>();
   for (const s of symbols) elementMass.set(s, exactMass(base, s));
@@ -284,7 +321,7 @@ function evaluateFit(baseWritten: string, base: MassResult, used: Used[], symbol
   const reportLine = `Anal. Calcd for ${formula}: ${list(new Map(symbols.map((s) => [s, calculated.get(s)!.toFixed(2)])))}. Found: ${list(textOf)}.`;
   return {
     formula,
-    solvates: used.map((u) => ({ formula: u.partner.formula, name: u.partner.name, amount: u.amount })),
+    solvates: used.map((u) => ({ formula: u.partner.formula, written: u.partner.written, name: u.partner.name, amount: u.amount })),
     calculated,
     deviation,
     maxDeviation,

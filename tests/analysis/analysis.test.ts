@@ -5,7 +5,7 @@ import { analysis } from '../../src/analysis/check.js';
 import { readSheet } from '../../src/analysis/lab-sheet.js';
 import { composition } from '../../src/composition/element-shares.js';
 
-const calcd = (f: string, found: string) => Object.fromEntries([...analysis(f, found).calculated].map(([k, v]) => [k, v.toFixed(2)]));
+const calcd = (f: string, found: string) => Object.fromEntries(Object.entries(analysis(f, found).calculated).map(([k, v]) => [k, v.toFixed(2)]));
 
 describe('calculated against found', () => {
   it.each([

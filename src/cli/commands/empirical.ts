@@ -112,7 +112,7 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
       empirical: r.empirical,
       residuals: r.fit ? { ...r.fit.residuals } : null,
       alternatives: r.alternatives.map((a) => a.formula),
-      notes: r.notes.map((n) => n.message),
+      notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
     }),
     noteItems: (r) => r.notes,
     columns: ['sample', 'empirical', 'percents'],
