@@ -46,7 +46,7 @@ describe('KEY=VALUE sets typed without quotes', () => {
     const j = jsonLines(r.stdout);
     expect(j).toHaveLength(1);
     expect(Object.keys(j[0].found)).toEqual(['C', 'H', 'N']);
-    expect(j[0].notes[0]).toContain('were read as one set of found values');
+    expect(noteMessages(j[0])[0]).toContain('were read as one set of found values');
   });
 
   it('analysis: values after a formula are its found values; with several formulas and --found, refused', () => {
@@ -78,7 +78,7 @@ describe('masses typed without quotes in combustion', () => {
     const j = jsonLines(r.stdout)[0];
     expect(j.empirical).toBe(quoted.empirical);
     expect(j.elements).toEqual(quoted.elements);
-    expect(j.notes[0]).toContain('--co2 1.499 g');
+    expect(noteMessages(j)[0]).toContain('--co2 1.499 g');
     const lone = pondus(['combustion', '1.000', 'g', 'g', '--co2', '1.499']);
     expect(lone.status).toBe(2);
   });
@@ -128,7 +128,7 @@ describe('option combinations: honoured, or refused with exit 2 naming the confl
 
   it('a batch line with its own found values says that --found was not used for it', () => {
     const r = jsonLines(pondus(['analysis', '--json', '--found', 'C=92.26', '-'], 'C9H8O4 C=60.21 H=4.42\nC6H6\n').stdout);
-    expect(r[0].notes[0]).toContain('its own found values');
+    expect(noteMessages(r[0])[0]).toContain('its own found values');
     expect(r[1].found).toEqual({ C: 92.26 });
   });
 
