@@ -33,6 +33,8 @@ export interface CombustionOptions {
 }
 
 export interface CombustionResult {
+  /** The sample mass as given. */
+  input: string;
   sample: Quantity;
   /** Mass and percent of each element, in the order C, H, N, S, halogens, O. */
   elements: { symbol: string; mass: Quantity; percent: Quantity; byDifference: boolean }[];
@@ -91,9 +93,9 @@ export function combustion(options: CombustionOptions): CombustionResult {
   } catch (e) {
     if (!(e instanceof PondusError) || e.first.code !== 'NO_FORMULA_FITS') throw e;
     notes.push({ code: 'NO_FORMULA_FITS', message: e.first.message });
-    return { sample, elements, empirical: null, fit: null, alternatives: [], notes };
+    return { input: options.sample, sample, elements, empirical: null, fit: null, alternatives: [], notes };
   }
-  return { sample, elements, empirical: s.best.formula, fit: s.best, alternatives: s.alternatives, notes };
+  return { input: options.sample, sample, elements, empirical: s.best.formula, fit: s.best, alternatives: s.alternatives, notes };
 }
 
 /** Non-throwing {@link combustion}. */

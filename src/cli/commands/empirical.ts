@@ -100,6 +100,8 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
   if (Object.keys(collected).length === 0) throw fail({ code: 'USAGE', message: `give the masses collected: --co2 (and --h2o, ${Object.keys(PRODUCTS).filter((k) => k !== 'co2' && k !== 'h2o').map((k) => `--${k}`).join(', ')})` });
   if (collected.co2 === undefined) throw fail({ code: 'USAGE', message: 'give the mass of CO2 collected (--co2): the carbon of the sample' });
   const rounding = roundingOf(o);
+  // one mass and one percent column per element collected, and O (by difference) last
+  const csvElements = [...Object.keys(collected).map((k) => PRODUCTS[k].element), 'O'];
   return {
     compute: (sample) => {
       const r = combustion({ sample, collected });
@@ -107,6 +109,7 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
       return r;
     },
     json: (r) => ({
+      input: r.input,
       sample: displayQuantity(r.sample, 'g', rounding).text,
       elements: r.elements.map((e) => ({ symbol: e.symbol, mass: displayQuantity(e.mass, 'g', rounding).value.toNumber(), massDisplay: displayQuantity(e.mass, 'g', rounding).text, percent: e.percent.value.toNumber(), percentDisplay: displayQuantity(e.percent, undefined, rounding).figure, byDifference: e.byDifference })),
       empirical: r.empirical,
@@ -115,11 +118,19 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
       notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
     }),
     noteItems: (r) => r.notes,
-    columns: ['sample', 'empirical', 'percents'],
-    cells: (r) => [displayQuantity(r.sample, 'g', rounding).text, r.empirical ?? '', r.elements.map((e) => `${e.symbol}=${displayQuantity(e.percent, undefined, rounding).figure}`).join(' ')],
+    columns: ['input', 'sample', 'empirical', ...csvElements.flatMap((e) => [`${e}_mass_g`, `${e}_percent`])],
+    cells: (r) => [
+      r.input,
+      displayQuantity(r.sample, 'g', rounding).text,
+      r.empirical ?? '',
+      ...csvElements.flatMap((s) => {
+        const e = r.elements.find((x) => x.symbol === s);
+        return e ? [displayQuantity(e.mass, 'g', rounding).figure, displayQuantity(e.percent, undefined, rounding).figure] : ['', ''];
+      }),
+    ],
     block: (r) => {
       const rows = r.elements.map((e) => [e.symbol + (e.byDifference ? ' (by difference)' : ''), displayQuantity(e.mass, 'g', rounding).figure, displayQuantity(e.percent, undefined, rounding).figure]);
-      return [`sample ${displayQuantity(r.sample, 'g', rounding).text}`, fixedTable(['element', 'mass g', 'mass %'], rows, ['left', 'right', 'right']), `empirical formula: ${r.empirical ?? 'none within the precision of the data (see the note)'}`, ...(r.alternatives.length ? [`also within the limits: ${r.alternatives.map((a) => a.formula).join(', ')}`] : [])].join('\n');
+      return [`sample ${displayQuantity(r.sample, 'g', rounding).text}`, fixedTable(['element', 'mass g', 'mass %'], rows, ['left', 'right', 'right']), `empirical formula: ${r.empirical ?? 'none within the limits of the data (see the note)'}`, ...(r.alternatives.length ? [`also within the limits: ${r.alternatives.map((a) => a.formula).join(', ')}`] : [])].join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
   };
