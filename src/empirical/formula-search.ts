@@ -99,6 +99,24 @@ export function plausible(symbols: readonly string[], counts: ArrayLike<number>)
   return r2 >= 0;
 }
 
+/**
+ * Whether a molecular formula of covalent elements has whole RDBE (an even valence sum: a
+ * closed-shell molecule); formulas with other elements are not judged.
+ *
+ * @example
+ * wholeRdbe(['C', 'H', 'N', 'O'], [18, 21, 1, 3]) // true
+ * wholeRdbe(['C', 'H', 'N', 'O'], [18, 22, 1, 3]) // false
+ */
+export function wholeRdbe(symbols: readonly string[], counts: ArrayLike<number>): boolean {
+  let sum = 0;
+  for (let i = 0; i < symbols.length; i++) {
+    const v = VALENCE[symbols[i]];
+    if (v === undefined) return true;
+    sum += counts[i] * v;
+  }
+  return sum % 2 === 0;
+}
+
 const gcd2 = (a: number, b: number): number => {
   while (b) [a, b] = [b, a % b];
   return a;
@@ -269,7 +287,8 @@ export const MAX_MOLECULAR_WORK = 400_000;
 
 /**
  * Searches molecular formulas directly: every set of counts whose molar mass lies in [lo, hi] and
- * whose percents fit within the limits, ranked by fit, then simplicity. Empty when none fits.
+ * whose percents fit within the limits (covalent formulas with whole, non-negative RDBE), ranked by
+ * fit, then simplicity. Empty when none fits.
  *
  * @example
  * searchMolecular(readMeasurements('C=72.15 H=7.12 N=4.72 O=rest'), 296.4, 302.4)[0].formula // 'C18H21NO3'
@@ -295,7 +314,7 @@ export function searchMolecular(m: Measurements, lo: number, hi: number, options
   const walk = (i: number, mass: number, atoms: number) => {
     if (mass > hi + 1e-9) return;
     if (i === k) {
-      if (mass < lo - 1e-9 || !plausible(symbols, counts)) return;
+      if (mass < lo - 1e-9 || !plausible(symbols, counts) || !wholeRdbe(symbols, counts)) return;
       const worst = score(data, counts, residuals);
       if (worst <= 1) fits.push(makeFit(data, counts, residuals, worst, atoms));
       return;
