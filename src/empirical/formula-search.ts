@@ -148,7 +148,8 @@ export function prepareData(m: Measurements, options: SearchOptions = {}): Prepa
   const limits = precision.map((p) => Math.max(p, tolerance));
   const d = m.elements.findIndex((e) => e.byDifference);
   if (d >= 0) limits[d] = Math.max(precision[d], limits.reduce((a, l, i) => (i === d ? a : a + l), 0));
-  return { symbols, percents, limits, weights: symbols.map(weight) };
+  // limits are derived figures: twelve significant digits are plenty (0.9, not 0.8999999999999999)
+  return { symbols, percents, limits: limits.map((l) => Number(l.toPrecision(12))), weights: symbols.map(weight) };
 }
 
 function makeFit(data: PreparedData, counts: ArrayLike<number>, residuals: ArrayLike<number>, worst: number, atoms: number): FormulaFit {

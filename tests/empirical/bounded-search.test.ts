@@ -34,3 +34,21 @@ describe('searches are bounded', () => {
     expect(empirical('C=72.15 H=7.12 N=4.72 O=rest', { molarMass: '299.4' }).molecular).toBe('C18H21NO3');
   });
 });
+
+describe('molecular formulas from a molar mass', () => {
+  it('goes straight to the molecular formula, and points to candidates when the data cannot decide', () => {
+    // glucose, C6H12O6: C 40.00, H 6.71 % (OpenStax Chemistry 2e §3.4, from memory); a range of molar masses holds several multiples
+    const one = empirical('C=40.0 H=6.7 O=rest', { molarMass: '180' });
+    expect(one.molecular).toBe('C6H12O6');
+    expect(one.multiple).toBe(6);
+    const wide = empirical('C=40.0 H=6.7 O=rest', { molarMass: '170-370' });
+    expect(wide.molecular).toBe('C6H12O6');
+    const note = wide.notes.find((n) => n.code === 'DATA_CANNOT_DECIDE');
+    expect(note?.message).toMatch(/C6H12O6, C7H14O7/);
+    expect(note?.message).toContain('pondus candidates');
+  });
+
+  it('keeps the limits as tidy numbers', () => {
+    expect(empirical('C=72.15 H=7.12 N=4.72 O=rest').limits.O).toBe(0.9);
+  });
+});
