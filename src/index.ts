@@ -94,6 +94,7 @@ export { empirical, safeEmpirical, empiricalJson, type EmpiricalResult, type Emp
 export { combustion, safeCombustion, PRODUCTS, type CombustionResult, type CombustionOptions } from './empirical/combustion.js';
 export { candidateFormulas, safeCandidateFormulas, candidateScore, rdbe, readRanges, DEFAULT_RANGES, RATIO_RANGES, MAX_VISITS, type Candidate, type CandidateResult, type CandidateOptions, type RatioRanges } from './empirical/candidates.js';
 export { candidatesJson } from './empirical/candidates-json.js';
+export { patternSimilarity, readPeaks, type MeasuredPeak } from './empirical/pattern-match.js';
 export { readMeasurementSheet, type MeasurementRow } from './empirical/measurement-sheet.js';
 export { readCsvSheet, elementColumns, type CsvSheet, type CsvRow } from './sheets/read-sheet.js';
 

@@ -22,6 +22,7 @@ export function candidatesJson(r: CandidateResult) {
       ppm: c.ppm,
       rdbe: c.rdbe,
       maxDeviation: c.maxDeviation,
+      patternSimilarity: c.patternSimilarity,
       score: c.score,
     })),
     examined: r.examined,

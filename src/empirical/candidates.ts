@@ -33,6 +33,7 @@ import { readFoundValues } from '../analysis/found-values.js';
 import { readNumber } from '../sigfig/read-number.js';
 import { readIonNotation } from '../ions/read-ion-notation.js';
 import type { IonNotation } from '../ions/ion-notation.js';
+import { patternSimilarity, readPeaks, type MeasuredPeak } from './pattern-match.js';
 
 /**
  * Formulas a search may visit (the inner carbon-and-hydrogen steps plus the branches above them):
@@ -43,6 +44,13 @@ export const MAX_VISITS = 100_000_000;
 const MAX_ESTIMATE_BRANCHES = 5_000_000;
 /** The cost of checking one formula in the window, in carbon steps (measured, roughly). */
 const CHECK_COST = 5;
+/**
+ * The pattern dissimilarity (1 − similarity) that counts as one allowance in the score: a pattern
+ * 90 % similar scores like a mass error of the whole ppm window (pondus's choice, documented).
+ */
+export const PATTERN_ALLOWANCE = 0.1;
+/** With a measured pattern, the best this many by mass and analysis are compared with it, then ranked again. */
+export const PATTERN_POOL = 200;
 /** Most candidates a search returns. */
 export const MAX_LIMIT = 1000;
 
@@ -70,6 +78,8 @@ export interface CandidateOptions {
   ratios?: RatioRanges | boolean;
   /** Most candidates to return (default 50). */
   limit?: number;
+  /** A measured isotope pattern, m/z:intensity pairs ('203.0526:100 204.0560:6.9'): adds the pattern term to the score. */
+  pattern?: string;
   /** Called now and then with the share of the search done (0–1); for progress displays. */
   onProgress?: (done: number) => void;
 }
@@ -93,6 +103,8 @@ export interface Candidate {
   rdbe: number | null;
   /** Largest |found − calculated| percent, when found values were given. */
   maxDeviation: number | null;
+  /** Similarity (0–1) of the measured isotope pattern to this candidate's, when a pattern was given. */
+  patternSimilarity: number | null;
   /** The ranking score: 0 for a perfect fit, 1 at the edge of every allowance (see {@link candidateScore}). */
   score: number;
 }
@@ -191,9 +203,11 @@ export function readRanges(text: string): Map<string, [number, number]> {
  * The ranking score of a candidate, in documented floating-point arithmetic: each error is divided
  * by its allowance — the ppm error by the ppm window (or the molar-mass difference by its window),
  * and each found-percent deviation by the tolerance — and the score is the root mean square of
- * the terms given, the analysis counting as one term (the RMS of its elements):
+ * the terms given, the analysis counting as one term (the RMS of its elements), and a measured
+ * isotope pattern one more, its dissimilarity over {@link PATTERN_ALLOWANCE}:
  *
- *   score = √((e_mass² + e_analysis²) / terms),  e_analysis = √(Σ (dev_i / tolerance)² / k)
+ *   score = √((e_mass² + e_analysis² + e_pattern²) / terms),
+ *   e_analysis = √(Σ (dev_i / tolerance)² / k),  e_pattern = (1 − similarity) / 0.1
  *
  * 0 is a perfect fit; every candidate within all allowances scores at most 1. Ties go to the
  * formula with fewer atoms, then to the Hill formula in alphabetical order.
@@ -202,9 +216,14 @@ export function readRanges(text: string): Map<string, [number, number]> {
  * candidateScore(1.5, 3, null, 0.4)          // 0.5
  * candidateScore(0, 3, [0.2, -0.2], 0.4)     // 0.3535533905932738
  */
-export function candidateScore(massError: number | null, massAllowance: number, deviations: ArrayLike<number> | null, tolerance: number): number {
+export function candidateScore(massError: number | null, massAllowance: number, deviations: ArrayLike<number> | null, tolerance: number, similarity: number | null = null): number {
   let sum = 0;
   let terms = 0;
+  if (similarity !== null) {
+    const e = (1 - similarity) / PATTERN_ALLOWANCE;
+    sum += e * e;
+    terms++;
+  }
   if (massError !== null) {
     const e = massError / massAllowance;
     sum += e * e;
@@ -459,7 +478,8 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
     });
   }
 
-  const heap = new TopK(limit);
+  const peaks = options.pattern !== undefined ? readPeaks(options.pattern) : null;
+  const heap = new TopK(peaks ? Math.max(limit, PATTERN_POOL) : limit);
   let examined = 0;
   let plausible = 0;
   let visits = 0;
@@ -589,8 +609,12 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
   walk(0, 0, cMinBase);
   if (options.onProgress) options.onProgress(1);
 
-  const candidates = heap.items.map((kept) => candidateOf(kept, symbols, notation, adduct, adductMass, found, foundSlots, read, tolerance, ppm, massTarget, molarTolerance));
+  let candidates = heap.items.map((kept) => candidateOf(kept, symbols, notation, adduct, adductMass, found, foundSlots, read, tolerance, ppm, massTarget, molarTolerance, peaks));
   candidates.sort((a, b) => a.score - b.score || atomCount(a) - atomCount(b) || (a.formula < b.formula ? -1 : a.formula > b.formula ? 1 : 0));
+  if (peaks) {
+    notes.push({ code: 'PATTERN_COMPARED', message: `the measured isotope pattern was compared with the best ${Math.min(PATTERN_POOL, plausible)} candidates by mass${read ? ' and analysis' : ''}, which were then ranked again with it` });
+    candidates = candidates.slice(0, limit);
+  }
   return {
     input: options.mass ?? options.molarMass ?? '',
     search: describe(options),
@@ -621,6 +645,7 @@ function candidateOf(
   ppm: number,
   massTarget: number | null,
   molarTolerance: number,
+  peaks: MeasuredPeak[] | null,
 ): Candidate {
   const order = hillOrder(symbols.filter((_, i) => kept.counts[i] > 0));
   const counts: Record<string, number> = {};
@@ -654,6 +679,15 @@ function candidateOf(
     }
   }
   const massError = ppmError !== null ? ppmError : molar.number - massTarget!;
+  let similarity: number | null = null;
+  if (peaks) {
+    const n = notation?.multiplier ?? 1;
+    const ionAtoms = new Map<string, number>();
+    for (const [s, k] of map) ionAtoms.set(s, k * n);
+    for (const [s, d] of adduct) ionAtoms.set(s, (ionAtoms.get(s) ?? 0) + d);
+    for (const [s, k] of ionAtoms) if (k === 0) ionAtoms.delete(s);
+    similarity = patternSimilarity(peaks, ionAtoms, calc.toNumber(), notation?.charge ?? 1);
+  }
   return {
     formula: hillFormula(map),
     counts,
@@ -664,7 +698,8 @@ function candidateOf(
     ppm: ppmError,
     rdbe: rdbe(counts),
     maxDeviation,
-    score: candidateScore(massError, found !== null ? ppm : molarTolerance, read ? deviations : null, tolerance),
+    patternSimilarity: similarity,
+    score: candidateScore(massError, found !== null ? ppm : molarTolerance, read ? deviations : null, tolerance, similarity),
   };
 }
 
@@ -673,6 +708,7 @@ function describe(o: CandidateOptions): string {
   if (o.mass !== undefined) parts.push(o.ion !== undefined ? `m/z ${o.mass} ${o.ion} ± ${o.ppm ?? 5} ppm` : `mass ${o.mass} ± ${o.ppm ?? 5} ppm`);
   if (o.molarMass !== undefined) parts.push(`molar mass ${o.molarMass} ± ${o.molarMassTolerance ?? 0.5}`);
   if (o.found) parts.push(`found ${o.found}`);
+  if (o.pattern) parts.push('measured pattern');
   return parts.join(', ');
 }
 

@@ -182,3 +182,28 @@ describe('candidates: numbers are the exact decimals', () => {
     );
   });
 });
+
+describe('candidates: a measured isotope pattern in the score', () => {
+  it('puts the dibromo compound first when its measured pattern is given', async () => {
+    const { isotopePattern } = await import('../../src/isotope-pattern/pattern.js');
+    const { patternSimilarity, readPeaks } = await import('../../src/empirical/pattern-match.js');
+    // 1,4-dibromo-2,5-dimethylbenzene-like C8H8Br2 as [M+H]+; the "measured" peaks are pondus's own
+    // aggregated pattern (CIAAW ICE 2013 abundances, AME2020 masses), rounded as a spectrum would print them
+    const p = isotopePattern('C8H8Br2', { ion: '[M+H]+' });
+    const mono = ionMass('C8H8Br2', '[M+H]+').mz.toFixed(4);
+    const peaks = p.peaks.filter((x) => x.relative >= 1).map((x) => `${x.mz.toFixed(4)}:${x.relative.toFixed(1)}`).join(' ');
+    const plain = candidateFormulas({ mass: mono, ion: '[M+H]+', ppm: 5, limit: 200 });
+    const withPattern = candidateFormulas({ mass: mono, ion: '[M+H]+', ppm: 5, limit: 200, pattern: peaks });
+    expect(formulas(withPattern)[0]).toBe('C8H8Br2');
+    expect(formulas(plain)[0]).not.toBe('C8H8Br2'); // the mass alone does not single it out
+    expect(withPattern.candidates[0].patternSimilarity!).toBeGreaterThan(0.99);
+    expect(withPattern.notes.map((n) => n.code)).toContain('PATTERN_COMPARED');
+    // Cl2: 35Cl 75.76 %, 37Cl 24.24 % (CIAAW ICE 2013, from memory) give 100 : 64.0 : 10.2
+    expect(patternSimilarity(readPeaks('69.9377:100 71.9348:64.0 73.9318:10.2'), new Map([['Cl', 2]]), 69.9377, 1)).toBeGreaterThan(0.99);
+    expect(patternSimilarity(readPeaks('69.9377:100 71.9348:5'), new Map([['Cl', 2]]), 69.9377, 1)).toBeLessThan(0.8);
+  });
+
+  it('scores the pattern term as (1 − similarity)/0.1', () => {
+    expect(candidateScore(null, 5, null, 0.4, 0.95)).toBeCloseTo(0.5, 12);
+  });
+});

@@ -4,6 +4,7 @@ import { fail } from '../../errors/pondus-error.js';
 import { candidateFormulas, DEFAULT_RANGES, MAX_LIMIT, readRanges, type CandidateResult } from '../../empirical/candidates.js';
 import { candidatesJson } from '../../empirical/candidates-json.js';
 import { readIonNotation } from '../../ions/read-ion-notation.js';
+import { readPeaks } from '../../empirical/pattern-match.js';
 import { readFound } from '../../analysis/found-values.js';
 import { PondusError } from '../../errors/pondus-error.js';
 import { combustion, PRODUCTS, type CombustionResult } from '../../empirical/combustion.js';
@@ -141,6 +142,7 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
 interface CandidatesCliOptions extends OutputOptions {
   ppm?: string;
   ion?: string;
+  pattern?: string;
   found?: string;
   tolerance?: string;
   elements?: string;
@@ -184,6 +186,7 @@ export function candidatesPresenter(o: CandidatesCliOptions): Presenter<Candidat
   const opts = {
     ppm: num(o.ppm, 'ppm'),
     ion: o.ion,
+    pattern: o.pattern,
     found: o.found,
     tolerance: num(o.tolerance, 'tolerance'),
     elements: o.elements,
@@ -197,10 +200,12 @@ export function candidatesPresenter(o: CandidatesCliOptions): Presenter<Candidat
   usage(() => readRanges(opts.elements ?? DEFAULT_RANGES));
   if (opts.ion !== undefined) usage(() => readIonNotation(opts.ion!));
   if (opts.found !== undefined) usage(() => readFound(opts.found!));
+  if (opts.pattern !== undefined) usage(() => readPeaks(opts.pattern!));
   const limit = opts.limit ?? 50;
+  const withPattern = opts.pattern !== undefined;
   const withIon = opts.ion !== undefined;
   const withFound = opts.found !== undefined;
-  const perCandidate = ['formula', ...(withIon ? ['mz'] : []), 'ppm', ...(withFound ? ['maxDeviation'] : []), 'score'];
+  const perCandidate = ['formula', ...(withIon ? ['mz'] : []), 'ppm', ...(withFound ? ['maxDeviation'] : []), ...(withPattern ? ['patternSimilarity'] : []), 'score'];
   const columns = ['input', 'ion', 'ratios', 'plausible', 'truncated'];
   for (let k = 1; k <= limit; k++) for (const c of perCandidate) columns.push(`${c}_${k}`);
   return {
@@ -230,6 +235,7 @@ export function candidatesPresenter(o: CandidatesCliOptions): Presenter<Candidat
         if (withIon) cells.push(c.mz ?? '');
         cells.push(c.ppm ?? '');
         if (withFound) cells.push(c.maxDeviation ?? '');
+        if (withPattern) cells.push(c.patternSimilarity ?? '');
         cells.push(c.score);
       }
       return cells;
@@ -243,10 +249,11 @@ export function candidatesPresenter(o: CandidatesCliOptions): Presenter<Candidat
         c.ppm === null ? fixed(c.molarMass, 3) : `${c.ppm >= 0 ? '+' : ''}${c.ppm.toFixed(2)}`,
         c.rdbe === null ? '–' : c.rdbe,
         ...(withFound ? [fixed(c.maxDeviation, 2)] : []),
+        ...(withPattern ? [fixed(c.patternSimilarity, 3)] : []),
         c.score.toFixed(3),
       ]);
       const lines = [`${r.search}: ${r.candidates.length} candidate${r.candidates.length === 1 ? '' : 's'}${r.truncated ? ` shown of ${r.plausible} (raise --limit for more)` : ''}; ${r.examined} formulas in the window, ${r.ratios === 'none' ? 'no element-ratio limits' : `${r.ratios} element-ratio limits`}`];
-      const head = ['#', 'formula', ...(r.ion ? ['ion', 'm/z'] : ['monoisotopic u']), r.candidates[0]?.ppm === null ? 'molar mass' : 'ppm', 'RDBE', ...(withFound ? ['max dev %'] : []), 'score'];
+      const head = ['#', 'formula', ...(r.ion ? ['ion', 'm/z'] : ['monoisotopic u']), r.candidates[0]?.ppm === null ? 'molar mass' : 'ppm', 'RDBE', ...(withFound ? ['max dev %'] : []), ...(withPattern ? ['pattern'] : []), 'score'];
       if (rows.length) lines.push(fixedTable(head, rows, head.map((_, i) => (i === 1 || (r.ion && i === 2) ? 'left' : 'right'))));
       return lines.join('\n');
     },
@@ -294,6 +301,7 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
       .argument('[masses...]', 'neutral monoisotopic masses in u, or m/z values with --ion (or molar masses with --molar-mass)')
       .option('--ppm <ppm>', 'mass tolerance in ppm', '5')
       .option('--ion <notation>', "the masses are m/z values of this ion: '[M+H]+', '[M+Na]+', '[M-H]-', '[M+2H]2+', …")
+      .option('--pattern <peaks>', "a measured isotope pattern as m/z:intensity pairs, '203.0526:100 204.0560:6.9', scored against each candidate's")
       .option('--molar-mass', 'the masses are average molar masses (window ±0.5 g/mol)')
       .option('--found <values>', 'found percents to match too: C=64.85,H=5.44,N=6.30 (unquoted C=64.85 H=5.44 also works)')
       .option('--tolerance <points>', 'allowed |found − calculated| in percentage points', '0.4')
