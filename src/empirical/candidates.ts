@@ -474,7 +474,7 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
   if (gaveUp || total > MAX_VISITS) {
     throw fail({
       code: 'SEARCH_TOO_LARGE',
-      message: `the search would visit ${gaveUp ? 'more than' : 'about'} ${(gaveUp ? MAX_VISITS : total).toLocaleString('en-US')} formulas (${describe(options)}), more than pondus answers within about a second (at most ${MAX_VISITS.toLocaleString('en-US')}): narrow the window (--ppm), the element ranges (--elements, e.g. fewer halogens or a smaller N and O range), or add found percents (--found)`,
+      message: `the search ${gaveUp ? `has more than ${MAX_ESTIMATE_BRANCHES.toLocaleString('en-US')} combinations of the other elements to walk before carbon and hydrogen` : `would visit about ${total.toLocaleString('en-US')} formulas`} (${describe(options)}), more than pondus answers within about a second (at most ${MAX_VISITS.toLocaleString('en-US')} formulas): narrow the window (--ppm), the element ranges (--elements, e.g. fewer halogens or a smaller N and O range), or add found percents (--found)`,
     });
   }
 
