@@ -1,13 +1,12 @@
 import type { AnalysisResult, Fit } from './check.js';
 
-const obj = (m: Map<string, { toNumber(): number }>) => Object.fromEntries([...m].map(([k, v]) => [k, v.toNumber()]));
-
 const fitJson = (f: Fit) => ({
   formula: f.formula,
-  solvates: f.solvates.map((s) => ({ formula: s.formula, name: s.name, amount: s.amount.toNumber() })),
-  maxDeviation: f.maxDeviation.toNumber(),
+  solvates: f.solvates.map((s) => ({ formula: s.formula, written: s.written, name: s.name, amount: s.amount })),
+  maxDeviation: f.maxDeviation,
   pass: f.pass,
-  calculated: obj(f.calculated),
+  calculated: { ...f.calculated },
+  deviation: { ...f.deviation },
   reportLine: f.reportLine,
 });
 
@@ -22,14 +21,16 @@ export function analysisJson(r: AnalysisResult, extra: Record<string, unknown> =
     ...extra,
     input: r.input,
     formula: r.formula,
-    calculated: obj(r.calculated),
-    found: obj(r.found),
-    deviation: obj(r.deviation),
-    maxDeviation: r.maxDeviation.toNumber(),
+    reportFormula: r.reportFormula,
+    calculated: { ...r.calculated },
+    found: { ...r.found },
+    deviation: { ...r.deviation },
+    maxDeviation: r.maxDeviation,
     pass: r.pass,
-    tolerance: r.tolerance.toNumber(),
+    tolerance: r.tolerance,
     reportLine: r.reportLine,
     fits: r.fits.map(fitJson),
-    continuous: r.continuous.map((c) => ({ formula: c.formula, name: c.name, amount: c.amount.toNumber(), maxDeviation: c.maxDeviation.toNumber() })),
+    continuous: r.continuous.map((c) => ({ formula: c.formula, written: c.written, name: c.name, amount: c.amount, maxDeviation: c.maxDeviation })),
+    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
   };
 }

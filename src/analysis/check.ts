@@ -21,6 +21,7 @@ import { SOLVENTS } from './solvents.js';
 import { readNumber } from '../sigfig/read-number.js';
 import { solventByName } from './solvents.js';
 import { continuousAmount, searchSolvates, type MassVector } from './solvate-fit.js';
+import { reportFormula } from './report-formula.js';
 
 export interface AnalysisOptions extends MassOptions {
   /** Allowed |found − calculated| in percentage points (default 0.4, the common journal rule). */
@@ -31,6 +32,8 @@ export interface AnalysisOptions extends MassOptions {
   step?: number;
   /** Largest amount of each partner (default 2). */
   max?: number;
+  /** Grid step for salt partners, the acids that protonate a basic site (default 0.5: whole or half amounts). */
+  saltStep?: number;
   /** How many fits to report (default 5). */
   top?: number;
   /** How calculated percents are rounded to two decimals (default half-even). */
@@ -42,16 +45,31 @@ export interface Partner {
   given: string;
   /** Its formula in Hill order. */
   formula: string;
+  /** Its formula as a report writes it (HCl, not ClH). */
+  written: string;
   name: string | null;
+  /** True for an acid that forms a salt with a basic site (HCl, TFA, H2SO4, …). */
+  salt: boolean;
 }
+
+/**
+ * Acids that form salts with a basic nitrogen, by Hill formula (common practice): the hydrogen
+ * halides, TFA, sulfuric, nitric, phosphoric, perchloric, tetrafluoroboric and hexafluorophosphoric
+ * acids, methane- and toluenesulfonic acids, and maleic/fumaric, oxalic, citric and tartaric acids.
+ * Acetic and formic acid are treated as solvents.
+ */
+export const SALT_ACIDS: ReadonlySet<string> = new Set(['ClH', 'BrH', 'HI', 'FH', 'C2HF3O2', 'H2O4S', 'HNO3', 'H3O4P', 'ClHO4', 'BF4H', 'F6HP', 'CH4O3S', 'C7H8O3S', 'C4H4O4', 'C2H2O4', 'C6H8O7', 'C4H6O6']);
 
 export interface Fit {
   /** The formula with its solvates, as written in a report: 'C20H25N3O·0.5H2O'. */
   formula: string;
-  solvates: { formula: string; name: string | null; amount: Decimal }[];
-  calculated: Map<string, Decimal>;
-  deviation: Map<string, Decimal>;
-  maxDeviation: Decimal;
+  /** Each partner: Hill formula, as written, name, amount (number and exact text). */
+  solvates: { formula: string; written: string; name: string | null; amount: number; amountText: string }[];
+  /** Calculated percents, rounded to two decimals as reported, by element (Hill order). */
+  calculated: Record<string, number>;
+  /** found − calculated, exactly, by element. */
+  deviation: Record<string, number>;
+  maxDeviation: number;
   pass: boolean;
   reportLine: string;
 }
@@ -60,19 +78,27 @@ export interface AnalysisResult {
   input: string;
   /** The compound's formula in Hill order. */
   formula: string;
-  calculated: Map<string, Decimal>;
-  /** Found values as given. */
-  found: Map<string, Decimal>;
-  foundText: Map<string, string>;
-  deviation: Map<string, Decimal>;
-  maxDeviation: Decimal;
+  /** The formula as the report line writes it, component by component: 'C11H15N·C2HF3O2·0.5H2O'. */
+  reportFormula: string;
+  /** Calculated percents, rounded to two decimals as reported, by element (Hill order). */
+  calculated: Record<string, number>;
+  /** Found values as given (numbers), and as written (at least two decimals). */
+  found: Record<string, number>;
+  foundText: Record<string, string>;
+  /** found − calculated, exactly, by element. */
+  deviation: Record<string, number>;
+  maxDeviation: number;
   pass: boolean;
-  tolerance: Decimal;
+  /** The tolerance, percentage points, and as written. */
+  tolerance: number;
+  toleranceText: string;
+  /** Whether each element is within the tolerance. */
+  within: Record<string, boolean>;
   reportLine: string;
   /** Best fits with solvates (the bare formula included), best first; empty without solvents. */
   fits: Fit[];
   /** The least-squares amount of each single partner. */
-  continuous: { formula: string; name: string | null; amount: Decimal; maxDeviation: Decimal }[];
+  continuous: { formula: string; written: string; name: string | null; amount: number; maxDeviation: number }[];
   notes: Note[];
 }
 
@@ -92,31 +118,44 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
   if (base.charge !== 0) throw fail({ code: 'BAD_MEASUREMENT', message: 'elemental analysis is of a neutral compound; give the whole salt, e.g. C12H14N2^2+ with its counter-ions' }, formula);
   const partners = (options.solvents ?? []).map((s) => partnerOf(s, options));
   const partnerMasses = partners.map((p) => formulaMass(p.formula, options));
-  for (const symbol of found.keys()) {
+  for (const [symbol, value] of found) {
+    if (value.isZero()) continue; // found 0.00: the compound has none, and the check says whether that fits
     if (!base.atoms.has(symbol) && !partnerMasses.some((m) => m.atoms.has(symbol))) {
       throw fail({ code: 'BAD_MEASUREMENT', message: `a found value for ${symbol}, which ${base.formula} does not contain${partners.length ? ' (nor any solvent given)' : ''}` }, foundText);
     }
   }
   const symbols = hillOrder(found.keys());
   const textOf = new Map(symbols.map((s) => [s, found.get(s)!.toFixed(Math.max(2, decimalsOf(read.text.get(s)!)))]));
-  const bare = evaluateFit(base.formula, base, [], symbols, found, tolerance, textOf, rounding);
+  const written = reportFormula(base.tree);
+  const bare = evaluateFit(written, base, [], symbols, found, tolerance, textOf, rounding);
   const notes: Note[] = [...base.notes, ...read.notes, ...impossibleNotes(base, partners, partnerMasses, symbols, found, tolerance, options)];
+  // salt partners only where the compound can take them: an acid needs a basic site, and a formula
+  // cannot tell an amine from an amide, so each N atom counts as one site (at most that many acids)
+  const sites = Number(base.atoms.get('N') ?? 0);
+  const offered = partners.map((p) => !p.salt || sites > 0);
+  partners.forEach((p, j) => {
+    if (!offered[j]) notes.push({ code: 'PARTNER_NOT_OFFERED', message: `${p.written} is an acid that forms a salt with a basic site (nitrogen), and ${base.formula} has no nitrogen: it is not fitted` });
+  });
 
-  let fits: Fit[] = [];
+  let exactFits: ExactFit[] = [];
   const continuous: AnalysisResult['continuous'] = [];
   if (partners.length > 0) {
     const step = options.step ?? 0.05;
     const max = options.max ?? 2;
     if (!(step > 0 && step <= max && max <= 20 && max / step <= 2000)) throw fail({ code: 'BAD_OPTION', message: `step ${step} and max ${max} make no sensible grid (0 < step ≤ max ≤ 20, at most 2000 steps)` });
+    const saltStep = options.saltStep ?? 0.5;
+    if (!(saltStep > 0 && saltStep <= 2)) throw fail({ code: 'BAD_OPTION', message: `the salt step ${saltStep} must be above 0 and at most 2` });
     const foundNums = symbols.map((s) => found.get(s)!.toNumber());
     const vec = (m: MassResult): MassVector => ({ masses: symbols.map((s) => exactMass(m, s).toNumber()), total: m.molarMass.toNumber() });
     const baseVec = vec(base);
     const partnerVecs = partnerMasses.map(vec);
-    const candidates = searchSolvates(foundNums, baseVec, partnerVecs, step, max, options.top ?? 5, partners.length <= 12);
-    fits = candidates.map((c) => {
+    const steps = partners.map((p) => (p.salt ? saltStep : step));
+    const maxes = partners.map((p, j) => (!offered[j] ? 0 : p.salt ? Math.min(max, sites) : max));
+    const candidates = searchSolvates(foundNums, baseVec, partnerVecs, steps, maxes, options.top ?? 5, partners.length <= 12);
+    exactFits = candidates.map((c) => {
       const used = c.amounts.map((a, j) => ({ a, j })).filter((x) => x.a > 0);
       return evaluateFit(
-        base.formula,
+        written,
         base,
         used.map((u) => ({ amount: new Decimal(u.a.toFixed(6)), partner: partners[u.j], mass: partnerMasses[u.j] })),
         symbols,
@@ -127,24 +166,29 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
       );
     });
     partners.forEach((p, j) => {
-      const x = continuousAmount(foundNums, baseVec, partnerVecs[j], max);
+      if (!offered[j]) return;
+      const x = continuousAmount(foundNums, baseVec, partnerVecs[j], maxes[j]);
       const amount = new Decimal(x.toFixed(3));
-      const f = evaluateFit(base.formula, base, [{ amount, partner: p, mass: partnerMasses[j] }], symbols, found, tolerance, textOf, rounding);
-      continuous.push({ formula: p.formula, name: p.name, amount, maxDeviation: f.maxDeviation });
+      const f = evaluateFit(written, base, [{ amount, partner: p, mass: partnerMasses[j] }], symbols, found, tolerance, textOf, rounding);
+      continuous.push({ formula: p.formula, written: p.written, name: p.name, amount: amount.toNumber(), maxDeviation: f.maxDeviation.toNumber() });
     });
   }
+  const plain = plainFit(bare);
   return {
     input: formula,
     formula: base.formula,
-    calculated: bare.calculated,
-    found,
-    foundText: textOf,
-    deviation: bare.deviation,
-    maxDeviation: bare.maxDeviation,
+    reportFormula: written,
+    calculated: plain.calculated,
+    found: Object.fromEntries(symbols.map((s) => [s, found.get(s)!.toNumber()])),
+    foundText: Object.fromEntries(symbols.map((s) => [s, textOf.get(s)!])),
+    deviation: plain.deviation,
+    maxDeviation: plain.maxDeviation,
     pass: bare.pass,
-    tolerance,
+    tolerance: tolerance.toNumber(),
+    toleranceText: tolerance.toFixed(),
+    within: Object.fromEntries(symbols.map((s) => [s, bare.deviation.get(s)!.abs().lte(tolerance)])),
     reportLine: bare.reportLine,
-    fits,
+    fits: exactFits.map(plainFit),
     continuous,
     notes,
   };
@@ -214,7 +258,7 @@ function partnerOf(given: string, options: MassOptions): Partner {
   const formulaText = named ? named.formula : given;
   try {
     const m = formulaMass(formulaText, options);
-    return { given, formula: m.formula, name: named ? named.name : null };
+    return { given, formula: m.formula, written: reportFormula(m.tree), name: named ? named.name : null, salt: SALT_ACIDS.has(m.formula) };
   } catch (e) {
     if (e instanceof PondusError && !named) {
       throw fail({ code: 'BAD_OPTION', message: `unknown solvent '${given}': give a name (water, DCM, chloroform, MeOH, EtOH, EtOAc, ether, THF, acetone, MeCN, DMF, DMSO, toluene, hexane, HCl, TFA, …) or a formula` }, given);
@@ -229,7 +273,32 @@ interface Used {
   mass: MassResult;
 }
 
-function evaluateFit(baseHill: string, base: MassResult, used: Used[], symbols: readonly string[], found: Map<string, Decimal>, tolerance: Decimal, textOf: Map<string, string>, rounding: RoundingMode): Fit {
+/** A fit computed exactly, before it becomes plain data. */
+interface ExactFit {
+  formula: string;
+  solvates: { formula: string; written: string; name: string | null; amount: Decimal }[];
+  calculated: Map<string, Decimal>;
+  deviation: Map<string, Decimal>;
+  maxDeviation: Decimal;
+  pass: boolean;
+  reportLine: string;
+}
+
+/** The plain form of an exact fit: numbers are the shortest doubles of the exact decimals. */
+function plainFit(f: ExactFit): Fit {
+  const rec = (m: Map<string, Decimal>) => Object.fromEntries([...m].map(([k, v]) => [k, v.toNumber()]));
+  return {
+    formula: f.formula,
+    solvates: f.solvates.map((s) => ({ formula: s.formula, written: s.written, name: s.name, amount: s.amount.toNumber(), amountText: s.amount.toFixed() })),
+    calculated: rec(f.calculated),
+    deviation: rec(f.deviation),
+    maxDeviation: f.maxDeviation.toNumber(),
+    pass: f.pass,
+    reportLine: f.reportLine,
+  };
+}
+
+function evaluateFit(baseWritten: string, base: MassResult, used: Used[], symbols: readonly string[], found: Map<string, Decimal>, tolerance: Decimal, textOf: Map<string, string>, rounding: RoundingMode): ExactFit {
   let total = base.molarMass;
   const elementMass = new Map<string, Decimal>();
   for (const s of symbols) elementMass.set(s, exactMass(base, s));
@@ -247,12 +316,12 @@ function evaluateFit(baseHill: string, base: MassResult, used: Used[], symbols: 
     deviation.set(s, d);
     if (d.abs().gt(maxDeviation)) maxDeviation = d.abs();
   }
-  const formula = baseHill + used.map((u) => `·${u.amount.eq(1) ? '' : u.amount.toFixed()}${u.partner.formula}`).join('');
+  const formula = baseWritten + used.map((u) => `·${u.amount.eq(1) ? '' : u.amount.toFixed()}${u.partner.written}`).join('');
   const list = (m: Map<string, string>) => symbols.map((s) => `${s}, ${m.get(s)}`).join('; ');
   const reportLine = `Anal. Calcd for ${formula}: ${list(new Map(symbols.map((s) => [s, calculated.get(s)!.toFixed(2)])))}. Found: ${list(textOf)}.`;
   return {
     formula,
-    solvates: used.map((u) => ({ formula: u.partner.formula, name: u.partner.name, amount: u.amount })),
+    solvates: used.map((u) => ({ formula: u.partner.formula, written: u.partner.written, name: u.partner.name, amount: u.amount })),
     calculated,
     deviation,
     maxDeviation,

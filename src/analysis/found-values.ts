@@ -30,7 +30,7 @@ export interface FoundValues {
  * readFoundValues('C=72.30, H=7.91, N=12.60').text.get('C') // '72.30'
  */
 export function readFoundValues(text: string): FoundValues {
-  const entries = readKeyValues(text, { colon: true, example: 'C=72.30,H=7.91,N=12.60' });
+  const entries = readKeyValues(fromJournalForm(text), { colon: true, example: 'C=72.30,H=7.91,N=12.60' });
   const values = new Map<string, Decimal>();
   const written = new Map<string, string>();
   const notes: Note[] = [];
@@ -48,6 +48,29 @@ export function readFoundValues(text: string): FoundValues {
   if (total.gt(FOUND_SUM_LIMIT)) throw fail({ code: 'BAD_MEASUREMENT', message: `the found values add up to ${total.toFixed()} %, over 100 % by more than any analysis error` }, text);
   if (total.gt(FOUND_SUM_WARNING)) notes.push({ code: 'SUM_OVER_100', message: `the found values add up to ${total.toFixed()} %, over 100 %: check them` });
   return { values, text: written, notes };
+}
+
+const JOURNAL_PAIR = /^\s*[A-Z][a-z]?\s*,\s*[-+]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)\s*%?\s*$/;
+
+/**
+ * Found values in the form journals print them, 'C, 74.77; H, 6.21; N, 4.50' (optionally after
+ * 'Found:' and with a closing full stop), rewritten as 'C= 74.77, H= 6.21, N= 4.50' with every
+ * character in its place, so that columns in messages still point into the text as given.
+ * Any other text is returned as it is.
+ *
+ * @example
+ * fromJournalForm('C, 74.77; H, 6.21; N, 4.50') // 'C= 74.77, H= 6.21, N= 4.50'
+ * fromJournalForm('Found: C, 74.77; H, 6.21.')   // '       C= 74.77, H= 6.21 '
+ */
+export function fromJournalForm(text: string): string {
+  if (text.length > 10_000 || !text.includes(',')) return text;
+  let t = text;
+  const lead = /^\s*Found\s*:/i.exec(t);
+  if (lead) t = ' '.repeat(lead[0].length) + t.slice(lead[0].length);
+  if (/\.\s*$/.test(t)) t = t.replace(/\.(\s*)$/, ' $1');
+  const pairs = t.split(';');
+  if (!pairs.every((p) => JOURNAL_PAIR.test(p))) return text;
+  return pairs.map((p) => p.replace(',', '=')).join(',');
 }
 
 /**

@@ -15,7 +15,12 @@ export interface SheetRow {
   formula: string;
   /** Found values as `C=72.30, H=7.91`. */
   found: string;
+  /** Why the row cannot be analysed as it stands (a cell holding more than one value), if so. */
+  problem?: string;
 }
+
+/** A found cell holds one value: a number, optionally with '%'. */
+const ONE_VALUE = /^\s*[-+]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)\s*%?\s*$/;
 
 /**
  * Reads a lab sheet. Rows keep their line numbers; a row's problems (no formula, a bad number)
@@ -31,14 +36,17 @@ export function readSheet(text: string): SheetRow[] {
   const idCol = columnIndex(header, /^(id|compound|sample|name)$/i);
   const elementCols = elementColumns(header);
   if (elementCols.length === 0) throw fail({ code: 'BAD_RECORD', message: 'the sheet has no element columns (C, H, N, S, …)' });
-  return rows.map(({ line, raw, cells }) => ({
-    line,
-    raw,
-    id: idCol >= 0 ? (cells[idCol] ?? '') : '',
-    formula: cells[formulaCol] ?? '',
-    found: elementCols
-      .filter(([, i]) => (cells[i] ?? '') !== '')
-      .map(([s, i]) => `${s}=${cells[i]}`)
-      .join(', '),
-  }));
+  return rows.map(({ line, raw, cells }) => {
+    const filled = elementCols.filter(([, i]) => (cells[i] ?? '') !== '');
+    const bad = filled.find(([, i]) => !ONE_VALUE.test(cells[i]));
+    const row: SheetRow = {
+      line,
+      raw,
+      id: idCol >= 0 ? (cells[idCol] ?? '') : '',
+      formula: cells[formulaCol] ?? '',
+      found: filled.map(([s, i]) => `${s}=${cells[i].trim()}`).join(', '),
+    };
+    if (bad) row.problem = `the ${bad[0]} cell holds '${cells[bad[1]]}', not one value: each element column holds one found percent`;
+    return row;
+  });
 }

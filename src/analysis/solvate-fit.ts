@@ -53,11 +53,16 @@ export const PARTNER_PENALTY = 0.05;
 const partnersIn = (c: Candidate) => c.amounts.filter((x) => x > 0).length;
 const rankScore = (c: Candidate) => c.maxDeviation + PARTNER_PENALTY * partnersIn(c);
 
+/** A rank score as reported: deviations are printed to 0.01, so fits equal at that figure are tied. */
+const reported = (c: Candidate) => Math.round(rankScore(c) * 100 + EPS);
+
+/** Ranks fits: by the rank score to the reported 0.01; ties go to the simpler fit (fewer partners, then less of them), then to the smaller sum of squares. */
 function better(a: Candidate, b: Candidate): number {
-  if (Math.abs(rankScore(a) - rankScore(b)) > EPS) return rankScore(a) - rankScore(b);
-  if (Math.abs(a.sumSquares - b.sumSquares) > EPS) return a.sumSquares - b.sumSquares;
+  if (reported(a) !== reported(b)) return reported(a) - reported(b);
   if (partnersIn(a) !== partnersIn(b)) return partnersIn(a) - partnersIn(b);
-  return a.amounts.reduce((s, x) => s + x, 0) - b.amounts.reduce((s, x) => s + x, 0);
+  const amount = a.amounts.reduce((s, x) => s + x, 0) - b.amounts.reduce((s, x) => s + x, 0);
+  if (Math.abs(amount) > EPS) return amount;
+  return a.sumSquares - b.sumSquares;
 }
 
 /**
@@ -68,10 +73,16 @@ function better(a: Candidate, b: Candidate): number {
  * const water = { masses: [0, 2.016], total: 18.015 }
  * searchSolvates([86.29, 7.97], base, [water], 0.05, 2, 5)[0].amounts // [0.5]
  */
-export function searchSolvates(found: number[], base: MassVector, partners: MassVector[], step: number, max: number, top: number, pairs = true): Candidate[] {
-  const grid: number[] = [];
-  const n = Math.round(max / step);
-  for (let k = 1; k <= n; k++) grid.push(Number((k * step).toFixed(6)));
+export function searchSolvates(found: number[], base: MassVector, partners: MassVector[], step: number | readonly number[], max: number | readonly number[], top: number, pairs = true): Candidate[] {
+  // one grid of amounts per partner: its step up to its largest amount
+  const grids = partners.map((_, j) => {
+    const st = typeof step === 'number' ? step : step[j];
+    const mx = typeof max === 'number' ? max : max[j];
+    const g: number[] = [];
+    const n = Math.round(mx / st + EPS);
+    for (let k = 1; k <= n; k++) g.push(Number((k * st).toFixed(6)));
+    return g;
+  });
   const best: Candidate[] = [];
   const consider = (amounts: number[]) => {
     const [maxDeviation, sumSquares] = score(found, percents(base, partners, amounts));
@@ -85,7 +96,7 @@ export function searchSolvates(found: number[], base: MassVector, partners: Mass
   const amounts = partners.map(() => 0);
   consider(amounts);
   for (let j = 0; j < partners.length; j++) {
-    for (const a of grid) {
+    for (const a of grids[j]) {
       amounts[j] = a;
       consider(amounts);
     }
@@ -94,8 +105,8 @@ export function searchSolvates(found: number[], base: MassVector, partners: Mass
   if (pairs) {
     for (let j = 0; j < partners.length; j++) {
       for (let k = j + 1; k < partners.length; k++) {
-        for (const a of grid) {
-          for (const b of grid) {
+        for (const a of grids[j]) {
+          for (const b of grids[k]) {
             amounts[j] = a;
             amounts[k] = b;
             consider(amounts);

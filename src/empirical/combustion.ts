@@ -33,6 +33,8 @@ export interface CombustionOptions {
 }
 
 export interface CombustionResult {
+  /** The sample mass as given. */
+  input: string;
   sample: Quantity;
   /** Mass and percent of each element, in the order C, H, N, S, halogens, O. */
   elements: { symbol: string; mass: Quantity; percent: Quantity; byDifference: boolean }[];
@@ -55,9 +57,13 @@ export function combustion(options: CombustionOptions): CombustionResult {
   if (sample.value.lte(0)) throw fail({ code: 'BAD_MEASUREMENT', message: 'the sample mass must be positive' });
   const hundred = quantity(exact(100), null);
   const elements: CombustionResult['elements'] = [];
+  if (options.collected === null || typeof options.collected !== 'object') throw fail({ code: 'BAD_OPTION', message: `give the masses collected as an object such as { co2: '0.2000 g', h2o: '0.0819 g' }` });
   for (const [key, text] of Object.entries(options.collected)) {
     if (text === undefined) continue;
-    const p = PRODUCTS[key];
+    // keys in lower case (co2, h2o, agcl); CO2 and AgCl as written are read the same way
+    const p = Object.hasOwn(PRODUCTS, key.toLowerCase()) ? PRODUCTS[key.toLowerCase()] : undefined;
+    if (!p) throw fail({ code: 'BAD_OPTION', message: `'${key}' is not a combustion product pondus knows: ${Object.keys(PRODUCTS).join(', ')}` });
+    if (typeof text !== 'string') throw fail({ code: 'BAD_OPTION', message: `the mass of ${p.formula} is written as text with its unit, such as '0.2000 g'` });
     const m = measureAs(text, [MASS], `the mass of ${p.formula}`, notes);
     if (m.value.isNegative()) throw fail({ code: 'BAD_MEASUREMENT', message: `the mass of ${p.formula} cannot be negative` });
     const f = conversionFactor(p.element, p.formula);
@@ -87,9 +93,9 @@ export function combustion(options: CombustionOptions): CombustionResult {
   } catch (e) {
     if (!(e instanceof PondusError) || e.first.code !== 'NO_FORMULA_FITS') throw e;
     notes.push({ code: 'NO_FORMULA_FITS', message: e.first.message });
-    return { sample, elements, empirical: null, fit: null, alternatives: [], notes };
+    return { input: options.sample, sample, elements, empirical: null, fit: null, alternatives: [], notes };
   }
-  return { sample, elements, empirical: s.best.formula, fit: s.best, alternatives: s.alternatives, notes };
+  return { input: options.sample, sample, elements, empirical: s.best.formula, fit: s.best, alternatives: s.alternatives, notes };
 }
 
 /** Non-throwing {@link combustion}. */

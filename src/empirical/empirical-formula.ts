@@ -3,91 +3,150 @@
  */
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
-import { Decimal } from '../exact/decimal.js';
 import { formulaMass } from '../mass/formula-mass.js';
-import { readMeasurements, type Measurements } from './measurements.js';
-import { searchFormula, type FormulaFit } from './formula-search.js';
+import { readMeasurements } from './measurements.js';
+import { DEFAULT_TOLERANCE, prepareData, searchFormula, searchMolecular, type FormulaFit } from './formula-search.js';
+import { hillOrder } from '../formula/hill.js';
 
 /** An empirical formula with more atoms than this gets a note: such a fit says more about the data's precision than about the compound. */
 export const LARGE_EMPIRICAL = 60;
+/** A single molar mass is searched within ±1 % (a molar mass from a colligative or MS measurement; common practice). */
+export const MOLAR_MASS_WINDOW = 0.01;
 
 export interface EmpiricalOptions {
   /** Molar mass (g/mol) or a range '170-190', for the molecular formula. */
   molarMass?: string;
+  /** Analysis tolerance, percentage points (default 0.3). */
+  tolerance?: number;
+}
+
+/** A compound key (an oxide) and the element values it was split into, as plain numbers. */
+export interface PlainConversion {
+  key: string;
+  formula: string;
+  value: number;
+  elements: Record<string, number>;
 }
 
 export interface EmpiricalResult {
   input: string;
-  measurements: Measurements;
   /** The empirical formula, Hill order. */
   empirical: string;
+  /** Its molar mass, g/mol (the exact sum as a number, and as text). */
+  empiricalMass: number;
+  empiricalMassText: string;
+  /** The fit of the formula reported (the molecular formula's, when one was found: the percents are the same). */
   fit: FormulaFit;
+  /** Other formulas that fit, best first (molecular formulas when a molar mass was given and one fits). */
   alternatives: FormulaFit[];
-  /** Measured percents (normalised for masses) and their limits. */
-  percents: Map<string, number>;
-  limits: Map<string, number>;
-  empiricalMass: Decimal;
-  /** The molecular formula, when a molar mass was given and it is a near-whole multiple. */
+  /** Measured percents (normalised for masses) and their limits, percentage points. */
+  percents: Record<string, number>;
+  limits: Record<string, number>;
+  /** The analysis tolerance used, percentage points. */
+  tolerance: number;
+  /** The element by difference, if any. */
+  byDifference: string | null;
+  /** The molecular formula, when a molar mass was given and a formula of that mass fits. */
   molecular: string | null;
   multiple: number | null;
+  conversions: PlainConversion[];
   notes: Note[];
 }
 
-function multiply(f: FormulaFit, k: number): string {
-  const m = new Map([...f.counts].map(([s, c]) => [s, c * k]));
-  return formulaMass([...m].map(([s, c]) => `${s}${c}`).join(''), { abbreviations: 'none' }).formula; // element symbols written by code
+function reduceFit(f: FormulaFit): { formula: string; multiple: number } {
+  const g = Object.values(f.counts).reduce((a, b) => gcd(a, b), 0);
+  if (g <= 1) return { formula: f.formula, multiple: 1 };
+  return { formula: formulaMass(Object.entries(f.counts).map(([s, c]) => `${s}${c / g}`).join(''), { abbreviations: 'none' }).formula, multiple: g };
+}
+
+const gcd = (a: number, b: number): number => (b ? gcd(b, a % b) : a);
+
+/** Reads --molar-mass: one value (searched within ±1 %) or a range. */
+function molarWindow(text: string): { lo: number; hi: number; text: string } {
+  const range = /^\s*([0-9.]+)\s*(?:-|–|\.\.)\s*([0-9.]+)\s*$/.exec(text);
+  if (range) {
+    const lo = Number(range[1]);
+    const hi = Number(range[2]);
+    if (!(lo > 0 && hi > lo && hi <= 100_000)) throw fail({ code: 'BAD_OPTION', message: `--molar-mass ${text}: a range goes from the lower to the higher molar mass, both above zero` });
+    return { lo, hi, text: `${range[1]}–${range[2]} g/mol` };
+  }
+  if (!/^\s*[0-9]+(\.[0-9]+)?\s*(g\/mol)?\s*$/.test(text)) throw fail({ code: 'BAD_OPTION', message: `--molar-mass takes a number of g/mol or a range such as 170-190, not '${text}'` });
+  const M = Number(text.replace(/g\/mol/, '').trim());
+  if (!(M > 0 && M <= 100_000)) throw fail({ code: 'BAD_OPTION', message: 'the molar mass must be positive (at most 100000 g/mol)' });
+  return { lo: M * (1 - MOLAR_MASS_WINDOW), hi: M * (1 + MOLAR_MASS_WINDOW), text: `${text.replace(/g\/mol/, '').trim()} g/mol ± 1 %` };
 }
 
 /**
- * The empirical formula of measurements, and the molecular formula for a molar mass.
+ * The empirical formula of measurements, and the molecular formula for a molar mass. With a molar
+ * mass, the molecular formula is searched directly (every formula of that mass whose percents fit),
+ * and when several fit equally well a note says an accurate mass decides (the candidates command).
  *
  * @example
  * empirical('C=40.00 H=6.71 O=53.29', { molarMass: '180.16' }).molecular // 'C6H12O6'
+ * empirical('C=72.15 H=7.12 N=4.72 O=rest', { molarMass: '299.4' }).molecular // 'C18H21NO3'
  */
 export function empirical(input: string, options: EmpiricalOptions = {}): EmpiricalResult {
   const m = readMeasurements(input);
-  const s = searchFormula(m);
-  const empiricalMass = formulaMass(s.best.formula, { abbreviations: 'none' }).molarMass; // a Hill formula: element symbols only
+  const tolerance = options.tolerance ?? DEFAULT_TOLERANCE;
+  const window = options.molarMass !== undefined ? molarWindow(options.molarMass) : null;
   const notes: Note[] = [];
   const d = m.difference;
   if (d) notes.push({ code: 'BY_DIFFERENCE', message: `${d.symbol} by difference: ${d.value.toFixed()}${m.kind === 'percent' ? ' %' : ' g'}` });
   notes.push(...(m.notes ?? []));
   let molecular: string | null = null;
   let multiple: number | null = null;
-  if (options.molarMass !== undefined) {
-    const range = /^\s*([0-9.]+)\s*(?:-|–|\.\.)\s*([0-9.]+)\s*$/.exec(options.molarMass);
-    if (range) {
-      const lo = new Decimal(range[1]);
-      const hi = new Decimal(range[2]);
-      const ks: number[] = [];
-      for (let k = 1; k <= 200; k++) {
-        const mk = empiricalMass.times(k);
-        if (mk.gte(lo) && mk.lte(hi)) ks.push(k);
-      }
-      if (ks.length === 0) throw fail({ code: 'NO_FORMULA_FITS', message: `no whole multiple of ${s.best.formula} (${empiricalMass.toFixed(3)} g/mol) lies between ${lo.toFixed()} and ${hi.toFixed()} g/mol` }, input);
-      if (ks.length > 1) notes.push({ code: 'SEVERAL_MULTIPLES', message: `several multiples fit the range: ${ks.map((k) => `×${k} (${multiply(s.best, k)})`).join(', ')}; the first is shown` });
-      multiple = ks[0];
-    } else {
-      if (!/^\s*[0-9]+(\.[0-9]+)?\s*(g\/mol)?\s*$/.test(options.molarMass)) throw fail({ code: 'BAD_OPTION', message: `--molar-mass takes a number of g/mol or a range such as 170-190, not '${options.molarMass}'` });
-      const M = new Decimal(options.molarMass.replace(/g\/mol/, '').trim());
-      if (M.lte(0)) throw fail({ code: 'BAD_OPTION', message: 'the molar mass must be positive' });
-      const n = M.div(empiricalMass);
-      const k = Math.max(1, Math.round(n.toNumber()));
-      const off = n.minus(k).abs().div(k);
-      if (off.gt('0.05')) {
-        notes.push({ code: 'NOT_A_MULTIPLE', message: `${M.toFixed()} g/mol is ${n.toFixed(2)} × ${empiricalMass.toFixed(3)} g/mol, not near a whole multiple: no molecular formula` });
-      } else {
-        multiple = k;
-        if (off.gt('0.01')) notes.push({ code: 'ROUGH_MULTIPLE', message: `${M.toFixed()} g/mol is ${n.toFixed(3)} × the empirical formula mass; taken as ×${k}` });
-      }
+  let fit: FormulaFit;
+  let alternatives: FormulaFit[];
+  let empiricalFormula: string;
+  const data = prepareData(m, { tolerance });
+  const rec = (a: number[]) => Object.fromEntries(hillOrder(data.symbols).map((s) => [s, a[data.symbols.indexOf(s)]]));
+  const percents = rec(data.percents);
+  const limits = rec(data.limits);
+  const mol = window ? searchMolecular(m, window.lo, window.hi, { tolerance }) : [];
+  if (window && mol.length > 0) {
+    fit = mol[0];
+    alternatives = mol.slice(1, 6);
+    molecular = fit.formula;
+    const r = reduceFit(fit);
+    empiricalFormula = r.formula;
+    multiple = r.multiple;
+    const tied = mol.filter((f) => f.grade === fit.grade);
+    if (tied.length > 1) {
+      notes.push({
+        code: 'DATA_CANNOT_DECIDE',
+        message: `${tied.length} molecular formulas of ${window.text} fit the data about equally well (${tied.slice(0, 4).map((f) => f.formula).join(', ')}${tied.length > 4 ? ', …' : ''}); the simplest is shown. The analysis cannot decide between them; an accurate mass can: pondus candidates M/Z --ion '[M+H]+' --found '${hillOrder(data.symbols).map((s) => `${s}=${percents[s].toFixed(2)}`).join(' ')}'`,
+      });
     }
-    if (multiple !== null) molecular = multiply(s.best, multiple);
+  } else {
+    const s = searchFormula(m, { tolerance });
+    fit = s.best;
+    alternatives = s.alternatives;
+    empiricalFormula = s.best.formula;
+    if (window) {
+      const em = formulaMass(empiricalFormula, { abbreviations: 'none' }).molarMass.toNumber();
+      notes.push({ code: 'NOT_A_MULTIPLE', message: `no formula of ${window.text} fits the data within the limits (the empirical formula ${empiricalFormula} is ${em.toFixed(3)} g/mol; ${(window.lo / em).toFixed(2)}–${(window.hi / em).toFixed(2)} × that): no molecular formula; check the molar mass, or search near a measured mass with the candidates command` });
+    }
   }
-  const atoms = [...s.best.counts.values()].reduce((a, b) => a + b, 0);
-  if (atoms > LARGE_EMPIRICAL) {
-    notes.push({ code: 'LARGE_FORMULA', message: `the smallest formula within the limits has ${atoms} atoms: the values are given more precisely than an analysis usually is (about ±0.3 points for combustion analysis, common practice), or the compound is not what the values suggest; check them, or search near a measured mass with the candidates command` });
+  const massResult = formulaMass(empiricalFormula, { abbreviations: 'none' }); // a Hill formula: element symbols only
+  if (fit.atoms > LARGE_EMPIRICAL && molecular === null) {
+    notes.push({ code: 'LARGE_FORMULA', message: `the simplest formula within the limits has ${fit.atoms} atoms: the compound is not what the values suggest, or they are off; check them, or search near a measured mass with the candidates command` });
   }
-  return { input, measurements: m, empirical: s.best.formula, fit: s.best, alternatives: s.alternatives, percents: s.percents, limits: s.limits, empiricalMass, molecular, multiple, notes };
+  return {
+    input,
+    empirical: empiricalFormula,
+    empiricalMass: massResult.molarMass.toNumber(),
+    empiricalMassText: massResult.molarMass.toFixed(),
+    fit,
+    alternatives,
+    percents,
+    limits,
+    tolerance,
+    byDifference: d ? d.symbol : null,
+    molecular,
+    multiple,
+    conversions: (m.conversions ?? []).map((c) => ({ key: c.key, formula: c.formula, value: c.value.toNumber(), elements: Object.fromEntries(c.parts.map((p) => [p.symbol, p.value.toNumber()])) })),
+    notes,
+  };
 }
 
 /** Non-throwing {@link empirical}. */
@@ -95,21 +154,27 @@ export function safeEmpirical(input: string, options: EmpiricalOptions = {}): Sa
   return toSafe(() => empirical(input, options));
 }
 
-/** The stable JSON shape of an empirical result (contract keys `empirical`, `molecular`). */
+/**
+ * The JSON object `pondus empirical --json` writes (contract keys `empirical`, `molecular`).
+ *
+ * @example
+ * empiricalJson(empirical('C=40.00 H=6.71 O=53.29')).empirical // 'CH2O'
+ */
 export function empiricalJson(r: EmpiricalResult) {
-  const obj = (m: Map<string, number>) => Object.fromEntries(m);
   return {
     input: r.input,
     empirical: r.empirical,
     molecular: r.molecular,
     multiple: r.multiple,
-    empiricalMass: r.empiricalMass.toNumber(),
-    percents: obj(r.percents),
-    residuals: obj(r.fit.residuals),
-    alternatives: r.alternatives.map((a) => ({ formula: a.formula, residuals: obj(a.residuals) })),
-    notes: r.notes.map((n) => n.message),
-    ...(r.measurements.conversions?.length
-      ? { conversions: r.measurements.conversions.map((c) => ({ key: c.key, formula: c.formula, value: c.value.toNumber(), elements: Object.fromEntries(c.parts.map((p) => [p.symbol, p.value.toNumber()])) })) }
-      : {}),
+    empiricalMass: r.empiricalMass,
+    percents: { ...r.percents },
+    limits: { ...r.limits },
+    tolerance: r.tolerance,
+    residuals: { ...r.fit.residuals },
+    grade: r.fit.grade,
+    alternatives: r.alternatives.map((a) => ({ formula: a.formula, residuals: { ...a.residuals }, grade: a.grade })),
+    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    ...(r.conversions.length ? { conversions: r.conversions.map((c) => ({ ...c, elements: { ...c.elements } })) } : {}),
   };
 }
+

@@ -1,23 +1,40 @@
 /**
- * The empirical formula from measurements, by a tolerance-aware search for
- * small whole-number counts — never by rounding mole ratios. Each measured
- * percent is known to half a unit in its last digit (40.00 % to ±0.005 %);
- * the search returns the smallest formula whose calculated percents all lie
- * within those limits, and lists other formulas that fit too.
+ * The empirical formula from measurements, by a tolerance-aware search for small whole-number
+ * counts — never by rounding mole ratios.
+ *
+ * Each calculated percent must lie within a limit of the measured one: the analysis tolerance
+ * (±0.3 percentage points by default, what a combustion analysis is good to; common practice), or
+ * the precision of the written value when that is coarser (half a unit in its last digit, plus
+ * 3 × 10⁻⁴ of the value and 0.001 points for data computed with other atomic-weight tables). An
+ * element by difference carries the errors of all the others: its limit is their sum.
+ *
+ * Ranking: by fit, then by simplicity. The fit is graded in thirds of the limit (worst
+ * |residual|/limit ≤ ⅓, ≤ ⅔, ≤ 1), because within a grade a better fit is noise, not evidence; within
+ * a grade the formula with fewer atoms wins, then the closer fit. The search stops at small ratios:
+ * the reference element (the least abundant by moles) goes up from 1, and the search ends once
+ * formulas would have more than 2.5 times the atoms of the smallest fit, or more than
+ * {@link MAX_EMPIRICAL_ATOMS} atoms, so a formula of hundreds of atoms never comes back when a
+ * simple one fits. An element within its limit of zero (H=0.01 at ±0.3) is refused: the data
+ * cannot fix its count.
+ *
+ * Scoring uses plain numbers on preallocated arrays; objects are made only for formulas that fit.
  */
 import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
 import { getAtomData } from '../elements/atom-data.js';
-import { hillFormula } from '../formula/hill.js';
-import { gcd } from '../reactions/rational.js';
+import { hillFormula, hillOrder } from '../formula/hill.js';
 import type { Measurements } from './measurements.js';
 
 /** Largest count of the reference (least abundant) element searched. */
 export const MAX_SCALE = 60;
+/** Largest empirical formula searched, in atoms. */
+export const MAX_EMPIRICAL_ATOMS = 150;
+/** Default analysis tolerance, percentage points (combustion analysis is good to about ±0.3; common practice). */
+export const DEFAULT_TOLERANCE = 0.3;
 /**
- * Slack added to every limit, for data computed with other atomic-weight tables
- * (O 16.00 or 15.9994, H 1.00794, …): relative differences of up to about
- * 3 × 10⁻⁴ in a percent, plus 0.001 percentage points.
+ * Slack added to a precision limit, for data computed with other atomic-weight tables
+ * (O 16.00 or 15.9994, H 1.00794, …): relative differences of up to about 3 × 10⁻⁴ in a
+ * percent, plus 0.001 percentage points.
  */
 export const RELATIVE_SLACK = 0.0003;
 export const ABSOLUTE_SLACK = 0.001;
@@ -25,39 +42,35 @@ export const ABSOLUTE_SLACK = 0.001;
 export interface FormulaFit {
   /** Hill formula. */
   formula: string;
-  counts: Map<string, number>;
+  /** Atom counts by element, Hill order. */
+  counts: Record<string, number>;
   /** Calculated − measured, percentage points, per element. */
-  residuals: Map<string, number>;
+  residuals: Record<string, number>;
   /** Largest |residual| as a fraction of that element's limit (≤ 1 fits). */
   worst: number;
+  /** 1, 2 or 3: the third of the limit the worst residual falls in (1 is the best). */
+  grade: number;
+  /** Atoms in the formula. */
+  atoms: number;
+}
+
+export interface SearchOptions {
+  /** Analysis tolerance, percentage points (default 0.3). */
+  tolerance?: number;
 }
 
 export interface SearchResult {
   /** Measured mass percents used (normalised for masses). */
-  percents: Map<string, number>;
+  percents: Record<string, number>;
   /** Their limits, percentage points. */
-  limits: Map<string, number>;
+  limits: Record<string, number>;
   best: FormulaFit;
-  /** Other formulas that fit (larger, not multiples of the best), best first. */
+  /** Other formulas that fit (not multiples of the best), best first. */
   alternatives: FormulaFit[];
 }
 
 function weight(symbol: string): number {
   return Number(getAtomData(symbol, null)!.average.standard.text);
-}
-
-function fitOf(symbols: string[], counts: number[], percents: number[], limits: number[]): FormulaFit {
-  const masses = counts.map((c, i) => c * weight(symbols[i]));
-  const total = masses.reduce((a, b) => a + b, 0);
-  const residuals = new Map<string, number>();
-  let worst = 0;
-  masses.forEach((m, i) => {
-    const r = (100 * m) / total - percents[i];
-    residuals.set(symbols[i], r);
-    worst = Math.max(worst, Math.abs(r) / limits[i]);
-  });
-  const map = new Map(symbols.map((s, i) => [s, counts[i]]));
-  return { formula: hillFormula(map), counts: map, residuals, worst };
 }
 
 /** Count combinations a formula search may visit: about a second of work. */
@@ -76,7 +89,7 @@ const VALENCE: Readonly<Record<string, number>> = { C: 4, Si: 4, N: 3, P: 3, B: 
  * plausible(['C', 'H', 'O'], [2, 6, 1])       // true (ethanol)
  * plausible(['C', 'H', 'O'], [100, 299, 50])  // false (more H than any molecule of 100 C can hold)
  */
-export function plausible(symbols: readonly string[], counts: readonly number[]): boolean {
+export function plausible(symbols: readonly string[], counts: ArrayLike<number>): boolean {
   let r2 = 2;
   for (let i = 0; i < symbols.length; i++) {
     const v = VALENCE[symbols[i]];
@@ -86,85 +99,232 @@ export function plausible(symbols: readonly string[], counts: readonly number[])
   return r2 >= 0;
 }
 
-function reduce(counts: number[]): number[] {
-  let g = 0n;
-  for (const c of counts) g = gcd(g, BigInt(c));
-  return g > 1n ? counts.map((c) => c / Number(g)) : counts;
+/**
+ * Whether a molecular formula of covalent elements has whole RDBE (an even valence sum: a
+ * closed-shell molecule); formulas with other elements are not judged.
+ *
+ * @example
+ * wholeRdbe(['C', 'H', 'N', 'O'], [18, 21, 1, 3]) // true
+ * wholeRdbe(['C', 'H', 'N', 'O'], [18, 22, 1, 3]) // false
+ */
+export function wholeRdbe(symbols: readonly string[], counts: ArrayLike<number>): boolean {
+  let sum = 0;
+  for (let i = 0; i < symbols.length; i++) {
+    const v = VALENCE[symbols[i]];
+    if (v === undefined) return true;
+    sum += counts[i] * v;
+  }
+  return sum % 2 === 0;
 }
+
+const gcd2 = (a: number, b: number): number => {
+  while (b) [a, b] = [b, a % b];
+  return a;
+};
+
+/** Percents and limits of a measurement set, as plain numbers. */
+export interface PreparedData {
+  symbols: string[];
+  percents: number[];
+  limits: number[];
+  weights: number[];
+}
+
+/**
+ * The percents and their limits: max(tolerance, the precision of the value); the element by difference gets the sum of the others' limits.
+ *
+ * @example
+ * prepareData(readMeasurements('C=40.00 H=6.71 O=53.29')).limits // [0.3, 0.3, 0.3]
+ */
+export function prepareData(m: Measurements, options: SearchOptions = {}): PreparedData {
+  const tolerance = options.tolerance ?? DEFAULT_TOLERANCE;
+  if (!(tolerance > 0 && tolerance <= 5)) throw fail({ code: 'BAD_OPTION', message: `the tolerance must be above 0 and at most 5 percentage points, not ${tolerance}` });
+  const symbols = m.elements.map((e) => e.symbol);
+  const values = m.elements.map((e) => e.value!);
+  const total = m.kind === 'percent' ? new Decimal(100) : values.reduce((a, b) => a.plus(b), new Decimal(0));
+  const percents = values.map((v) => (m.kind === 'percent' ? v.toNumber() : v.div(total).times(100).toNumber()));
+  if (percents.some((p) => p <= 0)) throw fail({ code: 'BAD_MEASUREMENT', message: 'every element must be present (a value above zero)' });
+  const precision = m.elements.map((e, i) => (m.kind === 'percent' ? e.halfUnit.toNumber() : e.halfUnit.div(total).times(100).toNumber() * 2) + RELATIVE_SLACK * percents[i] + ABSOLUTE_SLACK);
+  const limits = precision.map((p) => Math.max(p, tolerance));
+  const d = m.elements.findIndex((e) => e.byDifference);
+  if (d >= 0) limits[d] = Math.max(precision[d], limits.reduce((a, l, i) => (i === d ? a : a + l), 0));
+  // limits are derived figures: twelve significant digits are plenty (0.9, not 0.8999999999999999)
+  return { symbols, percents, limits: limits.map((l) => Number(l.toPrecision(12))), weights: symbols.map(weight) };
+}
+
+function makeFit(data: PreparedData, counts: ArrayLike<number>, residuals: ArrayLike<number>, worst: number, atoms: number): FormulaFit {
+  const map = new Map<string, number>();
+  data.symbols.forEach((s, i) => map.set(s, counts[i]));
+  const order = hillOrder(map.keys());
+  const c: Record<string, number> = {};
+  const r: Record<string, number> = {};
+  for (const s of order) {
+    const i = data.symbols.indexOf(s);
+    c[s] = counts[i];
+    r[s] = residuals[i];
+  }
+  return { formula: hillFormula(map, 0, order), counts: c, residuals: r, worst, grade: gradeOf(worst), atoms };
+}
+
+/** The third of the limit a fit's worst residual falls in: 1, 2 or 3. */
+export const gradeOf = (worst: number): number => (worst <= 1 / 3 + 1e-12 ? 1 : worst <= 2 / 3 + 1e-12 ? 2 : 3);
+
+/** Fit first (by grade), then simplicity (fewer atoms), then the closer fit. */
+export const byFitThenSimplicity = (a: FormulaFit, b: FormulaFit): number => a.grade - b.grade || a.atoms - b.atoms || a.worst - b.worst || (a.formula < b.formula ? -1 : 1);
+
+/**
+ * Scores one set of counts with plain numbers: writes the residuals and returns the worst
+ * |residual|/limit (Infinity when a count is zero).
+ */
+function score(data: PreparedData, counts: ArrayLike<number>, residuals: Float64Array): number {
+  let total = 0;
+  for (let i = 0; i < counts.length; i++) total += counts[i] * data.weights[i];
+  let worst = 0;
+  for (let i = 0; i < counts.length; i++) {
+    const r = (100 * counts[i] * data.weights[i]) / total - data.percents[i];
+    residuals[i] = r;
+    const w = Math.abs(r) / data.limits[i];
+    if (w > worst) worst = w;
+  }
+  return worst;
+}
+
+const tooLarge = (n: number) =>
+  fail({
+    code: 'SEARCH_TOO_LARGE',
+    message: `the search for a formula of ${n} elements within these limits visits more than ${MAX_SEARCH_WORK.toLocaleString('en-US')} count combinations, more than pondus answers within about a second: give a molar mass (--molar-mass), a tighter --tolerance if the analysis is better than ±0.3 points, or search near a measured mass with the candidates command`,
+  });
 
 /**
  * Searches for the empirical formula that fits the measurements.
  *
  * @example
  * searchFormula(readMeasurements('C=40.00 H=6.71 O=53.29')).best.formula // 'CH2O'
+ * searchFormula(readMeasurements('C=72.15 H=7.12 N=4.72 O=rest')).best.formula // 'C18H21NO3'
  */
-export function searchFormula(m: Measurements): SearchResult {
-  const symbols = m.elements.map((e) => e.symbol);
-  const values = m.elements.map((e) => e.value!);
-  const total = m.kind === 'percent' ? new Decimal(100) : values.reduce((a, b) => a.plus(b), new Decimal(0));
-  // percents and their limits (for masses, the half-units scaled to percent)
-  const percents = values.map((v) => (m.kind === 'percent' ? v.toNumber() : v.div(total).times(100).toNumber()));
-  const limits = m.elements.map((e, i) => (m.kind === 'percent' ? e.halfUnit.toNumber() : e.halfUnit.div(total).times(100).toNumber() * 2) + RELATIVE_SLACK * percents[i] + ABSOLUTE_SLACK);
-  if (percents.some((p) => p <= 0)) throw fail({ code: 'BAD_MEASUREMENT', message: 'every element must be present (a value above zero)' });
-  const moles = percents.map((p, i) => p / weight(symbols[i]));
+export function searchFormula(m: Measurements, options: SearchOptions = {}): SearchResult {
+  const data = prepareData(m, options);
+  const { symbols, percents, limits, weights } = data;
+  const k = symbols.length;
+  const moles = percents.map((p, i) => p / weights[i]);
   const ref = moles.indexOf(Math.min(...moles));
   const fits: FormulaFit[] = [];
-  const seen = new Set<string>();
   let closest: FormulaFit | null = null;
+  let closestWorst = Infinity;
+  const counts = new Int32Array(k);
+  const closestCounts = new Int32Array(k);
+  const residuals = new Float64Array(k);
   let work = 0;
+  // an element within its limit of zero cannot fix a count: the data cannot tell how much of it there is
+  const trace = symbols.findIndex((_, i) => percents[i] <= limits[i]);
+  if (trace >= 0) {
+    throw fail({ code: 'NO_FORMULA_FITS', message: `${symbols[trace]} at ${percents[trace]} % is within the limit (±${limits[trace].toFixed(3)} points) of zero: the data cannot tell how many ${symbols[trace]} atoms there are; give a tighter --tolerance if the analysis is better than that, or leave ${symbols[trace]} out` });
+  }
+  // the search ends past MAX_EMPIRICAL_ATOMS, or once the smallest formula of a scale has more than
+  // 2.5 times the atoms of the smallest fit (the alternatives a chemist would consider)
+  let atomLimit = MAX_EMPIRICAL_ATOMS;
   for (let s = 1; s <= MAX_SCALE; s++) {
-    // candidate counts for each element at this scale, from the uncertainty of the ratios
-    const options = moles.map((n, i) => {
-      if (i === ref) return [s];
+    // candidate counts for each element at this scale, from the limits of the ratios
+    const choices: Int32Array[] = moles.map((n, i) => {
+      if (i === ref) return Int32Array.of(s);
       const x = (n / moles[ref]) * s;
       const e = limits[i] / percents[i] + limits[ref] / percents[ref];
       const lo = Math.max(1, Math.floor(x * (1 - e) - 0.5));
       const hi = Math.ceil(x * (1 + e) + 0.5);
       const out: number[] = [];
-      for (let c = lo; c <= hi && out.length < 12; c++) out.push(c);
-      return out;
+      for (let c = lo; c <= hi; c++) out.push(c);
+      return Int32Array.from(out);
     });
-    const counts = new Array<number>(symbols.length).fill(0);
-    const walk = (i: number) => {
-      if (++work > MAX_SEARCH_WORK) {
-        throw fail({
-          code: 'SEARCH_TOO_LARGE',
-          message: `the search for a formula of ${symbols.length} elements at these precisions visits more than ${MAX_SEARCH_WORK.toLocaleString('en-US')} count combinations, more than pondus answers within about a second: give the values to fewer decimals only if they are not known better, or give a molar mass and use the candidates command`,
-        });
-      }
-      if (i === symbols.length) {
-        const reduced = reduce(counts);
-        const key = reduced.join(',');
-        if (seen.has(key) || !plausible(symbols, reduced)) return;
-        const f = fitOf(symbols, reduced, percents, limits);
-        if (!closest || f.worst < closest.worst) closest = f;
-        if (f.worst <= 1) {
-          seen.add(key);
-          fits.push(f);
+    // the smallest formula at this scale: past the atom limit, the search ends
+    const smallest = choices.reduce((a, o) => a + o[0], 0);
+    if (smallest > atomLimit) break;
+    const walk = (i: number, g: number, atoms: number) => {
+      if (i === k) {
+        if (++work > MAX_SEARCH_WORK) throw tooLarge(k);
+        if (g !== 1 || atoms > atomLimit) return; // multiples were seen at a smaller scale
+        if (!plausible(symbols, counts)) return;
+        const worst = score(data, counts, residuals);
+        if (worst < closestWorst) {
+          closestWorst = worst;
+          closestCounts.set(counts);
+        }
+        if (worst <= 1) {
+          fits.push(makeFit(data, counts, residuals, worst, atoms));
+          atomLimit = Math.min(atomLimit, Math.floor(2.5 * atoms));
         }
         return;
       }
-      for (const c of options[i]) {
-        counts[i] = c;
-        walk(i + 1);
+      const o = choices[i];
+      for (let j = 0; j < o.length; j++) {
+        counts[i] = o[j];
+        walk(i + 1, gcd2(g, o[j]), atoms + o[j]);
       }
     };
-    walk(0);
-    if (fits.length >= 6) break;
+    walk(0, 0, 0);
+  }
+  if (closestWorst < Infinity) {
+    const r = new Float64Array(k);
+    const w = score(data, closestCounts, r);
+    closest = makeFit(data, closestCounts, r, w, closestCounts.reduce((a, b) => a + b, 0));
   }
   if (fits.length === 0) {
-    const c = closest as FormulaFit | null;
     let hint = '';
-    if (c) {
-      const [sym, r] = [...c.residuals].reduce((a, b) => (Math.abs(b[1]) / limits[symbols.indexOf(b[0])] > Math.abs(a[1]) / limits[symbols.indexOf(a[0])] ? b : a));
-      hint = `; the closest, ${c.formula}, is off by ${Math.abs(r).toFixed(3)} percentage points in ${sym} (limit ${limits[symbols.indexOf(sym)].toFixed(3)})`;
+    if (closest) {
+      const [sym, r] = Object.entries(closest.residuals).reduce((a, b) => (Math.abs(b[1]) / limits[symbols.indexOf(b[0])] > Math.abs(a[1]) / limits[symbols.indexOf(a[0])] ? b : a));
+      hint = `; the closest, ${closest.formula}, is off by ${Math.abs(r).toFixed(3)} percentage points in ${sym} (limit ${limits[symbols.indexOf(sym)].toFixed(3)})`;
     }
-    throw fail({ code: 'NO_FORMULA_FITS', message: `no formula with up to ${MAX_SCALE} atoms of ${symbols[ref]} fits every value within its precision${hint}; check the values, or give fewer decimals than you trust` });
+    throw fail({ code: 'NO_FORMULA_FITS', message: `no formula of up to ${MAX_EMPIRICAL_ATOMS} atoms fits every value within its limit${hint}; check the values, or give a molar mass` });
   }
-  const size = (f: FormulaFit) => [...f.counts.values()].reduce((a, b) => a + b, 0);
-  // the smallest formula that fits; the others by size, then by fit
-  fits.sort((a, b) => size(a) - size(b) || a.worst - b.worst);
+  fits.sort(byFitThenSimplicity);
+  const best = fits[0];
   // alternatives: other formulas that fit, of a size a chemist would consider (at most 2.5 × as many atoms)
-  const alternatives = fits.slice(1).filter((f) => size(f) <= 2.5 * size(fits[0])).slice(0, 5);
-  return { percents: new Map(symbols.map((s, i) => [s, percents[i]])), limits: new Map(symbols.map((s, i) => [s, limits[i]])), best: fits[0], alternatives };
+  const alternatives = fits.slice(1).filter((f) => f.atoms <= 2.5 * best.atoms).slice(0, 5);
+  const rec = (a: number[]) => Object.fromEntries(hillOrder(symbols).map((s) => [s, a[symbols.indexOf(s)]]));
+  return { percents: rec(percents), limits: rec(limits), best, alternatives };
+}
+
+/** The molecular formulas searched directly from a molar mass: at most this many count combinations. */
+export const MAX_MOLECULAR_WORK = 400_000;
+
+/**
+ * Searches molecular formulas directly: every set of counts whose molar mass lies in [lo, hi] and
+ * whose percents fit within the limits (covalent formulas with whole, non-negative RDBE), ranked by
+ * fit, then simplicity. Empty when none fits.
+ *
+ * @example
+ * searchMolecular(readMeasurements('C=72.15 H=7.12 N=4.72 O=rest'), 296.4, 302.4)[0].formula // 'C18H21NO3'
+ */
+export function searchMolecular(m: Measurements, lo: number, hi: number, options: SearchOptions = {}): FormulaFit[] {
+  const data = prepareData(m, options);
+  const { symbols, percents, limits, weights } = data;
+  const k = symbols.length;
+  // each count from the mass share: n = M·p/(100·A), over the window and the limit
+  const ranges = symbols.map((_, i) => {
+    const a = Math.max(1, Math.ceil((lo * Math.max(0, percents[i] - limits[i])) / (100 * weights[i]) - 1e-9));
+    const b = Math.floor((hi * (percents[i] + limits[i])) / (100 * weights[i]) + 1e-9);
+    return [a, b] as const;
+  });
+  let size = 1;
+  for (const [a, b] of ranges) size *= Math.max(0, b - a + 1);
+  if (size > MAX_MOLECULAR_WORK) {
+    throw fail({ code: 'SEARCH_TOO_LARGE', message: `the molar mass and these limits leave about ${Math.round(size).toLocaleString('en-US')} count combinations, more than pondus searches within about a second: narrow the molar-mass range or the tolerance, or search near a measured mass with the candidates command` });
+  }
+  const counts = new Int32Array(k);
+  const residuals = new Float64Array(k);
+  const fits: FormulaFit[] = [];
+  const walk = (i: number, mass: number, atoms: number) => {
+    if (mass > hi + 1e-9) return;
+    if (i === k) {
+      if (mass < lo - 1e-9 || !plausible(symbols, counts) || !wholeRdbe(symbols, counts)) return;
+      const worst = score(data, counts, residuals);
+      if (worst <= 1) fits.push(makeFit(data, counts, residuals, worst, atoms));
+      return;
+    }
+    for (let c = ranges[i][0]; c <= ranges[i][1]; c++) {
+      counts[i] = c;
+      walk(i + 1, mass + c * weights[i], atoms + c);
+    }
+  };
+  walk(0, 0, 0);
+  return fits.sort(byFitThenSimplicity);
 }

@@ -29,7 +29,9 @@ describe('pondus analysis', () => {
     expect(r.stdout).toContain('C20H25N3O·0.5H2O (0.04)');
     expect(r.stderr).toContain("line 4: error UNKNOWN_ELEMENT: unknown element symbol 'Xx'");
     const csv = pondus(['analysis', '--csv', '--sheet', '-'], 'id,formula,C,H\nA-1,C9H8O4,60.21,4.42\n');
-    expect(csv.stdout.split('\n')[1]).toBe('C9H8O4,A-1,C9H8O4,C=60.00 H=4.48,C=60.21 H=4.42,0.21,true,,,,,');
+    const [head, row] = csv.stdout.split('\n');
+    expect(head.startsWith('input,id,formula,reportFormula,C_calculated,C_found,C_deviation,H_calculated,H_found,H_deviation,N_calculated')).toBe(true);
+    expect(row.startsWith('C9H8O4,A-1,C9H8O4,C9H8O4,60.00,60.21,0.21,4.48,4.42,-0.06,,,,')).toBe(true);
   });
 
   it('reads FORMULA and found values from each line of standard input', () => {
@@ -42,5 +44,22 @@ describe('pondus analysis', () => {
     expect(pondus(['analysis', 'C6H6', '--found', 'C=92.26', '--solvents', 'unobtainium']).stderr).toContain("unknown solvent 'unobtainium'");
     expect(pondus(['analysis', 'C6H6', '--found', 'C=92.26,N=1']).stderr).toContain('a found value for N');
     expect(pondus(['analysis', 'C6H6']).status).toBe(2); // no found values: a usage error
+  });
+});
+
+describe('pondus analysis: report lines as written', () => {
+  it('writes the components and reads found values in the journal form', () => {
+    const r = pondus(['analysis', 'C11H15N·CF3COOH·0.5H2O', '--found', 'C, 54.77; H, 5.91; N, 4.90']);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toContain('Anal. Calcd for C11H15N·C2HF3O2·0.5H2O: C, 54.93; H, 6.03; N, 4.93. Found: C, 54.77; H, 5.91; N, 4.90.');
+  });
+
+  it('refuses a sheet cell holding two values, and analyses the other rows', () => {
+    const r = pondus(['analysis', '--sheet', '-', '--json'], 'id,formula,C,H\nJK-1,C20H25N3O,74.27 N=12.99,7.79\nJK-2,C20H25N3O,74.27,7.79\n');
+    expect(r.status).toBe(1);
+    const rows = jsonLines(r.stdout);
+    expect(rows[0].error.code).toBe('BAD_RECORD');
+    expect(rows[0].error.message).toContain('not one value');
+    expect(rows[1].pass).toBe(true);
   });
 });

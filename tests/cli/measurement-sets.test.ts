@@ -9,7 +9,7 @@ describe('KEY=VALUE sets typed without quotes', () => {
     expect(r.status).toBe(0);
     const [j] = jsonLines(r.stdout);
     expect(j.empirical).toBe('CH2O');
-    expect(j.notes[0]).toContain('were read as one measurement set');
+    expect(noteMessages(j)[0]).toContain('were read as one measurement set');
   });
 
   it('a line of standard input with the same text as a joined set gets no joining note', () => {
@@ -46,7 +46,7 @@ describe('KEY=VALUE sets typed without quotes', () => {
     const j = jsonLines(r.stdout);
     expect(j).toHaveLength(1);
     expect(Object.keys(j[0].found)).toEqual(['C', 'H', 'N']);
-    expect(j[0].notes[0]).toContain('were read as one set of found values');
+    expect(noteMessages(j[0])[0]).toContain('were read as one set of found values');
   });
 
   it('analysis: values after a formula are its found values; with several formulas and --found, refused', () => {
@@ -62,7 +62,8 @@ describe('KEY=VALUE sets typed without quotes', () => {
     const r = pondus(['candidates', '--json', '180.0634', '--found', 'C=40.00', 'H=6.71', '--elements', 'C0-20 H0-40 O0-10']);
     expect(r.status).toBe(0);
     const [j] = jsonLines(r.stdout);
-    expect(j.input).toContain('found C=40.00 H=6.71');
+    expect(j.input).toBe('180.0634');
+    expect(j.search).toContain('found C=40.00 H=6.71');
     expect(j.candidates[0].formula).toBe('C6H12O6');
     expect(pondus(['candidates', '180.0634', 'C=40.00']).status).toBe(2);
   });
@@ -77,7 +78,7 @@ describe('masses typed without quotes in combustion', () => {
     const j = jsonLines(r.stdout)[0];
     expect(j.empirical).toBe(quoted.empirical);
     expect(j.elements).toEqual(quoted.elements);
-    expect(j.notes[0]).toContain('--co2 1.499 g');
+    expect(noteMessages(j)[0]).toContain('--co2 1.499 g');
     const lone = pondus(['combustion', '1.000', 'g', 'g', '--co2', '1.499']);
     expect(lone.status).toBe(2);
   });
@@ -127,7 +128,7 @@ describe('option combinations: honoured, or refused with exit 2 naming the confl
 
   it('a batch line with its own found values says that --found was not used for it', () => {
     const r = jsonLines(pondus(['analysis', '--json', '--found', 'C=92.26', '-'], 'C9H8O4 C=60.21 H=4.42\nC6H6\n').stdout);
-    expect(r[0].notes[0]).toContain('its own found values');
+    expect(noteMessages(r[0])[0]).toContain('its own found values');
     expect(r[1].found).toEqual({ C: 92.26 });
   });
 
@@ -145,7 +146,7 @@ describe('CSV and TSV carry the notes', () => {
   it('a notes column with CODE: message, joined by " | "', () => {
     const r = pondus(['empirical', '--csv', 'MgO=57.30 SiO2=42.70 O=rest']);
     const [head, row] = r.stdout.split('\n');
-    expect(head).toBe('input,empirical,molecular,residuals,alternatives,notes,error,message');
+    expect(head).toBe('input,id,empirical,molecular,multiple,empiricalMass,largestResidual,alternative_1,alternative_2,alternative_3,notes,error,message');
     expect(row).toContain('BY_DIFFERENCE: O by difference: 0 %');
     expect(row).toContain(' | COMPOUND_CONVERTED: ');
     expect(row).toContain(' | DIFFERENCE_ADDED: ');

@@ -58,7 +58,7 @@ describe('compound (oxide) keys', () => {
   it('an oxide analysis of Fe2O3 alone gives Fe2O3; O=rest adds the difference to the oxides’ oxygen, with a note', () => {
     expect(empirical('Fe2O3=100.0').empirical).toBe('Fe2O3');
     const r = empirical('Fe2O3=69.94 O=rest');
-    const o = r.percents.get('O')!;
+    const o = r.percents.O;
     const fe2o3 = formulaMass('Fe2O3');
     const oShare = fe2o3.contributions.find((c) => c.symbol === 'O')!.mass.div(fe2o3.molarMass).toNumber();
     expect(o).toBeCloseTo(30.06 + 69.94 * oShare, 6);
@@ -69,7 +69,7 @@ describe('compound (oxide) keys', () => {
 
   it('Na2O=40.00 Cl=60.00 is read as sodium oxide plus chlorine, not as O and Cl', () => {
     const r = empirical('Na2O=40.00 Cl=60.00');
-    expect([...r.fit.counts.keys()].sort()).toEqual(['Cl', 'Na', 'O']);
+    expect(Object.keys(r.fit.counts).sort()).toEqual(['Cl', 'Na', 'O']);
   });
 
   it('masses of oxides work like percents', () => {

@@ -121,6 +121,7 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
     const sheetRow = o.sheetRows?.[input];
     if (sheetRow) {
       if (sheetRow.formula === '') throw fail({ code: 'BAD_RECORD', message: `row ${sheetRow.id || sheetRow.line} has no formula` }, input);
+      if (sheetRow.problem) throw fail({ code: 'BAD_RECORD', message: `row ${sheetRow.id || sheetRow.line}: ${sheetRow.problem}` }, input);
       return { result: analysis(sheetRow.formula, sheetRow.found, opts), id: sheetRow.id };
     }
     const m = splitTrailingValues(input);
@@ -136,8 +137,10 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
   };
   const verdict = (r: AnalysisResult) => (r.pass ? 'passes' : 'fails');
   const sheet = o.sheetRows !== undefined;
-  const listOf = (m: Map<string, { toFixed(n: number): string }> | Map<string, string>) =>
-    [...m].map(([s, v]) => `${s} ${typeof v === 'string' ? v : v.toFixed(2)}`).join(', ');
+  const listOf = (m: Record<string, number | string>) =>
+    Object.entries(m).map(([s, v]) => `${s} ${typeof v === 'string' ? v : v.toFixed(2)}`).join(', ');
+  // CSV: one column per element and quantity, for the elements analysed in practice (other elements stay in JSON, with a note)
+  const CSV_ELEMENTS = ['C', 'H', 'N', 'S', 'O', 'P', 'F', 'Cl', 'Br', 'I'];
   return {
     compute,
     tally: sheet ? { count: (row) => row.result.pass, words: `compounds pass at ±${Number(opts.tolerance).toFixed(2)}` } : undefined,
@@ -151,20 +154,19 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
           },
         }
       : undefined,
-    json: (row) => ({ ...analysisJson(row.result, row.id !== null ? { id: row.id } : {}), rounding: opts.rounding, notes: row.result.notes.map((n) => n.message) }),
-    columns: ['input', 'id', 'formula', 'calculated', 'found', 'maxDeviation', 'pass', 'bestFit', 'bestFitMaxDeviation'],
+    json: (row) => ({ ...analysisJson(row.result, row.id !== null ? { id: row.id } : {}), rounding: opts.rounding }),
+    columns: ['input', 'id', 'formula', 'reportFormula', ...CSV_ELEMENTS.flatMap((e) => [`${e}_calculated`, `${e}_found`, `${e}_deviation`]), 'maxDeviation', 'pass', 'bestFit', 'bestFitMaxDeviation'],
     cells: ({ result: r, id }) => {
-      const list = (m: Map<string, { toFixed(n: number): string }>) => [...m].map(([s, v]) => `${s}=${v.toFixed(2)}`).join(' ');
       const best = r.fits[0];
-      return [r.input, id ?? '', r.formula, list(r.calculated), [...r.foundText].map(([s, v]) => `${s}=${v}`).join(' '), r.maxDeviation.toFixed(2), r.pass ? 'true' : 'false', best?.formula ?? '', best?.maxDeviation.toFixed(2) ?? ''];
+      const per = CSV_ELEMENTS.flatMap((e) => (e in r.found ? [r.calculated[e].toFixed(2), r.foundText[e], r.deviation[e].toFixed(2)] : ['', '', '']));
+      return [r.input, id ?? '', r.formula, r.reportFormula, ...per, r.maxDeviation.toFixed(2), r.pass ? 'true' : 'false', best?.formula ?? '', best?.maxDeviation.toFixed(2) ?? ''];
     },
     block: sheet ? undefined : ({ result: r, id }) => {
-      const rows = [...r.calculated.keys()].map((s) => {
-        const d = r.deviation.get(s)!;
-        const ok = d.abs().lte(r.tolerance);
-        return [s, r.calculated.get(s)!.toFixed(2), r.foundText.get(s)!, `${d.isNegative() ? '' : '+'}${d.toFixed(2)}`, ok ? 'ok' : 'off'];
+      const rows = Object.keys(r.calculated).map((s) => {
+        const d = r.deviation[s];
+        return [s, r.calculated[s].toFixed(2), r.foundText[s], `${d < 0 ? '' : '+'}${d.toFixed(2)}`, r.within[s] ? 'ok' : 'off'];
       });
-      const lines = [`${id ? `${id}: ` : ''}${r.formula}   tolerance ±${r.tolerance.toFixed(2)}`];
+      const lines = [`${id ? `${id}: ` : ''}${r.reportFormula}${r.reportFormula !== r.formula ? `  (${r.formula})` : ''}   tolerance ±${r.tolerance.toFixed(2)}`];
       lines.push(fixedTable(['element', 'calculated %', 'found %', 'deviation', ''], rows, ['left', 'right', 'right', 'right', 'left']));
       lines.push(`verdict: ${verdict(r)} (largest deviation ${r.maxDeviation.toFixed(2)})`);
       lines.push(r.reportLine);
@@ -173,12 +175,15 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
         for (const f of r.fits) lines.push(`  ${f.formula.padEnd(40)} largest deviation ${f.maxDeviation.toFixed(2)}  ${f.pass ? 'passes' : 'fails'}`);
         const best = r.fits.find((f) => f.pass && f.solvates.length > 0);
         if (best && !r.pass) lines.push(`  ${best.reportLine}`);
-        lines.push(`least-squares amounts: ${r.continuous.map((c) => `${c.amount.toFixed(2)} ${c.formula} (largest deviation ${c.maxDeviation.toFixed(2)})`).join('; ')}`);
+        lines.push(`least-squares amounts: ${r.continuous.map((c) => `${c.amount.toFixed(2)} ${c.written} (largest deviation ${c.maxDeviation.toFixed(2)})`).join('; ')}`);
       }
       return lines.join('\n');
     },
     notes: ({ result: r }) => r.notes.map((n) => n.message),
-    noteItems: ({ result: r }) => r.notes,
+    noteItems: ({ result: r }) => {
+      const outside = Object.keys(r.found).filter((e) => !CSV_ELEMENTS.includes(e));
+      return outside.length ? [...r.notes, { code: 'CSV_ELEMENTS', message: `${outside.join(', ')} ha${outside.length === 1 ? 's' : 've'} no CSV columns (C, H, N, S, O, P, F, Cl, Br, I have); the JSON output carries every element` }] : r.notes;
+    },
   };
 }
 

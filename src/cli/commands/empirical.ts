@@ -1,7 +1,10 @@
 import type { Command } from 'commander';
 import { checkRun, joinPairArgs, joinedNote, joinUnitWords, pairRuns, takeJoinedNote } from '../input/key-value-args.js';
 import { fail } from '../../errors/pondus-error.js';
-import { candidateFormulas, DEFAULT_RANGES, readRanges, type CandidateResult } from '../../empirical/candidates.js';
+import { candidateFormulas, DEFAULT_RANGES, MAX_LIMIT, readRanges, type CandidateResult } from '../../empirical/candidates.js';
+import { candidatesJson } from '../../empirical/candidates-json.js';
+import { readIonNotation } from '../../ions/read-ion-notation.js';
+import { readPeaks } from '../../empirical/pattern-match.js';
 import { readFound } from '../../analysis/found-values.js';
 import { PondusError } from '../../errors/pondus-error.js';
 import { combustion, PRODUCTS, type CombustionResult } from '../../empirical/combustion.js';
@@ -15,7 +18,7 @@ import type { Presenter } from '../output/presenter.js';
 import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
-const residualText = (m: Map<string, number>) => [...m].map(([s, r]) => `${s} ${r >= 0 ? '+' : ''}${r.toFixed(3)}`).join(', ');
+const residualText = (m: Record<string, number>) => Object.entries(m).map(([s, r]) => `${s} ${r >= 0 ? '+' : ''}${r.toFixed(3)}`).join(', ');
 
 /** Runs a check of an option; its PondusError becomes a usage error (exit 2) with the same message. */
 function usage(check: () => unknown): void {
@@ -31,6 +34,7 @@ function usage(check: () => unknown): void {
 
 interface EmpiricalCliOptions extends OutputOptions {
   molarMass?: string;
+  tolerance?: string;
   sheet?: string;
   /** Inputs joined from single KEY=VALUE arguments, with the note saying so (set by the command). */
   joined?: Record<string, string>;
@@ -53,20 +57,26 @@ export function empiricalPresenter(o: EmpiricalCliOptions): Presenter<EmpiricalR
   if (o.molarMass !== undefined && o.sheetRows && Object.values(o.sheetRows).some((r) => r.molarMass !== undefined)) {
     throw fail({ code: 'USAGE', message: "the sheet has a molar-mass column and --molar-mass was given too: use one (the column for each row, or --molar-mass for all)" });
   }
+  const tolerance = o.tolerance === undefined ? undefined : Number(o.tolerance);
+  if (tolerance !== undefined && !(tolerance > 0 && tolerance <= 5)) throw fail({ code: 'USAGE', message: `--tolerance takes a number of percentage points above 0 and at most 5, not '${o.tolerance}'` });
   return {
     compute: (input) => {
       const row = o.sheetRows?.[input];
-      if (row) return { ...empirical(row.measurements, { molarMass: row.molarMass ?? o.molarMass }), id: row.id };
-      const r = empirical(input, { molarMass: o.molarMass });
+      if (row) return { ...empirical(row.measurements, { molarMass: row.molarMass ?? o.molarMass, tolerance }), id: row.id };
+      const r = empirical(input, { molarMass: o.molarMass, tolerance });
       const joined = takeJoinedNote(o.joined, input);
       if (joined) r.notes.unshift({ code: 'JOINED_ARGUMENTS', message: joined });
       return r;
     },
     json: (r) => (r.id !== undefined ? { id: r.id, ...empiricalJson(r) } : empiricalJson(r)),
-    columns: ['input', 'empirical', 'molecular', 'residuals', 'alternatives'],
-    cells: (r) => [r.input, r.empirical, r.molecular ?? '', residualText(r.fit.residuals), r.alternatives.map((a) => a.formula).join(' ')],
+    columns: ['input', 'id', 'empirical', 'molecular', 'multiple', 'empiricalMass', 'largestResidual', 'alternative_1', 'alternative_2', 'alternative_3'],
+    cells: (r) => {
+      const largest = Object.values(r.fit.residuals).reduce((a, x) => (Math.abs(x) > Math.abs(a) ? x : a), 0);
+      return [r.input, r.id ?? '', r.empirical, r.molecular ?? '', r.multiple ?? '', r.empiricalMass, largest, r.alternatives[0]?.formula ?? '', r.alternatives[1]?.formula ?? '', r.alternatives[2]?.formula ?? ''];
+    },
     block: (r) => {
-      const rows = hillOrder(r.percents.keys()).map((s) => [s, r.percents.get(s)!] as const).map(([s, p]) => [s, p.toFixed(3), `±${r.limits.get(s)!.toFixed(3)}`, (p + r.fit.residuals.get(s)!).toFixed(3), `${r.fit.residuals.get(s)! >= 0 ? '+' : ''}${r.fit.residuals.get(s)!.toFixed(3)}`]);
+      const sign = (x: number) => `${x >= 0 ? '+' : ''}${x.toFixed(3)}`;
+      const rows = hillOrder(Object.keys(r.percents)).map((s) => [s + (s === r.byDifference ? ' (by difference)' : ''), r.percents[s].toFixed(3), `±${r.limits[s].toFixed(3)}`, (r.percents[s] + r.fit.residuals[s]).toFixed(3), sign(r.fit.residuals[s])]);
       const lines = [`${r.id ? `${r.id}: ` : ''}${r.input}`, `empirical formula: ${r.empirical}  (${r.empiricalMass.toFixed(3)} g/mol)`];
       if (r.molecular) lines.push(`molecular formula: ${r.molecular}  (× ${r.multiple})`);
       lines.push(fixedTable(['element', 'measured %', 'limit', 'calculated %', 'residual'], rows, ['left', 'right', 'right', 'right', 'right']));
@@ -91,6 +101,8 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
   if (Object.keys(collected).length === 0) throw fail({ code: 'USAGE', message: `give the masses collected: --co2 (and --h2o, ${Object.keys(PRODUCTS).filter((k) => k !== 'co2' && k !== 'h2o').map((k) => `--${k}`).join(', ')})` });
   if (collected.co2 === undefined) throw fail({ code: 'USAGE', message: 'give the mass of CO2 collected (--co2): the carbon of the sample' });
   const rounding = roundingOf(o);
+  // one mass and one percent column per element collected, and O (by difference) last
+  const csvElements = [...Object.keys(collected).map((k) => PRODUCTS[k].element), 'O'];
   return {
     compute: (sample) => {
       const r = combustion({ sample, collected });
@@ -98,19 +110,28 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
       return r;
     },
     json: (r) => ({
+      input: r.input,
       sample: displayQuantity(r.sample, 'g', rounding).text,
       elements: r.elements.map((e) => ({ symbol: e.symbol, mass: displayQuantity(e.mass, 'g', rounding).value.toNumber(), massDisplay: displayQuantity(e.mass, 'g', rounding).text, percent: e.percent.value.toNumber(), percentDisplay: displayQuantity(e.percent, undefined, rounding).figure, byDifference: e.byDifference })),
       empirical: r.empirical,
-      residuals: r.fit ? Object.fromEntries(r.fit.residuals) : null,
+      residuals: r.fit ? { ...r.fit.residuals } : null,
       alternatives: r.alternatives.map((a) => a.formula),
-      notes: r.notes.map((n) => n.message),
+      notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
     }),
     noteItems: (r) => r.notes,
-    columns: ['sample', 'empirical', 'percents'],
-    cells: (r) => [displayQuantity(r.sample, 'g', rounding).text, r.empirical ?? '', r.elements.map((e) => `${e.symbol}=${displayQuantity(e.percent, undefined, rounding).figure}`).join(' ')],
+    columns: ['input', 'sample', 'empirical', ...csvElements.flatMap((e) => [`${e}_mass_g`, `${e}_percent`])],
+    cells: (r) => [
+      r.input,
+      displayQuantity(r.sample, 'g', rounding).text,
+      r.empirical ?? '',
+      ...csvElements.flatMap((s) => {
+        const e = r.elements.find((x) => x.symbol === s);
+        return e ? [displayQuantity(e.mass, 'g', rounding).figure, displayQuantity(e.percent, undefined, rounding).figure] : ['', ''];
+      }),
+    ],
     block: (r) => {
       const rows = r.elements.map((e) => [e.symbol + (e.byDifference ? ' (by difference)' : ''), displayQuantity(e.mass, 'g', rounding).figure, displayQuantity(e.percent, undefined, rounding).figure]);
-      return [`sample ${displayQuantity(r.sample, 'g', rounding).text}`, fixedTable(['element', 'mass g', 'mass %'], rows, ['left', 'right', 'right']), `empirical formula: ${r.empirical ?? 'none within the precision of the data (see the note)'}`, ...(r.alternatives.length ? [`also within the limits: ${r.alternatives.map((a) => a.formula).join(', ')}`] : [])].join('\n');
+      return [`sample ${displayQuantity(r.sample, 'g', rounding).text}`, fixedTable(['element', 'mass g', 'mass %'], rows, ['left', 'right', 'right']), `empirical formula: ${r.empirical ?? 'none within the limits of the data (see the note)'}`, ...(r.alternatives.length ? [`also within the limits: ${r.alternatives.map((a) => a.formula).join(', ')}`] : [])].join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
   };
@@ -120,17 +141,39 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
 
 interface CandidatesCliOptions extends OutputOptions {
   ppm?: string;
+  ion?: string;
+  pattern?: string;
   found?: string;
   tolerance?: string;
   elements?: string;
-  ratios?: boolean;
+  /** 'extended' (default), 'common', 'none', or false from --no-ratios. */
+  ratios?: string | boolean;
   limit?: string;
   molarMass?: boolean;
   /** Set by the command: the note when found values came from several arguments. */
   foundNote?: string;
 }
 
-/** The presenter for `pondus candidates`: inputs are masses. */
+const RATIO_SETTINGS = ['extended', 'common', 'none'] as const;
+
+/** Progress of a long search on stderr, on a terminal only, once it has run about a second. */
+function progressLine(): { onProgress?: (done: number) => void; end(): void } {
+  if (!process.stderr.isTTY) return { end: () => undefined };
+  const start = Date.now();
+  let shown = false;
+  return {
+    onProgress: (done) => {
+      if (Date.now() - start < 1000) return;
+      shown = true;
+      process.stderr.write(`\rcandidates: searching… ${Math.floor(done * 100)} %`);
+    },
+    end: () => {
+      if (shown) process.stderr.write('\r\x1b[K');
+    },
+  };
+}
+
+/** The presenter for `pondus candidates`: inputs are masses (or m/z values with --ion). */
 export function candidatesPresenter(o: CandidatesCliOptions): Presenter<CandidateResult> {
   const num = (t: string | undefined, name: string) => {
     if (t === undefined) return undefined;
@@ -138,33 +181,80 @@ export function candidatesPresenter(o: CandidatesCliOptions): Presenter<Candidat
     if (!Number.isFinite(n) || n <= 0) throw fail({ code: 'USAGE', message: `--${name} takes a positive number, not '${t}'` });
     return n;
   };
-  const opts = { ppm: num(o.ppm, 'ppm'), found: o.found, tolerance: num(o.tolerance, 'tolerance'), elements: o.elements, ratios: o.ratios !== false, limit: num(o.limit, 'limit') };
+  const ratios = o.ratios === false ? 'none' : o.ratios === undefined || o.ratios === true ? 'extended' : o.ratios;
+  if (!(RATIO_SETTINGS as readonly string[]).includes(ratios)) throw fail({ code: 'USAGE', message: `--ratios takes extended, common or none, not '${ratios}'` });
+  const opts = {
+    ppm: num(o.ppm, 'ppm'),
+    ion: o.ion,
+    pattern: o.pattern,
+    found: o.found,
+    tolerance: num(o.tolerance, 'tolerance'),
+    elements: o.elements,
+    ratios: ratios as (typeof RATIO_SETTINGS)[number],
+    limit: num(o.limit, 'limit'),
+  };
   if (opts.ppm !== undefined && opts.ppm > 1000) throw fail({ code: 'USAGE', message: `--ppm ${o.ppm} is too wide a window: at most 1000 ppm` });
-  if (opts.limit !== undefined && !Number.isInteger(opts.limit)) throw fail({ code: 'USAGE', message: `--limit takes a whole number, not '${o.limit}'` });
-  // options read once, before any input: a bad range or found value is a usage error
+  if (opts.limit !== undefined && (!Number.isInteger(opts.limit) || opts.limit > MAX_LIMIT)) throw fail({ code: 'USAGE', message: `--limit takes a whole number up to ${MAX_LIMIT}, not '${o.limit}'` });
+  if (o.ion !== undefined && o.molarMass) throw fail({ code: 'USAGE', message: '--ion says the masses are m/z values of that ion; --molar-mass says they are average molar masses of the neutral compound: drop one' });
+  // options read once, before any input: a bad range, ion or found value is a usage error
   usage(() => readRanges(opts.elements ?? DEFAULT_RANGES));
+  if (opts.ion !== undefined) usage(() => readIonNotation(opts.ion!));
   if (opts.found !== undefined) usage(() => readFound(opts.found!));
+  if (opts.pattern !== undefined) usage(() => readPeaks(opts.pattern!));
+  const limit = opts.limit ?? 50;
+  const withPattern = opts.pattern !== undefined;
+  const withIon = opts.ion !== undefined;
+  const withFound = opts.found !== undefined;
+  const perCandidate = ['formula', ...(withIon ? ['mz'] : []), 'ppm', ...(withFound ? ['maxDeviation'] : []), ...(withPattern ? ['patternSimilarity'] : []), 'score'];
+  const columns = ['input', 'ion', 'ratios', 'plausible', 'truncated'];
+  for (let k = 1; k <= limit; k++) for (const c of perCandidate) columns.push(`${c}_${k}`);
   return {
     compute: (mass) => {
-      const r = candidateFormulas(o.molarMass ? { ...opts, molarMass: mass } : { ...opts, mass });
-      if (o.foundNote) r.notes.unshift({ code: 'JOINED_ARGUMENTS', message: o.foundNote });
-      return r;
+      const progress = progressLine();
+      try {
+        const r = candidateFormulas(o.molarMass ? { ...opts, molarMass: mass, onProgress: progress.onProgress } : { ...opts, mass, onProgress: progress.onProgress });
+        if (o.foundNote) r.notes.unshift({ code: 'JOINED_ARGUMENTS', message: o.foundNote });
+        return r;
+      } finally {
+        progress.end();
+      }
     },
-    json: (r) => ({
-      input: r.input,
-      candidates: r.candidates.map((c) => ({ formula: c.formula, monoisotopicMass: c.monoisotopicMass, molarMass: c.molarMass, ppm: c.ppm, rdbe: c.rdbe, maxDeviation: c.maxDeviation })),
-      examined: r.examined,
-      truncated: r.truncated,
-      notes: r.notes.map((n) => n.message),
-    }),
+    json: (r) => candidatesJson(r),
     notes: (r) => r.notes.map((n) => n.message),
     noteItems: (r) => r.notes,
-    columns: ['input', 'candidates'],
-    cells: (r) => [r.input, r.candidates.map((c) => c.formula).join(' ')],
+    columns,
+    cells: (r) => {
+      const cells: (string | number)[] = [r.input, r.ion ?? '', r.ratios, r.plausible, r.truncated ? 'true' : 'false'];
+      for (let k = 0; k < limit; k++) {
+        const c = r.candidates[k];
+        if (!c) {
+          for (let j = 0; j < perCandidate.length; j++) cells.push('');
+          continue;
+        }
+        cells.push(c.formula);
+        if (withIon) cells.push(c.mz ?? '');
+        cells.push(c.ppm ?? '');
+        if (withFound) cells.push(c.maxDeviation ?? '');
+        if (withPattern) cells.push(c.patternSimilarity ?? '');
+        cells.push(c.score);
+      }
+      return cells;
+    },
     block: (r) => {
-      const rows = r.candidates.map((c, i) => [i + 1, c.formula, c.monoisotopicMass.toFixed(5), c.ppm === null ? '' : c.ppm.toFixed(2), c.rdbe, c.maxDeviation === null ? '' : c.maxDeviation.toFixed(2)]);
-      const lines = [`${r.input}: ${r.candidates.length} candidate${r.candidates.length === 1 ? '' : 's'}${r.truncated ? ' shown (more fit: raise --limit)' : ''}, of ${r.examined} formulas in the window`];
-      if (rows.length) lines.push(fixedTable(['#', 'formula', 'monoisotopic u', 'ppm', 'RDBE', 'max dev %'], rows, ['right', 'left', 'right', 'right', 'right', 'right']));
+      const fixed = (x: number | null, d: number) => (x === null ? '' : x.toFixed(d));
+      const rows = r.candidates.map((c, i) => [
+        i + 1,
+        c.formula,
+        ...(r.ion ? [c.ionFormula ?? '', fixed(c.mz, 5)] : [fixed(c.monoisotopicMass, 5)]),
+        c.ppm === null ? fixed(c.molarMass, 3) : `${c.ppm >= 0 ? '+' : ''}${c.ppm.toFixed(2)}`,
+        c.rdbe === null ? '–' : c.rdbe,
+        ...(withFound ? [fixed(c.maxDeviation, 2)] : []),
+        ...(withPattern ? [fixed(c.patternSimilarity, 3)] : []),
+        c.score.toFixed(3),
+      ]);
+      const lines = [`${r.search}: ${r.candidates.length} candidate${r.candidates.length === 1 ? '' : 's'}${r.truncated ? ` shown of ${r.plausible} (raise --limit for more)` : ''}; ${r.examined} formulas in the window, ${r.ratios === 'none' ? 'no element-ratio limits' : `${r.ratios} element-ratio limits`}`];
+      const head = ['#', 'formula', ...(r.ion ? ['ion', 'm/z'] : ['monoisotopic u']), r.candidates[0]?.ppm === null ? 'molar mass' : 'ppm', 'RDBE', ...(withFound ? ['max dev %'] : []), ...(withPattern ? ['pattern'] : []), 'score'];
+      if (rows.length) lines.push(fixedTable(head, rows, head.map((_, i) => (i === 1 || (r.ion && i === 2) ? 'left' : 'right'))));
       return lines.join('\n');
     },
   };
@@ -177,7 +267,8 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
       .command('empirical')
       .description('empirical (and molecular) formula from mass percents or element masses')
       .argument('[measurements...]', "'C=40.00 H=6.71 O=53.29', 'Fe=34.97 g O=15.03 g', 'C=40.00 H=6.71 O=rest', oxides 'SiO2=42.70 MgO=57.30'; unquoted C=40.00 H=6.71 O=53.29 is one set; - reads one set per line (or a JSON object per line)")
-      .option('--molar-mass <M>', 'molar mass in g/mol (or a range such as 170-190) for the molecular formula')
+      .option('--molar-mass <M>', 'molar mass in g/mol (searched within ±1 %, or a range such as 170-190): the molecular formula is searched directly')
+      .option('--tolerance <points>', 'how far a calculated percent may be from the measured one, in percentage points (default 0.3, what combustion analysis is good to)')
       .option('--sheet <file>', "a CSV of measurements: element columns (C, H, N, …), optional id, 'sample' and 'molar mass' columns; - reads it from standard input"),
   ).action((inputs: string[], o: EmpiricalCliOptions) => {
     if (o.sheet !== undefined) return runWithSheet(run, 'empirical', inputs, o, stdin, readMeasurementSheet);
@@ -206,14 +297,17 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
   withOutputOptions(
     program
       .command('candidates')
-      .description('candidate formulas for an accurate mass and/or found percents, filtered for plausibility (RDBE, SENIOR, element ratios)')
-      .argument('[masses...]', 'neutral monoisotopic masses in u (or molar masses with --molar-mass)')
+      .description('candidate formulas for an accurate mass or m/z and/or found percents, any element, filtered for plausibility (RDBE, SENIOR, element ratios) and ranked by score')
+      .argument('[masses...]', 'neutral monoisotopic masses in u, or m/z values with --ion (or molar masses with --molar-mass)')
       .option('--ppm <ppm>', 'mass tolerance in ppm', '5')
+      .option('--ion <notation>', "the masses are m/z values of this ion: '[M+H]+', '[M+Na]+', '[M-H]-', '[M+2H]2+', …")
+      .option('--pattern <peaks>', "a measured isotope pattern as m/z:intensity pairs, '203.0526:100 204.0560:6.9', scored against each candidate's")
       .option('--molar-mass', 'the masses are average molar masses (window ±0.5 g/mol)')
       .option('--found <values>', 'found percents to match too: C=64.85,H=5.44,N=6.30 (unquoted C=64.85 H=5.44 also works)')
       .option('--tolerance <points>', 'allowed |found − calculated| in percentage points', '0.4')
-      .option('--elements <ranges>', 'element ranges', 'C0-80 H0-160 N0-10 O0-20 S0-4 P0-2 F0-6 Cl0-4 Br0-3 I0-2')
-      .option('--no-ratios', 'do not apply the element-ratio limits')
+      .option('--elements <ranges>', 'element ranges, any element (e.g. add Fe0-1 B0-2 Si0-2 Na0-1)', DEFAULT_RANGES)
+      .option('--ratios <set>', 'element-ratio ranges of Kind & Fiehn 2007: extended (default), common, or none', 'extended')
+      .option('--no-ratios', 'do not apply the element-ratio limits (as --ratios none)')
       .option('--limit <n>', 'most candidates to list', '50'),
   ).action((inputs: string[], o: CandidatesCliOptions, cmd: Command) => {
     const given = (name: string) => cmd.getOptionValueSource(name) === 'cli';

@@ -60,8 +60,8 @@ export function ionPresenter(o: IonCliOptions): Presenter<IonRow> {
       return { result, id: f.id, input: o.sheetRows?.[input] ? result.input : input };
     },
     json: ({ result, id, input }) => ({ ...ionJson(result, id !== null ? { id } : {}), input }),
-    columns: ['input', 'id', 'formula', 'ion', 'ionFormula', 'charge', 'mz', 'calculated', 'found', 'errorPpm', 'errorMDa', 'reportLine', 'notes'],
-    cells: ({ result: r, id, input }) => [input, id ?? '', r.formula, r.notation ?? '', r.ionFormula, r.charge, r.mz.toDecimalPlaces(12).toFixed(), r.calculatedText, r.found?.text ?? '', ppm(r), mda(r), r.reportLine ?? '', r.notes.map((n) => `${n.code}: ${n.message}`).join(' | ')],
+    columns: ['input', 'id', 'formula', 'ion', 'ionFormula', 'charge', 'mz', 'calculated', 'found', 'errorPpm', 'errorMDa', 'reportLine'],
+    cells: ({ result: r, id, input }) => [input, id ?? '', r.formula, r.notation ?? '', r.ionFormula, r.charge, r.mz.toDecimalPlaces(12).toFixed(), r.calculatedText, r.found?.text ?? '', ppm(r), mda(r), r.reportLine ?? ''],
     block: ({ result: r, id }) => {
       const z = `${Math.abs(r.charge)}${r.charge > 0 ? '+' : '-'}`;
       const lines = [`${id ? `${id}: ` : ''}${r.formula}  ${r.notation ?? r.journalNotation}  →  ${r.ionFormula}   m/z ${r.calculatedText}  (charge ${z}${r.oddElectron ? ', odd-electron' : ''})`];
@@ -70,6 +70,7 @@ export function ionPresenter(o: IonCliOptions): Presenter<IonRow> {
       return lines.join('\n');
     },
     notes: ({ result: r }) => r.notes.map((n) => n.message),
+    noteItems: ({ result: r }) => r.notes,
   };
 }
 

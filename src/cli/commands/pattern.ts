@@ -88,13 +88,14 @@ export function patternPresenter(o: PatternCliOptions): Presenter<PatternResult>
       return r;
     },
     json: (r) => ({ ...patternJson(r), input: raw.get(r) ?? r.input }),
-    columns: ['input', 'formula', 'ion', 'speciesFormula', 'charge', 'kind', 'resolvingPower', 'coverage', 'monoisotopicMz', 'averageMz', ...peakColumns, 'notes'],
-    cells: (r) => [raw.get(r) ?? r.input, r.formula, r.ion ?? '', r.speciesFormula, r.charge, r.kind, r.resolvingPower ?? '', r.coverage, r.monoisotopicMz.toDecimalPlaces(12).toFixed(), r.averageMz, ...csvPeaks(r), r.notes.map((n) => `${n.code}: ${n.message}`).join(' | ')],
+    columns: ['input', 'formula', 'ion', 'speciesFormula', 'charge', 'kind', 'resolvingPower', 'coverage', 'monoisotopicMz', 'averageMz', ...peakColumns],
+    cells: (r) => [raw.get(r) ?? r.input, r.formula, r.ion ?? '', r.speciesFormula, r.charge, r.kind, r.resolvingPower ?? '', r.coverage, r.monoisotopicMz.toDecimalPlaces(12).toFixed(), r.averageMz, ...csvPeaks(r)],
     block: (r) => {
       const head = `${r.ion ? `${r.ion} of ${r.formula}: ` : ''}${r.speciesFormula}   monoisotopic ${r.charge !== 0 ? 'm/z' : 'mass'} ${r.monoisotopicMz.toFixed(4)}, average ${r.averageMz.toFixed(4)}`;
       return [head, `${describe(r)}; peaks of at least ${r.minRelative} % of the largest`, ...stickPlot(r.peaks, { paint })].join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
+    noteItems: (r) => r.notes,
   };
 }
 

@@ -1,0 +1,34 @@
+import type { CandidateResult } from './candidates.js';
+
+/**
+ * The JSON object `pondus candidates --json` writes: the plain result, keys in a fixed order.
+ *
+ * @example
+ * candidatesJson(candidateFormulas({ mass: '180.06339', ppm: 3, elements: 'C0-20 H0-40 O0-10' })).candidates[0].formula // 'C6H12O6'
+ */
+export function candidatesJson(r: CandidateResult) {
+  return {
+    input: r.input,
+    search: r.search,
+    ion: r.ion,
+    ratios: r.ratios,
+    candidates: r.candidates.map((c) => ({
+      formula: c.formula,
+      counts: { ...c.counts },
+      monoisotopicMass: c.monoisotopicMass,
+      molarMass: c.molarMass,
+      ionFormula: c.ionFormula,
+      mz: c.mz,
+      ppm: c.ppm,
+      rdbe: c.rdbe,
+      maxDeviation: c.maxDeviation,
+      patternSimilarity: c.patternSimilarity,
+      score: c.score,
+    })),
+    examined: r.examined,
+    visited: r.visited,
+    plausible: r.plausible,
+    truncated: r.truncated,
+    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+  };
+}

@@ -1,0 +1,209 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { candidateFormulas, candidateScore, RATIO_RANGES, rdbe, readRanges, safeCandidateFormulas } from '../../src/empirical/candidates.js';
+import { candidatesJson } from '../../src/empirical/candidates-json.js';
+import { ionMass } from '../../src/ions/ion-mass.js';
+import { formulaMass } from '../../src/mass/formula-mass.js';
+
+const formulas = (r: ReturnType<typeof candidateFormulas>) => r.candidates.map((c) => c.formula);
+
+describe('candidates: element-ratio ranges (Kind & Fiehn 2007, rule 4)', () => {
+  it('holds the paper\'s common and extended ranges', () => {
+    // source: Kind T., Fiehn O., BMC Bioinformatics 8 (2007) 105, rule 4 table of element ratios (from memory)
+    expect(RATIO_RANGES.common).toEqual({ H: [0.2, 3.1], F: [0, 1.5], Cl: [0, 0.8], Br: [0, 0.8], N: [0, 1.3], O: [0, 1.2], P: [0, 0.3], S: [0, 0.8], Si: [0, 0.5] });
+    expect(RATIO_RANGES.extended).toEqual({ H: [0.1, 6], F: [0, 6], Cl: [0, 2], Br: [0, 2], N: [0, 4], O: [0, 3], P: [0, 2], S: [0, 3], Si: [0, 1] });
+  });
+
+  it.each([
+    // found masses as reported by a user; formulas of the compounds (from memory): O/C 1.5, 1.67, 1.5, above the common 1.2
+    ['glucose 6-phosphate', '260.029563', 'C6H13O9P'],
+    ['glyphosate', '169.014145', 'C3H8NO5P'],
+    ['tartaric acid', '150.016303', 'C4H6O6'],
+  ])('finds %s by default (extended ranges) and not with the common ones', (_, mass, formula) => {
+    expect(formulas(candidateFormulas({ mass }))).toContain(formula);
+    expect(formulas(candidateFormulas({ mass, ratios: 'common' }))).not.toContain(formula);
+    expect(formulas(candidateFormulas({ mass, ratios: 'none' }))).toContain(formula);
+  });
+});
+
+describe('candidates: any element, and ions', () => {
+  it.each([
+    // monoisotopic masses from AME2020 via formulaMass; compounds (from memory): ferrocene, palladium(II) acetate,
+    // phenylboronic acid, tetramethylsilane, sodium acetate
+    ['C10H10Fe', 'C0-20 H0-30 Fe0-1'],
+    ['C4H6O4Pd', 'C0-10 H0-20 O0-6 Pd0-1'],
+    ['C6H7BO2', 'C0-10 H0-20 B0-2 O0-4'],
+    ['C4H12Si', 'C0-10 H0-30 Si0-2'],
+    ['C2H3NaO2', 'C0-10 H0-20 O0-4 Na0-1'],
+  ])('finds %s in the ranges %s', (f, elements) => {
+    const mass = formulaMass(f).monoisotopicMass.toFixed(6);
+    const r = candidateFormulas({ mass, ppm: 2, elements });
+    expect(formulas(r)).toContain(formulaMass(f).formula);
+  });
+
+  it('does not judge a formula with a metal of no fixed valence by RDBE, and says so', () => {
+    const r = candidateFormulas({ mass: formulaMass('C10H10Fe').monoisotopicMass.toFixed(6), ppm: 2, elements: 'C0-20 H0-30 Fe0-1' });
+    const fc10 = r.candidates.find((c) => c.formula === 'C10H10Fe')!;
+    expect(fc10.rdbe).toBeNull();
+    expect(r.notes.map((n) => n.code)).toContain('RULES_NOT_APPLIED');
+    // alkali metals count as monovalent: sodium acetate has one double bond (common practice)
+    expect(rdbe({ C: 2, H: 3, Na: 1, O: 2 })).toBe(1);
+  });
+
+  it('reads the element ranges of any element, and refuses what is not one', () => {
+    expect(readRanges('C0-10 Pd1 B0-2').get('Pd')).toEqual([1, 1]);
+    expect(() => readRanges('C0-10 Xx0-1')).toThrow(/not an element symbol/);
+    expect(() => readRanges('C0-10 C0-5')).toThrow(/twice/);
+  });
+
+  it('takes the m/z of an ion: [M+Na]+, [M-H]-, [M+2H]2+, each m/z as the ion module computes it', () => {
+    for (const [f, ion] of [
+      ['C6H12O6', '[M+Na]+'],
+      ['C9H8O4', '[M-H]-'],
+      ['C20H25N3O', '[M+2H]2+'],
+      ['C8H10N4O2', '[M+H]+'],
+    ]) {
+      const expected = ionMass(f, ion);
+      const r = candidateFormulas({ mass: expected.mz.toFixed(5), ion, ppm: 3, elements: 'C0-30 H0-60 N0-6 O0-10' });
+      const hit = r.candidates.find((c) => c.formula === formulaMass(f).formula);
+      expect(hit, `${f} ${ion}`).toBeDefined();
+      expect(hit!.mz).toBe(expected.mz.toNumber());
+      expect(hit!.ionFormula).toBe(expected.ionFormula);
+      expect(r.ion).toBe(expected.notation);
+    }
+  });
+
+  it('an m/z typed as a neutral mass does not find the compound, and the ion finds it', () => {
+    // [C6H12O6+Na]+ 203.05261 (computed from AME2020 masses, electron mass CODATA)
+    expect(formulas(candidateFormulas({ mass: '203.05261', ppm: 3, elements: 'C0-20 H0-40 O0-10' }))).not.toContain('C6H12O6');
+    expect(formulas(candidateFormulas({ mass: '203.05261', ion: '[M+Na]+', ppm: 3, elements: 'C0-20 H0-40 O0-10' }))[0]).toBe('C6H12O6');
+  });
+});
+
+describe('candidates: the error sign and the score', () => {
+  it('gives ppm as (found − calculated)/calculated × 10⁶ (common practice; Brenton & Godfrey 2010)', () => {
+    const calc = formulaMass('C6H12O6').monoisotopicMass; // 180.063388098336 (AME2020)
+    const found = calc.times('1.000002').toFixed(6); // 2 ppm above
+    const c = candidateFormulas({ mass: found, ppm: 5, elements: 'C0-20 H0-40 O0-10' }).candidates.find((x) => x.formula === 'C6H12O6')!;
+    expect(c.ppm).toBeGreaterThan(1.9);
+    expect(c.ppm).toBeLessThan(2.1);
+  });
+
+  it('scores as the root mean square of the errors over their allowances', () => {
+    expect(candidateScore(1.5, 3, null, 0.4)).toBe(0.5);
+    expect(candidateScore(0, 3, [0.2, -0.2], 0.4)).toBeCloseTo(Math.sqrt(0.25 / 2), 15);
+    expect(candidateScore(3, 3, [0.4], 0.4)).toBe(1);
+  });
+
+  it('ranks by the score, with found percents narrowing the list', () => {
+    // C20H25N3O and its found values as in the README example (invented data for a demo)
+    const mass = formulaMass('C20H25N3O').monoisotopicMass.toFixed(4);
+    const r = candidateFormulas({ mass, ppm: 5, found: 'C=74.27,H=7.79,N=12.99' });
+    expect(formulas(r)[0]).toBe('C20H25N3O');
+    const scores = r.candidates.map((c) => c.score);
+    expect([...scores].sort((a, b) => a - b)).toEqual(scores);
+    for (const c of r.candidates) expect(c.maxDeviation!).toBeLessThanOrEqual(0.4);
+  });
+
+  it('keeps the best `limit` candidates: a short list is the head of a long one', () => {
+    const long = candidateFormulas({ mass: '500.2105', ppm: 5, limit: 1000 });
+    const short = candidateFormulas({ mass: '500.2105', ppm: 5, limit: 7 });
+    expect(long.plausible).toBeGreaterThan(7);
+    expect(formulas(short)).toEqual(formulas(long).slice(0, 7));
+    expect(short.truncated).toBe(true);
+    expect(short.plausible).toBe(long.plausible);
+  });
+});
+
+describe('candidates: bounded searches', () => {
+  it('refuses a search too large to answer in about a second, up front, with an estimate and what to narrow', () => {
+    const r = safeCandidateFormulas({ mass: '2500.1234', elements: 'C0-200 H0-400 N0-30 O0-40 S0-6 P0-4 F0-10 Cl0-6 Br0-4 I0-3' });
+    expect(r.success).toBe(false);
+    if (!r.success) {
+      expect(r.error.first.code).toBe('SEARCH_TOO_LARGE');
+      expect(r.error.first.message).toMatch(/(would visit about|has more than) [0-9,]+ (formulas|combinations)/);
+      expect(r.error.first.message).toMatch(/--ppm.*--elements/);
+    }
+  });
+
+  it('answers the default ranges with one metal at 1000 Da (the work count stays within the limit)', () => {
+    const r = candidateFormulas({ mass: '1000.1234', elements: 'C0-80 H0-160 N0-10 O0-20 S0-4 P0-2 F0-6 Cl0-4 Br0-3 I0-2 Fe0-1' });
+    expect(r.candidates.length).toBe(50);
+  });
+});
+
+describe('candidates: numbers are the exact decimals', () => {
+  it('gives C7H16OS2 a molar mass of 180.324, not 180.32399999999998', () => {
+    // source: CIAAW 2021 standard atomic weights (C 12.011, H 1.008, O 15.999, S 32.06): 7·12.011 + 16·1.008 + 15.999 + 2·32.06 = 180.324
+    const c = candidateFormulas({ mass: '180.06339', ppm: 5, limit: 100 }).candidates.find((x) => x.formula === 'C7H16OS2')!;
+    expect(c.molarMass).toBe(180.324);
+    expect(JSON.stringify(candidatesJson(candidateFormulas({ mass: '180.06339', ppm: 5, limit: 100 })))).not.toContain('180.32399999999998');
+  });
+
+  const formulaArb = fc
+    .record({ c: fc.integer({ min: 1, max: 30 }), n: fc.integer({ min: 0, max: 4 }), o: fc.integer({ min: 0, max: 8 }), s: fc.integer({ min: 0, max: 1 }), h: fc.integer({ min: 0, max: 64 }) })
+    .map(({ c, n, o, s, h }) => {
+      // a hydrogen count that keeps RDBE whole and non-negative, and H/C within the common range
+      let hh = Math.min(h, 2 * c + n + 2);
+      if ((hh + n) % 2 !== 0) hh = hh > 0 ? hh - 1 : hh + 1;
+      hh = Math.max(hh, Math.ceil(0.2 * c) + ((Math.ceil(0.2 * c) + n) % 2));
+      return `C${c}H${hh}${n ? `N${n}` : ''}${o ? `O${o}` : ''}${s ? 'S' : ''}`;
+    })
+    .filter((f) => {
+      const m = formulaMass(f);
+      const count = (el: string) => Number(m.atoms.get(el) ?? 0);
+      const c = count('C');
+      return count('H') <= 2 * c + count('N') + 2 && count('H') / c <= 3.1 && count('O') / c <= 1.2 && count('N') / c <= 1.3;
+    });
+
+  it('property: a formula\'s own monoisotopic mass always returns it among the candidates', () => {
+    fc.assert(
+      fc.property(formulaArb, (f) => {
+        const m = formulaMass(f);
+        const r = candidateFormulas({ mass: m.monoisotopicMass.toFixed(6), ppm: 1, limit: 1000, elements: 'C0-30 H0-70 N0-4 O0-8 S0-1' });
+        return formulas(r).includes(m.formula);
+      }),
+      { numRuns: 60 },
+    );
+  });
+
+  it('property: every mass in the JSON is the shortest double of the exact decimal sum', () => {
+    fc.assert(
+      fc.property(formulaArb, (f) => {
+        const m = formulaMass(f);
+        const r = candidateFormulas({ mass: m.monoisotopicMass.toFixed(6), ppm: 1, limit: 1000, elements: 'C0-30 H0-70 N0-4 O0-8 S0-1' });
+        const j = JSON.parse(JSON.stringify(candidatesJson(r)));
+        return j.candidates.every((c: { formula: string; molarMass: number; monoisotopicMass: number }) => {
+          const exact = formulaMass(c.formula);
+          return c.molarMass === Number(exact.molarMass.toFixed()) && c.monoisotopicMass === Number(exact.monoisotopicMass.toFixed());
+        });
+      }),
+      { numRuns: 40 },
+    );
+  });
+});
+
+describe('candidates: a measured isotope pattern in the score', () => {
+  it('puts the dibromo compound first when its measured pattern is given', async () => {
+    const { isotopePattern } = await import('../../src/isotope-pattern/pattern.js');
+    const { patternSimilarity, readPeaks } = await import('../../src/empirical/pattern-match.js');
+    // 1,4-dibromo-2,5-dimethylbenzene-like C8H8Br2 as [M+H]+; the "measured" peaks are pondus's own
+    // aggregated pattern (CIAAW ICE 2013 abundances, AME2020 masses), rounded as a spectrum would print them
+    const p = isotopePattern('C8H8Br2', { ion: '[M+H]+' });
+    const mono = ionMass('C8H8Br2', '[M+H]+').mz.toFixed(4);
+    const peaks = p.peaks.filter((x) => x.relative >= 1).map((x) => `${x.mz.toFixed(4)}:${x.relative.toFixed(1)}`).join(' ');
+    const plain = candidateFormulas({ mass: mono, ion: '[M+H]+', ppm: 5, limit: 200 });
+    const withPattern = candidateFormulas({ mass: mono, ion: '[M+H]+', ppm: 5, limit: 200, pattern: peaks });
+    expect(formulas(withPattern)[0]).toBe('C8H8Br2');
+    expect(formulas(plain)[0]).not.toBe('C8H8Br2'); // the mass alone does not single it out
+    expect(withPattern.candidates[0].patternSimilarity!).toBeGreaterThan(0.99);
+    expect(withPattern.notes.map((n) => n.code)).toContain('PATTERN_COMPARED');
+    // Cl2: 35Cl 75.76 %, 37Cl 24.24 % (CIAAW ICE 2013, from memory) give 100 : 64.0 : 10.2
+    expect(patternSimilarity(readPeaks('69.9377:100 71.9348:64.0 73.9318:10.2'), new Map([['Cl', 2]]), 69.9377, 1)).toBeGreaterThan(0.99);
+    expect(patternSimilarity(readPeaks('69.9377:100 71.9348:5'), new Map([['Cl', 2]]), 69.9377, 1)).toBeLessThan(0.8);
+  });
+
+  it('scores the pattern term as (1 − similarity)/0.1', () => {
+    expect(candidateScore(null, 5, null, 0.4, 0.95)).toBeCloseTo(0.5, 12);
+  });
+});
