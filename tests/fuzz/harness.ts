@@ -61,7 +61,8 @@ export function violations(c: Case, o: Outcome, slowMs: number): Violation[] {
   if (o.status === -1) v.push('thrown');
   else if (![0, 1, 2].includes(o.status)) v.push('bad-exit');
   if (/internal error|INTERNAL_ERROR/.test(o.stderr + o.stdout)) v.push('internal-error');
-  if (/Maximum call stack|RangeError/.test(o.stderr + o.stdout)) v.push('stack-overflow');
+  // (the batch turns a stack overflow into 'too deeply nested to process': still an overflow)
+  if (/Maximum call stack|RangeError|too deeply nested to process/.test(o.stderr + o.stdout)) v.push('stack-overflow');
   const json = c.args.includes('--json');
   if (json && o.stdout.trim() !== '') {
     const lines = o.stdout.split('\n').filter((l) => l.trim() !== '' && l.startsWith('{'));
