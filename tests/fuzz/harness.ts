@@ -76,7 +76,7 @@ export function violations(c: Case, o: Outcome, slowMs: number): Violation[] {
       }
     }
     if (c.input !== undefined && c.args.includes('-') && o.status !== 2) {
-      const expected = c.input.replace(/\r?\n$/, '').split(/\r?\n/).length;
+      const expected = c.input.replace(/(\r\n|\r|\n)$/, '').split(/\r\n|\r|\n/).length;
       if (lines.length !== expected) v.push('row-count');
     }
   }
