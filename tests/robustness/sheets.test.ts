@@ -66,6 +66,13 @@ describe('what --sheet refuses', () => {
   });
 });
 
+describe('empty sheets', () => {
+  it('a sheet with no rows is refused, not answered with nothing', () => {
+    expect(pondus(['analysis', '--sheet', '-'], '')).toMatchObject({ status: 2, stderr: expect.stringMatching(/the sheet is empty/) });
+    expect(pondus(['analysis', '--json', '--sheet', '-'], HEADER)).toMatchObject({ status: 2, stderr: expect.stringMatching(/a header and no rows/) });
+  });
+});
+
 describe('messages never echo the file', () => {
   it('a file that is not a lab sheet: its first line is not shown', () => {
     const p = file('secret.txt', 'token-7f3a9c:hunter2\nmore secret text\n');

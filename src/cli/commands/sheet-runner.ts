@@ -60,8 +60,14 @@ export async function runWithSheet<Row extends { raw: string; line: number }, O 
   };
   // the header is checked (and the first rows read) before the command starts, so a sheet without
   // the columns it needs is refused at once, and the command's option checks see the first rows
+  readRows(`${header}\n`);
   let pending = rowsOf(first.value.slice(1));
-  if (pending.length === 0) readRows(`${header}\n`);
+  while (pending.length === 0) {
+    // the header came on its own (a sheet written row by row): wait for the first rows
+    const more = await batches.next();
+    if (more.done) throw fail({ code: 'BAD_RECORD', message: 'the sheet has a header and no rows' });
+    pending = rowsOf(more.value);
+  }
   for (const r of pending) sheetRows[r.raw] = r;
   const conflict = (rows: Row[]) => {
     // a row's own molar mass would silently win over --molar-mass
