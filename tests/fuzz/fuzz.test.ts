@@ -4,7 +4,7 @@
 // replays first as regression tests.
 import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { CliWorker, COMMANDS, fuzz, shrinkCase, violations, type Case, type Violation } from './harness.js';
 
 const long = process.env.FUZZ_RUNS !== undefined;
@@ -32,16 +32,13 @@ interface Reproducer {
 const reproducers = JSON.parse(readFileSync(REPRODUCERS, 'utf8')) as Reproducer[];
 
 describe('fuzzing every command through the CLI', () => {
-  it.each(reproducers.map((r) => [`${r.violation}: ${JSON.stringify(r.case.args).slice(0, 80)}`, r] as const))('reproducer %s stays fixed', async (_, r) => {
-    const worker = new CliWorker(15_000);
-    try {
-      const o = await worker.run(r.case);
-      const found = violations(r.case, o, 5000).filter((v) => v !== 'slow');
-      if (r.status === 'fixed') expect(found).toEqual([]);
-      else expect(found).toContain(r.violation);
-    } finally {
-      await worker.close();
-    }
+  const replay = new CliWorker(15_000);
+  afterAll(() => replay.close());
+  it.each(reproducers.map((r) => [`${r.status} ${r.violation}: ${JSON.stringify(r.case.args).slice(0, 80)}`, r] as const))('reproducer %s', async (_, r) => {
+    const o = await replay.run(r.case);
+    const found = violations(r.case, o, 5000).filter((v) => v !== 'slow');
+    if (r.status === 'fixed') expect(found).toEqual([]);
+    else expect(found).toContain(r.violation);
   }, 30_000);
 
   it(`answers every generated input (seed ${seed}, ${runs} per command)`, async () => {
