@@ -32,7 +32,7 @@ const ONE_VALUE = /^\s*[-+]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)\s*%?\s*$/;
 export function readSheet(text: string): SheetRow[] {
   const { header, rows } = readCsvSheet(text);
   const formulaCol = columnIndex(header, /^formula$/i);
-  if (formulaCol < 0) throw fail({ code: 'BAD_RECORD', message: `the sheet has no 'formula' column (columns: ${header.join(', ')})` });
+  if (formulaCol < 0) throw fail({ code: 'BAD_RECORD', message: `the sheet has no 'formula' column (its header has ${header.length} column${header.length === 1 ? '' : 's'})` });
   const idCol = columnIndex(header, /^(id|compound|sample|name)$/i);
   const elementCols = elementColumns(header);
   if (elementCols.length === 0) throw fail({ code: 'BAD_RECORD', message: 'the sheet has no element columns (C, H, N, S, …)' });

@@ -9,6 +9,7 @@ import { formatWithUncertainty } from '../mass/uncertainty.js';
 import { standardUncertainty } from '../sigfig/quantity.js';
 import { displayQuantity, reportUnit } from '../sigfig/display-quantity.js';
 import type { RoundingMode } from '../sigfig/round.js';
+import type { Note } from '../errors/issue.js';
 import { evaluate, type CalcStep } from './evaluate.js';
 import { parseExpression } from './parse-expression.js';
 
@@ -37,7 +38,8 @@ export interface CalcResult {
   /** Standard uncertainty in the reported unit, when inputs were written with ±. */
   uncertainty: Decimal | null;
   steps: CalcStep[];
-  notes: string[];
+  /** Remarks on how the expression was read (exact numbers, trailing zeros, ratios, formula readings). */
+  notes: Note[];
 }
 
 /**
@@ -70,10 +72,10 @@ export function calc(input: string, options: CalcOptions = {}): CalcResult {
     rounded = new Decimal(figure.split(' ± ')[0]);
     sigFigs = null;
   }
-  const notes = [...new Set(ev.notes)]; // the same remark about a number written twice is said once
+  const notes = [...ev.notes];
   if (shown.belowPrecision && !uncertainty) {
     const top = tree.expr.kind === 'binary' ? tree.expr.op : null;
-    notes.push(belowPrecisionNote(value, shown.lsd ?? 0, unitText, top === '-' ? 'the difference' : top === '+' ? 'the sum' : 'the result'));
+    notes.push({ code: 'BELOW_PRECISION', message: belowPrecisionNote(value, shown.lsd ?? 0, unitText, top === '-' ? 'the difference' : top === '+' ? 'the sum' : 'the result') });
   }
   return { input, value, rounded, display, sigFigs, unit: unitText, uncertainty, steps: ev.steps, notes };
 }
@@ -109,18 +111,25 @@ export interface CalcJson {
   sigFigs: number | null;
   unit: string;
   uncertainty?: number;
-  notes?: string[];
+  /** Always present; empty when there is nothing to say. */
+  notes: { code: string; message: string }[];
 }
 
 /**
  * The JSON object `pondus calc --json` writes.
  *
  * @example
- * calcJson(calc('8.80 g + 2.1 g')) // { input: '8.80 g + 2.1 g', value: 10.9, rounded: 10.9, display: '10.9 g', sigFigs: 3, unit: 'g' }
+ * calcJson(calc('8.80 g + 2.1 g')) // { input: '8.80 g + 2.1 g', value: 10.9, rounded: 10.9, display: '10.9 g', sigFigs: 3, unit: 'g', notes: [] }
  */
 export function calcJson(r: CalcResult): CalcJson {
-  const o: CalcJson = { input: r.input, value: r.value.toNumber(), rounded: r.rounded.toNumber(), display: r.display, sigFigs: r.sigFigs, unit: r.unit };
-  if (r.uncertainty) o.uncertainty = r.uncertainty.toNumber();
-  if (r.notes.length) o.notes = r.notes;
-  return o;
+  const notes = r.notes.map((n) => ({ code: n.code, message: n.message }));
+  const o: Omit<CalcJson, 'notes'> = { input: r.input, value: finite(r.value.toNumber()), rounded: finite(r.rounded.toNumber()), display: r.display, sigFigs: r.sigFigs, unit: r.unit };
+  if (r.uncertainty) o.uncertainty = finite(r.uncertainty.toNumber());
+  return { ...o, notes };
+}
+
+/** A number JSON can carry: calc refuses results beyond 1e±300, so this never fails on its own results. */
+function finite(x: number): number {
+  if (!Number.isFinite(x)) throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: 'the result cannot be written as a finite number' });
+  return x;
 }

@@ -16,6 +16,7 @@ import { readNumber } from '../sigfig/read-number.js';
 import { displayMeasured } from '../sigfig/round.js';
 import { isPercent, unitOf } from '../sigfig/units.js';
 import type { CalcTree, ExprNode } from './tree.js';
+import type { Note } from '../errors/issue.js';
 
 /** One step of a calculation, for --explain. */
 export interface CalcStep {
@@ -30,14 +31,15 @@ export interface Evaluation {
   /** Standard uncertainties of the inputs written with ±, by input number. */
   inputs: Map<number, Decimal>;
   steps: CalcStep[];
-  notes: string[];
+  /** Remarks on how the input was read, each once. */
+  notes: Note[];
 }
 
 interface Ctx {
   input: string;
   inputs: Map<number, Decimal>;
   steps: CalcStep[];
-  notes: string[];
+  notes: Note[];
   uncertain: boolean;
 }
 
@@ -50,7 +52,10 @@ interface Ctx {
 export function evaluate(tree: CalcTree): Evaluation {
   const ctx: Ctx = { input: tree.input, inputs: new Map(), steps: [], notes: [], uncertain: hasPlusMinus(tree.expr) };
   const result = evalNode(tree.expr, ctx);
-  return { result, inputs: ctx.inputs, steps: ctx.steps, notes: ctx.notes };
+  // the same remark about a number written twice is said once
+  const seen = new Set<string>();
+  const notes = ctx.notes.filter((n) => !seen.has(n.message) && !!seen.add(n.message));
+  return { result, inputs: ctx.inputs, steps: ctx.steps, notes };
 }
 
 function hasPlusMinus(n: ExprNode): boolean {
@@ -130,8 +135,8 @@ function literal(n: Extract<ExprNode, { kind: 'number' }>, ctx: Ctx): Quantity {
   // so is 100 % written without a decimal point: the defined whole of a percentage
   const definedHundred = whole && unit !== null && isPercent(unit) && n.text === '100';
   const isExact = (whole && !unit) || definedHundred;
-  if (definedHundred) ctx.notes.push(`${n.text} ${unit.symbol} is read as exactly 100 ${unit.symbol} (the defined whole of a percentage, it does not limit the figures); write 100.0 ${unit.symbol} for a measured value`);
-  if (num.ambiguous && !isExact) ctx.notes.push(`the trailing zeros of ${n.text} are read as not significant (${sigFigsOf(num)} significant figure${sigFigsOf(num) === 1 ? '' : 's'}); write ${n.text}. or use scientific notation if they are`);
+  if (definedHundred) ctx.notes.push({ code: 'EXACT_NUMBER', message: `${n.text} ${unit.symbol} is read as exactly 100 ${unit.symbol} (the defined whole of a percentage, it does not limit the figures); write 100.0 ${unit.symbol} for a measured value` });
+  if (num.ambiguous && !isExact) ctx.notes.push({ code: 'TRAILING_ZEROS', message: `the trailing zeros of ${n.text} are read as not significant (${sigFigsOf(num)} significant figure${sigFigsOf(num) === 1 ? '' : 's'}); write ${n.text}. or use scientific notation if they are` });
   const q = quantity(isExact ? { value: num.value, lsd: null } : num, unit);
   if (n.plusMinus !== null) {
     const u = readNumber(n.plusMinus, column);
@@ -165,7 +170,7 @@ function ratio(n: Extract<ExprNode, { kind: 'ratio' }>, ctx: Ctx): Quantity {
   const shown = `${displayMeasured(value).text}${unit ? ` ${unit.symbol}` : ''}`;
   const wv = unit ? '' : `; for a solid in a liquid (${n.parts} g in ${n.whole} mL) write ${n.parts}:${n.whole} g/mL`;
   ctx.steps.push({ text: `${n.text} = ${n.parts} ÷ ${n.whole}`, rule: exact ? 'a ratio of whole numbers is defined: exact' : `a quotient keeps the fewest significant figures: ${sigFigsOf(value)}` });
-  ctx.notes.push(`${n.text} is read as the ratio ${n.parts}/${n.whole} = ${shown}, ${exact ? 'exact (the numbers of a ratio are defined)' : 'with the figures of its measured part'}${wv}`);
+  ctx.notes.push({ code: 'RATIO', message: `${n.text} is read as the ratio ${n.parts}/${n.whole} = ${shown}, ${exact ? 'exact (the numbers of a ratio are defined)' : 'with the figures of its measured part'}${wv}` });
   return q;
 }
 
@@ -182,6 +187,7 @@ function formulaMassQuantity(n: Extract<ExprNode, { kind: 'formulaMass' }>, ctx:
     throw e;
   }
   const unit = unitOf('g/mol');
+  for (const note of r.notes) ctx.notes.push({ code: note.code, message: note.message });
   if (ctx.uncertain) {
     const u = molarMassUncertainty(r);
     const id = 1_000_000 + ctx.inputs.size;
@@ -190,6 +196,5 @@ function formulaMassQuantity(n: Extract<ExprNode, { kind: 'formulaMass' }>, ctx:
     q.grad.set(id, new Decimal(1));
     return q;
   }
-  for (const note of r.notes) ctx.notes.push(note.message);
   return quantity(reportedMolarMass(r), unit);
 }

@@ -20,7 +20,7 @@ export function measure(text: string, what = 'the quantity', notes?: Note[]): Qu
   const expr = text.replace(/\s+of\s+/g, ' * ');
   try {
     const ev = evaluate(parseExpression(expr));
-    for (const n of new Set(ev.notes)) notes?.push({ code: 'MEASUREMENT', message: `${what}: ${n}` });
+    for (const n of ev.notes) notes?.push({ code: 'MEASUREMENT', message: `${what}: ${n.message}` });
     return ev.result;
   } catch (e) {
     if (e instanceof PondusError) throw new PondusError(e.issues.map((i) => ({ ...i, message: `${what}: ${i.message}` })), text);

@@ -13,7 +13,11 @@ import { ExprBuilder } from './visitor.js';
 /** Longest expression accepted. */
 export const MAX_EXPRESSION_LENGTH = 10_000;
 /** Deepest parenthesis nesting accepted. */
-export const MAX_EXPRESSION_NESTING = 64;
+export const MAX_EXPRESSION_NESTING = 32;
+/** Most signs in a row (`--1`): each one nests the rest of the expression one level deeper. */
+export const MAX_SIGNS_IN_A_ROW = 4;
+/** Most operators in one expression: the tree is evaluated recursively, one level per operator. */
+export const MAX_OPERATIONS = 500;
 
 let builder: ExprBuilder | null = null;
 
@@ -36,6 +40,13 @@ export function parseExpression(input: string): CalcTree {
     const ch = String.fromCodePoint(input.codePointAt(o)!);
     throw new PondusError([{ code: 'UNEXPECTED_CHARACTER', message: `unexpected character '${ch}' at column ${columnOf(input, o)}`, column: columnOf(input, o), length: 1 }], input);
   }
+  let operations = 0;
+  for (const t of lexed.tokens) {
+    const name = t.tokenType.name;
+    if ((name === 'Plus' || name === 'Minus' || name === 'Times' || name === 'Divide' || name === 'Caret') && ++operations > MAX_OPERATIONS) {
+      throw new PondusError([{ code: 'INPUT_TOO_LONG', message: `the expression has more than ${MAX_OPERATIONS} operations (+ - * / ^); split it into steps`, column: columnOf(input, t.startOffset), length: 1 }], input);
+    }
+  }
   const g = calcGrammar();
   g.input = lexed.tokens;
   const cst = g.calculation();
@@ -49,8 +60,18 @@ function prescanExpression(text: string): Issue | null {
   if (text.trim() === '') return { code: 'EMPTY_INPUT', message: 'the expression is empty' };
   if (text.length > MAX_EXPRESSION_LENGTH) return { code: 'INPUT_TOO_LONG', message: `the expression is ${text.length.toLocaleString('en-US')} characters long; the limit is ${MAX_EXPRESSION_LENGTH.toLocaleString('en-US')}` };
   let depth = 0;
+  let signs = 0;
+  let signStart = 0;
   for (let i = 0; i < text.length; i++) {
     const c = text.charCodeAt(i);
+    if (c === 43 || c === 45 || c === 0x2212) {
+      if (signs === 0) signStart = i;
+      if (++signs > MAX_SIGNS_IN_A_ROW) {
+        let n = signs;
+        for (let k = i + 1; k < text.length && /[-+\u2212 \t]/.test(text[k]); k++) if (text[k] !== ' ' && text[k] !== '\t') n++;
+        return { code: 'NESTING_TOO_DEEP', message: `${n.toLocaleString('en-US')} signs in a row at column ${columnOf(text, signStart)}; the calculator reads at most ${MAX_SIGNS_IN_A_ROW}`, column: columnOf(text, signStart), length: 1 };
+      }
+    } else if (c !== 32 && c !== 9) signs = 0;
     if ((c < 0x20 && c !== 0x09) || c === 0x7f || (c >= 0x80 && c < 0xa0)) {
       return { code: 'CONTROL_CHARACTER', message: `control character U+${c.toString(16).toUpperCase().padStart(4, '0')} in the expression`, column: columnOf(text, i) };
     }

@@ -55,15 +55,15 @@ export async function main(args: string[], io: CliIo): Promise<number> {
   const errStyle = styleFor(io.stderr);
   let status = 0;
 
-  const run: CommandRunner = async (command, inputs, options, lineNumbers) => {
+  const run: CommandRunner = async (command, inputs, options, lineNumbers, source) => {
     const presenter = PRESENTERS[command](options);
     const format = outputFormat(options);
-    if (inputs.length === 0) {
+    if (inputs.length === 0 && !source) {
       throw new PondusError([{ code: 'USAGE', message: 'no inputs: give them as arguments, or - to read one per line from standard input' }]);
     }
     const numbered = inputs.includes('-') || inputs.length > 1;
-    const batches = lineNumbers ? fixedBatch(inputs, lineNumbers) : inputBatches(inputs, io.stdin);
-    const summary = await runBatch(presenter, batches, format, { out, err, outStyle, errStyle }, numbered || !!lineNumbers);
+    const batches = source ?? (lineNumbers ? fixedBatch(inputs, lineNumbers) : inputBatches(inputs, io.stdin));
+    const summary = await runBatch(presenter, batches, format, { out, err, outStyle, errStyle }, numbered || !!lineNumbers || !!source);
     if (presenter.tally) {
       const line = `${summary.tallied} of ${summary.total} ${presenter.tally.words}\n`;
       if (format === 'table') out.write(line);

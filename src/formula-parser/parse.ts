@@ -35,6 +35,8 @@ export interface ParseOptions {
 }
 
 let builder: TreeBuilder | null = null;
+/** Above 0 while a hint re-reads a formula with other letter case. */
+let hintDepth = 0;
 
 /**
  * Parses a chemical formula into a typed tree. Throws a {@link PondusError} on bad input.
@@ -81,10 +83,19 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
   const built = builder.build(cst, text, expandAbbreviation);
   if (built.issues.length > 0) {
     // the first few unknown symbols get a hint that looks at the whole formula; the rest keep the visitor's short one
-    for (const unknown of built.issues.filter((i) => i.code === 'UNKNOWN_ELEMENT').slice(0, 3)) {
-      const hint = unknownElementHint(text, unknown, mode, (s) => safeParseFormula(s, { ...options, abbreviations: mode === 'elements' ? 'none' : false }).success);
-      if (hint) unknown.hint = hint;
-      else delete unknown.hint;
+    // (a re-read tried for a hint needs only its success: it gets no hints of its own, so the
+    // search is one level deep whatever the input)
+    if (hintDepth === 0) {
+      hintDepth++;
+      try {
+        for (const unknown of built.issues.filter((i) => i.code === 'UNKNOWN_ELEMENT').slice(0, 3)) {
+          const hint = unknownElementHint(text, unknown, mode, (s) => safeParseFormula(s, { ...options, abbreviations: mode === 'elements' ? 'none' : false }).success);
+          if (hint) unknown.hint = hint;
+          else delete unknown.hint;
+        }
+      } finally {
+        hintDepth--;
+      }
     }
     throw new PondusError(built.issues, input);
   }

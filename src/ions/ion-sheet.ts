@@ -29,7 +29,7 @@ export interface IonSheetRow {
 export function readIonSheet(text: string): IonSheetRow[] {
   const { header, rows } = readCsvSheet(text);
   const formulaCol = columnIndex(header, /^formula$/i);
-  if (formulaCol < 0) throw fail({ code: 'BAD_RECORD', message: `the sheet has no 'formula' column (columns: ${header.join(', ')})` });
+  if (formulaCol < 0) throw fail({ code: 'BAD_RECORD', message: `the sheet has no 'formula' column (its header has ${header.length} column${header.length === 1 ? '' : 's'})` });
   const idCol = columnIndex(header, /^(id|compound|sample|name)$/i);
   const ionCol = columnIndex(header, /^(ion|adduct)$/i);
   const foundCol = columnIndex(header, /^(found|found m\/z|m\/z found|found mz)$/i);

@@ -20,6 +20,15 @@ export interface CsvSheet {
   rows: CsvRow[];
 }
 
+const CSV_PROBLEMS: Record<string, string> = {
+  CSV_QUOTE_NOT_CLOSED: 'a quote is never closed',
+  INVALID_OPENING_QUOTE: 'a quote inside a cell that does not start with one',
+  CSV_INVALID_OPENING_QUOTE: 'a quote inside a cell that does not start with one',
+  CSV_INVALID_CLOSING_QUOTE: 'text right after a closing quote',
+  CSV_NON_TRIMABLE_CHAR_AFTER_CLOSING_QUOTE: 'text right after a closing quote',
+  CSV_MAX_RECORD_SIZE: 'a row too long',
+};
+
 /**
  * Parses a CSV sheet with a header row (BOM, quotes, ragged rows and blank lines allowed).
  *
@@ -31,7 +40,10 @@ export function readCsvSheet(text: string): CsvSheet {
   try {
     records = parse(text, { bom: true, relax_column_count: true, skip_empty_lines: true, trim: true, info: true, raw: true }) as unknown as typeof records;
   } catch (e) {
-    throw fail({ code: 'BAD_RECORD', message: `the sheet is not valid CSV: ${e instanceof Error ? e.message : String(e)}` });
+    // csv-parse quotes the offending text; the message names the line and the problem only
+    const err = e as { code?: string; lines?: number };
+    const where = typeof err.lines === 'number' ? ` at line ${err.lines}` : '';
+    throw fail({ code: 'BAD_RECORD', message: `the sheet is not valid CSV${where}: ${(err.code && CSV_PROBLEMS[err.code]) ?? 'a quote or delimiter out of place'}` });
   }
   if (records.length === 0) throw fail({ code: 'BAD_RECORD', message: 'the sheet is empty' });
   return {

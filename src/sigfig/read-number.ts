@@ -34,6 +34,7 @@ export const MIN_MAGNITUDE = new Decimal('1e-100');
  * readNumber('2.50e2').lsd   // 0   (3 significant figures)
  */
 export function readNumber(text: string, column?: number): ReadNumber {
+  if (typeof text !== 'string') throw fail({ code: 'BAD_NUMBER', message: `a number is read from its text (a string), not from a value of type ${text === null ? 'null' : typeof text}`, column });
   const t = text.trim();
   const m = NUMBER.exec(t);
   if (!m || (m[2] === '' && (m[3] === undefined || m[3] === ''))) {

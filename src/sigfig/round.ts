@@ -3,6 +3,7 @@
  * (ASTM E29; ISO 80000-1 Annex B, rule A), half-up on request.
  */
 import { Decimal } from '../exact/decimal.js';
+import { fail } from '../errors/pondus-error.js';
 import { msd, type Measured } from './measured.js';
 
 export type RoundingMode = 'half-even' | 'half-up';
@@ -10,7 +11,37 @@ export type RoundingMode = 'half-even' | 'half-up';
 type Rounding = NonNullable<Parameters<Decimal['toDecimalPlaces']>[1]>;
 
 function mode(m: RoundingMode): Rounding {
+  if (m !== 'half-up' && m !== 'half-even') throw fail({ code: 'BAD_OPTION', message: `rounding must be 'half-even' or 'half-up', not ${describe(m)}` });
   return m === 'half-up' ? (Decimal.ROUND_HALF_UP as Rounding) : (Decimal.ROUND_HALF_EVEN as Rounding);
+}
+
+/** Most significant figures a rounding may ask for. */
+const MAX_PLACES = 1000;
+/** Farthest power of ten a last digit may sit at. */
+const MAX_POSITION = 10_000;
+
+function describe(x: unknown): string {
+  if (Decimal.isDecimal(x)) return String(x);
+  if (typeof x === 'string') return `'${x.length > 20 ? `${x.slice(0, 20)}…` : x}'`;
+  if (typeof x === 'number' || typeof x === 'boolean' || x === null || x === undefined) return String(x);
+  return `a value of type ${Array.isArray(x) ? 'array' : typeof x}`;
+}
+
+/** The value to round: a finite Decimal (a finite number or a numeric string is taken as its decimal). */
+function decimalOf(value: unknown): Decimal {
+  let d: Decimal | null = null;
+  if (Decimal.isDecimal(value)) d = value as Decimal;
+  else if (typeof value === 'number' && Number.isFinite(value)) d = new Decimal(value);
+  else if (typeof value === 'string' && /^\s*[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d{1,4})?\s*$/.test(value)) d = new Decimal(value.trim());
+  if (d === null || !d.isFinite()) throw fail({ code: 'BAD_NUMBER', message: `the value to round must be a finite number, not ${describe(value)}` });
+  return d;
+}
+
+function wholeIn(n: unknown, min: number, max: number, what: string): number {
+  if (typeof n !== 'number' || !Number.isInteger(n) || n < min || n > max) {
+    throw fail({ code: 'BAD_OPTION', message: `${what} must be a whole number from ${min.toLocaleString('en-US')} to ${max.toLocaleString('en-US')}, not ${describe(n)}` });
+  }
+  return n;
 }
 
 /**
@@ -20,8 +51,11 @@ function mode(m: RoundingMode): Rounding {
  * roundToSigFigs(new Decimal('2.45'), 2).toString() // '2.4' (half-to-even)
  */
 export function roundToSigFigs(value: Decimal, n: number, rounding: RoundingMode = 'half-even'): Decimal {
-  if (value.isZero()) return value;
-  return value.toSignificantDigits(n, mode(rounding));
+  const v = decimalOf(value);
+  wholeIn(n, 1, MAX_PLACES, 'the number of significant figures');
+  const m = mode(rounding);
+  if (v.isZero()) return v;
+  return v.toSignificantDigits(n, m);
 }
 
 /**
@@ -31,9 +65,11 @@ export function roundToSigFigs(value: Decimal, n: number, rounding: RoundingMode
  * roundToPosition(new Decimal('58.43976928'), -2).toString() // '58.44'
  */
 export function roundToPosition(value: Decimal, lsd: number, rounding: RoundingMode = 'half-even'): Decimal {
-  if (lsd <= 0) return value.toDecimalPlaces(-lsd, mode(rounding));
+  const v = decimalOf(value);
+  wholeIn(lsd, -MAX_POSITION, MAX_POSITION, 'the position of the last digit (a power of ten)');
+  if (lsd <= 0) return v.toDecimalPlaces(-lsd, mode(rounding));
   const f = new Decimal(10).pow(lsd);
-  return value.div(f).toDecimalPlaces(0, mode(rounding)).times(f);
+  return v.div(f).toDecimalPlaces(0, mode(rounding)).times(f);
 }
 
 /** How a measured number is shown. */
@@ -85,6 +121,12 @@ function superscript(n: number): string {
  * displayMeasured({ value: new Decimal('2.45'), lsd: -1 }, 'half-up').text // '2.5'
  */
 export function displayMeasured(m: Measured, rounding: RoundingMode = 'half-even'): Display {
+  if (typeof m !== 'object' || m === null) throw fail({ code: 'BAD_NUMBER', message: `a measured number is { value, lsd }, not ${describe(m)}` });
+  if (!Decimal.isDecimal(m.value)) m = { ...m, value: decimalOf(m.value) };
+  else if (!m.value.isFinite()) decimalOf(m.value);
+  if (m.lsd !== null) wholeIn(m.lsd, -MAX_POSITION, MAX_POSITION, 'the position of the last digit (lsd)');
+  if (m.sigFigs !== undefined) wholeIn(m.sigFigs, 1, MAX_PLACES, 'the number of significant figures');
+  mode(rounding);
   if (m.lsd === null) {
     // an exact quotient that does not terminate (1/3) fills the working precision: show
     // 12 figures and an ellipsis rather than 50 digits that look exact

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { calc, calcJson } from '../../src/calc/calc.js';
+import { calc, calcJson, safeCalc } from '../../src/calc/calc.js';
 import { MASS, measure, measureAs, PURE, readQuantity } from '../../src/calc/measure.js';
 import type { Note } from '../../src/errors/issue.js';
 import { displayQuantity } from '../../src/sigfig/display-quantity.js';
@@ -30,14 +30,16 @@ describe('calc: the figures come from the rounded value', () => {
   });
 });
 
+const messages = (r: { notes: { message: string }[] }) => r.notes.map((n) => n.message).join('\n');
+
 describe('calc: a result below the precision of the data', () => {
   it('a difference that rounds to zero has no significant figures, and a note says why', () => {
     // 10.0 g − 9.95 g = 0.05 g; the last digit is at 0.1 g, so 0.0 g
     const r = calc('10.0 g - 9.95 g');
     expect(r.display).toBe('0.0 g');
     expect(r.sigFigs).toBe(0);
-    expect(r.notes.join('\n')).toMatch(/the difference \(0\.05 g unrounded\) is below the precision of the data .*0\.1 g/);
-    expect(calcJson(r)).toMatchObject({ sigFigs: 0, display: '0.0 g', notes: [expect.stringContaining('below the precision')] });
+    expect(messages(r)).toMatch(/the difference \(0\.05 g unrounded\) is below the precision of the data .*0\.1 g/);
+    expect(calcJson(r)).toMatchObject({ sigFigs: 0, display: '0.0 g', notes: [{ code: 'BELOW_PRECISION', message: expect.stringContaining('below the precision') }] });
   });
 
   it('says nothing when the result keeps a figure', () => {
@@ -52,8 +54,9 @@ describe('calc: defined numbers are exact', () => {
     const r = calc('5.63 g / 8.80 g * 100 %');
     expect(r.display).toBe('64.0 %');
     expect(r.sigFigs).toBe(3);
-    expect(r.notes.join('\n')).toMatch(/100 % is read as exactly 100 %/);
-    expect(r.notes.join('\n')).not.toMatch(/trailing zeros/);
+    expect(messages(r)).toMatch(/100 % is read as exactly 100 %/);
+    expect(messages(r)).not.toMatch(/trailing zeros/);
+    expect(r.notes.map((n) => n.code)).toEqual(['EXACT_NUMBER']);
     // written with a decimal point it is a measurement
     expect(calc('100.0 % - 2.35 %').display).toBe('97.6 %');
     expect(calc('100 % - 2.35 %').display).toBe('97.65 %');
@@ -63,7 +66,8 @@ describe('calc: defined numbers are exact', () => {
     // 50 % has an ambiguous trailing zero: 1 significant figure, with a note
     const r = calc('50 % * 2.000');
     expect(r.sigFigs).toBe(1);
-    expect(r.notes.join('\n')).toMatch(/trailing zeros of 50/);
+    expect(messages(r)).toMatch(/trailing zeros of 50/);
+    expect(r.notes.map((n) => n.code)).toEqual(['TRAILING_ZEROS']);
   });
 
   it('reads per-100 mL units with an exact 100', () => {
@@ -81,7 +85,8 @@ describe('calc: defined numbers are exact', () => {
     const r = calc('1:1000');
     expect(r.display).toBe('0.001');
     expect(r.sigFigs).toBeNull();
-    expect(r.notes[0]).toMatch(/1:1000 is read as the ratio 1\/1000 = 0\.001, exact/);
+    expect(r.notes[0]).toMatchObject({ code: 'RATIO' });
+    expect(r.notes[0].message).toMatch(/1:1000 is read as the ratio 1\/1000 = 0\.001, exact/);
     expect(calc('1:1000 * 250.0 mL').display).toBe('0.2500 mL');
     // as weight in volume: 1 g in 1000 mL
     expect(calc('1:1000 g/mL * 30.0 mL to mg').display).toBe('30.0 mg');
@@ -123,7 +128,7 @@ describe('the shared quantity reader', () => {
 describe('calc: notes', () => {
   it('says the same remark once when a number is written twice', () => {
     const r = calc('1300 g - 1300 g');
-    expect(r.notes.filter((n) => n.includes('trailing zeros of 1300'))).toHaveLength(1);
+    expect(r.notes.filter((n) => n.message.includes('trailing zeros of 1300'))).toHaveLength(1);
     expect(r.sigFigs).toBe(0);
   });
 });
@@ -135,5 +140,31 @@ describe('readQuantity', () => {
     expect(r.notes.map((n) => n.message)).toEqual(['the dose: the trailing zeros of 1300 are read as not significant (2 significant figures); write 1300. or use scientific notation if they are']);
     expect(readQuantity('13.0 mg', [MASS], 'the dose').notes).toEqual([]);
     expect(() => readQuantity('13.0 mL', [MASS], 'the dose')).toThrow(/the dose must be a mass/);
+  });
+});
+
+describe('calc: the JSON row', () => {
+  it('always has notes as {code, message}, after the values', () => {
+    expect(calcJson(calc('8.80 g + 2.1 g'))).toEqual({ input: '8.80 g + 2.1 g', value: 10.9, rounded: 10.9, display: '10.9 g', sigFigs: 3, unit: 'g', notes: [] });
+    const j = calcJson(calc('1300 g * 2'));
+    expect(j.notes).toEqual([{ code: 'TRAILING_ZEROS', message: expect.stringContaining('trailing zeros of 1300') }]);
+    expect(Object.keys(j).at(-1)).toBe('notes');
+  });
+
+  it('keeps the reading notes of a formula mass when an input carries ± (they were dropped)', () => {
+    // CuSO4.5H2O: the '.' is read as the addition dot, with a note
+    const plain = calc('M(CuSO4.5H2O)');
+    const withU = calc('M(CuSO4.5H2O) * 1.000 ± 0.001');
+    expect(plain.notes.length).toBeGreaterThan(0);
+    expect(withU.notes.map((n) => n.code)).toEqual(plain.notes.map((n) => n.code));
+  });
+});
+
+describe('calc: numbers JSON cannot carry', () => {
+  it('refuses an overflowing or underflowing input or result instead of writing null or 0', () => {
+    // 1e309 is beyond the largest double (about 1.8e308, IEEE 754); 1e-400 below the smallest (about 4.9e-324)
+    for (const text of ['1e309 g', '1e-400 g', '1e99 g * 1e99 * 1e99 * 1e99', '1e-99 g * 1e-99 * 1e-99 * 1e-99']) {
+      expect(safeCalc(text)).toMatchObject({ success: false, error: { issues: [{ code: 'NUMBER_OUT_OF_RANGE' }] } });
+    }
   });
 });

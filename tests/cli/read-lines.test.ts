@@ -34,4 +34,31 @@ describe('reading lines in batches', () => {
   it('handles CRLF, a byte-order mark and a last line without a newline', async () => {
     expect((await collect(['\ufeffH2O\r\nNa', 'Cl\r\n\r\nXx'])).flat()).toEqual(['H2O', 'NaCl', '', 'Xx']);
   });
+
+  it('reads a lone CR as a line end (old Mac files), however the input is cut into chunks', async () => {
+    expect((await collect(['H2O\rNaCl\rCO2'])).flat()).toEqual(['H2O', 'NaCl', 'CO2']);
+    expect((await collect(['H2O\r', '\nNaCl\r', 'CO2\r'])).flat()).toEqual(['H2O', 'NaCl', 'CO2']);
+    expect((await collect(['a\r\r', 'b'])).flat()).toEqual(['a', '', 'b']);
+    await fc.assert(
+      fc.asyncProperty(
+        // non-empty lines: after a CR, an empty line ended by LF would read as one CRLF
+        fc.array(fc.tuple(fc.string({ minLength: 1, maxLength: 6 }).map((s) => s.replace(/[\r\n]/g, 'x')), fc.constantFrom('\n', '\r\n', '\r')), { maxLength: 1200 }),
+        fc.array(fc.integer({ min: 1, max: 3000 }), { maxLength: 6 }),
+        async (lines, cuts) => {
+          const text = lines.map(([l, end]) => l + end).join('');
+          const chunks: string[] = [];
+          let at = 0;
+          for (const c of cuts) {
+            chunks.push(text.slice(at, at + c));
+            at += c;
+          }
+          chunks.push(text.slice(at));
+          const batches = await collect(chunks);
+          expect(batches.flat()).toEqual(lines.map(([l]) => l));
+          for (const b of batches) expect(b.length).toBeLessThanOrEqual(512);
+        },
+      ),
+      { numRuns: 100 },
+    );
+  });
 });

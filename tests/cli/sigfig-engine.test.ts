@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { jsonLines, pondus } from './run-cli.js';
+import { noteMessages } from '../support/notes.js';
 
 // The significant-figure engine seen through the commands. Rules: OpenStax Chemistry 2e §1.5
 // (from memory); rounding half to even per ASTM E29 (from memory). Figures worked by hand.
@@ -40,7 +41,7 @@ describe('results below the precision of the data, and defined numbers', () => {
     const [j] = jsonLines(pondus(['calc', '--json', '10.0 g - 9.95 g']).stdout);
     expect(j.sigFigs).toBe(0);
     expect(j.display).toBe('0.0 g');
-    expect(j.notes.join(' ')).toMatch(/below the precision of the data/);
+    expect(noteMessages(j).join(' ')).toMatch(/below the precision of the data/);
     const t = pondus(['calc', '10.0 g - 9.95 g']);
     expect(t.stdout).not.toContain('1 significant figure');
     expect(t.stdout).toContain('note: the difference (0.05 g unrounded) is below the precision of the data');

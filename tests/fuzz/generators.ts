@@ -52,3 +52,41 @@ export const expressionText = fc
 export const jsonLine = fc
   .dictionary(fc.constantFrom('C', 'H', 'O', 'N', 'sample', 'molarMass', '__proto__', 'toString'), fc.oneof(fc.double(), fc.string({ maxLength: 6 }), fc.constant(null), fc.constant({ toString: 'x' }), fc.array(fc.integer(), { maxLength: 2 }), fc.boolean()), { maxKeys: 5 })
   .map((o) => JSON.stringify(o));
+
+/** Text a spreadsheet would run as a formula, or a terminal would obey: for ids, cells and inputs. */
+export const hostileCell = fc.constantFrom(
+  '=HYPERLINK("http://evil.example","x")',
+  '=1+1',
+  '@SUM(A1:A2)',
+  '+1+1',
+  '-2+3',
+  '-cmd|calc',
+  '\t=1',
+  '\r=1',
+  'JK-9 fails\rJK-9 passes',
+  'MK-1\u001b[2J\u001b[1;1HMK-1 passes',
+  'bell\u0007',
+  'back\bspace',
+  'C1\u009bcontrol',
+  'x\u202eright-to-left',
+  '__proto__',
+  'constructor',
+);
+
+/** A CSV cell: quoted, with quotes doubled, so any text (line ends too) stays one cell. */
+const csvCell = (s: string) => `"${s.replace(/"/g, '""')}"`;
+
+/** A lab sheet for `analysis --sheet`: hostile ids, real and broken formulas and found values. */
+export const labSheet = fc
+  .array(fc.tuple(fc.oneof(hostileCell, anyText), fc.oneof(formulaText, fc.constantFrom('C20H25N3O', 'C9H8O4')), fc.array(fc.oneof(fc.constantFrom('72.30', '7.91', '12.60', '', 'x', '1e309', '-0.39', '74.27 N=12.99'), anyText), { minLength: 3, maxLength: 3 })), { minLength: 1, maxLength: 5 })
+  .map((rows) => ({ text: 'id,formula,C,H,N\n' + rows.map(([id, f, found]) => [id, f, ...found].map(csvCell).join(',') + '\n').join(''), rows: rows.length }));
+
+/** A measurement sheet for `empirical --sheet`. */
+export const measurementSheet = fc
+  .array(fc.tuple(fc.oneof(hostileCell, anyText), fc.array(fc.oneof(fc.constantFrom('40.00', '6.71', '53.29', 'rest', '', '1e309'), anyText), { minLength: 3, maxLength: 3 })), { minLength: 1, maxLength: 4 })
+  .map((rows) => ({ text: 'id,C,H,O\n' + rows.map(([id, v]) => [id, ...v].map(csvCell).join(',') + '\n').join(''), rows: rows.length }));
+
+/** An ion sheet for `ion --sheet`. */
+export const ionSheet = fc
+  .array(fc.tuple(fc.oneof(hostileCell, anyText), fc.oneof(formulaText, fc.constant('C15H15NO2')), fc.oneof(fc.constantFrom('[M+H]+', '[M+Na]+', '', '[M'), hostileCell), fc.oneof(fc.constantFrom('242.1172', '', 'x', '1e309'), hostileCell)), { minLength: 1, maxLength: 4 })
+  .map((rows) => ({ text: 'id,formula,ion,found\n' + rows.map((r) => r.map(csvCell).join(',') + '\n').join(''), rows: rows.length }));

@@ -4,12 +4,14 @@ import { parse as parseCsv } from 'csv-parse/sync';
 import fc from 'fast-check';
 import { join } from 'node:path';
 import { Worker } from 'node:worker_threads';
-import { anyText, equationText, expressionText, formulaText, jsonLine, keyValueSet, quantityText } from './generators.js';
+import { anyText, equationText, expressionText, formulaText, hostileCell, ionSheet, jsonLine, keyValueSet, labSheet, measurementSheet, quantityText } from './generators.js';
 
 export interface Case {
   command: string;
   args: string[];
   input?: string;
+  /** For a sheet on standard input: how many rows it has (each gets one JSON line). */
+  sheetRows?: number;
 }
 
 export interface Outcome {
@@ -21,10 +23,12 @@ export interface Outcome {
 }
 
 /** What a run may not do. Each kind is counted separately. */
-export type Violation = 'hang' | 'slow' | 'bad-exit' | 'internal-error' | 'thrown' | 'stack-overflow' | 'bad-json' | 'bad-csv' | 'null-or-nan' | 'row-count' | 'control-in-table' | 'formula-trigger';
+export type Violation = 'hang' | 'slow' | 'bad-exit' | 'internal-error' | 'thrown' | 'stack-overflow' | 'bad-json' | 'bad-csv' | 'null-or-nan' | 'row-count' | 'control-in-table' | 'control-in-stderr' | 'formula-trigger';
 
 const either = <T>(...a: fc.Arbitrary<T>[]) => fc.oneof(...a);
-const formulaOrText = either(formulaText, formulaText, anyText);
+const formulaOrText = either(formulaText, formulaText, anyText, hostileCell);
+const sheetFormat = fc.constantFrom('--json', '--csv', '--tsv', '--table');
+const withFormat = (fmt: string) => (fmt === '--table' ? [] : [fmt]);
 
 /** A command case for each command: arguments, or standard input with '-'. */
 export const COMMANDS: Record<string, fc.Arbitrary<Case>> = {
@@ -50,6 +54,10 @@ export const COMMANDS: Record<string, fc.Arbitrary<Case>> = {
   meq: fc.tuple(formulaOrText, fc.constantFrom('--mass', '--meq', '--mmol', '--concentration'), quantityText).map(([salt, opt, q]) => ({ command: 'meq', args: ['meq', '--json', salt, opt, q] })),
   osmolarity: keyValueSet.map((x) => ({ command: 'osmolarity', args: ['osmolarity', '--json', '--', x] })),
   alligation: fc.tuple(quantityText, quantityText, quantityText, quantityText).map(([t, h, l, total]) => ({ command: 'alligation', args: ['alligation', '--json', '--higher', h, '--lower', l, '--total', total, '--', t] })),
+  'analysis --sheet': fc.tuple(labSheet, sheetFormat, fc.constantFrom([], ['--solvents', 'water'])).map(([sheet, fmt, extra]) => ({ command: 'analysis', args: ['analysis', ...withFormat(fmt), ...extra, '--sheet', '-'], input: sheet.text, sheetRows: sheet.rows })),
+  'empirical --sheet': fc.tuple(measurementSheet, sheetFormat).map(([sheet, fmt]) => ({ command: 'empirical', args: ['empirical', ...withFormat(fmt), '--sheet', '-'], input: sheet.text, sheetRows: sheet.rows })),
+  'ion --sheet': fc.tuple(ionSheet, sheetFormat).map(([sheet, fmt]) => ({ command: 'ion', args: ['ion', ...withFormat(fmt), '--sheet', '-'], input: sheet.text, sheetRows: sheet.rows })),
+  'mass --csv': fc.tuple(fc.array(fc.oneof(hostileCell, formulaText), { minLength: 1, maxLength: 4 }), fc.constantFrom('--csv', '--tsv', '--table')).map(([xs, fmt]) => ({ command: 'mass', args: ['mass', ...withFormat(fmt), '--', ...xs] })),
   candidates: fc.tuple(fc.double({ min: -10, max: 1200, noNaN: true }), fc.constantFrom('1', '3', '10', '0', '-1', 'x')).map(([m, ppm]) => ({ command: 'candidates', args: ['candidates', '--json', String(Math.round(m * 1e5) / 1e5), '--ppm', ppm, '--limit', '20'] })),
 };
 
@@ -61,7 +69,8 @@ export function violations(c: Case, o: Outcome, slowMs: number): Violation[] {
   if (o.status === -1) v.push('thrown');
   else if (![0, 1, 2].includes(o.status)) v.push('bad-exit');
   if (/internal error|INTERNAL_ERROR/.test(o.stderr + o.stdout)) v.push('internal-error');
-  if (/Maximum call stack|RangeError/.test(o.stderr + o.stdout)) v.push('stack-overflow');
+  // (the batch turns a stack overflow into 'too deeply nested to process': still an overflow)
+  if (/Maximum call stack|RangeError|too deeply nested to process/.test(o.stderr + o.stdout)) v.push('stack-overflow');
   const json = c.args.includes('--json');
   if (json && o.stdout.trim() !== '') {
     const lines = o.stdout.split('\n').filter((l) => l.trim() !== '' && l.startsWith('{'));
@@ -75,21 +84,48 @@ export function violations(c: Case, o: Outcome, slowMs: number): Violation[] {
       }
     }
     if (c.input !== undefined && c.args.includes('-') && o.status !== 2) {
-      const expected = c.input.replace(/\r?\n$/, '').split(/\r?\n/).length;
+      const expected = c.sheetRows ?? c.input.replace(/(\r\n|\r|\n)$/, '').split(/\r\n|\r|\n/).length;
       if (lines.length !== expected) v.push('row-count');
     }
   }
-  if (c.args.includes('--csv') && o.stdout.trim() !== '') {
+  const csv = c.args.includes('--csv');
+  const tsv = c.args.includes('--tsv');
+  if ((csv || tsv) && o.stdout.trim() !== '') {
     try {
-      const rows = parseCsv(o.stdout, { relax_column_count: true }) as string[][];
-      // a text cell a spreadsheet would run as a formula; numbers such as -0.39 are numbers
-      if (rows.some((r) => r.some((cell) => /^[=+@\t\r-]/.test(cell) && !/^[-+]?\d/.test(cell)))) v.push('formula-trigger');
+      const rows = parseCsv(o.stdout, { relax_column_count: true, delimiter: tsv ? '\t' : ',', quote: tsv ? false : '"' }) as string[][];
+      if (rows.some((r) => r.some(isFormulaTrigger))) v.push('formula-trigger');
     } catch {
       v.push('bad-csv');
     }
   }
-  if (!json && !c.args.includes('--csv') && /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/.test(o.stdout)) v.push('control-in-table');
+  // a table may hold no control character but line ends (CR would let a row overwrite itself)
+  if (!json && !csv && !tsv && CONTROL.test(o.stdout)) v.push('control-in-table');
+  // messages on stderr neither (tabs and line ends apart)
+  if (CONTROL.test(o.stderr)) v.push('control-in-stderr');
   return [...new Set(v)];
+}
+
+/** The data rows of a CSV sheet (records after the header), as pondus reads them; -1 when it is not CSV. */
+function sheetRowCount(text: string): number {
+  try {
+    return Math.max(0, (parseCsv(text.replace(/^\ufeff/, ''), { relax_column_count: true, skip_empty_lines: true }) as unknown[]).length - 1);
+  } catch {
+    return -1;
+  }
+}
+
+/** C0 controls but tab and LF, DEL, C1 controls. */
+const CONTROL = /[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/;
+
+/**
+ * A cell a spreadsheet would run as a formula: starting with = + - @ tab or CR, unless the whole
+ * cell is a plain number such as -0.39 or +1.5e3 (a cell like -2+3 is a formula).
+ *
+ * @example
+ * isFormulaTrigger('-0.39') // false
+ */
+export function isFormulaTrigger(cell: string): boolean {
+  return /^[=+@\t\r-]/.test(cell) && !/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(cell);
 }
 
 /**
@@ -152,6 +188,8 @@ export class CliWorker {
 
 export interface FuzzReport {
   runs: number;
+  /** Wall time of the whole run. */
+  ms: number;
   counts: Partial<Record<Violation, number>>;
   examples: { violation: Violation; case: Case; stderr: string }[];
 }
@@ -159,7 +197,8 @@ export interface FuzzReport {
 /** Runs `runsPerCommand` generated cases for each command and counts the violations. */
 export async function fuzz(options: { seed: number; runsPerCommand: number; slowMs: number; hangMs: number; commands?: string[] }): Promise<FuzzReport> {
   const worker = new CliWorker(options.hangMs);
-  const report: FuzzReport = { runs: 0, counts: {}, examples: [] };
+  const report: FuzzReport = { runs: 0, ms: 0, counts: {}, examples: [] };
+  const t0 = performance.now();
   try {
     for (const [name, arb] of Object.entries(COMMANDS)) {
       if (options.commands && !options.commands.includes(name)) continue;
@@ -177,5 +216,55 @@ export async function fuzz(options: { seed: number; runsPerCommand: number; slow
   } finally {
     await worker.close();
   }
+  report.ms = Math.round(performance.now() - t0);
   return report;
+}
+
+/**
+ * A smaller case that still shows the violation: drops arguments, lines and characters of each
+ * text while the violation stays (at most `budget` runs).
+ *
+ * @example
+ * await shrinkCase(worker, { command: 'mass', args: ['mass', '--json', '--', 'H2Oxx'] }, 'internal-error')
+ */
+export async function shrinkCase(worker: CliWorker, c: Case, kind: Violation, budget = 300): Promise<Case> {
+  let best = c;
+  let left = budget;
+  const still = async (k: Case) => {
+    left--;
+    return violations(k, await worker.run(k), 6000).includes(kind);
+  };
+  // the texts that may shrink: the arguments after the command's options ('--' onwards), and the input
+  const texts = (k: Case): { get: () => string; set: (s: string) => Case }[] => {
+    const out: { get: () => string; set: (s: string) => Case }[] = [];
+    k.args.forEach((a, i) => {
+      if (i === 0 || a.startsWith('--') || a === '-') return;
+      out.push({ get: () => a, set: (s) => ({ ...k, args: k.args.map((x, j) => (j === i ? s : x)) }) });
+    });
+    if (k.input !== undefined && k.sheetRows === undefined) out.push({ get: () => k.input!, set: (s) => ({ ...k, input: s }) });
+    // a sheet shrinks too, its row count read again (not for a wrong row count: that needs the count)
+    if (k.input !== undefined && k.sheetRows !== undefined && kind !== 'row-count') out.push({ get: () => k.input!, set: (s) => ({ ...k, input: s, sheetRows: sheetRowCount(s) }) });
+    return out;
+  };
+  let progress = true;
+  while (progress && left > 0) {
+    progress = false;
+    for (const [i] of texts(best).entries()) {
+      let chunk = Math.max(1, texts(best)[i].get().length >> 1);
+      while (chunk >= 1 && left > 0) {
+        let cut = false;
+        const s = texts(best)[i].get();
+        for (let at = 0; at + chunk <= s.length && left > 0; at += chunk) {
+          const k = texts(best)[i].set(s.slice(0, at) + s.slice(at + chunk));
+          if (await still(k)) {
+            best = k;
+            cut = progress = true;
+            break;
+          }
+        }
+        if (!cut) chunk >>= 1;
+      }
+    }
+  }
+  return best;
 }

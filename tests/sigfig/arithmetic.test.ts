@@ -71,6 +71,6 @@ describe('arithmetic by the textbook rules', () => {
   it('notes ambiguous trailing zeros', () => {
     const r = calc('1300 g');
     expect(r.display).toBe('1.3 × 10³ g');
-    expect(r.notes[0]).toMatch(/not significant/);
+    expect(r.notes[0].message).toMatch(/not significant/);
   });
 });

@@ -14,7 +14,8 @@ describe('hostile expressions get clear errors', () => {
   it('10,000 nested parentheses', () => {
     expect(code('('.repeat(10000) + '1' + ')'.repeat(10000))).toBe('INPUT_TOO_LONG');
     expect(code('('.repeat(100) + '1' + ')'.repeat(100))).toBe('NESTING_TOO_DEEP');
-    expect(code('('.repeat(60) + '1' + ')'.repeat(60))).toBeNull();
+    expect(code('('.repeat(32) + '1' + ')'.repeat(32))).toBeNull();
+    expect(code('('.repeat(33) + '1' + ')'.repeat(33))).toBe('NESTING_TOO_DEEP');
   });
 
   it('unknown units and words', () => {

@@ -29,7 +29,8 @@ export function calcPresenter(o: CalcCliOptions): Presenter<CalcResult> {
       }
       return lines.join('\n');
     },
-    notes: (r) => r.notes,
+    notes: (r) => r.notes.map((n) => n.message),
+    noteItems: (r) => r.notes,
   };
 }
 

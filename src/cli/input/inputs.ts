@@ -1,4 +1,5 @@
 import { readLineBatches } from './read-lines.js';
+import { refuseUnreadableStdin, stdinReadError } from './stdin-check.js';
 
 /** One input to a command, with its 1-based position in the whole input sequence. */
 export interface InputItem {
@@ -20,7 +21,18 @@ export async function* inputBatches(args: string[], stdin: () => AsyncIterable<s
     if (a === '-') {
       if (pending.length) yield pending;
       pending = [];
-      for await (const batch of readLineBatches(stdin())) {
+      const stream = stdin();
+      refuseUnreadableStdin(stream);
+      const lines = readLineBatches(stream);
+      for (;;) {
+        let next: IteratorResult<string[]>;
+        try {
+          next = await lines.next();
+        } catch (e) {
+          throw stdinReadError(e);
+        }
+        if (next.done) break;
+        const batch = next.value;
         const items = new Array<InputItem>(batch.length);
         for (let i = 0; i < batch.length; i++) items[i] = { text: batch[i], line: ++line };
         yield items;
