@@ -26,6 +26,7 @@ import type { CommandRunner } from './commands/runner.js';
 import { PRESENTERS } from './commands/registry.js';
 import { fixedBatch, inputBatches } from './input/inputs.js';
 import { Sink } from './output/sink.js';
+import { visibleControls } from './output/format.js';
 import { styleFor } from './output/style.js';
 import { finishProgram } from './program-setup.js';
 
@@ -88,7 +89,7 @@ export async function main(args: string[], io: CliIo): Promise<number> {
       writeOut: (s) => out.write(s),
       writeErr: (s) => err.write(s),
       // one message style: commander's own usage errors start 'pondus:' like every other message
-      outputError: (s, write) => write(errStyle.red(s.replace(/^error: /, 'pondus: '))),
+      outputError: (s, write) => write(errStyle.red(s.split('\n').map((l) => visibleControls(l)).join('\n').replace(/^error: /, 'pondus: '))),
     });
   registerMass(program, run);
   registerComposition(program, run);

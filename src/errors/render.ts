@@ -23,14 +23,14 @@ export function renderError(error: PondusError, options: RenderOptions = {}): st
   const where = options.line !== undefined ? `line ${options.line}: ` : '';
   const out: string[] = [];
   for (const issue of error.issues) {
-    out.push(`${where}${em(`error ${issue.code}`)}: ${issue.message}`);
+    out.push(`${where}${em(`error ${issue.code}`)}: ${visibleText(issue.message)}`);
     if (error.input !== undefined && issue.column !== undefined) {
       const [shown, caretAt] = window(error.input, issue.column - 1);
       const len = Math.max(1, Math.min(issue.length ?? 1, MAX_SHOWN - caretAt));
       out.push(`  ${shown}`);
       out.push(`  ${' '.repeat(caretAt)}${em('^'.repeat(len))}`);
     }
-    if (issue.hint) out.push(`  hint: ${issue.hint}`);
+    if (issue.hint) out.push(`  hint: ${visibleText(issue.hint)}`);
   }
   return out.join('\n');
 }
@@ -44,6 +44,11 @@ function window(input: string, col: number): [string, number] {
   const prefix = start > 0 ? '…' : '';
   const suffix = start + MAX_SHOWN < chars.length ? '…' : '';
   return [prefix + slice.join('') + suffix, col - start + prefix.length];
+}
+
+/** A message or hint with any control character it quotes from the input made visible (␦). */
+function visibleText(text: string): string {
+  return /[\u0000-\u001f\u007f-\u009f]/.test(text) ? Array.from(text).map(visible).join('') : text;
 }
 
 function visible(ch: string): string {

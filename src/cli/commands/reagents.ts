@@ -5,7 +5,7 @@ import { readProcedure, type ProcedureRow } from '../../reagent-table/procedure.
 import { reagentRowJson } from '../../reagent-table/reagent-table-json.js';
 import { readRowText } from '../../reagent-table/row-text.js';
 import { reagentRow, solventRow, TABLE_CAUTION, tableCautions, tableContext, type ReagentRole, type ReagentRow, type ReagentSpec, type ReagentTableOptions, type TableContext } from '../../reagent-table/table.js';
-import { readAllText } from '../input/read-all.js';
+import { readSheetText } from '../input/sheet-file.js';
 import type { Cell } from '../output/format.js';
 import type { Presenter } from '../output/presenter.js';
 import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
@@ -229,7 +229,7 @@ export function registerReagents(program: Command, run: CommandRunner, stdin: ()
     if (o.procedure !== undefined) {
       const given = ['reference', 'reagent', 'catalyst', 'additive', 'product'].filter((k) => (o as Record<string, unknown>)[k] !== undefined);
       if (given.length) throw fail({ code: 'USAGE', message: `--procedure gives the rows: drop ${given.map((g) => `--${g}`).join(', ')}` });
-      const proc = readProcedure(await readAllText(o.procedure, stdin));
+      const proc = readProcedure(await readSheetText(o.procedure, stdin, '--procedure'));
       const clash = (['concentration', 'equation', 'actual'] as const).filter((k) => proc.options[k] !== undefined && o[k] !== undefined);
       if (clash.length) throw fail({ code: 'USAGE', message: `the procedure file already gives ${clash.join(', ')}: drop --${clash.join(', --')}` });
       fileOptions = proc.options;

@@ -23,7 +23,7 @@ const megabytes = (n: number) => `${Math.round(n / (1024 * 1024))} MB`;
  * @example
  * const chunks = openSheet('results.csv', () => process.stdin);
  */
-export function openSheet(path: string, stdin: () => AsyncIterable<string | Buffer>): AsyncIterable<string | Buffer> {
+export function openSheet(path: string, stdin: () => AsyncIterable<string | Buffer>, option = '--sheet'): AsyncIterable<string | Buffer> {
   if (path === '-') {
     const s = stdin();
     refuseUnreadableStdin(s);
@@ -35,20 +35,20 @@ export function openSheet(path: string, stdin: () => AsyncIterable<string | Buff
     fd = openSync(path, constants.O_RDONLY | constants.O_NOFOLLOW | constants.O_NONBLOCK);
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    if (code === 'ELOOP') throw fail({ code: 'USAGE', message: `--sheet ${path} is a symbolic link; sheets are read only from the file itself, so give its own path` });
-    if (code === 'ENOENT') throw fail({ code: 'USAGE', message: `--sheet ${path}: no such file` });
-    if (code === 'EACCES' || code === 'EPERM') throw fail({ code: 'USAGE', message: `--sheet ${path}: permission denied` });
-    throw fail({ code: 'USAGE', message: `cannot read --sheet ${path} (${code ?? String(e)})` });
+    if (code === 'ELOOP') throw fail({ code: 'USAGE', message: `${option} ${path} is a symbolic link; sheets are read only from the file itself, so give its own path` });
+    if (code === 'ENOENT') throw fail({ code: 'USAGE', message: `${option} ${path}: no such file` });
+    if (code === 'EACCES' || code === 'EPERM') throw fail({ code: 'USAGE', message: `${option} ${path}: permission denied` });
+    throw fail({ code: 'USAGE', message: `cannot read ${option} ${path} (${code ?? String(e)})` });
   }
   const st = fstatSync(fd);
   const refuse = (message: string) => {
     closeSync(fd);
     return fail({ code: 'USAGE', message });
   };
-  if (st.isDirectory()) throw refuse(`--sheet ${path} is a directory; give a CSV file`);
-  if (!st.isFile()) throw refuse(`--sheet ${path} is not a regular file (a device, FIFO or socket); give a CSV file, or - with the sheet on standard input`);
-  if (st.size > MAX_SHEET_BYTES) throw refuse(`--sheet ${path} is ${megabytes(st.size)}; sheets are read up to ${megabytes(MAX_SHEET_BYTES)}: split it`);
-  return limited(createReadStream('', { fd, autoClose: true }), `--sheet ${path}`);
+  if (st.isDirectory()) throw refuse(`${option} ${path} is a directory; give a CSV file`);
+  if (!st.isFile()) throw refuse(`${option} ${path} is not a regular file (a device, FIFO or socket); give a CSV file, or - with the sheet on standard input`);
+  if (st.size > MAX_SHEET_BYTES) throw refuse(`${option} ${path} is ${megabytes(st.size)}; sheets are read up to ${megabytes(MAX_SHEET_BYTES)}: split it`);
+  return limited(createReadStream('', { fd, autoClose: true }), `${option} ${path}`);
 }
 
 /** Passes the chunks on, refusing once more than the size limit has come (a file that grows, a pipe). */
@@ -139,4 +139,17 @@ export async function* sheetRecords(source: AsyncIterable<string | Buffer>): Asy
   end();
   for (const b of out.splice(0)) yield b;
   if (batch.length > 0) yield batch;
+}
+
+/**
+ * A whole small sheet as text (a procedure file), read with the same checks as a streamed sheet:
+ * a regular file named directly, within the size limit, or `-` for standard input.
+ *
+ * @example
+ * await readSheetText('procedure.csv', () => process.stdin, '--procedure')
+ */
+export async function readSheetText(path: string, stdin: () => AsyncIterable<string | Buffer>, option = '--sheet'): Promise<string> {
+  let text = '';
+  for await (const chunk of openSheet(path, stdin, option)) text += typeof chunk === 'string' ? chunk : chunk.toString('utf8');
+  return text;
 }
