@@ -7,7 +7,7 @@
  *
  * @example
  * import { formulaMass, composition } from 'pondus';
- * formulaMass('CuSO4·5H2O').molarMass.toString()                         // '249.677'
+ * formulaMass('CuSO4·5H2O').molarMass                                    // 249.677
  * composition('CuSO4·5H2O', { part: 'H2O' }).part?.massPercent.toFixed(2) // '36.08'
  */
 
@@ -23,7 +23,7 @@ export { Decimal } from './exact/decimal.js';
 export { parseFormula, safeParseFormula, type ParseOptions } from './formula-parser/parse.js';
 export { ABBREVIATIONS, ABBREVIATION_CLASHES } from './formula-parser/abbreviations.js';
 export type { FormulaTree, ComponentNode, PartNode, AtomNode, GroupNode, CountNode, Span } from './formula-parser/tree.js';
-export { flattenFormula, type AtomCounts } from './formula/flatten.js';
+export { flattenFormula, atomVector, type AtomCounts, type AtomVector } from './formula/flatten.js';
 export { hillFormula, hillOrder } from './formula/hill.js';
 export type { Amount } from './formula/amount.js';
 
@@ -34,14 +34,14 @@ export { ELECTRON_MASS, CONSTANTS_PROVENANCE } from './elements/constants.js';
 export type { WeightTable } from './elements/atom-data.js';
 
 // molar mass
-export { formulaMass, safeFormulaMass, molarMass, type MassOptions, type MassResult, type Contribution } from './mass/formula-mass.js';
+export { formulaMass, safeFormulaMass, formulaMassDetail, plainMass, molarMass, type MassOptions, type MassResult, type MassDetail, type Contribution } from './mass/formula-mass.js';
 export { reportedMolarMass } from './mass/reported-mass.js';
-export { massJson, type MassJson } from './mass/mass-json.js';
+export { massJson, massJsonLine, massCells, MASS_COLUMNS, type MassJson, type NoteJson } from './mass/mass-json.js';
 
 // composition
-export { composition, safeComposition, type CompositionResult, type CompositionOptions, type ElementShare } from './composition/element-shares.js';
+export { composition, safeComposition, compositionDetail, type CompositionResult, type CompositionDetail, type CompositionOptions, type ElementShare, type PartShareResult } from './composition/element-shares.js';
 export { partShare, type PartShare } from './composition/part-share.js';
-export { compositionJson, type CompositionJson } from './composition/composition-json.js';
+export { compositionJson, compositionJsonLine, compositionCsvColumns, compositionCsvRow, compositionCsvLongRows, COMPOSITION_LONG_COLUMNS, type CompositionJson } from './composition/composition-json.js';
 
 // measured numbers and significant figures
 export { exact, times, dividedBy, plus, minus, sumMeasured, sigFigsOf, type Measured } from './sigfig/measured.js';

@@ -5,7 +5,7 @@
  */
 import { Decimal } from '../exact/decimal.js';
 import { fail, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
-import { formulaMass, type MassOptions } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassOptions } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import type { Note } from '../errors/issue.js';
 import { readKeyValues } from '../key-values/read-key-values.js';
@@ -71,7 +71,7 @@ export function mixtureComposition(input: string, options: MassOptions = {}): Mi
     if (!unitText) throw fail({ code: 'BAD_AMOUNT', message: `give a unit for ${formula}: ${formula}=${number} g`, column: valueColumn }, input);
     let mr;
     try {
-      mr = formulaMass(formula, options);
+      mr = formulaMassDetail(formula, options);
     } catch (e) {
       if (e instanceof PondusError) throw new PondusError(e.issues.map((i) => ({ ...i, column: (i.column ?? 1) + at })), input);
       throw e;

@@ -4,7 +4,7 @@
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { Decimal } from '../exact/decimal.js';
-import { formulaMass } from '../mass/formula-mass.js';
+import { formulaMassDetail } from '../mass/formula-mass.js';
 import { readMeasurements, type Measurements } from './measurements.js';
 import { searchFormula, type FormulaFit } from './formula-search.js';
 
@@ -35,7 +35,7 @@ export interface EmpiricalResult {
 
 function multiply(f: FormulaFit, k: number): string {
   const m = new Map([...f.counts].map(([s, c]) => [s, c * k]));
-  return formulaMass([...m].map(([s, c]) => `${s}${c}`).join(''), { abbreviations: 'none' }).formula; // element symbols written by code
+  return formulaMassDetail([...m].map(([s, c]) => `${s}${c}`).join(''), { abbreviations: 'none' }).formula; // element symbols written by code
 }
 
 /**
@@ -47,7 +47,7 @@ function multiply(f: FormulaFit, k: number): string {
 export function empirical(input: string, options: EmpiricalOptions = {}): EmpiricalResult {
   const m = readMeasurements(input);
   const s = searchFormula(m);
-  const empiricalMass = formulaMass(s.best.formula, { abbreviations: 'none' }).molarMass; // a Hill formula: element symbols only
+  const empiricalMass = formulaMassDetail(s.best.formula, { abbreviations: 'none' }).molarMass; // a Hill formula: element symbols only
   const notes: Note[] = [];
   const d = m.difference;
   if (d) notes.push({ code: 'BY_DIFFERENCE', message: `${d.symbol} by difference: ${d.value.toFixed()}${m.kind === 'percent' ? ' %' : ' g'}` });

@@ -12,14 +12,14 @@ import { MASS, measureAs } from '../calc/measure.js';
 import { partShare } from '../composition/part-share.js';
 import { Decimal } from '../exact/decimal.js';
 import { toDecimal } from '../formula/amount.js';
-import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { dividedBy, exact, times, type Measured } from '../sigfig/measured.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
 
 export interface SaltFactorResult {
-  salt: MassResult;
-  parent: MassResult;
+  salt: MassDetail;
+  parent: MassDetail;
   /** Parent units per salt formula unit. */
   perSalt: Decimal;
   /** M(salt) / (n · M(parent)): grams of salt per gram of parent. */
@@ -53,8 +53,8 @@ export interface SaltOptions extends MassOptions {
  */
 export function saltFactor(saltText: string, parentText: string, options: SaltOptions = {}): SaltFactorResult {
   const notes: Note[] = [];
-  const salt = formulaMass(saltText, options);
-  const parent = formulaMass(parentText, options);
+  const salt = formulaMassDetail(saltText, options);
+  const parent = formulaMassDetail(parentText, options);
   const share = partShare(salt, parentText, options);
   const perSalt = toDecimal(share.count);
   if (share.countedFrom !== 'written') throw fail({ code: 'BAD_OPTION', message: `${parent.formula} is not written as a part of ${saltText}; write the salt as parent·acid (e.g. C17H19NO3·HCl)` });

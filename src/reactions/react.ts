@@ -6,7 +6,7 @@
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { AMOUNT, MASS, measureAs } from '../calc/measure.js';
-import { formulaMass } from '../mass/formula-mass.js';
+import { formulaMassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import type { ParseOptions } from '../formula-parser/parse.js';
 import { exact } from '../sigfig/measured.js';
@@ -53,7 +53,7 @@ const G_PER_MOL = unitOf('g/mol');
 
 function molarMassOf(s: Species, options: ParseOptions): Quantity | null {
   if (s.formula === 'e-') return null;
-  return quantity(reportedMolarMass(formulaMass(s.text, options)), G_PER_MOL);
+  return quantity(reportedMolarMass(formulaMassDetail(s.text, options)), G_PER_MOL);
 }
 
 function findSpecies(key: string, all: Species[], input: string): Species {
@@ -65,7 +65,7 @@ function findSpecies(key: string, all: Species[], input: string): Species {
 
 function safeHill(text: string): string | null {
   try {
-    return formulaMass(text).formula;
+    return formulaMassDetail(text).formula;
   } catch {
     return null;
   }

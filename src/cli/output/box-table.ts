@@ -1,0 +1,92 @@
+/**
+ * Fixed-width tables drawn with box characters, written directly: a row is a few
+ * string concatenations, so a batch streams its table row by row with the widths
+ * taken from a first block. Widths count code points (pondus's cells are narrow
+ * characters: digits, letters, subscripts, ␦).
+ */
+
+export type Align = 'left' | 'right';
+
+/** The display width of a text (code points; colour sequences are added after padding, never measured). */
+export function textWidth(s: string): number {
+  let n = 0;
+  for (let i = 0; i < s.length; i++) {
+    const c = s.charCodeAt(i);
+    if (c < 0xdc00 || c > 0xdfff) n++; // a low surrogate belongs to the code point before it
+  }
+  return n;
+}
+
+/** Cuts a text to `width` columns, ending in '…' when it had to be cut. */
+export function fitText(s: string, width: number): string {
+  if (textWidth(s) <= width) return s;
+  if (width <= 1) return '…'.slice(0, width);
+  let out = '';
+  let n = 0;
+  for (const ch of s) {
+    if (n === width - 1) break;
+    out += ch;
+    n++;
+  }
+  return out + '…';
+}
+
+function pad(s: string, width: number, align: Align): string {
+  const gap = width - textWidth(s);
+  if (gap <= 0) return s;
+  const fill = ' '.repeat(gap);
+  return align === 'right' ? fill + s : s + fill;
+}
+
+/** The widths (text only, without the one space either side) that fit a header and rows. */
+export function columnWidths(head: readonly string[], rows: readonly (readonly string[])[]): number[] {
+  const w = head.map(textWidth);
+  for (const r of rows) for (let i = 0; i < w.length; i++) w[i] = Math.max(w[i], textWidth(r[i] ?? ''));
+  return w;
+}
+
+/**
+ * Narrows the widest left-aligned columns (echoed text: inputs, formulas) until the table fits
+ * `columns` terminal columns; right-aligned numbers keep their width.
+ */
+export function fitWidths(widths: number[], align: readonly Align[], columns: number | undefined): number[] {
+  if (!columns) return widths;
+  const w = widths.slice();
+  const total = () => w.reduce((s, x) => s + x + 3, 1);
+  while (total() > columns) {
+    let widest = -1;
+    for (let i = 0; i < w.length; i++) if (align[i] !== 'right' && w[i] > 6 && (widest < 0 || w[i] > w[widest])) widest = i;
+    if (widest < 0) break;
+    w[widest]--;
+  }
+  return w;
+}
+
+/** The rule above the header, below the rows. */
+export function ruleLine(widths: readonly number[], where: 'top' | 'bottom'): string {
+  const [l, m, r] = where === 'top' ? ['┌', '┬', '┐'] : ['└', '┴', '┘'];
+  let s = l;
+  for (let i = 0; i < widths.length; i++) s += (i ? m : '') + '─'.repeat(widths[i] + 2);
+  return s + r;
+}
+
+/** One row of cells, each cut to its width and padded; `style` colours a cell after padding. */
+export function rowLine(cells: readonly string[], widths: readonly number[], align: readonly Align[], style?: (s: string) => string): string {
+  let s = '│';
+  for (let i = 0; i < widths.length; i++) {
+    const text = pad(fitText(cells[i] ?? '', widths[i]), widths[i], align[i] ?? 'left');
+    s += ` ${style ? style(text) : text} │`;
+  }
+  return s;
+}
+
+/**
+ * A whole small table as text.
+ *
+ * @example
+ * boxTable(['a', 'b'], [['1', '22']], ['left', 'right']).split('\n')[2] // '│ 1 │ 22 │'
+ */
+export function boxTable(head: readonly string[], rows: readonly (readonly string[])[], align: readonly Align[]): string {
+  const w = columnWidths(head, rows);
+  return [ruleLine(w, 'top'), rowLine(head, w, align), ...rows.map((r) => rowLine(r, w, align)), ruleLine(w, 'bottom')].join('\n');
+}
