@@ -61,7 +61,8 @@ export async function main(args: string[], io: CliIo): Promise<number> {
     }
     const numbered = inputs.includes('-') || inputs.length > 1;
     const batches = lineNumbers ? fixedBatch(inputs, lineNumbers) : inputBatches(inputs, io.stdin);
-    const summary = await runBatch(presenter, batches, format, { out, err, outStyle, errStyle }, numbered || !!lineNumbers);
+    const columns = io.stdout.isTTY ? (io.stdout as { columns?: number }).columns : undefined;
+    const summary = await runBatch(presenter, batches, format, { out, err, outStyle, errStyle, columns }, numbered || !!lineNumbers);
     if (presenter.tally) {
       const line = `${summary.tallied} of ${summary.total} ${presenter.tally.words}\n`;
       if (format === 'table') out.write(line);

@@ -16,7 +16,9 @@ describe('pondus mass', () => {
     expect(r.status).toBe(0);
     const [w, s] = jsonLines(r.stdout);
     // exact sums of CIAAW weights; monoisotopic mass from AME2020 (1H, 16O)
-    expect(w).toEqual({ input: 'H2O', formula: 'H2O', molarMass: 18.015, monoisotopicMass: 18.010564683056, nominalMass: 18, charge: 0 });
+    expect(w).toEqual({ line: 1, input: 'H2O', formula: 'H2O', molarMass: 18.015, monoisotopicMass: 18.010564683056, nominalMass: 18, charge: 0, notes: [] });
+    expect(s.line).toBe(2);
+    expect(s.notes.map((n: { code: string }) => n.code)).toEqual(['ION_MOLAR_MASS']);
     expect(s.charge).toBe(-2);
     expect(s.formula).toBe('O4S^2-');
   });
@@ -78,6 +80,7 @@ describe('pondus mass', () => {
     const r = pondus(['mass', 'PuO2']);
     expect(r.stdout).toContain('plutonium (Pu) has no standard atomic weight');
     const j = jsonLines(pondus(['mass', '--json', 'PuO2']).stdout)[0];
-    expect(j.notes[0]).toContain('244');
+    expect(j.notes[0].message).toContain('244');
+    expect(j.notes[0].code).toBe('NO_STANDARD_WEIGHT');
   });
 });
