@@ -82,6 +82,7 @@ class Scanner {
   private run = 0;
   private trap = false;
   private readonly dotNotes: Note[] = [];
+  private readonly countNotes: Note[] = [];
   constructor(
     private readonly text: string,
     start: number,
@@ -233,6 +234,10 @@ class Scanner {
     if (end === start) return afterPart ? this.subscriptCount() : null;
     const next = end < this.limit ? t.charCodeAt(end) : -1;
     if (afterPart && next === 46 && end - start === 1 && t.charCodeAt(start) === 48) return this.decimalCount(start);
+    if (afterPart && next === 46 && t.charCodeAt(start) !== 48 && end - start <= MAX_COUNT_DIGITS) {
+      const d = this.endDecimalCount(start, end);
+      if (d) return d;
+    }
     // leading zeros, zero, huge counts, decimal points (but the shorthand dot, which body() checks) and
     // subscripts after digits go to the full parser
     if (t.charCodeAt(start) === 48 || end - start > MAX_COUNT_DIGITS || (next === 46 && !afterPart) || (next >= 0x2080 && next <= 0x2089)) throw GIVE_UP;
@@ -252,6 +257,28 @@ class Scanner {
     let last = end;
     while (t.charCodeAt(last - 1) === 48) last--;
     if (last === start + 2) throw GIVE_UP;
+    this.pos = end;
+    return { text: t.slice(start, last), integer: false, span: { start, end } };
+  }
+
+  /**
+   * `YBa2Cu3O6.95`: a decimal count of one or more that ends the formula, read as written; with one
+   * or two decimals it could be a hydrate cut short (CuSO4.5), and the grammar's note says so.
+   */
+  private endDecimalCount(start: number, dot: number): CountNode | null {
+    const t = this.text;
+    let end = dot + 1;
+    while (end < this.limit && t.charCodeAt(end) >= 48 && t.charCodeAt(end) <= 57) end++;
+    const decimals = end - dot - 1;
+    if (end !== this.limit || decimals === 0 || decimals > MAX_COUNT_DECIMALS) return null;
+    let last = end;
+    while (t.charCodeAt(last - 1) === 48) last--;
+    if (last === dot + 1) return null;
+    const written = t.slice(start, end);
+    if (/^[1-9][0-9]*\.[0-9]{1,2}$/.test(written)) {
+      const col = columnOf(t, start);
+      this.countNotes.push({ code: 'DECIMAL_COUNT', message: `'${written}' at column ${col} is read as a decimal count; for an addition compound write the dot and its part (CuSO4·5H2O)`, column: col });
+    }
     this.pos = end;
     return { text: t.slice(start, last), integer: false, span: { start, end } };
   }
@@ -277,7 +304,7 @@ class Scanner {
 
   notes(components: ComponentNode[]): Note[] {
     const trap = this.trap ? caseTrapNotes(components) : [];
-    return this.dotNotes.length ? [...this.dotNotes, ...trap] : trap;
+    return this.dotNotes.length || this.countNotes.length ? [...this.countNotes, ...this.dotNotes, ...trap] : trap;
   }
 }
 
