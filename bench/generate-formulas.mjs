@@ -52,7 +52,7 @@ export function* generateMixedFormulas(n, seed = 777) {
     else if (k < 0.08) g = `C${int(1, 30)}D${int(1, 60)}O${int(0, 4)}`.replace(/O0$/, '');
     else if (k < 0.12) g = rnd() < 0.5 ? `${['Fe', 'Ni', 'Co', 'Mn'][int(0, 3)]}0.${int(80, 99)}O` : `YBa2Cu3O6.${int(10, 99)}`;
     else if (k < 0.16) g = `${['CuSO4', 'CaSO4', 'MgSO4', 'Na2CO3', 'CaCl2'][int(0, 4)]}.${int(1, 10)}H2O`;
-    else if (k < 0.2) g = f.replace(/[0-9]+/g, (d) => sub(d));
+    else if (k < 0.2) g = f.replace(/([A-Za-z)\]])([0-9]+)/g, (m, a, d) => a + sub(d)); // counts only: a multiplier stays ASCII
     else if (k < 0.22) g = ` ${f} `;
     yield g;
     if (++i >= n) return;

@@ -54,7 +54,7 @@ const GIVE_UP = new GiveUp();
  *
  * @example
  * fastParse('CuSO4·5H2O')?.components.length // 2
- * fastParse('NH4^+')                         // null
+ * fastParse('[13C]H4')                       // null
  */
 export function fastParse(input: string): FormulaTree | null {
   if (input.length === 0 || input.length > MAX_FORMULA_LENGTH) return null;

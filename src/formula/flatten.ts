@@ -36,7 +36,7 @@ let touched: number[] = [];
  * Throws COUNT_TOO_LARGE past 10^12 atoms of one kind.
  *
  * @example
- * atomVector(parseFormula('CuSO4·5H2O')).counts // [10, 1, 9, 1]
+ * atomVector(parseFormula('CuSO4·5H2O')).counts // [1, 10, 9, 1]
  */
 export function atomVector(tree: FormulaTree): AtomVector {
   touched = [];
