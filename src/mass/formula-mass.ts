@@ -17,7 +17,7 @@ import { toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { ELECTRON_MASS } from '../elements/constants.js';
 import { ATOMS, type AtomData, type WeightTable } from '../elements/atom-data.js';
 import { Decimal } from '../exact/decimal.js';
-import { fromScaled, scaledToString, SCALE_DIGITS } from '../exact/scaled.js';
+import { bigScaledToString, fromScaled, scaledToString, SCALE_DIGITS } from '../exact/scaled.js';
 import { amountText, toDecimal, type Amount } from '../formula/amount.js';
 import { atomVector, countsMap, type AtomCounts, type AtomVector } from '../formula/flatten.js';
 import { chargeText } from '../formula/hill.js';
@@ -190,11 +190,27 @@ function monoDecimal(core: MassCore): Decimal {
   return core.tree.charge !== 0 ? m.minus(new Decimal(ELECTRON_MASS).times(core.tree.charge)) : m;
 }
 
+/** The electron mass in 10^-15 u (CODATA 2018 gives it to 15 decimals), for exact ion masses in BigInt. */
+let electron15: bigint | null = null;
+
 function monoOf(core: MassCore): [number, string] {
   // an exact integer divided by 10^12 is the correctly rounded double of the exact decimal
-  if (core.monoScaled !== null && core.tree.charge === 0) return [core.monoScaled / SCALE, scaledToString(core.monoScaled)];
+  if (core.monoScaled !== null) {
+    if (core.tree.charge === 0) return [core.monoScaled / SCALE, scaledToString(core.monoScaled)];
+    // an ion: the electrons in exact integer arithmetic, and Number() of the exact text is its nearest double
+    electron15 ??= electronIn15();
+    if (electron15 !== null) {
+      const text = bigScaledToString(BigInt(core.monoScaled) * 1000n - BigInt(core.tree.charge) * electron15, 15);
+      return [Number(text), text];
+    }
+  }
   const d = monoDecimal(core);
   return [d.toNumber(), d.toFixed()];
+}
+
+function electronIn15(): bigint | null {
+  const m = /^0\.([0-9]{1,15})$/.exec(ELECTRON_MASS);
+  return m ? BigInt(m[1].padEnd(15, '0')) : null;
 }
 
 function plainResult(core: MassCore): MassResult {

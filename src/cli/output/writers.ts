@@ -143,6 +143,8 @@ class DelimitedWriter<R> implements ResultWriter<R> {
 }
 
 const MAX_TABLE_NOTES = 1000;
+// eslint-disable-next-line no-control-regex
+const CONTROL_BUT_NEWLINE = /[\u0000-\u0009\u000b-\u001f\u007f-\u009f]/;
 
 /**
  * Tables stream: the column widths come from the first block of rows (up to 512 inputs, or all
@@ -188,7 +190,11 @@ class TableWriter<R> implements ResultWriter<R> {
   endBatch(final: boolean): void {
     const s = this.ctx.outStyle;
     const out = this.ctx.out;
-    if (this.blocks.length) out.write(this.blocks.map((b) => b.split('\n').map((l) => visibleControls(l, s.level > 0)).join('\n')).join('\n') + '\n');
+    if (this.blocks.length) {
+      const text = this.blocks.join('\n');
+      // echoed input is made harmless line by line, where a block holds any control character but its newlines
+      out.write((CONTROL_BUT_NEWLINE.test(text) ? text.split('\n').map((l) => visibleControls(l, s.level > 0)).join('\n') : text) + '\n');
+    }
     if (this.rows.length && (this.okCount > 0 || this.widths)) {
       const t = this.p.table!;
       if (!this.widths) {
