@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
+import { Chalk } from 'chalk';
 import { jsonLines, pondus } from './run-cli.js';
+import { massPresenter } from '../../src/cli/commands/mass.js';
+import { createWriter } from '../../src/cli/output/writers.js';
+import type { Presenter } from '../../src/cli/output/presenter.js';
 
 describe('pondus mass', () => {
   it('prints a table by default', () => {
@@ -82,5 +86,31 @@ describe('pondus mass', () => {
     const j = jsonLines(pondus(['mass', '--json', 'PuO2']).stdout)[0];
     expect(j.notes[0].message).toContain('244');
     expect(j.notes[0].code).toBe('NO_STANDARD_WEIGHT');
+  });
+});
+
+describe('the table writer', () => {
+  const run = (columns: number | undefined, inputs: string[]) => {
+    let out = '';
+    const sink = { write: (s: string) => void (out += s) };
+    const style = new Chalk({ level: 0 });
+    const p = massPresenter({}) as Presenter<unknown>;
+    const w = createWriter('table', p, { out: sink, err: sink, outStyle: style, errStyle: style, numbered: true, columns });
+    inputs.forEach((text, i) => w.ok({ text, line: i + 1 }, p.compute(text)));
+    w.endBatch(true);
+    return out;
+  };
+
+  it('fits a narrow terminal: no line wider than the terminal, long inputs cut with an ellipsis', () => {
+    const long = 'CH3(CH2)40CH2CH2CH2CH2CH2CH2CH2CH2OH';
+    const out = run(70, ['H2O', long]);
+    for (const line of out.trimEnd().split('\n')) expect([...line].length).toBeLessThanOrEqual(70);
+    expect(out).toContain('…');
+    expect(out).toContain('18.015');
+  });
+
+  it('off a terminal keeps every character of the input', () => {
+    const long = 'CH3(CH2)40CH2CH2CH2CH2CH2CH2CH2CH2OH';
+    expect(run(undefined, ['H2O', long])).toContain(long);
   });
 });

@@ -8,10 +8,10 @@ import { displayElementMass, displayElementPercent, displayMolarMass, displayPer
 import type { Presenter } from '../output/presenter.js';
 import { fail } from '../../errors/pondus-error.js';
 import { joinPairArgs, takeJoinedNote } from '../input/key-value-args.js';
-import { withFormulaOptions, withRoundingOption, type FormulaOptions, type RoundingOptions } from './common.js';
+import { outputFormat, withFormulaOptions, withRoundingOption, type FormulaOptions, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
-interface CompositionCliOptions extends FormulaOptions, RoundingOptions {
+interface CompositionCliOptions extends FormulaOptions, RoundingOptions, OutputOptions {
   part?: string;
   mixture?: boolean;
   long?: boolean;
@@ -51,6 +51,7 @@ export function mixturePresenter(o: CompositionCliOptions): Presenter<MixtureRes
 export function compositionPresenter(o: CompositionCliOptions): Presenter<CompositionDetail> | Presenter<MixtureResult> {
   if (o.mixture && o.part !== undefined) throw fail({ code: 'USAGE', message: '--part gives the share of a fragment in one formula; with --mixture the inputs are measured masses: drop one' });
   if (o.mixture && o.long) throw fail({ code: 'USAGE', message: '--long writes one CSV row per element of a formula; with --mixture drop --long' });
+  if (o.long && outputFormat(o) !== 'csv' && outputFormat(o) !== 'tsv') throw fail({ code: 'USAGE', message: '--long shapes CSV and TSV output (one row per element): add --csv or --tsv, or drop --long' });
   return o.mixture ? mixturePresenter(o) : formulaPresenter(o);
 }
 

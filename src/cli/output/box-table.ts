@@ -46,18 +46,22 @@ export function columnWidths(head: readonly string[], rows: readonly (readonly s
 }
 
 /**
- * Narrows the widest left-aligned columns (echoed text: inputs, formulas) until the table fits
- * `columns` terminal columns; right-aligned numbers keep their width.
+ * Narrows columns until the table fits `columns` terminal columns: first the left-aligned ones
+ * (echoed text: inputs, formulas) down to 6 characters, then headers wider than their numbers.
+ * Numbers (right-aligned) are never cut: `numberWidths` gives the widest value of each column.
  */
-export function fitWidths(widths: number[], align: readonly Align[], columns: number | undefined): number[] {
+export function fitWidths(widths: number[], align: readonly Align[], columns: number | undefined, numberWidths: readonly number[] = []): number[] {
   if (!columns) return widths;
   const w = widths.slice();
+  const floor = w.map((x, i) => (align[i] === 'right' ? Math.max(1, numberWidths[i] ?? x) : Math.min(x, 6)));
   const total = () => w.reduce((s, x) => s + x + 3, 1);
-  while (total() > columns) {
-    let widest = -1;
-    for (let i = 0; i < w.length; i++) if (align[i] !== 'right' && w[i] > 6 && (widest < 0 || w[i] > w[widest])) widest = i;
-    if (widest < 0) break;
-    w[widest]--;
+  for (const pass of ['left', 'right'] as const) {
+    while (total() > columns) {
+      let widest = -1;
+      for (let i = 0; i < w.length; i++) if ((align[i] ?? 'left') === pass && w[i] > floor[i] && (widest < 0 || w[i] - floor[i] > w[widest] - floor[widest])) widest = i;
+      if (widest < 0) break;
+      w[widest]--;
+    }
   }
   return w;
 }

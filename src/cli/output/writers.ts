@@ -198,14 +198,14 @@ class TableWriter<R> implements ResultWriter<R> {
     if (this.rows.length && (this.okCount > 0 || this.widths)) {
       const t = this.p.table!;
       if (!this.widths) {
-        this.widths = fitWidths(columnWidths(t.head, this.rows), this.align, this.ctx.columns);
+        this.widths = fitWidths(columnWidths(t.head, this.rows), this.align, this.ctx.columns, columnWidths(t.head.map(() => ''), this.rows));
         out.write(ruleLine(this.widths, 'top') + '\n' + rowLine(t.head, this.widths, this.align, (h) => s.bold(h)) + '\n');
       }
       const w = this.widths;
       let text = '';
       for (const r of this.rows) {
-        // off a terminal a wider cell widens its column from here on; on one, it is cut to fit
-        if (!this.ctx.columns) for (let i = 0; i < w.length; i++) w[i] = Math.max(w[i], textWidth(r[i] ?? ''));
+        // a wider cell widens its column from here on; on a terminal, echoed text is cut to fit instead (numbers never are)
+        for (let i = 0; i < w.length; i++) if (!this.ctx.columns || this.align[i] === 'right') w[i] = Math.max(w[i], textWidth(r[i] ?? ''));
         text += rowLine(r, w, this.align) + '\n';
       }
       out.write(text);
