@@ -53,8 +53,22 @@ export async function runBatch<R>(p: Presenter<R>, batches: AsyncIterable<InputI
  * processItems(massPresenter({}), [{ text: 'H2O', line: 1 }], writer, summary)
  */
 export function processItems<R>(p: Presenter<R>, items: InputItem[], writer: ResultWriter<R>, summary: BatchSummary): void {
+  const row = writer.okRow && p.jsonRow && !p.tally ? p.jsonRow : null;
   for (const item of items) {
     summary.total++;
+    if (row) {
+      let text: string;
+      try {
+        text = row(item.text, item.line);
+      } catch (e) {
+        summary.failed++;
+        if (summary.failedLines.length < 10) summary.failedLines.push(item.line);
+        writer.fail(item, asPondusError(e, item.text));
+        continue;
+      }
+      writer.okRow!(text);
+      continue;
+    }
     let result: R;
     try {
       result = p.compute(item.text);

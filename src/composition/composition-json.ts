@@ -43,13 +43,14 @@ export function compositionJson(r: CompositionResult): CompositionJson {
 }
 
 /**
- * The same text as JSON.stringify(compositionJson(r)), written straight to one line.
+ * The same text as JSON.stringify(compositionJson(r)), written straight to one line (with `line`,
+ * JSON.stringify({ line, ...compositionJson(r) }), as the CLI's JSON writer gives every row).
  *
  * @example
  * compositionJsonLine(composition('H2')) // '{"input":"H2","formula":"H2","molarMass":2.016,"elements":[{"symbol":"H","count":2,"mass":2.016,"massPercent":100}],"notes":[]}'
  */
-export function compositionJsonLine(r: CompositionResult): string {
-  let s = `{"input":${jsonString(r.input)},"formula":"${r.formula}","molarMass":${jsonNumber(r.molarMass, r.molarMassExact)},"elements":[`;
+export function compositionJsonLine(r: CompositionResult, line?: number): string {
+  let s = `{${line === undefined ? '' : `"line":${line},`}"input":${jsonString(r.input)},"formula":"${r.formula}","molarMass":${jsonNumber(r.molarMass, r.molarMassExact)},"elements":[`;
   const els = r.elements;
   for (let i = 0; i < els.length; i++) {
     const e = els[i];

@@ -54,14 +54,15 @@ export function massJson(r: MassResult): MassJson {
 
 /**
  * The same text as JSON.stringify(massJson(r)), written straight to one JSON line: the batch
- * hot path, without an intermediate object.
+ * hot path, without an intermediate object. With `line`, the row starts with the input's line
+ * number, as the CLI's JSON writer gives every row (JSON.stringify({ line, ...massJson(r) })).
  *
  * @example
  * massJsonLine(formulaMass('H2O')) // '{"input":"H2O","formula":"H2O","molarMass":18.015,…}'
  */
-export function massJsonLine(r: MassResult): string {
+export function massJsonLine(r: MassResult, line?: number): string {
   // Hill formulas hold only letters, digits, brackets, '.', '^', '+' and '-': nothing to escape
-  return `{"input":${jsonString(r.input)},"formula":"${r.formula}","molarMass":${jsonNumber(r.molarMass, r.molarMassExact)},"monoisotopicMass":${jsonNumber(r.monoisotopicMass, r.monoisotopicMassExact)},"nominalMass":${r.nominalMass},"charge":${r.charge},"notes":${notesLine(r.notes)}}`;
+  return `{${line === undefined ? '' : `"line":${line},`}"input":${jsonString(r.input)},"formula":"${r.formula}","molarMass":${jsonNumber(r.molarMass, r.molarMassExact)},"monoisotopicMass":${jsonNumber(r.monoisotopicMass, r.monoisotopicMassExact)},"nominalMass":${r.nominalMass},"charge":${r.charge},"notes":${notesLine(r.notes)}}`;
 }
 
 /** The CSV/TSV columns of `pondus mass` (the shared writer adds notes, error and message). */

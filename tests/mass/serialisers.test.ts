@@ -156,3 +156,15 @@ describe('CSV rows', () => {
     expect(rows[0].slice(0, 3)).toEqual(['H2O', 'H2O', '18.015']);
   });
 });
+
+describe('rows with their line number', () => {
+  it('equal JSON.stringify of the JSON form with line first', () => {
+    fc.assert(
+      fc.property(parsed, fc.integer({ min: 1, max: 1e9 }), (f, line) => {
+        expect(massJsonLine(formulaMass(f), line)).toBe(JSON.stringify({ line, ...massJson(formulaMass(f)) }));
+        expect(compositionJsonLine(composition(f), line)).toBe(JSON.stringify({ line, ...compositionJson(composition(f)) }));
+      }),
+      { numRuns: 500 },
+    );
+  });
+});

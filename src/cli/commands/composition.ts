@@ -1,5 +1,5 @@
 import type { Command } from 'commander';
-import { compositionDetail, type CompositionDetail } from '../../composition/element-shares.js';
+import { composition, compositionDetail, type CompositionDetail } from '../../composition/element-shares.js';
 import { mixtureComposition, mixtureJson, type MixtureResult } from '../../composition/mixture.js';
 import { displayMeasured } from '../../sigfig/round.js';
 import { COMPOSITION_LONG_COLUMNS, compositionCsvColumns, compositionCsvLongRows, compositionCsvRow, compositionJson, compositionJsonLine } from '../../composition/composition-json.js';
@@ -64,6 +64,7 @@ function formulaPresenter(o: CompositionCliOptions): Presenter<CompositionDetail
     compute: (input) => compositionDetail(input, opts),
     json: (d) => compositionJson(d.result),
     jsonLine: (d) => compositionJsonLine(d.result),
+    jsonRow: (input, line) => compositionJsonLine(composition(input, opts), line),
     columns: long ? [...COMPOSITION_LONG_COLUMNS, ...(withPart ? ['part', 'partCount', 'partMassPercent'] : [])] : ['input', 'formula', 'molarMass'],
     cells: (d) => [d.result.input, d.result.formula, d.result.molarMassExact],
     delimited: long

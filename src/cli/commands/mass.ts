@@ -1,6 +1,6 @@
 import type { Command } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
-import { formulaMassDetail, plainMass, type MassDetail } from '../../mass/formula-mass.js';
+import { formulaMass, formulaMassDetail, plainMass, type MassDetail } from '../../mass/formula-mass.js';
 import { MASS_COLUMNS, massCells, massJson, massJsonLine } from '../../mass/mass-json.js';
 import { formatWithUncertainty, molarMassUncertainty, type MolarMassUncertainty } from '../../mass/uncertainty.js';
 import { chargeLabel, displayMolarMass, displayMonoisotopic } from '../output/display.js';
@@ -36,6 +36,7 @@ function plainPresenter(o: MassCliOptions): Presenter<MassDetail> {
     compute: (input) => formulaMassDetail(input, opts),
     json: (r) => massJson(plainMass(r)),
     jsonLine: (r) => massJsonLine(plainMass(r)),
+    jsonRow: (input, line) => massJsonLine(formulaMass(input, opts), line),
     columns,
     cells,
     table: { head, align, row: rowWith(o.rounding ?? 'half-even') },

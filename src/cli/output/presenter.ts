@@ -11,6 +11,12 @@ export interface Presenter<R> {
   json(result: R): unknown;
   /** Optional: the JSON line for a result, written directly (must equal JSON.stringify(json(result))). */
   jsonLine?(result: R): string;
+  /**
+   * Optional: the JSON row for an input straight from the library's plain result and its one
+   * serialiser, with the input's line number first (must equal what compute, json and the JSON
+   * writer give: `{"line":N,…}`); throws like compute for bad input. Skips the detail a table needs.
+   */
+  jsonRow?(input: string, line: number): string;
   /** CSV/TSV header (first column is the input). */
   columns: string[];
   /** CSV/TSV cells for a result, matching `columns`. */

@@ -13,6 +13,8 @@ import type { Presenter } from './presenter.js';
 export interface ResultWriter<R> {
   ok(item: InputItem, result: R): void;
   fail(item: InputItem, error: PondusError): void;
+  /** A finished JSON row, line number included, from the presenter's jsonRow (JSON Lines only). */
+  okRow?(row: string): void;
   /** Called after each batch; table output prints what it holds here when enough has gathered. */
   endBatch(final: boolean): void;
 }
@@ -66,6 +68,9 @@ class JsonLinesWriter<R> implements ResultWriter<R> {
   ok(item: InputItem, result: R): void {
     this.ctx.out.write(withLine(this.line(result), item.line));
   }
+  okRow(row: string): void {
+    this.ctx.out.write(row + '\n');
+  }
   fail(item: InputItem, error: PondusError): void {
     this.ctx.out.write(JSON.stringify({ input: item.text, line: item.line, error: errorJson(error) }) + '\n');
   }
@@ -97,14 +102,14 @@ class DelimitedWriter<R> implements ResultWriter<R> {
       return;
     }
     if (this.held.length === 0 && !this.headerWritten) this.begin();
-    this.okRow(result);
+    this.resultRow(result);
   }
   private headerWritten = false;
   private begin(): void {
     this.headerWritten = true;
     this.start(this.header!);
   }
-  private okRow(result: R): void {
+  private resultRow(result: R): void {
     const items = [...(this.p.noteItems?.(result) ?? (this.p.notes?.(result) ?? []).map((message) => ({ code: '', message })))];
     let rows: Cell[][];
     if (this.p.delimited) {
@@ -137,7 +142,7 @@ class DelimitedWriter<R> implements ResultWriter<R> {
     this.held = [];
     for (const h of held) {
       if (h.error) this.fail(h.item, h.error);
-      else this.okRow(h.result as R);
+      else this.resultRow(h.result as R);
     }
   }
 }
