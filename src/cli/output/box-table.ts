@@ -7,7 +7,12 @@
 
 export type Align = 'left' | 'right';
 
-/** The display width of a text (code points; colour sequences are added after padding, never measured). */
+/**
+ * The display width of a text (code points; colour sequences are added after padding, never measured).
+ *
+ * @example
+ * textWidth('H₂O') // 3
+ */
 export function textWidth(s: string): number {
   let n = 0;
   for (let i = 0; i < s.length; i++) {
@@ -17,7 +22,12 @@ export function textWidth(s: string): number {
   return n;
 }
 
-/** Cuts a text to `width` columns, ending in '…' when it had to be cut. */
+/**
+ * Cuts a text to `width` columns, ending in '…' when it had to be cut.
+ *
+ * @example
+ * fitText('C6H12O6', 5) // 'C6H1…'
+ */
 export function fitText(s: string, width: number): string {
   if (textWidth(s) <= width) return s;
   if (width <= 1) return '…'.slice(0, width);
@@ -38,7 +48,12 @@ function pad(s: string, width: number, align: Align): string {
   return align === 'right' ? fill + s : s + fill;
 }
 
-/** The widths (text only, without the one space either side) that fit a header and rows. */
+/**
+ * The widths (text only, without the one space either side) that fit a header and rows.
+ *
+ * @example
+ * columnWidths(['a', 'bb'], [['123', '4']]) // [3, 2]
+ */
 export function columnWidths(head: readonly string[], rows: readonly (readonly string[])[]): number[] {
   const w = head.map(textWidth);
   for (const r of rows) for (let i = 0; i < w.length; i++) w[i] = Math.max(w[i], textWidth(r[i] ?? ''));
@@ -49,6 +64,9 @@ export function columnWidths(head: readonly string[], rows: readonly (readonly s
  * Narrows columns until the table fits `columns` terminal columns: first the left-aligned ones
  * (echoed text: inputs, formulas) down to 6 characters, then headers wider than their numbers.
  * Numbers (right-aligned) are never cut: `numberWidths` gives the widest value of each column.
+ *
+ * @example
+ * fitWidths([20, 8], ['left', 'right'], 24, [0, 8]) // [9, 8]
  */
 export function fitWidths(widths: number[], align: readonly Align[], columns: number | undefined, numberWidths: readonly number[] = []): number[] {
   if (!columns) return widths;
@@ -66,7 +84,12 @@ export function fitWidths(widths: number[], align: readonly Align[], columns: nu
   return w;
 }
 
-/** The rule above the header, below the rows. */
+/**
+ * The rule above the header, below the rows.
+ *
+ * @example
+ * ruleLine([1, 2], 'top') // '┌───┬────┐'
+ */
 export function ruleLine(widths: readonly number[], where: 'top' | 'bottom'): string {
   const [l, m, r] = where === 'top' ? ['┌', '┬', '┐'] : ['└', '┴', '┘'];
   let s = l;
@@ -74,7 +97,12 @@ export function ruleLine(widths: readonly number[], where: 'top' | 'bottom'): st
   return s + r;
 }
 
-/** One row of cells, each cut to its width and padded; `style` colours a cell after padding. */
+/**
+ * One row of cells, each cut to its width and padded; `style` colours a cell after padding.
+ *
+ * @example
+ * rowLine(['H', '2'], [2, 3], ['left', 'right']) // '│ H  │   2 │'
+ */
 export function rowLine(cells: readonly string[], widths: readonly number[], align: readonly Align[], style?: (s: string) => string): string {
   let s = '│';
   for (let i = 0; i < widths.length; i++) {
