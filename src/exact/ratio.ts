@@ -43,10 +43,16 @@ function neighbour(q: number, step: 1 | -1): number {
   return bits[0];
 }
 
-/** |c·b − k·a| up to rounding far below the gap between neighbours. */
+/** c·b − k·a, with rounding far below the gap between neighbours' residuals. */
 function residual(c: number, b: number, ka: Float64Array): number {
   twoProduct(c, b, y);
-  return Math.abs(y[0] - ka[0] + (y[1] - ka[1]));
+  return y[0] - ka[0] + (y[1] - ka[1]);
+}
+
+/** True when a positive double's last mantissa bit is 0 (the even one of a tie). */
+function isEven(q: number): boolean {
+  bits[0] = q;
+  return (words[LOW] & 1) === 0;
 }
 
 /**
@@ -63,13 +69,20 @@ function residual(c: number, b: number, ka: Float64Array): number {
 export function scaledRatio(a: number, b: number, k: number): number {
   if (a === 0) return 0;
   twoProduct(k, a, x);
-  const q = x[0] / b;
-  const up = neighbour(q, 1);
-  const down = neighbour(q, -1);
-  const r = residual(q, b, x);
-  const ru = residual(up, b, x);
-  const rd = residual(down, b, x);
-  if (ru < r && ru <= rd) return ru < residual(neighbour(up, 1), b, x) ? up : neighbour(up, 1);
-  if (rd < r) return rd < residual(neighbour(down, -1), b, x) ? down : neighbour(down, -1);
+  let q = x[0] / b;
+  let r = residual(q, b, x);
+  if (r === 0) return q;
+  // step towards the exact quotient while that brings the residual down (at most an ulp or two)
+  const step = r > 0 ? -1 : 1;
+  for (let i = 0; i < 4; i++) {
+    const n = neighbour(q, step);
+    const rn = residual(n, b, x);
+    const an = Math.abs(rn);
+    const aq = Math.abs(r);
+    if (an > aq || (an === aq && isEven(q))) return q;
+    q = n;
+    r = rn;
+    if (r === 0 || r > 0 !== step < 0) return q;
+  }
   return q;
 }
