@@ -7,7 +7,7 @@
  *
  * @example
  * import { formulaMass, composition } from 'pondus';
- * formulaMass('CuSO4·5H2O').molarMass.toString()                         // '249.677'
+ * formulaMass('CuSO4·5H2O').molarMass                                    // 249.677
  * composition('CuSO4·5H2O', { part: 'H2O' }).part?.massPercent.toFixed(2) // '36.08'
  */
 
@@ -34,9 +34,10 @@ export const parseFormula = /* @__PURE__ */ guarded('parseFormula', parseFormula
 export const safeParseFormula = /* @__PURE__ */ safely(parseFormula);
 export { ABBREVIATIONS, ABBREVIATION_CLASHES } from './formula-parser/abbreviations.js';
 export type { FormulaTree, ComponentNode, PartNode, AtomNode, GroupNode, CountNode, Span } from './formula-parser/tree.js';
-export { type AtomCounts } from './formula/flatten.js';
-import { flattenFormula as flattenFormula_ } from './formula/flatten.js';
+export { type AtomCounts, type AtomVector } from './formula/flatten.js';
+import { flattenFormula as flattenFormula_, atomVector as atomVector_ } from './formula/flatten.js';
 export const flattenFormula = /* @__PURE__ */ guarded('flattenFormula', flattenFormula_, ['object']);
+export const atomVector = /* @__PURE__ */ guarded('atomVector', atomVector_, ['object']);
 import { hillFormula as hillFormula_, hillOrder as hillOrder_ } from './formula/hill.js';
 export const hillFormula = /* @__PURE__ */ guarded('hillFormula', hillFormula_, ['map', 'number?', 'array?']);
 export const hillOrder = /* @__PURE__ */ guarded('hillOrder', hillOrder_, ['iterable']);
@@ -60,28 +61,37 @@ export { ELECTRON_MASS, CONSTANTS_PROVENANCE } from './elements/constants.js';
 export type { WeightTable } from './elements/atom-data.js';
 
 // molar mass
-export { type MassOptions, type MassResult, type Contribution } from './mass/formula-mass.js';
-import { formulaMass as formulaMass_, molarMass as molarMass_ } from './mass/formula-mass.js';
+export { type MassOptions, type MassResult, type MassDetail, type Contribution } from './mass/formula-mass.js';
+import { formulaMass as formulaMass_, formulaMassDetail as formulaMassDetail_, plainMass as plainMass_, molarMass as molarMass_ } from './mass/formula-mass.js';
 export const formulaMass = /* @__PURE__ */ guarded('formulaMass', formulaMass_, ['tree', 'options?']);
+export const formulaMassDetail = /* @__PURE__ */ guarded('formulaMassDetail', formulaMassDetail_, ['tree', 'options?']);
+export const plainMass = /* @__PURE__ */ guarded('plainMass', plainMass_, ['object']);
 export const molarMass = /* @__PURE__ */ guarded('molarMass', molarMass_, ['tree', 'options?']);
 export const safeFormulaMass = /* @__PURE__ */ safely(formulaMass);
 import { reportedMolarMass as reportedMolarMass_ } from './mass/reported-mass.js';
 export const reportedMolarMass = /* @__PURE__ */ guarded('reportedMolarMass', reportedMolarMass_, ['object']);
-export { type MassJson } from './mass/mass-json.js';
-import { massJson as massJson_ } from './mass/mass-json.js';
+export { MASS_COLUMNS, type MassJson, type NoteJson } from './mass/mass-json.js';
+import { massJson as massJson_, massJsonLine as massJsonLine_, massCells as massCells_ } from './mass/mass-json.js';
 export const massJson = /* @__PURE__ */ guarded('massJson', massJson_, ['object']);
+export const massJsonLine = /* @__PURE__ */ guarded('massJsonLine', massJsonLine_, ['object', 'number?']);
+export const massCells = /* @__PURE__ */ guarded('massCells', massCells_, ['object']);
 
 // composition
-export { type CompositionResult, type CompositionOptions, type ElementShare } from './composition/element-shares.js';
-import { composition as composition_ } from './composition/element-shares.js';
+export { type CompositionResult, type CompositionDetail, type CompositionOptions, type ElementShare, type PartShareResult } from './composition/element-shares.js';
+import { composition as composition_, compositionDetail as compositionDetail_ } from './composition/element-shares.js';
 export const composition = /* @__PURE__ */ guarded('composition', composition_, ['tree', 'options?']);
+export const compositionDetail = /* @__PURE__ */ guarded('compositionDetail', compositionDetail_, ['tree', 'options?']);
 export const safeComposition = /* @__PURE__ */ safely(composition);
 export { type PartShare } from './composition/part-share.js';
 import { partShare as partShare_ } from './composition/part-share.js';
 export const partShare = /* @__PURE__ */ guarded('partShare', partShare_, ['object', 'text', 'options?']);
-export { type CompositionJson } from './composition/composition-json.js';
-import { compositionJson as compositionJson_ } from './composition/composition-json.js';
+export { COMPOSITION_LONG_COLUMNS, type CompositionJson } from './composition/composition-json.js';
+import { compositionJson as compositionJson_, compositionJsonLine as compositionJsonLine_, compositionCsvColumns as compositionCsvColumns_, compositionCsvRow as compositionCsvRow_, compositionCsvLongRows as compositionCsvLongRows_ } from './composition/composition-json.js';
 export const compositionJson = /* @__PURE__ */ guarded('compositionJson', compositionJson_, ['object']);
+export const compositionJsonLine = /* @__PURE__ */ guarded('compositionJsonLine', compositionJsonLine_, ['object', 'number?']);
+export const compositionCsvColumns = /* @__PURE__ */ guarded('compositionCsvColumns', compositionCsvColumns_, ['array', 'any']);
+export const compositionCsvRow = /* @__PURE__ */ guarded('compositionCsvRow', compositionCsvRow_, ['object', 'array']);
+export const compositionCsvLongRows = /* @__PURE__ */ guarded('compositionCsvLongRows', compositionCsvLongRows_, ['object', 'any']);
 
 // measured numbers and significant figures
 export { type Measured } from './sigfig/measured.js';

@@ -13,7 +13,7 @@
 import { Decimal } from '../exact/decimal.js';
 import { fail, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import type { Note } from '../errors/issue.js';
-import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { hillOrder } from '../formula/hill.js';
 import { readFoundValues } from './found-values.js';
 import type { RoundingMode } from '../sigfig/round.js';
@@ -114,10 +114,10 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
   const rounding = options.rounding ?? 'half-even';
   const tolerance = options.tolerance instanceof Decimal ? options.tolerance : readNumber(String(options.tolerance ?? '0.4')).value;
   if (tolerance.isNegative() || tolerance.gt(100)) throw fail({ code: 'BAD_OPTION', message: `tolerance ${tolerance.toFixed()} is out of range` });
-  const base = formulaMass(formula, options);
+  const base = formulaMassDetail(formula, options);
   if (base.charge !== 0) throw fail({ code: 'BAD_MEASUREMENT', message: 'elemental analysis is of a neutral compound; give the whole salt, e.g. C12H14N2^2+ with its counter-ions' }, formula);
   const partners = (options.solvents ?? []).map((s) => partnerOf(s, options));
-  const partnerMasses = partners.map((p) => formulaMass(p.formula, options));
+  const partnerMasses = partners.map((p) => formulaMassDetail(p.formula, options));
   for (const [symbol, value] of found) {
     if (value.isZero()) continue; // found 0.00: the compound has none, and the check says whether that fits
     if (!base.atoms.has(symbol) && !partnerMasses.some((m) => m.atoms.has(symbol))) {
@@ -146,7 +146,7 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
     const saltStep = options.saltStep ?? 0.5;
     if (!(saltStep > 0 && saltStep <= 2)) throw fail({ code: 'BAD_OPTION', message: `the salt step ${saltStep} must be above 0 and at most 2` });
     const foundNums = symbols.map((s) => found.get(s)!.toNumber());
-    const vec = (m: MassResult): MassVector => ({ masses: symbols.map((s) => exactMass(m, s).toNumber()), total: m.molarMass.toNumber() });
+    const vec = (m: MassDetail): MassVector => ({ masses: symbols.map((s) => exactMass(m, s).toNumber()), total: m.molarMass.toNumber() });
     const baseVec = vec(base);
     const partnerVecs = partnerMasses.map(vec);
     const steps = partners.map((p) => (p.salt ? saltStep : step));
@@ -218,7 +218,7 @@ function commonPartnerShares(options: MassOptions): Map<string, { share: Decimal
   if (out) return out;
   out = new Map();
   for (const { formula, name } of Object.values(SOLVENTS)) {
-    const m = formulaMass(formula, { weights: options.weights });
+    const m = formulaMassDetail(formula, { weights: options.weights });
     for (const s of m.atoms.keys()) {
       const share = exactMass(m, s).div(m.molarMass);
       const prev = out.get(s);
@@ -233,7 +233,7 @@ function commonPartnerShares(options: MassOptions): Map<string, { share: Decimal
  * Found values no solvate or salt partner could explain: more of an element than the formula,
  * the partners given or any common solvent contains (a mixture's percent lies between its parts').
  */
-function impossibleNotes(base: MassResult, partners: Partner[], partnerMasses: MassResult[], symbols: string[], found: Map<string, Decimal>, tolerance: Decimal, options: MassOptions): Note[] {
+function impossibleNotes(base: MassDetail, partners: Partner[], partnerMasses: MassDetail[], symbols: string[], found: Map<string, Decimal>, tolerance: Decimal, options: MassOptions): Note[] {
   const notes: Note[] = [];
   for (const s of symbols) {
     const own = exactMass(base, s).div(base.molarMass).times(100);
@@ -257,7 +257,7 @@ function partnerOf(given: string, options: MassOptions): Partner {
   const named = solventByName(given);
   const formulaText = named ? named.formula : given;
   try {
-    const m = formulaMass(formulaText, options);
+    const m = formulaMassDetail(formulaText, options);
     return { given, formula: m.formula, written: reportFormula(m.tree), name: named ? named.name : null, salt: SALT_ACIDS.has(m.formula) };
   } catch (e) {
     if (e instanceof PondusError && !named) {
@@ -270,7 +270,7 @@ function partnerOf(given: string, options: MassOptions): Partner {
 interface Used {
   amount: Decimal;
   partner: Partner;
-  mass: MassResult;
+  mass: MassDetail;
 }
 
 /** A fit computed exactly, before it becomes plain data. */
@@ -298,7 +298,7 @@ function plainFit(f: ExactFit): Fit {
   };
 }
 
-function evaluateFit(baseWritten: string, base: MassResult, used: Used[], symbols: readonly string[], found: Map<string, Decimal>, tolerance: Decimal, textOf: Map<string, string>, rounding: RoundingMode): ExactFit {
+function evaluateFit(baseWritten: string, base: MassDetail, used: Used[], symbols: readonly string[], found: Map<string, Decimal>, tolerance: Decimal, textOf: Map<string, string>, rounding: RoundingMode): ExactFit {
   let total = base.molarMass;
   const elementMass = new Map<string, Decimal>();
   for (const s of symbols) elementMass.set(s, exactMass(base, s));
@@ -331,6 +331,6 @@ function evaluateFit(baseWritten: string, base: MassResult, used: Used[], symbol
 }
 
 /** Mass of one element in a formula unit, g/mol, exactly. */
-function exactMass(m: MassResult, symbol: string): Decimal {
+function exactMass(m: MassDetail, symbol: string): Decimal {
   return m.contributions.filter((c) => c.symbol === symbol).reduce((s, c) => s.plus(c.mass), new Decimal(0));
 }

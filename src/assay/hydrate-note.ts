@@ -3,7 +3,7 @@
  * its molar mass says that the water was counted.
  */
 import type { Note } from '../errors/issue.js';
-import type { MassResult } from '../mass/formula-mass.js';
+import type { MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { displayMeasured } from '../sigfig/round.js';
 import { flattenFormula } from '../formula/flatten.js';
@@ -14,9 +14,9 @@ import type { ComponentNode } from '../formula-parser/tree.js';
  * Moles of water of crystallisation per formula unit: components after the first that are whole multiples of H2O.
  *
  * @example
- * hydrateWater(formulaMass('CaCl2·2H2O')) // 2
+ * hydrateWater(formulaMassDetail('CaCl2·2H2O')) // 2
  */
-export function hydrateWater(m: MassResult): number {
+export function hydrateWater(m: MassDetail): number {
   let water = 0;
   m.tree.components.slice(1).forEach((c: ComponentNode) => {
     const counts = flattenFormula({ kind: 'formula', input: '', components: [c], charge: 0, notes: [] });
@@ -32,10 +32,10 @@ export function hydrateWater(m: MassResult): number {
  *
  * @example
  * const notes = []
- * noteHydrateWater(formulaMass('MgSO4·7H2O'), notes)
+ * noteHydrateWater(formulaMassDetail('MgSO4·7H2O'), notes)
  * notes[0].code // 'HYDRATE_WATER_COUNTED'
  */
-export function noteHydrateWater(m: MassResult, notes: Note[]): void {
+export function noteHydrateWater(m: MassDetail, notes: Note[]): void {
   const w = hydrateWater(m);
   if (w > 0) notes.push({ code: 'HYDRATE_WATER_COUNTED', message: `the molar mass of ${m.input} counts its ${w} H2O of crystallisation (M = ${displayMeasured(reportedMolarMass(m)).text} g/mol); write the anhydrous formula for a result on the anhydrous substance` });
 }

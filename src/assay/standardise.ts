@@ -8,7 +8,7 @@
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { MASS, PURE, VOLUME } from '../calc/measure.js';
-import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { displayQuantity } from '../sigfig/display-quantity.js';
 import { divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
@@ -31,7 +31,7 @@ export interface StandardiseOptions extends MassOptions {
 }
 
 export interface StandardiseResult {
-  standard: MassResult;
+  standard: MassDetail;
   mass: Quantity;
   purity: Quantity | null;
   titre: Quantity;
@@ -54,7 +54,7 @@ export interface StandardiseResult {
  */
 export function standardise(standardText: string, o: StandardiseOptions): StandardiseResult {
   const notes: Note[] = [];
-  const standard = formulaMass(standardText, o);
+  const standard = formulaMassDetail(standardText, o);
   for (const n of standard.notes) notes.push(n);
   noteHydrateWater(standard, notes);
   const mass = readPositive(o.mass, [MASS], 'the mass of standard', notes);

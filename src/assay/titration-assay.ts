@@ -10,7 +10,7 @@
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { AMOUNT, MASS, MOLARITY, VOLUME } from '../calc/measure.js';
-import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { displayQuantity } from '../sigfig/display-quantity.js';
 import { divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
@@ -39,7 +39,7 @@ export interface TitrationAssayOptions extends MassOptions {
 }
 
 export interface TitrationAssayResult {
-  analyte: MassResult;
+  analyte: MassDetail;
   kind: 'direct' | 'back';
   sample: Quantity;
   titrant: Quantity;
@@ -71,7 +71,7 @@ const G_PER_MOL = unitOf('g/mol');
  */
 export function titrationAssay(analyteText: string, o: TitrationAssayOptions): TitrationAssayResult {
   const notes: Note[] = [];
-  const analyte = formulaMass(analyteText, o);
+  const analyte = formulaMassDetail(analyteText, o);
   for (const n of analyte.notes) notes.push(n);
   noteHydrateWater(analyte, notes);
   const sample = readPositive(o.sample, [MASS], 'the sample mass', notes);

@@ -7,7 +7,7 @@
 import { Decimal } from '../exact/decimal.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
 import { columnOf } from '../formula-parser/prescan.js';
-import { formulaMass } from '../mass/formula-mass.js';
+import { formulaMassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { molarMassUncertainty } from '../mass/uncertainty.js';
 import { dividedBy, sigFigsOf, type Measured } from '../sigfig/measured.js';
@@ -177,7 +177,7 @@ function ratio(n: Extract<ExprNode, { kind: 'ratio' }>, ctx: Ctx): Quantity {
 function formulaMassQuantity(n: Extract<ExprNode, { kind: 'formulaMass' }>, ctx: Ctx): Quantity {
   let r;
   try {
-    r = formulaMass(n.formula);
+    r = formulaMassDetail(n.formula);
   } catch (e) {
     if (e instanceof PondusError) {
       // point the caret into the expression: the formula starts 2 characters after M(

@@ -15,6 +15,8 @@ export interface BatchIo {
   err: Sink;
   outStyle: ChalkInstance;
   errStyle: ChalkInstance;
+  /** The terminal's width when standard output is a terminal (tables fit it). */
+  columns?: number;
 }
 
 export interface BatchSummary {
@@ -51,15 +53,21 @@ export async function runBatch<R>(p: Presenter<R>, batches: AsyncIterable<InputI
  * processItems(massPresenter({}), [{ text: 'H2O', line: 1 }], writer, summary)
  */
 export function processItems<R>(p: Presenter<R>, items: InputItem[], writer: ResultWriter<R>, summary: BatchSummary): void {
-  const fast = writer.okLine && p.fastJsonLine && !p.tally ? p.fastJsonLine : null;
+  const row = writer.okRow && p.jsonRow && !p.tally ? p.jsonRow : null;
   for (const item of items) {
     summary.total++;
-    if (fast) {
-      const line = fast(item.text);
-      if (line !== null) {
-        writer.okLine!(line);
+    if (row) {
+      let text: string;
+      try {
+        text = row(item.text, item.line);
+      } catch (e) {
+        summary.failed++;
+        if (summary.failedLines.length < 10) summary.failedLines.push(item.line);
+        writer.fail(item, asPondusError(e, item.text));
         continue;
       }
+      writer.okRow!(text);
+      continue;
     }
     let result: R;
     try {

@@ -64,7 +64,8 @@ export async function main(args: string[], io: CliIo): Promise<number> {
     }
     const numbered = inputs.includes('-') || inputs.length > 1;
     const batches = source ?? (lineNumbers ? fixedBatch(inputs, lineNumbers) : inputBatches(inputs, io.stdin));
-    const summary = await runBatch(presenter, batches, format, { out, err, outStyle, errStyle }, numbered || !!lineNumbers || !!source);
+    const columns = io.stdout.isTTY ? (io.stdout as { columns?: number }).columns : undefined;
+    const summary = await runBatch(presenter, batches, format, { out, err, outStyle, errStyle, columns }, numbered || !!lineNumbers || !!source);
     if (presenter.tally) {
       const line = `${summary.tallied} of ${summary.total} ${presenter.tally.words}\n`;
       if (format === 'table') out.write(line);

@@ -1,14 +1,23 @@
-import { amountText } from '../formula/amount.js';
+/**
+ * The one serialiser of `pondus composition`: the JSON object and JSON line of a
+ * plain composition result, and its CSV/TSV rows, wide (one `X_percent` column per
+ * element) or long (one row per element). The CLI prints exactly these (the shared
+ * writer adds the input's line number and the notes column).
+ */
+import { jsonNumber } from '../exact/json-number.js';
+import { alphabeticalRank } from '../elements/atom-data.js';
+import type { Note } from '../errors/issue.js';
+import { jsonString, notesJson, notesLine, type NoteJson } from '../mass/mass-json.js';
 import type { CompositionResult } from './element-shares.js';
 
-/** The stable JSON shape of a composition result (the `composition --json` contract). */
+/** The stable JSON shape of a composition result (the `composition --json` contract, before the shared writer's `line`). */
 export interface CompositionJson {
   input: string;
   formula: string;
   molarMass: number;
   elements: { symbol: string; count: number; mass: number; massPercent: number }[];
   part?: { part: string; formula: string; count: number; mass: number; massPercent: number; countedFrom: string };
-  notes?: string[];
+  notes: NoteJson[];
 }
 
 /**
@@ -19,22 +28,122 @@ export interface CompositionJson {
  * String(compositionJson(composition('H2O')).elements[0].massPercent) // '11.19…'
  */
 export function compositionJson(r: CompositionResult): CompositionJson {
-  const o: CompositionJson = {
+  const o = {
     input: r.input,
     formula: r.formula,
-    molarMass: r.molarMass.toNumber(),
-    elements: r.elements.map((e) => ({ symbol: e.symbol, count: Number(amountText(e.count)), mass: e.mass.toNumber(), massPercent: e.massPercent.toNumber() })),
-  };
+    molarMass: r.molarMass,
+    elements: r.elements.map((e) => ({ symbol: e.symbol, count: e.count, mass: e.mass, massPercent: e.massPercent })),
+  } as CompositionJson;
   if (r.part) {
-    o.part = {
-      part: r.part.part,
-      formula: r.part.formula,
-      count: Number(amountText(r.part.count)),
-      mass: r.part.mass.toNumber(),
-      massPercent: r.part.massPercent.toNumber(),
-      countedFrom: r.part.countedFrom,
-    };
+    const p = r.part;
+    o.part = { part: p.part, formula: p.formula, count: p.count, mass: p.mass, massPercent: p.massPercent, countedFrom: p.countedFrom };
   }
-  if (r.notes.length > 0) o.notes = r.notes.map((n) => n.message);
+  o.notes = notesJson(r.notes);
   return o;
+}
+
+/**
+ * The same text as JSON.stringify(compositionJson(r)), written straight to one line (with `line`,
+ * JSON.stringify({ line, ...compositionJson(r) }), as the CLI's JSON writer gives every row).
+ *
+ * @example
+ * compositionJsonLine(composition('H2')) // '{"input":"H2","formula":"H2","molarMass":2.016,"elements":[{"symbol":"H","count":2,"mass":2.016,"massPercent":100}],"notes":[]}'
+ */
+export function compositionJsonLine(r: CompositionResult, line?: number): string {
+  let s = `{${line === undefined ? '' : `"line":${line},`}"input":${jsonString(r.input)},"formula":"${r.formula}","molarMass":${jsonNumber(r.molarMass, r.molarMassExact)},"elements":[`;
+  const els = r.elements;
+  for (let i = 0; i < els.length; i++) {
+    const e = els[i];
+    s += `${i ? ',' : ''}{"symbol":"${e.symbol}","count":${e.count},"mass":${e.mass},"massPercent":${e.massPercent}}`;
+  }
+  s += ']';
+  if (r.part) {
+    const p = r.part;
+    s += `,"part":{"part":${jsonString(p.part)},"formula":"${p.formula}","count":${p.count},"mass":${p.mass},"massPercent":${p.massPercent},"countedFrom":"${p.countedFrom}"}`;
+  }
+  return `${s},"notes":${notesLine(r.notes)}}`;
+}
+
+/** Cells of one CSV/TSV row. */
+export type CsvCell = string | number | null;
+
+/** The columns of the wide CSV form before the element columns. */
+const WIDE_HEAD = ['input', 'formula', 'molarMass'];
+const PART_COLUMNS = ['part', 'partCount', 'partMassPercent'];
+
+/** Hill-like order of element labels for column headers: C, H, then alphabetical, nuclides after their element. */
+function columnRank(label: string): number {
+  const m = /^\[?([0-9]*)([A-Z][a-z]?)\]?$/.exec(label);
+  const symbol = label === 'D' || label === 'T' ? 'H' : m ? m[2] : label;
+  const a = label === 'D' ? 2 : label === 'T' ? 3 : m && m[1] ? Number(m[1]) : 0;
+  return symbol === 'C' ? a - 1e6 : symbol === 'H' ? a - 5e5 : alphabeticalRank(symbol) * 1000 + a;
+}
+
+/**
+ * The header of the wide CSV form: one `X_percent` column per element that occurs in `results`
+ * (the first block of a batch), C and H first, then alphabetically.
+ *
+ * @param results the results the columns are decided from
+ * @param withPart whether the `--part` columns follow
+ * @returns the column names (the shared writer adds notes, error and message)
+ * @example
+ * compositionCsvColumns([composition('H2O'), composition('NaCl')], false) // ['input', 'formula', 'molarMass', 'H_percent', 'Cl_percent', 'Na_percent', 'O_percent']
+ */
+export function compositionCsvColumns(results: readonly CompositionResult[], withPart: boolean): string[] {
+  const seen = new Set<string>();
+  for (const r of results) for (const e of r.elements) seen.add(e.symbol);
+  const labels = [...seen].sort((a, b) => columnRank(a) - columnRank(b));
+  return [...WIDE_HEAD, ...labels.map((l) => `${l}_percent`), ...(withPart ? PART_COLUMNS : [])];
+}
+
+/**
+ * The wide CSV row of a result under `columns` (from {@link compositionCsvColumns}). An element
+ * with no column (it first occurs after the block the header came from) is not dropped: a note
+ * gives its percent and points to `--long`.
+ *
+ * @example
+ * compositionCsvRow(composition('H2O'), ['input', 'formula', 'molarMass', 'H_percent', 'O_percent']).cells[3] // 11.190674437968359
+ */
+export function compositionCsvRow(r: CompositionResult, columns: readonly string[]): { cells: CsvCell[]; notes: Note[] } {
+  const cells: CsvCell[] = [r.input, r.formula, r.molarMassExact];
+  const at = new Map<string, number>();
+  for (let i = 0; i < r.elements.length; i++) at.set(`${r.elements[i].symbol}_percent`, i);
+  const notes: Note[] = [];
+  let used = 0;
+  for (let c = WIDE_HEAD.length; c < columns.length; c++) {
+    const name = columns[c];
+    if (PART_COLUMNS.includes(name)) break;
+    const i = at.get(name);
+    if (i === undefined) cells.push(0);
+    else {
+      cells.push(r.elements[i].massPercent);
+      used++;
+    }
+  }
+  if (used < r.elements.length) {
+    const missing = r.elements.filter((e) => !columns.includes(`${e.symbol}_percent`));
+    notes.push({ code: 'NO_COLUMN', message: `no column for ${missing.map((e) => `${e.symbol} (${e.massPercent} %)`).join(', ')}: the element columns come from the first block of rows; --long writes one row per element` });
+  }
+  if (columns.includes('part')) {
+    cells.push(r.part ? r.part.part : null, r.part ? r.part.count : null, r.part ? r.part.massPercent : null);
+  }
+  return { cells, notes };
+}
+
+/** The columns of the long CSV form: one row per element. */
+export const COMPOSITION_LONG_COLUMNS = ['input', 'formula', 'molarMass', 'symbol', 'count', 'mass', 'massPercent'];
+
+/**
+ * The long CSV rows of a result: one per element, under {@link COMPOSITION_LONG_COLUMNS}
+ * (with `--part`, the part columns follow on every row).
+ *
+ * @example
+ * compositionCsvLongRows(composition('H2O'), false).map((row) => row[3]) // ['H', 'O']
+ */
+export function compositionCsvLongRows(r: CompositionResult, withPart: boolean): CsvCell[][] {
+  return r.elements.map((e) => {
+    const row: CsvCell[] = [r.input, r.formula, r.molarMassExact, e.symbol, e.count, e.mass, e.massPercent];
+    if (withPart) row.push(r.part ? r.part.part : null, r.part ? r.part.count : null, r.part ? r.part.massPercent : null);
+    return row;
+  });
 }

@@ -1,23 +1,44 @@
 /**
- * Mass percent by element: each kind of atom's mass over the molar mass.
+ * Mass percent by element: each kind of atom's mass over the molar mass, from the
+ * same atom totals and exact sums as the mass (mass/formula-mass.ts). While the sums
+ * are exact safe integers (10^-12 u) every number is computed in plain doubles and
+ * correctly rounded (exact/ratio.ts); decimal counts and huge sums go through Decimal.
  */
 import type { Note } from '../errors/issue.js';
 import { toSafe, type SafeResult } from '../errors/pondus-error.js';
-import { Decimal } from '../exact/decimal.js';
-import type { Amount } from '../formula/amount.js';
-import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { ATOMS } from '../elements/atom-data.js';
+import { scaledRatio } from '../exact/ratio.js';
+import { scaledToString, SCALE_DIGITS } from '../exact/scaled.js';
+import { toDecimal } from '../formula/amount.js';
+import { formulaMassDetail, type MassDetail, type MassOptions } from '../mass/formula-mass.js';
 import type { FormulaTree } from '../formula-parser/tree.js';
 import { partShare, type PartShare } from './part-share.js';
 
-/** One element's share of a formula's mass. */
+/** One element's share of a formula's mass, as plain data. */
 export interface ElementShare {
   /** As written in output: 'C', '[13C]', 'D'. */
   symbol: string;
-  count: Amount;
+  /** How many atoms one formula unit holds (a decimal count as its nearest number). */
+  count: number;
   /** Mass of this element in one mole of the formula, g/mol. */
-  mass: Decimal;
+  mass: number;
   /** Percent by mass. */
-  massPercent: Decimal;
+  massPercent: number;
+}
+
+/** A fragment's share, as plain data. */
+export interface PartShareResult {
+  /** The fragment as given. */
+  part: string;
+  /** Its Hill formula. */
+  formula: string;
+  /** How many fragment units one formula unit holds. */
+  count: number;
+  /** count × unit mass, g per mole of formula. */
+  mass: number;
+  massPercent: number;
+  /** 'written': counted where the formula writes it; 'atoms': counted from the atom totals. */
+  countedFrom: 'written' | 'atoms';
 }
 
 /** Options for {@link composition}. */
@@ -26,37 +47,91 @@ export interface CompositionOptions extends MassOptions {
   part?: string;
 }
 
-/** Percent composition of one formula. */
+/** Percent composition of one formula, as plain data (the `composition --json` row without its line number). */
 export interface CompositionResult {
   input: string;
+  /** Hill formula with charge. */
   formula: string;
+  /** Molar mass, g/mol (the nearest double to the exact sum). */
+  molarMass: number;
+  /** The exact molar mass as decimal text. */
+  molarMassExact: string;
   charge: number;
-  molarMass: Decimal;
+  /** Each element in Hill order. */
   elements: ElementShare[];
-  part: PartShare | null;
+  /** With `part`: the fragment's share; null otherwise. */
+  part: PartShareResult | null;
   notes: Note[];
-  mass: MassResult;
+}
+
+/** A composition with the detailed mass and fragment share it came from (for tables and the library's own use). */
+export interface CompositionDetail {
+  result: CompositionResult;
+  mass: MassDetail;
+  part: PartShare | null;
+}
+
+const SCALE = 10 ** SCALE_DIGITS;
+
+/**
+ * The composition of a formula with its detailed mass: the exact values tables round from.
+ *
+ * @param input a formula, or a tree from parseFormula
+ * @param options the weight table, reading options and an optional fragment
+ * @returns the plain result with the detail beside it
+ * @throws PondusError for bad input, PART_NOT_IN_FORMULA when the fragment is not in the formula
+ * @example
+ * compositionDetail('H2O').mass.molarMass.toString() // '18.015'
+ */
+export function compositionDetail(input: string | FormulaTree, options: CompositionOptions = {}): CompositionDetail {
+  const mass = formulaMassDetail(input, options);
+  const { ids, counts } = mass.vector;
+  const n = ids.length;
+  const elements = new Array<ElementShare>(n);
+  const total = mass.molarScaled;
+  let molarMass: number;
+  let molarMassExact: string;
+  if (total !== null) {
+    // exact integers in 10^-12 u: each count × weight is exact while the total is
+    const avg = mass.weights === 'standard' ? ATOMS.standardScaled : ATOMS.abridgedScaled;
+    for (let i = 0; i < n; i++) {
+      const c = counts[i] as number;
+      const m = c * avg[ids[i]];
+      elements[i] = { symbol: ATOMS.data[ids[i]].label, count: c, mass: m / SCALE, massPercent: total === 0 ? 0 : scaledRatio(m, total, 100) };
+    }
+    molarMass = total / SCALE;
+    molarMassExact = scaledToString(total);
+  } else {
+    const totalD = mass.molarMass;
+    const contributions = mass.contributions;
+    for (let i = 0; i < n; i++) {
+      const c = contributions[i];
+      elements[i] = { symbol: c.label, count: toDecimal(c.count).toNumber(), mass: c.mass.toNumber(), massPercent: totalD.isZero() ? 0 : c.mass.div(totalD).times(100).toNumber() };
+    }
+    molarMass = totalD.toNumber();
+    molarMassExact = totalD.toFixed();
+  }
+  const share = options.part !== undefined ? partShare(mass, options.part, options) : null;
+  const part: PartShareResult | null = share
+    ? { part: share.part, formula: share.formula, count: toDecimal(share.count).toNumber(), mass: share.mass.toNumber(), massPercent: share.massPercent.toNumber(), countedFrom: share.countedFrom }
+    : null;
+  const notes = share && share.notes.length ? [...mass.notes, ...share.notes] : mass.notes.slice();
+  return { result: { input: mass.input, formula: mass.formula, molarMass, molarMassExact, charge: mass.charge, elements, part, notes }, mass, part: share };
 }
 
 /**
- * Mass percent of each element in a formula, and optionally of a fragment.
+ * Mass percent of each element in a formula, and optionally of a fragment, as plain data.
  *
+ * @param input a formula, or a tree from parseFormula
+ * @param options the weight table, reading options and an optional fragment
+ * @returns the composition: numbers, with the exact molar mass as text beside them
+ * @throws PondusError for bad input, PART_NOT_IN_FORMULA when the fragment is not in the formula
  * @example
  * composition('H2O').elements.map(e => [e.symbol, e.massPercent.toFixed(2)]) // [['H','11.19'], ['O','88.81']]
  * composition('CuSO4·5H2O', { part: 'H2O' }).part?.massPercent.toFixed(2)   // '36.08'
  */
 export function composition(input: string | FormulaTree, options: CompositionOptions = {}): CompositionResult {
-  const mass = formulaMass(input, options);
-  const total = mass.molarMass;
-  const elements = mass.contributions.map((c) => ({
-    symbol: c.label,
-    count: c.count,
-    mass: c.mass,
-    massPercent: total.isZero() ? new Decimal(0) : c.mass.div(total).times(100),
-  }));
-  const part = options.part !== undefined ? partShare(mass, options.part, options) : null;
-  const notes = part ? [...mass.notes, ...part.notes] : mass.notes;
-  return { input: mass.input, formula: mass.formula, charge: mass.charge, molarMass: total, elements, part, notes, mass };
+  return compositionDetail(input, options).result;
 }
 
 /**

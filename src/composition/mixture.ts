@@ -5,7 +5,7 @@
  */
 import { Decimal } from '../exact/decimal.js';
 import { fail, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
-import { formulaMass, type MassOptions } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassOptions } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import type { Note } from '../errors/issue.js';
 import { readKeyValues } from '../key-values/read-key-values.js';
@@ -116,7 +116,7 @@ export function mixtureComposition(input: string, options: MassOptions = {}): Mi
     }
     let mr = null;
     try {
-      mr = formulaMass(key, options);
+      mr = formulaMassDetail(key, options);
     } catch (e) {
       if (!(e instanceof PondusError)) throw e;
       if (!NAME_LIKE.test(key)) throw new PondusError(e.issues.map((i) => ({ ...i, column: (i.column ?? 1) + at })), input);

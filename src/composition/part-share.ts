@@ -11,7 +11,7 @@ import { Decimal } from '../exact/decimal.js';
 import { addAmount, amountOf, mulAmount, toDecimal, type Amount } from '../formula/amount.js';
 import { flattenFormula, type AtomCounts } from '../formula/flatten.js';
 import type { ComponentNode, FormulaTree, PartNode } from '../formula-parser/tree.js';
-import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassDetail, type MassOptions } from '../mass/formula-mass.js';
 
 /** A fragment's share of a formula's mass. */
 export interface PartShare {
@@ -35,10 +35,10 @@ export interface PartShare {
  * The mass share of `part` in a formula whose mass has been computed.
  *
  * @example
- * partShare(formulaMass('Fe2(SO4)3'), 'SO4').count // 3
+ * partShare(formulaMassDetail('Fe2(SO4)3'), 'SO4').count // 3
  */
-export function partShare(whole: MassResult, part: string, options: MassOptions = {}): PartShare {
-  const frag = formulaMass(part, { ...options });
+export function partShare(whole: MassDetail, part: string, options: MassOptions = {}): PartShare {
+  const frag = formulaMassDetail(part, { ...options });
   const fragCounts = frag.atoms;
   let count: Amount | null = countWritten(whole.tree, fragCounts);
   let countedFrom: PartShare['countedFrom'] = 'written';
@@ -85,6 +85,8 @@ function countsOfParts(parts: PartNode[]): AtomCounts {
 
 /** Counts the fragment where the formula writes it; null when it is written nowhere. */
 function countWritten(tree: FormulaTree, unit: AtomCounts): Amount | null {
+  const keys = [...unit.keys()];
+  const unitNumbers = keys.map((key) => toDecimal(unit.get(key)!).toNumber());
   let found: Amount = 0;
   let any = false;
   const visitComponents = (components: ComponentNode[], factor: Amount) => {
@@ -94,13 +96,43 @@ function countWritten(tree: FormulaTree, unit: AtomCounts): Amount | null {
     }
   };
   const visitParts = (parts: PartNode[], factor: Amount) => {
+    // Screen runs parts[i..j) with plain numbers over prefix sums (a run is a multiple of the unit
+    // only if it holds no other atom and its totals are one multiple of the unit's), then check
+    // the few that pass exactly: linear in the parts for a fragment that is not there.
+    const n = parts.length;
+    const k = keys.length;
+    const prefix = new Float64Array((n + 1) * k);
+    const nextOther = new Int32Array(n + 1);
+    const own = parts.map((p) => countsOfParts([p]));
+    for (let i = 0; i < n; i++) {
+      let other = false;
+      for (const key of own[i].keys()) if (!unit.has(key)) other = true;
+      nextOther[i] = other ? i : -1;
+      for (let u = 0; u < k; u++) {
+        const c = own[i].get(keys[u]);
+        prefix[(i + 1) * k + u] = prefix[i * k + u] + (c === undefined ? 0 : typeof c === 'number' ? c : c.toNumber());
+      }
+    }
+    nextOther[n] = n;
+    for (let i = n - 1; i >= 0; i--) if (nextOther[i] < 0) nextOther[i] = nextOther[i + 1];
+    const screen = (i: number, j: number): boolean => {
+      let m = -1;
+      for (let u = 0; u < k; u++) {
+        const r = (prefix[j * k + u] - prefix[i * k + u]) / unitNumbers[u];
+        if (!(r > 0)) return false;
+        if (m < 0) m = r;
+        else if (Math.abs(r - m) > 1e-9 * m) return false;
+      }
+      return Math.abs(m - Math.round(m)) <= 1e-9 * m;
+    };
     let i = 0;
-    while (i < parts.length) {
+    while (i < n) {
       let matched = 0;
-      for (let j = parts.length; j > i; j--) {
-        const k = multipleOf(countsOfParts(parts.slice(i, j)), unit);
-        if (k !== null) {
-          found = addAmount(found, mulAmount(factor, k));
+      for (let j = nextOther[i]; j > i; j--) {
+        if (!screen(i, j)) continue;
+        const m = multipleOf(countsOfParts(parts.slice(i, j)), unit);
+        if (m !== null) {
+          found = addAmount(found, mulAmount(factor, m));
           any = true;
           matched = j - i;
           break;

@@ -1,5 +1,5 @@
 import { toScaled } from '../exact/scaled.js';
-import { getElement, type ElementData } from './element-table.js';
+import { ELEMENTS, getElement, type ElementData } from './element-table.js';
 import { getNuclide, principalIsotope } from './nuclides.js';
 
 /** Which atomic weights to use for average molar mass. */
@@ -16,6 +16,8 @@ export interface TabulatedValue {
  * natural isotopic composition (`massNumber` null) or a single nuclide (`[13C]`, D, T).
  */
 export interface AtomData {
+  /** Index into the dense per-atom tables: the atomic number for an element, 119 and up for nuclides (in order of first use). */
+  id: number;
   /** 'C' for carbon, '13C' for carbon-13. */
   key: string;
   symbol: string;
@@ -31,6 +33,73 @@ export interface AtomData {
 }
 
 const cache = new Map<string, AtomData | null>();
+
+/**
+ * Dense per-atom tables, indexed by {@link AtomData.id}: what the mass and composition sums and
+ * Hill order read for every atom of every formula, without a map or an object per lookup.
+ * `standardScaled`, `abridgedScaled` and `monoScaled` are the tabulated values in 10^-12 u.
+ */
+export const ATOMS = {
+  data: [] as AtomData[],
+  standardScaled: [] as number[],
+  abridgedScaled: [] as number[],
+  monoScaled: [] as number[],
+  nominal: [] as number[],
+  /** Hill rank without carbon: alphabetical by symbol, then mass number. */
+  rankPlain: [] as number[],
+  /** Hill rank with carbon present: C first, then H (with D and T), then as rankPlain. */
+  rankOrganic: [] as number[],
+};
+let nextNuclideId = 119;
+
+const SYMBOL_RANK = new Map(
+  ELEMENTS.map((e) => e.symbol)
+    .sort((a, b) => (a < b ? -1 : a > b ? 1 : 0))
+    .map((s, i) => [s, i] as const),
+);
+
+/**
+ * Position of an element symbol in alphabetical order (0 for Ac): the Hill order of the elements
+ * other than carbon and hydrogen.
+ *
+ * @example
+ * alphabeticalRank('Ag') < alphabeticalRank('Al') // true
+ */
+export function alphabeticalRank(symbol: string): number {
+  return SYMBOL_RANK.get(symbol) ?? 999;
+}
+
+function register(d: AtomData): void {
+  const i = d.id;
+  ATOMS.data[i] = d;
+  ATOMS.standardScaled[i] = d.average.standard.scaled;
+  ATOMS.abridgedScaled[i] = d.average.abridged.scaled;
+  ATOMS.monoScaled[i] = d.monoisotopic.scaled;
+  ATOMS.nominal[i] = d.nominal;
+  const mass = d.massNumber ?? 0;
+  const plain = alphabeticalRank(d.symbol) * 1000 + mass;
+  ATOMS.rankPlain[i] = plain;
+  ATOMS.rankOrganic[i] = d.symbol === 'C' ? mass - 2000 : d.symbol === 'H' ? mass - 1000 : plain;
+}
+
+const Z_OF = new Map(ELEMENTS.map((e) => [e.symbol, e.z]));
+
+/**
+ * The dense-table index of an atom (registering its data on first use), or -1 for an unknown
+ * symbol or a nuclide AME2020 does not list.
+ *
+ * @example
+ * atomId('O', null) // 8
+ */
+export function atomId(symbol: string, massNumber: number | null): number {
+  if (massNumber === null) {
+    const z = Z_OF.get(symbol);
+    if (z === undefined) return -1;
+    if (ATOMS.data[z] === undefined) getAtomData(symbol, null);
+    return z;
+  }
+  return getAtomData(symbol, massNumber)?.id ?? -1;
+}
 
 /**
  * Builds the key for an atom: the symbol, prefixed by the mass number for a nuclide.
@@ -71,6 +140,7 @@ export function getAtomData(symbol: string, massNumber: number | null): AtomData
   if (hit !== undefined) return hit ?? undefined;
   const built = build(symbol, massNumber, key);
   cache.set(key, built);
+  if (built) register(built);
   return built ?? undefined;
 }
 
@@ -82,7 +152,7 @@ function build(symbol: string, massNumber: number | null, key: string): AtomData
     const n = getNuclide(symbol, massNumber);
     if (!n) return null;
     const m = tab(n.mass);
-    return { key, symbol, massNumber, label, element, average: { standard: m, abridged: m }, monoisotopic: m, nominal: massNumber, noStandardWeight: false };
+    return { id: nextNuclideId++, key, symbol, massNumber, label, element, average: { standard: m, abridged: m }, monoisotopic: m, nominal: massNumber, noStandardWeight: false };
   }
   const principal = principalIsotope(symbol);
   const monoisotopic = tab(principal.mass);
@@ -96,6 +166,7 @@ function build(symbol: string, massNumber: number | null, key: string): AtomData
     abridged = tab(element.abridged!.value);
   }
   return {
+    id: element.z,
     key,
     symbol,
     massNumber: null,

@@ -3,7 +3,7 @@
  */
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
-import { formulaMass } from '../mass/formula-mass.js';
+import { formulaMassDetail } from '../mass/formula-mass.js';
 import { readMeasurements } from './measurements.js';
 import { DEFAULT_TOLERANCE, prepareData, searchFormula, searchMolecular, type FormulaFit } from './formula-search.js';
 import { hillOrder } from '../formula/hill.js';
@@ -56,7 +56,7 @@ export interface EmpiricalResult {
 function reduceFit(f: FormulaFit): { formula: string; multiple: number } {
   const g = Object.values(f.counts).reduce((a, b) => gcd(a, b), 0);
   if (g <= 1) return { formula: f.formula, multiple: 1 };
-  return { formula: formulaMass(Object.entries(f.counts).map(([s, c]) => `${s}${c / g}`).join(''), { abbreviations: 'none' }).formula, multiple: g };
+  return { formula: formulaMassDetail(Object.entries(f.counts).map(([s, c]) => `${s}${c / g}`).join(''), { abbreviations: 'none' }).formula, multiple: g };
 }
 
 const gcd = (a: number, b: number): number => (b ? gcd(b, a % b) : a);
@@ -123,11 +123,11 @@ export function empirical(input: string, options: EmpiricalOptions = {}): Empiri
     alternatives = s.alternatives;
     empiricalFormula = s.best.formula;
     if (window) {
-      const em = formulaMass(empiricalFormula, { abbreviations: 'none' }).molarMass.toNumber();
+      const em = formulaMassDetail(empiricalFormula, { abbreviations: 'none' }).molarMass.toNumber();
       notes.push({ code: 'NOT_A_MULTIPLE', message: `no formula of ${window.text} fits the data within the limits (the empirical formula ${empiricalFormula} is ${em.toFixed(3)} g/mol; ${(window.lo / em).toFixed(2)}–${(window.hi / em).toFixed(2)} × that): no molecular formula; check the molar mass, or search near a measured mass with the candidates command` });
     }
   }
-  const massResult = formulaMass(empiricalFormula, { abbreviations: 'none' }); // a Hill formula: element symbols only
+  const massResult = formulaMassDetail(empiricalFormula, { abbreviations: 'none' }); // a Hill formula: element symbols only
   if (fit.atoms > LARGE_EMPIRICAL && molecular === null) {
     notes.push({ code: 'LARGE_FORMULA', message: `the simplest formula within the limits has ${fit.atoms} atoms: the compound is not what the values suggest, or they are off; check them, or search near a measured mass with the candidates command` });
   }

@@ -16,7 +16,7 @@ import type { Note } from '../errors/issue.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
 import { isElementSymbol } from '../elements/element-table.js';
 import { readKeyValues } from '../key-values/read-key-values.js';
-import { formulaMass } from '../mass/formula-mass.js';
+import { formulaMassDetail } from '../mass/formula-mass.js';
 import { readNumber } from '../sigfig/read-number.js';
 import { unitOf } from '../sigfig/units.js';
 
@@ -63,7 +63,7 @@ function readKey(key: string, column: number, text: string): { symbol: string; s
   if (isElementSymbol(key)) return [{ symbol: key, share: new Decimal(1) }];
   let m;
   try {
-    m = formulaMass(key);
+    m = formulaMassDetail(key);
   } catch (e) {
     if (/^[A-Z][a-z]?$/.test(key) || /^[A-Za-z][a-z]?$/.test(key)) throw fail({ code: 'UNKNOWN_ELEMENT', message: `unknown element symbol '${key}'`, column, length: key.length }, text);
     const why = e instanceof PondusError ? `: ${e.first.message}` : '';

@@ -79,3 +79,21 @@ export function scaledToJson(n: number): string {
   const digits = text.length - (n < 0 ? 2 : 1);
   return digits <= 15 ? text : String(n / 1e12);
 }
+
+/**
+ * Exact decimal text of an integer count of 10^-decimals units (a BigInt), without trailing zeros.
+ *
+ * @example
+ * bigScaledToString(18010016103146935n, 15) // '18.010016103146935'
+ */
+export function bigScaledToString(n: bigint, decimals: number): string {
+  const neg = n < 0n;
+  let t = (neg ? -n : n).toString();
+  if (t.length <= decimals) t = '0'.repeat(decimals - t.length + 1) + t;
+  const int = t.slice(0, t.length - decimals);
+  let frac = t.slice(t.length - decimals);
+  let end = frac.length;
+  while (end > 0 && frac.charCodeAt(end - 1) === 48) end--;
+  frac = frac.slice(0, end);
+  return `${neg ? '-' : ''}${int}${frac ? `.${frac}` : ''}`;
+}

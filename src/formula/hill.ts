@@ -4,8 +4,7 @@
  * all elements alphabetically. Nuclides follow their element, lightest first,
  * and D and T count as hydrogen.
  */
-import { getAtomData, type AtomData } from '../elements/atom-data.js';
-import { ELEMENTS } from '../elements/element-table.js';
+import { alphabeticalRank, ATOMS, getAtomData, type AtomData } from '../elements/atom-data.js';
 import { amountText, type Amount } from './amount.js';
 import type { AtomCounts } from './flatten.js';
 
@@ -23,22 +22,7 @@ export interface HillEntry {
   organic: number;
 }
 
-const SYMBOL_RANK = new Map(
-  ELEMENTS.map((e) => e.symbol)
-    .sort((a, b) => (a < b ? -1 : a > b ? 1 : 0))
-    .map((s, i) => [s, i] as const),
-);
-
-/**
- * Position of an element symbol in alphabetical order (0 for Ac): the Hill order of the elements
- * other than carbon and hydrogen.
- *
- * @example
- * alphabeticalRank('Ag') < alphabeticalRank('Al') // true
- */
-export function alphabeticalRank(symbol: string): number {
-  return SYMBOL_RANK.get(symbol) ?? 999;
-}
+export { alphabeticalRank };
 
 const described = new Map<string, HillEntry>();
 
@@ -49,8 +33,8 @@ function describe(key: string): HillEntry {
   const massNumber = m[1] ? Number(m[1]) : 0;
   const symbol = m[2];
   const data = getAtomData(symbol, m[1] ? massNumber : null);
-  const plain = alphabeticalRank(symbol) * 1000 + massNumber;
-  const organic = symbol === 'C' ? massNumber - 2000 : symbol === 'H' ? massNumber - 1000 : plain;
+  const plain = data ? ATOMS.rankPlain[data.id] : alphabeticalRank(symbol) * 1000 + massNumber;
+  const organic = data ? ATOMS.rankOrganic[data.id] : plain;
   const k: HillEntry = { key, symbol, massNumber, label: data ? data.label : key, atom: data, plain, organic };
   described.set(key, k);
   return k;

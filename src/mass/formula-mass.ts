@@ -1,19 +1,26 @@
 /**
  * Molar mass, monoisotopic mass and nominal mass of a formula, computed
- * exactly: in scaled integers (10^-12 u) on the fast path, in Decimal where
- * counts are decimal or sums grow past the exact integer range. Decimal values
- * and per-element contributions are built only when asked for, which keeps
- * million-line batches fast.
+ * exactly from the one pipeline: text → tree (parse.ts) → atom totals over the
+ * dense per-atom tables (formula/flatten.ts) → sums in scaled integers
+ * (10^-12 u) while they are exact safe integers, in Decimal where counts are
+ * decimal or sums grow past that range.
+ *
+ * Two shapes of one computation:
+ * - {@link formulaMass}: the public result, plain data (numbers, with the exact
+ *   decimals as strings beside them; JSON.stringify, spread and structuredClone
+ *   keep everything);
+ * - {@link formulaMassDetail}: the same, with Decimal values, the tree, the atom
+ *   map and per-element contributions, for the library's own calculations.
  */
 import type { Note } from '../errors/issue.js';
 import { toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { ELECTRON_MASS } from '../elements/constants.js';
-import type { AtomData, WeightTable } from '../elements/atom-data.js';
+import { ATOMS, type AtomData, type WeightTable } from '../elements/atom-data.js';
 import { Decimal } from '../exact/decimal.js';
-import { fromScaled, scaledToJson, scaledToString, SCALE_DIGITS } from '../exact/scaled.js';
-import { isWhole, toDecimal, type Amount } from '../formula/amount.js';
-import { flattenFormula, type AtomCounts } from '../formula/flatten.js';
-import { formatFormula, hillEntries } from '../formula/hill.js';
+import { bigScaledToString, fromScaled, scaledToString, SCALE_DIGITS } from '../exact/scaled.js';
+import { amountText, toDecimal, type Amount } from '../formula/amount.js';
+import { atomVector, countsMap, type AtomCounts, type AtomVector } from '../formula/flatten.js';
+import { chargeText } from '../formula/hill.js';
 import { parseFormula, type ParseOptions } from '../formula-parser/parse.js';
 import type { FormulaTree } from '../formula-parser/tree.js';
 
@@ -21,6 +28,27 @@ import type { FormulaTree } from '../formula-parser/tree.js';
 export interface MassOptions extends ParseOptions {
   /** Atomic-weight table: 'standard' (CIAAW 2021 + 2024 revisions, conventional values for interval elements; default) or 'abridged' (five figures). */
   weights?: WeightTable;
+}
+
+/** The mass of one formula, as plain data (the `mass --json` row without its line number). */
+export interface MassResult {
+  /** The text as given. */
+  input: string;
+  /** Hill formula with charge. */
+  formula: string;
+  /** Average molar mass in g/mol: the nearest double to the exact sum of the tabulated weights. */
+  molarMass: number;
+  /** The exact molar mass as decimal text ('18.015'). */
+  molarMassExact: string;
+  /** Monoisotopic mass in u: principal isotopes (AME2020), less the electrons of a cation or plus those of an anion (CODATA). */
+  monoisotopicMass: number;
+  /** The exact monoisotopic mass as decimal text. */
+  monoisotopicMassExact: string;
+  /** Nominal mass: the sum of the principal isotopes' mass numbers (null with non-integer counts). */
+  nominalMass: number | null;
+  charge: number;
+  /** Assumptions and flags (elements without a standard atomic weight, how an ambiguous '.' was read, …). */
+  notes: Note[];
 }
 
 /** One kind of atom's share of the molar mass. */
@@ -39,36 +67,35 @@ export interface Contribution {
   atom: AtomData;
 }
 
-/** Everything pondus computes about the mass of one formula. */
-export interface MassResult {
+/** Everything pondus computes about the mass of one formula, with exact Decimal values (for the library's own use). */
+export interface MassDetail {
   readonly input: string;
   /** Hill formula with charge. */
   readonly formula: string;
   readonly charge: number;
-  /** Average molar mass in g/mol (numerically the relative formula mass), the exact sum of the tabulated weights. */
+  /** Average molar mass in g/mol, exact. */
   readonly molarMass: Decimal;
-  /** Monoisotopic mass in u: principal isotopes (AME2020), less the electrons of a cation or plus those of an anion (CODATA). */
+  /** Monoisotopic mass in u, exact. */
   readonly monoisotopicMass: Decimal;
-  /** Nominal mass: the sum of the principal isotopes' mass numbers (null with non-integer counts). */
   readonly nominalMass: number | null;
   /** Per-atom contributions in Hill order. */
   readonly contributions: Contribution[];
-  /** The atom totals. */
+  /** The atom totals, in order of first appearance. */
   readonly atoms: AtomCounts;
-  /** Assumptions and flags (elements without a standard atomic weight, how an ambiguous '.' was read, …). */
+  /** The atom totals over the dense tables, in Hill order. */
+  readonly vector: AtomVector;
   readonly notes: Note[];
   readonly weights: WeightTable;
   readonly tree: FormulaTree;
+  /** Exact sums in 10^-12 u, or null when they need Decimal (the monoisotopic one before the electrons). */
+  readonly molarScaled: number | null;
+  readonly monoScaled: number | null;
   /** The molar mass as the nearest JavaScript number. */
   molarMassNumber(): number;
   /** The monoisotopic mass as the nearest JavaScript number. */
   monoisotopicMassNumber(): number;
   /** The molar mass as exact decimal text ('18.015'). */
   molarMassText(): string;
-  /** The molar mass as JSON number text (JSON.stringify of molarMassNumber(), produced faster). */
-  molarMassJson(): string;
-  /** The monoisotopic mass as JSON number text. */
-  monoisotopicMassJson(): string;
   /** The monoisotopic mass as exact decimal text. */
   monoisotopicMassText(): string;
 }
@@ -76,147 +103,147 @@ export interface MassResult {
 const SCALE = 10 ** SCALE_DIGITS;
 const NO_NOTES: Note[] = Object.freeze([]) as unknown as Note[];
 
-class Computed implements MassResult {
-  readonly formula: string;
-  readonly nominalMass: number | null;
-  readonly notes: Note[];
-  private molarCache: Decimal | null = null;
-  private monoCache: Decimal | null = null;
-  private contributionsCache: Contribution[] | null = null;
+/** The sums and notes of one formula: the shared core of both result shapes. */
+interface MassCore {
+  tree: FormulaTree;
+  vector: AtomVector;
+  weights: WeightTable;
+  formula: string;
+  molarScaled: number | null;
+  monoScaled: number | null;
+  nominal: number | null;
+  notes: Note[];
+}
 
-  constructor(
-    readonly tree: FormulaTree,
-    readonly atoms: AtomCounts,
-    private readonly data: AtomData[],
-    private readonly counts: Amount[],
-    readonly weights: WeightTable,
-    /** Exact sums in 10^-12 u, or null when they need Decimal. */
-    private readonly molarScaled: number | null,
-    private readonly monoScaled: number | null,
-  ) {
-    this.formula = formatFormula(data.map((d) => d.label), counts, tree.charge);
-    let nominal: number | null = 0;
-    let notes: Note[] = tree.notes.length ? [...tree.notes] : NO_NOTES;
-    for (let i = 0; i < data.length; i++) {
-      const c = counts[i];
-      if (nominal !== null) nominal = typeof c === 'number' ? nominal + c * data[i].nominal : null;
-      if (data[i].noStandardWeight) {
-        const d = data[i];
-        if (notes === NO_NOTES) notes = [];
-        notes.push({ code: 'NO_STANDARD_WEIGHT', message: `${d.element.name} (${d.symbol}) has no standard atomic weight; the mass number of its longest-lived isotope, ${d.average.standard.text}, stands in for it` });
+function computeCore(tree: FormulaTree, weights: WeightTable): MassCore {
+  const vector = atomVector(tree);
+  const { ids, counts } = vector;
+  const avg = weights === 'standard' ? ATOMS.standardScaled : ATOMS.abridgedScaled;
+  let molar: number | null = 0;
+  let mono: number | null = 0;
+  let nominal: number | null = 0;
+  let formula = '';
+  let fractional = false;
+  let notes = tree.notes.length ? tree.notes.slice() : NO_NOTES;
+  for (let i = 0; i < ids.length; i++) {
+    const id = ids[i];
+    const c = counts[i];
+    const d = ATOMS.data[id];
+    if (typeof c === 'number') {
+      formula += c === 1 ? d.label : d.label + c;
+      if (molar !== null) {
+        molar += c * avg[id];
+        if (!Number.isSafeInteger(molar)) molar = null;
       }
+      if (mono !== null) {
+        mono += c * ATOMS.monoScaled[id];
+        if (!Number.isSafeInteger(mono)) mono = null;
+      }
+      if (nominal !== null) nominal += c * ATOMS.nominal[id];
+    } else {
+      formula += d.label + amountText(c);
+      molar = mono = nominal = null;
+      if (!c.isInteger()) fractional = true;
     }
-    this.nominalMass = nominal !== null && Number.isSafeInteger(nominal) ? nominal : null;
-    if (this.nominalMass === null && counts.some((c) => !isWhole(c))) {
+    if (d.noStandardWeight) {
       if (notes === NO_NOTES) notes = [];
-      notes.push({ code: 'NON_INTEGER_COUNTS', message: 'the formula has non-integer counts; the nominal mass is not defined' });
+      notes.push({ code: 'NO_STANDARD_WEIGHT', message: `${d.element.name} (${d.symbol}) has no standard atomic weight; the mass number of its longest-lived isotope, ${d.average.standard.text}, stands in for it` });
     }
-    if (tree.charge !== 0) {
-      if (notes === NO_NOTES) notes = [];
-      const z = Math.abs(tree.charge);
-      const e = (Number(ELECTRON_MASS) * z).toPrecision(2);
-      notes.push({
-        code: 'ION_MOLAR_MASS',
-        message: `the molar mass is the sum of the atomic weights (neutral atoms): the ${z} electron${z === 1 ? '' : 's'} ${tree.charge > 0 ? 'missing from' : 'added to'} the ion (${e} g/mol) ${z === 1 ? 'is' : 'are'} not counted (common practice for molar masses); the monoisotopic mass counts ${z === 1 ? 'it' : 'them'}`,
-      });
+  }
+  if (tree.charge !== 0) formula += chargeText(tree.charge);
+  if (nominal !== null && !Number.isSafeInteger(nominal)) nominal = null;
+  if (fractional) {
+    if (notes === NO_NOTES) notes = [];
+    notes.push({ code: 'NON_INTEGER_COUNTS', message: 'the formula has non-integer counts; the nominal mass is not defined' });
+  }
+  if (tree.charge !== 0) {
+    if (notes === NO_NOTES) notes = [];
+    const z = Math.abs(tree.charge);
+    const e = (Number(ELECTRON_MASS) * z).toPrecision(2);
+    notes.push({
+      code: 'ION_MOLAR_MASS',
+      message: `the molar mass is the sum of the atomic weights (neutral atoms): the ${z} electron${z === 1 ? '' : 's'} ${tree.charge > 0 ? 'missing from' : 'added to'} the ion (${e} g/mol) ${z === 1 ? 'is' : 'are'} not counted (common practice for molar masses); the monoisotopic mass counts ${z === 1 ? 'it' : 'them'}`,
+    });
+  }
+  return { tree, vector, weights, formula, molarScaled: molar, monoScaled: mono, nominal, notes };
+}
+
+function decimalSum(core: MassCore, value: (d: AtomData) => string): Decimal {
+  const { ids, counts } = core.vector;
+  let d = new Decimal(0);
+  for (let i = 0; i < ids.length; i++) d = d.plus(toDecimal(counts[i]).times(value(ATOMS.data[ids[i]])));
+  return d;
+}
+
+const weightText = (weights: WeightTable) => (d: AtomData) => d.average[weights].text;
+const monoText = (d: AtomData) => d.monoisotopic.text;
+
+/** The exact molar mass of a core as [number, text]. */
+function molarOf(core: MassCore): [number, string] {
+  if (core.molarScaled !== null) return [core.molarScaled / SCALE, scaledToString(core.molarScaled)];
+  const d = decimalSum(core, weightText(core.weights));
+  return [d.toNumber(), d.toFixed()];
+}
+
+function monoDecimal(core: MassCore): Decimal {
+  const m = core.monoScaled !== null ? fromScaled(core.monoScaled) : decimalSum(core, monoText);
+  return core.tree.charge !== 0 ? m.minus(new Decimal(ELECTRON_MASS).times(core.tree.charge)) : m;
+}
+
+/** The electron mass in 10^-15 u (CODATA 2018 gives it to 15 decimals), for exact ion masses in BigInt. */
+let electron15: bigint | null = null;
+
+function monoOf(core: MassCore): [number, string] {
+  // an exact integer divided by 10^12 is the correctly rounded double of the exact decimal
+  if (core.monoScaled !== null) {
+    if (core.tree.charge === 0) return [core.monoScaled / SCALE, scaledToString(core.monoScaled)];
+    // an ion: the electrons in exact integer arithmetic, and Number() of the exact text is its nearest double
+    electron15 ??= electronIn15();
+    if (electron15 !== null) {
+      const text = bigScaledToString(BigInt(core.monoScaled) * 1000n - BigInt(core.tree.charge) * electron15, 15);
+      return [Number(text), text];
     }
-    this.notes = notes;
   }
+  const d = monoDecimal(core);
+  return [d.toNumber(), d.toFixed()];
+}
 
-  get input(): string {
-    return this.tree.input;
-  }
+function electronIn15(): bigint | null {
+  const m = /^0\.([0-9]{1,15})$/.exec(ELECTRON_MASS);
+  return m ? BigInt(m[1].padEnd(15, '0')) : null;
+}
 
-  get charge(): number {
-    return this.tree.charge;
-  }
-
-  get molarMass(): Decimal {
-    this.molarCache ??= this.molarScaled !== null ? fromScaled(this.molarScaled) : decimalSum(this.data, this.counts, (d) => d.average[this.weights].text);
-    return this.molarCache;
-  }
-
-  get monoisotopicMass(): Decimal {
-    if (this.monoCache) return this.monoCache;
-    let m = this.monoScaled !== null ? fromScaled(this.monoScaled) : decimalSum(this.data, this.counts, (d) => d.monoisotopic.text);
-    if (this.tree.charge !== 0) m = m.minus(new Decimal(ELECTRON_MASS).times(this.tree.charge));
-    this.monoCache = m;
-    return m;
-  }
-
-  molarMassNumber(): number {
-    // an exact integer divided by 10^12 is the correctly rounded double of the exact decimal
-    return this.molarScaled !== null ? this.molarScaled / SCALE : this.molarMass.toNumber();
-  }
-
-  monoisotopicMassNumber(): number {
-    return this.monoScaled !== null && this.tree.charge === 0 ? this.monoScaled / SCALE : this.monoisotopicMass.toNumber();
-  }
-
-  molarMassJson(): string {
-    return this.molarScaled !== null ? scaledToJson(this.molarScaled) : JSON.stringify(this.molarMassNumber());
-  }
-
-  monoisotopicMassJson(): string {
-    return this.monoScaled !== null && this.tree.charge === 0 ? scaledToJson(this.monoScaled) : JSON.stringify(this.monoisotopicMassNumber());
-  }
-
-  molarMassText(): string {
-    return this.molarScaled !== null ? scaledToString(this.molarScaled) : this.molarMass.toFixed();
-  }
-
-  monoisotopicMassText(): string {
-    return this.monoScaled !== null && this.tree.charge === 0 ? scaledToString(this.monoScaled) : this.monoisotopicMass.toFixed();
-  }
-
-  get contributions(): Contribution[] {
-    this.contributionsCache ??= this.data.map((d, i) => ({
-      key: d.key,
-      label: d.label,
-      symbol: d.symbol,
-      massNumber: d.massNumber,
-      count: this.counts[i],
-      atomicWeight: d.average[this.weights].text,
-      mass: toDecimal(this.counts[i]).times(d.average[this.weights].text),
-      atom: d,
-    }));
-    return this.contributionsCache;
-  }
+function plainResult(core: MassCore): MassResult {
+  const [molarMass, molarMassExact] = molarOf(core);
+  const [monoisotopicMass, monoisotopicMassExact] = monoOf(core);
+  return {
+    input: core.tree.input,
+    formula: core.formula,
+    molarMass,
+    molarMassExact,
+    monoisotopicMass,
+    monoisotopicMassExact,
+    nominalMass: core.nominal,
+    charge: core.tree.charge,
+    notes: core.notes === NO_NOTES ? [] : core.notes,
+  };
 }
 
 /**
- * Computes the molar, monoisotopic and nominal mass of a formula, with per-element contributions.
- * Throws a PondusError for bad input.
+ * The molar, monoisotopic and nominal mass of a formula, as plain data. Throws a PondusError for bad input.
  *
+ * @param input a formula, or a tree from parseFormula
+ * @param options the weight table and reading options
+ * @returns the masses, numbers with their exact decimals beside them
+ * @throws PondusError with the parser's issue codes, COUNT_TOO_LARGE past 10^12 atoms of one kind
  * @example
- * formulaMass('H2O').molarMass.toString()        // '18.015'
- * formulaMass('H2O').monoisotopicMass.toString() // '18.010564683056'
+ * formulaMass('H2O').molarMass             // 18.015
+ * formulaMass('H2O').monoisotopicMassExact // '18.010564683056'
+ * formulaMass('SO4^2-').charge             // -2
  */
 export function formulaMass(input: string | FormulaTree, options: MassOptions = {}): MassResult {
   const tree = typeof input === 'string' ? parseFormula(input, options) : input;
-  const atoms = flattenFormula(tree);
-  const weights = options.weights ?? 'standard';
-  const order = hillEntries(atoms.keys());
-  const n = order.length;
-  const data = new Array<AtomData>(n);
-  const counts = new Array<Amount>(n);
-  let molar: number | null = 0;
-  let mono: number | null = 0;
-  for (let i = 0; i < n; i++) {
-    const d = (data[i] = order[i].atom!);
-    const c = (counts[i] = atoms.get(order[i].key)!);
-    if (typeof c === 'number') {
-      if (molar !== null) molar = safe(molar + c * d.average[weights].scaled);
-      if (mono !== null) mono = safe(mono + c * d.monoisotopic.scaled);
-    } else {
-      molar = mono = null;
-    }
-  }
-  return new Computed(tree, atoms, data, counts, weights, molar, mono);
-}
-
-function safe(n: number): number | null {
-  return Number.isSafeInteger(n) ? n : null;
+  return plainResult(computeCore(tree, options.weights ?? 'standard'));
 }
 
 /**
@@ -229,6 +256,110 @@ export function safeFormulaMass(input: string, options: MassOptions = {}): SafeR
   return toSafe(() => formulaMass(input, options));
 }
 
+class Detail implements MassDetail {
+  readonly input: string;
+  readonly formula: string;
+  readonly charge: number;
+  readonly nominalMass: number | null;
+  readonly notes: Note[];
+  readonly tree: FormulaTree;
+  readonly vector: AtomVector;
+  readonly weights: WeightTable;
+  readonly molarScaled: number | null;
+  readonly monoScaled: number | null;
+  private molarCache: Decimal | null = null;
+  private monoCache: Decimal | null = null;
+  private contributionsCache: Contribution[] | null = null;
+  private atomsCache: AtomCounts | null = null;
+
+  constructor(private readonly core: MassCore) {
+    this.input = core.tree.input;
+    this.formula = core.formula;
+    this.charge = core.tree.charge;
+    this.nominalMass = core.nominal;
+    this.notes = core.notes;
+    this.tree = core.tree;
+    this.vector = core.vector;
+    this.weights = core.weights;
+    this.molarScaled = core.molarScaled;
+    this.monoScaled = core.monoScaled;
+  }
+
+  get atoms(): AtomCounts {
+    return (this.atomsCache ??= countsMap(this.core.vector));
+  }
+
+  get molarMass(): Decimal {
+    return (this.molarCache ??= this.molarScaled !== null ? fromScaled(this.molarScaled) : decimalSum(this.core, weightText(this.weights)));
+  }
+
+  get monoisotopicMass(): Decimal {
+    return (this.monoCache ??= monoDecimal(this.core));
+  }
+
+  molarMassNumber(): number {
+    return this.molarScaled !== null ? this.molarScaled / SCALE : this.molarMass.toNumber();
+  }
+
+  monoisotopicMassNumber(): number {
+    return monoOf(this.core)[0];
+  }
+
+  molarMassText(): string {
+    return this.molarScaled !== null ? scaledToString(this.molarScaled) : this.molarMass.toFixed();
+  }
+
+  monoisotopicMassText(): string {
+    return monoOf(this.core)[1];
+  }
+
+  get contributions(): Contribution[] {
+    if (this.contributionsCache) return this.contributionsCache;
+    const { ids, counts } = this.core.vector;
+    this.contributionsCache = ids.map((id, i) => {
+      const d = ATOMS.data[id];
+      return {
+        key: d.key,
+        label: d.label,
+        symbol: d.symbol,
+        massNumber: d.massNumber,
+        count: counts[i],
+        atomicWeight: d.average[this.weights].text,
+        mass: toDecimal(counts[i]).times(d.average[this.weights].text),
+        atom: d,
+      };
+    });
+    return this.contributionsCache;
+  }
+}
+
+/**
+ * The mass of a formula with exact Decimal values, the tree, the atom totals and per-element
+ * contributions: what the library's own calculations build on. Throws a PondusError for bad input.
+ *
+ * @param input a formula, or a tree from parseFormula
+ * @param options the weight table and reading options
+ * @returns the detailed mass result
+ * @throws PondusError with the parser's issue codes, COUNT_TOO_LARGE past 10^12 atoms of one kind
+ * @example
+ * formulaMassDetail('H2O').molarMass.toString()        // '18.015'
+ * formulaMassDetail('H2O').monoisotopicMass.toString() // '18.010564683056'
+ */
+export function formulaMassDetail(input: string | FormulaTree, options: MassOptions = {}): MassDetail {
+  const tree = typeof input === 'string' ? parseFormula(input, options) : input;
+  return new Detail(computeCore(tree, options.weights ?? 'standard'));
+}
+
+/**
+ * The plain result of a detailed one (the same numbers, no Decimal).
+ *
+ * @example
+ * plainMass(formulaMassDetail('NaCl')).molarMassExact // '58.43976928'
+ */
+export function plainMass(d: MassDetail): MassResult {
+  return plainResult((d as Detail)['core']);
+}
+
 /**
  * The average molar mass of a formula in g/mol, exact.
  *
@@ -236,11 +367,5 @@ export function safeFormulaMass(input: string, options: MassOptions = {}): SafeR
  * molarMass('NaCl').toString() // '58.43976928'
  */
 export function molarMass(input: string | FormulaTree, options: MassOptions = {}): Decimal {
-  return formulaMass(input, options).molarMass;
-}
-
-function decimalSum(data: AtomData[], counts: Amount[], text: (d: AtomData) => string): Decimal {
-  let d = new Decimal(0);
-  for (let i = 0; i < data.length; i++) d = d.plus(toDecimal(counts[i]).times(text(data[i])));
-  return d;
+  return formulaMassDetail(input, options).molarMass;
 }

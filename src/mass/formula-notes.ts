@@ -4,7 +4,7 @@
  * that compute with the formula: every reading reaches their results too.
  */
 import type { Note } from '../errors/issue.js';
-import type { MassResult } from './formula-mass.js';
+import type { MassDetail } from './formula-mass.js';
 
 /** Notes about the nominal mass matter only where the nominal mass is shown. */
 const MASS_ONLY = new Set(['NON_INTEGER_COUNTS']);
@@ -17,8 +17,8 @@ const MASS_ONLY = new Set(['NON_INTEGER_COUNTS']);
  * @param named whether to name the formula in each message
  * @returns the notes, in order
  * @example
- * formulaNotes(formulaMass('CaSO4.0.5H2O'), true)[0].message // "CaSO4.0.5H2O: '.' at column 6 is read as the addition dot: CaSO4·0.5H2O"
+ * formulaNotes(formulaMassDetail('CaSO4.0.5H2O'), true)[0].message // "CaSO4.0.5H2O: '.' at column 6 is read as the addition dot: CaSO4·0.5H2O"
  */
-export function formulaNotes(m: MassResult, named = false): Note[] {
+export function formulaNotes(m: MassDetail, named = false): Note[] {
   return m.notes.filter((n) => !MASS_ONLY.has(n.code)).map((n) => (named ? { ...n, message: `${m.input}: ${n.message}` } : n));
 }

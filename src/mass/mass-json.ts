@@ -1,6 +1,19 @@
+/**
+ * The one serialiser of `pondus mass`: the JSON object and JSON line of a plain
+ * mass result, and its CSV cells. The CLI prints exactly these (the shared writer
+ * adds the input's line number); tests/mass/serialisers.test.ts holds the line to
+ * JSON.stringify of the object.
+ */
+import { jsonNumber } from '../exact/json-number.js';
 import type { MassResult } from './formula-mass.js';
 
-/** The stable JSON shape of a mass result (the `mass --json` contract). */
+/** A note as it appears in JSON rows. */
+export interface NoteJson {
+  code: string;
+  message: string;
+}
+
+/** The stable JSON shape of a mass result (the `mass --json` contract, before the shared writer's `line`). */
 export interface MassJson {
   input: string;
   formula: string;
@@ -8,45 +21,82 @@ export interface MassJson {
   monoisotopicMass: number;
   nominalMass: number | null;
   charge: number;
-  notes?: string[];
+  notes: NoteJson[];
+}
+
+/**
+ * Notes as JSON rows carry them: code and message.
+ *
+ * @example
+ * notesJson([{ code: 'STATE_SYMBOL', message: 'set aside', column: 4 }]) // [{ code: 'STATE_SYMBOL', message: 'set aside' }]
+ */
+export function notesJson(notes: readonly { code: string; message: string }[]): NoteJson[] {
+  return notes.map((n) => ({ code: n.code, message: n.message }));
 }
 
 /**
  * The JSON object `pondus mass --json` writes for one result; numbers at full precision.
  *
  * @example
- * massJson(formulaMass('H2O')) // { input: 'H2O', formula: 'H2O', molarMass: 18.015, monoisotopicMass: 18.010564683056, nominalMass: 18, charge: 0 }
+ * massJson(formulaMass('H2O')) // { input: 'H2O', formula: 'H2O', molarMass: 18.015, monoisotopicMass: 18.010564683056, nominalMass: 18, charge: 0, notes: [] }
  */
 export function massJson(r: MassResult): MassJson {
-  const o: MassJson = {
+  return {
     input: r.input,
     formula: r.formula,
-    molarMass: r.molarMassNumber(),
-    monoisotopicMass: r.monoisotopicMassNumber(),
+    molarMass: r.molarMass,
+    monoisotopicMass: r.monoisotopicMass,
     nominalMass: r.nominalMass,
     charge: r.charge,
+    notes: notesJson(r.notes),
   };
-  if (r.notes.length > 0) o.notes = r.notes.map((n) => n.message);
-  return o;
 }
 
 /**
- * The same text as JSON.stringify(massJson(r)), written straight to one JSON
- * line: the batch hot path, without an intermediate object.
+ * The same text as JSON.stringify(massJson(r)), written straight to one JSON line: the batch
+ * hot path, without an intermediate object. With `line`, the row starts with the input's line
+ * number, as the CLI's JSON writer gives every row (JSON.stringify({ line, ...massJson(r) })).
  *
  * @example
  * massJsonLine(formulaMass('H2O')) // '{"input":"H2O","formula":"H2O","molarMass":18.015,…}'
  */
-export function massJsonLine(r: MassResult): string {
-  if (r.notes.length > 0) return JSON.stringify(massJson(r));
+export function massJsonLine(r: MassResult, line?: number): string {
   // Hill formulas hold only letters, digits, brackets, '.', '^', '+' and '-': nothing to escape
-  return `{"input":${jsonString(r.input)},"formula":"${r.formula}","molarMass":${r.molarMassJson()},"monoisotopicMass":${r.monoisotopicMassJson()},"nominalMass":${r.nominalMass},"charge":${r.charge}}`;
+  return `{${line === undefined ? '' : `"line":${line},`}"input":${jsonString(r.input)},"formula":"${r.formula}","molarMass":${jsonNumber(r.molarMass, r.molarMassExact)},"monoisotopicMass":${jsonNumber(r.monoisotopicMass, r.monoisotopicMassExact)},"nominalMass":${r.nominalMass},"charge":${r.charge},"notes":${notesLine(r.notes)}}`;
+}
+
+/** The CSV/TSV columns of `pondus mass` (the shared writer adds notes, error and message). */
+export const MASS_COLUMNS = ['input', 'formula', 'molarMass', 'monoisotopicMass', 'nominalMass', 'charge'] as const;
+
+/**
+ * The CSV/TSV cells of a mass result, matching {@link MASS_COLUMNS}: the exact decimals.
+ *
+ * @example
+ * massCells(formulaMass('H2O')) // ['H2O', 'H2O', '18.015', '18.010564683056', 18, 0]
+ */
+export function massCells(r: MassResult): (string | number | null)[] {
+  return [r.input, r.formula, r.molarMassExact, r.monoisotopicMassExact, r.nominalMass, r.charge];
 }
 
 /** Characters JSON.stringify would escape (and lone surrogates): strings without them are quoted as they are. */
 export const NEEDS_ESCAPE = /["\\\u0000-\u001f\u2028\u2029\ud800-\udfff]/;
 
-/** A JSON string literal; plain text (the usual formula) skips JSON.stringify. */
-function jsonString(s: string): string {
+/**
+ * A JSON string literal; plain text (the usual formula) skips JSON.stringify.
+ *
+ * @example
+ * jsonString('H2O') // '"H2O"'
+ */
+export function jsonString(s: string): string {
   return NEEDS_ESCAPE.test(s) ? JSON.stringify(s) : `"${s}"`;
+}
+
+/**
+ * The JSON text of a notes list as rows carry it (`[]` when there are none).
+ *
+ * @example
+ * notesLine([]) // '[]'
+ */
+export function notesLine(notes: readonly { code: string; message: string }[]): string {
+  return notes.length === 0 ? '[]' : JSON.stringify(notesJson(notes));
 }

@@ -8,15 +8,15 @@
  */
 import type { Measured } from '../sigfig/measured.js';
 import { readNumber } from '../sigfig/read-number.js';
-import type { MassResult } from './formula-mass.js';
+import type { MassDetail } from './formula-mass.js';
 
 /**
  * The molar mass with its precision from the tabulated atomic weights.
  *
  * @example
- * displayMeasured(reportedMolarMass(formulaMass('NaCl'))).text // '58.44'
+ * displayMeasured(reportedMolarMass(formulaMassDetail('NaCl'))).text // '58.44'
  */
-export function reportedMolarMass(r: MassResult): Measured {
+export function reportedMolarMass(r: MassDetail): Measured {
   let lsd: number | null = null;
   for (const c of r.contributions) {
     // a mass number standing in for an atomic weight is good to the unit

@@ -12,7 +12,7 @@
 import { fail } from '../errors/pondus-error.js';
 import { Decimal } from '../exact/decimal.js';
 import { toDecimal } from '../formula/amount.js';
-import type { MassResult } from './formula-mass.js';
+import type { MassDetail } from './formula-mass.js';
 
 /** One element's part of the uncertainty budget. */
 export interface UncertaintyTerm {
@@ -39,9 +39,9 @@ const SQRT3 = new Decimal(3).sqrt();
  * The molar mass with its standard uncertainty from the atomic-weight intervals and uncertainties.
  *
  * @example
- * molarMassUncertainty(formulaMass('H2O')).standardUncertainty.toSignificantDigits(2).toString() // '0.00026'
+ * molarMassUncertainty(formulaMassDetail('H2O')).standardUncertainty.toSignificantDigits(2).toString() // '0.00026'
  */
-export function molarMassUncertainty(r: MassResult): MolarMassUncertainty {
+export function molarMassUncertainty(r: MassDetail): MolarMassUncertainty {
   const terms: UncertaintyTerm[] = r.contributions.map((c) => {
     const n = toDecimal(c.count);
     if (c.massNumber !== null) return { label: c.label, value: new Decimal(c.atomicWeight), u: new Decimal(0), contribution: new Decimal(0) };

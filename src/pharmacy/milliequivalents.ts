@@ -17,7 +17,7 @@ import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { AMOUNT, MASS } from '../calc/measure.js';
 import { readPositive } from '../assay/read-quantity.js';
 import { noteHydrateWater } from '../assay/hydrate-note.js';
-import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { exact } from '../sigfig/measured.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
@@ -51,7 +51,7 @@ export interface IonAmount {
 }
 
 export interface MilliequivalentResult {
-  salt: MassResult;
+  salt: MassDetail;
   ions: SaltIons;
   mode: 'mass' | 'target' | 'strength';
   /** The mass (given, or to weigh), g; null in strength mode. */
@@ -92,7 +92,7 @@ export function milliequivalents(saltText: string, o: MilliequivalentOptions): M
   const given = [o.mass, o.meq, o.mmol, o.concentration].filter((x) => x !== undefined).length;
   if (given !== 1) throw fail({ code: 'USAGE', message: given === 0 ? 'give one of --mass, --meq, --mmol or --concentration' : 'give only one of --mass, --meq, --mmol and --concentration' });
   const notes: Note[] = [];
-  const salt = formulaMass(saltText, o);
+  const salt = formulaMassDetail(saltText, o);
   for (const n of salt.notes) notes.push(n);
   noteHydrateWater(salt, notes);
   const ions = saltIons(salt, o.ions, notes, o);

@@ -9,7 +9,7 @@ import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
 import { toDecimal } from '../formula/amount.js';
 import type { AtomCounts } from '../formula/flatten.js';
-import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { hydrateWater } from '../assay/hydrate-note.js';
 import { ANIONS, CATIONS, type IonEntry } from './ions.js';
 
@@ -34,7 +34,7 @@ export interface SaltIons {
 const chargeText = (z: number) => `^${Math.abs(z) === 1 ? '' : Math.abs(z)}${z > 0 ? '+' : '-'}`;
 
 function countsOf(formula: string): AtomCounts {
-  return formulaMass(formula).atoms;
+  return formulaMassDetail(formula).atoms;
 }
 
 const ION_COUNTS = new Map<string, AtomCounts>();
@@ -56,9 +56,9 @@ function sameCounts(target: Map<string, number>, parts: [AtomCounts, number][]):
  * The ions of a salt from its formula (or the ions given), with a note naming the reading.
  *
  * @example
- * saltIons(formulaMass('CaCl2·2H2O'), undefined, []).equivalentsPerMole // 2
+ * saltIons(formulaMassDetail('CaCl2·2H2O'), undefined, []).equivalentsPerMole // 2
  */
-export function saltIons(salt: MassResult, given: string | undefined, notes: Note[], options: MassOptions = {}): SaltIons {
+export function saltIons(salt: MassDetail, given: string | undefined, notes: Note[], options: MassOptions = {}): SaltIons {
   if (salt.charge !== 0) throw fail({ code: 'BAD_CHARGE', message: `${salt.input} carries a charge; write the neutral salt, e.g. Na2SO4` }, salt.input);
   const water = hydrateWater(salt);
   const target = new Map<string, number>();
@@ -110,13 +110,13 @@ function describe(s: SaltIons): string {
   return s.ions.map((i) => `${i.count === 1 ? '' : i.count}${i.ion}`).join(' + ');
 }
 
-function givenIons(salt: MassResult, given: string, target: Map<string, number>, water: number, notes: Note[], options: MassOptions): SaltIons {
+function givenIons(salt: MassDetail, given: string, target: Map<string, number>, water: number, notes: Note[], options: MassOptions): SaltIons {
   const ions: SaltIon[] = [];
   const parts: [AtomCounts, number][] = [];
   for (const piece of given.split(',').map((s) => s.trim()).filter((s) => s !== '')) {
     const m = /^(\d*)\s*(.+)$/.exec(piece)!;
     const count = m[1] === '' ? 1 : Number(m[1]);
-    const ion = formulaMass(m[2], options);
+    const ion = formulaMassDetail(m[2], options);
     if (ion.charge === 0) throw fail({ code: 'BAD_CHARGE', message: `the ion '${m[2]}' has no charge: write it as K^+, HPO4^2-, …` }, given);
     if (count < 1) throw fail({ code: 'BAD_COUNT', message: `the count of '${m[2]}' must be at least 1` }, given);
     ions.push({ ion: m[2], name: ion.formula, charge: ion.charge, count });

@@ -11,7 +11,7 @@ import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { MASS_CONCENTRATION, MOLARITY, PURE, VOLUME } from '../calc/measure.js';
 import { readPositive } from '../assay/read-quantity.js';
 import { Decimal } from '../exact/decimal.js';
-import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { formulaNotes } from '../mass/formula-notes.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
@@ -36,7 +36,7 @@ export interface ConcentratedOptions extends MassOptions {
 }
 
 export interface ConcentratedResult {
-  reagent: MassResult;
+  reagent: MassDetail;
   /** Mass fraction of the solute, as a fraction of 1. */
   fraction: Quantity;
   /** Density of the concentrated reagent (base unit g/L). */
@@ -112,7 +112,7 @@ function readDensity(text: string, notes: Note[]): Quantity {
 export function concentratedReagent(reagentText: string, options: ConcentratedOptions): ConcentratedResult {
   const notes: Note[] = [];
   if (typeof options.fraction !== 'string') throw new PondusError([{ code: 'BAD_OPTION', message: "give the reagent's mass fraction, as on its label (fraction: '37 %')" }]);
-  const reagent = formulaMass(reagentText, options);
+  const reagent = formulaMassDetail(reagentText, options);
   const fraction = readFraction(options.fraction, notes);
   const grade = CONCENTRATED_GRADES.find((g) => g.formula === reagent.formula && new Decimal(g.percent).div(100).eq(fraction.value)) ?? null;
   let density: Quantity;

@@ -10,14 +10,14 @@
 import { fail } from '../errors/pondus-error.js';
 import { Decimal } from '../exact/decimal.js';
 import { toDecimal } from '../formula/amount.js';
-import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { dividedBy, exact, times, type Measured } from '../sigfig/measured.js';
 import { gcd } from '../reactions/rational.js';
 
 export interface ConversionFactor {
-  sought: MassResult;
-  given: MassResult;
+  sought: MassDetail;
+  given: MassDetail;
   /** The element both contain, on which the factor rests. */
   element: string;
   /** Formula units of the sought substance … */
@@ -38,8 +38,8 @@ export interface ConversionFactor {
  * conversionFactor('P', 'P2O5').factor.toFixed(4)   // '0.4364'
  */
 export function conversionFactor(sought: string, given: string, element?: string, options: MassOptions = {}): ConversionFactor {
-  const s = formulaMass(sought, options);
-  const g = formulaMass(given, options);
+  const s = formulaMassDetail(sought, options);
+  const g = formulaMassDetail(given, options);
   const shared = [...s.atoms.keys()].filter((k) => g.atoms.has(k));
   let key = element;
   if (key === undefined) {

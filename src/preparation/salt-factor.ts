@@ -12,7 +12,7 @@ import { MASS, measureAs } from '../calc/measure.js';
 import { partShare } from '../composition/part-share.js';
 import { Decimal } from '../exact/decimal.js';
 import { toDecimal } from '../formula/amount.js';
-import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { dividedBy, exact, times, type Measured } from '../sigfig/measured.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
@@ -37,8 +37,8 @@ export interface MetalSaltReading {
 }
 
 export interface SaltFactorResult {
-  salt: MassResult;
-  parent: MassResult;
+  salt: MassDetail;
+  parent: MassDetail;
   form: SaltForm;
   /** For a metal salt: how it was read. */
   metalSalt: MetalSaltReading | null;
@@ -76,8 +76,8 @@ export interface SaltOptions extends MassOptions {
  */
 export function saltFactor(saltText: string, parentText: string, options: SaltOptions = {}): SaltFactorResult {
   const notes: Note[] = [];
-  const salt = formulaMass(saltText, options);
-  const parent = formulaMass(parentText, options);
+  const salt = formulaMassDetail(saltText, options);
+  const parent = formulaMassDetail(parentText, options);
   let perSalt: Decimal;
   let form: SaltForm = 'addition';
   let metalSalt: MetalSaltReading | null = null;
@@ -145,7 +145,7 @@ function describeReading(r: MetalSaltReading): string {
 }
 
 /** The parent count when the parent is written as a part of the salt (parent·acid), else null. */
-function writtenShare(salt: MassResult, parentText: string, options: MassOptions): Decimal | null {
+function writtenShare(salt: MassDetail, parentText: string, options: MassOptions): Decimal | null {
   try {
     const share = partShare(salt, parentText, options);
     return share.countedFrom === 'written' ? toDecimal(share.count) : null;
@@ -158,9 +158,9 @@ function writtenShare(salt: MassResult, parentText: string, options: MassOptions
  * The readings of `salt` as a metal salt of `parent`: k parents each less h
  * acidic hydrogens, plus m metal ions of charge z (k·h = m·z), plus water.
  */
-function metalSaltReadings(salt: MassResult, parent: MassResult): MetalSaltReading[] {
+function metalSaltReadings(salt: MassDetail, parent: MassDetail): MetalSaltReading[] {
   const out: MetalSaltReading[] = [];
-  const count = (m: MassResult, el: string) => (m.atoms.has(el) ? toDecimal(m.atoms.get(el)!) : new Decimal(0));
+  const count = (m: MassDetail, el: string) => (m.atoms.has(el) ? toDecimal(m.atoms.get(el)!) : new Decimal(0));
   for (const [metal, z] of SALT_METALS) {
     const m = count(salt, metal);
     if (m.isZero() || !m.isInteger() || !count(parent, metal).isZero()) continue;

@@ -15,7 +15,7 @@ import { CONCENTRATED_GRADES } from './concentrated-grades.js';
 import { smallMassWarning } from './warnings.js';
 import { partShare } from '../composition/part-share.js';
 import { toDecimal } from '../formula/amount.js';
-import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { exact } from '../sigfig/measured.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
@@ -44,7 +44,7 @@ export interface SolutionOptions extends MassOptions {
 export type PurityBasis = 'reagent' | 'part';
 
 export interface SolutionResult {
-  reagent: MassResult;
+  reagent: MassDetail;
   /** What the concentration counts, and how many of it one formula unit of reagent holds. */
   target: { formula: string; perReagent: string; molarMass: Quantity };
   /** The target concentration (null when only the mass weighed was given). */
@@ -107,7 +107,7 @@ function readConcentration(text: string, notes: Note[]): { conc: Quantity; unit:
  * Reagents that come as a concentrated solution (or a gas): a mass of the solute is not
  * something anyone can weigh out, so the instruction must be a volume of the concentrated reagent.
  */
-function refuseConcentrated(reagent: MassResult): void {
+function refuseConcentrated(reagent: MassDetail): void {
   // glacial acetic acid (99.7 %) is a liquid that can be weighed or measured: not refused
   if (reagent.formula === 'C2H4O2') return;
   const grades = CONCENTRATED_GRADES.filter((g) => g.formula === reagent.formula);
@@ -135,7 +135,7 @@ const pct = (d: Decimal) => `${d.times(100).toSignificantDigits(4).toFixed()} %`
  */
 export function prepareSolution(reagentText: string, options: SolutionOptions): SolutionResult {
   const notes: Note[] = [];
-  const reagent = formulaMass(reagentText, options);
+  const reagent = formulaMassDetail(reagentText, options);
   refuseConcentrated(reagent);
   if (options.concentration === undefined && options.weighed === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the target concentration, or the mass weighed (or both)' });
   const target = options.concentration !== undefined ? readConcentration(options.concentration, notes) : null;
@@ -144,14 +144,14 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   if (volume.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the volume must be positive' });
 
   const reagentM = quantity(reportedMolarMass(reagent), G_PER_MOL);
-  let asMass: MassResult | null = null;
+  let asMass: MassDetail | null = null;
   let targetM = reagentM;
   let perReagent = quantity(exact(1), null);
   let targetFormula = reagent.formula;
   let targetName = reagent.input;
   if (options.as !== undefined) {
     const share = partShare(reagent, options.as, options);
-    const t = formulaMass(options.as, options);
+    const t = formulaMassDetail(options.as, options);
     asMass = t;
     targetM = quantity(reportedMolarMass(t), G_PER_MOL);
     perReagent = quantity(exact(toDecimal(share.count)), null);

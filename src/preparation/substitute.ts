@@ -12,16 +12,16 @@ import { readPurity } from './purity.js';
 import { smallMassWarning } from './warnings.js';
 import { partShare } from '../composition/part-share.js';
 import { toDecimal } from '../formula/amount.js';
-import { formulaMass, type MassOptions, type MassResult } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
 import { sameDims, unitOf } from '../sigfig/units.js';
 
 export interface SubstituteResult {
   /** The form in hand. */
-  use: MassResult;
+  use: MassDetail;
   /** The form the recipe names. */
-  instead: MassResult;
+  instead: MassDetail;
   /** The amount the recipe asks for. */
   asked: Quantity;
   /** Amount of formula units, mol (an instruction). */
@@ -41,7 +41,7 @@ export interface SubstituteOptions extends MassOptions {
 }
 
 /** Atoms other than the water written in the formula (water of crystallisation). */
-function core(m: MassResult, options: MassOptions): Map<string, string> {
+function core(m: MassDetail, options: MassOptions): Map<string, string> {
   let water = 0;
   try {
     const w = partShare(m, 'H2O', options);
@@ -66,8 +66,8 @@ function core(m: MassResult, options: MassOptions): Map<string, string> {
  * displayInstruction(substituteForm('MgSO4', 'MgSO4·7H2O', '24.65 g', { purity: '98.0 %' }).mass, 'g').text // '12.28 g'
  */
 export function substituteForm(use: string, instead: string, amount: string, options: SubstituteOptions = {}): SubstituteResult {
-  const u = formulaMass(use, options);
-  const i = formulaMass(instead, options);
+  const u = formulaMassDetail(use, options);
+  const i = formulaMassDetail(instead, options);
   const notes: Note[] = [];
   const asked = measureAs(amount, [MASS, AMOUNT], `the amount of ${instead}`, notes);
   if (asked.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the amount must be positive' });

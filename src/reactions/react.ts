@@ -8,7 +8,7 @@
 import type { Note } from '../errors/issue.js';
 import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { AMOUNT, MASS, measureAs } from '../calc/measure.js';
-import { formulaMass } from '../mass/formula-mass.js';
+import { formulaMassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { exact } from '../sigfig/measured.js';
 import { divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
@@ -69,7 +69,7 @@ const G_PER_MOL = unitOf('g/mol');
 
 function molarMassOf(s: Species, options: ReactOptions): Quantity | null {
   if (s.formula === 'e-') return null;
-  return quantity(reportedMolarMass(formulaMass(s.text, options)), G_PER_MOL);
+  return quantity(reportedMolarMass(formulaMassDetail(s.text, options)), G_PER_MOL);
 }
 
 function findSpecies(key: string, all: Species[], input: string): Species {
@@ -81,7 +81,7 @@ function findSpecies(key: string, all: Species[], input: string): Species {
 
 function safeHill(text: string): string | null {
   try {
-    return formulaMass(text).formula;
+    return formulaMassDetail(text).formula;
   } catch {
     return null;
   }

@@ -12,7 +12,7 @@
  */
 import type { Note } from '../errors/issue.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
-import { formulaMass } from '../mass/formula-mass.js';
+import { formulaMassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import type { ParseOptions } from '../formula-parser/parse.js';
 import { MOLARITY, measureAs, VOLUME } from '../calc/measure.js';
@@ -160,7 +160,7 @@ function resolve(spec: ReagentSpec, options: ParseOptions): Resolved {
   }
   let mass;
   try {
-    mass = formulaMass(formulaText, options);
+    mass = formulaMassDetail(formulaText, options);
   } catch (e) {
     if (e instanceof PondusError && !spec.formula && /[a-z]{3,}|\s|-/.test(text)) {
       throw new PondusError(e.issues.map((i) => ({ ...i, message: `${text}: ${i.message}; a name the tool does not know needs its formula (formula=…)` })), e.input);
@@ -170,7 +170,7 @@ function resolve(spec: ReagentSpec, options: ParseOptions): Resolved {
   for (const n of mass.notes) notes.push({ ...n, message: `${text}: ${n.message}` });
   let weighed = mass;
   if (spec.form && spec.form.trim()) {
-    weighed = formulaMass(spec.form.trim(), options);
+    weighed = formulaMassDetail(spec.form.trim(), options);
     for (const n of weighed.notes) notes.push({ ...n, message: `${spec.form.trim()}: ${n.message}` });
     notes.push({ code: 'WEIGHED_FORM', message: `${text} is weighed as ${spec.form.trim()} (M ${weighed.molarMassText()} g/mol), taken to hold one ${mass.formula} per formula unit` });
   }

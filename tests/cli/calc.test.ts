@@ -17,7 +17,7 @@ describe('pondus calc', () => {
 
   it('writes the contract JSON keys', () => {
     const [j] = jsonLines(pondus(['calc', '--json', '8.80 g + 2.1 g']).stdout);
-    expect(j).toEqual({ input: '8.80 g + 2.1 g', value: 10.9, rounded: 10.9, display: '10.9 g', sigFigs: 3, unit: 'g', notes: [] });
+    expect(j).toEqual({ line: 1, input: '8.80 g + 2.1 g', value: 10.9, rounded: 10.9, display: '10.9 g', sigFigs: 3, unit: 'g', notes: [] });
   });
 
   it('reads expressions from standard input with errors in place', () => {

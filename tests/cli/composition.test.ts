@@ -22,4 +22,59 @@ describe('pondus composition', () => {
     expect(r.status).toBe(1);
     expect(r.stderr).toContain('PART_NOT_IN_FORMULA');
   });
+
+  it('writes CSV in wide form: one X_percent column per element of the first block, and a notes column', () => {
+    const r = pondus(['composition', '--csv', '-'], 'H2O\nNaCl\nCuSO4.5H2O\n');
+    expect(r.status).toBe(0);
+    const [head, ...rows] = r.stdout.trim().split('\n');
+    expect(head).toBe('input,formula,molarMass,H_percent,Cl_percent,Cu_percent,Na_percent,O_percent,S_percent,notes,error,message');
+    expect(rows).toHaveLength(3);
+    const water = rows[0].split(',');
+    // 2 × 1.008 / 18.015 and 15.999 / 18.015 (CIAAW 2021 conventional weights)
+    expect(Number(water[3]).toFixed(4)).toBe('11.1907');
+    expect(Number(water[7]).toFixed(4)).toBe('88.8093');
+    expect(water[4]).toBe('0');
+    expect(rows[2]).toContain('DOT_AS_ADDITION');
+  });
+
+  it('says so in the notes when a later row has an element with no column', () => {
+    const lines = ['H2O', ...new Array(600).fill('H2O2'), 'NaCl'];
+    const r = pondus(['composition', '--csv', '-'], lines.join('\n') + '\n');
+    const rows = r.stdout.trim().split('\n');
+    expect(rows[0]).toBe('input,formula,molarMass,H_percent,O_percent,notes,error,message');
+    expect(rows[rows.length - 1]).toMatch(/^NaCl,ClNa,58\.43976928,0,0,"NO_COLUMN: no column for Cl \(60\.66/);
+    expect(rows[rows.length - 1]).toContain('--long');
+  });
+
+  it('writes CSV in long form with --long: one row per element', () => {
+    const r = pondus(['composition', '--csv', '--long', 'H2O', 'NaCl']);
+    expect(r.stdout.trim().split('\n')).toEqual([
+      'input,formula,molarMass,symbol,count,mass,massPercent,notes,error,message',
+      'H2O,H2O,18.015,H,2,2.016,11.19067443796836,,,',
+      'H2O,H2O,18.015,O,1,15.999,88.80932556203165,,,',
+      'NaCl,ClNa,58.43976928,Cl,1,35.45,60.66074598985823,,,',
+      'NaCl,ClNa,58.43976928,Na,1,22.98976928,39.33925401014177,,,',
+    ]);
+  });
+
+  it('refuses --long without CSV or TSV (exit 2)', () => {
+    expect(pondus(['composition', '--long', 'H2O']).status).toBe(2);
+  });
+
+  it('gives every JSON row its line and notes, ok or not', () => {
+    const out = jsonLines(pondus(['composition', '--json', '-'], 'H2O\nXx\nCuSO4.5H2O\n').stdout);
+    expect(out.map((o) => o.line)).toEqual([1, 2, 3]);
+    expect(out[0].notes).toEqual([]);
+    expect(out[1].error.code).toBe('UNKNOWN_ELEMENT');
+    expect(out[2].notes.map((n: { code: string }) => n.code)).toEqual(['DOT_AS_ADDITION']);
+  });
+
+  it('streams a long table under one header', () => {
+    const lines = Array.from({ length: 2500 }, (_, i) => `C${i + 1}H4`);
+    const r = pondus(['mass', '-'], lines.join('\n') + '\n');
+    expect(r.stdout.match(/formula \(Hill\)/g)).toHaveLength(1);
+    expect(r.stdout.match(/┌/g)).toHaveLength(1);
+    expect(r.stdout.match(/└/g)).toHaveLength(1);
+    expect(r.stdout.split('\n').filter((l) => l.startsWith('│ C')).length).toBe(2500);
+  });
 });

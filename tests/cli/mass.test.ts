@@ -1,5 +1,9 @@
 import { describe, expect, it } from 'vitest';
+import { Chalk } from 'chalk';
 import { jsonLines, pondus } from './run-cli.js';
+import { massPresenter } from '../../src/cli/commands/mass.js';
+import { createWriter } from '../../src/cli/output/writers.js';
+import type { Presenter } from '../../src/cli/output/presenter.js';
 
 describe('pondus mass', () => {
   it('prints a table by default', () => {
@@ -16,7 +20,9 @@ describe('pondus mass', () => {
     expect(r.status).toBe(0);
     const [w, s] = jsonLines(r.stdout);
     // exact sums of CIAAW weights; monoisotopic mass from AME2020 (1H, 16O)
-    expect(w).toEqual({ input: 'H2O', formula: 'H2O', molarMass: 18.015, monoisotopicMass: 18.010564683056, nominalMass: 18, charge: 0 });
+    expect(w).toEqual({ line: 1, input: 'H2O', formula: 'H2O', molarMass: 18.015, monoisotopicMass: 18.010564683056, nominalMass: 18, charge: 0, notes: [] });
+    expect(s.line).toBe(2);
+    expect(s.notes.map((n: { code: string }) => n.code)).toEqual(['ION_MOLAR_MASS']);
     expect(s.charge).toBe(-2);
     expect(s.formula).toBe('O4S^2-');
   });
@@ -78,6 +84,33 @@ describe('pondus mass', () => {
     const r = pondus(['mass', 'PuO2']);
     expect(r.stdout).toContain('plutonium (Pu) has no standard atomic weight');
     const j = jsonLines(pondus(['mass', '--json', 'PuO2']).stdout)[0];
-    expect(j.notes[0]).toContain('244');
+    expect(j.notes[0].message).toContain('244');
+    expect(j.notes[0].code).toBe('NO_STANDARD_WEIGHT');
+  });
+});
+
+describe('the table writer', () => {
+  const run = (columns: number | undefined, inputs: string[]) => {
+    let out = '';
+    const sink = { write: (s: string) => void (out += s) };
+    const style = new Chalk({ level: 0 });
+    const p = massPresenter({}) as Presenter<unknown>;
+    const w = createWriter('table', p, { out: sink, err: sink, outStyle: style, errStyle: style, numbered: true, columns });
+    inputs.forEach((text, i) => w.ok({ text, line: i + 1 }, p.compute(text)));
+    w.endBatch(true);
+    return out;
+  };
+
+  it('fits a narrow terminal: no line wider than the terminal, long inputs cut with an ellipsis', () => {
+    const long = 'CH3(CH2)40CH2CH2CH2CH2CH2CH2CH2CH2OH';
+    const out = run(70, ['H2O', long]);
+    for (const line of out.trimEnd().split('\n')) expect([...line].length).toBeLessThanOrEqual(70);
+    expect(out).toContain('…');
+    expect(out).toContain('18.015');
+  });
+
+  it('off a terminal keeps every character of the input', () => {
+    const long = 'CH3(CH2)40CH2CH2CH2CH2CH2CH2CH2CH2OH';
+    expect(run(undefined, ['H2O', long])).toContain(long);
   });
 });

@@ -1,15 +1,16 @@
 import { describe, expect, it } from 'vitest';
+import { noteMessages } from '../support/notes.js';
 import { jsonLines, pondus } from './run-cli.js';
 
 describe('readings a chemist could take two ways are said', () => {
   it('a decimal count shaped like a cut-short hydrate', () => {
     const [row] = jsonLines(pondus(['mass', '--json', 'CuSO4.5']).stdout);
-    expect(row.notes.join(' ')).toMatch(/'4\.5' at column 5 is read as a decimal count/);
+    expect(noteMessages(row).join(' ')).toMatch(/'4\.5' at column 5 is read as a decimal count/);
   });
 
   it("an ion's molar mass against its monoisotopic mass", () => {
     const [row] = jsonLines(pondus(['mass', '--json', 'Fe^3+']).stdout);
-    expect(row.notes.join(' ')).toMatch(/3 electrons missing from the ion .* not counted/);
+    expect(noteMessages(row).join(' ')).toMatch(/3 electrons missing from the ion .* not counted/);
   });
 });
 

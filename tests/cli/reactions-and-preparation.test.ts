@@ -5,6 +5,7 @@ describe('pondus balance', () => {
   it('writes the contract JSON keys: balanced, species, coefficients', () => {
     const [j] = jsonLines(pondus(['balance', '--json', 'Fe^2+ + MnO4^- + H^+ -> Fe^3+ + Mn^2+ + H2O']).stdout);
     expect(j).toEqual({
+      line: 1,
       input: 'Fe^2+ + MnO4^- + H^+ -> Fe^3+ + Mn^2+ + H2O',
       balanced: '5 Fe^2+ + MnO4^- + 8 H^+ → 5 Fe^3+ + Mn^2+ + 4 H2O',
       species: ['Fe^2+', 'MnO4^-', 'H^+', 'Fe^3+', 'Mn^2+', 'H2O'],

@@ -1,5 +1,6 @@
 import { noteMessages } from '../support/notes.js';
 import { describe, expect, it } from 'vitest';
+import { noteMessages } from '../support/notes.js';
 import { jsonLines, pondus } from './run-cli.js';
 
 describe('readings at the command line', () => {
@@ -9,7 +10,7 @@ describe('readings at the command line', () => {
     const out = jsonLines(r.stdout);
     // calcium sulfate hemihydrate 145.14 g/mol (from memory); exact sum of CIAAW 2021 weights 145.1415
     for (const o of out) expect(o.molarMass).toBe(145.1415);
-    expect(out[0].notes).toContain("'.' at column 6 is read as the addition dot: CaSO4·0.5H2O");
+    expect(noteMessages(out[0])).toContain("'.' at column 6 is read as the addition dot: CaSO4·0.5H2O");
   });
 
   it('refuses thirds with the whole-number form to write', () => {
@@ -25,7 +26,7 @@ describe('readings at the command line', () => {
       // [Cp*RhCl2]2, 618.07 g/mol (catalogue value, from memory)
       expect(o.formula).toBe('C20H30Cl4Rh2');
       expect(o.molarMass.toFixed(2)).toBe('618.07');
-      expect(o.notes).toEqual(["'Cp*' is read as pentamethylcyclopentadienyl (C10H15)"]);
+      expect(noteMessages(o)).toEqual(["'Cp*' is read as pentamethylcyclopentadienyl (C10H15)"]);
     }
   });
 

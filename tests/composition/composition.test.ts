@@ -56,7 +56,7 @@ describe('fraction of a fragment', () => {
 
   it('writes the contract JSON', () => {
     const j = compositionJson(composition('H2O'));
-    expect(Object.keys(j)).toEqual(['input', 'formula', 'molarMass', 'elements']);
+    expect(Object.keys(j)).toEqual(['input', 'formula', 'molarMass', 'elements', 'notes']);
     expect(Object.keys(j.elements[0])).toEqual(['symbol', 'count', 'mass', 'massPercent']);
     expect(j.elements[0]).toMatchObject({ symbol: 'H', count: 2, mass: 2.016 });
   });

@@ -1,19 +1,20 @@
 import type { Command } from 'commander';
-import { composition, type CompositionResult } from '../../composition/element-shares.js';
+import { composition, compositionDetail, type CompositionDetail } from '../../composition/element-shares.js';
 import { mixtureComposition, mixtureJson, type MixtureResult } from '../../composition/mixture.js';
 import { displayMeasured } from '../../sigfig/round.js';
-import { compositionJson } from '../../composition/composition-json.js';
+import { COMPOSITION_LONG_COLUMNS, compositionCsvColumns, compositionCsvLongRows, compositionCsvRow, compositionJson, compositionJsonLine } from '../../composition/composition-json.js';
 import { amountText } from '../../formula/amount.js';
-import { displayContribution, displayMolarMass, displayPercent, fixedTable } from '../output/display.js';
+import { displayElementMass, displayElementPercent, displayMolarMass, displayPercent, fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { fail } from '../../errors/pondus-error.js';
 import { joinPairArgs, takeJoinedNote } from '../input/key-value-args.js';
-import { withFormulaOptions, withRoundingOption, type FormulaOptions, type RoundingOptions } from './common.js';
+import { outputFormat, withFormulaOptions, withRoundingOption, type FormulaOptions, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 
-interface CompositionCliOptions extends FormulaOptions, RoundingOptions {
+interface CompositionCliOptions extends FormulaOptions, RoundingOptions, OutputOptions {
   part?: string;
   mixture?: boolean;
+  long?: boolean;
   /** Inputs joined from single formula=mass arguments, with the note saying so (set by the command). */
   joined?: Record<string, string>;
 }
@@ -47,36 +48,46 @@ export function mixturePresenter(o: CompositionCliOptions): Presenter<MixtureRes
 }
 
 /** The presenter for `pondus composition`. */
-export function compositionPresenter(o: CompositionCliOptions): Presenter<CompositionResult> | Presenter<MixtureResult> {
+export function compositionPresenter(o: CompositionCliOptions): Presenter<CompositionDetail> | Presenter<MixtureResult> {
   if (o.mixture && o.part !== undefined) throw fail({ code: 'USAGE', message: '--part gives the share of a fragment in one formula; with --mixture the inputs are measured masses: drop one' });
+  if (o.mixture && o.long) throw fail({ code: 'USAGE', message: '--long writes one CSV row per element of a formula; with --mixture drop --long' });
+  if (o.long && outputFormat(o) !== 'csv' && outputFormat(o) !== 'tsv') throw fail({ code: 'USAGE', message: '--long shapes CSV and TSV output (one row per element): add --csv or --tsv, or drop --long' });
   return o.mixture ? mixturePresenter(o) : formulaPresenter(o);
 }
 
-function formulaPresenter(o: CompositionCliOptions): Presenter<CompositionResult> {
+function formulaPresenter(o: CompositionCliOptions): Presenter<CompositionDetail> {
   const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations, part: o.part };
   const rounding = o.rounding ?? 'half-even';
-  const columns = ['input', 'formula', 'molarMass', 'massPercent'];
-  if (o.part !== undefined) columns.push('part', 'partCount', 'partMassPercent');
+  const withPart = o.part !== undefined;
+  const long = !!o.long;
   return {
-    compute: (input) => composition(input, opts),
-    json: compositionJson,
-    columns,
-    cells: (r) => {
-      const cells = [r.input, r.formula, r.molarMass.toFixed(), r.elements.map((e) => `${e.symbol}=${e.massPercent.toDecimalPlaces(6).toFixed()}`).join(' ')];
-      if (r.part) cells.push(r.part.part, amountText(r.part.count), r.part.massPercent.toDecimalPlaces(6).toFixed());
-      return cells;
-    },
-    block: (r) => {
-      const rows = r.elements.map((e, i) => [e.symbol, amountText(e.count), displayContribution(r.mass.contributions[i]), displayPercent(e.massPercent, rounding)]);
-      const lines = [`${r.input}  →  ${r.formula}   M = ${displayMolarMass(r.mass, rounding)} g/mol`];
+    compute: (input) => compositionDetail(input, opts),
+    json: (d) => compositionJson(d.result),
+    jsonLine: (d) => compositionJsonLine(d.result),
+    jsonRow: (input, line) => compositionJsonLine(composition(input, opts), line),
+    columns: long ? [...COMPOSITION_LONG_COLUMNS, ...(withPart ? ['part', 'partCount', 'partMassPercent'] : [])] : ['input', 'formula', 'molarMass'],
+    cells: (d) => [d.result.input, d.result.formula, d.result.molarMassExact],
+    delimited: long
+      ? { columns: () => [...COMPOSITION_LONG_COLUMNS, ...(withPart ? ['part', 'partCount', 'partMassPercent'] : [])], rows: (d) => ({ rows: compositionCsvLongRows(d.result, withPart), notes: [] }) }
+      : {
+          columns: (first) => compositionCsvColumns(first.map((d) => d.result), withPart),
+          rows: (d, columns) => {
+            const row = compositionCsvRow(d.result, columns);
+            return { rows: [row.cells], notes: row.notes };
+          },
+        },
+    block: (d) => {
+      const r = d.result;
+      const rows = r.elements.map((e, i) => [e.symbol, amountText(d.mass.vector.counts[i]), displayElementMass(d.mass, i), displayElementPercent(d.mass, i, rounding)]);
+      const lines = [`${r.input}  →  ${r.formula}   M = ${displayMolarMass(d.mass, rounding)} g/mol`];
       lines.push(fixedTable(['element', 'count', 'mass g/mol', 'mass %'], rows, ['left', 'right', 'right', 'right']));
-      if (r.part) {
-        lines.push(`${r.part.part}: ${amountText(r.part.count)} × ${r.part.unitMass.toFixed()} g/mol = ${r.part.mass.toFixed()} g/mol, ${displayPercent(r.part.massPercent, rounding)} % by mass`);
+      if (d.part) {
+        lines.push(`${d.part.part}: ${amountText(d.part.count)} × ${d.part.unitMass.toFixed()} g/mol = ${d.part.mass.toFixed()} g/mol, ${displayPercent(d.part.massPercent, rounding)} % by mass`);
       }
       return lines.join('\n');
     },
-    notes: (r) => r.notes.map((n) => n.message),
-    noteItems: (r) => r.notes,
+    notes: (d) => d.result.notes.map((n) => n.message),
+    noteItems: (d) => d.result.notes,
   };
 }
 
@@ -87,6 +98,7 @@ export function registerComposition(program: Command, run: CommandRunner): void 
       .command('composition')
       .description('percent by mass of each element, and of a fragment with --part')
       .argument('[formulas...]', 'formulas; - reads one per line from standard input')
+      .option('--long', 'CSV/TSV: one row per element (input, formula, molarMass, symbol, count, mass, massPercent) instead of one X_percent column per element')
       .option('--part <fragment>', 'also the mass fraction of a fragment: H2O in a hydrate, SO4 in a salt, Fe in an iron salt')
       .option('--mixture', "inputs are measured masses, 'NaCl=5.00 g, KCl=3.00 g' or 'C=7.34 g H=1.85 g N=2.85 g' (unquoted NaCl=5.00 g KCl=3.00 g is one mixture): percent by component and by element"),
   )).action((formulas: string[], o: CompositionCliOptions) => {

@@ -1,8 +1,7 @@
 import type { Command } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
-import { formulaMass, type MassResult } from '../../mass/formula-mass.js';
-import { massJson, massJsonLine } from '../../mass/mass-json.js';
-import { plainMassJsonLine } from '../../mass/plain-mass-json.js';
+import { formulaMass, formulaMassDetail, plainMass, type MassDetail } from '../../mass/formula-mass.js';
+import { MASS_COLUMNS, massCells, massJson, massJsonLine } from '../../mass/mass-json.js';
 import { formatWithUncertainty, molarMassUncertainty, type MolarMassUncertainty } from '../../mass/uncertainty.js';
 import { chargeLabel, displayMolarMass, displayMonoisotopic } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
@@ -15,29 +14,29 @@ interface MassCliOptions extends FormulaOptions, RoundingOptions {
 
 /** A mass result, with its uncertainty when asked for. */
 export interface MassRow {
-  mass: MassResult;
+  mass: MassDetail;
   u: MolarMassUncertainty | null;
 }
 
-const columns = ['input', 'formula', 'molarMass', 'monoisotopicMass', 'nominalMass', 'charge'];
+const columns = [...MASS_COLUMNS];
 const head = ['input', 'formula (Hill)', 'molar mass g/mol', 'monoisotopic u', 'nominal', 'charge'];
 const align: ('left' | 'right')[] = ['left', 'left', 'right', 'right', 'right', 'right'];
-const cells = (r: MassResult) => [r.input, r.formula, r.molarMassText(), r.monoisotopicMassText(), r.nominalMass, r.charge];
-const rowWith = (rounding: 'half-even' | 'half-up') => (r: MassResult) => [r.input, r.formula, displayMolarMass(r, rounding), displayMonoisotopic(r), r.nominalMass ?? '—', chargeLabel(r.charge)];
+const cells = (r: MassDetail) => massCells(plainMass(r));
+const rowWith = (rounding: 'half-even' | 'half-up') => (r: MassDetail) => [r.input, r.formula, displayMolarMass(r, rounding), displayMonoisotopic(r), r.nominalMass ?? '—', chargeLabel(r.charge)];
 
 /** The presenter for `pondus mass` (with --uncertainty, {@link uncertaintyPresenter}). */
-export function massPresenter(o: MassCliOptions): Presenter<MassResult> | Presenter<MassRow> {
+export function massPresenter(o: MassCliOptions): Presenter<MassDetail> | Presenter<MassRow> {
   if (o.uncertainty && o.weights === 'abridged') throw fail({ code: 'USAGE', message: '--uncertainty comes from the standard atomic weights and their intervals, not from the abridged table: drop --weights abridged or --uncertainty' });
   return o.uncertainty ? uncertaintyPresenter(o) : plainPresenter(o);
 }
 
-function plainPresenter(o: MassCliOptions): Presenter<MassResult> {
+function plainPresenter(o: MassCliOptions): Presenter<MassDetail> {
   const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations };
   return {
-    compute: (input) => formulaMass(input, opts),
-    json: massJson,
-    jsonLine: massJsonLine,
-    fastJsonLine: opts.weights === 'standard' && !opts.abbreviations ? plainMassJsonLine : undefined,
+    compute: (input) => formulaMassDetail(input, opts),
+    json: (r) => massJson(plainMass(r)),
+    jsonLine: (r) => massJsonLine(plainMass(r)),
+    jsonRow: (input, line) => massJsonLine(formulaMass(input, opts), line),
     columns,
     cells,
     table: { head, align, row: rowWith(o.rounding ?? 'half-even') },
@@ -53,10 +52,10 @@ function uncertaintyPresenter(o: MassCliOptions): Presenter<MassRow> {
   const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations };
   return {
     compute: (input) => {
-      const mass = formulaMass(input, opts);
+      const mass = formulaMassDetail(input, opts);
       return { mass, u: molarMassUncertainty(mass) };
     },
-    json: (r) => ({ ...massJson(r.mass), molarMassUncertainty: { value: r.u!.value.toNumber(), standardUncertainty: r.u!.standardUncertainty.toNumber() }, caution: UNCERTAINTY_BASIS }),
+    json: (r) => ({ ...massJson(plainMass(r.mass)), molarMassUncertainty: { value: r.u!.value.toNumber(), standardUncertainty: r.u!.standardUncertainty.toNumber() }, caution: UNCERTAINTY_BASIS }),
     columns: [...columns, 'uncertaintyValue', 'standardUncertainty'],
     cells: (r) => [...cells(r.mass), r.u!.value.toFixed(), r.u!.standardUncertainty.toFixed()],
     table: {

@@ -12,14 +12,24 @@ export interface Presenter<R> {
   /** Optional: the JSON line for a result, written directly (must equal JSON.stringify(json(result))). */
   jsonLine?(result: R): string;
   /**
-   * Optional hot path for JSON Lines: the line for an input straight from its text, or null to
-   * go the general way (compute, then jsonLine). Must give exactly the general path's text.
+   * Optional: the JSON row for an input straight from the library's plain result and its one
+   * serialiser, with the input's line number first (must equal what compute, json and the JSON
+   * writer give: `{"line":N,…}`); throws like compute for bad input. Skips the detail a table needs.
    */
-  fastJsonLine?(input: string): string | null;
+  jsonRow?(input: string, line: number): string;
   /** CSV/TSV header (first column is the input). */
   columns: string[];
   /** CSV/TSV cells for a result, matching `columns`. */
   cells(result: R): Cell[];
+  /**
+   * Optional: CSV/TSV columns that depend on the results (one column per element), decided from
+   * the first block of results, and the rows of each result under them (several in a long form),
+   * with notes for anything the columns cannot hold. When given, `columns` and `cells` are unused.
+   */
+  delimited?: {
+    columns(first: R[]): string[];
+    rows(result: R, columns: string[]): { rows: Cell[][]; notes: { code: string; message: string }[] };
+  };
   /** Row-style table: header and cells. */
   table?: { head: string[]; row(result: R): Cell[]; align?: ('left' | 'right')[] };
   /** Block-style table output: a block of text per result. */

@@ -2,19 +2,19 @@
  * Result writers for each output format. Each input gets exactly one result
  * (or error) in order; nothing is dropped.
  */
-import Table from 'cli-table3';
 import type { ChalkInstance } from 'chalk';
 import { errorJson, renderError } from '../../errors/render.js';
 import type { PondusError } from '../../errors/pondus-error.js';
 import type { InputItem } from '../input/inputs.js';
 import { delimitedCell, guardCell, notesCell, visibleControls, type Cell, type OutputFormat } from './format.js';
+import { columnWidths, fitWidths, ruleLine, rowLine, textWidth, type Align } from './box-table.js';
 import type { Presenter } from './presenter.js';
 
 export interface ResultWriter<R> {
   ok(item: InputItem, result: R): void;
-  /** A finished JSON line from the presenter's hot path (JSON Lines only). */
-  okLine?(line: string): void;
   fail(item: InputItem, error: PondusError): void;
+  /** A finished JSON row, line number included, from the presenter's jsonRow (JSON Lines only). */
+  okRow?(row: string): void;
   /** Called after each batch; table output prints what it holds here when enough has gathered. */
   endBatch(final: boolean): void;
 }
@@ -31,6 +31,8 @@ export interface WriterContext {
   outStyle: ChalkInstance;
   /** True when inputs came from standard input or there are several: errors then say which line. */
   numbered: boolean;
+  /** The terminal's width when output goes to a terminal: tables are fitted to it. */
+  columns?: number;
 }
 
 /** Creates the writer for a format. */
@@ -47,16 +49,27 @@ export function createWriter<R>(format: OutputFormat, p: Presenter<R>, ctx: Writ
   }
 }
 
+/**
+ * A result's JSON line with the input's line number spliced in as the first key, and its newline:
+ * every row of every command carries `line`, without parsing the row again.
+ *
+ * @example
+ * withLine('{"input":"H2O"}', 3) // '{"line":3,"input":"H2O"}\n'
+ */
+export function withLine(json: string, line: number): string {
+  return json.length > 2 ? `{"line":${line},${json.slice(1)}\n` : `{"line":${line}}\n`;
+}
+
 class JsonLinesWriter<R> implements ResultWriter<R> {
   private readonly line: (result: R) => string;
   constructor(p: Presenter<R>, private readonly ctx: WriterContext) {
     this.line = p.jsonLine ?? ((r) => JSON.stringify(p.json(r)));
   }
-  ok(_item: InputItem, result: R): void {
-    this.ctx.out.write(this.line(result) + '\n');
+  ok(item: InputItem, result: R): void {
+    this.ctx.out.write(withLine(this.line(result), item.line));
   }
-  okLine(line: string): void {
-    this.ctx.out.write(line + '\n');
+  okRow(row: string): void {
+    this.ctx.out.write(row + '\n');
   }
   fail(item: InputItem, error: PondusError): void {
     this.ctx.out.write(JSON.stringify({ input: item.text, line: item.line, error: errorJson(error) }) + '\n');
@@ -65,49 +78,109 @@ class JsonLinesWriter<R> implements ResultWriter<R> {
 }
 
 class DelimitedWriter<R> implements ResultWriter<R> {
-  private headerDone = false;
+  private header: string[] | null = null;
+  /** With columns decided from the first block: that block's rows, held until it ends. */
+  private held: { item: InputItem; result?: R; error?: PondusError }[] = [];
   /** A presenter may write its own notes column (with its codes and caution); otherwise the writer adds one. */
   private readonly ownNotes: boolean;
   constructor(private readonly p: Presenter<R>, private readonly ctx: WriterContext, private readonly sep: string) {
     this.ownNotes = p.columns.includes('notes');
+    if (!p.delimited) this.header = p.columns;
   }
-  private line(cells: Cell[], guard: boolean): void {
-    if (!this.headerDone) {
-      this.headerDone = true;
-      this.line([...this.p.columns, ...(this.ownNotes ? [] : ['notes']), 'error', 'message'], false);
-    }
+  private write(cells: Cell[], guard: boolean): void {
     let s = '';
     for (let i = 0; i < cells.length; i++) s += (i ? this.sep : '') + delimitedCell(guard ? guardCell(cells[i]) : cells[i], this.sep);
     this.ctx.out.write(s + '\n');
   }
-  ok(_item: InputItem, result: R): void {
+  private start(header: string[]): void {
+    this.header = header;
+    this.write([...header, ...(this.ownNotes ? [] : ['notes']), 'error', 'message'], false);
+  }
+  ok(item: InputItem, result: R): void {
+    if (!this.header) {
+      this.held.push({ item, result });
+      return;
+    }
+    if (this.held.length === 0 && !this.headerWritten) this.begin();
+    this.resultRow(result);
+  }
+  private headerWritten = false;
+  private begin(): void {
+    this.headerWritten = true;
+    this.start(this.header!);
+  }
+  private resultRow(result: R): void {
     const items = [...(this.p.noteItems?.(result) ?? (this.p.notes?.(result) ?? []).map((message) => ({ code: '', message })))];
+    let rows: Cell[][];
+    if (this.p.delimited) {
+      const made = this.p.delimited.rows(result, this.header!);
+      rows = made.rows;
+      items.push(...made.notes);
+    } else rows = [this.p.cells(result)];
     // a caution goes with every row: in a spreadsheet each row may be read alone
     if (this.p.caution) items.push({ code: 'CAUTION', message: this.p.caution });
-    this.line([...this.p.cells(result), ...(this.ownNotes ? [] : [notesCell(items)]), '', ''], true);
+    const notes = this.ownNotes ? [] : [notesCell(items)];
+    for (const r of rows) this.write([...r, ...notes, '', ''], true);
   }
   fail(item: InputItem, error: PondusError): void {
-    const blanks = new Array<Cell>(this.p.columns.length - 1 + (this.ownNotes ? 0 : 1)).fill('');
-    this.line([item.text, ...blanks, error.first.code, error.first.message], true);
+    if (!this.header) {
+      this.held.push({ item, error });
+      return;
+    }
+    if (!this.headerWritten) this.begin();
+    const blanks = new Array<Cell>(this.header.length - 1 + (this.ownNotes ? 0 : 1)).fill('');
+    this.write([item.text, ...blanks, error.first.code, error.first.message], true);
   }
-  endBatch(): void {}
+  endBatch(): void {
+    if (this.header && this.headerWritten) return;
+    if (!this.header) {
+      const results = this.held.flatMap((h) => (h.error ? [] : [h.result as R]));
+      this.header = this.p.delimited!.columns(results);
+    }
+    this.begin();
+    const held = this.held;
+    this.held = [];
+    for (const h of held) {
+      if (h.error) this.fail(h.item, h.error);
+      else this.resultRow(h.result as R);
+    }
+  }
 }
 
-const TABLE_CHUNK = 1000;
+const MAX_TABLE_NOTES = 1000;
+// eslint-disable-next-line no-control-regex
+const CONTROL_BUT_NEWLINE = /[\u0000-\u0009\u000b-\u001f\u007f-\u009f]/;
 
+/**
+ * Tables stream: the column widths come from the first block of rows (up to 512 inputs, or all
+ * of them), fitted to the terminal's width when there is one; the header is written once, each
+ * later row as it comes. A later cell wider than its column widens that column from there on
+ * (a cell is never cut, except to fit a terminal). Notes follow the table (the first 1,000; the
+ * rest are counted).
+ */
 class TableWriter<R> implements ResultWriter<R> {
-  private rows: Cell[][] = [];
+  private rows: string[][] = [];
   private blocks: string[] = [];
   private notes: string[] = [];
   private okCount = 0;
-  constructor(private readonly p: Presenter<R>, private readonly ctx: WriterContext) {}
+  private widths: number[] | null = null;
+  private moreNotes = 0;
+  private readonly align: Align[];
+  constructor(private readonly p: Presenter<R>, private readonly ctx: WriterContext) {
+    const t = p.table;
+    this.align = t ? (t.align ?? t.head.map(() => 'left' as const)) : [];
+  }
 
   ok(item: InputItem, result: R): void {
     this.okCount++;
     const where = this.ctx.numbered ? `line ${item.line}: ` : '';
-    for (const n of this.p.notes?.(result) ?? []) this.notes.push(`${where}${n}`);
+    for (const n of this.p.notes?.(result) ?? []) {
+      // notes are printed under the table; past a bound they are counted, so memory stays flat
+      if (this.notes.length < MAX_TABLE_NOTES) this.notes.push(`${where}${n}`);
+      else this.moreNotes++;
+    }
     if (this.p.block) this.blocks.push(this.p.block(result));
-    else this.rows.push(this.p.table!.row(result));
+    else this.rows.push(this.p.table!.row(result).map(cellText));
   }
 
   fail(item: InputItem, error: PondusError): void {
@@ -115,29 +188,42 @@ class TableWriter<R> implements ResultWriter<R> {
     this.ctx.err.write(renderError(error, opts) + '\n');
     if (!this.p.block && this.ctx.numbered) {
       const width = this.p.table!.head.length;
-      this.rows.push([item.text, `✗ ${error.first.code}`, ...new Array<Cell>(width - 2).fill('')]);
+      this.rows.push([visibleControls(item.text), `✗ ${error.first.code}`, ...new Array<string>(width - 2).fill('')]);
     }
   }
 
   endBatch(final: boolean): void {
-    if (!final && this.rows.length < TABLE_CHUNK && this.blocks.length < TABLE_CHUNK) return;
     const s = this.ctx.outStyle;
-    if (this.blocks.length) this.ctx.out.write(this.blocks.map((b) => b.split('\n').map((l) => visibleControls(l, s.level > 0)).join('\n')).join('\n') + '\n');
-    if (this.rows.length && this.okCount > 0) {
-      const t = this.p.table!;
-      const table = new Table({
-        head: t.head.map((h) => s.bold(h)),
-        colAligns: t.align ?? t.head.map(() => 'left' as const),
-        style: { head: [], border: [] },
-        chars: { mid: '', 'left-mid': '', 'mid-mid': '', 'right-mid': '' },
-      });
-      for (const r of this.rows) table.push(r.map((c) => (c === null || c === undefined ? '' : visibleControls(String(c)))));
-      this.ctx.out.write(table.toString() + '\n');
+    const out = this.ctx.out;
+    if (this.blocks.length) {
+      const text = this.blocks.join('\n');
+      // echoed input is made harmless line by line, where a block holds any control character but its newlines
+      out.write((CONTROL_BUT_NEWLINE.test(text) ? text.split('\n').map((l) => visibleControls(l, s.level > 0)).join('\n') : text) + '\n');
     }
-    if (this.notes.length) this.ctx.out.write(this.notes.map((n) => s.dim(`note: ${visibleControls(n)}`)).join('\n') + '\n');
-    if (final && this.p.caution && this.okCount > 0) this.ctx.out.write(s.yellow(`caution: ${this.p.caution}`) + '\n');
+    if (this.rows.length && (this.okCount > 0 || this.widths)) {
+      const t = this.p.table!;
+      if (!this.widths) {
+        this.widths = fitWidths(columnWidths(t.head, this.rows), this.align, this.ctx.columns, columnWidths(t.head.map(() => ''), this.rows));
+        out.write(ruleLine(this.widths, 'top') + '\n' + rowLine(t.head, this.widths, this.align, (h) => s.bold(h)) + '\n');
+      }
+      const w = this.widths;
+      let text = '';
+      for (const r of this.rows) {
+        // a wider cell widens its column from here on; on a terminal, echoed text is cut to fit instead (numbers never are)
+        for (let i = 0; i < w.length; i++) if (!this.ctx.columns || this.align[i] === 'right') w[i] = Math.max(w[i], textWidth(r[i] ?? ''));
+        text += rowLine(r, w, this.align) + '\n';
+      }
+      out.write(text);
+    }
     this.rows = [];
     this.blocks = [];
+    if (!final) return;
+    if (this.widths) out.write(ruleLine(this.widths, 'bottom') + '\n');
+    if (this.notes.length) out.write(this.notes.map((n) => s.dim(`note: ${visibleControls(n)}`)).join('\n') + '\n');
+    if (this.moreNotes > 0) out.write(s.dim(`note: ${this.moreNotes} more note${this.moreNotes === 1 ? '' : 's'} not shown here; --json and --csv give every note on its row`) + '\n');
+    if (this.p.caution && this.okCount > 0) out.write(s.yellow(`caution: ${this.p.caution}`) + '\n');
     this.notes = [];
   }
 }
+
+const cellText = (c: Cell): string => (c === null || c === undefined ? '' : visibleControls(String(c)));

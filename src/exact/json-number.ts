@@ -1,0 +1,26 @@
+/**
+ * JSON text of numbers that come with their exact decimal: the shortest text of the
+ * nearest double, which for values of at most 15 significant digits is the exact
+ * decimal itself, so the digits need not be generated again.
+ */
+
+/**
+ * The JSON text of `value`, the nearest double to the exact decimal `exact`.
+ *
+ * @param value the nearest double to `exact`
+ * @param exact the exact value as plain decimal text ('18.015')
+ * @returns what JSON.stringify(value) gives
+ * @example
+ * jsonNumber(18.015, '18.015') // '18.015'
+ * jsonNumber(0.1 + 0.2, '0.30000000000000004') // '0.30000000000000004'
+ */
+export function jsonNumber(value: number, exact: string): string {
+  // at least 1 (no leading zeros, no exponent form below 1e-6) and below 1e15
+  const c = exact.charCodeAt(0);
+  if (c >= 49 && c <= 57) {
+    const dot = exact.indexOf('.');
+    const digits = dot < 0 ? exact.length : exact.length - 1;
+    if (digits <= 15 && (dot < 0 ? exact.length : dot) <= 15) return exact;
+  }
+  return '' + value;
+}
