@@ -38,9 +38,8 @@ export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
   const strength = o.concentration !== undefined;
   return {
     compute: numbered((input) => milliequivalents(input, opts)),
-    json: ({ input, line, r }) => ({
+    json: ({ input, r }) => ({
       input,
-      line,
       salt: r.salt.formula,
       molarMass: r.salt.molarMass.toNumber(),
       mode: r.mode,
@@ -103,9 +102,8 @@ export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityRe
   const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations, measured: o.measured };
   return {
     compute: numbered((input) => osmolarity(input, opts)),
-    json: ({ input, line, r }) => ({
+    json: ({ input, r }) => ({
       input,
-      line,
       components: r.components.map((c) => ({ salt: c.result.salt.formula, strength: c.strength, mOsmPerL: quantityJson(c.result.osmoles, 'mM', rounding, 'mOsm/L') })),
       mOsmPerL: quantityJson(r.osmolarity, 'mM', rounding, 'mOsm/L'),
       ions: r.ions.map((i) => ({ ion: i.ion, charge: i.charge, mmolPerL: quantityJson(i.molarity, 'mM', rounding, 'mmol/L'), meqPerL: quantityJson(i.equivalents, 'mM', rounding, 'mEq/L') })),
@@ -163,9 +161,8 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
       if (o.by !== undefined && r.total !== null && r.by !== o.by) throw fail({ code: 'USAGE', message: `--by ${o.by} conflicts with the total` });
       return r;
     }),
-    json: ({ input, line, r }) => ({
+    json: ({ input, r }) => ({
       input,
-      line,
       by: r.by,
       higherParts: quantityJson({ ...r.higherParts, lsd: null }, sUnit(r), rounding).value,
       lowerParts: quantityJson({ ...r.lowerParts, lsd: null }, sUnit(r), rounding).value,

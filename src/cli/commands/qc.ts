@@ -130,9 +130,8 @@ export function titrationPresenter(o: TitrationCli): RowPresenter<Titration> {
       const t = titrationAssay(input, opts);
       return { t, rep: report(t.assay, 'as-is', choice, o) };
     }),
-    json: ({ input, line, r: { t, rep } }) => ({
+    json: ({ input, r: { t, rep } }) => ({
       input,
-      line,
       analyte: t.analyte.formula,
       molarMass: t.analyte.molarMass.toNumber(),
       kind: t.kind,
@@ -194,9 +193,8 @@ export function standardisePresenter(o: StandardiseCli): RowPresenter<Standardis
   const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations, mass: o.mass!, volume: o.volume!, blank: o.blank, ratio: o.ratio, purity: o.purity };
   return {
     compute: numbered((input) => standardise(input, opts)),
-    json: ({ input, line, r }) => ({
+    json: ({ input, r }) => ({
       input,
-      line,
       standard: r.standard.formula,
       molarMass: r.standard.molarMass.toNumber(),
       ratio: r.ratio.text,
@@ -250,9 +248,8 @@ export function sampleBasisPresenter(o: SampleBasisCli): RowPresenter<BasisRow> 
       const rep = report(value, from, choice, o);
       return { rep, value, from, notes };
     }),
-    json: ({ input, line, r }) => ({
+    json: ({ input, r }) => ({
       input,
-      line,
       from: r.from,
       to: r.rep.basis,
       value: quantityJson(r.value, '%', rounding),
@@ -294,9 +291,8 @@ export function replicatesPresenter(o: ReplicatesCli): RowPresenter<ReplicateRes
   const fig2 = (d: { toSignificantDigits(n: number): { toFixed(): string } }) => d.toSignificantDigits(2).toFixed();
   return {
     compute: numbered((input) => replicates(input, { level, rounding })),
-    json: ({ input, line, r }) => ({
+    json: ({ input, r }) => ({
       input,
-      line,
       n: r.n,
       unit: r.unit,
       mean: r.mean.value.toNumber(),
