@@ -181,8 +181,39 @@ const monoText = (d: AtomData) => d.monoisotopic.text;
 /** The exact molar mass of a core as [number, text]. */
 function molarOf(core: MassCore): [number, string] {
   if (core.molarScaled !== null) return [core.molarScaled / SCALE, scaledToString(core.molarScaled)];
+  const avg = core.weights === 'standard' ? ATOMS.standardScaled : ATOMS.abridgedScaled;
+  const big = bigSum(core, avg, 0n);
+  if (big !== null) return big;
   const d = decimalSum(core, weightText(core.weights));
   return [d.toNumber(), d.toFixed()];
+}
+
+const COUNT_DECIMALS = 6;
+const COUNT_SCALE = 10n ** BigInt(COUNT_DECIMALS);
+
+/**
+ * Σ count × value in exact BigInt arithmetic, for decimal counts (at most 6 decimals, as the
+ * parser allows) and sums past the safe integers: counts in 10^-6, values in 10^-12 u, so the
+ * sum is in 10^-18 u; `extra` is added in the same unit. Null when a count has more decimals.
+ */
+function bigSum(core: MassCore, values: readonly number[], extra: bigint): [number, string] | null {
+  const { ids, counts } = core.vector;
+  let sum = extra;
+  for (let i = 0; i < ids.length; i++) {
+    const c = counts[i];
+    let n: bigint;
+    if (typeof c === 'number') n = BigInt(c) * COUNT_SCALE;
+    else {
+      const t = c.toFixed();
+      const dot = t.indexOf('.');
+      const frac = dot < 0 ? '' : t.slice(dot + 1);
+      if (frac.length > COUNT_DECIMALS || t.startsWith('-')) return null;
+      n = BigInt((dot < 0 ? t : t.slice(0, dot)) + frac.padEnd(COUNT_DECIMALS, '0'));
+    }
+    sum += n * BigInt(values[ids[i]]);
+  }
+  const text = bigScaledToString(sum, COUNT_DECIMALS + SCALE_DIGITS);
+  return [Number(text), text];
 }
 
 function monoDecimal(core: MassCore): Decimal {
@@ -203,6 +234,11 @@ function monoOf(core: MassCore): [number, string] {
       const text = bigScaledToString(BigInt(core.monoScaled) * 1000n - BigInt(core.tree.charge) * electron15, 15);
       return [Number(text), text];
     }
+  }
+  electron15 ??= electronIn15();
+  if (electron15 !== null) {
+    const big = bigSum(core, ATOMS.monoScaled, -BigInt(core.tree.charge) * electron15 * 1000n);
+    if (big !== null) return big;
   }
   const d = monoDecimal(core);
   return [d.toNumber(), d.toFixed()];

@@ -98,5 +98,22 @@ export function jsonString(s: string): string {
  * notesLine([]) // '[]'
  */
 export function notesLine(notes: readonly { code: string; message: string }[]): string {
-  return notes.length === 0 ? '[]' : JSON.stringify(notesJson(notes));
+  if (notes.length === 0) return '[]';
+  let s = '[';
+  for (let i = 0; i < notes.length; i++) s += (i ? ',' : '') + noteText(notes[i]);
+  return s + ']';
+}
+
+// the same few notes recur through a batch (an ion's electrons, non-integer counts): their JSON is kept
+const noteTexts = new Map<string, string>();
+
+function noteText(n: { code: string; message: string }): string {
+  const key = `${n.code}\u0000${n.message}`;
+  let t = noteTexts.get(key);
+  if (t === undefined) {
+    t = JSON.stringify({ code: n.code, message: n.message });
+    if (noteTexts.size >= 512) noteTexts.clear();
+    noteTexts.set(key, t);
+  }
+  return t;
 }
