@@ -1,6 +1,5 @@
 import { noteMessages } from '../support/notes.js';
 import { describe, expect, it } from 'vitest';
-import { noteMessages } from '../support/notes.js';
 import { jsonLines, pondus } from './run-cli.js';
 
 describe('readings at the command line', () => {

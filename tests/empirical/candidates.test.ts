@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { candidateFormulas, candidateScore, RATIO_RANGES, rdbe, readRanges, safeCandidateFormulas } from '../../src/empirical/candidates.js';
 import { candidatesJson } from '../../src/empirical/candidates-json.js';
 import { ionMass } from '../../src/ions/ion-mass.js';
-import { formulaMass } from '../../src/mass/formula-mass.js';
+import { formulaMassDetail } from '../../src/mass/formula-mass.js';
 
 const formulas = (r: ReturnType<typeof candidateFormulas>) => r.candidates.map((c) => c.formula);
 
@@ -28,7 +28,7 @@ describe('candidates: element-ratio ranges (Kind & Fiehn 2007, rule 4)', () => {
 
 describe('candidates: any element, and ions', () => {
   it.each([
-    // monoisotopic masses from AME2020 via formulaMass; compounds (from memory): ferrocene, palladium(II) acetate,
+    // monoisotopic masses from AME2020 via formulaMassDetail; compounds (from memory): ferrocene, palladium(II) acetate,
     // phenylboronic acid, tetramethylsilane, sodium acetate
     ['C10H10Fe', 'C0-20 H0-30 Fe0-1'],
     ['C4H6O4Pd', 'C0-10 H0-20 O0-6 Pd0-1'],
@@ -36,13 +36,13 @@ describe('candidates: any element, and ions', () => {
     ['C4H12Si', 'C0-10 H0-30 Si0-2'],
     ['C2H3NaO2', 'C0-10 H0-20 O0-4 Na0-1'],
   ])('finds %s in the ranges %s', (f, elements) => {
-    const mass = formulaMass(f).monoisotopicMass.toFixed(6);
+    const mass = formulaMassDetail(f).monoisotopicMass.toFixed(6);
     const r = candidateFormulas({ mass, ppm: 2, elements });
-    expect(formulas(r)).toContain(formulaMass(f).formula);
+    expect(formulas(r)).toContain(formulaMassDetail(f).formula);
   });
 
   it('does not judge a formula with a metal of no fixed valence by RDBE, and says so', () => {
-    const r = candidateFormulas({ mass: formulaMass('C10H10Fe').monoisotopicMass.toFixed(6), ppm: 2, elements: 'C0-20 H0-30 Fe0-1' });
+    const r = candidateFormulas({ mass: formulaMassDetail('C10H10Fe').monoisotopicMass.toFixed(6), ppm: 2, elements: 'C0-20 H0-30 Fe0-1' });
     const fc10 = r.candidates.find((c) => c.formula === 'C10H10Fe')!;
     expect(fc10.rdbe).toBeNull();
     expect(r.notes.map((n) => n.code)).toContain('RULES_NOT_APPLIED');
@@ -65,7 +65,7 @@ describe('candidates: any element, and ions', () => {
     ]) {
       const expected = ionMass(f, ion);
       const r = candidateFormulas({ mass: expected.mz.toFixed(5), ion, ppm: 3, elements: 'C0-30 H0-60 N0-6 O0-10' });
-      const hit = r.candidates.find((c) => c.formula === formulaMass(f).formula);
+      const hit = r.candidates.find((c) => c.formula === formulaMassDetail(f).formula);
       expect(hit, `${f} ${ion}`).toBeDefined();
       expect(hit!.mz).toBe(expected.mz.toNumber());
       expect(hit!.ionFormula).toBe(expected.ionFormula);
@@ -82,7 +82,7 @@ describe('candidates: any element, and ions', () => {
 
 describe('candidates: the error sign and the score', () => {
   it('gives ppm as (found − calculated)/calculated × 10⁶ (common practice; Brenton & Godfrey 2010)', () => {
-    const calc = formulaMass('C6H12O6').monoisotopicMass; // 180.063388098336 (AME2020)
+    const calc = formulaMassDetail('C6H12O6').monoisotopicMass; // 180.063388098336 (AME2020)
     const found = calc.times('1.000002').toFixed(6); // 2 ppm above
     const c = candidateFormulas({ mass: found, ppm: 5, elements: 'C0-20 H0-40 O0-10' }).candidates.find((x) => x.formula === 'C6H12O6')!;
     expect(c.ppm).toBeGreaterThan(1.9);
@@ -97,7 +97,7 @@ describe('candidates: the error sign and the score', () => {
 
   it('ranks by the score, with found percents narrowing the list', () => {
     // C20H25N3O and its found values as in the README example (invented data for a demo)
-    const mass = formulaMass('C20H25N3O').monoisotopicMass.toFixed(4);
+    const mass = formulaMassDetail('C20H25N3O').monoisotopicMass.toFixed(4);
     const r = candidateFormulas({ mass, ppm: 5, found: 'C=74.27,H=7.79,N=12.99' });
     expect(formulas(r)[0]).toBe('C20H25N3O');
     const scores = r.candidates.map((c) => c.score);
@@ -150,7 +150,7 @@ describe('candidates: numbers are the exact decimals', () => {
       return `C${c}H${hh}${n ? `N${n}` : ''}${o ? `O${o}` : ''}${s ? 'S' : ''}`;
     })
     .filter((f) => {
-      const m = formulaMass(f);
+      const m = formulaMassDetail(f);
       const count = (el: string) => Number(m.atoms.get(el) ?? 0);
       const c = count('C');
       return count('H') <= 2 * c + count('N') + 2 && count('H') / c <= 3.1 && count('O') / c <= 1.2 && count('N') / c <= 1.3;
@@ -159,7 +159,7 @@ describe('candidates: numbers are the exact decimals', () => {
   it('property: a formula\'s own monoisotopic mass always returns it among the candidates', () => {
     fc.assert(
       fc.property(formulaArb, (f) => {
-        const m = formulaMass(f);
+        const m = formulaMassDetail(f);
         const r = candidateFormulas({ mass: m.monoisotopicMass.toFixed(6), ppm: 1, limit: 1000, elements: 'C0-30 H0-70 N0-4 O0-8 S0-1' });
         return formulas(r).includes(m.formula);
       }),
@@ -170,11 +170,11 @@ describe('candidates: numbers are the exact decimals', () => {
   it('property: every mass in the JSON is the shortest double of the exact decimal sum', () => {
     fc.assert(
       fc.property(formulaArb, (f) => {
-        const m = formulaMass(f);
+        const m = formulaMassDetail(f);
         const r = candidateFormulas({ mass: m.monoisotopicMass.toFixed(6), ppm: 1, limit: 1000, elements: 'C0-30 H0-70 N0-4 O0-8 S0-1' });
         const j = JSON.parse(JSON.stringify(candidatesJson(r)));
         return j.candidates.every((c: { formula: string; molarMass: number; monoisotopicMass: number }) => {
-          const exact = formulaMass(c.formula);
+          const exact = formulaMassDetail(c.formula);
           return c.molarMass === Number(exact.molarMass.toFixed()) && c.monoisotopicMass === Number(exact.monoisotopicMass.toFixed());
         });
       }),
