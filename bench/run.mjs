@@ -148,4 +148,16 @@ rows.forEach(([label, , file, goal], j) => {
   console.log(`          ${label.padEnd(28)} ${f(median(times[j])).padStart(8)} ms for ${lines(file)} lines   ${ratio.toFixed(2)}× (goal ≤ ${goal}×)`);
 });
 console.log(`candidates  every CHNOPS+halogen formula within 5 ppm near 1,000 Da (default ranges): ${candidateRuns.map((c) => `${c.formula} ${f(c.ms)} ms (${c.n} fits)`).join('; ')} (goal < 1000 ms each)`);
+// isotope patterns (issue: the aggregated pattern of a protein-sized formula; a fine structure to 99.9 %)
+const lib = await import(`${root}dist/lib/index.js`);
+const timeLib = (f, n) => { const t = []; for (let i = 0; i < n; i++) { const t0 = process.hrtime.bigint(); f(); t.push(ms(t0)); } return median(t); };
+const aggMs = timeLib(() => lib.isotopePattern('C257H383N65O77S6'), quick ? 3 : 7);
+const fineMs = timeLib(() => lib.isotopePattern('C100H150N20O30S2', { kind: 'fine', coverage: 0.999 }), quick ? 3 : 7);
+console.log(`pattern   aggregated C257H383N65O77S6: ${f(aggMs)} ms; fine structure of C100H150N20O30S2 to 99.9 %: ${f(fineMs)} ms`);
+const { candidatesGrowth } = await import('./candidates-growth.mjs');
+let growthTable = '';
+for (const r of await candidatesGrowth({ quick })) {
+  if (r.table !== growthTable) console.log(`candidates  cost by ${(growthTable = r.table)}`);
+  console.log(`          ${r.label.padEnd(22)} ${f(r.ms).padStart(6)} ms   ${r.outcome}`);
+}
 console.log(`memory    peak ${peakSmall ? f(peakSmall) : 'n/a'} MB for 30,000 lines, ${peakBig ? f(peakBig) : 'n/a'} MB for 300,000 lines (mass --json)`);
