@@ -1,0 +1,186 @@
+// The JSON contract, checked: every command's `--json` rows validate against its schema in
+// schemas/<command>.schema.json (an ok row or an error row), over every example of the command's
+// --help, the other option variants, and at least one failing input per command.
+import { readdirSync, readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { Ajv2020, type ValidateFunction } from 'ajv/dist/2020.js';
+import { describe, expect, it } from 'vitest';
+import { HELP_EXAMPLES } from '../../src/cli/help-examples.js';
+import { PRESENTERS } from '../../src/cli/commands/registry.js';
+import { pondus } from '../cli/run-cli.js';
+
+const SCHEMAS = fileURLToPath(new URL('../../schemas/', import.meta.url));
+const ROOT = fileURLToPath(new URL('../../', import.meta.url));
+/** Commands that print no result rows (no --json). */
+const NO_ROWS = new Set(['help', 'completion', 'manual']);
+
+/** The words of a command line written with single quotes, as a POSIX shell splits them; stops at a redirection. */
+function shellWords(line: string): string[] {
+  const words: string[] = [];
+  let word: string | null = null;
+  for (let i = 0; i < line.length; i++) {
+    const c = line[i];
+    if (c === "'") {
+      const end = line.indexOf("'", i + 1);
+      word = (word ?? '') + line.slice(i + 1, end);
+      i = end;
+    } else if (c === ' ') {
+      if (word !== null) words.push(word);
+      word = null;
+    } else if ((c === '>' || c === '|' || c === '&') && word === null) {
+      break;
+    } else word = (word ?? '') + c;
+  }
+  if (word !== null) words.push(word);
+  return words;
+}
+
+const commandNames = (() => {
+  const help = pondus(['--help']).stdout;
+  const block = help.slice(help.indexOf('Commands:'));
+  return [...block.matchAll(/^ {2}([a-z][a-z-]*)/gm)].map((m) => m[1]).filter((n) => !NO_ROWS.has(n));
+})();
+
+const ajv = new Ajv2020({ allErrors: true, strict: true });
+ajv.addSchema(JSON.parse(readFileSync(`${SCHEMAS}common.schema.json`, 'utf8')));
+const validators = new Map<string, ValidateFunction>();
+function validatorOf(command: string): ValidateFunction {
+  let v = validators.get(command);
+  if (!v) {
+    v = ajv.compile(JSON.parse(readFileSync(`${SCHEMAS}${command}.schema.json`, 'utf8')));
+    validators.set(command, v);
+  }
+  return v;
+}
+
+/**
+ * Inputs beyond the --help examples: the option variants whose rows have another shape, and
+ * inputs that fail (each command at least one). Fields: the command line, and whether every row
+ * is an error row (true), an ok row (false), or a mix (null).
+ */
+const MORE: Record<string, [string, boolean | null][]> = {
+  mass: [["pondus mass XxQq 'H2O' 'C6H12O6.H2O'", null], ['pondus mass --uncertainty Tc', true]],
+  composition: [["pondus composition 'H2Q'", true], ["pondus composition --mixture 'C=7.34 g, Q=1 g'", true], ["pondus composition --mixture 'NaCl=5.00 g, KCl=3.00 g'", false]],
+  calc: [["pondus calc '5 g + 3 mL'", true], ["pondus calc '8.80 ± 0.05 g + 2.10 ± 0.05 g'", false]],
+  analysis: [['pondus analysis H2Q --found C=1', true], ['pondus analysis --sheet examples/ea-lab-sheet.csv', false]],
+  empirical: [['pondus empirical C=abc', true], ["pondus empirical 'C=40.0 H=6.7 O=53.3' --tolerance 1", false]],
+  combustion: [["pondus combustion 'x g' --co2 '1.499 g' --h2o '0.4091 g'", true]],
+  candidates: [['pondus candidates abc --ppm 3', true]],
+  balance: [["pondus balance 'H2 -> O2'", true]],
+  react: [["pondus react 'H2 + O2 -> H2O' --amount 'Q2=4.00 g'", true]],
+  reagents: [["pondus reagents --reference 'Qq=2.00 g' --product C9H8O4", true], ['pondus reagents --procedure examples/organolithium-coupling.csv', false]],
+  prepare: [
+    ["pondus prepare Qq --concentration '0.100 M' --volume '250.0 mL'", true],
+    ["pondus prepare NaCl --concentration '0.100 M' --volume '250.0 mL' --weighed '1.4587 g'", false],
+    ["pondus prepare HCl --fraction '37 %' --density '1.19 g/mL' --concentration '1.00 M' --volume '500.0 mL'", false],
+    ["pondus prepare 'CuSO4·5H2O' --replace 'CuSO4=10.00 g'", false],
+    ['pondus prepare --sheet examples/prep-sheet.csv', false],
+  ],
+  dilute: [
+    ["pondus dilute abc --to '0.100 M' --volume '250.0 mL'", true],
+    ["pondus dilute '1:1000' --series --volume '10.00 mL'", false],
+    ["pondus dilute '1.00 M' --to '1.00 mM' --series --volume '10.00 mL'", false],
+  ],
+  gravimetric: [['pondus gravimetric Qq --weighed Fe2O3', true]],
+  basis: [['pondus basis Qq --to P', true]],
+  salt: [["pondus salt Qq --parent C17H19NO3", true], ["pondus salt 'C17H19NO3·HCl·3H2O' --parent C17H19NO3 --salt-mass '12.0 mg'", false]],
+  titration: [
+    ["pondus titration Qq --sample '0.5000 g' --titrant '0.1000 M' --volume '24.40 mL'", true],
+    ["pondus titration KHC8H4O4 --sample '0.5000 g' --titrant '0.1000 M' --volume '24.40 mL' --limits 98.0-102.0", false],
+  ],
+  standardise: [["pondus standardise Qq --mass '0.5105 g' --volume '24.95 mL'", true]],
+  'sample-basis': [["pondus sample-basis abc --to dried --loss '0.50 %'", true], ["pondus sample-basis '99.1 %' --to dried --loss '0.50 %' --limits 98.0-102.0", false]],
+  replicates: [["pondus replicates '1.0 g'", true]],
+  meq: [["pondus meq Qq --meq '20 mEq'", true], ["pondus meq KCl --mass '1.00 g'", false]],
+  osmolarity: [["pondus osmolarity 'Qq=0.9 %'", true]],
+  alligation: [["pondus alligation '30 %' --higher '20 %' --lower '5 %' --total '300 g'", true]],
+  potency: [["pondus potency abc --need '500. mg'", true]],
+  strength: [['pondus strength abc', true]],
+  ion: [["pondus ion Qq --adduct '[M+H]+'", true], ["pondus ion C6H12O6 --adduct 'M+•'", false]],
+  pattern: [['pondus pattern Qq', true]],
+};
+
+/** The argument list of a command line, with --json (in place of a table or markdown format). */
+function jsonArgs(line: string): string[] {
+  const words = shellWords(line).slice(1).filter((w) => w !== '--markdown').map((w) => (w.startsWith('examples/') ? ROOT + w : w));
+  if (!words.includes('--json')) words.splice(1, 0, '--json');
+  return words;
+}
+
+function runRows(line: string) {
+  const r = pondus(jsonArgs(line));
+  const rows = r.stdout.trim() === '' ? [] : r.stdout.trim().split('\n').map((l) => JSON.parse(l) as Record<string, unknown>);
+  return { ...r, rows };
+}
+
+describe('every command has a JSON schema', () => {
+  it('the list of commands is read from the help', () => {
+    expect(commandNames.length).toBeGreaterThanOrEqual(25);
+  });
+  it('each command in the help and each registered presenter has schemas/<command>.schema.json', () => {
+    const files = new Set(readdirSync(SCHEMAS));
+    const missing = [...new Set([...commandNames, ...Object.keys(PRESENTERS)])].filter((c) => !files.has(`${c}.schema.json`));
+    expect(missing).toEqual([]);
+  });
+  it('no schema for a command that does not exist', () => {
+    const extra = readdirSync(SCHEMAS).filter((f) => f !== 'common.schema.json').map((f) => f.replace(/\.schema\.json$/, '')).filter((c) => !commandNames.includes(c));
+    expect(extra).toEqual([]);
+  });
+  it('each schema compiles under draft 2020-12 in strict mode', () => {
+    for (const c of commandNames) expect(() => validatorOf(c), c).not.toThrow();
+  });
+  it('the schemas ship with the package', () => {
+    const pkg = JSON.parse(readFileSync(`${ROOT}package.json`, 'utf8')) as { files: string[] };
+    expect(pkg.files).toContain('schemas');
+  });
+  it('every command has inputs to check here, a failing one among them', () => {
+    for (const c of commandNames) {
+      expect(HELP_EXAMPLES[c]?.length, c).toBeGreaterThan(0);
+      expect(MORE[c]?.some(([, err]) => err !== false), c).toBe(true);
+    }
+  });
+});
+
+describe('the schemas reject rows that break the contract', () => {
+  const good = { line: 1, input: 'H2O', formula: 'H2O', molarMass: 18.015, monoisotopicMass: 18.010564683056, nominalMass: 18, charge: 0, notes: [] };
+  const v = () => validatorOf('mass');
+  it('accepts a good row and an error row', () => {
+    expect(v()(good)).toBe(true);
+    expect(v()({ line: 2, input: 'Qq', error: { code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Qq'", column: 1 } })).toBe(true);
+  });
+  it.each([
+    ['notes missing', { ...good, notes: undefined }],
+    ['notes as strings', { ...good, notes: ['read as cobalt'] }],
+    ['a note without its code', { ...good, notes: [{ message: 'read as cobalt' }] }],
+    ['input missing', { ...good, input: undefined }],
+    ['line missing', { ...good, line: undefined }],
+    ['line 0', { ...good, line: 0 }],
+    ['a null where a number belongs', { ...good, molarMass: null }],
+    ['an error row without a code', { line: 1, input: 'Qq', error: { message: 'unknown', column: 1 } }],
+  ])('refuses %s', (_, row) => {
+    expect(v()(JSON.parse(JSON.stringify(row)))).toBe(false);
+  });
+});
+
+describe.each(commandNames)('%s --json rows validate against the command schema', (command) => {
+  const cases: [string, boolean | null][] = [...(HELP_EXAMPLES[command] ?? []).map((e): [string, boolean | null] => [e, false]), ...(MORE[command] ?? [])];
+  it.each(cases)('%s', (line, errors) => {
+    const { status, rows, stderr } = runRows(line);
+    expect(status, stderr).toBe(errors === true ? 1 : errors === false ? 0 : 1);
+    expect(rows.length).toBeGreaterThan(0);
+    const validate = validatorOf(command);
+    rows.forEach((row, i) => {
+      const ok = validate(row);
+      expect(ok ? [] : validate.errors, `row ${i + 1}: ${JSON.stringify(row).slice(0, 300)}`).toEqual([]);
+      // one row per input, in order: argument i is line i; a sheet row keeps its line in the file
+      if (i > 0) expect(row.line as number).toBeGreaterThan(rows[i - 1].line as number);
+      if (!/--(sheet|procedure)/.test(line)) expect(row.line).toBe(i + 1);
+      if (errors === true) expect(row).toHaveProperty('error');
+      if (errors === false) expect(row).not.toHaveProperty('error');
+    });
+    if (errors === null) {
+      expect(rows.some((r) => 'error' in r)).toBe(true);
+      expect(rows.some((r) => !('error' in r))).toBe(true);
+    }
+  });
+});
