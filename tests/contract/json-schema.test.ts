@@ -75,7 +75,7 @@ const measSheet = sheet('measurements.csv', 'id,C,H,O\nS1,40.00,6.71,53.29\nS2,a
 const MORE: Record<string, [string, boolean | null, string?][]> = {
   mass: [["pondus mass XxQq 'H2O' 'C6H12O6.H2O'", null], ['pondus mass --uncertainty Tc', true], ["pondus mass 'CaSO4·0.5H2O' C6D6 '[2H]2O' 'Pd(PPh3)4'", false], ['pondus mass -', null, 'H2O\nCo2\nAcOH\nNH4+\n\nMe3SiCl\n']],
   composition: [["pondus composition 'H2Q'", true], ["pondus composition --mixture 'C=7.34 g, Q=1 g'", true], ["pondus composition --mixture 'NaCl=5.00 g, KCl=3.00 g'", false], ["pondus composition --mixture 'C=7.34 g, H=1.85 g, total=12.50 g'", false], ["pondus composition --part H2O 'CaSO4·0.5H2O'", false]],
-  calc: [["pondus calc '5 g + 3 mL'", true], ['pondus calc -', null, '1/0\n2 g * 3\n10.0 g - 9.95 g\n1300 g * 2\n'], ["pondus calc '8.80 ± 0.05 g + 2.10 ± 0.05 g'", false]],
+  calc: [["pondus calc '5 g + 3 mL'", true], ['pondus calc -', null, '1/0\n2 g * 3\n10.0 g - 9.95 g\n1300 g * 2\n'], ["pondus calc '8.80 ± 0.05 g + 2.10 ± 0.05 g'", false], ["pondus calc --explain --rounding half-up 'M(H2O) * 2'", false]],
   analysis: [['pondus analysis H2Q --found C=1', true], ['pondus analysis --sheet examples/ea-lab-sheet.csv', false], [`pondus analysis --sheet ${eaSheet}`, null]],
   empirical: [['pondus empirical C=abc', true], ["pondus empirical 'C=40.0 H=6.7 O=53.3' --tolerance 1", false], [`pondus empirical --sheet ${measSheet}`, null]],
   combustion: [["pondus combustion 'x g' --co2 '1.499 g' --h2o '0.4091 g'", true]],
@@ -98,9 +98,10 @@ const MORE: Record<string, [string, boolean | null, string?][]> = {
   ],
   gravimetric: [['pondus gravimetric Qq --weighed Fe2O3', true]],
   basis: [['pondus basis Qq --to P', true]],
-  salt: [["pondus salt Qq --parent C17H19NO3", true], ["pondus salt 'C17H19NO3·HCl·3H2O' --parent C17H19NO3 --salt-mass '12.0 mg'", false]],
+  salt: [["pondus salt Qq --parent C17H19NO3", true], ['pondus salt C7H5NaO2 --parent C7H6O2', false], ["pondus salt 'C17H19NO3·HCl·3H2O' --parent C17H19NO3 --salt-mass '12.0 mg'", false]],
   titration: [
     ["pondus titration KHC8H4O4 --sample '0.5000 g' --titrant '0.1000 M' --volume '24.40 mL' --on dried --loss '0.5 %'", false],
+    ["pondus titration C9H8O4 --sample '1.000 g' --titrant '0.5000 M' --volume '20.00 mL' --added '50.00 mL of 0.5000 M' --ratio 1:2", false],
     ["pondus titration Qq --sample '0.5000 g' --titrant '0.1000 M' --volume '24.40 mL'", true],
     ["pondus titration KHC8H4O4 --sample '0.5000 g' --titrant '0.1000 M' --volume '24.40 mL' --limits 98.0-102.0", false],
   ],
