@@ -40,6 +40,8 @@ export interface CombustionResult {
   elements: { symbol: string; mass: Quantity; percent: Quantity; byDifference: boolean }[];
   /** The empirical formula, or null when none fits within the precision of the data (a note says so). */
   empirical: string | null;
+  /** The empirical formula in Hill order. */
+  hill: string | null;
   fit: FormulaFit | null;
   alternatives: FormulaFit[];
   notes: Note[];
@@ -93,9 +95,9 @@ export function combustion(options: CombustionOptions): CombustionResult {
   } catch (e) {
     if (!(e instanceof PondusError) || e.first.code !== 'NO_FORMULA_FITS') throw e;
     notes.push({ code: 'NO_FORMULA_FITS', message: e.first.message });
-    return { input: options.sample, sample, elements, empirical: null, fit: null, alternatives: [], notes };
+    return { input: options.sample, sample, elements, empirical: null, hill: null, fit: null, alternatives: [], notes };
   }
-  return { input: options.sample, sample, elements, empirical: s.best.formula, fit: s.best, alternatives: s.alternatives, notes };
+  return { input: options.sample, sample, elements, empirical: s.best.formula, hill: s.best.hill, fit: s.best, alternatives: s.alternatives, notes };
 }
 
 /** Non-throwing {@link combustion}. */

@@ -16,6 +16,7 @@ import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/fo
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
 import { sameDims, unitOf } from '../sigfig/units.js';
+import { speciesText } from './species.js';
 
 export interface SubstituteResult {
   /** The form in hand. */
@@ -91,7 +92,7 @@ export function substituteForm(use: string, instead: string, amount: string, opt
   const a = core(u, options);
   const b = core(i, options);
   const same = a.size === b.size && [...a].every(([k, v]) => b.get(k) === v);
-  if (!same) notes.push({ code: 'FORMS_DIFFER', message: `${u.formula} and ${i.formula} differ by more than water of crystallisation; the substitution keeps equal amounts of formula units` });
+  if (!same) notes.push({ code: 'FORMS_DIFFER', message: `${speciesText(u)} and ${speciesText(i)} differ by more than water of crystallisation; the substitution keeps equal amounts of formula units` });
   notes.unshift(...formulaNotes(u, true), ...formulaNotes(i, true));
   return { use: u, instead: i, asked, moles, purity, pureMass, mass, notes };
 }

@@ -114,6 +114,7 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
       sample: displayQuantity(r.sample, 'g', rounding).text,
       elements: r.elements.map((e) => ({ symbol: e.symbol, mass: displayQuantity(e.mass, 'g', rounding).value.toNumber(), massDisplay: displayQuantity(e.mass, 'g', rounding).text, percent: e.percent.value.toNumber(), percentDisplay: displayQuantity(e.percent, undefined, rounding).figure, byDifference: e.byDifference })),
       empirical: r.empirical,
+      hill: r.hill,
       residuals: r.fit ? { ...r.fit.residuals } : null,
       alternatives: r.alternatives.map((a) => a.formula),
       notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
