@@ -3,7 +3,7 @@ import { errorCode } from '../support/error-code.js';
 import { describe, expect, it } from 'vitest';
 import { candidateFormulas, rdbe } from '../../src/empirical/candidates.js';
 import { combustion } from '../../src/empirical/combustion.js';
-import { empirical, safeEmpirical } from '../../src/empirical/empirical-formula.js';
+import { empirical, empiricalJson, safeEmpirical } from '../../src/empirical/empirical-formula.js';
 import { plausible } from '../../src/empirical/formula-search.js';
 import { composition } from '../../src/composition/element-shares.js';
 import { formulaMassDetail } from '../../src/mass/formula-mass.js';
@@ -33,8 +33,20 @@ describe('empirical formula from measurements', () => {
       const c = composition(f);
       // percents computed exactly and rounded: limits at the data's own precision (--tolerance 0.01)
       const r = empirical(c.elements.map((e) => `${e.symbol}=${e.massPercent.toFixed(2)}`).join(' '), { tolerance: 0.01 });
-      expect(r.empirical).toBe(c.formula);
+      expect(r.hill).toBe(c.formula);
+      // with carbon the written form is the Hill formula; without, IUPAC's electronegativity order
+      if (/^C\d/.test(f)) expect(r.empirical).toBe(c.formula);
     }
+    // source: IUPAC Red Book 2005 IR-4.4.2.1 (electronegativity order), H after the metals, before the non-metals, as in NaHCO3 (common practice)
+    expect(empirical('Na=12.06 B=11.34 H=5.29 O=71.32', { tolerance: 0.01 }).empirical).toBe('Na2H20B4O17');
+  });
+
+  it('writes an inorganic empirical formula in electronegativity order, with the Hill formula beside it', () => {
+    // source: IUPAC Red Book 2005 IR-4.4.2.1; CuCl2 percents computed from CIAAW weights (Cu 47.27, Cl 52.73)
+    const r = empirical('Cu=47.27 Cl=52.73');
+    expect(r.empirical).toBe('CuCl2');
+    expect(r.hill).toBe('Cl2Cu');
+    expect(empiricalJson(r)).toMatchObject({ empirical: 'CuCl2', hill: 'Cl2Cu' });
   });
 
   it('says when the molar mass is not a near-whole multiple, and handles a range', () => {
