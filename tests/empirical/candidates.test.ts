@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { candidateFormulas, candidateScore, RATIO_RANGES, rdbe, readRanges, safeCandidateFormulas } from '../../src/empirical/candidates.js';
 import { candidatesJson } from '../../src/empirical/candidates-json.js';
-import { ionMass } from '../../src/ions/ion-mass.js';
+import { ionMassDetail as ionMass } from '../../src/ions/ion-mass.js';
 import { formulaMassDetail as formulaMass } from '../../src/mass/formula-mass.js';
 
 const formulas = (r: ReturnType<typeof candidateFormulas>) => r.candidates.map((c) => c.formula);

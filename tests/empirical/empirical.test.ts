@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { errorCode } from '../support/error-code.js';
 import { describe, expect, it } from 'vitest';
 import { candidateFormulas, rdbe } from '../../src/empirical/candidates.js';
-import { combustion } from '../../src/empirical/combustion.js';
+import { combustion, combustionDetail } from '../../src/empirical/combustion.js';
 import { empirical, empiricalJson, safeEmpirical } from '../../src/empirical/empirical-formula.js';
 import { plausible } from '../../src/empirical/formula-search.js';
 import { composition } from '../../src/composition/element-shares.js';
@@ -98,11 +98,24 @@ describe('combustion analysis', () => {
     // ascorbic acid, C3H4O3: OpenStax Chemistry 2e §3.4, from memory
     const r = combustion({ sample: '1.000 g', collected: { co2: '1.499 g', h2o: '0.4091 g' } });
     expect(r.empirical).toBe('C3H4O3');
-    expect(r.elements.map((e) => [e.symbol, displayQuantity(e.percent).figure, e.byDifference])).toEqual([
+    expect(r.elements.map((e) => [e.symbol, e.percentFigure, e.byDifference])).toEqual([
       ['C', '40.91', false],
       ['H', '4.578', false],
       ['O', '54.5', true],
     ]);
+    expect(r.sample).toBe('1.000 g');
+    expect(r.elements[0].massDisplay).toBe('0.4091 g');
+    // the exact figures of the detail form, as text
+    const d = combustionDetail({ sample: '1.000 g', collected: { co2: '1.499 g', h2o: '0.4091 g' } });
+    expect(r.elements[0].percentExact).toBe(d.elements[0].percent.value.toFixed());
+    expect(displayQuantity(d.elements[0].percent).figure).toBe('40.91');
+  });
+
+  it('is plain data: JSON and structuredClone keep everything', () => {
+    const r = combustion({ sample: '1.000 g', collected: { co2: '1.499 g', h2o: '0.4091 g' } });
+    expect(JSON.parse(JSON.stringify(r))).toEqual(r);
+    expect(structuredClone(r)).toEqual(r);
+    expect(typeof r.elements[0].mass).toBe('number');
   });
 
   it('nitrogen, sulfur and chlorine from their products', () => {
