@@ -22,7 +22,7 @@
  *   dropped while ratios apply.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { getAtomData } from '../elements/atom-data.js';
 import { isElementSymbol } from '../elements/element-table.js';
 import { ELECTRON_MASS } from '../elements/constants.js';
@@ -720,14 +720,3 @@ function describe(o: CandidateOptions): string {
   if (o.pattern) parts.push('measured pattern');
   return parts.join(', ');
 }
-
-/**
- * Non-throwing {@link candidateFormulas}.
- *
- * @example
- * safeCandidateFormulas({ mass: '180.06339', ppm: 3, elements: 'C0-20 H0-40 O0-10' }).success // true
- */
-export function safeCandidateFormulas(options: CandidateOptions): SafeResult<CandidateResult> {
-  return toSafe(() => candidateFormulas(options));
-}
-

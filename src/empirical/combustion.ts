@@ -5,7 +5,7 @@
  * figures, and the empirical formula.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail, PondusError } from '../errors/pondus-error.js';
 import { Decimal } from '../exact/decimal.js';
 import { MASS, measureAs } from '../calc/measure.js';
 import { conversionFactor } from '../preparation/conversion-factor.js';
@@ -189,9 +189,4 @@ export function combustionDetail(options: CombustionOptions): CombustionDetail {
     return { input: options.sample, sample, elements, empirical: null, hill: null, fit: null, alternatives: [], notes };
   }
   return { input: options.sample, sample, elements, empirical: s.best.formula, hill: s.best.hill, fit: s.best, alternatives: s.alternatives, notes };
-}
-
-/** Non-throwing {@link combustion}. */
-export function safeCombustion(options: CombustionOptions): SafeResult<CombustionResult> {
-  return toSafe(() => combustion(options));
 }

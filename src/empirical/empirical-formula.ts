@@ -2,7 +2,7 @@
  * Empirical and molecular formulas from measurements.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { formulaMassDetail } from '../mass/formula-mass.js';
 import { readMeasurements } from './measurements.js';
 import { DEFAULT_TOLERANCE, prepareData, searchFormula, searchMolecular, type FormulaFit } from './formula-search.js';
@@ -162,11 +162,6 @@ export function empirical(input: string, options: EmpiricalOptions = {}): Empiri
   };
 }
 
-/** Non-throwing {@link empirical}. */
-export function safeEmpirical(input: string, options: EmpiricalOptions = {}): SafeResult<EmpiricalResult> {
-  return toSafe(() => empirical(input, options));
-}
-
 /**
  * The JSON object `pondus empirical --json` writes (contract keys `empirical`, `molecular`).
  *
@@ -192,4 +187,3 @@ export function empiricalJson(r: EmpiricalResult) {
     ...(r.conversions.length ? { conversions: r.conversions.map((c) => ({ ...c, elements: { ...c.elements } })) } : {}),
   };
 }
-

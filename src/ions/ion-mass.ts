@@ -4,7 +4,7 @@
  * Monoisotopic masses are AME2020 masses of the principal isotopes, as for `mass`.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { ELECTRON_MASS } from '../elements/constants.js';
 import { getAtomData } from '../elements/atom-data.js';
 import { Decimal } from '../exact/decimal.js';
@@ -293,16 +293,6 @@ export function plainIon(d: IonDetail): IonResult {
     ionisation: d.ionisation,
     notes: d.notes,
   };
-}
-
-/**
- * Non-throwing {@link ionMass}.
- *
- * @example
- * safeIonMass('C6H6', '[M+Q]+').success // false
- */
-export function safeIonMass(formula: string | null, ion: string | null, options: IonOptions = {}): SafeResult<IonResult> {
-  return toSafe(() => ionMass(formula, ion, options));
 }
 
 /** n·M plus and minus the terms; a term taking away more atoms than there are is refused. */

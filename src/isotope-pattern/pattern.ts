@@ -5,7 +5,7 @@
  * accounted for; labelled atoms ([13C], D) count as their single nuclide.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { ELECTRON_MASS } from '../elements/constants.js';
 import type { Decimal } from '../exact/decimal.js';
 import { isWhole } from '../formula/amount.js';
@@ -194,14 +194,4 @@ export function isotopePattern(formula: string | null, options: PatternOptions =
     minRelative,
     notes,
   };
-}
-
-/**
- * Non-throwing {@link isotopePattern}.
- *
- * @example
- * safeIsotopePattern('C6H6', { ion: '[M+Q]+' }).success // false
- */
-export function safeIsotopePattern(formula: string | null, options: PatternOptions = {}): SafeResult<PatternResult> {
-  return toSafe(() => isotopePattern(formula, options));
 }

@@ -5,7 +5,7 @@
  */
 import { formulaNotes } from '../mass/formula-notes.js';
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type Instruction } from '../sigfig/instruction.js';
 import { smallMassWarning } from './warnings.js';
 import { MASS, measureAs } from '../calc/measure.js';
@@ -191,9 +191,4 @@ function metalSaltReadings(salt: MassDetail, parent: MassDetail): MetalSaltReadi
     }
   }
   return out;
-}
-
-/** Non-throwing {@link saltFactor}. */
-export function safeSaltFactor(salt: string, parent: string, options: SaltOptions = {}): SafeResult<SaltFactorResult> {
-  return toSafe(() => saltFactor(salt, parent, options));
 }

@@ -6,7 +6,7 @@
  */
 import { formulaNotes } from '../mass/formula-notes.js';
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { MASS, MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
 import { Decimal } from '../exact/decimal.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type InputFigures, type Instruction } from '../sigfig/instruction.js';
@@ -238,8 +238,4 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   const unit = target?.unit ?? 'M';
   notes.unshift(...formulaNotes(reagent, options.as !== undefined), ...(asMass ? formulaNotes(asMass, true) : []));
   return { reagent, target: { formula: targetFormula, perReagent: toDecimal(perReagent.value).toFixed(), molarMass: targetM }, concentration: conc, volume, purity, purityBasis: basis, targetMoles, moles, pureMass, mass, weighed, made, unit, notes };
-}
-/** Non-throwing {@link prepareSolution}. */
-export function safePrepareSolution(reagent: string, options: SolutionOptions): SafeResult<SolutionResult> {
-  return toSafe(() => prepareSolution(reagent, options));
 }

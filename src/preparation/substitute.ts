@@ -5,7 +5,7 @@
  */
 import { formulaNotes } from '../mass/formula-notes.js';
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { AMOUNT, MASS, measureAs } from '../calc/measure.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type InputFigures, type Instruction } from '../sigfig/instruction.js';
 import { readPurity } from './purity.js';
@@ -95,9 +95,4 @@ export function substituteForm(use: string, instead: string, amount: string, opt
   if (!same) notes.push({ code: 'FORMS_DIFFER', message: `${speciesText(u)} and ${speciesText(i)} differ by more than water of crystallisation; the substitution keeps equal amounts of formula units` });
   notes.unshift(...formulaNotes(u, true), ...formulaNotes(i, true));
   return { use: u, instead: i, asked, moles, purity, pureMass, mass, notes };
-}
-
-/** Non-throwing {@link substituteForm}. */
-export function safeSubstituteForm(use: string, instead: string, amount: string, options: SubstituteOptions = {}): SafeResult<SubstituteResult> {
-  return toSafe(() => substituteForm(use, instead, amount, options));
 }

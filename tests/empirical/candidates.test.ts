@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { candidateFormulas, candidateScore, RATIO_RANGES, rdbe, readRanges, safeCandidateFormulas } from '../../src/empirical/candidates.js';
+import { candidateFormulas, candidateScore, RATIO_RANGES, rdbe, readRanges } from '../../src/empirical/candidates.js';
+import { safeCandidateFormulas } from '../../src/index.js';
 import { candidatesJson } from '../../src/empirical/candidates-json.js';
 import { ionMassDetail as ionMass } from '../../src/ions/ion-mass.js';
 import { formulaMassDetail as formulaMass } from '../../src/mass/formula-mass.js';
