@@ -46,7 +46,8 @@ export type PurityBasis = 'reagent' | 'part';
 export interface SolutionResult {
   reagent: MassDetail;
   /** What the concentration counts, and how many of it one formula unit of reagent holds. */
-  target: { formula: string; perReagent: string; molarMass: Quantity };
+  /** The species the concentration is of: its Hill formula, as written (normalised), units per formula unit of reagent, molar mass. */
+  target: { formula: string; written: string; perReagent: string; molarMass: Quantity };
   /** The target concentration (null when only the mass weighed was given). */
   concentration: Quantity | null;
   volume: Quantity;
@@ -237,5 +238,5 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   }
   const unit = target?.unit ?? 'M';
   notes.unshift(...formulaNotes(reagent, options.as !== undefined), ...(asMass ? formulaNotes(asMass, true) : []));
-  return { reagent, target: { formula: targetFormula, perReagent: toDecimal(perReagent.value).toFixed(), molarMass: targetM }, concentration: conc, volume, purity, purityBasis: basis, targetMoles, moles, pureMass, mass, weighed, made, unit, notes };
+  return { reagent, target: { formula: targetFormula, written: targetName.trim().replace(/\s+/g, ' '), perReagent: toDecimal(perReagent.value).toFixed(), molarMass: targetM }, concentration: conc, volume, purity, purityBasis: basis, targetMoles, moles, pureMass, mass, weighed, made, unit, notes };
 }

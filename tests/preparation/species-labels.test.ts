@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { jsonLines, pondus } from '../cli/run-cli.js';
 import { conversionFactor } from '../../src/preparation/conversion-factor.js';
-import { speciesText } from '../../src/preparation/species.js';
+import { hillAside, speciesText } from '../../src/preparation/species.js';
 import { errorCode } from '../support/error-code.js';
 
 // Prose and labels name a species as the user wrote it; the Hill formula is a field of its own.
@@ -42,5 +42,23 @@ describe('species named as written, the Hill formula beside', () => {
   it('salt: salt and parent as written, Hill beside', () => {
     const [row] = jsonLines(pondus(['salt', 'C14H13NaO3', '--parent', 'C14H14O3', '--json']).stdout);
     expect(row).toMatchObject({ salt: 'C14H13NaO3', parent: 'C14H14O3', saltHill: 'C14H13NaO3', parentHill: 'C14H14O3' });
+  });
+});
+
+describe('prepare names the species the concentration is of as written', () => {
+  it('a phosphate target is PO4 in the prose and the JSON, O4P only in targetHill', () => {
+    const table = pondus(['prepare', 'Na3PO4', '--as', 'PO4', '--concentration', '0.100 M', '--volume', '250.0 mL']).stdout;
+    expect(table).toContain('target: 0.100 M of PO4 (1 per formula unit) in 250.0 mL');
+    expect(table).not.toContain('O4P');
+    expect(table).not.toContain('Na3O4P');
+    const [row] = jsonLines(pondus(['prepare', 'Na3PO4', '--as', 'PO4', '--concentration', '0.100 M', '--volume', '250.0 mL', '--json']).stdout);
+    expect(row).toMatchObject({ input: 'Na3PO4', formula: 'Na3O4P', target: 'PO4', targetHill: 'O4P' });
+  });
+
+  it('an organic species written otherwise keeps its Hill formula beside it; an inorganic one does not', () => {
+    expect(hillAside({ input: 'CuCl2', formula: 'Cl2Cu', atoms: new Map([['Cu', 1], ['Cl', 2]]) })).toBe('');
+    expect(hillAside({ input: 'C6H12O6', formula: 'C6H12O6', atoms: new Map([['C', 6], ['H', 12], ['O', 6]]) })).toBe('');
+    expect(hillAside({ input: 'CH3COOH', formula: 'C2H4O2', atoms: new Map([['C', 2], ['H', 4], ['O', 2]]) })).toBe('C2H4O2, ');
+    expect(pondus(['prepare', 'CuCl2', '--concentration', '0.100 M', '--volume', '250.0 mL']).stdout.split('\n')[0]).toBe('CuCl2  (M = 134.45 g/mol)');
   });
 });

@@ -3,7 +3,7 @@
  * a target or a strength), `osmolarity` (mOsm/L and mEq/L of a solution of
  * salts) and `alligation` (two strengths mixed to a target).
  */
-import { speciesText } from '../../preparation/species.js';
+import { hillAside, speciesText } from '../../preparation/species.js';
 import type { Command } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
 import { alligation, type AlligationResult } from '../../pharmacy/alligation.js';
@@ -73,7 +73,7 @@ export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
         ? [input, line, speciesText(r.salt), quantityJson(r.moles, 'M', rounding).reported, quantityJson(r.equivalents, 'M', rounding).reported, quantityJson(r.equivalents, 'mM', rounding).reported, quantityJson(r.osmoles, 'mM', rounding).reported, r.salt.formula]
         : [input, line, speciesText(r.salt), quantityJson(r.mass!, 'g', rounding).reported, quantityJson(r.moles, 'mmol', rounding).reported, quantityJson(r.equivalents, 'mmol', rounding).reported, quantityJson(r.osmoles, 'mmol', rounding).reported, r.salt.formula],
     block: ({ input, r }) => {
-      const head = `${input}  (M = ${displayMolarMass(r.salt)} g/mol): 1 mmol = ${r.ions.equivalentsPerMole} mEq = ${r.ions.particles} mOsm`;
+      const head = `${input}  (${hillAside(r.salt)}M = ${displayMolarMass(r.salt)} g/mol): 1 mmol = ${r.ions.equivalentsPerMole} mEq = ${r.ions.particles} mOsm`;
       const ions = r.perIon.map((i) => `${i.ion} ${strength ? qtext(i.equivalents, 'mM', rounding, 'mEq/L') : qtext(i.equivalents, 'mmol', rounding, 'mEq')}`).join(', ');
       if (r.mode === 'strength') {
         return [head, `  ${o.concentration}: ${qtext(r.moles, 'M', rounding, 'mmol/mL')}, ${qtext(r.equivalents, 'M', rounding, 'mEq/mL')} (${qtext(r.equivalents, 'mM', rounding, 'mEq/L')}), ${qtext(r.osmoles, 'mM', rounding, 'mOsm/L')}`, `  by ion: ${ions}`].join('\n');
