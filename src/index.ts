@@ -285,7 +285,7 @@ import { empirical as empirical_, empiricalJson as empiricalJson_ } from './empi
 export const empirical = /* @__PURE__ */ guarded('empirical', empirical_, ['text', 'options?']);
 export const empiricalJson = /* @__PURE__ */ guarded('empiricalJson', empiricalJson_, ['object']);
 export const safeEmpirical = /* @__PURE__ */ safely(empirical);
-export { PRODUCTS, type CombustionResult, type CombustionOptions } from './empirical/combustion.js';
+export { PRODUCTS, type CombustionResult, type CombustionOptions, type CombustionElement } from './empirical/combustion.js';
 import { combustion as combustion_ } from './empirical/combustion.js';
 export const combustion = /* @__PURE__ */ guarded('combustion', combustion_, ['options']);
 export const safeCombustion = /* @__PURE__ */ safely(combustion);
@@ -385,7 +385,7 @@ import { readIonNotation as readIonNotation_, isIonNotation as isIonNotation_ } 
 export const readIonNotation = /* @__PURE__ */ guarded('readIonNotation', readIonNotation_, ['text']);
 export const isIonNotation = /* @__PURE__ */ guarded('isIonNotation', isIonNotation_, ['text']);
 export type { IonNotation, IonTerm } from './ions/ion-notation.js';
-export { type IonResult, type IonOptions } from './ions/ion-mass.js';
+export { type IonResult, type IonOptions, type IonError } from './ions/ion-mass.js';
 import { ionMass as ionMass_ } from './ions/ion-mass.js';
 export const ionMass = /* @__PURE__ */ guarded('ionMass', ionMass_, ['tree|null', 'notation|null', 'options?']);
 export const safeIonMass = /* @__PURE__ */ safely(ionMass);

@@ -11,7 +11,7 @@
  * instead, and the verdict follows those reported values.
  */
 import { Decimal } from '../exact/decimal.js';
-import { fail, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail, PondusError } from '../errors/pondus-error.js';
 import type { Note } from '../errors/issue.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { hillOrder } from '../formula/hill.js';
@@ -192,16 +192,6 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
     continuous,
     notes,
   };
-}
-
-/**
- * Non-throwing {@link analysis}.
- *
- * @example
- * safeAnalysis('C6H6', 'C=92.26,Cl=1.00').success // false
- */
-export function safeAnalysis(formula: string, foundText: string, options: AnalysisOptions = {}): SafeResult<AnalysisResult> {
-  return toSafe(() => analysis(formula, foundText, options));
 }
 
 function decimalsOf(written: string): number {

@@ -8,7 +8,7 @@
  * place. No outlier test is offered: none is applied, and none is implied.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { measureAs } from '../calc/measure.js';
 import { Decimal } from '../exact/decimal.js';
 import { dividedBy, exact, sumMeasured, type Measured } from '../sigfig/measured.js';
@@ -149,14 +149,4 @@ export function replicates(text: string, o: ReplicateOptions = {}): ReplicateRes
   const halfWidthReported = halfWidthRounded.toFixed(decimals);
   const reported = `${meanReported} ± ${halfWidthReported}${u}`;
   return { values, unit, exp10, n, mean, sd, rsdPercent, level, df, t, halfWidth, halfWidthRounded, meanRounded, reported, meanReported, halfWidthReported, rounding, notes };
-}
-
-/**
- * {@link replicates} without throwing.
- *
- * @example
- * safeReplicates('99.2').success // false (one value)
- */
-export function safeReplicates(text: string, o: ReplicateOptions = {}): SafeResult<ReplicateResult> {
-  return toSafe(() => replicates(text, o));
 }

@@ -7,7 +7,7 @@
  * difference 1 − r keeps the decimals of r (OpenStax Chemistry 2e §1.5).
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { PURE } from '../calc/measure.js';
 import { exact } from '../sigfig/measured.js';
 import { displayQuantity } from '../sigfig/display-quantity.js';
@@ -108,14 +108,4 @@ export function convertSampleBasis(valueText: string | Quantity, from: SampleBas
   notes.push({ code: 'BASIS_CONVERTED', message: `from the ${removed(from, rFrom)} to the ${removed(to, rTo)} basis: × ${rFrom ? `(100 % − ${pct(rFrom)})` : '100 %'} ÷ ${rTo ? `(100 % − ${pct(rTo)})` : '100 %'}` });
   if (converted.value.gt(1)) notes.push({ code: 'ABOVE_100_PERCENT', message: `the result on the ${NAMES[to]} basis is above 100 % (${pct(converted)}); this is possible for an assay within its method's uncertainty` });
   return { from, to, value, converted, factor, notes };
-}
-
-/**
- * {@link convertSampleBasis} without throwing.
- *
- * @example
- * safeConvertSampleBasis('99.1 %', 'as-is', 'dried', {}).success // false (no loss on drying given)
- */
-export function safeConvertSampleBasis(valueText: string, from: SampleBasis, to: SampleBasis, content: SampleContent): SafeResult<BasisConversion> {
-  return toSafe(() => convertSampleBasis(valueText, from, to, content));
 }

@@ -6,7 +6,7 @@
  * it keeps their significant figures.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { MASS, PURE, VOLUME } from '../calc/measure.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
@@ -82,14 +82,4 @@ export function standardise(standardText: string, o: StandardiseOptions): Standa
   const moles = divide(pure, quantity(reportedMolarMass(standard), unitOf('g/mol')));
   const molarity = divide(divide(moles, ratio.factor), netTitre);
   return { standard, mass, purity, titre, blank, netTitre, ratio, moles, molarity, notes };
-}
-
-/**
- * {@link standardise} without throwing.
- *
- * @example
- * safeStandardise('Na2CO3', { mass: '0.2500 g', volume: '23.40 mL', ratio: '1:2' }).success // true
- */
-export function safeStandardise(standardText: string, o: StandardiseOptions): SafeResult<StandardiseResult> {
-  return toSafe(() => standardise(standardText, o));
 }

@@ -8,7 +8,7 @@
  * the fewest decimals, the products and quotient the fewest figures.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { AMOUNT, MASS, MOLARITY, VOLUME } from '../calc/measure.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
@@ -122,14 +122,4 @@ export function titrationAssay(analyteText: string, o: TitrationAssayOptions): T
   const assay = divide(mass, sample);
   if (assay.value.gt(1.1)) notes.push({ code: 'ASSAY_ABOVE_100', message: `the assay comes to ${displayQuantity(assay, '%').text} of the sample: check the ratio, the molarity and the masses` });
   return { analyte, kind: back ? 'back' : 'direct', sample, titrant, titre, blank, netTitre, ratio, reagentRatio, added, moles, mass, assay, notes };
-}
-
-/**
- * {@link titrationAssay} without throwing.
- *
- * @example
- * safeTitrationAssay('KHC8H4O4', { sample: '0 g', titrant: '0.1 M', volume: '24 mL' }).success // false
- */
-export function safeTitrationAssay(analyteText: string, o: TitrationAssayOptions): SafeResult<TitrationAssayResult> {
-  return toSafe(() => titrationAssay(analyteText, o));
 }

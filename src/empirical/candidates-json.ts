@@ -14,10 +14,12 @@ export function candidatesJson(r: CandidateResult) {
     ratios: r.ratios,
     candidates: r.candidates.map((c) => ({
       formula: c.formula,
+      hill: c.hill,
       counts: { ...c.counts },
       monoisotopicMass: c.monoisotopicMass,
       molarMass: c.molarMass,
       ionFormula: c.ionFormula,
+      ionHill: c.ionHill,
       mz: c.mz,
       ppm: c.ppm,
       rdbe: c.rdbe,

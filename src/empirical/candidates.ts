@@ -22,13 +22,14 @@
  *   dropped while ratios apply.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { getAtomData } from '../elements/atom-data.js';
 import { isElementSymbol } from '../elements/element-table.js';
 import { ELECTRON_MASS } from '../elements/constants.js';
 import { Decimal } from '../exact/decimal.js';
 import { scaledToString } from '../exact/scaled.js';
 import { hillFormula, hillOrder } from '../formula/hill.js';
+import { conventionalFormula } from './written.js';
 import { readFoundValues } from '../analysis/found-values.js';
 import { readNumber } from '../sigfig/read-number.js';
 import { readIonNotation } from '../ions/read-ion-notation.js';
@@ -85,16 +86,20 @@ export interface CandidateOptions {
 }
 
 export interface Candidate {
-  /** Hill formula of the neutral molecule M. */
+  /** Formula of the neutral molecule M as written: Hill order with carbon, IUPAC's electronegativity order without (Mg2SiO4). */
   formula: string;
+  /** Hill formula of M. */
+  hill: string;
   /** Atom counts of M, by element symbol. */
   counts: Record<string, number>;
   /** Monoisotopic mass of M, u (AME2020 masses, summed exactly). */
   monoisotopicMass: number;
   /** Average molar mass of M, g/mol (standard atomic weights, summed exactly). */
   molarMass: number;
-  /** Hill formula of the ion with its charge ('C6H12NaO6^+'), when an ion was given. */
+  /** Formula of the ion with its charge ('C6H12NaO6^+'), as written (see `formula`), when an ion was given. */
   ionFormula: string | null;
+  /** Hill formula of the ion with its charge, when an ion was given. */
+  ionHill: string | null;
   /** m/z of the ion, electrons counted, when an ion was given. */
   mz: number | null;
   /** (found − calculated)/calculated × 10⁶, of the m/z (or of the neutral mass), when an accurate mass was given. */
@@ -610,7 +615,7 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
   if (options.onProgress) options.onProgress(1);
 
   let candidates = heap.items.map((kept) => candidateOf(kept, symbols, notation, adduct, adductMass, found, foundSlots, read, tolerance, ppm, massTarget, molarTolerance, peaks));
-  candidates.sort((a, b) => a.score - b.score || atomCount(a) - atomCount(b) || (a.formula < b.formula ? -1 : a.formula > b.formula ? 1 : 0));
+  candidates.sort((a, b) => a.score - b.score || atomCount(a) - atomCount(b) || (a.hill < b.hill ? -1 : a.hill > b.hill ? 1 : 0));
   if (peaks) {
     notes.push({ code: 'PATTERN_COMPARED', message: `the measured isotope pattern was compared with the best ${Math.min(PATTERN_POOL, plausible)} candidates by mass${read ? ' and analysis' : ''}, which were then ranked again with it` });
     candidates = candidates.slice(0, limit);
@@ -655,13 +660,15 @@ function candidateOf(
   const molar = exactSum(symbols, kept.counts, avgOf);
   let mz: Decimal | null = null;
   let ionFormula: string | null = null;
+  let ionHill: string | null = null;
   if (notation) {
     const n = notation.multiplier;
     const ionAtoms = new Map<string, number>();
     for (const [s, k] of map) ionAtoms.set(s, k * n);
     for (const [s, d] of adduct) ionAtoms.set(s, (ionAtoms.get(s) ?? 0) + d);
     for (const [s, k] of ionAtoms) if (k === 0) ionAtoms.delete(s);
-    ionFormula = hillFormula(ionAtoms, notation.charge);
+    ionHill = hillFormula(ionAtoms, notation.charge);
+    ionFormula = conventionalFormula(ionAtoms, notation.charge);
     mz = mono.decimal.times(n).plus(adductMass).div(Math.abs(notation.charge));
   }
   const calc = mz ?? mono.decimal;
@@ -689,11 +696,13 @@ function candidateOf(
     similarity = patternSimilarity(peaks, ionAtoms, calc.toNumber(), notation?.charge ?? 1);
   }
   return {
-    formula: hillFormula(map),
+    formula: conventionalFormula(map),
+    hill: hillFormula(map),
     counts,
     monoisotopicMass: mono.number,
     molarMass: molar.number,
     ionFormula,
+    ionHill,
     mz: mz === null ? null : mz.toNumber(),
     ppm: ppmError,
     rdbe: rdbe(counts),
@@ -711,14 +720,3 @@ function describe(o: CandidateOptions): string {
   if (o.pattern) parts.push('measured pattern');
   return parts.join(', ');
 }
-
-/**
- * Non-throwing {@link candidateFormulas}.
- *
- * @example
- * safeCandidateFormulas({ mass: '180.06339', ppm: 3, elements: 'C0-20 H0-40 O0-10' }).success // true
- */
-export function safeCandidateFormulas(options: CandidateOptions): SafeResult<CandidateResult> {
-  return toSafe(() => candidateFormulas(options));
-}
-

@@ -5,7 +5,7 @@
  * figures, and the empirical formula.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail, PondusError } from '../errors/pondus-error.js';
 import { Decimal } from '../exact/decimal.js';
 import { MASS, measureAs } from '../calc/measure.js';
 import { conversionFactor } from '../preparation/conversion-factor.js';
@@ -13,6 +13,8 @@ import { exact } from '../sigfig/measured.js';
 import { add, divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
 import { searchFormula, type FormulaFit } from './formula-search.js';
 import type { Measurements } from './measurements.js';
+import { displayQuantity } from '../sigfig/display-quantity.js';
+import type { RoundingMode } from '../sigfig/round.js';
 
 /** What was collected, and the element it carries. */
 export const PRODUCTS: Readonly<Record<string, { formula: string; element: string }>> = Object.freeze({
@@ -28,11 +30,14 @@ export const PRODUCTS: Readonly<Record<string, { formula: string; element: strin
 export interface CombustionOptions {
   /** Sample mass: '0.1000 g'. */
   sample: string;
+  /** How the reported figures are rounded (default half to even). */
+  rounding?: RoundingMode;
   /** Masses collected, by product: { co2: '0.2000 g', h2o: '0.0819 g' }. */
   collected: Partial<Record<keyof typeof PRODUCTS, string>>;
 }
 
-export interface CombustionResult {
+/** Combustion analysis with the measured quantities, for callers inside the library. */
+export interface CombustionDetail {
   /** The sample mass as given. */
   input: string;
   sample: Quantity;
@@ -40,23 +45,111 @@ export interface CombustionResult {
   elements: { symbol: string; mass: Quantity; percent: Quantity; byDifference: boolean }[];
   /** The empirical formula, or null when none fits within the precision of the data (a note says so). */
   empirical: string | null;
+  /** The empirical formula in Hill order. */
+  hill: string | null;
   fit: FormulaFit | null;
   alternatives: FormulaFit[];
   notes: Note[];
 }
 
+/** One element of a combustion analysis, as plain data. */
+export interface CombustionElement {
+  symbol: string;
+  /** Its mass in g: the unrounded number, the exact decimal, the reported figure and the text with its unit. */
+  mass: number;
+  massExact: string;
+  massFigure: string;
+  massDisplay: string;
+  /** Its percent of the sample: the unrounded number, the exact decimal and the reported figure. */
+  percent: number;
+  percentExact: string;
+  percentFigure: string;
+  /** Oxygen found as the sample less the elements collected. */
+  byDifference: boolean;
+}
+
+/** A combustion analysis: plain data (numbers as numbers, exact decimals and reported figures as text beside them). */
+export interface CombustionResult {
+  /** The sample mass as given. */
+  input: string;
+  /** The sample mass as reported ('1.000 g'). */
+  sample: string;
+  /** The sample mass in g. */
+  sampleMass: number;
+  /** Mass and percent of each element, in the order C, H, N, S, halogens, O. */
+  elements: CombustionElement[];
+  /** The empirical formula, or null when none fits within the precision of the data (a note says so). */
+  empirical: string | null;
+  /** The empirical formula in Hill order. */
+  hill: string | null;
+  fit: FormulaFit | null;
+  alternatives: FormulaFit[];
+  /** The rounding the reported figures follow. */
+  rounding: RoundingMode;
+  notes: Note[];
+}
+
 /**
- * Element masses, percents and the empirical formula from a combustion analysis.
+ * Element masses, percents and the empirical formula from a combustion analysis, as plain data.
  *
  * @example
  * combustion({ sample: '1.000 g', collected: { co2: '1.499 g', h2o: '0.4091 g' } }).empirical // 'C3H4O3'
+ * combustion({ sample: '1.000 g', collected: { co2: '1.499 g', h2o: '0.4091 g' } }).elements[0].percentFigure // '40.91'
  */
 export function combustion(options: CombustionOptions): CombustionResult {
+  const rounding = options.rounding ?? 'half-even';
+  const d = combustionDetail(options);
+  const sample = displayQuantity(d.sample, 'g', rounding);
+  return {
+    input: d.input,
+    sample: sample.text,
+    sampleMass: sample.value.toNumber(),
+    elements: d.elements.map((e) => {
+      const m = displayQuantity(e.mass, 'g', rounding);
+      const p = displayQuantity(e.percent, undefined, rounding);
+      return { symbol: e.symbol, mass: m.value.toNumber(), massExact: m.value.toFixed(), massFigure: m.figure, massDisplay: m.text, percent: e.percent.value.toNumber(), percentExact: e.percent.value.toFixed(), percentFigure: p.figure, byDifference: e.byDifference };
+    }),
+    empirical: d.empirical,
+    hill: d.hill,
+    fit: d.fit,
+    alternatives: d.alternatives,
+    rounding,
+    notes: d.notes,
+  };
+}
+
+/**
+ * The JSON object `pondus combustion --json` writes.
+ *
+ * @example
+ * combustionJson(combustion({ sample: '1.000 g', collected: { co2: '1.499 g', h2o: '0.4091 g' } })).elements[1].massDisplay // '0.04578 g'
+ */
+export function combustionJson(r: CombustionResult) {
+  return {
+    input: r.input,
+    sample: r.sample,
+    elements: r.elements.map((e) => ({ symbol: e.symbol, mass: e.mass, massDisplay: e.massDisplay, percent: e.percent, percentDisplay: e.percentFigure, byDifference: e.byDifference })),
+    empirical: r.empirical,
+    hill: r.hill,
+    residuals: r.fit ? { ...r.fit.residuals } : null,
+    alternatives: r.alternatives.map((a) => a.formula),
+    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+  };
+}
+
+/**
+ * Element masses, percents and the empirical formula from a combustion analysis, with the
+ * measured quantities (for callers inside the library; the public form is {@link combustion}).
+ *
+ * @example
+ * combustionDetail({ sample: '1.000 g', collected: { co2: '1.499 g', h2o: '0.4091 g' } }).elements[0].mass.value.toFixed(4) // '0.4091'
+ */
+export function combustionDetail(options: CombustionOptions): CombustionDetail {
   const notes: Note[] = [];
   const sample = measureAs(options.sample, [MASS], 'the sample mass', notes);
   if (sample.value.lte(0)) throw fail({ code: 'BAD_MEASUREMENT', message: 'the sample mass must be positive' });
   const hundred = quantity(exact(100), null);
-  const elements: CombustionResult['elements'] = [];
+  const elements: CombustionDetail['elements'] = [];
   if (options.collected === null || typeof options.collected !== 'object') throw fail({ code: 'BAD_OPTION', message: `give the masses collected as an object such as { co2: '0.2000 g', h2o: '0.0819 g' }` });
   for (const [key, text] of Object.entries(options.collected)) {
     if (text === undefined) continue;
@@ -93,12 +186,7 @@ export function combustion(options: CombustionOptions): CombustionResult {
   } catch (e) {
     if (!(e instanceof PondusError) || e.first.code !== 'NO_FORMULA_FITS') throw e;
     notes.push({ code: 'NO_FORMULA_FITS', message: e.first.message });
-    return { input: options.sample, sample, elements, empirical: null, fit: null, alternatives: [], notes };
+    return { input: options.sample, sample, elements, empirical: null, hill: null, fit: null, alternatives: [], notes };
   }
-  return { input: options.sample, sample, elements, empirical: s.best.formula, fit: s.best, alternatives: s.alternatives, notes };
-}
-
-/** Non-throwing {@link combustion}. */
-export function safeCombustion(options: CombustionOptions): SafeResult<CombustionResult> {
-  return toSafe(() => combustion(options));
+  return { input: options.sample, sample, elements, empirical: s.best.formula, hill: s.best.hill, fit: s.best, alternatives: s.alternatives, notes };
 }

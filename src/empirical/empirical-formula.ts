@@ -2,11 +2,12 @@
  * Empirical and molecular formulas from measurements.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { formulaMassDetail } from '../mass/formula-mass.js';
 import { readMeasurements } from './measurements.js';
 import { DEFAULT_TOLERANCE, prepareData, searchFormula, searchMolecular, type FormulaFit } from './formula-search.js';
 import { hillOrder } from '../formula/hill.js';
+import { conventionalFormulaOf } from './written.js';
 
 /** An empirical formula with more atoms than this gets a note: such a fit says more about the data's precision than about the compound. */
 export const LARGE_EMPIRICAL = 60;
@@ -30,8 +31,10 @@ export interface PlainConversion {
 
 export interface EmpiricalResult {
   input: string;
-  /** The empirical formula, Hill order. */
+  /** The empirical formula as written: Hill order with carbon, IUPAC's electronegativity order without (Mg2SiO4). */
   empirical: string;
+  /** The empirical formula in Hill order (Mg2O4Si). */
+  hill: string;
   /** Its molar mass, g/mol (the exact sum as a number, and as text). */
   empiricalMass: number;
   empiricalMassText: string;
@@ -48,15 +51,18 @@ export interface EmpiricalResult {
   byDifference: string | null;
   /** The molecular formula, when a molar mass was given and a formula of that mass fits. */
   molecular: string | null;
+  /** The molecular formula in Hill order. */
+  molecularHill: string | null;
   multiple: number | null;
   conversions: PlainConversion[];
   notes: Note[];
 }
 
-function reduceFit(f: FormulaFit): { formula: string; multiple: number } {
+function reduceFit(f: FormulaFit): { formula: string; hill: string; multiple: number } {
   const g = Object.values(f.counts).reduce((a, b) => gcd(a, b), 0);
-  if (g <= 1) return { formula: f.formula, multiple: 1 };
-  return { formula: formulaMassDetail(Object.entries(f.counts).map(([s, c]) => `${s}${c / g}`).join(''), { abbreviations: 'none' }).formula, multiple: g };
+  if (g <= 1) return { formula: f.formula, hill: f.hill, multiple: 1 };
+  const counts = Object.fromEntries(Object.entries(f.counts).map(([s, c]) => [s, c / g]));
+  return { formula: conventionalFormulaOf(counts), hill: formulaMassDetail(Object.entries(counts).map(([s, c]) => `${s}${c}`).join(''), { abbreviations: 'none' }).formula, multiple: g };
 }
 
 const gcd = (a: number, b: number): number => (b ? gcd(b, a % b) : a);
@@ -94,6 +100,8 @@ export function empirical(input: string, options: EmpiricalOptions = {}): Empiri
   if (d) notes.push({ code: 'BY_DIFFERENCE', message: `${d.symbol} by difference: ${d.value.toFixed()}${m.kind === 'percent' ? ' %' : ' g'}` });
   notes.push(...(m.notes ?? []));
   let molecular: string | null = null;
+  let molecularHill: string | null = null;
+  let empiricalHill: string;
   let multiple: number | null = null;
   let fit: FormulaFit;
   let alternatives: FormulaFit[];
@@ -107,8 +115,10 @@ export function empirical(input: string, options: EmpiricalOptions = {}): Empiri
     fit = mol[0];
     alternatives = mol.slice(1, 6);
     molecular = fit.formula;
+    molecularHill = fit.hill;
     const r = reduceFit(fit);
     empiricalFormula = r.formula;
+    empiricalHill = r.hill;
     multiple = r.multiple;
     const tied = mol.filter((f) => f.grade === fit.grade);
     if (tied.length > 1) {
@@ -122,18 +132,20 @@ export function empirical(input: string, options: EmpiricalOptions = {}): Empiri
     fit = s.best;
     alternatives = s.alternatives;
     empiricalFormula = s.best.formula;
+    empiricalHill = s.best.hill;
     if (window) {
-      const em = formulaMassDetail(empiricalFormula, { abbreviations: 'none' }).molarMass.toNumber();
+      const em = formulaMassDetail(empiricalHill, { abbreviations: 'none' }).molarMass.toNumber();
       notes.push({ code: 'NOT_A_MULTIPLE', message: `no formula of ${window.text} fits the data within the limits (the empirical formula ${empiricalFormula} is ${em.toFixed(3)} g/mol; ${(window.lo / em).toFixed(2)}–${(window.hi / em).toFixed(2)} × that): no molecular formula; check the molar mass, or search near a measured mass with the candidates command` });
     }
   }
-  const massResult = formulaMassDetail(empiricalFormula, { abbreviations: 'none' }); // a Hill formula: element symbols only
+  const massResult = formulaMassDetail(empiricalHill, { abbreviations: 'none' }); // a Hill formula: element symbols only
   if (fit.atoms > LARGE_EMPIRICAL && molecular === null) {
     notes.push({ code: 'LARGE_FORMULA', message: `the simplest formula within the limits has ${fit.atoms} atoms: the compound is not what the values suggest, or they are off; check them, or search near a measured mass with the candidates command` });
   }
   return {
     input,
     empirical: empiricalFormula,
+    hill: empiricalHill,
     empiricalMass: massResult.molarMass.toNumber(),
     empiricalMassText: massResult.molarMass.toFixed(),
     fit,
@@ -143,15 +155,11 @@ export function empirical(input: string, options: EmpiricalOptions = {}): Empiri
     tolerance,
     byDifference: d ? d.symbol : null,
     molecular,
+    molecularHill,
     multiple,
     conversions: (m.conversions ?? []).map((c) => ({ key: c.key, formula: c.formula, value: c.value.toNumber(), elements: Object.fromEntries(c.parts.map((p) => [p.symbol, p.value.toNumber()])) })),
     notes,
   };
-}
-
-/** Non-throwing {@link empirical}. */
-export function safeEmpirical(input: string, options: EmpiricalOptions = {}): SafeResult<EmpiricalResult> {
-  return toSafe(() => empirical(input, options));
 }
 
 /**
@@ -166,15 +174,16 @@ export function empiricalJson(r: EmpiricalResult) {
     empirical: r.empirical,
     molecular: r.molecular,
     multiple: r.multiple,
+    hill: r.hill,
+    molecularHill: r.molecularHill,
     empiricalMass: r.empiricalMass,
     percents: { ...r.percents },
     limits: { ...r.limits },
     tolerance: r.tolerance,
     residuals: { ...r.fit.residuals },
     grade: r.fit.grade,
-    alternatives: r.alternatives.map((a) => ({ formula: a.formula, residuals: { ...a.residuals }, grade: a.grade })),
+    alternatives: r.alternatives.map((a) => ({ formula: a.formula, hill: a.hill, residuals: { ...a.residuals }, grade: a.grade })),
     notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
     ...(r.conversions.length ? { conversions: r.conversions.map((c) => ({ ...c, elements: { ...c.elements } })) } : {}),
   };
 }
-

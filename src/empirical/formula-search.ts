@@ -23,6 +23,7 @@ import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
 import { getAtomData } from '../elements/atom-data.js';
 import { hillFormula, hillOrder } from '../formula/hill.js';
+import { conventionalFormula } from './written.js';
 import type { Measurements } from './measurements.js';
 
 /** Largest count of the reference (least abundant) element searched. */
@@ -40,8 +41,10 @@ export const RELATIVE_SLACK = 0.0003;
 export const ABSOLUTE_SLACK = 0.001;
 
 export interface FormulaFit {
-  /** Hill formula. */
+  /** The formula as written: Hill order with carbon, IUPAC's electronegativity order without (Mg2SiO4). */
   formula: string;
+  /** The Hill formula (Mg2O4Si). */
+  hill: string;
   /** Atom counts by element, Hill order. */
   counts: Record<string, number>;
   /** Calculated − measured, percentage points, per element. */
@@ -163,14 +166,14 @@ function makeFit(data: PreparedData, counts: ArrayLike<number>, residuals: Array
     c[s] = counts[i];
     r[s] = residuals[i];
   }
-  return { formula: hillFormula(map, 0, order), counts: c, residuals: r, worst, grade: gradeOf(worst), atoms };
+  return { formula: conventionalFormula(map), hill: hillFormula(map, 0, order), counts: c, residuals: r, worst, grade: gradeOf(worst), atoms };
 }
 
 /** The third of the limit a fit's worst residual falls in: 1, 2 or 3. */
 export const gradeOf = (worst: number): number => (worst <= 1 / 3 + 1e-12 ? 1 : worst <= 2 / 3 + 1e-12 ? 2 : 3);
 
 /** Fit first (by grade), then simplicity (fewer atoms), then the closer fit. */
-export const byFitThenSimplicity = (a: FormulaFit, b: FormulaFit): number => a.grade - b.grade || a.atoms - b.atoms || a.worst - b.worst || (a.formula < b.formula ? -1 : 1);
+export const byFitThenSimplicity = (a: FormulaFit, b: FormulaFit): number => a.grade - b.grade || a.atoms - b.atoms || a.worst - b.worst || (a.hill < b.hill ? -1 : 1);
 
 /**
  * Scores one set of counts with plain numbers: writes the residuals and returns the worst

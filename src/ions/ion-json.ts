@@ -1,3 +1,4 @@
+import { Decimal } from '../exact/decimal.js';
 import type { IonResult } from './ion-mass.js';
 
 /** The JSON shape of an ion result (`pondus ion --json`): numbers as numbers, exact values as decimal text beside them. */
@@ -37,17 +38,17 @@ export function ionJson(r: IonResult, extra: Record<string, unknown> = {}): IonJ
     ion: r.notation,
     ionFormula: r.ionFormula,
     charge: r.charge,
-    mz: r.mz.toNumber(),
-    mzExact: r.mz.toDecimalPlaces(15).toFixed(),
-    ionMass: r.ionMass.toNumber(),
-    neutralMass: r.neutralMass.toNumber(),
+    mz: r.mz,
+    mzExact: new Decimal(r.mzExact).toDecimalPlaces(15).toFixed(),
+    ionMass: r.ionMass,
+    neutralMass: r.neutralMass,
     oddElectron: r.oddElectron,
     calculated: r.calculatedText,
-    found: r.found ? r.found.value.toNumber() : null,
+    found: r.found ? r.found.value : null,
     foundText: r.found ? r.found.text : null,
-    errorPpm: r.found ? r.found.ppm.toDecimalPlaces(1).toNumber() : null,
-    errorPpmExact: r.found ? r.found.ppm.toSignificantDigits(12).toFixed() : null,
-    errorMDa: r.found ? r.found.mDa.toDecimalPlaces(1).toNumber() : null,
+    errorPpm: r.found ? new Decimal(r.found.ppmExact).toDecimalPlaces(1).toNumber() : null,
+    errorPpmExact: r.found ? new Decimal(r.found.ppmExact).toSignificantDigits(12).toFixed() : null,
+    errorMDa: r.found ? new Decimal(r.found.mDaExact).toDecimalPlaces(1).toNumber() : null,
     reportLine: r.reportLine,
     notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
   };

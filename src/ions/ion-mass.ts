@@ -4,7 +4,7 @@
  * Monoisotopic masses are AME2020 masses of the principal isotopes, as for `mass`.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { ELECTRON_MASS } from '../elements/constants.js';
 import { getAtomData } from '../elements/atom-data.js';
 import { Decimal } from '../exact/decimal.js';
@@ -31,8 +31,8 @@ export interface IonOptions extends ParseOptions {
   decimals?: number;
 }
 
-/** An ion and its m/z. */
-export interface IonResult {
+/** An ion and its m/z, with exact Decimal values and the atom map, for callers inside the library. */
+export interface IonDetail {
   /** The formula as given (or the ion notation, when it holds the formula). */
   readonly input: string;
   /** Hill formula of M as given (with its charge, when written charged). */
@@ -70,15 +70,15 @@ const IONISATION = /^[A-Za-z0-9][A-Za-z0-9 /+()-]{0,29}$/;
 
 /**
  * Computes an ion's m/z from a formula and an ion notation, or from a charged formula alone
- * (read as the species as written, with a note). Throws a PondusError for bad input or a
- * formula whose written charge conflicts with the notation.
+ * (read as the species as written, with a note), with exact Decimal values and the atom map.
+ * Throws a PondusError for bad input or a formula whose written charge conflicts with the
+ * notation. The public form is {@link ionMass}.
  *
  * @example
- * ionMass('C15H15NO2', '[M+H]+').mz.toFixed(4)                               // '242.1176'
- * ionMass('C15H15NO2', '[M+H]+', { found: '242.1172' }).found.ppm.toFixed(1)  // '-1.5'
- * ionMass(null, '[C6H12O6+Na]+').ionFormula                                    // 'C6H12NaO6^+'
+ * ionMassDetail('C15H15NO2', '[M+H]+').mz.toFixed(4)                               // '242.1176'
+ * ionMassDetail('C15H15NO2', '[M+H]+', { found: '242.1172' }).found.ppm.toFixed(1)  // '-1.5'
  */
-export function ionMass(formula: string | null, ion: string | IonNotation | null, options: IonOptions = {}): IonResult {
+export function ionMassDetail(formula: string | null, ion: string | IonNotation | null, options: IonOptions = {}): IonDetail {
   const notation = typeof ion === 'string' ? readIonNotation(ion) : ion;
   const decimals = options.decimals ?? 4;
   if (!Number.isInteger(decimals) || decimals < 0 || decimals > 8) throw fail({ code: 'BAD_OPTION', message: `decimals must be a whole number from 0 to 8, not ${decimals}` });
@@ -191,14 +191,108 @@ export function ionMass(formula: string | null, ion: string | IonNotation | null
   };
 }
 
+/** A found m/z compared with the calculated one, as plain data: numbers, with the exact decimals beside them. */
+export interface IonError {
+  /** The found value as written. */
+  text: string;
+  value: number;
+  /** Decimals written in the found value. */
+  decimals: number;
+  /** found − calculated, in u (Th for m/z). */
+  difference: number;
+  differenceExact: string;
+  /** (found − calculated)/calculated × 10⁶, unrounded. */
+  ppm: number;
+  ppmExact: string;
+  /** (found − calculated) × 1000, unrounded. */
+  mDa: number;
+  mDaExact: string;
+}
+
+/** An ion and its m/z: plain data (numbers as numbers, the exact decimals as text beside them). */
+export interface IonResult {
+  /** The formula as given (or the ion notation, when it holds the formula). */
+  input: string;
+  /** Hill formula of M as given (with its charge, when written charged). */
+  formula: string;
+  /** The ion notation as pondus writes it ('[M+H]+'), or null for a charged formula given alone. */
+  notation: string | null;
+  /** The notation as journals print it ('[M + H]+'); for a charged formula alone, 'M+' or 'M-•' style. */
+  journalNotation: string;
+  /** Hill formula of the ion with its charge ('C15H16NO2^+'). */
+  ionFormula: string;
+  /** Hill formula of the ion without the charge, as written in report lines ('C15H16NO2'). */
+  ionFormulaPlain: string;
+  charge: number;
+  /** The ion's atoms, by atom key ('C', '13C', 'D'). */
+  atoms: Record<string, number>;
+  /** m/z in Th (u per elementary charge), the nearest number, and exact as text. */
+  mz: number;
+  mzExact: string;
+  /** The ion's monoisotopic mass in u (m/z × |charge|), electrons accounted for. */
+  ionMass: number;
+  ionMassExact: string;
+  /** Monoisotopic mass of one neutral molecule M. */
+  neutralMass: number;
+  neutralMassExact: string;
+  /** True when the ion has an odd number of electrons (a radical ion). */
+  oddElectron: boolean;
+  /** The found m/z and its error, when given. */
+  found: IonError | null;
+  /** The calculated m/z to the report's decimals. */
+  calculatedText: string;
+  /** The HRMS line for an experimental section, when a found m/z is given. */
+  reportLine: string | null;
+  ionisation: string;
+  notes: Note[];
+}
+
 /**
- * Non-throwing {@link ionMass}.
+ * Computes an ion's m/z from a formula and an ion notation, or from a charged formula alone
+ * (read as the species as written, with a note), as plain data. Throws a PondusError for bad
+ * input or a formula whose written charge conflicts with the notation.
  *
  * @example
- * safeIonMass('C6H6', '[M+Q]+').success // false
+ * ionMass('C15H15NO2', '[M+H]+').mz.toFixed(4)                               // '242.1176'
+ * ionMass('C15H15NO2', '[M+H]+', { found: '242.1172' }).found.ppm.toFixed(1)  // '-1.5'
+ * ionMass(null, '[C6H12O6+Na]+').ionFormula                                    // 'C6H12NaO6^+'
  */
-export function safeIonMass(formula: string | null, ion: string | null, options: IonOptions = {}): SafeResult<IonResult> {
-  return toSafe(() => ionMass(formula, ion, options));
+export function ionMass(formula: string | null, ion: string | IonNotation | null, options: IonOptions = {}): IonResult {
+  return plainIon(ionMassDetail(formula, ion, options));
+}
+
+/**
+ * The plain form of an {@link IonDetail}.
+ *
+ * @example
+ * plainIon(ionMassDetail('H2O', '[M+H]+')).atoms // { H: 3, O: 1 }
+ */
+export function plainIon(d: IonDetail): IonResult {
+  const f = d.found;
+  return {
+    input: d.input,
+    formula: d.formula,
+    notation: d.notation,
+    journalNotation: d.journalNotation,
+    ionFormula: d.ionFormula,
+    ionFormulaPlain: d.ionFormulaPlain,
+    charge: d.charge,
+    atoms: Object.fromEntries([...d.atoms].map(([k, n]) => [k, Number(n)])),
+    mz: d.mz.toNumber(),
+    mzExact: d.mz.toFixed(),
+    ionMass: d.ionMass.toNumber(),
+    ionMassExact: d.ionMass.toFixed(),
+    neutralMass: d.neutralMass.toNumber(),
+    neutralMassExact: d.neutralMass.toFixed(),
+    oddElectron: d.oddElectron,
+    found: f
+      ? { text: f.text, value: f.value.toNumber(), decimals: f.decimals, difference: f.difference.toNumber(), differenceExact: f.difference.toFixed(), ppm: f.ppm.toNumber(), ppmExact: f.ppm.toFixed(), mDa: f.mDa.toNumber(), mDaExact: f.mDa.toFixed() }
+      : null,
+    calculatedText: d.calculatedText,
+    reportLine: d.reportLine,
+    ionisation: d.ionisation,
+    notes: d.notes,
+  };
 }
 
 /** n·M plus and minus the terms; a term taking away more atoms than there are is refused. */

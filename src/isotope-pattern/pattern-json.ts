@@ -1,3 +1,4 @@
+import { Decimal } from '../exact/decimal.js';
 import type { PatternResult } from './pattern.js';
 
 /** The JSON shape of an isotope pattern (`pondus pattern --json`). */
@@ -37,8 +38,8 @@ export function patternJson(r: PatternResult, extra: Record<string, unknown> = {
     kind: r.kind,
     resolvingPower: r.resolvingPower,
     coverage: r.coverage,
-    monoisotopicMz: r.monoisotopicMz.toNumber(),
-    monoisotopicMzExact: r.monoisotopicMz.toDecimalPlaces(15).toFixed(),
+    monoisotopicMz: r.monoisotopicMz,
+    monoisotopicMzExact: new Decimal(r.monoisotopicMzExact).toDecimalPlaces(15).toFixed(),
     averageMz: r.averageMz,
     isotopeAverageMz: r.isotopeAverageMz,
     minRelative: r.minRelative,

@@ -5,14 +5,14 @@
  * accounted for; labelled atoms ([13C], D) count as their single nuclide.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { ELECTRON_MASS } from '../elements/constants.js';
 import type { Decimal } from '../exact/decimal.js';
 import { isWhole } from '../formula/amount.js';
 import { flattenFormula } from '../formula/flatten.js';
 import { hillFormula } from '../formula/hill.js';
 import { parseFormula, type ParseOptions } from '../formula-parser/parse.js';
-import { ionMass, monoisotopic } from '../ions/ion-mass.js';
+import { ionMassDetail, monoisotopic } from '../ions/ion-mass.js';
 import { aggregatedDistribution } from './aggregated.js';
 import { fineStructure } from './fine-structure.js';
 import { atomIsotopes, isotopeAverage } from './isotope-table.js';
@@ -48,31 +48,32 @@ export interface PatternPeak {
   isotopologues: number | null;
 }
 
-/** An isotope pattern. */
+/** An isotope pattern: plain data (numbers as numbers, the exact monoisotopic m/z as text beside it). */
 export interface PatternResult {
-  readonly input: string;
+  input: string;
   /** Hill formula of M as given. */
-  readonly formula: string;
-  readonly ion: string | null;
+  formula: string;
+  ion: string | null;
   /** Hill formula of the species the pattern is of, with its charge. */
-  readonly speciesFormula: string;
-  readonly charge: number;
-  readonly kind: 'aggregated' | 'fine';
-  readonly resolvingPower: number | null;
+  speciesFormula: string;
+  charge: number;
+  kind: 'aggregated' | 'fine';
+  resolvingPower: number | null;
   /** Share of the probability the computed peaks hold (1 less what pruning left out). */
-  readonly coverage: number;
+  coverage: number;
   /** The peaks listed (at least minRelative % of the largest), by m/z. */
-  readonly peaks: PatternPeak[];
+  peaks: PatternPeak[];
   /** All computed peaks, by m/z (the list before minRelative). */
-  readonly allPeaks: PatternPeak[];
-  /** m/z of the monoisotopic species (principal isotopes), exact. */
-  readonly monoisotopicMz: Decimal;
+  allPeaks: PatternPeak[];
+  /** m/z of the monoisotopic species (principal isotopes): the nearest number, and exact as text. */
+  monoisotopicMz: number;
+  monoisotopicMzExact: string;
   /** Abundance-weighted mean m/z of all computed peaks. */
-  readonly averageMz: number;
+  averageMz: number;
   /** Mean m/z from the isotope data directly (ICE 2013 fractions × AME2020 masses). */
-  readonly isotopeAverageMz: number;
-  readonly minRelative: number;
-  readonly notes: Note[];
+  isotopeAverageMz: number;
+  minRelative: number;
+  notes: Note[];
 }
 
 /**
@@ -109,7 +110,7 @@ export function isotopePattern(formula: string | null, options: PatternOptions =
     mFormula = speciesFormula = hillFormula(counts);
     mono = monoisotopic(counts);
   } else {
-    const r = ionMass(formula, options.ion ?? null, options);
+    const r = ionMassDetail(formula, options.ion ?? null, options);
     input = r.input;
     mFormula = r.formula;
     ion = r.notation;
@@ -186,20 +187,11 @@ export function isotopePattern(formula: string | null, options: PatternOptions =
     coverage: covered,
     peaks,
     allPeaks: all,
-    monoisotopicMz: mono,
+    monoisotopicMz: mono.toNumber(),
+    monoisotopicMzExact: mono.toFixed(),
     averageMz: sumMz / sum,
     isotopeAverageMz: toMz(average),
     minRelative,
     notes,
   };
-}
-
-/**
- * Non-throwing {@link isotopePattern}.
- *
- * @example
- * safeIsotopePattern('C6H6', { ion: '[M+Q]+' }).success // false
- */
-export function safeIsotopePattern(formula: string | null, options: PatternOptions = {}): SafeResult<PatternResult> {
-  return toSafe(() => isotopePattern(formula, options));
 }

@@ -7,7 +7,7 @@
  * instructions: kept at working precision, four figures at least.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { MASS, VOLUME } from '../calc/measure.js';
 import { readPositive } from '../assay/read-quantity.js';
 import { exact } from '../sigfig/measured.js';
@@ -103,14 +103,4 @@ function readStrengthOrZero(text: string, kind: PercentKind, notes: Note[], like
     return { value: { ...quantity(exact(0), null), dims: like.dims, unit: like.unit }, percent: isPercent ? (m ? (m[1].toLowerCase() as PercentKind) : kind) : null, defaulted: isPercent && !m };
   }
   return readStrength(text, kind, notes, 'the lower strength');
-}
-
-/**
- * {@link alligation} without throwing.
- *
- * @example
- * safeAlligation('30 %', { higher: '20 %', lower: '5 %', by: 'mass' }).success // false (target above both)
- */
-export function safeAlligation(targetText: string, o: AlligationOptions): SafeResult<AlligationResult> {
-  return toSafe(() => alligation(targetText, o));
 }

@@ -13,7 +13,7 @@
  *   precision, unless the strength is marked as measured.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { AMOUNT, MASS } from '../calc/measure.js';
 import { readPositive } from '../assay/read-quantity.js';
 import { noteHydrateWater } from '../assay/hydrate-note.js';
@@ -147,14 +147,4 @@ export function milliequivalents(saltText: string, o: MilliequivalentOptions): M
   notes.push({ code: 'MEQ_PER_MMOL', message: `1 mmol of ${salt.input} = ${ions.equivalentsPerMole} mEq (${ions.ions.map((i) => `${i.count === 1 ? '' : `${i.count} × `}${i.ion}`).join(', ')}) and ${ions.particles} mOsm` });
   notes.push({ code: 'COMPLETE_DISSOCIATION', message: 'milliosmoles assume complete dissociation into the ions named; a measured osmolality is lower' });
   return { salt, ions, mode, mass, moles, equivalents, osmoles, perIon, strength, notes };
-}
-
-/**
- * {@link milliequivalents} without throwing.
- *
- * @example
- * safeMilliequivalents('NaCl', { mass: '0.900 g' }).success // true
- */
-export function safeMilliequivalents(saltText: string, o: MilliequivalentOptions): SafeResult<MilliequivalentResult> {
-  return toSafe(() => milliequivalents(saltText, o));
 }

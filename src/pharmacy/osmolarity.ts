@@ -8,7 +8,7 @@
  * the strengths are marked measured.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail, PondusError } from '../errors/pondus-error.js';
 import { Decimal } from '../exact/decimal.js';
 import type { MassOptions } from '../mass/formula-mass.js';
 import { add, type Quantity } from '../sigfig/quantity.js';
@@ -96,14 +96,4 @@ export function osmolarity(text: string, o: OsmolarityOptions = {}): OsmolarityR
   );
   notes.push({ code: 'COMPLETE_DISSOCIATION', message: 'the osmolarity assumes complete dissociation into the ions named (ideal); a measured osmolality is lower' });
   return { components, osmolarity: fix(total!), ions, notes };
-}
-
-/**
- * {@link osmolarity} without throwing.
- *
- * @example
- * safeOsmolarity('NaCl').success // false
- */
-export function safeOsmolarity(text: string, o: OsmolarityOptions = {}): SafeResult<OsmolarityResult> {
-  return toSafe(() => osmolarity(text, o));
 }

@@ -6,7 +6,7 @@
  * precision).
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { MASS, PURE } from '../calc/measure.js';
 import { readPositive } from '../assay/read-quantity.js';
 import { convertSampleBasis, type SampleBasis, type SampleContent } from '../assay/sample-basis.js';
@@ -71,9 +71,4 @@ export function potency(text: string, options: PotencyOptions = {}): PotencyResu
     if (small) notes.push(small);
   }
   return { given, basis, asIs, need, weigh, notes };
-}
-
-/** Non-throwing {@link potency}. */
-export function safePotency(text: string, options: PotencyOptions = {}): SafeResult<PotencyResult> {
-  return toSafe(() => potency(text, options));
 }

@@ -6,7 +6,7 @@
  * (N = 1 ÷ fraction), so they keep the figures of the strength given.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { MASS_CONCENTRATION, PURE } from '../calc/measure.js';
 import { readPositive } from '../assay/read-quantity.js';
 import { Decimal } from '../exact/decimal.js';
@@ -78,9 +78,4 @@ export function strengthForms(text: string): StrengthForms {
   if (!ratio.isInteger()) notes.push({ code: 'RATIO_ROUNDED', message: `the ratio strength is 1:${ratio.toSignificantDigits(8).toFixed()}, shown to 4 figures` });
   if (forms.some((f) => !f.value.toSignificantDigits(12).eq(f.value))) notes.push({ code: 'FORM_ROUNDED', message: 'a form that is a repeating decimal is shown to 4 figures' });
   return { kind, value, ratio, forms, notes };
-}
-
-/** Non-throwing {@link strengthForms}. */
-export function safeStrengthForms(text: string): SafeResult<StrengthForms> {
-  return toSafe(() => strengthForms(text));
 }

@@ -6,7 +6,7 @@
  */
 import { formulaNotes } from '../mass/formula-notes.js';
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { MASS, PURE, measureAs } from '../calc/measure.js';
 import type { MassOptions } from '../mass/formula-mass.js';
 import { multiply, quantity, type Quantity } from '../sigfig/quantity.js';
@@ -55,9 +55,4 @@ export function convertBasis(from: string, to: string, options: BasisOptions = {
   }
   notes.unshift(...formulaNotes(factor.given, true), ...formulaNotes(factor.sought, true));
   return { factor, value, converted, notes };
-}
-
-/** Non-throwing {@link convertBasis}. */
-export function safeConvertBasis(from: string, to: string, options: BasisOptions = {}): SafeResult<BasisResult> {
-  return toSafe(() => convertBasis(from, to, options));
 }

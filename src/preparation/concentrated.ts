@@ -7,7 +7,7 @@
  */
 import { PondusError } from '../errors/pondus-error.js';
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { MASS_CONCENTRATION, MOLARITY, PURE, VOLUME } from '../calc/measure.js';
 import { readPositive } from '../assay/read-quantity.js';
 import { Decimal } from '../exact/decimal.js';
@@ -200,9 +200,4 @@ export function concentratedReagent(reagentText: string, options: ConcentratedOp
   }
   notes.unshift(...formulaNotes(reagent, true));
   return { taken, made, reagent, fraction, density, densitySource, grade, molarity, textbookSigFigs, massConcentration: massConc, target, volume, take, factor, acid, notes };
-}
-
-/** Non-throwing {@link concentratedReagent}. */
-export function safeConcentratedReagent(reagent: string, options: ConcentratedOptions): SafeResult<ConcentratedResult> {
-  return toSafe(() => concentratedReagent(reagent, options));
 }

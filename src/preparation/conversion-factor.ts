@@ -14,6 +14,7 @@ import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/fo
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { dividedBy, exact, times, type Measured } from '../sigfig/measured.js';
 import { gcd } from '../reactions/rational.js';
+import { speciesText } from './species.js';
 
 export interface ConversionFactor {
   sought: MassDetail;
@@ -47,12 +48,12 @@ export function conversionFactor(sought: string, given: string, element?: string
     if (candidates.length !== 1) {
       throw fail({
         code: 'BAD_OPTION',
-        message: candidates.length === 0 ? `${s.formula} and ${g.formula} share no element` : `${s.formula} and ${g.formula} share ${candidates.join(', ')}: say which element the factor rests on (--element)`,
+        message: candidates.length === 0 ? `${speciesText(s)} and ${speciesText(g)} share no element` : `${speciesText(s)} and ${speciesText(g)} share ${candidates.join(', ')}: say which element the factor rests on (--element)`,
       });
     }
     key = candidates[0];
   }
-  if (!s.atoms.has(key) || !g.atoms.has(key)) throw fail({ code: 'BAD_OPTION', message: `${key} is not in both ${s.formula} and ${g.formula}` });
+  if (!s.atoms.has(key) || !g.atoms.has(key)) throw fail({ code: 'BAD_OPTION', message: `${key} is not in both ${speciesText(s)} and ${speciesText(g)}` });
   const ns = toDecimal(s.atoms.get(key)!);
   const ng = toDecimal(g.atoms.get(key)!);
   if (!ns.isInteger() || !ng.isInteger()) throw fail({ code: 'BAD_OPTION', message: 'the factor needs whole counts of the key element' });

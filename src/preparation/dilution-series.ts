@@ -7,7 +7,7 @@
  * volumes a pipette holds; the steps multiply to the requested factor exactly.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { MASS_CONCENTRATION, MOLARITY, PURE, VOLUME } from '../calc/measure.js';
 import { readPositive } from '../assay/read-quantity.js';
 import { Decimal } from '../exact/decimal.js';
@@ -206,9 +206,4 @@ export function dilutionSeries(options: SeriesOptions): SeriesResult {
   notes.push({ code: 'MIX_EACH_STEP', message: 'mix each step well before taking the next transfer; use a fresh pipette tip for each step (common practice)' });
   const written = { stock: options.stock?.trim() ?? null, target: options.target?.trim() ?? null, factor: options.factor?.trim() ?? null, volume: options.volume.trim() };
   return { factor, stock, target, volume, minTransfer, maxStep, steps, written, notes };
-}
-
-/** Non-throwing {@link dilutionSeries}. */
-export function safeDilutionSeries(options: SeriesOptions): SafeResult<SeriesResult> {
-  return toSafe(() => dilutionSeries(options));
 }

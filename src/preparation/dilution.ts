@@ -4,7 +4,7 @@
  * volume actually taken, the concentration made (a result).
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
 import { divide, multiply, subtract, type Quantity } from '../sigfig/quantity.js';
 import { sameDims } from '../sigfig/units.js';
@@ -91,9 +91,4 @@ export function dilute(stockText: string, targetText: string | undefined, volume
   }
   const written = { stock: stockText.trim(), target: targetText?.trim() ?? null, volume: volumeText.trim(), taken: takenText?.trim() ?? null };
   return { stock, target, finalVolume, stockVolume, solventVolume, factor: factor!, taken, made, written, notes };
-}
-
-/** Non-throwing {@link dilute}. */
-export function safeDilute(stock: string, target: string | undefined, volume: string, taken?: string): SafeResult<DilutionResult> {
-  return toSafe(() => dilute(stock, target, volume, taken));
 }

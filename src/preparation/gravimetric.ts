@@ -4,7 +4,7 @@
  */
 import { formulaNotes } from '../mass/formula-notes.js';
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { MASS, measureAs } from '../calc/measure.js';
 import type { MassOptions } from '../mass/formula-mass.js';
 import { exact } from '../sigfig/measured.js';
@@ -58,9 +58,4 @@ export function gravimetric(analyte: string, weighed: string, options: Gravimetr
   }
   notes.unshift(...formulaNotes(factor.sought, true), ...formulaNotes(factor.given, true));
   return { analyte, weighed, factor, analyteMass, massPercent, notes };
-}
-
-/** Non-throwing {@link gravimetric}. */
-export function safeGravimetric(analyte: string, weighed: string, options: GravimetricOptions = {}): SafeResult<GravimetricResult> {
-  return toSafe(() => gravimetric(analyte, weighed, options));
 }

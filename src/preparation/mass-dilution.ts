@@ -5,7 +5,7 @@
  * (masses add up exactly, unlike volumes).
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { MASS, PURE } from '../calc/measure.js';
 import { readPositive } from '../assay/read-quantity.js';
 import { divide, multiply, subtract, type Quantity } from '../sigfig/quantity.js';
@@ -63,9 +63,4 @@ export function diluteByMass(stockText: string, targetText: string, totalText: s
   if (small) notes.push(small);
   notes.push({ code: 'GEOMETRIC_DILUTION', message: 'mix by geometric dilution: the stronger material with an equal mass of diluent, then double the portion each time until all the diluent is in (common practice)' });
   return { stock, target, total, take, diluent, factor, written: { stock: stockText.trim(), target: targetText.trim(), total: totalText.trim() }, notes };
-}
-
-/** Non-throwing {@link diluteByMass}. */
-export function safeDiluteByMass(stock: string, target: string, total: string): SafeResult<MassDilutionResult> {
-  return toSafe(() => diluteByMass(stock, target, total));
 }

@@ -12,7 +12,7 @@
  * concentrated liquid), `as`, `target` (or `concentration`), `volume`,
  * `weighed` (a solid), `taken` (a liquid).
  */
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { readCsvSheet } from '../sheets/read-sheet.js';
 import type { MassOptions } from '../mass/formula-mass.js';
 import { concentratedReagent, type ConcentratedResult } from './concentrated.js';
@@ -118,9 +118,4 @@ export function prepRow(row: PrepSheetRow, options: MassOptions = {}): PrepRowRe
   }
   if (row.taken !== '') throw fail({ code: 'BAD_RECORD', message: `a volume taken applies to a concentrated liquid (give its density); a solid is weighed ('weighed')` });
   return { row, kind: 'solid', solution: prepareSolution(row.formula, { ...options, concentration: opt(row.target), volume: row.volume, purity: opt(row.purity), as: opt(row.as), weighed: opt(row.weighed) }) };
-}
-
-/** Non-throwing {@link prepRow}. */
-export function safePrepRow(row: PrepSheetRow, options: MassOptions = {}): SafeResult<PrepRowResult> {
-  return toSafe(() => prepRow(row, options));
 }

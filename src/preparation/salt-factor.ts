@@ -5,13 +5,14 @@
  */
 import { formulaNotes } from '../mass/formula-notes.js';
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type Instruction } from '../sigfig/instruction.js';
 import { smallMassWarning } from './warnings.js';
 import { MASS, measureAs } from '../calc/measure.js';
 import { partShare } from '../composition/part-share.js';
 import { Decimal } from '../exact/decimal.js';
 import { toDecimal } from '../formula/amount.js';
+import { speciesText } from './species.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { dividedBy, exact, times, type Measured } from '../sigfig/measured.js';
@@ -88,17 +89,17 @@ export function saltFactor(saltText: string, parentText: string, options: SaltOp
     if (readings.length === 0) {
       throw fail({
         code: 'BAD_OPTION',
-        message: `${saltText.trim()} is neither written as ${parentText.trim()}·acid nor a metal salt of it (${parent.formula} less its acidic H, plus Na, K, Li, Ca or Mg, with any water): check the two formulas`,
+        message: `${saltText.trim()} is neither written as ${parentText.trim()}·acid nor a metal salt of it (${speciesText(parent)} less its acidic H, plus Na, K, Li, Ca or Mg, with any water): check the two formulas`,
         hint: 'write a basic drug\'s salt as parent·acid (C17H19NO3·HCl·3H2O), an acidic drug\'s as one formula (C14H13NaO3, (C33H34FN2O5)2Ca·3H2O)',
       });
     }
     if (readings.length > 1) {
-      throw fail({ code: 'AMBIGUOUS_READING', message: `${saltText.trim()} could be read as a salt of ${parent.formula} in more than one way: ${readings.map(describeReading).join('; or ')}` });
+      throw fail({ code: 'AMBIGUOUS_READING', message: `${saltText.trim()} could be read as a salt of ${speciesText(parent)} in more than one way: ${readings.map(describeReading).join('; or ')}` });
     }
     metalSalt = readings[0];
     form = 'metal';
     perSalt = new Decimal(metalSalt.metalCount * metalSalt.charge).div(metalSalt.hydrogensReplaced);
-    notes.push({ code: 'METAL_SALT', message: `${saltText.trim()} is read as the ${describeReading(metalSalt)} of ${parent.formula}: ${perSalt.toFixed()} × (${parent.formula} − ${metalSalt.hydrogensReplaced === 1 ? '' : metalSalt.hydrogensReplaced}H) + ${metalSalt.metalCount === 1 ? '' : metalSalt.metalCount}${metalSalt.metal}${metalSalt.water !== '0' ? ` + ${metalSalt.water} H2O` : ''} per formula unit of salt` });
+    notes.push({ code: 'METAL_SALT', message: `${saltText.trim()} is read as the ${describeReading(metalSalt)} of ${speciesText(parent)}: ${perSalt.toFixed()} × (${speciesText(parent)} − ${metalSalt.hydrogensReplaced === 1 ? '' : metalSalt.hydrogensReplaced}H) + ${metalSalt.metalCount === 1 ? '' : metalSalt.metalCount}${metalSalt.metal}${metalSalt.water !== '0' ? ` + ${metalSalt.water} H2O` : ''} per formula unit of salt` });
   }
   const factor = salt.molarMass.div(parent.molarMass.times(perSalt));
   const reported = dividedBy(reportedMolarMass(salt), times(reportedMolarMass(parent), exact(perSalt)));
@@ -190,9 +191,4 @@ function metalSaltReadings(salt: MassDetail, parent: MassDetail): MetalSaltReadi
     }
   }
   return out;
-}
-
-/** Non-throwing {@link saltFactor}. */
-export function safeSaltFactor(salt: string, parent: string, options: SaltOptions = {}): SafeResult<SaltFactorResult> {
-  return toSafe(() => saltFactor(salt, parent, options));
 }

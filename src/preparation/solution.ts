@@ -6,7 +6,7 @@
  */
 import { formulaNotes } from '../mass/formula-notes.js';
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { MASS, MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
 import { Decimal } from '../exact/decimal.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type InputFigures, type Instruction } from '../sigfig/instruction.js';
@@ -46,7 +46,8 @@ export type PurityBasis = 'reagent' | 'part';
 export interface SolutionResult {
   reagent: MassDetail;
   /** What the concentration counts, and how many of it one formula unit of reagent holds. */
-  target: { formula: string; perReagent: string; molarMass: Quantity };
+  /** The species the concentration is of: its Hill formula, as written (normalised), units per formula unit of reagent, molar mass. */
+  target: { formula: string; written: string; perReagent: string; molarMass: Quantity };
   /** The target concentration (null when only the mass weighed was given). */
   concentration: Quantity | null;
   volume: Quantity;
@@ -237,9 +238,5 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   }
   const unit = target?.unit ?? 'M';
   notes.unshift(...formulaNotes(reagent, options.as !== undefined), ...(asMass ? formulaNotes(asMass, true) : []));
-  return { reagent, target: { formula: targetFormula, perReagent: toDecimal(perReagent.value).toFixed(), molarMass: targetM }, concentration: conc, volume, purity, purityBasis: basis, targetMoles, moles, pureMass, mass, weighed, made, unit, notes };
-}
-/** Non-throwing {@link prepareSolution}. */
-export function safePrepareSolution(reagent: string, options: SolutionOptions): SafeResult<SolutionResult> {
-  return toSafe(() => prepareSolution(reagent, options));
+  return { reagent, target: { formula: targetFormula, written: targetName.trim().replace(/\s+/g, ' '), perReagent: toDecimal(perReagent.value).toFixed(), molarMass: targetM }, concentration: conc, volume, purity, purityBasis: basis, targetMoles, moles, pureMass, mass, weighed, made, unit, notes };
 }

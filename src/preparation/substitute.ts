@@ -5,7 +5,7 @@
  */
 import { formulaNotes } from '../mass/formula-notes.js';
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { AMOUNT, MASS, measureAs } from '../calc/measure.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type InputFigures, type Instruction } from '../sigfig/instruction.js';
 import { readPurity } from './purity.js';
@@ -16,6 +16,7 @@ import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/fo
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
 import { sameDims, unitOf } from '../sigfig/units.js';
+import { speciesText } from './species.js';
 
 export interface SubstituteResult {
   /** The form in hand. */
@@ -91,12 +92,7 @@ export function substituteForm(use: string, instead: string, amount: string, opt
   const a = core(u, options);
   const b = core(i, options);
   const same = a.size === b.size && [...a].every(([k, v]) => b.get(k) === v);
-  if (!same) notes.push({ code: 'FORMS_DIFFER', message: `${u.formula} and ${i.formula} differ by more than water of crystallisation; the substitution keeps equal amounts of formula units` });
+  if (!same) notes.push({ code: 'FORMS_DIFFER', message: `${speciesText(u)} and ${speciesText(i)} differ by more than water of crystallisation; the substitution keeps equal amounts of formula units` });
   notes.unshift(...formulaNotes(u, true), ...formulaNotes(i, true));
   return { use: u, instead: i, asked, moles, purity, pureMass, mass, notes };
-}
-
-/** Non-throwing {@link substituteForm}. */
-export function safeSubstituteForm(use: string, instead: string, amount: string, options: SubstituteOptions = {}): SafeResult<SubstituteResult> {
-  return toSafe(() => substituteForm(use, instead, amount, options));
 }

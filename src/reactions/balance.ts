@@ -10,7 +10,7 @@
  * or by fixing those of chosen species.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail, PondusError } from '../errors/pondus-error.js';
 import { amountText } from '../formula/amount.js';
 import type { ParseOptions } from '../formula-parser/parse.js';
 import { parseEquation, type Equation, type Species } from './equation.js';
@@ -352,14 +352,4 @@ function balanceReduced(eq: Equation, options: BalanceOptions): Balanced {
  */
 export function balance(input: string, options: BalanceOptions = {}): BalanceResult {
   return balanceParsed(parseEquation(input, options), options).result;
-}
-
-/**
- * Non-throwing {@link balance}.
- *
- * @example
- * safeBalance('H2 + O2').success // false (no arrow)
- */
-export function safeBalance(input: string, options: BalanceOptions = {}): SafeResult<BalanceResult> {
-  return toSafe(() => balance(input, options));
 }

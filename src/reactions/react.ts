@@ -6,7 +6,7 @@
  * first reactant given by its own amount. Results are plain data.
  */
 import type { Note } from '../errors/issue.js';
-import { fail, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { fail } from '../errors/pondus-error.js';
 import { AMOUNT, MASS, measureAs } from '../calc/measure.js';
 import { formulaMassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
@@ -226,14 +226,4 @@ export function react(equation: string, options: ReactOptions): ReactResult {
     if (percent.value.gt(100)) notes.push({ code: 'YIELD_OVER_100', message: `a yield over 100 % (${percent.value.toFixed(1)} %): the product may be wet or impure, or an amount is wrong` });
   }
   return { input: equation, balanced: bal.result.balanced, reactants, products, limiting: limiting!.text, extent: amt(extent!, 'mol')!, excess, percentYield, catalysts, balance: bal.result, notes };
-}
-
-/**
- * Non-throwing {@link react}.
- *
- * @example
- * safeReact('H2 + O2 -> H2O', { amounts: [] }).success // false
- */
-export function safeReact(equation: string, options: ReactOptions): SafeResult<ReactResult> {
-  return toSafe(() => react(equation, options));
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { safeCandidateFormulas } from '../../src/empirical/candidates.js';
-import { empirical, safeEmpirical } from '../../src/empirical/empirical-formula.js';
+import { empirical } from '../../src/empirical/empirical-formula.js';
+import { safeCandidateFormulas, safeEmpirical } from '../../src/index.js';
 
 // Every search answers or refuses within about a second (no timing is asserted here: the refusal
 // comes from a count of the work done, so it is the same on any machine).

@@ -1,9 +1,10 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { candidateFormulas, candidateScore, RATIO_RANGES, rdbe, readRanges, safeCandidateFormulas } from '../../src/empirical/candidates.js';
+import { candidateFormulas, candidateScore, RATIO_RANGES, rdbe, readRanges } from '../../src/empirical/candidates.js';
+import { safeCandidateFormulas } from '../../src/index.js';
 import { candidatesJson } from '../../src/empirical/candidates-json.js';
-import { ionMass } from '../../src/ions/ion-mass.js';
-import { formulaMassDetail } from '../../src/mass/formula-mass.js';
+import { ionMassDetail as ionMass } from '../../src/ions/ion-mass.js';
+import { formulaMassDetail, formulaMassDetail as formulaMass } from '../../src/mass/formula-mass.js';
 
 const formulas = (r: ReturnType<typeof candidateFormulas>) => r.candidates.map((c) => c.formula);
 
@@ -205,5 +206,21 @@ describe('candidates: a measured isotope pattern in the score', () => {
 
   it('scores the pattern term as (1 − similarity)/0.1', () => {
     expect(candidateScore(null, 5, null, 0.4, 0.95)).toBeCloseTo(0.5, 12);
+  });
+});
+
+describe('candidates: inorganic formulas are written in electronegativity order', () => {
+  it('names CuCl2 and KH2PO4 as chemists write them, with the Hill formula beside', () => {
+    // source: IUPAC Red Book 2005 IR-4.4.2.1 (electropositive element first); H of an acid salt after the metal (common practice)
+    const cu = candidateFormulas({ mass: formulaMass('CuCl2').monoisotopicMass.toFixed(6), ppm: 2, elements: 'Cu0-1 Cl0-3', ratios: false });
+    expect(cu.candidates.map((c) => [c.formula, c.hill])).toEqual([['CuCl2', 'Cl2Cu']]);
+    const k = candidateFormulas({ mass: formulaMass('KH2PO4').monoisotopicMass.toFixed(6), ppm: 2, elements: 'K0-1 H0-4 P0-1 O0-4', ratios: false });
+    expect(k.candidates.map((c) => [c.formula, c.hill])).toEqual([['KH2PO4', 'H2KO4P']]);
+    expect(candidatesJson(k).candidates[0]).toMatchObject({ formula: 'KH2PO4', hill: 'H2KO4P' });
+  });
+
+  it('keeps Hill order for a formula with carbon', () => {
+    const r = candidateFormulas({ mass: '203.05261', ion: '[M+Na]+', ppm: 3, elements: 'C0-20 H0-40 O0-10' });
+    expect(r.candidates[0]).toMatchObject({ formula: 'C6H12O6', hill: 'C6H12O6', ionFormula: 'C6H12NaO6^+', ionHill: 'C6H12NaO6^+' });
   });
 });

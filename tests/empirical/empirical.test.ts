@@ -2,8 +2,9 @@ import fc from 'fast-check';
 import { errorCode } from '../support/error-code.js';
 import { describe, expect, it } from 'vitest';
 import { candidateFormulas, rdbe } from '../../src/empirical/candidates.js';
-import { combustion } from '../../src/empirical/combustion.js';
-import { empirical, safeEmpirical } from '../../src/empirical/empirical-formula.js';
+import { combustion, combustionDetail } from '../../src/empirical/combustion.js';
+import { empirical, empiricalJson } from '../../src/empirical/empirical-formula.js';
+import { safeEmpirical } from '../../src/index.js';
 import { plausible } from '../../src/empirical/formula-search.js';
 import { composition } from '../../src/composition/element-shares.js';
 import { formulaMassDetail } from '../../src/mass/formula-mass.js';
@@ -33,8 +34,20 @@ describe('empirical formula from measurements', () => {
       const c = composition(f);
       // percents computed exactly and rounded: limits at the data's own precision (--tolerance 0.01)
       const r = empirical(c.elements.map((e) => `${e.symbol}=${e.massPercent.toFixed(2)}`).join(' '), { tolerance: 0.01 });
-      expect(r.empirical).toBe(c.formula);
+      expect(r.hill).toBe(c.formula);
+      // with carbon the written form is the Hill formula; without, IUPAC's electronegativity order
+      if (/^C\d/.test(f)) expect(r.empirical).toBe(c.formula);
     }
+    // source: IUPAC Red Book 2005 IR-4.4.2.1 (electronegativity order), H after the metals, before the non-metals, as in NaHCO3 (common practice)
+    expect(empirical('Na=12.06 B=11.34 H=5.29 O=71.32', { tolerance: 0.01 }).empirical).toBe('Na2H20B4O17');
+  });
+
+  it('writes an inorganic empirical formula in electronegativity order, with the Hill formula beside it', () => {
+    // source: IUPAC Red Book 2005 IR-4.4.2.1; CuCl2 percents computed from CIAAW weights (Cu 47.27, Cl 52.73)
+    const r = empirical('Cu=47.27 Cl=52.73');
+    expect(r.empirical).toBe('CuCl2');
+    expect(r.hill).toBe('Cl2Cu');
+    expect(empiricalJson(r)).toMatchObject({ empirical: 'CuCl2', hill: 'Cl2Cu' });
   });
 
   it('says when the molar mass is not a near-whole multiple, and handles a range', () => {
@@ -86,11 +99,24 @@ describe('combustion analysis', () => {
     // ascorbic acid, C3H4O3: OpenStax Chemistry 2e §3.4, from memory
     const r = combustion({ sample: '1.000 g', collected: { co2: '1.499 g', h2o: '0.4091 g' } });
     expect(r.empirical).toBe('C3H4O3');
-    expect(r.elements.map((e) => [e.symbol, displayQuantity(e.percent).figure, e.byDifference])).toEqual([
+    expect(r.elements.map((e) => [e.symbol, e.percentFigure, e.byDifference])).toEqual([
       ['C', '40.91', false],
       ['H', '4.578', false],
       ['O', '54.5', true],
     ]);
+    expect(r.sample).toBe('1.000 g');
+    expect(r.elements[0].massDisplay).toBe('0.4091 g');
+    // the exact figures of the detail form, as text
+    const d = combustionDetail({ sample: '1.000 g', collected: { co2: '1.499 g', h2o: '0.4091 g' } });
+    expect(r.elements[0].percentExact).toBe(d.elements[0].percent.value.toFixed());
+    expect(displayQuantity(d.elements[0].percent).figure).toBe('40.91');
+  });
+
+  it('is plain data: JSON and structuredClone keep everything', () => {
+    const r = combustion({ sample: '1.000 g', collected: { co2: '1.499 g', h2o: '0.4091 g' } });
+    expect(JSON.parse(JSON.stringify(r))).toEqual(r);
+    expect(structuredClone(r)).toEqual(r);
+    expect(typeof r.elements[0].mass).toBe('number');
   });
 
   it('nitrogen, sulfur and chlorine from their products', () => {

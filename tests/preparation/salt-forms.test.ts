@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { saltFactor } from '../../src/preparation/salt-factor.js';
 import { displayInstruction } from '../../src/sigfig/instruction.js';
-import { formulaMassDetail } from '../../src/mass/formula-mass.js';
+import { formulaMassDetail, formulaMassDetail as formulaMass } from '../../src/mass/formula-mass.js';
 
 describe('salt forms of acidic drugs: parent less H plus the metal', () => {
   it('naproxen sodium: 220 mg carries about 200 mg of naproxen', () => {

@@ -10,6 +10,7 @@ import { displayInstruction, displayResult, instruction, instructionJson, result
 import { saltFactor, type SaltFactorResult } from '../../preparation/salt-factor.js';
 import type { Quantity } from '../../sigfig/quantity.js';
 import { displayMeasured, type RoundingMode } from '../../sigfig/round.js';
+import { speciesText } from '../../preparation/species.js';
 import type { Presenter } from '../output/presenter.js';
 import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
@@ -17,7 +18,7 @@ import { checkDilutePlanOptions, massDilutionPresenter, seriesPresenter, type Di
 import type { SeriesResult } from '../../preparation/dilution-series.js';
 import type { MassDilutionResult } from '../../preparation/mass-dilution.js';
 
-const factorText = (f: ConversionFactor) => `${f.a === 1n ? '' : `${f.a} × `}M(${f.sought.input}) / ${f.b === 1n ? `M(${f.given.input})` : `(${f.b} × M(${f.given.input}))`}`;
+const factorText = (f: ConversionFactor) => `${f.a === 1n ? '' : `${f.a} × `}M(${speciesText(f.sought)}) / ${f.b === 1n ? `M(${speciesText(f.given)})` : `(${f.b} × M(${speciesText(f.given)}))`}`;
 const notesJson = (notes: Note[]) => notes.map((n) => ({ code: n.code, message: n.message }));
 
 /** Text and value helpers for one rounding mode. */
@@ -98,8 +99,10 @@ export function gravimetricPresenter(o: GravimetricCliOptions): Presenter<Gravim
     compute: (analyte) => gravimetric(analyte, o.weighed!, { element: o.element, weighedMass: o.mass, sampleMass: o.sample }),
     json: (r) => ({
       input: r.analyte,
-      analyte: r.factor.sought.formula,
-      weighed: r.factor.given.formula,
+      analyte: speciesText(r.factor.sought),
+      weighed: speciesText(r.factor.given),
+      analyteHill: r.factor.sought.formula,
+      weighedHill: r.factor.given.formula,
       element: r.factor.element,
       factor: r.factor.factor.toNumber(),
       factorDisplay: factor(r.factor),
@@ -109,8 +112,8 @@ export function gravimetricPresenter(o: GravimetricCliOptions): Presenter<Gravim
       massPercentDisplay: r.massPercent ? displayResult(r.massPercent, null, rounding).figure : null,
       notes: notesJson(r.notes),
     }),
-    columns: ['analyte', 'weighed', 'factor', 'analyteMass', 'massPercent'],
-    cells: (r) => [r.factor.sought.formula, r.factor.given.formula, r.factor.factor.toFixed(), r.analyteMass ? displayResult(r.analyteMass, 'g', rounding).figure : '', r.massPercent ? displayResult(r.massPercent, null, rounding).figure : ''],
+    columns: ['analyte', 'weighed', 'factor', 'analyteMass', 'massPercent', 'analyteHill', 'weighedHill'],
+    cells: (r) => [speciesText(r.factor.sought), speciesText(r.factor.given), r.factor.factor.toFixed(), r.analyteMass ? displayResult(r.analyteMass, 'g', rounding).figure : '', r.massPercent ? displayResult(r.massPercent, null, rounding).figure : '', r.factor.sought.formula, r.factor.given.formula],
     block: (r) => {
       const lines = [`gravimetric factor for ${r.factor.sought.input} weighed as ${r.factor.given.input}: ${factorText(r.factor)} = ${factor(r.factor)}`];
       if (r.analyteMass) lines.push(`  ${r.factor.sought.input} in the weighed form: ${text(r.analyteMass, 'g')}`);
@@ -139,8 +142,10 @@ export function basisPresenter(o: BasisCliOptions): Presenter<BasisResult> {
     compute: (from) => convertBasis(from, o.to!, { element: o.element, value: o.value }),
     json: (r) => ({
       input: r.factor.given.input,
-      from: r.factor.given.formula,
-      to: r.factor.sought.formula,
+      from: speciesText(r.factor.given),
+      to: speciesText(r.factor.sought),
+      fromHill: r.factor.given.formula,
+      toHill: r.factor.sought.formula,
       factor: r.factor.factor.toNumber(),
       factorDisplay: factor(r.factor),
       value: text(r.value),
@@ -148,8 +153,8 @@ export function basisPresenter(o: BasisCliOptions): Presenter<BasisResult> {
       convertedDisplay: text(r.converted),
       notes: notesJson(r.notes),
     }),
-    columns: ['from', 'to', 'factor', 'converted'],
-    cells: (r) => [r.factor.given.formula, r.factor.sought.formula, r.factor.factor.toFixed(), r.converted ? text(r.converted) : ''],
+    columns: ['from', 'to', 'factor', 'converted', 'fromHill', 'toHill'],
+    cells: (r) => [speciesText(r.factor.given), speciesText(r.factor.sought), r.factor.factor.toFixed(), r.converted ? text(r.converted) : '', r.factor.given.formula, r.factor.sought.formula],
     block: (r) => {
       const lines = [`${r.factor.given.input} → ${r.factor.sought.input}: × ${factor(r.factor)}   (${factorText(r.factor)})`];
       if (r.converted) lines.push(`  ${text(r.value)} ${r.factor.given.input} = ${text(r.converted)} ${r.factor.sought.input}`);
@@ -177,8 +182,10 @@ export function saltPresenter(o: SaltCliOptions): Presenter<SaltFactorResult> {
     compute: (salt) => saltFactor(salt, o.parent!, { parentMass: o.dose, saltMass: o.saltMass }),
     json: (r) => ({
       input: r.salt.input,
-      salt: r.salt.formula,
-      parent: r.parent.formula,
+      salt: speciesText(r.salt),
+      parent: speciesText(r.parent),
+      saltHill: r.salt.formula,
+      parentHill: r.parent.formula,
       form: r.form,
       metalSalt: r.metalSalt,
       factor: r.factor.toNumber(),
@@ -190,8 +197,8 @@ export function saltPresenter(o: SaltCliOptions): Presenter<SaltFactorResult> {
       notes: notesJson(r.notes),
       caution: DOSE_CAUTION,
     }),
-    columns: ['salt', 'parent', 'factor', 'saltMass', 'parentMass'],
-    cells: (r) => [r.salt.formula, r.parent.formula, r.factor.toFixed(), ins(r.saltMass), text(r.parentMass)],
+    columns: ['salt', 'parent', 'factor', 'saltMass', 'parentMass', 'saltHill', 'parentHill'],
+    cells: (r) => [speciesText(r.salt), speciesText(r.parent), r.factor.toFixed(), ins(r.saltMass), text(r.parentMass), r.salt.formula, r.parent.formula],
     block: (r) => {
       const lines = [`${r.salt.input} / ${r.parent.input}: ${displayMeasured(r.reported, rounding).text} g of salt per g of parent${r.perSalt.eq(1) ? '' : ` (${r.perSalt.toFixed()} parent units per salt unit)`}`];
       if (r.saltMass) lines.push(`  ${o.dose!.trim()} of parent is carried by ${ins(r.saltMass)} of the salt`);

@@ -7,12 +7,11 @@ import { readIonNotation } from '../../ions/read-ion-notation.js';
 import { readPeaks } from '../../empirical/pattern-match.js';
 import { readFound } from '../../analysis/found-values.js';
 import { PondusError } from '../../errors/pondus-error.js';
-import { combustion, PRODUCTS, type CombustionResult } from '../../empirical/combustion.js';
+import { combustion, combustionJson, PRODUCTS, type CombustionResult } from '../../empirical/combustion.js';
 import { empirical, empiricalJson, type EmpiricalResult } from '../../empirical/empirical-formula.js';
 import { readMeasurementSheet, type MeasurementRow } from '../../empirical/measurement-sheet.js';
 import { runWithSheet } from './sheet-runner.js';
 import { hillOrder } from '../../formula/hill.js';
-import { displayQuantity } from '../../sigfig/display-quantity.js';
 import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
@@ -105,33 +104,25 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
   const csvElements = [...Object.keys(collected).map((k) => PRODUCTS[k].element), 'O'];
   return {
     compute: (sample) => {
-      const r = combustion({ sample, collected });
+      const r = combustion({ sample, collected, rounding });
       if (o.unitNote) r.notes.unshift({ code: 'JOINED_ARGUMENTS', message: o.unitNote });
       return r;
     },
-    json: (r) => ({
-      input: r.input,
-      sample: displayQuantity(r.sample, 'g', rounding).text,
-      elements: r.elements.map((e) => ({ symbol: e.symbol, mass: displayQuantity(e.mass, 'g', rounding).value.toNumber(), massDisplay: displayQuantity(e.mass, 'g', rounding).text, percent: e.percent.value.toNumber(), percentDisplay: displayQuantity(e.percent, undefined, rounding).figure, byDifference: e.byDifference })),
-      empirical: r.empirical,
-      residuals: r.fit ? { ...r.fit.residuals } : null,
-      alternatives: r.alternatives.map((a) => a.formula),
-      notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
-    }),
+    json: (r) => combustionJson(r),
     noteItems: (r) => r.notes,
     columns: ['input', 'sample', 'empirical', ...csvElements.flatMap((e) => [`${e}_mass_g`, `${e}_percent`])],
     cells: (r) => [
       r.input,
-      displayQuantity(r.sample, 'g', rounding).text,
+      r.sample,
       r.empirical ?? '',
       ...csvElements.flatMap((s) => {
         const e = r.elements.find((x) => x.symbol === s);
-        return e ? [displayQuantity(e.mass, 'g', rounding).figure, displayQuantity(e.percent, undefined, rounding).figure] : ['', ''];
+        return e ? [e.massFigure, e.percentFigure] : ['', ''];
       }),
     ],
     block: (r) => {
-      const rows = r.elements.map((e) => [e.symbol + (e.byDifference ? ' (by difference)' : ''), displayQuantity(e.mass, 'g', rounding).figure, displayQuantity(e.percent, undefined, rounding).figure]);
-      return [`sample ${displayQuantity(r.sample, 'g', rounding).text}`, fixedTable(['element', 'mass g', 'mass %'], rows, ['left', 'right', 'right']), `empirical formula: ${r.empirical ?? 'none within the limits of the data (see the note)'}`, ...(r.alternatives.length ? [`also within the limits: ${r.alternatives.map((a) => a.formula).join(', ')}`] : [])].join('\n');
+      const rows = r.elements.map((e) => [e.symbol + (e.byDifference ? ' (by difference)' : ''), e.massFigure, e.percentFigure]);
+      return [`sample ${r.sample}`, fixedTable(['element', 'mass g', 'mass %'], rows, ['left', 'right', 'right']), `empirical formula: ${r.empirical ?? 'none within the limits of the data (see the note)'}`, ...(r.alternatives.length ? [`also within the limits: ${r.alternatives.map((a) => a.formula).join(', ')}`] : [])].join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),
   };

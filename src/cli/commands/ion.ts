@@ -11,6 +11,7 @@ import { registerPattern } from './pattern.js';
 import type { CommandRunner } from './runner.js';
 import { runWithSheet, type SheetOptions } from './sheet-runner.js';
 
+import { Decimal } from '../../exact/decimal.js';
 export interface IonCliOptions extends SheetOptions<IonSheetRow> {
   adduct?: string;
   found?: string;
@@ -51,8 +52,8 @@ export function ionPresenter(o: IonCliOptions): Presenter<IonRow> {
   const decimals = o.decimals === undefined ? 4 : Number(o.decimals);
   if (!Number.isInteger(decimals) || decimals < 0 || decimals > 8) throw fail({ code: 'USAGE', message: `--decimals takes a whole number from 0 to 8, not '${o.decimals}'` });
   const opts = { ionisation: o.ionisation ?? 'ESI', decimals, abbreviations: !!o.abbreviations };
-  const ppm = (r: IonResult) => (r.found ? signedFixed(r.found.ppm, 1) : '');
-  const mda = (r: IonResult) => (r.found ? signedFixed(r.found.mDa, 1) : '');
+  const ppm = (r: IonResult) => (r.found ? signedFixed(new Decimal(r.found.ppmExact), 1) : '');
+  const mda = (r: IonResult) => (r.found ? signedFixed(new Decimal(r.found.mDaExact), 1) : '');
   return {
     compute: (input) => {
       const f = fields(input, o);
@@ -61,7 +62,7 @@ export function ionPresenter(o: IonCliOptions): Presenter<IonRow> {
     },
     json: ({ result, id, input }) => ({ ...ionJson(result, id !== null ? { id } : {}), input }),
     columns: ['input', 'id', 'formula', 'ion', 'ionFormula', 'charge', 'mz', 'calculated', 'found', 'errorPpm', 'errorMDa', 'reportLine'],
-    cells: ({ result: r, id, input }) => [input, id ?? '', r.formula, r.notation ?? '', r.ionFormula, r.charge, r.mz.toDecimalPlaces(12).toFixed(), r.calculatedText, r.found?.text ?? '', ppm(r), mda(r), r.reportLine ?? ''],
+    cells: ({ result: r, id, input }) => [input, id ?? '', r.formula, r.notation ?? '', r.ionFormula, r.charge, new Decimal(r.mzExact).toDecimalPlaces(12).toFixed(), r.calculatedText, r.found?.text ?? '', ppm(r), mda(r), r.reportLine ?? ''],
     block: ({ result: r, id }) => {
       const z = `${Math.abs(r.charge)}${r.charge > 0 ? '+' : '-'}`;
       const lines = [`${id ? `${id}: ` : ''}${r.formula}  ${r.notation ?? r.journalNotation}  →  ${r.ionFormula}   m/z ${r.calculatedText}  (charge ${z}${r.oddElectron ? ', odd-electron' : ''})`];

@@ -10,6 +10,7 @@ import type { Presenter } from '../output/presenter.js';
 import { styleFor } from '../output/style.js';
 import { withOutputOptions, type OutputOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
+import { Decimal } from '../../exact/decimal.js';
 
 export interface PatternCliOptions extends OutputOptions {
   adduct?: string;
@@ -89,9 +90,9 @@ export function patternPresenter(o: PatternCliOptions): Presenter<PatternResult>
     },
     json: (r) => ({ ...patternJson(r), input: raw.get(r) ?? r.input }),
     columns: ['input', 'formula', 'ion', 'speciesFormula', 'charge', 'kind', 'resolvingPower', 'coverage', 'monoisotopicMz', 'averageMz', ...peakColumns],
-    cells: (r) => [raw.get(r) ?? r.input, r.formula, r.ion ?? '', r.speciesFormula, r.charge, r.kind, r.resolvingPower ?? '', r.coverage, r.monoisotopicMz.toDecimalPlaces(12).toFixed(), r.averageMz, ...csvPeaks(r)],
+    cells: (r) => [raw.get(r) ?? r.input, r.formula, r.ion ?? '', r.speciesFormula, r.charge, r.kind, r.resolvingPower ?? '', r.coverage, new Decimal(r.monoisotopicMzExact).toDecimalPlaces(12).toFixed(), r.averageMz, ...csvPeaks(r)],
     block: (r) => {
-      const head = `${r.ion ? `${r.ion} of ${r.formula}: ` : ''}${r.speciesFormula}   monoisotopic ${r.charge !== 0 ? 'm/z' : 'mass'} ${r.monoisotopicMz.toFixed(4)}, average ${r.averageMz.toFixed(4)}`;
+      const head = `${r.ion ? `${r.ion} of ${r.formula}: ` : ''}${r.speciesFormula}   monoisotopic ${r.charge !== 0 ? 'm/z' : 'mass'} ${new Decimal(r.monoisotopicMzExact).toFixed(4)}, average ${r.averageMz.toFixed(4)}`;
       return [head, `${describe(r)}; peaks of at least ${r.minRelative} % of the largest`, ...stickPlot(r.peaks, { paint })].join('\n');
     },
     notes: (r) => r.notes.map((n) => n.message),

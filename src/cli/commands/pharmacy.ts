@@ -3,6 +3,7 @@
  * a target or a strength), `osmolarity` (mOsm/L and mEq/L of a solution of
  * salts) and `alligation` (two strengths mixed to a target).
  */
+import { hillAside, speciesText } from '../../preparation/species.js';
 import type { Command } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
 import { alligation, type AlligationResult } from '../../pharmacy/alligation.js';
@@ -40,7 +41,8 @@ export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
     compute: numbered((input) => milliequivalents(input, opts)),
     json: ({ input, r }) => ({
       input,
-      salt: r.salt.formula,
+      salt: speciesText(r.salt),
+      saltHill: r.salt.formula,
       molarMass: r.salt.molarMass.toNumber(),
       mode: r.mode,
       ions: r.ions.ions.map((i) => ({ ion: i.ion, charge: i.charge, count: i.count })),
@@ -65,13 +67,13 @@ export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
       notes: notesJson(r.notes),
       caution: PHARMACY_CAUTION,
     }),
-    columns: strength ? ['input', 'line', 'salt', 'mmol_per_mL', 'mEq_per_mL', 'mEq_per_L', 'mOsm_per_L'] : ['input', 'line', 'salt', 'mass_g', 'mmol', 'mEq', 'mOsm'],
+    columns: strength ? ['input', 'line', 'salt', 'mmol_per_mL', 'mEq_per_mL', 'mEq_per_L', 'mOsm_per_L', 'saltHill'] : ['input', 'line', 'salt', 'mass_g', 'mmol', 'mEq', 'mOsm', 'saltHill'],
     cells: ({ input, line, r }) =>
       strength
-        ? [input, line, r.salt.formula, quantityJson(r.moles, 'M', rounding).reported, quantityJson(r.equivalents, 'M', rounding).reported, quantityJson(r.equivalents, 'mM', rounding).reported, quantityJson(r.osmoles, 'mM', rounding).reported]
-        : [input, line, r.salt.formula, quantityJson(r.mass!, 'g', rounding).reported, quantityJson(r.moles, 'mmol', rounding).reported, quantityJson(r.equivalents, 'mmol', rounding).reported, quantityJson(r.osmoles, 'mmol', rounding).reported],
+        ? [input, line, speciesText(r.salt), quantityJson(r.moles, 'M', rounding).reported, quantityJson(r.equivalents, 'M', rounding).reported, quantityJson(r.equivalents, 'mM', rounding).reported, quantityJson(r.osmoles, 'mM', rounding).reported, r.salt.formula]
+        : [input, line, speciesText(r.salt), quantityJson(r.mass!, 'g', rounding).reported, quantityJson(r.moles, 'mmol', rounding).reported, quantityJson(r.equivalents, 'mmol', rounding).reported, quantityJson(r.osmoles, 'mmol', rounding).reported, r.salt.formula],
     block: ({ input, r }) => {
-      const head = `${input}  (${r.salt.formula}, M = ${displayMolarMass(r.salt)} g/mol): 1 mmol = ${r.ions.equivalentsPerMole} mEq = ${r.ions.particles} mOsm`;
+      const head = `${input}  (${hillAside(r.salt)}M = ${displayMolarMass(r.salt)} g/mol): 1 mmol = ${r.ions.equivalentsPerMole} mEq = ${r.ions.particles} mOsm`;
       const ions = r.perIon.map((i) => `${i.ion} ${strength ? qtext(i.equivalents, 'mM', rounding, 'mEq/L') : qtext(i.equivalents, 'mmol', rounding, 'mEq')}`).join(', ');
       if (r.mode === 'strength') {
         return [head, `  ${o.concentration}: ${qtext(r.moles, 'M', rounding, 'mmol/mL')}, ${qtext(r.equivalents, 'M', rounding, 'mEq/mL')} (${qtext(r.equivalents, 'mM', rounding, 'mEq/L')}), ${qtext(r.osmoles, 'mM', rounding, 'mOsm/L')}`, `  by ion: ${ions}`].join('\n');
@@ -104,7 +106,7 @@ export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityRe
     compute: numbered((input) => osmolarity(input, opts)),
     json: ({ input, r }) => ({
       input,
-      components: r.components.map((c) => ({ salt: c.result.salt.formula, strength: c.strength, mOsmPerL: quantityJson(c.result.osmoles, 'mM', rounding, 'mOsm/L') })),
+      components: r.components.map((c) => ({ salt: speciesText(c.result.salt), saltHill: c.result.salt.formula, strength: c.strength, mOsmPerL: quantityJson(c.result.osmoles, 'mM', rounding, 'mOsm/L') })),
       mOsmPerL: quantityJson(r.osmolarity, 'mM', rounding, 'mOsm/L'),
       ions: r.ions.map((i) => ({ ion: i.ion, charge: i.charge, mmolPerL: quantityJson(i.molarity, 'mM', rounding, 'mmol/L'), meqPerL: quantityJson(i.equivalents, 'mM', rounding, 'mEq/L') })),
       rounding,

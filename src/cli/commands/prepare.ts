@@ -1,3 +1,4 @@
+import { hillAside, speciesText } from '../../preparation/species.js';
 import type { Command } from 'commander';
 import { Option } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
@@ -67,7 +68,8 @@ function solutionJson(r: SolutionResult, o: PrepareCliOptions, rounding: Roundin
     input: r.reagent.input,
     formula: r.reagent.formula,
     molarMass: r.reagent.molarMass.toNumber(),
-    target: r.target.formula,
+    target: r.target.written,
+    targetHill: r.target.formula,
     concentration: o.concentration?.trim() ?? null,
     volume: o.volume?.trim() ?? null,
     purity: r.purity ? displayResult(r.purity, '%', rounding).text : null,
@@ -157,8 +159,8 @@ function oneSolutionPresenter(o: PrepareCliOptions): Presenter<Prepared> {
         const r = p.r;
         const dens = o.density?.trim() ?? `${r.grade!.density} g/mL`;
         const lines = [
-          `${r.reagent.input}  (${r.reagent.formula}, M = ${displayMolarMass(r.reagent)} g/mol), concentrated reagent: ${o.fraction!.trim()}, density ${dens}${r.densitySource === 'table' ? ' (table of common grades)' : ''}`,
-          `  molarity w·ρ/M = ${res(r.molarity, 'M')} (${res(r.massConcentration, 'g/L')} of ${r.reagent.formula}; nominal, from the label values)`,
+          `${r.reagent.input}  (${hillAside(r.reagent)}M = ${displayMolarMass(r.reagent)} g/mol), concentrated reagent: ${o.fraction!.trim()}, density ${dens}${r.densitySource === 'table' ? ' (table of common grades)' : ''}`,
+          `  molarity w·ρ/M = ${res(r.molarity, 'M')} (${res(r.massConcentration, 'g/L')} of ${speciesText(r.reagent)}; nominal, from the label values)`,
         ];
         if (r.take) {
           lines.push(`  for ${o.concentration!.trim()} in ${o.volume!.trim()}: take ${takeText(r)} of the concentrated reagent (measure it by volume; do not weigh the solute)`);
@@ -181,13 +183,13 @@ function oneSolutionPresenter(o: PrepareCliOptions): Presenter<Prepared> {
         return lines.join('\n');
       }
       const r = p.r;
-      const lines = [`${r.reagent.input}  (${r.reagent.formula}, M = ${displayMolarMass(r.reagent)} g/mol)`];
-      const of = r.target.formula !== r.reagent.formula ? ` of ${r.target.formula} (${r.target.perReagent} per formula unit)` : '';
+      const lines = [`${r.reagent.input}  (${hillAside(r.reagent)}M = ${displayMolarMass(r.reagent)} g/mol)`];
+      const of = r.target.formula !== r.reagent.formula ? ` of ${r.target.written} (${r.target.perReagent} per formula unit)` : '';
       if (r.concentration && r.mass) {
         lines.push(`  target: ${o.concentration!.trim()}${of} in ${o.volume!.trim()}`);
         if (r.purityBasis === 'part') {
-          lines.push(`  amount of ${r.target.formula}: ${w(r.targetMoles!, 'mol')}; mass of ${r.target.formula} ${wm(r.pureMass!)}`);
-          lines.push(`  content of ${r.target.formula} ${res(r.purity!, '%')} (potency): ${wm(r.pureMass!)} ÷ ${res(r.purity!, '%')}`);
+          lines.push(`  amount of ${r.target.written}: ${w(r.targetMoles!, 'mol')}; mass of ${r.target.written} ${wm(r.pureMass!)}`);
+          lines.push(`  content of ${r.target.written} ${res(r.purity!, '%')} (potency): ${wm(r.pureMass!)} ÷ ${res(r.purity!, '%')}`);
         } else {
           lines.push(`  amount of ${r.reagent.input}: ${w(r.moles!, 'mol')}; pure mass ${wm(r.pureMass!)}`);
           if (r.purity) lines.push(`  assay ${res(r.purity, '%')}: ${wm(r.pureMass!)} ÷ ${res(r.purity, '%')}`);
@@ -195,7 +197,7 @@ function oneSolutionPresenter(o: PrepareCliOptions): Presenter<Prepared> {
         lines.push(`  weigh ${wm(r.mass)} of ${r.reagent.input}, dissolve, and make up to ${o.volume!.trim()}`);
       }
       if (r.made && r.weighed) {
-        lines.push(`  made: ${o.weighed!.trim()} of ${r.reagent.input}${r.purity ? ` (assay ${o.purity!.trim()})` : ''} in ${o.volume!.trim()} gives ${res(r.made, r.unit)}${r.made && of ? ` of ${r.target.formula}` : ''}`);
+        lines.push(`  made: ${o.weighed!.trim()} of ${r.reagent.input}${r.purity ? ` (assay ${o.purity!.trim()})` : ''} in ${o.volume!.trim()} gives ${res(r.made, r.unit)}${r.made && of ? ` of ${r.target.written}` : ''}`);
       }
       return lines.join('\n');
     },

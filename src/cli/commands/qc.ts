@@ -5,6 +5,7 @@
  * `replicates` (mean, SD, RSD, confidence interval).
  */
 import { displayMeasured } from '../../sigfig/round.js';
+import { hillAside } from '../../preparation/species.js';
 import type { Command } from 'commander';
 import type { Note } from '../../errors/issue.js';
 import { fail } from '../../errors/pondus-error.js';
@@ -155,7 +156,7 @@ export function titrationPresenter(o: TitrationCli): RowPresenter<Titration> {
       return [input, line, r.t.analyte.formula, r.t.kind, r.t.ratio.text, quantityJson(r.t.moles, 'mmol', rounding).reported, a.value, a.reported, r.rep.basis, b.value, b.reported, r.rep.spec ? `${r.rep.spec.limits.low}-${r.rep.spec.limits.high}` : '', r.rep.spec ? (r.rep.spec.complies ? 'yes' : 'no') : ''];
     },
     block: ({ input, r: { t, rep } }) => {
-      const lines = [`${input}  (${t.analyte.formula}, M = ${displayMolarMass(t.analyte)} g/mol), ${t.kind === 'back' ? 'back-titration' : 'direct titration'}`];
+      const lines = [`${input}  (${hillAside(t.analyte)}M = ${displayMolarMass(t.analyte)} g/mol), ${t.kind === 'back' ? 'back-titration' : 'direct titration'}`];
       if (t.kind === 'direct') {
         lines.push(`  ${qtext(t.titrant, 'M', rounding)} × ${qtext(t.netTitre, 'mL', rounding)}${t.blank ? ` (titre ${qtext(t.titre, 'mL', rounding)} − blank ${qtext(t.blank, 'mL', rounding)})` : ''} × ${t.ratio.text} = ${qtext(t.moles, 'mmol', rounding)} of ${input}`);
       } else if (t.added) {
@@ -212,7 +213,7 @@ export function standardisePresenter(o: StandardiseCli): RowPresenter<Standardis
     },
     block: ({ input, r }) =>
       [
-        `${input}  (${r.standard.formula}, M = ${displayMolarMass(r.standard)} g/mol) as primary standard`,
+        `${input}  (${hillAside(r.standard)}M = ${displayMolarMass(r.standard)} g/mol) as primary standard`,
         `  ${qtext(r.mass, 'g', rounding)}${r.purity ? ` × ${qtext(r.purity, '%', rounding)}` : ''} ÷ M = ${qtext(r.moles, 'mmol', rounding)} of standard; mol titrant = mol standard × ${r.ratio.second}/${r.ratio.first}`,
         `  titre ${qtext(r.netTitre, 'mL', rounding)}${r.blank ? ` (blank ${qtext(r.blank, 'mL', rounding)} subtracted)` : ''}: titrant molarity ${qtext(r.molarity, 'M', rounding)}`,
       ].join('\n'),
