@@ -14,7 +14,7 @@ import { fail, PondusError } from '../errors/pondus-error.js';
 import { amountText } from '../formula/amount.js';
 import type { ParseOptions } from '../formula-parser/parse.js';
 import { parseEquation, type Equation, type Species } from './equation.js';
-import { nullSpace, Rational, smallestIntegers } from './rational.js';
+import { nullSpace, Rational, reducedRowEchelon, smallestIntegers } from './rational.js';
 
 /** Coefficients fixed by the user: `'written'` (those written in the equation) or species → coefficient text. */
 export type FixedCoefficients = 'written' | Readonly<Record<string, string | number>>;
@@ -145,24 +145,8 @@ function solveFixed(basis: Rational[][], fixed: Map<number, Rational>): { c: Rat
   const k = basis.length;
   const idx = [...fixed.keys()];
   // augmented system: rows = fixed species, columns = a_1..a_k | value
-  const m = idx.map((i) => [...basis.map((v) => v[i]), fixed.get(i)!]);
-  const pivots: number[] = [];
-  let r = 0;
-  for (let c = 0; c < k && r < m.length; c++) {
-    let p = r;
-    while (p < m.length && m[p][c].isZero()) p++;
-    if (p === m.length) continue;
-    [m[r], m[p]] = [m[p], m[r]];
-    const inv = Rational.ONE.div(m[r][c]);
-    m[r] = m[r].map((x) => x.times(inv));
-    for (let i = 0; i < m.length; i++) {
-      if (i === r || m[i][c].isZero()) continue;
-      const f = m[i][c];
-      m[i] = m[i].map((x, j) => x.minus(f.times(m[r][j])));
-    }
-    pivots.push(c);
-    r++;
-  }
+  const { m, pivots } = reducedRowEchelon(idx.map((i) => [...basis.map((v) => v[i]), fixed.get(i)!]), k);
+  const r = pivots.length;
   for (let i = r; i < m.length; i++) if (!m[i][k].isZero()) return { inconsistent: true };
   if (pivots.length < k) return { free: k - pivots.length };
   const a = new Array<Rational>(k).fill(Rational.ZERO);

@@ -113,17 +113,17 @@ export function lcm(a: bigint, b: bigint): bigint {
 }
 
 /**
- * A basis of the null space of a rational matrix (rows × columns), by reduction
- * to reduced row echelon form. Each basis vector has one free column set to 1.
+ * Gauss–Jordan elimination over the rationals: the reduced row-echelon form of a copy of the matrix,
+ * reduced over its first `columns` columns, and the pivot column of each leading row.
  *
+ * @param matrix the rows (not changed)
+ * @param columns how many leading columns to reduce (later columns, such as an augmented one, follow)
+ * @returns the reduced rows and the pivot columns, in row order
  * @example
  * const r = (n) => Rational.of(BigInt(n))
- * nullSpace([[r(2), r(0), r(-2)], [r(0), r(2), r(-1)]], 3).map((v) => v.map(String)) // [['1', '1/2', '1']]
+ * reducedRowEchelon([[r(2), r(4)], [r(1), r(3)]], 2).pivots // [0, 1]
  */
-export function nullSpace(matrix: Rational[][], columns: number): Rational[][] {
-  if (!Array.isArray(matrix) || !Number.isSafeInteger(columns) || columns < 0 || matrix.some((row) => !Array.isArray(row) || row.length < columns || row.slice(0, columns).some((x) => !(x instanceof Rational)))) {
-    throw fail({ code: 'BAD_NUMBER', message: `a null space needs a matrix of fractions with ${columns} columns` });
-  }
+export function reducedRowEchelon(matrix: readonly Rational[][], columns: number): { m: Rational[][]; pivots: number[] } {
   const m = matrix.map((row) => [...row]);
   const pivots: number[] = [];
   let r = 0;
@@ -142,6 +142,22 @@ export function nullSpace(matrix: Rational[][], columns: number): Rational[][] {
     pivots.push(c);
     r++;
   }
+  return { m, pivots };
+}
+
+/**
+ * A basis of the null space of a rational matrix (rows × columns), by reduction
+ * to reduced row echelon form. Each basis vector has one free column set to 1.
+ *
+ * @example
+ * const r = (n) => Rational.of(BigInt(n))
+ * nullSpace([[r(2), r(0), r(-2)], [r(0), r(2), r(-1)]], 3).map((v) => v.map(String)) // [['1', '1/2', '1']]
+ */
+export function nullSpace(matrix: Rational[][], columns: number): Rational[][] {
+  if (!Array.isArray(matrix) || !Number.isSafeInteger(columns) || columns < 0 || matrix.some((row) => !Array.isArray(row) || row.length < columns || row.slice(0, columns).some((x) => !(x instanceof Rational)))) {
+    throw fail({ code: 'BAD_NUMBER', message: `a null space needs a matrix of fractions with ${columns} columns` });
+  }
+  const { m, pivots } = reducedRowEchelon(matrix, columns);
   const free: number[] = [];
   for (let c = 0; c < columns; c++) if (!pivots.includes(c)) free.push(c);
   return free.map((f) => {

@@ -11,34 +11,10 @@ import { describe, expect, it } from 'vitest';
 import { HELP_EXAMPLES } from '../../src/cli/help-examples.js';
 import { EXIT_STATUS } from '../../src/cli/completion.js';
 import { colorLevel } from '../../src/cli/output/style.js';
+import { listedCommands, shellWords } from '../support/command-lines.js';
 import { pondus, pondusProcess } from '../cli/run-cli.js';
 
-/** The words of a command line written with single quotes, as a POSIX shell splits them; stops at a redirection. */
-function shellWords(line: string): string[] {
-  const words: string[] = [];
-  let word: string | null = null;
-  for (let i = 0; i < line.length; i++) {
-    const c = line[i];
-    if (c === "'") {
-      const end = line.indexOf("'", i + 1);
-      word = (word ?? '') + line.slice(i + 1, end);
-      i = end;
-    } else if (c === ' ') {
-      if (word !== null) words.push(word);
-      word = null;
-    } else if ((c === '>' || c === '|' || c === '&') && word === null) {
-      break;
-    } else word = (word ?? '') + c;
-  }
-  if (word !== null) words.push(word);
-  return words;
-}
-
-const commandNames = (() => {
-  const help = pondus(['--help']).stdout;
-  const block = help.slice(help.indexOf('Commands:'));
-  return [...block.matchAll(/^ {2}([a-z][a-z-]*)/gm)].map((m) => m[1]).filter((n) => n !== 'help');
-})();
+const commandNames = listedCommands(new Set(['help']));
 
 describe('exit statuses: 0 all good, 1 some input failed, 2 usage', () => {
   it('the table has the three statuses', () => {

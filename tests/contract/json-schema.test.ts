@@ -9,6 +9,7 @@ import { Ajv2020, type ValidateFunction } from 'ajv/dist/2020.js';
 import { afterAll, describe, expect, it } from 'vitest';
 import { HELP_EXAMPLES } from '../../src/cli/help-examples.js';
 import { PRESENTERS } from '../../src/cli/commands/registry.js';
+import { listedCommands, shellWords } from '../support/command-lines.js';
 import { pondus } from '../cli/run-cli.js';
 
 const SCHEMAS = fileURLToPath(new URL('../../schemas/', import.meta.url));
@@ -16,32 +17,7 @@ const ROOT = fileURLToPath(new URL('../../', import.meta.url));
 /** Commands that print no result rows (no --json). */
 const NO_ROWS = new Set(['help', 'completion', 'manual']);
 
-/** The words of a command line written with single quotes, as a POSIX shell splits them; stops at a redirection. */
-function shellWords(line: string): string[] {
-  const words: string[] = [];
-  let word: string | null = null;
-  for (let i = 0; i < line.length; i++) {
-    const c = line[i];
-    if (c === "'") {
-      const end = line.indexOf("'", i + 1);
-      word = (word ?? '') + line.slice(i + 1, end);
-      i = end;
-    } else if (c === ' ') {
-      if (word !== null) words.push(word);
-      word = null;
-    } else if ((c === '>' || c === '|' || c === '&') && word === null) {
-      break;
-    } else word = (word ?? '') + c;
-  }
-  if (word !== null) words.push(word);
-  return words;
-}
-
-const commandNames = (() => {
-  const help = pondus(['--help']).stdout;
-  const block = help.slice(help.indexOf('Commands:'));
-  return [...block.matchAll(/^ {2}([a-z][a-z-]*)/gm)].map((m) => m[1]).filter((n) => !NO_ROWS.has(n));
-})();
+const commandNames = listedCommands(NO_ROWS);
 
 const ajv = new Ajv2020({ allErrors: true, strict: true });
 ajv.addSchema(JSON.parse(readFileSync(`${SCHEMAS}common.schema.json`, 'utf8')));
