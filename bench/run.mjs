@@ -40,7 +40,7 @@ const startCommands = quick
   : [
       ['mass', 'H2O'], ['composition', 'H2O'], ['calc', '2.00 g / 4.0 mL'], ['balance', 'H2 + O2 -> H2O'],
       ['analysis', 'C6H12O6', '--found', 'C=40.00,H=6.71'], ['empirical', 'C=40.00 H=6.71 O=53.29'],
-      ['prepare', 'NaCl', '--conc', '0.100 M', '--volume', '250 mL'], ['--version'], ['--help'],
+      ['prepare', 'NaCl', '--concentration', '0.100 M', '--volume', '250.0 mL'], ['--version'], ['--help'],
     ];
 timeSpawn([bin, 'mass', 'H2O']); // warm the file cache
 const node0 = [];
