@@ -115,7 +115,7 @@ export function parseEquation(input: string, options: ParseOptions = {}): Equati
         const shift = columnOf(input, offset) - 1;
         for (const n of tree.notes) {
           if (n.code === 'STATE_SYMBOL') states.add(body.slice(body.lastIndexOf('(')));
-          else notes.push({ ...n, message: `${body}: ${n.message}`, ...(n.column !== undefined ? { column: n.column + shift } : {}) });
+          else if (!notes.some((m) => m.code === n.code && m.message === `${body}: ${n.message}`)) notes.push({ ...n, message: `${body}: ${n.message}`, ...(n.column !== undefined ? { column: n.column + shift } : {}) }); // a species written twice is read once
         }
         const atoms = flattenFormula(tree);
         return { text: body, formula: hillFormula(atoms, tree.charge), atoms, charge: tree.charge, side: which, start: offset, written };

@@ -207,3 +207,15 @@ describe('catalysts', () => {
     expect(errorCode(() => balance('C2H4O2 + C2H6O -> C4H8O2 + H2O', { catalysts: ['Pd'] }))).toBe('BAD_OPTION');
   });
 });
+
+describe('a Suzuki coupling written in full', () => {
+  // the equation as a synthesis chemist writes it (from memory), the catalyst on both sides
+  const eq = 'C7H7BrO + C6H7BO2 + K2CO3 + H2O + Pd(PPh3)4 -> C13H12O + KBr + B(OH)3 + KHCO3 + Pd(PPh3)4';
+  it('balances as written, with the catalyst set aside and its reading noted once', () => {
+    const r = balance(eq);
+    expect(r.coefficients).toEqual([1, 1, 1, 1, 1, 1, 1, 1]);
+    expect(r.balancedAsWritten).toBe(true);
+    expect(r.catalysts).toEqual(['Pd(PPh3)4']);
+    expect(r.notes.filter((n) => n.code === 'ABBREVIATION')).toHaveLength(1);
+  });
+});
