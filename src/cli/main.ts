@@ -23,7 +23,7 @@ import { registerQc } from './commands/qc.js';
 import { registerPharmacy } from './commands/pharmacy.js';
 import { registerIonCommands } from './commands/ion.js';
 import type { CommandRunner } from './commands/runner.js';
-import { PRESENTERS } from './commands/registry.js';
+import { presenterOf } from './commands/registry.js';
 import { fixedBatch, inputBatches } from './input/inputs.js';
 import { Sink } from './output/sink.js';
 import { visibleControls } from './output/format.js';
@@ -57,7 +57,7 @@ export async function main(args: string[], io: CliIo): Promise<number> {
   let status = 0;
 
   const run: CommandRunner = async (command, inputs, options, lineNumbers, source) => {
-    const presenter = PRESENTERS[command](options);
+    const presenter = presenterOf(command, options);
     const format = outputFormat(options);
     if (inputs.length === 0 && !source) {
       throw new PondusError([{ code: 'USAGE', message: 'no inputs: give them as arguments, or - to read one per line from standard input' }]);

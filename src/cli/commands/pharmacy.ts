@@ -25,7 +25,7 @@ import type { CommandRunner } from './runner.js';
 
 // --- meq --------------------------------------------------------------------------
 
-interface MeqCli extends FormulaOptions, Pick<MilliequivalentOptions, 'mass' | 'meq' | 'mmol' | 'concentration' | 'measured' | 'ions'> {
+export interface MeqCli extends FormulaOptions, Pick<MilliequivalentOptions, 'mass' | 'meq' | 'mmol' | 'concentration' | 'measured' | 'ions'> {
   rounding?: RoundingMode;
 }
 
@@ -93,7 +93,7 @@ export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
 
 const TABLE_IONS = [...CATIONS, ...ANIONS].map((i) => i.formula);
 
-interface OsmolarityCli extends FormulaOptions {
+export interface OsmolarityCli extends FormulaOptions {
   measured?: boolean;
   rounding?: RoundingMode;
 }
@@ -139,7 +139,7 @@ export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityRe
 
 // --- alligation -------------------------------------------------------------------
 
-interface AlligationCli extends OutputOptions {
+export interface AlligationCli extends OutputOptions {
   higher?: string;
   lower?: string;
   total?: string;
@@ -207,7 +207,7 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
 
 // --- potency ---------------------------------------------------------------------
 
-interface PotencyCli extends OutputOptions, Pick<PotencyOptions, 'water' | 'loss' | 'solvent' | 'need'> {
+export interface PotencyCli extends OutputOptions, Pick<PotencyOptions, 'water' | 'loss' | 'solvent' | 'need'> {
   basis?: string;
   rounding?: RoundingMode;
 }
@@ -249,7 +249,7 @@ export function potencyPresenter(o: PotencyCli): RowPresenter<PotencyResult> {
 
 // --- strength (ratio strength, % w/v, mg/mL, mg/dL, % w/w, mg/kg) ------------------
 
-interface StrengthCli extends OutputOptions {
+export interface StrengthCli extends OutputOptions {
   rounding?: RoundingMode;
 }
 

@@ -35,7 +35,7 @@ interface BasisCli {
 }
 
 /** The basis a result is reported on, the content it needs, and the check against limits. */
-interface Reported {
+export interface Reported {
   basis: SampleBasis;
   conversion: BasisConversion | null;
   value: Quantity;
@@ -101,7 +101,7 @@ const verdict = (s: SpecificationCheck, basis: SampleBasis) => `specification ${
 
 // --- titration ------------------------------------------------------------------
 
-interface TitrationCli extends FormulaOptions, BasisCli {
+export interface TitrationCli extends FormulaOptions, BasisCli {
   sample?: string;
   titrant?: string;
   volume?: string;
@@ -177,7 +177,7 @@ export function titrationPresenter(o: TitrationCli): RowPresenter<Titration> {
 
 // --- standardise ------------------------------------------------------------------
 
-interface StandardiseCli extends FormulaOptions {
+export interface StandardiseCli extends FormulaOptions {
   mass?: string;
   volume?: string;
   blank?: string;
@@ -225,7 +225,7 @@ export function standardisePresenter(o: StandardiseCli): RowPresenter<Standardis
 
 // --- sample-basis -----------------------------------------------------------------
 
-interface SampleBasisCli extends OutputOptions, BasisCli {
+export interface SampleBasisCli extends OutputOptions, BasisCli {
   from?: string;
   to?: string;
 }
@@ -279,7 +279,7 @@ export function sampleBasisPresenter(o: SampleBasisCli): RowPresenter<BasisRow> 
 
 // --- replicates -----------------------------------------------------------------
 
-interface ReplicatesCli extends OutputOptions {
+export interface ReplicatesCli extends OutputOptions {
   level?: string;
   rounding?: RoundingMode;
 }

@@ -18,10 +18,7 @@ import { PHARMACY_PRESENTERS } from './pharmacy.js';
 import { ionPresenter } from './ion.js';
 import { patternPresenter } from './pattern.js';
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
-type Factory = (options: any) => Presenter<any>;
-
-export const PRESENTERS: Readonly<Record<string, Factory>> = Object.freeze({
+export const PRESENTERS = Object.freeze({
   mass: massPresenter,
   composition: compositionPresenter,
   calc: calcPresenter,
@@ -42,3 +39,19 @@ export const PRESENTERS: Readonly<Record<string, Factory>> = Object.freeze({
   ion: ionPresenter,
   pattern: patternPresenter,
 });
+
+/** The name of a command that prints results. */
+export type CommandName = keyof typeof PRESENTERS;
+/** The options the named command's presenter takes. */
+export type CommandOptions<K extends CommandName> = Parameters<(typeof PRESENTERS)[K]>[0];
+
+/**
+ * The presenter of the named command for its options: the one place the name is looked up, typed
+ * by the name so a command cannot be run with another's options.
+ *
+ * @example
+ * presenterOf('mass', {}).columns[0] // 'input'
+ */
+export function presenterOf<K extends CommandName>(command: K, options: CommandOptions<K>): Presenter<unknown> {
+  return (PRESENTERS[command] as (o: CommandOptions<K>) => Presenter<unknown>)(options);
+}

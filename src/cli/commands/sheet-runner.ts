@@ -3,6 +3,7 @@ import type { InputItem } from '../input/inputs.js';
 import { openSheet, sheetRecords, type SheetRecord } from '../input/sheet-file.js';
 import type { OutputOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
+import type { CommandName, CommandOptions } from './registry.js';
 
 /** Options of a command that can read a sheet: the rows end up keyed by their raw text. */
 export interface SheetOptions<Row> extends OutputOptions {
@@ -22,9 +23,9 @@ export interface SheetOptions<Row> extends OutputOptions {
  * @example
  * await runWithSheet(run, 'analysis', formulas, o, stdin, readSheet)
  */
-export async function runWithSheet<Row extends { raw: string; line: number }, O extends SheetOptions<Row>>(
+export async function runWithSheet<Row extends { raw: string; line: number }, K extends CommandName, O extends SheetOptions<Row> & CommandOptions<K>>(
   run: CommandRunner,
-  command: string,
+  command: K,
   inputs: string[],
   options: O,
   stdin: () => AsyncIterable<string | Buffer>,
