@@ -23,7 +23,8 @@ export interface CommonName {
 const CP = 'common practice';
 
 /**
- * Common names by lower-case spelling.
+ * Common names by lower-case spelling, besides the solvent and reagent names of
+ * `formula-parser/names.ts`, which are not typed again here.
  *
  * @example
  * COMMON_NAMES['n-buli'].formula // 'C4H9Li'
@@ -41,23 +42,18 @@ export const COMMON_NAMES: Readonly<Record<string, CommonName>> = Object.freeze(
   'lah': { formula: 'AlH4Li', name: 'lithium aluminium hydride', source: CP, hazard: 'water-reactive' },
   'dibal-h': { formula: 'C8H19Al', name: 'diisobutylaluminium hydride', source: CP, hazard: 'pyrophoric' },
   'acetic anhydride': { formula: 'C4H6O3', name: 'acetic anhydride', source: CP },
-  'acetic acid': { formula: 'C2H4O2', name: 'acetic acid', source: CP },
   'salicylic acid': { formula: 'C7H6O3', name: '2-hydroxybenzoic acid', source: CP },
   'aspirin': { formula: 'C9H8O4', name: 'acetylsalicylic acid', source: CP },
   'acetylsalicylic acid': { formula: 'C9H8O4', name: 'acetylsalicylic acid', source: CP },
   'glucose': { formula: 'C6H12O6', name: 'D-glucose', source: CP },
-  'triethylamine': { formula: 'C6H15N', name: 'triethylamine', source: CP },
-  'pyridine': { formula: 'C5H5N', name: 'pyridine', source: CP },
   'benzaldehyde': { formula: 'C7H6O', name: 'benzaldehyde', source: CP },
   'bromobenzene': { formula: 'C6H5Br', name: 'bromobenzene', source: CP },
   '4-bromoanisole': { formula: 'C7H7BrO', name: '1-bromo-4-methoxybenzene', source: CP },
   'phenylboronic acid': { formula: 'C6H7BO2', name: 'phenylboronic acid', source: CP },
   'potassium carbonate': { formula: 'K2CO3', name: 'potassium carbonate', source: CP },
   'sodium borohydride': { formula: 'BH4Na', name: 'sodium borohydride', source: CP, hazard: 'water-reactive' },
-  'sulfuric acid': { formula: 'H2SO4', name: 'sulfuric acid', source: CP, hazard: 'concentrated-acid' },
   'hydrochloric acid': { formula: 'HCl', name: 'hydrochloric acid', source: CP, hazard: 'concentrated-acid' },
   'nitric acid': { formula: 'HNO3', name: 'nitric acid', source: CP, hazard: 'concentrated-acid' },
-  'toluene': { formula: 'C7H8', name: 'toluene', source: CP },
   'hexanes': { formula: 'C6H14', name: 'hexanes (as n-hexane)', source: CP },
 });
 
