@@ -2,27 +2,13 @@
  * The one JSON form of a reagent-table row (what `pondus reagents --json` prints, one line per row).
  */
 import type { Note } from '../errors/issue.js';
-import type { ReagentRow, TableAmount } from './table.js';
+import type { ReagentRow } from './table.js';
 
-/** The JSON row of a reagent-table row. */
-export interface ReagentRowJson {
-  input: string;
-  role: ReagentRow['role'];
-  reagent: string;
-  formula: string;
-  name: string | null;
-  molarMass: number | null;
-  molarMassDisplay: string;
-  equiv: number | null;
-  equivDisplay: string;
-  amount: TableAmount | null;
-  mass: TableAmount | null;
-  volume: TableAmount | null;
-  percentYield: TableAmount | null;
+/** The JSON row of a reagent-table row: the row's own fields, its written cells as `written`, and notes without columns. */
+export type ReagentRowJson = Omit<ReagentRow, 'spec' | 'notes'> & {
   written: ReagentRow['spec'];
-  hazard: ReagentRow['hazard'];
   notes: { code: string; message: string }[];
-}
+};
 
 const noteJson = (n: Note) => ({ code: n.code, message: n.message });
 
