@@ -54,6 +54,11 @@ export async function runBatch<R>(p: Presenter<R>, batches: AsyncIterable<InputI
  */
 export function processItems<R>(p: Presenter<R>, items: InputItem[], writer: ResultWriter<R>, summary: BatchSummary): void {
   const row = writer.okRow && p.jsonRow && !p.tally ? p.jsonRow : null;
+  const failed = (item: InputItem, e: unknown) => {
+    summary.failed++;
+    if (summary.failedLines.length < 10) summary.failedLines.push(item.line);
+    writer.fail(item, asPondusError(e, item.text));
+  };
   for (const item of items) {
     summary.total++;
     if (row) {
@@ -61,9 +66,7 @@ export function processItems<R>(p: Presenter<R>, items: InputItem[], writer: Res
       try {
         text = row(item.text, item.line);
       } catch (e) {
-        summary.failed++;
-        if (summary.failedLines.length < 10) summary.failedLines.push(item.line);
-        writer.fail(item, asPondusError(e, item.text));
+        failed(item, e);
         continue;
       }
       writer.okRow!(text);
@@ -73,9 +76,7 @@ export function processItems<R>(p: Presenter<R>, items: InputItem[], writer: Res
     try {
       result = p.compute(item.text);
     } catch (e) {
-      summary.failed++;
-      if (summary.failedLines.length < 10) summary.failedLines.push(item.line);
-      writer.fail(item, asPondusError(e, item.text));
+      failed(item, e);
       continue;
     }
     if (p.tally?.count(result)) summary.tallied++;
