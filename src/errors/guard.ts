@@ -1,21 +1,79 @@
 import { Decimal } from '../exact/decimal.js';
+import { getAtomData } from '../elements/atom-data.js';
 import { PondusError, toSafe, type SafeResult } from './pondus-error.js';
+
+/**
+ * The shapes of the library's own values and of the options objects with required fields, as the
+ * boundary checks them: a few top-level fields each, never a walk of a value's inner arrays, so a
+ * check costs the same for a formula of two atoms as for a result of thousands of peaks. A field
+ * kind is one of `text`, `number`, `boolean`, `array`, `object` (non-null), `decimal`, `map`,
+ * `function`, another shape's name, or one of those with `|null` (null accepted) or `?` (absent
+ * accepted).
+ */
+const SHAPES = {
+  parsed: { name: 'a parsed formula (from parseFormula)', fields: { components: 'array' } },
+  massResult: { name: 'a mass result (from formulaMass)', fields: { input: 'text', formula: 'text', molarMass: 'number', molarMassExact: 'text', monoisotopicMass: 'number', monoisotopicMassExact: 'text', charge: 'number', notes: 'array' } },
+  // the detail's Decimal values are getters computed on first use: the check reads plain fields only
+  massDetail: { name: 'a detailed mass result (from formulaMassDetail)', fields: { input: 'text', molarMassNumber: 'function', vector: 'object', tree: 'parsed', notes: 'array' } },
+  compositionResult: { name: 'a composition result (from composition)', fields: { input: 'text', formula: 'text', molarMass: 'number', molarMassExact: 'text', elements: 'array', part: 'object|null', notes: 'array' } },
+  measured: { name: 'a Measured (a Decimal value with its precision)', fields: { value: 'decimal', lsd: 'number|null', sigFigs: 'number?' } },
+  quantity: { name: 'a Quantity (from measure or quantity)', fields: { value: 'decimal', lsd: 'number|null', sigFigs: 'number?', dims: 'array', unit: 'unitObject|null', grad: 'map' } },
+  unitObject: { name: 'a unit (from unitOf)', fields: { symbol: 'text', exp10: 'number', dims: 'array' } },
+  instruction: { name: 'an instruction (a mass to weigh, a volume to take)', fields: { quantity: 'quantity', inputs: 'array', textbookSigFigs: 'number|null' } },
+  calcResult: { name: 'a calculator result (from calc)', fields: { input: 'text', value: 'decimal', rounded: 'decimal', display: 'text', unit: 'text', uncertainty: 'decimal|null', notes: 'array' } },
+  mixtureResult: { name: 'a mixture result (from mixtureComposition)', fields: { input: 'text', total: 'measured', components: 'array', elements: 'array', unaccounted: 'object|null', notes: 'array' } },
+  analysisResult: { name: 'an analysis result (from analysis)', fields: { input: 'text', formula: 'text', calculated: 'object', found: 'object', deviation: 'object', fits: 'array', continuous: 'array', notes: 'array' } },
+  equation: { name: 'a parsed equation (from parseEquation)', fields: { input: 'text', reactants: 'array', products: 'array', catalysts: 'array', notes: 'array' } },
+  balanceResult: { name: 'a balance result (from balance)', fields: { input: 'text', balanced: 'text', species: 'array', coefficients: 'array', exactCoefficients: 'array', basis: 'array', catalysts: 'array', notes: 'array' } },
+  reactResult: { name: 'a reaction result (from react)', fields: { input: 'text', balanced: 'text', balance: 'balanceResult', extent: 'object', reactants: 'array', products: 'array', excess: 'array', catalysts: 'array', percentYield: 'object|null', notes: 'array' } },
+  reagentRow: { name: 'a reagent-table row (from reagentTable)', fields: { input: 'text', role: 'text', spec: 'object', amount: 'object|null', mass: 'object|null', volume: 'object|null', percentYield: 'object|null', notes: 'array' } },
+  measurements: { name: 'measurements (from readMeasurements)', fields: { kind: 'text', elements: 'array' } },
+  empiricalResult: { name: 'an empirical-formula result (from empirical)', fields: { input: 'text', fit: 'object', alternatives: 'array', percents: 'object', limits: 'object', conversions: 'array', notes: 'array' } },
+  candidateResult: { name: 'a candidate-formula result (from candidateFormulas)', fields: { input: 'text', ratios: 'object', candidates: 'array', notes: 'array' } },
+  patternResult: { name: 'an isotope pattern (from isotopePattern)', fields: { input: 'text', charge: 'number', peaks: 'array', allPeaks: 'array', notes: 'array' } },
+  peak: { name: 'a peak of an isotope pattern', fields: { mz: 'number', abundance: 'number', relative: 'number', shift: 'number' } },
+  atomIsotopes: { name: 'the isotopes of an atom (from atomIsotopes)', fields: { massNumbers: 'array', masses: 'array', fractions: 'array' } },
+  // options objects with required fields (each an options object too: weights and rounding are checked)
+  titrationOptions: {
+    name: 'titration options ({ sample, titrant, volume })',
+    fields: { sample: 'text', titrant: 'text', volume: 'text' },
+    options: { sample: "a string, the mass of sample taken ('0.5012 g')", titrant: "a string, the molarity of the titrant ('0.1000 M')", volume: "a string, the titre ('24.85 mL')" },
+  },
+  standardiseOptions: {
+    name: 'standardisation options ({ mass, volume })',
+    fields: { mass: 'text', volume: 'text' },
+    options: { mass: "a string, the mass of primary standard weighed ('0.5105 g')", volume: "a string, the titre ('24.95 mL')" },
+  },
+  combustionOptions: {
+    name: 'combustion options ({ sample, collected })',
+    fields: { sample: 'text', collected: 'object' },
+    options: { sample: "a string, the sample mass ('1.000 g')", collected: "an object, the masses collected by product ({ co2: '1.499 g', h2o: '0.4091 g' })" },
+  },
+} as const satisfies Record<string, { name: string; fields: Record<string, string>; options?: Record<string, string> }>;
+
+type ShapeName = keyof typeof SHAPES;
+
+/** The plain kinds: `text` a string; `tree` a string or a parsed formula; and so on (see {@link ParamKind}). */
+type PlainKind = 'text' | 'tree' | 'numeric' | 'notation' | 'number' | 'posint' | 'rounding' | 'decimal' | 'object' | 'options' | 'array' | 'map' | 'function' | 'bigint' | 'iterable' | 'error' | 'unit' | 'isotopeKey' | 'atomKeys';
+type ArrayKind = `${'text' | 'measured' | 'compositionResult' | 'reagentRow' | 'peak'}[]`;
 
 /**
  * The kind of value a public function's parameter takes, checked at the public API's boundary:
  * `text` a string; `tree` a string or a parsed formula (an object); `numeric` a number, Decimal or string;
  * `notation` a string or a read ion notation; `number` a number; `decimal` a
- * Decimal; `object` a non-null object (an options object, or a value the library returned);
- * `options` an options object whose `weights` and `rounding`, when given, are among their values;
- * `posint` a whole number of at least 1; `rounding` 'half-even' or 'half-up'; `array`, `map`,
- * `function`, `bigint`, `iterable`; `any` is not checked. A trailing `?` also accepts undefined (an
- * omitted argument); `|null` also accepts null.
+ * Decimal; `object` a non-null object; `options` an options object whose `weights` and `rounding`,
+ * when given, are among their values; `posint` a whole number of at least 1; `rounding`
+ * 'half-even' or 'half-up'; `array`, `map`, `function`, `bigint`, `iterable`; `error` a PondusError
+ * with at least one issue; `unit` a unit symbol or a unit object; `isotopeKey` an atom key with
+ * isotope data ('C', '13C'); `atomKeys` an iterable (not a string) of atom keys, made an array
+ * before the call; a shape name (`massResult`, `quantity`, `titrationOptions`, …: a value the
+ * library returned, or an options object with required fields, checked by its top-level fields);
+ * `X[]` an array of X, each item checked the same shallow way. A trailing `?` also accepts
+ * undefined (an omitted argument); `|null` also accepts null. `any` is not checked.
  */
-export type ParamKind =
-  | `${'text' | 'tree' | 'numeric' | 'notation' | 'number' | 'posint' | 'rounding' | 'decimal' | 'object' | 'options' | 'array' | 'map' | 'function' | 'bigint' | 'iterable'}${'' | '?' | '|null' | '|null?'}`
-  | 'any';
+export type ParamKind = `${PlainKind | ShapeName | ArrayKind}${'' | '?' | '|null' | '|null?'}` | 'any';
 
-const NAMES: Record<string, string> = {
+const NAMES: Record<PlainKind, string> = {
   text: 'a string',
   tree: 'a formula (a string or a parsed formula)',
   numeric: 'a number, a Decimal or a numeric string',
@@ -31,6 +89,10 @@ const NAMES: Record<string, string> = {
   function: 'a function',
   bigint: 'a bigint',
   iterable: 'an iterable (an array, a Map, a Set or a string)',
+  error: 'a PondusError',
+  unit: "a unit (a symbol such as 'mL', or a unit from unitOf)",
+  isotopeKey: "an atom key with isotope data ('C', '13C', 'D' is written '2H')",
+  atomKeys: "an iterable of atom keys ('C', '13C'), such as an array or a Map's keys()",
 };
 
 function describe(v: unknown): string {
@@ -43,7 +105,21 @@ function describe(v: unknown): string {
   return typeof v === 'undefined' ? 'nothing (undefined)' : `a ${typeof v}`;
 }
 
-function fits(base: string, v: unknown): boolean {
+const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
+const ATOM_KEY = /^[0-9]*[A-Za-z]+$/;
+
+function isotopeKey(v: unknown): boolean {
+  if (typeof v !== 'string' || v.length > 12) return false;
+  const m = /^([0-9]*)([A-Za-z]+)$/.exec(v);
+  if (!m) return false;
+  try {
+    return getAtomData(m[2], m[1] ? Number(m[1]) : null) !== undefined;
+  } catch {
+    return false;
+  }
+}
+
+function fits(base: PlainKind, v: unknown): boolean {
   switch (base) {
     case 'text':
       return typeof v === 'string';
@@ -65,7 +141,7 @@ function fits(base: string, v: unknown): boolean {
       return Decimal.isDecimal(v);
     case 'object':
     case 'options':
-      return typeof v === 'object' && v !== null && !Array.isArray(v);
+      return isObject(v);
     case 'array':
       return Array.isArray(v);
     case 'map':
@@ -74,19 +150,94 @@ function fits(base: string, v: unknown): boolean {
       return typeof v === 'function';
     case 'iterable':
       return v !== null && v !== undefined && typeof (v as { [Symbol.iterator]?: unknown })[Symbol.iterator] === 'function';
-    default:
-      return true;
+    case 'error':
+      return v instanceof PondusError && Array.isArray(v.issues) && v.issues.length > 0 && isObject(v.issues[0]);
+    case 'unit':
+      return typeof v === 'string' || shapeFault('unitObject', v) === null;
+    case 'isotopeKey':
+      return isotopeKey(v);
+    case 'atomKeys':
+      // made an array before the check (see checkArguments)
+      return Array.isArray(v) && v.every((k) => typeof k === 'string' && ATOM_KEY.test(k));
   }
 }
 
+/** Whether a field holds a value of its field kind (see {@link SHAPES}). */
+function fieldFits(kind: string, v: unknown): boolean {
+  if (v === undefined && kind.endsWith('?')) return true;
+  if (v === null && kind.endsWith('|null')) return true;
+  const base = kind.replace(/\|null$|\?$/, '');
+  switch (base) {
+    case 'text':
+      return typeof v === 'string';
+    case 'number':
+      return typeof v === 'number';
+    case 'boolean':
+      return typeof v === 'boolean';
+    case 'array':
+      return Array.isArray(v);
+    case 'object':
+      return typeof v === 'object' && v !== null;
+    case 'decimal':
+      return Decimal.isDecimal(v);
+    case 'map':
+      return v instanceof Map;
+    case 'function':
+      return typeof v === 'function';
+    default:
+      return shapeFault(base as ShapeName, v) === null;
+  }
+}
+
+/**
+ * Why a value is not of a shape ('an object without 'notes'', 'an object whose 'dims' is a
+ * string'), or null when it is. Reads the shape's top-level fields only (and those of a nested
+ * shape), so it costs the same whatever the size of the value.
+ */
+function shapeFault(shape: ShapeName, v: unknown): string | null {
+  if (!isObject(v)) return describe(v);
+  const fields = SHAPES[shape].fields as Record<string, string>;
+  for (const key in fields) {
+    const kind = fields[key];
+    const f = v[key];
+    if (fieldFits(kind, f)) continue;
+    if (f === undefined) return `an object without '${key}'`;
+    const nested = kind.replace(/\|null$|\?$/, '');
+    const inner = nested in SHAPES ? shapeFault(nested as ShapeName, f) : describe(f);
+    return `an object whose '${key}' is ${inner}`;
+  }
+  return null;
+}
+
+/** Why an argument is not of its kind, shown after 'not': the value, or the field or item that is wrong. */
+function fault(c: Compiled, v: unknown): string {
+  if (c.items !== null) {
+    if (!Array.isArray(v)) return describe(v);
+    for (let j = 0; j < v.length; j++) {
+      if (c.items(v[j])) continue;
+      const item = v[j];
+      return `an array whose item ${j + 1} is ${c.shape ? shapeFault(c.shape, item) : describe(item)}`;
+    }
+  }
+  if (c.shape) return shapeFault(c.shape, v) ?? describe(v);
+  if (c.base === 'atomKeys' && Array.isArray(v)) {
+    const j = v.findIndex((k) => !(typeof k === 'string' && ATOM_KEY.test(k)));
+    if (j >= 0) return `an iterable whose item ${j + 1} is ${typeof v[j] === 'string' ? `'${String(v[j]).slice(0, 20)}'` : describe(v[j])}`;
+  }
+  if (c.base === 'isotopeKey' && typeof v === 'string') return `'${v.length > 20 ? v.slice(0, 20) + '…' : v}'`;
+  if (c.base === 'unit' && isObject(v)) return shapeFault('unitObject', v) ?? describe(v);
+  if (c.base === 'error' && v instanceof PondusError) return 'a PondusError without issues';
+  return describe(v);
+}
+
 /** The options every function that takes them reads the same way, with the values they may have. */
-const OPTION_VALUES: Record<string, readonly string[]> = {
-  weights: ['standard', 'abridged'],
-  rounding: ['half-even', 'half-up'],
-};
+const OPTION_VALUES: readonly (readonly [string, readonly string[]])[] = [
+  ['weights', ['standard', 'abridged']],
+  ['rounding', ['half-even', 'half-up']],
+];
 
 function checkOptions(name: string, i: number, o: Record<string, unknown>): void {
-  for (const [key, values] of Object.entries(OPTION_VALUES)) {
+  for (const [key, values] of OPTION_VALUES) {
     const v = o[key];
     if (v === undefined || (typeof v === 'string' && values.includes(v))) continue;
     const shown = typeof v === 'string' ? `'${v.length > 40 ? v.slice(0, 40) + '…' : v}'` : describe(v);
@@ -94,26 +245,66 @@ function checkOptions(name: string, i: number, o: Record<string, unknown>): void
   }
 }
 
-/** Throws a BAD_ARGUMENT PondusError when an argument is not of its parameter's kind. */
-function checkArguments(name: string, kinds: readonly ParamKind[], args: readonly unknown[]): void {
-  for (let i = 0; i < kinds.length; i++) {
-    const kind = kinds[i];
-    if (kind === 'any') continue;
-    const v = args[i];
-    const optional = kind.endsWith('?');
-    const nullable = kind.includes('|null');
-    if (v === undefined && optional) continue;
-    if (v === null && nullable) continue;
-    const base = kind.replace(/\|null|\?/g, '');
-    if (fits(base, v)) {
-      if (base === 'options') checkOptions(name, i, v as Record<string, unknown>);
-      continue;
-    }
-    const wanted = NAMES[base] + (nullable ? ' or null' : '');
-    throw new PondusError([{ code: 'BAD_ARGUMENT', message: `${name}: argument ${i + 1} must be ${wanted}, not ${describe(v)}` }]);
-  }
+/** A parameter's kind, read once when the function is wrapped. */
+interface Compiled {
+  index: number;
+  optional: boolean;
+  nullable: boolean;
+  base: PlainKind | null;
+  shape: ShapeName | null;
+  /** For an array kind: the check of each item; null otherwise. */
+  items: ((v: unknown) => boolean) | null;
+  /** What the parameter must be, for the message. */
+  wanted: string;
+  test: (v: unknown) => boolean;
+  /** Options are checked for weights and rounding too. */
+  options: boolean;
 }
 
+function compile(kind: ParamKind, index: number): Compiled | null {
+  if (kind === 'any') return null;
+  const optional = kind.endsWith('?');
+  const nullable = kind.includes('|null');
+  const bare = kind.replace(/\|null|\?/g, '');
+  const array = bare.endsWith('[]');
+  const one = array ? bare.slice(0, -2) : bare;
+  const shape = one in SHAPES ? (one as ShapeName) : null;
+  const base = shape ? null : (one as PlainKind);
+  if (!shape && !(one in NAMES)) throw new Error(`guarded: unknown parameter kind '${kind}'`);
+  const single = shape ? (v: unknown) => shapeFault(shape, v) === null : (v: unknown) => fits(base!, v);
+  const items = array ? single : null;
+  const name = shape ? SHAPES[shape].name : NAMES[base!];
+  const wanted = (array ? `an array, each item ${name}` : name) + (nullable ? ' or null' : '');
+  const test = array ? (v: unknown) => Array.isArray(v) && v.every(single) : single;
+  const options = base === 'options' || (shape !== null && 'options' in SHAPES[shape]);
+  return { index, optional, nullable, base, shape, items, wanted, test, options };
+}
+
+/** Throws a BAD_ARGUMENT PondusError when an argument is not of its parameter's kind. */
+function checkArguments(name: string, compiled: readonly Compiled[], args: unknown[]): void {
+  for (let k = 0; k < compiled.length; k++) {
+    const c = compiled[k];
+    let v = args[c.index];
+    if (v === undefined && c.optional) continue;
+    if (v === null && c.nullable) continue;
+    if (c.base === 'atomKeys' && typeof v !== 'string' && !Array.isArray(v) && fits('iterable', v)) {
+      // an iterator can be read once only: the function is given the array read here
+      v = args[c.index] = Array.from(v as Iterable<unknown>);
+    }
+    if (c.test(v)) {
+      if (c.options) checkOptions(name, c.index, v as Record<string, unknown>);
+      continue;
+    }
+    const why = fault(c, v);
+    const at = `argument ${c.index + 1}`;
+    // a required option missing or of the wrong kind is named as the option
+    const option = c.shape !== null && c.options && isObject(v) ? /^an object (?:without|whose) '([^']+)'/.exec(why) : null;
+    const message = option
+      ? `${name}: option ${option[1]} (${at}) must be ${(SHAPES[c.shape!] as { options: Record<string, string> }).options[option[1]]}, not ${describe((v as Record<string, unknown>)[option[1]])}`
+      : `${name}: ${at} must be ${c.wanted}, not ${why}`;
+    throw new PondusError([{ code: 'BAD_ARGUMENT', message }]);
+  }
+}
 /**
  * What an error that is not a PondusError becomes when it reaches the public API's boundary: a
  * division by zero keeps its meaning (DIVISION_BY_ZERO), a value decimal.js cannot read as a number
@@ -154,8 +345,9 @@ const GUARDED = new WeakSet<object>();
  * code // 'BAD_ARGUMENT'
  */
 export function guarded<F extends (...args: never[]) => unknown>(name: string, fn: F, kinds: readonly ParamKind[]): F {
+  const compiled = kinds.map(compile).filter((c): c is Compiled => c !== null);
   const wrapper = function (this: unknown, ...args: unknown[]) {
-    checkArguments(name, kinds, args);
+    checkArguments(name, compiled, args);
     try {
       return fn.apply(this, args as never[]);
     } catch (e) {
