@@ -16,8 +16,11 @@ describe('pondus titration', () => {
     expect(r.status).toBe(1);
     const [a, b] = jsonLines(r.stdout);
     expect(a).toMatchObject({ input: 'C9H8O4', line: 1, kind: 'back', ratio: '1:2', reagentRatio: '1:1', basis: 'as-is' });
-    expect(a.moles).toEqual({ value: 8.325, reported: '8.325', unit: 'mmol' });
-    expect(typeof a.assay.value).toBe('number');
+    // amounts in the one shape of every command: the value in the base unit, the figure as reported
+    expect(a.moles).toEqual({ kind: 'result', value: 0.008325, unit: 'mol', display: '8.325 mmol', sigFigs: 4, figure: '8.325', displayUnit: 'mmol' });
+    expect(a.assay).toMatchObject({ kind: 'result', unit: '', displayUnit: '%' });
+    // the figure is the value (a fraction) as a percentage, rounded once
+    expect(a.assay.value).toBeCloseTo(Number(a.assay.figure) / 100, 4);
     expect(a.notes.map((n: { code: string }) => n.code)).toEqual(['RATIO_GIVEN', 'RATIO_ASSUMED', 'BACK_TITRATION']);
     expect(a.caution).toMatch(/laboratory's procedures/);
     expect(b).toMatchObject({ input: 'Xx9', line: 2, error: { code: 'UNKNOWN_ELEMENT' } });
@@ -41,7 +44,7 @@ describe('pondus titration', () => {
 describe('pondus standardise', () => {
   it('gives the molarity of the titrant', () => {
     const [j] = jsonLines(pondus(['standardise', '--json', 'Na2CO3', '--mass', '0.2650 g', '--volume', '50.00 mL', '--ratio', '1:2']).stdout);
-    expect(j.molarity).toEqual({ value: expect.any(Number), reported: '0.1000', unit: 'M' });
+    expect(j.molarity).toEqual({ kind: 'result', value: expect.any(Number), unit: 'M', display: '0.1000 M', sigFigs: 4, figure: '0.1000', displayUnit: 'M' });
     expect(j.notes.map((n: { code: string }) => n.code)).toEqual(['PURITY_ASSUMED', 'RATIO_GIVEN', 'NO_BLANK']);
     expect(pondus(['standardise', 'KHC8H4O4', '--mass', '0.5 g']).status).toBe(2);
   });
@@ -89,7 +92,11 @@ describe('pondus replicates', () => {
 describe('pondus meq, osmolarity, alligation', () => {
   it('meq: strength to mEq/mL, target to the mass to weigh, with the pharmacy caution', () => {
     const [s] = jsonLines(pondus(['meq', '--json', 'KCl', '--concentration', '10 %']).stdout);
-    expect(s.meqPerMl).toMatchObject({ reported: '1.341', unit: 'mEq/mL' });
+    // mEq are an amount of charge: per mL, held in Eq/L
+    expect(s.meqPerMl).toMatchObject({ kind: 'result', unit: 'Eq/L', figure: '1.341', displayUnit: 'mEq/mL', display: '1.341 mEq/mL' });
+    const [w] = jsonLines(pondus(['meq', '--json', 'KCl', '--meq', '40 mEq']).stdout);
+    expect(w.mass).toMatchObject({ kind: 'instruction', unit: 'g', display: '2.982 g', sigFigs: 4 });
+    expect(w.meq).toMatchObject({ kind: 'instruction', value: 0.04, unit: 'Eq', displayUnit: 'mEq' });
     expect(s.notes.map((n: { code: string }) => n.code)).toContain('PERCENT_AS_W_V');
     expect(s.caution).toMatch(/pharmacist/);
     const t = pondus(['meq', 'KCl', '--meq', '40 mEq']);
@@ -101,15 +108,16 @@ describe('pondus meq, osmolarity, alligation', () => {
 
   it('osmolarity: 0.9 % NaCl is 308.0 mOsm/L', () => {
     const [j] = jsonLines(pondus(['osmolarity', '--json', 'NaCl=0.9 %']).stdout);
-    expect(j.mOsmPerL).toMatchObject({ reported: '308.0', unit: 'mOsm/L' });
+    expect(j.mOsmPerL).toMatchObject({ kind: 'result', unit: 'Osm/L', figure: '308.0', displayUnit: 'mOsm/L' });
     expect(j.notes.map((n: { code: string }) => n.code)).toContain('COMPLETE_DISSOCIATION');
   });
 
   it('alligation: amounts at working precision, exit 2 without a total or --by', () => {
     const [j] = jsonLines(pondus(['alligation', '--json', '10 %', '--higher', '20 %', '--lower', '5 %', '--total', '300 g']).stdout);
-    expect(j.higher).toEqual({ value: 100, reported: '100.0', unit: 'g' });
-    expect(j.lower).toEqual({ value: 200, reported: '200.0', unit: 'g' });
-    expect(j.total.reported).toBe('300.0');
+    // amounts to mix are instructions, at working precision
+    expect(j.higher).toEqual({ kind: 'instruction', value: 100, unit: 'g', display: '100.0 g', sigFigs: 4, figure: '100.0', displayUnit: 'g' });
+    expect(j.lower).toEqual({ kind: 'instruction', value: 200, unit: 'g', display: '200.0 g', sigFigs: 4, figure: '200.0', displayUnit: 'g' });
+    expect(j.total.figure).toBe('300.0');
     expect(pondus(['alligation', '10 %', '--higher', '20 %', '--lower', '5 %']).status).toBe(2);
   });
 });

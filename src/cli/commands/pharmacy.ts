@@ -14,7 +14,7 @@ import { osmolarity, type OsmolarityResult } from '../../pharmacy/osmolarity.js'
 import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
 import { withFormulaOptions, withOutputOptions, withRoundingOption, type FormulaOptions, type OutputOptions } from './common.js';
-import { notesJson, numbered, qtext, quantityJson, type RowPresenter } from './qc-rows.js';
+import { amountJson, notesJson, numbered, qtext, reportedIn, type RowPresenter } from './qc-rows.js';
 import { ANIONS, CATIONS } from '../../pharmacy/ions.js';
 import { potency, type PotencyOptions, type PotencyResult } from '../../pharmacy/potency.js';
 import { strengthForms, type StrengthForms } from '../../pharmacy/ratio-strength.js';
@@ -28,6 +28,9 @@ import type { CommandRunner } from './runner.js';
 export interface MeqCli extends FormulaOptions, Pick<MilliequivalentOptions, 'mass' | 'meq' | 'mmol' | 'concentration' | 'measured' | 'ions'> {
   rounding?: RoundingMode;
 }
+
+/** A mass and amounts for a target are instructions (working precision); from a weighed mass or a strength, results. */
+const meqKind = (r: MilliequivalentResult) => (r.mode === 'target' ? 'instruction' : 'result');
 
 /** The presenter for `pondus meq`. */
 export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
@@ -50,18 +53,18 @@ export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
       mOsmPerMmol: r.ions.particles,
       ...(strength
         ? {
-            mmolPerMl: quantityJson(r.moles, 'M', rounding, 'mmol/mL'),
-            meqPerMl: quantityJson(r.equivalents, 'M', rounding, 'mEq/mL'),
-            meqPerL: quantityJson(r.equivalents, 'mM', rounding, 'mEq/L'),
-            mOsmPerL: quantityJson(r.osmoles, 'mM', rounding, 'mOsm/L'),
-            perIon: r.perIon.map((i) => ({ ion: i.ion, meqPerL: quantityJson(i.equivalents, 'mM', rounding, 'mEq/L') })),
+            mmolPerMl: amountJson(r.moles, 'result', 'M', rounding, 'mmol/mL'),
+            meqPerMl: amountJson(r.equivalents, 'result', 'M', rounding, 'mEq/mL'),
+            meqPerL: amountJson(r.equivalents, 'result', 'mM', rounding, 'mEq/L'),
+            mOsmPerL: amountJson(r.osmoles, 'result', 'mM', rounding, 'mOsm/L'),
+            perIon: r.perIon.map((i) => ({ ion: i.ion, meqPerL: amountJson(i.equivalents, 'result', 'mM', rounding, 'mEq/L') })),
           }
         : {
-            mass: quantityJson(r.mass!, 'g', rounding),
-            mmol: quantityJson(r.moles, 'mmol', rounding),
-            meq: quantityJson(r.equivalents, 'mmol', rounding, 'mEq'),
-            mOsm: quantityJson(r.osmoles, 'mmol', rounding, 'mOsm'),
-            perIon: r.perIon.map((i) => ({ ion: i.ion, mmol: quantityJson(i.amount, 'mmol', rounding), meq: quantityJson(i.equivalents, 'mmol', rounding, 'mEq') })),
+            mass: amountJson(r.mass!, meqKind(r), 'g', rounding),
+            mmol: amountJson(r.moles, meqKind(r), 'mmol', rounding),
+            meq: amountJson(r.equivalents, meqKind(r), 'mmol', rounding, 'mEq'),
+            mOsm: amountJson(r.osmoles, meqKind(r), 'mmol', rounding, 'mOsm'),
+            perIon: r.perIon.map((i) => ({ ion: i.ion, mmol: amountJson(i.amount, meqKind(r), 'mmol', rounding), meq: amountJson(i.equivalents, meqKind(r), 'mmol', rounding, 'mEq') })),
           }),
       rounding,
       notes: notesJson(r.notes),
@@ -70,8 +73,8 @@ export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
     columns: strength ? ['input', 'line', 'salt', 'mmol_per_mL', 'mEq_per_mL', 'mEq_per_L', 'mOsm_per_L', 'saltHill'] : ['input', 'line', 'salt', 'mass_g', 'mmol', 'mEq', 'mOsm', 'saltHill'],
     cells: ({ input, line, r }) =>
       strength
-        ? [input, line, speciesText(r.salt), quantityJson(r.moles, 'M', rounding).reported, quantityJson(r.equivalents, 'M', rounding).reported, quantityJson(r.equivalents, 'mM', rounding).reported, quantityJson(r.osmoles, 'mM', rounding).reported, r.salt.formula]
-        : [input, line, speciesText(r.salt), quantityJson(r.mass!, 'g', rounding).reported, quantityJson(r.moles, 'mmol', rounding).reported, quantityJson(r.equivalents, 'mmol', rounding).reported, quantityJson(r.osmoles, 'mmol', rounding).reported, r.salt.formula],
+        ? [input, line, speciesText(r.salt), reportedIn(r.moles, 'M', rounding).reported, reportedIn(r.equivalents, 'M', rounding).reported, reportedIn(r.equivalents, 'mM', rounding).reported, reportedIn(r.osmoles, 'mM', rounding).reported, r.salt.formula]
+        : [input, line, speciesText(r.salt), reportedIn(r.mass!, 'g', rounding).reported, reportedIn(r.moles, 'mmol', rounding).reported, reportedIn(r.equivalents, 'mmol', rounding).reported, reportedIn(r.osmoles, 'mmol', rounding).reported, r.salt.formula],
     block: ({ input, r }) => {
       const head = `${input}  (${hillAside(r.salt)}M = ${displayMolarMass(r.salt)} g/mol): 1 mmol = ${r.ions.equivalentsPerMole} mEq = ${r.ions.particles} mOsm`;
       const ions = r.perIon.map((i) => `${i.ion} ${strength ? qtext(i.equivalents, 'mM', rounding, 'mEq/L') : qtext(i.equivalents, 'mmol', rounding, 'mEq')}`).join(', ');
@@ -106,9 +109,9 @@ export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityRe
     compute: numbered((input) => osmolarity(input, opts)),
     json: ({ input, r }) => ({
       input,
-      components: r.components.map((c) => ({ salt: speciesText(c.result.salt), saltHill: c.result.salt.formula, strength: c.strength, mOsmPerL: quantityJson(c.result.osmoles, 'mM', rounding, 'mOsm/L') })),
-      mOsmPerL: quantityJson(r.osmolarity, 'mM', rounding, 'mOsm/L'),
-      ions: r.ions.map((i) => ({ ion: i.ion, charge: i.charge, mmolPerL: quantityJson(i.molarity, 'mM', rounding, 'mmol/L'), meqPerL: quantityJson(i.equivalents, 'mM', rounding, 'mEq/L') })),
+      components: r.components.map((c) => ({ salt: speciesText(c.result.salt), saltHill: c.result.salt.formula, strength: c.strength, mOsmPerL: amountJson(c.result.osmoles, 'result', 'mM', rounding, 'mOsm/L') })),
+      mOsmPerL: amountJson(r.osmolarity, 'result', 'mM', rounding, 'mOsm/L'),
+      ions: r.ions.map((i) => ({ ion: i.ion, charge: i.charge, mmolPerL: amountJson(i.molarity, 'result', 'mM', rounding, 'mmol/L'), meqPerL: amountJson(i.equivalents, 'result', 'mM', rounding, 'mEq/L') })),
       rounding,
       notes: notesJson(r.notes),
       caution: PHARMACY_CAUTION,
@@ -118,10 +121,10 @@ export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityRe
     cells: ({ input, line, r }) => [
       input,
       line,
-      quantityJson(r.osmolarity, 'mM', rounding).reported,
+      reportedIn(r.osmolarity, 'mM', rounding).reported,
       ...TABLE_IONS.map((f) => {
         const ion = r.ions.find((i) => i.ion.replace(/\^.*$/, '') === f);
-        return ion ? quantityJson(ion.equivalents, 'mM', rounding).reported : '';
+        return ion ? reportedIn(ion.equivalents, 'mM', rounding).reported : '';
       }),
     ],
     block: ({ input, r }) => {
@@ -166,12 +169,12 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
     json: ({ input, r }) => ({
       input,
       by: r.by,
-      higherParts: quantityJson({ ...r.higherParts, lsd: null }, sUnit(r), rounding).value,
-      lowerParts: quantityJson({ ...r.lowerParts, lsd: null }, sUnit(r), rounding).value,
+      higherParts: reportedIn({ ...r.higherParts, lsd: null }, sUnit(r), rounding).value,
+      lowerParts: reportedIn({ ...r.lowerParts, lsd: null }, sUnit(r), rounding).value,
       higherFraction: r.higherFraction.value.toNumber(),
-      total: r.total ? quantityJson(atWorkingPrecision({ ...r.total, lsd: null }), amountUnit(r), rounding) : null,
-      higher: r.higherAmount ? quantityJson(r.higherAmount, amountUnit(r), rounding) : null,
-      lower: r.lowerAmount ? quantityJson(r.lowerAmount, amountUnit(r), rounding) : null,
+      total: r.total ? amountJson(atWorkingPrecision({ ...r.total, lsd: null }), 'instruction', amountUnit(r), rounding) : null,
+      higher: r.higherAmount ? amountJson(r.higherAmount, 'instruction', amountUnit(r), rounding) : null,
+      lower: r.lowerAmount ? amountJson(r.lowerAmount, 'instruction', amountUnit(r), rounding) : null,
       rounding,
       notes: notesJson(r.notes),
       caution: PHARMACY_CAUTION,
@@ -181,10 +184,10 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
       input,
       line,
       r.by,
-      quantityJson({ ...r.higherParts, lsd: null }, sUnit(r), rounding).value,
-      quantityJson({ ...r.lowerParts, lsd: null }, sUnit(r), rounding).value,
-      r.higherAmount ? quantityJson(r.higherAmount, amountUnit(r), rounding).reported : '',
-      r.lowerAmount ? quantityJson(r.lowerAmount, amountUnit(r), rounding).reported : '',
+      reportedIn({ ...r.higherParts, lsd: null }, sUnit(r), rounding).value,
+      reportedIn({ ...r.lowerParts, lsd: null }, sUnit(r), rounding).value,
+      r.higherAmount ? reportedIn(r.higherAmount, amountUnit(r), rounding).reported : '',
+      r.lowerAmount ? reportedIn(r.lowerAmount, amountUnit(r), rounding).reported : '',
       r.total ? amountUnit(r) : '',
     ],
     block: ({ input, r }) => {
@@ -226,8 +229,8 @@ export function potencyPresenter(o: PotencyCli): RowPresenter<PotencyResult> {
     json: ({ input, r }) => ({
       input,
       basis: r.basis,
-      asIs: quantityJson(r.asIs, unitOfGiven(r), rounding),
-      asIsAlso: quantityJson(r.asIs, alt(r), rounding),
+      asIs: amountJson(r.asIs, 'result', unitOfGiven(r), rounding),
+      asIsAlso: amountJson(r.asIs, 'result', alt(r), rounding),
       need: o.need?.trim() ?? null,
       weigh: r.weigh ? instructionJson(r.weigh, massUnitFor(r.weigh.quantity), rounding) : null,
       rounding,

@@ -1,14 +1,16 @@
 /**
  * Shared pieces of the QC and pharmacy commands: each result row carries its
  * input and line, notes as {code, message}, and the caution; quantities are
- * written as a JSON number (unrounded, in the reported unit) beside the
- * reported figure as text. CSV cells are guarded and the notes cell written by the shared
- * output writers (../output/format.ts).
+ * written in JSON as amounts, the one shape every command uses:
+ * {kind, value, unit, display, sigFigs, figure, displayUnit}, the value
+ * unrounded in the base unit beside the figure as reported. CSV cells are
+ * guarded and the notes cell written by the shared output writers (../output/format.ts).
  */
 import type { Note } from '../../errors/issue.js';
 import type { Quantity } from '../../sigfig/quantity.js';
 import { displayQuantity } from '../../sigfig/display-quantity.js';
 import type { RoundingMode } from '../../sigfig/round.js';
+import { baseUnitText } from '../../sigfig/units.js';
 import type { Presenter } from '../output/presenter.js';
 
 /** A result with the input it came from and its line. */
@@ -18,22 +20,54 @@ export interface Row<R> {
   r: R;
 }
 
-/** A quantity in JSON: the unrounded value in the unit, the reported figure, the unit. */
-export interface QuantityJson {
+/**
+ * A quantity in JSON, the amount shape of every command (src/sigfig/instruction.ts, AmountJson):
+ * `kind` 'result' (computed from measurements, textbook figures) or 'instruction' (computed from a
+ * target: an amount to weigh or mix, kept at working precision); `value` unrounded in the base unit
+ * `unit` ('g', 'L', 'mol', 'M'; 'Eq' and 'Osm' for milliequivalents and milliosmoles; '' for a pure
+ * number or a percentage, given as a fraction); `figure` the number as reported, rounded once, in
+ * `displayUnit`; `display` the two together; `sigFigs` the figures shown (null for an exact value).
+ */
+export interface QcAmountJson {
+  kind: 'instruction' | 'result';
   value: number;
-  reported: string;
   unit: string;
+  display: string;
+  sigFigs: number | null;
+  figure: string;
+  displayUnit: string;
+}
+
+/** The base unit of an amount shown under a label: mEq and mOsm are amounts of charge and of particles, held in mol. */
+function baseUnit(q: Quantity, label: string | undefined): string {
+  const base = baseUnitText(q.dims);
+  const of = label === undefined ? null : /Eq/.test(label) ? 'Eq' : /Osm/.test(label) ? 'Osm' : null;
+  if (of === null) return base;
+  return base === 'mol' ? of : base === 'M' ? `${of}/L` : base;
 }
 
 /**
- * A quantity as JSON, in a unit, rounded once for the reported figure.
+ * A quantity as an amount in JSON, shown in a unit (or under a label: 'mEq' for mmol of charge),
+ * rounded once for the reported figure.
  *
  * @example
- * quantityJson(measure('250. mg'), 'g', 'half-even') // { value: 0.25, reported: '0.250', unit: 'g' }
+ * amountJson(measure('250. mg'), 'result', 'g', 'half-even') // { kind: 'result', value: 0.25, unit: 'g', display: '0.250 g', sigFigs: 3, figure: '0.250', displayUnit: 'g' }
  */
-export function quantityJson(q: Quantity, unit: string | undefined, rounding: RoundingMode, label = unit): QuantityJson {
+export function amountJson(q: Quantity, kind: 'instruction' | 'result', unit: string | undefined, rounding: RoundingMode, label = unit): QcAmountJson {
   const d = displayQuantity(q, unit, rounding);
-  return { value: d.value.toNumber(), reported: d.figure, unit: label ?? d.unit };
+  const shown = label ?? d.unit;
+  return { kind, value: q.value.toNumber(), unit: baseUnit(q, label), display: shown ? `${d.figure} ${shown}` : d.figure, sigFigs: d.sigFigs, figure: d.figure, displayUnit: shown };
+}
+
+/**
+ * A quantity in a unit, rounded once: the unrounded value in that unit and the reported figure (the CSV cells).
+ *
+ * @example
+ * reportedIn(measure('250. mg'), 'g', 'half-even') // { value: 0.25, reported: '0.250' }
+ */
+export function reportedIn(q: Quantity, unit: string | undefined, rounding: RoundingMode): { value: number; reported: string } {
+  const d = displayQuantity(q, unit, rounding);
+  return { value: d.value.toNumber(), reported: d.figure };
 }
 
 /** The text of a quantity in a unit, with a label in place of the unit symbol when given (mEq for mmol of charge). */

@@ -22,7 +22,7 @@ import type { Quantity } from '../../sigfig/quantity.js';
 import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
 import { withFormulaOptions, withOutputOptions, withRoundingOption, type FormulaOptions, type OutputOptions } from './common.js';
-import { notesJson, numbered, qtext, quantityJson, type RowPresenter } from './qc-rows.js';
+import { amountJson, notesJson, numbered, qtext, reportedIn, type RowPresenter } from './qc-rows.js';
 import type { CommandRunner } from './runner.js';
 
 interface BasisCli {
@@ -138,12 +138,12 @@ export function titrationPresenter(o: TitrationCli): RowPresenter<Titration> {
       kind: t.kind,
       ratio: t.ratio.text,
       reagentRatio: t.reagentRatio?.text ?? null,
-      netTitre: quantityJson(t.netTitre, 'mL', rounding),
-      moles: quantityJson(t.moles, 'mmol', rounding),
-      analyteMass: quantityJson(t.mass, 'mg', rounding),
-      assay: quantityJson(t.assay, '%', rounding),
+      netTitre: amountJson(t.netTitre, 'result', 'mL', rounding),
+      moles: amountJson(t.moles, 'result', 'mmol', rounding),
+      analyteMass: amountJson(t.mass, 'result', 'mg', rounding),
+      assay: amountJson(t.assay, 'result', '%', rounding),
       basis: rep.basis,
-      reported: quantityJson(rep.value, '%', rounding),
+      reported: amountJson(rep.value, 'result', '%', rounding),
       specification: specJson(rep.spec, rep.basis),
       rounding,
       notes: notesJson([...t.notes, ...rep.notes]),
@@ -151,9 +151,9 @@ export function titrationPresenter(o: TitrationCli): RowPresenter<Titration> {
     }),
     columns: ['input', 'line', 'analyte', 'kind', 'ratio', 'moles_mmol', 'assay_percent', 'assay_reported', 'basis', 'reported_percent', 'reported', 'limits', 'complies'],
     cells: ({ input, line, r }) => {
-      const a = quantityJson(r.t.assay, '%', rounding);
-      const b = quantityJson(r.rep.value, '%', rounding);
-      return [input, line, r.t.analyte.formula, r.t.kind, r.t.ratio.text, quantityJson(r.t.moles, 'mmol', rounding).reported, a.value, a.reported, r.rep.basis, b.value, b.reported, r.rep.spec ? `${r.rep.spec.limits.low}-${r.rep.spec.limits.high}` : '', r.rep.spec ? (r.rep.spec.complies ? 'yes' : 'no') : ''];
+      const a = reportedIn(r.t.assay, '%', rounding);
+      const b = reportedIn(r.rep.value, '%', rounding);
+      return [input, line, r.t.analyte.formula, r.t.kind, r.t.ratio.text, reportedIn(r.t.moles, 'mmol', rounding).reported, a.value, a.reported, r.rep.basis, b.value, b.reported, r.rep.spec ? `${r.rep.spec.limits.low}-${r.rep.spec.limits.high}` : '', r.rep.spec ? (r.rep.spec.complies ? 'yes' : 'no') : ''];
     },
     block: ({ input, r: { t, rep } }) => {
       const lines = [`${input}  (${hillAside(t.analyte)}M = ${displayMolarMass(t.analyte)} g/mol), ${t.kind === 'back' ? 'back-titration' : 'direct titration'}`];
@@ -199,17 +199,17 @@ export function standardisePresenter(o: StandardiseCli): RowPresenter<Standardis
       standard: r.standard.formula,
       molarMass: r.standard.molarMass.toNumber(),
       ratio: r.ratio.text,
-      moles: quantityJson(r.moles, 'mmol', rounding),
-      netTitre: quantityJson(r.netTitre, 'mL', rounding),
-      molarity: quantityJson(r.molarity, 'M', rounding),
+      moles: amountJson(r.moles, 'result', 'mmol', rounding),
+      netTitre: amountJson(r.netTitre, 'result', 'mL', rounding),
+      molarity: amountJson(r.molarity, 'result', 'M', rounding),
       rounding,
       notes: notesJson(r.notes),
       caution: BENCH_CAUTION,
     }),
     columns: ['input', 'line', 'standard', 'ratio', 'moles_mmol', 'molarity_M', 'molarity'],
     cells: ({ input, line, r }) => {
-      const m = quantityJson(r.molarity, 'M', rounding);
-      return [input, line, r.standard.formula, r.ratio.text, quantityJson(r.moles, 'mmol', rounding).reported, m.value, m.reported];
+      const m = reportedIn(r.molarity, 'M', rounding);
+      return [input, line, r.standard.formula, r.ratio.text, reportedIn(r.moles, 'mmol', rounding).reported, m.value, m.reported];
     },
     block: ({ input, r }) =>
       [
@@ -253,9 +253,9 @@ export function sampleBasisPresenter(o: SampleBasisCli): RowPresenter<BasisRow> 
       input,
       from: r.from,
       to: r.rep.basis,
-      value: quantityJson(r.value, '%', rounding),
+      value: amountJson(r.value, 'result', '%', rounding),
       factor: r.rep.conversion ? r.rep.conversion.factor.value.toNumber() : 1,
-      converted: quantityJson(r.rep.value, '%', rounding),
+      converted: amountJson(r.rep.value, 'result', '%', rounding),
       specification: specJson(r.rep.spec, r.rep.basis),
       rounding,
       notes: notesJson([...r.notes, ...r.rep.notes]),
@@ -263,7 +263,7 @@ export function sampleBasisPresenter(o: SampleBasisCli): RowPresenter<BasisRow> 
     }),
     columns: ['input', 'line', 'from', 'to', 'converted_percent', 'converted', 'limits', 'complies'],
     cells: ({ input, line, r }) => {
-      const c = quantityJson(r.rep.value, '%', rounding);
+      const c = reportedIn(r.rep.value, '%', rounding);
       return [input, line, r.from, r.rep.basis, c.value, c.reported, r.rep.spec ? `${r.rep.spec.limits.low}-${r.rep.spec.limits.high}` : '', r.rep.spec ? (r.rep.spec.complies ? 'yes' : 'no') : ''];
     },
     block: ({ input, r }) => {
