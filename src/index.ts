@@ -327,7 +327,7 @@ export const removedFraction = /* @__PURE__ */ guarded('removedFraction', remove
 export const safeConvertSampleBasis = /* @__PURE__ */ safely(convertSampleBasis);
 export { type Limits, type SpecificationCheck } from './assay/specification.js';
 import { checkSpecification as checkSpecification_, readLimits as readLimits_ } from './assay/specification.js';
-export const checkSpecification = /* @__PURE__ */ guarded('checkSpecification', checkSpecification_, ['object', 'text', 'rounding?', 'text?']);
+export const checkSpecification = /* @__PURE__ */ guarded('checkSpecification', checkSpecification_, ['quantity', 'text', 'rounding?', 'text?']);
 export const readLimits = /* @__PURE__ */ guarded('readLimits', readLimits_, ['text']);
 export { MAX_REPLICATES, type ReplicateResult, type ReplicateOptions } from './assay/replicates.js';
 import { replicates as replicates_, splitValues as splitValues_ } from './assay/replicates.js';

@@ -13,6 +13,9 @@ import type { ComponentNode } from '../formula-parser/tree.js';
 /**
  * Moles of water of crystallisation per formula unit: components after the first that are whole multiples of H2O.
  *
+ * @param m - a detailed mass result (from formulaMassDetail).
+ * @returns the moles of water of crystallisation per formula unit (0 for none).
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * hydrateWater(formulaMassDetail('CaCl2·2H2O')) // 2
  */

@@ -63,6 +63,10 @@ export interface ReplicateResult {
 /**
  * Splits a list of values ('99.2, 99.5, 99.1 %' or '3.080 g 3.094 g') into value texts, each with its unit if written.
  *
+ * @param text - the list.
+ * @param notes - where the note that one unit was applied to every value is added.
+ * @returns the value texts, each with its unit.
+ * @throws PondusError: BAD_NUMBER for a piece that is not a number; INPUT_TOO_LONG past {@link MAX_REPLICATES} values; BAD_MEASUREMENT when some values have a unit and some do not; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * splitValues('99.2, 99.5 99.1 %', []) // ['99.2 %', '99.5 %', '99.1 %']
  */
@@ -96,6 +100,10 @@ export function splitValues(text: string, notes: Note[]): string[] {
 /**
  * Statistics of a list of replicate results.
  *
+ * @param text - the values, separated by spaces or commas, the unit after each or once after the last: '99.2 99.5 99.1 %'.
+ * @param o - the confidence level in percent (default 95) and the rounding.
+ * @returns n, mean, standard deviation, RSD, Student's t, the half-width of the confidence interval and the reported 'mean ± half-width' (the half-width to two figures, the mean to the same place).
+ * @throws PondusError: BAD_NUMBER for a value that is not a number (with its column); BAD_MEASUREMENT for fewer than two values, units on some values only, an exact number or a zero mean; INPUT_TOO_LONG past {@link MAX_REPLICATES} values; BAD_OPTION for a confidence level outside 50–99.9 %; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const r = replicates('3.080 3.094 3.107 3.056 3.112 3.174 3.198 g')
  * r.reported // '3.117 ± 0.047 g'

@@ -45,6 +45,9 @@ const ONE = quantity(exact(1), null);
 /**
  * Reads a basis name; throws BAD_OPTION for an unknown one.
  *
+ * @param text - a basis name: 'as-is', 'dried', 'anhydrous' or 'solvent-free'.
+ * @returns the basis.
+ * @throws PondusError: BAD_OPTION for an unknown basis (the message lists the known ones); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readBasis('dried') // 'dried'
  */
@@ -60,6 +63,11 @@ const NAMES: Record<SampleBasis, string> = { 'as-is': 'as-is', dried: 'dried', a
 /**
  * The fraction removed for a basis (null for as is), read from the content, with a note of the reading.
  *
+ * @param basis - the basis.
+ * @param content - the loss on drying, water or solvent content, as percentages.
+ * @param notes - where the note of the reading is added.
+ * @returns the fraction the basis removes, or null for as is.
+ * @throws PondusError: USAGE when the content the basis needs is not given; BAD_AMOUNT for a content of 100 % or more; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * removedFraction('dried', { loss: '0.50 %' }, [])?.value.toString() // '0.005'
  */
@@ -90,6 +98,12 @@ const pct = (q: Quantity) => displayQuantity(q, '%').text;
 /**
  * Converts a result (a fraction, e.g. an assay) from one basis of the sample to another.
  *
+ * @param valueText - the result: '99.1 %', or a Quantity (a fraction).
+ * @param from - the basis it is on ('as-is', 'dried', 'anhydrous', 'solvent-free').
+ * @param to - the basis wanted.
+ * @param content - what the other basis removes: `loss` (on drying), `water` or `solvent`, as percentages.
+ * @returns the value given, the factor and the converted value (a result), with a note of the conversion.
+ * @throws PondusError: a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_AMOUNT for a content of 100 % or more; USAGE when from and to are the same or the content a basis needs is not given; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const r = convertSampleBasis('99.1 %', 'as-is', 'dried', { loss: '0.50 %' })
  * displayQuantity(r.converted, '%').text // '99.6 %'

@@ -35,6 +35,9 @@ export interface SpecificationCheck {
 /**
  * Reads limits written `98.0-102.0` (an en dash or `to` also do; a trailing % is optional).
  *
+ * @param text - limits in percent: '98.0-102.0', '98.0–102.0 %', '98.0 to 102.0'.
+ * @returns the low and high limits as written and the place of their last digit.
+ * @throws PondusError: BAD_OPTION for limits not written low-high or a lower limit above the upper; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readLimits('98.0–102.0 %').lsd // -1
  */
@@ -50,6 +53,12 @@ export function readLimits(text: string): Limits {
 /**
  * Checks a result (a fraction) against limits in percent.
  *
+ * @param result - the result, a fraction (0.99462 for 99.462 %).
+ * @param limitsText - the limits in percent: '98.0-102.0'.
+ * @param rounding - how the result is rounded to the limits' last place: 'half-even' (default) or 'half-up'.
+ * @param basisName - the basis named in the verdict.
+ * @returns the limits, the result rounded as the limits are written, and whether it complies.
+ * @throws PondusError: BAD_OPTION for limits that cannot be read or a lower limit above the upper; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const q = measure('0.99462')
  * checkSpecification(q, '98.0-102.0').roundedText // '99.5'

@@ -48,6 +48,10 @@ export interface StandardiseResult {
 /**
  * The molarity of a titrant from a primary-standard titration.
  *
+ * @param standardText - the primary standard's formula: 'KHC8H4O4', 'Na2CO3'.
+ * @param o - the mass weighed and the titre (required); blank, mole ratio, certified purity, atomic-weight options.
+ * @returns the moles of standard, the net titre and the titrant's molarity (results), with notes (purity or ratio assumed, blank).
+ * @throws PondusError: a formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …); a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_AMOUNT for a purity above 100 % or a titre less blank that is not positive; BAD_OPTION for a mole ratio not written A:B; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const r = standardise('KHC8H4O4', { mass: '0.5105 g', volume: '24.95 mL' })
  * displayQuantity(r.molarity, 'M').text // '0.1002 M'

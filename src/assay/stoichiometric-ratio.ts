@@ -23,6 +23,13 @@ export interface MoleRatio {
  * Reads a mole ratio `A:B` of whole or decimal numbers; with no text, 1:1 with a note saying it was
  * assumed and which option (`option`) gives it.
  *
+ * @param text - the ratio as written ('1:2'), or undefined for 1:1 with a note.
+ * @param first - what the first number counts (the analyte), for messages.
+ * @param second - what the second number counts (the titrant), for messages.
+ * @param notes - where the note of the ratio given or assumed is added.
+ * @param option - the option named in the notes.
+ * @returns the two sides and the text.
+ * @throws PondusError: BAD_OPTION for a ratio not written A:B or with a side that is not positive; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readMoleRatio('1:2', 'Na2CO3', 'HCl', []).factor.value.toString() // '0.5'
  */

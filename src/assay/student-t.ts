@@ -14,6 +14,9 @@ const LANCZOS = [76.18009172947146, -86.50532032941677, 24.01409824083091, -1.23
 /**
  * ln Γ(x) for x > 0 (Lanczos approximation, about 15 digits).
  *
+ * @param x - a positive number.
+ * @returns ln Γ(x).
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * Math.round(Math.exp(logGamma(5))) // 24
  */
@@ -57,6 +60,11 @@ function betaContinuedFraction(a: number, b: number, x: number): number {
 /**
  * The regularised incomplete beta function I_x(a, b).
  *
+ * @param x - the upper limit, 0 to 1.
+ * @param a - the first shape parameter, positive.
+ * @param b - the second shape parameter, positive.
+ * @returns the regularised incomplete beta function I_x(a, b).
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * Math.round(incompleteBeta(0.5, 2, 2) * 1e9) / 1e9 // 0.5
  */
@@ -70,6 +78,10 @@ export function incompleteBeta(x: number, a: number, b: number): number {
 /**
  * Two-sided tail probability P(|T| > t) for ν degrees of freedom.
  *
+ * @param t - the t statistic.
+ * @param df - the degrees of freedom.
+ * @returns the two-sided probability of a |t| at least as large.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * Math.abs(twoSidedP(12.706, 1) - 0.05) < 1e-4 // true
  */
@@ -80,6 +92,10 @@ export function twoSidedP(t: number, df: number): number {
 /**
  * The two-sided critical value of t at a confidence level (in percent, 50–99.9) for ν ≥ 1 degrees of freedom (Infinity for the normal limit).
  *
+ * @param levelPercent - the two-sided confidence level, 50 to 99.9.
+ * @param df - the degrees of freedom, a whole number of at least 1 (Infinity for the normal limit).
+ * @returns the critical value t.
+ * @throws PondusError: BAD_OPTION for a level or degrees of freedom out of range; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * tCritical(95, 6).toFixed(3) // '2.447'
  */

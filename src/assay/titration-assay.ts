@@ -65,6 +65,10 @@ const G_PER_MOL = unitOf('g/mol');
 /**
  * The % assay of a sample by titration.
  *
+ * @param analyteText - the analyte's formula: 'KHC8H4O4'.
+ * @param o - the sample mass, titrant molarity and titre (required); blank, mole ratio, back-titration (`added`, `reagentRatio`, `back`), atomic-weight options.
+ * @returns the net titre, moles of analyte, analyte mass and % assay (results, with the figures of the measurements), the kind of titration and the notes (ratio assumed, blank).
+ * @throws PondusError: a formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …); a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_AMOUNT for a titre less blank that is not positive or a back-titration where nothing reacted; BAD_OPTION for a mole ratio not written A:B; USAGE for options that conflict (`added` with a blank, `reagentRatio` without a back-titration); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const r = titrationAssay('KHC8H4O4', { sample: '0.5000 g', titrant: '0.1000 M', volume: '24.40 mL' })
  * displayQuantity(r.assay, '%').text // '99.66 %'

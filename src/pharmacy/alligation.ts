@@ -48,6 +48,10 @@ export interface AlligationResult {
 /**
  * Amounts to mix for a target strength.
  *
+ * @param targetText - the strength wanted: '10 %'.
+ * @param o - the `higher` and `lower` strengths (required); the `total` to make, or `by` ('mass' or 'volume') for parts only.
+ * @returns the parts of each strength, the fraction of the higher one and, with a total, the amounts to mix (instructions at working precision).
+ * @throws PondusError: a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); USAGE when the mixing (by mass or volume) is not given or conflicts with the total; INCOMPATIBLE_UNITS for strengths of different kinds, or of a kind that does not fit the mixing; BAD_AMOUNT for a target not between the lower and higher strengths; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const r = alligation('10 %', { higher: '20 %', lower: '5 %', total: '300 g' })
  * displayQuantity(r.higherAmount, 'g').text // '100.0 g'

@@ -70,6 +70,10 @@ export interface MilliequivalentResult {
 /**
  * Reads an amount written in mEq/Eq (as an amount of charge, in mol) or in mmol.
  *
+ * @param text - an amount of charge: '20 mEq', '0.020 Eq'.
+ * @param notes - where notes on reading the number are added.
+ * @returns the amount of charge as a Quantity in mol.
+ * @throws PondusError: BAD_AMOUNT for a text not written in mEq or Eq, or a value that is not positive; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readEquivalents('20 mEq', []).value.toString() // '0.02'
  */
@@ -84,6 +88,10 @@ const G_PER_MOL = unitOf('g/mol');
 /**
  * mmol, mEq and mOsm of a salt from a mass, a target, or a strength.
  *
+ * @param saltText - the salt's formula: 'KCl', 'CaCl2·2H2O'.
+ * @param o - exactly one of `mass` (a weighed mass), `meq` or `mmol` (a target) or `concentration` (a strength); `measured` for a measured strength; `ions` when the salt is not split automatically; atomic-weight options.
+ * @returns the salt, its ions, the mode, the mass (given or to weigh), moles, equivalents and osmoles (in mol, or mol/L for a strength) and per ion; a mass for a target at working precision.
+ * @throws PondusError: a formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …); a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); USAGE for none or more than one of mass, meq, mmol and concentration; BAD_AMOUNT for a % w/w or v/v strength or an mEq target not written like '20 mEq'; BAD_CHARGE, BAD_OPTION, AMBIGUOUS_CHARGE or PART_NOT_IN_FORMULA when the salt's ions cannot be settled; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const r = milliequivalents('KCl', { concentration: '10 %' })
  * displayQuantity(r.equivalents, 'M').text // '1.341 M'

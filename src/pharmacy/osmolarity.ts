@@ -49,6 +49,10 @@ export const MAX_COMPONENTS = 50;
 /**
  * Osmolarity and mEq/L of a solution of salts.
  *
+ * @param text - the salts and their strengths: 'NaCl=0.45 %, KCl=0.15 %'.
+ * @param o - `measured` for measured strengths (their figures are kept), atomic-weight options.
+ * @returns each component's mOsm/L, the total (complete dissociation), and the mmol/L and mEq/L of each ion.
+ * @throws PondusError: EMPTY_INPUT for no salt; INPUT_TOO_LONG past {@link MAX_COMPONENTS} salts; BAD_RECORD for a piece not written salt=strength, e.g. NaCl=0.9 % (with its column); a salt's own error (its formula, its strength, its ions) with the salt named and its column; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const r = osmolarity('NaCl=0.9 %')
  * displayQuantity(r.osmolarity, 'mM').figure // '308.0'

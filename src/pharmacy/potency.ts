@@ -37,6 +37,10 @@ export interface PotencyResult {
 /**
  * The potency as is, and the mass of powder for a required amount of active.
  *
+ * @param text - the potency: '950. µg/mg', '101.2 %'.
+ * @param options - the `basis` it is given on (with `water`, `loss` or `solvent`), and `need`, an amount of active to weigh for.
+ * @returns the potency as is (a result) and, with `need`, the mass to weigh (an instruction at working precision).
+ * @throws PondusError: a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_AMOUNT for a potency without a unit, above 100 % as is, or above 100 % once converted; the codes of the basis conversion (USAGE, BAD_AMOUNT); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * displayQuantity(potency('101.2 %', { basis: 'anhydrous', water: '4.8 %' }).asIs, '%').text // '96.3 %'
  * displayInstruction(potency('950. µg/mg', { need: '500. mg' }).weigh, 'mg').text // '526.3 mg'

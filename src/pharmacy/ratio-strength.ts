@@ -30,6 +30,9 @@ const W_W_UNITS: [string, number][] = [['% w/w', -2], ['mg/g', -3], ['mg/kg', -6
 /**
  * A strength in all its forms.
  *
+ * @param text - a strength: '1:1000', '0.02 % w/v', '12 mg/dL'.
+ * @returns its kind (w/v, w/w, v/v), the ratio 1:N and each form.
+ * @throws PondusError: BAD_AMOUNT for w/v, w/w or v/v not after a % or a ratio, a strength without a unit, or one above 100 %; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * strengthForms('1:1000').forms.find((f) => f.unit === 'mg/mL').value.toString() // '1'
  * strengthForms('0.02 % w/v').ratio.toString() // '5000'

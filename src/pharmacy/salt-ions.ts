@@ -55,6 +55,12 @@ function sameCounts(target: Map<string, number>, parts: [AtomCounts, number][]):
 /**
  * The ions of a salt from its formula (or the ions given), with a note naming the reading.
  *
+ * @param salt - the salt (from formulaMassDetail).
+ * @param given - the ions as written ('2K^+,HPO4^2-'), or undefined to split the salt automatically.
+ * @param notes - where the note of the reading is added.
+ * @param options - atomic-weight options for the ions given.
+ * @returns the ions with their charges and counts, the equivalents per mole and the particles per formula unit.
+ * @throws PondusError: BAD_CHARGE for a charged salt, an ion without a charge or ions that do not balance; BAD_OPTION for a fractional count or a salt that does not split into known ions; AMBIGUOUS_CHARGE when it splits more than one way; BAD_COUNT; PART_NOT_IN_FORMULA when the ions given do not add up to the salt; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * saltIons(formulaMassDetail('CaCl2·2H2O'), undefined, []).equivalentsPerMole // 2
  */

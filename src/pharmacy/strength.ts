@@ -24,6 +24,12 @@ export interface Strength {
 /**
  * Reads a strength; `defaultPercent` is the kind a bare % is read as (noted).
  *
+ * @param text - a strength: '0.9 %', '2 mg/mL', '0.154 M', '5 % w/w'.
+ * @param defaultPercent - how a bare % is read ('w/v', 'w/w' or 'v/v'), with a note.
+ * @param notes - where notes of the reading are added.
+ * @param what - what the strength is, for messages: 'the strength'.
+ * @returns the strength as a Quantity and its percent kind.
+ * @throws PondusError: BAD_AMOUNT for a strength without a unit; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readStrength('10 % w/v', 'w/v', [], 'the strength').percent // 'w/v'
  */

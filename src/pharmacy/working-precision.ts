@@ -14,6 +14,9 @@ import type { Quantity } from '../sigfig/quantity.js';
 /**
  * The quantity shown with at least four significant figures (more when its inputs carry more).
  *
+ * @param q - a Quantity.
+ * @returns the same quantity with the precision of at least four significant figures.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * displayQuantity(atWorkingPrecision(measure('2.0 g')), 'g').text // '2.000 g'
  */
@@ -26,6 +29,12 @@ export function atWorkingPrecision(q: Quantity): Quantity {
 /**
  * Adds a TARGET_FEW_FIGURES note when a target has fewer than {@link FEW_FIGURES} significant figures.
  *
+ * @param target - the target, a Quantity.
+ * @param text - the target as written.
+ * @param what - what it is: 'the target'.
+ * @param notes - where the note is added.
+ * @returns nothing; the note is added to `notes`.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const notes = []
  * noteFewFigures(measure('20 mmol'), '20 mmol', 'the target', notes)
