@@ -32,6 +32,7 @@ export function renderError(error: PondusError, options: RenderOptions = {}): st
     }
     if (issue.hint) out.push(`  hint: ${visibleText(issue.hint)}`);
   }
+  if (error.more) out.push(`${where}  … and more problems; the first ${error.issues.length} are shown`);
   return out.join('\n');
 }
 
@@ -57,19 +58,51 @@ function visible(ch: string): string {
   return ch;
 }
 
+/** The JSON form of one issue: its code, message, column (or null) and any hint. */
+export interface IssueJson {
+  code: string;
+  message: string;
+  column: number | null;
+  hint?: string;
+}
+
 /**
- * The JSON form of an error, as written in place of a failed result in batch output.
+ * The JSON form of an error's first issue, as written in a failed row's `error`.
  *
  * @example
  * errorJson(safeParseFormula('Xx2').error) // { code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Xx'", column: 1 }
  */
-export function errorJson(error: PondusError): { code: string; message: string; column: number | null; hint?: string } {
-  const i: Issue = error.first;
-  const o: { code: string; message: string; column: number | null; hint?: string } = {
-    code: i.code,
-    message: i.message,
-    column: i.column ?? null,
-  };
+export function errorJson(error: PondusError): IssueJson {
+  return issueJson(error.first);
+}
+
+/**
+ * The JSON form of every issue of an error, in the order of the input, as written in a failed row's `errors`.
+ *
+ * @example
+ * errorsJson(safeParseFormula('XxQq').error).map((e) => e.column) // [1, 3]
+ */
+export function errorsJson(error: PondusError): IssueJson[] {
+  return error.issues.map(issueJson);
+}
+
+function issueJson(i: Issue): IssueJson {
+  const o: IssueJson = { code: i.code, message: i.message, column: i.column ?? null };
   if (i.hint) o.hint = i.hint;
+  return o;
+}
+
+/**
+ * The fields of a failed row after its identification: `error` (the first issue, as before there
+ * was a list), `errors` (every issue), and `errorsTruncated: true` when the input had more than
+ * are kept. The one place the error part of a JSON row is made.
+ *
+ * @example
+ * Object.keys(errorRowFields(safeParseFormula('XxQq').error)) // ['error', 'errors']
+ */
+export function errorRowFields(error: PondusError): { error: IssueJson; errors: IssueJson[]; errorsTruncated?: true } {
+  const errors = errorsJson(error);
+  const o: { error: IssueJson; errors: IssueJson[]; errorsTruncated?: true } = { error: errors[0], errors };
+  if (error.more) o.errorsTruncated = true;
   return o;
 }

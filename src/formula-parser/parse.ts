@@ -4,18 +4,19 @@
  */
 import type { IRecognitionException, IToken } from 'chevrotain';
 import type { Issue } from '../errors/issue.js';
-import { PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { MAX_ISSUES, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { isElementSymbol } from '../elements/element-table.js';
 import type { Note } from '../errors/issue.js';
-import { ABBREVIATIONS } from './abbreviations.js';
+import { ABBREVIATIONS, REFUSED_ABBREVIATIONS } from './abbreviations.js';
 import { fastParse } from './fast-path.js';
 import { unknownElementHint } from './hints.js';
 import { formulaGrammar } from './grammar.js';
 import { REAGENTS } from './names.js';
-import { columnOf, MAX_FORMULA_LENGTH, prescan } from './prescan.js';
+import { columnOf, MAX_FORMULA_LENGTH, prescanAll } from './prescan.js';
 import { settleReadings } from './readings.js';
 import { ABBREVIATION_MODE, ELEMENTS_MODE, formulaLexer, PLAIN_MODE } from './tokens.js';
 import { end, type ComponentNode, type FormulaTree, type GroupNode, type PartNode, type Span } from './tree.js';
-import { TreeBuilder, type ReadingMode } from './visitor.js';
+import { TreeBuilder, unknownElement, type ReadingMode } from './visitor.js';
 
 /** Options for {@link parseFormula}. */
 export interface ParseOptions {
@@ -62,8 +63,8 @@ export function parseFormula(input: string, options: ParseOptions = {}): Formula
  */
 export function parseWithGrammar(input: string, options: ParseOptions = {}): FormulaTree {
   const mode: ReadingMode = options.abbreviations === true ? 'abbreviations' : options.abbreviations === 'none' ? 'elements' : 'plain';
-  const pre = prescan(input, options.maxLength ?? MAX_FORMULA_LENGTH);
-  if (pre) throw new PondusError([pre], input);
+  const pre = prescanAll(input, options.maxLength ?? MAX_FORMULA_LENGTH);
+  if (pre.length > 0) throw new PondusError(pre, input);
 
   const state = stateSymbol(input);
   const text = state ? input.slice(0, state.offset) : input;
@@ -71,13 +72,17 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
 
   const lexed = formulaLexer().tokenize(text, mode === 'abbreviations' ? ABBREVIATION_MODE : mode === 'elements' ? ELEMENTS_MODE : PLAIN_MODE);
   if (lexed.errors.length > 0) {
-    const e = lexed.errors[0];
-    throw new PondusError([unexpectedCharacter(input, e.offset)], input);
+    // every stray character, and every word that is no element symbol among the tokens read around them
+    const found = lexed.errors.slice(0, MAX_ISSUES + 1).map((e) => unexpectedCharacter(input, e.offset));
+    throw new PondusError(byColumn([...found, ...unknownWords(text, lexed.tokens)]), input);
   }
   const grammar = formulaGrammar();
   grammar.input = lexed.tokens;
   const cst = grammar.formula();
-  if (grammar.errors.length > 0) throw new PondusError([syntaxIssue(text, grammar.errors[0], lexed.tokens)], input);
+  if (grammar.errors.length > 0) {
+    // the grammar stops at its first error; the words that are no element symbol are found in the tokens
+    throw new PondusError(byColumn([syntaxIssue(text, grammar.errors[0], lexed.tokens), ...unknownWords(text, lexed.tokens)]), input);
+  }
 
   builder ??= new TreeBuilder();
   const built = builder.build(cst, text, expandAbbreviation);
@@ -125,6 +130,27 @@ function stateSymbol(input: string): { offset: number; symbol: string; letters: 
  */
 export function safeParseFormula(input: string, options: ParseOptions = {}): SafeResult<FormulaTree> {
   return toSafe(() => parseFormula(input, options));
+}
+
+/** Issues in the order of the input (a stable sort: issues at one column keep their order). */
+function byColumn(issues: Issue[]): Issue[] {
+  return issues.sort((a, b) => (a.column ?? 0) - (b.column ?? 0));
+}
+
+/**
+ * The words among the tokens that are no element symbol (nor D, T or a name the reader refuses with
+ * its readings), as the visitor reports them: for input the grammar could not read as a whole.
+ */
+function unknownWords(text: string, tokens: IToken[]): Issue[] {
+  const out: Issue[] = [];
+  for (const t of tokens) {
+    if (out.length > MAX_ISSUES) break;
+    if (t.tokenType.name !== 'Word') continue;
+    const w = t.image;
+    if (w === 'D' || w === 'T' || isElementSymbol(w) || Object.hasOwn(REFUSED_ABBREVIATIONS, w)) continue;
+    out.push(unknownElement(text, w, t.startOffset));
+  }
+  return out;
 }
 
 const CHAR_HINTS: Record<string, string> = {

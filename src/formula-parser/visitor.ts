@@ -254,8 +254,7 @@ export class TreeBuilder {
 
   private makeAtom(symbol: string, massNumber: number | null, symbolOffset: number, start: number, end: number): AtomNode {
     if (!isElementSymbol(symbol)) {
-      const hint = unknownSymbolHint(symbol, false);
-      this.issue('UNKNOWN_ELEMENT', `unknown element symbol '${symbol}'`, symbolOffset, symbol.length, hint);
+      this.issues.push(unknownElement(this.text, symbol, symbolOffset));
     } else if (massNumber !== null && !getNuclide(symbol, massNumber)) {
       this.issue('UNKNOWN_ISOTOPE', `no nuclide ${symbol}-${massNumber} is known (AME2020 lists none)`, start, end - start);
     }
@@ -333,6 +332,20 @@ export class TreeBuilder {
     return sign * magnitude;
   }
 
+}
+
+/**
+ * The issue for a word that is no element symbol, at its offset in the text, with the short hint
+ * (parse.ts may replace it with one that looks at the whole formula).
+ *
+ * @example
+ * unknownElement('XxO', 'Xx', 0).column // 1
+ */
+export function unknownElement(text: string, symbol: string, offset: number): Issue {
+  const i: Issue = { code: 'UNKNOWN_ELEMENT', message: `unknown element symbol '${symbol}'`, column: columnOf(text, offset), length: symbol.length };
+  const hint = unknownSymbolHint(symbol, false);
+  if (hint) i.hint = hint;
+  return i;
 }
 
 function gcd(a: number, b: number): number {
