@@ -4,6 +4,7 @@
  */
 import type { IRecognitionException, IToken } from 'chevrotain';
 import type { Issue } from '../errors/issue.js';
+import { typedIssue } from '../errors/message.js';
 import { MAX_ISSUES, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { isElementSymbol } from '../elements/element-table.js';
 import type { Note } from '../errors/issue.js';
@@ -68,7 +69,7 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
 
   const state = stateSymbol(input);
   const text = state ? input.slice(0, state.offset) : input;
-  if (state && text.trim() === '') throw new PondusError([{ code: 'EMPTY_INPUT', message: `only a state symbol, '${state.symbol}', and no formula` }], input);
+  if (state && text.trim() === '') throw new PondusError([typedIssue({ code: 'EMPTY_INPUT', stateSymbol: state.symbol })], input);
 
   const lexed = formulaLexer().tokenize(text, mode === 'abbreviations' ? ABBREVIATION_MODE : mode === 'elements' ? ELEMENTS_MODE : PLAIN_MODE);
   if (lexed.errors.length > 0) {
@@ -97,6 +98,8 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
           const hint = unknownElementHint(text, unknown, mode, (s) => safeParseFormula(s, { ...options, abbreviations: mode === 'elements' ? 'none' : false }).success);
           if (hint) unknown.hint = hint;
           else delete unknown.hint;
+          // the hint names the option neutrally; each reader is shown its own name for it
+          if (hint?.includes('`abbreviations')) unknown.options = ['abbreviations'];
         }
       } finally {
         hintDepth--;
@@ -166,7 +169,7 @@ const CHAR_HINTS: Record<string, string> = {
 
 function unexpectedCharacter(input: string, offset: number): Issue {
   const ch = String.fromCodePoint(input.codePointAt(offset)!);
-  const i: Issue = { code: 'UNEXPECTED_CHARACTER', message: `unexpected character '${ch}' at column ${columnOf(input, offset)}`, column: columnOf(input, offset), length: 1 };
+  const i: Issue = typedIssue({ code: 'UNEXPECTED_CHARACTER', character: ch, column: columnOf(input, offset), length: 1 });
   const hint = CHAR_HINTS[ch];
   if (hint) i.hint = hint;
   return i;
@@ -180,29 +183,28 @@ function syntaxIssue(input: string, err: IRecognitionException, tokens: IToken[]
   if (isEof) {
     const last = tokens[tokens.length - 1];
     const offset = last ? end(last) : input.length;
-    const after = last ? ` after '${last.image}'` : '';
-    return { code: 'UNEXPECTED_TOKEN', message: `the formula ends too early${after}: expected an element symbol or an opening bracket`, column: columnOf(input, offset), length: 1 };
+    return typedIssue({ code: 'UNEXPECTED_TOKEN', token: null, after: last ? last.image : null, expected: 'formula', column: columnOf(input, offset), length: 1 });
   }
   const column = columnOf(input, t.startOffset);
   const length = Math.max(1, end(t) - t.startOffset);
   const name = t.tokenType.name;
   const prev = tokens[tokens.indexOf(t) - 1];
   if (prev && (CHARGE_TOKENS.has(prev.tokenType.name) || prev.tokenType.name === 'Sign')) {
-    return { code: 'MISPLACED_CHARGE', message: `a charge must come at the end of the formula; '${t.image}' follows the charge '${prev.image}'`, column: columnOf(input, prev.startOffset), length: prev.image.length };
+    return typedIssue({ code: 'MISPLACED_CHARGE', charge: prev.image, following: t.image, column: columnOf(input, prev.startOffset), length: prev.image.length });
   }
   if (CHARGE_TOKENS.has(name) || name === 'Sign') {
-    return { code: 'MISPLACED_CHARGE', message: `a charge must come at the end of the formula, after a symbol, count or bracket; unexpected '${t.image}' at column ${column}`, column, length };
+    return typedIssue({ code: 'MISPLACED_CHARGE', charge: t.image, following: null, column, length });
   }
   if (name === 'Number' || name === 'SubscriptDigits') {
-    return { code: 'UNEXPECTED_TOKEN', message: `unexpected count '${t.image}' at column ${column}: a count follows an element symbol or a closing bracket`, column, length };
+    return typedIssue({ code: 'UNEXPECTED_TOKEN', token: t.image, after: prev ? prev.image : null, expected: 'count-place', column, length });
   }
   if (name === 'Separator') {
-    return { code: 'UNEXPECTED_TOKEN', message: `unexpected '${t.image}' at column ${column}: the addition dot stands between two formulas, as in CuSO4·5H2O`, column, length };
+    return typedIssue({ code: 'UNEXPECTED_TOKEN', token: t.image, after: prev ? prev.image : null, expected: 'addition-dot', column, length });
   }
   if (name === 'SuperscriptDigits') {
-    return { code: 'UNEXPECTED_TOKEN', message: `superscript digits at column ${column} must be a mass number before an element symbol (¹³C) or a charge ending in ⁺ or ⁻`, column, length };
+    return typedIssue({ code: 'UNEXPECTED_TOKEN', token: t.image, after: prev ? prev.image : null, expected: 'superscript', column, length });
   }
-  return { code: 'UNEXPECTED_TOKEN', message: `unexpected '${t.image}' at column ${column}`, column, length };
+  return typedIssue({ code: 'UNEXPECTED_TOKEN', token: t.image, after: prev ? prev.image : null, expected: null, column, length });
 }
 
 const expansions = new Map<string, ComponentNode[]>();

@@ -5,6 +5,7 @@
  * nesting, a megabyte line) away from the recursive-descent parser.
  */
 import type { Issue } from '../errors/issue.js';
+import { typedIssue } from '../errors/message.js';
 import { MAX_ISSUES } from '../errors/pondus-error.js';
 
 /** Longest formula text accepted, in UTF-16 code units. */
@@ -54,9 +55,9 @@ export function prescan(text: string, maxLength = MAX_FORMULA_LENGTH): Issue | n
  * prescanAll('(Ca)]Cl)').length           // 2
  */
 export function prescanAll(text: string, maxLength = MAX_FORMULA_LENGTH): Issue[] {
-  if (text.trim() === '') return [{ code: 'EMPTY_INPUT', message: 'the formula is empty' }];
+  if (text.trim() === '') return [typedIssue({ code: 'EMPTY_INPUT', stateSymbol: null })];
   if (text.length > maxLength) {
-    return [{ code: 'INPUT_TOO_LONG', message: `the formula is ${text.length.toLocaleString('en-US')} characters long; the limit is ${maxLength.toLocaleString('en-US')}`, column: maxLength + 1 }];
+    return [typedIssue({ code: 'INPUT_TOO_LONG', characters: text.length, limit: maxLength, column: maxLength + 1 })];
   }
   const out: Issue[] = [];
   const stack: number[] = [];
@@ -64,7 +65,7 @@ export function prescanAll(text: string, maxLength = MAX_FORMULA_LENGTH): Issue[
     const ch = text[i];
     const code = text.charCodeAt(i);
     if ((code < 0x20 && code !== 0x09) || code === 0x7f || (code >= 0x80 && code < 0xa0)) {
-      out.push({ code: 'CONTROL_CHARACTER', message: `control character U+${code.toString(16).toUpperCase().padStart(4, '0')} in the formula`, column: columnOf(text, i) });
+      out.push(typedIssue({ code: 'CONTROL_CHARACTER', codePoint: code, column: columnOf(text, i) }));
       continue;
     }
     if (ch === '[') {
@@ -78,35 +79,31 @@ export function prescanAll(text: string, maxLength = MAX_FORMULA_LENGTH): Issue[
     if (OPEN[ch]) {
       if (stack.length >= MAX_NESTING) {
         // hostile input: said once, and the rest of the text is not looked at
-        return [...out, { code: 'NESTING_TOO_DEEP', message: `brackets nested more than ${MAX_NESTING} deep`, column: columnOf(text, i) }];
+        return [...out, typedIssue({ code: 'NESTING_TOO_DEEP', limit: MAX_NESTING, column: columnOf(text, i) })];
       }
       let j = i + 1;
       while (text[j] === ' ' || text[j] === '\t') j++;
       if (text[j] === OPEN[ch]) {
-        out.push({ code: 'EMPTY_GROUP', message: `empty brackets '${ch}${OPEN[ch]}'`, column: columnOf(text, i), length: 2 });
+        out.push(typedIssue({ code: 'EMPTY_GROUP', bracket: ch, column: columnOf(text, i), length: 2 }));
         i = j;
         continue;
       }
       stack.push(i);
     } else if (CLOSE[ch]) {
       if (stack.length === 0) {
-        out.push({ code: 'UNMATCHED_CLOSING', message: `'${ch}' has no opening '${CLOSE[ch]}'`, column: columnOf(text, i) });
+        out.push(typedIssue({ code: 'UNMATCHED_CLOSING', bracket: ch, column: columnOf(text, i) }));
         continue;
       }
       const open = stack.pop()!;
       if (text[open] !== CLOSE[ch]) {
-        out.push({
-          code: 'MISMATCHED_BRACKET',
-          message: `'${ch}' at column ${columnOf(text, i)} closes '${text[open]}' from column ${columnOf(text, open)}; expected '${OPEN[text[open]]}'`,
-          column: columnOf(text, i),
-        });
+        out.push(typedIssue({ code: 'MISMATCHED_BRACKET', bracket: ch, opening: text[open], openingColumn: columnOf(text, open), column: columnOf(text, i) }));
       }
     }
   }
   // brackets never closed, outermost first
   for (const open of stack) {
     if (out.length > MAX_ISSUES) break;
-    out.push({ code: 'UNCLOSED_GROUP', message: `'${text[open]}' at column ${columnOf(text, open)} is never closed`, column: columnOf(text, open) });
+    out.push(typedIssue({ code: 'UNCLOSED_GROUP', bracket: text[open], column: columnOf(text, open) }));
   }
   if (out.length > 0) return out.sort((a, b) => (a.column ?? 0) - (b.column ?? 0));
   return spaceIssues(text);
@@ -138,12 +135,7 @@ function spaceIssues(text: string): Issue[] {
     const column = columnOf(text, at);
     // (made once, without the shared global pattern, whose position the loop keeps)
     joined ??= text.slice(first, trimmedEnd).replace(/[ \t\u00a0\u2009\u202f]+/g, '');
-    const issue: Issue = {
-      code: 'SPACE_IN_FORMULA',
-      message: `a space at column ${column} inside the formula: pondus does not join the pieces around it, because '${joined}' may be a different substance from what was meant`,
-      column,
-      length: m[0].length,
-    };
+    const issue: Issue = typedIssue({ code: 'SPACE_IN_FORMULA', joined, column, length: m[0].length });
     // the advice is given once, with the first space
     if (out.length === 0) issue.hint = 'give one formula per argument or per line; write · between the parts of an addition compound (CuSO4·5H2O)';
     out.push(issue);

@@ -3,7 +3,8 @@
  * the grammar cannot: element symbols, nuclides, counts and charges.
  */
 import type { CstNode, IToken } from 'chevrotain';
-import type { Issue, Note } from '../errors/issue.js';
+import type { Issue, Note, TypedIssue } from '../errors/issue.js';
+import { typedIssue } from '../errors/message.js';
 import { getElement, isElementSymbol } from '../elements/element-table.js';
 import { ABBREVIATION_CLASHES, ABBREVIATIONS, REFUSED_ABBREVIATIONS } from './abbreviations.js';
 import { REAGENTS } from './names.js';
@@ -47,6 +48,9 @@ function fromSubscript(s: string): string {
   return out;
 }
 
+/** Omit over each member of a union (so the fields of each code stay tied to it). */
+type DistributiveOmit<T, K extends PropertyKey> = T extends unknown ? Omit<T, K> : never;
+
 type Ctx = Record<string, (CstNode | IToken)[] | undefined>;
 
 const tok = (ctx: Ctx, name: string): IToken | undefined => ctx[name]?.[0] as IToken | undefined;
@@ -87,8 +91,16 @@ export class TreeBuilder {
     return { components, charge, issues: this.issues, notes: this.notes };
   }
 
+  /** An issue with its message only (a reading refused with both readings in words). */
   private issue(code: Issue['code'], message: string, offset: number, length: number, hint?: string): void {
     const i: Issue = { code, message, column: columnOf(this.text, offset), length };
+    if (hint) i.hint = hint;
+    this.issues.push(i);
+  }
+
+  /** A typed issue: its code and machine fields, at an offset; the message is made from the fields. */
+  private typed(fields: DistributiveOmit<TypedIssue, 'message' | 'column' | 'length'>, offset: number, length: number, hint?: string): void {
+    const i: Issue = typedIssue({ ...fields, column: columnOf(this.text, offset), length } as Omit<TypedIssue, 'message'>);
     if (hint) i.hint = hint;
     this.issues.push(i);
   }
@@ -149,7 +161,7 @@ export class TreeBuilder {
     const [first] = [...this.inexact.keys()];
     const [n, d] = this.inexact.get(first)!;
     const hint = whole ? `write whole multipliers instead: ${texts.join('·')} has the same proportions` : 'write whole multipliers instead (multiply every component by the same number)';
-    this.issue('INEXACT_FRACTION', `the multiplier ${n}/${d} has no exact decimal form, and pondus keeps counts exact`, first, 1, hint);
+    this.typed({ code: 'INEXACT_FRACTION', numerator: n, denominator: d }, first, 1, hint);
   }
 
   component(ctx: Ctx): ComponentNode {
@@ -167,11 +179,11 @@ export class TreeBuilder {
     const [n, d] = VULGAR_FRACTIONS[t.image] ?? (t.image.split('/').map(Number) as [number, number]);
     const len = span.end - span.start;
     if (d === 0) {
-      this.issue('BAD_COUNT', `the fraction '${t.image}' divides by zero`, span.start, len);
+      this.typed({ code: 'BAD_COUNT', count: t.image, problem: 'divides-by-zero', limit: null }, span.start, len);
       return { text: '1', integer: true, span };
     }
     if (n === 0) {
-      this.issue('BAD_COUNT', 'a multiplier of zero; leave the part out instead', span.start, len);
+      this.typed({ code: 'BAD_COUNT', count: t.image, problem: 'zero-multiplier', limit: null }, span.start, len);
       return { text: '1', integer: true, span };
     }
     let rest = d;
@@ -182,7 +194,7 @@ export class TreeBuilder {
     const places = Math.max(twos, fives);
     if (rest !== 1 || places > MAX_COUNT_DECIMALS || !Number.isSafeInteger(n * 10 ** places) || String(n).length > MAX_COUNT_DIGITS) {
       if (rest !== 1) this.inexact.set(span.start, [n, d]);
-      else this.issue('BAD_COUNT', `the fraction '${t.image}' has more than ${MAX_COUNT_DECIMALS} decimals`, span.start, len);
+      else this.typed({ code: 'BAD_COUNT', count: t.image, problem: 'fraction-decimals', limit: MAX_COUNT_DECIMALS }, span.start, len);
       return { text: '1', integer: true, span };
     }
     const scaled = (n * 10 ** places) / d; // exact: d divides 10^places
@@ -232,7 +244,7 @@ export class TreeBuilder {
     const end = endOf(word);
     if (sup) {
       if (word.image === 'D' || word.image === 'T') {
-        this.issue('UNKNOWN_ISOTOPE', `'${word.image}' already names a hydrogen isotope; it takes no mass number`, start, end - start);
+        this.typed({ code: 'UNKNOWN_ISOTOPE', symbol: word.image, massNumber: null }, start, end - start);
         return placeholder(start, end);
       }
       return this.makeAtom(word.image, Number(fromSuperscript(sup.image)), word.startOffset, start, end);
@@ -256,7 +268,7 @@ export class TreeBuilder {
     if (!isElementSymbol(symbol)) {
       this.issues.push(unknownElement(this.text, symbol, symbolOffset));
     } else if (massNumber !== null && !getNuclide(symbol, massNumber)) {
-      this.issue('UNKNOWN_ISOTOPE', `no nuclide ${symbol}-${massNumber} is known (AME2020 lists none)`, start, end - start);
+      this.typed({ code: 'UNKNOWN_ISOTOPE', symbol, massNumber }, start, end - start);
     }
     return { kind: 'atom', symbol, massNumber, count: null, span: { start, end } };
   }
@@ -295,13 +307,13 @@ export class TreeBuilder {
     const frac = dot < 0 ? '' : text.slice(dot + 1);
     const len = span.end - span.start;
     if (int.length > MAX_COUNT_DIGITS) {
-      this.issue('COUNT_TOO_LARGE', `count ${text} is too large; counts go up to 999,999,999`, span.start, len);
+      this.typed({ code: 'COUNT_TOO_LARGE', count: text, limit: 10 ** MAX_COUNT_DIGITS - 1 }, span.start, len);
     } else if (int.length > 1 && int[0] === '0') {
-      this.issue('BAD_COUNT', `count '${text}' has a leading zero`, span.start, len);
+      this.typed({ code: 'BAD_COUNT', count: text, problem: 'leading-zero', limit: null }, span.start, len);
     } else if (frac.length > MAX_COUNT_DECIMALS) {
-      this.issue('BAD_COUNT', `count '${text}' has more than ${MAX_COUNT_DECIMALS} decimals`, span.start, len);
+      this.typed({ code: 'BAD_COUNT', count: text, problem: 'decimals', limit: MAX_COUNT_DECIMALS }, span.start, len);
     } else if (/^[0.]+$/.test(text)) {
-      this.issue('BAD_COUNT', 'a count of zero; leave the part out instead', span.start, len);
+      this.typed({ code: 'BAD_COUNT', count: text, problem: 'zero', limit: null }, span.start, len);
     }
     const normal = frac.replace(/0+$/, '');
     return { text: normal ? `${int}.${normal}` : int, integer: normal === '', span };
@@ -316,7 +328,7 @@ export class TreeBuilder {
       if (digits) {
         const head = before.slice(0, before.length - digits[0].length);
         const sign = t.image === '+' ? '+' : '-';
-        this.issue('AMBIGUOUS_CHARGE', `the '${t.image}' after '${digits[0]}' could mean a charge of ${sign === '+' ? '1+' : '1-'} or of ${digits[0]}${sign}`, t.startOffset, 1,
+        this.typed({ code: 'AMBIGUOUS_CHARGE', written: t.image, digits: digits[0], sign }, t.startOffset, 1,
           `write ${head}${digits[0]}^${sign} for a charge of 1${sign}, or ${head}^${digits[0]}${sign} for ${digits[0]}${sign}`);
         return 0;
       }
@@ -326,7 +338,7 @@ export class TreeBuilder {
     const digits = text.replace(/[+-]/g, '');
     const magnitude = digits === '' ? 1 : Number(digits);
     if (magnitude === 0 || digits.length > 2 || magnitude > MAX_CHARGE) {
-      this.issue('BAD_CHARGE', magnitude === 0 ? 'a charge of zero; leave it out' : `charge ${digits} is out of range (at most ${MAX_CHARGE})`, t.startOffset, len);
+      this.typed({ code: 'BAD_CHARGE', charge: digits === '' ? '1' : digits, limit: MAX_CHARGE }, t.startOffset, len);
       return 0;
     }
     return sign * magnitude;
@@ -342,7 +354,7 @@ export class TreeBuilder {
  * unknownElement('XxO', 'Xx', 0).column // 1
  */
 export function unknownElement(text: string, symbol: string, offset: number): Issue {
-  const i: Issue = { code: 'UNKNOWN_ELEMENT', message: `unknown element symbol '${symbol}'`, column: columnOf(text, offset), length: symbol.length };
+  const i: Issue = typedIssue({ code: 'UNKNOWN_ELEMENT', symbol, column: columnOf(text, offset), length: symbol.length });
   const hint = unknownSymbolHint(symbol, false);
   if (hint) i.hint = hint;
   return i;

@@ -3,7 +3,8 @@
  * (or error) in order; nothing is dropped.
  */
 import type { ChalkInstance } from 'chalk';
-import { errorRowFields, renderError } from '../../errors/render.js';
+import { errorRowFields, FLAG_NAMING, renderError } from '../../errors/render.js';
+import { messageFor } from '../../errors/message.js';
 import type { PondusError } from '../../errors/pondus-error.js';
 import type { InputItem } from '../input/inputs.js';
 import { delimitedCell, guardCell, notesCell, visibleControls, type Cell, type OutputFormat } from './format.js';
@@ -34,7 +35,7 @@ function identityOf(item: InputItem): [string, string][] {
 export function errorRowLine(item: InputItem, error: PondusError): string {
   const row: Record<string, unknown> = { line: item.line };
   for (const [k, v] of identityOf(item)) row[k] = v;
-  return JSON.stringify({ ...row, ...errorRowFields(error) }) + '\n';
+  return JSON.stringify({ ...row, ...errorRowFields(error, FLAG_NAMING) }) + '\n';
 }
 
 export interface ResultWriter<R> {
@@ -167,7 +168,7 @@ class DelimitedWriter<R> implements ResultWriter<R> {
     const lineAt = this.header.indexOf('line');
     if (lineAt >= 0) cells[lineAt] = item.line;
     const codes = error.issues.map((i) => i.code).join(' | ');
-    const messages = error.issues.map((i) => i.message).join(' | ') + (error.more ? ' | … and more' : '');
+    const messages = error.issues.map((i) => messageFor(i, FLAG_NAMING)).join(' | ') + (error.more ? ' | … and more' : '');
     this.write([...cells, codes, messages], true);
   }
   endBatch(): void {
@@ -223,7 +224,7 @@ class TableWriter<R> implements ResultWriter<R> {
   }
 
   fail(item: InputItem, error: PondusError): void {
-    const opts = this.ctx.numbered ? { line: item.line, emphasis: this.ctx.errStyle.red } : { emphasis: this.ctx.errStyle.red };
+    const opts = { ...(this.ctx.numbered ? { line: item.line } : {}), emphasis: this.ctx.errStyle.red, naming: FLAG_NAMING };
     this.ctx.err.write(renderError(error, opts) + '\n');
     if (!this.p.block && this.ctx.numbered) {
       const width = this.p.table!.head.length;
