@@ -5,6 +5,7 @@
 import type { CstNode, IToken } from 'chevrotain';
 import type { Issue, Note, TypedIssue } from '../errors/issue.js';
 import { typedIssue } from '../errors/message.js';
+import { lcm } from '../exact/gcd.js';
 import { getElement, isElementSymbol } from '../elements/element-table.js';
 import { ABBREVIATION_CLASHES, ABBREVIATIONS, REFUSED_ABBREVIATIONS } from './abbreviations.js';
 import { REAGENTS } from './names.js';
@@ -358,14 +359,6 @@ export function unknownElement(text: string, symbol: string, offset: number): Is
   const hint = unknownSymbolHint(symbol, false);
   if (hint) i.hint = hint;
   return i;
-}
-
-function gcd(a: number, b: number): number {
-  return b === 0 ? a : gcd(b, a % b);
-}
-
-function lcm(a: number, b: number): number {
-  return (a / gcd(a, b)) * b;
 }
 
 function placeholder(start: number, end: number): AtomNode {
