@@ -17,7 +17,8 @@ import { columnOf, MAX_FORMULA_LENGTH, prescanAll } from './prescan.js';
 import { settleReadings } from './readings.js';
 import { ABBREVIATION_MODE, ELEMENTS_MODE, formulaLexer, PLAIN_MODE } from './tokens.js';
 import { end, type ComponentNode, type FormulaTree, type GroupNode, type PartNode, type Span } from './tree.js';
-import { TreeBuilder, unknownElement, type ReadingMode } from './visitor.js';
+import type { FormulaCstNode } from './cst.js';
+import { buildTree, unknownElement, type ReadingMode } from './visitor.js';
 
 /** Options for {@link parseFormula}. */
 export interface ParseOptions {
@@ -36,7 +37,6 @@ export interface ParseOptions {
   maxLength?: number;
 }
 
-let builder: TreeBuilder | null = null;
 /** Above 0 while a hint re-reads a formula with other letter case. */
 let hintDepth = 0;
 
@@ -79,14 +79,13 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
   }
   const grammar = formulaGrammar();
   grammar.input = lexed.tokens;
-  const cst = grammar.formula();
+  const cst = grammar.formula() as FormulaCstNode;
   if (grammar.errors.length > 0) {
     // the grammar stops at its first error; the words that are no element symbol are found in the tokens
     throw new PondusError(byColumn([syntaxIssue(text, grammar.errors[0], lexed.tokens), ...unknownWords(text, lexed.tokens)]), input);
   }
 
-  builder ??= new TreeBuilder();
-  const built = builder.build(cst, text, expandAbbreviation);
+  const built = buildTree(cst, text, expandAbbreviation);
   if (built.issues.length > 0) {
     // the first few unknown symbols get a hint that looks at the whole formula; the rest keep the visitor's short one
     // (a re-read tried for a hint needs only its success: it gets no hints of its own, so the
