@@ -6,7 +6,8 @@
 import { Command, CommanderError } from 'commander';
 import type { Writable } from 'node:stream';
 import { PondusError } from '../errors/pondus-error.js';
-import { renderError } from '../errors/render.js';
+import { FLAG_NAMING, renderError } from '../errors/render.js';
+import { messageFor } from '../errors/message.js';
 import { runBatch } from './batch.js';
 import { registerAnalysis } from './commands/analysis.js';
 import { registerBalance } from './commands/balance.js';
@@ -121,10 +122,10 @@ export async function main(args: string[], io: CliIo): Promise<number> {
     if (e instanceof CommanderError) {
       status = e.exitCode === 0 ? 0 : 2;
     } else if (e instanceof PondusError && e.first.code === 'USAGE') {
-      err.write(`pondus: ${e.first.message}\n`);
+      err.write(`pondus: ${messageFor(e.first, FLAG_NAMING)}\n`);
       status = 2;
     } else if (e instanceof PondusError) {
-      err.write(renderError(e, { emphasis: errStyle.red }) + '\n');
+      err.write(renderError(e, { emphasis: errStyle.red, naming: FLAG_NAMING }) + '\n');
       status = 2;
     } else {
       err.write(`pondus: internal error (please report it): ${e instanceof Error ? e.message : String(e)}\n`);

@@ -1,8 +1,15 @@
 import type { Issue } from './issue.js';
 
 /**
+ * Most issues one error carries. A reader that finds more keeps the first ones (in the order of
+ * the input) and sets {@link PondusError.more}, so a hostile line stays cheap to report.
+ */
+export const MAX_ISSUES = 20;
+
+/**
  * The one error type pondus throws. It carries the offending input and the
- * list of issues found in it; render it with {@link renderError}.
+ * list of every issue found in it (up to {@link MAX_ISSUES}), in the order of the input; render
+ * it with {@link renderError}.
  *
  * @example
  * let code = ''
@@ -12,12 +19,16 @@ import type { Issue } from './issue.js';
 export class PondusError extends Error {
   readonly issues: Issue[];
   readonly input: string | undefined;
+  /** True when the input had more issues than {@link MAX_ISSUES} and only the first are kept. */
+  readonly more: boolean;
 
   constructor(issues: Issue[], input?: string) {
-    super(issues.map((i) => i.message).join('; '));
+    const kept = issues.length > MAX_ISSUES ? issues.slice(0, MAX_ISSUES) : issues;
+    super(kept.map((i) => i.message).join('; '));
     this.name = 'PondusError';
-    this.issues = issues;
+    this.issues = kept;
     this.input = input;
+    this.more = kept !== issues;
   }
 
   /** The first issue, the one shown when only one is shown. */

@@ -1,5 +1,17 @@
 import type { Issue } from './issue.js';
+import { hintFor, LIBRARY_NAMING, messageFor, type OptionNaming } from './message.js';
 import { PondusError } from './pondus-error.js';
+
+/**
+ * The command line's naming of options: the flag (`` `molarMass` `` → `--molar-mass`,
+ * `` `abbreviations: true` `` → `--abbreviations`, `` `density: 1.19 g/mL` `` → `--density 1.19 g/mL`).
+ *
+ * @example
+ * FLAG_NAMING.option('molarMass', undefined) // '--molar-mass'
+ */
+export const FLAG_NAMING: OptionNaming = {
+  option: (name, value) => `--${name.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}${value === undefined || value === 'true' ? '' : ` ${value}`}`,
+};
 
 /** Options for {@link renderError}. */
 export interface RenderOptions {
@@ -7,6 +19,8 @@ export interface RenderOptions {
   line?: number;
   /** Wraps text that should stand out (the caret, the code); identity by default. */
   emphasis?: (s: string) => string;
+  /** How the options an issue names are named: the library's names by default, {@link FLAG_NAMING} on the command line. */
+  naming?: OptionNaming;
 }
 
 const MAX_SHOWN = 100;
@@ -21,17 +35,20 @@ const MAX_SHOWN = 100;
 export function renderError(error: PondusError, options: RenderOptions = {}): string {
   const em = options.emphasis ?? ((s: string) => s);
   const where = options.line !== undefined ? `line ${options.line}: ` : '';
+  const naming = options.naming ?? LIBRARY_NAMING;
   const out: string[] = [];
   for (const issue of error.issues) {
-    out.push(`${where}${em(`error ${issue.code}`)}: ${visibleText(issue.message)}`);
+    out.push(`${where}${em(`error ${issue.code}`)}: ${visibleText(messageFor(issue, naming))}`);
     if (error.input !== undefined && issue.column !== undefined) {
       const [shown, caretAt] = window(error.input, issue.column - 1);
       const len = Math.max(1, Math.min(issue.length ?? 1, MAX_SHOWN - caretAt));
       out.push(`  ${shown}`);
       out.push(`  ${' '.repeat(caretAt)}${em('^'.repeat(len))}`);
     }
-    if (issue.hint) out.push(`  hint: ${visibleText(issue.hint)}`);
+    const hint = hintFor(issue, naming);
+    if (hint) out.push(`  hint: ${visibleText(hint)}`);
   }
+  if (error.more) out.push(`${where}  … and more problems; the first ${error.issues.length} are shown`);
   return out.join('\n');
 }
 
@@ -57,19 +74,52 @@ function visible(ch: string): string {
   return ch;
 }
 
+/** The JSON form of one issue: its code, message, column (or null) and any hint. */
+export interface IssueJson {
+  code: string;
+  message: string;
+  column: number | null;
+  hint?: string;
+}
+
 /**
- * The JSON form of an error, as written in place of a failed result in batch output.
+ * The JSON form of an error's first issue, as written in a failed row's `error`.
  *
  * @example
  * errorJson(safeParseFormula('Xx2').error) // { code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Xx'", column: 1 }
  */
-export function errorJson(error: PondusError): { code: string; message: string; column: number | null; hint?: string } {
-  const i: Issue = error.first;
-  const o: { code: string; message: string; column: number | null; hint?: string } = {
-    code: i.code,
-    message: i.message,
-    column: i.column ?? null,
-  };
-  if (i.hint) o.hint = i.hint;
+export function errorJson(error: PondusError, naming: OptionNaming = LIBRARY_NAMING): IssueJson {
+  return issueJson(error.first, naming);
+}
+
+/**
+ * The JSON form of every issue of an error, in the order of the input, as written in a failed row's `errors`.
+ *
+ * @example
+ * errorsJson(safeParseFormula('XxQq').error).map((e) => e.column) // [1, 3]
+ */
+export function errorsJson(error: PondusError, naming: OptionNaming = LIBRARY_NAMING): IssueJson[] {
+  return error.issues.map((i) => issueJson(i, naming));
+}
+
+function issueJson(i: Issue, naming: OptionNaming): IssueJson {
+  const o: IssueJson = { code: i.code, message: messageFor(i, naming), column: i.column ?? null };
+  const hint = hintFor(i, naming);
+  if (hint) o.hint = hint;
+  return o;
+}
+
+/**
+ * The fields of a failed row after its identification: `error` (the first issue, as before there
+ * was a list), `errors` (every issue), and `errorsTruncated: true` when the input had more than
+ * are kept. The one place the error part of a JSON row is made.
+ *
+ * @example
+ * Object.keys(errorRowFields(safeParseFormula('XxQq').error)) // ['error', 'errors']
+ */
+export function errorRowFields(error: PondusError, naming: OptionNaming = LIBRARY_NAMING): { error: IssueJson; errors: IssueJson[]; errorsTruncated?: true } {
+  const errors = errorsJson(error, naming);
+  const o: { error: IssueJson; errors: IssueJson[]; errorsTruncated?: true } = { error: errors[0], errors };
+  if (error.more) o.errorsTruncated = true;
   return o;
 }

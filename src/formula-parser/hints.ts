@@ -77,7 +77,7 @@ function abbreviationOver(run: string, from: number, to: number): string | null 
 export function unknownElementHint(text: string, issue: Issue, mode: 'elements' | 'plain' | 'abbreviations', parses: (s: string) => boolean): string | undefined {
   const whole = namedSubstance(text.trim());
   if (whole && whole.formula.toLowerCase() !== text.trim().toLowerCase()) {
-    const how = mode === 'abbreviations' || !/^[A-Z]+$/.test(text.trim()) ? '' : ', or read names with --abbreviations (or { abbreviations: true })';
+    const how = mode === 'abbreviations' || !/^[A-Z]+$/.test(text.trim()) ? '' : ', or read names with `abbreviations: true`';
     const what = whole.name.toLowerCase() === text.trim().toLowerCase() ? `'${text.trim()}' is ${whole.formula}` : `'${text.trim()}' is the abbreviation for ${whole.name} (${whole.formula})`;
     return `${what}; write its formula, ${whole.formula}${how}`;
   }
@@ -89,7 +89,7 @@ export function unknownElementHint(text: string, issue: Issue, mode: 'elements' 
     const abbr = abbreviationOver(m[0], offset - from, offset - from + (issue.length ?? 1));
     if (abbr) {
       const a = ABBREVIATIONS[abbr];
-      const why = mode === 'elements' ? 'the element-only reading does not expand it' : Object.hasOwn(ABBREVIATIONS, abbr) ? 'read it with --abbreviations (or { abbreviations: true })' : '';
+      const why = mode === 'elements' ? 'the element-only reading does not expand it' : Object.hasOwn(ABBREVIATIONS, abbr) ? 'read it with `abbreviations: true`' : '';
       return `'${abbr}' is the abbreviation for ${a.name} (${a.formula})${why ? `; ${why}` : ''}`;
     }
     const name = namedSubstance(m[0]);

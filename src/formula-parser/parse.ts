@@ -4,18 +4,21 @@
  */
 import type { IRecognitionException, IToken } from 'chevrotain';
 import type { Issue } from '../errors/issue.js';
-import { PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { typedIssue } from '../errors/message.js';
+import { MAX_ISSUES, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
+import { isElementSymbol } from '../elements/element-table.js';
 import type { Note } from '../errors/issue.js';
-import { ABBREVIATIONS } from './abbreviations.js';
+import { ABBREVIATIONS, REFUSED_ABBREVIATIONS } from './abbreviations.js';
 import { fastParse } from './fast-path.js';
 import { unknownElementHint } from './hints.js';
 import { formulaGrammar } from './grammar.js';
 import { REAGENTS } from './names.js';
-import { columnOf, MAX_FORMULA_LENGTH, prescan } from './prescan.js';
+import { columnOf, MAX_FORMULA_LENGTH, prescanAll } from './prescan.js';
 import { settleReadings } from './readings.js';
 import { ABBREVIATION_MODE, ELEMENTS_MODE, formulaLexer, PLAIN_MODE } from './tokens.js';
 import { end, type ComponentNode, type FormulaTree, type GroupNode, type PartNode, type Span } from './tree.js';
-import { TreeBuilder, type ReadingMode } from './visitor.js';
+import type { FormulaCstNode } from './cst.js';
+import { buildTree, unknownElement, type ReadingMode } from './visitor.js';
 
 /** Options for {@link parseFormula}. */
 export interface ParseOptions {
@@ -34,7 +37,6 @@ export interface ParseOptions {
   maxLength?: number;
 }
 
-let builder: TreeBuilder | null = null;
 /** Above 0 while a hint re-reads a formula with other letter case. */
 let hintDepth = 0;
 
@@ -62,25 +64,28 @@ export function parseFormula(input: string, options: ParseOptions = {}): Formula
  */
 export function parseWithGrammar(input: string, options: ParseOptions = {}): FormulaTree {
   const mode: ReadingMode = options.abbreviations === true ? 'abbreviations' : options.abbreviations === 'none' ? 'elements' : 'plain';
-  const pre = prescan(input, options.maxLength ?? MAX_FORMULA_LENGTH);
-  if (pre) throw new PondusError([pre], input);
+  const pre = prescanAll(input, options.maxLength ?? MAX_FORMULA_LENGTH);
+  if (pre.length > 0) throw new PondusError(pre, input);
 
   const state = stateSymbol(input);
   const text = state ? input.slice(0, state.offset) : input;
-  if (state && text.trim() === '') throw new PondusError([{ code: 'EMPTY_INPUT', message: `only a state symbol, '${state.symbol}', and no formula` }], input);
+  if (state && text.trim() === '') throw new PondusError([typedIssue({ code: 'EMPTY_INPUT', stateSymbol: state.symbol })], input);
 
   const lexed = formulaLexer().tokenize(text, mode === 'abbreviations' ? ABBREVIATION_MODE : mode === 'elements' ? ELEMENTS_MODE : PLAIN_MODE);
   if (lexed.errors.length > 0) {
-    const e = lexed.errors[0];
-    throw new PondusError([unexpectedCharacter(input, e.offset)], input);
+    // every stray character, and every word that is no element symbol among the tokens read around them
+    const found = lexed.errors.slice(0, MAX_ISSUES + 1).map((e) => unexpectedCharacter(input, e.offset));
+    throw new PondusError(byColumn([...found, ...unknownWords(text, lexed.tokens)]), input);
   }
   const grammar = formulaGrammar();
   grammar.input = lexed.tokens;
-  const cst = grammar.formula();
-  if (grammar.errors.length > 0) throw new PondusError([syntaxIssue(text, grammar.errors[0], lexed.tokens)], input);
+  const cst = grammar.formula() as FormulaCstNode;
+  if (grammar.errors.length > 0) {
+    // the grammar stops at its first error; the words that are no element symbol are found in the tokens
+    throw new PondusError(byColumn([syntaxIssue(text, grammar.errors[0], lexed.tokens), ...unknownWords(text, lexed.tokens)]), input);
+  }
 
-  builder ??= new TreeBuilder();
-  const built = builder.build(cst, text, expandAbbreviation);
+  const built = buildTree(cst, text, expandAbbreviation);
   if (built.issues.length > 0) {
     // the first few unknown symbols get a hint that looks at the whole formula; the rest keep the visitor's short one
     // (a re-read tried for a hint needs only its success: it gets no hints of its own, so the
@@ -92,6 +97,8 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
           const hint = unknownElementHint(text, unknown, mode, (s) => safeParseFormula(s, { ...options, abbreviations: mode === 'elements' ? 'none' : false }).success);
           if (hint) unknown.hint = hint;
           else delete unknown.hint;
+          // the hint names the option neutrally; each reader is shown its own name for it
+          if (hint?.includes('`abbreviations')) unknown.options = ['abbreviations'];
         }
       } finally {
         hintDepth--;
@@ -127,6 +134,27 @@ export function safeParseFormula(input: string, options: ParseOptions = {}): Saf
   return toSafe(() => parseFormula(input, options));
 }
 
+/** Issues in the order of the input (a stable sort: issues at one column keep their order). */
+function byColumn(issues: Issue[]): Issue[] {
+  return issues.sort((a, b) => (a.column ?? 0) - (b.column ?? 0));
+}
+
+/**
+ * The words among the tokens that are no element symbol (nor D, T or a name the reader refuses with
+ * its readings), as the visitor reports them: for input the grammar could not read as a whole.
+ */
+function unknownWords(text: string, tokens: IToken[]): Issue[] {
+  const out: Issue[] = [];
+  for (const t of tokens) {
+    if (out.length > MAX_ISSUES) break;
+    if (t.tokenType.name !== 'Word') continue;
+    const w = t.image;
+    if (w === 'D' || w === 'T' || isElementSymbol(w) || Object.hasOwn(REFUSED_ABBREVIATIONS, w)) continue;
+    out.push(unknownElement(text, w, t.startOffset));
+  }
+  return out;
+}
+
 const CHAR_HINTS: Record<string, string> = {
   ',': 'give one formula per argument or per line',
   ';': 'give one formula per argument or per line',
@@ -140,7 +168,7 @@ const CHAR_HINTS: Record<string, string> = {
 
 function unexpectedCharacter(input: string, offset: number): Issue {
   const ch = String.fromCodePoint(input.codePointAt(offset)!);
-  const i: Issue = { code: 'UNEXPECTED_CHARACTER', message: `unexpected character '${ch}' at column ${columnOf(input, offset)}`, column: columnOf(input, offset), length: 1 };
+  const i: Issue = typedIssue({ code: 'UNEXPECTED_CHARACTER', character: ch, column: columnOf(input, offset), length: 1 });
   const hint = CHAR_HINTS[ch];
   if (hint) i.hint = hint;
   return i;
@@ -154,29 +182,28 @@ function syntaxIssue(input: string, err: IRecognitionException, tokens: IToken[]
   if (isEof) {
     const last = tokens[tokens.length - 1];
     const offset = last ? end(last) : input.length;
-    const after = last ? ` after '${last.image}'` : '';
-    return { code: 'UNEXPECTED_TOKEN', message: `the formula ends too early${after}: expected an element symbol or an opening bracket`, column: columnOf(input, offset), length: 1 };
+    return typedIssue({ code: 'UNEXPECTED_TOKEN', token: null, after: last ? last.image : null, expected: 'formula', column: columnOf(input, offset), length: 1 });
   }
   const column = columnOf(input, t.startOffset);
   const length = Math.max(1, end(t) - t.startOffset);
   const name = t.tokenType.name;
   const prev = tokens[tokens.indexOf(t) - 1];
   if (prev && (CHARGE_TOKENS.has(prev.tokenType.name) || prev.tokenType.name === 'Sign')) {
-    return { code: 'MISPLACED_CHARGE', message: `a charge must come at the end of the formula; '${t.image}' follows the charge '${prev.image}'`, column: columnOf(input, prev.startOffset), length: prev.image.length };
+    return typedIssue({ code: 'MISPLACED_CHARGE', charge: prev.image, following: t.image, column: columnOf(input, prev.startOffset), length: prev.image.length });
   }
   if (CHARGE_TOKENS.has(name) || name === 'Sign') {
-    return { code: 'MISPLACED_CHARGE', message: `a charge must come at the end of the formula, after a symbol, count or bracket; unexpected '${t.image}' at column ${column}`, column, length };
+    return typedIssue({ code: 'MISPLACED_CHARGE', charge: t.image, following: null, column, length });
   }
   if (name === 'Number' || name === 'SubscriptDigits') {
-    return { code: 'UNEXPECTED_TOKEN', message: `unexpected count '${t.image}' at column ${column}: a count follows an element symbol or a closing bracket`, column, length };
+    return typedIssue({ code: 'UNEXPECTED_TOKEN', token: t.image, after: prev ? prev.image : null, expected: 'count-place', column, length });
   }
   if (name === 'Separator') {
-    return { code: 'UNEXPECTED_TOKEN', message: `unexpected '${t.image}' at column ${column}: the addition dot stands between two formulas, as in CuSO4·5H2O`, column, length };
+    return typedIssue({ code: 'UNEXPECTED_TOKEN', token: t.image, after: prev ? prev.image : null, expected: 'addition-dot', column, length });
   }
   if (name === 'SuperscriptDigits') {
-    return { code: 'UNEXPECTED_TOKEN', message: `superscript digits at column ${column} must be a mass number before an element symbol (¹³C) or a charge ending in ⁺ or ⁻`, column, length };
+    return typedIssue({ code: 'UNEXPECTED_TOKEN', token: t.image, after: prev ? prev.image : null, expected: 'superscript', column, length });
   }
-  return { code: 'UNEXPECTED_TOKEN', message: `unexpected '${t.image}' at column ${column}`, column, length };
+  return typedIssue({ code: 'UNEXPECTED_TOKEN', token: t.image, after: prev ? prev.image : null, expected: null, column, length });
 }
 
 const expansions = new Map<string, ComponentNode[]>();

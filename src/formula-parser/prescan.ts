@@ -5,6 +5,8 @@
  * nesting, a megabyte line) away from the recursive-descent parser.
  */
 import type { Issue } from '../errors/issue.js';
+import { typedIssue } from '../errors/message.js';
+import { MAX_ISSUES } from '../errors/pondus-error.js';
 
 /** Longest formula text accepted, in UTF-16 code units. */
 export const MAX_FORMULA_LENGTH = 10_000;
@@ -39,16 +41,32 @@ export function columnOf(text: string, offset: number): number {
  * prescan('Ca(OH2').column // 3
  */
 export function prescan(text: string, maxLength = MAX_FORMULA_LENGTH): Issue | null {
-  if (text.trim() === '') return { code: 'EMPTY_INPUT', message: 'the formula is empty' };
+  return prescanAll(text, maxLength)[0] ?? null;
+}
+
+/**
+ * Every problem found in the raw formula text, in the order of the text (empty when there is
+ * none). An empty or overlong input, or nesting past the limit, is the one problem reported; control
+ * characters, bracket problems and stray spaces are each reported, up to {@link MAX_ISSUES} (one
+ * pass over the text).
+ *
+ * @example
+ * prescanAll('Ca(OH2]').map((i) => i.code) // ['MISMATCHED_BRACKET']
+ * prescanAll('(Ca)]Cl)').length           // 2
+ */
+export function prescanAll(text: string, maxLength = MAX_FORMULA_LENGTH): Issue[] {
+  if (text.trim() === '') return [typedIssue({ code: 'EMPTY_INPUT', stateSymbol: null })];
   if (text.length > maxLength) {
-    return { code: 'INPUT_TOO_LONG', message: `the formula is ${text.length.toLocaleString('en-US')} characters long; the limit is ${maxLength.toLocaleString('en-US')}`, column: maxLength + 1 };
+    return [typedIssue({ code: 'INPUT_TOO_LONG', characters: text.length, limit: maxLength, column: maxLength + 1 })];
   }
+  const out: Issue[] = [];
   const stack: number[] = [];
-  for (let i = 0; i < text.length; i++) {
+  for (let i = 0; i < text.length && out.length <= MAX_ISSUES; i++) {
     const ch = text[i];
     const code = text.charCodeAt(i);
     if ((code < 0x20 && code !== 0x09) || code === 0x7f || (code >= 0x80 && code < 0xa0)) {
-      return { code: 'CONTROL_CHARACTER', message: `control character U+${code.toString(16).toUpperCase().padStart(4, '0')} in the formula`, column: columnOf(text, i) };
+      out.push(typedIssue({ code: 'CONTROL_CHARACTER', codePoint: code, column: columnOf(text, i) }));
+      continue;
     }
     if (ch === '[') {
       ISOTOPE_LABEL.lastIndex = i;
@@ -60,33 +78,35 @@ export function prescan(text: string, maxLength = MAX_FORMULA_LENGTH): Issue | n
     }
     if (OPEN[ch]) {
       if (stack.length >= MAX_NESTING) {
-        return { code: 'NESTING_TOO_DEEP', message: `brackets nested more than ${MAX_NESTING} deep`, column: columnOf(text, i) };
+        // hostile input: said once, and the rest of the text is not looked at
+        return [...out, typedIssue({ code: 'NESTING_TOO_DEEP', limit: MAX_NESTING, column: columnOf(text, i) })];
       }
       let j = i + 1;
       while (text[j] === ' ' || text[j] === '\t') j++;
       if (text[j] === OPEN[ch]) {
-        return { code: 'EMPTY_GROUP', message: `empty brackets '${ch}${OPEN[ch]}'`, column: columnOf(text, i), length: 2 };
+        out.push(typedIssue({ code: 'EMPTY_GROUP', bracket: ch, column: columnOf(text, i), length: 2 }));
+        i = j;
+        continue;
       }
       stack.push(i);
     } else if (CLOSE[ch]) {
       if (stack.length === 0) {
-        return { code: 'UNMATCHED_CLOSING', message: `'${ch}' has no opening '${CLOSE[ch]}'`, column: columnOf(text, i) };
+        out.push(typedIssue({ code: 'UNMATCHED_CLOSING', bracket: ch, column: columnOf(text, i) }));
+        continue;
       }
       const open = stack.pop()!;
       if (text[open] !== CLOSE[ch]) {
-        return {
-          code: 'MISMATCHED_BRACKET',
-          message: `'${ch}' at column ${columnOf(text, i)} closes '${text[open]}' from column ${columnOf(text, open)}; expected '${OPEN[text[open]]}'`,
-          column: columnOf(text, i),
-        };
+        out.push(typedIssue({ code: 'MISMATCHED_BRACKET', bracket: ch, opening: text[open], openingColumn: columnOf(text, open), column: columnOf(text, i) }));
       }
     }
   }
-  if (stack.length > 0) {
-    const open = stack[stack.length - 1];
-    return { code: 'UNCLOSED_GROUP', message: `'${text[open]}' at column ${columnOf(text, open)} is never closed`, column: columnOf(text, open) };
+  // brackets never closed, outermost first
+  for (const open of stack) {
+    if (out.length > MAX_ISSUES) break;
+    out.push(typedIssue({ code: 'UNCLOSED_GROUP', bracket: text[open], column: columnOf(text, open) }));
   }
-  return spaceIssue(text);
+  if (out.length > 0) return out.sort((a, b) => (a.column ?? 0) - (b.column ?? 0));
+  return spaceIssues(text);
 }
 
 const SPACES = /[ \t\u00a0\u2009\u202f]+/g;
@@ -98,7 +118,9 @@ const ADDITION_DOTS = '·•∙⋅*.';
  * dot ('CuSO4 · 5H2O'), before a state symbol ('Zn (s)'), and after a decimal count ('Fe2.5 O',
  * which settles that the '.' is a decimal point).
  */
-function spaceIssue(text: string): Issue | null {
+function spaceIssues(text: string): Issue[] {
+  const out: Issue[] = [];
+  let joined: string | null = null;
   const first = text.search(/[^ \t\u00a0\u2009\u202f]/);
   const trimmedEnd = text.replace(/[ \t\u00a0\u2009\u202f]+$/, '').length;
   SPACES.lastIndex = 0;
@@ -111,14 +133,13 @@ function spaceIssue(text: string): Issue | null {
     if (/^\((?:s|l|g|aq)\)/.test(text.slice(after, after + 4))) continue; // 'Zn (s)': a state symbol
     if (/(?:^|[·•∙⋅*.])[ \t\u00a0\u2009\u202f]*[0-9]+(?:\.[0-9]+)?$/.test(text.slice(0, at))) continue; // '· 5 H2O': a component's multiplier
     const column = columnOf(text, at);
-    const joined = text.slice(first, trimmedEnd).replace(SPACES, '');
-    return {
-      code: 'SPACE_IN_FORMULA',
-      message: `a space at column ${column} inside the formula: pondus does not join the pieces around it, because '${joined}' may be a different substance from what was meant`,
-      column,
-      length: m[0].length,
-      hint: 'give one formula per argument or per line; write · between the parts of an addition compound (CuSO4·5H2O)',
-    };
+    // (made once, without the shared global pattern, whose position the loop keeps)
+    joined ??= text.slice(first, trimmedEnd).replace(/[ \t\u00a0\u2009\u202f]+/g, '');
+    const issue: Issue = typedIssue({ code: 'SPACE_IN_FORMULA', joined, column, length: m[0].length });
+    // the advice is given once, with the first space
+    if (out.length === 0) issue.hint = 'give one formula per argument or per line; write · between the parts of an addition compound (CuSO4·5H2O)';
+    out.push(issue);
+    if (out.length > MAX_ISSUES) break;
   }
-  return null;
+  return out;
 }

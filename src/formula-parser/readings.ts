@@ -11,7 +11,8 @@ import { REAGENTS, SOLVENTS, type NamedSubstance } from './names.js';
 import { columnOf } from './prescan.js';
 import type { AtomNode, ComponentNode, PartNode } from './tree.js';
 
-const HOW_TO_ABBREVIATE = 'read abbreviations with --abbreviations (or { abbreviations: true })';
+/** How to read abbreviations, naming the option neutrally (the command line shows its flag, the library its option). */
+const HOW_TO_ABBREVIATE = 'read abbreviations with `abbreviations: true`';
 
 /** Group spellings that read as element symbols and contain D or T (TBS is T, B, S): refused wherever they stand in a run. */
 const GROUP_RUNS = ['TBDPS', 'TIPS', 'TBS'];
@@ -127,7 +128,10 @@ export function settleReadings(components: ComponentNode[], input: string): { is
   const refuse = (key: string, offset: number, length: number, message: () => string, hint: () => string) => {
     if (seen.has(key)) return;
     seen.add(key);
-    issues.push({ code: 'AMBIGUOUS_READING', message: message(), column: columnOf(input, offset), length, hint: hint() });
+    const h = hint();
+    const issue: Issue = { code: 'AMBIGUOUS_READING', message: message(), column: columnOf(input, offset), length, hint: h };
+    if (h.includes('`abbreviations')) issue.options = ['abbreviations'];
+    issues.push(issue);
   };
   eachLevel(components, (parts) => {
     for (const p of parts) {

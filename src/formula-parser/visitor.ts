@@ -2,8 +2,11 @@
  * Turns the CST from grammar.ts into the typed tree of tree.ts, checking what
  * the grammar cannot: element symbols, nuclides, counts and charges.
  */
-import type { CstNode, IToken } from 'chevrotain';
-import type { Issue, Note } from '../errors/issue.js';
+import type { IToken } from 'chevrotain';
+import type { AtomCstNode, BodyCstNode, ChargeCstNode, ComponentCstNode, CountCstNode, FormulaCstNode, GroupCstNode, PartCstNode } from './cst.js';
+import type { Issue, Note, TypedIssue } from '../errors/issue.js';
+import { typedIssue } from '../errors/message.js';
+import { lcm } from '../exact/gcd.js';
 import { getElement, isElementSymbol } from '../elements/element-table.js';
 import { ABBREVIATION_CLASHES, ABBREVIATIONS, REFUSED_ABBREVIATIONS } from './abbreviations.js';
 import { REAGENTS } from './names.js';
@@ -47,300 +50,316 @@ function fromSubscript(s: string): string {
   return out;
 }
 
-type Ctx = Record<string, (CstNode | IToken)[] | undefined>;
+/** Omit over each member of a union (so the fields of each code stay tied to it). */
+type DistributiveOmit<T, K extends PropertyKey> = T extends unknown ? Omit<T, K> : never;
 
-const tok = (ctx: Ctx, name: string): IToken | undefined => ctx[name]?.[0] as IToken | undefined;
-const node = (ctx: Ctx, name: string): CstNode | undefined => ctx[name]?.[0] as CstNode | undefined;
-const nodes = (ctx: Ctx, name: string): CstNode[] => (ctx[name] ?? []) as CstNode[];
-
-/** Builds the typed tree; one instance is reused, with per-call state reset by {@link TreeBuilder.build}. */
 /**
- * A CST visitor: each grammar rule has a method of the same name that receives
- * the rule's children. (It dispatches on the node name itself rather than
- * extending Chevrotain's generated base class, so that the grammar is built only
- * when a formula actually needs it.)
+ * What one build gathers as it walks the tree: made fresh for each formula and passed to every
+ * rule's function, so the visitor itself holds nothing between calls (and may be re-entered).
  */
-export class TreeBuilder {
-  private text = '';
-  private issues: Issue[] = [];
-  private notes: Note[] = [];
-  private expand: (name: string, span: Span) => ComponentNode[] = () => [];
-  private abbreviationsRead = new Set<string>();
+interface Build {
+  readonly text: string;
+  readonly issues: Issue[];
+  readonly notes: Note[];
+  readonly expand: (name: string, span: Span) => ComponentNode[];
+  readonly abbreviationsRead: Set<string>;
   /** Denominators of fractional multipliers with no exact decimal form (⅓), per component offset. */
-  private inexact = new Map<number, [number, number]>();
+  readonly inexact: Map<number, [number, number]>;
+}
 
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any
-  private visit(node: CstNode): any {
-    return (this as unknown as Record<string, (ctx: Ctx) => unknown>)[node.name](node.children as Ctx);
+/** The tree of one parsed formula, with the issues and notes found on the way (issues are returned, not thrown). */
+export interface BuiltTree {
+  components: ComponentNode[];
+  charge: number;
+  issues: Issue[];
+  notes: Note[];
+}
+
+/**
+ * Builds the typed tree from the CST of one formula: one function per grammar rule, each given
+ * the rule's node (typed by the CST types generated from the grammar, cst.ts) and the build.
+ *
+ * @example
+ * // parse.ts feeds it the grammar's CST of a formula that the fast path declines:
+ * parseFormula('[13C]H4').components[0].parts.length // 2
+ */
+export function buildTree(cst: FormulaCstNode, text: string, expand: (name: string, span: Span) => ComponentNode[]): BuiltTree {
+  const b: Build = { text, issues: [], notes: [], expand, abbreviationsRead: new Set(), inexact: new Map() };
+  const { components, charge } = formula(b, cst);
+  b.notes.push(...caseTrapNotes(components));
+  return { components, charge, issues: b.issues, notes: b.notes };
+}
+
+/** An issue with its message only (a reading refused with both readings in words). */
+function issue(b: Build, code: Issue['code'], message: string, offset: number, length: number, hint?: string): void {
+  const i: Issue = { code, message, column: columnOf(b.text, offset), length };
+  if (hint) i.hint = hint;
+  b.issues.push(i);
+}
+
+/** A typed issue: its code and machine fields, at an offset; the message is made from the fields. */
+function typed(b: Build, fields: DistributiveOmit<TypedIssue, 'message' | 'column' | 'length'>, offset: number, length: number, hint?: string): void {
+  const i: Issue = typedIssue({ ...fields, column: columnOf(b.text, offset), length } as Omit<TypedIssue, 'message'>);
+  if (hint) i.hint = hint;
+  b.issues.push(i);
+}
+
+function formula(b: Build, node: FormulaCstNode): { components: ComponentNode[]; charge: number } {
+  const ch = node.children;
+  const components = body(b, ch.body[0]);
+  const c = ch.charge?.[0];
+  return { components, charge: c ? charge(b, c) : 0 };
+}
+
+function body(b: Build, node: BodyCstNode): ComponentNode[] {
+  const components = node.children.component.map((c) => component(b, c));
+  for (const sep of node.children.Separator ?? []) {
+    const o = sep.startOffset;
+    if (sep.image === '.' && /[0-9]/.test(b.text[o - 1] ?? '') && /[0-9½⅓⅔¼¾⅕⅖⅗⅘⅙⅚⅐⅛⅜⅝⅞⅑⅒]/.test(b.text[o + 1] ?? '')) dotBetweenDigits(b, o, components);
   }
+  if (b.inexact.size > 0 && components.some((c) => b.inexact.has(c.span.start))) refuseInexact(b, components);
+  return components;
+}
 
-  /** Builds the tree for one parsed formula. Issues found are returned, not thrown. */
-  build(cst: CstNode, text: string, expand: (name: string, span: Span) => ComponentNode[]): { components: ComponentNode[]; charge: number; issues: Issue[]; notes: Note[] } {
-    this.text = text;
-    this.issues = [];
-    this.notes = [];
-    this.expand = expand;
-    this.abbreviationsRead = new Set();
-    this.inexact = new Map();
-    const { components, charge } = this.visit(cst) as { components: ComponentNode[]; charge: number };
-    this.notes.push(...caseTrapNotes(components));
-    return { components, charge, issues: this.issues, notes: this.notes };
+/** A '.' between a count and a multiplier: the addition dot, said in a note, or refused when a decimal count fits as well. */
+function dotBetweenDigits(b: Build, o: number, components: ComponentNode[]): void {
+  const col = columnOf(b.text, o);
+  const next = components.find((c) => c.span.start === o + 1);
+  const asDot = `${b.text.slice(0, o)}·${b.text.slice(o + 1)}`;
+  if (!next?.multiplier || !next.multiplier.integer || /^[0-9]+[./]/.test(b.text.slice(o + 1))) {
+    // `CaSO4.0.5H2O`, `CaSO4.1/2H2O`: no decimal count can be meant
+    b.notes.push({ code: 'DOT_AS_ADDITION', message: `'.' at column ${col} is read as the addition dot: ${asDot}`, column: col });
+    return;
   }
-
-  private issue(code: Issue['code'], message: string, offset: number, length: number, hint?: string): void {
-    const i: Issue = { code, message, column: columnOf(this.text, offset), length };
-    if (hint) i.hint = hint;
-    this.issues.push(i);
+  const before = /[0-9]+$/.exec(b.text.slice(0, o))![0];
+  const decimal = `${before}.${next.multiplier.text}`;
+  if (SHORTHAND_ADDUCT.test(b.text.slice(next.multiplier.span.end))) {
+    b.notes.push({ code: 'DOT_AS_ADDITION', message: `'.' at column ${col} is read as the addition dot: ${asDot} (not a count of ${decimal})`, column: col });
+    return;
   }
+  const end = next.multiplier.span.end;
+  issue(b, 'AMBIGUOUS_READING', `'.' at column ${col} could be a decimal point (a count of ${decimal}) or the addition dot (${asDot})`, o, 1,
+    `write ${asDot} for the addition compound, or put a space after a decimal count (${b.text.slice(0, end)} ${b.text.slice(end)})`);
+}
 
-  formula(ctx: Ctx): { components: ComponentNode[]; charge: number } {
-    const components = this.visit(node(ctx, 'body')!) as ComponentNode[];
-    const c = node(ctx, 'charge');
-    return { components, charge: c ? (this.visit(c) as number) : 0 };
+/** Thirds, sixths, …: no exact decimal, so the formula is refused with the whole-number form to write instead. */
+function refuseInexact(b: Build, components: ComponentNode[]): void {
+  let scale = 1;
+  for (const [, [, d]] of b.inexact) scale = lcm(scale, d);
+  const texts: string[] = [];
+  let whole = true;
+  for (const c of components) {
+    const f = b.inexact.get(c.span.start);
+    const body = b.text.slice(c.parts[0].span.start, c.span.end);
+    let m: number;
+    if (f) m = (f[0] * scale) / f[1];
+    else if (c.multiplier) m = Number(c.multiplier.text) * scale;
+    else m = scale;
+    if (!Number.isInteger(m)) whole = false;
+    texts.push(m === 1 ? body : `${m}${body}`);
   }
+  const [first] = [...b.inexact.keys()];
+  const [n, d] = b.inexact.get(first)!;
+  const hint = whole ? `write whole multipliers instead: ${texts.join('·')} has the same proportions` : 'write whole multipliers instead (multiply every component by the same number)';
+  typed(b, { code: 'INEXACT_FRACTION', numerator: n, denominator: d }, first, 1, hint);
+}
 
-  body(ctx: Ctx): ComponentNode[] {
-    const components = nodes(ctx, 'component').map((c) => this.visit(c) as ComponentNode);
-    for (const sep of (ctx.Separator ?? []) as IToken[]) {
-      const o = sep.startOffset;
-      if (sep.image === '.' && /[0-9]/.test(this.text[o - 1] ?? '') && /[0-9½⅓⅔¼¾⅕⅖⅗⅘⅙⅚⅐⅛⅜⅝⅞⅑⅒]/.test(this.text[o + 1] ?? '')) this.dotBetweenDigits(o, components);
-    }
-    if (this.inexact.size > 0 && components.some((c) => this.inexact.has(c.span.start))) this.refuseInexact(components);
-    return components;
+function component(b: Build, node: ComponentCstNode): ComponentNode {
+  const m = node.children.Number?.[0];
+  const f = node.children.Fraction?.[0];
+  const parts = node.children.part.map((p) => part(b, p));
+  const start = m ? m.startOffset : f ? f.startOffset : parts[0].span.start;
+  const multiplier = m ? countOf(b, m.image, m) : f ? fractionOf(b, f) : null;
+  return { kind: 'component', multiplier, parts, span: { start, end: parts[parts.length - 1].span.end } };
+}
+
+/** A fraction as an exact decimal multiplier (½ → 0.5, 3/2 → 1.5); thirds and the like are refused by body(). */
+function fractionOf(b: Build, t: IToken): CountNode {
+  const span = { start: t.startOffset, end: endOf(t) };
+  const [n, d] = VULGAR_FRACTIONS[t.image] ?? (t.image.split('/').map(Number) as [number, number]);
+  const len = span.end - span.start;
+  if (d === 0) {
+    typed(b, { code: 'BAD_COUNT', count: t.image, problem: 'divides-by-zero', limit: null }, span.start, len);
+    return { text: '1', integer: true, span };
   }
-
-  /** A '.' between a count and a multiplier: the addition dot, said in a note, or refused when a decimal count fits as well. */
-  private dotBetweenDigits(o: number, components: ComponentNode[]): void {
-    const col = columnOf(this.text, o);
-    const next = components.find((c) => c.span.start === o + 1);
-    const asDot = `${this.text.slice(0, o)}·${this.text.slice(o + 1)}`;
-    if (!next?.multiplier || !next.multiplier.integer || /^[0-9]+[./]/.test(this.text.slice(o + 1))) {
-      // `CaSO4.0.5H2O`, `CaSO4.1/2H2O`: no decimal count can be meant
-      this.notes.push({ code: 'DOT_AS_ADDITION', message: `'.' at column ${col} is read as the addition dot: ${asDot}`, column: col });
-      return;
-    }
-    const before = /[0-9]+$/.exec(this.text.slice(0, o))![0];
-    const decimal = `${before}.${next.multiplier.text}`;
-    if (SHORTHAND_ADDUCT.test(this.text.slice(next.multiplier.span.end))) {
-      this.notes.push({ code: 'DOT_AS_ADDITION', message: `'.' at column ${col} is read as the addition dot: ${asDot} (not a count of ${decimal})`, column: col });
-      return;
-    }
-    const end = next.multiplier.span.end;
-    this.issue('AMBIGUOUS_READING', `'.' at column ${col} could be a decimal point (a count of ${decimal}) or the addition dot (${asDot})`, o, 1,
-      `write ${asDot} for the addition compound, or put a space after a decimal count (${this.text.slice(0, end)} ${this.text.slice(end)})`);
+  if (n === 0) {
+    typed(b, { code: 'BAD_COUNT', count: t.image, problem: 'zero-multiplier', limit: null }, span.start, len);
+    return { text: '1', integer: true, span };
   }
-
-  /** Thirds, sixths, …: no exact decimal, so the formula is refused with the whole-number form to write instead. */
-  private refuseInexact(components: ComponentNode[]): void {
-    let scale = 1;
-    for (const [, [, d]] of this.inexact) scale = lcm(scale, d);
-    const texts: string[] = [];
-    let whole = true;
-    for (const c of components) {
-      const f = this.inexact.get(c.span.start);
-      const body = this.text.slice(c.parts[0].span.start, c.span.end);
-      let m: number;
-      if (f) m = (f[0] * scale) / f[1];
-      else if (c.multiplier) m = Number(c.multiplier.text) * scale;
-      else m = scale;
-      if (!Number.isInteger(m)) whole = false;
-      texts.push(m === 1 ? body : `${m}${body}`);
-    }
-    const [first] = [...this.inexact.keys()];
-    const [n, d] = this.inexact.get(first)!;
-    const hint = whole ? `write whole multipliers instead: ${texts.join('·')} has the same proportions` : 'write whole multipliers instead (multiply every component by the same number)';
-    this.issue('INEXACT_FRACTION', `the multiplier ${n}/${d} has no exact decimal form, and pondus keeps counts exact`, first, 1, hint);
+  let rest = d;
+  let twos = 0;
+  let fives = 0;
+  while (rest % 2 === 0) { rest /= 2; twos++; }
+  while (rest % 5 === 0) { rest /= 5; fives++; }
+  const places = Math.max(twos, fives);
+  if (rest !== 1 || places > MAX_COUNT_DECIMALS || !Number.isSafeInteger(n * 10 ** places) || String(n).length > MAX_COUNT_DIGITS) {
+    if (rest !== 1) b.inexact.set(span.start, [n, d]);
+    else typed(b, { code: 'BAD_COUNT', count: t.image, problem: 'fraction-decimals', limit: MAX_COUNT_DECIMALS }, span.start, len);
+    return { text: '1', integer: true, span };
   }
+  const scaled = (n * 10 ** places) / d; // exact: d divides 10^places
+  const digits = String(scaled).padStart(places + 1, '0');
+  const text = places === 0 ? digits : `${digits.slice(0, -places)}.${digits.slice(-places)}`;
+  const normal = text.includes('.') ? text.replace(/0+$/, '').replace(/\.$/, '') : text;
+  return { text: normal, integer: !normal.includes('.'), span };
+}
 
-  component(ctx: Ctx): ComponentNode {
-    const m = tok(ctx, 'Number');
-    const f = tok(ctx, 'Fraction');
-    const parts = nodes(ctx, 'part').map((p) => this.visit(p) as PartNode);
-    const start = m ? m.startOffset : f ? f.startOffset : parts[0].span.start;
-    const multiplier = m ? this.countOf(m.image, m) : f ? this.fractionOf(f) : null;
-    return { kind: 'component', multiplier, parts, span: { start, end: parts[parts.length - 1].span.end } };
+function part(b: Build, node: PartCstNode): PartNode {
+  const ch = node.children;
+  const inner: PartNode = ch.atom ? atom(b, ch.atom[0]) : group(b, ch.group![0]);
+  const c = ch.count?.[0];
+  if (c) {
+    inner.count = count(b, c);
+    inner.span = { start: inner.span.start, end: inner.count.span.end };
   }
+  return inner;
+}
 
-  /** A fraction as an exact decimal multiplier (½ → 0.5, 3/2 → 1.5); thirds and the like are refused by body(). */
-  private fractionOf(t: IToken): CountNode {
-    const span = { start: t.startOffset, end: endOf(t) };
-    const [n, d] = VULGAR_FRACTIONS[t.image] ?? (t.image.split('/').map(Number) as [number, number]);
-    const len = span.end - span.start;
-    if (d === 0) {
-      this.issue('BAD_COUNT', `the fraction '${t.image}' divides by zero`, span.start, len);
-      return { text: '1', integer: true, span };
-    }
-    if (n === 0) {
-      this.issue('BAD_COUNT', 'a multiplier of zero; leave the part out instead', span.start, len);
-      return { text: '1', integer: true, span };
-    }
-    let rest = d;
-    let twos = 0;
-    let fives = 0;
-    while (rest % 2 === 0) { rest /= 2; twos++; }
-    while (rest % 5 === 0) { rest /= 5; fives++; }
-    const places = Math.max(twos, fives);
-    if (rest !== 1 || places > MAX_COUNT_DECIMALS || !Number.isSafeInteger(n * 10 ** places) || String(n).length > MAX_COUNT_DIGITS) {
-      if (rest !== 1) this.inexact.set(span.start, [n, d]);
-      else this.issue('BAD_COUNT', `the fraction '${t.image}' has more than ${MAX_COUNT_DECIMALS} decimals`, span.start, len);
-      return { text: '1', integer: true, span };
-    }
-    const scaled = (n * 10 ** places) / d; // exact: d divides 10^places
-    const digits = String(scaled).padStart(places + 1, '0');
-    const text = places === 0 ? digits : `${digits.slice(0, -places)}.${digits.slice(-places)}`;
-    const normal = text.includes('.') ? text.replace(/0+$/, '').replace(/\.$/, '') : text;
-    return { text: normal, integer: !normal.includes('.'), span };
+function atom(b: Build, node: AtomCstNode): PartNode {
+  const ch = node.children;
+  const label = ch.IsotopeLabel?.[0];
+  if (label) {
+    const m = /^\[([0-9]+)([A-Za-z]+)\]$/.exec(label.image)!;
+    return makeAtom(b, m[2], Number(m[1]), label.startOffset + 1 + m[1].length, label.startOffset, endOf(label));
   }
-
-  part(ctx: Ctx): PartNode {
-    const inner = (node(ctx, 'atom') ? this.visit(node(ctx, 'atom')!) : this.visit(node(ctx, 'group')!)) as PartNode;
-    const c = node(ctx, 'count');
-    if (c) {
-      inner.count = this.visit(c) as CountNode;
-      inner.span = { start: inner.span.start, end: inner.count.span.end };
-    }
-    return inner;
-  }
-
-  atom(ctx: Ctx): PartNode {
-    const label = tok(ctx, 'IsotopeLabel');
-    if (label) {
-      const m = /^\[([0-9]+)([A-Za-z]+)\]$/.exec(label.image)!;
-      return this.makeAtom(m[2], Number(m[1]), label.startOffset + 1 + m[1].length, label.startOffset, endOf(label));
-    }
-    const abbr = tok(ctx, 'Abbreviation');
-    if (abbr) {
-      const span = { start: abbr.startOffset, end: endOf(abbr) };
-      const known = ABBREVIATIONS[abbr.image] ?? REAGENTS[abbr.image];
-      if (!this.abbreviationsRead.has(abbr.image)) {
-        this.abbreviationsRead.add(abbr.image);
-        const column = columnOf(this.text, abbr.startOffset);
-        if (ABBREVIATION_CLASHES.includes(abbr.image)) {
-          const element = getElement(abbr.image);
-          const other = element ? `the element ${element.name}` : `the elements ${abbr.image.match(/[A-Z][a-z]?/g)!.join(', ')}`;
-          this.notes.push({ code: 'ABBREVIATION_CLASH', message: `'${abbr.image}' is read as ${known.name} (${known.formula}), not as ${other}`, column });
-        } else {
-          this.notes.push({ code: 'ABBREVIATION', message: `'${abbr.image}' is read as ${known.name} (${known.formula})`, column });
-        }
+  const abbr = ch.Abbreviation?.[0];
+  if (abbr) {
+    const span = { start: abbr.startOffset, end: endOf(abbr) };
+    const known = ABBREVIATIONS[abbr.image] ?? REAGENTS[abbr.image];
+    if (!b.abbreviationsRead.has(abbr.image)) {
+      b.abbreviationsRead.add(abbr.image);
+      const column = columnOf(b.text, abbr.startOffset);
+      if (ABBREVIATION_CLASHES.includes(abbr.image)) {
+        const element = getElement(abbr.image);
+        const other = element ? `the element ${element.name}` : `the elements ${abbr.image.match(/[A-Z][a-z]?/g)!.join(', ')}`;
+        b.notes.push({ code: 'ABBREVIATION_CLASH', message: `'${abbr.image}' is read as ${known.name} (${known.formula}), not as ${other}`, column });
+      } else {
+        b.notes.push({ code: 'ABBREVIATION', message: `'${abbr.image}' is read as ${known.name} (${known.formula})`, column });
       }
-      const group: GroupNode = { kind: 'group', bracket: '(', body: this.expand(abbr.image, span), count: null, span, abbreviation: abbr.image };
-      return group;
     }
-    const sup = tok(ctx, 'SuperscriptDigits');
-    const word = tok(ctx, 'Word')!;
-    const start = sup ? sup.startOffset : word.startOffset;
-    const end = endOf(word);
-    if (sup) {
-      if (word.image === 'D' || word.image === 'T') {
-        this.issue('UNKNOWN_ISOTOPE', `'${word.image}' already names a hydrogen isotope; it takes no mass number`, start, end - start);
-        return placeholder(start, end);
-      }
-      return this.makeAtom(word.image, Number(fromSuperscript(sup.image)), word.startOffset, start, end);
-    }
+    const group: GroupNode = { kind: 'group', bracket: '(', body: b.expand(abbr.image, span), count: null, span, abbreviation: abbr.image };
+    return group;
+  }
+  const sup = ch.SuperscriptDigits?.[0];
+  const word = ch.Word![0];
+  const start = sup ? sup.startOffset : word.startOffset;
+  const end = endOf(word);
+  if (sup) {
     if (word.image === 'D' || word.image === 'T') {
-      return { kind: 'atom', symbol: 'H', massNumber: word.image === 'D' ? 2 : 3, count: null, span: { start, end } };
-    }
-    if (Object.hasOwn(REFUSED_ABBREVIATIONS, word.image) && this.issues.some((i) => i.code === 'AMBIGUOUS_READING' && i.message === REFUSED_ABBREVIATIONS[word.image])) {
-      return placeholder(start, end); // said once
-    }
-    if (Object.hasOwn(REFUSED_ABBREVIATIONS, word.image)) {
-      const asPy = this.text.replace(/Py(?![a-z])/g, (_m, at: number) => (/[A-Za-z]/.test(this.text[at - 1] ?? '') ? '(py)' : 'py'));
-      const asPyridyl = this.text.replace(/Py(?![a-z])/g, '(C5H4N)').replace(/\(\((C5H4N)\)\)/g, '($1)');
-      this.issue('AMBIGUOUS_READING', REFUSED_ABBREVIATIONS[word.image], start, end - start, `write ${asPy} for pyridine (py, C5H5N), or ${asPyridyl} for pyridyl`);
+      typed(b, { code: 'UNKNOWN_ISOTOPE', symbol: word.image, massNumber: null }, start, end - start);
       return placeholder(start, end);
     }
-    return this.makeAtom(word.image, null, word.startOffset, start, end);
+    return makeAtom(b, word.image, Number(fromSuperscript(sup.image)), word.startOffset, start, end);
   }
+  if (word.image === 'D' || word.image === 'T') {
+    return { kind: 'atom', symbol: 'H', massNumber: word.image === 'D' ? 2 : 3, count: null, span: { start, end } };
+  }
+  if (Object.hasOwn(REFUSED_ABBREVIATIONS, word.image) && b.issues.some((i) => i.code === 'AMBIGUOUS_READING' && i.message === REFUSED_ABBREVIATIONS[word.image])) {
+    return placeholder(start, end); // said once
+  }
+  if (Object.hasOwn(REFUSED_ABBREVIATIONS, word.image)) {
+    const asPy = b.text.replace(/Py(?![a-z])/g, (_m, at: number) => (/[A-Za-z]/.test(b.text[at - 1] ?? '') ? '(py)' : 'py'));
+    const asPyridyl = b.text.replace(/Py(?![a-z])/g, '(C5H4N)').replace(/\(\((C5H4N)\)\)/g, '($1)');
+    issue(b, 'AMBIGUOUS_READING', REFUSED_ABBREVIATIONS[word.image], start, end - start, `write ${asPy} for pyridine (py, C5H5N), or ${asPyridyl} for pyridyl`);
+    return placeholder(start, end);
+  }
+  return makeAtom(b, word.image, null, word.startOffset, start, end);
+}
 
-  private makeAtom(symbol: string, massNumber: number | null, symbolOffset: number, start: number, end: number): AtomNode {
-    if (!isElementSymbol(symbol)) {
-      const hint = unknownSymbolHint(symbol, false);
-      this.issue('UNKNOWN_ELEMENT', `unknown element symbol '${symbol}'`, symbolOffset, symbol.length, hint);
-    } else if (massNumber !== null && !getNuclide(symbol, massNumber)) {
-      this.issue('UNKNOWN_ISOTOPE', `no nuclide ${symbol}-${massNumber} is known (AME2020 lists none)`, start, end - start);
+function makeAtom(b: Build, symbol: string, massNumber: number | null, symbolOffset: number, start: number, end: number): AtomNode {
+  if (!isElementSymbol(symbol)) {
+    b.issues.push(unknownElement(b.text, symbol, symbolOffset));
+  } else if (massNumber !== null && !getNuclide(symbol, massNumber)) {
+    typed(b, { code: 'UNKNOWN_ISOTOPE', symbol, massNumber }, start, end - start);
+  }
+  return { kind: 'atom', symbol, massNumber, count: null, span: { start, end } };
+}
+
+function group(b: Build, node: GroupCstNode): GroupNode {
+  const ch = node.children;
+  const open = (ch.LParen ?? ch.LSquare ?? ch.LCurly)![0];
+  const close = (ch.RParen ?? ch.RSquare ?? ch.RCurly)![0];
+  return {
+    kind: 'group',
+    bracket: open.image as GroupNode['bracket'],
+    body: body(b, ch.body![0]),
+    count: null,
+    span: { start: open.startOffset, end: endOf(close) },
+  };
+}
+
+function count(b: Build, node: CountCstNode): CountNode {
+  const n = node.children.Number?.[0];
+  if (n) {
+    // a decimal count is read as written (Fe0.95O, YBa2Cu3O6.5), and said: 'CuSO4.5' may be a
+    // hydrate cut short as well as 4.5 O
+    if (/^[1-9][0-9]*\.[0-9]{1,2}$/.test(n.image)) {
+      const col = columnOf(b.text, n.startOffset);
+      b.notes.push({ code: 'DECIMAL_COUNT', message: `'${n.image}' at column ${col} is read as a decimal count; for an addition compound write the dot and its part (CuSO4·5H2O)`, column: col });
     }
-    return { kind: 'atom', symbol, massNumber, count: null, span: { start, end } };
+    return countOf(b, n.image, n);
   }
+  const s = node.children.SubscriptDigits![0];
+  return countOf(b, fromSubscript(s.image), s);
+}
 
-  group(ctx: Ctx): GroupNode {
-    const open = (tok(ctx, 'LParen') ?? tok(ctx, 'LSquare') ?? tok(ctx, 'LCurly'))!;
-    const close = (tok(ctx, 'RParen') ?? tok(ctx, 'RSquare') ?? tok(ctx, 'RCurly'))!;
-    return {
-      kind: 'group',
-      bracket: open.image as GroupNode['bracket'],
-      body: this.visit(node(ctx, 'body')!) as ComponentNode[],
-      count: null,
-      span: { start: open.startOffset, end: endOf(close) },
-    };
+function countOf(b: Build, text: string, t: IToken): CountNode {
+  const span = { start: t.startOffset, end: endOf(t) };
+  const dot = text.indexOf('.');
+  const int = dot < 0 ? text : text.slice(0, dot);
+  const frac = dot < 0 ? '' : text.slice(dot + 1);
+  const len = span.end - span.start;
+  if (int.length > MAX_COUNT_DIGITS) {
+    typed(b, { code: 'COUNT_TOO_LARGE', count: text, limit: 10 ** MAX_COUNT_DIGITS - 1 }, span.start, len);
+  } else if (int.length > 1 && int[0] === '0') {
+    typed(b, { code: 'BAD_COUNT', count: text, problem: 'leading-zero', limit: null }, span.start, len);
+  } else if (frac.length > MAX_COUNT_DECIMALS) {
+    typed(b, { code: 'BAD_COUNT', count: text, problem: 'decimals', limit: MAX_COUNT_DECIMALS }, span.start, len);
+  } else if (/^[0.]+$/.test(text)) {
+    typed(b, { code: 'BAD_COUNT', count: text, problem: 'zero', limit: null }, span.start, len);
   }
+  const normal = frac.replace(/0+$/, '');
+  return { text: normal ? `${int}.${normal}` : int, integer: normal === '', span };
+}
 
-  count(ctx: Ctx): CountNode {
-    const n = tok(ctx, 'Number');
-    if (n) {
-      // a decimal count is read as written (Fe0.95O, YBa2Cu3O6.5), and said: 'CuSO4.5' may be a
-      // hydrate cut short as well as 4.5 O
-      if (/^[1-9][0-9]*\.[0-9]{1,2}$/.test(n.image)) {
-        const col = columnOf(this.text, n.startOffset);
-        this.notes.push({ code: 'DECIMAL_COUNT', message: `'${n.image}' at column ${col} is read as a decimal count; for an addition compound write the dot and its part (CuSO4·5H2O)`, column: col });
-      }
-      return this.countOf(n.image, n);
-    }
-    const s = tok(ctx, 'SubscriptDigits')!;
-    return this.countOf(fromSubscript(s.image), s);
-  }
-
-  private countOf(text: string, t: IToken): CountNode {
-    const span = { start: t.startOffset, end: endOf(t) };
-    const dot = text.indexOf('.');
-    const int = dot < 0 ? text : text.slice(0, dot);
-    const frac = dot < 0 ? '' : text.slice(dot + 1);
-    const len = span.end - span.start;
-    if (int.length > MAX_COUNT_DIGITS) {
-      this.issue('COUNT_TOO_LARGE', `count ${text} is too large; counts go up to 999,999,999`, span.start, len);
-    } else if (int.length > 1 && int[0] === '0') {
-      this.issue('BAD_COUNT', `count '${text}' has a leading zero`, span.start, len);
-    } else if (frac.length > MAX_COUNT_DECIMALS) {
-      this.issue('BAD_COUNT', `count '${text}' has more than ${MAX_COUNT_DECIMALS} decimals`, span.start, len);
-    } else if (/^[0.]+$/.test(text)) {
-      this.issue('BAD_COUNT', 'a count of zero; leave the part out instead', span.start, len);
-    }
-    const normal = frac.replace(/0+$/, '');
-    return { text: normal ? `${int}.${normal}` : int, integer: normal === '', span };
-  }
-
-  charge(ctx: Ctx): number {
-    const t = (tok(ctx, 'CaretCharge') ?? tok(ctx, 'SuperscriptCharge') ?? tok(ctx, 'Sign'))!;
-    const len = endOf(t) - t.startOffset;
-    if (t.tokenType.name === 'Sign') {
-      const before = this.text.slice(0, t.startOffset);
-      const digits = /[0-9]+$/.exec(before);
-      if (digits) {
-        const head = before.slice(0, before.length - digits[0].length);
-        const sign = t.image === '+' ? '+' : '-';
-        this.issue('AMBIGUOUS_CHARGE', `the '${t.image}' after '${digits[0]}' could mean a charge of ${sign === '+' ? '1+' : '1-'} or of ${digits[0]}${sign}`, t.startOffset, 1,
-          `write ${head}${digits[0]}^${sign} for a charge of 1${sign}, or ${head}^${digits[0]}${sign} for ${digits[0]}${sign}`);
-        return 0;
-      }
-    }
-    const text = fromSuperscript(t.image.replace(/^\^/, '')).replace('−', '-');
-    const sign = text.includes('-') ? -1 : 1;
-    const digits = text.replace(/[+-]/g, '');
-    const magnitude = digits === '' ? 1 : Number(digits);
-    if (magnitude === 0 || digits.length > 2 || magnitude > MAX_CHARGE) {
-      this.issue('BAD_CHARGE', magnitude === 0 ? 'a charge of zero; leave it out' : `charge ${digits} is out of range (at most ${MAX_CHARGE})`, t.startOffset, len);
+function charge(b: Build, node: ChargeCstNode): number {
+  const ch = node.children;
+  const t = (ch.CaretCharge ?? ch.SuperscriptCharge ?? ch.Sign)![0];
+  const len = endOf(t) - t.startOffset;
+  if (t.tokenType.name === 'Sign') {
+    const before = b.text.slice(0, t.startOffset);
+    const digits = /[0-9]+$/.exec(before);
+    if (digits) {
+      const head = before.slice(0, before.length - digits[0].length);
+      const sign = t.image === '+' ? '+' : '-';
+      typed(b, { code: 'AMBIGUOUS_CHARGE', written: t.image, digits: digits[0], sign }, t.startOffset, 1,
+        `write ${head}${digits[0]}^${sign} for a charge of 1${sign}, or ${head}^${digits[0]}${sign} for ${digits[0]}${sign}`);
       return 0;
     }
-    return sign * magnitude;
   }
-
+  const text = fromSuperscript(t.image.replace(/^\^/, '')).replace('−', '-');
+  const sign = text.includes('-') ? -1 : 1;
+  const digits = text.replace(/[+-]/g, '');
+  const magnitude = digits === '' ? 1 : Number(digits);
+  if (magnitude === 0 || digits.length > 2 || magnitude > MAX_CHARGE) {
+    typed(b, { code: 'BAD_CHARGE', charge: digits === '' ? '1' : digits, limit: MAX_CHARGE }, t.startOffset, len);
+    return 0;
+  }
+  return sign * magnitude;
 }
 
-function gcd(a: number, b: number): number {
-  return b === 0 ? a : gcd(b, a % b);
-}
-
-function lcm(a: number, b: number): number {
-  return (a / gcd(a, b)) * b;
+/**
+ * The issue for a word that is no element symbol, at its offset in the text, with the short hint
+ * (parse.ts may replace it with one that looks at the whole formula).
+ *
+ * @example
+ * unknownElement('XxO', 'Xx', 0).column // 1
+ */
+export function unknownElement(text: string, symbol: string, offset: number): Issue {
+  const i: Issue = typedIssue({ code: 'UNKNOWN_ELEMENT', symbol, column: columnOf(text, offset), length: symbol.length });
+  const hint = unknownSymbolHint(symbol, false);
+  if (hint) i.hint = hint;
+  return i;
 }
 
 function placeholder(start: number, end: number): AtomNode {

@@ -3,6 +3,7 @@
  */
 import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
+import { gcd as gcdOf } from '../exact/gcd.js';
 
 export class Rational {
   readonly num: bigint;
@@ -103,8 +104,7 @@ function operand(o: unknown): void {
  */
 export function gcd(a: bigint, b: bigint): bigint {
   if (typeof a !== 'bigint' || typeof b !== 'bigint') throw fail({ code: 'BAD_NUMBER', message: 'gcd takes two BigInts' });
-  while (b !== 0n) [a, b] = [b, a % b];
-  return a;
+  return gcdOf(a, b);
 }
 
 /** Least common multiple of two positive BigInts. */

@@ -139,7 +139,13 @@ describe('the schemas reject rows that break the contract', () => {
   const v = () => validatorOf('mass');
   it('accepts a good row and an error row', () => {
     expect(v()(good)).toBe(true);
-    expect(v()({ line: 2, input: 'Qq', error: { code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Qq'", column: 1 } })).toBe(true);
+    const qq = { code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Qq'", column: 1 };
+    expect(v()({ line: 2, input: 'Qq', error: qq, errors: [qq] })).toBe(true);
+  });
+  it('requires every issue of an error row in errors', () => {
+    const qq = { code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Qq'", column: 1 };
+    expect(v()({ line: 2, input: 'Qq', error: qq })).toBe(false);
+    expect(v()({ line: 2, input: 'Qq', error: qq, errors: [] })).toBe(false);
   });
   it.each([
     ['notes missing', { ...good, notes: undefined }],

@@ -1,5 +1,5 @@
 import { fail, PondusError } from '../../errors/pondus-error.js';
-import type { InputItem } from '../input/inputs.js';
+import type { IdentifiedItem } from '../output/writers.js';
 import { openSheet, sheetRecords, type SheetRecord } from '../input/sheet-file.js';
 import type { OutputOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
@@ -10,6 +10,24 @@ export interface SheetOptions<Row> extends OutputOptions {
   sheet?: string;
   sheetRows?: Record<string, Row>;
 }
+
+/** A sheet row as each command's ok rows identify it: which cells, under which keys, in their order. */
+type Identify = (row: { raw: string; [cell: string]: unknown }) => [string, string][];
+
+const cell = (row: { [cell: string]: unknown }, key: string): string => (typeof row[key] === 'string' ? (row[key] as string) : '');
+
+/**
+ * How a failed row of each command's sheet identifies itself: as the same command's ok rows do,
+ * so a failed row can be matched to its sample (`tests/cli/sheet-error-rows.test.ts` holds the two
+ * to each other). The default is the id and the row as written.
+ */
+const IDENTIFY: Partial<Record<CommandName, Identify>> = {
+  analysis: (r) => [['id', cell(r, 'id')], ['input', cell(r, 'formula')]],
+  ion: (r) => [['id', cell(r, 'id')], ['input', cell(r, 'formula')]],
+  empirical: (r) => [['id', cell(r, 'id')], ['input', cell(r, 'measurements')]],
+  prepare: (r) => [['input', r.raw], ['id', cell(r, 'id')]],
+};
+const identifyDefault: Identify = (r) => [['input', r.raw], ['id', cell(r, 'id')]];
 
 /**
  * Runs a command over its arguments, or — with --sheet — over the rows of a sheet read from a file
@@ -77,9 +95,9 @@ export async function runWithSheet<Row extends { raw: string; line: number }, K 
     }
   };
   conflict(pending);
-  async function* items(): AsyncGenerator<InputItem[]> {
+  async function* items(): AsyncGenerator<IdentifiedItem[]> {
     for (;;) {
-      if (pending.length > 0) yield pending.map((r) => ({ text: r.raw, line: r.line }));
+      if (pending.length > 0) yield pending.map((r) => ({ text: r.raw, line: r.line, identity: identify(r as unknown as { raw: string }) }));
       // the batch has been computed and written: its rows are no longer needed
       for (const k of Object.keys(sheetRows)) delete sheetRows[k];
       const next = await batches.next();
@@ -89,6 +107,7 @@ export async function runWithSheet<Row extends { raw: string; line: number }, K 
       for (const r of pending) sheetRows[r.raw] = r;
     }
   }
+  const identify = IDENTIFY[command] ?? identifyDefault;
   const withRows: O = { ...options, sheetRows };
   return run(command, [], withRows, undefined, items());
 }

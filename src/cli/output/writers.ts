@@ -3,12 +3,40 @@
  * (or error) in order; nothing is dropped.
  */
 import type { ChalkInstance } from 'chalk';
-import { errorJson, renderError } from '../../errors/render.js';
+import { errorRowFields, FLAG_NAMING, renderError } from '../../errors/render.js';
+import { messageFor } from '../../errors/message.js';
 import type { PondusError } from '../../errors/pondus-error.js';
 import type { InputItem } from '../input/inputs.js';
 import { delimitedCell, guardCell, notesCell, visibleControls, type Cell, type OutputFormat } from './format.js';
 import { columnWidths, fitWidths, ruleLine, rowLine, textWidth, type Align } from './box-table.js';
 import type { Presenter } from './presenter.js';
+
+/**
+ * An input that identifies itself in a failed row by other fields than its text: a sheet row gives
+ * the cells its ok rows give (its `id`, and the formula cell as `input`), not the whole row. The
+ * pairs are written in their order, `input` among them.
+ */
+export interface IdentifiedItem extends InputItem {
+  identity?: [key: string, value: string][];
+}
+
+/** The identifying fields of a failed row, `input` first unless the item says otherwise. */
+function identityOf(item: InputItem): [string, string][] {
+  return (item as IdentifiedItem).identity ?? [['input', item.text]];
+}
+
+/**
+ * A failed input's JSON line: `line`, the input's identification (`input`, and for a sheet row its
+ * `id`), then `error` (the first issue) and `errors` (all of them).
+ *
+ * @example
+ * errorRowLine({ text: 'XxQq', line: 1 }, safeParseFormula('XxQq').error) // '{"line":1,"input":"XxQq","error":{…},"errors":[…]}\n'
+ */
+export function errorRowLine(item: InputItem, error: PondusError): string {
+  const row: Record<string, unknown> = { line: item.line };
+  for (const [k, v] of identityOf(item)) row[k] = v;
+  return JSON.stringify({ ...row, ...errorRowFields(error, FLAG_NAMING) }) + '\n';
+}
 
 export interface ResultWriter<R> {
   ok(item: InputItem, result: R): void;
@@ -72,7 +100,7 @@ class JsonLinesWriter<R> implements ResultWriter<R> {
     this.ctx.out.write(row + '\n');
   }
   fail(item: InputItem, error: PondusError): void {
-    this.ctx.out.write(JSON.stringify({ input: item.text, line: item.line, error: errorJson(error) }) + '\n');
+    this.ctx.out.write(errorRowLine(item, error));
   }
   endBatch(): void {}
 }
@@ -128,8 +156,20 @@ class DelimitedWriter<R> implements ResultWriter<R> {
       return;
     }
     if (!this.headerWritten) this.begin();
-    const blanks = new Array<Cell>(this.header.length - 1 + (this.ownNotes ? 0 : 1)).fill('');
-    this.write([item.text, ...blanks, error.first.code, error.first.message], true);
+    // the input's identification in the columns of the same names (the text in the first column
+    // when none is called input), its line in a `line` column, and every issue, joined as notes are
+    const cells = new Array<Cell>(this.header.length + (this.ownNotes ? 0 : 1)).fill('');
+    const ids = identityOf(item);
+    if (!this.header.includes('input')) cells[0] = item.text;
+    for (const [k, v] of ids) {
+      const at = this.header.indexOf(k);
+      if (at >= 0) cells[at] = v;
+    }
+    const lineAt = this.header.indexOf('line');
+    if (lineAt >= 0) cells[lineAt] = item.line;
+    const codes = error.issues.map((i) => i.code).join(' | ');
+    const messages = error.issues.map((i) => messageFor(i, FLAG_NAMING)).join(' | ') + (error.more ? ' | … and more' : '');
+    this.write([...cells, codes, messages], true);
   }
   endBatch(): void {
     if (this.header && this.headerWritten) return;
@@ -184,11 +224,14 @@ class TableWriter<R> implements ResultWriter<R> {
   }
 
   fail(item: InputItem, error: PondusError): void {
-    const opts = this.ctx.numbered ? { line: item.line, emphasis: this.ctx.errStyle.red } : { emphasis: this.ctx.errStyle.red };
+    const opts = { ...(this.ctx.numbered ? { line: item.line } : {}), emphasis: this.ctx.errStyle.red, naming: FLAG_NAMING };
     this.ctx.err.write(renderError(error, opts) + '\n');
     if (!this.p.block && this.ctx.numbered) {
       const width = this.p.table!.head.length;
-      this.rows.push([visibleControls(item.text), `✗ ${error.first.code}`, ...new Array<string>(width - 2).fill('')]);
+      // a sheet row is named by its id, as its ok rows are; other inputs by their text
+      const ids = identityOf(item);
+      const id = ids.find(([k, v]) => k === 'id' && v !== '')?.[1] ?? ids.find(([k]) => k === 'input')?.[1] ?? item.text;
+      this.rows.push([visibleControls(id), `✗ ${error.first.code}`, ...new Array<string>(width - 2).fill('')]);
     }
   }
 

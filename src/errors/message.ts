@@ -1,0 +1,133 @@
+/**
+ * The one place an issue's words are made: {@link messageFor} renders the message of a typed
+ * issue from its machine fields, and names the options it mentions the way the reader calls them
+ * (the library by option name, the command line by flag). It knows nothing of any flag itself.
+ */
+import { hasFields, type Issue, type IssueFields, type TypedCode, type TypedIssue } from './issue.js';
+
+/**
+ * How the options an issue mentions are named. The library names an option as its options object
+ * does, in backquotes (`` `abbreviations: true` ``, `` `density` ``); the command line passes its
+ * own naming, which turns the same into its flag.
+ */
+export interface OptionNaming {
+  /** The words for option `name`, given with `value` (or none) in the text. */
+  option(name: string, value: string | undefined): string;
+}
+
+/** The library's own naming: the option as its options object spells it, in backquotes. */
+export const LIBRARY_NAMING: OptionNaming = { option: (name, value) => (value === undefined ? `\`${name}\`` : `\`${name}: ${value}\``) };
+
+const OPEN: Record<string, string> = { '(': ')', '[': ']', '{': '}' };
+const CLOSE: Record<string, string> = { ')': '(', ']': '[', '}': '{' };
+const at = (column: number | undefined) => (column === undefined ? '' : ` at column ${column}`);
+const grouped = (n: number) => n.toLocaleString('en-US');
+
+type Render<C extends TypedCode> = (f: IssueFields[C], column: number | undefined) => string;
+
+/** The message of each typed code, from its fields (and its column, where the words say it). */
+const MESSAGES: { [C in TypedCode]: Render<C> } = {
+  EMPTY_INPUT: (f) => (f.stateSymbol === null ? 'the formula is empty' : `only a state symbol, '${f.stateSymbol}', and no formula`),
+  INPUT_TOO_LONG: (f) => `the formula is ${grouped(f.characters)} characters long; the limit is ${grouped(f.limit)}`,
+  CONTROL_CHARACTER: (f) => `control character U+${f.codePoint.toString(16).toUpperCase().padStart(4, '0')} in the formula`,
+  UNEXPECTED_CHARACTER: (f, c) => `unexpected character '${f.character}'${at(c)}`,
+  UNEXPECTED_TOKEN: (f, c) => {
+    if (f.token === null) return `the formula ends too early${f.after === null ? '' : ` after '${f.after}'`}: expected an element symbol or an opening bracket`;
+    switch (f.expected) {
+      case 'count-place':
+        return `unexpected count '${f.token}'${at(c)}: a count follows an element symbol or a closing bracket`;
+      case 'addition-dot':
+        return `unexpected '${f.token}'${at(c)}: the addition dot stands between two formulas, as in CuSO4·5H2O`;
+      case 'superscript':
+        return `superscript digits${at(c)} must be a mass number before an element symbol (¹³C) or a charge ending in ⁺ or ⁻`;
+      default:
+        return `unexpected '${f.token}'${at(c)}`;
+    }
+  },
+  UNKNOWN_ELEMENT: (f) => `unknown element symbol '${f.symbol}'`,
+  UNKNOWN_ISOTOPE: (f) => (f.massNumber === null ? `'${f.symbol}' already names a hydrogen isotope; it takes no mass number` : `no nuclide ${f.symbol}-${f.massNumber} is known (AME2020 lists none)`),
+  UNCLOSED_GROUP: (f, c) => `'${f.bracket}'${at(c)} is never closed`,
+  UNMATCHED_CLOSING: (f) => `'${f.bracket}' has no opening '${CLOSE[f.bracket] ?? '?'}'`,
+  MISMATCHED_BRACKET: (f, c) => `'${f.bracket}'${at(c)} closes '${f.opening}' from column ${f.openingColumn}; expected '${OPEN[f.opening] ?? '?'}'`,
+  EMPTY_GROUP: (f) => `empty brackets '${f.bracket}${OPEN[f.bracket] ?? ''}'`,
+  NESTING_TOO_DEEP: (f) => `brackets nested more than ${f.limit} deep`,
+  BAD_COUNT: (f) => {
+    switch (f.problem) {
+      case 'leading-zero':
+        return `count '${f.count}' has a leading zero`;
+      case 'decimals':
+        return `count '${f.count}' has more than ${f.limit} decimals`;
+      case 'fraction-decimals':
+        return `the fraction '${f.count}' has more than ${f.limit} decimals`;
+      case 'divides-by-zero':
+        return `the fraction '${f.count}' divides by zero`;
+      case 'zero-multiplier':
+        return 'a multiplier of zero; leave the part out instead';
+      default:
+        return 'a count of zero; leave the part out instead';
+    }
+  },
+  COUNT_TOO_LARGE: (f) => `count ${f.count} is too large; counts go up to ${grouped(f.limit)}`,
+  BAD_CHARGE: (f) => (Number(f.charge) === 0 ? 'a charge of zero; leave it out' : `charge ${f.charge} is out of range (at most ${f.limit})`),
+  AMBIGUOUS_CHARGE: (f) => `the '${f.written}' after '${f.digits}' could mean a charge of 1${f.sign} or of ${f.digits}${f.sign}`,
+  MISPLACED_CHARGE: (f, c) =>
+    f.following === null
+      ? `a charge must come at the end of the formula, after a symbol, count or bracket; unexpected '${f.charge}'${at(c)}`
+      : `a charge must come at the end of the formula; '${f.following}' follows the charge '${f.charge}'`,
+  SPACE_IN_FORMULA: (f, c) => `a space${at(c)} inside the formula: pondus does not join the pieces around it, because '${f.joined}' may be a different substance from what was meant`,
+  INEXACT_FRACTION: (f) => `the multiplier ${f.numerator}/${f.denominator} has no exact decimal form, and pondus keeps counts exact`,
+};
+
+/**
+ * The words of an issue. A typed issue's message is made from its machine fields when it is made
+ * ({@link typedIssue}); a caller may reword it under the same fields (a command putting its
+ * context first), and that message is kept. An issue given with an empty message gets the words
+ * of its fields.
+ * The options it names (`issue.options`) are named by `naming` (by default the library's own).
+ *
+ * @example
+ * messageFor({ code: 'UNKNOWN_ELEMENT', symbol: 'Xx', message: '' })                        // "unknown element symbol 'Xx'"
+ * messageFor({ code: 'COUNT_TOO_LARGE', count: '1234567890', limit: 999999999, message: '' }) // 'count 1234567890 is too large; counts go up to 999,999,999'
+ */
+export function messageFor(issue: Issue, naming: OptionNaming = LIBRARY_NAMING): string {
+  let text = issue.message;
+  if (text === '' && hasFields(issue)) {
+    const made = (MESSAGES[issue.code] as Render<TypedCode>)(issue as IssueFields[TypedCode], issue.column);
+    text = made;
+  }
+  return nameOptions(text, issue, naming);
+}
+
+/**
+ * An issue's hint with the options it names named by `naming`, or undefined when it has none.
+ *
+ * @example
+ * hintFor({ code: 'BAD_OPTION', message: 'm', hint: 'give `density`', options: ['density'] }, { option: (n) => `--${n}` }) // 'give --density'
+ */
+export function hintFor(issue: Issue, naming: OptionNaming = LIBRARY_NAMING): string | undefined {
+  return issue.hint === undefined ? undefined : nameOptions(issue.hint, issue, naming);
+}
+
+/** Replaces each `` `name` `` or `` `name: value` `` of the issue's options by the naming's words for it. */
+function nameOptions(text: string, issue: Issue, naming: OptionNaming): string {
+  if (!issue.options || naming === LIBRARY_NAMING) return text;
+  let out = text;
+  for (const name of issue.options) {
+    out = out.replace(new RegExp(`\`${name.replace(/[^A-Za-z0-9]/g, '')}(?:: ([^\`]*))?\``, 'g'), (_m, value: string | undefined) => naming.option(name, value));
+  }
+  return out;
+}
+
+/**
+ * Makes a typed issue from its code, fields and position: the message is made by
+ * {@link messageFor}, so it cannot drift from the fields.
+ *
+ * @example
+ * typedIssue({ code: 'UNKNOWN_ELEMENT', symbol: 'Qq', column: 3, length: 2 }).message // "unknown element symbol 'Qq'"
+ */
+export function typedIssue<C extends TypedCode>(fields: Omit<TypedIssue<C>, 'message'>): TypedIssue<C> {
+  const { code, ...rest } = fields as { code: C };
+  const issue = { code, message: '', ...rest } as unknown as TypedIssue<C>;
+  issue.message = messageFor(issue as Issue);
+  return issue;
+}
