@@ -41,6 +41,7 @@ import { readNumber } from '../sigfig/read-number.js';
 import { readIonNotation } from '../ions/read-ion-notation.js';
 import type { IonNotation } from '../ions/ion-notation.js';
 import { patternSimilarity, readPeaks, type MeasuredPeak } from './pattern-match.js';
+import { checkInputLength } from './input-length.js';
 
 /**
  * Formulas a search may visit (the inner carbon-and-hydrogen steps plus the branches above them):
@@ -326,6 +327,10 @@ function exactSum(symbols: readonly string[], counts: ArrayLike<number>, value: 
  * candidateFormulas({ mass: '203.05261', ion: '[M+Na]+', ppm: 3, elements: 'C0-20 H0-40 O0-10' }).candidates[0].formula // 'C6H12O6'
  */
 export function candidateFormulas(options: CandidateOptions): CandidateResult {
+  checkInputLength(options.mass, 'the accurate mass', 100);
+  checkInputLength(options.molarMass, 'the molar mass', 100);
+  checkInputLength(options.found, 'the found values');
+  checkInputLength(options.ion, 'the ion notation', 200);
   const ranges = readRanges(options.elements ?? DEFAULT_RANGES);
   const ppm = options.ppm ?? 5;
   if (!(ppm > 0 && ppm <= 1000)) throw fail({ code: 'BAD_OPTION', message: 'ppm must be between 0 and 1000' });

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { empirical } from '../../src/empirical/empirical-formula.js';
 import { safeCandidateFormulas, safeEmpirical } from '../../src/index.js';
+import { combustion } from '../../src/empirical/combustion.js';
+import { candidateFormulas } from '../../src/empirical/candidates.js';
 
 // Every search answers or refuses within about a second (no timing is asserted here: the refusal
 // comes from a count of the work done, so it is the same on any machine).
@@ -50,5 +52,31 @@ describe('molecular formulas from a molar mass', () => {
 
   it('keeps the limits as tidy numbers', () => {
     expect(empirical('C=72.15 H=7.12 N=4.72 O=rest').limits.O).toBe(0.9);
+  });
+});
+
+describe('long inputs are refused before any work', () => {
+  const spaces = ' '.repeat(100_000);
+  const code = (f: () => unknown) => {
+    try {
+      f();
+    } catch (e) {
+      return (e as { issues?: { code: string }[] }).issues?.[0]?.code;
+    }
+    return 'no error';
+  };
+
+  it('a measurement set, a sample mass, a product mass, found values and an accurate mass', () => {
+    expect(code(() => empirical(`C=1${spaces}x`))).toBe('INPUT_TOO_LONG');
+    expect(code(() => combustion({ sample: `1 g${spaces}x`, collected: { co2: '0.2 g' } }))).toBe('INPUT_TOO_LONG');
+    expect(code(() => combustion({ sample: '1 g', collected: { co2: `0.2 g${spaces}x` } }))).toBe('INPUT_TOO_LONG');
+    expect(code(() => candidateFormulas({ mass: '300.1', found: `C=1${spaces}x` }))).toBe('INPUT_TOO_LONG');
+    expect(code(() => candidateFormulas({ mass: `300.1${spaces}` }))).toBe('INPUT_TOO_LONG');
+  });
+
+  it('names the length and the limit, and keeps shorter inputs to their own messages', () => {
+    expect(() => empirical(`C=1${spaces}x`)).toThrow(/100,004 characters long; the limit is 10,000/);
+    // 2000 spaces are within the limit: the reader says what is wrong with the text
+    expect(code(() => empirical(`C=1${' '.repeat(2000)}x`))).not.toBe('INPUT_TOO_LONG');
   });
 });
