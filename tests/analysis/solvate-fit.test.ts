@@ -62,7 +62,7 @@ describe('the two-partner search', () => {
           expect(got.map((x) => x.maxDeviation)).toEqual(want.map((x) => x.maxDeviation));
         },
       ),
-      { numRuns: 100 },
+      { numRuns: 60 },
     );
   });
 
