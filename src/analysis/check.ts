@@ -20,7 +20,7 @@ import type { RoundingMode } from '../sigfig/round.js';
 import { SOLVENTS } from './solvents.js';
 import { readNumber } from '../sigfig/read-number.js';
 import { solventByName } from './solvents.js';
-import { continuousAmount, searchSolvates, type MassVector } from './solvate-fit.js';
+import { continuousAmount, solvateSearch, type MassVector } from './solvate-fit.js';
 import { reportFormula } from './report-formula.js';
 
 export interface AnalysisOptions extends MassOptions {
@@ -151,7 +151,9 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
     const partnerVecs = partnerMasses.map(vec);
     const steps = partners.map((p) => (p.salt ? saltStep : step));
     const maxes = partners.map((p, j) => (!offered[j] ? 0 : p.salt ? Math.min(max, sites) : max));
-    const candidates = searchSolvates(foundNums, baseVec, partnerVecs, steps, maxes, options.top ?? 5, partners.length <= 12);
+    const search = solvateSearch(foundNums, baseVec, partnerVecs, steps, maxes, options.top ?? 5);
+    notes.push(...search.notes);
+    const candidates = search.candidates;
     exactFits = candidates.map((c) => {
       const used = c.amounts.map((a, j) => ({ a, j })).filter((x) => x.a > 0);
       return evaluateFit(

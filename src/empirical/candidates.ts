@@ -9,6 +9,12 @@
  * bounds carbon from the window and solves hydrogen directly. Counts live in one integer array;
  * nothing is allocated per formula visited, only when a formula enters the top-k heap.
  *
+ * Bounded cost: the walk over the other atoms is one function, run twice. First as the up-front
+ * estimate (each leaf only adds the carbon-and-hydrogen steps it would take, and the walk gives up
+ * past MAX_ESTIMATE_BRANCHES branches), which refuses a search of more than
+ * {@link MAX_VISITS} steps with SEARCH_TOO_LARGE, the estimate and what to narrow; then as the
+ * search itself. Memory is the count array and the heap of `limit` formulas, whatever the ranges.
+ *
  * Plausibility (Kind T., Fiehn O., "Seven Golden Rules for heuristic filtering of molecular
  * formulas obtained by accurate mass spectrometry", BMC Bioinformatics 8 (2007) 105):
  * - rule 2, for formulas made only of elements with a usual lowest valence (C, H, N, O, S, P, B,
@@ -35,6 +41,7 @@ import { readNumber } from '../sigfig/read-number.js';
 import { readIonNotation } from '../ions/read-ion-notation.js';
 import type { IonNotation } from '../ions/ion-notation.js';
 import { patternSimilarity, readPeaks, type MeasuredPeak } from './pattern-match.js';
+import { checkInputLength } from './input-length.js';
 
 /**
  * Formulas a search may visit (the inner carbon-and-hydrogen steps plus the branches above them):
@@ -320,6 +327,10 @@ function exactSum(symbols: readonly string[], counts: ArrayLike<number>, value: 
  * candidateFormulas({ mass: '203.05261', ion: '[M+Na]+', ppm: 3, elements: 'C0-20 H0-40 O0-10' }).candidates[0].formula // 'C6H12O6'
  */
 export function candidateFormulas(options: CandidateOptions): CandidateResult {
+  checkInputLength(options.mass, 'the accurate mass', 100);
+  checkInputLength(options.molarMass, 'the molar mass', 100);
+  checkInputLength(options.found, 'the found values');
+  checkInputLength(options.ion, 'the ion notation', 200);
   const ranges = readRanges(options.elements ?? DEFAULT_RANGES);
   const ppm = options.ppm ?? 5;
   if (!(ppm > 0 && ppm <= 1000)) throw fail({ code: 'BAD_OPTION', message: 'ppm must be between 0 and 1000' });
@@ -444,37 +455,49 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
   const hMinMass = min[iH] * mH;
   const ratioStep = Float64Array.from(symbols, (_, i) => (ratioHi[i] === Infinity ? 0 : 1 / ratioHi[i]));
 
-  // up-front estimate: walk the branches only, summing the carbon steps each leaf would take
+  // the one walk over the other elements' counts, heaviest first, pruned by the window and the
+  // ratio limits; at each carbon slot it calls `leaf` with the mass taken and the least carbon.
+  // It runs twice: first as the up-front estimate (leaves only sum the carbon-and-hydrogen steps
+  // they would take, and the walk gives up past `budget` branches), then as the search itself.
   const counts = new Int32Array(S);
-  let estimate = 0;
   let branches = 0;
-  let gaveUp = false;
-  const count = (i: number, cum: number, cLow: number): void => {
-    if (++branches > MAX_ESTIMATE_BRANCHES) {
-      gaveUp = true;
-      return;
-    }
-    if (i === iC) {
-      const cFrom = Math.max(cLow, Math.ceil((lo - cum - hMaxMass) / mC - eps));
-      const cTo = Math.min(max[iC], Math.floor((hi - cum - hMinMass) / mC + eps));
-      if (cTo >= cFrom) estimate += (cTo - cFrom + 1) * perCarbon;
-      return;
-    }
-    const m = mass[i];
-    const r = ratioStep[i];
-    for (let k = min[i]; k <= max[i]; k++) {
-      const next = cum + k * m;
-      if (next + minRest[i + 1] > hi + eps) break;
-      if (next + maxRest[i + 1] < lo - eps) continue;
-      counts[i] = k;
-      const need = r === 0 || k === 0 ? cLow : Math.max(cLow, Math.ceil(k * r - eps));
-      if (need > max[iC]) break;
-      count(i + 1, next, need);
-      if (gaveUp) break;
-    }
-    counts[i] = 0;
+  const walkBranches = (leaf: (cum: number, cLow: number) => void, budget: number): boolean => {
+    branches = 0;
+    const go = (i: number, cum: number, cLow: number): boolean => {
+      if (++branches > budget) return false;
+      if (i === iC) {
+        leaf(cum, cLow);
+        return true;
+      }
+      const m = mass[i];
+      const r = ratioStep[i];
+      let ok = true;
+      for (let k = min[i]; k <= max[i]; k++) {
+        const next = cum + k * m;
+        if (next + minRest[i + 1] > hi + eps) break;
+        if (next + maxRest[i + 1] < lo - eps) continue;
+        counts[i] = k;
+        const need = r === 0 || k === 0 ? cLow : Math.max(cLow, Math.ceil(k * r - eps));
+        if (need > max[iC]) break;
+        if (!go(i + 1, next, need)) {
+          ok = false;
+          break;
+        }
+      }
+      counts[i] = 0;
+      return ok;
+    };
+    return go(0, 0, cMinBase);
   };
-  count(0, 0, cMinBase);
+  /** The carbon counts a leaf can take: from the window, and from the ratio limits of the atoms fixed above it. */
+  const carbonFrom = (cum: number, cLow: number) => Math.max(cLow, Math.ceil((lo - cum - hMaxMass) / mC - eps));
+  const carbonTo = (cum: number) => Math.min(max[iC], Math.floor((hi - cum - hMinMass) / mC + eps));
+  let estimate = 0;
+  const gaveUp = !walkBranches((cum, cLow) => {
+    const cFrom = carbonFrom(cum, cLow);
+    const cTo = carbonTo(cum);
+    if (cTo >= cFrom) estimate += (cTo - cFrom + 1) * perCarbon;
+  }, MAX_ESTIMATE_BRANCHES);
   const total = Math.round(estimate + branches);
   if (gaveUp || total > MAX_VISITS) {
     throw fail({
@@ -563,55 +586,40 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
   const hMax = max[iH];
   const progress = options.onProgress;
   let leaves = 0;
-  const walk = (i: number, cum: number, cLow: number): void => {
-    if (i === iC) {
-      const cFrom = Math.max(cLow, Math.ceil((lo - cum - hMaxMass) / mC - eps));
-      const cTo = Math.min(max[iC], Math.floor((hi - cum - hMinMass) / mC + eps));
-      if (progress && (++leaves & 0xffff) === 0) progress(Math.min(1, visits / Math.max(1, estimate)));
-      if (cTo < cFrom) return;
-      visits += cTo - cFrom + 1;
-      const L = lo - cum;
-      const U = hi - cum + eps;
-      if (hSpan === 1) {
-        // a window narrower than one H: at most one hydrogen count per carbon count
-        let x = (L - cFrom * mC) * invH - eps;
-        for (let c = cFrom; c <= cTo; c++, x -= stepX) {
-          const h = Math.ceil(x);
-          if (h < hMin || h > hMax || c * mC + h * mH > U) continue;
-          counts[iC] = c;
+  const searchLeaf = (cum: number, cLow: number): void => {
+    const cFrom = carbonFrom(cum, cLow);
+    const cTo = carbonTo(cum);
+    if (progress && (++leaves & 0xffff) === 0) progress(Math.min(1, visits / Math.max(1, estimate)));
+    if (cTo < cFrom) return;
+    visits += cTo - cFrom + 1;
+    const L = lo - cum;
+    const U = hi - cum + eps;
+    if (hSpan === 1) {
+      // a window narrower than one H: at most one hydrogen count per carbon count
+      let x = (L - cFrom * mC) * invH - eps;
+      for (let c = cFrom; c <= cTo; c++, x -= stepX) {
+        const h = Math.ceil(x);
+        if (h < hMin || h > hMax || c * mC + h * mH > U) continue;
+        counts[iC] = c;
+        counts[iH] = h;
+        consider();
+      }
+    } else {
+      for (let c = cFrom; c <= cTo; c++) {
+        const rest = c * mC;
+        const hFrom = Math.max(hMin, Math.ceil((L - rest) * invH - eps));
+        const hTo = Math.min(hMax, Math.floor((U - rest) * invH));
+        counts[iC] = c;
+        for (let h = hFrom; h <= hTo; h++) {
           counts[iH] = h;
           consider();
         }
-      } else {
-        for (let c = cFrom; c <= cTo; c++) {
-          const rest = c * mC;
-          const hFrom = Math.max(hMin, Math.ceil((L - rest) * invH - eps));
-          const hTo = Math.min(hMax, Math.floor((U - rest) * invH));
-          counts[iC] = c;
-          for (let h = hFrom; h <= hTo; h++) {
-            counts[iH] = h;
-            consider();
-          }
-        }
       }
-      counts[iC] = 0;
-      counts[iH] = 0;
-      return;
     }
-    const m = mass[i];
-    const r = ratioStep[i];
-    for (let k = min[i]; k <= max[i]; k++) {
-      const next = cum + k * m;
-      if (next + minRest[i + 1] > hi + eps) break;
-      if (next + maxRest[i + 1] < lo - eps) continue;
-      counts[i] = k;
-      const need = r === 0 || k === 0 ? cLow : Math.max(cLow, Math.ceil(k * r - eps));
-      if (need > max[iC]) break;
-      walk(i + 1, next, need);
-    }
-    counts[i] = 0;
+    counts[iC] = 0;
+    counts[iH] = 0;
   };
-  walk(0, 0, cMinBase);
+  walkBranches(searchLeaf, Infinity);
   if (options.onProgress) options.onProgress(1);
 
   let candidates = heap.items.map((kept) => candidateOf(kept, symbols, notation, adduct, adductMass, found, foundSlots, read, tolerance, ppm, massTarget, molarTolerance, peaks));

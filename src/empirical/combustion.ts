@@ -13,6 +13,7 @@ import { exact } from '../sigfig/measured.js';
 import { add, divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
 import { searchFormula, type FormulaFit } from './formula-search.js';
 import type { Measurements } from './measurements.js';
+import { checkInputLength } from './input-length.js';
 import { displayQuantity } from '../sigfig/display-quantity.js';
 import type { RoundingMode } from '../sigfig/round.js';
 
@@ -146,6 +147,8 @@ export function combustionJson(r: CombustionResult) {
  */
 export function combustionDetail(options: CombustionOptions): CombustionDetail {
   const notes: Note[] = [];
+  checkInputLength(options.sample, 'the sample mass');
+  if (options.collected !== null && typeof options.collected === 'object') for (const [key, text] of Object.entries(options.collected)) checkInputLength(text, `the mass of ${key}`);
   const sample = measureAs(options.sample, [MASS], 'the sample mass', notes);
   if (sample.value.lte(0)) throw fail({ code: 'BAD_MEASUREMENT', message: 'the sample mass must be positive' });
   const hundred = quantity(exact(100), null);

@@ -8,6 +8,7 @@ import { readMeasurements } from './measurements.js';
 import { DEFAULT_TOLERANCE, prepareData, searchFormula, searchMolecular, type FormulaFit } from './formula-search.js';
 import { hillOrder } from '../formula/hill.js';
 import { conventionalFormulaOf } from './written.js';
+import { checkInputLength } from './input-length.js';
 
 /** An empirical formula with more atoms than this gets a note: such a fit says more about the data's precision than about the compound. */
 export const LARGE_EMPIRICAL = 60;
@@ -92,6 +93,8 @@ function molarWindow(text: string): { lo: number; hi: number; text: string } {
  * empirical('C=72.15 H=7.12 N=4.72 O=rest', { molarMass: '299.4' }).molecular // 'C18H21NO3'
  */
 export function empirical(input: string, options: EmpiricalOptions = {}): EmpiricalResult {
+  checkInputLength(input, 'the measurement set');
+  checkInputLength(options.molarMass, 'the molar mass', 100);
   const m = readMeasurements(input);
   const tolerance = options.tolerance ?? DEFAULT_TOLERANCE;
   const window = options.molarMass !== undefined ? molarWindow(options.molarMass) : null;

@@ -18,6 +18,11 @@
  * cannot fix its count.
  *
  * Scoring uses plain numbers on preallocated arrays; objects are made only for formulas that fit.
+ * The walk over the counts is a branch and bound on the formula mass: each count fixed confines the
+ * mass to the interval where that element's percent is within its limit, and that interval confines
+ * the counts left, so formulas that cannot fit are never visited (ten elements with one by difference
+ * take milliseconds, not a refusal). Only when nothing fits is the walk run again for the closest
+ * formula the message names. Every walk is bounded by {@link MAX_SEARCH_WORK} steps.
  */
 import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
@@ -75,6 +80,9 @@ export interface SearchResult {
 function weight(symbol: string): number {
   return Number(getAtomData(symbol, null)!.average.standard.text);
 }
+
+/** Relative slack of the branch-and-bound intervals: far above rounding, far below any limit. */
+const SLACK = 1e-9;
 
 /** Count combinations a formula search may visit: about a second of work. */
 export const MAX_SEARCH_WORK = 400_000;
@@ -192,6 +200,9 @@ function score(data: PreparedData, counts: ArrayLike<number>, residuals: Float64
   return worst;
 }
 
+/** Thrown to end the search for the closest formula at its budget. */
+const OVER_BUDGET = Symbol('over budget');
+
 const tooLarge = (n: number) =>
   fail({
     code: 'SEARCH_TOO_LARGE',
@@ -226,44 +237,97 @@ export function searchFormula(m: Measurements, options: SearchOptions = {}): Sea
   // the search ends past MAX_EMPIRICAL_ATOMS, or once the smallest formula of a scale has more than
   // 2.5 times the atoms of the smallest fit (the alternatives a chemist would consider)
   let atomLimit = MAX_EMPIRICAL_ATOMS;
-  for (let s = 1; s <= MAX_SCALE; s++) {
-    // candidate counts for each element at this scale, from the limits of the ratios
-    const choices: Int32Array[] = moles.map((n, i) => {
-      if (i === ref) return Int32Array.of(s);
-      const x = (n / moles[ref]) * s;
-      const e = limits[i] / percents[i] + limits[ref] / percents[ref];
-      const lo = Math.max(1, Math.floor(x * (1 - e) - 0.5));
-      const hi = Math.ceil(x * (1 + e) + 0.5);
-      const out: number[] = [];
-      for (let c = lo; c <= hi; c++) out.push(c);
-      return Int32Array.from(out);
-    });
-    // the smallest formula at this scale: past the atom limit, the search ends
-    const smallest = choices.reduce((a, o) => a + o[0], 0);
-    if (smallest > atomLimit) break;
-    const walk = (i: number, g: number, atoms: number) => {
-      if (i === k) {
-        if (++work > MAX_SEARCH_WORK) throw tooLarge(k);
-        if (g !== 1 || atoms > atomLimit) return; // multiples were seen at a smaller scale
-        if (!plausible(symbols, counts)) return;
-        const worst = score(data, counts, residuals);
-        if (worst < closestWorst) {
-          closestWorst = worst;
-          closestCounts.set(counts);
-        }
-        if (worst <= 1) {
-          fits.push(makeFit(data, counts, residuals, worst, atoms));
-          atomLimit = Math.min(atomLimit, Math.floor(2.5 * atoms));
-        }
-        return;
+  // Two passes. The first finds the fits: only formulas within every limit matter, and the bound
+  // below cuts everything else. Only when none fits does a second pass look for the closest
+  // formula, for the message; past its budget the message goes without it.
+  const pass = (track: boolean) => {
+    work = 0;
+    for (let s = 1; s <= MAX_SCALE; s++) {
+      // candidate counts for each element at this scale, from the limits of the ratios
+      const choices: Int32Array[] = moles.map((n, i) => {
+        if (i === ref) return Int32Array.of(s);
+        const x = (n / moles[ref]) * s;
+        const e = limits[i] / percents[i] + limits[ref] / percents[ref];
+        const lo = Math.max(1, Math.floor(x * (1 - e) - 0.5));
+        const hi = Math.ceil(x * (1 + e) + 0.5);
+        const out: number[] = [];
+        for (let c = lo; c <= hi; c++) out.push(c);
+        return Int32Array.from(out);
+      });
+      // the smallest formula at this scale: past the atom limit, the search ends
+      const smallest = choices.reduce((a, o) => a + o[0], 0);
+      if (smallest > atomLimit) break;
+      // suffix bounds of the choices: the least and most mass and the fewest atoms the elements from i on add
+      const remMin = new Float64Array(k + 1);
+      const remMax = new Float64Array(k + 1);
+      const remAtoms = new Int32Array(k + 1);
+      for (let i = k - 1; i >= 0; i--) {
+        const o = choices[i];
+        remMin[i] = remMin[i + 1] + o[0] * weights[i];
+        remMax[i] = remMax[i + 1] + o[o.length - 1] * weights[i];
+        remAtoms[i] = remAtoms[i + 1] + o[0];
       }
-      const o = choices[i];
-      for (let j = 0; j < o.length; j++) {
-        counts[i] = o[j];
-        walk(i + 1, gcd2(g, o[j]), atoms + o[j]);
-      }
-    };
-    walk(0, 0, 0);
+      // Branch and bound on the formula mass T: a count n of element i has percent 100·n·wᵢ/T, within
+      // B·limit of the measured one only for T in an interval, so each count fixed narrows T, and T
+      // narrows the counts left. B is the worst a leaf may score and still matter: 1 when looking
+      // for fits, max(1, the closest so far) when looking for the closest, so nothing that matters
+      // is ever cut (the slack covers rounding).
+      const walk = (i: number, g: number, atoms: number, mass: number, tLo: number, tHi: number) => {
+        if (++work > MAX_SEARCH_WORK) throw track ? OVER_BUDGET : tooLarge(k);
+        if (i === k) {
+          if (g !== 1 || atoms > atomLimit) return; // multiples were seen at a smaller scale
+          if (!plausible(symbols, counts)) return;
+          const worst = score(data, counts, residuals);
+          if (track && worst < closestWorst) {
+            closestWorst = worst;
+            closestCounts.set(counts);
+          }
+          if (worst <= 1) {
+            fits.push(makeFit(data, counts, residuals, worst, atoms));
+            atomLimit = Math.min(atomLimit, Math.floor(2.5 * atoms));
+          }
+          return;
+        }
+        if (atoms + remAtoms[i] > atomLimit) return;
+        const lo = Math.max(tLo, mass + remMin[i]);
+        const hi = Math.min(tHi, mass + remMax[i]);
+        if (lo > hi * (1 + SLACK)) return;
+        const o = choices[i];
+        const w = weights[i];
+        let from = 0;
+        let to = o.length - 1;
+        const bound = !track ? 1 : closestWorst < Infinity ? Math.max(1, closestWorst) : Infinity;
+        let bl = Infinity;
+        if (bound < Infinity) {
+          bl = bound * limits[i] * (1 + SLACK);
+          const cLo = (lo * (percents[i] - bl)) / (100 * w);
+          const cHi = (hi * (percents[i] + bl)) / (100 * w);
+          while (from <= to && o[from] < cLo * (1 - SLACK)) from++;
+          while (to >= from && o[to] > cHi * (1 + SLACK)) to--;
+        }
+        for (let j = from; j <= to; j++) {
+          const c = o[j];
+          counts[i] = c;
+          let nLo = tLo;
+          let nHi = tHi;
+          if (bl < Infinity) {
+            nLo = Math.max(tLo, (100 * c * w) / (percents[i] + bl));
+            if (percents[i] > bl) nHi = Math.min(tHi, (100 * c * w) / (percents[i] - bl));
+          }
+          walk(i + 1, gcd2(g, c), atoms + c, mass + c * w, nLo, nHi);
+        }
+      };
+      walk(0, 0, 0, 0, 0, Infinity);
+    }
+  };
+  pass(false);
+  if (fits.length === 0) {
+    try {
+      pass(true);
+    } catch (e) {
+      if (e !== OVER_BUDGET) throw e;
+      closestWorst = Infinity; // past the budget: no closest formula to name
+    }
   }
   if (closestWorst < Infinity) {
     const r = new Float64Array(k);

@@ -1,6 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { empirical } from '../../src/empirical/empirical-formula.js';
 import { safeCandidateFormulas, safeEmpirical } from '../../src/index.js';
+import { combustion } from '../../src/empirical/combustion.js';
+import { composition } from '../../src/composition/element-shares.js';
+import { candidateFormulas } from '../../src/empirical/candidates.js';
 
 // Every search answers or refuses within about a second (no timing is asserted here: the refusal
 // comes from a count of the work done, so it is the same on any machine).
@@ -9,6 +12,22 @@ describe('searches are bounded', () => {
     const r = safeEmpirical('C=20 H=5 N=10 O=10 S=10 P=10 Cl=10 Br=10 F=10 Si=5');
     expect(r.success).toBe(false);
     if (!r.success) expect(r.error.first.code).toBe('SEARCH_TOO_LARGE');
+  });
+
+  it('ten elements with oxygen by difference answer with the formula (the search cuts what cannot fit)', () => {
+    // percents computed from CIAAW 2021 standard atomic weights by the composition module, rounded to 0.01
+    const f = 'C20H24BrClFN3O5PS';
+    const found = composition(f).elements.filter((e) => e.symbol !== 'O').map((e) => `${e.symbol}=${e.massPercent.toFixed(2)}`).join(' ');
+    expect(empirical(`${found} O=rest`).empirical).toBe(f);
+  });
+
+  it('names the closest formula when none fits, or says none fits without one', () => {
+    const r = safeEmpirical('C=30.5 H=4.1 N=5.2 S=3.3 P=2.2 Cl=4.4 O=rest');
+    expect(r.success).toBe(false);
+    if (!r.success) {
+      expect(r.error.first.code).toBe('NO_FORMULA_FITS');
+      expect(r.error.first.message).toMatch(/the closest, C\d+H\d+/);
+    }
   });
 
   it('a candidate window holding millions of formulas is refused with what to narrow', () => {
@@ -50,5 +69,31 @@ describe('molecular formulas from a molar mass', () => {
 
   it('keeps the limits as tidy numbers', () => {
     expect(empirical('C=72.15 H=7.12 N=4.72 O=rest').limits.O).toBe(0.9);
+  });
+});
+
+describe('long inputs are refused before any work', () => {
+  const spaces = ' '.repeat(100_000);
+  const code = (f: () => unknown) => {
+    try {
+      f();
+    } catch (e) {
+      return (e as { issues?: { code: string }[] }).issues?.[0]?.code;
+    }
+    return 'no error';
+  };
+
+  it('a measurement set, a sample mass, a product mass, found values and an accurate mass', () => {
+    expect(code(() => empirical(`C=1${spaces}x`))).toBe('INPUT_TOO_LONG');
+    expect(code(() => combustion({ sample: `1 g${spaces}x`, collected: { co2: '0.2 g' } }))).toBe('INPUT_TOO_LONG');
+    expect(code(() => combustion({ sample: '1 g', collected: { co2: `0.2 g${spaces}x` } }))).toBe('INPUT_TOO_LONG');
+    expect(code(() => candidateFormulas({ mass: '300.1', found: `C=1${spaces}x` }))).toBe('INPUT_TOO_LONG');
+    expect(code(() => candidateFormulas({ mass: `300.1${spaces}` }))).toBe('INPUT_TOO_LONG');
+  });
+
+  it('names the length and the limit, and keeps shorter inputs to their own messages', () => {
+    expect(() => empirical(`C=1${spaces}x`)).toThrow(/100,004 characters long; the limit is 10,000/);
+    // 2000 spaces are within the limit: the reader says what is wrong with the text
+    expect(code(() => empirical(`C=1${' '.repeat(2000)}x`))).not.toBe('INPUT_TOO_LONG');
   });
 });

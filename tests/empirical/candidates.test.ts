@@ -127,6 +127,51 @@ describe('candidates: bounded searches', () => {
     }
   });
 
+  it('refuses the wide ranges at 1500 Da up front too, with what to narrow', () => {
+    const r = safeCandidateFormulas({ mass: '1500.1234', elements: 'C0-120 H0-400 N0-30 O0-40 S0-6 P0-4 F0-10 Cl0-6 Br0-4 I0-3' });
+    expect(r.success).toBe(false);
+    if (!r.success) {
+      expect(r.error.first.code).toBe('SEARCH_TOO_LARGE');
+      expect(r.error.first.message).toMatch(/--ppm.*--elements.*--found/);
+    }
+  });
+
+  it('lists exactly the formulas a brute-force walk of every count finds in the window', () => {
+    // an independent check: every combination of counts, its monoisotopic mass from the mass module
+    const ranges: [string, number, number][] = [['C', 0, 12], ['H', 0, 24], ['N', 0, 3], ['O', 0, 5], ['S', 0, 1], ['Cl', 0, 2]];
+    const mass = '250.0500';
+    const ppm = 200;
+    const want: string[] = [];
+    const walk = (i: number, text: string) => {
+      if (i === ranges.length) {
+        if (text === '') return;
+        const calc = formulaMass(text).monoisotopicMass.toNumber();
+        if (Math.abs(((250.05 - calc) / calc) * 1e6) <= ppm && rdbe(formulaMass(text).atoms as Map<string, number>) !== null) want.push(formulaMass(text).formula);
+        return;
+      }
+      const [s, lo, hi] = ranges[i];
+      for (let k = lo; k <= hi; k++) walk(i + 1, k === 0 ? text : `${text}${s}${k}`);
+    };
+    walk(0, '');
+    const r = candidateFormulas({ mass, ppm, ratios: 'none', limit: 1000, elements: ranges.map(([s, lo, hi]) => `${s}${lo}-${hi}`).join(' ') });
+    // the search also applies the RDBE and SENIOR rules: the brute force's formulas that pass them
+    const senior = (f: string) => {
+      const atoms = formulaMass(f).atoms as Map<string, number>;
+      const v: Record<string, number> = { C: 4, H: 1, N: 3, O: 2, S: 2, Cl: 1 };
+      let sum = 0, most = 0, n = 0;
+      for (const [s, c] of atoms) {
+        sum += Number(c) * v[s];
+        most = Math.max(most, v[s]);
+        n += Number(c);
+      }
+      const r2 = rdbe(atoms)!;
+      return r2 >= 0 && Number.isInteger(r2) && sum % 2 === 0 && sum >= 2 * most && sum >= 2 * (n - 1);
+    };
+    expect(r.candidates.map((c) => c.hill).sort()).toEqual(want.filter(senior).sort());
+    expect(r.examined).toBe(want.length);
+    expect(r.candidates.length).toBeGreaterThan(20);
+  });
+
   it('answers the default ranges with one metal at 1000 Da (the work count stays within the limit)', () => {
     const r = candidateFormulas({ mass: '1000.1234', elements: 'C0-80 H0-160 N0-10 O0-20 S0-4 P0-2 F0-6 Cl0-4 Br0-3 I0-2 Fe0-1' });
     expect(r.candidates.length).toBe(50);
