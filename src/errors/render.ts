@@ -54,13 +54,44 @@ export function renderError(error: PondusError, options: RenderOptions = {}): st
 
 /** Shows at most MAX_SHOWN code points of the input around the column, with control characters made visible. */
 function window(input: string, col: number): [string, number] {
-  const chars = Array.from(input).map(visible);
+  // counted on code units, so a 10 MB input costs one pass, not an array of its characters
+  const total = codePointCount(input);
   let start = 0;
-  if (chars.length > MAX_SHOWN) start = Math.max(0, Math.min(col - 40, chars.length - MAX_SHOWN));
-  const slice = chars.slice(start, start + MAX_SHOWN);
+  if (total > MAX_SHOWN) start = Math.max(0, Math.min(col - 40, total - MAX_SHOWN));
+  const from = codeUnitOffset(input, 0, 0, start);
+  const to = codeUnitOffset(input, from, start, start + MAX_SHOWN);
+  const slice = Array.from(input.slice(from, to)).map(visible);
   const prefix = start > 0 ? '…' : '';
-  const suffix = start + MAX_SHOWN < chars.length ? '…' : '';
+  const suffix = start + MAX_SHOWN < total ? '…' : '';
   return [prefix + slice.join('') + suffix, col - start + prefix.length];
+}
+
+/** The number of code points in a string (a surrogate pair counts once). */
+function codePointCount(s: string): number {
+  let n = s.length;
+  for (let i = 0; i < s.length - 1; i++) {
+    const c = s.charCodeAt(i);
+    if (c >= 0xd800 && c < 0xdc00) {
+      const d = s.charCodeAt(i + 1);
+      if (d >= 0xdc00 && d < 0xe000) {
+        n--;
+        i++;
+      }
+    }
+  }
+  return n;
+}
+
+/** The code-unit offset of code point `target`, walking from code unit `at` (code point `point`). */
+function codeUnitOffset(s: string, at: number, point: number, target: number): number {
+  let i = at;
+  while (point < target && i < s.length) {
+    const c = s.charCodeAt(i);
+    const d = s.charCodeAt(i + 1);
+    i += c >= 0xd800 && c < 0xdc00 && d >= 0xdc00 && d < 0xe000 ? 2 : 1;
+    point++;
+  }
+  return i;
 }
 
 /** A message or hint with any control character it quotes from the input made visible (␦). */

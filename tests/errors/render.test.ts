@@ -1,6 +1,7 @@
 // How errors become text and JSON: every issue is shown, the first stays `error` in JSON.
 import { describe, expect, it } from 'vitest';
-import { MAX_ISSUES, PondusError } from '../../src/errors/pondus-error.js';
+import fc from 'fast-check';
+import { fail, MAX_ISSUES, PondusError } from '../../src/errors/pondus-error.js';
 import { errorJson, errorRowFields, errorsJson, renderError } from '../../src/errors/render.js';
 import { safeParseFormula } from '../../src/formula-parser/parse.js';
 
@@ -36,5 +37,26 @@ describe('error rendering', () => {
   it('a hint and a missing column reach the JSON form', () => {
     expect(errorsJson(errorOf('co2'))[0].hint).toMatch(/./);
     expect(errorsJson(errorOf(''))[0].column).toBeNull();
+  });
+});
+
+describe('the input window of a long input', () => {
+  // the reference: the window cut from the array of the input's code points
+  const reference = (input: string, col: number) => {
+    const chars = Array.from(input).map((ch) => (/[\u0000-\u001f\u007f-\u009f]/.test(ch) ? '\u2426' : ch));
+    const start = chars.length > 100 ? Math.max(0, Math.min(col - 1 - 40, chars.length - 100)) : 0;
+    const prefix = start > 0 ? '…' : '';
+    return prefix + chars.slice(start, start + 100).join('') + (start + 100 < chars.length ? '…' : '');
+  };
+  it('shows the same 100 code points as the array of characters would, surrogate pairs included', () => {
+    fc.assert(
+      fc.property(fc.array(fc.constantFrom('a', 'Qq', '😀', '\u0007', '₂', ' '), { minLength: 1, maxLength: 300 }), fc.nat(), (parts, n) => {
+        const input = parts.join('');
+        const col = 1 + (n % Array.from(input).length);
+        const shown = renderError(fail({ code: 'UNKNOWN_ELEMENT', message: 'x', column: col }, input)).split('\n')[1];
+        expect(shown).toBe(`  ${reference(input, col)}`);
+      }),
+      { numRuns: 300 },
+    );
   });
 });
