@@ -3,8 +3,9 @@ import { calc, calcJson, type CalcResult } from '../../calc/calc.js';
 import type { RoundingMode } from '../../sigfig/round.js';
 import { fail } from '../../errors/pondus-error.js';
 import type { Presenter } from '../output/presenter.js';
-import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
+import { roundingOf, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
+import { declareCalc } from './declarations.js';
 
 interface CalcCliOptions extends OutputOptions, RoundingOptions {
   explain?: boolean;
@@ -36,12 +37,5 @@ export function calcPresenter(o: CalcCliOptions): Presenter<CalcResult> {
 
 /** Registers `pondus calc`. */
 export function registerCalc(program: Command, run: CommandRunner): void {
-  const cmd = withRoundingOption(withOutputOptions(
-    program
-      .command('calc')
-      .description('calculate with measured quantities: significant figures, units, molar masses M(formula), ± uncertainties')
-      .argument('[expressions...]', "expressions such as '0.100 M * 250.0 mL * M(CuSO4·5H2O) to g'; - reads one per line")
-      .option('--explain', 'show each step and which input limited the precision'),
-  ));
-  cmd.action((inputs: string[], o: CalcCliOptions) => run('calc', inputs, o));
+  declareCalc(program).action((inputs: string[], o: CalcCliOptions) => run('calc', inputs, o));
 }
