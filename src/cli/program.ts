@@ -12,7 +12,7 @@ import type { Writable } from 'node:stream';
 import { PondusError } from '../errors/pondus-error.js';
 import { renderError } from '../errors/render.js';
 import { runBatch } from './batch.js';
-import { outputFormat, refuseRepeatedOptions } from './commands/common.js';
+import { outputFormat, refuseRepeatedOptions, withUsageMessages } from './commands/common.js';
 import type { CommandRunner } from './commands/runner.js';
 import type { CommandName, CommandOptions, PresenterTable } from './commands/registry.js';
 import type { Presenter } from './output/presenter.js';
@@ -109,8 +109,9 @@ export async function runProgram(args: string[], io: CliIo, commands: CommandSet
     });
   commands.register(program, run, io.stdin);
 
-  // an option that takes one value is never silently overridden by a second one (exit 2)
-  for (const cmd of program.commands) refuseRepeatedOptions(cmd, REPEATABLE[cmd.name()] ?? []);
+  // an option that takes one value is never silently overridden by a second one (exit 2), and
+  // commander's usage errors say what the command declared (a conflict's reason, a required option's hint)
+  for (const cmd of program.commands) withUsageMessages(refuseRepeatedOptions(cmd, REPEATABLE[cmd.name()] ?? []));
   // completion and manual commands, the examples at the end of every --help
   finishProgram(program, (s) => out.write(s), VERSION);
 

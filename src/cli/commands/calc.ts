@@ -1,7 +1,6 @@
 import type { Command } from 'commander';
 import { calc, calcJson, type CalcResult } from '../../calc/calc.js';
 import type { RoundingMode } from '../../sigfig/round.js';
-import { fail } from '../../errors/pondus-error.js';
 import type { Presenter } from '../output/presenter.js';
 import { roundingOf, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
@@ -14,7 +13,6 @@ interface CalcCliOptions extends OutputOptions, RoundingOptions {
 /** The presenter for `pondus calc`. */
 export function calcPresenter(o: CalcCliOptions): Presenter<CalcResult> {
   const opts: { rounding: RoundingMode } = { rounding: roundingOf(o) };
-  if (o.explain && (o.csv || o.tsv)) throw fail({ code: 'USAGE', message: '--explain cannot be combined with --csv or --tsv: the steps are shown in the table, and in JSON as `steps`' });
   return {
     compute: (input) => calc(input, opts),
     json: (r) => (o.explain ? { ...calcJson(r), steps: r.steps, rounding: opts.rounding } : calcJson(r)),

@@ -50,8 +50,6 @@ export function mixturePresenter(o: CompositionCliOptions): Presenter<MixtureRes
 
 /** The presenter for `pondus composition`. */
 export function compositionPresenter(o: CompositionCliOptions): Presenter<CompositionDetail> | Presenter<MixtureResult> {
-  if (o.mixture && o.part !== undefined) throw fail({ code: 'USAGE', message: '--part gives the share of a fragment in one formula; with --mixture the inputs are measured masses: drop one' });
-  if (o.mixture && o.long) throw fail({ code: 'USAGE', message: '--long writes one CSV row per element of a formula; with --mixture drop --long' });
   if (o.long && outputFormat(o) !== 'csv' && outputFormat(o) !== 'tsv') throw fail({ code: 'USAGE', message: '--long shapes CSV and TSV output (one row per element): add --csv or --tsv, or drop --long' });
   return o.mixture ? mixturePresenter(o) : formulaPresenter(o);
 }

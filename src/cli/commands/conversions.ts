@@ -92,7 +92,6 @@ interface GravimetricCliOptions extends OutputOptions, RoundingOptions {
 
 /** The presenter for `pondus gravimetric`. */
 export function gravimetricPresenter(o: GravimetricCliOptions): Presenter<GravimetricResult> {
-  if (o.weighed === undefined) throw fail({ code: 'USAGE', message: 'give the weighed form: --weighed Fe2O3' });
   if (o.sample !== undefined && o.mass === undefined) throw fail({ code: 'USAGE', message: '--sample needs --mass: the mass fraction in the sample comes from the mass of the weighed form' });
   const rounding = roundingOf(o);
   const { text, value, factor } = shows(rounding);
@@ -136,7 +135,6 @@ interface BasisCliOptions extends OutputOptions, RoundingOptions {
 
 /** The presenter for `pondus basis`. */
 export function basisPresenter(o: BasisCliOptions): Presenter<BasisResult> {
-  if (o.to === undefined) throw fail({ code: 'USAGE', message: 'give the basis to convert to: --to P (or --to P2O5, K2O, SiO2, …)' });
   const rounding = roundingOf(o);
   const { text, value, factor } = shows(rounding);
   return {
@@ -176,7 +174,6 @@ interface SaltCliOptions extends OutputOptions, RoundingOptions {
 
 /** The presenter for `pondus salt`. */
 export function saltPresenter(o: SaltCliOptions): Presenter<SaltFactorResult> {
-  if (o.parent === undefined) throw fail({ code: 'USAGE', message: 'give the parent compound: --parent C17H19NO3' });
   const rounding = roundingOf(o);
   const { text, ins } = shows(rounding);
   return {

@@ -8,7 +8,7 @@
  * checks the help bundle's inputs).
  */
 import { Option, type Command } from 'commander';
-import { withFormulaOptions, withOutputOptions, withRoundingOption } from './common.js';
+import { conflicting, required, withFormulaOptions, withOutputOptions, withRoundingOption } from './common.js';
 
 const ABBREVIATIONS_HELP = 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)';
 
@@ -38,7 +38,7 @@ export function declareMass(program: Command): Command {
  * declareComposition(program).name() // 'composition'
  */
 export function declareComposition(program: Command): Command {
-  return withRoundingOption(withFormulaOptions(
+  const cmd = withRoundingOption(withFormulaOptions(
     program
       .command('composition')
       .description('percent by mass of each element, and of a fragment with --part')
@@ -47,6 +47,8 @@ export function declareComposition(program: Command): Command {
       .option('--part <fragment>', 'also the mass fraction of a fragment: H2O in a hydrate, SO4 in a salt, Fe in an iron salt')
       .option('--mixture', "inputs are measured masses, 'NaCl=5.00 g, KCl=3.00 g' or 'C=7.34 g H=1.85 g N=2.85 g' (unquoted NaCl=5.00 g KCl=3.00 g is one mixture): percent by component and by element"),
   ));
+  conflicting(cmd, '--mixture', ['--part'], 'the share of a fragment is of one formula, and with --mixture the inputs are measured masses: drop one');
+  return conflicting(cmd, '--mixture', ['--long'], '--long writes one CSV row per element of a formula; with --mixture drop --long');
 }
 
 /**
@@ -56,13 +58,14 @@ export function declareComposition(program: Command): Command {
  * declareCalc(program).name() // 'calc'
  */
 export function declareCalc(program: Command): Command {
-  return withRoundingOption(withOutputOptions(
+  const cmd = withRoundingOption(withOutputOptions(
     program
       .command('calc')
       .description('calculate with measured quantities: significant figures, units, molar masses M(formula), ± uncertainties')
       .argument('[expressions...]', "expressions such as '0.100 M * 250.0 mL * M(CuSO4·5H2O) to g'; - reads one per line")
       .option('--explain', 'show each step and which input limited the precision'),
   ));
+  return conflicting(cmd, '--explain', ['--csv', '--tsv'], 'the steps are shown in the table, and in JSON as `steps`');
 }
 
 /**
@@ -140,6 +143,8 @@ export function declareEmpirical(program: Command): { empirical: Command; combus
       .option('--no-ratios', 'do not apply the element-ratio limits (as --ratios none)')
       .option('--limit <n>', 'most candidates to list', '50'),
   );
+  conflicting(candidates, '--molar-mass', ['--ppm'], '--ppm sets the window of an accurate (monoisotopic) mass; with --molar-mass the window is ±0.5 g/mol: drop one');
+  conflicting(candidates, '--molar-mass', ['--ion'], '--ion says the masses are m/z values of that ion; --molar-mass says they are average molar masses of the neutral compound: drop one');
   return { empirical, combustion, candidates };
 }
 
@@ -188,7 +193,7 @@ export function declareReact(program: Command): Command {
  * declareReagents(program).name() // 'reagents'
  */
 export function declareReagents(program: Command): Command {
-  return withRoundingOption(withOutputOptions(
+  const cmd = withRoundingOption(withOutputOptions(
     program
       .command('reagents')
       .description('the reagent table of a synthesis: equivalents, mmol, mass to weigh, volume to take, solvent, theoretical and percent yield')
@@ -205,6 +210,7 @@ export function declareReagents(program: Command): Command {
       .option('--markdown', 'a Markdown table, for electronic notebooks')
       .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS'),
   ));
+  return conflicting(cmd, '--markdown', ['--json', '--csv', '--tsv'], 'choose one output format');
 }
 
 /**
@@ -291,6 +297,9 @@ export function declareConversions(program: Command): { dilute: Command; gravime
         .option('--salt-mass <m>', 'a mass of salt: the parent mass it carries (a result)'),
     ),
   );
+  required(gravimetric, '--weighed', 'give the weighed form: --weighed Fe2O3');
+  required(basis, '--to', 'give the basis to convert to: --to P (or --to P2O5, K2O, SiO2, …)');
+  required(salt, '--parent', 'give the parent compound: --parent C17H19NO3');
   return { dilute, gravimetric, basis, salt };
 }
 
@@ -362,6 +371,8 @@ export function declareQc(program: Command): { titration: Command; standardise: 
         .option('--level <percent>', 'confidence level: 90, 95 (default) or 99'),
     ),
   );
+  conflicting(titration, '--added', ['--blank'], 'a back-titration takes either --added (the excess reagent) or --blank (the titre of the reagent alone), not both');
+  conflicting(sampleBasis, '--on', ['--to'], '--to and --on say the same thing: give one');
   return { titration, standardise, sampleBasis, replicates };
 }
 
@@ -463,5 +474,6 @@ export function declareIon(program: Command): { ion: Command; pattern: Command }
       .option('--svg <file>', 'also draw the pattern as an SVG picture (one input)')
       .option('--abbreviations', ABBREVIATIONS_HELP),
   );
+  conflicting(pattern, '--fine', ['--resolution'], '--fine shows every isotopologue apart and --resolution merges them as an instrument would: choose one');
   return { ion, pattern };
 }

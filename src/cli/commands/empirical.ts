@@ -187,7 +187,6 @@ export function candidatesPresenter(o: CandidatesCliOptions): Presenter<Candidat
   };
   if (opts.ppm !== undefined && opts.ppm > 1000) throw fail({ code: 'USAGE', message: `--ppm ${o.ppm} is too wide a window: at most 1000 ppm` });
   if (opts.limit !== undefined && (!Number.isInteger(opts.limit) || opts.limit > MAX_LIMIT)) throw fail({ code: 'USAGE', message: `--limit takes a whole number up to ${MAX_LIMIT}, not '${o.limit}'` });
-  if (o.ion !== undefined && o.molarMass) throw fail({ code: 'USAGE', message: '--ion says the masses are m/z values of that ion; --molar-mass says they are average molar masses of the neutral compound: drop one' });
   // options read once, before any input: a bad range, ion or found value is a usage error
   usage(() => readRanges(opts.elements ?? DEFAULT_RANGES));
   if (opts.ion !== undefined) usage(() => readIonNotation(opts.ion!));
@@ -276,7 +275,6 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
   });
   c.candidates.action((inputs: string[], o: CandidatesCliOptions, cmd: Command) => {
     const given = (name: string) => cmd.getOptionValueSource(name) === 'cli';
-    if (o.molarMass && given('ppm')) throw fail({ code: 'USAGE', message: '--ppm sets the window of an accurate (monoisotopic) mass; with --molar-mass the window is ±0.5 g/mol: drop one' });
     if (o.found === undefined && given('tolerance')) throw fail({ code: 'USAGE', message: '--tolerance applies to found percents: give --found too, or drop --tolerance' });
     // found values typed unquoted: --found C=40.00 H=6.71 leaves H=6.71 among the masses
     const runs = pairRuns(inputs, false);

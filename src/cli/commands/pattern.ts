@@ -44,7 +44,6 @@ export function patternPresenter(o: PatternCliOptions): Presenter<PatternResult>
   const coveragePercent = positive(o.coverage, 'coverage', 100);
   const minRelative = o.minRelative === undefined ? 0.1 : Number(o.minRelative);
   if (!(minRelative >= 0 && minRelative < 100)) throw fail({ code: 'USAGE', message: `--min-relative takes a percentage from 0 to 100, not '${o.minRelative}'` });
-  if (o.fine && resolvingPower !== undefined) throw fail({ code: 'USAGE', message: '--fine shows every isotopologue apart and --resolution merges them as an instrument would: choose one' });
   if (coveragePercent !== undefined && !o.fine && resolvingPower === undefined) throw fail({ code: 'USAGE', message: '--coverage applies to the fine structure: add --fine or --resolution' });
   const opts = {
     ion: o.adduct,

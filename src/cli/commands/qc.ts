@@ -119,7 +119,6 @@ type Titration = { t: TitrationAssayResult; rep: Reported };
 export function titrationPresenter(o: TitrationCli): RowPresenter<Titration> {
   const missing = (['sample', 'titrant', 'volume'] as const).filter((k) => o[k] === undefined);
   if (missing.length) throw fail({ code: 'USAGE', message: `give ${missing.map((k) => `--${k}`).join(', ')}: pondus titration KHC8H4O4 --sample '0.5000 g' --titrant '0.1000 M' --volume '24.40 mL'` });
-  if (o.added !== undefined && o.blank !== undefined) throw fail({ code: 'USAGE', message: 'a back-titration takes either --added (the excess reagent) or --blank (the titre of the reagent alone), not both' });
   if (o.reagentRatio !== undefined && o.added === undefined && !o.back) throw fail({ code: 'USAGE', message: '--reagent-ratio belongs to a back-titration: give --added or --back too' });
   if (o.back && o.added === undefined && o.blank === undefined) throw fail({ code: 'USAGE', message: 'a back-titration needs --added (the excess reagent) or --blank (the titre of the reagent alone)' });
   const rounding = o.rounding ?? 'half-even';
@@ -236,7 +235,6 @@ type BasisRow = { rep: Reported; value: Quantity; from: SampleBasis; notes: Note
 /** The presenter for `pondus sample-basis`. */
 export function sampleBasisPresenter(o: SampleBasisCli): RowPresenter<BasisRow> {
   const rounding = o.rounding ?? 'half-even';
-  if (o.to !== undefined && o.on !== undefined) throw fail({ code: 'USAGE', message: '--to and --on say the same thing: give one' });
   const from = o.from === undefined ? 'as-is' : readBasis(o.from);
   const to = o.to ?? o.on;
   if (to === undefined && o.limits === undefined) throw fail({ code: 'USAGE', message: "give --to (dried, anhydrous, solvent-free, anhydrous-solvent-free, as-is) and the content it needs, e.g. --to dried --loss '0.50 %'" });

@@ -205,7 +205,6 @@ function planFromProcedure(rows: ProcedureRow[]): PlannedRow[] {
 /** Registers `pondus reagents`. */
 export function registerReagents(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void {
   declareReagents(program).action(async (o: ReagentsCliOptions) => {
-    if (o.markdown && (o.json || o.csv || o.tsv)) throw fail({ code: 'USAGE', message: 'choose one output format: --markdown, or --json, --csv, --tsv' });
     if (o.solvent !== undefined && o.concentration === undefined && o.procedure === undefined) throw fail({ code: 'USAGE', message: '--solvent needs --concentration (the target concentration of the reference sets the solvent volume)' });
     let plan: PlannedRow[];
     let lines: number[] | undefined;
