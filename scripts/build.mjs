@@ -1,12 +1,15 @@
 // Builds the library as two self-contained bundles (esbuild → dist/lib/index.js for import,
-// dist/lib/index.cjs for require) with its declarations (tsc → dist/types), and the bundled CLI
-// (esbuild → dist/cli.cjs), then primes the V8 code cache the CLI starts from.
+// dist/lib/index.cjs for require) with its declarations (tsc → dist/types), and the command line in
+// bundles (esbuild → dist/cli/*.cjs, started by bin/pondus.cjs) with its help texts, then primes
+// the V8 code cache each bundle starts from.
 //
 // Why bundles: unbundled, importing the library loads some 500 modules of its parser library's
 // dependencies, which takes about half a second; one file loads in a few tens of milliseconds.
 import { build } from 'esbuild';
 import { execFileSync } from 'node:child_process';
-import { copyFileSync, cpSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { copyFileSync, cpSync, mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { Writable } from 'node:stream';
 import { fileURLToPath } from 'node:url';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
@@ -74,9 +77,15 @@ const plainSupportsColor = {
   },
 };
 
-await build({
-  entryPoints: [`${root}src/cli/run.ts`],
-  outfile: `${root}dist/cli.cjs`,
+// The command line, in parts: one bundle per command module (src/cli/bundles/<name>.ts →
+// dist/cli/<name>.cjs), each holding only what its commands use, and `help`, with every command
+// declared and none of their code (help, completion, manual). bin/pondus.cjs picks the bundle by
+// the command's name. They share nothing: a command loads its own code and no other's.
+const bundles = readdirSync(`${root}src/cli/bundles`).filter((f) => f.endsWith('.ts')).map((f) => f.slice(0, -3));
+const cli = await build({
+  entryPoints: bundles.map((b) => `${root}src/cli/bundles/${b}.ts`),
+  outdir: `${root}dist/cli`,
+  outExtension: { '.js': '.cjs' },
   bundle: true,
   platform: 'node',
   format: 'cjs',
@@ -85,9 +94,15 @@ await build({
   minifySyntax: true,
   minifyIdentifiers: !process.env.PONDUS_NO_MINIFY,
   legalComments: 'none',
-  plugins: [lazyChildProcess, plainSupportsColor, lazyNuclideTable('data')],
+  metafile: true,
+  plugins: [lazyChildProcess, plainSupportsColor, lazyNuclideTable('../data')],
   logLevel: 'warning',
 });
+if (process.env.PONDUS_METAFILE) writeFileSync(process.env.PONDUS_METAFILE, JSON.stringify(cli.metafile));
+// the help bundle must stay free of the chemistry: it is what `pondus --help` loads
+const helpInputs = Object.keys(cli.metafile.outputs[Object.keys(cli.metafile.outputs).find((o) => o.endsWith('/help.cjs'))].inputs);
+const heavy = helpInputs.filter((i) => !/^(src\/cli\/|src\/errors\/|node_modules\/(commander|chalk)\/|pondus:)/.test(i));
+if (heavy.length) throw new Error(`the help bundle (dist/cli/help.cjs) loads code it does not need: ${heavy.join(', ')}`);
 
 // The same CLI with its `main(argv, io)` exported, for the fuzz harness, which runs it in a
 // worker thread it can stop when an input hangs.
@@ -102,5 +117,39 @@ await build({
   logLevel: 'warning',
 });
 
-// Run the CLI once so the loader saves V8's compiled code next to the bundle.
-execFileSync(process.execPath, [`${root}bin/pondus.cjs`, 'mass', 'H2O'], { env: { ...process.env, PONDUS_WRITE_CODE_CACHE: '1' }, stdio: 'ignore' });
+// `pondus --help` and `pondus <command> --help` on a pipe or file (not a terminal, where the help
+// is wrapped to its width) are printed by bin/pondus.cjs from dist/cli/help.json, without starting
+// any bundle: the texts are written here by the full program itself (commander's help at the
+// 80 columns it uses off a terminal), so they are the help, not a copy kept by hand.
+const { main } = createRequire(import.meta.url)(`${root}dist/test/cli-main.cjs`);
+async function helpText(args) {
+  let text = '';
+  const sink = () => new Writable({ write(chunk, _enc, done) { text += chunk; done(); } });
+  const status = await main(args, { stdin: () => [], stdout: sink(), stderr: new Writable({ write(_c, _e, done) { done(); } }) });
+  if (status !== 0) throw new Error(`pondus ${args.join(' ')} exited ${status}`);
+  return text;
+}
+const top = await helpText(['--help']);
+const commands = top.slice(top.indexOf('\nCommands:\n')).split('\n').map((l) => /^  ([a-z][a-z0-9-]*)\b/.exec(l)?.[1]).filter((c) => c && c !== 'help');
+// every command of the program has its bundle in bin/pondus.cjs's table (or is one of help's own)
+const binText = readFileSync(`${root}bin/pondus.cjs`, 'utf8');
+const table = new Function(`return ${/const BUNDLE = (\{[\s\S]*?\});/.exec(binText)[1]}`)();
+const missing = commands.filter((c) => !Object.hasOwn(table, c) && c !== 'completion' && c !== 'manual');
+if (missing.length) throw new Error(`bin/pondus.cjs has no bundle for ${missing.join(', ')}`);
+const unknown = [...new Set(Object.values(table))].filter((b) => !bundles.includes(b));
+if (unknown.length) throw new Error(`bin/pondus.cjs names bundles that are not built: ${unknown.join(', ')}`);
+const help = { '': top };
+for (const c of commands) help[c] = await helpText([c, '--help']);
+writeFileSync(`${root}dist/cli/help.json`, JSON.stringify(help));
+// dist/cli.cjs, where the one-file command line used to be, starts it the same way as bin/pondus.cjs
+writeFileSync(`${root}dist/cli.cjs`, "'use strict';\n// Starts the pondus command line (see bin/pondus.cjs).\nrequire('../bin/pondus.cjs');\n");
+
+// Run each bundle once so the loader saves V8's compiled code next to it (the first example of its
+// first command, or for help, the help of the program and the completion script).
+const examples = createRequire(import.meta.url)(`${root}dist/test/cli-main.cjs`).HELP_EXAMPLES;
+const words = (line) => [...line.matchAll(/'([^']*)'|(\S+)/g)].map((m) => m[1] ?? m[2]).slice(1);
+for (const b of bundles) {
+  const first = Object.keys(table).find((c) => table[c] === b);
+  const runs = b === 'help' ? [['completion', 'bash'], ['help', 'mass']] : [words(examples[first][0])];
+  for (const args of runs) execFileSync(process.execPath, [`${root}bin/pondus.cjs`, ...args], { cwd: root, env: { ...process.env, PONDUS_WRITE_CODE_CACHE: '1' }, stdio: 'ignore' });
+}

@@ -30,8 +30,12 @@ afterAll(() => {
 describe('the packed package', () => {
   it('ships the bundles, declarations, data and licence, and no code cache', () => {
     const files = readdirSync(join(dir, 'node_modules', 'pondus', 'dist'));
-    expect(files).toEqual(expect.arrayContaining(['lib', 'types', 'data', 'cli.cjs']));
-    expect(files).not.toContain('cli.cache');
+    expect(files).toEqual(expect.arrayContaining(['lib', 'types', 'data', 'cli', 'cli.cjs']));
+    // the command line's bundles (one per command module, and help) and its help texts, without
+    // the V8 code caches the build wrote beside them (valid for one Node build only)
+    const cli = readdirSync(join(dir, 'node_modules', 'pondus', 'dist', 'cli'));
+    expect(cli).toEqual(expect.arrayContaining(['help.cjs', 'help.json', 'mass.cjs', 'calc.cjs']));
+    expect(cli.filter((f) => !f.endsWith('.cjs') && f !== 'help.json')).toEqual([]);
     expect(readdirSync(join(dir, 'node_modules', 'pondus'))).toContain('LICENSE');
   });
 
@@ -62,6 +66,11 @@ describe('the packed package', () => {
   it('runs as a command', () => {
     const version = (JSON.parse(execFileSync(process.execPath, ['-p', 'JSON.stringify(require("./package.json"))'], { cwd: root, encoding: 'utf8' })) as { version: string }).version;
     expect(node([join('node_modules', '.bin', 'pondus'), '--version']).trim()).toBe(version);
+    expect(node([join('node_modules', '.bin', 'pondus'), 'mass', '--json', 'H2O'])).toContain('"molarMass":18.015');
+    expect(node([join('node_modules', '.bin', 'pondus'), '--help'])).toContain('Usage: pondus [options] [command]');
+    expect(node([join('node_modules', '.bin', 'pondus'), 'completion', 'bash'])).toContain('_pondus()');
+    // the first run of a bundle wrote its code cache in the (writable) install; the next starts from it
+    expect(readdirSync(join(dir, 'node_modules', 'pondus', 'dist', 'cli'))).toContain('mass.cache');
     expect(node([join('node_modules', '.bin', 'pondus'), 'mass', '--json', 'H2O'])).toContain('"molarMass":18.015');
   });
 });

@@ -1,4 +1,4 @@
-import { Option, type Command } from 'commander';
+import type { Command } from 'commander';
 import { analysis, type AnalysisResult } from '../../analysis/check.js';
 import { analysisJson } from '../../analysis/analysis-json.js';
 import { readSheet, type SheetRow } from '../../analysis/lab-sheet.js';
@@ -9,8 +9,9 @@ import type { Presenter } from '../output/presenter.js';
 import { splitTrailingValues } from '../../key-values/read-key-values.js';
 import { takeJoinedNote } from '../input/key-value-args.js';
 import type { Note } from '../../errors/issue.js';
-import { withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
+import type { OutputOptions, RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
+import { declareAnalysis } from './declarations.js';
 
 export interface AnalysisCliOptions extends OutputOptions, RoundingOptions {
   found?: string;
@@ -189,20 +190,7 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
 
 /** Registers `pondus analysis`. */
 export function registerAnalysis(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void {
-  withRoundingOption(withOutputOptions(
-    program
-      .command('analysis')
-      .description('elemental analysis: calculated vs found, verdict at a tolerance, solvate fits, the report line')
-      .argument('[formulas...]', "formulas; - reads one per line ('FORMULA' or 'FORMULA C=… H=… N=…')")
-      .option('--found <values>', 'found mass percents, e.g. C=72.30,H=7.91,N=12.60 (unquoted --found C=72.30 H=7.91 N=12.60 works for one formula)')
-      .option('--solvents <list>', 'solvents and salt partners to fit: water,DCM,CHCl3,MeOH,EtOH,EtOAc,ether,THF,acetone,MeCN,DMF,DMSO,toluene,hexane,HCl,TFA,… or formulas')
-      .option('--tolerance <points>', 'allowed |found − calculated| in percentage points', '0.4')
-      .option('--step <amount>', 'step of the solvate amounts searched', '0.05')
-      .option('--max <amount>', 'largest amount of each solvate searched', '2')
-      .option('--top <n>', 'how many fits to list', '5')
-      .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)')
-      .addOption(new Option('--sheet <file>', 'a lab sheet (CSV: id, formula, and found % in columns C, H, N, S, …); - reads it from standard input')),
-  )).action((args: string[], o: AnalysisCliOptions, cmd: Command) => {
+  declareAnalysis(program).action((args: string[], o: AnalysisCliOptions, cmd: Command) => {
     const given = (name: string) => cmd.getOptionValueSource(name) === 'cli';
     const unused = ['step', 'max', 'top'].filter(given);
     if (o.solvents === undefined && unused.length > 0) throw fail({ code: 'USAGE', message: `${unused.map((u) => `--${u}`).join(', ')} set${unused.length === 1 ? 's' : ''} the solvate search: give --solvents too, or drop ${unused.length === 1 ? 'it' : 'them'}` });

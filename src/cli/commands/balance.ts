@@ -3,8 +3,9 @@ import { balance, type BalanceOptions, type BalanceResult } from '../../reaction
 import { balanceJson } from '../../reactions/balance-json.js';
 import { readFixOption } from '../../reactions/fix-option.js';
 import type { Presenter } from '../output/presenter.js';
-import { withOutputOptions, type OutputOptions } from './common.js';
+import type { OutputOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
+import { declareBalance } from './declarations.js';
 
 interface BalanceCliOptions extends OutputOptions {
   abbreviations?: boolean;
@@ -28,17 +29,8 @@ export function balancePresenter(o: BalanceCliOptions): Presenter<BalanceResult>
   };
 }
 
-const collect = (v: string, prev: string[] = []) => [...prev, v];
 
 /** Registers `pondus balance`. */
 export function registerBalance(program: Command, run: CommandRunner): void {
-  withOutputOptions(
-    program
-      .command('balance')
-      .description('balance chemical equations exactly (ions and electrons included); coefficients as written are used when they balance')
-      .argument('[equations...]', "equations such as 'Fe^2+ + MnO4^- + H^+ -> Fe^3+ + Mn^2+ + H2O'; - reads one per line")
-      .option('--fix <coefficients>', "when atoms alone allow more than one balance: 'written' (the coefficients written in the equation) or SPECIES=N ('C4H6O3=5'; repeat or separate by commas)", collect)
-      .option('--catalyst <species>', "a species written on one side that is a catalyst or additive, left out of the balance: 'H2SO4' (repeat for each; one written on both sides is read so by itself)", collect)
-      .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)'),
-  ).action((inputs: string[], o: BalanceCliOptions) => run('balance', inputs, o));
+  declareBalance(program).action((inputs: string[], o: BalanceCliOptions) => run('balance', inputs, o));
 }

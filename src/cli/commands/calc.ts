@@ -1,10 +1,10 @@
 import type { Command } from 'commander';
 import { calc, calcJson, type CalcResult } from '../../calc/calc.js';
 import type { RoundingMode } from '../../sigfig/round.js';
-import { fail } from '../../errors/pondus-error.js';
 import type { Presenter } from '../output/presenter.js';
-import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
+import { roundingOf, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
+import { declareCalc } from './declarations.js';
 
 interface CalcCliOptions extends OutputOptions, RoundingOptions {
   explain?: boolean;
@@ -13,7 +13,6 @@ interface CalcCliOptions extends OutputOptions, RoundingOptions {
 /** The presenter for `pondus calc`. */
 export function calcPresenter(o: CalcCliOptions): Presenter<CalcResult> {
   const opts: { rounding: RoundingMode } = { rounding: roundingOf(o) };
-  if (o.explain && (o.csv || o.tsv)) throw fail({ code: 'USAGE', message: '--explain cannot be combined with --csv or --tsv: the steps are shown in the table, and in JSON as `steps`' });
   return {
     compute: (input) => calc(input, opts),
     json: (r) => (o.explain ? { ...calcJson(r), steps: r.steps, rounding: opts.rounding } : calcJson(r)),
@@ -36,12 +35,5 @@ export function calcPresenter(o: CalcCliOptions): Presenter<CalcResult> {
 
 /** Registers `pondus calc`. */
 export function registerCalc(program: Command, run: CommandRunner): void {
-  const cmd = withRoundingOption(withOutputOptions(
-    program
-      .command('calc')
-      .description('calculate with measured quantities: significant figures, units, molar masses M(formula), ± uncertainties')
-      .argument('[expressions...]', "expressions such as '0.100 M * 250.0 mL * M(CuSO4·5H2O) to g'; - reads one per line")
-      .option('--explain', 'show each step and which input limited the precision'),
-  ));
-  cmd.action((inputs: string[], o: CalcCliOptions) => run('calc', inputs, o));
+  declareCalc(program).action((inputs: string[], o: CalcCliOptions) => run('calc', inputs, o));
 }

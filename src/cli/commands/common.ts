@@ -117,3 +117,81 @@ export function given(o: object, names: Record<string, string>): string[] {
     .filter(([k]) => (o as Record<string, unknown>)[k] !== undefined && (o as Record<string, unknown>)[k] !== false)
     .map(([, flag]) => flag);
 }
+
+/** What a command's usage errors say, by option: the reason each conflict is one, the hint for each required option. */
+interface UsageRules {
+  conflicts: Map<string, { others: string[]; why: string }[]>;
+  required: Map<string, string>;
+}
+const RULES = new WeakMap<Command, UsageRules>();
+
+function rulesOf(cmd: Command): UsageRules {
+  let r = RULES.get(cmd);
+  if (!r) RULES.set(cmd, (r = { conflicts: new Map(), required: new Map() }));
+  return r;
+}
+
+function optionOf(cmd: Command, flag: string): Option {
+  const opt = cmd.options.find((o) => o.long === flag);
+  if (!opt) throw new Error(`${cmd.name()} has no option ${flag}`);
+  return opt;
+}
+
+/**
+ * Declares that an option cannot go with others: commander refuses the pair (exit status 2) before
+ * the command runs, and the message says why, in pondus's words (`--a cannot be combined with --b
+ * or --c: why`). Only options given on the command line count, not defaults.
+ *
+ * @example
+ * conflicting(cmd, '--explain', ['--csv', '--tsv'], 'the steps are shown in the table')
+ */
+export function conflicting(cmd: Command, flag: string, others: string[], why: string): Command {
+  optionOf(cmd, flag).conflicts(others.map((o) => optionOf(cmd, o).attributeName()));
+  const rules = rulesOf(cmd).conflicts;
+  rules.set(flag, [...(rules.get(flag) ?? []), { others, why }]);
+  return cmd;
+}
+
+/**
+ * Makes an option required: commander refuses the command without it (exit status 2), and the
+ * message is the hint given (`give the weighed form: --weighed Fe2O3`).
+ *
+ * @example
+ * required(cmd, '--weighed', 'give the weighed form: --weighed Fe2O3')
+ */
+export function required(cmd: Command, flag: string, hint: string): Command {
+  optionOf(cmd, flag).makeOptionMandatory(true);
+  rulesOf(cmd).required.set(flag, hint);
+  return cmd;
+}
+
+/**
+ * Commander's own usage message for a command, in pondus's words where the command declared them
+ * (a conflict's reason, a required option's hint); any other message as commander wrote it.
+ *
+ * @example
+ * usageMessage(cmd, "error: required option '--weighed <form>' not specified") // 'error: give the weighed form: --weighed Fe2O3'
+ */
+export function usageMessage(cmd: Command, message: string): string {
+  const rules = RULES.get(cmd);
+  if (!rules) return message;
+  const conflict = /^error: option '(?:-\w, )?(--[a-z0-9-]+)[^']*' cannot be used with option '(?:-\w, )?(--[a-z0-9-]+)/.exec(message);
+  const rule = conflict && rules.conflicts.get(conflict[1])?.find((r) => r.others.includes(conflict[2]));
+  if (rule) return `error: ${conflict[1]} cannot be combined with ${rule.others.join(' or ')}: ${rule.why}`;
+  const missing = /^error: required option '(?:-\w, )?(--[a-z0-9-]+)/.exec(message);
+  const hint = missing && rules.required.get(missing[1]);
+  if (hint) return `error: ${hint}`;
+  return message;
+}
+
+/**
+ * Sends a command's usage errors through {@link usageMessage} (call once every option is declared).
+ *
+ * @example
+ * withUsageMessages(program.command('gravimetric'))
+ */
+export function withUsageMessages(cmd: Command): Command {
+  const error = cmd.error.bind(cmd);
+  cmd.error = (message, errorOptions) => error(usageMessage(cmd, message), errorOptions);
+  return cmd;
+}

@@ -8,8 +8,9 @@ import { displayElementMass, displayElementPercent, displayMolarMass, displayPer
 import type { Presenter } from '../output/presenter.js';
 import { fail } from '../../errors/pondus-error.js';
 import { joinPairArgs, takeJoinedNote } from '../input/key-value-args.js';
-import { outputFormat, withFormulaOptions, withRoundingOption, type FormulaOptions, type OutputOptions, type RoundingOptions } from './common.js';
+import { outputFormat, type FormulaOptions, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
+import { declareComposition } from './declarations.js';
 
 interface CompositionCliOptions extends FormulaOptions, RoundingOptions, OutputOptions {
   part?: string;
@@ -49,8 +50,6 @@ export function mixturePresenter(o: CompositionCliOptions): Presenter<MixtureRes
 
 /** The presenter for `pondus composition`. */
 export function compositionPresenter(o: CompositionCliOptions): Presenter<CompositionDetail> | Presenter<MixtureResult> {
-  if (o.mixture && o.part !== undefined) throw fail({ code: 'USAGE', message: '--part gives the share of a fragment in one formula; with --mixture the inputs are measured masses: drop one' });
-  if (o.mixture && o.long) throw fail({ code: 'USAGE', message: '--long writes one CSV row per element of a formula; with --mixture drop --long' });
   if (o.long && outputFormat(o) !== 'csv' && outputFormat(o) !== 'tsv') throw fail({ code: 'USAGE', message: '--long shapes CSV and TSV output (one row per element): add --csv or --tsv, or drop --long' });
   return o.mixture ? mixturePresenter(o) : formulaPresenter(o);
 }
@@ -93,15 +92,7 @@ function formulaPresenter(o: CompositionCliOptions): Presenter<CompositionDetail
 
 /** Registers `pondus composition`. */
 export function registerComposition(program: Command, run: CommandRunner): void {
-  withRoundingOption(withFormulaOptions(
-    program
-      .command('composition')
-      .description('percent by mass of each element, and of a fragment with --part')
-      .argument('[formulas...]', 'formulas; - reads one per line from standard input')
-      .option('--long', 'CSV/TSV: one row per element (input, formula, molarMass, symbol, count, mass, massPercent) instead of one X_percent column per element')
-      .option('--part <fragment>', 'also the mass fraction of a fragment: H2O in a hydrate, SO4 in a salt, Fe in an iron salt')
-      .option('--mixture', "inputs are measured masses, 'NaCl=5.00 g, KCl=3.00 g' or 'C=7.34 g H=1.85 g N=2.85 g' (unquoted NaCl=5.00 g KCl=3.00 g is one mixture): percent by component and by element"),
-  )).action((formulas: string[], o: CompositionCliOptions) => {
+  declareComposition(program).action((formulas: string[], o: CompositionCliOptions) => {
     if (!o.mixture) return run('composition', formulas, o);
     const { inputs, joined } = joinPairArgs(formulas, { what: 'mixture', units: true });
     const options: CompositionCliOptions = { ...o, joined };

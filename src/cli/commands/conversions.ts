@@ -12,11 +12,12 @@ import type { Quantity } from '../../sigfig/quantity.js';
 import { displayMeasured, type RoundingMode } from '../../sigfig/round.js';
 import { speciesText } from '../../preparation/species.js';
 import type { Presenter } from '../output/presenter.js';
-import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
+import { roundingOf, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 import { checkDilutePlanOptions, massDilutionPresenter, seriesPresenter, type DilutePlanCliOptions } from './dilute-plans.js';
 import type { SeriesResult } from '../../preparation/dilution-series.js';
 import type { MassDilutionResult } from '../../preparation/mass-dilution.js';
+import { declareConversions } from './declarations.js';
 
 const factorText = (f: ConversionFactor) => `${f.a === 1n ? '' : `${f.a} × `}M(${speciesText(f.sought)}) / ${f.b === 1n ? `M(${speciesText(f.given)})` : `(${f.b} × M(${speciesText(f.given)}))`}`;
 const notesJson = (notes: Note[]) => notes.map((n) => ({ code: n.code, message: n.message }));
@@ -91,7 +92,6 @@ interface GravimetricCliOptions extends OutputOptions, RoundingOptions {
 
 /** The presenter for `pondus gravimetric`. */
 export function gravimetricPresenter(o: GravimetricCliOptions): Presenter<GravimetricResult> {
-  if (o.weighed === undefined) throw fail({ code: 'USAGE', message: 'give the weighed form: --weighed Fe2O3' });
   if (o.sample !== undefined && o.mass === undefined) throw fail({ code: 'USAGE', message: '--sample needs --mass: the mass fraction in the sample comes from the mass of the weighed form' });
   const rounding = roundingOf(o);
   const { text, value, factor } = shows(rounding);
@@ -135,7 +135,6 @@ interface BasisCliOptions extends OutputOptions, RoundingOptions {
 
 /** The presenter for `pondus basis`. */
 export function basisPresenter(o: BasisCliOptions): Presenter<BasisResult> {
-  if (o.to === undefined) throw fail({ code: 'USAGE', message: 'give the basis to convert to: --to P (or --to P2O5, K2O, SiO2, …)' });
   const rounding = roundingOf(o);
   const { text, value, factor } = shows(rounding);
   return {
@@ -175,7 +174,6 @@ interface SaltCliOptions extends OutputOptions, RoundingOptions {
 
 /** The presenter for `pondus salt`. */
 export function saltPresenter(o: SaltCliOptions): Presenter<SaltFactorResult> {
-  if (o.parent === undefined) throw fail({ code: 'USAGE', message: 'give the parent compound: --parent C17H19NO3' });
   const rounding = roundingOf(o);
   const { text, ins } = shows(rounding);
   return {
@@ -213,58 +211,10 @@ export function saltPresenter(o: SaltCliOptions): Presenter<SaltFactorResult> {
 
 /** Registers `pondus dilute`, `gravimetric`, `basis` and `salt`. */
 export function registerConversions(program: Command, run: CommandRunner): void {
-  const dil = withRoundingOption(
-    withOutputOptions(
-      program
-        .command('dilute')
-        .description('dilution, C1·V1 = C2·V2: how much stock to take, or the concentration made from the volume taken')
-        .argument('[stock...]', "stock concentration, e.g. '1.00 M' (with --series and no --to: the dilution factor, '1:1000')")
-        .option('--to <c>', "target concentration, e.g. '0.100 M' (with --mass: the target content, '2.5 % w/w')")
-        .option('--volume <v>', "final volume, e.g. '250.0 mL' (with --series: of each step)")
-        .option('--taken <v>', "the volume of stock actually taken, e.g. '25.00 mL': gives the concentration made (a result)")
-        .option('--series', 'plan a serial dilution: steps of at most 1:100, each transfer at least --min-transfer')
-        .option('--min-transfer <v>', "smallest volume to pipette in a serial plan (default '100 µL')")
-        .option('--max-step <n>', 'largest dilution factor of one step in a serial plan (default 100)')
-        .option('--mass <m>', "dilute a solid or semisolid by mass to this total: --mass '60.0 g' (the input and --to in % w/w, mg/g, mg/kg)"),
-    ),
-  );
-  dil.action((inputs: string[], o: DiluteCliOptions) => run('dilute', inputs, o));
-  const grav = withRoundingOption(
-    withOutputOptions(
-      program
-        .command('gravimetric')
-        .description('gravimetric factor (IUPAC Gold Book), analyte mass from the weighed form, and its mass fraction')
-        .argument('[analytes...]', 'what is sought: Fe, Cl, SO4, P2O5, …')
-        .option('--weighed <form>', 'the form weighed: Fe2O3, AgCl, BaSO4, Mg2P2O7, …')
-        .option('--mass <m>', "mass of the weighed form: '0.2345 g'")
-        .option('--sample <m>', "mass of the sample taken: '1.0012 g'")
-        .option('--element <symbol>', 'the element the factor rests on, when the two share several'),
-    ),
-  );
-  grav.action((inputs: string[], o: GravimetricCliOptions) => run('gravimetric', inputs, o));
-  const basis = withRoundingOption(
-    withOutputOptions(
-      program
-        .command('basis')
-        .description('convert between an element and its oxide basis (P ↔ P2O5, K ↔ K2O, Si ↔ SiO2, …)')
-        .argument('[from...]', 'the basis a value is given on: P2O5, K2O, SiO2, Al2O3, P, K, …')
-        .option('--to <formula>', 'the basis to convert to')
-        .option('--value <v>', "the value to convert: '12.5 %', '3.40 g'")
-        .option('--element <symbol>', 'the element the conversion rests on, when the two share several'),
-    ),
-  );
-  basis.action((inputs: string[], o: BasisCliOptions) => run('basis', inputs, o));
-  const salt = withRoundingOption(
-    withOutputOptions(
-      program
-        .command('salt')
-        .description('salt/parent factor of a salt form (parent·acid, or a sodium, potassium, calcium … salt with any hydrate), and masses either way')
-        .argument('[salts...]', 'the salt: parent·acid for a basic drug (C17H19NO3·HCl·3H2O), or a metal salt of an acidic drug (C14H13NaO3, (C33H34FN2O5)2Ca·3H2O)')
-        .option('--parent <formula>', 'the parent compound (free base or acid)')
-        .option('--dose <m>', "a mass of parent: the salt mass that carries it, e.g. '10.0 mg' (an instruction, at working precision)")
-        .option('--salt-mass <m>', 'a mass of salt: the parent mass it carries (a result)'),
-    ),
-  );
-  salt.action((inputs: string[], o: SaltCliOptions) => run('salt', inputs, o));
+  const c = declareConversions(program);
+  c.dilute.action((inputs: string[], o: DiluteCliOptions) => run('dilute', inputs, o));
+  c.gravimetric.action((inputs: string[], o: GravimetricCliOptions) => run('gravimetric', inputs, o));
+  c.basis.action((inputs: string[], o: BasisCliOptions) => run('basis', inputs, o));
+  c.salt.action((inputs: string[], o: SaltCliOptions) => run('salt', inputs, o));
 }
 

@@ -14,8 +14,9 @@ import { runWithSheet } from './sheet-runner.js';
 import { hillOrder } from '../../formula/hill.js';
 import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
-import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
+import { roundingOf, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
+import { declareEmpirical } from './declarations.js';
 
 const residualText = (m: Record<string, number>) => Object.entries(m).map(([s, r]) => `${s} ${r >= 0 ? '+' : ''}${r.toFixed(3)}`).join(', ');
 
@@ -186,7 +187,6 @@ export function candidatesPresenter(o: CandidatesCliOptions): Presenter<Candidat
   };
   if (opts.ppm !== undefined && opts.ppm > 1000) throw fail({ code: 'USAGE', message: `--ppm ${o.ppm} is too wide a window: at most 1000 ppm` });
   if (opts.limit !== undefined && (!Number.isInteger(opts.limit) || opts.limit > MAX_LIMIT)) throw fail({ code: 'USAGE', message: `--limit takes a whole number up to ${MAX_LIMIT}, not '${o.limit}'` });
-  if (o.ion !== undefined && o.molarMass) throw fail({ code: 'USAGE', message: '--ion says the masses are m/z values of that ion; --molar-mass says they are average molar masses of the neutral compound: drop one' });
   // options read once, before any input: a bad range, ion or found value is a usage error
   usage(() => readRanges(opts.elements ?? DEFAULT_RANGES));
   if (opts.ion !== undefined) usage(() => readIonNotation(opts.ion!));
@@ -253,26 +253,14 @@ export function candidatesPresenter(o: CandidatesCliOptions): Presenter<Candidat
 
 /** Registers `pondus empirical`, `combustion` and `candidates`. */
 export function registerEmpirical(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void {
-  withOutputOptions(
-    program
-      .command('empirical')
-      .description('empirical (and molecular) formula from mass percents or element masses')
-      .argument('[measurements...]', "'C=40.00 H=6.71 O=53.29', 'Fe=34.97 g O=15.03 g', 'C=40.00 H=6.71 O=rest', oxides 'SiO2=42.70 MgO=57.30'; unquoted C=40.00 H=6.71 O=53.29 is one set; - reads one set per line (or a JSON object per line)")
-      .option('--molar-mass <M>', 'molar mass in g/mol (searched within ±1 %, or a range such as 170-190): the molecular formula is searched directly')
-      .option('--tolerance <points>', 'how far a calculated percent may be from the measured one, in percentage points (default 0.3, what combustion analysis is good to)')
-      .option('--sheet <file>', "a CSV of measurements: element columns (C, H, N, …), optional id, 'sample' and 'molar mass' columns; - reads it from standard input"),
-  ).action((inputs: string[], o: EmpiricalCliOptions) => {
+  const c = declareEmpirical(program);
+  c.empirical.action((inputs: string[], o: EmpiricalCliOptions) => {
     if (o.sheet !== undefined) return runWithSheet(run, 'empirical', inputs, o, stdin, readMeasurementSheet);
     const { inputs: sets, joined } = joinPairArgs(inputs, { what: 'measurement set', units: true });
     const options: EmpiricalCliOptions = { ...o, joined };
     return run('empirical', sets, options);
   });
-  const combustionCmd = program
-    .command('combustion')
-    .description('combustion analysis: element percents and the empirical formula from the masses collected')
-    .argument('[sample...]', "sample mass, e.g. '0.1000 g'");
-  for (const [key, p] of Object.entries(PRODUCTS)) combustionCmd.option(`--${key} <mass>`, `mass of ${p.formula} collected (gives ${p.element})`);
-  withRoundingOption(withOutputOptions(combustionCmd)).action((inputs: string[], o: CombustionCliOptions, cmd: Command) => {
+  c.combustion.action((inputs: string[], o: CombustionCliOptions, cmd: Command) => {
     // masses typed without quotes: `0.1000 g --co2 0.2000 g` leaves the units among the samples
     if (inputs.some((a) => /^[A-Za-zµμ]+$/.test(a))) {
       const raw = (cmd.parent as (Command & { rawArgs?: string[] }) | null)?.rawArgs ?? [];
@@ -285,24 +273,8 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
     }
     return run('combustion', inputs, o);
   });
-  withOutputOptions(
-    program
-      .command('candidates')
-      .description('candidate formulas for an accurate mass or m/z and/or found percents, any element, filtered for plausibility (RDBE, SENIOR, element ratios) and ranked by score')
-      .argument('[masses...]', 'neutral monoisotopic masses in u, or m/z values with --ion (or molar masses with --molar-mass)')
-      .option('--ppm <ppm>', 'mass tolerance in ppm', '5')
-      .option('--ion <notation>', "the masses are m/z values of this ion: '[M+H]+', '[M+Na]+', '[M-H]-', '[M+2H]2+', …")
-      .option('--pattern <peaks>', "a measured isotope pattern as m/z:intensity pairs, '203.0526:100 204.0560:6.9', scored against each candidate's")
-      .option('--molar-mass', 'the masses are average molar masses (window ±0.5 g/mol)')
-      .option('--found <values>', 'found percents to match too: C=64.85,H=5.44,N=6.30 (unquoted C=64.85 H=5.44 also works)')
-      .option('--tolerance <points>', 'allowed |found − calculated| in percentage points', '0.4')
-      .option('--elements <ranges>', 'element ranges, any element (e.g. add Fe0-1 B0-2 Si0-2 Na0-1)', DEFAULT_RANGES)
-      .option('--ratios <set>', 'element-ratio ranges of Kind & Fiehn 2007: extended (default), common, or none', 'extended')
-      .option('--no-ratios', 'do not apply the element-ratio limits (as --ratios none)')
-      .option('--limit <n>', 'most candidates to list', '50'),
-  ).action((inputs: string[], o: CandidatesCliOptions, cmd: Command) => {
+  c.candidates.action((inputs: string[], o: CandidatesCliOptions, cmd: Command) => {
     const given = (name: string) => cmd.getOptionValueSource(name) === 'cli';
-    if (o.molarMass && given('ppm')) throw fail({ code: 'USAGE', message: '--ppm sets the window of an accurate (monoisotopic) mass; with --molar-mass the window is ±0.5 g/mol: drop one' });
     if (o.found === undefined && given('tolerance')) throw fail({ code: 'USAGE', message: '--tolerance applies to found percents: give --found too, or drop --tolerance' });
     // found values typed unquoted: --found C=40.00 H=6.71 leaves H=6.71 among the masses
     const runs = pairRuns(inputs, false);

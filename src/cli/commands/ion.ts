@@ -6,12 +6,12 @@ import { readIonSheet, type IonSheetRow } from '../../ions/ion-sheet.js';
 import { readIonLine } from '../../ions/read-ion-line.js';
 import { signedFixed } from '../../ions/mass-error.js';
 import type { Presenter } from '../output/presenter.js';
-import { withOutputOptions } from './common.js';
-import { registerPattern } from './pattern.js';
+import { attachPattern } from './pattern.js';
 import type { CommandRunner } from './runner.js';
 import { runWithSheet, type SheetOptions } from './sheet-runner.js';
 
 import { Decimal } from '../../exact/decimal.js';
+import { declareIon } from './declarations.js';
 export interface IonCliOptions extends SheetOptions<IonSheetRow> {
   adduct?: string;
   found?: string;
@@ -82,22 +82,12 @@ export function ionPresenter(o: IonCliOptions): Presenter<IonRow> {
  * registerIonCommands(program, run, () => process.stdin)
  */
 export function registerIonCommands(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void {
-  withOutputOptions(
-    program
-      .command('ion')
-      .description('m/z of an ion ([M+H]+, [M+Na]+, [M-H]-, [M+2H]2+, [2M+Na]+, M+•) with the electron mass, the error against a found m/z, the HRMS report line')
-      .argument('[inputs...]', "formulas, or lines 'FORMULA ION [FOUND]' ('[C15H15NO2+H]+ 242.1172' also works); - reads one per line from standard input")
-      .option('--adduct <ion>', "the ion, in the usual notation: '[M+H]+', '[M+Na]+', '[M-H]-', '[M+2H]2+', '[M+H-H2O]+', '[2M+Na]+', 'M+.'")
-      .option('--found <m/z>', 'the measured m/z (one input only): gives the error in ppm and mDa and the report line')
-      .option('--ionisation <method>', 'ionisation named in the report line', 'ESI')
-      .option('--decimals <n>', 'decimals of the calculated m/z in the report line', '4')
-      .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)')
-      .option('--sheet <file>', 'a lab sheet (CSV with columns id, formula, ion, found); - reads it from standard input'),
-  ).action((inputs: string[], o: IonCliOptions) => {
+  const c = declareIon(program);
+  c.ion.action((inputs: string[], o: IonCliOptions) => {
     if (o.found !== undefined && (inputs.length > 1 || inputs.includes('-') || o.sheet !== undefined)) {
       throw fail({ code: 'USAGE', message: '--found goes with one input; in a batch, give the found m/z on each line (FORMULA ION FOUND)' });
     }
     return runWithSheet(run, 'ion', inputs, o, stdin, readIonSheet);
   });
-  registerPattern(program, run);
+  attachPattern(c.pattern, run);
 }

@@ -5,8 +5,9 @@ import { MASS_COLUMNS, massCells, massJson, massJsonLine } from '../../mass/mass
 import { formatWithUncertainty, molarMassUncertainty, type MolarMassUncertainty } from '../../mass/uncertainty.js';
 import { chargeLabel, displayMolarMass, displayMonoisotopic } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
-import { withFormulaOptions, withRoundingOption, type FormulaOptions, type RoundingOptions } from './common.js';
+import type { FormulaOptions, RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
+import { declareMass } from './declarations.js';
 
 interface MassCliOptions extends FormulaOptions, RoundingOptions {
   uncertainty?: boolean;
@@ -71,11 +72,5 @@ function uncertaintyPresenter(o: MassCliOptions): Presenter<MassRow> {
 
 /** Registers `pondus mass`. */
 export function registerMass(program: Command, run: CommandRunner): void {
-  withRoundingOption(withFormulaOptions(
-    program
-      .command('mass')
-      .description('molar mass, monoisotopic mass and nominal mass of formulas')
-      .argument('[formulas...]', 'formulas; - reads one per line from standard input')
-      .option('--uncertainty', 'also the standard uncertainty of the molar mass from the atomic-weight intervals'),
-  )).action((formulas: string[], o: MassCliOptions) => run('mass', formulas, o));
+  declareMass(program).action((formulas: string[], o: MassCliOptions) => run('mass', formulas, o));
 }

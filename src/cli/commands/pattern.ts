@@ -8,7 +8,7 @@ import { patternSvg } from '../../isotope-pattern/pattern-svg.js';
 import { stickPlot } from '../../isotope-pattern/stick-plot.js';
 import type { Presenter } from '../output/presenter.js';
 import { styleFor } from '../output/style.js';
-import { withOutputOptions, type OutputOptions } from './common.js';
+import type { OutputOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 import { Decimal } from '../../exact/decimal.js';
 
@@ -44,7 +44,6 @@ export function patternPresenter(o: PatternCliOptions): Presenter<PatternResult>
   const coveragePercent = positive(o.coverage, 'coverage', 100);
   const minRelative = o.minRelative === undefined ? 0.1 : Number(o.minRelative);
   if (!(minRelative >= 0 && minRelative < 100)) throw fail({ code: 'USAGE', message: `--min-relative takes a percentage from 0 to 100, not '${o.minRelative}'` });
-  if (o.fine && resolvingPower !== undefined) throw fail({ code: 'USAGE', message: '--fine shows every isotopologue apart and --resolution merges them as an instrument would: choose one' });
   if (coveragePercent !== undefined && !o.fine && resolvingPower === undefined) throw fail({ code: 'USAGE', message: '--coverage applies to the fine structure: add --fine or --resolution' });
   const opts = {
     ion: o.adduct,
@@ -101,25 +100,13 @@ export function patternPresenter(o: PatternCliOptions): Presenter<PatternResult>
 }
 
 /**
- * Registers `pondus pattern`.
+ * Attaches the action of `pondus pattern` to its declared command (commands/declarations.ts).
  *
  * @example
- * registerPattern(program, run)
+ * attachPattern(declareIon(program).pattern, run)
  */
-export function registerPattern(program: Command, run: CommandRunner): void {
-  withOutputOptions(
-    program
-      .command('pattern')
-      .description('isotope pattern of a formula or an ion: aggregated (nominal-mass peaks) or fine structure at a resolving power, as a terminal picture or SVG')
-      .argument('[inputs...]', "formulas, or lines 'FORMULA [ION]'; - reads one per line from standard input")
-      .option('--adduct <ion>', "the ion, in the usual notation: '[M+H]+', '[M+Na]+', '[M-H]-', '[M+2H]2+', 'M+.'")
-      .option('--resolution <R>', 'fine structure as an instrument of resolving power R shows it (60000, or 60k): peaks closer than FWHM = m/R merge')
-      .option('--fine', 'fine structure with every isotopologue apart')
-      .option('--coverage <percent>', 'share of the probability the fine structure holds', undefined)
-      .option('--min-relative <percent>', 'leave out peaks below this percentage of the largest', '0.1')
-      .option('--svg <file>', 'also draw the pattern as an SVG picture (one input)')
-      .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)'),
-  ).action((inputs: string[], o: PatternCliOptions) => {
+export function attachPattern(cmd: Command, run: CommandRunner): void {
+  cmd.action((inputs: string[], o: PatternCliOptions) => {
     if (o.svg !== undefined && (inputs.length !== 1 || inputs[0] === '-')) throw fail({ code: 'USAGE', message: '--svg draws one pattern: give one input' });
     return run('pattern', inputs, o);
   });

@@ -13,7 +13,7 @@ import { milliequivalents, type MilliequivalentOptions, type MilliequivalentResu
 import { osmolarity, type OsmolarityResult } from '../../pharmacy/osmolarity.js';
 import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
-import { withFormulaOptions, withOutputOptions, withRoundingOption, type FormulaOptions, type OutputOptions } from './common.js';
+import type { FormulaOptions, OutputOptions } from './common.js';
 import { amountJson, notesJson, numbered, qtext, reportedIn, type RowPresenter } from './qc-rows.js';
 import { ANIONS, CATIONS } from '../../pharmacy/ions.js';
 import { potency, type PotencyOptions, type PotencyResult } from '../../pharmacy/potency.js';
@@ -22,6 +22,7 @@ import { readBasis } from '../../assay/sample-basis.js';
 import { displayInstruction, instructionJson, massUnitFor } from '../../sigfig/instruction.js';
 import type { Decimal } from '../../exact/decimal.js';
 import type { CommandRunner } from './runner.js';
+import { declarePharmacy } from './declarations.js';
 
 // --- meq --------------------------------------------------------------------------
 
@@ -288,66 +289,12 @@ export function strengthPresenter(o: StrengthCli): RowPresenter<StrengthForms> {
 
 /** Registers `meq`, `osmolarity` and `alligation`. */
 export function registerPharmacy(program: Command, run: CommandRunner): void {
-  withRoundingOption(
-    withFormulaOptions(
-      program
-        .command('meq')
-        .description('mmol, mEq and mOsm of a salt: for a weighed mass, the mass for a target, or per mL of a strength')
-        .argument('[salts...]', 'the salt, e.g. KCl, CaCl2·2H2O, K2HPO4; - reads one per line')
-        .option('--mass <m>', "a weighed mass: '1.500 g'")
-        .option('--meq <n>', "a target: '20 mEq' (gives the mass to weigh)")
-        .option('--mmol <n>', "a target: '10 mmol' (gives the mass to weigh)")
-        .option('--concentration <c>', "a strength: '10 % w/v', '84 g/L', '0.154 M' (gives mEq/mL, mEq/L, mOsm/L)")
-        .option('--measured', 'the strength is measured (keep its significant figures), not a nominal label value')
-        .option('--ions <list>', "the ions, when not read from the formula: '2K^+,HPO4^2-'"),
-    ),
-  ).action((inputs: string[], o: MeqCli) => run('meq', inputs, o));
-
-  withRoundingOption(
-    withFormulaOptions(
-      program
-        .command('osmolarity')
-        .description('mOsm/L and mEq/L of a solution of salts (complete dissociation)')
-        .argument('[solutions...]', "salts and strengths: 'NaCl=0.9 %' or 'NaCl=0.6 %, KCl=0.03 %'; - reads one solution per line")
-        .option('--measured', 'the strengths are measured (keep their significant figures), not nominal label values'),
-    ),
-  ).action((inputs: string[], o: OsmolarityCli) => run('osmolarity', inputs, o));
-
-  withRoundingOption(
-    withOutputOptions(
-      program
-        .command('alligation')
-        .description('amounts of a higher and a lower strength to mix for a target strength, by mass or by volume')
-        .argument('[targets...]', "the target strength: '10 %'; - reads one per line")
-        .option('--higher <s>', "the higher strength: '20 %'")
-        .option('--lower <s>', "the lower strength, or '0 %' for a diluent or base")
-        .option('--total <amount>', "the total to make: '300 g' (by mass) or '250 mL' (by volume)")
-        .option('--by <how>', 'mass or volume, for parts only (no total)'),
-    ),
-  ).action((inputs: string[], o: AlligationCli) => run('alligation', inputs, o));
-
-  withRoundingOption(
-    withOutputOptions(
-      program
-        .command('potency')
-        .description('potency of a drug substance as is (from µg/mg or %, as is or on the anhydrous or dried basis), and the mass of it that holds an amount of active')
-        .argument('[potencies...]', "the potency from the certificate: '950 µg/mg', '98.7 %', '101.2 %' with --basis anhydrous; - reads one per line")
-        .option('--basis <basis>', 'the basis the potency is given on: as-is (the default), anhydrous, dried, solvent-free')
-        .option('--water <w>', "water content (Karl Fischer), for --basis anhydrous: '4.8 %'")
-        .option('--loss <l>', "loss on drying, for --basis dried: '0.50 %'")
-        .option('--solvent <s>', "residual solvent, for --basis solvent-free: '0.10 %'")
-        .option('--need <m>', "the mass of active needed: '500 mg' (gives the mass to weigh)"),
-    ),
-  ).action((inputs: string[], o: PotencyCli) => run('potency', inputs, o));
-
-  withRoundingOption(
-    withOutputOptions(
-      program
-        .command('strength')
-        .description('a strength in each of its forms: ratio strength 1:N, % w/v, mg/mL, mg/dL; % w/w, mg/g, mg/kg; % v/v')
-        .argument('[strengths...]', "'1:1000', '0.1 % w/v', '2.5 mg/mL', '0.5 % w/w', '1:750 w/w'; - reads one per line"),
-    ),
-  ).action((inputs: string[], o: StrengthCli) => run('strength', inputs, o));
+  const c = declarePharmacy(program);
+  c.meq.action((inputs: string[], o: MeqCli) => run('meq', inputs, o));
+  c.osmolarity.action((inputs: string[], o: OsmolarityCli) => run('osmolarity', inputs, o));
+  c.alligation.action((inputs: string[], o: AlligationCli) => run('alligation', inputs, o));
+  c.potency.action((inputs: string[], o: PotencyCli) => run('potency', inputs, o));
+  c.strength.action((inputs: string[], o: StrengthCli) => run('strength', inputs, o));
 }
 
 /** Presenters of the compounding commands, by name. */

@@ -1,6 +1,5 @@
 import { hillAside, speciesText } from '../../preparation/species.js';
 import type { Command } from 'commander';
-import { Option } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
 import type { Note } from '../../errors/issue.js';
 import { BENCH_CAUTION } from '../../preparation/caution.js';
@@ -12,11 +11,12 @@ import { CONCENTRATED_CAUTION } from '../../preparation/caution.js';
 import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
-import { conflict, given, roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
+import { conflict, given, roundingOf, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 import { prepSheetPresenter, readPrepSheet, type PrepSheetCliOptions } from './prep-sheet.js';
 import type { PrepRowResult } from '../../preparation/prep-sheet.js';
 import { runWithSheet } from './sheet-runner.js';
+import { declarePrepare } from './declarations.js';
 
 interface PrepareCliOptions extends OutputOptions, RoundingOptions, PrepSheetCliOptions {
   concentration?: string;
@@ -209,24 +209,5 @@ function oneSolutionPresenter(o: PrepareCliOptions): Presenter<Prepared> {
 
 /** Registers `pondus prepare`. */
 export function registerPrepare(program: Command, run: CommandRunner, stdin?: () => AsyncIterable<string | Buffer>): void {
-  const cmd = withRoundingOption(
-    withOutputOptions(
-      program
-        .command('prepare')
-        .description('mass of a reagent to weigh for a solution (with assay and hydrate form), the concentration made from the mass weighed, or the mass to replace another form')
-        .argument('[reagents...]', 'the reagent as it is in the bottle, e.g. CuSO4·5H2O; - reads one per line')
-        .option('--concentration <c>', "target concentration: '0.100 M', '5.00 g/L', '1000 ppm' (mg/L), '2.0 %' (w/v)")
-        .option('--volume <v>', "final volume: '250.0 mL'")
-        .option('--purity <p>', "the assay of the reagent as weighed: '98.5 %' (with --replace: of the form in hand)")
-        .addOption(new Option('--purity-basis <basis>', "what the assay is of: reagent (the reagent itself) or part (the content of the --as species, a potency 'as base')").choices(['reagent', 'part']))
-        .option('--as <species>', 'the concentration is of this part of the reagent: Cu, Cl, CuSO4, a free base, …')
-        .option('--weighed <m>', "the mass actually weighed: '1.4587 g'; gives the concentration made (a result)")
-        .option('--fraction <w>', "a concentrated liquid reagent by its mass fraction: '37 %' (% w/w, as on the label); gives its molarity and the volume to take")
-        .option('--density <d>', "density of the concentrated reagent: '1.19 g/mL' (from the label; common grades are in a table)")
-        .option('--replace <form=amount>', "weigh this reagent in place of another form: --replace 'CuSO4=10.00 g'")
-        .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)'),
-    ),
-  );
-  cmd.option('--sheet <file>', 'a prep sheet: CSV with columns reagent, form, purity, density, target, volume (and id, as, weighed, taken): one instruction per row; - reads it from standard input');
-  cmd.action((inputs: string[], o: PrepareCliOptions) => (o.sheet !== undefined && stdin ? runWithSheet(run, 'prepare', inputs, o, stdin, readPrepSheet) : run('prepare', inputs, o)));
+  declarePrepare(program).action((inputs: string[], o: PrepareCliOptions) => (o.sheet !== undefined && stdin ? runWithSheet(run, 'prepare', inputs, o, stdin, readPrepSheet) : run('prepare', inputs, o)));
 }

@@ -21,9 +21,10 @@ import { BENCH_CAUTION } from '../../preparation/caution.js';
 import type { Quantity } from '../../sigfig/quantity.js';
 import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
-import { withFormulaOptions, withOutputOptions, withRoundingOption, type FormulaOptions, type OutputOptions } from './common.js';
+import type { FormulaOptions, OutputOptions } from './common.js';
 import { amountJson, notesJson, numbered, qtext, reportedIn, type RowPresenter } from './qc-rows.js';
 import type { CommandRunner } from './runner.js';
+import { declareQc } from './declarations.js';
 
 interface BasisCli {
   loss?: string;
@@ -118,7 +119,6 @@ type Titration = { t: TitrationAssayResult; rep: Reported };
 export function titrationPresenter(o: TitrationCli): RowPresenter<Titration> {
   const missing = (['sample', 'titrant', 'volume'] as const).filter((k) => o[k] === undefined);
   if (missing.length) throw fail({ code: 'USAGE', message: `give ${missing.map((k) => `--${k}`).join(', ')}: pondus titration KHC8H4O4 --sample '0.5000 g' --titrant '0.1000 M' --volume '24.40 mL'` });
-  if (o.added !== undefined && o.blank !== undefined) throw fail({ code: 'USAGE', message: 'a back-titration takes either --added (the excess reagent) or --blank (the titre of the reagent alone), not both' });
   if (o.reagentRatio !== undefined && o.added === undefined && !o.back) throw fail({ code: 'USAGE', message: '--reagent-ratio belongs to a back-titration: give --added or --back too' });
   if (o.back && o.added === undefined && o.blank === undefined) throw fail({ code: 'USAGE', message: 'a back-titration needs --added (the excess reagent) or --blank (the titre of the reagent alone)' });
   const rounding = o.rounding ?? 'half-even';
@@ -235,7 +235,6 @@ type BasisRow = { rep: Reported; value: Quantity; from: SampleBasis; notes: Note
 /** The presenter for `pondus sample-basis`. */
 export function sampleBasisPresenter(o: SampleBasisCli): RowPresenter<BasisRow> {
   const rounding = o.rounding ?? 'half-even';
-  if (o.to !== undefined && o.on !== undefined) throw fail({ code: 'USAGE', message: '--to and --on say the same thing: give one' });
   const from = o.from === undefined ? 'as-is' : readBasis(o.from);
   const to = o.to ?? o.on;
   if (to === undefined && o.limits === undefined) throw fail({ code: 'USAGE', message: "give --to (dried, anhydrous, solvent-free, anhydrous-solvent-free, as-is) and the content it needs, e.g. --to dried --loss '0.50 %'" });
@@ -326,71 +325,13 @@ export function replicatesPresenter(o: ReplicatesCli): RowPresenter<ReplicateRes
 
 // --- registration -----------------------------------------------------------------
 
-function withBasisOptions(cmd: Command): Command {
-  return cmd
-    .option('--loss <p>', "loss on drying: '0.50 %'")
-    .option('--water <p>', "water content (Karl Fischer): '0.32 %'")
-    .option('--solvent <p>', "residual solvent: '0.10 %'")
-    .option('--limits <range>', 'specification limits in %, checked on the reported basis: 98.0-102.0');
-}
-
 /** Registers `titration`, `standardise`, `sample-basis` and `replicates`. */
 export function registerQc(program: Command, run: CommandRunner): void {
-  withRoundingOption(
-    withBasisOptions(
-      withFormulaOptions(
-        program
-          .command('titration')
-          .description('% assay of a sample by titration (direct, with a blank, or back-titration), on the as-is or another basis, checked against limits')
-          .argument('[analytes...]', 'the analyte formula, e.g. C9H8O4; - reads one per line')
-          .option('--sample <mass>', "mass of sample: '0.5012 g'")
-          .option('--titrant <molarity>', "titrant molarity: '0.1000 M'")
-          .option('--volume <v>', "titre: '24.85 mL'")
-          .option('--blank <v>', 'blank titre: subtracted (direct); the reagent alone (with --back)')
-          .option('--ratio <a:b>', 'mol analyte : mol titrant (direct) or : mol reagent (back-titration); 1:1 assumed with a note')
-          .option('--added <amount>', "back-titration: excess reagent added, '50.00 mL of 0.5000 M'")
-          .option('--reagent-ratio <a:b>', 'back-titration: mol reagent : mol titrant; 1:1 assumed with a note')
-          .option('--back', 'back-titration against a blank (give --blank)'),
-      ),
-    ).option('--on <basis>', 'report on: as-is, dried, anhydrous, solvent-free, anhydrous-solvent-free'),
-  ).action((inputs: string[], o: TitrationCli) => run('titration', inputs, o));
-
-  withRoundingOption(
-    withFormulaOptions(
-      program
-        .command('standardise')
-        .description('molarity of a titrant from a weighed primary standard (KHC8H4O4, Na2CO3, …)')
-        .argument('[standards...]', 'the primary standard formula; - reads one per line')
-        .option('--mass <m>', "mass of standard weighed: '0.5105 g'")
-        .option('--volume <v>', "titre: '24.95 mL'")
-        .option('--blank <v>', 'blank titre, subtracted')
-        .option('--ratio <a:b>', 'mol standard : mol titrant (1:2 for Na2CO3 with HCl); 1:1 assumed with a note')
-        .option('--purity <p>', "certified assay of the standard: '99.95 %'"),
-    ),
-  ).action((inputs: string[], o: StandardiseCli) => run('standardise', inputs, o));
-
-  withRoundingOption(
-    withBasisOptions(
-      withOutputOptions(
-        program
-          .command('sample-basis')
-          .description('a result (an assay %) on another basis of the sample: as is ↔ dried, anhydrous, solvent-free; optional check against limits')
-          .argument('[results...]', "results such as '99.1 %'; - reads one per line")
-          .option('--from <basis>', 'the basis the result is on (as-is unless given)')
-          .option('--to <basis>', 'the basis wanted: dried, anhydrous, solvent-free, anhydrous-solvent-free, as-is'),
-      ),
-    ).option('--on <basis>', 'same as --to'),
-  ).action((inputs: string[], o: SampleBasisCli) => run('sample-basis', inputs, o));
-
-  withRoundingOption(
-    withOutputOptions(
-      program
-        .command('replicates')
-        .description('mean, standard deviation, RSD and Student-t confidence interval of replicate results, reported to fit the uncertainty')
-        .argument('[lists...]', "one list per argument or line: '99.2 99.5 99.1 %'; - reads one list per line")
-        .option('--level <percent>', 'confidence level: 90, 95 (default) or 99'),
-    ),
-  ).action((inputs: string[], o: ReplicatesCli) => run('replicates', inputs, o));
+  const c = declareQc(program);
+  c.titration.action((inputs: string[], o: TitrationCli) => run('titration', inputs, o));
+  c.standardise.action((inputs: string[], o: StandardiseCli) => run('standardise', inputs, o));
+  c.sampleBasis.action((inputs: string[], o: SampleBasisCli) => run('sample-basis', inputs, o));
+  c.replicates.action((inputs: string[], o: ReplicatesCli) => run('replicates', inputs, o));
 }
 
 /** Presenters of the QC commands, by name. */

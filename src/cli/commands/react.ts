@@ -6,8 +6,9 @@ import { BENCH_CAUTION } from '../../preparation/caution.js';
 import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { fail } from '../../errors/pondus-error.js';
-import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
+import { roundingOf, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
+import { declareReact } from './declarations.js';
 
 interface ReactCliOptions extends OutputOptions, RoundingOptions {
   amount?: string[];
@@ -58,20 +59,8 @@ export function reactPresenter(o: ReactCliOptions): Presenter<ReactResult> {
   };
 }
 
-const collect = (v: string, prev: string[] = []) => [...prev, v];
 
 /** Registers `pondus react`. */
 export function registerReact(program: Command, run: CommandRunner): void {
-  const cmd = withRoundingOption(withOutputOptions(
-    program
-      .command('react')
-      .description('limiting reagent, theoretical yield, excess left and percent yield of a reaction')
-      .argument('[equations...]', 'equations (coefficients as written are used when they balance; balanced here if not); - reads one per line')
-      .option('--amount <species=amount>', "an amount of a reactant: 'H2=4.00 g', 'O2=0.500 mol', 'HCl=25.0 mL of 0.100 M', 'Ac2O=2.00 mL, density=1.08 g/mL', 'Ac2O=1.5 equiv' (of the first reactant given by its own amount); purity= and solution= as in a reagent table (repeat for each)", collect)
-      .option('--actual <species=amount>', "the amount of a product obtained, for percent yield: 'H2O=30.1 g'")
-      .option('--fix <coefficients>', "when atoms alone allow more than one balance: 'written' or SPECIES=N ('C4H6O3=5')", collect)
-      .option('--catalyst <species>', "a species written on one side that is a catalyst, left out of the balance: 'H2SO4' (its amount, if given with --amount, may be in mol %)", collect)
-      .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)'),
-  ));
-  cmd.action((inputs: string[], o: ReactCliOptions) => run('react', inputs, o));
+  declareReact(program).action((inputs: string[], o: ReactCliOptions) => run('react', inputs, o));
 }

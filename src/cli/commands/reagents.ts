@@ -1,4 +1,4 @@
-import { Option, type Command } from 'commander';
+import type { Command } from 'commander';
 import { fail, PondusError } from '../../errors/pondus-error.js';
 import type { Note } from '../../errors/issue.js';
 import { readProcedure, type ProcedureRow } from '../../reagent-table/procedure.js';
@@ -8,8 +8,9 @@ import { reagentRow, solventRow, TABLE_CAUTION, tableCautions, tableContext, typ
 import { readSheetText } from '../input/sheet-file.js';
 import type { Cell } from '../output/format.js';
 import type { Presenter } from '../output/presenter.js';
-import { roundingOf, withOutputOptions, withRoundingOption, type OutputOptions, type RoundingOptions } from './common.js';
+import { roundingOf, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
+import { declareReagents } from './declarations.js';
 
 /** One line of the table as planned by the command: a reagent row or the solvent row. */
 interface PlannedRow {
@@ -173,7 +174,6 @@ export function reagentsPresenter(o: ReagentsCliOptions): Presenter<ReagentRow> 
   };
 }
 
-const collect = (v: string, prev: string[] = []) => [...prev, v];
 
 /** The rows given as options, in table order: reference, reagents, catalysts, additives, solvent, products. */
 function planFromOptions(o: ReagentsCliOptions): PlannedRow[] {
@@ -204,24 +204,7 @@ function planFromProcedure(rows: ProcedureRow[]): PlannedRow[] {
 
 /** Registers `pondus reagents`. */
 export function registerReagents(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void {
-  withRoundingOption(withOutputOptions(
-    program
-      .command('reagents')
-      .description('the reagent table of a synthesis: equivalents, mmol, mass to weigh, volume to take, solvent, theoretical and percent yield')
-      .option('--reference <reagent=amount>', "the reference (limiting) reagent and its amount: 'C7H6O3=2.00 g', 'PhBr=5.00 mmol', 'PhCHO=1.02 mL, density=1.044 g/mL'")
-      .option('--reagent <reagent=amount>', "a reagent by equivalents, mol % or its own amount, with purity=, density=, solution=, form= : 'Ac2O=3.0 equiv, density=1.08 g/mL', 'n-BuLi=1.1 equiv, solution=1.6 M in hexanes' (repeat for each)", collect)
-      .option('--catalyst <reagent=amount>', "a catalyst, shown and left out of the stoichiometry: 'Pd(PPh3)4=2 mol %' (repeat for each)", collect)
-      .option('--additive <reagent=amount>', 'an additive, shown and left out of the stoichiometry (repeat for each)', collect)
-      .option('--product <reagent>', "the product, for the theoretical yield: 'C9H8O4', or 'aspirin, formula=C9H8O4' (repeat for each)", collect)
-      .option('--equation <equation>', "the equation, for the product's coefficient per reference (1:1 when not given)")
-      .option('--concentration <c>', "target concentration of the reference in the solvent: '0.2 M' (gives the solvent volume)")
-      .option('--solvent <name>', "the solvent's name, for its row: 'THF' (with --concentration)")
-      .option('--actual <amount>', "the amount of product obtained, for the percent yield: '2.10 g'")
-      .addOption(new Option('--procedure <file>', 'a procedure file (CSV: role, reagent, formula, amount, purity, density, solution, form, actual, equation); - reads it from standard input'))
-      .option('--markdown', 'a Markdown table, for electronic notebooks')
-      .option('--abbreviations', 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS'),
-  )).action(async (o: ReagentsCliOptions) => {
-    if (o.markdown && (o.json || o.csv || o.tsv)) throw fail({ code: 'USAGE', message: 'choose one output format: --markdown, or --json, --csv, --tsv' });
+  declareReagents(program).action(async (o: ReagentsCliOptions) => {
     if (o.solvent !== undefined && o.concentration === undefined && o.procedure === undefined) throw fail({ code: 'USAGE', message: '--solvent needs --concentration (the target concentration of the reference sets the solvent volume)' });
     let plan: PlannedRow[];
     let lines: number[] | undefined;

@@ -1,6 +1,10 @@
 /**
  * Presenters by command name: a command's action names itself and passes its
  * options; the runner builds the presenter here.
+ *
+ * The types come from {@link PRESENTERS}, the table of every command. The command line itself is
+ * built in parts (one bundle per command module, so that a command loads only its own code): each
+ * part runs with a {@link PresenterTable} holding only its own presenters, typed by the same names.
  */
 import type { Presenter } from '../output/presenter.js';
 import { analysisPresenter } from './analysis.js';
@@ -18,7 +22,7 @@ import { PHARMACY_PRESENTERS } from './pharmacy.js';
 import { ionPresenter } from './ion.js';
 import { patternPresenter } from './pattern.js';
 
-export const PRESENTERS = Object.freeze({
+export const PRESENTERS = /* @__PURE__ */ Object.freeze({
   mass: massPresenter,
   composition: compositionPresenter,
   calc: calcPresenter,
@@ -44,10 +48,11 @@ export const PRESENTERS = Object.freeze({
 export type CommandName = keyof typeof PRESENTERS;
 /** The options the named command's presenter takes. */
 export type CommandOptions<K extends CommandName> = Parameters<(typeof PRESENTERS)[K]>[0];
+/** Some of the presenters, each under its own command's name (one part of the command line). */
+export type PresenterTable = { readonly [K in CommandName]?: (typeof PRESENTERS)[K] };
 
 /**
- * The presenter of the named command for its options: the one place the name is looked up, typed
- * by the name so a command cannot be run with another's options.
+ * The presenter of the named command for its options, from the table of every command.
  *
  * @example
  * presenterOf('mass', {}).columns[0] // 'input'
