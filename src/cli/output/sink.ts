@@ -1,8 +1,12 @@
 import { once } from 'node:events';
 import type { Writable } from 'node:stream';
 
-/** Text held before a write even while input keeps coming. */
+/** Bytes held before a write even while input keeps coming. */
 const BLOCK = 65536;
+/** Size of each output buffer: a batch may write more than a block before it is flushed. */
+const CAPACITY = 2 * BLOCK;
+/** Buffers kept for reuse once the stream has written them (the process's own stdout and stderr). */
+const POOL = 4;
 
 /** The sinks writing to the process's own stdout and stderr, for {@link flushSinksNow}. */
 const processSinks = new Map<Writable, Sink>();
@@ -13,23 +17,48 @@ const processSinks = new Map<Writable, Sink>();
  * anything else), what has been computed goes out, so a program that writes one line and waits
  * for its answer gets it.
  *
+ * Each write is encoded (UTF-8) into a preallocated buffer at once: a long string built from many
+ * small ones and encoded only at the end costs more to flatten than to compute, and the pieces
+ * would live on through garbage collections. A buffer is handed to the stream whole, so every
+ * chunk holds complete writes; for the process's own stdout and stderr, a buffer the stream has
+ * finished writing is used again, which keeps memory flat however long the input.
+ *
  * @example
  * const out = new Sink(process.stdout);
  * out.write('{"input":"H2O"}\n'); // written when the event loop next waits, or at flush
  */
 export class Sink {
-  private text = '';
+  private buf: Buffer | null = null;
+  private used = 0;
   private idle: ReturnType<typeof setImmediate> | null = null;
+  /** Buffers written out and free again (only for streams known not to keep a chunk after writing it). */
+  private readonly free: Buffer[] | null;
 
   constructor(private readonly stream: Writable) {
-    if (typeof process !== 'undefined' && (stream === process.stdout || stream === process.stderr)) processSinks.set(stream, this);
+    const own = typeof process !== 'undefined' && (stream === process.stdout || stream === process.stderr);
+    if (own) processSinks.set(stream, this);
+    this.free = own ? [] : null;
   }
 
   write(text: string): void {
-    this.text += text;
+    // a UTF-16 unit takes at most 3 bytes in UTF-8 (a surrogate pair, 2 units, takes 4)
+    const most = text.length * 3;
+    if (this.buf === null || this.used + most > CAPACITY) {
+      if (this.used > 0) this.push();
+      if (most > CAPACITY) {
+        this.stream.write(text);
+        return;
+      }
+      this.buf ??= this.take();
+    }
+    this.used += this.buf!.write(text, this.used);
     // setImmediate runs once the loop has no more ready work: when the next input chunk is not
     // there yet (a co-process waiting for its answer), or between chunks of a file being read
     this.idle ??= setImmediate(this.onIdle);
+  }
+
+  private take(): Buffer {
+    return this.free?.pop() ?? Buffer.allocUnsafeSlow(CAPACITY);
   }
 
   private readonly onIdle = (): void => {
@@ -43,15 +72,22 @@ export class Sink {
       clearImmediate(this.idle);
       this.idle = null;
     }
-    if (this.text.length === 0) return;
-    const text = this.text;
-    this.text = '';
-    this.stream.write(text);
+    if (this.used === 0) return;
+    const buf = this.buf!;
+    const chunk = buf.subarray(0, this.used);
+    this.buf = null;
+    this.used = 0;
+    const free = this.free;
+    if (free) {
+      this.stream.write(chunk, (e) => {
+        if (!e && free.length < POOL) free.push(buf);
+      });
+    } else this.stream.write(chunk);
   }
 
   /** Flushes when enough has accumulated (or always, with force), then waits while the stream asks. */
   async flush(force = false): Promise<void> {
-    if (this.text.length >= BLOCK || (force && this.text.length > 0)) this.push();
+    if (this.used >= BLOCK || (force && this.used > 0)) this.push();
     if (this.stream.writableNeedDrain) await once(this.stream, 'drain');
   }
 }
