@@ -32,7 +32,7 @@ export function jsonNumber(value: number, exact: string): string {
  * distinct values only fills), and the text is the same.
  *
  * @example
- * numberText(11.190674437968359) // '11.190674437968359'
+ * numberText(0.1 + 0.2) // '0.30000000000000004'
  * numberText(18) // '18'
  */
 export function numberText(value: number): string {
