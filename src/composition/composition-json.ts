@@ -4,7 +4,7 @@
  * element) or long (one row per element). The CLI prints exactly these (the shared
  * writer adds the input's line number and the notes column).
  */
-import { jsonNumber } from '../exact/json-number.js';
+import { jsonNumber, numberText } from '../exact/json-number.js';
 import { alphabeticalRank } from '../elements/atom-data.js';
 import type { Note } from '../errors/issue.js';
 import { jsonString, notesJson, notesLine, type NoteJson } from '../mass/mass-json.js';
@@ -54,12 +54,12 @@ export function compositionJsonLine(r: CompositionResult, line?: number): string
   const els = r.elements;
   for (let i = 0; i < els.length; i++) {
     const e = els[i];
-    s += `${i ? ',' : ''}{"symbol":"${e.symbol}","count":${e.count},"mass":${e.mass},"massPercent":${e.massPercent}}`;
+    s += `${i ? ',' : ''}{"symbol":"${e.symbol}","count":${numberText(e.count)},"mass":${numberText(e.mass)},"massPercent":${numberText(e.massPercent)}}`;
   }
   s += ']';
   if (r.part) {
     const p = r.part;
-    s += `,"part":{"part":${jsonString(p.part)},"formula":"${p.formula}","count":${p.count},"mass":${p.mass},"massPercent":${p.massPercent},"countedFrom":"${p.countedFrom}"}`;
+    s += `,"part":{"part":${jsonString(p.part)},"formula":"${p.formula}","count":${numberText(p.count)},"mass":${numberText(p.mass)},"massPercent":${numberText(p.massPercent)},"countedFrom":"${p.countedFrom}"}`;
   }
   return `${s},"notes":${notesLine(r.notes)}}`;
 }

@@ -39,29 +39,41 @@ export function fromScaled(n: number): Decimal {
 }
 
 const ZEROS = ['', '0', '00', '000', '0000', '00000'];
-const pad6 = (n: number): string => {
+/** Digits of a small integer (below 10^6) left-padded with zeros to `width`. */
+const padded = (n: number, width: number): string => {
   const t = '' + n;
-  return ZEROS[6 - t.length] + t;
+  return ZEROS[width - t.length] + t;
 };
 
 /**
  * Formats scaled integer units as a plain decimal string without trailing zeros, exactly.
- * Works in two six-digit halves of the fraction, which stay small integers and convert fast.
+ * Works in two six-digit halves of the fraction, which stay small integers (their text is
+ * quick to make), with the trailing zeros taken off as numbers rather than characters.
  *
  * @example
  * scaledToString(18015000000000) // '18.015'
  */
 export function scaledToString(n: number): string {
-  const abs = Math.abs(n);
+  const abs = n < 0 ? -n : n;
   const int = Math.floor(abs / 1e12);
   const frac = abs - int * 1e12; // exact: both are integers below 2^53
   const sign = n < 0 ? '-' : '';
   if (frac === 0) return sign + int;
-  const hi = Math.floor(frac / 1e6);
-  const f = pad6(hi) + pad6(frac - hi * 1e6);
-  let end = SCALE_DIGITS;
-  while (f.charCodeAt(end - 1) === 48) end--;
-  return `${sign}${int}.${end === SCALE_DIGITS ? f : f.slice(0, end)}`;
+  let hi = Math.floor(frac / 1e6);
+  let lo = frac - hi * 1e6;
+  let width = 6;
+  if (lo === 0) {
+    while (hi % 10 === 0) {
+      hi /= 10;
+      width--;
+    }
+    return sign + int + '.' + padded(hi, width);
+  }
+  while (lo % 10 === 0) {
+    lo /= 10;
+    width--;
+  }
+  return sign + int + '.' + padded(hi, 6) + padded(lo, width);
 }
 
 /**

@@ -119,9 +119,13 @@ function computeCore(tree: FormulaTree, weights: WeightTable): MassCore {
   const vector = atomVector(tree);
   const { ids, counts } = vector;
   const avg = weights === 'standard' ? ATOMS.standardScaled : ATOMS.abridgedScaled;
-  let molar: number | null = 0;
-  let mono: number | null = 0;
-  let nominal: number | null = 0;
+  const monoTable = ATOMS.monoScaled;
+  const nominalTable = ATOMS.nominal;
+  // plain numbers with flags beside them (a number-or-null variable would box every partial sum)
+  let molarSum = 0;
+  let monoSum = 0;
+  let nominalSum = 0;
+  let exact = true;
   let formula = '';
   let fractional = false;
   let notes = tree.notes.length ? tree.notes.slice() : NO_NOTES;
@@ -131,18 +135,12 @@ function computeCore(tree: FormulaTree, weights: WeightTable): MassCore {
     const d = ATOMS.data[id];
     if (typeof c === 'number') {
       formula += c === 1 ? d.label : d.label + c;
-      if (molar !== null) {
-        molar += c * avg[id];
-        if (!Number.isSafeInteger(molar)) molar = null;
-      }
-      if (mono !== null) {
-        mono += c * ATOMS.monoScaled[id];
-        if (!Number.isSafeInteger(mono)) mono = null;
-      }
-      if (nominal !== null) nominal += c * ATOMS.nominal[id];
+      molarSum += c * avg[id];
+      monoSum += c * monoTable[id];
+      nominalSum += c * nominalTable[id];
     } else {
       formula += d.label + amountText(c);
-      molar = mono = nominal = null;
+      exact = false;
       if (!c.isInteger()) fractional = true;
     }
     if (d.noStandardWeight) {
@@ -150,6 +148,10 @@ function computeCore(tree: FormulaTree, weights: WeightTable): MassCore {
       notes.push({ code: 'NO_STANDARD_WEIGHT', message: `${d.element.name} (${d.symbol}) has no standard atomic weight; the mass number of its longest-lived isotope, ${d.average.standard.text}, stands in for it` });
     }
   }
+  // a partial sum past the safe integers makes the total inexact too: the totals only grow
+  const molar = exact && Number.isSafeInteger(molarSum) ? molarSum : null;
+  const mono = exact && Number.isSafeInteger(monoSum) ? monoSum : null;
+  let nominal: number | null = exact ? nominalSum : null;
   if (tree.charge !== 0) formula += chargeText(tree.charge);
   if (nominal !== null && !Number.isSafeInteger(nominal)) nominal = null;
   if (fractional) {
@@ -250,8 +252,19 @@ function electronIn15(): bigint | null {
 }
 
 function plainResult(core: MassCore): MassResult {
-  const [molarMass, molarMassExact] = molarOf(core);
-  const [monoisotopicMass, monoisotopicMassExact] = monoOf(core);
+  let molarMass: number;
+  let molarMassExact: string;
+  let monoisotopicMass: number;
+  let monoisotopicMassExact: string;
+  // the usual case without a pair in between: exact integer sums of a neutral formula
+  if (core.molarScaled !== null) {
+    molarMass = core.molarScaled / SCALE;
+    molarMassExact = scaledToString(core.molarScaled);
+  } else [molarMass, molarMassExact] = molarOf(core);
+  if (core.monoScaled !== null && core.tree.charge === 0) {
+    monoisotopicMass = core.monoScaled / SCALE;
+    monoisotopicMassExact = scaledToString(core.monoScaled);
+  } else [monoisotopicMass, monoisotopicMassExact] = monoOf(core);
   return {
     input: core.tree.input,
     formula: core.formula,

@@ -61,4 +61,48 @@ describe('reading lines in batches', () => {
       { numRuns: 100 },
     );
   });
+
+  it('reads byte chunks cut anywhere, through multi-byte characters too, as the same lines', async () => {
+    await fc.assert(
+      fc.asyncProperty(
+        fc.array(fc.tuple(fc.string({ unit: fc.constantFrom('C', 'H', '2', '·', '₂', 'é', '𝐀', ' ') , maxLength: 12 }), fc.constantFrom('\n', '\r\n', '\r')), { maxLength: 3000 }),
+        fc.array(fc.integer({ min: 1, max: 20000 }), { maxLength: 6 }),
+        fc.boolean(),
+        async (lines, cuts, bom) => {
+          // a line that is empty after a CR would read as part of a CRLF: give each line a character
+          const rows = lines.map(([l, end]) => [l === '' ? 'x' : l, end] as const);
+          const bytes = Buffer.from((bom ? '\ufeff' : '') + rows.map(([l, end]) => l + end).join(''), 'utf8');
+          const chunks: Buffer[] = [];
+          let at = 0;
+          for (const c of cuts) {
+            chunks.push(bytes.subarray(at, at + c));
+            at += c;
+          }
+          chunks.push(bytes.subarray(at));
+          async function* source() {
+            for (const c of chunks) yield c;
+          }
+          const out: string[] = [];
+          for await (const b of readLineBatches(source())) {
+            expect(b.length).toBeLessThanOrEqual(512);
+            out.push(...b);
+          }
+          expect(out).toEqual(rows.map(([l]) => l));
+        },
+      ),
+      { numRuns: 150 },
+    );
+  });
+
+  it('decodes a byte chunk without any line end, and a last line without one', async () => {
+    const bytes = Buffer.from('C6H12O6\nH₂', 'utf8');
+    async function* source() {
+      yield bytes.subarray(0, 4);
+      yield bytes.subarray(4, bytes.length - 1); // the line end, and the subscript cut after its first two bytes
+      yield bytes.subarray(bytes.length - 1);
+    }
+    const out: string[] = [];
+    for await (const b of readLineBatches(source())) out.push(...b);
+    expect(out).toEqual(['C6H12O6', 'H₂']);
+  });
 });

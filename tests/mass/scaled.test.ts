@@ -20,4 +20,22 @@ describe('scaled integers', () => {
       { numRuns: 5000 },
     );
   });
+
+  it('print the exact decimal, without trailing zeros, for every kind of fraction', () => {
+    // fractions whose last nonzero digit falls in either six-digit half, and whole numbers, negative too
+    const n = fc.oneof(
+      fc.integer({ min: -Number.MAX_SAFE_INTEGER, max: Number.MAX_SAFE_INTEGER }),
+      fc.tuple(fc.integer({ min: 0, max: 9_000_000 }), fc.integer({ min: 0, max: 12 })).map(([a, z]) => a * 10 ** z).filter(Number.isSafeInteger),
+    );
+    fc.assert(
+      fc.property(n, (v) => {
+        expect(scaledToString(v)).toBe(new Decimal(v).div(1e12).toFixed());
+      }),
+      { numRuns: 20000 },
+    );
+    expect(scaledToString(1)).toBe('0.000000000001');
+    expect(scaledToString(1_000_000)).toBe('0.000001');
+    expect(scaledToString(100_000_000_000)).toBe('0.1');
+    expect(scaledToString(12_000_001_000_000)).toBe('12.000001');
+  });
 });
