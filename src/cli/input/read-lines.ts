@@ -1,3 +1,5 @@
+import { StringDecoder } from 'node:string_decoder';
+
 /** Most lines per batch: small batches keep few objects alive when the garbage collector runs. */
 const BATCH = 512;
 
@@ -12,86 +14,69 @@ const BATCH = 512;
  * for await (const batch of readLineBatches(process.stdin)) console.log(batch.length);
  */
 export async function* readLineBatches(stream: AsyncIterable<string | Buffer>): AsyncGenerator<string[]> {
-  let rest = '';
+  // Each piece is searched for line ends once: the pieces of a line that has not ended yet are held
+  // and joined when it ends, so a 10 MB line with no line end costs one pass, not one per piece.
+  let held: string[] = [];
+  let skipLf = false; // the last piece ended in a CR: an LF that starts the next one is its CRLF
   let first = true;
-  for await (const chunk of textPieces(stream)) {
-    let text = rest + chunk;
+  for await (let text of textPieces(stream)) {
+    if (text.length === 0) continue;
     if (first) {
       if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
       first = false;
     }
-    const hasCr = text.indexOf('\r') >= 0;
     let start = 0;
+    if (skipLf && text.charCodeAt(0) === 10) start = 1;
+    skipLf = false;
+    const hasCr = text.indexOf('\r', start) >= 0;
+    let lines: string[] = [];
     for (;;) {
-      const lines: string[] = [];
-      let nl = -1;
-      if (!hasCr) {
-        while (lines.length < BATCH && (nl = text.indexOf('\n', start)) >= 0) {
-          lines.push(text.slice(start, nl));
-          start = nl + 1;
-        }
-      } else {
-        while (lines.length < BATCH && (nl = lineEnd(text, start)) >= 0) {
-          // a CR at the end of the chunk may be the first half of a CRLF: wait for the next chunk
-          if (text.charCodeAt(nl) === 13 && nl === text.length - 1) {
-            nl = -1;
-            break;
-          }
-          lines.push(text.slice(start, nl));
-          start = text.charCodeAt(nl) === 13 && text.charCodeAt(nl + 1) === 10 ? nl + 2 : nl + 1;
-        }
-      }
-      if (lines.length > 0) yield lines;
+      const nl = hasCr ? lineEnd(text, start) : text.indexOf('\n', start);
       if (nl < 0) break;
+      let line = text.slice(start, nl);
+      if (held.length > 0) {
+        held.push(line);
+        line = held.join('');
+        held = [];
+      }
+      lines.push(line);
+      start = nl + 1;
+      if (text.charCodeAt(nl) === 13) {
+        if (start === text.length) skipLf = true;
+        else if (text.charCodeAt(start) === 10) start++;
+      }
+      if (lines.length === BATCH) {
+        yield lines;
+        lines = [];
+      }
     }
-    rest = text.slice(start);
-  }
-  if (rest.length > 0) {
-    // the held CR (a last line ending in CR), or a last line without a line end
-    const lines = rest.split(/\r\n|\r|\n/);
-    if (lines[lines.length - 1] === '') lines.pop();
     if (lines.length > 0) yield lines;
+    if (start < text.length) held.push(text.slice(start));
   }
+  // a last line without a line end
+  if (held.length > 0) yield [held.join('')];
 }
 
 /** Bytes decoded at a time: each line's text then keeps only a small piece alive, not a whole 64 kB chunk. */
 const PIECE = 8192;
 
 /**
- * The text of a stream in pieces. Byte chunks are decoded (UTF-8) a few kilobytes at a time, cut
- * just after a line end (an LF or CR byte is never part of a longer UTF-8 sequence), so that a
- * batch's lines share a small string that dies with the batch instead of a whole chunk that would
- * live through several garbage collections; bytes after the last line end wait for the next chunk.
+ * The text of a stream in pieces. Byte chunks are decoded (UTF-8) a few kilobytes at a time, so
+ * that a batch's lines share a small string that dies with the batch instead of a whole chunk that
+ * would live through several garbage collections. The decoder holds the bytes of a character cut
+ * at a piece's end until the next piece.
  */
 async function* textPieces(stream: AsyncIterable<string | Buffer>): AsyncGenerator<string> {
-  let carry: Buffer | null = null;
+  const decoder = new StringDecoder('utf8');
   for await (const chunk of stream) {
     if (typeof chunk === 'string') {
       yield chunk;
       continue;
     }
-    const buf: Buffer = carry ? Buffer.concat([carry, chunk]) : chunk;
-    carry = null;
-    let start = 0;
-    while (start < buf.length) {
-      let end = start + PIECE;
-      if (end >= buf.length) end = buf.length;
-      else end = Math.max(buf.lastIndexOf(10, end), buf.lastIndexOf(13, end)) + 1;
-      if (end <= start) {
-        // no line end in the window: the first one after it, if any
-        const lf = buf.indexOf(10, start);
-        const cr = buf.indexOf(13, start);
-        end = (lf < 0 ? cr : cr < 0 ? lf : Math.min(lf, cr)) + 1;
-        if (end <= 0) break;
-      }
-      const last = buf[end - 1];
-      if (end === buf.length && last !== 10 && last !== 13) break;
-      yield buf.toString('utf8', start, end);
-      start = end;
-    }
-    if (start < buf.length) carry = buf.subarray(start);
+    for (let at = 0; at < chunk.length; at += PIECE) yield decoder.write(chunk.subarray(at, Math.min(chunk.length, at + PIECE)));
   }
-  if (carry) yield carry.toString('utf8');
+  const last = decoder.end();
+  if (last) yield last;
 }
 
 /** Offset of the next LF or CR from `from`, or -1. */
