@@ -14,7 +14,7 @@ import { dividedBy, sigFigsOf, type Measured } from '../sigfig/measured.js';
 import { add, divide, multiply, negate, power, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
 import { readNumber } from '../sigfig/read-number.js';
 import { displayMeasured } from '../sigfig/round.js';
-import { isPercent, unitOf } from '../sigfig/units.js';
+import { isPercent, unitFactor, unitOf } from '../sigfig/units.js';
 import type { CalcTree, ExprNode } from './tree.js';
 import type { Note } from '../errors/issue.js';
 
@@ -142,7 +142,7 @@ function literal(n: Extract<ExprNode, { kind: 'number' }>, ctx: Ctx): Quantity {
     const u = readNumber(n.plusMinus, column);
     if (u.value.isNegative()) throw fail({ code: 'BAD_NUMBER', message: 'an uncertainty cannot be negative', column });
     const id = ctx.inputs.size;
-    const scale = unit ? new Decimal(10).pow(unit.exp10) : new Decimal(1);
+    const scale = unitFactor(unit);
     ctx.inputs.set(id, u.value.times(scale));
     q.grad.set(id, new Decimal(1));
   }

@@ -16,6 +16,7 @@
  * does not move its last digit: 9.96 + 0.05 = 10.01.
  */
 import { Decimal } from '../exact/decimal.js';
+import { pow10 } from './units.js';
 
 export interface Measured {
   /** The value, kept in full (guard digits included). */
@@ -86,7 +87,7 @@ export function sigFigsOf(m: Measured): number {
  */
 function roundAt(value: Decimal, lsd: number): Decimal {
   if (lsd <= 0) return value.toDecimalPlaces(-lsd, Decimal.ROUND_HALF_UP);
-  const f = new Decimal(10).pow(lsd);
+  const f = pow10(lsd);
   return value.div(f).toDecimalPlaces(0, Decimal.ROUND_HALF_UP).times(f);
 }
 
