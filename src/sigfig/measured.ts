@@ -73,6 +73,8 @@ export function sigFigsOf(m: Measured): number {
   if (m.lsd === null) return Infinity;
   if (m.sigFigs !== undefined) return m.sigFigs;
   if (m.value.isZero()) return Math.max(1, -m.lsd); // '0.00' has its decimals as precision
+  // no digit below the last significant one (a number as read): nothing to round, no carry
+  if (m.value.e - m.value.sd() + 1 >= m.lsd) return Math.max(1, m.value.e - m.lsd + 1);
   const r = roundAt(m.value, m.lsd);
   if (r.isZero()) return Math.max(1, msd(m.value) - m.lsd + 1);
   return Math.max(1, msd(r) - m.lsd + 1);
