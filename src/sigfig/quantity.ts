@@ -27,7 +27,8 @@ export function quantity(m: Measured, unit: Unit | null): Quantity {
   // a unit is a power of ten: the value and its last digit move, the significant figures stay
   const figures = m.sigFigs !== undefined && m.lsd !== null ? { sigFigs: m.sigFigs } : {};
   if (!unit) return { value: m.value, lsd: m.lsd, ...figures, dims: [0, 0, 0], unit: null, grad: new Map() };
-  return { value: m.value.times(unitFactor(unit)), lsd: m.lsd === null ? null : m.lsd + unit.exp10, ...figures, dims: unit.dims, unit, grad: new Map() };
+  const f = unitFactor(unit);
+  return { value: m.value.times(f), lsd: m.lsd === null ? null : m.lsd + unit.exp10, ...figures, dims: unit.dims, unit, grad: new Map() };
 }
 
 function mapGrad(a: Map<number, Decimal>, f: (g: Decimal) => Decimal): Map<number, Decimal> {
