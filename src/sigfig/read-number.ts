@@ -35,6 +35,19 @@ export const MIN_MAGNITUDE = new Decimal('1e-100');
  * readNumber('2.50e2').lsd   // 0   (3 significant figures)
  */
 export function readNumber(text: string, column?: number): ReadNumber {
+  const known = typeof text === 'string' ? READ.get(text) : undefined;
+  if (known !== undefined) return { ...known };
+  const r = read(text, column);
+  if (READ.size >= MAX_REMEMBERED) READ.clear();
+  READ.set(text, r);
+  return { ...r };
+}
+
+/** The texts read lately (atomic weights, the same options and values line after line); bounded, emptied when full. */
+const READ = new Map<string, ReadNumber>();
+const MAX_REMEMBERED = 1024;
+
+function read(text: string, column?: number): ReadNumber {
   if (typeof text !== 'string') throw fail({ code: 'BAD_NUMBER', message: `a number is read from its text (a string), not from a value of type ${text === null ? 'null' : typeof text}`, column });
   const t = text.trim();
   const m = NUMBER.exec(t);
