@@ -3,7 +3,7 @@
 //   calc, one expression a line (goal ≤ 5×); balance (≤ 5×); analysis without
 //   solvents (≤ 5×); prepare with the options fixed (≤ 5×); empirical, 3,000
 //   measurement sets (≤ 20×); candidates, 200 masses near 150–900 Da (no goal,
-//   one run); and the peak memory of mass --json at 10⁵, 10⁶ and 10⁷ lines with
+//   one run; the first 50 with --quick); and the peak memory of mass --json at 10⁵, 10⁶ and 10⁷ lines with
 //   no heap cap (10⁷ only without --quick).
 // Inputs come from bench/generate-quantities.mjs and are written once into bench/.data.
 //   node bench/quantity-rows.mjs [--quick]    (build first: npm run build)
@@ -77,11 +77,12 @@ export async function quantityRows({ quick = false } = {}) {
     const n = Number(/-(\d+)\.txt$/.exec(file)[1]).toLocaleString('en-US');
     out.push(`          ${label.padEnd(30)} ${f1(median(times[j])).padStart(8)} ms for ${n} lines (bare loop ${f1(b)} ms)   ${(median(times[j]) / b).toFixed(2)}× (goal ≤ ${goal}×)`);
   });
-  // candidates: one run (each search is a fraction of a second; 200 of them take a while)
-  const masses = await dataFile('masses', 200, (n) => generateMasses(n, lib));
+  // candidates: one run (each search is a fraction of a second; 200 of them take a while), the first 50 with --quick
+  const nMasses = quick ? 50 : 200;
+  const masses = await dataFile('masses', nMasses, (n) => generateMasses(n, lib));
   const cb = (await timeBatch([bareLoop], masses)).ms;
   const c = await timeBatch([bin, 'candidates', '--json', '-'], masses);
-  out.push(`          ${'candidates, 200 masses'.padEnd(30)} ${f1(c.ms).padStart(8)} ms (${f1(c.ms / 200)} ms a mass; bare loop ${f1(cb)} ms)   ${(c.ms / cb).toFixed(1)}× (no goal)`);
+  out.push(`          ${`candidates, ${nMasses} masses`.padEnd(30)} ${f1(c.ms).padStart(8)} ms (${f1(c.ms / nMasses)} ms a mass; bare loop ${f1(cb)} ms)   ${(c.ms / cb).toFixed(1)}× (no goal)`);
   // peak memory of mass --json, no heap cap
   const sizes = quick ? [100_000, 1_000_000] : [100_000, 1_000_000, 10_000_000];
   const peaks = [];
