@@ -193,8 +193,10 @@ function readFormulaMass(formula: string, uncertain: boolean): FormulaMassRead {
     const reported = reportedMolarMass(r);
     const u = uncertain ? molarMassUncertainty(r) : null;
     read = { reported, notes: r.notes.map((note) => ({ code: note.code, message: note.message })), uncertainty: u && { value: u.value, standardUncertainty: u.standardUncertainty } };
-    if (FORMULA_MASSES.size >= MAX_FORMULAS_REMEMBERED) FORMULA_MASSES.clear();
-    FORMULA_MASSES.set(key, read);
+    if (key.length <= 200) {
+      if (FORMULA_MASSES.size >= MAX_FORMULAS_REMEMBERED) FORMULA_MASSES.clear();
+      FORMULA_MASSES.set(key, read);
+    }
   }
   return read;
 }

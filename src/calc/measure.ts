@@ -27,8 +27,10 @@ export function measure(text: string, what = 'the quantity', notes?: Note[]): Qu
       if (e instanceof PondusError) throw new PondusError(e.issues.map((i) => ({ ...i, message: `${what}: ${i.message}` })), text);
       throw e;
     }
-    if (READ.size >= MAX_REMEMBERED) READ.clear();
-    READ.set(text, read);
+    if (text.length <= 200) {
+      if (READ.size >= MAX_REMEMBERED) READ.clear();
+      READ.set(text, read);
+    }
   }
   for (const n of read.notes) notes?.push({ code: 'MEASUREMENT', message: `${what}: ${n.message}` });
   // a copy: callers may set the unit to show, or add sensitivities
@@ -38,7 +40,7 @@ export function measure(text: string, what = 'the quantity', notes?: Note[]): Qu
 /**
  * The texts read lately, with what they read as: a batch reads the same option
  * ('0.100 M', '250.0 mL') for every line, and reading a text depends on nothing
- * else. Bounded: emptied when full.
+ * else. Bounded: short texts only, emptied when full.
  */
 const READ = new Map<string, { result: Quantity; notes: Note[] }>();
 const MAX_REMEMBERED = 256;

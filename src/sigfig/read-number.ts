@@ -38,12 +38,13 @@ export function readNumber(text: string, column?: number): ReadNumber {
   const known = typeof text === 'string' ? READ.get(text) : undefined;
   if (known !== undefined) return { ...known };
   const r = read(text, column);
+  if (text.length > 64) return r;
   if (READ.size >= MAX_REMEMBERED) READ.clear();
   READ.set(text, r);
   return { ...r };
 }
 
-/** The texts read lately (atomic weights, the same options and values line after line); bounded, emptied when full. */
+/** The short texts read lately (atomic weights, the same options and values line after line); bounded, emptied when full. */
 const READ = new Map<string, ReadNumber>();
 const MAX_REMEMBERED = 1024;
 
