@@ -11,11 +11,16 @@
 //              spaces; ≤ 2×), the default tables of mass (≤ 3×) and
 //              composition (≤ 4×)
 //   memory:    peak for 30,000 and 300,000 lines (flat is the goal)
+//   quantity:  calc, balance, analysis, prepare, empirical and candidates
+//              batches against the bare loop, and the peak memory of mass --json
+//              up to 10⁷ lines (bench/quantity-rows.mjs)
 //   `--quick` runs fewer repetitions and start-up for a few commands only.
-import { spawn, spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, openSync, closeSync, readFileSync, writeFileSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
+import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { generateFormulas, generateMixedFormulas } from './generate-formulas.mjs';
+import { quantityRows } from './quantity-rows.mjs';
+import { median, timeBatch } from './time-batch.mjs';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
 const bin = `${root}bin/pondus.cjs`;
@@ -24,7 +29,6 @@ if (!existsSync(`${root}dist/cli.cjs`)) {
   process.exit(2);
 }
 const quick = process.argv.includes('--quick');
-const median = (a) => [...a].sort((x, y) => x - y)[a.length >> 1];
 const ms = (t0) => Number(process.hrtime.bigint() - t0) / 1e6;
 
 // --- start-up --------------------------------------------------------------
@@ -64,31 +68,6 @@ function dataFile(name, n, gen) {
   const f = `${dataDir}/${name}-${n}.txt`;
   if (!existsSync(f)) writeFileSync(f, [...gen(n)].join('\n') + '\n');
   return f;
-}
-
-/** Runs a command with a file on standard input; returns wall time and peak memory (from /proc, sampled). */
-function timeBatch(args, file) {
-  return new Promise((resolve, reject) => {
-    const fd = openSync(file, 'r');
-    const t0 = process.hrtime.bigint();
-    const child = spawn(process.execPath, args, { stdio: [fd, 'ignore', 'ignore'] });
-    let peak = 0;
-    const sample = () => {
-      try {
-        const m = /VmHWM:\s+(\d+)/.exec(readFileSync(`/proc/${child.pid}/status`, 'utf8'));
-        if (m) peak = Math.max(peak, Number(m[1]));
-      } catch {
-        /* the process has ended */
-      }
-    };
-    const timer = setInterval(sample, 20);
-    child.on('exit', (code) => {
-      clearInterval(timer);
-      closeSync(fd);
-      if (code !== 0 && code !== 1) reject(new Error(`${args.join(' ')} exited ${code}`));
-      else resolve({ ms: ms(t0), peakMB: peak / 1024 });
-    });
-  });
 }
 
 const plain300 = dataFile('formulas', 300_000, generateFormulas);
@@ -161,3 +140,4 @@ for (const r of await candidatesGrowth({ quick })) {
   console.log(`          ${r.label.padEnd(22)} ${f(r.ms).padStart(6)} ms   ${r.outcome}`);
 }
 console.log(`memory    peak ${peakSmall ? f(peakSmall) : 'n/a'} MB for 30,000 lines, ${peakBig ? f(peakBig) : 'n/a'} MB for 300,000 lines (mass --json)`);
+for (const line of await quantityRows({ quick })) console.log(line);

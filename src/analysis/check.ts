@@ -228,8 +228,11 @@ function commonPartnerShares(options: MassOptions): Map<string, { share: Decimal
 function impossibleNotes(base: MassDetail, partners: Partner[], partnerMasses: MassDetail[], symbols: string[], found: Map<string, Decimal>, tolerance: Decimal, options: MassOptions): Note[] {
   const notes: Note[] = [];
   for (const s of symbols) {
-    const own = exactMass(base, s).div(base.molarMass).times(100);
     const v = found.get(s)!;
+    const ownMass = exactMass(base, s);
+    // well within the tolerance in floating point: no exact quotient needed
+    if (v.toNumber() - (ownMass.toNumber() / base.molarMass.toNumber()) * 100 - tolerance.toNumber() < -1e-9) continue;
+    const own = ownMass.div(base.molarMass).times(100);
     if (v.minus(own).lte(tolerance)) continue;
     let most = { percent: own, what: base.formula };
     partnerMasses.forEach((m, j) => {
@@ -302,7 +305,7 @@ function evaluateFit(baseWritten: string, base: MassDetail, used: Used[], symbol
   const deviation = new Map<string, Decimal>();
   let maxDeviation = new Decimal(0);
   for (const s of symbols) {
-    const c = elementMass.get(s)!.div(total).times(100).toDecimalPlaces(2, rounding === 'half-up' ? Decimal.ROUND_HALF_UP : Decimal.ROUND_HALF_EVEN);
+    const c = percentTo2(elementMass.get(s)!, total, rounding);
     calculated.set(s, c);
     const d = found.get(s)!.minus(c);
     deviation.set(s, d);
@@ -323,6 +326,20 @@ function evaluateFit(baseWritten: string, base: MassDetail, used: Used[], symbol
 }
 
 /** Mass of one element in a formula unit, g/mol, exactly. */
+/**
+ * 100·part/whole rounded to 2 decimals. Floating point settles it unless the
+ * value is within 10⁻⁶ of a half-way point between two 2-decimal values;
+ * only then is the exact Decimal quotient needed.
+ */
+function percentTo2(part: Decimal, whole: Decimal, rounding: RoundingMode): Decimal {
+  const x = (part.toNumber() / whole.toNumber()) * 10_000;
+  if (Number.isFinite(x) && x >= 0 && x < 1e12 && Math.abs(x - Math.floor(x) - 0.5) > 1e-6) {
+    const k = Math.round(x);
+    return new Decimal(`${Math.floor(k / 100)}.${String(k % 100).padStart(2, '0')}`);
+  }
+  return part.div(whole).times(100).toDecimalPlaces(2, rounding === 'half-up' ? Decimal.ROUND_HALF_UP : Decimal.ROUND_HALF_EVEN);
+}
+
 function exactMass(m: MassDetail, symbol: string): Decimal {
   return m.contributions.filter((c) => c.symbol === symbol).reduce((s, c) => s.plus(c.mass), new Decimal(0));
 }

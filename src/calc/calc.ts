@@ -12,6 +12,7 @@ import type { RoundingMode } from '../sigfig/round.js';
 import type { Note } from '../errors/issue.js';
 import { evaluate, type CalcStep } from './evaluate.js';
 import { parseExpression } from './parse-expression.js';
+import { pow10, unitFactor } from '../sigfig/units.js';
 
 export interface CalcOptions {
   /** Rounding for the reported figure: half-to-even (default; ASTM E29, ISO 80000-1 Annex B rule A) or half-up. */
@@ -59,7 +60,7 @@ export function calc(input: string, options: CalcOptions = {}): CalcResult {
   }
   const unit = reportUnit(q, tree.target ? tree.target.unit : null);
   const shown = displayQuantity(q, unit, options.rounding);
-  const scale = new Decimal(10).pow(unit ? unit.exp10 : 0);
+  const scale = unitFactor(unit);
   const uncertainty = ev.inputs.size > 0 ? standardUncertainty(q, ev.inputs).div(scale) : null;
   const value = shown.value;
   const unitText = shown.unit;
@@ -89,7 +90,7 @@ export function calc(input: string, options: CalcOptions = {}): CalcResult {
  */
 export function belowPrecisionNote(value: Decimal, lsd: number, unit: string, what = 'the result'): string {
   const u = unit ? ` ${unit}` : '';
-  return `${what} (${value.toFixed()}${u} unrounded) is below the precision of the data (its last significant digit is at ${new Decimal(10).pow(lsd).toFixed()}${u}): it rounds to zero and has no significant figures`;
+  return `${what} (${value.toFixed()}${u} unrounded) is below the precision of the data (its last significant digit is at ${pow10(lsd).toFixed()}${u}): it rounds to zero and has no significant figures`;
 }
 
 /**

@@ -14,7 +14,7 @@ import { dividedBy, sigFigsOf, type Measured } from '../sigfig/measured.js';
 import { add, divide, multiply, negate, power, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
 import { readNumber } from '../sigfig/read-number.js';
 import { displayMeasured } from '../sigfig/round.js';
-import { isPercent, unitOf } from '../sigfig/units.js';
+import { isPercent, unitFactor, unitOf } from '../sigfig/units.js';
 import type { CalcTree, ExprNode } from './tree.js';
 import type { Note } from '../errors/issue.js';
 
@@ -142,7 +142,7 @@ function literal(n: Extract<ExprNode, { kind: 'number' }>, ctx: Ctx): Quantity {
     const u = readNumber(n.plusMinus, column);
     if (u.value.isNegative()) throw fail({ code: 'BAD_NUMBER', message: 'an uncertainty cannot be negative', column });
     const id = ctx.inputs.size;
-    const scale = unit ? new Decimal(10).pow(unit.exp10) : new Decimal(1);
+    const scale = unitFactor(unit);
     ctx.inputs.set(id, u.value.times(scale));
     q.grad.set(id, new Decimal(1));
   }
@@ -174,10 +174,39 @@ function ratio(n: Extract<ExprNode, { kind: 'ratio' }>, ctx: Ctx): Quantity {
   return q;
 }
 
+/** What M(formula) reads as: the molar mass with its tabulated precision, its notes, and (when asked for) its standard uncertainty. */
+interface FormulaMassRead {
+  reported: Measured;
+  notes: Note[];
+  uncertainty: { value: Decimal; standardUncertainty: Decimal } | null;
+}
+
+/** The formulas read lately (a batch names the same reagents again and again); bounded, emptied when full. */
+const FORMULA_MASSES = new Map<string, FormulaMassRead>();
+const MAX_FORMULAS_REMEMBERED = 512;
+
+function readFormulaMass(formula: string, uncertain: boolean): FormulaMassRead {
+  const key = uncertain ? `±${formula}` : formula;
+  let read = FORMULA_MASSES.get(key);
+  if (read === undefined) {
+    const r = formulaMassDetail(formula);
+    const reported = reportedMolarMass(r);
+    const u = uncertain ? molarMassUncertainty(r) : null;
+    read = { reported, notes: r.notes.map((note) => ({ code: note.code, message: note.message })), uncertainty: u && { value: u.value, standardUncertainty: u.standardUncertainty } };
+    if (key.length <= 200) {
+      if (FORMULA_MASSES.size >= MAX_FORMULAS_REMEMBERED) FORMULA_MASSES.clear();
+      FORMULA_MASSES.set(key, read);
+    }
+  }
+  return read;
+}
+
+const G_PER_MOL = unitOf('g/mol');
+
 function formulaMassQuantity(n: Extract<ExprNode, { kind: 'formulaMass' }>, ctx: Ctx): Quantity {
   let r;
   try {
-    r = formulaMassDetail(n.formula);
+    r = readFormulaMass(n.formula, ctx.uncertain);
   } catch (e) {
     if (e instanceof PondusError) {
       // point the caret into the expression: the formula starts 2 characters after M(
@@ -186,15 +215,13 @@ function formulaMassQuantity(n: Extract<ExprNode, { kind: 'formulaMass' }>, ctx:
     }
     throw e;
   }
-  const unit = unitOf('g/mol');
   for (const note of r.notes) ctx.notes.push({ code: note.code, message: note.message });
-  if (ctx.uncertain) {
-    const u = molarMassUncertainty(r);
+  if (r.uncertainty) {
     const id = 1_000_000 + ctx.inputs.size;
-    ctx.inputs.set(id, u.standardUncertainty);
-    const q = quantity({ value: u.value, lsd: reportedMolarMass(r).lsd }, unit);
+    ctx.inputs.set(id, r.uncertainty.standardUncertainty);
+    const q = quantity({ value: r.uncertainty.value, lsd: r.reported.lsd }, G_PER_MOL);
     q.grad.set(id, new Decimal(1));
     return q;
   }
-  return quantity(reportedMolarMass(r), unit);
+  return quantity(r.reported, G_PER_MOL);
 }

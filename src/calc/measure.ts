@@ -17,16 +17,33 @@ import { parseExpression } from './parse-expression.js';
  * measure('25.0 mL of 0.100 M').value.toString() // '0.0025' (mol)
  */
 export function measure(text: string, what = 'the quantity', notes?: Note[]): Quantity {
-  const expr = text.replace(/\s+of\s+/g, ' * ');
-  try {
-    const ev = evaluate(parseExpression(expr));
-    for (const n of ev.notes) notes?.push({ code: 'MEASUREMENT', message: `${what}: ${n.message}` });
-    return ev.result;
-  } catch (e) {
-    if (e instanceof PondusError) throw new PondusError(e.issues.map((i) => ({ ...i, message: `${what}: ${i.message}` })), text);
-    throw e;
+  let read = READ.get(text);
+  if (read === undefined) {
+    const expr = text.replace(/\s+of\s+/g, ' * ');
+    try {
+      const ev = evaluate(parseExpression(expr));
+      read = { result: ev.result, notes: ev.notes };
+    } catch (e) {
+      if (e instanceof PondusError) throw new PondusError(e.issues.map((i) => ({ ...i, message: `${what}: ${i.message}` })), text);
+      throw e;
+    }
+    if (text.length <= 200) {
+      if (READ.size >= MAX_REMEMBERED) READ.clear();
+      READ.set(text, read);
+    }
   }
+  for (const n of read.notes) notes?.push({ code: 'MEASUREMENT', message: `${what}: ${n.message}` });
+  // a copy: callers may set the unit to show, or add sensitivities
+  return { ...read.result, grad: new Map(read.result.grad) };
 }
+
+/**
+ * The texts read lately, with what they read as: a batch reads the same option
+ * ('0.100 M', '250.0 mL') for every line, and reading a text depends on nothing
+ * else. Bounded: short texts only, emptied when full.
+ */
+const READ = new Map<string, { result: Quantity; notes: Note[] }>();
+const MAX_REMEMBERED = 256;
 
 /**
  * Evaluates a quantity that must have one of the given dimensions.
@@ -69,9 +86,5 @@ export function readQuantity(text: string, dims: Dims[], what: string): ReadQuan
   return { quantity, notes };
 }
 
-export const MASS: Dims = [1, 0, 0];
-export const AMOUNT: Dims = [0, 1, 0];
-export const VOLUME: Dims = [0, 0, 1];
-export const MOLARITY: Dims = [0, 1, -1];
-export const MASS_CONCENTRATION: Dims = [1, 0, -1];
-export const PURE: Dims = [0, 0, 0];
+// the dimensions are the unit vocabulary's (sigfig/units.ts), re-exported for the readers of amounts
+export { AMOUNT, MASS, MASS_CONCENTRATION, MOLAR_MASS, MOLARITY, PURE, VOLUME } from '../sigfig/units.js';

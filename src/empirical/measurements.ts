@@ -18,7 +18,7 @@ import { isElementSymbol } from '../elements/element-table.js';
 import { readKeyValues } from '../key-values/read-key-values.js';
 import { formulaMassDetail } from '../mass/formula-mass.js';
 import { readNumber } from '../sigfig/read-number.js';
-import { unitOf } from '../sigfig/units.js';
+import { MASS, pow10, sameDims, unitFactor, unitOf } from '../sigfig/units.js';
 
 export interface ElementMeasurement {
   symbol: string;
@@ -119,10 +119,9 @@ function readSet(text: string): Measurements {
       if (!m) throw fail({ code: 'BAD_MEASUREMENT', message: `the sample mass needs a unit: sample=${raw} g`, column }, text);
       const n = readNumber(m[1], valueColumn);
       const u = unitOf(m[2], valueColumn);
-      if (u.dims[0] !== 1 || u.dims[1] !== 0 || u.dims[2] !== 0) throw fail({ code: 'BAD_MEASUREMENT', message: 'the sample must be a mass', column: valueColumn }, text);
-      const f = new Decimal(10).pow(u.exp10);
-      sample = n.value.times(f);
-      sampleHalfUnit = new Decimal(10).pow(n.lsd! + u.exp10).div(2);
+      if (!sameDims(u.dims, MASS)) throw fail({ code: 'BAD_MEASUREMENT', message: 'the sample must be a mass', column: valueColumn }, text);
+      sample = n.value.times(unitFactor(u));
+      sampleHalfUnit = pow10(n.lsd! + u.exp10).div(2);
       if (sample.lte(0)) throw fail({ code: 'BAD_MEASUREMENT', message: 'the sample mass must be positive', column: valueColumn }, text);
       continue;
     }
@@ -139,16 +138,15 @@ function readSet(text: string): Measurements {
     const n = readNumber(m[1], valueColumn);
     const unit = m[2] && m[2] !== '%' ? unitOf(m[2], valueColumn) : null;
     const thisKind = unit ? 'mass' : 'percent';
-    if (unit && (unit.dims[0] !== 1 || unit.dims[1] !== 0 || unit.dims[2] !== 0)) throw fail({ code: 'BAD_MEASUREMENT', message: `${key}: give a mass (g, mg) or a percent, not ${m[2]}`, column: valueColumn }, text);
+    if (unit && !sameDims(unit.dims, MASS)) throw fail({ code: 'BAD_MEASUREMENT', message: `${key}: give a mass (g, mg) or a percent, not ${m[2]}`, column: valueColumn }, text);
     if (kind && kind !== thisKind) throw fail({ code: 'BAD_MEASUREMENT', message: 'give all values as percents or all as masses, not a mix', column: valueColumn }, text);
     kind = thisKind;
-    const f = unit ? new Decimal(10).pow(unit.exp10) : new Decimal(1);
-    const value = n.value.times(f);
+    const value = n.value.times(unitFactor(unit));
     if (value.isNegative()) throw fail({ code: 'BAD_MEASUREMENT', message: `${key} is negative`, column: valueColumn }, text);
     if (thisKind === 'percent' && value.gt(100)) throw fail({ code: 'BAD_MEASUREMENT', message: `${key} is over 100 %`, column: valueColumn }, text);
     // a bare integer like 40 is read as known to the unit (it is a measurement here, not a count)
     const lsd = n.lsd! + (unit ? unit.exp10 : 0);
-    const halfUnit = new Decimal(10).pow(lsd).div(2);
+    const halfUnit = pow10(lsd).div(2);
     sum = sum.plus(value);
     slack = slack.plus(halfUnit);
     if (Array.isArray(read)) {

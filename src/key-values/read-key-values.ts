@@ -139,3 +139,34 @@ export function splitTrailingValues(line: string): [string, string] | null {
   const m = /^(.*?)[\s;,]+((?:[A-Z][a-z]?\s*[=:]\s*[-+]?[0-9.]+\s*%?[\s,;]*)+)$/.exec(line.trim());
   return m ? [m[1].trim(), m[2].trim()] : null;
 }
+
+/** One KEY=VALUE pair split at its first `=`, as written and trimmed. */
+export interface KeyValuePair extends KeyValue {
+  /** The text before the `=`, untrimmed ('' when the text starts with `=`). */
+  keyText: string;
+  /** The text after the `=`, untrimmed. */
+  valueText: string;
+}
+
+/**
+ * Splits one KEY=VALUE pair — an option such as `--replace 'CuSO4=10.00 g'`,
+ * `--amount 'HCl=25.0 mL of 0.100 M'`, a reagent row, one salt of a solution —
+ * at its first `=`: the key may hold spaces and the value anything after the
+ * `=`, and each keeps its column. Null when there is no `=`. Callers refuse
+ * an empty key (`keyText === ''`) with their own message.
+ *
+ * @example
+ * readKeyValuePair('CuSO4=10.00 g')?.value // '10.00 g'
+ * readKeyValuePair(' n-BuLi = 1.1 equiv')?.key // 'n-BuLi'
+ * readKeyValuePair(' n-BuLi = 1.1 equiv')?.valueColumn // 11
+ * readKeyValuePair('NaCl') // null
+ */
+export function readKeyValuePair(text: string): KeyValuePair | null {
+  const eq = text.indexOf('=');
+  if (eq < 0) return null;
+  const keyText = text.slice(0, eq);
+  const valueText = text.slice(eq + 1);
+  const keyLead = keyText.length - keyText.trimStart().length;
+  const valueLead = valueText.length - valueText.trimStart().length;
+  return { key: keyText.trim(), value: valueText.trim(), column: keyLead + 1, valueColumn: eq + 2 + valueLead, keyText, valueText };
+}

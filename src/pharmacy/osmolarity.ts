@@ -9,6 +9,7 @@
  */
 import type { Note } from '../errors/issue.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
+import { readKeyValuePair } from '../key-values/read-key-values.js';
 import { Decimal } from '../exact/decimal.js';
 import type { MassOptions } from '../mass/formula-mass.js';
 import { add, type Quantity } from '../sigfig/quantity.js';
@@ -64,10 +65,10 @@ export function osmolarity(text: string, o: OsmolarityOptions = {}): OsmolarityR
   const notes: Note[] = [];
   const components: OsmolarityComponent[] = [];
   for (const piece of pieces) {
-    const eq = piece.indexOf('=');
-    if (eq <= 0) throw fail({ code: 'BAD_RECORD', message: `each salt is written SALT=STRENGTH, e.g. 'NaCl=0.9 %'; got '${piece}'`, column: text.indexOf(piece) + 1 }, text);
-    const salt = piece.slice(0, eq).trim();
-    const strength = piece.slice(eq + 1).trim();
+    const pair = readKeyValuePair(piece);
+    if (!pair || pair.keyText === '') throw fail({ code: 'BAD_RECORD', message: `each salt is written SALT=STRENGTH, e.g. 'NaCl=0.9 %'; got '${piece}'`, column: text.indexOf(piece) + 1 }, text);
+    const salt = pair.key;
+    const strength = pair.value;
     let result: MilliequivalentResult;
     try {
       result = milliequivalents(salt, { ...o, concentration: strength, measured: o.measured });

@@ -74,7 +74,7 @@ function matrixOf(eq: Equation): Rational[][] {
   const rows = keys.map((k) =>
     all.map((s) => {
       const n = s.atoms.get(k);
-      const r = n === undefined ? Rational.ZERO : Rational.fromDecimal(amountText(n));
+      const r = n === undefined ? Rational.ZERO : typeof n === 'number' && Number.isSafeInteger(n) ? Rational.of(BigInt(n), 1n) : Rational.fromDecimal(amountText(n));
       return s.side === 'reactant' ? r : r.neg();
     }),
   );

@@ -5,6 +5,8 @@ import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
 import { gcd as gcdOf } from '../exact/gcd.js';
 
+const WHOLE = /^[+-]?[0-9]{1,15}$/;
+
 export class Rational {
   readonly num: bigint;
   readonly den: bigint;
@@ -42,6 +44,8 @@ export class Rational {
    */
   static fromDecimal(text: string): Rational {
     if (typeof text !== 'string' && typeof text !== 'number') throw fail({ code: 'BAD_NUMBER', message: `a decimal number must be given as text (got ${text === null ? 'null' : typeof text})` });
+    // a whole number of up to 15 digits needs no Decimal
+    if (typeof text === 'string' && WHOLE.test(text)) return new Rational(BigInt(text), 1n);
     let d: Decimal;
     try {
       d = new Decimal(text);

@@ -21,6 +21,7 @@ import { tableAmount, type TableAmount } from '../reagent-table/table.js';
 import { balanceParsed, type BalanceOptions, type BalanceResult } from './balance.js';
 import { parseEquation, type Species } from './equation.js';
 import type { Rational } from './rational.js';
+import { readKeyValuePair } from '../key-values/read-key-values.js';
 
 export interface ReactOptions extends BalanceOptions {
   /**
@@ -88,9 +89,9 @@ function safeHill(text: string): string | null {
 }
 
 function splitAmount(text: string): [string, string] {
-  const eq = text.indexOf('=');
-  if (eq <= 0) throw fail({ code: 'BAD_AMOUNT', message: `'${text}' is not SPECIES=AMOUNT (e.g. H2=4.00 g, HCl=25.0 mL of 0.100 M)` }, text);
-  return [text.slice(0, eq), text.slice(eq + 1)];
+  const pair = readKeyValuePair(text);
+  if (!pair || pair.keyText === '') throw fail({ code: 'BAD_AMOUNT', message: `'${text}' is not SPECIES=AMOUNT (e.g. H2=4.00 g, HCl=25.0 mL of 0.100 M)` }, text);
+  return [pair.keyText, pair.valueText];
 }
 
 function ratioQuantity(r: Rational): Quantity {

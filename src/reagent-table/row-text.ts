@@ -11,7 +11,7 @@
  * A product is written without an amount: `C9H8O4`, `4-butylanisole, formula=C11H16O`.
  */
 import { fail, PondusError } from '../errors/pondus-error.js';
-import { readKeyValues } from '../key-values/read-key-values.js';
+import { readKeyValuePair, readKeyValues } from '../key-values/read-key-values.js';
 import type { ReagentRole, ReagentSpec } from './table.js';
 
 const KEYS: Readonly<Record<string, 'purity' | 'density' | 'solution' | 'form' | 'formula'>> = Object.freeze({
@@ -36,7 +36,8 @@ export function readRowText(text: string, role: ReagentRole): ReagentSpec {
   const t = text.trim();
   if (t === '') throw fail({ code: 'BAD_RECORD', message: 'an empty reagent row' }, text);
   if (t.length > 2000) throw fail({ code: 'INPUT_TOO_LONG', message: `a reagent row of ${t.length} characters; the limit is 2,000` }, text.slice(0, 80));
-  const eq = t.indexOf('=');
+  const pair = readKeyValuePair(t);
+  const eq = pair ? pair.keyText.length : -1;
   const comma = t.search(/[,;]/);
   if (role === 'product' && (eq < 0 || (comma >= 0 && comma < eq))) {
     // a product takes no amount: 'C9H8O4', or 'aspirin, formula=C9H8O4'
@@ -46,9 +47,9 @@ export function readRowText(text: string, role: ReagentRole): ReagentSpec {
   if (eq < 0) {
     throw fail({ code: 'BAD_RECORD', message: `'${t}' has no amount: write REAGENT=AMOUNT (e.g. 'Ac2O=1.5 equiv, density=1.08 g/mL')` }, text);
   }
-  const reagent = t.slice(0, eq).trim();
+  const reagent = pair!.key;
   if (reagent === '') throw fail({ code: 'BAD_RECORD', message: 'a row starts with = : write REAGENT=AMOUNT', column: 1 }, text);
-  const rest = t.slice(eq + 1);
+  const rest = pair!.valueText;
   const cut = rest.search(/[,;]/);
   const amount = (cut >= 0 ? rest.slice(0, cut) : rest).trim();
   const spec: ReagentSpec = { role, reagent, amount, text };

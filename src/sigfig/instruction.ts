@@ -13,7 +13,7 @@ import { msd, sigFigsOf } from './measured.js';
 import type { Quantity } from './quantity.js';
 import { displayQuantity, reportUnit, type QuantityDisplay } from './display-quantity.js';
 import { displayMeasured, roundToSigFigs, type RoundingMode } from './round.js';
-import { baseUnitText, sameDims, unitOf, type Unit } from './units.js';
+import { baseUnitText, sameDims, unitFactor, unitOf, type Unit } from './units.js';
 
 /** Significant figures an instruction is shown to, at the least. */
 export const WORKING_FIGURES = 4;
@@ -111,7 +111,7 @@ function show(value: Decimal, n: number | null, unit: Unit | null, q: Quantity, 
 
 function inUnit(q: Quantity, wanted?: string | Unit | null): { unit: Unit | null; value: Decimal } {
   const unit = reportUnit(q, wanted);
-  return { unit, value: q.value.div(new Decimal(10).pow(unit ? unit.exp10 : 0)) };
+  return { unit, value: q.value.div(unitFactor(unit)) };
 }
 
 /**
@@ -157,7 +157,7 @@ export function massUnitFor(q: Quantity): string {
  */
 export function volumeUnitFor(q: Quantity, preferred: Unit | null): string {
   const u = preferred && sameDims(preferred.dims, q.dims) ? preferred : unitOf('L');
-  const inU = q.value.div(new Decimal(10).pow(u.exp10));
+  const inU = q.value.div(unitFactor(u));
   if (inU.abs().gte(1) || q.value.isZero()) return u.symbol;
   if (u.symbol === 'L') return inU.abs().gte('0.001') ? 'mL' : 'µL';
   if (u.symbol === 'mL') return 'µL';

@@ -16,6 +16,7 @@
  * does not move its last digit: 9.96 + 0.05 = 10.01.
  */
 import { Decimal } from '../exact/decimal.js';
+import { pow10 } from './units.js';
 
 export interface Measured {
   /** The value, kept in full (guard digits included). */
@@ -72,6 +73,8 @@ export function sigFigsOf(m: Measured): number {
   if (m.lsd === null) return Infinity;
   if (m.sigFigs !== undefined) return m.sigFigs;
   if (m.value.isZero()) return Math.max(1, -m.lsd); // '0.00' has its decimals as precision
+  // no digit below the last significant one (a number as read): nothing to round, no carry
+  if (m.value.e - m.value.sd() + 1 >= m.lsd) return Math.max(1, m.value.e - m.lsd + 1);
   const r = roundAt(m.value, m.lsd);
   if (r.isZero()) return Math.max(1, msd(m.value) - m.lsd + 1);
   return Math.max(1, msd(r) - m.lsd + 1);
@@ -86,7 +89,7 @@ export function sigFigsOf(m: Measured): number {
  */
 function roundAt(value: Decimal, lsd: number): Decimal {
   if (lsd <= 0) return value.toDecimalPlaces(-lsd, Decimal.ROUND_HALF_UP);
-  const f = new Decimal(10).pow(lsd);
+  const f = pow10(lsd);
   return value.div(f).toDecimalPlaces(0, Decimal.ROUND_HALF_UP).times(f);
 }
 

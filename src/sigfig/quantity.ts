@@ -7,7 +7,7 @@
 import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
 import { dividedBy, minus as minusM, plus as plusM, sigFigsOf, times as timesM, withSigFigs, type Measured } from './measured.js';
-import { baseUnitText, dimsName, sameDims, type Dims, type Unit } from './units.js';
+import { baseUnitText, dimsName, sameDims, unitFactor, type Dims, type Unit } from './units.js';
 
 export interface Quantity extends Measured {
   dims: Dims;
@@ -27,7 +27,7 @@ export function quantity(m: Measured, unit: Unit | null): Quantity {
   // a unit is a power of ten: the value and its last digit move, the significant figures stay
   const figures = m.sigFigs !== undefined && m.lsd !== null ? { sigFigs: m.sigFigs } : {};
   if (!unit) return { value: m.value, lsd: m.lsd, ...figures, dims: [0, 0, 0], unit: null, grad: new Map() };
-  const f = new Decimal(10).pow(unit.exp10);
+  const f = unitFactor(unit);
   return { value: m.value.times(f), lsd: m.lsd === null ? null : m.lsd + unit.exp10, ...figures, dims: unit.dims, unit, grad: new Map() };
 }
 
@@ -101,8 +101,9 @@ export function divide(a: Quantity, b: Quantity, column?: number): Quantity {
   if (b.value.isZero()) throw fail({ code: 'DIVISION_BY_ZERO', message: 'division by zero', column });
   const m = dividedBy(a, b);
   const unit = isNone(b.dims) && !b.unit ? a.unit : null;
-  const b2 = b.value.times(b.value);
-  return { ...m, dims: addDims(a.dims, b.dims, -1), unit, grad: combine(a.grad, b.grad, (g) => g.div(b.value), (g) => g.times(a.value).div(b2).neg()) };
+  // the sensitivities only when there are inputs with an uncertainty
+  const grad = a.grad.size === 0 && b.grad.size === 0 ? new Map<number, Decimal>() : combine(a.grad, b.grad, (g) => g.div(b.value), (g) => g.times(a.value).div(b.value.times(b.value)).neg());
+  return { ...m, dims: addDims(a.dims, b.dims, -1), unit, grad };
 }
 
 /** Negation. */
@@ -121,8 +122,8 @@ export function power(a: Quantity, n: number, column?: number): Quantity {
   const value = a.value.pow(n);
   if (!value.isFinite() || Math.abs(value.e) > 10_000) throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: 'the result is out of range', column });
   const m: Measured = a.lsd === null ? { value, lsd: null } : value.isZero() ? { value, lsd: a.lsd } : withSigFigs(value, sigFigsOf(a));
-  const d = new Decimal(n).times(a.value.pow(n - 1));
-  return { ...m, dims: [a.dims[0] * n, a.dims[1] * n, a.dims[2] * n], unit: null, grad: mapGrad(a.grad, (g) => g.times(d)) };
+  const grad = a.grad.size === 0 ? new Map<number, Decimal>() : mapGrad(a.grad, (g) => g.times(new Decimal(n).times(a.value.pow(n - 1))));
+  return { ...m, dims: [a.dims[0] * n, a.dims[1] * n, a.dims[2] * n], unit: null, grad };
 }
 
 /**

@@ -8,6 +8,7 @@
 import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
 import type { Measured } from './measured.js';
+import { pow10 } from './units.js';
 
 /** A number read from text, with the remark when its precision was ambiguous. */
 export interface ReadNumber extends Measured {
@@ -34,6 +35,20 @@ export const MIN_MAGNITUDE = new Decimal('1e-100');
  * readNumber('2.50e2').lsd   // 0   (3 significant figures)
  */
 export function readNumber(text: string, column?: number): ReadNumber {
+  const known = typeof text === 'string' ? READ.get(text) : undefined;
+  if (known !== undefined) return { ...known };
+  const r = read(text, column);
+  if (text.length > 64) return r;
+  if (READ.size >= MAX_REMEMBERED) READ.clear();
+  READ.set(text, r);
+  return { ...r };
+}
+
+/** The short texts read lately (atomic weights, the same options and values line after line); bounded, emptied when full. */
+const READ = new Map<string, ReadNumber>();
+const MAX_REMEMBERED = 1024;
+
+function read(text: string, column?: number): ReadNumber {
   if (typeof text !== 'string') throw fail({ code: 'BAD_NUMBER', message: `a number is read from its text (a string), not from a value of type ${text === null ? 'null' : typeof text}`, column });
   const t = text.trim();
   const m = NUMBER.exec(t);
@@ -45,7 +60,9 @@ export function readNumber(text: string, column?: number): ReadNumber {
   if (!Number.isSafeInteger(exp) || Math.abs(exp) > MAX_EXPONENT) {
     throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `'${text}' is out of range (exponents up to ±${MAX_EXPONENT})`, column });
   }
-  const value = new Decimal(`${sign}${int || '0'}${frac ? '.' + frac : ''}`).times(new Decimal(10).pow(exp));
+  const mantissa = `${sign}${int || '0'}${frac ? '.' + frac : ''}`;
+  // a number of up to 50 digits is exact as written (the product by 10^exp would not round it either)
+  const value = int.length + (frac?.length ?? 0) <= Decimal.precision ? new Decimal(exp === 0 ? mantissa : `${mantissa}e${exp}`) : new Decimal(mantissa).times(pow10(exp));
   if (!value.isZero() && (value.abs().gte(MAX_MAGNITUDE) || value.abs().lt(MIN_MAGNITUDE))) {
     throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `'${text.trim()}' is out of range: numbers are read from 1e-100 to 1e100 in size, so that every result is a finite JSON number`, column });
   }

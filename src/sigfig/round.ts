@@ -5,6 +5,7 @@
 import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
 import { msd, type Measured } from './measured.js';
+import { pow10 } from './units.js';
 
 export type RoundingMode = 'half-even' | 'half-up';
 
@@ -68,7 +69,7 @@ export function roundToPosition(value: Decimal, lsd: number, rounding: RoundingM
   const v = decimalOf(value);
   wholeIn(lsd, -MAX_POSITION, MAX_POSITION, 'the position of the last digit (a power of ten)');
   if (lsd <= 0) return v.toDecimalPlaces(-lsd, mode(rounding));
-  const f = new Decimal(10).pow(lsd);
+  const f = pow10(lsd);
   return v.div(f).toDecimalPlaces(0, mode(rounding)).times(f);
 }
 
@@ -154,7 +155,7 @@ export function displayMeasured(m: Measured, rounding: RoundingMode = 'half-even
   // 2400 (2 s.f.) and 1300 known to the unit (4 s.f.) both go to scientific notation
   const ambiguousZeros = lsd > 0 || (lsd === 0 && value.mod(10).isZero());
   if (ambiguousZeros || e >= 6 || e <= -5) {
-    const mantissa = value.div(new Decimal(10).pow(e));
+    const mantissa = value.div(pow10(e));
     const mText = mantissa.toFixed(Math.max(0, n - 1));
     return { text: `${mText} × 10${superscript(e)}`, value, sigFigs: n, lsd, belowPrecision: false };
   }

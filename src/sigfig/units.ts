@@ -1,9 +1,13 @@
 /**
- * Units of the bench: mass, amount, volume, and what divides them (molar and
- * mass concentration, molar mass), plus percent and parts per million. Every
- * factor is a power of ten, so converting never changes a value's precision:
- * only the position of its last significant digit moves.
+ * The one unit vocabulary: the dimensions, the units of the bench (mass,
+ * amount, volume, and what divides them: molar and mass concentration, molar
+ * mass; percent and parts per million) and their factors. Every factor is a
+ * power of ten, exact, so converting never changes a value's precision: only
+ * the position of its last significant digit moves. Every reader of amounts
+ * (the calculator, measure.ts, the measurement sets of the empirical formula,
+ * the commands) takes its dimensions and factors from here.
  */
+import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
 
 /** Exponents of the base dimensions [mass (g), amount (mol), volume (L)]. */
@@ -17,10 +21,49 @@ export interface Unit {
   name: string;
 }
 
-const MASS: Dims = [1, 0, 0];
-const AMOUNT: Dims = [0, 1, 0];
-const VOLUME: Dims = [0, 0, 1];
-const NONE: Dims = [0, 0, 0];
+/** A mass (g). */
+export const MASS: Dims = Object.freeze([1, 0, 0] as const);
+/** An amount of substance (mol). */
+export const AMOUNT: Dims = Object.freeze([0, 1, 0] as const);
+/** A volume (L). */
+export const VOLUME: Dims = Object.freeze([0, 0, 1] as const);
+/** A molar concentration (mol/L). */
+export const MOLARITY: Dims = Object.freeze([0, 1, -1] as const);
+/** A mass concentration (g/L). */
+export const MASS_CONCENTRATION: Dims = Object.freeze([1, 0, -1] as const);
+/** A molar mass (g/mol). */
+export const MOLAR_MASS: Dims = Object.freeze([1, -1, 0] as const);
+/** A pure number (fractions, percents, ppm). */
+export const PURE: Dims = Object.freeze([0, 0, 0] as const);
+const NONE = PURE;
+
+const POW10 = new Map<number, Decimal>();
+
+/**
+ * 10^n as an exact Decimal, made once per exponent: the factor of every unit
+ * and of every last-digit position.
+ *
+ * @example
+ * pow10(-3).toString() // '0.001'
+ */
+export function pow10(n: number): Decimal {
+  let d = POW10.get(n);
+  if (d === undefined) {
+    d = new Decimal(10).pow(n);
+    if (POW10.size < 4096) POW10.set(n, d);
+  }
+  return d;
+}
+
+/**
+ * The exact factor from a unit to its base unit (mg → 0.001; none → 1).
+ *
+ * @example
+ * unitFactor(unitOf('mL')).toString() // '0.001'
+ */
+export function unitFactor(u: Unit | null): Decimal {
+  return pow10(u ? u.exp10 : 0);
+}
 
 const TABLE: Unit[] = [
   { symbol: 'kg', exp10: 3, dims: MASS, name: 'kilogram' },
@@ -35,25 +78,25 @@ const TABLE: Unit[] = [
   { symbol: 'L', exp10: 0, dims: VOLUME, name: 'litre' },
   { symbol: 'mL', exp10: -3, dims: VOLUME, name: 'millilitre' },
   { symbol: 'µL', exp10: -6, dims: VOLUME, name: 'microlitre' },
-  { symbol: 'M', exp10: 0, dims: [0, 1, -1], name: 'mole per litre' },
-  { symbol: 'mM', exp10: -3, dims: [0, 1, -1], name: 'millimole per litre' },
-  { symbol: 'µM', exp10: -6, dims: [0, 1, -1], name: 'micromole per litre' },
-  { symbol: 'mol/L', exp10: 0, dims: [0, 1, -1], name: 'mole per litre' },
-  { symbol: 'mmol/L', exp10: -3, dims: [0, 1, -1], name: 'millimole per litre' },
-  { symbol: 'g/L', exp10: 0, dims: [1, 0, -1], name: 'gram per litre' },
-  { symbol: 'mg/L', exp10: -3, dims: [1, 0, -1], name: 'milligram per litre' },
-  { symbol: 'mg/mL', exp10: 0, dims: [1, 0, -1], name: 'milligram per millilitre' },
-  { symbol: 'µg/mL', exp10: -3, dims: [1, 0, -1], name: 'microgram per millilitre' },
-  { symbol: 'g/mL', exp10: 3, dims: [1, 0, -1], name: 'gram per millilitre' },
+  { symbol: 'M', exp10: 0, dims: MOLARITY, name: 'mole per litre' },
+  { symbol: 'mM', exp10: -3, dims: MOLARITY, name: 'millimole per litre' },
+  { symbol: 'µM', exp10: -6, dims: MOLARITY, name: 'micromole per litre' },
+  { symbol: 'mol/L', exp10: 0, dims: MOLARITY, name: 'mole per litre' },
+  { symbol: 'mmol/L', exp10: -3, dims: MOLARITY, name: 'millimole per litre' },
+  { symbol: 'g/L', exp10: 0, dims: MASS_CONCENTRATION, name: 'gram per litre' },
+  { symbol: 'mg/L', exp10: -3, dims: MASS_CONCENTRATION, name: 'milligram per litre' },
+  { symbol: 'mg/mL', exp10: 0, dims: MASS_CONCENTRATION, name: 'milligram per millilitre' },
+  { symbol: 'µg/mL', exp10: -3, dims: MASS_CONCENTRATION, name: 'microgram per millilitre' },
+  { symbol: 'g/mL', exp10: 3, dims: MASS_CONCENTRATION, name: 'gram per millilitre' },
   // per 100 mL: the 100 is defined, exact (clinical and food labels; pharmacopoeial % w/v)
-  { symbol: 'g/100 mL', exp10: 1, dims: [1, 0, -1], name: 'gram per 100 millilitres' },
-  { symbol: 'mg/100 mL', exp10: -2, dims: [1, 0, -1], name: 'milligram per 100 millilitres' },
-  { symbol: 'g/dL', exp10: 1, dims: [1, 0, -1], name: 'gram per decilitre' },
-  { symbol: 'mg/dL', exp10: -2, dims: [1, 0, -1], name: 'milligram per decilitre' },
+  { symbol: 'g/100 mL', exp10: 1, dims: MASS_CONCENTRATION, name: 'gram per 100 millilitres' },
+  { symbol: 'mg/100 mL', exp10: -2, dims: MASS_CONCENTRATION, name: 'milligram per 100 millilitres' },
+  { symbol: 'g/dL', exp10: 1, dims: MASS_CONCENTRATION, name: 'gram per decilitre' },
+  { symbol: 'mg/dL', exp10: -2, dims: MASS_CONCENTRATION, name: 'milligram per decilitre' },
   // percent weight in volume: grams of solute in 100 mL of solution (pharmacopoeial usage)
-  { symbol: '% w/v', exp10: 1, dims: [1, 0, -1], name: 'percent weight in volume (g per 100 mL)' },
-  { symbol: 'g/mol', exp10: 0, dims: [1, -1, 0], name: 'gram per mole' },
-  { symbol: 'kg/mol', exp10: 3, dims: [1, -1, 0], name: 'kilogram per mole' },
+  { symbol: '% w/v', exp10: 1, dims: MASS_CONCENTRATION, name: 'percent weight in volume (g per 100 mL)' },
+  { symbol: 'g/mol', exp10: 0, dims: MOLAR_MASS, name: 'gram per mole' },
+  { symbol: 'kg/mol', exp10: 3, dims: MOLAR_MASS, name: 'kilogram per mole' },
   { symbol: '%', exp10: -2, dims: NONE, name: 'percent' },
   { symbol: '% w/w', exp10: -2, dims: NONE, name: 'percent by mass' },
   { symbol: '% v/v', exp10: -2, dims: NONE, name: 'percent by volume' },
@@ -145,13 +188,13 @@ export function sameDims(a: Dims, b: Dims): boolean {
 }
 
 const DIM_NAMES: [Dims, string, string][] = [
-  [[0, 0, 0], 'a pure number', ''],
-  [[1, 0, 0], 'a mass', 'g'],
-  [[0, 1, 0], 'an amount of substance', 'mol'],
-  [[0, 0, 1], 'a volume', 'L'],
-  [[0, 1, -1], 'a molar concentration', 'M'],
-  [[1, 0, -1], 'a mass concentration', 'g/L'],
-  [[1, -1, 0], 'a molar mass', 'g/mol'],
+  [PURE, 'a pure number', ''],
+  [MASS, 'a mass', 'g'],
+  [AMOUNT, 'an amount of substance', 'mol'],
+  [VOLUME, 'a volume', 'L'],
+  [MOLARITY, 'a molar concentration', 'M'],
+  [MASS_CONCENTRATION, 'a mass concentration', 'g/L'],
+  [MOLAR_MASS, 'a molar mass', 'g/mol'],
   [[0, -1, 1], 'a volume per amount', 'L/mol'],
   [[-1, 1, 0], 'an amount per mass', 'mol/g'],
   [[0, 0, -1], 'a reciprocal volume', '1/L'],

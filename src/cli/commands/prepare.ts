@@ -1,6 +1,7 @@
 import { hillAside, speciesText } from '../../preparation/species.js';
 import type { Command } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
+import { readKeyValuePair } from '../../key-values/read-key-values.js';
 import type { Note } from '../../errors/issue.js';
 import { BENCH_CAUTION } from '../../preparation/caution.js';
 import { displayInstruction, displayResult, instructionJson, massUnitFor, resultJson, volumeUnitFor, type Instruction } from '../../sigfig/instruction.js';
@@ -52,7 +53,7 @@ export function checkPrepareOptions(o: PrepareCliOptions): void {
   if (o.replace !== undefined) {
     const clash = given(o, { concentration: '--concentration', volume: '--volume', as: '--as', weighed: '--weighed', purityBasis: '--purity-basis' });
     if (clash.length) throw conflict('--replace', clash, 'it weighs one form of a reagent in place of an amount of another; to make up a solution, name the form in hand and give --concentration and --volume without --replace');
-    if (o.replace.indexOf('=') <= 0) throw fail({ code: 'USAGE', message: "--replace takes FORM=AMOUNT, e.g. --replace 'CuSO4=10.00 g'" });
+    if ((readKeyValuePair(o.replace)?.keyText ?? '') === '') throw fail({ code: 'USAGE', message: "--replace takes FORM=AMOUNT, e.g. --replace 'CuSO4=10.00 g'" });
     return;
   }
   if (o.volume === undefined || (o.concentration === undefined && o.weighed === undefined)) {
@@ -88,7 +89,7 @@ function substituteJson(r: SubstituteResult, o: PrepareCliOptions, rounding: Rou
     input: r.use.input,
     formula: r.use.formula,
     instead: r.instead.formula,
-    asked: o.replace!.slice(o.replace!.indexOf('=') + 1).trim(),
+    asked: readKeyValuePair(o.replace!)!.value,
     purity: r.purity ? displayResult(r.purity, '%', rounding).text : null,
     moles: instructionJson(r.moles, 'mol', rounding),
     mass: instructionJson(r.mass, massUnitFor(r.mass.quantity), rounding),
@@ -139,8 +140,8 @@ function oneSolutionPresenter(o: PrepareCliOptions): Presenter<Prepared> {
   const compute = (input: string): Prepared => {
     if (concentrated) return { kind: 'concentrated', r: concentratedReagent(input, { ...options, fraction: o.fraction!, density: o.density, concentration: o.concentration, volume: o.volume }) };
     if (o.replace !== undefined) {
-      const eq = o.replace.indexOf('=');
-      return { kind: 'substitute', r: substituteForm(input, o.replace.slice(0, eq).trim(), o.replace.slice(eq + 1), { ...options, purity: o.purity }) };
+      const pair = readKeyValuePair(o.replace)!;
+      return { kind: 'substitute', r: substituteForm(input, pair.key, pair.valueText, { ...options, purity: o.purity }) };
     }
     return { kind: 'solution', r: prepareSolution(input, { ...options, concentration: o.concentration, volume: o.volume!, purity: o.purity, purityBasis: o.purityBasis, as: o.as, weighed: o.weighed }) };
   };
@@ -176,7 +177,7 @@ function oneSolutionPresenter(o: PrepareCliOptions): Presenter<Prepared> {
         const r = p.r;
         const lines = [
           `use ${r.use.input} (M = ${displayMolarMass(r.use)} g/mol) instead of ${r.instead.input} (M = ${displayMolarMass(r.instead)} g/mol):`,
-          `  ${o.replace!.slice(o.replace!.indexOf('=') + 1).trim()} of ${r.instead.input} = ${w(r.moles, 'mol')}`,
+          `  ${readKeyValuePair(o.replace!)!.value} of ${r.instead.input} = ${w(r.moles, 'mol')}`,
         ];
         if (r.purity) lines.push(`  assay of ${r.use.input} ${res(r.purity, '%')}: ${wm(r.pureMass)} ÷ ${res(r.purity, '%')}`);
         lines.push(`  weigh ${wm(r.mass)} of ${r.use.input}`);

@@ -6,6 +6,7 @@ import { BENCH_CAUTION } from '../../preparation/caution.js';
 import { fixedTable } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { fail } from '../../errors/pondus-error.js';
+import { readKeyValuePair } from '../../key-values/read-key-values.js';
 import { roundingOf, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 import { declareReact } from './declarations.js';
@@ -21,7 +22,7 @@ interface ReactCliOptions extends OutputOptions, RoundingOptions {
 /** The presenter for `pondus react`. */
 export function reactPresenter(o: ReactCliOptions): Presenter<ReactResult> {
   if (!o.amount || o.amount.length === 0) throw fail({ code: 'USAGE', message: "give the amount of at least one reactant: --amount 'H2=4.00 g' (repeat for each)" });
-  const keys = o.amount.map((a) => a.slice(0, Math.max(0, a.indexOf('='))).trim());
+  const keys = o.amount.map((a) => readKeyValuePair(a)?.key ?? '');
   const twice = keys.find((k, i) => k !== '' && keys.indexOf(k) !== i);
   if (twice !== undefined) throw fail({ code: 'USAGE', message: `--amount gives ${twice} twice: give one amount per reactant` });
   const opts: ReactOptions = { amounts: o.amount, actual: o.actual, abbreviations: !!o.abbreviations, rounding: roundingOf(o) };

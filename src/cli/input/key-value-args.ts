@@ -13,7 +13,7 @@
  *   usage error, since where one set ends is not known.
  */
 import { fail } from '../../errors/pondus-error.js';
-import { isSinglePair } from '../../key-values/read-key-values.js';
+import { isSinglePair, readKeyValuePair } from '../../key-values/read-key-values.js';
 
 export interface JoinedArgs {
   /** The inputs, with each run of pairs joined into one. */
@@ -74,7 +74,7 @@ export function pairRuns(args: string[], units: boolean): PairRun[] {
 export function checkRun(run: PairRun, what: string): void {
   const seen = new Set<string>();
   for (const p of run.pairs) {
-    const key = p.slice(0, p.indexOf('='));
+    const key = readKeyValuePair(p)!.keyText;
     if (seen.has(key)) {
       throw fail({ code: 'USAGE', message: `the arguments ${run.pairs.join(' ')} give ${key} twice: they cannot be one ${what}. Quote each ${what}, e.g. 'C=40.00 H=6.71 O=53.29' 'C=85.6 H=14.4'` });
     }
