@@ -76,6 +76,9 @@ const mixed300 = dataFile('mixed', 300_000, generateMixedFormulas);
 const reps = quick ? 3 : 5;
 const bareLoop = `${root}bench/bare-loop.mjs`;
 const echoLoop = `${root}bench/echo-loop.mjs`;
+// the best plain JavaScript can do for mass --json on plain formulas: the same bytes, no pondus code
+const plainJs = `${root}bench/plain-js-mass.mjs`;
+const plainJsTimes = [];
 // each row: [label, args, file, goal]; the baselines of its file run in the same rounds
 const rows = [
   ['mass --json', [bin, 'mass', '--json', '-'], plain300, 1.5],
@@ -99,6 +102,7 @@ for (let i = 0; i < reps; i++) {
     times[j].push(r.ms);
     if (j === 0) peakBig = Math.max(peakBig, r.peakMB);
   }
+  plainJsTimes.push((await timeBatch([plainJs], plain300)).ms);
 }
 const peakSmall = (await timeBatch([bin, 'mass', '--json', '-'], plain30)).peakMB;
 
@@ -126,6 +130,7 @@ rows.forEach(([label, , file, goal], j) => {
   const ratio = median(times[j]) / median(bare.get(file));
   console.log(`          ${label.padEnd(28)} ${f(median(times[j])).padStart(8)} ms for ${lines(file)} lines   ${ratio.toFixed(2)}× (goal ≤ ${goal}×)`);
 });
+console.log(`          plain JavaScript, mass --json ${f(median(plainJsTimes)).padStart(8)} ms for 300,000 lines   ${(median(plainJsTimes) / median(bare.get(plain300))).toFixed(2)}× (bench/plain-js-mass.mjs: the same bytes); pondus is ${(median(times[0]) / median(plainJsTimes)).toFixed(2)}× it`);
 console.log(`candidates  every CHNOPS+halogen formula within 5 ppm near 1,000 Da (default ranges): ${candidateRuns.map((c) => `${c.formula} ${f(c.ms)} ms (${c.n} fits)`).join('; ')} (goal < 1000 ms each)`);
 // isotope patterns (issue: the aggregated pattern of a protein-sized formula; a fine structure to 99.9 %)
 const lib = await import(`${root}dist/lib/index.js`);
