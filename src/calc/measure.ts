@@ -19,7 +19,8 @@ import { parseExpression } from './parse-expression.js';
 export function measure(text: string, what = 'the quantity', notes?: Note[]): Quantity {
   let read = READ.get(text);
   if (read === undefined) {
-    const expr = text.replace(/\s+of\s+/g, ' * ');
+    // a match may start only where a run of white space starts, so a long run is tried once, not once per space
+    const expr = text.replace(/(?<!\s)\s+of\s+/g, ' * ');
     try {
       const ev = evaluate(parseExpression(expr));
       read = { result: ev.result, notes: ev.notes };

@@ -52,7 +52,9 @@ export function readKeyValues(text: string, options: KeyValueOptions = {}): KeyV
   const keyChars = options.colon ? '[^\\s=:,;]' : '[^\\s=,;]';
   // a new entry starts at the text start, after , or ;, or after white space followed by KEY=
   const starts: number[] = [];
-  const startRe = new RegExp(`(^|[,;]|\\s)\\s*(${keyChars}+\\s*${sep})`, 'g');
+  // white space starts an entry only at the first space of a run (the rest of the run would fail the same way),
+  // so a long run of spaces is tried once, not once per space
+  const startRe = new RegExp(`(^|[,;]|(?<!\\s)\\s)\\s*(${keyChars}+\\s*${sep})`, 'g');
   let m: RegExpExecArray | null;
   while ((m = startRe.exec(text)) !== null) {
     starts.push(m.index + m[0].length - m[2].length);
