@@ -29,7 +29,7 @@ const cache = new Map<string, AtomIsotopes>();
  *
  * @param key - an atom key: an element symbol ('Cl') or a labelled isotope ('13C').
  * @returns the isotopes' mass numbers, masses (AME2020) and fractions, the principal one, and their source (natural abundance or a label).
- * @throws PondusError: INTERNAL_ERROR for a key that is not an atom key or has no isotope data (a plain Error inside, turned into a PondusError at the public API's boundary); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
+ * @throws PondusError: BAD_ARGUMENT for a key that is not an atom key with isotope data, or an argument of the wrong kind (from the public API's boundary).
  * @example
  * atomIsotopes('Cl').massNumbers // [35, 37]
  * atomIsotopes('13C').fractions  // [1]

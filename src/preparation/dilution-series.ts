@@ -94,7 +94,7 @@ function roundAtLeast(x: Decimal): Decimal {
  * Splits a dilution factor into steps of at most `maxStep` each, round factors first.
  *
  * @param factor - the overall dilution factor (more than 1).
- * @param maxStep - the largest factor allowed in one step (2 or more).
+ * @param maxStep - the largest factor allowed in one step, 2 or more (not checked here; {@link dilutionSeries} checks it).
  * @returns the factors of the steps, whose product is the overall factor.
  * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
