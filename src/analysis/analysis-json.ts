@@ -13,6 +13,10 @@ const fitJson = (f: Fit) => ({
 /**
  * The JSON object `pondus analysis --json` writes (contract keys: formula, calculated, found, deviation, pass, tolerance, fits).
  *
+ * @param r - a result of {@link analysis}.
+ * @param extra - keys written first, before the result's own (for example a row's id and line).
+ * @returns the plain JSON object: input, formula, calculated, found, deviation, pass, tolerance, fits and notes.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * analysisJson(analysis('C6H6', 'C=92.26,H=7.74')).pass // true
  */

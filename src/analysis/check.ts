@@ -105,6 +105,11 @@ export interface AnalysisResult {
 /**
  * Checks found percents against a formula, and fits solvates when asked.
  *
+ * @param formula - the compound's formula, neutral (a salt written whole with its counter-ions).
+ * @param foundText - the found mass percents, e.g. 'C=72.30, H=7.91, N=12.60' (or as journals print them, 'C, 72.30; H, 7.91').
+ * @param options - tolerance in percentage points (default 0.4), solvents and salt partners to fit, the fitting grid (step, max, saltStep), how many fits to report, rounding, and the mass options.
+ * @returns the calculated and found percents with their deviations, whether all are within tolerance, the solvate fits best first, and the notes.
+ * @throws PondusError: a formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …); UNKNOWN_ELEMENT or BAD_MEASUREMENT for a found value that cannot be read, is negative or over 100 %, or found values that add up to well over 100 %; BAD_MEASUREMENT for a charged formula or a found element the formula (and solvents) do not contain; BAD_NUMBER for a tolerance that is not a number; BAD_OPTION for a tolerance out of range, an unknown solvent or a grid that makes no sense; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * analysis('C20H25N3O', 'C=72.30, H=7.91, N=12.60', { solvents: ['water'] }).fits[0].formula // 'C20H25N3O·0.5H2O'
  */

@@ -76,6 +76,9 @@ export function fromJournalForm(text: string): string {
 /**
  * Reads found mass percents; every symbol must be an element, every value 0–100.
  *
+ * @param text - found mass percents, e.g. 'C=72.30, H=7.91, N=12.60' (or in the journal form 'C, 72.30; H, 7.91').
+ * @returns each element symbol with its found percent.
+ * @throws PondusError: UNKNOWN_ELEMENT for a key that is not an element symbol (with its column); BAD_MEASUREMENT for text not written key=value, a key given twice, a value that is not a number, a negative value or one over 100 %, or values that add up to well over 100 %; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readFound('C=72.30, H=7.91, N=12.60').get('C')?.toString() // '72.3'
  */

@@ -26,6 +26,9 @@ const ONE_VALUE = /^\s*[-+]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)\s*%?\s*$/;
  * Reads a lab sheet. Rows keep their line numbers; a row's problems (no formula, a bad number)
  * surface when the row is analysed, so one bad row never stops the others.
  *
+ * @param text - the CSV text of the sheet: a header with a formula column, element columns (C, %C, C found, …) and optionally an id column.
+ * @returns one row for each data line, with its line number, raw text, id, formula and found values (and a problem for a cell that does not hold one value).
+ * @throws PondusError: BAD_RECORD for text that is not valid CSV, an empty sheet, or a header with no formula column or no element columns; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readSheet('id,formula,C,H,N\nJK-12,C20H25N3O,72.30,7.91,12.60\n')[0].found // 'C=72.30, H=7.91, N=12.60'
  */

@@ -11,6 +11,9 @@ export { SOLVENTS };
 /**
  * Looks up a solvent by name (any case), or returns null for a name it does not know.
  *
+ * @param name - a solvent's name or abbreviation (water, DCM, EtOAc, …), in any case.
+ * @returns the solvent's formula and name, or null for a name not in the list.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * solventByName('DCM')?.formula // 'CH2Cl2'
  */

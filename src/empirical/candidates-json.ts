@@ -3,6 +3,9 @@ import type { CandidateResult } from './candidates.js';
 /**
  * The JSON object `pondus candidates --json` writes: the plain result, keys in a fixed order.
  *
+ * @param r - a result of {@link candidateFormulas}.
+ * @returns the plain JSON object, keys in a fixed order.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * candidatesJson(candidateFormulas({ mass: '180.06339', ppm: 3, elements: 'C0-20 H0-40 O0-10' })).candidates[0].formula // 'C6H12O6'
  */

@@ -170,6 +170,9 @@ const VALENCE: Readonly<Record<string, number>> = Object.freeze({
  * 1 + Σ nᵢ(vᵢ − 2)/2 over the lowest usual valences — for CHNOPS and halogens,
  * 1 + C + Si + (N + P)/2 − (H + halogens)/2. Null when an element has no fixed valence (Fe, Pd, …).
  *
+ * @param counts - the atom counts by element symbol, as a Map or a plain object.
+ * @returns the ring-plus-double-bond equivalents, or null when an element has no fixed valence.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * rdbe(new Map([['C', 6], ['H', 6]])) // 4
  * rdbe({ C: 2, H: 3, Na: 1, O: 2 })   // 1
@@ -189,6 +192,9 @@ export function rdbe(counts: Map<string, number> | Readonly<Record<string, numbe
 /**
  * Reads element ranges such as 'C0-80 H0-160 N0-4 Fe0-1 Pd1'. Any element symbol; each range at most 0–500.
  *
+ * @param text - element ranges such as 'C0-80 H0-160 N0-4 Fe0-1 Pd1'.
+ * @returns each element with its lowest and highest count.
+ * @throws PondusError: BAD_OPTION for text over 2000 characters, a piece that is not an element range, a symbol that is not an element or has no mass data, an element given twice, or a range that is empty or above 500; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readRanges('C1-10 H0-20 Fe0-1').get('Fe') // [0, 1]
  */
@@ -224,6 +230,13 @@ export function readRanges(text: string): Map<string, [number, number]> {
  * 0 is a perfect fit; every candidate within all allowances scores at most 1. Ties go to the
  * formula with fewer atoms, then to the Hill formula in alphabetical order.
  *
+ * @param massError - the ppm error (or the molar-mass difference), or null when no mass is given.
+ * @param massAllowance - the ppm window (or the molar-mass window) the error is divided by.
+ * @param deviations - the found-percent deviations, or null when no analysis is given.
+ * @param tolerance - the tolerance each deviation is divided by.
+ * @param similarity - the similarity (0–1) of the measured isotope pattern, or null when none is given.
+ * @returns the score: 0 for a perfect fit, at most 1 within every allowance.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * candidateScore(1.5, 3, null, 0.4)          // 0.5
  * candidateScore(0, 3, [0.2, -0.2], 0.4)     // 0.3535533905932738
@@ -322,6 +335,9 @@ function exactSum(symbols: readonly string[], counts: ArrayLike<number>, value: 
  * Lists plausible formulas for an accurate mass (± ppm), an ion's m/z, a molar mass and/or found
  * percents, best score first.
  *
+ * @param options - an accurate mass with its ppm window (and the ion it is the m/z of) or a molar mass with its window; found percents and their tolerance; element ranges, ratio rules and how many to list; a measured isotope pattern; and a progress callback.
+ * @returns the candidates best score first, each with its formula, masses, ppm error, RDBE, largest deviation, pattern similarity and score, with what the search covered (examined, plausible, truncated) and the notes.
+ * @throws PondusError: BAD_OPTION for no mass window, both an accurate and a molar mass, an ion without an accurate mass, a mass, ppm, window, tolerance, limit or ratio setting out of range, element ranges that cannot be read, an ion that needs more atoms than the ranges allow, a found element not in the ranges, or a measured pattern that cannot be read; the codes of {@link readIonNotation} for the ion (BAD_ION, INPUT_TOO_LONG, CONTROL_CHARACTER, and a term's formula codes); BAD_ION for an ion term with a labelled atom or a decimal count; BAD_NUMBER for an accurate mass that is not a number; UNKNOWN_ELEMENT or BAD_MEASUREMENT for found values that cannot be read; SEARCH_TOO_LARGE for a search beyond the work limit; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * candidateFormulas({ mass: '180.06339', ppm: 3, elements: 'C0-20 H0-40 O0-10' }).candidates[0].formula // 'C6H12O6'
  * candidateFormulas({ mass: '203.05261', ion: '[M+Na]+', ppm: 3, elements: 'C0-20 H0-40 O0-10' }).candidates[0].formula // 'C6H12O6'

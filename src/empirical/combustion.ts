@@ -93,6 +93,9 @@ export interface CombustionResult {
 /**
  * Element masses, percents and the empirical formula from a combustion analysis, as plain data.
  *
+ * @param options - the sample mass, the masses collected of each combustion product ({ co2: '1.499 g', h2o: '0.4091 g' }, also n2, so2, agcl, …), and rounding.
+ * @returns each element's mass and percent (results of the measurements), the empirical formula with its fit and alternatives (null when none fits, with a note), and the notes.
+ * @throws PondusError: INPUT_TOO_LONG for a mass text past its length limit; BAD_MEASUREMENT for a sample mass that is not positive, a negative mass collected, no masses collected, or elements that weigh more than the sample; BAD_OPTION for masses collected not given as an object, an unknown product, or a mass not written as text; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); SEARCH_TOO_LARGE for a formula search beyond the work limit; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * combustion({ sample: '1.000 g', collected: { co2: '1.499 g', h2o: '0.4091 g' } }).empirical // 'C3H4O3'
  * combustion({ sample: '1.000 g', collected: { co2: '1.499 g', h2o: '0.4091 g' } }).elements[0].percentFigure // '40.91'

@@ -88,6 +88,10 @@ function molarWindow(text: string): { lo: number; hi: number; text: string } {
  * mass, the molecular formula is searched directly (every formula of that mass whose percents fit),
  * and when several fit equally well a note says an accurate mass decides (the candidates command).
  *
+ * @param input - one measurement set, as for {@link readMeasurements}.
+ * @param options - the molar mass (a number of g/mol or a range such as 170-190) for the molecular formula, and the tolerance in percentage points.
+ * @returns the empirical formula with its mass, fit and alternatives, the percents and limits, the molecular formula and multiple when a molar mass is given, and the notes.
+ * @throws PondusError: INPUT_TOO_LONG for a set or molar mass past its length limit; the codes of {@link readMeasurements} (BAD_MEASUREMENT, UNKNOWN_ELEMENT); BAD_OPTION for a molar mass that is not a positive number of g/mol or a range, or a tolerance out of range; NO_FORMULA_FITS when no formula fits; SEARCH_TOO_LARGE for a search beyond the work limit; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * empirical('C=40.00 H=6.71 O=53.29', { molarMass: '180.16' }).molecular // 'C6H12O6'
  * empirical('C=72.15 H=7.12 N=4.72 O=rest', { molarMass: '299.4' }).molecular // 'C18H21NO3'
@@ -168,6 +172,9 @@ export function empirical(input: string, options: EmpiricalOptions = {}): Empiri
 /**
  * The JSON object `pondus empirical --json` writes (contract keys `empirical`, `molecular`).
  *
+ * @param r - a result of {@link empirical}.
+ * @returns the plain JSON object, with the contract keys empirical and molecular.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * empiricalJson(empirical('C=40.00 H=6.71 O=53.29')).empirical // 'CH2O'
  */

@@ -212,6 +212,10 @@ const tooLarge = (n: number) =>
 /**
  * Searches for the empirical formula that fits the measurements.
  *
+ * @param m - a measurement set read by {@link readMeasurements}.
+ * @param options - the tolerance in percentage points (above 0, at most 5).
+ * @returns the best formula with its fit, and the other formulas that fit, best first.
+ * @throws PondusError: BAD_OPTION for a tolerance out of range; BAD_MEASUREMENT for an element with no value above zero; NO_FORMULA_FITS when no formula of the allowed size fits every value within its limit, or a value is too close to zero to count its atoms; SEARCH_TOO_LARGE for a search beyond the work limit; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * searchFormula(readMeasurements('C=40.00 H=6.71 O=53.29')).best.formula // 'CH2O'
  * searchFormula(readMeasurements('C=72.15 H=7.12 N=4.72 O=rest')).best.formula // 'C18H21NO3'

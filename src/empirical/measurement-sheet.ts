@@ -21,6 +21,9 @@ export interface MeasurementRow {
 /**
  * Reads a measurement sheet into measurement sets, one per row.
  *
+ * @param text - the CSV text of the sheet: element or oxide columns, and optionally id, sample and molar mass columns.
+ * @returns one row for each data line, with its line number, raw text, id, the measurement set as text and the molar mass.
+ * @throws PondusError: BAD_RECORD for text that is not valid CSV, an empty sheet, or a header without element or oxide columns; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readMeasurementSheet('id,C,H,O,molar mass\nS1,40.00,6.71,53.29,180.16\n')[0].measurements // 'C=40.00 H=6.71 O=53.29'
  */

@@ -79,6 +79,9 @@ function readKey(key: string, column: number, text: string): { symbol: string; s
 /**
  * Parses one measurement set.
  *
+ * @param text - one measurement set: element or oxide percents or masses, e.g. 'C=40.00 H=6.71 O=rest' or 'MgO=57.30 SiO2=42.70', with sample=… g for masses.
+ * @returns the elements with their values and half-units of the last figure, the kind (percent or mass), the sample mass, the element by difference, the compounds split into elements, and the notes.
+ * @throws PondusError: BAD_MEASUREMENT for a set that cannot be read (a piece not key=value, a key twice, a value that is not a number, a mass or 'rest', a negative value or one over 100 %, percents not adding up to 100 %, masses more than the sample, a mix of percents and masses, a compound that is an ion or names an isotope); UNKNOWN_ELEMENT for a key that looks like an element symbol but is not one (with its column); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readMeasurements('C=40.00 H=6.71 O=rest').elements[2].byDifference // true
  * readMeasurements('MgO=57.30 SiO2=42.70').elements.map((e) => e.symbol) // ['Mg', 'O', 'Si']

@@ -25,6 +25,9 @@ export const SMALLEST_PEAK = 0.01;
 /**
  * Reads measured peaks written as m/z:intensity pairs: '203.0526:100 204.0560:6.9 205.0570:1.3'.
  *
+ * @param text - m/z:intensity pairs separated by spaces, commas or semicolons, e.g. '203.0526:100 204.0560:6.9'.
+ * @returns the peaks, sorted by m/z.
+ * @throws PondusError: BAD_OPTION for text over 5000 characters, no peaks, too many, a piece not written m/z:intensity, an m/z not between 0 and 100000, a negative intensity, or all intensities zero; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readPeaks('203.0526:100, 204.0560:6.9').length // 2
  */
@@ -49,6 +52,12 @@ export function readPeaks(text: string): MeasuredPeak[] {
  * The similarity (0–1) of measured peaks to the aggregated pattern of an ion's atoms, given the
  * ion's monoisotopic m/z and charge. Null when the pattern would be too large to compute.
  *
+ * @param peaks - the measured peaks, as read by {@link readPeaks}.
+ * @param atoms - the ion's atoms: counts by element symbol.
+ * @param monoMz - the ion's monoisotopic m/z.
+ * @param charge - the ion's charge (0 is read as 1).
+ * @returns the similarity from 0 (no likeness) to 1 (the same pattern), or null when the pattern would be too large to compute.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * patternSimilarity(readPeaks('69.9377:100 71.9348:64 73.9318:10.2'), new Map([['Cl', 2]]), 69.9377, 1) > 0.99 // true
  */

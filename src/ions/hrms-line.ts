@@ -21,6 +21,9 @@ export interface HrmsLineParts {
 /**
  * Writes the HRMS line.
  *
+ * @param p - the parts of the line: the ionisation, the ion in journal notation, the ion's formula, and the calculated and found m/z as text.
+ * @returns the HRMS line as journals print it.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * hrmsLine({ ionisation: 'ESI', journalNotation: '[M + H]+', ionFormulaPlain: 'C15H16NO2', calculatedText: '242.1176', foundText: '242.1172' })
  * // 'HRMS (ESI) m/z: [M + H]+ calcd for C15H16NO2 242.1176; found 242.1172.'

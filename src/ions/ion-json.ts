@@ -27,6 +27,10 @@ export interface IonJson {
  * The JSON object `pondus ion --json` writes for one ion. `errorPpm` and `errorMDa` are
  * rounded to one decimal as reported; `errorPpmExact` keeps the unrounded value.
  *
+ * @param r - a result of {@link ionMass}.
+ * @param extra - keys written first, before the result's own (for example a row's id and line).
+ * @returns the plain JSON object of the ion, with the errors rounded as reported and the exact ppm error beside them.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * ionJson(ionMass('C15H15NO2', '[M+H]+', { found: '242.1172' })).errorPpm // -1.5
  */

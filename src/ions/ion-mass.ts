@@ -252,6 +252,11 @@ export interface IonResult {
  * (read as the species as written, with a note), as plain data. Throws a PondusError for bad
  * input or a formula whose written charge conflicts with the notation.
  *
+ * @param formula - the formula of M, or null when the ion names its own formula; a charged formula alone is read as the species as written.
+ * @param ion - the ion notation (as text or read by {@link readIonNotation}), or null for a charged formula alone.
+ * @param options - the found m/z for the mass error, the ionisation for the HRMS line, the decimals reported (0–8), and the formula options.
+ * @returns the ion's formula, charge, m/z, ion and neutral masses, whether it is an odd-electron ion, the found m/z with its error when given, the HRMS report line and the notes.
+ * @throws PondusError: a formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …); the codes of {@link readIonNotation} (BAD_ION, INPUT_TOO_LONG, CONTROL_CHARACTER); BAD_OPTION for decimals out of range or an ionisation name that is not plain; ION_CONFLICT for a formula given both in the ion and beside it, or a written charge that conflicts with the notation; BAD_ION for M without its formula, a neutral formula without an ion, an ion that takes away atoms M does not have, or one that leaves no atoms; BAD_COUNT for a count that is not whole; BAD_NUMBER for a found m/z that is not a positive plain decimal; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * ionMass('C15H15NO2', '[M+H]+').mz.toFixed(4)                               // '242.1176'
  * ionMass('C15H15NO2', '[M+H]+', { found: '242.1172' }).found.ppm.toFixed(1)  // '-1.5'

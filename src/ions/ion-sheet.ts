@@ -23,6 +23,9 @@ export interface IonSheetRow {
  * Reads an ion sheet. A row's own problems (no formula, a bad ion) surface when the row is
  * computed, so one bad row never stops the others.
  *
+ * @param text - the CSV text of the sheet: a formula column, and optionally id, ion and found columns.
+ * @returns one row for each data line, with its line number, raw text, id, formula, ion and found m/z.
+ * @throws PondusError: BAD_RECORD for text that is not valid CSV, an empty sheet, or a header without a formula column; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readIonSheet('id,formula,ion,found\nAB-7,C15H15NO2,[M+H]+,242.1172\n')[0].ion // '[M+H]+'
  */

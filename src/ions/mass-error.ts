@@ -35,6 +35,11 @@ export const LARGE_ERROR_PPM = 100;
 /**
  * Compares a found m/z (as written) with a calculated one.
  *
+ * @param found - the found m/z as written (its decimals count), e.g. '242.1172'.
+ * @param calculated - the calculated m/z.
+ * @param reportDecimals - the decimals the calculated m/z is reported with (default 4), for the note on a found value with fewer.
+ * @returns the found value and its decimals, the difference, the error in ppm and mDa, and the notes.
+ * @throws PondusError: BAD_NUMBER for a found m/z that is not a number, not positive or written with an exponent; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const e = massError('242.1172', new Decimal('242.117555'));
  * e.ppm.toFixed(1)  // '-1.5'

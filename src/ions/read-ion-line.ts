@@ -18,6 +18,9 @@ const NUMBER = /^[0-9]+(\.[0-9]+)?$/;
 /**
  * Splits a line into formula, ion and found m/z (nothing is computed).
  *
+ * @param line - a line: a formula, then an ion notation, then a found m/z (the last two optional), or an ion that names its own formula.
+ * @returns the formula (or null), the ion (or null) and the found m/z (or null), as text.
+ * @throws PondusError: EMPTY_INPUT for an empty line; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readIonLine('C15H15NO2 [M+H]+ 242.1172') // { formula: 'C15H15NO2', ion: '[M+H]+', found: '242.1172' }
  * readIonLine('[C6H12O6+Na]+')             // { formula: null, ion: '[C6H12O6+Na]+', found: null }

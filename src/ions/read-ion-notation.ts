@@ -58,6 +58,9 @@ const HINT = "write an ion as [M+H]+, [M+Na]+, [M-H]-, [M+2H]2+, [2M+Na]+, [M+H-
 /**
  * Reads an ion notation. Throws a PondusError (BAD_ION, with a column) for anything else.
  *
+ * @param text - an ion notation such as '[M+H]+', '[M−H]−', '[2M+Na]+', 'M+.' or '[C6H12O6+Na]+'.
+ * @returns the notation read: the multiplier of M, the terms added or taken away, the charge, whether it is a radical, a formula of its own when it names one, and its canonical form.
+ * @throws PondusError: BAD_ION for text that is not an ion notation (with its column: no M, no charge, an unclosed bracket, a count or charge out of range, a charged term, …); INPUT_TOO_LONG past the length limit; CONTROL_CHARACTER for a control character; a term's formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, …, with the column in the notation); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readIonNotation('[M+H]+').terms[0].formula   // 'H'
  * readIonNotation('[M−H]−').charge             // -1
@@ -182,6 +185,9 @@ export function readIonNotation(text: string): IonNotation {
 /**
  * Non-throwing check: true when the text reads as an ion notation.
  *
+ * @param text - the text to check.
+ * @returns true when {@link readIonNotation} reads it, false when it refuses it.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * isIonNotation('[M+Na]+') // true
  * isIonNotation('NaCl')    // false

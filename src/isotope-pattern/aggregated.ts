@@ -124,6 +124,10 @@ export function estimatedBins(atoms: Map<string, number>): number {
  * The aggregated distribution of a set of atoms (whole counts). Refuses with an estimate when
  * the pattern would span more than {@link MAX_BINS} nominal masses.
  *
+ * @param atoms - the atoms: whole counts by atom key ('Cl', '37Cl') (whole counts are not checked here; {@link isotopePattern} checks them).
+ * @param input - the text to name in an error.
+ * @returns the probability of each nominal mass from the lightest (offset), and each one's probability × centroid mass.
+ * @throws PondusError: PATTERN_TOO_LARGE with an estimate when the pattern would span more than {@link MAX_BINS} nominal masses; INTERNAL_ERROR for a key that is not an atom key with isotope data (a plain Error inside, turned into a PondusError at the public API's boundary); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * aggregatedDistribution(new Map([['Cl', 2]])).p[0] // 0.574… (35Cl2)
  */

@@ -35,6 +35,11 @@ export const MAX_ISOTOPOLOGUES = 131_072;
  * The fine structure of a set of atoms to a coverage (0 < coverage ≤ 1; 1 lists every
  * isotopologue above 10⁻³⁰⁰). Refuses when more than {@link MAX_ISOTOPOLOGUES} are needed.
  *
+ * @param atoms - the atoms: counts by atom key ('C', '13C').
+ * @param coverage - the share of the probability to list, above 0 and at most 1 (not checked here; {@link isotopePattern} checks it).
+ * @param input - the text to name in an error.
+ * @returns the isotopologues, most abundant first, and the share of the probability they cover.
+ * @throws PondusError: PATTERN_TOO_LARGE when more than {@link MAX_ISOTOPOLOGUES} isotopologues are needed or the coverage is not reached; INTERNAL_ERROR for a key that is not an atom key with isotope data (a plain Error inside, turned into a PondusError at the public API's boundary); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * fineStructure(new Map([['C', 1], ['H', 4]]), 0.999).isotopologues[0].label // '' (12C 1H4)
  */

@@ -27,6 +27,9 @@ const cache = new Map<string, AtomIsotopes>();
 /**
  * The isotopes of an atom key, lightest first.
  *
+ * @param key - an atom key: an element symbol ('Cl') or a labelled isotope ('13C').
+ * @returns the isotopes' mass numbers, masses (AME2020) and fractions, the principal one, and their source (natural abundance or a label).
+ * @throws PondusError: BAD_ARGUMENT for a key that is not an atom key with isotope data, or an argument of the wrong kind (from the public API's boundary).
  * @example
  * atomIsotopes('Cl').massNumbers // [35, 37]
  * atomIsotopes('13C').fractions  // [1]
@@ -63,6 +66,9 @@ export function atomIsotopes(key: string): AtomIsotopes {
  * The average mass of an atom from its isotopes (Σ fraction × AME2020 mass): ICE × AME, not the
  * CIAAW standard atomic weight.
  *
+ * @param a - the isotopes of an atom, from {@link atomIsotopes}.
+ * @returns the average mass, Σ fraction × mass.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * isotopeAverage(atomIsotopes('Cl')) // 35.4528…
  */

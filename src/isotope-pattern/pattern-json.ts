@@ -24,6 +24,10 @@ export interface PatternJson {
  * The JSON object `pondus pattern --json` writes: the listed peaks by m/z, with their share of
  * all molecules (`abundance`) and their percentage of the largest (`relative`).
  *
+ * @param r - a result of {@link isotopePattern}.
+ * @param extra - keys written first, before the result's own (for example a row's id and line).
+ * @returns the plain JSON object: the listed peaks by m/z with their abundance and relative height, and the pattern's settings and notes.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * patternJson(isotopePattern('Br2')).peaks[1].relative // 100
  */

@@ -34,6 +34,10 @@ function ticks(lo: number, hi: number, count: number): number[] {
 /**
  * Draws the pattern's listed peaks as an SVG document (text).
  *
+ * @param r - a result of {@link isotopePattern}.
+ * @param options - the width and height, whether peaks are labelled, the decimals of the m/z, and a title.
+ * @returns the SVG document as text.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * patternSvg(isotopePattern('Br2')).startsWith('<svg') // true
  */

@@ -79,6 +79,10 @@ export interface PatternResult {
 /**
  * Computes the isotope pattern of a formula, or of an ion of it.
  *
+ * @param formula - the formula of the molecule (or a charged formula, read as the species as written), or null when the ion names its own formula.
+ * @param options - the ion notation ('[M+H]+'), the kind of pattern (aggregated by nominal mass, or fine), the resolving power (which makes it fine, peaks merged within m/R), the coverage of the probability, the smallest peak listed (percent of the largest), and the formula options.
+ * @returns the species and its charge, the listed peaks and all peaks by m/z with their abundance and relative height, the monoisotopic and average m/z, and the notes.
+ * @throws PondusError: BAD_OPTION for a coverage not above 0 and at most 1, a smallest peak outside 0–100, or a resolving power outside 1–10^8; a formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …); BAD_COUNT for a count that is not whole; the codes of {@link ionMass} for an ion (BAD_ION, ION_CONFLICT, …); PATTERN_TOO_LARGE for a pattern too wide or with too many isotopologues to compute; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * isotopePattern('Cl2').peaks.map((p) => Math.round(p.relative)) // [100, 64, 10]
  * isotopePattern('C15H15NO2', { ion: '[M+H]+', resolvingPower: 60000 }).peaks[0].mz // 242.11755…

@@ -20,6 +20,10 @@ export interface Stick {
 /**
  * Merges sticks closer than FWHM = m/R. Sticks come in any order; they go out by m/z.
  *
+ * @param sticks - the sticks (m/z, abundance, label, members), in any order.
+ * @param resolvingPower - the resolving power R (m/Δm at half height).
+ * @returns the merged peaks by m/z, each at the abundance-weighted mean m/z of its members, with their summed abundance and the most abundant member's label.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * resolvePeaks([{ mz: 100, abundance: 1, label: '', members: 1 }, { mz: 100.0005, abundance: 1, label: 'x', members: 1 }], 100000).length // 1
  */

@@ -36,6 +36,10 @@ export function bar(cells: number): string {
 /**
  * The rows of the terminal stick plot.
  *
+ * @param peaks - the peaks to draw, as in a pattern's listed peaks.
+ * @param options - the width of the bars, the decimals of the m/z, whether to colour, and the most rows to show.
+ * @returns one line of text for each peak drawn: its m/z, relative height, label and bar.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * stickPlot(isotopePattern('Br2').peaks)[1] // '157.8367    51.4  M     ████████████████████▌'
  */

@@ -105,6 +105,10 @@ function readDensity(text: string, notes: Note[]): Quantity {
  * The molarity of a concentrated reagent, and the volume of it to take for a
  * target solution (an instruction, at working precision).
  *
+ * @param reagentText - the formula of the concentrated reagent ('HCl').
+ * @param options - its mass fraction as on the label (fraction, required), its density, the target concentration and final volume (for the volume to take), or the volume taken (for the concentration made), and the mass options.
+ * @returns the reagent's molarity and mass concentration, the volume to take (an instruction at working precision) when a target is given, the concentration made from a volume taken, the handling of an acid, and the notes (with the cautions).
+ * @throws PondusError: a formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …); BAD_OPTION for no mass fraction, no density for a grade not in the table, or a target concentration, final volume and volume taken that do not go together; BAD_AMOUNT for a strength that is not a mass fraction or is above 100 %, a density above any aqueous reagent, a target not weaker than the reagent, or a volume to take or taken not less than the final volume; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * displayResult(concentratedReagent('HCl', { fraction: '37 %', density: '1.19 g/mL' }).molarity, 'M').text // '12.08 M'
  * displayInstruction(concentratedReagent('HCl', { fraction: '37 %', density: '1.19 g/mL', concentration: '1.00 M', volume: '500.0 mL' }).take, 'mL').text // '41.40 mL'

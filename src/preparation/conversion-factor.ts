@@ -34,6 +34,12 @@ export interface ConversionFactor {
 /**
  * The mass of `sought` that corresponds to a unit mass of `given`.
  *
+ * @param sought - the formula of the species sought ('Fe').
+ * @param given - the formula of the species weighed ('Fe2O3').
+ * @param element - the element the factor rests on, when the two share more than one besides O and H.
+ * @param options - the mass options.
+ * @returns the element it rests on, the whole-number ratio a:b, the factor (mass of sought per unit mass of given), and the factor with the precision of the molar masses.
+ * @throws PondusError: a formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …); BAD_OPTION for formulas that share no element, or more than one with none chosen, an element not in both, or counts of it that are not whole; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * conversionFactor('Fe', 'Fe2O3').factor.toFixed(4) // '0.6994'
  * conversionFactor('P', 'P2O5').factor.toFixed(4)   // '0.4364'

@@ -93,6 +93,10 @@ function roundAtLeast(x: Decimal): Decimal {
 /**
  * Splits a dilution factor into steps of at most `maxStep` each, round factors first.
  *
+ * @param factor - the overall dilution factor (more than 1).
+ * @param maxStep - the largest factor allowed in one step, 2 or more (not checked here; {@link dilutionSeries} checks it).
+ * @returns the factors of the steps, whose product is the overall factor.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * planSteps(new Decimal(1000), new Decimal(100)).map(String) // ['100', '10']
  * planSteps(new Decimal(50), new Decimal(100)).map(String) // ['50']
@@ -138,6 +142,9 @@ function readFactor(text: string, notes: Note[]): Decimal {
 /**
  * A serial dilution plan: the steps, each a transfer made up to the step's volume.
  *
+ * @param options - the stock and target concentrations, or the dilution factor ('1000' or '1:1000'); the volume of each step; the smallest transfer (default 100 µL) and the largest factor in one step.
+ * @returns the overall factor and the steps, each with its factor, the volume to take (an instruction), the diluent to add and the concentration reached, and the notes.
+ * @throws PondusError: BAD_OPTION for both a factor and a target, or neither a factor nor both concentrations; INCOMPATIBLE_UNITS for stock and target of different kinds; BAD_AMOUNT for a factor that cannot be read, is not more than 1 or is beyond 1:10¹⁵, a target not weaker than the stock, a largest step factor below 2, a smallest transfer over half a step's volume, or a plan of too many steps; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const plan = dilutionSeries({ stock: '1000 µg/mL', target: '1.000 µg/mL', volume: '10.00 mL' })
  * plan.steps.map((s) => s.factor.toString()) // ['100', '10']

@@ -43,6 +43,12 @@ export interface DilutionResult {
 /**
  * The stock volume for a dilution.
  *
+ * @param stockText - the stock concentration (M, g/L, % w/v, % v/v, …).
+ * @param targetText - the target concentration, of the same kind as the stock, or undefined when only the volume taken is given.
+ * @param volumeText - the final volume made up to.
+ * @param takenText - the volume of stock actually taken, for the concentration made (a result).
+ * @returns the stock and solvent volumes (instructions at working precision) when a target is given, the concentration made from the volume taken when one is given, the factor and the notes.
+ * @throws PondusError: INCOMPATIBLE_UNITS for a content by mass (% w/w, mg/kg, …) or stock and target of different kinds; BAD_OPTION for neither a target nor a volume taken; BAD_AMOUNT for a concentration or volume that is not positive, a target above the stock, or a volume taken that is not positive or is more than the final volume; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * displayInstruction(dilute('1.00 M', '0.100 M', '250.0 mL').stockVolume).text // '25.00 mL'
  */

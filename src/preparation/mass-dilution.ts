@@ -42,6 +42,11 @@ function readContent(text: string, what: string, notes: Note[]): Quantity {
 /**
  * A dilution by mass: how much of the stronger material and of the diluent to weigh.
  *
+ * @param stockText - the content of the stronger material, by mass (% w/w, mg/g, µg/g, mg/kg).
+ * @param targetText - the target content, by mass.
+ * @param totalText - the total mass to make.
+ * @returns the masses of the stronger material and of the diluent to weigh (instructions at working precision), and the notes.
+ * @throws PondusError: INCOMPATIBLE_UNITS for a content per volume; BAD_AMOUNT for a content without a unit or above 100 %, a target not weaker than the stronger material, or a total mass that is not positive; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * displayInstruction(diluteByMass('10 % w/w', '2.5 % w/w', '60.0 g').take, 'g').text // '15.00 g'
  */

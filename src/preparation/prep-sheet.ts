@@ -66,6 +66,9 @@ function sheetRows(text: string) {
  * Reads a prep sheet. A row's own problems (a bad formula, a missing volume) surface when the row
  * is computed, so one bad row never stops the others.
  *
+ * @param text - the CSV text of the sheet: a reagent (or form) column, target and volume columns, and optionally id, purity, density, as, weighed and taken.
+ * @returns one row for each data line, with its line number, raw text and cells by column.
+ * @throws PondusError: BAD_RECORD for text that is not valid CSV, an empty sheet, or a header without a reagent (or form), target or volume column; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readPrepSheet('reagent,target,volume\nNaCl,0.100 M,250.0 mL\n')[0].formula // 'NaCl'
  */
@@ -102,6 +105,10 @@ const opt = (s: string) => (s === '' ? undefined : s);
 /**
  * The instruction for one row of a prep sheet, computed as `prepare` computes it.
  *
+ * @param row - a row of {@link readPrepSheet}.
+ * @param options - the mass options.
+ * @returns the row with the result of {@link concentratedReagent} when a density is given, else of {@link prepareSolution}.
+ * @throws PondusError: BAD_RECORD for a row with no reagent, no volume or no target (nor mass weighed or volume taken), a concentrated liquid without a purity or with a mass weighed or 'as', or a volume taken for a solid; the codes of {@link concentratedReagent} or {@link prepareSolution}; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const [row] = readPrepSheet('reagent,form,purity,target,volume\ncopper sulfate,CuSO4·5H2O,98.5 %,0.100 M,250.0 mL\n')
  * displayInstruction(prepRow(row).solution.mass, 'g').text // '6.337 g'

@@ -71,6 +71,11 @@ export interface SaltOptions extends MassOptions {
  * for a dose of parent (an instruction), the parent carried by a salt mass (a
  * result).
  *
+ * @param saltText - the salt's formula: a basic drug's salt as parent·acid (C17H19NO3·HCl·3H2O), an acidic drug's metal salt as one formula (C14H13NaO3).
+ * @param parentText - the parent's formula.
+ * @param options - a mass of parent (a dose: the salt mass is an instruction) or of salt (the parent it carries is a result), and the mass options.
+ * @returns the salt/parent factor, the form of the salt (addition or metal), the salt mass for a dose and the parent mass in a salt mass when asked, and the notes.
+ * @throws PondusError: a formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …); BAD_OPTION for a salt that is neither parent·acid nor a metal salt of the parent; AMBIGUOUS_READING for a metal salt that can be read more than one way; BAD_AMOUNT for a dose or salt mass that is not positive; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * saltFactor('C17H19NO3·HCl·3H2O', 'C17H19NO3').factor.toFixed(4) // '1.3172'
  * saltFactor('C14H13NaO3', 'C14H14O3').form // 'metal' (naproxen sodium)

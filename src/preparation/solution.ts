@@ -131,6 +131,10 @@ const pct = (d: Decimal) => `${d.times(100).toSignificantDigits(4).toFixed()} %`
  * precision), and from the mass actually weighed, the concentration made (a
  * result, with the figures of the measurements).
  *
+ * @param reagentText - the formula of the reagent weighed, e.g. 'CuSO4·5H2O'.
+ * @param options - the target concentration and the volume made up to, the purity (assay) and what it is of (purityBasis), the part the concentration is of (as), the mass actually weighed, and the mass options.
+ * @returns the mass to weigh (an instruction at working precision) when a target is given, the concentration made from the mass weighed (a result) when one is given, the inputs' figures and the notes.
+ * @throws PondusError: a formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …); CONCENTRATED_REAGENT for a reagent that comes as a concentrated solution or a gas; BAD_OPTION for neither a target nor a mass weighed, a purity basis without a purity, or an assay of the part without the part; PART_NOT_IN_FORMULA for a part the reagent does not contain; AMBIGUOUS_PURITY for an assay that could be of the reagent or of the part; INCOMPATIBLE_UNITS for a concentration by mass or volume fraction; BAD_AMOUNT for a concentration without a unit, a concentration, volume or mass weighed that is not positive, a purity not above 0 and at most 100 %, or a content of the part above what the pure reagent holds; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * displayInstruction(prepareSolution('CuSO4·5H2O', { concentration: '0.100 M', volume: '250.0 mL' }).mass, 'g').text // '6.242 g'
  */

@@ -63,6 +63,12 @@ function core(m: MassDetail, options: MassOptions): Map<string, string> {
  * instruction, at working precision). An assay given is that of `use`, the
  * form in hand that is weighed; the amount asked for is of pure `instead`.
  *
+ * @param use - the formula of the form in hand, the one weighed.
+ * @param instead - the formula of the form the amount is asked for in.
+ * @param amount - the amount of pure `instead` wanted, as a mass or in moles ('24.65 g').
+ * @param options - the purity (assay) of the form in hand, and the mass options.
+ * @returns the mass of `use` to weigh (an instruction at working precision), the moles asked for, and the notes.
+ * @throws PondusError: a formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …); BAD_AMOUNT for an amount that is not positive or a purity not above 0 and at most 100 %; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * displayInstruction(substituteForm('MgSO4', 'MgSO4·7H2O', '24.65 g', { purity: '98.0 %' }).mass, 'g').text // '12.28 g'
  */

@@ -22,6 +22,9 @@ export interface BalanceJson {
 /**
  * The stable JSON shape of a balance result.
  *
+ * @param r - a result of {@link balance}.
+ * @returns the stable JSON object of the balance.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * balanceJson(balance('H2 + O2 -> H2O')).coefficients // [2, 1, 2]
  */

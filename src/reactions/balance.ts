@@ -108,6 +108,11 @@ function coefficientText(c: Rational): string {
 /**
  * Writes species with coefficients as an equation.
  *
+ * @param reactants - the reactants' texts, in order.
+ * @param products - the products' texts, in order.
+ * @param coefficients - one coefficient for each reactant then each product (a coefficient of 1 is not written).
+ * @returns the equation as text, sides joined by →.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * equationText(['H2', 'O2'], ['H2O'], [2, 1, 2]) // '2 H2 + O2 → 2 H2O'
  * equationText(['H2', 'O2'], ['H2O'], ['1', '1/2', '1']) // 'H2 + 1/2 O2 → H2O'
@@ -192,6 +197,10 @@ function fixedMap(fix: FixedCoefficients, all: Species[], input: string): Map<nu
 /**
  * Balances a parsed equation; the library's entry point for commands that go on computing.
  *
+ * @param written - an equation read by {@link parseEquation}.
+ * @param options - fix (coefficients to hold: 'written' or { SPECIES: N }) and catalysts to leave out.
+ * @returns the balance result, the equation with its catalysts set aside, and the exact coefficients in the order written.
+ * @throws PondusError: BAD_EQUATION for a written coefficient that is not positive or divides by zero; BAD_OPTION for a fixed coefficient or catalyst that is not a species of the equation, a coefficient fixed twice or not positive, or catalysts that leave a side empty; NO_BALANCE when no coefficients balance every element and the charge; NOT_UNIQUE when the balance is not unique and nothing fixes it; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * balanceParsed(parseEquation('H2 + O2 -> H2O')).result.coefficients // [2, 1, 2]
  */
@@ -329,6 +338,10 @@ function balanceReduced(eq: Equation, options: BalanceOptions): Balanced {
  * Balances an equation with exact rational arithmetic. Plain data: coefficients are numbers,
  * with the exact values as text beside them.
  *
+ * @param input - the equation, reactants and products separated by an arrow (->, → or =), species by +; charges (Fe^3+), electrons (e-) and coefficients may be written.
+ * @param options - fix (coefficients to hold when atoms alone do not settle the balance: 'written' or { SPECIES: N }), catalysts to leave out, and the formula options.
+ * @returns the balanced equation as text, the coefficients as numbers and as exact text, whether it is unique and balanced as written, and the notes.
+ * @throws PondusError: the codes of {@link parseEquation} (EMPTY_INPUT, INPUT_TOO_LONG, BAD_EQUATION, and a species' formula codes such as UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, AMBIGUOUS_READING, …); BAD_EQUATION for a written coefficient that is not positive or divides by zero; BAD_OPTION for a fixed coefficient or catalyst that is not a species of the equation, a coefficient fixed twice or not positive, or catalysts that leave a side empty; NO_BALANCE when no coefficients balance every element and the charge (or none with all species taking part, on the sides written, with the fixed ones); NOT_UNIQUE when the balance is not unique and nothing fixes it; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * balance('Fe^2+ + MnO4^- + H^+ -> Fe^3+ + Mn^2+ + H2O').coefficients // [5, 1, 8, 5, 1, 4]
  * balance('C7H6O3 + C4H6O3 -> C9H8O4 + C2H4O2').balancedAsWritten // true

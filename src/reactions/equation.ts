@@ -75,6 +75,10 @@ function splitSide(side: string, base: number): { text: string; start: number }[
 /**
  * Parses an equation into its species.
  *
+ * @param input - the equation, reactants and products separated by an arrow (->, → or =), species by +.
+ * @param options - the formula options each species is read with.
+ * @returns the reactants and products with their formulas, atoms, charges, written coefficients and columns, any catalysts written on both sides, and the notes.
+ * @throws PondusError: EMPTY_INPUT for an empty equation; INPUT_TOO_LONG past the length limit; BAD_EQUATION for no arrow or more than one, a missing species, too many species, or a species on both sides with different coefficients or that leaves nothing to balance; a species' formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …, with the column in the equation); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * parseEquation('H2 + O2 -> H2O').products[0].formula // 'H2O'
  */

@@ -9,6 +9,9 @@ import type { FixedCoefficients } from './balance.js';
 /**
  * Reads `--fix` texts (each `written` or `SPECIES=N[, SPECIES=N]`).
  *
+ * @param texts - the texts given to --fix: 'written' alone, or SPECIES=N lists.
+ * @returns 'written', or each species with its coefficient as text.
+ * @throws PondusError: USAGE for 'written' given with other texts, a text not written species=N, or a species given twice; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readFixOption(['written']) // 'written'
  * readFixOption(['C4H6O3=5', 'C6H12O6=1']) // { C4H6O3: '5', C6H12O6: '1' }

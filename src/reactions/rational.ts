@@ -153,6 +153,10 @@ export function reducedRowEchelon(matrix: readonly Rational[][], columns: number
  * A basis of the null space of a rational matrix (rows × columns), by reduction
  * to reduced row echelon form. Each basis vector has one free column set to 1.
  *
+ * @param matrix - the rows of the matrix, each with at least `columns` fractions.
+ * @param columns - how many columns to reduce.
+ * @returns the basis vectors of the null space, one for each free column (none when the matrix has full column rank).
+ * @throws PondusError: BAD_NUMBER for a matrix that is not rows of fractions or a column count that is not a whole number of 0 or more; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const r = (n) => Rational.of(BigInt(n))
  * nullSpace([[r(2), r(0), r(-2)], [r(0), r(2), r(-1)]], 3).map((v) => v.map(String)) // [['1', '1/2', '1']]
@@ -177,6 +181,9 @@ export function nullSpace(matrix: Rational[][], columns: number): Rational[][] {
 /**
  * Scales a rational vector to the smallest whole numbers with the same ratios.
  *
+ * @param v - the fractions to scale.
+ * @returns the smallest whole numbers in the same ratios, signs kept.
+ * @throws PondusError: BAD_NUMBER for a list that is not of fractions; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * smallestIntegers([Rational.of(1n, 2n), Rational.ONE]) // [1n, 2n]
  */

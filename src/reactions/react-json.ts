@@ -18,6 +18,9 @@ const lineJson = (l: SpeciesLine) => ({
 /**
  * The stable JSON shape of a react result: amounts in mol and g as numbers, with the figures shown.
  *
+ * @param r - a result of {@link react}.
+ * @returns the stable JSON object: each species' amounts in mol and g as numbers beside the figures shown, the limiting reagent, yields and notes.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * reactJson(react('H2 + O2 -> H2O', { amounts: ['H2=4.00 g', 'O2=16.0 g'] })).limiting // 'O2'
  */

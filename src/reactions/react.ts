@@ -101,6 +101,10 @@ function ratioQuantity(r: Rational): Quantity {
 /**
  * Limiting reagent, theoretical yields and excess for amounts of reactants.
  *
+ * @param equation - the equation, as for {@link balance}.
+ * @param options - amounts of reactants ('H2=4.00 g', 'HCl=25.0 mL of 0.100 M', 'Ac2O=1.5 equiv', …), the actual amount of a product for percent yield, rounding, and the balance options.
+ * @returns each species' coefficient and amounts, the limiting reagent, the theoretical yields, the excess left and the percent yield when an actual amount is given, and the notes.
+ * @throws PondusError: the codes of {@link balance} (BAD_EQUATION, BAD_OPTION, NO_BALANCE, NOT_UNIQUE, the formula codes, …); BAD_AMOUNT for no amounts, an amount not written species=amount, a species not in the equation, a product given as a reactant, a species given twice, equivalents with no reactant to take them of, electrons given by mass, or an actual amount that is not of a product or not positive; BAD_RECORD or INPUT_TOO_LONG for an amount's row that cannot be read (as in {@link readRowText}: an unknown key, a key twice, …); BAD_AMOUNT for a density, purity or solution that cannot be used, or a volume without a density or molarity; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * react('H2 + O2 -> H2O', { amounts: ['H2=4.00 g', 'O2=16.0 g'] }).limiting // 'O2'
  * react('C7H6O3 + C4H6O3 -> C9H8O4 + C2H4O2', { amounts: ['C7H6O3=2.00 g', 'C4H6O3=3.0 equiv'] }).products[0].mass?.display // '2.61 g'

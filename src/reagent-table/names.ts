@@ -69,6 +69,9 @@ export interface NameReading {
  * The formula a reagent's name stands for: a common name of this table, a name of the formula
  * language's table (THF, DMF, TEA), or null when the text is to be read as a formula.
  *
+ * @param text - a reagent as written: a common name, an abbreviation of the formula language (THF, DMF), or a formula.
+ * @returns the formula the name stands for, with the full name and its source, or null when the text is to be read as a formula.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * lookUpName('n-BuLi')?.formula // 'C4H9Li'
  * lookUpName('THF')?.formula // 'C4H8O'
@@ -91,6 +94,10 @@ const ACIDS = new Set(['H2O4S', 'HNO3', 'ClH', 'BrH', 'HI', 'FH', 'ClHO4', 'H3O4
  * reagents are pyrophoric or water-reactive, metal and alkylaluminium hydrides water-reactive,
  * the strong mineral acids (and TFA, HF) corrosive when concentrated (common practice).
  *
+ * @param text - the reagent as written (its name).
+ * @param hill - its formula in Hill order.
+ * @returns 'pyrophoric', 'water-reactive' or 'concentrated-acid', or null for no hazard class known here.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * hazardOf('n-BuLi', 'C4H9Li') // 'pyrophoric'
  * hazardOf('MeMgBr', 'CH3BrMg') // 'water-reactive'

@@ -56,6 +56,9 @@ const ROLES: Readonly<Record<string, ReagentRole | 'solvent' | 'equation'>> = Ob
 /**
  * Reads a procedure file (CSV text).
  *
+ * @param text - the CSV text of the procedure file: columns role, reagent and amount (and optionally formula, purity, density, solution, form, actual).
+ * @returns each row with its line and text, the reagent specs, and the table options the file sets (equation, solvent and concentration, amount obtained).
+ * @throws PondusError: BAD_RECORD for text that is not valid CSV, an empty file, a missing role, reagent or amount column, an unknown role, a second equation or solvent row, or an amount obtained on a row that is not a product or given twice; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readProcedure('role,reagent,amount\nreference,C7H6O3,2.00 g\nproduct,C9H8O4,\n').specs[1].role // 'product'
  */
@@ -116,6 +119,10 @@ function csvCell(v: string): string {
 /**
  * Writes a procedure file from specs and options (the inverse of {@link readProcedure}).
  *
+ * @param specs - the reagent rows to write.
+ * @param options - the table options to write as their own rows or cells (equation, solvent and concentration, amount obtained).
+ * @returns the CSV text of the procedure file, header first, cells quoted where needed.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * writeProcedure([{ role: 'reference', reagent: 'C7H6O3', amount: '2.00 g' }], {}).split('\n')[1] // 'reference,C7H6O3,,2.00 g,,,,,'
  */

@@ -15,6 +15,9 @@ const noteJson = (n: Note) => ({ code: n.code, message: n.message });
 /**
  * The stable JSON shape of one row of a reagent table.
  *
+ * @param r - a row of a {@link reagentTable} result.
+ * @returns the stable JSON object of the row.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * reagentRowJson(reagentTable([{ role: 'reference', reagent: 'C7H6O3', amount: '2.00 g' }]).rows[0]).amount?.display // '14.5 mmol'
  */

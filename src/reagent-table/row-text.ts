@@ -28,6 +28,10 @@ const KEYS: Readonly<Record<string, 'purity' | 'density' | 'solution' | 'form' |
 /**
  * Reads a reagent row written as text.
  *
+ * @param text - the row: REAGENT=AMOUNT then optional KEY=VALUE pieces (purity, density, solution, form, formula), e.g. 'Ac2O=1.5 equiv, density=1.08 g/mL'; a product row may be its reagent alone.
+ * @param role - the row's role (reference, reagent, catalyst, additive, product).
+ * @returns the row as a spec: its role, reagent, amount and the values given for its keys.
+ * @throws PondusError: BAD_RECORD for an empty row, a row with no amount or no reagent, a piece not written key=value, an unknown key or a key given twice (with its column); INPUT_TOO_LONG past 2,000 characters; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readRowText('n-BuLi=1.1 equiv, solution=1.6 M in hexanes', 'reagent').solution // '1.6 M in hexanes'
  * readRowText('C9H8O4', 'product').reagent // 'C9H8O4'

@@ -32,6 +32,9 @@ const CSV_PROBLEMS: Record<string, string> = {
 /**
  * Parses a CSV sheet with a header row (BOM, quotes, ragged rows and blank lines allowed).
  *
+ * @param text - the CSV text, its first row the header.
+ * @returns the trimmed header cells and each later row with its line number, its raw text and its cells.
+ * @throws PondusError: BAD_RECORD for text that is not valid CSV (an unclosed quote, text after a closing quote, …) or an empty sheet; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readCsvSheet('id,C\nA,40.00\n').rows[0] // { line: 2, raw: 'A,40.00', cells: ['A', '40.00'] }
  */
@@ -55,6 +58,9 @@ export function readCsvSheet(text: string): CsvSheet {
 /**
  * The columns of a header that name elements ('C', '%C', 'C%', 'C found'), as [symbol, index].
  *
+ * @param header - the header cells.
+ * @returns each column that names an element, as [symbol, index], in header order.
+ * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * elementColumns(['id', '%C', 'H found', 'notes']) // [['C', 1], ['H', 2]]
  */
