@@ -397,7 +397,8 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
     hi = toNeutral(m.toNumber() / (1 - t));
     if (hi <= 0) throw fail({ code: 'BAD_OPTION', message: `an m/z of ${options.mass} is below the mass of the ion's own atoms (${notation!.canonical}): no molecule fits` });
   } else if (options.molarMass !== undefined) {
-    const m = Number(options.molarMass);
+    // through the one number reader: '0x10' or '1e2 ' is refused, never read some other way
+    const m = readNumber(options.molarMass).value.toNumber();
     molarTolerance = options.molarMassTolerance ?? 0.5;
     if (!(m > 0 && m <= 5000)) throw fail({ code: 'BAD_OPTION', message: 'the molar mass must be between 0 and 5000 g/mol' });
     if (!(molarTolerance > 0 && molarTolerance <= 10)) throw fail({ code: 'BAD_OPTION', message: 'the molar-mass window must be between 0 and 10 g/mol' });

@@ -49,6 +49,7 @@ export function massError(found: string, calculated: Decimal, reportDecimals = 4
   const n = readNumber(found);
   if (n.value.lte(0)) throw fail({ code: 'BAD_NUMBER', message: `the found m/z must be a positive number, not '${found}'` }, found);
   if (/e/i.test(n.text)) throw fail({ code: 'BAD_NUMBER', message: `write the found m/z as a plain decimal number (as in 242.1172), not '${found}'` }, found);
+  if (!calculated.gt(0)) throw fail({ code: 'BAD_NUMBER', message: `the calculated m/z must be a positive number, not ${calculated.toString()}: a ppm error is relative to it` });
   const decimals = Math.max(0, -(n.lsd ?? 0));
   const difference = n.value.minus(calculated);
   const ppm = difference.div(calculated).times(1e6);

@@ -10,7 +10,7 @@
  * the pruning, not an approximation.
  */
 import { fail } from '../errors/pondus-error.js';
-import { atomIsotopes } from './isotope-table.js';
+import { atomIsotopes, checkPatternAtoms } from './isotope-table.js';
 
 /** A distribution over nominal masses: bin i is nominal mass `offset + i`. */
 export interface NominalDistribution {
@@ -124,14 +124,15 @@ export function estimatedBins(atoms: Map<string, number>): number {
  * The aggregated distribution of a set of atoms (whole counts). Refuses with an estimate when
  * the pattern would span more than {@link MAX_BINS} nominal masses.
  *
- * @param atoms - the atoms: whole counts by atom key ('Cl', '37Cl') (whole counts are not checked here; {@link isotopePattern} checks them).
+ * @param atoms - the atoms: whole counts by atom key ('Cl', '37Cl').
  * @param input - the text to name in an error.
  * @returns the probability of each nominal mass from the lightest (offset), and each one's probability × centroid mass.
- * @throws PondusError: PATTERN_TOO_LARGE with an estimate when the pattern would span more than {@link MAX_BINS} nominal masses; INTERNAL_ERROR for a key that is not an atom key with isotope data (a plain Error inside, turned into a PondusError at the public API's boundary); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
+ * @throws PondusError: PATTERN_TOO_LARGE with an estimate when the pattern would span more than {@link MAX_BINS} nominal masses; BAD_ARGUMENT for a key that is not an atom key with isotope data, a count that is not a whole number ≥ 0, or an argument of the wrong kind.
  * @example
  * aggregatedDistribution(new Map([['Cl', 2]])).p[0] // 0.574… (35Cl2)
  */
 export function aggregatedDistribution(atoms: Map<string, number>, input?: string): NominalDistribution {
+  checkPatternAtoms(atoms);
   const bins = estimatedBins(atoms);
   if (bins > MAX_BINS) {
     throw fail({ code: 'PATTERN_TOO_LARGE', message: `the isotope pattern would span about ${bins} nominal masses; pondus computes patterns of up to ${MAX_BINS} (formulas up to a few hundred thousand atoms)` }, input);

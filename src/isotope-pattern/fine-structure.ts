@@ -10,7 +10,7 @@
  * isotopologues that reaches the coverage is kept.
  */
 import { fail } from '../errors/pondus-error.js';
-import { atomIsotopes } from './isotope-table.js';
+import { atomIsotopes, checkPatternAtoms } from './isotope-table.js';
 import { marginal, MODE_ONLY, type Marginal } from './marginal.js';
 
 /** One isotopologue. */
@@ -36,14 +36,16 @@ export const MAX_ISOTOPOLOGUES = 131_072;
  * isotopologue above 10⁻³⁰⁰). Refuses when more than {@link MAX_ISOTOPOLOGUES} are needed.
  *
  * @param atoms - the atoms: counts by atom key ('C', '13C').
- * @param coverage - the share of the probability to list, above 0 and at most 1 (not checked here; {@link isotopePattern} checks it).
+ * @param coverage - the share of the probability to list, above 0 and at most 1.
  * @param input - the text to name in an error.
  * @returns the isotopologues, most abundant first, and the share of the probability they cover.
- * @throws PondusError: PATTERN_TOO_LARGE when more than {@link MAX_ISOTOPOLOGUES} isotopologues are needed or the coverage is not reached; INTERNAL_ERROR for a key that is not an atom key with isotope data (a plain Error inside, turned into a PondusError at the public API's boundary); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
+ * @throws PondusError: PATTERN_TOO_LARGE when more than {@link MAX_ISOTOPOLOGUES} isotopologues are needed or the coverage is not reached; BAD_OPTION for a coverage outside (0, 1]; BAD_ARGUMENT for a key that is not an atom key with isotope data, a count that is not a whole number ≥ 0, or an argument of the wrong kind.
  * @example
  * fineStructure(new Map([['C', 1], ['H', 4]]), 0.999).isotopologues[0].label // '' (12C 1H4)
  */
 export function fineStructure(atoms: Map<string, number>, coverage: number, input?: string): FineStructure {
+  checkPatternAtoms(atoms);
+  if (!(coverage > 0 && coverage <= 1)) throw fail({ code: 'BAD_OPTION', message: `the coverage is a share of the probability above 0 and at most 1 (such as 0.999), not ${coverage}` });
   const keys = [...atoms.keys()].filter((k) => atoms.get(k)! > 0);
   // the best configuration of each element: its probability bounds the others' thresholds
   const modes = keys.map((k) => marginal(k, atoms.get(k)!, MODE_ONLY).probs[0]);

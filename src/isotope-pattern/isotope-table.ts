@@ -5,6 +5,7 @@
  * an element without a natural composition is its longest-lived isotope.
  */
 import { getAtomData } from '../elements/atom-data.js';
+import { fail } from '../errors/pondus-error.js';
 import { naturalIsotopes } from '../elements/nuclides.js';
 
 /** The isotope distribution of one kind of atom. */
@@ -38,10 +39,10 @@ export function atomIsotopes(key: string): AtomIsotopes {
   const hit = cache.get(key);
   if (hit) return hit;
   const k = /^([0-9]*)([A-Za-z]+)$/.exec(key);
-  if (!k) throw new Error(`not an atom key: ${key}`);
+  if (!k) throw fail({ code: 'BAD_ARGUMENT', message: `'${key}' is not an atom key ('C', '13C', '2H')` });
   const symbol = k[2];
   const data = getAtomData(symbol, k[1] ? Number(k[1]) : null);
-  if (!data) throw new Error(`no isotope data for ${key}`);
+  if (!data) throw fail({ code: 'BAD_ARGUMENT', message: `'${key}' is not an atom key with isotope data ('C', '13C', '2H')` });
   let out: AtomIsotopes;
   const natural = naturalIsotopes(symbol);
   if (data.massNumber !== null) {
@@ -76,4 +77,21 @@ export function isotopeAverage(a: AtomIsotopes): number {
   let m = 0;
   for (let i = 0; i < a.masses.length; i++) m += a.fractions[i] * a.masses[i];
   return m;
+}
+
+/**
+ * Checks the atoms of a pattern: every key an atom key with isotope data, every count a whole
+ * number from 0 up.
+ *
+ * @param atoms - counts by atom key.
+ * @returns nothing; it throws on the first bad entry.
+ * @throws PondusError: BAD_ARGUMENT for a key without isotope data or a count that is not a whole number ≥ 0.
+ * @example
+ * checkPatternAtoms(new Map([['C', 6], ['H', 6]])) // undefined
+ */
+export function checkPatternAtoms(atoms: Map<string, number>): void {
+  for (const [key, n] of atoms) {
+    atomIsotopes(key);
+    if (!(Number.isInteger(n) && n >= 0)) throw fail({ code: 'BAD_ARGUMENT', message: `an isotope pattern takes whole counts of atoms: ${key} has ${n}` });
+  }
 }

@@ -6,6 +6,7 @@
  * of close neighbours. A merged peak sits at the abundance-weighted centroid of its members and
  * holds their summed abundance, as a centroided spectrum reports it.
  */
+import { fail } from '../errors/pondus-error.js';
 
 /** A stick of a spectrum. */
 export interface Stick {
@@ -23,11 +24,12 @@ export interface Stick {
  * @param sticks - the sticks (m/z, abundance, label, members), in any order.
  * @param resolvingPower - the resolving power R (m/Δm at half height).
  * @returns the merged peaks by m/z, each at the abundance-weighted mean m/z of its members, with their summed abundance and the most abundant member's label.
- * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
+ * @throws PondusError: BAD_OPTION for a resolving power outside 1 to 10^8; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * resolvePeaks([{ mz: 100, abundance: 1, label: '', members: 1 }, { mz: 100.0005, abundance: 1, label: 'x', members: 1 }], 100000).length // 1
  */
 export function resolvePeaks(sticks: readonly Stick[], resolvingPower: number): Stick[] {
+  if (!(resolvingPower >= 1 && resolvingPower <= 1e8)) throw fail({ code: 'BAD_OPTION', message: `the resolving power is a number from 1 to 10^8 (such as 60000), not ${resolvingPower}` });
   const sorted = [...sticks].sort((a, b) => a.mz - b.mz);
   const out: Stick[] = [];
   let group: Stick[] = [];
