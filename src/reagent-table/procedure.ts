@@ -129,8 +129,10 @@ function csvCell(v: string): string {
 export function writeProcedure(specs: readonly ReagentSpec[], options: Procedure['options']): string {
   const lines = [PROCEDURE_COLUMNS.join(',')];
   if (options.equation) lines.push(['equation', options.equation, '', '', '', '', '', '', ''].map(csvCell).join(','));
+  // the amount obtained is of one product, the first: only its row carries it
+  const first = specs.find((s) => s.role === 'product');
   for (const s of specs) {
-    const actual = s.role === 'product' && options.actual ? options.actual : '';
+    const actual = s === first && options.actual ? options.actual : '';
     lines.push([s.role, s.reagent, s.formula ?? '', s.amount ?? '', s.purity ?? '', s.density ?? '', s.solution ?? '', s.form ?? '', actual].map(csvCell).join(','));
   }
   if (options.concentration) lines.push(['solvent', options.solvent ?? '', '', options.concentration, '', '', '', '', ''].map(csvCell).join(','));

@@ -134,6 +134,10 @@ export interface TableContext {
   productRatio: Map<string, Quantity>;
   options: ReagentTableOptions;
   notes: Note[];
+  /** The product the amount obtained (`actual`) is of: the first product row; null without products. */
+  yieldOf?: ReagentSpec | null;
+  /** How many product rows the table has. */
+  products?: number;
 }
 
 interface Resolved {
@@ -233,7 +237,8 @@ export function tableContext(specs: readonly ReagentSpec[], options: ReagentTabl
     });
     for (const n of b.result.notes) notes.push({ ...n, message: `the equation: ${n.message}` });
   }
-  return { reference: { spec, moles: got.moles, inputs }, productRatio, options, notes };
+  const products = specs.filter((s) => s.role === 'product');
+  return { reference: { spec, moles: got.moles, inputs }, productRatio, options, notes, yieldOf: products[0] ?? null, products: products.length };
 }
 
 
@@ -287,7 +292,13 @@ export function reagentRow(ctx: TableContext, spec: ReagentSpec): ReagentRow {
     const theoretical = multiply(moles, r.molarMass!);
     amountJson = tableAmount(moles, 'result', inputs, 'mmol', rounding);
     mass = tableAmount(theoretical, 'result', inputs, massUnitFor(theoretical), rounding);
-    if (ctx.options.actual) {
+    // the amount obtained is of one product: the first product row (a second one gets no yield, and says so)
+    const yieldHere = ctx.yieldOf === undefined || ctx.yieldOf === null || ctx.yieldOf === spec;
+    if (ctx.options.actual && !yieldHere) {
+      notes.push({ code: 'YIELD_OF_FIRST_PRODUCT', message: `no percent yield: the amount obtained (${ctx.options.actual}) is of the first product, ${ctx.yieldOf!.reagent.trim()}` });
+    }
+    if (ctx.options.actual && yieldHere) {
+      if ((ctx.products ?? 1) > 1) notes.push({ code: 'YIELD_OF_FIRST_PRODUCT', message: `the amount obtained (${ctx.options.actual}) is read as of ${what}, the first of the ${ctx.products} products` });
       const q = measureAs(ctx.options.actual, [[1, 0, 0], [0, 1, 0]], `the amount of ${what} obtained`, notes);
       if (q.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: `the amount of ${what} obtained must be positive` });
       const theo = sameDims(q.dims, [1, 0, 0]) ? theoretical : moles;
