@@ -46,6 +46,10 @@ export interface CalcResult {
 /**
  * Evaluates a calculation with significant figures, units and formula masses.
  *
+ * @param input - the calculation ('8.80 g + 2.1 g', '0.100 M * 250.0 mL * M(NaCl) to g').
+ * @param options - how the result is rounded (`rounding`).
+ * @returns the value, the rounded value, the display text, its significant figures, the unit, the uncertainty when inputs carry ±, the steps and the notes.
+ * @throws PondusError: the codes of parseExpression (BAD_EXPRESSION, UNKNOWN_UNIT, UNCLOSED_GROUP, …); the codes of parseFormula inside M(…) (UNKNOWN_ELEMENT, …); INCOMPATIBLE_UNITS for a sum of different dimensions or a `to` unit of another; DIVISION_BY_ZERO; BAD_NUMBER for a negative uncertainty; NUMBER_OUT_OF_RANGE for a number outside 1e-100 to 1e100 or a result beyond 1e±300; BAD_ARGUMENT when `input` is not a string or `options` not an object or names an unknown rounding mode.
  * @example
  * calc('8.80 g + 2.1 g').display                          // '10.9 g'
  * calc('0.100 M * 250.0 mL * M(CuSO4·5H2O) to g').display  // '6.24 g'
@@ -119,6 +123,9 @@ export interface CalcJson {
 /**
  * The JSON object `pondus calc --json` writes.
  *
+ * @param r - a calculator result (from calc).
+ * @returns `{ input, value, rounded, display, sigFigs, unit, uncertainty?, notes }`.
+ * @throws PondusError: NUMBER_OUT_OF_RANGE when a value cannot be written as a finite number (never for a result of calc); BAD_ARGUMENT when `r` is not a calculator result.
  * @example
  * calcJson(calc('8.80 g + 2.1 g')) // { input: '8.80 g + 2.1 g', value: 10.9, rounded: 10.9, display: '10.9 g', sigFigs: 3, unit: 'g', notes: [] }
  */

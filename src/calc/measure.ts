@@ -13,6 +13,11 @@ import { parseExpression } from './parse-expression.js';
 /**
  * Evaluates a quantity; `of` reads as a product ('25.0 mL of 0.100 M').
  *
+ * @param text - the amount as written ('4.00 g', '25.0 mL of 0.100 M', '0.100 M * 25.00 mL').
+ * @param what - what the amount is, put in front of every message and note ('the quantity' by default).
+ * @param notes - a list that gets a MEASUREMENT note for each remark made while reading (trailing zeros, ratios).
+ * @returns the quantity in the base unit of its dimension, with its precision.
+ * @throws PondusError, each message starting with `what`: the codes of calc (BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, DIVISION_BY_ZERO, NUMBER_OUT_OF_RANGE, the codes of parseFormula inside M(…), …); BAD_ARGUMENT when `text` or `what` is not a string or `notes` not an array.
  * @example
  * measure('25.0 mL of 0.100 M').value.toString() // '0.0025' (mol)
  */
@@ -49,6 +54,12 @@ const MAX_REMEMBERED = 256;
 /**
  * Evaluates a quantity that must have one of the given dimensions.
  *
+ * @param text - the amount as written ('250.0 mL').
+ * @param dims - the dimensions accepted (VOLUME, MASS, …).
+ * @param what - what the amount is, put in front of every message and note ('the volume').
+ * @param notes - a list that gets a MEASUREMENT note for each remark made while reading.
+ * @returns the quantity in the base unit of its dimension, with its precision.
+ * @throws PondusError: BAD_AMOUNT when the amount has none of the dimensions `dims`; the codes of measure (BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, DIVISION_BY_ZERO, NUMBER_OUT_OF_RANGE, …); BAD_ARGUMENT when `text` or `what` is not a string or `dims` or `notes` not an array.
  * @example
  * measureAs('250.0 mL', [VOLUME], 'the volume').value.toString() // '0.25' (litres)
  */

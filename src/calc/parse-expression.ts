@@ -24,6 +24,9 @@ let builder: ExprBuilder | null = null;
 /**
  * Parses a calculation such as `0.100 M * 250.0 mL * M(CuSO4·5H2O) to g`.
  *
+ * @param input - the calculation text.
+ * @returns the expression tree and the target unit after `to`, if any; nothing is computed.
+ * @throws PondusError: EMPTY_INPUT, INPUT_TOO_LONG (over the length or 500 operations), CONTROL_CHARACTER, NESTING_TOO_DEEP, UNCLOSED_GROUP, UNMATCHED_CLOSING, UNKNOWN_UNIT for an unknown word, UNEXPECTED_CHARACTER, BAD_EXPRESSION for bad syntax or an exponent that is not a whole number up to 100; BAD_ARGUMENT when `input` is not a string.
  * @example
  * parseExpression('8.80 g + 2.1 g').expr.kind // 'binary'
  */

@@ -23,6 +23,9 @@ export interface CompositionJson {
 /**
  * The JSON object `pondus composition --json` writes for one result.
  *
+ * @param r - a composition result (from composition).
+ * @returns the row object: input, formula, molar mass, each element's count, mass and mass percent, the part when one was asked for, and the notes.
+ * @throws PondusError: BAD_ARGUMENT when `r` is not a composition result.
  * @example
  * compositionJson(composition('H2O')).elements[0].symbol // 'H'
  * String(compositionJson(composition('H2O')).elements[0].massPercent) // '11.19…'
@@ -46,6 +49,10 @@ export function compositionJson(r: CompositionResult): CompositionJson {
  * The same text as JSON.stringify(compositionJson(r)), written straight to one line (with `line`,
  * JSON.stringify({ line, ...compositionJson(r) }), as the CLI's JSON writer gives every row).
  *
+ * @param r - a composition result (from composition).
+ * @param line - the input's line number to put first in the row; left out by default.
+ * @returns one line of JSON text, without a newline.
+ * @throws PondusError: BAD_ARGUMENT when `r` is not a composition result or `line` is given and not a number.
  * @example
  * compositionJsonLine(composition('H2')) // '{"input":"H2","formula":"H2","molarMass":2.016,"elements":[{"symbol":"H","count":2,"mass":2.016,"massPercent":100}],"notes":[]}'
  */
@@ -83,9 +90,10 @@ function columnRank(label: string): number {
  * The header of the wide CSV form: one `X_percent` column per element that occurs in `results`
  * (the first block of a batch), C and H first, then alphabetically.
  *
- * @param results the results the columns are decided from
- * @param withPart whether the `--part` columns follow
- * @returns the column names (the shared writer adds notes, error and message)
+ * @param results - the results the element columns are decided from.
+ * @param withPart - whether the `--part` columns (part, partCount, partMassPercent) follow.
+ * @returns the column names (the shared writer adds notes, error and message).
+ * @throws PondusError: BAD_ARGUMENT when `results` is not an array of composition results.
  * @example
  * compositionCsvColumns([composition('H2O'), composition('NaCl')], false) // ['input', 'formula', 'molarMass', 'H_percent', 'Cl_percent', 'Na_percent', 'O_percent']
  */
@@ -101,6 +109,10 @@ export function compositionCsvColumns(results: readonly CompositionResult[], wit
  * with no column (it first occurs after the block the header came from) is not dropped: a note
  * gives its percent and points to `--long`.
  *
+ * @param r - a composition result (from composition).
+ * @param columns - the header the row is written under (from compositionCsvColumns).
+ * @returns the cells, and a NO_COLUMN note for any element the header has no column for.
+ * @throws PondusError: BAD_ARGUMENT when `r` is not a composition result or `columns` not an array of strings.
  * @example
  * compositionCsvRow(composition('H2O'), ['input', 'formula', 'molarMass', 'H_percent', 'O_percent']).cells[3] // 11.190674437968359
  */
@@ -137,6 +149,10 @@ export const COMPOSITION_LONG_COLUMNS = ['input', 'formula', 'molarMass', 'symbo
  * The long CSV rows of a result: one per element, under {@link COMPOSITION_LONG_COLUMNS}
  * (with `--part`, the part columns follow on every row).
  *
+ * @param r - a composition result (from composition).
+ * @param withPart - whether each row ends with the part columns.
+ * @returns one row of cells per element.
+ * @throws PondusError: BAD_ARGUMENT when `r` is not a composition result.
  * @example
  * compositionCsvLongRows(composition('H2O'), false).map((row) => row[3]) // ['H', 'O']
  */

@@ -76,10 +76,10 @@ const SCALE = 10 ** SCALE_DIGITS;
 /**
  * The composition of a formula with its detailed mass: the exact values tables round from.
  *
- * @param input a formula, or a tree from parseFormula
- * @param options the weight table, reading options and an optional fragment
- * @returns the plain result with the detail beside it
- * @throws PondusError for bad input, PART_NOT_IN_FORMULA when the fragment is not in the formula
+ * @param input - a formula ('CuSO4·5H2O'), or a tree from parseFormula.
+ * @param options - the atomic-weight table, the reading options of parseFormula and an optional fragment (`part`).
+ * @returns the plain result with the detailed mass and the fragment's share beside it.
+ * @throws PondusError: for a formula string or the fragment, the codes of parseFormula (UNKNOWN_ELEMENT, UNCLOSED_GROUP, BAD_COUNT, …); COUNT_TOO_LARGE past 10^12 atoms of one kind; PART_NOT_IN_FORMULA when the fragment is not in the formula; BAD_ARGUMENT when `input` is neither a string nor a parsed formula, or `options` is not an object or names an unknown weight table (a `part` that is not a string is not checked and gives INTERNAL_ERROR).
  * @example
  * compositionDetail('H2O').mass.molarMass.toString() // '18.015'
  */
@@ -122,10 +122,10 @@ export function compositionDetail(input: string | FormulaTree, options: Composit
 /**
  * Mass percent of each element in a formula, and optionally of a fragment, as plain data.
  *
- * @param input a formula, or a tree from parseFormula
- * @param options the weight table, reading options and an optional fragment
- * @returns the composition: numbers, with the exact molar mass as text beside them
- * @throws PondusError for bad input, PART_NOT_IN_FORMULA when the fragment is not in the formula
+ * @param input - a formula ('CuSO4·5H2O'), or a tree from parseFormula.
+ * @param options - the atomic-weight table, the reading options of parseFormula and an optional fragment (`part`).
+ * @returns the composition: each element's count, mass and mass percent as numbers, the exact molar mass as text beside them, the fragment's share when asked for, and the notes.
+ * @throws PondusError: for a formula string or the fragment, the codes of parseFormula (UNKNOWN_ELEMENT, UNCLOSED_GROUP, BAD_COUNT, …); COUNT_TOO_LARGE past 10^12 atoms of one kind; PART_NOT_IN_FORMULA when the fragment is not in the formula; BAD_ARGUMENT when `input` is neither a string nor a parsed formula, or `options` is not an object or names an unknown weight table (a `part` that is not a string is not checked and gives INTERNAL_ERROR).
  * @example
  * composition('H2O').elements.map(e => [e.symbol, e.massPercent.toFixed(2)]) // [['H','11.19'], ['O','88.81']]
  * composition('CuSO4·5H2O', { part: 'H2O' }).part?.massPercent.toFixed(2)   // '36.08'

@@ -78,6 +78,10 @@ interface Part {
  * Components may be formulas or names (`lactose=70.0 mg`: no elements for it); `total=` or
  * `sample=` gives the whole mass, and one component may be `rest` (the total less the others).
  *
+ * @param input - the components as KEY=VALUE pairs ('NaCl=5.00 g, KCl=3.00 g'), with `total=` or `sample=` for the whole mass and at most one `=rest`.
+ * @param options - the atomic-weight table and reading options for the formulas, as for formulaMass.
+ * @returns the total mass, each component's mass and percent, each element's mass and percent (from the components with a formula), any mass not accounted for, and the notes.
+ * @throws PondusError: BAD_AMOUNT for a pair that is not component=mass, a missing or non-mass unit, a negative or zero mass, a key given twice, a second rest or a rest without a total, or components heavier than the total; UNKNOWN_UNIT and NUMBER_OUT_OF_RANGE for the amount; the codes of parseFormula for a key that is neither a formula nor a name (UNKNOWN_ELEMENT, UNCLOSED_GROUP, …); BAD_ARGUMENT when `input` is not a string or `options` not an object.
  * @example
  * // OpenStax Chemistry 2e, Example 3.9: 7.34 g C, 1.85 g H, 2.85 g N
  * mixtureComposition('C=7.34 g, H=1.85 g, N=2.85 g').components.map(c => displayMeasured(c.massPercent).text) // ['61.0', '15.4', '23.7']
@@ -187,6 +191,10 @@ export function safeMixtureComposition(input: string, options: MassOptions = {})
 /**
  * The JSON form of a mixture result: full values plus the reported figures.
  *
+ * @param r - a mixture result (from mixtureComposition).
+ * @param rounding - how the displayed figures are rounded: 'half-even' (default) or 'half-up'.
+ * @returns the plain object: every mass and percent as a number at full precision beside its reported text.
+ * @throws PondusError: BAD_ARGUMENT when `r` is not a mixture result or `rounding` is not a rounding mode.
  * @example
  * mixtureJson(mixtureComposition('NaCl=5.00 g, KCl=3.00 g')).components[0].massPercentDisplay // '62.5'
  */

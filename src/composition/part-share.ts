@@ -34,6 +34,11 @@ export interface PartShare {
 /**
  * The mass share of `part` in a formula whose mass has been computed.
  *
+ * @param whole - a detailed mass result of the whole formula (from formulaMassDetail).
+ * @param part - the fragment as a formula ('SO4', 'H2O').
+ * @param options - the atomic-weight table and reading options for the fragment, as for formulaMass.
+ * @returns how many fragment units the formula holds, their mass and mass percent, and whether they were counted where written or from the atom totals (with a note).
+ * @throws PondusError: PART_NOT_IN_FORMULA when the formula lacks the fragment's atoms; the codes of parseFormula for the fragment (EMPTY_INPUT, UNKNOWN_ELEMENT, …); BAD_ARGUMENT when `whole` is not a detailed mass result, `part` not a string or `options` not an object.
  * @example
  * partShare(formulaMassDetail('Fe2(SO4)3'), 'SO4').count // 3
  */

@@ -62,6 +62,9 @@ const BY_SYMBOL: ReadonlyMap<string, ElementData> = new Map(ELEMENTS.map((e) => 
 /**
  * Looks up an element by its symbol (case-sensitive, as symbols are).
  *
+ * @param symbol - an element symbol, case-sensitive ('Fe', not 'FE').
+ * @returns the element's data (number, name, standard atomic weight), or undefined for a string that is no element symbol.
+ * @throws PondusError: BAD_ARGUMENT when `symbol` is not a string.
  * @example
  * getElement('Fe')?.name // 'iron'
  */
@@ -72,6 +75,9 @@ export function getElement(symbol: string): ElementData | undefined {
 /**
  * True when `symbol` is one of the 118 element symbols.
  *
+ * @param symbol - the value to test; any value is accepted.
+ * @returns true for one of the 118 symbols, false for anything else (a non-string too).
+ * @throws PondusError: none in practice; BAD_ARGUMENT is never raised, as any argument is accepted.
  * @example
  * isElementSymbol('Co') // true
  * isElementSymbol('CO') // false

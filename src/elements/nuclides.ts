@@ -50,6 +50,10 @@ function allNuclides(): Map<string, string> {
 /**
  * The AME2020 atomic mass of a nuclide, or undefined when AME2020 lists no such nuclide.
  *
+ * @param symbol - an element symbol ('C'; hydrogen's isotopes are written 'H' with their mass number).
+ * @param massNumber - the mass number (13 for carbon-13).
+ * @returns the nuclide with its AME2020 mass as exact decimal text, or undefined when there is none (an unknown symbol too).
+ * @throws PondusError: BAD_ARGUMENT when `symbol` is not a string or `massNumber` not a number.
  * @example
  * getNuclide('C', 13)?.mass // '13.00335483534'
  */
@@ -65,6 +69,9 @@ export function getNuclide(symbol: string, massNumber: number): Nuclide | undefi
 /**
  * The naturally occurring isotopes of an element (empty for elements with none in ICE 2013).
  *
+ * @param symbol - an element symbol ('Cl').
+ * @returns each natural isotope with its mass number, abundance, uncertainty and mass; an empty array for an element without a natural composition or a string that is no element symbol.
+ * @throws PondusError: BAD_ARGUMENT when `symbol` is not a string.
  * @example
  * naturalIsotopes('Cl').map(i => i.massNumber) // [35, 37]
  */
@@ -76,6 +83,9 @@ export function naturalIsotopes(symbol: string): NaturalIsotope[] {
  * The isotope used for monoisotopic mass: the most abundant natural isotope or,
  * for elements without a natural composition, the longest-lived isotope.
  *
+ * @param symbol - an element symbol ('Br').
+ * @returns the nuclide used for monoisotopic mass, with its mass as exact decimal text.
+ * @throws PondusError: UNKNOWN_ELEMENT for a string that is no element symbol (D and T too, with a hint to write [2H] or [3H]); INTERNAL_ERROR if the data lack both a natural composition and a longest-lived isotope; BAD_ARGUMENT when `symbol` is not a string.
  * @example
  * principalIsotope('Br').massNumber // 79
  */

@@ -378,7 +378,7 @@ export function isGuarded(fn: unknown): boolean {
  *
  * @param fn - a function that throws only PondusError (a {@link guarded} one).
  * @returns the same function returning a SafeResult.
- * @throws nothing for a guarded function: every error becomes `{ success: false }`.
+ * @throws nothing for a guarded function: its PondusError, BAD_ARGUMENT included, becomes `{ success: false }`; an error of another type from an unguarded `fn` propagates.
  * @example
  * const half = safely(guarded('half', (x) => x / 2, ['number']))
  * half(3) // { success: true, data: 1.5 }

@@ -53,6 +53,9 @@ export function fail(issue: Issue, input?: string): PondusError {
 /**
  * Runs `fn` and turns a thrown PondusError into a failed SafeResult; other errors propagate.
  *
+ * @param fn - a function to run, taking no arguments.
+ * @returns `{ success: true, data }` with what `fn` returned, or `{ success: false, error }` when it threw a PondusError.
+ * @throws PondusError: BAD_ARGUMENT when `fn` is not a function; an error of another type thrown by `fn` reaches the caller as INTERNAL_ERROR (or DIVISION_BY_ZERO) rather than as a failed result.
  * @example
  * toSafe(() => parseFormula('H2O')).success // true
  * toSafe(() => parseFormula('Xx')).success  // false

@@ -29,6 +29,10 @@ const MAX_SHOWN = 100;
  * Renders an error for people: the message, the input with a caret under the
  * column, and any hint. This is the only place errors are turned into text.
  *
+ * @param error - a PondusError with at least one issue.
+ * @param options - the batch line number, the emphasis wrapper and the naming of options (all optional).
+ * @returns the text for people, one or more lines without a final newline.
+ * @throws PondusError: BAD_ARGUMENT when `error` is not a PondusError with issues or `options` is not an object.
  * @example
  * renderError(safeParseFormula('Xx2').error) // "error UNKNOWN_ELEMENT: unknown element symbol 'Xx'\n  Xx2\n  ^^"
  */
@@ -116,6 +120,10 @@ export interface IssueJson {
 /**
  * The JSON form of an error's first issue, as written in a failed row's `error`.
  *
+ * @param error - a PondusError with at least one issue.
+ * @param naming - how the options a message names are written (the library's names by default).
+ * @returns the first issue as `{ code, message, column, hint? }`, with `column` null when the issue has none.
+ * @throws PondusError: BAD_ARGUMENT when `error` is not a PondusError with issues.
  * @example
  * errorJson(safeParseFormula('Xx2').error) // { code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Xx'", column: 1 }
  */

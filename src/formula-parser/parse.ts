@@ -43,6 +43,10 @@ let hintDepth = 0;
 /**
  * Parses a chemical formula into a typed tree. Throws a {@link PondusError} on bad input.
  *
+ * @param input - the formula text ('CuSO4·5H2O', '[Fe(CN)6]^4-', 'Ph3P').
+ * @param options - how abbreviations are read (`abbreviations`) and the longest input accepted (`maxLength`).
+ * @returns the typed formula tree: its components, charge and notes.
+ * @throws PondusError listing every problem found: EMPTY_INPUT, INPUT_TOO_LONG, CONTROL_CHARACTER, UNEXPECTED_CHARACTER, UNEXPECTED_TOKEN, UNKNOWN_ELEMENT, UNKNOWN_ISOTOPE, UNCLOSED_GROUP, UNMATCHED_CLOSING, MISMATCHED_BRACKET, EMPTY_GROUP, NESTING_TOO_DEEP, BAD_COUNT, COUNT_TOO_LARGE, BAD_CHARGE, AMBIGUOUS_CHARGE, MISPLACED_CHARGE, SPACE_IN_FORMULA, AMBIGUOUS_READING, INEXACT_FRACTION; BAD_ARGUMENT when `input` is not a string or `options` not an object.
  * @example
  * parseFormula('CuSO4·5H2O').components.length // 2
  * parseFormula('[Fe(CN)6]^4-').charge          // -4

@@ -35,6 +35,9 @@ let touched: number[] = [];
  * Totals the atoms of a formula tree over the dense per-atom tables, in Hill order.
  * Throws COUNT_TOO_LARGE past 10^12 atoms of one kind.
  *
+ * @param tree - a parsed formula (from parseFormula).
+ * @returns the atom totals: dense-table ids in Hill order, their exact counts, whether all are whole, and the ids in order of first appearance.
+ * @throws PondusError: COUNT_TOO_LARGE past 10^12 atoms of one kind; UNKNOWN_ELEMENT for an atom the tables have no data for (a hand-built tree); BAD_ARGUMENT when `tree` is not a parsed formula.
  * @example
  * atomVector(parseFormula('CuSO4·5H2O')).counts // [1, 10, 9, 1]
  */
@@ -80,6 +83,9 @@ export function atomVector(tree: FormulaTree): AtomVector {
 /**
  * Totals the atoms of a formula tree, keyed by atom key in order of first appearance.
  *
+ * @param tree - a parsed formula (from parseFormula).
+ * @returns a map from atom key ('C', '13C') to its exact total, in order of first appearance.
+ * @throws PondusError: COUNT_TOO_LARGE past 10^12 atoms of one kind; UNKNOWN_ELEMENT for an atom the tables have no data for (a hand-built tree); BAD_ARGUMENT when `tree` is not a parsed formula.
  * @example
  * [...flattenFormula(parseFormula('CuSO4·5H2O'))] // [['Cu', 1], ['S', 1], ['O', 9], ['H', 10]]
  */

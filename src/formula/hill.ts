@@ -43,6 +43,9 @@ function describe(key: string): HillEntry {
 /**
  * The atom keys of a count map in Hill order.
  *
+ * @param counts - atom keys ('C', 'H', '13C'), such as an array or a count map's keys().
+ * @returns the same keys in Hill order.
+ * @throws PondusError: BAD_ARGUMENT when `counts` is a string, not iterable, or holds something that is not an atom key.
  * @example
  * hillOrder(new Map([['O', 1], ['H', 2]]).keys()) // ['H', 'O']
  */
@@ -96,6 +99,11 @@ export function chargeText(charge: number): string {
 /**
  * The Hill formula of a count map, with its charge.
  *
+ * @param counts - atom totals keyed by atom key (from flattenFormula).
+ * @param charge - the charge to append ('^2-'); 0 by default.
+ * @param order - the keys in the order to write them; Hill order by default.
+ * @returns the formula text, such as 'CuH10O9S' or 'O4S^2-'.
+ * @throws PondusError: BAD_ARGUMENT when `counts` is not a Map, `charge` not a number or `order` not an array; a map key that is not an atom key ('H-') is not checked and gives INTERNAL_ERROR.
  * @example
  * hillFormula(flattenFormula(parseFormula('CuSO4·5H2O')), 0) // 'CuH10O9S'
  */

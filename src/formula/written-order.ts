@@ -80,8 +80,8 @@ export interface WrittenOrderOptions {
  *
  * @param keys - the atom keys of a count map (element symbols, or isotope keys such as '13C').
  * @param options - `strict` for the Table VI order without the conventions for acids and halogen oxoanions.
- * @returns the keys in written order.
- * @throws nothing: a key that names no element goes last.
+ * @returns the keys in written order; a key that names no element goes last.
+ * @throws PondusError: BAD_ARGUMENT when `keys` is not iterable or `options` not an object; the keys themselves are not checked (a string is taken as its characters).
  * @example
  * writtenOrder(['Cl', 'Cu']) // ['Cu', 'Cl']
  * writtenOrder(['O', 'P']) // ['P', 'O']
@@ -125,10 +125,10 @@ function lowestMetalRank(symbols: Set<string>): number {
  * inorganic answer, a label) rather than one it echoes: 'CuCl2', not Hill's 'Cl2Cu'.
  *
  * @param counts - atom counts (from {@link flattenFormula}).
- * @param charge - the charge, written as '^3-' after the formula.
+ * @param charge - the charge, written as '^3-' after the formula; 0 by default.
  * @param options - `strict` for Table VI order without the conventions (see {@link writtenOrder}).
  * @returns the formula text.
- * @throws nothing.
+ * @throws PondusError: BAD_ARGUMENT when `counts` is not a Map, `charge` not a number or `options` not an object; a key that is not an atom key, or a count that is not an amount, is not checked and gives INTERNAL_ERROR.
  * @example
  * writtenFormula(new Map([['Cl', 2], ['Cu', 1]])) // 'CuCl2'
  * writtenFormula(new Map([['O', 4], ['P', 1]]), -3) // 'PO4^3-'

@@ -281,10 +281,10 @@ function plainResult(core: MassCore): MassResult {
 /**
  * The molar, monoisotopic and nominal mass of a formula, as plain data. Throws a PondusError for bad input.
  *
- * @param input a formula, or a tree from parseFormula
- * @param options the weight table and reading options
- * @returns the masses, numbers with their exact decimals beside them
- * @throws PondusError with the parser's issue codes, COUNT_TOO_LARGE past 10^12 atoms of one kind
+ * @param input - a formula ('CuSO4·5H2O'), or a tree from parseFormula.
+ * @param options - the atomic-weight table (`weights`) and the reading options of parseFormula.
+ * @returns the molar, monoisotopic and nominal mass as numbers, with their exact decimals as strings beside them, the Hill formula, the charge and the notes.
+ * @throws PondusError: for a formula string, the codes of parseFormula (UNKNOWN_ELEMENT, UNCLOSED_GROUP, BAD_COUNT, …); COUNT_TOO_LARGE past 10^12 atoms of one kind; BAD_ARGUMENT when `input` is neither a string nor a parsed formula, or `options` is not an object or names an unknown weight table.
  * @example
  * formulaMass('H2O').molarMass             // 18.015
  * formulaMass('H2O').monoisotopicMassExact // '18.010564683056'
@@ -386,10 +386,10 @@ class Detail implements MassDetail {
  * The mass of a formula with exact Decimal values, the tree, the atom totals and per-element
  * contributions: what the library's own calculations build on. Throws a PondusError for bad input.
  *
- * @param input a formula, or a tree from parseFormula
- * @param options the weight table and reading options
- * @returns the detailed mass result
- * @throws PondusError with the parser's issue codes, COUNT_TOO_LARGE past 10^12 atoms of one kind
+ * @param input - a formula ('CuSO4·5H2O'), or a tree from parseFormula.
+ * @param options - the atomic-weight table (`weights`) and the reading options of parseFormula.
+ * @returns the detailed mass result: Decimal masses, the tree, the atom totals and the per-element contributions.
+ * @throws PondusError: for a formula string, the codes of parseFormula (UNKNOWN_ELEMENT, UNCLOSED_GROUP, BAD_COUNT, …); COUNT_TOO_LARGE past 10^12 atoms of one kind; BAD_ARGUMENT when `input` is neither a string nor a parsed formula, or `options` is not an object or names an unknown weight table.
  * @example
  * formulaMassDetail('H2O').molarMass.toString()        // '18.015'
  * formulaMassDetail('H2O').monoisotopicMass.toString() // '18.010564683056'
@@ -402,6 +402,9 @@ export function formulaMassDetail(input: string | FormulaTree, options: MassOpti
 /**
  * The plain result of a detailed one (the same numbers, no Decimal).
  *
+ * @param d - a detailed mass result (from formulaMassDetail).
+ * @returns the same masses as formulaMass gives, as plain data.
+ * @throws PondusError: BAD_ARGUMENT when `d` is not a detailed mass result.
  * @example
  * plainMass(formulaMassDetail('NaCl')).molarMassExact // '58.43976928'
  */
@@ -412,6 +415,10 @@ export function plainMass(d: MassDetail): MassResult {
 /**
  * The average molar mass of a formula in g/mol, exact.
  *
+ * @param input - a formula ('NaCl'), or a tree from parseFormula.
+ * @param options - the atomic-weight table (`weights`) and the reading options of parseFormula.
+ * @returns the average molar mass in g/mol as an exact Decimal.
+ * @throws PondusError: for a formula string, the codes of parseFormula (UNKNOWN_ELEMENT, UNCLOSED_GROUP, BAD_COUNT, …); COUNT_TOO_LARGE past 10^12 atoms of one kind; BAD_ARGUMENT when `input` is neither a string nor a parsed formula, or `options` is not an object or names an unknown weight table.
  * @example
  * molarMass('NaCl').toString() // '58.43976928'
  */

@@ -37,6 +37,9 @@ export function notesJson(notes: readonly { code: string; message: string }[]): 
 /**
  * The JSON object `pondus mass --json` writes for one result; numbers at full precision.
  *
+ * @param r - a mass result (from formulaMass).
+ * @returns the row object: input, formula, molar and monoisotopic mass, nominal mass, charge and notes (code and message).
+ * @throws PondusError: BAD_ARGUMENT when `r` is not a mass result.
  * @example
  * massJson(formulaMass('H2O')) // { input: 'H2O', formula: 'H2O', molarMass: 18.015, monoisotopicMass: 18.010564683056, nominalMass: 18, charge: 0, notes: [] }
  */
@@ -57,6 +60,10 @@ export function massJson(r: MassResult): MassJson {
  * hot path, without an intermediate object. With `line`, the row starts with the input's line
  * number, as the CLI's JSON writer gives every row (JSON.stringify({ line, ...massJson(r) })).
  *
+ * @param r - a mass result (from formulaMass).
+ * @param line - the input's line number to put first in the row; left out by default.
+ * @returns one line of JSON text, without a newline.
+ * @throws PondusError: BAD_ARGUMENT when `r` is not a mass result or `line` is given and not a number.
  * @example
  * massJsonLine(formulaMass('H2O')) // '{"input":"H2O","formula":"H2O","molarMass":18.015,…}'
  */
@@ -71,6 +78,9 @@ export const MASS_COLUMNS = ['input', 'formula', 'molarMass', 'monoisotopicMass'
 /**
  * The CSV/TSV cells of a mass result, matching {@link MASS_COLUMNS}: the exact decimals.
  *
+ * @param r - a mass result (from formulaMass).
+ * @returns the cells in the order of MASS_COLUMNS, the masses as exact decimal text.
+ * @throws PondusError: BAD_ARGUMENT when `r` is not a mass result.
  * @example
  * massCells(formulaMass('H2O')) // ['H2O', 'H2O', '18.015', '18.010564683056', 18, 0]
  */

@@ -13,6 +13,9 @@ import type { MassDetail } from './formula-mass.js';
 /**
  * The molar mass with its precision from the tabulated atomic weights.
  *
+ * @param r - a detailed mass result (from formulaMassDetail).
+ * @returns the molar mass as a Measured whose last significant decimal place is the coarsest of the atomic weights used (0 for a mass number standing in for a weight).
+ * @throws PondusError: BAD_ARGUMENT when `r` is not a detailed mass result.
  * @example
  * displayMeasured(reportedMolarMass(formulaMassDetail('NaCl'))).text // '58.44'
  */

@@ -38,6 +38,9 @@ const SQRT3 = new Decimal(3).sqrt();
 /**
  * The molar mass with its standard uncertainty from the atomic-weight intervals and uncertainties.
  *
+ * @param r - a detailed mass result (from formulaMassDetail).
+ * @returns the molar mass (interval elements at the middle of their interval), its standard uncertainty (k = 1) and each element's term; a labelled nuclide counts with no uncertainty.
+ * @throws PondusError: NO_STANDARD_WEIGHT for an element without a standard atomic weight (Tc, Pu); BAD_ARGUMENT when `r` is not a detailed mass result.
  * @example
  * molarMassUncertainty(formulaMassDetail('H2O')).standardUncertainty.toSignificantDigits(2).toString() // '0.00026'
  */
@@ -68,6 +71,10 @@ export function molarMassUncertainty(r: MassDetail): MolarMassUncertainty {
  * A value with its standard uncertainty as people write it: the uncertainty to
  * two significant figures, the value to the same decimal place (GUM §7.2.6).
  *
+ * @param value - the value.
+ * @param u - its standard uncertainty, not negative.
+ * @returns the text 'value ± u', rounded half-even.
+ * @throws PondusError: BAD_ARGUMENT when `value` or `u` is not a Decimal.
  * @example
  * formatWithUncertainty(new Decimal('18.01535'), new Decimal('0.000264')) // '18.01535 ± 0.00026'
  */

@@ -30,6 +30,10 @@ export interface QuantityDisplay {
 /**
  * The unit a quantity is reported in: the one asked for, else its own, else the base unit of its dimension.
  *
+ * @param q - a quantity.
+ * @param wanted - the unit asked for, as a symbol or a unit; null or left out for none.
+ * @returns the unit to report in, or null for a pure number or a dimension without a unit symbol.
+ * @throws PondusError: UNKNOWN_UNIT for an unknown symbol; INCOMPATIBLE_UNITS when `wanted` is of another dimension; BAD_ARGUMENT when `q` is not a Quantity or `wanted` is not a unit, a string or null.
  * @example
  * reportUnit(quantity(readNumber('0.250'), unitOf('L')), 'mL')?.symbol // 'mL'
  */
@@ -52,6 +56,11 @@ export function reportUnit(q: Quantity, wanted?: string | Unit | null): Unit | n
 /**
  * Reports a quantity in a unit, rounded once.
  *
+ * @param q - a quantity.
+ * @param wanted - the unit to report in, as a symbol or a unit; by default its own unit, else the base unit.
+ * @param rounding - 'half-even' (default) or 'half-up'.
+ * @returns the text ('0.250 g'), the figure alone, the unrounded and rounded values in that unit, the significant figures, the unit symbol, the last digit's position and whether it rounds to zero.
+ * @throws PondusError: UNKNOWN_UNIT for an unknown symbol; INCOMPATIBLE_UNITS when `wanted` is of another dimension; BAD_ARGUMENT when `q` is not a Quantity, `wanted` not a unit, a string or null, or `rounding` not a rounding mode.
  * @example
  * displayQuantity(measure('250. mg'), 'g').text // '0.250 g'
  */

@@ -117,6 +117,11 @@ function inUnit(q: Quantity, wanted?: string | Unit | null): { unit: Unit | null
 /**
  * An instruction at working precision, in a unit.
  *
+ * @param ins - an instruction (a mass to weigh, a volume to take).
+ * @param wanted - the unit to show it in, as a symbol or a unit; by default its own unit, else the base unit.
+ * @param rounding - 'half-even' (default) or 'half-up'.
+ * @returns the text, the figure, the unrounded and rounded values, the figures shown (the textbook figures, at least 4) and the unit.
+ * @throws PondusError: UNKNOWN_UNIT for an unknown symbol; INCOMPATIBLE_UNITS when `wanted` is of another dimension; BAD_ARGUMENT when `ins` is not an instruction, `wanted` not a unit, a string or null, or `rounding` not a rounding mode.
  * @example
  * displayInstruction(prepareSolution('NaCl', { concentration: '0.1 M', volume: '250 mL' }).mass, 'g').text // '1.461 g'
  */
@@ -128,6 +133,11 @@ export function displayInstruction(ins: Instruction, wanted?: string | Unit | nu
 /**
  * A result with its textbook figures, in a unit (the sig-fig engine's own display).
  *
+ * @param q - a quantity computed from measurements.
+ * @param wanted - the unit to show it in, as a symbol or a unit; by default its own unit, else the base unit.
+ * @param rounding - 'half-even' (default) or 'half-up'.
+ * @returns the text, the figure, the unrounded and rounded values, the textbook significant figures and the unit.
+ * @throws PondusError: UNKNOWN_UNIT for an unknown symbol; INCOMPATIBLE_UNITS when `wanted` is of another dimension; BAD_ARGUMENT when `q` is not a Quantity, `wanted` not a unit, a string or null, or `rounding` not a rounding mode.
  * @example
  * displayResult(measure('0.09984 M')).text // '0.09984 M'
  */
@@ -202,6 +212,11 @@ export interface AmountJson {
 /**
  * The JSON of an instruction.
  *
+ * @param ins - an instruction (a mass to weigh, a volume to take).
+ * @param wanted - the unit of the display text, as a symbol or a unit; by default its own unit, else the base unit.
+ * @param rounding - 'half-even' (default) or 'half-up'.
+ * @returns `{ kind: 'instruction', value, unit, display, sigFigs, textbookSigFigs }`, the value unrounded in the base unit.
+ * @throws PondusError: UNKNOWN_UNIT for an unknown symbol; INCOMPATIBLE_UNITS when `wanted` is of another dimension; BAD_ARGUMENT when `ins` is not an instruction, `wanted` not a unit, a string or null, or `rounding` not a rounding mode.
  * @example
  * instructionJson(instruction(measure('0.1 M * 250 mL * 58.44 g/mol'), []), 'g').display // '1.461 g'
  */
@@ -213,6 +228,11 @@ export function instructionJson(ins: Instruction, wanted?: string | Unit | null,
 /**
  * The JSON of a result.
  *
+ * @param q - a quantity computed from measurements.
+ * @param wanted - the unit of the display text, as a symbol or a unit; by default its own unit, else the base unit.
+ * @param rounding - 'half-even' (default) or 'half-up'.
+ * @returns `{ kind: 'result', value, unit, display, sigFigs }`, the value unrounded in the base unit.
+ * @throws PondusError: UNKNOWN_UNIT for an unknown symbol; INCOMPATIBLE_UNITS when `wanted` is of another dimension; BAD_ARGUMENT when `q` is not a Quantity, `wanted` not a unit, a string or null, or `rounding` not a rounding mode.
  * @example
  * resultJson(measure('1.4587 g / 58.44 g/mol / 250.0 mL'), 'M').display // '0.09984 M'
  */

@@ -40,6 +40,9 @@ export interface Measured {
 /**
  * An exact number: it never limits precision.
  *
+ * @param value - the number, as a number, a numeric string or a Decimal.
+ * @returns the value with no precision limit (`lsd` null).
+ * @throws PondusError: BAD_ARGUMENT when `value` is not a number, a Decimal or a string that reads as one.
  * @example
  * exact(2).lsd // null
  */
@@ -65,6 +68,9 @@ export function msd(value: Decimal): number {
  * counts as 1 here, so that arithmetic with it stays defined; the reported
  * figure says it has none (see displayMeasured).
  *
+ * @param m - a measured number.
+ * @returns the number of significant figures (at least 1), or Infinity for an exact number.
+ * @throws PondusError: BAD_ARGUMENT when `m` is not a Measured.
  * @example
  * sigFigsOf({ value: new Decimal('18.015'), lsd: -3 }) // 5
  * sigFigsOf(times(readNumber('0.9996'), readNumber('1.00')))        // 3
@@ -121,6 +127,10 @@ export function withSigFigs(value: Decimal, n: number): Measured {
 /**
  * Product: the result keeps the fewest significant figures of the measured factors.
  *
+ * @param a - a measured number.
+ * @param b - a measured number.
+ * @returns the product, limited to the fewer significant figures of the two (an exact factor does not limit).
+ * @throws PondusError: BAD_ARGUMENT when `a` or `b` is not a Measured.
  * @example
  * sigFigsOf(times(readNumber('1.008'), exact(2))) // 4
  */
@@ -129,8 +139,13 @@ export function times(a: Measured, b: Measured): Measured {
 }
 
 /**
- * Quotient: the result keeps the fewest significant figures. Throws RangeError on division by zero.
+ * Quotient: the result keeps the fewest significant figures. Throws RangeError on division by zero
+ * (DIVISION_BY_ZERO through the public export).
  *
+ * @param a - the dividend, a measured number.
+ * @param b - the divisor, a measured number.
+ * @returns the quotient, limited to the fewer significant figures of the two.
+ * @throws PondusError: DIVISION_BY_ZERO when `b` is zero (the public export turns the RangeError into it); BAD_ARGUMENT when `a` or `b` is not a Measured.
  * @example
  * displayMeasured(dividedBy(readNumber('8.80'), readNumber('2.0'))).text // '4.4'
  */
@@ -146,6 +161,10 @@ function byFigures(value: Decimal, a: Measured, b: Measured): Measured {
 /**
  * Sum: the result keeps the fewest decimal places (the highest last-digit position).
  *
+ * @param a - a measured number.
+ * @param b - a measured number.
+ * @returns the sum, to the coarser of the two last decimal places.
+ * @throws PondusError: BAD_ARGUMENT when `a` or `b` is not a Measured.
  * @example
  * plus(readNumber('2.016'), readNumber('15.999')).lsd // -3
  */
@@ -156,6 +175,10 @@ export function plus(a: Measured, b: Measured): Measured {
 /**
  * Difference: as for sums.
  *
+ * @param a - the measured number to subtract from.
+ * @param b - the measured number to subtract.
+ * @returns the difference, to the coarser of the two last decimal places.
+ * @throws PondusError: BAD_ARGUMENT when `a` or `b` is not a Measured.
  * @example
  * displayMeasured(minus(readNumber('10.0'), readNumber('2.25'))).text // '7.8'
  */
@@ -172,6 +195,9 @@ function maxLsd(a: number | null, b: number | null): number | null {
 /**
  * Sum of many measured numbers.
  *
+ * @param items - the measured numbers to add.
+ * @returns their sum, to the coarsest last decimal place among them (an exact 0 for none).
+ * @throws PondusError: BAD_ARGUMENT when `items` is not an array of Measured.
  * @example
  * sumMeasured([readNumber('1.0'), readNumber('2.25')]).lsd // -1
  */

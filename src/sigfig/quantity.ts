@@ -20,6 +20,10 @@ export interface Quantity extends Measured {
 /**
  * A quantity from a measured number and an optional unit.
  *
+ * @param m - a measured number, in the unit given.
+ * @param unit - its unit (from unitOf), or null for a pure number.
+ * @returns the quantity in the base unit of its dimension, with its precision moved by the unit's power of ten and no sensitivities.
+ * @throws PondusError: BAD_ARGUMENT when `m` is not a Measured or `unit` is neither a unit nor null.
  * @example
  * displayQuantity(quantity(readNumber('250.'), unitOf('mg')), 'g').text // '0.250 g'
  */
@@ -50,6 +54,11 @@ function describe(q: Quantity): string {
 /**
  * Sum of two quantities of the same dimension; fewest decimal places.
  *
+ * @param a - a quantity.
+ * @param b - a quantity of the same dimension.
+ * @param column - the 1-based column to give an error, in a longer input.
+ * @returns the sum, to the coarser last decimal place, in the unit of `a` (else of `b`), with both inputs' sensitivities.
+ * @throws PondusError: INCOMPATIBLE_UNITS when the dimensions differ; BAD_ARGUMENT when `a` or `b` is not a Quantity or `column` is given and not a number.
  * @example
  * displayQuantity(add(quantity(readNumber('8.80'), unitOf('g')), quantity(readNumber('2.1'), unitOf('g')))).text // '10.9 g'
  */
@@ -61,7 +70,17 @@ export function add(a: Quantity, b: Quantity, column?: number): Quantity {
   return { ...m, dims: a.dims, unit: a.unit ?? b.unit, grad: combine(a.grad, b.grad, (g) => g, (g) => g) };
 }
 
-/** Difference of two quantities of the same dimension. */
+/**
+ * Difference of two quantities of the same dimension.
+ *
+ * @param a - the quantity to subtract from.
+ * @param b - the quantity to subtract, of the same dimension.
+ * @param column - the 1-based column to give an error, in a longer input.
+ * @returns the difference, to the coarser last decimal place, in the unit of `a` (else of `b`), with both inputs' sensitivities.
+ * @throws PondusError: INCOMPATIBLE_UNITS when the dimensions differ; BAD_ARGUMENT when `a` or `b` is not a Quantity or `column` is given and not a number.
+ * @example
+ * displayQuantity(subtract(quantity(readNumber('10.0'), unitOf('mL')), quantity(readNumber('2.25'), unitOf('mL')))).text // '7.8 mL'
+ */
 export function subtract(a: Quantity, b: Quantity, column?: number): Quantity {
   if (!sameDims(a.dims, b.dims)) {
     throw fail({ code: 'INCOMPATIBLE_UNITS', message: `cannot subtract ${describe(b)} (${baseUnitText(b.dims) || 'no unit'}) from ${describe(a)} (${baseUnitText(a.dims) || 'no unit'})`, column });
@@ -83,6 +102,10 @@ function productUnit(a: Quantity, b: Quantity): Unit | null {
 /**
  * Product; fewest significant figures, exact numbers never limit.
  *
+ * @param a - a quantity.
+ * @param b - a quantity.
+ * @returns the product, to the fewer significant figures of the two (exact numbers never limit), with the dimensions added.
+ * @throws PondusError: BAD_ARGUMENT when `a` or `b` is not a Quantity.
  * @example
  * displayQuantity(multiply(quantity(readNumber('0.100'), unitOf('M')), quantity(readNumber('250.0'), unitOf('mL'))), 'mol').text // '0.0250 mol'
  */
@@ -94,6 +117,11 @@ export function multiply(a: Quantity, b: Quantity): Quantity {
 /**
  * Quotient; fewest significant figures. Division by zero is an error.
  *
+ * @param a - the dividend.
+ * @param b - the divisor.
+ * @param column - the 1-based column to give an error, in a longer input.
+ * @returns the quotient, to the fewer significant figures of the two, with the dimensions subtracted.
+ * @throws PondusError: DIVISION_BY_ZERO when `b` is zero; BAD_ARGUMENT when `a` or `b` is not a Quantity or `column` is given and not a number.
  * @example
  * displayQuantity(divide(quantity(readNumber('5.00'), unitOf('g')), quantity(readNumber('58.44'), unitOf('g/mol')))).text // '0.0856 mol'
  */
@@ -106,7 +134,15 @@ export function divide(a: Quantity, b: Quantity, column?: number): Quantity {
   return { ...m, dims: addDims(a.dims, b.dims, -1), unit, grad };
 }
 
-/** Negation. */
+/**
+ * Negation.
+ *
+ * @param a - a quantity.
+ * @returns the quantity with its sign and its sensitivities reversed; its precision and unit unchanged.
+ * @throws PondusError: BAD_ARGUMENT when `a` is not a Quantity.
+ * @example
+ * displayQuantity(negate(quantity(readNumber('2.50'), unitOf('g')))).text // '-2.50 g'
+ */
 export function negate(a: Quantity): Quantity {
   return { ...a, value: a.value.neg(), grad: mapGrad(a.grad, (g) => g.neg()) };
 }
@@ -114,6 +150,11 @@ export function negate(a: Quantity): Quantity {
 /**
  * Whole-number power: the result keeps the base's significant figures.
  *
+ * @param a - the base.
+ * @param n - the exponent, a whole number.
+ * @param column - the 1-based column to give an error, in a longer input.
+ * @returns the power, with the base's significant figures and its dimensions times `n`, and no preferred unit.
+ * @throws PondusError: DIVISION_BY_ZERO for zero to a negative power; NUMBER_OUT_OF_RANGE when the result is not finite or beyond 10^±10000; BAD_ARGUMENT when `a` is not a Quantity or `n` not a number.
  * @example
  * displayQuantity(power(quantity(readNumber('1.50'), null), 2)).text // '2.25'
  */
@@ -129,6 +170,10 @@ export function power(a: Quantity, n: number, column?: number): Quantity {
 /**
  * Standard uncertainty of a quantity from its sensitivities and the inputs' standard uncertainties.
  *
+ * @param q - a quantity with its sensitivities (`grad`).
+ * @param inputs - the standard uncertainty of each input, keyed as in `grad`.
+ * @returns the combined standard uncertainty, √Σ(∂q/∂xᵢ · u(xᵢ))², first order, inputs independent; 0 when none applies.
+ * @throws PondusError: BAD_ARGUMENT when `q` is not a Quantity or `inputs` not a Map.
  * @example
  * const q = { ...quantity(readNumber('8.80'), unitOf('g')), grad: new Map([[0, new Decimal(2)]]) }
  * standardUncertainty(q, new Map([[0, new Decimal('0.05')]])).toString() // '0.1'

@@ -29,6 +29,10 @@ export const MIN_MAGNITUDE = new Decimal('1e-100');
 /**
  * Reads a measured number from its text.
  *
+ * @param text - the number as written ('0.00340', '1300', '2.50e2'); spaces at the ends are ignored.
+ * @param column - the 1-based column of the text in a longer input, given to any error.
+ * @returns the value with the power of ten of its last significant digit, the trimmed text and whether trailing zeros made the precision ambiguous.
+ * @throws PondusError: BAD_NUMBER for text that is not a plain decimal number; NUMBER_OUT_OF_RANGE for an exponent past ±1000 or a size outside 1e-100 to 1e100 (zero apart); BAD_ARGUMENT when `text` is not a string or `column` is given and not a number.
  * @example
  * readNumber('0.00340').lsd  // -5  (3 significant figures)
  * readNumber('1300').lsd     // 2   (2 significant figures, ambiguous)

@@ -48,6 +48,11 @@ function wholeIn(n: unknown, min: number, max: number, what: string): number {
 /**
  * Rounds to a number of significant figures.
  *
+ * @param value - the Decimal to round.
+ * @param n - the significant figures to keep, a whole number from 1 to 1000.
+ * @param rounding - 'half-even' (default) or 'half-up'.
+ * @returns the rounded Decimal (zero stays zero).
+ * @throws PondusError: BAD_NUMBER for a value that is not finite; BAD_OPTION for `n` above 1000; BAD_ARGUMENT when `value` is not a Decimal, `n` not a whole number of at least 1 or `rounding` not a rounding mode.
  * @example
  * roundToSigFigs(new Decimal('2.45'), 2).toString() // '2.4' (half-to-even)
  */
@@ -62,6 +67,11 @@ export function roundToSigFigs(value: Decimal, n: number, rounding: RoundingMode
 /**
  * Rounds so that the last digit kept is at 10^lsd.
  *
+ * @param value - the Decimal to round.
+ * @param lsd - the power of ten of the last digit kept (-2 for hundredths), a whole number from -10000 to 10000.
+ * @param rounding - 'half-even' (default) or 'half-up'.
+ * @returns the rounded Decimal.
+ * @throws PondusError: BAD_NUMBER for a value that is not finite; BAD_OPTION for `lsd` not a whole number in range; BAD_ARGUMENT when `value` is not a Decimal, `lsd` not a number or `rounding` not a rounding mode.
  * @example
  * roundToPosition(new Decimal('58.43976928'), -2).toString() // '58.44'
  */
@@ -116,6 +126,10 @@ function superscript(n: number): string {
  * its last digit at 10⁻³ shows 10.000. A measured value that rounds to zero
  * reports 0 significant figures and sets `belowPrecision`.
  *
+ * @param m - a measured number.
+ * @param rounding - 'half-even' (default) or 'half-up'.
+ * @returns the reported text, the rounded value, its significant figures (null for exact, 0 below precision), the last digit's position and whether it rounds to zero.
+ * @throws PondusError: BAD_NUMBER for a value that is not finite; BAD_OPTION for an `lsd` or `sigFigs` that is not a whole number in range; BAD_ARGUMENT when `m` is not a Measured or `rounding` not a rounding mode.
  * @example
  * displayMeasured({ value: new Decimal('2437.2'), lsd: 2 }).text // '2.4 × 10³'
  * displayMeasured(times(readNumber('0.9996'), readNumber('1.00'))).text      // '1.00'

@@ -170,6 +170,10 @@ export const UNIT_SYMBOLS: readonly string[] = Object.freeze(TABLE.map((u) => u.
 /**
  * Looks up a unit by symbol or accepted spelling; throws UNKNOWN_UNIT otherwise.
  *
+ * @param symbol - a unit symbol ('mg', 'mL', 'g/mol') or an accepted spelling ('ug').
+ * @param column - the 1-based column of the symbol in a longer input, given to the error.
+ * @returns the unit: its symbol, power of ten and dimensions.
+ * @throws PondusError: UNKNOWN_UNIT for a symbol pondus does not know (the hint lists those it does); BAD_ARGUMENT when `symbol` is not a string or `column` is given and not a number.
  * @example
  * unitOf('mg').exp10 // -3
  * unitOf('ug').symbol // 'µg'
