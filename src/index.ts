@@ -44,7 +44,7 @@ export const hillOrder = /* @__PURE__ */ guarded('hillOrder', hillOrder_, ['atom
 export type { Amount } from './formula/amount.js';
 export { TABLE_VI_SEQUENCE, type WrittenOrderOptions } from './formula/written-order.js';
 import { writtenOrder as writtenOrder_, writtenFormula as writtenFormula_ } from './formula/written-order.js';
-export const writtenOrder = /* @__PURE__ */ guarded('writtenOrder', writtenOrder_, ['iterable', 'options?']);
+export const writtenOrder = /* @__PURE__ */ guarded('writtenOrder', writtenOrder_, ['atomKeys', 'options?']);
 export const writtenFormula = /* @__PURE__ */ guarded('writtenFormula', writtenFormula_, ['map', 'number?', 'options?']);
 
 // element data
@@ -73,7 +73,7 @@ export const reportedMolarMass = /* @__PURE__ */ guarded('reportedMolarMass', re
 export { MASS_COLUMNS, type MassJson, type NoteJson } from './mass/mass-json.js';
 import { massJson as massJson_, massJsonLine as massJsonLine_, massCells as massCells_ } from './mass/mass-json.js';
 export const massJson = /* @__PURE__ */ guarded('massJson', massJson_, ['massResult']);
-export const massJsonLine = /* @__PURE__ */ guarded('massJsonLine', massJsonLine_, ['massResult', 'number?']);
+export const massJsonLine = /* @__PURE__ */ guarded('massJsonLine', massJsonLine_, ['massResult', 'posint?']);
 export const massCells = /* @__PURE__ */ guarded('massCells', massCells_, ['massResult']);
 
 // composition
@@ -88,7 +88,7 @@ export const partShare = /* @__PURE__ */ guarded('partShare', partShare_, ['mass
 export { COMPOSITION_LONG_COLUMNS, type CompositionJson } from './composition/composition-json.js';
 import { compositionJson as compositionJson_, compositionJsonLine as compositionJsonLine_, compositionCsvColumns as compositionCsvColumns_, compositionCsvRow as compositionCsvRow_, compositionCsvLongRows as compositionCsvLongRows_ } from './composition/composition-json.js';
 export const compositionJson = /* @__PURE__ */ guarded('compositionJson', compositionJson_, ['compositionResult']);
-export const compositionJsonLine = /* @__PURE__ */ guarded('compositionJsonLine', compositionJsonLine_, ['compositionResult', 'number?']);
+export const compositionJsonLine = /* @__PURE__ */ guarded('compositionJsonLine', compositionJsonLine_, ['compositionResult', 'posint?']);
 export const compositionCsvColumns = /* @__PURE__ */ guarded('compositionCsvColumns', compositionCsvColumns_, ['compositionResult[]', 'any']);
 export const compositionCsvRow = /* @__PURE__ */ guarded('compositionCsvRow', compositionCsvRow_, ['compositionResult', 'text[]']);
 export const compositionCsvLongRows = /* @__PURE__ */ guarded('compositionCsvLongRows', compositionCsvLongRows_, ['compositionResult', 'any']);

@@ -27,7 +27,10 @@ export function measure(text: string, what = 'the quantity', notes?: Note[]): Qu
     // a match may start only where a run of white space starts, so a long run is tried once, not once per space
     const expr = text.replace(/(?<!\s)\s+of\s+/g, ' * ');
     try {
-      const ev = evaluate(parseExpression(expr));
+      const parsed = parseExpression(expr);
+      // a conversion is the calculator's (calc '… to mL'); here it would be dropped without a word
+      if (parsed.target) throw fail({ code: 'BAD_EXPRESSION', message: `'to ${parsed.target.unit}' converts a result in the calculator; give the quantity alone here`, column: expr === text ? parsed.target.start + 1 : undefined }, text);
+      const ev = evaluate(parsed);
       read = { result: ev.result, notes: ev.notes };
     } catch (e) {
       if (e instanceof PondusError) throw new PondusError(e.issues.map((i) => ({ ...i, message: `${what}: ${i.message}` })), text);

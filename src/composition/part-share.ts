@@ -43,6 +43,7 @@ export interface PartShare {
  * partShare(formulaMassDetail('Fe2(SO4)3'), 'SO4').count // 3
  */
 export function partShare(whole: MassDetail, part: string, options: MassOptions = {}): PartShare {
+  if (typeof part !== 'string') throw fail({ code: 'BAD_ARGUMENT', message: `the part must be a formula written as text ('H2O'), not ${typeof part}` });
   const frag = formulaMassDetail(part, { ...options });
   const fragCounts = frag.atoms;
   let count: Amount | null = countWritten(whole.tree, fragCounts);

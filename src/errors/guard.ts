@@ -126,11 +126,11 @@ function fits(base: PlainKind, v: unknown): boolean {
     case 'tree':
       return typeof v === 'string' || (typeof v === 'object' && v !== null && Array.isArray((v as { components?: unknown }).components));
     case 'numeric':
-      return typeof v === 'number' || typeof v === 'string' || Decimal.isDecimal(v);
+      return (typeof v === 'number' && Number.isFinite(v)) || typeof v === 'string' || Decimal.isDecimal(v);
     case 'notation':
       return typeof v === 'string' || (typeof v === 'object' && v !== null && Array.isArray((v as { terms?: unknown }).terms));
     case 'number':
-      return typeof v === 'number';
+      return typeof v === 'number' && !Number.isNaN(v);
     case 'posint':
       return typeof v === 'number' && Number.isSafeInteger(v) && v >= 1;
     case 'rounding':

@@ -74,11 +74,12 @@ export function molarMassUncertainty(r: MassDetail): MolarMassUncertainty {
  * @param value - the value.
  * @param u - its standard uncertainty, not negative.
  * @returns the text 'value ± u', rounded half-even.
- * @throws PondusError: BAD_ARGUMENT when `value` or `u` is not a Decimal.
+ * @throws PondusError: BAD_NUMBER for a negative or non-finite uncertainty or value; BAD_ARGUMENT when `value` or `u` is not a Decimal.
  * @example
  * formatWithUncertainty(new Decimal('18.01535'), new Decimal('0.000264')) // '18.01535 ± 0.00026'
  */
 export function formatWithUncertainty(value: Decimal, u: Decimal): string {
+  if (!value.isFinite() || !u.isFinite() || u.isNegative()) throw fail({ code: 'BAD_NUMBER', message: `a value and its uncertainty are finite, the uncertainty not negative: not ${value.toString()} ± ${u.toString()}` });
   if (u.isZero()) return `${value.toFixed()} ± 0`;
   const u2 = u.toSignificantDigits(2, Decimal.ROUND_HALF_EVEN);
   const decimals = Math.max(0, -(u2.e - 1));

@@ -159,6 +159,7 @@ export function negate(a: Quantity): Quantity {
  * displayQuantity(power(quantity(readNumber('1.50'), null), 2)).text // '2.25'
  */
 export function power(a: Quantity, n: number, column?: number): Quantity {
+  if (!Number.isInteger(n) || Math.abs(n) > 1000) throw fail({ code: 'BAD_NUMBER', message: `a quantity is raised to a whole-number power (up to ±1000), not ${n}`, column });
   if (n < 0 && a.value.isZero()) throw fail({ code: 'DIVISION_BY_ZERO', message: 'zero to a negative power', column });
   const value = a.value.pow(n);
   if (!value.isFinite() || Math.abs(value.e) > 10_000) throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: 'the result is out of range', column });
