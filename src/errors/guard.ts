@@ -32,6 +32,9 @@ const SHAPES = {
   candidateResult: { name: 'a candidate-formula result (from candidateFormulas)', fields: { input: 'text', ratios: 'object', candidates: 'array', notes: 'array' } },
   patternResult: { name: 'an isotope pattern (from isotopePattern)', fields: { input: 'text', charge: 'number', peaks: 'array', allPeaks: 'array', notes: 'array' } },
   peak: { name: 'a peak of an isotope pattern', fields: { mz: 'number', abundance: 'number', relative: 'number', shift: 'number' } },
+  conversionFactor: { name: 'a conversion factor (from conversionFactor)', fields: { sought: 'massDetail', given: 'massDetail', element: 'text', factor: 'decimal', reported: 'measured' } },
+  gravimetricResult: { name: 'a gravimetric result (from gravimetric)', fields: { analyte: 'text', weighed: 'text', factor: 'conversionFactor', analyteMass: 'quantity|null', massPercent: 'quantity|null', notes: 'array' } },
+  basisResult: { name: 'a basis conversion (from convertBasis)', fields: { factor: 'conversionFactor', value: 'quantity|null', converted: 'quantity|null', notes: 'array' } },
   atomIsotopes: { name: 'the isotopes of an atom (from atomIsotopes)', fields: { massNumbers: 'array', masses: 'array', fractions: 'array' } },
   // options objects with required fields (each an options object too: weights and rounding are checked)
   titrationOptions: {
