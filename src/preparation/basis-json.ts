@@ -38,8 +38,9 @@ export interface BasisJson {
  * @throws PondusError BAD_ARGUMENT (from the public API) when `r` is not a basis result or `rounding` not a rounding mode.
  * @example
  * const row = basisJson(convertBasis('P2O5', 'P', { value: '12.5 %' }))
- * row.converted // { kind: 'result', value: 0.0545533521703…, unit: '', display: '5.46 %', sigFigs: 3, figure: '5.46', displayUnit: '%' }
- * row.value.display // '12.5 %'
+ * row.value // { kind: 'result', value: 0.125, unit: '', display: '12.5 %', sigFigs: 3, figure: '12.5', displayUnit: '%' }
+ * row.converted.value // 0.05455…
+ * row.converted.display // '5.46 %'
  */
 export function basisJson(r: BasisResult, rounding: RoundingMode = 'half-even'): BasisJson {
   return {

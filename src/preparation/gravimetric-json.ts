@@ -48,8 +48,10 @@ function percentQuantity(q: Quantity): Quantity {
  * @throws PondusError BAD_ARGUMENT (from the public API) when `r` is not a gravimetric result or `rounding` not a rounding mode.
  * @example
  * const row = gravimetricJson(gravimetric('Cl', 'AgCl', { weighedMass: '0.2866 g', sampleMass: '0.5000 g' }))
- * row.analyteMass // { kind: 'result', value: 0.0708909963982…, unit: 'g', display: '0.07089 g', sigFigs: 4, figure: '0.07089', displayUnit: 'g' }
- * row.massPercent // { kind: 'result', value: 0.1417819927964…, unit: '', display: '14.18 %', sigFigs: 4, figure: '14.18', displayUnit: '%' }
+ * row.analyteMass.display // '0.07089 g'
+ * row.massPercent.value // 0.14178…
+ * row.massPercent.display // '14.18 %'
+ * row.massPercent.unit // ''
  */
 export function gravimetricJson(r: GravimetricResult, rounding: RoundingMode = 'half-even'): GravimetricJson {
   return {
