@@ -326,6 +326,8 @@ export { type StandardiseResult, type StandardiseOptions } from './assay/standar
 import { standardise as standardise_ } from './assay/standardise.js';
 export const standardise = /* @__PURE__ */ guarded('standardise', standardise_, ['text', 'standardiseOptions']);
 export const safeStandardise = /* @__PURE__ */ safely(standardise);
+import { standardiseJson as standardiseJson_ } from './assay/standardise-json.js';
+export const standardiseJson = /* @__PURE__ */ guarded('standardiseJson', standardiseJson_, ['standardiseResult', 'text', 'rounding?']);
 export { SAMPLE_BASES, type SampleBasis, type SampleContent, type BasisConversion } from './assay/sample-basis.js';
 import { convertSampleBasis as convertSampleBasis_, readBasis as readBasis_, removedFraction as removedFraction_ } from './assay/sample-basis.js';
 export const convertSampleBasis = /* @__PURE__ */ guarded('convertSampleBasis', convertSampleBasis_, ['any', 'text', 'text', 'object']);
@@ -341,6 +343,8 @@ import { replicates as replicates_, splitValues as splitValues_ } from './assay/
 export const replicates = /* @__PURE__ */ guarded('replicates', replicates_, ['text', 'options?']);
 export const splitValues = /* @__PURE__ */ guarded('splitValues', splitValues_, ['text', 'array']);
 export const safeReplicates = /* @__PURE__ */ safely(replicates);
+import { replicatesJson as replicatesJson_ } from './assay/replicates-json.js';
+export const replicatesJson = /* @__PURE__ */ guarded('replicatesJson', replicatesJson_, ['replicateResult', 'text']);
 import { tCritical as tCritical_, twoSidedP as twoSidedP_, incompleteBeta as incompleteBeta_, logGamma as logGamma_ } from './assay/student-t.js';
 export const tCritical = /* @__PURE__ */ guarded('tCritical', tCritical_, ['number', 'number']);
 export const twoSidedP = /* @__PURE__ */ guarded('twoSidedP', twoSidedP_, ['number', 'number']);

@@ -40,6 +40,8 @@ const SHAPES = {
   potencyResult: { name: 'a potency result (from potency)', fields: { given: 'quantity', basis: 'text', asIs: 'quantity', weigh: 'instruction|null', notes: 'array' } },
   alligationResult: { name: 'an alligation result (from alligation)', fields: { by: 'text', target: 'object', higherParts: 'quantity', lowerParts: 'quantity', higherFraction: 'quantity', total: 'quantity|null', higherAmount: 'quantity|null', lowerAmount: 'quantity|null', notes: 'array' } },
   strengthForms: { name: 'a strength in its forms (from strengthForms)', fields: { kind: 'text', value: 'quantity', ratio: 'decimal', forms: 'array', notes: 'array' } },
+  standardiseResult: { name: 'a standardisation (from standardise)', fields: { standard: 'massDetail', ratio: 'object', moles: 'quantity', netTitre: 'quantity', molarity: 'quantity', notes: 'array' } },
+  replicateResult: { name: 'replicate statistics (from replicates)', fields: { n: 'number', mean: 'measured', sd: 'decimal', rsdPercent: 'decimal', halfWidth: 'decimal', reported: 'text', notes: 'array' } },
   atomIsotopes: { name: 'the isotopes of an atom (from atomIsotopes)', fields: { massNumbers: 'array', masses: 'array', fractions: 'array' } },
   // options objects with required fields (each an options object too: weights and rounding are checked)
   titrationOptions: {

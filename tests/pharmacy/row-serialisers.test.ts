@@ -1,4 +1,4 @@
-// The compounding commands' rows are written by one serialiser each in the library: the CLI's JSON
+// The compounding and QC commands' rows are written by one serialiser each in the library: the CLI's JSON
 // row is exactly the serialiser fed the plain result (plus the writer's `line`), and the public
 // serialisers refuse what is not their result with BAD_ARGUMENT.
 import { describe, expect, it } from 'vitest';
@@ -17,6 +17,9 @@ describe('the CLI prints exactly the library serialiser', () => {
     ['alligation', ['10 %', '--higher', '20 %', '--lower', '5 %', '--total', '300 g'], () => api.alligationJson(api.alligation('10 %', { higher: '20 %', lower: '5 %', total: '300 g' }), '10 %')],
     ['potency', ['98.5 %', '--need', '250 mg'], () => api.potencyJson(api.potency('98.5 %', { need: '250 mg' }), '98.5 %', 'half-even', '250 mg')],
     ['strength', ['1:750'], () => api.strengthJson(api.strengthForms('1:750'), '1:750')],
+    ['standardise', ['KHC8H4O4', '--mass', '0.5105 g', '--volume', '24.95 mL'], () => api.standardiseJson(api.standardise('KHC8H4O4', { mass: '0.5105 g', volume: '24.95 mL' }), 'KHC8H4O4')],
+    ['replicates', ['99.1, 99.4, 99.2'], () => api.replicatesJson(api.replicates('99.1, 99.4, 99.2'), '99.1, 99.4, 99.2')],
+    ['replicates half-up', ['--rounding', 'half-up', '99.1, 99.4, 99.2'], () => api.replicatesJson(api.replicates('99.1, 99.4, 99.2', { rounding: 'half-up' }), '99.1, 99.4, 99.2')],
   ] as const)('%s', (_, args, row) => {
     const command = _.split(' ')[0];
     const out = pondus([command, '--json', ...args]).stdout;
@@ -52,6 +55,8 @@ describe('the public serialisers refuse what is not their result', () => {
     ['alligationJson', () => api.alligationJson({} as never, 'x')],
     ['potencyJson', () => api.potencyJson(api.potency('98.5 %'), '98.5 %', 'half-even', 250 as never)],
     ['strengthJson', () => api.strengthJson(api.strengthForms('1:750'), '1:750', 'up' as never)],
+    ['standardiseJson', () => api.standardiseJson(api.replicates('99.1, 99.4, 99.2') as never, 'x')],
+    ['replicatesJson', () => api.replicatesJson({ ...api.replicates('99.1, 99.4, 99.2'), sd: 1 } as never, 'x')],
   ])('%s: BAD_ARGUMENT', (_, f) => {
     expect(code(f)).toBe('BAD_ARGUMENT');
   });
