@@ -32,6 +32,16 @@ const SHAPES = {
   candidateResult: { name: 'a candidate-formula result (from candidateFormulas)', fields: { input: 'text', ratios: 'object', candidates: 'array', notes: 'array' } },
   patternResult: { name: 'an isotope pattern (from isotopePattern)', fields: { input: 'text', charge: 'number', peaks: 'array', allPeaks: 'array', notes: 'array' } },
   peak: { name: 'a peak of an isotope pattern', fields: { mz: 'number', abundance: 'number', relative: 'number', shift: 'number' } },
+  conversionFactor: { name: 'a conversion factor (from conversionFactor)', fields: { sought: 'massDetail', given: 'massDetail', element: 'text', factor: 'decimal', reported: 'measured' } },
+  gravimetricResult: { name: 'a gravimetric result (from gravimetric)', fields: { analyte: 'text', weighed: 'text', factor: 'conversionFactor', analyteMass: 'quantity|null', massPercent: 'quantity|null', notes: 'array' } },
+  basisResult: { name: 'a basis conversion (from convertBasis)', fields: { factor: 'conversionFactor', value: 'quantity|null', converted: 'quantity|null', notes: 'array' } },
+  milliequivalentResult: { name: 'a milliequivalents result (from milliequivalents)', fields: { salt: 'massDetail', ions: 'object', mode: 'text', mass: 'quantity|null', moles: 'quantity', equivalents: 'quantity', osmoles: 'quantity', perIon: 'array', notes: 'array' } },
+  osmolarityResult: { name: 'an osmolarity result (from osmolarity)', fields: { components: 'array', osmolarity: 'quantity', ions: 'array', notes: 'array' } },
+  potencyResult: { name: 'a potency result (from potency)', fields: { given: 'quantity', basis: 'text', asIs: 'quantity', weigh: 'instruction|null', notes: 'array' } },
+  alligationResult: { name: 'an alligation result (from alligation)', fields: { by: 'text', target: 'object', higherParts: 'quantity', lowerParts: 'quantity', higherFraction: 'quantity', total: 'quantity|null', higherAmount: 'quantity|null', lowerAmount: 'quantity|null', notes: 'array' } },
+  strengthForms: { name: 'a strength in its forms (from strengthForms)', fields: { kind: 'text', value: 'quantity', ratio: 'decimal', forms: 'array', notes: 'array' } },
+  standardiseResult: { name: 'a standardisation (from standardise)', fields: { standard: 'massDetail', ratio: 'object', moles: 'quantity', netTitre: 'quantity', molarity: 'quantity', notes: 'array' } },
+  replicateResult: { name: 'replicate statistics (from replicates)', fields: { n: 'number', mean: 'measured', sd: 'decimal', rsdPercent: 'decimal', halfWidth: 'decimal', reported: 'text', notes: 'array' } },
   atomIsotopes: { name: 'the isotopes of an atom (from atomIsotopes)', fields: { massNumbers: 'array', masses: 'array', fractions: 'array' } },
   // options objects with required fields (each an options object too: weights and rounding are checked)
   titrationOptions: {

@@ -6,6 +6,8 @@ import type { ConversionFactor } from '../../preparation/conversion-factor.js';
 import { BENCH_CAUTION, DOSE_CAUTION } from '../../preparation/caution.js';
 import { dilute, type DilutionResult } from '../../preparation/dilution.js';
 import { gravimetric, type GravimetricResult } from '../../preparation/gravimetric.js';
+import { gravimetricJson } from '../../preparation/gravimetric-json.js';
+import { basisJson } from '../../preparation/basis-json.js';
 import { displayInstruction, displayResult, instruction, instructionJson, resultJson, volumeUnitFor, type Instruction } from '../../sigfig/instruction.js';
 import { saltFactor, type SaltFactorResult } from '../../preparation/salt-factor.js';
 import type { Quantity } from '../../sigfig/quantity.js';
@@ -25,10 +27,9 @@ const notesJson = (notes: Note[]) => notes.map((n) => ({ code: n.code, message: 
 /** Text and value helpers for one rounding mode. */
 function shows(rounding: RoundingMode) {
   const text = (q: Quantity | null, unit?: string) => (q ? displayResult(q, unit ?? q.unit?.symbol, rounding).text : null);
-  const value = (q: Quantity | null, unit?: string) => (q ? displayResult(q, unit ?? q.unit?.symbol, rounding).value.toNumber() : null);
   const ins = (i: Instruction | null, unit?: string) => (i ? displayInstruction(i, unit ?? i.quantity.unit?.symbol, rounding).text : null);
   const factor = (f: ConversionFactor) => displayMeasured(f.reported, rounding).text;
-  return { text, value, ins, factor };
+  return { text, ins, factor };
 }
 
 // --- dilute -------------------------------------------------------------------
@@ -94,24 +95,10 @@ interface GravimetricCliOptions extends OutputOptions, RoundingOptions {
 export function gravimetricPresenter(o: GravimetricCliOptions): Presenter<GravimetricResult> {
   if (o.sample !== undefined && o.mass === undefined) throw fail({ code: 'USAGE', message: '--sample needs --mass: the mass fraction in the sample comes from the mass of the weighed form' });
   const rounding = roundingOf(o);
-  const { text, value, factor } = shows(rounding);
+  const { text, factor } = shows(rounding);
   return {
     compute: (analyte) => gravimetric(analyte, o.weighed!, { element: o.element, weighedMass: o.mass, sampleMass: o.sample }),
-    json: (r) => ({
-      input: r.analyte,
-      analyte: speciesText(r.factor.sought),
-      weighed: speciesText(r.factor.given),
-      analyteHill: r.factor.sought.formula,
-      weighedHill: r.factor.given.formula,
-      element: r.factor.element,
-      factor: r.factor.factor.toNumber(),
-      factorDisplay: factor(r.factor),
-      analyteMass: value(r.analyteMass, 'g'),
-      analyteMassDisplay: text(r.analyteMass, 'g'),
-      massPercent: r.massPercent ? r.massPercent.value.toNumber() : null,
-      massPercentDisplay: r.massPercent ? displayResult(r.massPercent, null, rounding).figure : null,
-      notes: notesJson(r.notes),
-    }),
+    json: (r) => gravimetricJson(r, rounding),
     columns: ['analyte', 'weighed', 'factor', 'analyteMass', 'massPercent', 'analyteHill', 'weighedHill'],
     cells: (r) => [speciesText(r.factor.sought), speciesText(r.factor.given), r.factor.factor.toFixed(), r.analyteMass ? displayResult(r.analyteMass, 'g', rounding).figure : '', r.massPercent ? displayResult(r.massPercent, null, rounding).figure : '', r.factor.sought.formula, r.factor.given.formula],
     block: (r) => {
@@ -136,22 +123,10 @@ interface BasisCliOptions extends OutputOptions, RoundingOptions {
 /** The presenter for `pondus basis`. */
 export function basisPresenter(o: BasisCliOptions): Presenter<BasisResult> {
   const rounding = roundingOf(o);
-  const { text, value, factor } = shows(rounding);
+  const { text, factor } = shows(rounding);
   return {
     compute: (from) => convertBasis(from, o.to!, { element: o.element, value: o.value }),
-    json: (r) => ({
-      input: r.factor.given.input,
-      from: speciesText(r.factor.given),
-      to: speciesText(r.factor.sought),
-      fromHill: r.factor.given.formula,
-      toHill: r.factor.sought.formula,
-      factor: r.factor.factor.toNumber(),
-      factorDisplay: factor(r.factor),
-      value: text(r.value),
-      converted: value(r.converted),
-      convertedDisplay: text(r.converted),
-      notes: notesJson(r.notes),
-    }),
+    json: (r) => basisJson(r, rounding),
     columns: ['from', 'to', 'factor', 'converted', 'fromHill', 'toHill'],
     cells: (r) => [speciesText(r.factor.given), speciesText(r.factor.sought), r.factor.factor.toFixed(), r.converted ? text(r.converted) : '', r.factor.given.formula, r.factor.sought.formula],
     block: (r) => {

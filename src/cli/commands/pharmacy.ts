@@ -11,16 +11,20 @@ import { PHARMACY_CAUTION, POTENCY_CAUTION } from '../../pharmacy/caution.js';
 import { atWorkingPrecision } from '../../pharmacy/working-precision.js';
 import { milliequivalents, type MilliequivalentOptions, type MilliequivalentResult } from '../../pharmacy/milliequivalents.js';
 import { osmolarity, type OsmolarityResult } from '../../pharmacy/osmolarity.js';
+import { meqJson } from '../../pharmacy/milliequivalents-json.js';
+import { osmolarityJson } from '../../pharmacy/osmolarity-json.js';
+import { alligationJson, alligationUnit } from '../../pharmacy/alligation-json.js';
+import { potencyJson } from '../../pharmacy/potency-json.js';
+import { strengthFormsShown, strengthJson, strengthRatioText } from '../../pharmacy/ratio-strength-json.js';
 import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
 import type { FormulaOptions, OutputOptions } from './common.js';
-import { amountJson, notesJson, numbered, qtext, reportedIn, type RowPresenter } from './qc-rows.js';
+import { notesJson, numbered, qtext, reportedIn, type RowPresenter } from './qc-rows.js';
 import { ANIONS, CATIONS } from '../../pharmacy/ions.js';
 import { potency, type PotencyOptions, type PotencyResult } from '../../pharmacy/potency.js';
 import { strengthForms, type StrengthForms } from '../../pharmacy/ratio-strength.js';
 import { readBasis } from '../../assay/sample-basis.js';
-import { displayInstruction, instructionJson, massUnitFor } from '../../sigfig/instruction.js';
-import type { Decimal } from '../../exact/decimal.js';
+import { displayInstruction, massUnitFor } from '../../sigfig/instruction.js';
 import type { CommandRunner } from './runner.js';
 import { declarePharmacy } from './declarations.js';
 
@@ -29,9 +33,6 @@ import { declarePharmacy } from './declarations.js';
 export interface MeqCli extends FormulaOptions, Pick<MilliequivalentOptions, 'mass' | 'meq' | 'mmol' | 'concentration' | 'measured' | 'ions'> {
   rounding?: RoundingMode;
 }
-
-/** A mass and amounts for a target are instructions (working precision); from a weighed mass or a strength, results. */
-const meqKind = (r: MilliequivalentResult) => (r.mode === 'target' ? 'instruction' : 'result');
 
 /** The presenter for `pondus meq`. */
 export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
@@ -43,34 +44,7 @@ export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
   const strength = o.concentration !== undefined;
   return {
     compute: numbered((input) => milliequivalents(input, opts)),
-    json: ({ input, r }) => ({
-      input,
-      salt: speciesText(r.salt),
-      saltHill: r.salt.formula,
-      molarMass: r.salt.molarMass.toNumber(),
-      mode: r.mode,
-      ions: r.ions.ions.map((i) => ({ ion: i.ion, charge: i.charge, count: i.count })),
-      meqPerMmol: r.ions.equivalentsPerMole,
-      mOsmPerMmol: r.ions.particles,
-      ...(strength
-        ? {
-            mmolPerMl: amountJson(r.moles, 'result', 'M', rounding, 'mmol/mL'),
-            meqPerMl: amountJson(r.equivalents, 'result', 'M', rounding, 'mEq/mL'),
-            meqPerL: amountJson(r.equivalents, 'result', 'mM', rounding, 'mEq/L'),
-            mOsmPerL: amountJson(r.osmoles, 'result', 'mM', rounding, 'mOsm/L'),
-            perIon: r.perIon.map((i) => ({ ion: i.ion, meqPerL: amountJson(i.equivalents, 'result', 'mM', rounding, 'mEq/L') })),
-          }
-        : {
-            mass: amountJson(r.mass!, meqKind(r), 'g', rounding),
-            mmol: amountJson(r.moles, meqKind(r), 'mmol', rounding),
-            meq: amountJson(r.equivalents, meqKind(r), 'mmol', rounding, 'mEq'),
-            mOsm: amountJson(r.osmoles, meqKind(r), 'mmol', rounding, 'mOsm'),
-            perIon: r.perIon.map((i) => ({ ion: i.ion, mmol: amountJson(i.amount, meqKind(r), 'mmol', rounding), meq: amountJson(i.equivalents, meqKind(r), 'mmol', rounding, 'mEq') })),
-          }),
-      rounding,
-      notes: notesJson(r.notes),
-      caution: PHARMACY_CAUTION,
-    }),
+    json: ({ input, r }) => meqJson(r, input, rounding),
     columns: strength ? ['input', 'line', 'salt', 'mmol_per_mL', 'mEq_per_mL', 'mEq_per_L', 'mOsm_per_L', 'saltHill'] : ['input', 'line', 'salt', 'mass_g', 'mmol', 'mEq', 'mOsm', 'saltHill'],
     cells: ({ input, line, r }) =>
       strength
@@ -108,15 +82,7 @@ export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityRe
   const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations, measured: o.measured };
   return {
     compute: numbered((input) => osmolarity(input, opts)),
-    json: ({ input, r }) => ({
-      input,
-      components: r.components.map((c) => ({ salt: speciesText(c.result.salt), saltHill: c.result.salt.formula, strength: c.strength, mOsmPerL: amountJson(c.result.osmoles, 'result', 'mM', rounding, 'mOsm/L') })),
-      mOsmPerL: amountJson(r.osmolarity, 'result', 'mM', rounding, 'mOsm/L'),
-      ions: r.ions.map((i) => ({ ion: i.ion, charge: i.charge, mmolPerL: amountJson(i.molarity, 'result', 'mM', rounding, 'mmol/L'), meqPerL: amountJson(i.equivalents, 'result', 'mM', rounding, 'mEq/L') })),
-      rounding,
-      notes: notesJson(r.notes),
-      caution: PHARMACY_CAUTION,
-    }),
+    json: ({ input, r }) => osmolarityJson(r, input, rounding),
     // one column per ion of the table (wide form): an ion a solution does not hold is left empty
     columns: ['input', 'line', 'mOsm_per_L', ...TABLE_IONS.map((i) => `${i}_mEq_per_L`)],
     cells: ({ input, line, r }) => [
@@ -159,7 +125,7 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
   if (o.by !== undefined && o.by !== 'mass' && o.by !== 'volume') throw fail({ code: 'USAGE', message: `--by is mass or volume; got '${o.by}'` });
   const rounding = o.rounding ?? 'half-even';
   const opts = { higher: o.higher!, lower: o.lower!, total: o.total, by: o.by };
-  const amountUnit = (r: AlligationResult) => r.total?.unit?.symbol ?? (r.by === 'mass' ? 'g' : 'mL');
+  const amountUnit = alligationUnit;
   const sUnit = (r: AlligationResult) => r.target.value.unit?.symbol;
   return {
     compute: numbered((input) => {
@@ -167,19 +133,7 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
       if (o.by !== undefined && r.total !== null && r.by !== o.by) throw fail({ code: 'USAGE', message: `--by ${o.by} conflicts with the total` });
       return r;
     }),
-    json: ({ input, r }) => ({
-      input,
-      by: r.by,
-      higherParts: reportedIn({ ...r.higherParts, lsd: null }, sUnit(r), rounding).value,
-      lowerParts: reportedIn({ ...r.lowerParts, lsd: null }, sUnit(r), rounding).value,
-      higherFraction: r.higherFraction.value.toNumber(),
-      total: r.total ? amountJson(atWorkingPrecision({ ...r.total, lsd: null }), 'instruction', amountUnit(r), rounding) : null,
-      higher: r.higherAmount ? amountJson(r.higherAmount, 'instruction', amountUnit(r), rounding) : null,
-      lower: r.lowerAmount ? amountJson(r.lowerAmount, 'instruction', amountUnit(r), rounding) : null,
-      rounding,
-      notes: notesJson(r.notes),
-      caution: PHARMACY_CAUTION,
-    }),
+    json: ({ input, r }) => alligationJson(r, input, rounding),
     columns: ['input', 'line', 'by', 'higher_parts', 'lower_parts', 'higher_amount', 'lower_amount', 'unit'],
     cells: ({ input, line, r }) => [
       input,
@@ -227,17 +181,7 @@ export function potencyPresenter(o: PotencyCli): RowPresenter<PotencyResult> {
   const alt = (r: PotencyResult) => (unitOfGiven(r) === '%' ? 'µg/mg' : '%');
   return {
     compute: numbered((input) => potency(input, { basis, water: o.water, loss: o.loss, solvent: o.solvent, need: o.need })),
-    json: ({ input, r }) => ({
-      input,
-      basis: r.basis,
-      asIs: amountJson(r.asIs, 'result', unitOfGiven(r), rounding),
-      asIsAlso: amountJson(r.asIs, 'result', alt(r), rounding),
-      need: o.need?.trim() ?? null,
-      weigh: r.weigh ? instructionJson(r.weigh, massUnitFor(r.weigh.quantity), rounding) : null,
-      rounding,
-      notes: notesJson(r.notes),
-      caution: POTENCY_CAUTION,
-    }),
+    json: ({ input, r }) => potencyJson(r, input, rounding, o.need ?? null),
     columns: ['input', 'line', 'basis', 'as_is', 'as_is_also', 'weigh_g', 'weigh'],
     cells: ({ input, line, r }) => [input, line, r.basis, qtext(r.asIs, unitOfGiven(r), rounding), qtext(r.asIs, alt(r), rounding), r.weigh ? r.weigh.quantity.value.toFixed() : '', r.weigh ? displayInstruction(r.weigh, massUnitFor(r.weigh.quantity), rounding).text : ''],
     block: ({ input, r }) => {
@@ -257,22 +201,15 @@ export interface StrengthCli extends OutputOptions {
   rounding?: RoundingMode;
 }
 
-function formText(value: Decimal): string {
-  // the forms differ from the strength written by powers of ten: the same digits, the point moved;
-  // only a repeating decimal (from a ratio such as 1:750) is cut, to 4 figures
-  const long = value.toSignificantDigits(12);
-  return long.eq(value) ? long.toFixed() : value.toSignificantDigits(4).toFixed();
-}
-
 /** The presenter for `pondus strength`. */
 export function strengthPresenter(o: StrengthCli): RowPresenter<StrengthForms> {
   const rounding = o.rounding ?? 'half-even';
-  const ratioText = (r: StrengthForms) => `1:${r.ratio.isInteger() ? r.ratio.toFixed() : r.ratio.toSignificantDigits(4).toFixed()}`;
-  const shown = (r: StrengthForms) => r.forms.map((f) => ({ unit: f.unit, value: f.value.toNumber(), display: `${formText(f.value)} ${f.unit}` }));
+  const ratioText = strengthRatioText;
+  const shown = strengthFormsShown;
   const cols = ['% w/v', 'mg/mL', 'mg/dL', '% w/w', 'mg/g', 'mg/kg', '% v/v'];
   return {
     compute: numbered((input) => strengthForms(input)),
-    json: ({ input, r }) => ({ input, kind: r.kind, ratio: ratioText(r), forms: shown(r), rounding, notes: notesJson(r.notes), caution: PHARMACY_CAUTION }),
+    json: ({ input, r }) => strengthJson(r, input, rounding),
     columns: ['input', 'line', 'kind', 'ratio', ...cols.map((c) => c.replace('% ', 'percent_').replace('/', '_per_'))],
     cells: ({ input, line, r }) => {
       const f = shown(r);

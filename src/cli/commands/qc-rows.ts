@@ -10,7 +10,7 @@ import type { Note } from '../../errors/issue.js';
 import type { Quantity } from '../../sigfig/quantity.js';
 import { displayQuantity } from '../../sigfig/display-quantity.js';
 import type { RoundingMode } from '../../sigfig/round.js';
-import { baseUnitText } from '../../sigfig/units.js';
+import { reportedAmountJson } from '../../sigfig/amount-json.js';
 import type { Presenter } from '../output/presenter.js';
 
 /** A result with the input it came from and its line. */
@@ -38,14 +38,6 @@ export interface QcAmountJson {
   displayUnit: string;
 }
 
-/** The base unit of an amount shown under a label: mEq and mOsm are amounts of charge and of particles, held in mol. */
-function baseUnit(q: Quantity, label: string | undefined): string {
-  const base = baseUnitText(q.dims);
-  const of = label === undefined ? null : /Eq/.test(label) ? 'Eq' : /Osm/.test(label) ? 'Osm' : null;
-  if (of === null) return base;
-  return base === 'mol' ? of : base === 'M' ? `${of}/L` : base;
-}
-
 /**
  * A quantity as an amount in JSON, shown in a unit (or under a label: 'mEq' for mmol of charge),
  * rounded once for the reported figure.
@@ -54,9 +46,7 @@ function baseUnit(q: Quantity, label: string | undefined): string {
  * amountJson(measure('250. mg'), 'result', 'g', 'half-even') // { kind: 'result', value: 0.25, unit: 'g', display: '0.250 g', sigFigs: 3, figure: '0.250', displayUnit: 'g' }
  */
 export function amountJson(q: Quantity, kind: 'instruction' | 'result', unit: string | undefined, rounding: RoundingMode, label = unit): QcAmountJson {
-  const d = displayQuantity(q, unit, rounding);
-  const shown = label ?? d.unit;
-  return { kind, value: q.value.toNumber(), unit: baseUnit(q, label), display: shown ? `${d.figure} ${shown}` : d.figure, sigFigs: d.sigFigs, figure: d.figure, displayUnit: shown };
+  return reportedAmountJson(q, kind, unit, rounding, label);
 }
 
 /**

@@ -17,6 +17,8 @@ import { convertSampleBasis, readBasis, type BasisConversion, type SampleBasis, 
 import { checkSpecification, readLimits, type SpecificationCheck } from '../../assay/specification.js';
 import { standardise, type StandardiseResult } from '../../assay/standardise.js';
 import { titrationAssay, type TitrationAssayResult } from '../../assay/titration-assay.js';
+import { standardiseJson } from '../../assay/standardise-json.js';
+import { replicatesJson } from '../../assay/replicates-json.js';
 import { BENCH_CAUTION } from '../../preparation/caution.js';
 import type { Quantity } from '../../sigfig/quantity.js';
 import type { RoundingMode } from '../../sigfig/round.js';
@@ -194,18 +196,7 @@ export function standardisePresenter(o: StandardiseCli): RowPresenter<Standardis
   const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations, mass: o.mass!, volume: o.volume!, blank: o.blank, ratio: o.ratio, purity: o.purity };
   return {
     compute: numbered((input) => standardise(input, opts)),
-    json: ({ input, r }) => ({
-      input,
-      standard: r.standard.formula,
-      molarMass: r.standard.molarMass.toNumber(),
-      ratio: r.ratio.text,
-      moles: amountJson(r.moles, 'result', 'mmol', rounding),
-      netTitre: amountJson(r.netTitre, 'result', 'mL', rounding),
-      molarity: amountJson(r.molarity, 'result', 'M', rounding),
-      rounding,
-      notes: notesJson(r.notes),
-      caution: BENCH_CAUTION,
-    }),
+    json: ({ input, r }) => standardiseJson(r, input, rounding),
     columns: ['input', 'line', 'standard', 'ratio', 'moles_mmol', 'molarity_M', 'molarity'],
     cells: ({ input, line, r }) => {
       const m = reportedIn(r.molarity, 'M', rounding);
@@ -291,23 +282,7 @@ export function replicatesPresenter(o: ReplicatesCli): RowPresenter<ReplicateRes
   const fig2 = (d: { toSignificantDigits(n: number): { toFixed(): string } }) => d.toSignificantDigits(2).toFixed();
   return {
     compute: numbered((input) => replicates(input, { level, rounding })),
-    json: ({ input, r }) => ({
-      input,
-      n: r.n,
-      unit: r.unit,
-      mean: r.mean.value.toNumber(),
-      meanReported: r.meanReported,
-      halfWidthReported: r.halfWidthReported,
-      sd: r.sd.toNumber(),
-      rsdPercent: r.rsdPercent.toNumber(),
-      level: r.level,
-      df: r.df,
-      t: r.t,
-      halfWidth: r.halfWidth.toNumber(),
-      reported: r.reported,
-      rounding,
-      notes: notesJson(r.notes),
-    }),
+    json: ({ input, r }) => replicatesJson(r, input),
     columns: ['input', 'line', 'n', 'mean', 'sd', 'rsd_percent', 'level', 't', 'half_width', 'reported'],
     cells: ({ input, line, r }) => [input, line, r.n, r.mean.value.toNumber(), r.sd.toNumber(), r.rsdPercent.toNumber(), r.level, r.t, r.halfWidth.toNumber(), r.reported],
     block: ({ input, r }) => {
