@@ -32,6 +32,11 @@ export interface BasisResult {
 /**
  * A value on the basis `from`, converted to the basis `to`.
  *
+ * @param from - the basis the value is given on, as a formula ('P2O5').
+ * @param to - the basis to convert to, as a formula ('P').
+ * @param options - the value (a mass or a percent), the key element, the formula-reading options.
+ * @returns the conversion factor, the value given and the converted value (a result), with notes.
+ * @throws PondusError: the formula codes (UNKNOWN_ELEMENT, …) for a formula that cannot be read; BAD_OPTION when the two share no element or the key element is not in both; BAD_AMOUNT for a negative value; BAD_NUMBER or UNKNOWN_UNIT for a value that cannot be read; BAD_ARGUMENT for an argument of the wrong kind.
  * @example
  * displayQuantity(convertBasis('P2O5', 'P', { value: '12.5 %' }).converted, '%').text // '5.46 %'
  */

@@ -34,6 +34,11 @@ export interface GravimetricResult {
 /**
  * Gravimetric factor, analyte mass and mass fraction.
  *
+ * @param analyte - the species sought, as a formula ('Cl', 'Fe').
+ * @param weighed - the form weighed, as a formula ('AgCl', 'Fe2O3').
+ * @param options - the mass of the weighed form, the sample mass, the key element, the formula-reading options.
+ * @returns the gravimetric factor, the analyte mass and its percent in the sample (results, textbook figures), with notes.
+ * @throws PondusError: the formula codes (UNKNOWN_ELEMENT, …) for a formula that cannot be read; BAD_OPTION when the two share no element or the key element is not in both, or a sample mass comes without the weighed mass; BAD_AMOUNT for a mass that is not positive; BAD_NUMBER or UNKNOWN_UNIT for a mass that cannot be read; BAD_ARGUMENT for an argument of the wrong kind.
  * @example
  * displayQuantity(gravimetric('Cl', 'AgCl', { weighedMass: '0.2866 g' }).analyteMass, 'g').text // '0.07089 g' (a result: textbook figures)
  */
