@@ -326,6 +326,12 @@ export { type StandardiseResult, type StandardiseOptions } from './assay/standar
 import { standardise as standardise_ } from './assay/standardise.js';
 export const standardise = /* @__PURE__ */ guarded('standardise', standardise_, ['text', 'standardiseOptions']);
 export const safeStandardise = /* @__PURE__ */ safely(standardise);
+export { type Reported, type ReportOptions } from './assay/reported-on-basis.js';
+import { reportOnBasis as reportOnBasis_ } from './assay/reported-on-basis.js';
+export const reportOnBasis = /* @__PURE__ */ guarded('reportOnBasis', reportOnBasis_, ['quantity', 'text', 'text', 'options?']);
+import { titrationJson as titrationJson_, sampleBasisJson as sampleBasisJson_ } from './assay/qc-json.js';
+export const titrationJson = /* @__PURE__ */ guarded('titrationJson', titrationJson_, ['titrationResult', 'reportedResult', 'text', 'rounding?']);
+export const sampleBasisJson = /* @__PURE__ */ guarded('sampleBasisJson', sampleBasisJson_, ['quantity', 'text', 'reportedResult', 'array', 'text', 'rounding?']);
 import { standardiseJson as standardiseJson_ } from './assay/standardise-json.js';
 export const standardiseJson = /* @__PURE__ */ guarded('standardiseJson', standardiseJson_, ['standardiseResult', 'text', 'rounding?']);
 export { SAMPLE_BASES, type SampleBasis, type SampleContent, type BasisConversion } from './assay/sample-basis.js';

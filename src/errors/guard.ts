@@ -42,6 +42,8 @@ const SHAPES = {
   strengthForms: { name: 'a strength in its forms (from strengthForms)', fields: { kind: 'text', value: 'quantity', ratio: 'decimal', forms: 'array', notes: 'array' } },
   standardiseResult: { name: 'a standardisation (from standardise)', fields: { standard: 'massDetail', ratio: 'object', moles: 'quantity', netTitre: 'quantity', molarity: 'quantity', notes: 'array' } },
   replicateResult: { name: 'replicate statistics (from replicates)', fields: { n: 'number', mean: 'measured', sd: 'decimal', rsdPercent: 'decimal', halfWidth: 'decimal', reported: 'text', notes: 'array' } },
+  titrationResult: { name: 'a titration assay (from titrationAssay)', fields: { analyte: 'massDetail', kind: 'text', ratio: 'object', reagentRatio: 'object|null', netTitre: 'quantity', moles: 'quantity', mass: 'quantity', assay: 'quantity', notes: 'array' } },
+  reportedResult: { name: 'a result as reported on its basis (from reportOnBasis)', fields: { basis: 'text', conversion: 'object|null', value: 'quantity', spec: 'object|null', notes: 'array' } },
   atomIsotopes: { name: 'the isotopes of an atom (from atomIsotopes)', fields: { massNumbers: 'array', masses: 'array', fractions: 'array' } },
   // options objects with required fields (each an options object too: weights and rounding are checked)
   titrationOptions: {

@@ -13,18 +13,20 @@ import { QC_CAUTION } from '../../assay/caution.js';
 import { readPositive } from '../../assay/read-quantity.js';
 import { PURE } from '../../calc/measure.js';
 import { replicates, type ReplicateResult } from '../../assay/replicates.js';
-import { convertSampleBasis, readBasis, type BasisConversion, type SampleBasis, type SampleContent } from '../../assay/sample-basis.js';
-import { checkSpecification, readLimits, type SpecificationCheck } from '../../assay/specification.js';
+import { readBasis, type SampleBasis, type SampleContent } from '../../assay/sample-basis.js';
+import { readLimits, type SpecificationCheck } from '../../assay/specification.js';
 import { standardise, type StandardiseResult } from '../../assay/standardise.js';
 import { titrationAssay, type TitrationAssayResult } from '../../assay/titration-assay.js';
 import { standardiseJson } from '../../assay/standardise-json.js';
 import { replicatesJson } from '../../assay/replicates-json.js';
+import { sampleBasisJson, titrationJson } from '../../assay/qc-json.js';
+import { reportOnBasis, type Reported } from '../../assay/reported-on-basis.js';
 import { BENCH_CAUTION } from '../../preparation/caution.js';
 import type { Quantity } from '../../sigfig/quantity.js';
 import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
 import type { FormulaOptions, OutputOptions } from './common.js';
-import { amountJson, notesJson, numbered, qtext, reportedIn, type RowPresenter } from './qc-rows.js';
+import { notesJson, numbered, qtext, reportedIn, type RowPresenter } from './qc-rows.js';
 import type { CommandRunner } from './runner.js';
 import { declareQc } from './declarations.js';
 
@@ -35,15 +37,6 @@ interface BasisCli {
   limits?: string;
   on?: string;
   rounding?: RoundingMode;
-}
-
-/** The basis a result is reported on, the content it needs, and the check against limits. */
-export interface Reported {
-  basis: SampleBasis;
-  conversion: BasisConversion | null;
-  value: Quantity;
-  spec: SpecificationCheck | null;
-  notes: Note[];
 }
 
 const CONTENT_FOR: Record<SampleBasis, (keyof SampleContent)[]> = {
@@ -82,24 +75,9 @@ function validateBasisOptions(o: BasisCli, from: SampleBasis): { basis: SampleBa
 }
 
 function report(value: Quantity, from: SampleBasis, choice: { basis: SampleBasis; inferred: boolean }, o: BasisCli): Reported {
-  const notes: Note[] = [];
-  let conversion: BasisConversion | null = null;
-  let v = value;
-  if (choice.basis !== from) {
-    conversion = convertSampleBasis(value, from, choice.basis, { loss: o.loss, water: o.water, solvent: o.solvent });
-    notes.push(...conversion.notes);
-    if (choice.inferred) notes.push({ code: 'BASIS_INFERRED', message: `reported on the ${choice.basis} basis, the one the content given implies; give --on to choose` });
-    v = conversion.converted;
-  }
-  let spec: SpecificationCheck | null = null;
-  if (o.limits !== undefined) {
-    spec = checkSpecification(v, o.limits, o.rounding ?? 'half-even', `the ${choice.basis === 'as-is' ? 'as-is' : choice.basis}`);
-    notes.push(...spec.notes);
-  }
-  return { basis: choice.basis, conversion, value: v, spec, notes };
+  return reportOnBasis(value, from, choice.basis, { loss: o.loss, water: o.water, solvent: o.solvent, limits: o.limits, rounding: o.rounding, inferred: choice.inferred });
 }
 
-const specJson = (s: SpecificationCheck | null, basis: SampleBasis) => (s ? { limits: `${s.limits.low}–${s.limits.high} %`, basis, rounded: s.roundedText, complies: s.complies, rounding: s.rounding } : null);
 const verdict = (s: SpecificationCheck, basis: SampleBasis) => `specification ${s.limits.low}–${s.limits.high} % on the ${basis} basis: ${s.roundedText} % ${s.complies ? 'complies' : 'does NOT comply'}`;
 
 // --- titration ------------------------------------------------------------------
@@ -133,24 +111,7 @@ export function titrationPresenter(o: TitrationCli): RowPresenter<Titration> {
       const t = titrationAssay(input, opts);
       return { t, rep: report(t.assay, 'as-is', choice, o) };
     }),
-    json: ({ input, r: { t, rep } }) => ({
-      input,
-      analyte: t.analyte.formula,
-      molarMass: t.analyte.molarMass.toNumber(),
-      kind: t.kind,
-      ratio: t.ratio.text,
-      reagentRatio: t.reagentRatio?.text ?? null,
-      netTitre: amountJson(t.netTitre, 'result', 'mL', rounding),
-      moles: amountJson(t.moles, 'result', 'mmol', rounding),
-      analyteMass: amountJson(t.mass, 'result', 'mg', rounding),
-      assay: amountJson(t.assay, 'result', '%', rounding),
-      basis: rep.basis,
-      reported: amountJson(rep.value, 'result', '%', rounding),
-      specification: specJson(rep.spec, rep.basis),
-      rounding,
-      notes: notesJson([...t.notes, ...rep.notes]),
-      caution: QC_CAUTION,
-    }),
+    json: ({ input, r: { t, rep } }) => titrationJson(t, rep, input, rounding),
     columns: ['input', 'line', 'analyte', 'kind', 'ratio', 'moles_mmol', 'assay_percent', 'assay_reported', 'basis', 'reported_percent', 'reported', 'limits', 'complies'],
     cells: ({ input, line, r }) => {
       const a = reportedIn(r.t.assay, '%', rounding);
@@ -239,18 +200,7 @@ export function sampleBasisPresenter(o: SampleBasisCli): RowPresenter<BasisRow> 
       const rep = report(value, from, choice, o);
       return { rep, value, from, notes };
     }),
-    json: ({ input, r }) => ({
-      input,
-      from: r.from,
-      to: r.rep.basis,
-      value: amountJson(r.value, 'result', '%', rounding),
-      factor: r.rep.conversion ? r.rep.conversion.factor.value.toNumber() : 1,
-      converted: amountJson(r.rep.value, 'result', '%', rounding),
-      specification: specJson(r.rep.spec, r.rep.basis),
-      rounding,
-      notes: notesJson([...r.notes, ...r.rep.notes]),
-      caution: QC_CAUTION,
-    }),
+    json: ({ input, r }) => sampleBasisJson(r.value, r.from, r.rep, r.notes, input, rounding),
     columns: ['input', 'line', 'from', 'to', 'converted_percent', 'converted', 'limits', 'complies'],
     cells: ({ input, line, r }) => {
       const c = reportedIn(r.rep.value, '%', rounding);
