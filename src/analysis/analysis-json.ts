@@ -1,3 +1,4 @@
+import { notesJson } from '../errors/note-json.js';
 import type { AnalysisResult, Fit } from './check.js';
 
 const fitJson = (f: Fit) => ({
@@ -35,6 +36,6 @@ export function analysisJson(r: AnalysisResult, extra: Record<string, unknown> =
     reportLine: r.reportLine,
     fits: r.fits.map(fitJson),
     continuous: r.continuous.map((c) => ({ formula: c.formula, written: c.written, name: c.name, amount: c.amount, maxDeviation: c.maxDeviation })),
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
   };
 }

@@ -2,6 +2,7 @@
  * The serialisers of `pondus titration` and `pondus sample-basis`: the JSON object of a result as
  * reported on its basis. The CLI prints exactly this (its JSON writer adds the input's line number).
  */
+import { notesJson } from '../errors/note-json.js';
 import type { Note } from '../errors/issue.js';
 import { reportedAmountJson as amount } from '../sigfig/amount-json.js';
 import type { Quantity } from '../sigfig/quantity.js';
@@ -12,7 +13,6 @@ import type { SampleBasis } from './sample-basis.js';
 import type { SpecificationCheck } from './specification.js';
 import type { TitrationAssayResult } from './titration-assay.js';
 
-const notesJson = (notes: readonly Note[]) => notes.map((n) => ({ code: n.code, message: n.message }));
 
 /**
  * The JSON of a specification check: the limits, the basis, the rounded value and the verdict.

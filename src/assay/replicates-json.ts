@@ -2,6 +2,7 @@
  * The one serialiser of `pondus replicates`: the JSON object of plain replicate statistics. The
  * CLI prints exactly this (its JSON writer adds the input's line number).
  */
+import { notesJson } from '../errors/note-json.js';
 import type { ReplicateResult } from './replicates.js';
 
 /**
@@ -31,6 +32,6 @@ export function replicatesJson(r: ReplicateResult, input: string): Record<string
     halfWidth: r.halfWidth.toNumber(),
     reported: r.reported,
     rounding: r.rounding,
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
   };
 }

@@ -2,6 +2,7 @@
  * The one serialiser of `pondus standardise`: the JSON object of a plain standardisation. The CLI
  * prints exactly this (its JSON writer adds the input's line number).
  */
+import { notesJson } from '../errors/note-json.js';
 import { BENCH_CAUTION } from '../preparation/caution.js';
 import { reportedAmountJson as amount } from '../sigfig/amount-json.js';
 import type { RoundingMode } from '../sigfig/round.js';
@@ -29,7 +30,7 @@ export function standardiseJson(r: StandardiseResult, input: string, rounding: R
     netTitre: amount(r.netTitre, 'result', 'mL', rounding),
     molarity: amount(r.molarity, 'result', 'M', rounding),
     rounding,
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
     caution: BENCH_CAUTION,
   };
 }

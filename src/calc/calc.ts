@@ -2,6 +2,7 @@
  * The calculator: an expression of measured quantities, units and formula
  * masses in, the reported figure out.
  */
+import { notesJson } from '../errors/note-json.js';
 import { fail } from '../errors/pondus-error.js';
 import { Decimal } from '../exact/decimal.js';
 import { toSafe, type SafeResult } from '../errors/pondus-error.js';
@@ -130,7 +131,7 @@ export interface CalcJson {
  * calcJson(calc('8.80 g + 2.1 g')) // { input: '8.80 g + 2.1 g', value: 10.9, rounded: 10.9, display: '10.9 g', sigFigs: 3, unit: 'g', notes: [] }
  */
 export function calcJson(r: CalcResult): CalcJson {
-  const notes = r.notes.map((n) => ({ code: n.code, message: n.message }));
+  const notes = notesJson(r.notes);
   const o: Omit<CalcJson, 'notes'> = { input: r.input, value: finite(r.value.toNumber()), rounded: finite(r.rounded.toNumber()), display: r.display, sigFigs: r.sigFigs, unit: r.unit };
   if (r.uncertainty) o.uncertainty = finite(r.uncertainty.toNumber());
   return { ...o, notes };

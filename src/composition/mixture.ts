@@ -3,6 +3,7 @@
  * components given as `formula=mass` (or amount), percent by component and by
  * element, with significant figures carried from the measurements.
  */
+import { notesJson } from '../errors/note-json.js';
 import { Decimal } from '../exact/decimal.js';
 import { fail, PondusError, toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { formulaMassDetail, type MassOptions } from '../mass/formula-mass.js';
@@ -214,6 +215,6 @@ export function mixtureJson(r: MixtureResult, rounding: RoundingMode = 'half-eve
     components: r.components.map((c) => ({ ...share(c), formula: c.formula ?? null, basis: c.basis ?? 'given' })),
     elements: r.elements.map(share),
     unaccounted: r.unaccounted ? share(r.unaccounted) : null,
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
   };
 }

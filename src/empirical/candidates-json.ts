@@ -1,3 +1,4 @@
+import { notesJson } from '../errors/note-json.js';
 import type { CandidateResult } from './candidates.js';
 
 /**
@@ -34,6 +35,6 @@ export function candidatesJson(r: CandidateResult) {
     visited: r.visited,
     plausible: r.plausible,
     truncated: r.truncated,
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
   };
 }

@@ -1,6 +1,7 @@
 /**
  * Empirical and molecular formulas from measurements.
  */
+import { notesJson } from '../errors/note-json.js';
 import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
 import { formulaMassDetail } from '../mass/formula-mass.js';
@@ -193,7 +194,7 @@ export function empiricalJson(r: EmpiricalResult) {
     residuals: { ...r.fit.residuals },
     grade: r.fit.grade,
     alternatives: r.alternatives.map((a) => ({ formula: a.formula, hill: a.hill, residuals: { ...a.residuals }, grade: a.grade })),
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
     ...(r.conversions.length ? { conversions: r.conversions.map((c) => ({ ...c, elements: { ...c.elements } })) } : {}),
   };
 }

@@ -1,3 +1,4 @@
+import { notesJson } from '../errors/note-json.js';
 import { Decimal } from '../exact/decimal.js';
 import type { IonResult } from './ion-mass.js';
 
@@ -54,6 +55,6 @@ export function ionJson(r: IonResult, extra: Record<string, unknown> = {}): IonJ
     errorPpmExact: r.found ? new Decimal(r.found.ppmExact).toSignificantDigits(12).toFixed() : null,
     errorMDa: r.found ? new Decimal(r.found.mDaExact).toDecimalPlaces(1).toNumber() : null,
     reportLine: r.reportLine,
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
   };
 }

@@ -1,24 +1,12 @@
+import { notesJson, type NoteJson } from '../errors/note-json.js';
 import { Decimal } from '../exact/decimal.js';
 import type { PatternResult } from './pattern.js';
 
 /** The JSON shape of an isotope pattern (`pondus pattern --json`). */
-export interface PatternJson {
-  input: string;
-  formula: string;
-  ion: string | null;
-  speciesFormula: string;
-  charge: number;
-  kind: 'aggregated' | 'fine';
-  resolvingPower: number | null;
-  coverage: number;
-  monoisotopicMz: number;
-  monoisotopicMzExact: string;
-  averageMz: number;
-  isotopeAverageMz: number;
-  minRelative: number;
+export type PatternJson = Omit<PatternResult, 'peaks' | 'allPeaks' | 'notes'> & {
   peaks: { mz: number; abundance: number; relative: number; shift: number; label?: string; isotopologues?: number }[];
-  notes: { code: string; message: string }[];
-}
+  notes: NoteJson[];
+};
 
 /**
  * The JSON object `pondus pattern --json` writes: the listed peaks by m/z, with their share of
@@ -53,6 +41,6 @@ export function patternJson(r: PatternResult, extra: Record<string, unknown> = {
       if (p.isotopologues !== null) o.isotopologues = p.isotopologues;
       return o;
     }),
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
   };
 }

@@ -4,16 +4,15 @@
  * adds the input's line number); tests/mass/serialisers.test.ts holds the line to
  * JSON.stringify of the object.
  */
+import { notesJson, type NoteJson } from '../errors/note-json.js';
 import { jsonNumber } from '../exact/json-number.js';
 import type { MassResult } from './formula-mass.js';
 
 /** A note as it appears in JSON rows. */
-export interface NoteJson {
-  code: string;
-  message: string;
-}
 
 /** The stable JSON shape of a mass result (the `mass --json` contract, before the shared writer's `line`). */
+export { notesJson, type NoteJson };
+
 export interface MassJson {
   input: string;
   formula: string;
@@ -24,15 +23,6 @@ export interface MassJson {
   notes: NoteJson[];
 }
 
-/**
- * Notes as JSON rows carry them: code and message.
- *
- * @example
- * notesJson([{ code: 'STATE_SYMBOL', message: 'set aside', column: 4 }]) // [{ code: 'STATE_SYMBOL', message: 'set aside' }]
- */
-export function notesJson(notes: readonly { code: string; message: string }[]): NoteJson[] {
-  return notes.map((n) => ({ code: n.code, message: n.message }));
-}
 
 /**
  * The JSON object `pondus mass --json` writes for one result; numbers at full precision.

@@ -2,6 +2,7 @@
  * The one serialiser of `pondus alligation`: the JSON object of a plain alligation result. The CLI
  * prints exactly this (its JSON writer adds the input's line number).
  */
+import { notesJson } from '../errors/note-json.js';
 import { reportedAmountJson as amount } from '../sigfig/amount-json.js';
 import { displayQuantity } from '../sigfig/display-quantity.js';
 import type { RoundingMode } from '../sigfig/round.js';
@@ -49,7 +50,7 @@ export function alligationJson(r: AlligationResult, input: string, rounding: Rou
     higher: r.higherAmount ? amount(r.higherAmount, 'instruction', unit, rounding) : null,
     lower: r.lowerAmount ? amount(r.lowerAmount, 'instruction', unit, rounding) : null,
     rounding,
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
     caution: PHARMACY_CAUTION,
   };
 }

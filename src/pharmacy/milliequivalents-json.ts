@@ -2,6 +2,7 @@
  * The one serialiser of `pondus meq`: the JSON object of a plain milliequivalents result. The CLI
  * prints exactly this (its JSON writer adds the input's line number).
  */
+import { notesJson } from '../errors/note-json.js';
 import { speciesText } from '../preparation/species.js';
 import { reportedAmountJson as amount } from '../sigfig/amount-json.js';
 import type { RoundingMode } from '../sigfig/round.js';
@@ -52,7 +53,7 @@ export function meqJson(r: MilliequivalentResult, input: string, rounding: Round
           perIon: r.perIon.map((i) => ({ ion: i.ion, mmol: amount(i.amount, k, 'mmol', rounding), meq: amount(i.equivalents, k, 'mmol', rounding, 'mEq') })),
         }),
     rounding,
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
     caution: PHARMACY_CAUTION,
   };
 }

@@ -2,6 +2,7 @@
  * The one serialiser of `pondus osmolarity`: the JSON object of a plain osmolarity result. The CLI
  * prints exactly this (its JSON writer adds the input's line number).
  */
+import { notesJson } from '../errors/note-json.js';
 import { speciesText } from '../preparation/species.js';
 import { reportedAmountJson as amount } from '../sigfig/amount-json.js';
 import type { RoundingMode } from '../sigfig/round.js';
@@ -28,7 +29,7 @@ export function osmolarityJson(r: OsmolarityResult, input: string, rounding: Rou
     mOsmPerL: amount(r.osmolarity, 'result', 'mM', rounding, 'mOsm/L'),
     ions: r.ions.map((i) => ({ ion: i.ion, charge: i.charge, mmolPerL: amount(i.molarity, 'result', 'mM', rounding, 'mmol/L'), meqPerL: amount(i.equivalents, 'result', 'mM', rounding, 'mEq/L') })),
     rounding,
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
     caution: PHARMACY_CAUTION,
   };
 }

@@ -2,6 +2,7 @@
  * The one serialiser of `pondus potency`: the JSON object of a plain potency result. The CLI
  * prints exactly this (its JSON writer adds the input's line number).
  */
+import { notesJson } from '../errors/note-json.js';
 import { reportedAmountJson as amount } from '../sigfig/amount-json.js';
 import { instructionJson, massUnitFor } from '../sigfig/instruction.js';
 import type { RoundingMode } from '../sigfig/round.js';
@@ -31,7 +32,7 @@ export function potencyJson(r: PotencyResult, input: string, rounding: RoundingM
     need: need?.trim() ?? null,
     weigh: r.weigh ? instructionJson(r.weigh, massUnitFor(r.weigh.quantity), rounding) : null,
     rounding,
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
     caution: POTENCY_CAUTION,
   };
 }

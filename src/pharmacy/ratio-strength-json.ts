@@ -2,6 +2,7 @@
  * The one serialiser of `pondus strength`: the JSON object of a strength in its forms, and the
  * texts the CLI's table and CSV show (the same digits as the JSON's displays).
  */
+import { notesJson } from '../errors/note-json.js';
 import type { Decimal } from '../exact/decimal.js';
 import type { RoundingMode } from '../sigfig/round.js';
 import { PHARMACY_CAUTION } from './caution.js';
@@ -50,5 +51,5 @@ export function strengthFormsShown(r: StrengthForms): { unit: string; value: num
  * strengthJson(strengthForms('1:1000 w/v'), '1:1000 w/v').ratio // '1:1000'
  */
 export function strengthJson(r: StrengthForms, input: string, rounding: RoundingMode = 'half-even'): Record<string, unknown> {
-  return { input, kind: r.kind, ratio: strengthRatioText(r), forms: strengthFormsShown(r), rounding, notes: r.notes.map((n) => ({ code: n.code, message: n.message })), caution: PHARMACY_CAUTION };
+  return { input, kind: r.kind, ratio: strengthRatioText(r), forms: strengthFormsShown(r), rounding, notes: notesJson(r.notes), caution: PHARMACY_CAUTION };
 }

@@ -2,6 +2,7 @@
  * The one serialiser of `pondus basis`: the JSON object of a plain basis conversion. The CLI
  * prints exactly this (its JSON writer adds the input's line number).
  */
+import { notesJson } from '../errors/note-json.js';
 import type { NoteJson } from '../mass/mass-json.js';
 import { reportedAmountJson, type ReportedAmountJson } from '../sigfig/amount-json.js';
 import { displayMeasured, type RoundingMode } from '../sigfig/round.js';
@@ -53,6 +54,6 @@ export function basisJson(r: BasisResult, rounding: RoundingMode = 'half-even'):
     factorDisplay: displayMeasured(r.factor.reported, rounding).text,
     value: r.value ? reportedAmountJson(r.value, 'result', undefined, rounding) : null,
     converted: r.converted ? reportedAmountJson(r.converted, 'result', undefined, rounding) : null,
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
   };
 }

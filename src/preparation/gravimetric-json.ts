@@ -2,6 +2,7 @@
  * The one serialiser of `pondus gravimetric`: the JSON object of a plain gravimetric result. The
  * CLI prints exactly this (its JSON writer adds the input's line number).
  */
+import { notesJson } from '../errors/note-json.js';
 import type { NoteJson } from '../mass/mass-json.js';
 import { exact } from '../sigfig/measured.js';
 import { multiply, quantity, type Quantity } from '../sigfig/quantity.js';
@@ -65,6 +66,6 @@ export function gravimetricJson(r: GravimetricResult, rounding: RoundingMode = '
     factorDisplay: displayMeasured(r.factor.reported, rounding).text,
     analyteMass: r.analyteMass ? reportedAmountJson(r.analyteMass, 'result', 'g', rounding) : null,
     massPercent: r.massPercent ? reportedAmountJson(percentQuantity(r.massPercent), 'result', '%', rounding) : null,
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
   };
 }

@@ -1,6 +1,7 @@
 /**
  * The one JSON form of a balance result (what `pondus balance --json` prints).
  */
+import { notesJson } from '../errors/note-json.js';
 import type { BalanceResult } from './balance.js';
 
 /** The JSON row of a balance result. */
@@ -41,6 +42,6 @@ export function balanceJson(r: BalanceResult): BalanceJson {
     basis: [...r.basis],
     settledBy: r.settledBy,
     catalysts: [...r.catalysts],
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
   };
 }

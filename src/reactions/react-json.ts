@@ -1,6 +1,7 @@
 /**
  * The one JSON form of a react result (what `pondus react --json` prints).
  */
+import { notesJson } from '../errors/note-json.js';
 import type { ReactResult, SpeciesLine } from './react.js';
 
 const lineJson = (l: SpeciesLine) => ({
@@ -37,6 +38,6 @@ export function reactJson(r: ReactResult) {
     excess: r.excess.map((e) => ({ species: e.species, moles: e.moles.value, molesDisplay: e.moles.figure, mass: e.mass ? e.mass.value : null, massDisplay: e.mass ? e.mass.figure : '' })),
     catalysts: r.catalysts.map((c) => ({ species: c.species, formula: c.formula, equiv: c.equiv, moles: c.moles ? c.moles.value : null, molesDisplay: c.moles ? c.moles.figure : '', mass: c.mass ? c.mass.value : null, massDisplay: c.mass ? c.mass.figure : '' })),
     percentYield: r.percentYield ? { species: r.percentYield.species, percent: r.percentYield.percent.value, display: r.percentYield.percent.figure } : null,
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
   };
 }

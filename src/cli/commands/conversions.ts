@@ -1,6 +1,6 @@
+import { notesJson } from '../../errors/note-json.js';
 import type { Command } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
-import type { Note } from '../../errors/issue.js';
 import { convertBasis, type BasisResult } from '../../preparation/basis.js';
 import type { ConversionFactor } from '../../preparation/conversion-factor.js';
 import { BENCH_CAUTION, DOSE_CAUTION } from '../../preparation/caution.js';
@@ -22,7 +22,6 @@ import type { MassDilutionResult } from '../../preparation/mass-dilution.js';
 import { declareConversions } from './declarations.js';
 
 const factorText = (f: ConversionFactor) => `${f.a === 1n ? '' : `${f.a} × `}M(${speciesText(f.sought)}) / ${f.b === 1n ? `M(${speciesText(f.given)})` : `(${f.b} × M(${speciesText(f.given)}))`}`;
-const notesJson = (notes: Note[]) => notes.map((n) => ({ code: n.code, message: n.message }));
 
 /** Text and value helpers for one rounding mode. */
 function shows(rounding: RoundingMode) {

@@ -2,8 +2,8 @@
  * The two other shapes of `pondus dilute`: a serial dilution plan (`--series`)
  * and a dilution by mass of a solid or semisolid (`--mass`).
  */
+import { notesJson } from '../../errors/note-json.js';
 import { fail } from '../../errors/pondus-error.js';
-import type { Note } from '../../errors/issue.js';
 import { BENCH_CAUTION } from '../../preparation/caution.js';
 import { dilutionSeries, MAX_SERIES_STEPS, type SeriesResult } from '../../preparation/dilution-series.js';
 import { diluteByMass, type MassDilutionResult } from '../../preparation/mass-dilution.js';
@@ -22,7 +22,6 @@ export interface DilutePlanCliOptions extends OutputOptions, RoundingOptions {
   mass?: string;
 }
 
-const notesJson = (notes: Note[]) => notes.map((n) => ({ code: n.code, message: n.message }));
 const ratio = (d: { toSignificantDigits(n: number): { toFixed(): string } }) => `1:${d.toSignificantDigits(6).toFixed()}`;
 
 /**

@@ -1,7 +1,7 @@
 /**
  * `pondus prepare --sheet FILE`: one printable instruction per row of a prep sheet.
  */
-import type { Note } from '../../errors/issue.js';
+import { notesJson } from '../../errors/note-json.js';
 import { fail } from '../../errors/pondus-error.js';
 import { BENCH_CAUTION, CONCENTRATED_CAUTION } from '../../preparation/caution.js';
 import { prepRow, readPrepSheet, type PrepRowResult, type PrepSheetRow } from '../../preparation/prep-sheet.js';
@@ -17,7 +17,6 @@ export interface PrepSheetCliOptions extends SheetOptions<PrepSheetRow>, Roundin
 
 export { readPrepSheet };
 
-const notesJson = (notes: Note[]) => notes.map((n) => ({ code: n.code, message: n.message }));
 
 /** What a row tells the person at the bench to do, and the amount. */
 function amountOf(p: PrepRowResult): { ins: Instruction | null; unit: string; verb: string } {

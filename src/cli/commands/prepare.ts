@@ -1,8 +1,8 @@
+import { notesJson } from '../../errors/note-json.js';
 import { hillAside, speciesText } from '../../preparation/species.js';
 import type { Command } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
 import { readKeyValuePair } from '../../key-values/read-key-values.js';
-import type { Note } from '../../errors/issue.js';
 import { BENCH_CAUTION } from '../../preparation/caution.js';
 import { displayInstruction, displayResult, instructionJson, massUnitFor, resultJson, volumeUnitFor, type Instruction } from '../../sigfig/instruction.js';
 import { prepareSolution, type PurityBasis, type SolutionResult } from '../../preparation/solution.js';
@@ -34,7 +34,6 @@ interface PrepareCliOptions extends OutputOptions, RoundingOptions, PrepSheetCli
 
 type Prepared = { kind: 'solution'; r: SolutionResult } | { kind: 'substitute'; r: SubstituteResult } | { kind: 'concentrated'; r: ConcentratedResult };
 
-const notesJson = (notes: Note[]) => notes.map((n) => ({ code: n.code, message: n.message }));
 
 /**
  * Checks which options of `prepare` go together; a conflict is a usage error (exit status 2).

@@ -6,11 +6,10 @@
  * unrounded in the base unit beside the figure as reported. CSV cells are
  * guarded and the notes cell written by the shared output writers (../output/format.ts).
  */
-import type { Note } from '../../errors/issue.js';
+import { notesJson } from '../../errors/note-json.js';
 import type { Quantity } from '../../sigfig/quantity.js';
 import { displayQuantity } from '../../sigfig/display-quantity.js';
 import type { RoundingMode } from '../../sigfig/round.js';
-import { reportedAmountJson } from '../../sigfig/amount-json.js';
 import type { Presenter } from '../output/presenter.js';
 
 /** A result with the input it came from and its line. */
@@ -18,35 +17,6 @@ export interface Row<R> {
   input: string;
   line: number;
   r: R;
-}
-
-/**
- * A quantity in JSON, the amount shape of every command (src/sigfig/instruction.ts, AmountJson):
- * `kind` 'result' (computed from measurements, textbook figures) or 'instruction' (computed from a
- * target: an amount to weigh or mix, kept at working precision); `value` unrounded in the base unit
- * `unit` ('g', 'L', 'mol', 'M'; 'Eq' and 'Osm' for milliequivalents and milliosmoles; '' for a pure
- * number or a percentage, given as a fraction); `figure` the number as reported, rounded once, in
- * `displayUnit`; `display` the two together; `sigFigs` the figures shown (null for an exact value).
- */
-export interface QcAmountJson {
-  kind: 'instruction' | 'result';
-  value: number;
-  unit: string;
-  display: string;
-  sigFigs: number | null;
-  figure: string;
-  displayUnit: string;
-}
-
-/**
- * A quantity as an amount in JSON, shown in a unit (or under a label: 'mEq' for mmol of charge),
- * rounded once for the reported figure.
- *
- * @example
- * amountJson(measure('250. mg'), 'result', 'g', 'half-even') // { kind: 'result', value: 0.25, unit: 'g', display: '0.250 g', sigFigs: 3, figure: '0.250', displayUnit: 'g' }
- */
-export function amountJson(q: Quantity, kind: 'instruction' | 'result', unit: string | undefined, rounding: RoundingMode, label = unit): QcAmountJson {
-  return reportedAmountJson(q, kind, unit, rounding, label);
 }
 
 /**
@@ -67,7 +37,7 @@ export function qtext(q: Quantity, unit: string | undefined, rounding: RoundingM
 }
 
 /** Notes as JSON. */
-export const notesJson = (notes: Note[]) => notes.map((n) => ({ code: n.code, message: n.message }));
+export { notesJson };
 
 /**
  * Wraps a computation so each result knows its input and line (results come in input order).

@@ -1,3 +1,4 @@
+import { notesJson } from '../../errors/note-json.js';
 import type { Command } from 'commander';
 import { fail, PondusError } from '../../errors/pondus-error.js';
 import type { Note } from '../../errors/issue.js';
@@ -128,7 +129,7 @@ export function reagentsPresenter(o: ReagentsCliOptions): Presenter<ReagentRow> 
       if (r instanceof PondusError) throw r;
       return r;
     },
-    json: (r) => ({ ...reagentRowJson(r), notes: [...(r.input === firstInput ? tableNotes : []), ...r.notes].map((n) => ({ code: n.code, message: n.message })), caution: TABLE_CAUTION }),
+    json: (r) => ({ ...reagentRowJson(r), notes: notesJson([...(r.input === firstInput ? tableNotes : []), ...r.notes]), caution: TABLE_CAUTION }),
     // the written columns first (a procedure file reads them back), then what was computed
     columns: ['input', 'role', 'reagent', 'formula', 'amount', 'purity', 'density', 'solution', 'form', 'actual', 'equation', 'name', 'hill_formula', 'M_g_per_mol', 'equiv', 'n_mmol', 'mass', 'mass_unit', 'volume', 'volume_unit', 'percent_yield'],
     cells: (r): Cell[] => [
