@@ -27,6 +27,7 @@
  *   "common" ranges (`ratios: 'common'`, covering most but not all). Formulas without carbon are
  *   dropped while ratios apply.
  */
+import { DEFAULT_RANGES } from './search-defaults.js';
 import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
 import { getAtomData } from '../elements/atom-data.js';
@@ -144,7 +145,7 @@ export interface CandidateResult {
 }
 
 /** The default element ranges. */
-export const DEFAULT_RANGES = 'C0-80 H0-160 N0-10 O0-20 S0-4 P0-2 F0-6 Cl0-4 Br0-3 I0-2';
+export { DEFAULT_RANGES };
 
 /**
  * Element-ratio ranges to carbon of Kind & Fiehn 2007, rule 4 (BMC Bioinformatics 8:105, the

@@ -4,6 +4,7 @@
  * and percent of each element — oxygen by difference — with significant
  * figures, and the empirical formula.
  */
+import { notesJson } from '../errors/note-json.js';
 import type { Note } from '../errors/issue.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
 import { Decimal } from '../exact/decimal.js';
@@ -14,19 +15,11 @@ import { add, divide, multiply, quantity, subtract, type Quantity } from '../sig
 import { searchFormula, type FormulaFit } from './formula-search.js';
 import type { Measurements } from './measurements.js';
 import { checkInputLength } from './input-length.js';
+import { PRODUCTS } from './search-defaults.js';
 import { displayQuantity } from '../sigfig/display-quantity.js';
 import type { RoundingMode } from '../sigfig/round.js';
 
-/** What was collected, and the element it carries. */
-export const PRODUCTS: Readonly<Record<string, { formula: string; element: string }>> = Object.freeze({
-  co2: { formula: 'CO2', element: 'C' },
-  h2o: { formula: 'H2O', element: 'H' },
-  n2: { formula: 'N2', element: 'N' },
-  so2: { formula: 'SO2', element: 'S' },
-  agcl: { formula: 'AgCl', element: 'Cl' },
-  agbr: { formula: 'AgBr', element: 'Br' },
-  agi: { formula: 'AgI', element: 'I' },
-});
+export { PRODUCTS };
 
 export interface CombustionOptions {
   /** Sample mass: '0.1000 g'. */
@@ -137,7 +130,7 @@ export function combustionJson(r: CombustionResult) {
     hill: r.hill,
     residuals: r.fit ? { ...r.fit.residuals } : null,
     alternatives: r.alternatives.map((a) => a.formula),
-    notes: r.notes.map((n) => ({ code: n.code, message: n.message })),
+    notes: notesJson(r.notes),
   };
 }
 

@@ -7,6 +7,7 @@
  * Nothing here may import a computing module: the start-up of `--help` depends on it (the build
  * checks the help bundle's inputs).
  */
+import { DEFAULT_RANGES, PRODUCTS } from '../../empirical/search-defaults.js';
 import { Option, type Command } from 'commander';
 import { conflicting, required, withFormulaOptions, withOutputOptions, withRoundingOption } from './common.js';
 
@@ -91,19 +92,11 @@ export function declareAnalysis(program: Command): Command {
   ));
 }
 
-/** The combustion products `pondus combustion` takes a mass of, and the element each carries (as in empirical/combustion.ts, which a test holds this to). */
-export const COMBUSTION_PRODUCTS: Readonly<Record<string, { formula: string; element: string }>> = {
-  co2: { formula: 'CO2', element: 'C' },
-  h2o: { formula: 'H2O', element: 'H' },
-  n2: { formula: 'N2', element: 'N' },
-  so2: { formula: 'SO2', element: 'S' },
-  agcl: { formula: 'AgCl', element: 'Cl' },
-  agbr: { formula: 'AgBr', element: 'Br' },
-  agi: { formula: 'AgI', element: 'I' },
-};
+/** The combustion products `pondus combustion` takes a mass of, and the element each carries. */
+export const COMBUSTION_PRODUCTS = PRODUCTS;
 
-/** The default element ranges of `pondus candidates` (as DEFAULT_RANGES in empirical/candidates.ts, which a test holds this to). */
-export const CANDIDATE_RANGES = 'C0-80 H0-160 N0-10 O0-20 S0-4 P0-2 F0-6 Cl0-4 Br0-3 I0-2';
+/** The default element ranges of `pondus candidates`. */
+export const CANDIDATE_RANGES = DEFAULT_RANGES;
 
 /**
  * Declares `pondus empirical`, `combustion` and `candidates`.
