@@ -11,18 +11,24 @@ async function collect(chunks: string[]): Promise<string[][]> {
   return out;
 }
 
+/** A text or byte string cut into chunks of the given lengths, the rest in a last chunk. */
+function cutInto<T extends { length: number }>(whole: T, cuts: readonly number[], piece: (from: number, to: number) => T): T[] {
+  const chunks: T[] = [];
+  let at = 0;
+  for (const c of cuts) {
+    chunks.push(piece(at, Math.min(whole.length, at + c)));
+    at = Math.min(whole.length, at + c);
+  }
+  chunks.push(piece(at, whole.length));
+  return chunks;
+}
+
 describe('reading lines in batches', () => {
   it('gives every line once, in order, however the input is cut into chunks', async () => {
     await fc.assert(
       fc.asyncProperty(fc.array(fc.string({ maxLength: 8 }).map((s) => s.replace(/[\r\n]/g, '')), { maxLength: 1500 }), fc.array(fc.integer({ min: 1, max: 4000 }), { maxLength: 6 }), async (lines, cuts) => {
         const text = lines.map((l) => l + '\n').join('');
-        const chunks: string[] = [];
-        let at = 0;
-        for (const c of cuts) {
-          chunks.push(text.slice(at, at + c));
-          at += c;
-        }
-        chunks.push(text.slice(at));
+        const chunks = cutInto(text, cuts, (from, to) => text.slice(from, to));
         const batches = await collect(chunks);
         expect(batches.flat()).toEqual(lines);
         for (const b of batches) expect(b.length).toBeLessThanOrEqual(512);
@@ -46,13 +52,7 @@ describe('reading lines in batches', () => {
         fc.array(fc.integer({ min: 1, max: 3000 }), { maxLength: 6 }),
         async (lines, cuts) => {
           const text = lines.map(([l, end]) => l + end).join('');
-          const chunks: string[] = [];
-          let at = 0;
-          for (const c of cuts) {
-            chunks.push(text.slice(at, at + c));
-            at += c;
-          }
-          chunks.push(text.slice(at));
+          const chunks = cutInto(text, cuts, (from, to) => text.slice(from, to));
           const batches = await collect(chunks);
           expect(batches.flat()).toEqual(lines.map(([l]) => l));
           for (const b of batches) expect(b.length).toBeLessThanOrEqual(512);
@@ -72,13 +72,7 @@ describe('reading lines in batches', () => {
           // a line that is empty after a CR would read as part of a CRLF: give each line a character
           const rows = lines.map(([l, end]) => [l === '' ? 'x' : l, end] as const);
           const bytes = Buffer.from((bom ? '\ufeff' : '') + rows.map(([l, end]) => l + end).join(''), 'utf8');
-          const chunks: Buffer[] = [];
-          let at = 0;
-          for (const c of cuts) {
-            chunks.push(bytes.subarray(at, at + c));
-            at += c;
-          }
-          chunks.push(bytes.subarray(at));
+          const chunks = cutInto(bytes, cuts, (from, to) => bytes.subarray(from, to));
           async function* source() {
             for (const c of chunks) yield c;
           }
