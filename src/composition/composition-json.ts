@@ -4,7 +4,7 @@
  * element) or long (one row per element). The CLI prints exactly these (the shared
  * writer adds the input's line number and the notes column).
  */
-import { jsonNumber, numberText } from '../exact/json-number.js';
+import { jsonNumber, numberText, smallNumberText } from '../exact/json-number.js';
 import { alphabeticalRank } from '../elements/atom-data.js';
 import type { Note } from '../errors/issue.js';
 import { jsonString, notesJson, notesLine, type NoteJson } from '../mass/mass-json.js';
@@ -61,7 +61,7 @@ export function compositionJsonLine(r: CompositionResult, line?: number): string
   const els = r.elements;
   for (let i = 0; i < els.length; i++) {
     const e = els[i];
-    s += `${i ? ',' : ''}{"symbol":"${e.symbol}","count":${numberText(e.count)},"mass":${numberText(e.mass)},"massPercent":${numberText(e.massPercent)}}`;
+    s += `${i ? ',' : ''}{"symbol":"${e.symbol}","count":${smallNumberText(e.count)},"mass":${jsonNumber(e.mass, e.massExact)},"massPercent":${numberText(e.massPercent)}}`;
   }
   s += ']';
   if (r.part) {

@@ -20,8 +20,10 @@ export interface ElementShare {
   symbol: string;
   /** How many atoms one formula unit holds (a decimal count as its nearest number). */
   count: number;
-  /** Mass of this element in one mole of the formula, g/mol. */
+  /** Mass of this element in one mole of the formula, g/mol (the nearest double to the exact product). */
   mass: number;
+  /** The exact mass as decimal text ('2.016'). */
+  massExact: string;
   /** Percent by mass. */
   massPercent: number;
 }
@@ -97,7 +99,7 @@ export function compositionDetail(input: string | FormulaTree, options: Composit
     for (let i = 0; i < n; i++) {
       const c = counts[i] as number;
       const m = c * avg[ids[i]];
-      elements[i] = { symbol: ATOMS.data[ids[i]].label, count: c, mass: m / SCALE, massPercent: total === 0 ? 0 : scaledRatio(m, total, 100) };
+      elements[i] = { symbol: ATOMS.data[ids[i]].label, count: c, mass: m / SCALE, massExact: scaledToString(m), massPercent: total === 0 ? 0 : scaledRatio(m, total, 100) };
     }
     molarMass = total / SCALE;
     molarMassExact = scaledToString(total);
@@ -106,7 +108,7 @@ export function compositionDetail(input: string | FormulaTree, options: Composit
     const contributions = mass.contributions;
     for (let i = 0; i < n; i++) {
       const c = contributions[i];
-      elements[i] = { symbol: c.label, count: toDecimal(c.count).toNumber(), mass: c.mass.toNumber(), massPercent: totalD.isZero() ? 0 : c.mass.div(totalD).times(100).toNumber() };
+      elements[i] = { symbol: c.label, count: toDecimal(c.count).toNumber(), mass: c.mass.toNumber(), massExact: c.mass.toFixed(), massPercent: totalD.isZero() ? 0 : c.mass.div(totalD).times(100).toNumber() };
     }
     molarMass = totalD.toNumber();
     molarMassExact = totalD.toFixed();

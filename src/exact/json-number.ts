@@ -38,3 +38,25 @@ export function jsonNumber(value: number, exact: string): string {
 export function numberText(value: number): string {
   return JSON.stringify(value);
 }
+
+/** The texts of the whole numbers below TABLE_SIZE, made on first use. */
+const TABLE_SIZE = 4096;
+let smallTexts: string[] | null = null;
+
+/**
+ * The text JSON.stringify gives a number, from a table for whole numbers from 0 to 4095 (atom
+ * counts, mostly): a lookup instead of a conversion.
+ *
+ * @param value - any finite number.
+ * @returns what JSON.stringify(value) gives.
+ * @example
+ * smallNumberText(12) // '12'
+ * smallNumberText(0.5) // '0.5'
+ */
+export function smallNumberText(value: number): string {
+  if (value >= 0 && value < TABLE_SIZE && (value | 0) === value) {
+    smallTexts ??= Array.from({ length: TABLE_SIZE }, (_, i) => String(i));
+    return smallTexts[value];
+  }
+  return numberText(value);
+}

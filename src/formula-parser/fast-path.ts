@@ -75,6 +75,79 @@ export function fastParse(input: string): FormulaTree | null {
   }
 }
 
+/**
+ * The element symbol the fast readers take for the letters `text[start..end)` (an upper-case
+ * letter and at most one lower-case one; D and T give 'H'), or undefined for anything else,
+ * including Ac, Ts, Pr and Np, whose readings the full parser settles.
+ *
+ * @example
+ * plainSymbol('NaCl', 0, 2) // 'Na'
+ * plainSymbol('Ac', 0, 2)   // undefined
+ */
+export function plainSymbol(text: string, start: number, end: number): string | undefined {
+  const first = text.charCodeAt(start) - 65;
+  return end - start === 1 ? ONE_LETTER[first] : end - start === 2 ? TWO_LETTER[first * 26 + text.charCodeAt(start + 1) - 97] : undefined;
+}
+
+/**
+ * The charge that ends a plain formula at `pos` (running to `limit`), as the grammar reads it:
+ * `^2-`, `^-2`, `^+`, superscripts `²⁻`, or a bare sign after a symbol or bracket; null when the
+ * text there is anything else (the full parser then decides).
+ *
+ * @example
+ * readEndCharge('SO4^2-', 3, 6) // -2
+ * readEndCharge('NH4+', 3, 4)   // null
+ */
+export function readEndCharge(t: string, pos: number, limit: number): number | null {
+  let p = pos;
+  let sign = 0;
+  let digits = '';
+  const c = t[p];
+  if (c === '^') {
+    p++;
+    if (t[p] === '+' || t[p] === '-') {
+      sign = t[p] === '+' ? 1 : -1;
+      p++;
+      while (p < limit && t.charCodeAt(p) >= 48 && t.charCodeAt(p) <= 57) digits += t[p++];
+    } else {
+      while (p < limit && t.charCodeAt(p) >= 48 && t.charCodeAt(p) <= 57) digits += t[p++];
+      if (t[p] !== '+' && t[p] !== '-') return null;
+      sign = t[p] === '+' ? 1 : -1;
+      p++;
+    }
+  } else if (c === '+' || c === '-') {
+    const before = t.charCodeAt(p - 1);
+    // after a digit a bare sign is ambiguous (NH4+): the grammar refuses it
+    if ((before >= 48 && before <= 57) || (before >= 0x2080 && before <= 0x2089)) return null;
+    sign = c === '+' ? 1 : -1;
+    p++;
+  } else {
+    while (p < limit && SUPERSCRIPT_DIGIT.has(t.charCodeAt(p))) {
+      digits += SUPERSCRIPT_DIGIT.get(t.charCodeAt(p));
+      p++;
+    }
+    const s = t.charCodeAt(p);
+    if (s !== SUPER_PLUS && s !== SUPER_MINUS) return null;
+    sign = s === SUPER_PLUS ? 1 : -1;
+    p++;
+  }
+  if (p !== limit || digits.startsWith('0') || digits.length > 2) return null;
+  const n = digits === '' ? 1 : Number(digits);
+  if (n > MAX_CHARGE) return null;
+  return sign * n;
+}
+
+/**
+ * True when the character at `pos` may start the charge that ends a formula (`^`, a sign, a superscript).
+ *
+ * @example
+ * mayStartCharge('SO4^2-', 3) // true
+ */
+export function mayStartCharge(t: string, pos: number): boolean {
+  const c = t.charCodeAt(pos);
+  return c === 94 || c === 43 || c === 45 || c === SUPER_PLUS || c === SUPER_MINUS || SUPERSCRIPT_DIGIT.has(c);
+}
+
 class Scanner {
   pos = 0;
   /** Set when three atoms stand next to each other with no count between them (a run such as THF or NBS). */
@@ -106,7 +179,7 @@ class Scanner {
         continue;
       }
       if (ch === undefined || ch === close) return components;
-      if (depth === 0 && (ch === '^' || ch === '+' || ch === '-' || ch === '⁺' || ch === '⁻' || SUPERSCRIPT_DIGIT.has(ch.charCodeAt(0)))) return components;
+      if (depth === 0 && mayStartCharge(this.text, this.pos)) return components;
       throw GIVE_UP;
     }
   }
@@ -132,44 +205,10 @@ class Scanner {
 
   /** A charge at the end: `^2-`, `^-2`, `^+`, superscripts `²⁻`, or a bare sign after a symbol or bracket. */
   charge(): number {
-    const t = this.text;
-    let p = this.pos;
-    let sign = 0;
-    let digits = '';
-    const c = t[p];
-    if (c === '^') {
-      p++;
-      if (t[p] === '+' || t[p] === '-') {
-        sign = t[p] === '+' ? 1 : -1;
-        p++;
-        while (p < this.limit && t.charCodeAt(p) >= 48 && t.charCodeAt(p) <= 57) digits += t[p++];
-      } else {
-        while (p < this.limit && t.charCodeAt(p) >= 48 && t.charCodeAt(p) <= 57) digits += t[p++];
-        if (t[p] !== '+' && t[p] !== '-') throw GIVE_UP;
-        sign = t[p] === '+' ? 1 : -1;
-        p++;
-      }
-    } else if (c === '+' || c === '-') {
-      const before = t.charCodeAt(p - 1);
-      // after a digit a bare sign is ambiguous (NH4+): the grammar refuses it
-      if ((before >= 48 && before <= 57) || (before >= 0x2080 && before <= 0x2089)) throw GIVE_UP;
-      sign = c === '+' ? 1 : -1;
-      p++;
-    } else {
-      while (p < this.limit && SUPERSCRIPT_DIGIT.has(t.charCodeAt(p))) {
-        digits += SUPERSCRIPT_DIGIT.get(t.charCodeAt(p));
-        p++;
-      }
-      const s = t.charCodeAt(p);
-      if (s !== SUPER_PLUS && s !== SUPER_MINUS) throw GIVE_UP;
-      sign = s === SUPER_PLUS ? 1 : -1;
-      p++;
-    }
-    if (p !== this.limit || digits.startsWith('0') || digits.length > 2) throw GIVE_UP;
-    const n = digits === '' ? 1 : Number(digits);
-    if (n > MAX_CHARGE) throw GIVE_UP;
-    this.pos = p;
-    return sign * n;
+    const z = readEndCharge(this.text, this.pos, this.limit);
+    if (z === null) throw GIVE_UP;
+    this.pos = this.limit;
+    return z;
   }
 
   private component(depth: number): ComponentNode {
@@ -195,7 +234,7 @@ class Scanner {
       end++;
     }
     const first = this.text.charCodeAt(start) - 65;
-    const symbol = end - start === 1 ? ONE_LETTER[first] : end - start === 2 ? TWO_LETTER[first * 26 + this.text.charCodeAt(start + 1) - 97] : undefined;
+    const symbol = plainSymbol(this.text, start, end);
     if (symbol === undefined) throw GIVE_UP; // unknown symbols and long words go to the full parser
     if (end - start === 2 && isCaseTrap(symbol)) this.trap = true;
     this.pos = end;

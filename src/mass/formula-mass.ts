@@ -20,6 +20,7 @@ import { Decimal } from '../exact/decimal.js';
 import { bigScaledToString, fromScaled, scaledToString, SCALE_DIGITS } from '../exact/scaled.js';
 import { amountText, toDecimal, type Amount } from '../formula/amount.js';
 import { atomVector, countsMap, type AtomCounts, type AtomVector } from '../formula/flatten.js';
+import { plainVector } from '../formula/plain-vector.js';
 import { chargeText } from '../formula/hill.js';
 import { parseFormula, type ParseOptions } from '../formula-parser/parse.js';
 import type { FormulaTree } from '../formula-parser/tree.js';
@@ -105,7 +106,12 @@ const NO_NOTES: Note[] = Object.freeze([]) as unknown as Note[];
 
 /** The sums and notes of one formula: the shared core of both result shapes. */
 interface MassCore {
-  tree: FormulaTree;
+  input: string;
+  charge: number;
+  /** The parsed formula, or null when the atom totals came straight from the text (read again when asked for). */
+  tree: FormulaTree | null;
+  /** The options the text was read with (to read it again into a tree). */
+  options: MassOptions;
   vector: AtomVector;
   weights: WeightTable;
   formula: string;
@@ -115,8 +121,22 @@ interface MassCore {
   notes: Note[];
 }
 
-function computeCore(tree: FormulaTree, weights: WeightTable): MassCore {
-  const vector = atomVector(tree);
+/** The core of a formula given as text: plain formulas go straight to their atom totals, the rest through the tree. */
+function coreOfText(input: string, options: MassOptions): MassCore {
+  if (options.abbreviations !== true && (options.maxLength === undefined || input.length <= options.maxLength)) {
+    const plain = plainVector(input);
+    if (plain) return sums(input, plain.charge, NO_NOTES, plain.vector, null, options);
+  }
+  const tree = parseFormula(input, options);
+  return sums(input, tree.charge, tree.notes, atomVector(tree), tree, options);
+}
+
+function coreOf(input: string | FormulaTree, options: MassOptions): MassCore {
+  return typeof input === 'string' ? coreOfText(input, options) : sums(input.input, input.charge, input.notes, atomVector(input), input, options);
+}
+
+function sums(input: string, charge: number, treeNotes: Note[], vector: AtomVector, tree: FormulaTree | null, options: MassOptions): MassCore {
+  const weights = options.weights ?? 'standard';
   const { ids, counts } = vector;
   const avg = weights === 'standard' ? ATOMS.standardScaled : ATOMS.abridgedScaled;
   const monoTable = ATOMS.monoScaled;
@@ -128,7 +148,7 @@ function computeCore(tree: FormulaTree, weights: WeightTable): MassCore {
   let exact = true;
   let formula = '';
   let fractional = false;
-  let notes = tree.notes.length ? tree.notes.slice() : NO_NOTES;
+  let notes = treeNotes.length ? treeNotes.slice() : NO_NOTES;
   for (let i = 0; i < ids.length; i++) {
     const id = ids[i];
     const c = counts[i];
@@ -152,22 +172,22 @@ function computeCore(tree: FormulaTree, weights: WeightTable): MassCore {
   const molar = exact && Number.isSafeInteger(molarSum) ? molarSum : null;
   const mono = exact && Number.isSafeInteger(monoSum) ? monoSum : null;
   let nominal: number | null = exact ? nominalSum : null;
-  if (tree.charge !== 0) formula += chargeText(tree.charge);
+  if (charge !== 0) formula += chargeText(charge);
   if (nominal !== null && !Number.isSafeInteger(nominal)) nominal = null;
   if (fractional) {
     if (notes === NO_NOTES) notes = [];
     notes.push({ code: 'NON_INTEGER_COUNTS', message: 'the formula has non-integer counts; the nominal mass is not defined' });
   }
-  if (tree.charge !== 0) {
+  if (charge !== 0) {
     if (notes === NO_NOTES) notes = [];
-    const z = Math.abs(tree.charge);
+    const z = Math.abs(charge);
     const e = (Number(ELECTRON_MASS) * z).toPrecision(2);
     notes.push({
       code: 'ION_MOLAR_MASS',
-      message: `the molar mass is the sum of the atomic weights (neutral atoms): the ${z} electron${z === 1 ? '' : 's'} ${tree.charge > 0 ? 'missing from' : 'added to'} the ion (${e} g/mol) ${z === 1 ? 'is' : 'are'} not counted (common practice for molar masses); the monoisotopic mass counts ${z === 1 ? 'it' : 'them'}`,
+      message: `the molar mass is the sum of the atomic weights (neutral atoms): the ${z} electron${z === 1 ? '' : 's'} ${charge > 0 ? 'missing from' : 'added to'} the ion (${e} g/mol) ${z === 1 ? 'is' : 'are'} not counted (common practice for molar masses); the monoisotopic mass counts ${z === 1 ? 'it' : 'them'}`,
     });
   }
-  return { tree, vector, weights, formula, molarScaled: molar, monoScaled: mono, nominal, notes };
+  return { input, charge, tree, options, vector, weights, formula, molarScaled: molar, monoScaled: mono, nominal, notes };
 }
 
 function decimalSum(core: MassCore, value: (d: AtomData) => string): Decimal {
@@ -220,7 +240,7 @@ function bigSum(core: MassCore, values: readonly number[], extra: bigint): [numb
 
 function monoDecimal(core: MassCore): Decimal {
   const m = core.monoScaled !== null ? fromScaled(core.monoScaled) : decimalSum(core, monoText);
-  return core.tree.charge !== 0 ? m.minus(new Decimal(ELECTRON_MASS).times(core.tree.charge)) : m;
+  return core.charge !== 0 ? m.minus(new Decimal(ELECTRON_MASS).times(core.charge)) : m;
 }
 
 /** The electron mass in 10^-15 u (CODATA 2018 gives it to 15 decimals), for exact ion masses in BigInt. */
@@ -229,17 +249,17 @@ let electron15: bigint | null = null;
 function monoOf(core: MassCore): [number, string] {
   // an exact integer divided by 10^12 is the correctly rounded double of the exact decimal
   if (core.monoScaled !== null) {
-    if (core.tree.charge === 0) return [core.monoScaled / SCALE, scaledToString(core.monoScaled)];
+    if (core.charge === 0) return [core.monoScaled / SCALE, scaledToString(core.monoScaled)];
     // an ion: the electrons in exact integer arithmetic, and Number() of the exact text is its nearest double
     electron15 ??= electronIn15();
     if (electron15 !== null) {
-      const text = bigScaledToString(BigInt(core.monoScaled) * 1000n - BigInt(core.tree.charge) * electron15, 15);
+      const text = bigScaledToString(BigInt(core.monoScaled) * 1000n - BigInt(core.charge) * electron15, 15);
       return [Number(text), text];
     }
   }
   electron15 ??= electronIn15();
   if (electron15 !== null) {
-    const big = bigSum(core, ATOMS.monoScaled, -BigInt(core.tree.charge) * electron15 * 1000n);
+    const big = bigSum(core, ATOMS.monoScaled, -BigInt(core.charge) * electron15 * 1000n);
     if (big !== null) return big;
   }
   const d = monoDecimal(core);
@@ -261,19 +281,19 @@ function plainResult(core: MassCore): MassResult {
     molarMass = core.molarScaled / SCALE;
     molarMassExact = scaledToString(core.molarScaled);
   } else [molarMass, molarMassExact] = molarOf(core);
-  if (core.monoScaled !== null && core.tree.charge === 0) {
+  if (core.monoScaled !== null && core.charge === 0) {
     monoisotopicMass = core.monoScaled / SCALE;
     monoisotopicMassExact = scaledToString(core.monoScaled);
   } else [monoisotopicMass, monoisotopicMassExact] = monoOf(core);
   return {
-    input: core.tree.input,
+    input: core.input,
     formula: core.formula,
     molarMass,
     molarMassExact,
     monoisotopicMass,
     monoisotopicMassExact,
     nominalMass: core.nominal,
-    charge: core.tree.charge,
+    charge: core.charge,
     notes: core.notes === NO_NOTES ? [] : core.notes,
   };
 }
@@ -291,8 +311,7 @@ function plainResult(core: MassCore): MassResult {
  * formulaMass('SO4^2-').charge             // -2
  */
 export function formulaMass(input: string | FormulaTree, options: MassOptions = {}): MassResult {
-  const tree = typeof input === 'string' ? parseFormula(input, options) : input;
-  return plainResult(computeCore(tree, options.weights ?? 'standard'));
+  return plainResult(coreOf(input, options));
 }
 
 /**
@@ -311,7 +330,6 @@ class Detail implements MassDetail {
   readonly charge: number;
   readonly nominalMass: number | null;
   readonly notes: Note[];
-  readonly tree: FormulaTree;
   readonly vector: AtomVector;
   readonly weights: WeightTable;
   readonly molarScaled: number | null;
@@ -322,16 +340,20 @@ class Detail implements MassDetail {
   private atomsCache: AtomCounts | null = null;
 
   constructor(private readonly core: MassCore) {
-    this.input = core.tree.input;
+    this.input = core.input;
     this.formula = core.formula;
-    this.charge = core.tree.charge;
+    this.charge = core.charge;
     this.nominalMass = core.nominal;
     this.notes = core.notes;
-    this.tree = core.tree;
     this.vector = core.vector;
     this.weights = core.weights;
     this.molarScaled = core.molarScaled;
     this.monoScaled = core.monoScaled;
+  }
+
+  /** The parsed formula (a plain formula read straight to its totals is parsed now, once). */
+  get tree(): FormulaTree {
+    return (this.core.tree ??= parseFormula(this.core.input, this.core.options));
   }
 
   get atoms(): AtomCounts {
@@ -395,8 +417,7 @@ class Detail implements MassDetail {
  * formulaMassDetail('H2O').monoisotopicMass.toString() // '18.010564683056'
  */
 export function formulaMassDetail(input: string | FormulaTree, options: MassOptions = {}): MassDetail {
-  const tree = typeof input === 'string' ? parseFormula(input, options) : input;
-  return new Detail(computeCore(tree, options.weights ?? 'standard'));
+  return new Detail(coreOf(input, options));
 }
 
 /**

@@ -1,0 +1,247 @@
+/**
+ * The atom totals of a plain formula straight from its text, with no tree in between: the
+ * batch hot path of `mass` and `composition`. It takes the plainest part of what the fast
+ * reader (formula-parser/fast-path.ts) takes (element symbols, D and T, whole counts in ASCII
+ * or subscript digits, brackets, `·`/`*` with whole multipliers, a charge at the end, spaces at
+ * the ends) and declines everything that gets a note or needs settling (decimal counts, the
+ * `CuSO4.5H2O` dot, case traps such as `Co`, runs such as THF), which then takes the tree path.
+ * What it gives is exactly `atomVector(parseFormula(text))`, with the tree's charge and no notes;
+ * tests/formula/plain-vector.test.ts checks that on generated formulas.
+ */
+import { atomId, ATOMS } from '../elements/atom-data.js';
+import { mayStartCharge, plainSymbol, readEndCharge } from '../formula-parser/fast-path.js';
+import { isCaseTrap } from '../formula-parser/hints.js';
+import { MAX_FORMULA_LENGTH, MAX_NESTING } from '../formula-parser/prescan.js';
+import { mayNeedSettling } from '../formula-parser/readings.js';
+import { MAX_COUNT_DIGITS } from '../formula-parser/visitor.js';
+import { MAX_ATOMS, type AtomVector } from './flatten.js';
+
+/** The atom totals and charge of a plain formula. */
+export interface PlainVector {
+  vector: AtomVector;
+  charge: number;
+}
+
+// scratch space, reused by every call (the library is single-threaded): one entry per atom
+// written, and per open bracket where its entries and its component start
+const entryId = new Int32Array(MAX_FORMULA_LENGTH);
+const entryCount = new Float64Array(MAX_FORMULA_LENGTH);
+const groupStart = new Int32Array(MAX_NESTING + 1);
+const componentStart = new Int32Array(MAX_NESTING + 1);
+const componentMultiplier = new Float64Array(MAX_NESTING + 1);
+const componentParts = new Int32Array(MAX_NESTING + 1);
+const closeOf = new Int32Array(MAX_NESTING + 1);
+const TOTALS_SIZE = 8192;
+const totals = new Float64Array(TOTALS_SIZE);
+
+/** Dense-table ids by letters (first × 27 + second, or first × 27 + 26 for one letter); -2 not looked up yet, -1 declined. */
+const idByLetters = new Int32Array(26 * 27).fill(-2);
+
+function symbolId(text: string, start: number, end: number): number {
+  const first = text.charCodeAt(start) - 65;
+  const k = first * 27 + (end - start === 1 ? 26 : text.charCodeAt(start + 1) - 97);
+  let id = idByLetters[k];
+  if (id === -2) {
+    const symbol = plainSymbol(text, start, end);
+    if (symbol === undefined || (end - start === 2 && isCaseTrap(symbol))) id = -1;
+    else {
+      const letter = text[start];
+      id = end - start === 1 && (letter === 'D' || letter === 'T') ? atomId('H', letter === 'D' ? 2 : 3) : atomId(symbol, null);
+      if (id >= TOTALS_SIZE) id = -1;
+    }
+    idByLetters[k] = id;
+  }
+  return id;
+}
+
+const GIVE_UP = -1;
+/** Where a count read stops, and its value (module scratch, so reading a count allocates nothing). */
+let countEnd = 0;
+
+/**
+ * A whole count at `pos`: ASCII digits, or (after a symbol or bracket) subscript digits; 1 when
+ * none is written, GIVE_UP for what the tree path must read (a leading zero, too many digits, a
+ * '.' after it, ASCII and subscript digits mixed). Sets countEnd.
+ */
+function readCount(t: string, pos: number, limit: number, afterPart: boolean): number {
+  let end = pos;
+  let v = 0;
+  while (end < limit) {
+    const c = t.charCodeAt(end);
+    if (c < 48 || c > 57) break;
+    v = v * 10 + (c - 48);
+    end++;
+  }
+  if (end > pos) {
+    const next = end < limit ? t.charCodeAt(end) : -1;
+    if (t.charCodeAt(pos) === 48 || end - pos > MAX_COUNT_DIGITS || next === 46 || (next >= 0x2080 && next <= 0x2089)) return GIVE_UP;
+    countEnd = end;
+    return v;
+  }
+  if (!afterPart) {
+    countEnd = pos;
+    return 0; // no multiplier written
+  }
+  while (end < limit) {
+    const c = t.charCodeAt(end);
+    if (c < 0x2080 || c > 0x2089) break;
+    v = v * 10 + (c - 0x2080);
+    end++;
+  }
+  if (end === pos) {
+    countEnd = pos;
+    return 0; // no count written
+  }
+  const next = end < limit ? t.charCodeAt(end) : -1;
+  if (t.charCodeAt(pos) === 0x2080 || end - pos > MAX_COUNT_DIGITS || (next >= 48 && next <= 57) || next === 46) return GIVE_UP;
+  countEnd = end;
+  return v;
+}
+
+/** Multiplies entries [from, to) by k; false when a product passes MAX_ATOMS (the tree path then reports it). */
+function scale(from: number, to: number, k: number): boolean {
+  if (k === 1) return true;
+  for (let i = from; i < to; i++) {
+    const p = entryCount[i] * k;
+    if (p > MAX_ATOMS) return false;
+    entryCount[i] = p;
+  }
+  return true;
+}
+
+/**
+ * The atom totals of a plain formula, or null when the formula needs the tree path (anything
+ * with a note, a reading to settle, an error, or counts past 10^12).
+ *
+ * @param input - the formula text.
+ * @returns the atom vector (Hill order, whole counts) and the charge, or null.
+ * @example
+ * plainVector('CuSO4·5H2O')?.vector.counts // [1, 10, 9, 1]
+ * plainVector('SO4^2-')?.charge            // -2
+ * plainVector('CuSO4.5H2O')                // null
+ */
+export function plainVector(input: string): PlainVector | null {
+  if (input.length === 0 || input.length > MAX_FORMULA_LENGTH) return null;
+  const t = input;
+  let pos = 0;
+  let limit = t.length;
+  while (pos < limit && t.charCodeAt(pos) === 32) pos++;
+  while (limit > pos && t.charCodeAt(limit - 1) === 32) limit--;
+  if (pos === limit) return null;
+
+  let sp = 0;
+  let depth = 0;
+  let run = 0;
+  let longRun = false;
+  let charge = 0;
+  // the first component
+  let m = readCount(t, pos, limit, false);
+  if (m === GIVE_UP) return null;
+  pos = countEnd;
+  componentStart[0] = 0;
+  componentMultiplier[0] = m === 0 ? 1 : m;
+  componentParts[0] = 0;
+  for (;;) {
+    const c = pos < limit ? t.charCodeAt(pos) : -1;
+    if (c >= 65 && c <= 90) {
+      let end = pos + 1;
+      while (end < limit) {
+        const l = t.charCodeAt(end);
+        if (l < 97 || l > 122) break;
+        end++;
+      }
+      if (end - pos > 2) return null;
+      const id = symbolId(t, pos, end);
+      if (id < 0) return null;
+      const k = readCount(t, end, limit, true);
+      if (k === GIVE_UP) return null;
+      pos = countEnd;
+      if (++run >= 3) longRun = true;
+      if (k !== 0) run = 0;
+      entryId[sp] = id;
+      entryCount[sp++] = k === 0 ? 1 : k;
+      componentParts[depth]++;
+      continue;
+    }
+    if (c === 40 || c === 91 || c === 123) {
+      if (depth >= MAX_NESTING) return null;
+      const after = t.charCodeAt(pos + 1);
+      if (c === 91 && after >= 48 && after <= 57) return null; // '[13C]' is a nuclide label
+      componentParts[depth]++;
+      depth++;
+      groupStart[depth] = sp;
+      closeOf[depth] = c === 40 ? 41 : c + 2;
+      pos++;
+      m = readCount(t, pos, limit, false);
+      if (m === GIVE_UP) return null;
+      pos = countEnd;
+      componentStart[depth] = sp;
+      componentMultiplier[depth] = m === 0 ? 1 : m;
+      componentParts[depth] = 0;
+      continue;
+    }
+    // the parts of a component end here
+    if (componentParts[depth] === 0) return null;
+    if (!scale(componentStart[depth], sp, componentMultiplier[depth])) return null;
+    if (c === 0xb7 || c === 42) {
+      pos++;
+      m = readCount(t, pos, limit, false);
+      if (m === GIVE_UP) return null;
+      pos = countEnd;
+      componentStart[depth] = sp;
+      componentMultiplier[depth] = m === 0 ? 1 : m;
+      componentParts[depth] = 0;
+      continue;
+    }
+    if (depth > 0) {
+      if (c !== closeOf[depth]) return null;
+      const k = readCount(t, pos + 1, limit, true);
+      if (k === GIVE_UP) return null;
+      pos = countEnd;
+      if (!scale(groupStart[depth], sp, k === 0 ? 1 : k)) return null;
+      depth--;
+      continue;
+    }
+    if (c === -1) break;
+    if (!mayStartCharge(t, pos)) return null;
+    const z = readEndCharge(t, pos, limit);
+    if (z === null) return null;
+    charge = z;
+    break;
+  }
+  if (longRun && mayNeedSettling(input)) return null;
+
+  // totals per kind of atom, in order of first appearance
+  const seen: number[] = [];
+  let tooMany = false;
+  for (let i = 0; i < sp; i++) {
+    const id = entryId[i];
+    if (totals[id] === 0) seen.push(id);
+    const s = totals[id] + entryCount[i];
+    if (s > MAX_ATOMS) tooMany = true;
+    totals[id] = s;
+  }
+  const n = seen.length;
+  const ids = seen.slice();
+  const counts = new Array<number>(n);
+  let organic = false;
+  for (let i = 0; i < n; i++) if (ATOMS.data[ids[i]].symbol === 'C') organic = true;
+  const rank = organic ? ATOMS.rankOrganic : ATOMS.rankPlain;
+  // insertion sort: formulas have few kinds of atom
+  for (let i = 1; i < n; i++) {
+    const id = ids[i];
+    const r = rank[id];
+    let j = i - 1;
+    while (j >= 0 && rank[ids[j]] > r) {
+      ids[j + 1] = ids[j];
+      j--;
+    }
+    ids[j + 1] = id;
+  }
+  for (let i = 0; i < n; i++) {
+    counts[i] = totals[ids[i]];
+    totals[ids[i]] = 0;
+  }
+  if (tooMany) return null;
+  return { vector: { ids, counts, whole: true, seen }, charge };
+}
