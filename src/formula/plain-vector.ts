@@ -4,7 +4,8 @@
  * reader (formula-parser/fast-path.ts) takes (element symbols, D and T, whole counts in ASCII
  * or subscript digits, brackets, `·`/`*` with whole multipliers, a charge at the end, spaces at
  * the ends) and declines everything that gets a note or needs settling (decimal counts, the
- * `CuSO4.5H2O` dot, case traps such as `Co`, runs such as THF), which then takes the tree path.
+ * `CuSO4.5H2O` dot, a case trap such as `Co` where it may get a note, runs such as THF), which
+ * then takes the tree path.
  * What it gives is exactly `atomVector(parseFormula(text))`, with the tree's charge and no notes;
  * tests/formula/plain-vector.test.ts checks that on generated formulas.
  */
@@ -36,6 +37,10 @@ const totals = new Float64Array(TOTALS_SIZE);
 
 /** Dense-table ids by letters (first × 27 + second, or first × 27 + 26 for one letter); -2 not looked up yet, -1 declined. */
 const idByLetters = new Int32Array(26 * 27).fill(-2);
+/** 1 for the symbols that may be a slip of case (Co for CO), which get a note in some formulas. */
+const trapByLetters = new Uint8Array(26 * 27);
+/** Set by symbolId: whether the symbol just looked up is a case trap. */
+let lastTrap = false;
 
 function symbolId(text: string, start: number, end: number): number {
   const first = text.charCodeAt(start) - 65;
@@ -43,14 +48,16 @@ function symbolId(text: string, start: number, end: number): number {
   let id = idByLetters[k];
   if (id === -2) {
     const symbol = plainSymbol(text, start, end);
-    if (symbol === undefined || (end - start === 2 && isCaseTrap(symbol))) id = -1;
+    if (symbol === undefined) id = -1;
     else {
+      if (end - start === 2 && isCaseTrap(symbol)) trapByLetters[k] = 1;
       const letter = text[start];
       id = end - start === 1 && (letter === 'D' || letter === 'T') ? atomId('H', letter === 'D' ? 2 : 3) : atomId(symbol, null);
       if (id >= TOTALS_SIZE) id = -1;
     }
     idByLetters[k] = id;
   }
+  lastTrap = trapByLetters[k] === 1;
   return id;
 }
 
@@ -134,6 +141,10 @@ export function plainVector(input: string): PlainVector | null {
   let run = 0;
   let longRun = false;
   let charge = 0;
+  // a case trap among the top level's atoms may get a note when the top level is one component with no brackets
+  let trapAtTop = false;
+  let bracketAtTop = false;
+  let componentsAtTop = 1;
   // the first component
   let m = readCount(t, pos, limit, false);
   if (m === GIVE_UP) return null;
@@ -153,6 +164,7 @@ export function plainVector(input: string): PlainVector | null {
       if (end - pos > 2) return null;
       const id = symbolId(t, pos, end);
       if (id < 0) return null;
+      if (lastTrap && depth === 0) trapAtTop = true;
       const k = readCount(t, end, limit, true);
       if (k === GIVE_UP) return null;
       pos = countEnd;
@@ -168,6 +180,7 @@ export function plainVector(input: string): PlainVector | null {
       const after = t.charCodeAt(pos + 1);
       if (c === 91 && after >= 48 && after <= 57) return null; // '[13C]' is a nuclide label
       componentParts[depth]++;
+      if (depth === 0) bracketAtTop = true;
       depth++;
       groupStart[depth] = sp;
       closeOf[depth] = c === 40 ? 41 : c + 2;
@@ -184,6 +197,7 @@ export function plainVector(input: string): PlainVector | null {
     if (componentParts[depth] === 0) return null;
     if (!scale(componentStart[depth], sp, componentMultiplier[depth])) return null;
     if (c === 0xb7 || c === 42) {
+      if (depth === 0) componentsAtTop++;
       pos++;
       m = readCount(t, pos, limit, false);
       if (m === GIVE_UP) return null;
@@ -210,6 +224,7 @@ export function plainVector(input: string): PlainVector | null {
     break;
   }
   if (longRun && mayNeedSettling(input)) return null;
+  if (trapAtTop && !bracketAtTop && componentsAtTop === 1) return null; // the tree path decides on the note
 
   // totals per kind of atom, in order of first appearance
   const seen: number[] = [];

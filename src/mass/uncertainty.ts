@@ -33,7 +33,9 @@ export interface MolarMassUncertainty {
   terms: UncertaintyTerm[];
 }
 
-const SQRT3 = new Decimal(3).sqrt();
+/** √3, made on first use (a Decimal square root is not free at start-up). */
+let sqrt3: Decimal | null = null;
+const SQRT3 = (): Decimal => (sqrt3 ??= new Decimal(3).sqrt());
 
 /**
  * The molar mass with its standard uncertainty from the atomic-weight intervals and uncertainties.
@@ -53,10 +55,10 @@ export function molarMassUncertainty(r: MassDetail): MolarMassUncertainty {
     let u: Decimal;
     if (std.kind === 'interval') {
       value = new Decimal(std.low).plus(std.high).div(2);
-      u = new Decimal(std.high).minus(std.low).div(2).div(SQRT3);
+      u = new Decimal(std.high).minus(std.low).div(2).div(SQRT3());
     } else if (std.kind === 'value') {
       value = new Decimal(std.value);
-      u = new Decimal(std.uncertainty).div(SQRT3);
+      u = new Decimal(std.uncertainty).div(SQRT3());
     } else {
       throw fail({ code: 'NO_STANDARD_WEIGHT', message: `${c.atom.element.name} (${c.symbol}) has no standard atomic weight, so the molar mass has no uncertainty by this method` }, r.input);
     }

@@ -35,7 +35,7 @@ function formulas(symbols: string[], counts: string[], bad: boolean): fc.Arbitra
     body: fc.array(tie('component') as fc.Arbitrary<string>, { minLength: 1, maxLength: 3 }).chain((cs) => fc.constantFrom('·', '*').map((sep) => cs.join(sep))),
   })).body as fc.Arbitrary<string>;
 }
-const plainFormula = formulas(['C', 'H', 'O', 'N', 'S', 'P', 'Cl', 'Br', 'Na', 'K', 'Ca', 'Fe', 'Cu', 'Pt', 'D', 'T', 'Tc'], ['1', '999'], false);
+const plainFormula = formulas(['C', 'H', 'O', 'N', 'S', 'P', 'Cl', 'Br', 'Na', 'K', 'Ca', 'Fe', 'Cu', 'Pt', 'D', 'T', 'Tc', 'Co', 'Ni', 'Cs'], ['1', '999'], false);
 const anyFormula = formulas(['C', 'H', 'O', 'N', 'Cl', 'Co', 'D', 'Uuo', 'Nh', 'Ac', 'Xx'], ['0', '01', '999999999', '1000000000'], true);
 
 const pieces = ['C', 'H', 'O', 'Cl', 'Co', 'D', 'T', 'Ac', 'c', '(', ')', '[', ']', '{', '}', '·', '*', '.', ' ', '2', '0', '12', '0.5', '₂', '₀', '²', '^', '^2+', '^-', '+', '-', '⁻', '³⁺', '[13C]', 'THF', 'Ph', '5H2O', '.5H2O'];
@@ -55,9 +55,9 @@ describe('the plain reader and the grammar agree', () => {
         total++;
         if (agree(f)) taken++;
       }),
-      { numRuns: 4000 },
+      { numRuns: 3000 },
     );
-    expect(taken / total).toBeGreaterThan(0.5);
+    expect(taken / total).toBeGreaterThan(0.4);
   });
 
   it('on generated formulas with unknown symbols, clashing readings, bad counts and mismatched brackets', () => {
@@ -75,13 +75,13 @@ describe('the plain reader and the grammar agree', () => {
   it('takes the everyday plain formulas', () => {
     // source: molar masses aside, these are the formulas of common practice: a salt hydrate written
     // with the addition dot, a complex ion, heavy water, subscripts, ions with written charges
-    for (const s of ['H2O', 'CuSO4·5H2O', 'K4[Fe(CN)6]', 'CH3(CH2)16COOH', 'D2O', 'CDCl3', 'H₂O', 'SO4^2-', 'SO₄²⁻', 'Fe³⁺', 'Cl-', '(OH)-', ' NaCl ', '{[Pt(NH3)4]Cl2}']) {
+    for (const s of ['H2O', 'CuSO4·5H2O', 'K4[Fe(CN)6]', 'CH3(CH2)16COOH', 'D2O', 'CDCl3', 'H₂O', 'SO4^2-', 'SO₄²⁻', 'Fe³⁺', 'Cl-', '(OH)-', ' NaCl ', '{[Pt(NH3)4]Cl2}', '[Co(NH3)6]Cl3', 'Co(OH)2', 'NiCl2·6H2O']) {
       expect(agree(s), s).toBe(true);
     }
   });
 
   it('declines what has a note or a reading to settle, so the tree path gives it', () => {
-    for (const s of ['CuSO4.5H2O', 'Fe0.95O', 'YBa2Cu3O6.95', 'Co2', 'CH3Co', 'THF', 'NBS2', 'AcOH', 'PrCl3', 'NpO2', '[13C]H4', 'Ph3P', 'Zn(s)', 'NH4+', 'C01', 'H1000000000', '(((', 'H2O ·']) {
+    for (const s of ['CuSO4.5H2O', 'Fe0.95O', 'YBa2Cu3O6.95', 'Co2', 'CH3Co', 'CoCl2', 'Ni', 'THF', 'NBS2', 'AcOH', 'PrCl3', 'NpO2', '[13C]H4', 'Ph3P', 'Zn(s)', 'NH4+', 'C01', 'H1000000000', '(((', 'H2O ·']) {
       expect(plainVector(s), s).toBeNull();
     }
   });
