@@ -17,6 +17,7 @@ import { toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { ELECTRON_MASS } from '../elements/constants.js';
 import { ATOMS, type AtomData, type WeightTable } from '../elements/atom-data.js';
 import { Decimal } from '../exact/decimal.js';
+import { smallNumberText } from '../exact/json-number.js';
 import { bigScaledToString, fromScaled, scaledToString, SCALE_DIGITS } from '../exact/scaled.js';
 import { amountText, toDecimal, type Amount } from '../formula/amount.js';
 import { atomVector, countsMap, type AtomCounts, type AtomVector } from '../formula/flatten.js';
@@ -154,7 +155,7 @@ function sums(input: string, charge: number, treeNotes: Note[], vector: AtomVect
     const c = counts[i];
     const d = ATOMS.data[id];
     if (typeof c === 'number') {
-      formula += c === 1 ? d.label : d.label + c;
+      formula += c === 1 ? d.label : d.label + smallNumberText(c);
       molarSum += c * avg[id];
       monoSum += c * monoTable[id];
       nominalSum += c * nominalTable[id];
