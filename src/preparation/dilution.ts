@@ -57,7 +57,7 @@ export function dilute(stockText: string, targetText: string | undefined, volume
   const notes: Note[] = [];
   for (const t of [stockText, targetText]) {
     if (t !== undefined && /(%\s*w\/w|mg\/kg|mg\/g|µg\/g|µg\/mg|ug\/g)\s*$/i.test(t.trim())) {
-      throw fail({ code: 'INCOMPATIBLE_UNITS', message: `'${t.trim()}' is a content by mass: made up to a volume, a dilution needs strengths per volume (M, g/L, % w/v, % v/v) or the densities; to let down a solid or semisolid by mass, give --mass (the total) instead of --volume` }, t);
+      throw fail({ code: 'INCOMPATIBLE_UNITS', message: `'${t.trim()}' is a content by mass: made up to a volume, a dilution needs strengths per volume (M, g/L, % w/v, % v/v) or the densities; to let down a solid or semisolid by mass, give \`mass\` (the total) instead of \`volume\``, options: ['mass', 'volume'] }, t);
     }
   }
   const stock = measureAs(stockText, kinds, 'the stock concentration', notes);

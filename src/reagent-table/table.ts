@@ -281,7 +281,7 @@ export function reagentRow(ctx: TableContext, spec: ReagentSpec): ReagentRow {
   let writtenEquiv: string | null = null;
   const inputs = ctx.reference.inputs;
   if (spec.role === 'product') {
-    if (spec.amount && spec.amount.trim()) throw fail({ code: 'BAD_AMOUNT', message: `the product ${what} takes no amount: its theoretical yield is computed (give what was obtained with --actual)` });
+    if (spec.amount && spec.amount.trim()) throw fail({ code: 'BAD_AMOUNT', message: `the product ${what} takes no amount: its theoretical yield is computed (give what was obtained with \`actual\`)`, options: ['actual'] });
     let ratio = ctx.productRatio.get(r.formula) ?? ctx.productRatio.get(what) ?? null;
     if (ratio === null) {
       ratio = quantity(exact(1), null);
