@@ -30,6 +30,7 @@
 import { DEFAULT_RANGES } from './search-defaults.js';
 import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
+import { typedIssue } from '../errors/message.js';
 import { getAtomData } from '../elements/atom-data.js';
 import { isElementSymbol } from '../elements/element-table.js';
 import { ELECTRON_MASS } from '../elements/constants.js';
@@ -518,11 +519,18 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
   }, MAX_ESTIMATE_BRANCHES);
   const total = Math.round(estimate + branches);
   if (gaveUp || total > MAX_VISITS) {
-    throw fail({
-      code: 'SEARCH_TOO_LARGE',
-      message: `the search ${gaveUp ? `has more than ${MAX_ESTIMATE_BRANCHES.toLocaleString('en-US')} combinations of the other elements to walk before carbon and hydrogen` : `would visit about ${total.toLocaleString('en-US')} formulas`} (${describe(options)}), more than pondus answers within about a second (at most ${MAX_VISITS.toLocaleString('en-US')} formulas): narrow the window (\`ppm\`), the element ranges (\`elements\`, e.g. fewer halogens or a smaller N and O range), or add found percents (\`found\`)`,
-      options: ['ppm', 'elements', 'found'],
-    });
+    throw fail(
+      typedIssue({
+        code: 'SEARCH_TOO_LARGE',
+        search: 'candidates',
+        estimate: gaveUp ? null : total,
+        limit: MAX_VISITS,
+        walkLimit: gaveUp ? MAX_ESTIMATE_BRANCHES : null,
+        elements: S,
+        window: describe(options),
+        options: ['ppm', 'elements', 'found'],
+      }),
+    );
   }
 
   const peaks = options.pattern !== undefined ? readPeaks(options.pattern) : null;
