@@ -108,10 +108,11 @@ export interface IssueFields {
   UNKNOWN_UNIT: { unit: string; inExpression: boolean };
   /**
    * Two quantities of different dimensions: added or subtracted (`first` and `second` as written),
-   * or a result asked for in a unit of another dimension (`convert`: `first` null, `second` the unit).
-   * Each dimension is in base units (`kg`, `mol/m^3`), null for a pure number.
+   * a result asked for in a unit of another dimension (`convert`: `first` null, `second` the unit),
+   * or a stock and a target concentration of different kinds (`dilute`: `first` 'stock', `second`
+   * 'target'). Each dimension is in the base units pondus writes it in (`g`, `M`, `g/L`), null for a pure number.
    */
-  INCOMPATIBLE_UNITS: { operation: 'add' | 'subtract' | 'convert'; first: string | null; firstDimension: string | null; second: string; secondDimension: string | null };
+  INCOMPATIBLE_UNITS: { operation: 'add' | 'subtract' | 'convert' | 'dilute'; first: string | null; firstDimension: string | null; second: string; secondDimension: string | null };
   /**
    * A number beyond what pondus reads or reports: `value` as written (or the result, to 3 figures),
    * `exponentLimit` the largest power of ten in size (10^±limit), `reading` what was read: an

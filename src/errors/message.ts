@@ -86,6 +86,8 @@ const MESSAGES: { [C in TypedCode]: Render<C> } = {
         return `cannot add ${f.first} (${dim(f.firstDimension)}) and ${f.second} (${dim(f.secondDimension)})`;
       case 'subtract':
         return `cannot subtract ${f.second} (${dim(f.secondDimension)}) from ${f.first} (${dim(f.firstDimension)})`;
+      case 'dilute':
+        return `the ${f.first} and ${f.second} concentrations must be of the same kind (both molar, both mass per volume, or both %)`;
       default:
         return `the result is ${f.firstDimension ?? 'a pure number'}, not convertible to ${f.second}`;
     }

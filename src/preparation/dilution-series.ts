@@ -15,7 +15,7 @@ import { exact } from '../sigfig/measured.js';
 import { divide, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
 import { inputFigures, instruction, fewFiguresNote, type InputFigures, type Instruction } from '../sigfig/instruction.js';
 import { sameDims } from '../sigfig/units.js';
-import { refuseNotWeaker } from './dilution.js';
+import { kindsDiffer, refuseNotWeaker } from './dilution.js';
 import { MAX_ONE_STEP_FACTOR, MIN_TRANSFER_L } from './warnings.js';
 
 /** Most steps a plan may have (a factor of 10¹² in steps of 100). */
@@ -168,7 +168,7 @@ export function dilutionSeries(options: SeriesOptions): SeriesResult {
     if (options.stock === undefined || options.target === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the stock and target concentrations, or the dilution factor' });
     stock = readPositive(options.stock, kinds, 'the stock concentration', notes);
     target = readPositive(options.target, kinds, 'the target concentration', notes);
-    if (!sameDims(stock.dims, target.dims)) throw fail({ code: 'INCOMPATIBLE_UNITS', message: 'the stock and target concentrations must be of the same kind (both molar, both mass per volume, or both %)' });
+    if (!sameDims(stock.dims, target.dims)) throw fail(kindsDiffer(stock, target));
     refuseNotWeaker(stock.value, target.value, 'the stock');
     factor = stock.value.div(target.value);
     inputs.push(inputFigures('the stock', options.stock, stock), inputFigures('the target', options.target, target));

@@ -3,12 +3,13 @@
  * a weaker solution (an instruction, at working precision), and from the
  * volume actually taken, the concentration made (a result).
  */
-import type { Note } from '../errors/issue.js';
+import type { Issue, Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
 import type { Decimal } from '../exact/decimal.js';
+import { typedIssue } from '../errors/message.js';
 import { MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
 import { divide, multiply, subtract, type Quantity } from '../sigfig/quantity.js';
-import { sameDims } from '../sigfig/units.js';
+import { baseUnitText, sameDims } from '../sigfig/units.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, volumeUnitFor, type Instruction } from '../sigfig/instruction.js';
 import { dilutionWarning } from './warnings.js';
 
@@ -64,7 +65,7 @@ export function dilute(stockText: string, targetText: string | undefined, volume
   const stock = measureAs(stockText, kinds, 'the stock concentration', notes);
   if (targetText === undefined && takenText === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the target concentration, or the volume of stock taken (or both)' });
   const target = targetText !== undefined ? measureAs(targetText, kinds, 'the target concentration', notes) : null;
-  if (target && !sameDims(stock.dims, target.dims)) throw fail({ code: 'INCOMPATIBLE_UNITS', message: 'the stock and target concentrations must be of the same kind (both molar, both mass per volume, or both %)' });
+  if (target && !sameDims(stock.dims, target.dims)) throw fail(kindsDiffer(stock, target));
   const finalVolume = measureAs(volumeText, [VOLUME], 'the final volume', notes);
   if (stock.value.lte(0) || (target && target.value.lte(0)) || finalVolume.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'concentrations and volume must be positive' });
   if (target) refuseNotWeaker(stock.value, target.value, 'the stock');
@@ -115,4 +116,14 @@ export function dilute(stockText: string, targetText: string | undefined, volume
 export function refuseNotWeaker(stock: Decimal, target: Decimal, stockName: string): void {
   if (target.gt(stock)) throw fail({ code: 'BAD_AMOUNT', message: `the target is more concentrated than ${stockName}: a dilution cannot get there` });
   if (target.eq(stock)) throw fail({ code: 'BAD_AMOUNT', message: `the target is the concentration of ${stockName} itself (a dilution factor of 1): there is nothing to dilute; use ${stockName} as it is` });
+}
+
+/**
+ * The issue of a stock and a target concentration of different kinds (one molar, one per volume), with both dimensions.
+ *
+ * @example
+ * kindsDiffer(measure('1.0 M'), measure('5 g/L')).message // 'the stock and target concentrations must be of the same kind (both molar, both mass per volume, or both %)'
+ */
+export function kindsDiffer(stock: Quantity, target: Quantity): Issue {
+  return typedIssue({ code: 'INCOMPATIBLE_UNITS', operation: 'dilute', first: 'stock', firstDimension: baseUnitText(stock.dims) || null, second: 'target', secondDimension: baseUnitText(target.dims) || null });
 }
