@@ -5,6 +5,7 @@
  */
 import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
+import { typedIssue } from '../errors/message.js';
 import { measureAs } from '../calc/measure.js';
 import type { Quantity } from '../sigfig/quantity.js';
 import type { Dims } from '../sigfig/units.js';
@@ -34,7 +35,7 @@ export const MAX_MAGNITUDE = 60;
  */
 export function inRange(q: Quantity, text: string, what: string): Quantity {
   if (!q.value.isZero() && Math.abs(q.value.e) > MAX_MAGNITUDE) {
-    throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `${what} is out of the range pondus takes for a measurement (10^±${MAX_MAGNITUDE} of the base unit): '${text}'` }, text);
+    throw fail(typedIssue({ code: 'NUMBER_OUT_OF_RANGE', value: text, exponentLimit: MAX_MAGNITUDE, reading: 'measurement', what }), text);
   }
   return q;
 }

@@ -72,9 +72,9 @@ const NAMES: Record<SampleBasis, string> = { 'as-is': 'as-is', dried: 'dried', a
  * removedFraction('dried', { loss: '0.50 %' }, [])?.value.toString() // '0.005'
  */
 export function removedFraction(basis: SampleBasis, content: SampleContent, notes: Note[]): Quantity | null {
-  const need = (key: keyof SampleContent, label: string, option: string): Quantity => {
+  const need = (key: keyof SampleContent, label: string): Quantity => {
     const text = content[key];
-    if (text === undefined) throw fail({ code: 'USAGE', message: `the ${NAMES[basis]} basis needs the ${label}: give ${option} (e.g. ${option} '0.50 %')` });
+    if (text === undefined) throw fail({ code: 'USAGE', message: `the ${NAMES[basis]} basis needs the ${label}: give \`${key}\` (e.g. \`${key}: '0.50 %'\`)`, options: [key] });
     const q = readPositive(text, [PURE], `the ${label}`, notes, true);
     if (q.value.gte(1)) throw fail({ code: 'BAD_AMOUNT', message: `the ${label} must be below 100 %: '${text}'` }, text);
     return q;
@@ -83,13 +83,13 @@ export function removedFraction(basis: SampleBasis, content: SampleContent, note
     case 'as-is':
       return null;
     case 'dried':
-      return need('loss', 'loss on drying', '--loss');
+      return need('loss', 'loss on drying');
     case 'anhydrous':
-      return need('water', 'water content', '--water');
+      return need('water', 'water content');
     case 'solvent-free':
-      return need('solvent', 'residual solvent', '--solvent');
+      return need('solvent', 'residual solvent');
     case 'anhydrous-solvent-free':
-      return add(need('water', 'water content', '--water'), need('solvent', 'residual solvent', '--solvent'));
+      return add(need('water', 'water content'), need('solvent', 'residual solvent'));
   }
 }
 
@@ -111,7 +111,7 @@ const pct = (q: Quantity) => displayQuantity(q, '%').text;
 export function convertSampleBasis(valueText: string | Quantity, from: SampleBasis, to: SampleBasis, content: SampleContent): BasisConversion {
   const notes: Note[] = [];
   const value = typeof valueText === 'string' ? readPositive(valueText, [PURE], 'the result', notes) : valueText;
-  if (from === to) throw fail({ code: 'USAGE', message: `the result is already on the ${NAMES[to]} basis: choose another --to` });
+  if (from === to) throw fail({ code: 'USAGE', message: `the result is already on the ${NAMES[to]} basis: choose another \`to\``, options: ['to'] });
   const rFrom = removedFraction(from, content, notes);
   const rTo = removedFraction(to, content, notes);
   const keepFrom = rFrom ? subtract(ONE, rFrom) : ONE;

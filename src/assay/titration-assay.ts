@@ -90,7 +90,7 @@ export function titrationAssay(analyteText: string, o: TitrationAssayOptions): T
   let added: Quantity | null = null;
   const v = (q: Quantity) => displayQuantity(q, 'mL').text;
   if (!back) {
-    if (o.reagentRatio !== undefined) throw fail({ code: 'USAGE', message: '--reagent-ratio belongs to a back-titration: give --added or --back too' });
+    if (o.reagentRatio !== undefined) throw fail({ code: 'USAGE', message: '`reagentRatio` belongs to a back-titration: give `added` or `back` too', options: ['reagentRatio', 'added', 'back'] });
     ratio = readMoleRatio(o.ratio, analyte.input, 'titrant', notes);
     if (blank) {
       netTitre = subtract(titre, blank);
@@ -104,7 +104,7 @@ export function titrationAssay(analyteText: string, o: TitrationAssayOptions): T
   } else {
     ratio = readMoleRatio(o.ratio, analyte.input, 'reagent', notes);
     reagentRatio = readMoleRatio(o.reagentRatio, 'reagent', 'titrant', notes, '--reagent-ratio');
-    if (o.added !== undefined && blank) throw fail({ code: 'USAGE', message: 'a back-titration takes either --added (the excess reagent) or --blank (the titre of the reagent alone), not both' });
+    if (o.added !== undefined && blank) throw fail({ code: 'USAGE', message: 'a back-titration takes either `added` (the excess reagent) or `blank` (the titre of the reagent alone), not both', options: ['added', 'blank'] });
     if (o.added !== undefined) {
       added = readPositive(o.added, [AMOUNT], 'the reagent added', notes);
       const left = multiply(multiply(titrant, titre), reagentRatio.factor);
@@ -114,7 +114,7 @@ export function titrationAssay(analyteText: string, o: TitrationAssayOptions): T
       if (reacted.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the reagent left over is not less than the reagent added: nothing reacted with the sample' });
       moles = multiply(reacted, ratio.factor);
     } else {
-      if (!blank) throw fail({ code: 'USAGE', message: 'a back-titration needs --added (the excess reagent, e.g. --added "50.00 mL of 0.5000 M") or --blank (the titre of the reagent alone)' });
+      if (!blank) throw fail({ code: 'USAGE', message: 'a back-titration needs `added` (the excess reagent, e.g. `added: "50.00 mL of 0.5000 M"`) or `blank` (the titre of the reagent alone)', options: ['added', 'blank'] });
       netTitre = subtract(blank, titre);
       notes.push({ code: 'BLANK_DIFFERENCE', message: `back-titration against a blank: blank ${v(blank)} less the sample titre ${v(titre)} = ${v(netTitre)}` });
       if (netTitre.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'in a back-titration the blank titre must exceed the sample titre' });

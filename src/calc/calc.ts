@@ -4,6 +4,7 @@
  */
 import { notesJson } from '../errors/note-json.js';
 import { fail } from '../errors/pondus-error.js';
+import { typedIssue } from '../errors/message.js';
 import { Decimal } from '../exact/decimal.js';
 import { toSafe, type SafeResult } from '../errors/pondus-error.js';
 import { formatWithUncertainty } from '../mass/uncertainty.js';
@@ -61,7 +62,7 @@ export function calc(input: string, options: CalcOptions = {}): CalcResult {
   const ev = evaluate(tree);
   const q = ev.result;
   if (!q.value.isZero() && (q.value.abs().gt('1e300') || q.value.abs().lt('1e-300'))) {
-    throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `the result, about ${q.value.toSignificantDigits(3).toExponential()}, is beyond the range of numbers pondus reports (1e-300 to 1e300)` }, input);
+    throw fail(typedIssue({ code: 'NUMBER_OUT_OF_RANGE', value: q.value.toSignificantDigits(3).toExponential(), exponentLimit: 300, reading: 'result', what: null }), input);
   }
   const unit = reportUnit(q, tree.target ? tree.target.unit : null);
   const shown = displayQuantity(q, unit, options.rounding);

@@ -4,6 +4,7 @@
 import type { IRecognitionException } from 'chevrotain';
 import type { Issue } from '../errors/issue.js';
 import { PondusError } from '../errors/pondus-error.js';
+import { typedIssue } from '../errors/message.js';
 import { columnOf } from '../formula-parser/prescan.js';
 import { calcGrammar } from './grammar.js';
 import { calcLexer } from './tokens.js';
@@ -38,7 +39,7 @@ export function parseExpression(input: string): CalcTree {
     const o = lexed.errors[0].offset;
     const word = /^[A-Za-zµμ/%]+/.exec(input.slice(o));
     if (word) {
-      throw new PondusError([{ code: 'UNKNOWN_UNIT', message: `unknown unit or word '${word[0]}' at column ${columnOf(input, o)}`, column: columnOf(input, o), length: word[0].length, hint: 'write a molar mass as M(formula); units: g, mg, µg, kg, mol, mmol, µmol, L, mL, µL, M, mM, mol/L, g/L, mg/mL, g/100 mL, mg/dL, g/mol, %, % w/v, ppm; a ratio as 1:1000' }], input);
+      throw new PondusError([typedIssue({ code: 'UNKNOWN_UNIT', unit: word[0], inExpression: true, column: columnOf(input, o), length: word[0].length, hint: 'write a molar mass as M(formula); units: g, mg, µg, kg, mol, mmol, µmol, L, mL, µL, M, mM, mol/L, g/L, mg/mL, g/100 mL, mg/dL, g/mol, %, % w/v, ppm; a ratio as 1:1000' })], input);
     }
     const ch = String.fromCodePoint(input.codePointAt(o)!);
     throw new PondusError([{ code: 'UNEXPECTED_CHARACTER', message: `unexpected character '${ch}' at column ${columnOf(input, o)}`, column: columnOf(input, o), length: 1 }], input);

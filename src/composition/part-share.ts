@@ -7,6 +7,7 @@
  */
 import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
+import { typedIssue } from '../errors/message.js';
 import { Decimal } from '../exact/decimal.js';
 import { addAmount, amountOf, mulAmount, toDecimal, type Amount } from '../formula/amount.js';
 import { flattenFormula, type AtomCounts } from '../formula/flatten.js';
@@ -53,7 +54,7 @@ export function partShare(whole: MassDetail, part: string, options: MassOptions 
     count = countFromAtoms(whole.atoms, fragCounts);
     countedFrom = 'atoms';
     if (count === null) {
-      throw fail({ code: 'PART_NOT_IN_FORMULA', message: `${frag.formula} is not part of ${whole.formula}: the formula lacks ${missing(whole.atoms, fragCounts)}` }, part);
+      throw fail(typedIssue({ code: 'PART_NOT_IN_FORMULA', part: frag.formula, formula: whole.formula, lacking: lacking(whole.atoms, fragCounts) }), part);
     }
     notes.push({ code: 'PART_FROM_ATOMS', message: `${part} is not written as a unit in ${whole.input}; its share is counted from the atoms (${toDecimal(count).toFixed()} units)` });
   }
@@ -170,6 +171,7 @@ function countFromAtoms(atoms: AtomCounts, unit: AtomCounts): Amount | null {
   return best.isInteger() ? best.toNumber() : best;
 }
 
-function missing(atoms: AtomCounts, unit: AtomCounts): string {
-  return [...unit.keys()].filter((k) => !atoms.has(k)).join(', ') || 'enough atoms';
+/** The atoms of the part the formula has none of. */
+function lacking(atoms: AtomCounts, unit: AtomCounts): string[] {
+  return [...unit.keys()].filter((k) => !atoms.has(k));
 }

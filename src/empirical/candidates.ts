@@ -30,6 +30,7 @@
 import { DEFAULT_RANGES } from './search-defaults.js';
 import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
+import { typedIssue } from '../errors/message.js';
 import { getAtomData } from '../elements/atom-data.js';
 import { isElementSymbol } from '../elements/element-table.js';
 import { ELECTRON_MASS } from '../elements/constants.js';
@@ -360,7 +361,7 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
   // the ion, when the mass is an m/z
   let notation: IonNotation | null = null;
   if (options.ion !== undefined) {
-    if (options.mass === undefined) throw fail({ code: 'BAD_OPTION', message: 'an ion goes with an accurate m/z (--mass); a molar-mass search is of the neutral compound' });
+    if (options.mass === undefined) throw fail({ code: 'BAD_OPTION', message: 'an ion goes with an accurate m/z (`mass`); a molar-mass search is of the neutral compound', options: ['mass'] });
     notation = readIonNotation(options.ion);
   }
   // the ion's atoms less n·M: Σ sign·count·term, by element; its mass less the electrons
@@ -408,7 +409,7 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
     hi = m + molarTolerance;
     useAverage = true;
   } else {
-    throw fail({ code: 'BAD_OPTION', message: 'give an accurate mass (--mass, with --ppm) or a molar mass (--molar-mass): the search needs a mass window' });
+    throw fail({ code: 'BAD_OPTION', message: 'give an accurate mass (`mass`, with `ppm`) or a molar mass (`molarMass`): the search needs a mass window', options: ['mass', 'ppm', 'molarMass'] });
   }
   const read = options.found ? readFoundValues(options.found) : null;
   if (read) notes.push(...read.notes);
@@ -444,7 +445,7 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
   if (read) {
     for (const [s, v] of read.values) {
       const k = symbols.indexOf(s);
-      if (k < 0) throw fail({ code: 'BAD_OPTION', message: `a found value for ${s}, which the element ranges do not include: add ${s} to --elements` });
+      if (k < 0) throw fail({ code: 'BAD_OPTION', message: `a found value for ${s}, which the element ranges do not include: add ${s} to \`elements\``, options: ['elements'] });
       foundSlots.push(k);
       foundValues.push(v.toNumber());
     }
@@ -518,10 +519,18 @@ export function candidateFormulas(options: CandidateOptions): CandidateResult {
   }, MAX_ESTIMATE_BRANCHES);
   const total = Math.round(estimate + branches);
   if (gaveUp || total > MAX_VISITS) {
-    throw fail({
-      code: 'SEARCH_TOO_LARGE',
-      message: `the search ${gaveUp ? `has more than ${MAX_ESTIMATE_BRANCHES.toLocaleString('en-US')} combinations of the other elements to walk before carbon and hydrogen` : `would visit about ${total.toLocaleString('en-US')} formulas`} (${describe(options)}), more than pondus answers within about a second (at most ${MAX_VISITS.toLocaleString('en-US')} formulas): narrow the window (--ppm), the element ranges (--elements, e.g. fewer halogens or a smaller N and O range), or add found percents (--found)`,
-    });
+    throw fail(
+      typedIssue({
+        code: 'SEARCH_TOO_LARGE',
+        search: 'candidates',
+        estimate: gaveUp ? null : total,
+        limit: MAX_VISITS,
+        walkLimit: gaveUp ? MAX_ESTIMATE_BRANCHES : null,
+        elements: S,
+        window: describe(options),
+        options: ['ppm', 'elements', 'found'],
+      }),
+    );
   }
 
   const peaks = options.pattern !== undefined ? readPeaks(options.pattern) : null;

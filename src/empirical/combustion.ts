@@ -6,7 +6,9 @@
  */
 import { notesJson } from '../errors/note-json.js';
 import type { Note } from '../errors/issue.js';
+import { messageFor } from '../errors/message.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
+import { FLAG_NAMING } from '../errors/render.js';
 import { Decimal } from '../exact/decimal.js';
 import { MASS, measureAs } from '../calc/measure.js';
 import { conversionFactor } from '../preparation/conversion-factor.js';
@@ -184,7 +186,8 @@ export function combustionDetail(options: CombustionOptions): CombustionDetail {
     s = searchFormula(measurements);
   } catch (e) {
     if (!(e instanceof PondusError) || e.first.code !== 'NO_FORMULA_FITS') throw e;
-    notes.push({ code: 'NO_FORMULA_FITS', message: e.first.message });
+    // a note has no naming of its own: it keeps the flag words it has always had
+    notes.push({ code: 'NO_FORMULA_FITS', message: messageFor(e.first, FLAG_NAMING) });
     return { input: options.sample, sample, elements, empirical: null, hill: null, fit: null, alternatives: [], notes };
   }
   return { input: options.sample, sample, elements, empirical: s.best.formula, hill: s.best.hill, fit: s.best, alternatives: s.alternatives, notes };

@@ -75,10 +75,10 @@ function molarWindow(text: string): { lo: number; hi: number; text: string } {
   if (range) {
     const lo = Number(range[1]);
     const hi = Number(range[2]);
-    if (!(lo > 0 && hi > lo && hi <= 100_000)) throw fail({ code: 'BAD_OPTION', message: `--molar-mass ${text}: a range goes from the lower to the higher molar mass, both above zero` });
+    if (!(lo > 0 && hi > lo && hi <= 100_000)) throw fail({ code: 'BAD_OPTION', message: `\`molarMass: ${text}\`: a range goes from the lower to the higher molar mass, both above zero`, options: ['molarMass'] });
     return { lo, hi, text: `${range[1]}–${range[2]} g/mol` };
   }
-  if (!/^\s*[0-9]+(\.[0-9]+)?\s*(g\/mol)?\s*$/.test(text)) throw fail({ code: 'BAD_OPTION', message: `--molar-mass takes a number of g/mol or a range such as 170-190, not '${text}'` });
+  if (!/^\s*[0-9]+(\.[0-9]+)?\s*(g\/mol)?\s*$/.test(text)) throw fail({ code: 'BAD_OPTION', message: `\`molarMass\` takes a number of g/mol or a range such as 170-190, not '${text}'`, options: ['molarMass'] });
   const M = Number(text.replace(/g\/mol/, '').trim());
   if (!(M > 0 && M <= 100_000)) throw fail({ code: 'BAD_OPTION', message: 'the molar mass must be positive (at most 100000 g/mol)' });
   return { lo: M * (1 - MOLAR_MASS_WINDOW), hi: M * (1 + MOLAR_MASS_WINDOW), text: `${text.replace(/g\/mol/, '').trim()} g/mol ± 1 %` };

@@ -26,6 +26,7 @@
  */
 import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
+import { typedIssue } from '../errors/message.js';
 import { getAtomData } from '../elements/atom-data.js';
 import { hillFormula, hillOrder } from '../formula/hill.js';
 import { conventionalFormula } from './written.js';
@@ -204,10 +205,7 @@ function score(data: PreparedData, counts: ArrayLike<number>, residuals: Float64
 const OVER_BUDGET = Symbol('over budget');
 
 const tooLarge = (n: number) =>
-  fail({
-    code: 'SEARCH_TOO_LARGE',
-    message: `the search for a formula of ${n} elements within these limits visits more than ${MAX_SEARCH_WORK.toLocaleString('en-US')} count combinations, more than pondus answers within about a second: give a molar mass (--molar-mass), a tighter --tolerance if the analysis is better than ±0.3 points, or search near a measured mass with the candidates command`,
-  });
+  fail(typedIssue({ code: 'SEARCH_TOO_LARGE', search: 'elements', estimate: null, limit: MAX_SEARCH_WORK, walkLimit: null, elements: n, window: null, options: ['molarMass', 'tolerance'] }));
 
 /**
  * Searches for the empirical formula that fits the measurements.
@@ -236,7 +234,7 @@ export function searchFormula(m: Measurements, options: SearchOptions = {}): Sea
   // an element within its limit of zero cannot fix a count: the data cannot tell how much of it there is
   const trace = symbols.findIndex((_, i) => percents[i] <= limits[i]);
   if (trace >= 0) {
-    throw fail({ code: 'NO_FORMULA_FITS', message: `${symbols[trace]} at ${percents[trace]} % is within the limit (±${limits[trace].toFixed(3)} points) of zero: the data cannot tell how many ${symbols[trace]} atoms there are; give a tighter --tolerance if the analysis is better than that, or leave ${symbols[trace]} out` });
+    throw fail({ code: 'NO_FORMULA_FITS', message: `${symbols[trace]} at ${percents[trace]} % is within the limit (±${limits[trace].toFixed(3)} points) of zero: the data cannot tell how many ${symbols[trace]} atoms there are; give a tighter \`tolerance\` if the analysis is better than that, or leave ${symbols[trace]} out`, options: ['tolerance'] });
   }
   // the search ends past MAX_EMPIRICAL_ATOMS, or once the smallest formula of a scale has more than
   // 2.5 times the atoms of the smallest fit (the alternatives a chemist would consider)
@@ -378,7 +376,7 @@ export function searchMolecular(m: Measurements, lo: number, hi: number, options
   let size = 1;
   for (const [a, b] of ranges) size *= Math.max(0, b - a + 1);
   if (size > MAX_MOLECULAR_WORK) {
-    throw fail({ code: 'SEARCH_TOO_LARGE', message: `the molar mass and these limits leave about ${Math.round(size).toLocaleString('en-US')} count combinations, more than pondus searches within about a second: narrow the molar-mass range or the tolerance, or search near a measured mass with the candidates command` });
+    throw fail(typedIssue({ code: 'SEARCH_TOO_LARGE', search: 'molecular', estimate: Math.round(size), limit: MAX_MOLECULAR_WORK, walkLimit: null, elements: k, window: null }));
   }
   const counts = new Int32Array(k);
   const residuals = new Float64Array(k);

@@ -67,7 +67,7 @@ function readKey(key: string, column: number, text: string): { symbol: string; s
   } catch (e) {
     if (/^[A-Z][a-z]?$/.test(key) || /^[A-Za-z][a-z]?$/.test(key)) throw fail({ code: 'UNKNOWN_ELEMENT', message: `unknown element symbol '${key}'`, column, length: key.length }, text);
     const why = e instanceof PondusError ? `: ${e.first.message}` : '';
-    throw fail({ code: 'BAD_MEASUREMENT', message: `'${key}' is neither an element symbol nor a formula such as SiO2 or Al2O3${why}`, column, length: key.length }, text);
+    throw fail({ code: 'BAD_MEASUREMENT', message: `'${key}' is neither an element symbol nor a formula such as SiO2 or Al2O3${why}`, column, length: key.length, options: e instanceof PondusError ? e.first.options : undefined }, text);
   }
   if (m.charge !== 0) throw fail({ code: 'BAD_MEASUREMENT', message: `'${key}' is an ion: give element or oxide percents (SiO2, Al2O3, Na2O, …)`, column, length: key.length }, text);
   if (m.contributions.some((c) => c.massNumber !== null)) throw fail({ code: 'BAD_MEASUREMENT', message: `'${key}' names an isotope: give element or oxide percents with natural atomic weights`, column, length: key.length }, text);

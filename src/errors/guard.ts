@@ -1,6 +1,6 @@
 import { Decimal } from '../exact/decimal.js';
 import { getAtomData } from '../elements/atom-data.js';
-import { PondusError, toSafe, type SafeResult } from './pondus-error.js';
+import { asPondusError, PondusError, toSafe, type SafeResult } from './pondus-error.js';
 
 /**
  * The shapes of the library's own values and of the options objects with required fields, as the
@@ -317,25 +317,6 @@ function checkArguments(name: string, compiled: readonly Compiled[], args: unkno
     throw new PondusError([{ code: 'BAD_ARGUMENT', message }]);
   }
 }
-/**
- * What an error that is not a PondusError becomes when it reaches the public API's boundary: a
- * division by zero keeps its meaning (DIVISION_BY_ZERO), a value decimal.js cannot read as a number
- * is BAD_ARGUMENT; anything else is a PondusError with code
- * INTERNAL_ERROR naming the function and the original message (kept as `cause`).
- */
-function asPondusError(name: string, e: unknown): PondusError {
-  if (e instanceof PondusError) return e;
-  const message = e instanceof Error ? e.message : String(e);
-  const invalid = /^\[DecimalError\] Invalid argument: (.*)$/s.exec(message);
-  const err = /division by zero/i.test(message)
-    ? new PondusError([{ code: 'DIVISION_BY_ZERO', message: `${name}: division by zero` }])
-    : invalid
-      ? new PondusError([{ code: 'BAD_ARGUMENT', message: `${name}: not a number: '${invalid[1].slice(0, 40)}'` }])
-      : new PondusError([{ code: 'INTERNAL_ERROR', message: `${name}: internal error (please report it): ${message}` }]);
-  (err as { cause?: unknown }).cause = e;
-  return err;
-}
-
 const GUARDED = new WeakSet<object>();
 
 /**
@@ -390,7 +371,7 @@ export function isGuarded(fn: unknown): boolean {
  *
  * @param fn - a function that throws only PondusError (a {@link guarded} one).
  * @returns the same function returning a SafeResult.
- * @throws nothing for a guarded function: its PondusError, BAD_ARGUMENT included, becomes `{ success: false }`; an error of another type from an unguarded `fn` propagates.
+ * @throws nothing: a PondusError, BAD_ARGUMENT included, becomes `{ success: false }`, and so does an error of another type from an unguarded `fn` (as INTERNAL_ERROR or DIVISION_BY_ZERO, see {@link toSafe}).
  * @example
  * const half = safely(guarded('half', (x) => x / 2, ['number']))
  * half(3) // { success: true, data: 1.5 }

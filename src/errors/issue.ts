@@ -23,7 +23,6 @@ export type IssueCode =
   | 'BAD_CHARGE'
   | 'AMBIGUOUS_CHARGE'
   | 'MISPLACED_CHARGE'
-  | 'UNKNOWN_ABBREVIATION'
   | 'SPACE_IN_FORMULA'
   | 'AMBIGUOUS_READING'
   | 'INEXACT_FRACTION'
@@ -71,7 +70,8 @@ interface IssueBase {
   /**
    * The library options the message or hint names, by their names in the options objects
    * (`abbreviations`, `molarMass`). The text writes each as `` `name` `` (or `` `name: value` ``);
-   * the command line shows its flag instead (see `messageFor`).
+   * the command line shows its flag instead (see `messageFor`). A script reads here which options a
+   * BAD_OPTION or USAGE issue is about.
    */
   options?: string[];
 }
@@ -100,6 +100,32 @@ export interface IssueFields {
   MISPLACED_CHARGE: { charge: string; following: string | null };
   SPACE_IN_FORMULA: { joined: string };
   INEXACT_FRACTION: { numerator: number; denominator: number };
+  /** The element's symbol and name. */
+  NO_STANDARD_WEIGHT: { symbol: string; name: string };
+  /** The part and the formula in Hill order, and the elements of the part the formula has none of. */
+  PART_NOT_IN_FORMULA: { part: string; formula: string; lacking: string[] };
+  /** The unit or word as written; `inExpression` when it stands in a calculator expression, where it may be a mistyped word. */
+  UNKNOWN_UNIT: { unit: string; inExpression: boolean };
+  /**
+   * Two quantities of different dimensions: added or subtracted (`first` and `second` as written),
+   * a result asked for in a unit of another dimension (`convert`: `first` null, `second` the unit),
+   * or a stock and a target concentration of different kinds (`dilute`: `first` 'stock', `second`
+   * 'target'). Each dimension is in the base units pondus writes it in (`g`, `M`, `g/L`), null for a pure number.
+   */
+  INCOMPATIBLE_UNITS: { operation: 'add' | 'subtract' | 'convert' | 'dilute'; first: string | null; firstDimension: string | null; second: string; secondDimension: string | null };
+  /**
+   * A number beyond what pondus reads or reports: `value` as written (or the result, to 3 figures),
+   * `exponentLimit` the largest power of ten in size (10^±limit), `reading` what was read: an
+   * exponent, a number, an exact fraction, a calculator result, or a measurement (`what` names it).
+   */
+  NUMBER_OUT_OF_RANGE: { value: string; exponentLimit: number; reading: 'exponent' | 'number' | 'fraction' | 'result' | 'measurement'; what: string | null };
+  /**
+   * A search refused up front: `estimate` the formulas (or count combinations) it would visit, null
+   * when it gave up counting past `walkLimit` branches; `limit` what pondus searches within about a
+   * second. `candidates` searches a mass window (`window` describes it); `elements` the formula of
+   * `elements` elements from percents; `molecular` the formulas within a molar mass.
+   */
+  SEARCH_TOO_LARGE: { search: 'candidates' | 'elements' | 'molecular'; estimate: number | null; limit: number; walkLimit: number | null; elements: number | null; window: string | null };
 }
 
 /** The codes with machine fields. */
@@ -146,6 +172,12 @@ const FIELD_NAMES: { [C in TypedCode]: (keyof IssueFields[C])[] } = {
   MISPLACED_CHARGE: ['charge', 'following'],
   SPACE_IN_FORMULA: ['joined'],
   INEXACT_FRACTION: ['numerator', 'denominator'],
+  NO_STANDARD_WEIGHT: ['symbol', 'name'],
+  PART_NOT_IN_FORMULA: ['part', 'formula', 'lacking'],
+  UNKNOWN_UNIT: ['unit', 'inExpression'],
+  INCOMPATIBLE_UNITS: ['operation', 'first', 'firstDimension', 'second', 'secondDimension'],
+  NUMBER_OUT_OF_RANGE: ['value', 'exponentLimit', 'reading', 'what'],
+  SEARCH_TOO_LARGE: ['search', 'estimate', 'limit', 'walkLimit', 'elements', 'window'],
 };
 
 /**

@@ -76,6 +76,48 @@ const MESSAGES: { [C in TypedCode]: Render<C> } = {
       : `a charge must come at the end of the formula; '${f.following}' follows the charge '${f.charge}'`,
   SPACE_IN_FORMULA: (f, c) => `a space${at(c)} inside the formula: pondus does not join the pieces around it, because '${f.joined}' may be a different substance from what was meant`,
   INEXACT_FRACTION: (f) => `the multiplier ${f.numerator}/${f.denominator} has no exact decimal form, and pondus keeps counts exact`,
+  NO_STANDARD_WEIGHT: (f) => `${f.name} (${f.symbol}) has no standard atomic weight, so the molar mass has no uncertainty by this method`,
+  PART_NOT_IN_FORMULA: (f) => `${f.part} is not part of ${f.formula}: the formula lacks ${f.lacking.join(', ') || 'enough atoms'}`,
+  UNKNOWN_UNIT: (f, c) => (f.inExpression ? `unknown unit or word '${f.unit}'${at(c)}` : `unknown unit '${f.unit}'`),
+  INCOMPATIBLE_UNITS: (f) => {
+    const dim = (d: string | null) => d ?? 'no unit';
+    switch (f.operation) {
+      case 'add':
+        return `cannot add ${f.first} (${dim(f.firstDimension)}) and ${f.second} (${dim(f.secondDimension)})`;
+      case 'subtract':
+        return `cannot subtract ${f.second} (${dim(f.secondDimension)}) from ${f.first} (${dim(f.firstDimension)})`;
+      case 'dilute':
+        return `the ${f.first} and ${f.second} concentrations must be of the same kind (both molar, both mass per volume, or both %)`;
+      default:
+        return `the result is ${f.firstDimension ?? 'a pure number'}, not convertible to ${f.second}`;
+    }
+  },
+  NUMBER_OUT_OF_RANGE: (f) => {
+    switch (f.reading) {
+      case 'exponent':
+        return `'${f.value}' is out of range (exponents up to ±${f.exponentLimit})`;
+      case 'number':
+        return `'${f.value}' is out of range: numbers are read from 1e-${f.exponentLimit} to 1e${f.exponentLimit} in size, so that every result is a finite JSON number`;
+      case 'fraction':
+        return `'${f.value}' is beyond the range of exact fractions (10^±${f.exponentLimit})`;
+      case 'result':
+        return `the result, about ${f.value}, is beyond the range of numbers pondus reports (1e-${f.exponentLimit} to 1e${f.exponentLimit})`;
+      default:
+        return `${f.what ?? 'the measurement'} is out of the range pondus takes for a measurement (10^±${f.exponentLimit} of the base unit): '${f.value}'`;
+    }
+  },
+  SEARCH_TOO_LARGE: (f) => {
+    switch (f.search) {
+      case 'candidates': {
+        const size = f.estimate === null ? `has more than ${grouped(f.walkLimit ?? 0)} combinations of the other elements to walk before carbon and hydrogen` : `would visit about ${grouped(f.estimate)} formulas`;
+        return `the search ${size} (${f.window ?? ''}), more than pondus answers within about a second (at most ${grouped(f.limit)} formulas): narrow the window (\`ppm\`), the element ranges (\`elements\`, e.g. fewer halogens or a smaller N and O range), or add found percents (\`found\`)`;
+      }
+      case 'elements':
+        return `the search for a formula of ${f.elements} elements within these limits visits more than ${grouped(f.limit)} count combinations, more than pondus answers within about a second: give a molar mass (\`molarMass\`), a tighter \`tolerance\` if the analysis is better than ±0.3 points, or search near a measured mass with the candidates command`;
+      default:
+        return `the molar mass and these limits leave about ${grouped(f.estimate ?? 0)} count combinations, more than pondus searches within about a second: narrow the molar-mass range or the tolerance, or search near a measured mass with the candidates command`;
+    }
+  },
 };
 
 /**

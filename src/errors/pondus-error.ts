@@ -51,20 +51,45 @@ export function fail(issue: Issue, input?: string): PondusError {
 }
 
 /**
- * Runs `fn` and turns a thrown PondusError into a failed SafeResult; other errors propagate.
+ * What an error that is not a PondusError becomes when it reaches the public API's boundary: a
+ * division by zero keeps its meaning (DIVISION_BY_ZERO), a value decimal.js cannot read as a number
+ * is BAD_ARGUMENT; anything else is a PondusError with code
+ * INTERNAL_ERROR naming the function and the original message (kept as `cause`).
+ *
+ * @example
+ * asPondusError('f', new Error('boom')).first.code // 'INTERNAL_ERROR'
+ */
+export function asPondusError(name: string, e: unknown): PondusError {
+  if (e instanceof PondusError) return e;
+  const message = e instanceof Error ? e.message : String(e);
+  const invalid = /^\[DecimalError\] Invalid argument: (.*)$/s.exec(message);
+  const err = /division by zero/i.test(message)
+    ? new PondusError([{ code: 'DIVISION_BY_ZERO', message: `${name}: division by zero` }])
+    : invalid
+      ? new PondusError([{ code: 'BAD_ARGUMENT', message: `${name}: not a number: '${invalid[1].slice(0, 40)}'` }])
+      : new PondusError([{ code: 'INTERNAL_ERROR', message: `${name}: internal error (please report it): ${message}` }]);
+  (err as { cause?: unknown }).cause = e;
+  return err;
+}
+
+/**
+ * Runs `fn` and turns anything it throws into a failed SafeResult: a PondusError as it is, any
+ * other error as a PondusError (INTERNAL_ERROR naming the original, or DIVISION_BY_ZERO; the
+ * original kept as `cause`). It never throws what `fn` throws.
  *
  * @param fn - a function to run, taking no arguments.
- * @returns `{ success: true, data }` with what `fn` returned, or `{ success: false, error }` when it threw a PondusError.
- * @throws PondusError: BAD_ARGUMENT when `fn` is not a function; an error of another type thrown by `fn` reaches the caller as INTERNAL_ERROR (or DIVISION_BY_ZERO) rather than as a failed result.
+ * @returns `{ success: true, data }` with what `fn` returned, or `{ success: false, error }` with what it threw, as a PondusError.
+ * @throws PondusError: BAD_ARGUMENT when `fn` is not a function (from the public API's boundary); nothing that `fn` throws.
  * @example
  * toSafe(() => parseFormula('H2O')).success // true
  * toSafe(() => parseFormula('Xx')).success  // false
+ * const r = toSafe(() => JSON.parse('{'))
+ * r.success ? '' : r.error.first.code // 'INTERNAL_ERROR'
  */
 export function toSafe<T>(fn: () => T): SafeResult<T> {
   try {
     return { success: true, data: fn() };
   } catch (e) {
-    if (e instanceof PondusError) return { success: false, error: e };
-    throw e;
+    return { success: false, error: asPondusError('toSafe', e) };
   }
 }

@@ -2,6 +2,9 @@ import type { Issue } from './issue.js';
 import { hintFor, LIBRARY_NAMING, messageFor, type OptionNaming } from './message.js';
 import { PondusError } from './pondus-error.js';
 
+/** Options whose flag is not their name in kebab case: `amounts` (a list) is given one `--amount` at a time. */
+const FLAGS: Record<string, string> = { amounts: 'amount' };
+
 /**
  * The command line's naming of options: the flag (`` `molarMass` `` → `--molar-mass`,
  * `` `abbreviations: true` `` → `--abbreviations`, `` `density: 1.19 g/mL` `` → `--density 1.19 g/mL`).
@@ -10,7 +13,7 @@ import { PondusError } from './pondus-error.js';
  * FLAG_NAMING.option('molarMass', undefined) // '--molar-mass'
  */
 export const FLAG_NAMING: OptionNaming = {
-  option: (name, value) => `--${name.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}${value === undefined || value === 'true' ? '' : ` ${value}`}`,
+  option: (name, value) => `--${FLAGS[name] ?? name.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}${value === undefined || value === 'true' ? '' : ` ${value}`}`,
 };
 
 /** Options for {@link renderError}. */

@@ -101,7 +101,7 @@ function enumerate(margs: Marginal[], t: number, input?: string): Found {
         if (q < t) break;
         if (out.n === cap) {
           if (cap >= MAX_ISOTOPOLOGUES) {
-            throw fail({ code: 'PATTERN_TOO_LARGE', message: `more than ${MAX_ISOTOPOLOGUES.toLocaleString('en-US')} isotopologues are needed for this coverage (those found so far hold ${(out.total * 100).toFixed(2)} %); ask for a lower --coverage, or the aggregated pattern` }, input);
+            throw fail({ code: 'PATTERN_TOO_LARGE', message: `more than ${MAX_ISOTOPOLOGUES.toLocaleString('en-US')} isotopologues are needed for this coverage (those found so far hold ${(out.total * 100).toFixed(2)} %); ask for a lower \`coverage\`, or the aggregated pattern`, options: ['coverage'] }, input);
           }
           grow();
         }

@@ -75,7 +75,7 @@ export function marginal(key: string, n: number, threshold: number, input?: stri
   const logT = threshold === MODE_ONLY ? best - 1e-9 : threshold > 0 ? Math.log(threshold) : -Infinity;
   const estimate = estimatedCount(n, iso.fractions, best - logT);
   if (estimate > 4 * MAX_MARGINAL) {
-    throw fail({ code: 'PATTERN_TOO_LARGE', message: `${n} ${key} atoms alone have about ${Number(estimate.toPrecision(2)).toLocaleString('en-US')} isotope combinations at this coverage (pondus keeps up to ${MAX_MARGINAL.toLocaleString('en-US')}); ask for a lower --coverage or the aggregated pattern` }, input);
+    throw fail({ code: 'PATTERN_TOO_LARGE', message: `${n} ${key} atoms alone have about ${Number(estimate.toPrecision(2)).toLocaleString('en-US')} isotope combinations at this coverage (pondus keeps up to ${MAX_MARGINAL.toLocaleString('en-US')}); ask for a lower \`coverage\` or the aggregated pattern`, options: ['coverage'] }, input);
   }
   // walk outwards from the mode; configurations live in one flat pool, keyed by number when the
   // counts fit (n+1)^(k-1) < 2^53, by text otherwise; a move's log-probability change is cheap
@@ -119,7 +119,7 @@ export function marginal(key: string, n: number, threshold: number, input?: stri
     if (lp < logT) continue;
     kept.push(at);
     if (kept.length > MAX_MARGINAL) {
-      throw fail({ code: 'PATTERN_TOO_LARGE', message: `${n} ${key} atoms alone have more than ${MAX_MARGINAL.toLocaleString('en-US')} isotope combinations at this coverage; ask for a lower --coverage or the aggregated pattern` }, input);
+      throw fail({ code: 'PATTERN_TOO_LARGE', message: `${n} ${key} atoms alone have more than ${MAX_MARGINAL.toLocaleString('en-US')} isotope combinations at this coverage; ask for a lower \`coverage\` or the aggregated pattern`, options: ['coverage'] }, input);
     }
     for (let i = 0; i < k; i++) {
       const ci = pool[at * k + i];
@@ -134,7 +134,7 @@ export function marginal(key: string, n: number, threshold: number, input?: stri
         if (seen.has(id)) continue;
         seen.add(id);
         if (seen.size > MAX_SEEN) {
-          throw fail({ code: 'PATTERN_TOO_LARGE', message: `${n} ${key} atoms alone have more than ${MAX_MARGINAL.toLocaleString('en-US')} isotope combinations at this coverage; ask for a lower --coverage or the aggregated pattern` }, input);
+          throw fail({ code: 'PATTERN_TOO_LARGE', message: `${n} ${key} atoms alone have more than ${MAX_MARGINAL.toLocaleString('en-US')} isotope combinations at this coverage; ask for a lower \`coverage\` or the aggregated pattern`, options: ['coverage'] }, input);
         }
         // ln P changes by ln(c_i) − ln(c_j + 1) + ln p_j − ln p_i
         const next = lp + Math.log(ci) - Math.log(cj + 1) + logp[j] - logp[i];

@@ -10,6 +10,7 @@
  * AME2020 uncertainties are far smaller.
  */
 import { fail } from '../errors/pondus-error.js';
+import { typedIssue } from '../errors/message.js';
 import { Decimal } from '../exact/decimal.js';
 import { toDecimal } from '../formula/amount.js';
 import type { MassDetail } from './formula-mass.js';
@@ -60,7 +61,7 @@ export function molarMassUncertainty(r: MassDetail): MolarMassUncertainty {
       value = new Decimal(std.value);
       u = new Decimal(std.uncertainty).div(SQRT3());
     } else {
-      throw fail({ code: 'NO_STANDARD_WEIGHT', message: `${c.atom.element.name} (${c.symbol}) has no standard atomic weight, so the molar mass has no uncertainty by this method` }, r.input);
+      throw fail(typedIssue({ code: 'NO_STANDARD_WEIGHT', symbol: c.symbol, name: c.atom.element.name }), r.input);
     }
     return { label: c.label, value, u, contribution: n.times(u) };
   });

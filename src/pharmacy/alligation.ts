@@ -63,10 +63,10 @@ export function alligation(targetText: string, o: AlligationOptions): Alligation
   if (o.total !== undefined) {
     total = readPositive(o.total, [MASS, VOLUME], 'the total', notes);
     const totalBy = sameDims(total.dims, MASS) ? 'mass' : 'volume';
-    if (by !== undefined && by !== totalBy) throw fail({ code: 'USAGE', message: `--by ${by} conflicts with a total that is a ${totalBy} ('${o.total}')` });
+    if (by !== undefined && by !== totalBy) throw fail({ code: 'USAGE', message: `\`by: ${by}\` conflicts with a total that is a ${totalBy} ('${o.total}')`, options: ['by'] });
     by = totalBy;
   }
-  if (by === undefined) throw fail({ code: 'USAGE', message: "say how the strengths are mixed: --total '500 g' (by mass) or --total '250 mL' (by volume), or --by mass|volume for parts only" });
+  if (by === undefined) throw fail({ code: 'USAGE', message: "say how the strengths are mixed: `total: '500 g'` (by mass) or `total: '250 mL'` (by volume), or `by: mass|volume` for parts only", options: ['total', 'by'] });
   const kind: PercentKind = by === 'mass' ? 'w/w' : 'w/v';
   const target = readStrength(targetText, kind, notes, 'the target strength');
   const higher = readStrength(o.higher, kind, notes, 'the higher strength');

@@ -98,7 +98,7 @@ const G_PER_MOL = unitOf('g/mol');
  */
 export function milliequivalents(saltText: string, o: MilliequivalentOptions): MilliequivalentResult {
   const given = [o.mass, o.meq, o.mmol, o.concentration].filter((x) => x !== undefined).length;
-  if (given !== 1) throw fail({ code: 'USAGE', message: given === 0 ? 'give one of --mass, --meq, --mmol or --concentration' : 'give only one of --mass, --meq, --mmol and --concentration' });
+  if (given !== 1) throw fail({ code: 'USAGE', message: given === 0 ? 'give one of `mass`, `meq`, `mmol` or `concentration`' : 'give only one of `mass`, `meq`, `mmol` and `concentration`', options: ['mass', 'meq', 'mmol', 'concentration'] });
   const notes: Note[] = [];
   const salt = formulaMassDetail(saltText, o);
   for (const n of salt.notes) notes.push(n);

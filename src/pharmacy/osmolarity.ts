@@ -73,7 +73,7 @@ export function osmolarity(text: string, o: OsmolarityOptions = {}): OsmolarityR
     try {
       result = milliequivalents(salt, { ...o, concentration: strength, measured: o.measured });
     } catch (e) {
-      if (e instanceof PondusError && e.first.code !== 'USAGE') throw fail({ code: e.first.code, message: `${salt}: ${e.first.message}`, column: text.indexOf(piece) + 1, hint: e.first.hint }, text);
+      if (e instanceof PondusError && e.first.code !== 'USAGE') throw fail({ code: e.first.code, message: `${salt}: ${e.first.message}`, column: text.indexOf(piece) + 1, hint: e.first.hint, options: e.first.options }, text);
       throw e;
     }
     for (const n of result.notes) if (n.code !== 'COMPLETE_DISSOCIATION' && n.code !== 'NOMINAL_STRENGTH' && n.code !== 'MEASURED_STRENGTH') notes.push({ ...n, message: n.message.startsWith(salt) ? n.message : `${salt}: ${n.message}` });

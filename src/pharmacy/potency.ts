@@ -53,7 +53,7 @@ export function potency(text: string, options: PotencyOptions = {}): PotencyResu
   if (options.basis === undefined) notes.push({ code: 'POTENCY_AS_IS', message: `the potency ${text.trim()} is read as is (of the material as weighed); give --basis anhydrous (with --water) or --basis dried (with --loss) if the certificate gives it on that basis` });
   let asIs = given;
   if (basis === 'as-is') {
-    if (given.value.gt(1)) throw fail({ code: 'BAD_AMOUNT', message: `a potency as is cannot exceed 100 % (1000 µg/mg): '${text.trim()}'; if the certificate gives it on the anhydrous or dried basis, say so (--basis anhydrous --water …)` }, text);
+    if (given.value.gt(1)) throw fail({ code: 'BAD_AMOUNT', message: `a potency as is cannot exceed 100 % (1000 µg/mg): '${text.trim()}'; if the certificate gives it on the anhydrous or dried basis, say so (\`basis: anhydrous\` \`water: …\`)`, options: ['basis', 'water'] }, text);
   } else {
     const c = convertSampleBasis(given, basis, 'as-is', options);
     asIs = c.converted;

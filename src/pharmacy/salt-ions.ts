@@ -70,7 +70,7 @@ export function saltIons(salt: MassDetail, given: string | undefined, notes: Not
   const target = new Map<string, number>();
   for (const [k, n] of salt.atoms) {
     const d = toDecimal(n);
-    if (!d.isInteger()) throw fail({ code: 'BAD_OPTION', message: `${salt.input} has a fractional count; give its ions with --ions` }, salt.input);
+    if (!d.isInteger()) throw fail({ code: 'BAD_OPTION', message: `${salt.input} has a fractional count; give its ions with \`ions\``, options: ['ions'] }, salt.input);
     target.set(k, d.toNumber());
   }
   if (water > 0) {
@@ -103,10 +103,10 @@ export function saltIons(salt: MassDetail, given: string | undefined, notes: Not
     }
   }
   if (found.length === 0) {
-    throw fail({ code: 'BAD_OPTION', message: `${salt.input} does not split into a cation and an anion pondus knows; give its ions with --ions: each ion with its charge, a count before it when more than one, separated by commas` }, salt.input);
+    throw fail({ code: 'BAD_OPTION', message: `${salt.input} does not split into a cation and an anion pondus knows; give its ions with \`ions\`: each ion with its charge, a count before it when more than one, separated by commas`, options: ['ions'] }, salt.input);
   }
   if (found.length > 1) {
-    throw fail({ code: 'AMBIGUOUS_CHARGE', message: `${salt.input} splits into ions more than one way: ${found.map(describe).join(' or ')}; give the one you mean with --ions` }, salt.input);
+    throw fail({ code: 'AMBIGUOUS_CHARGE', message: `${salt.input} splits into ions more than one way: ${found.map(describe).join(' or ')}; give the one you mean with \`ions\``, options: ['ions'] }, salt.input);
   }
   notes.push({ code: 'IONS_READ', message: `${salt.input} read as ${describe(found[0])}${water ? ` (its ${water} H2O of crystallisation counted in the molar mass, not as particles)` : ''}` });
   return found[0];
@@ -128,7 +128,7 @@ function givenIons(salt: MassDetail, given: string, target: Map<string, number>,
     ions.push({ ion: m[2], name: ion.formula, charge: ion.charge, count });
     parts.push([ion.atoms, count]);
   }
-  if (ions.length === 0) throw fail({ code: 'BAD_OPTION', message: '--ions is empty' }, given);
+  if (ions.length === 0) throw fail({ code: 'BAD_OPTION', message: '`ions` is empty', options: ['ions'] }, given);
   const net = ions.reduce((s, i) => s + i.charge * i.count, 0);
   if (net !== 0) throw fail({ code: 'BAD_CHARGE', message: `the ions given carry a net charge of ${net}; a salt's ions balance` }, given);
   if (!sameCounts(target, parts)) throw fail({ code: 'PART_NOT_IN_FORMULA', message: `the ions given do not add up to ${salt.input}${water ? ' less its water of crystallisation' : ''}` }, given);

@@ -133,7 +133,8 @@ export function concentratedReagent(reagentText: string, options: ConcentratedOp
     const known = CONCENTRATED_GRADES.filter((g) => g.formula === reagent.formula).map((g) => `${g.percent} % (${g.density} g/mL)`);
     throw fail({
       code: 'BAD_OPTION',
-      message: `give the density of the concentrated reagent (--density '1.19 g/mL', from its label or certificate)${known.length ? `; the table of common grades has ${reagent.input} at ${known.join(', ')} only` : ''}`,
+      message: `give the density of the concentrated reagent (\`density: '1.19 g/mL'\`, from its label or certificate)${known.length ? `; the table of common grades has ${reagent.input} at ${known.join(', ')} only` : ''}`,
+      options: ['density'],
     });
   }
   if (reagent.formula === 'H3N') notes.push({ code: 'AMMONIA_AS_NH3', message: 'the mass fraction is read as of NH3, as the labels of ammonia solution give it (28–30 % NH3); a label in % NH4OH counts more mass per mole: write NH4OH for that reading' });

@@ -54,7 +54,8 @@ export function conversionFactor(sought: string, given: string, element?: string
     if (candidates.length !== 1) {
       throw fail({
         code: 'BAD_OPTION',
-        message: candidates.length === 0 ? `${speciesText(s)} and ${speciesText(g)} share no element` : `${speciesText(s)} and ${speciesText(g)} share ${candidates.join(', ')}: say which element the factor rests on (--element)`,
+        message: candidates.length === 0 ? `${speciesText(s)} and ${speciesText(g)} share no element` : `${speciesText(s)} and ${speciesText(g)} share ${candidates.join(', ')}: say which element the factor rests on (\`element\`)`,
+        options: ['element'],
       });
     }
     key = candidates[0];

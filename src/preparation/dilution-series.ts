@@ -15,6 +15,7 @@ import { exact } from '../sigfig/measured.js';
 import { divide, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
 import { inputFigures, instruction, fewFiguresNote, type InputFigures, type Instruction } from '../sigfig/instruction.js';
 import { sameDims } from '../sigfig/units.js';
+import { kindsDiffer, refuseNotWeaker } from './dilution.js';
 import { MAX_ONE_STEP_FACTOR, MIN_TRANSFER_L } from './warnings.js';
 
 /** Most steps a plan may have (a factor of 10¹² in steps of 100). */
@@ -94,14 +95,16 @@ function roundAtLeast(x: Decimal): Decimal {
  * Splits a dilution factor into steps of at most `maxStep` each, round factors first.
  *
  * @param factor - the overall dilution factor (more than 1).
- * @param maxStep - the largest factor allowed in one step, 2 or more (not checked here; {@link dilutionSeries} checks it).
+ * @param maxStep - the largest factor allowed in one step, 2 or more.
  * @returns the factors of the steps, whose product is the overall factor.
- * @throws PondusError: BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
+ * @throws PondusError: BAD_AMOUNT for a factor that is not more than 1, or a largest step below 2 (no plan could reach the factor); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * planSteps(new Decimal(1000), new Decimal(100)).map(String) // ['100', '10']
  * planSteps(new Decimal(50), new Decimal(100)).map(String) // ['50']
  */
 export function planSteps(factor: Decimal, maxStep: Decimal): Decimal[] {
+  if (!factor.isFinite() || factor.lte(1)) throw fail({ code: 'BAD_AMOUNT', message: `a dilution factor must be more than 1, not ${factor.toString()}` });
+  if (!maxStep.isFinite() || maxStep.lt(2)) throw fail({ code: 'BAD_AMOUNT', message: `the largest factor in one step must be at least 2, not ${maxStep.toString()}: steps of less cannot reach the factor` });
   if (factor.lte(maxStep)) return [factor];
   const big = roundAtMost(maxStep);
   const steps: Decimal[] = [];
@@ -165,8 +168,8 @@ export function dilutionSeries(options: SeriesOptions): SeriesResult {
     if (options.stock === undefined || options.target === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the stock and target concentrations, or the dilution factor' });
     stock = readPositive(options.stock, kinds, 'the stock concentration', notes);
     target = readPositive(options.target, kinds, 'the target concentration', notes);
-    if (!sameDims(stock.dims, target.dims)) throw fail({ code: 'INCOMPATIBLE_UNITS', message: 'the stock and target concentrations must be of the same kind (both molar, both mass per volume, or both %)' });
-    if (target.value.gte(stock.value)) throw fail({ code: 'BAD_AMOUNT', message: 'the target is not weaker than the stock: a dilution cannot get there' });
+    if (!sameDims(stock.dims, target.dims)) throw fail(kindsDiffer(stock, target));
+    refuseNotWeaker(stock.value, target.value, 'the stock');
     factor = stock.value.div(target.value);
     inputs.push(inputFigures('the stock', options.stock, stock), inputFigures('the target', options.target, target));
   }

@@ -3,11 +3,13 @@
  * a weaker solution (an instruction, at working precision), and from the
  * volume actually taken, the concentration made (a result).
  */
-import type { Note } from '../errors/issue.js';
+import type { Issue, Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
+import type { Decimal } from '../exact/decimal.js';
+import { typedIssue } from '../errors/message.js';
 import { MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
 import { divide, multiply, subtract, type Quantity } from '../sigfig/quantity.js';
-import { sameDims } from '../sigfig/units.js';
+import { baseUnitText, sameDims } from '../sigfig/units.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, volumeUnitFor, type Instruction } from '../sigfig/instruction.js';
 import { dilutionWarning } from './warnings.js';
 
@@ -48,7 +50,7 @@ export interface DilutionResult {
  * @param volumeText - the final volume made up to.
  * @param takenText - the volume of stock actually taken, for the concentration made (a result).
  * @returns the stock and solvent volumes (instructions at working precision) when a target is given, the concentration made from the volume taken when one is given, the factor and the notes.
- * @throws PondusError: INCOMPATIBLE_UNITS for a content by mass (% w/w, mg/kg, …) or stock and target of different kinds; BAD_OPTION for neither a target nor a volume taken; BAD_AMOUNT for a concentration or volume that is not positive, a target above the stock, or a volume taken that is not positive or is more than the final volume; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
+ * @throws PondusError: INCOMPATIBLE_UNITS for a content by mass (% w/w, mg/kg, …) or stock and target of different kinds; BAD_OPTION for neither a target nor a volume taken; BAD_AMOUNT for a concentration or volume that is not positive, a target above the stock or equal to it (a factor of 1 is no dilution), or a volume taken that is not positive or is more than the final volume; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * displayInstruction(dilute('1.00 M', '0.100 M', '250.0 mL').stockVolume).text // '25.00 mL'
  */
@@ -57,16 +59,16 @@ export function dilute(stockText: string, targetText: string | undefined, volume
   const notes: Note[] = [];
   for (const t of [stockText, targetText]) {
     if (t !== undefined && /(%\s*w\/w|mg\/kg|mg\/g|µg\/g|µg\/mg|ug\/g)\s*$/i.test(t.trim())) {
-      throw fail({ code: 'INCOMPATIBLE_UNITS', message: `'${t.trim()}' is a content by mass: made up to a volume, a dilution needs strengths per volume (M, g/L, % w/v, % v/v) or the densities; to let down a solid or semisolid by mass, give --mass (the total) instead of --volume` }, t);
+      throw fail({ code: 'INCOMPATIBLE_UNITS', message: `'${t.trim()}' is a content by mass: made up to a volume, a dilution needs strengths per volume (M, g/L, % w/v, % v/v) or the densities; to let down a solid or semisolid by mass, give \`mass\` (the total) instead of \`volume\``, options: ['mass', 'volume'] }, t);
     }
   }
   const stock = measureAs(stockText, kinds, 'the stock concentration', notes);
   if (targetText === undefined && takenText === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the target concentration, or the volume of stock taken (or both)' });
   const target = targetText !== undefined ? measureAs(targetText, kinds, 'the target concentration', notes) : null;
-  if (target && !sameDims(stock.dims, target.dims)) throw fail({ code: 'INCOMPATIBLE_UNITS', message: 'the stock and target concentrations must be of the same kind (both molar, both mass per volume, or both %)' });
+  if (target && !sameDims(stock.dims, target.dims)) throw fail(kindsDiffer(stock, target));
   const finalVolume = measureAs(volumeText, [VOLUME], 'the final volume', notes);
   if (stock.value.lte(0) || (target && target.value.lte(0)) || finalVolume.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'concentrations and volume must be positive' });
-  if (target && target.value.gt(stock.value)) throw fail({ code: 'BAD_AMOUNT', message: 'the target is more concentrated than the stock: a dilution cannot get there' });
+  if (target) refuseNotWeaker(stock.value, target.value, 'the stock');
 
   let stockVolume: Instruction | null = null;
   let solventVolume: Instruction | null = null;
@@ -97,4 +99,31 @@ export function dilute(stockText: string, targetText: string | undefined, volume
   }
   const written = { stock: stockText.trim(), target: targetText?.trim() ?? null, volume: volumeText.trim(), taken: takenText?.trim() ?? null };
   return { stock, target, finalVolume, stockVolume, solventVolume, factor: factor!, taken, made, written, notes };
+}
+
+/**
+ * Refuses a target that is not weaker than the stock: a stronger one cannot be reached by diluting,
+ * and the same concentration (a dilution factor of 1) is no dilution at all.
+ *
+ * @param stock - the value of the stock concentration (or content).
+ * @param target - the value of the target, in the same unit.
+ * @param stockName - the words for the stock in the message ('the stock', 'the stronger material').
+ * @returns nothing when the target is weaker.
+ * @throws PondusError: BAD_AMOUNT for a target above the stock, or equal to it.
+ * @example
+ * refuseNotWeaker(new Decimal(1), new Decimal('0.1'), 'the stock') // undefined
+ */
+export function refuseNotWeaker(stock: Decimal, target: Decimal, stockName: string): void {
+  if (target.gt(stock)) throw fail({ code: 'BAD_AMOUNT', message: `the target is more concentrated than ${stockName}: a dilution cannot get there` });
+  if (target.eq(stock)) throw fail({ code: 'BAD_AMOUNT', message: `the target is the concentration of ${stockName} itself (a dilution factor of 1): there is nothing to dilute; use ${stockName} as it is` });
+}
+
+/**
+ * The issue of a stock and a target concentration of different kinds (one molar, one per volume), with both dimensions.
+ *
+ * @example
+ * kindsDiffer(measure('1.0 M'), measure('5 g/L')).message // 'the stock and target concentrations must be of the same kind (both molar, both mass per volume, or both %)'
+ */
+export function kindsDiffer(stock: Quantity, target: Quantity): Issue {
+  return typedIssue({ code: 'INCOMPATIBLE_UNITS', operation: 'dilute', first: 'stock', firstDimension: baseUnitText(stock.dims) || null, second: 'target', secondDimension: baseUnitText(target.dims) || null });
 }

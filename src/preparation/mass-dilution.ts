@@ -6,6 +6,7 @@
  */
 import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
+import { refuseNotWeaker } from './dilution.js';
 import { MASS, PURE } from '../calc/measure.js';
 import { readPositive } from '../assay/read-quantity.js';
 import { divide, multiply, subtract, type Quantity } from '../sigfig/quantity.js';
@@ -54,7 +55,7 @@ export function diluteByMass(stockText: string, targetText: string, totalText: s
   const notes: Note[] = [];
   const stock = readContent(stockText, 'the stronger material', notes);
   const target = readContent(targetText, 'the target', notes);
-  if (target.value.gte(stock.value)) throw fail({ code: 'BAD_AMOUNT', message: 'the target is not weaker than the stronger material: a dilution cannot get there' });
+  refuseNotWeaker(stock.value, target.value, 'the stronger material');
   const total = readPositive(totalText, [MASS], 'the total mass', notes);
   const inputs = [inputFigures('the stronger material', stockText, stock), inputFigures('the target', targetText, target), inputFigures('the total mass', totalText, total)];
   const m1 = divide(multiply(target, total), stock);

@@ -170,7 +170,7 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   let purity: Quantity | null = null;
   let basis: PurityBasis | null = null;
   if (options.purityBasis !== undefined && options.purity === undefined) throw fail({ code: 'BAD_OPTION', message: 'a purity basis needs the purity (assay) it describes' });
-  if (options.purityBasis === 'part' && options.as === undefined) throw fail({ code: 'BAD_OPTION', message: "an assay of the part needs the part: give --as (e.g. --as C17H19NO3 for a potency 'as base')" });
+  if (options.purityBasis === 'part' && options.as === undefined) throw fail({ code: 'BAD_OPTION', message: "an assay of the part needs the part: give `as` (e.g. `as: C17H19NO3` for a potency 'as base')", options: ['as'] });
   if (options.purity !== undefined) {
     purity = readPurity(options.purity, notes);
     basis = options.purityBasis ?? 'reagent';
@@ -182,7 +182,8 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
       throw fail({
         code: 'AMBIGUOUS_PURITY',
         message: `the assay ${options.purity.trim()} could be of ${reagent.input} itself${m(asReagent)} or of the ${targetName} it holds, a potency 'as ${targetName}'${m(asPart)}; pure ${reagent.input} holds ${pct(share)} ${targetName}, so both readings are possible`,
-        hint: "say which: --purity-basis reagent (the assay of the reagent as weighed) or --purity-basis part (the content of the --as species, as on a label 'potency as base')",
+        hint: "say which: `purityBasis: reagent` (the assay of the reagent as weighed) or `purityBasis: part` (the content of the `as` species, as on a label 'potency as base')",
+        options: ['purityBasis', 'as'],
       });
     }
     if (basis === 'part' && purity.value.gt(share.times(POTENCY_SLACK))) {

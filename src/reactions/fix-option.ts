@@ -18,13 +18,13 @@ import type { FixedCoefficients } from './balance.js';
  */
 export function readFixOption(texts: readonly string[]): FixedCoefficients {
   if (texts.some((t) => t.trim() === 'written')) {
-    if (texts.length > 1) throw fail({ code: 'USAGE', message: "--fix written takes the coefficients written in the equation: give it alone, not with SPECIES=N" });
+    if (texts.length > 1) throw fail({ code: 'USAGE', message: '`fix: written` takes the coefficients written in the equation: give it alone, not with SPECIES=N', options: ['fix'] });
     return 'written';
   }
   const out: Record<string, string> = Object.create(null);
   for (const t of texts) {
     for (const e of readKeyValues(t, { code: 'USAGE', example: 'C4H6O3=5' })) {
-      if (Object.hasOwn(out, e.key)) throw fail({ code: 'USAGE', message: `--fix gives ${e.key} twice` });
+      if (Object.hasOwn(out, e.key)) throw fail({ code: 'USAGE', message: `\`fix\` gives ${e.key} twice`, options: ['fix'] });
       out[e.key] = e.value;
     }
   }

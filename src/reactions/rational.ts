@@ -3,6 +3,7 @@
  */
 import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
+import { typedIssue } from '../errors/message.js';
 import { gcd as gcdOf } from '../exact/gcd.js';
 
 const WHOLE = /^[+-]?[0-9]{1,15}$/;
@@ -53,7 +54,7 @@ export class Rational {
       d = new Decimal(NaN);
     }
     if (!d.isFinite()) throw fail({ code: 'BAD_NUMBER', message: `'${text}' is not a finite decimal number` });
-    if (d.abs().gt('1e1000') || (!d.isZero() && d.abs().lt('1e-1000'))) throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `'${text}' is beyond the range of exact fractions (10^±1000)` });
+    if (d.abs().gt('1e1000') || (!d.isZero() && d.abs().lt('1e-1000'))) throw fail(typedIssue({ code: 'NUMBER_OUT_OF_RANGE', value: String(text), exponentLimit: 1000, reading: 'fraction', what: null }));
     if (!/^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(String(text).trim())) throw fail({ code: 'BAD_NUMBER', message: `'${text}' is not a decimal number` });
     const [num, den] = d.toFraction();
     return Rational.of(BigInt(num.toFixed()), BigInt(den.toFixed()));

@@ -116,7 +116,7 @@ export function react(equation: string, options: ReactOptions): ReactResult {
   const all = [...eq.reactants, ...eq.products];
   const coef = new Map<Species, Rational>(all.map((s, i) => [s, bal.exact[i]]));
   const notes: Note[] = [...bal.result.notes];
-  if (!options.amounts || options.amounts.length === 0) throw fail({ code: 'BAD_AMOUNT', message: 'give the amount of at least one reactant: --amount H2=4.00 g' }, equation);
+  if (!options.amounts || options.amounts.length === 0) throw fail({ code: 'BAD_AMOUNT', message: 'give the amount of at least one reactant: `amounts: H2=4.00 g`', options: ['amounts'] }, equation);
   // read every amount first; equivalents are of the first reactant given by its own amount
   const catalystAmounts: { a: string; s: Species; spec: ReturnType<typeof readRowText>; amount: ReturnType<typeof readAmount> }[] = [];
   const read = options.amounts.flatMap((a) => {
@@ -128,7 +128,7 @@ export function react(equation: string, options: ReactOptions): ReactResult {
       return [];
     }
     const s = findSpecies(key, all, a);
-    if (s.side !== 'reactant') throw fail({ code: 'BAD_AMOUNT', message: `${s.text} is a product; give amounts of reactants (and the product obtained with --actual)` }, a);
+    if (s.side !== 'reactant') throw fail({ code: 'BAD_AMOUNT', message: `${s.text} is a product; give amounts of reactants (and the product obtained with \`actual\`)`, options: ['actual'] }, a);
     const spec = readRowText(a, 'reagent');
     const amount = readAmount(spec.amount ?? '', s.text, notes);
     return [{ a, s, spec, amount }];

@@ -281,7 +281,7 @@ export function reagentRow(ctx: TableContext, spec: ReagentSpec): ReagentRow {
   let writtenEquiv: string | null = null;
   const inputs = ctx.reference.inputs;
   if (spec.role === 'product') {
-    if (spec.amount && spec.amount.trim()) throw fail({ code: 'BAD_AMOUNT', message: `the product ${what} takes no amount: its theoretical yield is computed (give what was obtained with --actual)` });
+    if (spec.amount && spec.amount.trim()) throw fail({ code: 'BAD_AMOUNT', message: `the product ${what} takes no amount: its theoretical yield is computed (give what was obtained with \`actual\`)`, options: ['actual'] });
     let ratio = ctx.productRatio.get(r.formula) ?? ctx.productRatio.get(what) ?? null;
     if (ratio === null) {
       ratio = quantity(exact(1), null);
@@ -455,7 +455,7 @@ export function tableCautions(rows: readonly ReagentRow[]): string[] {
  * @param specs - the rows: each a role (reference, reagent, catalyst, additive, product), a reagent's name or formula, and its amount, purity, density, solution or form as text.
  * @param options - an equation to take the stoichiometry from, the target concentration of the reference and its solvent, the amount of product obtained, rounding, and the formula options.
  * @returns each row's formula, molar mass, equivalents, moles, mass and volume, the reference and its moles, the solvent volume when a concentration is given, the cautions and the notes.
- * @throws PondusError: BAD_RECORD for a row with no reagent, no reference row or more than one, or a reference that is not a reactant of the equation; BAD_AMOUNT for an amount that cannot be read or is not positive, a reference given in equivalents, an amount given for a product, a volume without a density or molarity, a density, purity or solution strength that cannot be used, a reagent with no molar mass given by mass, or a target concentration that is not positive; BAD_OPTION for a solvent without a target concentration; a reagent's formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNKNOWN_ABBREVIATION, AMBIGUOUS_READING, …); the codes of {@link balance} for an equation (BAD_EQUATION, NO_BALANCE, NOT_UNIQUE, …); a measurement that cannot be read (BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
+ * @throws PondusError: BAD_RECORD for a row with no reagent, no reference row or more than one, or a reference that is not a reactant of the equation; BAD_AMOUNT for an amount that cannot be read or is not positive, a reference given in equivalents, an amount given for a product, a volume without a density or molarity, a density, purity or solution strength that cannot be used, a reagent with no molar mass given by mass, or a target concentration that is not positive; BAD_OPTION for a solvent without a target concentration; a reagent's formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, AMBIGUOUS_READING, …); the codes of {@link balance} for an equation (BAD_EQUATION, NO_BALANCE, NOT_UNIQUE, …); a measurement that cannot be read (BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const specs = [{ role: 'reference', reagent: 'C7H6O3', amount: '2.00 g' }, { role: 'product', reagent: 'C9H8O4' }]
  * reagentTable(specs).rows[1].mass?.display // '2.61 g'

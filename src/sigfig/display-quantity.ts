@@ -4,6 +4,7 @@
  */
 import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
+import { typedIssue } from '../errors/message.js';
 import type { Quantity } from './quantity.js';
 import { displayMeasured, type RoundingMode } from './round.js';
 import { baseUnitText, pow10, sameDims, unitOf, type Unit } from './units.js';
@@ -40,7 +41,7 @@ export interface QuantityDisplay {
 export function reportUnit(q: Quantity, wanted?: string | Unit | null): Unit | null {
   if (wanted) {
     const u = typeof wanted === 'string' ? unitOf(wanted) : wanted;
-    if (!sameDims(u.dims, q.dims)) throw fail({ code: 'INCOMPATIBLE_UNITS', message: `the result is ${baseUnitText(q.dims) || 'a pure number'}, not convertible to ${u.symbol}` });
+    if (!sameDims(u.dims, q.dims)) throw fail(typedIssue({ code: 'INCOMPATIBLE_UNITS', operation: 'convert', first: null, firstDimension: baseUnitText(q.dims) || null, second: u.symbol, secondDimension: baseUnitText(u.dims) || null }));
     return u;
   }
   if (q.unit && sameDims(q.unit.dims, q.dims)) return q.unit;

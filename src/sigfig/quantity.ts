@@ -6,6 +6,7 @@
  */
 import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
+import { typedIssue } from '../errors/message.js';
 import { dividedBy, minus as minusM, plus as plusM, sigFigsOf, times as timesM, withSigFigs, type Measured } from './measured.js';
 import { baseUnitText, dimsName, sameDims, unitFactor, type Dims, type Unit } from './units.js';
 
@@ -64,7 +65,7 @@ function describe(q: Quantity): string {
  */
 export function add(a: Quantity, b: Quantity, column?: number): Quantity {
   if (!sameDims(a.dims, b.dims)) {
-    throw fail({ code: 'INCOMPATIBLE_UNITS', message: `cannot add ${describe(a)} (${baseUnitText(a.dims) || 'no unit'}) and ${describe(b)} (${baseUnitText(b.dims) || 'no unit'})`, column });
+    throw fail(typedIssue({ code: 'INCOMPATIBLE_UNITS', operation: 'add', first: describe(a), firstDimension: baseUnitText(a.dims) || null, second: describe(b), secondDimension: baseUnitText(b.dims) || null, column }));
   }
   const m = plusM(a, b);
   return { ...m, dims: a.dims, unit: a.unit ?? b.unit, grad: combine(a.grad, b.grad, (g) => g, (g) => g) };
@@ -83,7 +84,7 @@ export function add(a: Quantity, b: Quantity, column?: number): Quantity {
  */
 export function subtract(a: Quantity, b: Quantity, column?: number): Quantity {
   if (!sameDims(a.dims, b.dims)) {
-    throw fail({ code: 'INCOMPATIBLE_UNITS', message: `cannot subtract ${describe(b)} (${baseUnitText(b.dims) || 'no unit'}) from ${describe(a)} (${baseUnitText(a.dims) || 'no unit'})`, column });
+    throw fail(typedIssue({ code: 'INCOMPATIBLE_UNITS', operation: 'subtract', first: describe(a), firstDimension: baseUnitText(a.dims) || null, second: describe(b), secondDimension: baseUnitText(b.dims) || null, column }));
   }
   const m = minusM(a, b);
   return { ...m, dims: a.dims, unit: a.unit ?? b.unit, grad: combine(a.grad, b.grad, (g) => g, (g) => g.neg()) };

@@ -7,6 +7,7 @@
  */
 import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
+import { typedIssue } from '../errors/message.js';
 import type { Measured } from './measured.js';
 import { pow10 } from './units.js';
 
@@ -62,13 +63,13 @@ function read(text: string, column?: number): ReadNumber {
   const [, sign, int, frac, expText] = m;
   const exp = expText ? Number(expText) : 0;
   if (!Number.isSafeInteger(exp) || Math.abs(exp) > MAX_EXPONENT) {
-    throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `'${text}' is out of range (exponents up to ±${MAX_EXPONENT})`, column });
+    throw fail(typedIssue({ code: 'NUMBER_OUT_OF_RANGE', value: text, exponentLimit: MAX_EXPONENT, reading: 'exponent', what: null, column }));
   }
   const mantissa = `${sign}${int || '0'}${frac ? '.' + frac : ''}`;
   // a number of up to 50 digits is exact as written (the product by 10^exp would not round it either)
   const value = int.length + (frac?.length ?? 0) <= Decimal.precision ? new Decimal(exp === 0 ? mantissa : `${mantissa}e${exp}`) : new Decimal(mantissa).times(pow10(exp));
   if (!value.isZero() && (value.abs().gte(MAX_MAGNITUDE) || value.abs().lt(MIN_MAGNITUDE))) {
-    throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `'${text.trim()}' is out of range: numbers are read from 1e-100 to 1e100 in size, so that every result is a finite JSON number`, column });
+    throw fail(typedIssue({ code: 'NUMBER_OUT_OF_RANGE', value: text.trim(), exponentLimit: MAX_MAGNITUDE.e, reading: 'number', what: null, column }));
   }
   const hasPoint = frac !== undefined;
   const digits = (int + (frac ?? '')).replace(/^0+/, '');

@@ -9,6 +9,7 @@
  */
 import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
+import { typedIssue } from '../errors/message.js';
 
 /** Exponents of the base dimensions [mass (g), amount (mol), volume (L)]. */
 export type Dims = readonly [number, number, number];
@@ -181,7 +182,7 @@ export const UNIT_SYMBOLS: readonly string[] = Object.freeze(TABLE.map((u) => u.
 export function unitOf(symbol: string, column?: number): Unit {
   const u = BY_SYMBOL.get(symbol) ?? BY_SYMBOL.get(ALIASES[symbol] ?? '');
   if (!u) {
-    throw fail({ code: 'UNKNOWN_UNIT', message: `unknown unit '${symbol}'`, column, hint: `units: ${UNIT_SYMBOLS.join(', ')}` });
+    throw fail(typedIssue({ code: 'UNKNOWN_UNIT', unit: symbol, inExpression: false, column, hint: `units: ${UNIT_SYMBOLS.join(', ')}` }));
   }
   return u;
 }

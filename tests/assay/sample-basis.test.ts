@@ -36,7 +36,7 @@ describe('results on another basis of the sample', () => {
   });
 
   it('refuses a missing content, a content of 100 % and an unknown basis', () => {
-    expect(() => convertSampleBasis('99 %', 'as-is', 'dried', {})).toThrow(/--loss/);
+    expect(() => convertSampleBasis('99 %', 'as-is', 'dried', {})).toThrow(/`loss`/);
     expect(() => convertSampleBasis('99 %', 'as-is', 'dried', { loss: '100 %' })).toThrow(/below 100/);
     expect(() => readBasis('wet')).toThrow(/unknown basis/);
     expect(readBasis('As is')).toBe('as-is');

@@ -36,7 +36,7 @@ describe('searches are bounded', () => {
     expect(r.success).toBe(false);
     if (!r.success) {
       expect(r.error.first.code).toBe('SEARCH_TOO_LARGE');
-      expect(r.error.first.message).toMatch(/--ppm/);
+      expect(r.error.first.message).toMatch(/`ppm`/);
     }
   });
 

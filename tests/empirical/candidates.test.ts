@@ -123,7 +123,7 @@ describe('candidates: bounded searches', () => {
     if (!r.success) {
       expect(r.error.first.code).toBe('SEARCH_TOO_LARGE');
       expect(r.error.first.message).toMatch(/(would visit about|has more than) [0-9,]+ (formulas|combinations)/);
-      expect(r.error.first.message).toMatch(/--ppm.*--elements/);
+      expect(r.error.first.message).toMatch(/`ppm`.*`elements`/);
     }
   });
 
@@ -132,7 +132,7 @@ describe('candidates: bounded searches', () => {
     expect(r.success).toBe(false);
     if (!r.success) {
       expect(r.error.first.code).toBe('SEARCH_TOO_LARGE');
-      expect(r.error.first.message).toMatch(/--ppm.*--elements.*--found/);
+      expect(r.error.first.message).toMatch(/`ppm`.*`elements`.*`found`/);
     }
   });
 

@@ -33,7 +33,7 @@ describe('alligation', () => {
     expect(() => alligation('10 % w/w', { higher: '20 % w/v', lower: '5 % w/w', total: '100 g' })).toThrow();
     expect(() => alligation('10 % w/w', { higher: '20 % w/w', lower: '5 % w/w', total: '100 mL' })).toThrow(/by mass/);
     expect(() => alligation('10 %', { higher: '20 %', lower: '5 %', total: '100 g', by: 'volume' })).toThrow(/conflicts/);
-    expect(() => alligation('10 %', { higher: '20 %', lower: '5 %' })).toThrow(/--total/);
+    expect(() => alligation('10 %', { higher: '20 %', lower: '5 %' })).toThrow(/`total: /);
   });
 
   it('property: the amounts add to the total and mix back to the target', () => {

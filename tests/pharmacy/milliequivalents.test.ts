@@ -84,7 +84,7 @@ describe('mmol and mEq in a mass, and the mass for a target', () => {
     const g = milliequivalents('K2HPO4', { mass: '1.000 g', ions: '2K^+,HPO4^2-' });
     expect(codes(g.notes)).toContain('IONS_GIVEN');
     expect(() => milliequivalents('K2HPO4', { mass: '1 g', ions: 'K^+,HPO4^2-' })).toThrow(/net charge/);
-    expect(() => milliequivalents('C6H12O6', { mass: '1 g' })).toThrow(/--ions/);
+    expect(() => milliequivalents('C6H12O6', { mass: '1 g' })).toThrow(/`ions`/);
   });
 
   it('refuses no option or two options', () => {

@@ -81,9 +81,9 @@ describe('dilution by mass (solids and semisolids)', () => {
     expect(displayInstruction(r.take, 'g').text).toBe('1.000 g');
   });
 
-  it('a content by mass is not diluted by volume: one-step dilute points to --mass', async () => {
+  it('a content by mass is not diluted by volume: one-step dilute points to `mass`', async () => {
     const { dilute } = await import('../../src/preparation/dilution.js');
-    expect(() => dilute('10 % w/w', '2 % w/w', '100.0 mL')).toThrow(/--mass/);
+    expect(() => dilute('10 % w/w', '2 % w/w', '100.0 mL')).toThrow(/`mass`/);
     expect(() => dilute('500 mg/kg', '50 mg/kg', '100.0 mL')).toThrow(/content by mass/);
     expect(displayInstruction(dilute('70. % v/v', '35.0 % v/v', '100.0 mL').stockVolume!, 'mL').text).toBe('50.00 mL');
   });

@@ -25,7 +25,7 @@ function usage(check: () => unknown): void {
   try {
     check();
   } catch (e) {
-    if (e instanceof PondusError) throw fail({ code: 'USAGE', message: e.first.message });
+    if (e instanceof PondusError) throw fail({ code: 'USAGE', message: e.first.message, options: e.first.options });
     throw e;
   }
 }

@@ -105,7 +105,7 @@ export function reagentsPresenter(o: ReagentsCliOptions): Presenter<ReagentRow> 
       continue;
     }
     if (ctxError || !ctx) {
-      results.set(p.input, p.spec.role === 'reference' ? ctxError! : fail({ code: ctxError!.first.code, message: `no table without its reference: ${ctxError!.first.message}` }, p.input));
+      results.set(p.input, p.spec.role === 'reference' ? ctxError! : fail({ code: ctxError!.first.code, message: `no table without its reference: ${ctxError!.first.message}`, options: ctxError!.first.options }, p.input));
       continue;
     }
     try {
