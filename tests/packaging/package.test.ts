@@ -16,7 +16,7 @@ function node(args: string[], cwd = dir): string {
 
 beforeAll(() => {
   dir = mkdtempSync(join(tmpdir(), 'pondus-pack-'));
-  execFileSync('npm', ['pack', '--silent', '--pack-destination', dir], { cwd: root, stdio: 'ignore' });
+  execFileSync('npm', ['pack', '--silent', '--ignore-scripts', '--pack-destination', dir], { cwd: root, stdio: 'ignore' });
   const tarball = readdirSync(dir).find((f) => f.endsWith('.tgz'))!;
   writeFileSync(join(dir, 'package.json'), JSON.stringify({ name: 'consumer', version: '1.0.0', private: true }));
   // the one runtime dependency (decimal.js) comes from npm's cache, filled by `npm ci`
