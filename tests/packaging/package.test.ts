@@ -16,6 +16,8 @@ function node(args: string[], cwd = dir): string {
 
 beforeAll(() => {
   dir = mkdtempSync(join(tmpdir(), 'pondus-pack-'));
+  // the build npm test has just made (npm pack would otherwise run `prepare` and build again,
+  // rewriting dist/ while other test files read it)
   execFileSync('npm', ['pack', '--silent', '--ignore-scripts', '--pack-destination', dir], { cwd: root, stdio: 'ignore' });
   const tarball = readdirSync(dir).find((f) => f.endsWith('.tgz'))!;
   writeFileSync(join(dir, 'package.json'), JSON.stringify({ name: 'consumer', version: '1.0.0', private: true }));
