@@ -180,6 +180,56 @@ export class CliWorker {
     });
   }
 
+  /**
+   * Runs cases in order as {@link run} does, but sends them to the worker at once, which answers each
+   * as it ends: no round trip between two cases. A case is a hang when its answer has not come
+   * `hangMs` after the one before it (or after the start); the worker is then replaced and the
+   * cases after it are sent to the new one.
+   */
+  async runAll(cases: Case[], onOutcome: (c: Case, o: Outcome) => void): Promise<void> {
+    let from = 0;
+    while (from < cases.length) {
+      const w = this.start();
+      const first = this.next;
+      const batch = cases.slice(from).map((c, i) => ({ id: first + i, args: c.args, input: c.input ?? '' }));
+      this.next += batch.length;
+      from = await new Promise<number>((resolve) => {
+        let done = from;
+        let timer: NodeJS.Timeout;
+        const finish = (at: number) => {
+          clearTimeout(timer);
+          w.removeAllListeners('message');
+          w.off('error', onError);
+          resolve(at);
+        };
+        const arm = () => {
+          clearTimeout(timer);
+          timer = setTimeout(() => {
+            void w.terminate();
+            this.worker = null;
+            onOutcome(cases[done], { status: -1, stdout: '', stderr: '', ms: this.hangMs, hung: true });
+            finish(done + 1);
+          }, this.hangMs);
+        };
+        const onError = (e: Error) => {
+          this.worker = null;
+          onOutcome(cases[done], { status: -1, stdout: '', stderr: `worker died: ${e.message}`, ms: 0 });
+          finish(done + 1);
+        };
+        w.once('error', onError);
+        w.on('message', (m: Outcome & { id: number }) => {
+          if (m.id !== first + (done - from)) return;
+          onOutcome(cases[done], m);
+          done++;
+          if (done === cases.length) finish(done);
+          else arm();
+        });
+        arm();
+        w.postMessage({ batch });
+      });
+    }
+  }
+
   async close(): Promise<void> {
     if (this.worker) await this.worker.terminate();
     this.worker = null;
@@ -204,14 +254,13 @@ export async function fuzz(options: { seed: number; runsPerCommand: number; slow
       if (options.commands && !options.commands.includes(name)) continue;
       const runs = name === 'candidates' ? Math.max(1, Math.round(options.runsPerCommand / 20)) : options.runsPerCommand;
       const cases = fc.sample(arb, { seed: options.seed + name.length * 7919, numRuns: runs });
-      for (const c of cases) {
-        const o = await worker.run(c);
+      await worker.runAll(cases, (c, o) => {
         report.runs++;
         for (const v of violations(c, o, options.slowMs)) {
           report.counts[v] = (report.counts[v] ?? 0) + 1;
           if (report.examples.filter((e) => e.violation === v).length < 5) report.examples.push({ violation: v, case: c, stderr: o.stderr.slice(0, 300) });
         }
-      }
+      });
     }
   } finally {
     await worker.close();

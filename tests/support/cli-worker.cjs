@@ -2,7 +2,8 @@
 // Each request { id, args, input, env } gets { id, status, stdout, stderr, ms } back. Two ways in:
 // - with workerData { port, flag } (tests/cli/run-cli.ts): answers on that port and wakes the
 //   test thread, which waits on the shared flag;
-// - without (the fuzz harness): answers on parentPort; the harness replaces a worker that hangs.
+// - without (the fuzz harness): answers on parentPort, also to a batch of requests sent at once;
+//   the harness replaces a worker that hangs.
 'use strict';
 const { parentPort, workerData } = require('node:worker_threads');
 const { Writable } = require('node:stream');
@@ -62,5 +63,15 @@ if (workerData && workerData.port) {
     Atomics.notify(signal, 0);
   });
 } else {
-  parentPort.on('message', async (request) => parentPort.postMessage(await serve(request)));
+  // one request at a time, in order; a batch { batch: [request…] } answers each request as it ends,
+  // with a turn of the event loop between two runs as between two separate requests
+  let queue = Promise.resolve();
+  parentPort.on('message', (message) => {
+    queue = queue.then(async () => {
+      for (const request of message.batch ?? [message]) {
+        parentPort.postMessage(await serve(request));
+        await new Promise((resolve) => setImmediate(resolve));
+      }
+    });
+  });
 }

@@ -1,6 +1,7 @@
 // Type tests of the public API (checked by tsc from tests/types/typecheck.test.ts): the main
 // result types keep their stable keys, the guarded functions keep the signatures of the functions
-// they wrap, and the safe… functions return a SafeResult that narrows on `success`.
+// they wrap, and the safe… functions return a SafeResult that narrows on `success`. They read the
+// declarations users get (dist/types, which npm test builds first).
 import { expectTypeOf } from 'vitest';
 import {
   analysis,
@@ -28,7 +29,7 @@ import {
   type ReactResult,
   type SafeResult,
   type SaltFactorResult,
-} from '../../src/index.js';
+} from '../../dist/types/index.js';
 
 // formulaMass: (formula text or tree, options?) → MassResult with the stable keys
 expectTypeOf(formulaMass).parameter(0).toEqualTypeOf<string | FormulaTree>();
