@@ -15,6 +15,10 @@ import { evaluate, type CalcStep } from './evaluate.js';
 import { parseExpression } from './parse-expression.js';
 import { pow10, unitFactor } from '../sigfig/units.js';
 
+/** The largest and smallest sizes of a result pondus reports. */
+const MAX_RESULT = new Decimal('1e300');
+const MIN_RESULT = new Decimal('1e-300');
+
 export interface CalcOptions {
   /** Rounding for the reported figure: half-to-even (default; ASTM E29, ISO 80000-1 Annex B rule A) or half-up. */
   rounding?: RoundingMode;
@@ -60,7 +64,8 @@ export function calc(input: string, options: CalcOptions = {}): CalcResult {
   const tree = parseExpression(input);
   const ev = evaluate(tree);
   const q = ev.result;
-  if (!q.value.isZero() && (q.value.abs().gt('1e300') || q.value.abs().lt('1e-300'))) {
+  // only a value with its leading digit at 10^300 or beyond (or below 10^-300) can be out of range
+  if (!q.value.isZero() && (q.value.e >= 300 || q.value.e < -300) && (q.value.abs().gt(MAX_RESULT) || q.value.abs().lt(MIN_RESULT))) {
     throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `the result, about ${q.value.toSignificantDigits(3).toExponential()}, is beyond the range of numbers pondus reports (1e-300 to 1e300)` }, input);
   }
   const unit = reportUnit(q, tree.target ? tree.target.unit : null);

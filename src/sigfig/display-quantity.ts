@@ -67,7 +67,8 @@ export function reportUnit(q: Quantity, wanted?: string | Unit | null): Unit | n
 export function displayQuantity(q: Quantity, wanted?: string | Unit | null, rounding: RoundingMode = 'half-even'): QuantityDisplay {
   const unit = reportUnit(q, wanted);
   const exp10 = unit ? unit.exp10 : 0;
-  const value = q.value.div(pow10(exp10));
+  // a unit is a power of ten: dividing by it is exact, so it is a multiplication by its inverse
+  const value = exp10 === 0 && q.value.sd() <= Decimal.precision ? q.value : q.value.times(pow10(-exp10));
   const lsd = q.lsd === null ? null : q.lsd - exp10;
   const d = displayMeasured(q.sigFigs !== undefined && lsd !== null ? { value, lsd, sigFigs: q.sigFigs } : { value, lsd }, rounding);
   const unitText = unit ? unit.symbol : baseUnitText(q.dims);

@@ -183,7 +183,10 @@ export function standardUncertainty(q: Quantity, inputs: Map<number, Decimal>): 
   let s = new Decimal(0);
   for (const [k, g] of q.grad) {
     const u = inputs.get(k);
-    if (u) s = s.plus(g.times(u).pow(2));
+    if (u) {
+      const x = g.times(u);
+      s = s.plus(x.times(x));
+    }
   }
   return s.sqrt();
 }

@@ -67,7 +67,8 @@ function read(text: string, column?: number): ReadNumber {
   const mantissa = `${sign}${int || '0'}${frac ? '.' + frac : ''}`;
   // a number of up to 50 digits is exact as written (the product by 10^exp would not round it either)
   const value = int.length + (frac?.length ?? 0) <= Decimal.precision ? new Decimal(exp === 0 ? mantissa : `${mantissa}e${exp}`) : new Decimal(mantissa).times(pow10(exp));
-  if (!value.isZero() && (value.abs().gte(MAX_MAGNITUDE) || value.abs().lt(MIN_MAGNITUDE))) {
+  // both limits are powers of ten, so the position of the leading digit decides
+  if (!value.isZero() && (value.e >= MAX_MAGNITUDE.e || value.e < MIN_MAGNITUDE.e)) {
     throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `'${text.trim()}' is out of range: numbers are read from 1e-100 to 1e100 in size, so that every result is a finite JSON number`, column });
   }
   const hasPoint = frac !== undefined;
