@@ -13,7 +13,7 @@ import { msd, sigFigsOf } from './measured.js';
 import type { Quantity } from './quantity.js';
 import { displayQuantity, reportUnit, type QuantityDisplay } from './display-quantity.js';
 import { displayMeasured, roundToSigFigs, type RoundingMode } from './round.js';
-import { baseUnitText, sameDims, unitFactor, unitOf, type Unit } from './units.js';
+import { baseUnitText, inUnitOf, sameDims, unitOf, type Unit } from './units.js';
 
 /** Significant figures an instruction is shown to, at the least. */
 export const WORKING_FIGURES = 4;
@@ -111,7 +111,7 @@ function show(value: Decimal, n: number | null, unit: Unit | null, q: Quantity, 
 
 function inUnit(q: Quantity, wanted?: string | Unit | null): { unit: Unit | null; value: Decimal } {
   const unit = reportUnit(q, wanted);
-  return { unit, value: q.value.div(unitFactor(unit)) };
+  return { unit, value: inUnitOf(q.value, unit) };
 }
 
 /**
@@ -146,6 +146,10 @@ export function displayResult(q: Quantity, wanted?: string | Unit | null, roundi
   return { text: d.text, figure: d.figure, value: d.value, rounded: d.rounded, sigFigs: d.sigFigs, unit: d.unit };
 }
 
+const TENTH = new Decimal('0.1');
+const TEN_THOUSANDTH = new Decimal('0.0001');
+const THOUSANDTH = new Decimal('0.001');
+
 /**
  * The unit a mass to weigh reads best in: g from 0.1 g up, mg from 0.1 mg, µg below.
  *
@@ -154,8 +158,8 @@ export function displayResult(q: Quantity, wanted?: string | Unit | null, roundi
  */
 export function massUnitFor(q: Quantity): string {
   const g = q.value.abs();
-  if (g.gte('0.1')) return 'g';
-  if (g.gte('0.0001')) return 'mg';
+  if (g.gte(TENTH)) return 'g';
+  if (g.gte(TEN_THOUSANDTH)) return 'mg';
   return 'µg';
 }
 
@@ -167,9 +171,9 @@ export function massUnitFor(q: Quantity): string {
  */
 export function volumeUnitFor(q: Quantity, preferred: Unit | null): string {
   const u = preferred && sameDims(preferred.dims, q.dims) ? preferred : unitOf('L');
-  const inU = q.value.div(unitFactor(u));
+  const inU = inUnitOf(q.value, u);
   if (inU.abs().gte(1) || q.value.isZero()) return u.symbol;
-  if (u.symbol === 'L') return inU.abs().gte('0.001') ? 'mL' : 'µL';
+  if (u.symbol === 'L') return inU.abs().gte(THOUSANDTH) ? 'mL' : 'µL';
   if (u.symbol === 'mL') return 'µL';
   return u.symbol;
 }

@@ -58,7 +58,7 @@ export function exact(value: string | number | Decimal): Measured {
  */
 export function msd(value: Decimal): number {
   if (value.isZero()) return 0;
-  return value.abs().e;
+  return value.e; // the exponent does not depend on the sign
 }
 
 /**
@@ -110,6 +110,8 @@ function roundAt(value: Decimal, lsd: number): Decimal {
  */
 export function lsdForSigFigs(value: Decimal, n: number): number {
   if (value.isZero()) return msd(value) - n + 1;
+  // a value with no more than n significant digits is its own rounding
+  if (value.sd() <= n) return value.e - n + 1;
   return msd(value.toSignificantDigits(n, Decimal.ROUND_HALF_UP)) - n + 1;
 }
 

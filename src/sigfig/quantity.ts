@@ -42,6 +42,7 @@ function mapGrad(a: Map<number, Decimal>, f: (g: Decimal) => Decimal): Map<numbe
 }
 
 function combine(a: Map<number, Decimal>, b: Map<number, Decimal>, fa: (g: Decimal) => Decimal, fb: (g: Decimal) => Decimal): Map<number, Decimal> {
+  if (a.size === 0 && b.size === 0) return new Map();
   const out = mapGrad(a, fa);
   for (const [k, g] of b) out.set(k, (out.get(k) ?? new Decimal(0)).plus(fb(g)));
   return out;
@@ -111,7 +112,8 @@ function productUnit(a: Quantity, b: Quantity): Unit | null {
  */
 export function multiply(a: Quantity, b: Quantity): Quantity {
   const m = timesM(a, b);
-  return { ...m, dims: addDims(a.dims, b.dims, 1), unit: productUnit(a, b), grad: combine(a.grad, b.grad, (g) => g.times(b.value), (g) => g.times(a.value)) };
+  const grad = a.grad.size === 0 && b.grad.size === 0 ? new Map<number, Decimal>() : combine(a.grad, b.grad, (g) => g.times(b.value), (g) => g.times(a.value));
+  return { ...m, dims: addDims(a.dims, b.dims, 1), unit: productUnit(a, b), grad };
 }
 
 /**
@@ -144,7 +146,7 @@ export function divide(a: Quantity, b: Quantity, column?: number): Quantity {
  * displayQuantity(negate(quantity(readNumber('2.50'), unitOf('g')))).text // '-2.50 g'
  */
 export function negate(a: Quantity): Quantity {
-  return { ...a, value: a.value.neg(), grad: mapGrad(a.grad, (g) => g.neg()) };
+  return { ...a, value: a.value.neg(), grad: a.grad.size === 0 ? new Map<number, Decimal>() : mapGrad(a.grad, (g) => g.neg()) };
 }
 
 /**
