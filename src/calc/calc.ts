@@ -13,7 +13,7 @@ import type { RoundingMode } from '../sigfig/round.js';
 import type { Note } from '../errors/issue.js';
 import { evaluate, type CalcStep } from './evaluate.js';
 import { parseExpression } from './parse-expression.js';
-import { pow10, unitFactor } from '../sigfig/units.js';
+import { inUnitOf, pow10 } from '../sigfig/units.js';
 
 /** The largest and smallest sizes of a result pondus reports. */
 const MAX_RESULT = new Decimal('1e300');
@@ -70,8 +70,7 @@ export function calc(input: string, options: CalcOptions = {}): CalcResult {
   }
   const unit = reportUnit(q, tree.target ? tree.target.unit : null);
   const shown = displayQuantity(q, unit, options.rounding);
-  const scale = unitFactor(unit);
-  const uncertainty = ev.inputs.size > 0 ? standardUncertainty(q, ev.inputs).div(scale) : null;
+  const uncertainty = ev.inputs.size > 0 ? inUnitOf(standardUncertainty(q, ev.inputs), unit) : null;
   const value = shown.value;
   const unitText = shown.unit;
   let display = shown.text;

@@ -111,15 +111,18 @@ function readConcentration(text: string, notes: Note[]): { conc: Quantity; unit:
 function refuseConcentrated(reagent: MassDetail): void {
   // glacial acetic acid (99.7 %) is a liquid that can be weighed or measured: not refused
   if (reagent.formula === 'C2H4O2') return;
-  const grades = CONCENTRATED_GRADES.filter((g) => g.formula === reagent.formula);
-  if (grades.length === 0 && !GAS_SOLUTIONS.has(reagent.formula)) return;
-  const g = grades[0];
+  const g = FIRST_GRADE.get(reagent.formula);
+  if (g === undefined && !GAS_SOLUTIONS.has(reagent.formula)) return;
   throw fail({
     code: 'CONCENTRATED_REAGENT',
     message: `${reagent.input} comes as a concentrated solution${g ? ` (${g.percent} %, d ${g.density} g/mL)` : ''}: it is measured by volume, not weighed; give its mass fraction and density for the volume to take`,
     hint: `pondus prepare ${reagent.input} --fraction '${g ? g.percent : '…'} %' --density '${g ? g.density : '…'} g/mL' --concentration … --volume … (from the label of the bottle)`,
   });
 }
+
+/** The first grade in the table of each concentrated reagent, by formula. */
+const FIRST_GRADE = new Map<string, (typeof CONCENTRATED_GRADES)[number]>();
+for (const g of CONCENTRATED_GRADES) if (!FIRST_GRADE.has(g.formula)) FIRST_GRADE.set(g.formula, g);
 
 /** Gases sold only as aqueous solutions, besides the grades in the table. */
 const GAS_SOLUTIONS = new Set(['BrH', 'HI', 'FH', 'H5NO']);
@@ -135,7 +138,7 @@ interface ReagentMass {
  * depends only on its text and the reading options. Bounded: short texts only, emptied when full.
  */
 const REAGENTS = new Map<string, ReagentMass>();
-const MAX_REAGENTS_REMEMBERED = 512;
+const MAX_REAGENTS_REMEMBERED = 2048;
 
 function reagentMass(text: string, options: MassOptions): ReagentMass {
   const { abbreviations, maxLength, weights } = options;

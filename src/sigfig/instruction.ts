@@ -109,11 +109,6 @@ function show(value: Decimal, n: number | null, unit: Unit | null, q: Quantity, 
   return { text: unitText ? `${d.text} ${unitText}` : d.text, figure: d.text, value, rounded, sigFigs: n, unit: unitText };
 }
 
-function inUnit(q: Quantity, wanted?: string | Unit | null): { unit: Unit | null; value: Decimal } {
-  const unit = reportUnit(q, wanted);
-  return { unit, value: inUnitOf(q.value, unit) };
-}
-
 /**
  * An instruction at working precision, in a unit.
  *
@@ -126,9 +121,20 @@ function inUnit(q: Quantity, wanted?: string | Unit | null): { unit: Unit | null
  * displayInstruction(prepareSolution('NaCl', { concentration: '0.1 M', volume: '250 mL' }).mass, 'g').text // '1.461 g'
  */
 export function displayInstruction(ins: Instruction, wanted?: string | Unit | null, rounding: RoundingMode = 'half-even'): AmountDisplay {
-  const { unit, value } = inUnit(ins.quantity, wanted);
-  return show(value, workingFigures(ins), unit, ins.quantity, rounding);
+  const unit = reportUnit(ins.quantity, wanted);
+  const figures = workingFigures(ins);
+  const last = SHOWN.get(ins);
+  if (last !== undefined && last.quantity === ins.quantity && last.value === ins.quantity.value && last.figures === figures && last.unit === unit && last.rounding === rounding) return { ...last.display };
+  const display = show(inUnitOf(ins.quantity.value, unit), figures, unit, ins.quantity, rounding);
+  if (typeof ins === 'object' && ins !== null) SHOWN.set(ins, { quantity: ins.quantity, value: ins.quantity.value, figures, unit, rounding, display });
+  return { ...display };
 }
+
+/**
+ * The last display of each instruction: a command shows the same mass to weigh in a note, then in
+ * its table or JSON. Kept with what it was made from, so a changed instruction is shown afresh.
+ */
+const SHOWN = new WeakMap<Instruction, { quantity: Quantity; value: Decimal; figures: number; unit: Unit | null; rounding: RoundingMode; display: AmountDisplay }>();
 
 /**
  * A result with its textbook figures, in a unit (the sig-fig engine's own display).
