@@ -7,7 +7,7 @@
 import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
 import { dividedBy, minus as minusM, plus as plusM, sigFigsOf, times as timesM, withSigFigs, type Measured } from './measured.js';
-import { baseUnitText, dimsName, sameDims, unitFactor, type Dims, type Unit } from './units.js';
+import { baseUnitText, dimsName, sameDims, toBaseUnit, type Dims, type Unit } from './units.js';
 
 export interface Quantity extends Measured {
   dims: Dims;
@@ -31,8 +31,7 @@ export function quantity(m: Measured, unit: Unit | null): Quantity {
   // a unit is a power of ten: the value and its last digit move, the significant figures stay
   const figures = m.sigFigs !== undefined && m.lsd !== null ? { sigFigs: m.sigFigs } : {};
   if (!unit) return { value: m.value, lsd: m.lsd, ...figures, dims: [0, 0, 0], unit: null, grad: new Map() };
-  const f = unitFactor(unit);
-  return { value: m.value.times(f), lsd: m.lsd === null ? null : m.lsd + unit.exp10, ...figures, dims: unit.dims, unit, grad: new Map() };
+  return { value: toBaseUnit(m.value, unit), lsd: m.lsd === null ? null : m.lsd + unit.exp10, ...figures, dims: unit.dims, unit, grad: new Map() };
 }
 
 function mapGrad(a: Map<number, Decimal>, f: (g: Decimal) => Decimal): Map<number, Decimal> {

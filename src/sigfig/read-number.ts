@@ -72,15 +72,16 @@ function read(text: string, column?: number): ReadNumber {
     throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: `'${text.trim()}' is out of range: numbers are read from 1e-100 to 1e100 in size, so that every result is a finite JSON number`, column });
   }
   const hasPoint = frac !== undefined;
-  const digits = (int + (frac ?? '')).replace(/^0+/, '');
   let lsd: number;
   let ambiguous = false;
   if (hasPoint) {
     lsd = -(frac ?? '').length + exp;
   } else {
     // no decimal point: trailing zeros of the integer are not significant
-    const trailing = /0*$/.exec(int)![0].length;
-    if (digits === '') {
+    let trailing = 0;
+    while (trailing < int.length && int.charCodeAt(int.length - 1 - trailing) === 48) trailing++;
+    // every digit zero ('0', '000'): the value is zero
+    if (value.isZero()) {
       lsd = exp; // '0'
     } else {
       lsd = trailing + exp;

@@ -70,6 +70,19 @@ export function inUnitOf(value: Decimal, u: Unit | null): Decimal {
 }
 
 /**
+ * A value in a unit expressed in base units (g, mol, L): the value times the unit's factor.
+ *
+ * @example
+ * toBaseUnit(new Decimal('250'), unitOf('mL')).toString() // '0.25'
+ */
+export function toBaseUnit(value: Decimal, u: Unit | null): Decimal {
+  const exp10 = u ? u.exp10 : 0;
+  // a value already within the working precision is its own product by 1
+  if (exp10 === 0 && value.sd() <= Decimal.precision) return value;
+  return value.times(pow10(exp10));
+}
+
+/**
  * The exact factor from a unit to its base unit (mg → 0.001; none → 1).
  *
  * @example
