@@ -10,7 +10,9 @@
  * (a house or pharmacopoeial rule) the calculated values are rounded half up
  * instead, and the verdict follows those reported values.
  */
+import { ATOMS } from '../elements/atom-data.js';
 import { Decimal } from '../exact/decimal.js';
+import { SCALE_DIGITS } from '../exact/scaled.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
 import type { Note } from '../errors/issue.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
@@ -132,8 +134,7 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
   const symbols = hillOrder(found.keys());
   const textOf = new Map(symbols.map((s) => [s, found.get(s)!.toFixed(Math.max(2, decimalsOf(read.text.get(s)!)))]));
   const written = reportFormula(base.tree);
-  const masses = elementMasses(base, symbols);
-  const own: OwnFigures = { masses, massNumbers: masses.map((m) => m.toNumber()), molarNumber: base.molarMass.toNumber(), foundNumbers: symbols.map((s) => found.get(s)!.toNumber()) };
+  const own = ownFigures(base, symbols, found);
   const bare = evaluateFit(written, base, [], symbols, found, tolerance, textOf, rounding, own);
   const notes: Note[] = [...base.notes, ...read.notes, ...impossibleNotes(base, partners, partnerMasses, symbols, found, tolerance, options, own)];
   // salt partners only where the compound can take them: an acid needs a basic site, and a formula
@@ -239,9 +240,9 @@ function impossibleNotes(base: MassDetail, partners: Partner[], partnerMasses: M
   for (let i = 0; i < symbols.length; i++) {
     const s = symbols[i];
     const v = found.get(s)!;
-    const ownMass = figures.masses[i];
     // well within the tolerance in floating point: no exact quotient needed
     if (figures.foundNumbers[i] - (figures.massNumbers[i] / figures.molarNumber) * 100 - tol < -1e-9) continue;
+    const ownMass = figures.masses()[i];
     const own = ownMass.div(base.molarMass).times(100);
     if (v.minus(own).lte(tolerance)) continue;
     let most = { percent: own, what: base.formula };
@@ -305,31 +306,65 @@ function plainFit(f: ExactFit): Fit {
   };
 }
 
-/** The compound's own figures for the found elements, in their order, computed once: exact masses and the nearest doubles. */
+/**
+ * The compound's own figures for the found elements, in their order, computed once: the nearest
+ * doubles of its element masses, molar mass and found values, and the exact element masses, made
+ * only when a fit with a partner or a near tie in rounding needs them.
+ */
 interface OwnFigures {
-  masses: Decimal[];
+  masses(): Decimal[];
   massNumbers: number[];
   molarNumber: number;
   foundNumbers: number[];
 }
 
+function ownFigures(base: MassDetail, symbols: readonly string[], found: Map<string, Decimal>): OwnFigures {
+  let exact: Decimal[] | null = null;
+  const masses = () => (exact ??= elementMasses(base, symbols));
+  const scaled = elementScaled(base, symbols);
+  // an exact sum in 10^-12 u divided by 10^12 is the nearest double of the exact mass, as is the molar mass's
+  const massNumbers = scaled !== null ? scaled.map((s) => s / SCALE) : masses().map((m) => m.toNumber());
+  return { masses, massNumbers, molarNumber: base.molarMassNumber(), foundNumbers: symbols.map((s) => found.get(s)!.toNumber()) };
+}
+
+const SCALE = 10 ** SCALE_DIGITS;
+
+/** The mass of each found element in 10^-12 u, as exact integers; null when a count or a sum is not a safe whole number. */
+function elementScaled(m: MassDetail, symbols: readonly string[]): number[] | null {
+  const { ids, counts, whole } = m.vector;
+  if (!whole) return null;
+  const table = m.weights === 'abridged' ? ATOMS.abridgedScaled : ATOMS.standardScaled;
+  const out = symbols.map(() => 0);
+  for (let k = 0; k < ids.length; k++) {
+    const i = symbols.indexOf(ATOMS.data[ids[k]].symbol);
+    if (i < 0) continue;
+    const w = table[ids[k]];
+    const n = counts[k];
+    if (typeof w !== 'number' || typeof n !== 'number') return null;
+    out[i] += n * w;
+    if (!Number.isSafeInteger(out[i])) return null;
+  }
+  return out;
+}
+
 function evaluateFit(baseWritten: string, base: MassDetail, used: Used[], symbols: readonly string[], found: Map<string, Decimal>, tolerance: Decimal, textOf: Map<string, string>, rounding: RoundingMode, own: OwnFigures): ExactFit {
-  let total = base.molarMass;
-  const elementMass = own.masses.slice();
+  let total: Decimal | null = null;
+  const elementMass = used.length === 0 ? null : own.masses().slice();
   for (const u of used) {
-    total = total.plus(u.mass.molarMass.times(u.amount));
+    total = (total ?? base.molarMass).plus(u.mass.molarMass.times(u.amount));
     symbols.forEach((s, i) => {
-      elementMass[i] = elementMass[i].plus(exactMass(u.mass, s).times(u.amount));
+      elementMass![i] = elementMass![i].plus(exactMass(u.mass, s).times(u.amount));
     });
   }
-  const totalNumber = used.length === 0 ? own.molarNumber : total.toNumber();
+  const totalNumber = total === null ? own.molarNumber : total.toNumber();
+  const whole = () => total ?? base.molarMass;
   const calculated = new Map<string, Decimal>();
   const calculatedNumbers = new Map<string, number>();
   const calculatedText: string[] = [];
   const deviation = new Map<string, Decimal>();
   let maxDeviation = new Decimal(0);
   symbols.forEach((s, i) => {
-    const c = percentTo2(elementMass[i], total, rounding, used.length === 0 ? own.massNumbers[i] : elementMass[i].toNumber(), totalNumber);
+    const c = percentTo2(() => (elementMass === null ? own.masses()[i] : elementMass[i]), whole, rounding, elementMass === null ? own.massNumbers[i] : elementMass[i].toNumber(), totalNumber);
     calculated.set(s, c.value);
     calculatedNumbers.set(s, c.number);
     calculatedText.push(c.text);
@@ -357,7 +392,7 @@ function evaluateFit(baseWritten: string, base: MassDetail, used: Used[], symbol
  * value is within 10⁻⁶ of a half-way point between two 2-decimal values;
  * only then is the exact Decimal quotient needed.
  */
-function percentTo2(part: Decimal, whole: Decimal, rounding: RoundingMode, partNumber: number, wholeNumber: number): { value: Decimal; number: number; text: string } {
+function percentTo2(part: () => Decimal, whole: () => Decimal, rounding: RoundingMode, partNumber: number, wholeNumber: number): { value: Decimal; number: number; text: string } {
   const x = (partNumber / wholeNumber) * 10_000;
   if (Number.isFinite(x) && x >= 0 && x < 1e12 && Math.abs(x - Math.floor(x) - 0.5) > 1e-6) {
     const k = Math.round(x);
@@ -365,7 +400,7 @@ function percentTo2(part: Decimal, whole: Decimal, rounding: RoundingMode, partN
     const text = `${Math.floor(k / 100)}.${String(k % 100).padStart(2, '0')}`;
     return { value: new Decimal(text), number: Number(text), text };
   }
-  const value = part.div(whole).times(100).toDecimalPlaces(2, rounding === 'half-up' ? Decimal.ROUND_HALF_UP : Decimal.ROUND_HALF_EVEN);
+  const value = part().div(whole()).times(100).toDecimalPlaces(2, rounding === 'half-up' ? Decimal.ROUND_HALF_UP : Decimal.ROUND_HALF_EVEN);
   return { value, number: value.toNumber(), text: value.toFixed(2) };
 }
 
