@@ -16,6 +16,9 @@ export const FOUND_SUM_LIMIT = 105;
 /** Above this sum a warning: the values add up to more than 100 % beyond rounding. */
 export const FOUND_SUM_WARNING = 100.5;
 
+const SUM_LIMIT = new Decimal(FOUND_SUM_LIMIT);
+const SUM_WARNING = new Decimal(FOUND_SUM_WARNING);
+
 /** Found values with the text each was written with, and remarks. */
 export interface FoundValues {
   values: Map<string, Decimal>;
@@ -47,8 +50,8 @@ export function readFoundValues(text: string): FoundValues {
     written.set(key, m[1].replace(/^\+/, ''));
   }
   const total = [...values.values()].reduce((a, b) => a.plus(b), new Decimal(0));
-  if (total.gt(FOUND_SUM_LIMIT)) throw fail({ code: 'BAD_MEASUREMENT', message: `the found values add up to ${total.toFixed()} %, over 100 % by more than any analysis error` }, text);
-  if (total.gt(FOUND_SUM_WARNING)) notes.push({ code: 'SUM_OVER_100', message: `the found values add up to ${total.toFixed()} %, over 100 %: check them` });
+  if (total.gt(SUM_LIMIT)) throw fail({ code: 'BAD_MEASUREMENT', message: `the found values add up to ${total.toFixed()} %, over 100 % by more than any analysis error` }, text);
+  if (total.gt(SUM_WARNING)) notes.push({ code: 'SUM_OVER_100', message: `the found values add up to ${total.toFixed()} %, over 100 %: check them` });
   return { values, text: written, notes };
 }
 
