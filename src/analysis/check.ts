@@ -10,7 +10,9 @@
  * (a house or pharmacopoeial rule) the calculated values are rounded half up
  * instead, and the verdict follows those reported values.
  */
+import { ATOMS } from '../elements/atom-data.js';
 import { Decimal } from '../exact/decimal.js';
+import { SCALE_DIGITS } from '../exact/scaled.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
 import type { Note } from '../errors/issue.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
@@ -132,8 +134,9 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
   const symbols = hillOrder(found.keys());
   const textOf = new Map(symbols.map((s) => [s, found.get(s)!.toFixed(Math.max(2, decimalsOf(read.text.get(s)!)))]));
   const written = reportFormula(base.tree);
-  const bare = evaluateFit(written, base, [], symbols, found, tolerance, textOf, rounding);
-  const notes: Note[] = [...base.notes, ...read.notes, ...impossibleNotes(base, partners, partnerMasses, symbols, found, tolerance, options)];
+  const own = ownFigures(base, symbols, found);
+  const bare = evaluateFit(written, base, [], symbols, found, tolerance, textOf, rounding, own);
+  const notes: Note[] = [...base.notes, ...read.notes, ...impossibleNotes(base, partners, partnerMasses, symbols, found, tolerance, options, own)];
   // salt partners only where the compound can take them: an acid needs a basic site, and a formula
   // cannot tell an amine from an amide, so each N atom counts as one site (at most that many acids)
   const sites = Number(base.atoms.get('N') ?? 0);
@@ -150,9 +153,9 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
     if (!(step > 0 && step <= max && max <= 20 && max / step <= 2000)) throw fail({ code: 'BAD_OPTION', message: `step ${step} and max ${max} make no sensible grid (0 < step ≤ max ≤ 20, at most 2000 steps)` });
     const saltStep = options.saltStep ?? 0.5;
     if (!(saltStep > 0 && saltStep <= 2)) throw fail({ code: 'BAD_OPTION', message: `the salt step ${saltStep} must be above 0 and at most 2` });
-    const foundNums = symbols.map((s) => found.get(s)!.toNumber());
+    const foundNums = own.foundNumbers;
     const vec = (m: MassDetail): MassVector => ({ masses: symbols.map((s) => exactMass(m, s).toNumber()), total: m.molarMass.toNumber() });
-    const baseVec = vec(base);
+    const baseVec: MassVector = { masses: own.massNumbers, total: own.molarNumber };
     const partnerVecs = partnerMasses.map(vec);
     const steps = partners.map((p) => (p.salt ? saltStep : step));
     const maxes = partners.map((p, j) => (!offered[j] ? 0 : p.salt ? Math.min(max, sites) : max));
@@ -170,13 +173,14 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
         tolerance,
         textOf,
         rounding,
+        own,
       );
     });
     partners.forEach((p, j) => {
       if (!offered[j]) return;
       const x = continuousAmount(foundNums, baseVec, partnerVecs[j], maxes[j]);
       const amount = new Decimal(x.toFixed(3));
-      const f = evaluateFit(written, base, [{ amount, partner: p, mass: partnerMasses[j] }], symbols, found, tolerance, textOf, rounding);
+      const f = evaluateFit(written, base, [{ amount, partner: p, mass: partnerMasses[j] }], symbols, found, tolerance, textOf, rounding, own);
       continuous.push({ formula: p.formula, written: p.written, name: p.name, amount: amount.toNumber(), maxDeviation: f.maxDeviation.toNumber() });
     });
   }
@@ -186,7 +190,7 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
     formula: base.formula,
     reportFormula: written,
     calculated: plain.calculated,
-    found: Object.fromEntries(symbols.map((s) => [s, found.get(s)!.toNumber()])),
+    found: Object.fromEntries(symbols.map((s, i) => [s, own.foundNumbers[i]])),
     foundText: Object.fromEntries(symbols.map((s) => [s, textOf.get(s)!])),
     deviation: plain.deviation,
     maxDeviation: plain.maxDeviation,
@@ -230,13 +234,15 @@ function commonPartnerShares(options: MassOptions): Map<string, { share: Decimal
  * Found values no solvate or salt partner could explain: more of an element than the formula,
  * the partners given or any common solvent contains (a mixture's percent lies between its parts').
  */
-function impossibleNotes(base: MassDetail, partners: Partner[], partnerMasses: MassDetail[], symbols: string[], found: Map<string, Decimal>, tolerance: Decimal, options: MassOptions): Note[] {
+function impossibleNotes(base: MassDetail, partners: Partner[], partnerMasses: MassDetail[], symbols: string[], found: Map<string, Decimal>, tolerance: Decimal, options: MassOptions, figures: OwnFigures): Note[] {
   const notes: Note[] = [];
-  for (const s of symbols) {
+  const tol = tolerance.toNumber();
+  for (let i = 0; i < symbols.length; i++) {
+    const s = symbols[i];
     const v = found.get(s)!;
-    const ownMass = exactMass(base, s);
     // well within the tolerance in floating point: no exact quotient needed
-    if (v.toNumber() - (ownMass.toNumber() / base.molarMass.toNumber()) * 100 - tolerance.toNumber() < -1e-9) continue;
+    if (figures.foundNumbers[i] - (figures.massNumbers[i] / figures.molarNumber) * 100 - tol < -1e-9) continue;
+    const ownMass = figures.masses()[i];
     const own = ownMass.div(base.molarMass).times(100);
     if (v.minus(own).lte(tolerance)) continue;
     let most = { percent: own, what: base.formula };
@@ -278,6 +284,8 @@ interface ExactFit {
   formula: string;
   solvates: { formula: string; written: string; name: string | null; amount: Decimal }[];
   calculated: Map<string, Decimal>;
+  /** The calculated percents as the nearest doubles. */
+  calculatedNumbers: Map<string, number>;
   deviation: Map<string, Decimal>;
   maxDeviation: Decimal;
   pass: boolean;
@@ -290,7 +298,7 @@ function plainFit(f: ExactFit): Fit {
   return {
     formula: f.formula,
     solvates: f.solvates.map((s) => ({ formula: s.formula, written: s.written, name: s.name, amount: s.amount.toNumber(), amountText: s.amount.toFixed() })),
-    calculated: rec(f.calculated),
+    calculated: Object.fromEntries(f.calculatedNumbers),
     deviation: rec(f.deviation),
     maxDeviation: f.maxDeviation.toNumber(),
     pass: f.pass,
@@ -298,31 +306,79 @@ function plainFit(f: ExactFit): Fit {
   };
 }
 
-function evaluateFit(baseWritten: string, base: MassDetail, used: Used[], symbols: readonly string[], found: Map<string, Decimal>, tolerance: Decimal, textOf: Map<string, string>, rounding: RoundingMode): ExactFit {
-  let total = base.molarMass;
-  const elementMass = new Map<string, Decimal>();
-  for (const s of symbols) elementMass.set(s, exactMass(base, s));
-  for (const u of used) {
-    total = total.plus(u.mass.molarMass.times(u.amount));
-    for (const s of symbols) elementMass.set(s, elementMass.get(s)!.plus(exactMass(u.mass, s).times(u.amount)));
+/**
+ * The compound's own figures for the found elements, in their order, computed once: the nearest
+ * doubles of its element masses, molar mass and found values, and the exact element masses, made
+ * only when a fit with a partner or a near tie in rounding needs them.
+ */
+interface OwnFigures {
+  masses(): Decimal[];
+  massNumbers: number[];
+  molarNumber: number;
+  foundNumbers: number[];
+}
+
+function ownFigures(base: MassDetail, symbols: readonly string[], found: Map<string, Decimal>): OwnFigures {
+  let exact: Decimal[] | null = null;
+  const masses = () => (exact ??= elementMasses(base, symbols));
+  const scaled = elementScaled(base, symbols);
+  // an exact sum in 10^-12 u divided by 10^12 is the nearest double of the exact mass, as is the molar mass's
+  const massNumbers = scaled !== null ? scaled.map((s) => s / SCALE) : masses().map((m) => m.toNumber());
+  return { masses, massNumbers, molarNumber: base.molarMassNumber(), foundNumbers: symbols.map((s) => found.get(s)!.toNumber()) };
+}
+
+const SCALE = 10 ** SCALE_DIGITS;
+
+/** The mass of each found element in 10^-12 u, as exact integers; null when a count or a sum is not a safe whole number. */
+function elementScaled(m: MassDetail, symbols: readonly string[]): number[] | null {
+  const { ids, counts, whole } = m.vector;
+  if (!whole) return null;
+  const table = m.weights === 'abridged' ? ATOMS.abridgedScaled : ATOMS.standardScaled;
+  const out = symbols.map(() => 0);
+  for (let k = 0; k < ids.length; k++) {
+    const i = symbols.indexOf(ATOMS.data[ids[k]].symbol);
+    if (i < 0) continue;
+    const w = table[ids[k]];
+    const n = counts[k];
+    if (typeof w !== 'number' || typeof n !== 'number') return null;
+    out[i] += n * w;
+    if (!Number.isSafeInteger(out[i])) return null;
   }
+  return out;
+}
+
+function evaluateFit(baseWritten: string, base: MassDetail, used: Used[], symbols: readonly string[], found: Map<string, Decimal>, tolerance: Decimal, textOf: Map<string, string>, rounding: RoundingMode, own: OwnFigures): ExactFit {
+  let total: Decimal | null = null;
+  const elementMass = used.length === 0 ? null : own.masses().slice();
+  for (const u of used) {
+    total = (total ?? base.molarMass).plus(u.mass.molarMass.times(u.amount));
+    symbols.forEach((s, i) => {
+      elementMass![i] = elementMass![i].plus(exactMass(u.mass, s).times(u.amount));
+    });
+  }
+  const totalNumber = total === null ? own.molarNumber : total.toNumber();
+  const whole = () => total ?? base.molarMass;
   const calculated = new Map<string, Decimal>();
+  const calculatedNumbers = new Map<string, number>();
+  const calculatedText: string[] = [];
   const deviation = new Map<string, Decimal>();
   let maxDeviation = new Decimal(0);
-  for (const s of symbols) {
-    const c = percentTo2(elementMass.get(s)!, total, rounding);
-    calculated.set(s, c);
-    const d = found.get(s)!.minus(c);
+  symbols.forEach((s, i) => {
+    const c = percentTo2(() => (elementMass === null ? own.masses()[i] : elementMass[i]), whole, rounding, elementMass === null ? own.massNumbers[i] : elementMass[i].toNumber(), totalNumber);
+    calculated.set(s, c.value);
+    calculatedNumbers.set(s, c.number);
+    calculatedText.push(c.text);
+    const d = found.get(s)!.minus(c.value);
     deviation.set(s, d);
     if (d.abs().gt(maxDeviation)) maxDeviation = d.abs();
-  }
+  });
   const formula = baseWritten + used.map((u) => `·${u.amount.eq(1) ? '' : u.amount.toFixed()}${u.partner.written}`).join('');
-  const list = (m: Map<string, string>) => symbols.map((s) => `${s}, ${m.get(s)}`).join('; ');
-  const reportLine = `Anal. Calcd for ${formula}: ${list(new Map(symbols.map((s) => [s, calculated.get(s)!.toFixed(2)])))}. Found: ${list(textOf)}.`;
+  const reportLine = `Anal. Calcd for ${formula}: ${symbols.map((s, i) => `${s}, ${calculatedText[i]}`).join('; ')}. Found: ${symbols.map((s) => `${s}, ${textOf.get(s)}`).join('; ')}.`;
   return {
     formula,
     solvates: used.map((u) => ({ formula: u.partner.formula, written: u.partner.written, name: u.partner.name, amount: u.amount })),
     calculated,
+    calculatedNumbers,
     deviation,
     maxDeviation,
     pass: maxDeviation.lte(tolerance),
@@ -336,15 +392,30 @@ function evaluateFit(baseWritten: string, base: MassDetail, used: Used[], symbol
  * value is within 10⁻⁶ of a half-way point between two 2-decimal values;
  * only then is the exact Decimal quotient needed.
  */
-function percentTo2(part: Decimal, whole: Decimal, rounding: RoundingMode): Decimal {
-  const x = (part.toNumber() / whole.toNumber()) * 10_000;
+function percentTo2(part: () => Decimal, whole: () => Decimal, rounding: RoundingMode, partNumber: number, wholeNumber: number): { value: Decimal; number: number; text: string } {
+  const x = (partNumber / wholeNumber) * 10_000;
   if (Number.isFinite(x) && x >= 0 && x < 1e12 && Math.abs(x - Math.floor(x) - 0.5) > 1e-6) {
     const k = Math.round(x);
-    return new Decimal(`${Math.floor(k / 100)}.${String(k % 100).padStart(2, '0')}`);
+    // the text is the value to 2 decimals, and the nearest double of that text is the value's
+    const text = `${Math.floor(k / 100)}.${String(k % 100).padStart(2, '0')}`;
+    return { value: new Decimal(text), number: Number(text), text };
   }
-  return part.div(whole).times(100).toDecimalPlaces(2, rounding === 'half-up' ? Decimal.ROUND_HALF_UP : Decimal.ROUND_HALF_EVEN);
+  const value = part().div(whole()).times(100).toDecimalPlaces(2, rounding === 'half-up' ? Decimal.ROUND_HALF_UP : Decimal.ROUND_HALF_EVEN);
+  return { value, number: value.toNumber(), text: value.toFixed(2) };
 }
+
+const ZERO = new Decimal(0);
 
 function exactMass(m: MassDetail, symbol: string): Decimal {
   return m.contributions.filter((c) => c.symbol === symbol).reduce((s, c) => s.plus(c.mass), new Decimal(0));
+}
+
+/** exactMass for each symbol, in one pass over the contributions (the same sums, in the same order). */
+function elementMasses(m: MassDetail, symbols: readonly string[]): Decimal[] {
+  const out = symbols.map(() => ZERO);
+  for (const c of m.contributions) {
+    const i = symbols.indexOf(c.symbol);
+    if (i >= 0) out[i] = out[i].plus(c.mass);
+  }
+  return out;
 }

@@ -9,10 +9,15 @@ import { readKeyValues } from '../key-values/read-key-values.js';
 
 const NUMBER = /^([-+]?[0-9]+(?:\.[0-9]+)?|[-+]?\.[0-9]+)\s*%?$/;
 
+const HUNDRED = new Decimal(100);
+
 /** Above this sum the found values cannot be percents of one compound, whatever the analysis error. */
 export const FOUND_SUM_LIMIT = 105;
 /** Above this sum a warning: the values add up to more than 100 % beyond rounding. */
 export const FOUND_SUM_WARNING = 100.5;
+
+const SUM_LIMIT = new Decimal(FOUND_SUM_LIMIT);
+const SUM_WARNING = new Decimal(FOUND_SUM_WARNING);
 
 /** Found values with the text each was written with, and remarks. */
 export interface FoundValues {
@@ -40,13 +45,13 @@ export function readFoundValues(text: string): FoundValues {
     if (!m) throw fail({ code: 'BAD_MEASUREMENT', message: `'${key}=${value}' is not a found value such as C=72.30`, column: valueColumn }, text);
     const v = new Decimal(m[1]);
     if (v.isNegative()) throw fail({ code: 'BAD_MEASUREMENT', message: `${key} found at ${m[1]} %: a percent cannot be negative`, column: valueColumn }, text);
-    if (v.gt(100)) throw fail({ code: 'BAD_MEASUREMENT', message: `${key} found at ${m[1]} %, over 100 %`, column: valueColumn }, text);
+    if (v.gt(HUNDRED)) throw fail({ code: 'BAD_MEASUREMENT', message: `${key} found at ${m[1]} %, over 100 %`, column: valueColumn }, text);
     values.set(key, v);
     written.set(key, m[1].replace(/^\+/, ''));
   }
   const total = [...values.values()].reduce((a, b) => a.plus(b), new Decimal(0));
-  if (total.gt(FOUND_SUM_LIMIT)) throw fail({ code: 'BAD_MEASUREMENT', message: `the found values add up to ${total.toFixed()} %, over 100 % by more than any analysis error` }, text);
-  if (total.gt(FOUND_SUM_WARNING)) notes.push({ code: 'SUM_OVER_100', message: `the found values add up to ${total.toFixed()} %, over 100 %: check them` });
+  if (total.gt(SUM_LIMIT)) throw fail({ code: 'BAD_MEASUREMENT', message: `the found values add up to ${total.toFixed()} %, over 100 % by more than any analysis error` }, text);
+  if (total.gt(SUM_WARNING)) notes.push({ code: 'SUM_OVER_100', message: `the found values add up to ${total.toFixed()} %, over 100 %: check them` });
   return { values, text: written, notes };
 }
 

@@ -14,7 +14,11 @@ import type { RoundingMode } from '../sigfig/round.js';
 import type { Note } from '../errors/issue.js';
 import { evaluate, type CalcStep } from './evaluate.js';
 import { parseExpression } from './parse-expression.js';
-import { pow10, unitFactor } from '../sigfig/units.js';
+import { inUnitOf, pow10 } from '../sigfig/units.js';
+
+/** The largest and smallest sizes of a result pondus reports. */
+const MAX_RESULT = new Decimal('1e300');
+const MIN_RESULT = new Decimal('1e-300');
 
 export interface CalcOptions {
   /** Rounding for the reported figure: half-to-even (default; ASTM E29, ISO 80000-1 Annex B rule A) or half-up. */
@@ -61,13 +65,13 @@ export function calc(input: string, options: CalcOptions = {}): CalcResult {
   const tree = parseExpression(input);
   const ev = evaluate(tree);
   const q = ev.result;
-  if (!q.value.isZero() && (q.value.abs().gt('1e300') || q.value.abs().lt('1e-300'))) {
+  // only a value with its leading digit at 10^300 or beyond (or below 10^-300) can be out of range
+  if (!q.value.isZero() && (q.value.e >= 300 || q.value.e < -300) && (q.value.abs().gt(MAX_RESULT) || q.value.abs().lt(MIN_RESULT))) {
     throw fail(typedIssue({ code: 'NUMBER_OUT_OF_RANGE', value: q.value.toSignificantDigits(3).toExponential(), exponentLimit: 300, reading: 'result', what: null }), input);
   }
   const unit = reportUnit(q, tree.target ? tree.target.unit : null);
   const shown = displayQuantity(q, unit, options.rounding);
-  const scale = unitFactor(unit);
-  const uncertainty = ev.inputs.size > 0 ? standardUncertainty(q, ev.inputs).div(scale) : null;
+  const uncertainty = ev.inputs.size > 0 ? inUnitOf(standardUncertainty(q, ev.inputs), unit) : null;
   const value = shown.value;
   const unitText = shown.unit;
   let display = shown.text;

@@ -51,7 +51,7 @@ interface Ctx {
  */
 export function evaluate(tree: CalcTree): Evaluation {
   const ctx: Ctx = { input: tree.input, inputs: new Map(), steps: [], notes: [], uncertain: hasPlusMinus(tree.expr) };
-  const result = evalNode(tree.expr, ctx);
+  const result = withInput(ctx, () => evalNode(tree.expr, ctx));
   // the same remark about a number written twice is said once
   const seen = new Set<string>();
   const notes = ctx.notes.filter((n) => !seen.has(n.message) && !!seen.add(n.message));
@@ -86,27 +86,27 @@ function withInput<T>(ctx: Ctx, fn: () => T): T {
   }
 }
 
+/** Evaluates a node; a PondusError thrown on the way gets the input in evaluate (withInput, once for the whole tree). */
 function evalNode(n: ExprNode, ctx: Ctx): Quantity {
   switch (n.kind) {
     case 'number':
-      return withInput(ctx, () => literal(n, ctx));
+      return literal(n, ctx);
     case 'formulaMass':
-      return withInput(ctx, () => formulaMassQuantity(n, ctx));
+      return formulaMassQuantity(n, ctx);
     case 'ratio':
-      return withInput(ctx, () => ratio(n, ctx));
+      return ratio(n, ctx);
     case 'negate':
       return negate(evalNode(n.operand, ctx));
     case 'power': {
       const b = evalNode(n.base, ctx);
-      const r = withInput(ctx, () => power(b, n.exponent, col(ctx, n.start)));
+      const r = power(b, n.exponent, col(ctx, n.start));
       ctx.steps.push({ text: `(${src(ctx, n.base)})^${n.exponent}`, rule: b.lsd === null ? 'exact' : `a power keeps the significant figures of its base (${sigFigsOf(b)})` });
       return r;
     }
     case 'binary': {
       const a = evalNode(n.left, ctx);
       const b = evalNode(n.right, ctx);
-      const c = col(ctx, n.opStart);
-      const r = withInput(ctx, () => (n.op === '+' ? add(a, b, c) : n.op === '-' ? subtract(a, b, c) : n.op === '*' ? multiply(a, b) : divide(a, b, c)));
+      const r = n.op === '+' ? add(a, b, col(ctx, n.opStart)) : n.op === '-' ? subtract(a, b, col(ctx, n.opStart)) : n.op === '*' ? multiply(a, b) : divide(a, b, col(ctx, n.opStart));
       ctx.steps.push({ text: `${src(ctx, n.left)} ${n.op === '*' ? '×' : n.op === '/' ? '÷' : n.op} ${src(ctx, n.right)}`, rule: ruleFor(n, a, b, ctx) });
       return r;
     }

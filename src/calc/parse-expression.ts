@@ -6,6 +6,7 @@ import type { Issue } from '../errors/issue.js';
 import { PondusError } from '../errors/pondus-error.js';
 import { typedIssue } from '../errors/message.js';
 import { columnOf } from '../formula-parser/prescan.js';
+import { fastParseExpression } from './fast-path.js';
 import { calcGrammar } from './grammar.js';
 import { calcLexer } from './tokens.js';
 import type { CalcTree } from './tree.js';
@@ -32,6 +33,24 @@ let builder: ExprBuilder | null = null;
  * parseExpression('8.80 g + 2.1 g').expr.kind // 'binary'
  */
 export function parseExpression(input: string): CalcTree {
+  const pre = prescanExpression(input);
+  if (pre) throw new PondusError([pre], input);
+  const fast = fastParseExpression(input);
+  if (fast !== null) return { input, expr: fast.expr, target: fast.target };
+  return parseWithGrammar(input);
+}
+
+/**
+ * Parses a calculation with the Chevrotain grammar alone, after the prescan: what parseExpression
+ * does for everything the fast reader (fast-path.ts) declines.
+ *
+ * @param input - the calculation text.
+ * @returns the expression tree and the target unit, as parseExpression.
+ * @throws PondusError: the codes of parseExpression.
+ * @example
+ * parseWithGrammar('1:1000 g/mL').expr.kind // 'ratio'
+ */
+export function parseWithGrammar(input: string): CalcTree {
   const pre = prescanExpression(input);
   if (pre) throw new PondusError([pre], input);
   const lexed = calcLexer().tokenize(input);

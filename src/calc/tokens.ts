@@ -5,7 +5,7 @@ import { createToken, Lexer, type TokenType } from 'chevrotain';
 import { UNIT_SPELLINGS } from '../sigfig/units.js';
 
 /** `M(CuSO4·5H2O)`: the molar mass of a formula, brackets inside it balanced. */
-function matchFormulaMass(text: string, offset: number): RegExpExecArray | null {
+export function matchFormulaMass(text: string, offset: number): RegExpExecArray | null {
   if (text[offset] !== 'M' || text[offset + 1] !== '(') return null;
   let depth = 0;
   for (let i = offset + 1; i < text.length; i++) {
@@ -19,11 +19,12 @@ function matchFormulaMass(text: string, offset: number): RegExpExecArray | null 
   return null;
 }
 
-// every spelling the unit table accepts except the ones with symbols the calculator uses as operators
-const unitSpellings = [...new Set(UNIT_SPELLINGS)]
-  .filter((s) => !/[·⁻¹]/.test(s))
-  .sort((a, b) => b.length - a.length)
-  .map((s) => s.replace(/[.*+?^${}()|[\]\\/%]/g, (c) => `\\${c}`));
+/**
+ * Every spelling the unit table accepts except the ones with symbols the calculator uses as
+ * operators, longest first: the order in which the Unit token tries them.
+ */
+export const CALC_UNIT_SPELLINGS: readonly string[] = [...new Set(UNIT_SPELLINGS)].filter((s) => !/[·⁻¹]/.test(s)).sort((a, b) => b.length - a.length);
+const unitSpellings = CALC_UNIT_SPELLINGS.map((s) => s.replace(/[.*+?^${}()|[\]\\/%]/g, (c) => `\\${c}`));
 
 export const WhiteSpace = createToken({ name: 'WhiteSpace', pattern: /[ \t\u00a0]+/, group: Lexer.SKIPPED });
 export const FormulaMass = createToken({ name: 'FormulaMass', pattern: { exec: matchFormulaMass }, line_breaks: false, start_chars_hint: ['M'] });

@@ -6,6 +6,7 @@
  * rather than four significant figures. So NaCl reports as 58.44 g/mol
  * (Cl 35.45 limits it), water as 18.015 g/mol.
  */
+import { ATOMS } from '../elements/atom-data.js';
 import type { Measured } from '../sigfig/measured.js';
 import { readNumber } from '../sigfig/read-number.js';
 import type { MassDetail } from './formula-mass.js';
@@ -21,9 +22,11 @@ import type { MassDetail } from './formula-mass.js';
  */
 export function reportedMolarMass(r: MassDetail): Measured {
   let lsd: number | null = null;
-  for (const c of r.contributions) {
+  // the atoms of the contributions, read from the dense tables without making the per-atom masses
+  for (const id of r.vector.ids) {
+    const atom = ATOMS.data[id];
     // a mass number standing in for an atomic weight is good to the unit
-    const w = c.atom.noStandardWeight && c.massNumber === null ? 0 : readNumber(c.atomicWeight).lsd!;
+    const w = atom.noStandardWeight && atom.massNumber === null ? 0 : readNumber(atom.average[r.weights].text).lsd!;
     lsd = lsd === null ? w : Math.max(lsd, w);
   }
   return { value: r.molarMass, lsd };

@@ -17,7 +17,7 @@ import { partShare } from '../composition/part-share.js';
 import { toDecimal } from '../formula/amount.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
-import { exact } from '../sigfig/measured.js';
+import { exact, type Measured } from '../sigfig/measured.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
 import { sameDims, unitOf } from '../sigfig/units.js';
 
@@ -111,9 +111,8 @@ function readConcentration(text: string, notes: Note[]): { conc: Quantity; unit:
 function refuseConcentrated(reagent: MassDetail): void {
   // glacial acetic acid (99.7 %) is a liquid that can be weighed or measured: not refused
   if (reagent.formula === 'C2H4O2') return;
-  const grades = CONCENTRATED_GRADES.filter((g) => g.formula === reagent.formula);
-  if (grades.length === 0 && !GAS_SOLUTIONS.has(reagent.formula)) return;
-  const g = grades[0];
+  const g = FIRST_GRADE.get(reagent.formula);
+  if (g === undefined && !GAS_SOLUTIONS.has(reagent.formula)) return;
   throw fail({
     code: 'CONCENTRATED_REAGENT',
     message: `${reagent.input} comes as a concentrated solution${g ? ` (${g.percent} %, d ${g.density} g/mL)` : ''}: it is measured by volume, not weighed; give its mass fraction and density for the volume to take`,
@@ -121,8 +120,41 @@ function refuseConcentrated(reagent: MassDetail): void {
   });
 }
 
+/** The first grade in the table of each concentrated reagent, by formula. */
+const FIRST_GRADE = new Map<string, (typeof CONCENTRATED_GRADES)[number]>();
+for (const g of CONCENTRATED_GRADES) if (!FIRST_GRADE.has(g.formula)) FIRST_GRADE.set(g.formula, g);
+
 /** Gases sold only as aqueous solutions, besides the grades in the table. */
 const GAS_SOLUTIONS = new Set(['BrH', 'HI', 'FH', 'H5NO']);
+
+/** A reagent read: its detailed mass and its molar mass with the tabulated precision. */
+interface ReagentMass {
+  detail: MassDetail;
+  molarMass: Measured;
+}
+
+/**
+ * The reagents read lately: a batch weighs the same reagents line after line, and reading one
+ * depends only on its text and the reading options. Bounded: short texts only, emptied when full.
+ */
+const REAGENTS = new Map<string, ReagentMass>();
+const MAX_REAGENTS_REMEMBERED = 2048;
+
+function reagentMass(text: string, options: MassOptions): ReagentMass {
+  const { abbreviations, maxLength, weights } = options;
+  const plain = (abbreviations === undefined || typeof abbreviations === 'boolean' || abbreviations === 'none') && (maxLength === undefined || typeof maxLength === 'number') && (weights === undefined || typeof weights === 'string');
+  const key = plain && text.length <= 200 ? `${String(abbreviations)}|${String(maxLength)}|${String(weights)}|${text}` : null;
+  let read = key === null ? undefined : REAGENTS.get(key);
+  if (read === undefined) {
+    const detail = formulaMassDetail(text, options);
+    read = { detail, molarMass: reportedMolarMass(detail) };
+    if (key !== null) {
+      if (REAGENTS.size >= MAX_REAGENTS_REMEMBERED) REAGENTS.clear();
+      REAGENTS.set(key, read);
+    }
+  }
+  return read;
+}
 
 const pct = (d: Decimal) => `${d.times(100).toSignificantDigits(4).toFixed()} %`;
 
@@ -140,7 +172,8 @@ const pct = (d: Decimal) => `${d.times(100).toSignificantDigits(4).toFixed()} %`
  */
 export function prepareSolution(reagentText: string, options: SolutionOptions): SolutionResult {
   const notes: Note[] = [];
-  const reagent = formulaMassDetail(reagentText, options);
+  const read = reagentMass(reagentText, options);
+  const reagent = read.detail;
   refuseConcentrated(reagent);
   if (options.concentration === undefined && options.weighed === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the target concentration, or the mass weighed (or both)' });
   const target = options.concentration !== undefined ? readConcentration(options.concentration, notes) : null;
@@ -148,7 +181,7 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   const volume = measureAs(options.volume, [VOLUME], 'the volume', notes);
   if (volume.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the volume must be positive' });
 
-  const reagentM = quantity(reportedMolarMass(reagent), G_PER_MOL);
+  const reagentM = quantity(read.molarMass, G_PER_MOL);
   let asMass: MassDetail | null = null;
   let targetM = reagentM;
   let perReagent = quantity(exact(1), null);
@@ -156,9 +189,10 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   let targetName = reagent.input;
   if (options.as !== undefined) {
     const share = partShare(reagent, options.as, options);
-    const t = formulaMassDetail(options.as, options);
+    const part = reagentMass(options.as, options);
+    const t = part.detail;
     asMass = t;
-    targetM = quantity(reportedMolarMass(t), G_PER_MOL);
+    targetM = quantity(part.molarMass, G_PER_MOL);
     perReagent = quantity(exact(toDecimal(share.count)), null);
     targetFormula = t.formula;
     targetName = options.as.trim();

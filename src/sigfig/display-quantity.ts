@@ -7,7 +7,7 @@ import { fail } from '../errors/pondus-error.js';
 import { typedIssue } from '../errors/message.js';
 import type { Quantity } from './quantity.js';
 import { displayMeasured, type RoundingMode } from './round.js';
-import { baseUnitText, pow10, sameDims, unitOf, type Unit } from './units.js';
+import { baseUnitText, inUnitOf, sameDims, unitOf, type Unit } from './units.js';
 
 export interface QuantityDisplay {
   /** The reported figure then the unit: '6.24 g'. */
@@ -68,7 +68,7 @@ export function reportUnit(q: Quantity, wanted?: string | Unit | null): Unit | n
 export function displayQuantity(q: Quantity, wanted?: string | Unit | null, rounding: RoundingMode = 'half-even'): QuantityDisplay {
   const unit = reportUnit(q, wanted);
   const exp10 = unit ? unit.exp10 : 0;
-  const value = q.value.div(pow10(exp10));
+  const value = inUnitOf(q.value, unit);
   const lsd = q.lsd === null ? null : q.lsd - exp10;
   const d = displayMeasured(q.sigFigs !== undefined && lsd !== null ? { value, lsd, sigFigs: q.sigFigs } : { value, lsd }, rounding);
   const unitText = unit ? unit.symbol : baseUnitText(q.dims);

@@ -13,7 +13,7 @@ import { msd, sigFigsOf } from './measured.js';
 import type { Quantity } from './quantity.js';
 import { displayQuantity, reportUnit, type QuantityDisplay } from './display-quantity.js';
 import { displayMeasured, roundToSigFigs, type RoundingMode } from './round.js';
-import { baseUnitText, sameDims, unitFactor, unitOf, type Unit } from './units.js';
+import { baseUnitText, inUnitOf, sameDims, unitOf, type Unit } from './units.js';
 
 /** Significant figures an instruction is shown to, at the least. */
 export const WORKING_FIGURES = 4;
@@ -109,11 +109,6 @@ function show(value: Decimal, n: number | null, unit: Unit | null, q: Quantity, 
   return { text: unitText ? `${d.text} ${unitText}` : d.text, figure: d.text, value, rounded, sigFigs: n, unit: unitText };
 }
 
-function inUnit(q: Quantity, wanted?: string | Unit | null): { unit: Unit | null; value: Decimal } {
-  const unit = reportUnit(q, wanted);
-  return { unit, value: q.value.div(unitFactor(unit)) };
-}
-
 /**
  * An instruction at working precision, in a unit.
  *
@@ -126,9 +121,20 @@ function inUnit(q: Quantity, wanted?: string | Unit | null): { unit: Unit | null
  * displayInstruction(prepareSolution('NaCl', { concentration: '0.1 M', volume: '250 mL' }).mass, 'g').text // '1.461 g'
  */
 export function displayInstruction(ins: Instruction, wanted?: string | Unit | null, rounding: RoundingMode = 'half-even'): AmountDisplay {
-  const { unit, value } = inUnit(ins.quantity, wanted);
-  return show(value, workingFigures(ins), unit, ins.quantity, rounding);
+  const unit = reportUnit(ins.quantity, wanted);
+  const figures = workingFigures(ins);
+  const last = SHOWN.get(ins);
+  if (last !== undefined && last.quantity === ins.quantity && last.value === ins.quantity.value && last.figures === figures && last.unit === unit && last.rounding === rounding) return { ...last.display };
+  const display = show(inUnitOf(ins.quantity.value, unit), figures, unit, ins.quantity, rounding);
+  if (typeof ins === 'object' && ins !== null) SHOWN.set(ins, { quantity: ins.quantity, value: ins.quantity.value, figures, unit, rounding, display });
+  return { ...display };
 }
+
+/**
+ * The last display of each instruction: a command shows the same mass to weigh in a note, then in
+ * its table or JSON. Kept with what it was made from, so a changed instruction is shown afresh.
+ */
+const SHOWN = new WeakMap<Instruction, { quantity: Quantity; value: Decimal; figures: number; unit: Unit | null; rounding: RoundingMode; display: AmountDisplay }>();
 
 /**
  * A result with its textbook figures, in a unit (the sig-fig engine's own display).
@@ -146,6 +152,10 @@ export function displayResult(q: Quantity, wanted?: string | Unit | null, roundi
   return { text: d.text, figure: d.figure, value: d.value, rounded: d.rounded, sigFigs: d.sigFigs, unit: d.unit };
 }
 
+const TENTH = new Decimal('0.1');
+const TEN_THOUSANDTH = new Decimal('0.0001');
+const THOUSANDTH = new Decimal('0.001');
+
 /**
  * The unit a mass to weigh reads best in: g from 0.1 g up, mg from 0.1 mg, µg below.
  *
@@ -154,8 +164,8 @@ export function displayResult(q: Quantity, wanted?: string | Unit | null, roundi
  */
 export function massUnitFor(q: Quantity): string {
   const g = q.value.abs();
-  if (g.gte('0.1')) return 'g';
-  if (g.gte('0.0001')) return 'mg';
+  if (g.gte(TENTH)) return 'g';
+  if (g.gte(TEN_THOUSANDTH)) return 'mg';
   return 'µg';
 }
 
@@ -167,9 +177,9 @@ export function massUnitFor(q: Quantity): string {
  */
 export function volumeUnitFor(q: Quantity, preferred: Unit | null): string {
   const u = preferred && sameDims(preferred.dims, q.dims) ? preferred : unitOf('L');
-  const inU = q.value.div(unitFactor(u));
+  const inU = inUnitOf(q.value, u);
   if (inU.abs().gte(1) || q.value.isZero()) return u.symbol;
-  if (u.symbol === 'L') return inU.abs().gte('0.001') ? 'mL' : 'µL';
+  if (u.symbol === 'L') return inU.abs().gte(THOUSANDTH) ? 'mL' : 'µL';
   if (u.symbol === 'mL') return 'µL';
   return u.symbol;
 }

@@ -58,7 +58,7 @@ export function exact(value: string | number | Decimal): Measured {
  */
 export function msd(value: Decimal): number {
   if (value.isZero()) return 0;
-  return value.abs().e;
+  return value.e; // the exponent does not depend on the sign
 }
 
 /**
@@ -81,10 +81,18 @@ export function sigFigsOf(m: Measured): number {
   if (m.value.isZero()) return Math.max(1, -m.lsd); // '0.00' has its decimals as precision
   // no digit below the last significant one (a number as read): nothing to round, no carry
   if (m.value.e - m.value.sd() + 1 >= m.lsd) return Math.max(1, m.value.e - m.lsd + 1);
+  // a value with digits below its last significant one: a molar mass, a sum; the same value comes
+  // back line after line (a batch of one reagent), and a Decimal never changes, so the count is kept
+  const known = ROUNDED_FIGURES.get(m.value);
+  if (known !== undefined && known.lsd === m.lsd) return known.figures;
   const r = roundAt(m.value, m.lsd);
-  if (r.isZero()) return Math.max(1, msd(m.value) - m.lsd + 1);
-  return Math.max(1, msd(r) - m.lsd + 1);
+  const figures = r.isZero() ? Math.max(1, msd(m.value) - m.lsd + 1) : Math.max(1, msd(r) - m.lsd + 1);
+  ROUNDED_FIGURES.set(m.value, { lsd: m.lsd, figures });
+  return figures;
 }
+
+/** The figures of values that needed rounding to count them, by value (see sigFigsOf). */
+const ROUNDED_FIGURES = new WeakMap<Decimal, { lsd: number; figures: number }>();
 
 /**
  * Rounds so that the last digit kept is at 10^lsd, halves away from zero. Used
@@ -110,6 +118,8 @@ function roundAt(value: Decimal, lsd: number): Decimal {
  */
 export function lsdForSigFigs(value: Decimal, n: number): number {
   if (value.isZero()) return msd(value) - n + 1;
+  // a value with no more than n significant digits is its own rounding
+  if (value.sd() <= n) return value.e - n + 1;
   return msd(value.toSignificantDigits(n, Decimal.ROUND_HALF_UP)) - n + 1;
 }
 

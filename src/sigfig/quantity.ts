@@ -8,7 +8,7 @@ import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
 import { typedIssue } from '../errors/message.js';
 import { dividedBy, minus as minusM, plus as plusM, sigFigsOf, times as timesM, withSigFigs, type Measured } from './measured.js';
-import { baseUnitText, dimsName, sameDims, unitFactor, type Dims, type Unit } from './units.js';
+import { baseUnitText, dimsName, sameDims, toBaseUnit, type Dims, type Unit } from './units.js';
 
 export interface Quantity extends Measured {
   dims: Dims;
@@ -32,8 +32,7 @@ export function quantity(m: Measured, unit: Unit | null): Quantity {
   // a unit is a power of ten: the value and its last digit move, the significant figures stay
   const figures = m.sigFigs !== undefined && m.lsd !== null ? { sigFigs: m.sigFigs } : {};
   if (!unit) return { value: m.value, lsd: m.lsd, ...figures, dims: [0, 0, 0], unit: null, grad: new Map() };
-  const f = unitFactor(unit);
-  return { value: m.value.times(f), lsd: m.lsd === null ? null : m.lsd + unit.exp10, ...figures, dims: unit.dims, unit, grad: new Map() };
+  return { value: toBaseUnit(m.value, unit), lsd: m.lsd === null ? null : m.lsd + unit.exp10, ...figures, dims: unit.dims, unit, grad: new Map() };
 }
 
 function mapGrad(a: Map<number, Decimal>, f: (g: Decimal) => Decimal): Map<number, Decimal> {
@@ -43,6 +42,7 @@ function mapGrad(a: Map<number, Decimal>, f: (g: Decimal) => Decimal): Map<numbe
 }
 
 function combine(a: Map<number, Decimal>, b: Map<number, Decimal>, fa: (g: Decimal) => Decimal, fb: (g: Decimal) => Decimal): Map<number, Decimal> {
+  if (a.size === 0 && b.size === 0) return new Map();
   const out = mapGrad(a, fa);
   for (const [k, g] of b) out.set(k, (out.get(k) ?? new Decimal(0)).plus(fb(g)));
   return out;
@@ -112,7 +112,8 @@ function productUnit(a: Quantity, b: Quantity): Unit | null {
  */
 export function multiply(a: Quantity, b: Quantity): Quantity {
   const m = timesM(a, b);
-  return { ...m, dims: addDims(a.dims, b.dims, 1), unit: productUnit(a, b), grad: combine(a.grad, b.grad, (g) => g.times(b.value), (g) => g.times(a.value)) };
+  const grad = a.grad.size === 0 && b.grad.size === 0 ? new Map<number, Decimal>() : combine(a.grad, b.grad, (g) => g.times(b.value), (g) => g.times(a.value));
+  return { ...m, dims: addDims(a.dims, b.dims, 1), unit: productUnit(a, b), grad };
 }
 
 /**
@@ -145,7 +146,7 @@ export function divide(a: Quantity, b: Quantity, column?: number): Quantity {
  * displayQuantity(negate(quantity(readNumber('2.50'), unitOf('g')))).text // '-2.50 g'
  */
 export function negate(a: Quantity): Quantity {
-  return { ...a, value: a.value.neg(), grad: mapGrad(a.grad, (g) => g.neg()) };
+  return { ...a, value: a.value.neg(), grad: a.grad.size === 0 ? new Map<number, Decimal>() : mapGrad(a.grad, (g) => g.neg()) };
 }
 
 /**
@@ -184,7 +185,10 @@ export function standardUncertainty(q: Quantity, inputs: Map<number, Decimal>): 
   let s = new Decimal(0);
   for (const [k, g] of q.grad) {
     const u = inputs.get(k);
-    if (u) s = s.plus(g.times(u).pow(2));
+    if (u) {
+      const x = g.times(u);
+      s = s.plus(x.times(x));
+    }
   }
   return s.sqrt();
 }

@@ -68,19 +68,21 @@ function read(text: string, column?: number): ReadNumber {
   const mantissa = `${sign}${int || '0'}${frac ? '.' + frac : ''}`;
   // a number of up to 50 digits is exact as written (the product by 10^exp would not round it either)
   const value = int.length + (frac?.length ?? 0) <= Decimal.precision ? new Decimal(exp === 0 ? mantissa : `${mantissa}e${exp}`) : new Decimal(mantissa).times(pow10(exp));
-  if (!value.isZero() && (value.abs().gte(MAX_MAGNITUDE) || value.abs().lt(MIN_MAGNITUDE))) {
+  // both limits are powers of ten, so the position of the leading digit decides
+  if (!value.isZero() && (value.e >= MAX_MAGNITUDE.e || value.e < MIN_MAGNITUDE.e)) {
     throw fail(typedIssue({ code: 'NUMBER_OUT_OF_RANGE', value: text.trim(), exponentLimit: MAX_MAGNITUDE.e, reading: 'number', what: null, column }));
   }
   const hasPoint = frac !== undefined;
-  const digits = (int + (frac ?? '')).replace(/^0+/, '');
   let lsd: number;
   let ambiguous = false;
   if (hasPoint) {
     lsd = -(frac ?? '').length + exp;
   } else {
     // no decimal point: trailing zeros of the integer are not significant
-    const trailing = /0*$/.exec(int)![0].length;
-    if (digits === '') {
+    let trailing = 0;
+    while (trailing < int.length && int.charCodeAt(int.length - 1 - trailing) === 48) trailing++;
+    // every digit zero ('0', '000'): the value is zero
+    if (value.isZero()) {
       lsd = exp; // '0'
     } else {
       lsd = trailing + exp;

@@ -141,20 +141,23 @@ export function displayMeasured(m: Measured, rounding: RoundingMode = 'half-even
   else if (!m.value.isFinite()) decimalOf(m.value);
   if (m.lsd !== null) wholeIn(m.lsd, -MAX_POSITION, MAX_POSITION, 'the position of the last digit (lsd)');
   if (m.sigFigs !== undefined) wholeIn(m.sigFigs, 1, MAX_PLACES, 'the number of significant figures');
-  mode(rounding);
+  return displayChecked(m, mode(rounding));
+}
+
+function displayChecked(m: Measured, r: Rounding): Display {
   if (m.lsd === null) {
     // an exact quotient that does not terminate (1/3) fills the working precision: show
     // 12 figures and an ellipsis rather than 50 digits that look exact
-    const text = m.value.sd() >= EXACT_DIGITS_LIMIT ? `${m.value.toSignificantDigits(12, mode(rounding)).toFixed()}…` : m.value.toFixed();
+    const text = m.value.sd() >= EXACT_DIGITS_LIMIT ? `${m.value.toSignificantDigits(12, r).toFixed()}…` : m.value.toFixed();
     return { text, value: m.value, sigFigs: null, lsd: null, belowPrecision: false };
   }
   let value: Decimal;
   let lsd: number;
   if (m.sigFigs !== undefined && !m.value.isZero()) {
-    value = roundToSigFigs(m.value, m.sigFigs, rounding);
+    value = m.value.toSignificantDigits(m.sigFigs, r);
     lsd = msd(value) - m.sigFigs + 1;
   } else {
-    value = roundToPosition(m.value, m.lsd, rounding);
+    value = m.lsd <= 0 ? m.value.toDecimalPlaces(-m.lsd, r) : m.value.div(pow10(m.lsd)).toDecimalPlaces(0, r).times(pow10(m.lsd));
     lsd = m.lsd;
   }
   if (value.isZero()) {
@@ -167,9 +170,10 @@ export function displayMeasured(m: Measured, rounding: RoundingMode = 'half-even
   const n = e - lsd + 1;
   // trailing zeros before the decimal point would be read as not significant:
   // 2400 (2 s.f.) and 1300 known to the unit (4 s.f.) both go to scientific notation
-  const ambiguousZeros = lsd > 0 || (lsd === 0 && value.mod(10).isZero());
+  // (at lsd 0 the rounded value is a whole number, a multiple of 10 when its last non-zero digit is above the units)
+  const ambiguousZeros = lsd > 0 || (lsd === 0 && value.e >= value.sd());
   if (ambiguousZeros || e >= 6 || e <= -5) {
-    const mantissa = value.div(pow10(e));
+    const mantissa = value.times(pow10(-e));
     const mText = mantissa.toFixed(Math.max(0, n - 1));
     return { text: `${mText} × 10${superscript(e)}`, value, sigFigs: n, lsd, belowPrecision: false };
   }

@@ -57,6 +57,33 @@ export function pow10(n: number): Decimal {
 }
 
 /**
+ * A value in base units (g, mol, L) expressed in a unit: the value divided by the unit's factor,
+ * computed as a product by the inverse power of ten (the same exact quotient, rounded the same way).
+ *
+ * @example
+ * inUnitOf(new Decimal('0.25'), unitOf('mL')).toString() // '250'
+ */
+export function inUnitOf(value: Decimal, u: Unit | null): Decimal {
+  const exp10 = u ? u.exp10 : 0;
+  // a value already within the working precision is its own quotient by 1
+  if (exp10 === 0 && value.sd() <= Decimal.precision) return value;
+  return value.times(pow10(-exp10));
+}
+
+/**
+ * A value in a unit expressed in base units (g, mol, L): the value times the unit's factor.
+ *
+ * @example
+ * toBaseUnit(new Decimal('250'), unitOf('mL')).toString() // '0.25'
+ */
+export function toBaseUnit(value: Decimal, u: Unit | null): Decimal {
+  const exp10 = u ? u.exp10 : 0;
+  // a value already within the working precision is its own product by 1
+  if (exp10 === 0 && value.sd() <= Decimal.precision) return value;
+  return value.times(pow10(exp10));
+}
+
+/**
  * The exact factor from a unit to its base unit (mg → 0.001; none → 1).
  *
  * @example
