@@ -199,7 +199,10 @@ describe('candidates: numbers are the exact decimals', () => {
       const m = formulaMassDetail(f);
       const count = (el: string) => Number(m.atoms.get(el) ?? 0);
       const c = count('C');
-      return count('H') <= 2 * c + count('N') + 2 && count('H') / c <= 3.1 && count('O') / c <= 1.2 && count('N') / c <= 1.3;
+      // SENIOR's second rule (Kind & Fiehn, BMC Bioinformatics 8 (2007) 105): the valence sum is at
+      // least twice the largest valence (C, 4), which takes out CH2 and other fragments
+      const valences = 4 * c + count('H') + 3 * count('N') + 2 * count('O') + 2 * count('S');
+      return valences >= 8 && count('H') <= 2 * c + count('N') + 2 && count('H') / c <= 3.1 && count('O') / c <= 1.2 && count('N') / c <= 1.3;
     });
 
   it('property: a formula\'s own monoisotopic mass always returns it among the candidates', () => {
