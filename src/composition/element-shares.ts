@@ -10,7 +10,9 @@ import { ATOMS } from '../elements/atom-data.js';
 import { scaledRatio } from '../exact/ratio.js';
 import { scaledToString, SCALE_DIGITS } from '../exact/scaled.js';
 import { toDecimal } from '../formula/amount.js';
-import { formulaMassDetail, type MassDetail, type MassOptions } from '../mass/formula-mass.js';
+import { formulaMassDetail, massCore, type MassDetail, type MassOptions } from '../mass/formula-mass.js';
+import type { AtomVector } from '../formula/flatten.js';
+import type { WeightTable } from '../elements/atom-data.js';
 import type { FormulaTree } from '../formula-parser/tree.js';
 import { partShare, type PartShare } from './part-share.js';
 
@@ -87,38 +89,36 @@ const SCALE = 10 ** SCALE_DIGITS;
  */
 export function compositionDetail(input: string | FormulaTree, options: CompositionOptions = {}): CompositionDetail {
   const mass = formulaMassDetail(input, options);
-  const { ids, counts } = mass.vector;
-  const n = ids.length;
-  const elements = new Array<ElementShare>(n);
-  const total = mass.molarScaled;
-  let molarMass: number;
-  let molarMassExact: string;
-  if (total !== null) {
-    // exact integers in 10^-12 u: each count × weight is exact while the total is
-    const avg = mass.weights === 'standard' ? ATOMS.standardScaled : ATOMS.abridgedScaled;
-    for (let i = 0; i < n; i++) {
-      const c = counts[i] as number;
-      const m = c * avg[ids[i]];
-      elements[i] = { symbol: ATOMS.data[ids[i]].label, count: c, mass: m / SCALE, massExact: scaledToString(m), massPercent: total === 0 ? 0 : scaledRatio(m, total, 100) };
-    }
-    molarMass = total / SCALE;
-    molarMassExact = scaledToString(total);
-  } else {
-    const totalD = mass.molarMass;
-    const contributions = mass.contributions;
-    for (let i = 0; i < n; i++) {
-      const c = contributions[i];
-      elements[i] = { symbol: c.label, count: toDecimal(c.count).toNumber(), mass: c.mass.toNumber(), massExact: c.mass.toFixed(), massPercent: totalD.isZero() ? 0 : c.mass.div(totalD).times(100).toNumber() };
-    }
-    molarMass = totalD.toNumber();
-    molarMassExact = totalD.toFixed();
-  }
+  const exact = mass.molarScaled !== null ? shares(mass.vector, mass.molarScaled, mass.weights) : null;
+  const elements = exact ?? decimalShares(mass);
+  const molarMass = mass.molarScaled !== null ? mass.molarScaled / SCALE : mass.molarMass.toNumber();
+  const molarMassExact = mass.molarScaled !== null ? scaledToString(mass.molarScaled) : mass.molarMass.toFixed();
   const share = options.part !== undefined ? partShare(mass, options.part, options) : null;
   const part: PartShareResult | null = share
     ? { part: share.part, formula: share.formula, count: toDecimal(share.count).toNumber(), mass: share.mass.toNumber(), massPercent: share.massPercent.toNumber(), countedFrom: share.countedFrom }
     : null;
   const notes = share && share.notes.length ? [...mass.notes, ...share.notes] : mass.notes.slice();
   return { result: { input: mass.input, formula: mass.formula, molarMass, molarMassExact, charge: mass.charge, elements, part, notes }, mass, part: share };
+}
+
+/** Each element's share from exact integer sums in 10^-12 u (each count × weight is exact while the total is). */
+function shares(vector: AtomVector, total: number, weights: WeightTable): ElementShare[] {
+  const { ids, counts } = vector;
+  const n = ids.length;
+  const elements = new Array<ElementShare>(n);
+  const avg = weights === 'standard' ? ATOMS.standardScaled : ATOMS.abridgedScaled;
+  for (let i = 0; i < n; i++) {
+    const c = counts[i] as number;
+    const m = c * avg[ids[i]];
+    elements[i] = { symbol: ATOMS.data[ids[i]].label, count: c, mass: m / SCALE, massExact: scaledToString(m), massPercent: total === 0 ? 0 : scaledRatio(m, total, 100) };
+  }
+  return elements;
+}
+
+/** Each element's share in Decimal: decimal counts and sums past the exact integers. */
+function decimalShares(mass: MassDetail): ElementShare[] {
+  const totalD = mass.molarMass;
+  return mass.contributions.map((c) => ({ symbol: c.label, count: toDecimal(c.count).toNumber(), mass: c.mass.toNumber(), massExact: c.mass.toFixed(), massPercent: totalD.isZero() ? 0 : c.mass.div(totalD).times(100).toNumber() }));
 }
 
 /**
@@ -133,6 +133,14 @@ export function compositionDetail(input: string | FormulaTree, options: Composit
  * composition('CuSO4·5H2O', { part: 'H2O' }).part?.massPercent.toFixed(2)   // '36.08'
  */
 export function composition(input: string | FormulaTree, options: CompositionOptions = {}): CompositionResult {
+  if (options.part === undefined) {
+    // the usual row: exact sums straight from the core, with no detailed result in between
+    const core = massCore(input, options);
+    if (core.molarScaled !== null) {
+      const total = core.molarScaled;
+      return { input: core.input, formula: core.formula, molarMass: total / SCALE, molarMassExact: scaledToString(total), charge: core.charge, elements: shares(core.vector, total, core.weights), part: null, notes: core.notes.slice() };
+    }
+  }
   return compositionDetail(input, options).result;
 }
 

@@ -106,7 +106,7 @@ const SCALE = 10 ** SCALE_DIGITS;
 const NO_NOTES: Note[] = Object.freeze([]) as unknown as Note[];
 
 /** The sums and notes of one formula: the shared core of both result shapes. */
-interface MassCore {
+export interface MassCore {
   input: string;
   charge: number;
   /** The parsed formula, or null when the atom totals came straight from the text (read again when asked for). */
@@ -130,6 +130,21 @@ function coreOfText(input: string, options: MassOptions): MassCore {
   }
   const tree = parseFormula(input, options);
   return sums(input, tree.charge, tree.notes, atomVector(tree), tree, options);
+}
+
+/**
+ * The sums and notes of one formula, before either result shape is made: for the library's own
+ * batch paths (composition), which need the atom totals and exact sums but no Decimal values.
+ *
+ * @param input - a formula ('H2O'), or a tree from parseFormula.
+ * @param options - the atomic-weight table and the reading options of parseFormula.
+ * @returns the atom totals, the exact sums in 10^-12 u (null where they need Decimal), the Hill formula and the notes.
+ * @throws PondusError: the codes of parseFormula; COUNT_TOO_LARGE past 10^12 atoms of one kind.
+ * @example
+ * massCore('H2O', {}).molarScaled // 18015000000000
+ */
+export function massCore(input: string | FormulaTree, options: MassOptions): MassCore {
+  return coreOf(input, options);
 }
 
 function coreOf(input: string | FormulaTree, options: MassOptions): MassCore {
