@@ -9,6 +9,12 @@ import type { Note } from '../errors/issue.js';
 import { messageFor } from '../errors/message.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
 import { FLAG_NAMING } from '../errors/render.js';
+import type { OptionNaming } from '../errors/message.js';
+
+/** Flags as the command line shows them, but the tolerance, which belongs to the search from percentages. */
+const COMBUSTION_NAMING: OptionNaming = {
+  option: (name, value) => (name === 'tolerance' ? 'tolerance (search the percentages above with empirical and --tolerance)' : FLAG_NAMING.option(name, value)),
+};
 import { Decimal } from '../exact/decimal.js';
 import { MASS, measureAs } from '../calc/measure.js';
 import { conversionFactor } from '../preparation/conversion-factor.js';
@@ -186,8 +192,9 @@ export function combustionDetail(options: CombustionOptions): CombustionDetail {
     s = searchFormula(measurements);
   } catch (e) {
     if (!(e instanceof PondusError) || e.first.code !== 'NO_FORMULA_FITS') throw e;
-    // a note has no naming of its own: it keeps the flag words it has always had
-    notes.push({ code: 'NO_FORMULA_FITS', message: messageFor(e.first, FLAG_NAMING) });
+    // a note has no naming of its own: it keeps the flag words it has always had, but combustion
+    // has no tolerance of its own: the percentages it reports can be searched with one
+    notes.push({ code: 'NO_FORMULA_FITS', message: messageFor(e.first, COMBUSTION_NAMING) });
     return { input: options.sample, sample, elements, empirical: null, hill: null, fit: null, alternatives: [], notes };
   }
   return { input: options.sample, sample, elements, empirical: s.best.formula, hill: s.best.hill, fit: s.best, alternatives: s.alternatives, notes };

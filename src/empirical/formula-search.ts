@@ -234,7 +234,7 @@ export function searchFormula(m: Measurements, options: SearchOptions = {}): Sea
   // an element within its limit of zero cannot fix a count: the data cannot tell how much of it there is
   const trace = symbols.findIndex((_, i) => percents[i] <= limits[i]);
   if (trace >= 0) {
-    throw fail({ code: 'NO_FORMULA_FITS', message: `${symbols[trace]} at ${percents[trace]} % is within the limit (±${limits[trace].toFixed(3)} points) of zero: the data cannot tell how many ${symbols[trace]} atoms there are; give a tighter \`tolerance\` if the analysis is better than that, or leave ${symbols[trace]} out`, options: ['tolerance'] });
+    throw fail({ code: 'NO_FORMULA_FITS', message: `${symbols[trace]} at ${Number(percents[trace].toPrecision(4))} % is within the limit (±${limits[trace].toFixed(3)} points) of zero: the data cannot tell how many ${symbols[trace]} atoms there are; give a tighter \`tolerance\` if the analysis is better than that, or leave ${symbols[trace]} out`, options: ['tolerance'] });
   }
   // the search ends past MAX_EMPIRICAL_ATOMS, or once the smallest formula of a scale has more than
   // 2.5 times the atoms of the smallest fit (the alternatives a chemist would consider)

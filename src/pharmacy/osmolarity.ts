@@ -73,6 +73,10 @@ export function osmolarity(text: string, o: OsmolarityOptions = {}): OsmolarityR
     try {
       result = milliequivalents(salt, { ...o, concentration: strength, measured: o.measured });
     } catch (e) {
+      // a salt the split does not know would need its ions named, which a solution list cannot do
+      if (e instanceof PondusError && e.first.code === 'BAD_OPTION' && e.first.options?.includes('ions')) {
+        throw fail({ code: 'BAD_RECORD', message: `${salt}: pondus cannot split it into ions here: the osmolarity of a solution counts only salts it splits itself (NaCl, KCl, CaCl2, NaHCO3, …), and does not yet count a non-electrolyte such as dextrose; work such a salt on its own with meq and \`ions\``, column: text.indexOf(piece) + 1, options: ['ions'] }, text);
+      }
       if (e instanceof PondusError && e.first.code !== 'USAGE') throw fail({ code: e.first.code, message: `${salt}: ${e.first.message}`, column: text.indexOf(piece) + 1, hint: e.first.hint, options: e.first.options }, text);
       throw e;
     }

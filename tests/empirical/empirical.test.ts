@@ -94,6 +94,16 @@ describe('empirical formula from measurements', () => {
 });
 
 describe('combustion analysis', () => {
+  it('a trace element from combustion: the note names the percent shortly and no option combustion lacks', () => {
+    // invented data: so little water that hydrogen is within the default limit of zero
+    const r = combustion({ sample: '2.000 mg', collected: { co2: '6.000 mg', h2o: '0.010 mg' } });
+    expect(r.empirical).toBeNull();
+    const note = r.notes.find((n) => n.code === 'NO_FORMULA_FITS')!;
+    expect(note.message).toMatch(/^H at 0\.05595 % is within the limit/);
+    expect(note.message).toContain('tighter tolerance (search the percentages above with empirical and --tolerance)');
+    expect(note.message).not.toMatch(/tighter --tolerance/);
+  });
+
   it('ascorbic acid: CO2 and H2O from a 1.000 g sample give C3H4O3', () => {
     // masses computed by hand for C6H8O6 (1.000 g → 1.499 g CO2, 0.4091 g H2O); the empirical formula of
     // ascorbic acid, C3H4O3: OpenStax Chemistry 2e §3.4, from memory

@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { osmolarity } from '../../src/pharmacy/osmolarity.js';
+import { toSafe } from '../../src/errors/pondus-error.js';
+import { messageFor } from '../../src/errors/message.js';
+import { FLAG_NAMING } from '../../src/errors/render.js';
 import { displayQuantity } from '../../src/sigfig/display-quantity.js';
 
 const mOsm = (text: string) => displayQuantity(osmolarity(text).osmolarity, 'mM').value.toNumber();
@@ -41,4 +44,16 @@ describe('osmolarity and mEq/L of a solution', () => {
     expect(() => osmolarity('NaCl=0.9 %, Glucose=5 %')).toThrow(/Glucose/);
     expect(() => osmolarity('')).toThrow();
   });
+
+  it('refuses a solute it cannot split without offering an option the solution list does not have', () => {
+    // dextrose is a non-electrolyte (common practice: one particle per molecule), which is not counted yet
+    const e = toSafe(() => osmolarity('NaCl=0.9 %, C6H12O6=5 %'));
+    expect(e.success).toBe(false);
+    if (e.success) return;
+    expect(e.error.first.code).toBe('BAD_RECORD');
+    expect(e.error.first.column).toBe(13);
+    expect(messageFor(e.error.first, FLAG_NAMING)).toMatch(/non-electrolyte such as dextrose; work such a salt on its own with meq and --ions$/);
+    expect(messageFor(e.error.first)).toMatch(/with meq and `ions`$/);
+  });
 });
+
