@@ -77,6 +77,21 @@ const plainSupportsColor = {
   },
 };
 
+// The formula grammar (Chevrotain's tokens and parser class) is built at start-up by any module
+// that imports it, though the fast readers take most inputs: in the command-line bundles the full
+// parser loads it on first use. esbuild wraps a module reached only through require() in a lazy
+// initialiser, so chevrotain and the grammar run when the first formula needs them.
+const lazyGrammar = {
+  name: 'lazy-grammar',
+  setup(b) {
+    b.onLoad({ filter: /formula-parser[\\/]grammar-loader\.ts$/ }, () => ({
+      contents: "let full;\nexport function fullGrammar() { return (full ??= require('./full-grammar.ts')); }\n",
+      loader: 'ts',
+      resolveDir: `${root}src/formula-parser`,
+    }));
+  },
+};
+
 // The command line, in parts: one bundle per command module (src/cli/bundles/<name>.ts →
 // dist/cli/<name>.cjs), each holding only what its commands use, and `help`, with every command
 // declared and none of their code (help, completion, manual). bin/pondus.cjs picks the bundle by
@@ -95,7 +110,7 @@ const cli = await build({
   minifyIdentifiers: !process.env.PONDUS_NO_MINIFY,
   legalComments: 'none',
   metafile: true,
-  plugins: [lazyChildProcess, plainSupportsColor, lazyNuclideTable('../data')],
+  plugins: [lazyChildProcess, plainSupportsColor, lazyNuclideTable('../data'), lazyGrammar],
   logLevel: 'warning',
 });
 if (process.env.PONDUS_METAFILE) writeFileSync(process.env.PONDUS_METAFILE, JSON.stringify(cli.metafile));

@@ -39,9 +39,9 @@ export function numberText(value: number): string {
   return JSON.stringify(value);
 }
 
-/** The texts of the whole numbers below TABLE_SIZE, made on first use. */
+/** The texts of the whole numbers below TABLE_SIZE, each made on first use. */
 const TABLE_SIZE = 4096;
-let smallTexts: string[] | null = null;
+const smallTexts: (string | undefined)[] = new Array(TABLE_SIZE).fill(undefined);
 
 /**
  * The text JSON.stringify gives a number, from a table for whole numbers from 0 to 4095 (atom
@@ -55,8 +55,7 @@ let smallTexts: string[] | null = null;
  */
 export function smallNumberText(value: number): string {
   if (value >= 0 && value < TABLE_SIZE && (value | 0) === value) {
-    smallTexts ??= Array.from({ length: TABLE_SIZE }, (_, i) => String(i));
-    return smallTexts[value];
+    return (smallTexts[value] ??= String(value));
   }
   return numberText(value);
 }

@@ -11,11 +11,10 @@ import type { Note } from '../errors/issue.js';
 import { ABBREVIATIONS, REFUSED_ABBREVIATIONS } from './abbreviations.js';
 import { fastParse } from './fast-path.js';
 import { unknownElementHint } from './hints.js';
-import { formulaGrammar } from './grammar.js';
+import { fullGrammar } from './grammar-loader.js';
 import { REAGENTS } from './names.js';
 import { columnOf, MAX_FORMULA_LENGTH, prescanAll } from './prescan.js';
 import { settleReadings } from './readings.js';
-import { ABBREVIATION_MODE, ELEMENTS_MODE, formulaLexer, PLAIN_MODE } from './tokens.js';
 import { end, type ComponentNode, type FormulaTree, type GroupNode, type PartNode, type Span } from './tree.js';
 import type { FormulaCstNode } from './cst.js';
 import { buildTree, unknownElement, type ReadingMode } from './visitor.js';
@@ -75,6 +74,7 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
   const text = state ? input.slice(0, state.offset) : input;
   if (state && text.trim() === '') throw new PondusError([typedIssue({ code: 'EMPTY_INPUT', stateSymbol: state.symbol })], input);
 
+  const { formulaLexer, formulaGrammar, ABBREVIATION_MODE, ELEMENTS_MODE, PLAIN_MODE } = fullGrammar();
   const lexed = formulaLexer().tokenize(text, mode === 'abbreviations' ? ABBREVIATION_MODE : mode === 'elements' ? ELEMENTS_MODE : PLAIN_MODE);
   if (lexed.errors.length > 0) {
     // every stray character, and every word that is no element symbol among the tokens read around them
