@@ -47,21 +47,7 @@ export function atomVector(tree: FormulaTree): AtomVector {
     addComponents(tree.components, 1);
     const seen = touched;
     const n = seen.length;
-    const ids = seen.slice();
-    let organic = false;
-    for (let i = 0; i < n; i++) if (ATOMS.data[ids[i]].symbol === 'C') organic = true;
-    const rank = organic ? ATOMS.rankOrganic : ATOMS.rankPlain;
-    // insertion sort: formulas have few kinds of atom, at most a few hundred
-    for (let i = 1; i < n; i++) {
-      const id = ids[i];
-      const r = rank[id];
-      let j = i - 1;
-      while (j >= 0 && rank[ids[j]] > r) {
-        ids[j + 1] = ids[j];
-        j--;
-      }
-      ids[j + 1] = id;
-    }
+    const ids = hillIds(seen);
     const counts = new Array<Amount>(n);
     let whole = true;
     for (let i = 0; i < n; i++) {
@@ -78,6 +64,35 @@ export function atomVector(tree: FormulaTree): AtomVector {
   } finally {
     for (const id of touched) totals[id] = undefined;
   }
+}
+
+/**
+ * Dense-table ids in Hill order: a sorted copy of `seen` (C first, then H, then the rest
+ * alphabetically when carbon is present; all alphabetically otherwise).
+ *
+ * @param seen - dense-table ids, each once (in order of first appearance).
+ * @returns a new array of the same ids in Hill order.
+ * @example
+ * hillIds(atomVector(parseFormula('OCH4')).seen).join() === atomVector(parseFormula('OCH4')).ids.join() // true
+ */
+export function hillIds(seen: readonly number[]): number[] {
+  const n = seen.length;
+  const ids = seen.slice();
+  let organic = false;
+  for (let i = 0; i < n; i++) if (ATOMS.data[ids[i]].symbol === 'C') organic = true;
+  const rank = organic ? ATOMS.rankOrganic : ATOMS.rankPlain;
+  // insertion sort: formulas have few kinds of atom, at most a few hundred
+  for (let i = 1; i < n; i++) {
+    const id = ids[i];
+    const r = rank[id];
+    let j = i - 1;
+    while (j >= 0 && rank[ids[j]] > r) {
+      ids[j + 1] = ids[j];
+      j--;
+    }
+    ids[j + 1] = id;
+  }
+  return ids;
 }
 
 /**

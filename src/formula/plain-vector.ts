@@ -9,13 +9,13 @@
  * What it gives is exactly `atomVector(parseFormula(text))`, with the tree's charge and no notes;
  * tests/formula/plain-vector.test.ts checks that on generated formulas.
  */
-import { atomId, ATOMS } from '../elements/atom-data.js';
+import { atomId } from '../elements/atom-data.js';
 import { mayStartCharge, plainSymbol, readEndCharge } from '../formula-parser/fast-path.js';
 import { isCaseTrap } from '../formula-parser/hints.js';
 import { MAX_FORMULA_LENGTH, MAX_NESTING } from '../formula-parser/prescan.js';
 import { mayNeedSettling } from '../formula-parser/readings.js';
 import { MAX_COUNT_DIGITS } from '../formula-parser/visitor.js';
-import { MAX_ATOMS, type AtomVector } from './flatten.js';
+import { hillIds, MAX_ATOMS, type AtomVector } from './flatten.js';
 
 /** The atom totals and charge of a plain formula. */
 export interface PlainVector {
@@ -105,6 +105,19 @@ function readCount(t: string, pos: number, limit: number, afterPart: boolean): n
   return v;
 }
 
+/**
+ * Starts a component at `pos` at this depth: reads its multiplier (1 when none is written) and
+ * marks where its atoms begin. False when the multiplier needs the tree path. Sets countEnd.
+ */
+function startComponent(t: string, pos: number, limit: number, depth: number, sp: number): boolean {
+  const m = readCount(t, pos, limit, false);
+  if (m === GIVE_UP) return false;
+  componentStart[depth] = sp;
+  componentMultiplier[depth] = m === 0 ? 1 : m;
+  componentParts[depth] = 0;
+  return true;
+}
+
 /** Multiplies entries [from, to) by k; false when a product passes MAX_ATOMS (the tree path then reports it). */
 function scale(from: number, to: number, k: number): boolean {
   if (k === 1) return true;
@@ -145,13 +158,8 @@ export function plainVector(input: string): PlainVector | null {
   let trapAtTop = false;
   let bracketAtTop = false;
   let componentsAtTop = 1;
-  // the first component
-  let m = readCount(t, pos, limit, false);
-  if (m === GIVE_UP) return null;
+  if (!startComponent(t, pos, limit, 0, 0)) return null;
   pos = countEnd;
-  componentStart[0] = 0;
-  componentMultiplier[0] = m === 0 ? 1 : m;
-  componentParts[0] = 0;
   for (;;) {
     const c = pos < limit ? t.charCodeAt(pos) : -1;
     if (c >= 65 && c <= 90) {
@@ -184,13 +192,8 @@ export function plainVector(input: string): PlainVector | null {
       depth++;
       groupStart[depth] = sp;
       closeOf[depth] = c === 40 ? 41 : c + 2;
-      pos++;
-      m = readCount(t, pos, limit, false);
-      if (m === GIVE_UP) return null;
+      if (!startComponent(t, pos + 1, limit, depth, sp)) return null;
       pos = countEnd;
-      componentStart[depth] = sp;
-      componentMultiplier[depth] = m === 0 ? 1 : m;
-      componentParts[depth] = 0;
       continue;
     }
     // the parts of a component end here
@@ -198,13 +201,8 @@ export function plainVector(input: string): PlainVector | null {
     if (!scale(componentStart[depth], sp, componentMultiplier[depth])) return null;
     if (c === 0xb7 || c === 42) {
       if (depth === 0) componentsAtTop++;
-      pos++;
-      m = readCount(t, pos, limit, false);
-      if (m === GIVE_UP) return null;
+      if (!startComponent(t, pos + 1, limit, depth, sp)) return null;
       pos = countEnd;
-      componentStart[depth] = sp;
-      componentMultiplier[depth] = m === 0 ? 1 : m;
-      componentParts[depth] = 0;
       continue;
     }
     if (depth > 0) {
@@ -237,22 +235,8 @@ export function plainVector(input: string): PlainVector | null {
     totals[id] = s;
   }
   const n = seen.length;
-  const ids = seen.slice();
+  const ids = hillIds(seen);
   const counts = new Array<number>(n);
-  let organic = false;
-  for (let i = 0; i < n; i++) if (ATOMS.data[ids[i]].symbol === 'C') organic = true;
-  const rank = organic ? ATOMS.rankOrganic : ATOMS.rankPlain;
-  // insertion sort: formulas have few kinds of atom
-  for (let i = 1; i < n; i++) {
-    const id = ids[i];
-    const r = rank[id];
-    let j = i - 1;
-    while (j >= 0 && rank[ids[j]] > r) {
-      ids[j + 1] = ids[j];
-      j--;
-    }
-    ids[j + 1] = id;
-  }
   for (let i = 0; i < n; i++) {
     counts[i] = totals[ids[i]];
     totals[ids[i]] = 0;
