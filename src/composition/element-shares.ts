@@ -10,9 +10,7 @@ import { ATOMS } from '../elements/atom-data.js';
 import { scaledRatio } from '../exact/ratio.js';
 import { scaledToString, SCALE_DIGITS } from '../exact/scaled.js';
 import { toDecimal } from '../formula/amount.js';
-import { formulaMassDetail, massCore, type MassDetail, type MassOptions } from '../mass/formula-mass.js';
-import type { AtomVector } from '../formula/flatten.js';
-import type { WeightTable } from '../elements/atom-data.js';
+import { formulaMassDetail, massCore, type MassCore, type MassDetail, type MassOptions } from '../mass/formula-mass.js';
 import type { FormulaTree } from '../formula-parser/tree.js';
 import { partShare, type PartShare } from './part-share.js';
 
@@ -89,36 +87,37 @@ const SCALE = 10 ** SCALE_DIGITS;
  */
 export function compositionDetail(input: string | FormulaTree, options: CompositionOptions = {}): CompositionDetail {
   const mass = formulaMassDetail(input, options);
-  const exact = mass.molarScaled !== null ? shares(mass.vector, mass.molarScaled, mass.weights) : null;
-  const elements = exact ?? decimalShares(mass);
-  const molarMass = mass.molarScaled !== null ? mass.molarScaled / SCALE : mass.molarMass.toNumber();
-  const molarMassExact = mass.molarScaled !== null ? scaledToString(mass.molarScaled) : mass.molarMass.toFixed();
+  const result = mass.molarScaled !== null ? exactResult(mass, mass.molarScaled) : decimalResult(mass);
   const share = options.part !== undefined ? partShare(mass, options.part, options) : null;
-  const part: PartShareResult | null = share
-    ? { part: share.part, formula: share.formula, count: toDecimal(share.count).toNumber(), mass: share.mass.toNumber(), massPercent: share.massPercent.toNumber(), countedFrom: share.countedFrom }
-    : null;
-  const notes = share && share.notes.length ? [...mass.notes, ...share.notes] : mass.notes.slice();
-  return { result: { input: mass.input, formula: mass.formula, molarMass, molarMassExact, charge: mass.charge, elements, part, notes }, mass, part: share };
+  if (share) {
+    result.part = { part: share.part, formula: share.formula, count: toDecimal(share.count).toNumber(), mass: share.mass.toNumber(), massPercent: share.massPercent.toNumber(), countedFrom: share.countedFrom };
+    result.notes.push(...share.notes);
+  }
+  return { result, mass, part: share };
 }
 
-/** Each element's share from exact integer sums in 10^-12 u (each count × weight is exact while the total is). */
-function shares(vector: AtomVector, total: number, weights: WeightTable): ElementShare[] {
-  const { ids, counts } = vector;
+/** What a composition is made from: a detailed mass, or the mass core the batch path reads. */
+type MassSums = Pick<MassCore, 'input' | 'formula' | 'charge' | 'vector' | 'weights' | 'notes'>;
+
+/** The composition from exact integer sums in 10^-12 u (each count × weight is exact while the total is). */
+function exactResult(m: MassSums, total: number): CompositionResult {
+  const { ids, counts } = m.vector;
   const n = ids.length;
   const elements = new Array<ElementShare>(n);
-  const avg = weights === 'standard' ? ATOMS.standardScaled : ATOMS.abridgedScaled;
+  const avg = m.weights === 'standard' ? ATOMS.standardScaled : ATOMS.abridgedScaled;
   for (let i = 0; i < n; i++) {
     const c = counts[i] as number;
-    const m = c * avg[ids[i]];
-    elements[i] = { symbol: ATOMS.data[ids[i]].label, count: c, mass: m / SCALE, massExact: scaledToString(m), massPercent: total === 0 ? 0 : scaledRatio(m, total, 100) };
+    const e = c * avg[ids[i]];
+    elements[i] = { symbol: ATOMS.data[ids[i]].label, count: c, mass: e / SCALE, massExact: scaledToString(e), massPercent: total === 0 ? 0 : scaledRatio(e, total, 100) };
   }
-  return elements;
+  return { input: m.input, formula: m.formula, molarMass: total / SCALE, molarMassExact: scaledToString(total), charge: m.charge, elements, part: null, notes: m.notes.slice() };
 }
 
-/** Each element's share in Decimal: decimal counts and sums past the exact integers. */
-function decimalShares(mass: MassDetail): ElementShare[] {
+/** The composition in Decimal: decimal counts and sums past the exact integers. */
+function decimalResult(mass: MassDetail): CompositionResult {
   const totalD = mass.molarMass;
-  return mass.contributions.map((c) => ({ symbol: c.label, count: toDecimal(c.count).toNumber(), mass: c.mass.toNumber(), massExact: c.mass.toFixed(), massPercent: totalD.isZero() ? 0 : c.mass.div(totalD).times(100).toNumber() }));
+  const elements = mass.contributions.map((c) => ({ symbol: c.label, count: toDecimal(c.count).toNumber(), mass: c.mass.toNumber(), massExact: c.mass.toFixed(), massPercent: totalD.isZero() ? 0 : c.mass.div(totalD).times(100).toNumber() }));
+  return { input: mass.input, formula: mass.formula, molarMass: totalD.toNumber(), molarMassExact: totalD.toFixed(), charge: mass.charge, elements, part: null, notes: mass.notes.slice() };
 }
 
 /**
@@ -136,10 +135,7 @@ export function composition(input: string | FormulaTree, options: CompositionOpt
   if (options.part === undefined) {
     // the usual row: exact sums straight from the core, with no detailed result in between
     const core = massCore(input, options);
-    if (core.molarScaled !== null) {
-      const total = core.molarScaled;
-      return { input: core.input, formula: core.formula, molarMass: total / SCALE, molarMassExact: scaledToString(total), charge: core.charge, elements: shares(core.vector, total, core.weights), part: null, notes: core.notes.slice() };
-    }
+    if (core.molarScaled !== null) return exactResult(core, core.molarScaled);
   }
   return compositionDetail(input, options).result;
 }

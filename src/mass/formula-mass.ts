@@ -144,10 +144,6 @@ function coreOfText(input: string, options: MassOptions): MassCore {
  * massCore('H2O', {}).molarScaled // 18015000000000
  */
 export function massCore(input: string | FormulaTree, options: MassOptions): MassCore {
-  return coreOf(input, options);
-}
-
-function coreOf(input: string | FormulaTree, options: MassOptions): MassCore {
   return typeof input === 'string' ? coreOfText(input, options) : sums(input.input, input.charge, input.notes, atomVector(input), input, options);
 }
 
@@ -327,7 +323,7 @@ function plainResult(core: MassCore): MassResult {
  * formulaMass('SO4^2-').charge             // -2
  */
 export function formulaMass(input: string | FormulaTree, options: MassOptions = {}): MassResult {
-  return plainResult(coreOf(input, options));
+  return plainResult(massCore(input, options));
 }
 
 /**
@@ -433,7 +429,7 @@ class Detail implements MassDetail {
  * formulaMassDetail('H2O').monoisotopicMass.toString() // '18.010564683056'
  */
 export function formulaMassDetail(input: string | FormulaTree, options: MassOptions = {}): MassDetail {
-  return new Detail(coreOf(input, options));
+  return new Detail(massCore(input, options));
 }
 
 /**
