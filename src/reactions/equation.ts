@@ -5,8 +5,10 @@
  */
 import type { Note } from '../errors/issue.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
-import { flattenFormula, type AtomCounts } from '../formula/flatten.js';
-import { hillFormula } from '../formula/hill.js';
+import { ATOMS } from '../elements/atom-data.js';
+import { countsMap, flattenFormula, type AtomCounts } from '../formula/flatten.js';
+import { formatFormula, hillFormula } from '../formula/hill.js';
+import { plainVector } from '../formula/plain-vector.js';
 import { parseFormula, type ParseOptions } from '../formula-parser/parse.js';
 import { columnOf } from '../formula-parser/prescan.js';
 
@@ -44,6 +46,26 @@ const COEFFICIENT = /^([0-9]+(?:\.[0-9]+)?|[0-9]+\/[0-9]+)\s*(?=[A-Z([{¹²³⁴
 
 /** A state symbol, `(s)`, `(l)`, `(g)` or `(aq)`, ending a species. */
 const STATE_AFTER = /^\((?:s|l|g|aq)\)(?:$|\s|\+)/;
+
+const NO_NOTES: readonly Note[] = Object.freeze([]);
+
+/**
+ * The atoms of one species' formula: a plain formula (no note, nothing to settle) straight from
+ * its text, the rest through the formula tree.
+ *
+ * @example
+ * speciesFormula('Ca3(PO4)2', {}).formula // 'Ca3O8P2'
+ */
+export function speciesFormula(body: string, options: ParseOptions): { formula: string; atoms: AtomCounts; charge: number; notes: readonly Note[] } {
+  const plain = options.abbreviations !== true && (options.maxLength === undefined || body.length <= options.maxLength) ? plainVector(body) : null;
+  if (plain) {
+    const { ids, counts } = plain.vector;
+    return { formula: formatFormula(ids.map((id) => ATOMS.data[id].label), counts, plain.charge), atoms: countsMap(plain.vector), charge: plain.charge, notes: NO_NOTES };
+  }
+  const tree = parseFormula(body, options);
+  const atoms = flattenFormula(tree);
+  return { formula: hillFormula(atoms, tree.charge), atoms, charge: tree.charge, notes: tree.notes };
+}
 
 /** Splits one side into species texts with their offsets. */
 function splitSide(side: string, base: number): { text: string; start: number }[] {
@@ -115,14 +137,13 @@ export function parseEquation(input: string, options: ParseOptions = {}): Equati
         return { text: body, formula: 'e-', atoms: new Map(), charge: -1, side: which, start: offset, written };
       }
       try {
-        const tree = parseFormula(body, options);
+        const read = speciesFormula(body, options);
         const shift = columnOf(input, offset) - 1;
-        for (const n of tree.notes) {
+        for (const n of read.notes) {
           if (n.code === 'STATE_SYMBOL') states.add(body.slice(body.lastIndexOf('(')));
           else if (!notes.some((m) => m.code === n.code && m.message === `${body}: ${n.message}`)) notes.push({ ...n, message: `${body}: ${n.message}`, ...(n.column !== undefined ? { column: n.column + shift } : {}) }); // a species written twice is read once
         }
-        const atoms = flattenFormula(tree);
-        return { text: body, formula: hillFormula(atoms, tree.charge), atoms, charge: tree.charge, side: which, start: offset, written };
+        return { text: body, formula: read.formula, atoms: read.atoms, charge: read.charge, side: which, start: offset, written };
       } catch (e) {
         if (e instanceof PondusError) {
           const shift = columnOf(input, offset) - 1;

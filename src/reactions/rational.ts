@@ -7,6 +7,7 @@ import { typedIssue } from '../errors/message.js';
 import { gcd as gcdOf } from '../exact/gcd.js';
 
 const WHOLE = /^[+-]?[0-9]{1,15}$/;
+const SAFE = BigInt(Number.MAX_SAFE_INTEGER);
 
 export class Rational {
   readonly num: bigint;
@@ -90,6 +91,8 @@ export class Rational {
   }
   /** The nearest float (for plain-data results). */
   toNumber(): number {
+    // two safe integers: one float division, correctly rounded
+    if (this.num <= SAFE && this.num >= -SAFE && this.den <= SAFE) return Number(this.num) / Number(this.den);
     return new Decimal(this.num.toString()).div(this.den.toString()).toNumber();
   }
   toString(): string {

@@ -20,3 +20,25 @@ describe('whole numbers as fractions', () => {
     expect(() => Rational.fromDecimal('7x')).toThrow();
   });
 });
+
+describe('a fraction as the nearest float', () => {
+  // the float division of two safe integers is correctly rounded (IEEE 754 §4.3), as is the
+  // 50-digit quotient read as a float: the two must agree, and past the safe integers the
+  // decimal route is taken
+  const big = (n: bigint, d: bigint) => new Decimal(n.toString()).div(d.toString()).toNumber();
+  it('agrees with the 50-digit decimal quotient for safe and for large numerators and denominators', () => {
+    fc.assert(
+      fc.property(fc.bigInt({ min: -(2n ** 60n), max: 2n ** 60n }), fc.bigInt({ min: 1n, max: 2n ** 60n }), (n, d) => {
+        const r = Rational.of(n, d);
+        return Object.is(r.toNumber(), big(r.num, r.den)) || (r.num === 0n && r.toNumber() === 0);
+      }),
+      { numRuns: 3000 },
+    );
+    fc.assert(
+      fc.property(fc.integer({ min: -1000, max: 1000 }), fc.integer({ min: 1, max: 1000 }), (n, d) => {
+        const r = Rational.of(BigInt(n), BigInt(d));
+        return r.toNumber() === big(r.num, r.den);
+      }),
+    );
+  });
+});
