@@ -169,6 +169,17 @@ export function nullSpace(matrix: Rational[][], columns: number): Rational[][] {
   if (!Array.isArray(matrix) || !Number.isSafeInteger(columns) || columns < 0 || matrix.some((row) => !Array.isArray(row) || row.length < columns || row.slice(0, columns).some((x) => !(x instanceof Rational)))) {
     throw fail({ code: 'BAD_NUMBER', message: `a null space needs a matrix of fractions with ${columns} columns` });
   }
+  return wholeNullSpace(matrix, columns) ?? rationalNullSpace(matrix, columns);
+}
+
+/**
+ * The null space by elimination over the fractions (the general route of {@link nullSpace}).
+ *
+ * @example
+ * const r = (n) => Rational.of(BigInt(n))
+ * rationalNullSpace([[r(2), r(0), r(-2)], [r(0), r(2), r(-1)]], 3).map((v) => v.map(String)) // [['1', '1/2', '1']]
+ */
+export function rationalNullSpace(matrix: readonly Rational[][], columns: number): Rational[][] {
   const { m, pivots } = reducedRowEchelon(matrix, columns);
   const free: number[] = [];
   for (let c = 0; c < columns; c++) if (!pivots.includes(c)) free.push(c);
@@ -180,6 +191,76 @@ export function nullSpace(matrix: Rational[][], columns: number): Rational[][] {
     });
     return v;
   });
+}
+
+/** Whole entries below this size go the route of plain numbers. */
+const SMALL_ENTRY = 2 ** 31;
+const EXACT = 2 ** 53;
+
+/**
+ * The null space of a matrix of whole numbers by fraction-free elimination on plain numbers: each
+ * row reduced by the greatest common divisor of its entries after each step, so that the entries
+ * stay small. The reduced rows are the reduced row-echelon form's up to a factor per row, so the
+ * basis (each free column set to 1) is the same. Null when an entry is not a small whole number
+ * or a step would leave the safe integers: then the fractions' route is taken.
+ *
+ * @example
+ * const r = (n) => Rational.of(BigInt(n))
+ * wholeNullSpace([[r(2), r(0), r(-2)], [r(0), r(2), r(-1)]], 3)?.map((v) => v.map(String)) // [['1', '1/2', '1']]
+ */
+export function wholeNullSpace(matrix: readonly Rational[][], columns: number): Rational[][] | null {
+  const m: number[][] = [];
+  for (const row of matrix) {
+    const out = new Array<number>(columns);
+    for (let j = 0; j < columns; j++) {
+      const x = row[j];
+      if (x.den !== 1n || x.num >= 2147483648n || x.num <= -2147483648n) return null;
+      out[j] = Number(x.num);
+    }
+    m.push(out);
+  }
+  const pivots: number[] = [];
+  let r = 0;
+  for (let c = 0; c < columns && r < m.length; c++) {
+    let p = r;
+    while (p < m.length && m[p][c] === 0) p++;
+    if (p === m.length) continue;
+    [m[r], m[p]] = [m[p], m[r]];
+    const pivot = m[r];
+    const a = pivot[c];
+    for (let i = 0; i < m.length; i++) {
+      const row = m[i];
+      const b = row[c];
+      if (i === r || b === 0) continue;
+      let g = 0;
+      for (let j = 0; j < columns; j++) {
+        const x = a * row[j] - b * pivot[j];
+        // each product below 2^53 is exact (and one that is not computes as 2^53 or more)
+        if (!(Math.abs(a * row[j]) < EXACT && Math.abs(b * pivot[j]) < EXACT && Math.abs(x) < SMALL_ENTRY)) return null;
+        row[j] = x;
+        g = wholeGcd(g, x < 0 ? -x : x);
+      }
+      if (g > 1) for (let j = 0; j < columns; j++) row[j] /= g;
+    }
+    pivots.push(c);
+    r++;
+  }
+  const free: number[] = [];
+  for (let c = 0; c < columns; c++) if (!pivots.includes(c)) free.push(c);
+  return free.map((f) => {
+    const v = new Array<Rational>(columns).fill(Rational.ZERO);
+    v[f] = Rational.ONE;
+    pivots.forEach((pc, i) => {
+      const x = m[i][f];
+      v[pc] = x === 0 ? Rational.ZERO : Rational.of(BigInt(-x), BigInt(m[i][pc]));
+    });
+    return v;
+  });
+}
+
+function wholeGcd(a: number, b: number): number {
+  while (b !== 0) [a, b] = [b, a % b];
+  return a;
 }
 
 /**

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { Decimal } from '../../src/exact/decimal.js';
-import { Rational } from '../../src/reactions/rational.js';
+import { nullSpace, Rational, rationalNullSpace, wholeNullSpace } from '../../src/reactions/rational.js';
 
 describe('whole numbers as fractions', () => {
   it('the short way for whole numbers agrees with the fraction of the decimal', () => {
@@ -40,5 +40,33 @@ describe('a fraction as the nearest float', () => {
         return r.toNumber() === big(r.num, r.den);
       }),
     );
+  });
+});
+
+describe('the null space on plain numbers', () => {
+  const r = (n: number | bigint) => Rational.of(BigInt(n));
+  const text = (b: Rational[][] | null) => b?.map((v) => v.map(String));
+  it('is the null space over the fractions, for small and for large whole entries', () => {
+    const entry = fc.oneof({ weight: 6, arbitrary: fc.integer({ min: -12, max: 12 }) }, { weight: 1, arbitrary: fc.integer({ min: -(2 ** 40), max: 2 ** 40 }) }, { weight: 3, arbitrary: fc.constant(0) });
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 7 }), fc.integer({ min: 1, max: 9 }), fc.array(entry, { minLength: 63, maxLength: 63 }), (rows, cols, xs) => {
+        const m = Array.from({ length: rows }, (_, i) => Array.from({ length: cols }, (_, j) => r(xs[i * 9 + j])));
+        const whole = wholeNullSpace(m, cols);
+        // entries past 2^31 take the fractions' route
+        if (m.some((row) => row.some((x) => x.num >= 2n ** 31n || x.num <= -(2n ** 31n)))) expect(whole).toBeNull();
+        if (whole !== null) expect(text(whole)).toEqual(text(rationalNullSpace(m, cols)));
+        expect(text(nullSpace(m, cols))).toEqual(text(rationalNullSpace(m, cols)));
+      }),
+      { numRuns: 3000 },
+    );
+  });
+  it('leaves a matrix with a fraction, or one whose elimination grows past the safe integers, to the fractions', () => {
+    expect(wholeNullSpace([[Rational.of(1n, 2n), r(1)]], 2)).toBeNull();
+    // entries near 2^30: the first elimination step multiplies two of them
+    const big = 2 ** 30 - 3;
+    expect(wholeNullSpace([[r(big), r(big - 1), r(5)], [r(big - 7), r(3), r(big)]], 3)).toBeNull();
+    expect(text(nullSpace([[r(big), r(big - 1), r(5)], [r(big - 7), r(3), r(big)]], 3))).toEqual(text(rationalNullSpace([[r(big), r(big - 1), r(5)], [r(big - 7), r(3), r(big)]], 3)));
+    // source: from memory (2 H2 + O2 -> 2 H2O: rows H and O, the products negative)
+    expect(text(nullSpace([[r(2), r(0), r(-2)], [r(0), r(2), r(-1)]], 3))).toEqual([['1', '1/2', '1']]);
   });
 });
