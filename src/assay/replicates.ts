@@ -11,6 +11,7 @@ import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
 import { measureAs } from '../calc/measure.js';
 import { Decimal } from '../exact/decimal.js';
+import { sqrtDecimal } from '../exact/sqrt.js';
 import { dividedBy, exact, sumMeasured, type Measured } from '../sigfig/measured.js';
 import type { Quantity } from '../sigfig/quantity.js';
 import { roundToPosition, roundToSigFigs, type RoundingMode } from '../sigfig/round.js';
@@ -126,7 +127,7 @@ export function replicates(text: string, o: ReplicateOptions = {}): ReplicateRes
   const mean = dividedBy(sumMeasured(inUnit), exact(n));
   let ss = new Decimal(0);
   for (const v of inUnit) ss = ss.plus(v.value.minus(mean.value).pow(2));
-  const sd = ss.div(n - 1).sqrt();
+  const sd = sqrtDecimal(ss.div(n - 1));
   if (mean.value.isZero()) throw fail({ code: 'BAD_MEASUREMENT', message: 'the mean is zero: a relative standard deviation has no meaning' }, text);
   const rsdPercent = sd.div(mean.value.abs()).times(100);
   const df = n - 1;

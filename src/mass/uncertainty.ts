@@ -12,6 +12,7 @@
 import { fail } from '../errors/pondus-error.js';
 import { typedIssue } from '../errors/message.js';
 import { Decimal } from '../exact/decimal.js';
+import { sqrtDecimal } from '../exact/sqrt.js';
 import { toDecimal } from '../formula/amount.js';
 import type { MassDetail } from './formula-mass.js';
 
@@ -66,7 +67,7 @@ export function molarMassUncertainty(r: MassDetail): MolarMassUncertainty {
     return { label: c.label, value, u, contribution: n.times(u) };
   });
   const value = terms.reduce((s, t, i) => s.plus(toDecimal(r.contributions[i].count).times(t.value)), new Decimal(0));
-  const standardUncertainty = terms.reduce((s, t) => s.plus(t.contribution.pow(2)), new Decimal(0)).sqrt();
+  const standardUncertainty = sqrtDecimal(terms.reduce((s, t) => s.plus(t.contribution.pow(2)), new Decimal(0)));
   return { value, standardUncertainty, terms };
 }
 

@@ -11,6 +11,7 @@ import { fail } from '../errors/pondus-error.js';
 import { MASS_CONCENTRATION, MOLARITY, PURE, VOLUME } from '../calc/measure.js';
 import { readPositive } from '../assay/read-quantity.js';
 import { Decimal } from '../exact/decimal.js';
+import { sqrtDecimal } from '../exact/sqrt.js';
 import { exact } from '../sigfig/measured.js';
 import { divide, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
 import { inputFigures, instruction, fewFiguresNote, type InputFigures, type Instruction } from '../sigfig/instruction.js';
@@ -124,7 +125,7 @@ export function planSteps(factor: Decimal, maxStep: Decimal): Decimal[] {
   // a last step below 1:2 is hardly a dilution: share the last two steps more evenly
   if (steps.length > 1 && rest.lt(2)) {
     const p = steps[steps.length - 2].times(rest);
-    let a = roundAtLeast(p.sqrt());
+    let a = roundAtLeast(sqrtDecimal(p));
     if (a.gt(maxStep)) a = roundAtMost(maxStep);
     steps.splice(steps.length - 2, 2, a, p.div(a));
   }

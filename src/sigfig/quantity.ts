@@ -5,6 +5,7 @@
  * same input used twice handled exactly through its sensitivity).
  */
 import { Decimal } from '../exact/decimal.js';
+import { sqrtDecimal } from '../exact/sqrt.js';
 import { fail } from '../errors/pondus-error.js';
 import { typedIssue } from '../errors/message.js';
 import { dividedBy, minus as minusM, plus as plusM, sigFigsOf, times as timesM, withSigFigs, type Measured } from './measured.js';
@@ -190,5 +191,5 @@ export function standardUncertainty(q: Quantity, inputs: Map<number, Decimal>): 
       s = s.plus(x.times(x));
     }
   }
-  return s.sqrt();
+  return sqrtDecimal(s);
 }
