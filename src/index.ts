@@ -260,6 +260,11 @@ export const resultJson = /* @__PURE__ */ guarded('resultJson', resultJson_, ['q
 export { type SaltForm, type MetalSaltReading } from './preparation/salt-factor.js';
 export { CONCENTRATED_CAUTION } from './preparation/caution.js';
 export { type ConcentratedResult, type ConcentratedOptions } from './preparation/concentrated.js';
+import { concentratedJson as concentratedJson_, solutionJson as solutionJson_, substituteJson as substituteJson_ } from './preparation/prepare-json.js';
+export type { ConcentratedJson, SolutionJson, SubstituteJson } from './preparation/prepare-json.js';
+export const solutionJson = /* @__PURE__ */ guarded('solutionJson', solutionJson_, ['solutionResult', 'object', 'rounding?']);
+export const substituteJson = /* @__PURE__ */ guarded('substituteJson', substituteJson_, ['substituteResult', 'text', 'rounding?']);
+export const concentratedJson = /* @__PURE__ */ guarded('concentratedJson', concentratedJson_, ['concentratedResult', 'object', 'rounding?']);
 import { concentratedReagent as concentratedReagent_ } from './preparation/concentrated.js';
 export const concentratedReagent = /* @__PURE__ */ guarded('concentratedReagent', concentratedReagent_, ['text', 'options']);
 export const safeConcentratedReagent = /* @__PURE__ */ safely(concentratedReagent);

@@ -4,12 +4,12 @@ import type { Command } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
 import { readKeyValuePair } from '../../key-values/read-key-values.js';
 import { BENCH_CAUTION } from '../../preparation/caution.js';
-import { displayInstruction, displayResult, instructionJson, massUnitFor, resultJson, volumeUnitFor, type Instruction } from '../../sigfig/instruction.js';
+import { displayInstruction, displayResult, massUnitFor, volumeUnitFor, type Instruction } from '../../sigfig/instruction.js';
 import { prepareSolution, type PurityBasis, type SolutionResult } from '../../preparation/solution.js';
+import { concentratedJson, solutionJson, substituteJson } from '../../preparation/prepare-json.js';
 import { substituteForm, type SubstituteResult } from '../../preparation/substitute.js';
 import { concentratedReagent, type ConcentratedResult } from '../../preparation/concentrated.js';
 import { CONCENTRATED_CAUTION } from '../../preparation/caution.js';
-import type { RoundingMode } from '../../sigfig/round.js';
 import { displayMolarMass } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
 import { conflict, given, roundingOf, type OutputOptions, type RoundingOptions } from './common.js';
@@ -62,61 +62,6 @@ export function checkPrepareOptions(o: PrepareCliOptions): void {
   if (o.purityBasis === 'part' && o.as === undefined) throw fail({ code: 'USAGE', message: "--purity-basis part needs --as: the assay is of that part (e.g. --as C17H19NO3 for a potency 'as base')" });
 }
 
-function solutionJson(r: SolutionResult, o: PrepareCliOptions, rounding: RoundingMode) {
-  const ins = (i: Instruction | null, unit: string) => (i ? instructionJson(i, unit, rounding) : null);
-  return {
-    input: r.reagent.input,
-    formula: r.reagent.formula,
-    molarMass: r.reagent.molarMass.toNumber(),
-    target: r.target.written,
-    targetHill: r.target.formula,
-    concentration: o.concentration?.trim() ?? null,
-    volume: o.volume?.trim() ?? null,
-    purity: r.purity ? displayResult(r.purity, '%', rounding).text : null,
-    purityBasis: r.purityBasis,
-    moles: ins(r.moles, 'mol'),
-    mass: r.mass ? instructionJson(r.mass, massUnitFor(r.mass.quantity), rounding) : null,
-    weighed: o.weighed?.trim() ?? null,
-    made: r.made ? resultJson(r.made, r.unit, rounding) : null,
-    notes: notesJson(r.notes),
-    caution: BENCH_CAUTION,
-  };
-}
-
-function substituteJson(r: SubstituteResult, o: PrepareCliOptions, rounding: RoundingMode) {
-  return {
-    input: r.use.input,
-    formula: r.use.formula,
-    instead: r.instead.formula,
-    asked: readKeyValuePair(o.replace!)!.value,
-    purity: r.purity ? displayResult(r.purity, '%', rounding).text : null,
-    moles: instructionJson(r.moles, 'mol', rounding),
-    mass: instructionJson(r.mass, massUnitFor(r.mass.quantity), rounding),
-    notes: notesJson(r.notes),
-    caution: BENCH_CAUTION,
-  };
-}
-
-function concentratedJson(r: ConcentratedResult, o: PrepareCliOptions, rounding: RoundingMode) {
-  return {
-    input: r.reagent.input,
-    formula: r.reagent.formula,
-    molarMass: r.reagent.molarMass.toNumber(),
-    form: 'concentrated',
-    fraction: o.fraction!.trim(),
-    density: o.density?.trim() ?? `${r.grade!.density} g/mL`,
-    densitySource: r.densitySource,
-    molarity: { ...resultJson(r.molarity, 'M', rounding), textbookSigFigs: r.textbookSigFigs },
-    massConcentration: resultJson(r.massConcentration, 'g/L', rounding),
-    concentration: o.concentration?.trim() ?? null,
-    volume: o.volume?.trim() ?? null,
-    take: r.take ? instructionJson(r.take, volumeUnitFor(r.take.quantity, r.volume!.unit), rounding) : null,
-    factor: r.factor ? r.factor.toNumber() : null,
-    notes: notesJson(r.notes),
-    caution: CONCENTRATED_CAUTION,
-  };
-}
-
 /** The presenter for `pondus prepare` (a prep sheet with --sheet). */
 export function preparePresenter(o: PrepareCliOptions): Presenter<Prepared> | Presenter<PrepRowResult> {
   if (o.sheet !== undefined) {
@@ -146,7 +91,7 @@ function oneSolutionPresenter(o: PrepareCliOptions): Presenter<Prepared> {
   };
   return {
     compute,
-    json: (p) => (p.kind === 'solution' ? solutionJson(p.r, o, rounding) : p.kind === 'concentrated' ? concentratedJson(p.r, o, rounding) : substituteJson(p.r, o, rounding)),
+    json: (p) => (p.kind === 'solution' ? solutionJson(p.r, o, rounding) : p.kind === 'concentrated' ? concentratedJson(p.r, { ...o, fraction: o.fraction! }, rounding) : substituteJson(p.r, readKeyValuePair(o.replace!)!.value, rounding)),
     columns: concentrated ? ['input', 'formula', 'fraction', 'density_g_per_mL', 'molarity_M', 'molarity', 'take_L', 'take'] : ['input', 'formula', 'mass', 'display', 'made'],
     cells: (p) =>
       p.kind === 'concentrated'
