@@ -5,7 +5,7 @@
  */
 import type { Note } from '../errors/issue.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
-import type { Quantity } from '../sigfig/quantity.js';
+import { copyQuantity, type Quantity } from '../sigfig/quantity.js';
 import { baseUnitText, dimsName, sameDims, type Dims } from '../sigfig/units.js';
 import { evaluate } from './evaluate.js';
 import { parseExpression } from './parse-expression.js';
@@ -43,7 +43,7 @@ export function measure(text: string, what = 'the quantity', notes?: Note[]): Qu
   }
   for (const n of read.notes) notes?.push({ code: 'MEASUREMENT', message: `${what}: ${n.message}` });
   // a copy: callers may set the unit to show, or add sensitivities
-  return { ...read.result, grad: new Map(read.result.grad) };
+  return copyQuantity(read.result);
 }
 
 /**
