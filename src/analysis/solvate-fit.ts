@@ -191,7 +191,8 @@ export function solvateSearch(found: number[], base: MassVector, partners: MassV
   if (rows > MAX_PAIR_ROWS) {
     notes.push({
       code: 'PAIRS_NOT_SEARCHED',
-      message: `two-partner fits were not searched: ${pairs.length} pairs of partners over their amount grids are ${rows.toLocaleString('en-US')} rows, more than the ${MAX_PAIR_ROWS.toLocaleString('en-US')} searched within about a second; only fits with one partner are listed. Give fewer solvents or a coarser --step`,
+      message: `two-partner fits were not searched: ${pairs.length} pairs of partners over their amount grids are ${rows.toLocaleString('en-US')} rows, more than the ${MAX_PAIR_ROWS.toLocaleString('en-US')} searched within about a second; only fits with one partner are listed. Give fewer solvents or a coarser \`step\``,
+      options: ['step'],
     });
   } else {
     for (const [j, k] of pairs) searchPair(j, k);

@@ -48,7 +48,7 @@ export function reportOnBasis(value: Quantity, from: SampleBasis, basis: SampleB
   if (basis !== from) {
     conversion = convertSampleBasis(value, from, basis, { loss: options.loss, water: options.water, solvent: options.solvent });
     notes.push(...conversion.notes);
-    if (options.inferred) notes.push({ code: 'BASIS_INFERRED', message: `reported on the ${basis} basis, the one the content given implies; give --on to choose` });
+    if (options.inferred) notes.push({ code: 'BASIS_INFERRED', message: `reported on the ${basis} basis, the one the content given implies; give \`on\` to choose`, options: ['on'] });
     v = conversion.converted;
   }
   let spec: SpecificationCheck | null = null;

@@ -70,7 +70,7 @@ export function standardise(standardText: string, o: StandardiseOptions): Standa
     if (purity.value.gt(1)) throw fail({ code: 'BAD_AMOUNT', message: `the purity must be at most 100 %: '${o.purity}'` }, o.purity);
     notes.push({ code: 'PURITY_APPLIED', message: `the standard's assay ${displayQuantity(purity, '%').text} applied to its mass` });
   } else {
-    notes.push({ code: 'PURITY_ASSUMED', message: 'the standard is taken as 100 % pure; give --purity with its certified assay' });
+    notes.push({ code: 'PURITY_ASSUMED', message: 'the standard is taken as 100 % pure; give `purity` with its certified assay', options: ['purity'] });
   }
   const ratio = readMoleRatio(o.ratio, standard.input, 'titrant', notes);
   let netTitre = titre;

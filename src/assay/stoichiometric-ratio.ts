@@ -27,15 +27,15 @@ export interface MoleRatio {
  * @param first - what the first number counts (the analyte), for messages.
  * @param second - what the second number counts (the titrant), for messages.
  * @param notes - where the note of the ratio given or assumed is added.
- * @param option - the option named in the notes.
+ * @param option - the option named in the notes, by its key in the options object (`ratio`, `reagentRatio`).
  * @returns the two sides and the text.
  * @throws PondusError: BAD_OPTION for a ratio not written A:B or with a side that is not positive; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * readMoleRatio('1:2', 'Na2CO3', 'HCl', []).factor.value.toString() // '0.5'
  */
-export function readMoleRatio(text: string | undefined, first: string, second: string, notes: Note[], option = '--ratio'): MoleRatio {
+export function readMoleRatio(text: string | undefined, first: string, second: string, notes: Note[], option = 'ratio'): MoleRatio {
   if (text === undefined) {
-    notes.push({ code: 'RATIO_ASSUMED', message: `1:1 mole ratio assumed between ${first} and ${second}; give ${option} if the reaction is otherwise` });
+    notes.push({ code: 'RATIO_ASSUMED', message: `1:1 mole ratio assumed between ${first} and ${second}; give \`${option}\` if the reaction is otherwise`, options: [option] });
     return { first: 1, second: 1, factor: quantity(exact(1), null), text: '1:1' };
   }
   const m = /^\s*(\d+(?:\.\d+)?)\s*:\s*(\d+(?:\.\d+)?)\s*$/.exec(text);

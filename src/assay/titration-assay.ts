@@ -103,7 +103,7 @@ export function titrationAssay(analyteText: string, o: TitrationAssayOptions): T
     moles = multiply(multiply(titrant, netTitre), ratio.factor);
   } else {
     ratio = readMoleRatio(o.ratio, analyte.input, 'reagent', notes);
-    reagentRatio = readMoleRatio(o.reagentRatio, 'reagent', 'titrant', notes, '--reagent-ratio');
+    reagentRatio = readMoleRatio(o.reagentRatio, 'reagent', 'titrant', notes, 'reagentRatio');
     if (o.added !== undefined && blank) throw fail({ code: 'USAGE', message: 'a back-titration takes either `added` (the excess reagent) or `blank` (the titre of the reagent alone), not both', options: ['added', 'blank'] });
     if (o.added !== undefined) {
       added = readPositive(o.added, [AMOUNT], 'the reagent added', notes);

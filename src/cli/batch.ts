@@ -2,7 +2,9 @@
  * Drives a command over its inputs: one result or one error per input, in
  * order, written as they come; returns how many failed.
  */
+import { withNaming } from '../errors/message.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
+import { FLAG_NAMING } from '../errors/render.js';
 import type { InputItem } from './input/inputs.js';
 import type { OutputFormat } from './output/format.js';
 import type { Presenter } from './output/presenter.js';
@@ -28,7 +30,9 @@ export interface BatchSummary {
 }
 
 /**
- * Runs a presenter over batches of inputs, writing each result as it comes.
+ * Runs a presenter over batches of inputs, writing each result as it comes. The results' notes
+ * are written with the command line's naming (flags and commands, {@link FLAG_NAMING}), by the
+ * writers and by the library serialisers they call alike.
  *
  * @example
  * await runBatch(massPresenter({}), inputBatches(['H2O'], process.stdin), 'json', io, false)
@@ -37,12 +41,14 @@ export async function runBatch<R>(p: Presenter<R>, batches: AsyncIterable<InputI
   const writer = createWriter(format, p, { ...io, numbered });
   const summary: BatchSummary = { total: 0, failed: 0, failedLines: [], tallied: 0 };
   for await (const batch of batches) {
-    processItems(p, batch, writer, summary);
-    writer.endBatch(false);
+    withNaming(FLAG_NAMING, () => {
+      processItems(p, batch, writer, summary);
+      writer.endBatch(false);
+    });
     await io.out.flush();
     await io.err.flush();
   }
-  writer.endBatch(true);
+  withNaming(FLAG_NAMING, () => writer.endBatch(true));
   return summary;
 }
 

@@ -134,7 +134,7 @@ export function compositionCsvRow(r: CompositionResult, columns: readonly string
   }
   if (used < r.elements.length) {
     const missing = r.elements.filter((e) => !columns.includes(`${e.symbol}_percent`));
-    notes.push({ code: 'NO_COLUMN', message: `no column for ${missing.map((e) => `${e.symbol} (${e.massPercent} %)`).join(', ')}: the element columns come from the first block of rows; --long writes one row per element` });
+    notes.push({ code: 'NO_COLUMN', message: `no column for ${missing.map((e) => `${e.symbol} (${e.massPercent} %)`).join(', ')}: the element columns come from the first block of rows; \`compositionCsvLongRows\` writes one row per element`, functions: ['compositionCsvLongRows'] });
   }
   if (columns.includes('part')) {
     cells.push(r.part ? r.part.part : null, r.part ? r.part.count : null, r.part ? r.part.massPercent : null);

@@ -6,14 +6,16 @@
  */
 import { notesJson } from '../errors/note-json.js';
 import type { Note } from '../errors/issue.js';
-import { messageFor } from '../errors/message.js';
+import { LIBRARY_NAMING, messageFor, type OptionNaming } from '../errors/message.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
-import { FLAG_NAMING } from '../errors/render.js';
-import type { OptionNaming } from '../errors/message.js';
 
-/** Flags as the command line shows them, but the tolerance, which belongs to the search from percentages. */
+/**
+ * The library's naming, but the tolerance, which belongs to the search from percentages: the note
+ * names that search and its option (and the command line its command and flag).
+ */
 const COMBUSTION_NAMING: OptionNaming = {
-  option: (name, value) => (name === 'tolerance' ? 'tolerance (search the percentages above with empirical and --tolerance)' : FLAG_NAMING.option(name, value)),
+  option: (name, value) => (name === 'tolerance' ? 'tolerance (search the percentages above with `empirical` and `tolerance`)' : LIBRARY_NAMING.option(name, value)),
+  command: LIBRARY_NAMING.command,
 };
 import { Decimal } from '../exact/decimal.js';
 import { MASS, measureAs } from '../calc/measure.js';
@@ -192,9 +194,9 @@ export function combustionDetail(options: CombustionOptions): CombustionDetail {
     s = searchFormula(measurements);
   } catch (e) {
     if (!(e instanceof PondusError) || e.first.code !== 'NO_FORMULA_FITS') throw e;
-    // a note has no naming of its own: it keeps the flag words it has always had, but combustion
-    // has no tolerance of its own: the percentages it reports can be searched with one
-    notes.push({ code: 'NO_FORMULA_FITS', message: messageFor(e.first, COMBUSTION_NAMING) });
+    // combustion has no tolerance of its own: the percentages it reports can be searched with one
+    const named = e.first.options?.includes('tolerance') ? { options: e.first.options, functions: ['empirical' as const] } : {};
+    notes.push({ code: 'NO_FORMULA_FITS', message: messageFor(e.first, COMBUSTION_NAMING), ...named });
     return { input: options.sample, sample, elements, empirical: null, hill: null, fit: null, alternatives: [], notes };
   }
   return { input: options.sample, sample, elements, empirical: s.best.formula, hill: s.best.hill, fit: s.best, alternatives: s.alternatives, notes };

@@ -132,7 +132,9 @@ export function empirical(input: string, options: EmpiricalOptions = {}): Empiri
     if (tied.length > 1) {
       notes.push({
         code: 'DATA_CANNOT_DECIDE',
-        message: `${tied.length} molecular formulas of ${window.text} fit the data about equally well (${tied.slice(0, 4).map((f) => f.formula).join(', ')}${tied.length > 4 ? ', …' : ''}); the simplest is shown. The analysis cannot decide between them; an accurate mass can: pondus candidates M/Z --ion '[M+H]+' --found '${hillOrder(data.symbols).map((s) => `${s}=${percents[s].toFixed(2)}`).join(' ')}'`,
+        message: `${tied.length} molecular formulas of ${window.text} fit the data about equally well (${tied.slice(0, 4).map((f) => f.formula).join(', ')}${tied.length > 4 ? ', …' : ''}); the simplest is shown. The analysis cannot decide between them; an accurate mass can: \`candidateFormulas\` M/Z \`ion: '[M+H]+'\` \`found: '${hillOrder(data.symbols).map((s) => `${s}=${percents[s].toFixed(2)}`).join(' ')}'\``,
+        options: ['ion', 'found'],
+        functions: ['candidateFormulas'],
       });
     }
   } else {

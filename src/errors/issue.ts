@@ -74,7 +74,18 @@ interface IssueBase {
    * BAD_OPTION or USAGE issue is about.
    */
   options?: string[];
+  /**
+   * The library functions the message or hint names, written `` `diluteByMass` `` in the text; the
+   * command line names its command instead (`dilute --mass`, see `FLAG_NAMING`).
+   */
+  functions?: LibraryFunction[];
 }
+
+/**
+ * The library functions a message or note may point to (for another way to reach the result), each
+ * with a command-line form in `FLAG_NAMING`.
+ */
+export type LibraryFunction = 'candidateFormulas' | 'compositionCsvLongRows' | 'concentratedReagent' | 'diluteByMass' | 'dilutionSeries' | 'empirical';
 
 /**
  * The machine fields of each code that has them: what a script may read without parsing the
@@ -109,10 +120,12 @@ export interface IssueFields {
   /**
    * Two quantities of different dimensions: added or subtracted (`first` and `second` as written),
    * a result asked for in a unit of another dimension (`convert`: `first` null, `second` the unit),
-   * or a stock and a target concentration of different kinds (`dilute`: `first` 'stock', `second`
-   * 'target'). Each dimension is in the base units pondus writes it in (`g`, `M`, `g/L`), null for a pure number.
+   * a stock and a target concentration of different kinds (`dilute`: `first` 'stock', `second`
+   * 'target'), or strengths to mix by alligation in units of different kinds (`mix`: `first`
+   * 'target', `second` the strength that differs, 'higher' or 'lower'). Each dimension is in the
+   * base units pondus writes it in (`g`, `M`, `g/L`), null for a pure number.
    */
-  INCOMPATIBLE_UNITS: { operation: 'add' | 'subtract' | 'convert' | 'dilute'; first: string | null; firstDimension: string | null; second: string; secondDimension: string | null };
+  INCOMPATIBLE_UNITS: { operation: 'add' | 'subtract' | 'convert' | 'dilute' | 'mix'; first: string | null; firstDimension: string | null; second: string; secondDimension: string | null };
   /**
    * A number beyond what pondus reads or reports: `value` as written (or the result, to 3 figures),
    * `exponentLimit` the largest power of ten in size (10^±limit), `reading` what was read: an
@@ -341,6 +354,15 @@ export type NoteCode =
 /** A remark attached to a successful result (an assumption made, a value flagged). */
 export interface Note {
   code: NoteCode;
+  /** The remark in words, naming options and functions as the library does (see `options`). */
   message: string;
   column?: number;
+  /**
+   * The library options the message names, by their names in the options objects (`density`,
+   * `basis`). The text writes each as `` `name` `` (or `` `name: value` ``); the command line shows
+   * its flag instead (see `noteText`).
+   */
+  options?: string[];
+  /** The library functions the message names (`` `dilutionSeries` ``); the command line names its command instead. */
+  functions?: LibraryFunction[];
 }

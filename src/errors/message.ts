@@ -1,22 +1,69 @@
 /**
- * The one place an issue's words are made: {@link messageFor} renders the message of a typed
- * issue from its machine fields, and names the options it mentions the way the reader calls them
- * (the library by option name, the command line by flag). It knows nothing of any flag itself.
+ * The one place the words of issues and notes are made: {@link messageFor} renders the message of
+ * a typed issue from its machine fields, and it, {@link hintFor} and {@link noteText} name the
+ * options and functions they mention the way the reader calls them (the library by option and
+ * function name, the command line by flag and command). It knows nothing of any flag itself.
  */
-import { hasFields, type Issue, type IssueFields, type TypedCode, type TypedIssue } from './issue.js';
+import { hasFields, type Issue, type IssueFields, type LibraryFunction, type TypedCode, type TypedIssue } from './issue.js';
 
 /**
- * How the options an issue mentions are named. The library names an option as its options object
- * does, in backquotes (`` `abbreviations: true` ``, `` `density` ``); the command line passes its
- * own naming, which turns the same into its flag.
+ * How the options and functions an issue or note mentions are named. The library names an option
+ * as its options object does, in backquotes (`` `abbreviations: true` ``, `` `density` ``), and a
+ * function by its name (`` `diluteByMass` ``); the command line passes its own naming, which turns
+ * the same into its flag and its command.
  */
 export interface OptionNaming {
   /** The words for option `name`, given with `value` (or none) in the text. */
   option(name: string, value: string | undefined): string;
+  /** The words for the library function `name` (on the command line, the command that runs it). */
+  command(name: LibraryFunction): string;
 }
 
-/** The library's own naming: the option as its options object spells it, in backquotes. */
-export const LIBRARY_NAMING: OptionNaming = { option: (name, value) => (value === undefined ? `\`${name}\`` : `\`${name}: ${value}\``) };
+/** The library's own naming: the option as its options object spells it, and the function, in backquotes. */
+export const LIBRARY_NAMING: OptionNaming = {
+  option: (name, value) => (value === undefined ? `\`${name}\`` : `\`${name}: ${value}\``),
+  command: (name) => `\`${name}\``,
+};
+
+/** What names options and functions in its text: an issue or a note. */
+interface Named {
+  options?: readonly string[];
+  functions?: readonly LibraryFunction[];
+}
+
+/** The naming notes are worded in when they are written out; the library's own but within {@link withNaming}. */
+let notesNaming: OptionNaming = LIBRARY_NAMING;
+
+/**
+ * Runs `run` with the notes written out in `naming`: {@link noteText} and the serialisers' notes
+ * (`notesJson`) name options and functions so until `run` returns. A result keeps the library's
+ * words in its notes; the command line writes its output within `withNaming(FLAG_NAMING, …)`, so
+ * that its text, JSON and CSV show flags.
+ *
+ * @example
+ * withNaming({ option: (n) => `--${n}`, command: (f) => f }, () => noteText({ message: 'give `density`', options: ['density'] })) // 'give --density'
+ */
+export function withNaming<T>(naming: OptionNaming, run: () => T): T {
+  const was = notesNaming;
+  notesNaming = naming;
+  try {
+    return run();
+  } finally {
+    notesNaming = was;
+  }
+}
+
+/**
+ * A note's words with the options and functions it names (`note.options`, `note.functions`) named
+ * by `naming`: by default the naming in force (the library's own, or the one {@link withNaming} gives).
+ *
+ * @example
+ * noteText({ message: 'the label decides (give `density`)', options: ['density'] })                                           // 'the label decides (give `density`)'
+ * noteText({ message: 'the label decides (give `density`)', options: ['density'] }, { option: (n) => `--${n}`, command: (f) => f }) // 'the label decides (give --density)'
+ */
+export function noteText(note: Named & { message: string }, naming: OptionNaming = notesNaming): string {
+  return nameOptions(note.message, note, naming);
+}
 
 const OPEN: Record<string, string> = { '(': ')', '[': ']', '{': '}' };
 const CLOSE: Record<string, string> = { ')': '(', ']': '[', '}': '{' };
@@ -88,6 +135,8 @@ const MESSAGES: { [C in TypedCode]: Render<C> } = {
         return `cannot subtract ${f.second} (${dim(f.secondDimension)}) from ${f.first} (${dim(f.firstDimension)})`;
       case 'dilute':
         return `the ${f.first} and ${f.second} concentrations must be of the same kind (both molar, both mass per volume, or both %)`;
+      case 'mix':
+        return 'the target, higher and lower strengths must be given in the same kind of unit (all %, all mg/mL, …)';
       default:
         return `the result is ${f.firstDimension ?? 'a pure number'}, not convertible to ${f.second}`;
     }
@@ -144,17 +193,21 @@ export function messageFor(issue: Issue, naming: OptionNaming = LIBRARY_NAMING):
  * An issue's hint with the options it names named by `naming`, or undefined when it has none.
  *
  * @example
- * hintFor({ code: 'BAD_OPTION', message: 'm', hint: 'give `density`', options: ['density'] }, { option: (n) => `--${n}` }) // 'give --density'
+ * hintFor({ code: 'BAD_OPTION', message: 'm', hint: 'give `density`', options: ['density'] }, { option: (n) => `--${n}`, command: (f) => f }) // 'give --density'
  */
 export function hintFor(issue: Issue, naming: OptionNaming = LIBRARY_NAMING): string | undefined {
   return issue.hint === undefined ? undefined : nameOptions(issue.hint, issue, naming);
 }
 
-/** Replaces each `` `name` `` or `` `name: value` `` of the issue's options by the naming's words for it. */
-function nameOptions(text: string, issue: Issue, naming: OptionNaming): string {
-  if (!issue.options || naming === LIBRARY_NAMING) return text;
+/**
+ * Replaces each `` `fn` `` of the functions named and each `` `name` `` or `` `name: value` `` of
+ * the options named by the naming's words for it.
+ */
+function nameOptions(text: string, named: Named, naming: OptionNaming): string {
+  if ((!named.options && !named.functions) || naming === LIBRARY_NAMING) return text;
   let out = text;
-  for (const name of issue.options) {
+  for (const fn of named.functions ?? []) out = out.replaceAll(`\`${fn}\``, () => naming.command(fn));
+  for (const name of named.options ?? []) {
     out = out.replace(new RegExp(`\`${name.replace(/[^A-Za-z0-9]/g, '')}(?:: ([^\`]*))?\``, 'g'), (_m, value: string | undefined) => naming.option(name, value));
   }
   return out;

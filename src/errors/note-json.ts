@@ -1,6 +1,8 @@
 /**
  * Notes as JSON rows carry them: the code and the message, without the column.
  */
+import type { LibraryFunction } from './issue.js';
+import { noteText } from './message.js';
 
 /** A note in a JSON row. */
 export interface NoteJson {
@@ -9,7 +11,9 @@ export interface NoteJson {
 }
 
 /**
- * Notes as JSON rows carry them: code and message.
+ * Notes as JSON rows carry them: code and message, the options and functions a message names
+ * named as {@link noteText} names them (the library's own words, or the command line's flags while
+ * it writes its output).
  *
  * @param notes - the notes of a result.
  * @returns each note as `{code, message}`, in order.
@@ -17,6 +21,6 @@ export interface NoteJson {
  * @example
  * notesJson([{ code: 'STATE_SYMBOL', message: 'set aside', column: 4 }]) // [{ code: 'STATE_SYMBOL', message: 'set aside' }]
  */
-export function notesJson(notes: readonly { code: string; message: string }[]): NoteJson[] {
-  return notes.map((n) => ({ code: n.code, message: n.message }));
+export function notesJson(notes: readonly { code: string; message: string; options?: readonly string[]; functions?: readonly LibraryFunction[] }[]): NoteJson[] {
+  return notes.map((n) => ({ code: n.code, message: noteText(n) }));
 }

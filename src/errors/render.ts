@@ -1,19 +1,32 @@
-import type { Issue } from './issue.js';
+import type { Issue, LibraryFunction } from './issue.js';
 import { hintFor, LIBRARY_NAMING, messageFor, type OptionNaming } from './message.js';
 import { PondusError } from './pondus-error.js';
 
 /** Options whose flag is not their name in kebab case: `amounts` (a list) is given one `--amount` at a time. */
 const FLAGS: Record<string, string> = { amounts: 'amount' };
 
+/** What does on the command line what each library function does (its command, or for the long CSV form a flag), as a message names it. */
+const COMMANDS: { [F in LibraryFunction]: string } = {
+  candidateFormulas: 'pondus candidates',
+  compositionCsvLongRows: '--long',
+  concentratedReagent: 'pondus prepare',
+  diluteByMass: 'dilute --mass',
+  dilutionSeries: 'dilute --series',
+  empirical: 'empirical',
+};
+
 /**
  * The command line's naming of options: the flag (`` `molarMass` `` → `--molar-mass`,
- * `` `abbreviations: true` `` → `--abbreviations`, `` `density: 1.19 g/mL` `` → `--density 1.19 g/mL`).
+ * `` `abbreviations: true` `` → `--abbreviations`, `` `density: 1.19 g/mL` `` → `--density 1.19 g/mL`);
+ * and of library functions: the command (`` `diluteByMass` `` → `dilute --mass`).
  *
  * @example
  * FLAG_NAMING.option('molarMass', undefined) // '--molar-mass'
+ * FLAG_NAMING.command('dilutionSeries')      // 'dilute --series'
  */
 export const FLAG_NAMING: OptionNaming = {
   option: (name, value) => `--${FLAGS[name] ?? name.replace(/[A-Z]/g, (c) => `-${c.toLowerCase()}`)}${value === undefined || value === 'true' ? '' : ` ${value}`}`,
+  command: (name) => COMMANDS[name],
 };
 
 /** Options for {@link renderError}. */

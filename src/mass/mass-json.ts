@@ -4,6 +4,8 @@
  * adds the input's line number); tests/mass/serialisers.test.ts holds the line to
  * JSON.stringify of the object.
  */
+import type { LibraryFunction } from '../errors/issue.js';
+import { noteText as noteWords } from '../errors/message.js';
 import { notesJson, type NoteJson } from '../errors/note-json.js';
 import { jsonNumber } from '../exact/json-number.js';
 import type { MassResult } from './formula-mass.js';
@@ -97,7 +99,7 @@ export function jsonString(s: string): string {
  * @example
  * notesLine([]) // '[]'
  */
-export function notesLine(notes: readonly { code: string; message: string }[]): string {
+export function notesLine(notes: readonly { code: string; message: string; options?: readonly string[]; functions?: readonly LibraryFunction[] }[]): string {
   if (notes.length === 0) return '[]';
   let s = '[';
   for (let i = 0; i < notes.length; i++) s += (i ? ',' : '') + noteText(notes[i]);
@@ -107,11 +109,13 @@ export function notesLine(notes: readonly { code: string; message: string }[]): 
 // the same few notes recur through a batch (an ion's electrons, non-integer counts): their JSON is kept
 const noteTexts = new Map<string, string>();
 
-function noteText(n: { code: string; message: string }): string {
-  const key = `${n.code}\u0000${n.message}`;
+/** A note's JSON text, its options named as notesJson names them. */
+function noteText(n: { code: string; message: string; options?: readonly string[]; functions?: readonly LibraryFunction[] }): string {
+  const message = noteWords(n);
+  const key = `${n.code}\u0000${message}`;
   let t = noteTexts.get(key);
   if (t === undefined) {
-    t = JSON.stringify({ code: n.code, message: n.message });
+    t = JSON.stringify({ code: n.code, message });
     if (noteTexts.size >= 512) noteTexts.clear();
     noteTexts.set(key, t);
   }

@@ -7,13 +7,14 @@
  * instructions: kept at working precision, four figures at least.
  */
 import type { Note } from '../errors/issue.js';
+import { typedIssue } from '../errors/message.js';
 import { fail } from '../errors/pondus-error.js';
 import { MASS, VOLUME } from '../calc/measure.js';
 import { readPositive } from '../assay/read-quantity.js';
 import { exact } from '../sigfig/measured.js';
 import { displayQuantity } from '../sigfig/display-quantity.js';
 import { divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
-import { sameDims } from '../sigfig/units.js';
+import { baseUnitText, sameDims } from '../sigfig/units.js';
 import { readStrength, type PercentKind, type Strength } from './strength.js';
 import { atWorkingPrecision, noteFewFigures } from './working-precision.js';
 
@@ -71,8 +72,10 @@ export function alligation(targetText: string, o: AlligationOptions): Alligation
   const target = readStrength(targetText, kind, notes, 'the target strength');
   const higher = readStrength(o.higher, kind, notes, 'the higher strength');
   const lower = readStrengthOrZero(o.lower, kind, notes, target.value);
-  for (const s of [target, higher, lower]) {
-    if (!sameDims(s.value.dims, target.value.dims)) throw fail({ code: 'INCOMPATIBLE_UNITS', message: 'the target, higher and lower strengths must be given in the same kind of unit (all %, all mg/mL, …)' });
+  for (const [name, s] of [['target', target], ['higher', higher], ['lower', lower]] as const) {
+    if (!sameDims(s.value.dims, target.value.dims)) {
+      throw fail(typedIssue({ code: 'INCOMPATIBLE_UNITS', operation: 'mix', first: 'target', firstDimension: baseUnitText(target.value.dims) || null, second: name, secondDimension: baseUnitText(s.value.dims) || null }));
+    }
     if (s.percent && target.percent && s.percent !== target.percent) throw fail({ code: 'INCOMPATIBLE_UNITS', message: `the strengths mix % ${s.percent} and % ${target.percent}; give them all the same way` });
     if (by === 'mass' && (s.percent === 'w/v' || s.percent === 'v/v' || s.percent === null)) throw fail({ code: 'INCOMPATIBLE_UNITS', message: `mixing by mass needs strengths by mass (% w/w); a ${s.percent ? `% ${s.percent}` : 'per-volume'} strength needs mixing by volume or the densities` });
     if (by === 'volume' && s.percent === 'w/w') throw fail({ code: 'INCOMPATIBLE_UNITS', message: 'mixing by volume needs strengths per volume (% w/v, % v/v, mg/mL); a % w/w strength needs mixing by mass' });

@@ -125,7 +125,7 @@ export function milliequivalents(saltText: string, o: MilliequivalentOptions): M
     notes.push(
       o.measured
         ? { code: 'MEASURED_STRENGTH', message: 'the strength is a measured value: the results keep its significant figures' }
-        : { code: 'NOMINAL_STRENGTH', message: `the strength '${o.concentration.trim()}' is read as a label's nominal value, taken as exact; results keep working precision (4 figures); use --measured for a measured strength` },
+        : { code: 'NOMINAL_STRENGTH', message: `the strength '${o.concentration.trim()}' is read as a label's nominal value, taken as exact; results keep working precision (4 figures); use \`measured: true\` for a measured strength`, options: ['measured'] },
     );
   } else {
     mode = 'target';

@@ -50,7 +50,7 @@ export function potency(text: string, options: PotencyOptions = {}): PotencyResu
   const given = readPositive(text, [PURE], 'the potency', notes);
   if (!given.unit) throw fail({ code: 'BAD_AMOUNT', message: `the potency needs a unit: µg/mg, mg/g or %; got '${text.trim()}'` }, text);
   const basis = options.basis ?? 'as-is';
-  if (options.basis === undefined) notes.push({ code: 'POTENCY_AS_IS', message: `the potency ${text.trim()} is read as is (of the material as weighed); give --basis anhydrous (with --water) or --basis dried (with --loss) if the certificate gives it on that basis` });
+  if (options.basis === undefined) notes.push({ code: 'POTENCY_AS_IS', message: `the potency ${text.trim()} is read as is (of the material as weighed); give \`basis: anhydrous\` (with \`water\`) or \`basis: dried\` (with \`loss\`) if the certificate gives it on that basis`, options: ['basis', 'water', 'loss'] });
   let asIs = given;
   if (basis === 'as-is') {
     if (given.value.gt(1)) throw fail({ code: 'BAD_AMOUNT', message: `a potency as is cannot exceed 100 % (1000 µg/mg): '${text.trim()}'; if the certificate gives it on the anhydrous or dried basis, say so (\`basis: anhydrous\` \`water: …\`)`, options: ['basis', 'water'] }, text);

@@ -128,7 +128,7 @@ export function concentratedReagent(reagentText: string, options: ConcentratedOp
   } else if (grade) {
     density = readPositive(`${grade.density} g/mL`, [MASS_CONCENTRATION], 'the density', notes);
     densitySource = 'table';
-    notes.push({ code: 'DENSITY_FROM_TABLE', message: `density ${grade.density} g/mL for ${grade.percent} % ${grade.name}, ${grade.source}; the label or certificate of your bottle decides (give --density)` });
+    notes.push({ code: 'DENSITY_FROM_TABLE', message: `density ${grade.density} g/mL for ${grade.percent} % ${grade.name}, ${grade.source}; the label or certificate of your bottle decides (give \`density\`)`, options: ['density'] });
   } else {
     const known = CONCENTRATED_GRADES.filter((g) => g.formula === reagent.formula).map((g) => `${g.percent} % (${g.density} g/mL)`);
     throw fail({

@@ -87,7 +87,7 @@ function readConcentration(text: string, notes: Note[]): { conc: Quantity; unit:
       notes.push({ code: 'RATIO_AS_W_V', message: `the ratio strength ${t} is read as w/v: 1 g of solute in ${t.split(':')[1].trim()} mL of solution (the pharmacopoeial reading for a solid in a liquid)` });
       unit = 'mg/mL';
     } else if (/%\s*(w\/w|v\/v)$/i.test(t) || /(mg\/kg|mg\/g|µg\/g|µg\/mg|ug\/g)$/.test(t)) {
-      throw fail({ code: 'INCOMPATIBLE_UNITS', message: `'${t}' is a fraction by ${/v\/v$/i.test(t) ? 'volume' : 'mass'}: a solution made up to a volume needs a concentration per volume (% w/v, g/L, mg/mL, mg/dL, M), or the density of the solution; for a solid or semisolid let down by mass, use dilute --mass` }, text);
+      throw fail({ code: 'INCOMPATIBLE_UNITS', message: `'${t}' is a fraction by ${/v\/v$/i.test(t) ? 'volume' : 'mass'}: a solution made up to a volume needs a concentration per volume (% w/v, g/L, mg/mL, mg/dL, M), or the density of the solution; for a solid or semisolid let down by mass, use \`diluteByMass\``, functions: ['diluteByMass'] }, text);
     } else if (/ppm$/.test(t)) {
       conc = multiply(conc, quantity(exact(1000), unitOf('g/L'))); // 1 ppm ≈ 1 mg/L for dilute aqueous solutions
       notes.push({ code: 'PPM_AS_MG_PER_L', message: 'ppm is read as mg/L, which holds for dilute aqueous solutions (density 1.00 g/mL)' });
@@ -116,7 +116,9 @@ function refuseConcentrated(reagent: MassDetail): void {
   throw fail({
     code: 'CONCENTRATED_REAGENT',
     message: `${reagent.input} comes as a concentrated solution${g ? ` (${g.percent} %, d ${g.density} g/mL)` : ''}: it is measured by volume, not weighed; give its mass fraction and density for the volume to take`,
-    hint: `pondus prepare ${reagent.input} --fraction '${g ? g.percent : '…'} %' --density '${g ? g.density : '…'} g/mL' --concentration … --volume … (from the label of the bottle)`,
+    hint: `\`concentratedReagent\` ${reagent.input} \`fraction: '${g ? g.percent : '…'} %'\` \`density: '${g ? g.density : '…'} g/mL'\` \`concentration: …\` \`volume: …\` (from the label of the bottle)`,
+    options: ['fraction', 'density', 'concentration', 'volume'],
+    functions: ['concentratedReagent'],
   });
 }
 

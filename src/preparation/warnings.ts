@@ -55,11 +55,12 @@ export function dilutionWarning(stockVolume: Quantity, factor: Decimal, shown: s
     const steps = Math.ceil(Math.log(factor.toNumber()) / Math.log(100) - 1e-9);
     const last = factor.div(MAX_ONE_STEP_FACTOR.pow(steps - 1));
     const parts = [...new Array<string>(steps - 1).fill('1:100'), `1:${factorText(last)}`];
-    plan = `dilute in steps instead (serial dilution), for example ${parts.join(', then ')} (dilute --series plans the steps)`;
+    plan = `dilute in steps instead (serial dilution), for example ${parts.join(', then ')} (\`dilutionSeries\` plans the steps)`;
   }
   return {
     code: 'SERIAL_DILUTION',
     message: `${why}: transfers below 100 µL and one-step factors above 100 magnify the volumetric error (common practice); ${plan}`,
+    ...(large ? { functions: ['dilutionSeries' as const] } : {}),
   };
 }
 

@@ -2,6 +2,7 @@
  * The one JSON form of a reagent-table row (what `pondus reagents --json` prints, one line per row).
  */
 import type { Note } from '../errors/issue.js';
+import { noteText } from '../errors/message.js';
 import type { ReagentRow } from './table.js';
 
 /** The JSON row of a reagent-table row: the row's own fields, its written cells as `written`, and notes without columns. */
@@ -10,7 +11,7 @@ export type ReagentRowJson = Omit<ReagentRow, 'spec' | 'notes'> & {
   notes: { code: string; message: string }[];
 };
 
-const noteJson = (n: Note) => ({ code: n.code, message: n.message });
+const noteJson = (n: Note) => ({ code: n.code, message: noteText(n) });
 
 /**
  * The stable JSON shape of one row of a reagent table.

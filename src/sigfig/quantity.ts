@@ -183,7 +183,7 @@ export function power(a: Quantity, n: number, column?: number): Quantity {
   if (!Number.isInteger(n) || Math.abs(n) > 1000) throw fail({ code: 'BAD_NUMBER', message: `a quantity is raised to a whole-number power (up to ±1000), not ${n}`, column });
   if (n < 0 && a.value.isZero()) throw fail({ code: 'DIVISION_BY_ZERO', message: 'zero to a negative power', column });
   const value = a.value.pow(n);
-  if (!value.isFinite() || Math.abs(value.e) > 10_000) throw fail({ code: 'NUMBER_OUT_OF_RANGE', message: 'the result is out of range', column });
+  if (!value.isFinite() || Math.abs(value.e) > 10_000) throw fail(typedIssue({ code: 'NUMBER_OUT_OF_RANGE', value: value.toSignificantDigits(3).toExponential(), exponentLimit: 10_000, reading: 'result', what: null, column }));
   const m: Measured = a.lsd === null ? { value, lsd: null } : value.isZero() ? { value, lsd: a.lsd } : withSigFigs(value, sigFigsOf(a));
   const grad = a.grad.size === 0 ? new Map<number, Decimal>() : mapGrad(a.grad, (g) => g.times(new Decimal(n).times(a.value.pow(n - 1))));
   return made(m.value, m.lsd, m.sigFigs, [a.dims[0] * n, a.dims[1] * n, a.dims[2] * n], null, grad);

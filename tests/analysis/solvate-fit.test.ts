@@ -90,7 +90,7 @@ describe('the two-partner search', () => {
     const s = solvateSearch([72.3, 7.91, 12.6, 0], base, partners, 0.01, 20, 5);
     expect(40 * 39 / 2 * 2000).toBeGreaterThan(MAX_PAIR_ROWS);
     expect(s.notes.map((x) => x.code)).toEqual(['PAIRS_NOT_SEARCHED']);
-    expect(s.notes[0].message).toMatch(/--step/);
+    expect(s.notes[0].message).toMatch(/`step`/);
     expect(s.candidates.length).toBe(5);
     expect(s.candidates.every((c) => c.amounts.filter((x) => x > 0).length <= 1)).toBe(true);
   });

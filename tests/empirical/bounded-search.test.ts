@@ -64,7 +64,7 @@ describe('molecular formulas from a molar mass', () => {
     expect(wide.molecular).toBe('C6H12O6');
     const note = wide.notes.find((n) => n.code === 'DATA_CANNOT_DECIDE');
     expect(note?.message).toMatch(/C6H12O6, C7H14O7/);
-    expect(note?.message).toContain('pondus candidates');
+    expect(note?.message).toContain('`candidateFormulas`');
   });
 
   it('keeps the limits as tidy numbers', () => {

@@ -100,8 +100,8 @@ describe('combustion analysis', () => {
     expect(r.empirical).toBeNull();
     const note = r.notes.find((n) => n.code === 'NO_FORMULA_FITS')!;
     expect(note.message).toMatch(/^H at 0\.05595 % is within the limit/);
-    expect(note.message).toContain('tighter tolerance (search the percentages above with empirical and --tolerance)');
-    expect(note.message).not.toMatch(/tighter --tolerance/);
+    expect(note.message).toContain('tighter tolerance (search the percentages above with `empirical` and `tolerance`)');
+    expect(note.message).not.toMatch(/tighter `tolerance`/);
   });
 
   it('ascorbic acid: CO2 and H2O from a 1.000 g sample give C3H4O3', () => {

@@ -7,6 +7,7 @@ import { messageFor } from '../../src/errors/message.js';
 import { FLAG_NAMING } from '../../src/errors/render.js';
 import {
   add,
+  alligation,
   calc,
   candidateFormulas,
   dilute,
@@ -17,6 +18,8 @@ import {
   molarMassUncertainty,
   partShare,
   PondusError,
+  power,
+  quantity,
   Rational,
   readNumber,
   reportUnit,
@@ -48,6 +51,9 @@ const CASES: [string, () => unknown, TypedCode, Record<string, unknown>][] = [
   ['an exponent past the limit', () => readNumber('1e2000'), 'NUMBER_OUT_OF_RANGE', { value: '1e2000', exponentLimit: 1000, reading: 'exponent', what: null }],
   ['a number past 1e100', () => readNumber(' 1e150 '), 'NUMBER_OUT_OF_RANGE', { value: '1e150', exponentLimit: 100, reading: 'number' }],
   ['a fraction past 10^1000', () => Rational.fromDecimal('1e1001'), 'NUMBER_OUT_OF_RANGE', { value: '1e1001', exponentLimit: 1000, reading: 'fraction' }],
+  ['strengths to mix in a percent and a per-volume unit', () => alligation('10 %', { higher: '20 mg/mL', lower: '5 %', total: '300 mL' }), 'INCOMPATIBLE_UNITS', { operation: 'mix', first: 'target', firstDimension: null, second: 'higher', secondDimension: 'g/L' }],
+  ['a lower strength in molar units', () => alligation('10 %', { higher: '20 %', lower: '0.1 M', total: '300 mL' }), 'INCOMPATIBLE_UNITS', { operation: 'mix', second: 'lower', secondDimension: 'M' }],
+  ['a power past 10^10000', () => power(quantity(readNumber('1e99'), null), 1000), 'NUMBER_OUT_OF_RANGE', { value: '1e+99000', exponentLimit: 10_000, reading: 'result', what: null }],
   ['a calculator result past 1e300', () => calc('1e99 * 1e99 * 1e99 * 1e99'), 'NUMBER_OUT_OF_RANGE', { value: '1e+396', exponentLimit: 300, reading: 'result' }],
   [
     'a sample mass past 10^60 g',

@@ -141,13 +141,13 @@ describe('CSV rows', () => {
     expect(row.notes).toEqual([]);
   });
 
-  it('an element with no column is not dropped: a note gives it and points to --long', () => {
+  it('an element with no column is not dropped: a note gives it and points to the long form', () => {
     const columns = compositionCsvColumns([composition('H2O')], false);
     const row = compositionCsvRow(composition('CuSO4'), columns);
     expect(row.notes.map((n) => n.code)).toEqual(['NO_COLUMN']);
     expect(row.notes[0].message).toContain('Cu');
     expect(row.notes[0].message).toContain('S');
-    expect(row.notes[0].message).toContain('--long');
+    expect(row.notes[0].message).toContain('`compositionCsvLongRows`');
   });
 
   it('composition long form: one row per element', () => {

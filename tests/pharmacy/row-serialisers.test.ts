@@ -1,8 +1,11 @@
 // The compounding and QC commands' rows are written by one serialiser each in the library: the CLI's JSON
-// row is exactly the serialiser fed the plain result (plus the writer's `line`), and the public
-// serialisers refuse what is not their result with BAD_ARGUMENT.
+// row is exactly the serialiser fed the plain result (plus the writer's `line`), called with the
+// command line's naming of options (its notes say --measured where the library says `measured`),
+// and the public serialisers refuse what is not their result with BAD_ARGUMENT.
 import { describe, expect, it } from 'vitest';
 import * as api from '../../src/index.js';
+import { withNaming } from '../../src/errors/message.js';
+import { FLAG_NAMING } from '../../src/errors/render.js';
 import { PondusError } from '../../src/errors/pondus-error.js';
 import { pondus } from '../cli/run-cli.js';
 
@@ -23,7 +26,7 @@ describe('the CLI prints exactly the library serialiser', () => {
   ] as const)('%s', (_, args, row) => {
     const command = _.split(' ')[0];
     const out = pondus([command, '--json', ...args]).stdout;
-    expect(out).toBe(line(row()));
+    expect(out).toBe(line(withNaming(FLAG_NAMING, row)));
   });
 
   it('follows the rounding given', () => {

@@ -69,7 +69,7 @@ describe('a concentrated reagent is never weighed', () => {
         expect.unreachable();
       } catch (e) {
         expect((e as { first: { code: string; hint?: string } }).first.code).toBe('CONCENTRATED_REAGENT');
-        expect((e as { first: { hint?: string } }).first.hint).toContain('--fraction');
+        expect((e as { first: { hint?: string } }).first.hint).toContain('`fraction: ');
       }
     }
   });

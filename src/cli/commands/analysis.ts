@@ -180,7 +180,7 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
       }
       return lines.join('\n');
     },
-    notes: ({ result: r }) => r.notes.map((n) => n.message),
+    notes: ({ result: r }) => r.notes,
     noteItems: ({ result: r }) => {
       const outside = Object.keys(r.found).filter((e) => !CSV_ELEMENTS.includes(e));
       return outside.length ? [...r.notes, { code: 'CSV_ELEMENTS', message: `${outside.join(', ')} ha${outside.length === 1 ? 's' : 've'} no CSV columns (C, H, N, S, O, P, F, Cl, Br, I have); the JSON output carries every element` }] : r.notes;

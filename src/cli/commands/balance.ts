@@ -24,7 +24,7 @@ export function balancePresenter(o: BalanceCliOptions): Presenter<BalanceResult>
     columns: ['input', 'balanced', 'balancedAsWritten', 'unique', 'independentBalances', 'settledBy'],
     cells: (r) => [r.input, r.balanced, String(r.balancedAsWritten), String(r.unique), r.independentBalances, r.settledBy],
     table: { head: ['equation', 'balanced'], row: (r) => [r.input, r.balanced] },
-    notes: (r) => r.notes.map((n) => n.message),
+    notes: (r) => r.notes,
     noteItems: (r) => r.notes,
   };
 }

@@ -28,7 +28,7 @@ export function calcPresenter(o: CalcCliOptions): Presenter<CalcResult> {
       }
       return lines.join('\n');
     },
-    notes: (r) => r.notes.map((n) => n.message),
+    notes: (r) => r.notes,
     noteItems: (r) => r.notes,
   };
 }

@@ -35,7 +35,7 @@ export function mixturePresenter(o: CompositionCliOptions): Presenter<MixtureRes
     json: (r) => mixtureJson(r, rounding),
     columns: ['input', 'totalMass', 'byComponent', 'byElement'],
     cells: (r) => [r.input, r.total.value.toFixed(), list(r.components), list(r.elements)],
-    notes: (r) => r.notes.map((n) => n.message),
+    notes: (r) => r.notes,
     noteItems: (r) => r.notes,
     block: (r) => {
       const rows = (shares: MixtureResult['components']) => shares.map((s) => [s.name, displayMeasured(s.mass, rounding).text, displayMeasured(s.massPercent, rounding).text]);
@@ -85,7 +85,7 @@ function formulaPresenter(o: CompositionCliOptions): Presenter<CompositionDetail
       }
       return lines.join('\n');
     },
-    notes: (d) => d.result.notes.map((n) => n.message),
+    notes: (d) => d.result.notes,
     noteItems: (d) => d.result.notes,
   };
 }

@@ -75,7 +75,7 @@ function oneStepPresenter(o: DiluteCliOptions): Presenter<DilutionResult> {
       if (r.made) lines.push(`${lines.length ? '  ' : ''}made: ${r.written.taken} of ${r.written.stock} made up to ${r.written.volume} gives ${text(r.made)}`);
       return lines.join('\n');
     },
-    notes: (r) => r.notes.map((n) => n.message),
+    notes: (r) => r.notes,
     noteItems: (r) => notesJson(r.notes),
     caution: BENCH_CAUTION,
   };
@@ -106,7 +106,7 @@ export function gravimetricPresenter(o: GravimetricCliOptions): Presenter<Gravim
       if (r.massPercent) lines.push(`  in the sample: ${displayResult(r.massPercent, null, rounding).figure} % by mass`);
       return lines.join('\n');
     },
-    notes: (r) => r.notes.map((n) => n.message),
+    notes: (r) => r.notes,
     noteItems: (r) => notesJson(r.notes),
   };
 }
@@ -133,7 +133,7 @@ export function basisPresenter(o: BasisCliOptions): Presenter<BasisResult> {
       if (r.converted) lines.push(`  ${text(r.value)} ${r.factor.given.input} = ${text(r.converted)} ${r.factor.sought.input}`);
       return lines.join('\n');
     },
-    notes: (r) => r.notes.map((n) => n.message),
+    notes: (r) => r.notes,
     noteItems: (r) => notesJson(r.notes),
   };
 }
@@ -177,7 +177,7 @@ export function saltPresenter(o: SaltCliOptions): Presenter<SaltFactorResult> {
       if (r.parentMass) lines.push(`  ${o.saltMass!.trim()} of the salt carries ${text(r.parentMass)} of parent`);
       return lines.join('\n');
     },
-    notes: (r) => r.notes.map((n) => n.message),
+    notes: (r) => r.notes,
     noteItems: (r) => notesJson(r.notes),
     caution: DOSE_CAUTION,
   };

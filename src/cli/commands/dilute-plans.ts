@@ -96,7 +96,7 @@ export function seriesPresenter(o: DilutePlanCliOptions): Presenter<SeriesResult
       }
       return lines.join('\n');
     },
-    notes: (r) => r.notes.map((n) => n.message),
+    notes: (r) => r.notes,
     noteItems: (r) => notesJson(r.notes),
     caution: BENCH_CAUTION,
   };
@@ -126,7 +126,7 @@ export function massDilutionPresenter(o: DilutePlanCliOptions): Presenter<MassDi
         `by mass: ${r.written.stock} → ${r.written.target}, ${r.written.total} in all (dilution 1:${r.factor.value.toSignificantDigits(6).toFixed()})`,
         `  weigh ${w(r.take, mu(r))} of the ${r.written.stock} material and ${w(r.diluent, massUnitFor(r.diluent.quantity))} of diluent (base or filler), and mix`,
       ].join('\n'),
-    notes: (r) => r.notes.map((n) => n.message),
+    notes: (r) => r.notes,
     noteItems: (r) => notesJson(r.notes),
     caution: BENCH_CAUTION,
   };

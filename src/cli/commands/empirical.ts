@@ -83,7 +83,7 @@ export function empiricalPresenter(o: EmpiricalCliOptions): Presenter<EmpiricalR
       if (r.alternatives.length) lines.push(`also within the limits: ${r.alternatives.map((a) => `${a.formula} (${residualText(a.residuals)})`).join('; ')}`);
       return lines.join('\n');
     },
-    notes: (r) => r.notes.map((n) => n.message),
+    notes: (r) => r.notes,
     noteItems: (r) => r.notes,
   };
 }
@@ -125,7 +125,7 @@ export function combustionPresenter(o: CombustionCliOptions): Presenter<Combusti
       const rows = r.elements.map((e) => [e.symbol + (e.byDifference ? ' (by difference)' : ''), e.massFigure, e.percentFigure]);
       return [`sample ${r.sample}`, fixedTable(['element', 'mass g', 'mass %'], rows, ['left', 'right', 'right']), `empirical formula: ${r.empirical ?? 'none within the limits of the data (see the note)'}`, ...(r.alternatives.length ? [`also within the limits: ${r.alternatives.map((a) => a.formula).join(', ')}`] : [])].join('\n');
     },
-    notes: (r) => r.notes.map((n) => n.message),
+    notes: (r) => r.notes,
   };
 }
 
@@ -211,7 +211,7 @@ export function candidatesPresenter(o: CandidatesCliOptions): Presenter<Candidat
       }
     },
     json: (r) => candidatesJson(r),
-    notes: (r) => r.notes.map((n) => n.message),
+    notes: (r) => r.notes,
     noteItems: (r) => r.notes,
     columns,
     cells: (r) => {

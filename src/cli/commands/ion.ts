@@ -70,7 +70,7 @@ export function ionPresenter(o: IonCliOptions): Presenter<IonRow> {
       lines.push(`  ${r.reportLine ?? `HRMS (${r.ionisation}) m/z: ${r.journalNotation} calcd for ${r.ionFormulaPlain} ${r.calculatedText}`}`);
       return lines.join('\n');
     },
-    notes: ({ result: r }) => r.notes.map((n) => n.message),
+    notes: ({ result: r }) => r.notes,
     noteItems: ({ result: r }) => r.notes,
   };
 }

@@ -41,7 +41,7 @@ function plainPresenter(o: MassCliOptions): Presenter<MassDetail> {
     columns,
     cells,
     table: { head, align, row: rowWith(o.rounding ?? 'half-even') },
-    notes: (r) => r.notes.map((n) => n.message),
+    notes: (r) => r.notes,
     noteItems: (r) => r.notes,
   };
 }
@@ -64,7 +64,7 @@ function uncertaintyPresenter(o: MassCliOptions): Presenter<MassRow> {
       align: [...align, 'right'],
       row: (r) => [...rowWith(o.rounding ?? 'half-even')(r.mass), formatWithUncertainty(r.u!.value, r.u!.standardUncertainty)],
     },
-    notes: (r) => r.mass.notes.map((n) => n.message),
+    notes: (r) => r.mass.notes,
     noteItems: (r) => r.mass.notes,
     caution: UNCERTAINTY_BASIS,
   };

@@ -94,7 +94,7 @@ export function patternPresenter(o: PatternCliOptions): Presenter<PatternResult>
       const head = `${r.ion ? `${r.ion} of ${r.formula}: ` : ''}${r.speciesFormula}   monoisotopic ${r.charge !== 0 ? 'm/z' : 'mass'} ${new Decimal(r.monoisotopicMzExact).toFixed(4)}, average ${r.averageMz.toFixed(4)}`;
       return [head, `${describe(r)}; peaks of at least ${r.minRelative} % of the largest`, ...stickPlot(r.peaks, { paint })].join('\n');
     },
-    notes: (r) => r.notes.map((n) => n.message),
+    notes: (r) => r.notes,
     noteItems: (r) => r.notes,
   };
 }

@@ -61,7 +61,7 @@ export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
       }
       return [head, `  ${qtext(r.mass!, 'g', rounding)}: ${qtext(r.moles, 'mmol', rounding)}, ${qtext(r.equivalents, 'mmol', rounding, 'mEq')}, ${qtext(r.osmoles, 'mmol', rounding, 'mOsm')}`, `  by ion: ${ions}`].join('\n');
     },
-    notes: ({ r }) => r.notes.map((n) => n.message),
+    notes: ({ r }) => r.notes,
     noteItems: ({ r }) => notesJson(r.notes),
     caution: PHARMACY_CAUTION,
   };
@@ -101,7 +101,7 @@ export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityRe
       lines.push(`  mEq/L: ${r.ions.map((i) => `${i.ion} ${qtext(i.equivalents, 'mM', rounding, '')}`.trimEnd()).join(', ')}`);
       return lines.join('\n');
     },
-    notes: ({ r }) => r.notes.map((n) => n.message),
+    notes: ({ r }) => r.notes,
     noteItems: ({ r }) => notesJson(r.notes),
     caution: PHARMACY_CAUTION,
   };
@@ -157,7 +157,7 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
       }
       return lines.join('\n');
     },
-    notes: ({ r }) => r.notes.map((n) => n.message),
+    notes: ({ r }) => r.notes,
     noteItems: ({ r }) => notesJson(r.notes),
     caution: PHARMACY_CAUTION,
   };
@@ -189,7 +189,7 @@ export function potencyPresenter(o: PotencyCli): RowPresenter<PotencyResult> {
       if (r.weigh) lines.push(`  for ${o.need!.trim()} of active: weigh ${displayInstruction(r.weigh, massUnitFor(r.weigh.quantity), rounding).text} of the material`);
       return lines.join('\n');
     },
-    notes: ({ r }) => r.notes.map((n) => n.message),
+    notes: ({ r }) => r.notes,
     noteItems: ({ r }) => notesJson(r.notes),
     caution: POTENCY_CAUTION,
   };
@@ -216,7 +216,7 @@ export function strengthPresenter(o: StrengthCli): RowPresenter<StrengthForms> {
       return [input, line, r.kind, ratioText(r), ...cols.map((c) => f.find((x) => x.unit === c)?.display.replace(` ${c}`, '') ?? '')];
     },
     block: ({ input, r }) => `${input} (${r.kind}): ${ratioText(r)} = ${shown(r).map((f) => f.display).join(' = ')}`,
-    notes: ({ r }) => r.notes.map((n) => n.message),
+    notes: ({ r }) => r.notes,
     noteItems: ({ r }) => notesJson(r.notes),
     caution: PHARMACY_CAUTION,
   };

@@ -94,7 +94,7 @@ export function prepSheetPresenter(o: PrepSheetCliOptions): Presenter<PrepRowRes
       if (m) lines.push(`  made: ${p.kind === 'solid' ? `${p.row.weighed} weighed` : `${p.row.taken} taken`} gives ${displayResult(m.q, m.unit, rounding).text}`);
       return lines.join('\n');
     },
-    notes: (p) => (p.kind === 'solid' ? p.solution.notes : p.concentrated.notes).map((n) => n.message),
+    notes: (p) => (p.kind === 'solid' ? p.solution.notes : p.concentrated.notes),
     noteItems: (p) => notesJson(p.kind === 'solid' ? p.solution.notes : p.concentrated.notes),
     caution,
   };

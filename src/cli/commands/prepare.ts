@@ -146,7 +146,7 @@ function oneSolutionPresenter(o: PrepareCliOptions): Presenter<Prepared> {
       }
       return lines.join('\n');
     },
-    notes: (p) => p.r.notes.map((n) => n.message),
+    notes: (p) => p.r.notes,
     noteItems: (p) => notesJson(p.r.notes),
     caution: concentrated ? CONCENTRATED_CAUTION : BENCH_CAUTION,
   };

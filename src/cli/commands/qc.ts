@@ -132,7 +132,7 @@ export function titrationPresenter(o: TitrationCli): RowPresenter<Titration> {
       if (rep.spec) lines.push(`  ${verdict(rep.spec, rep.basis)}`);
       return lines.join('\n');
     },
-    notes: ({ r }) => allNotes(r).map((n) => n.message),
+    notes: ({ r }) => allNotes(r),
     noteItems: ({ r }) => notesJson(allNotes(r)),
     caution: QC_CAUTION,
   };
@@ -169,7 +169,7 @@ export function standardisePresenter(o: StandardiseCli): RowPresenter<Standardis
         `  ${qtext(r.mass, 'g', rounding)}${r.purity ? ` × ${qtext(r.purity, '%', rounding)}` : ''} ÷ M = ${qtext(r.moles, 'mmol', rounding)} of standard; mol titrant = mol standard × ${r.ratio.second}/${r.ratio.first}`,
         `  titre ${qtext(r.netTitre, 'mL', rounding)}${r.blank ? ` (blank ${qtext(r.blank, 'mL', rounding)} subtracted)` : ''}: titrant molarity ${qtext(r.molarity, 'M', rounding)}`,
       ].join('\n'),
-    notes: ({ r }) => r.notes.map((n) => n.message),
+    notes: ({ r }) => r.notes,
     noteItems: ({ r }) => notesJson(r.notes),
     caution: BENCH_CAUTION,
   };
@@ -211,7 +211,7 @@ export function sampleBasisPresenter(o: SampleBasisCli): RowPresenter<BasisRow> 
       if (r.rep.spec) lines.push(`  ${verdict(r.rep.spec, r.rep.basis)}`);
       return lines.join('\n');
     },
-    notes: ({ r }) => [...r.notes, ...r.rep.notes].map((n) => n.message),
+    notes: ({ r }) => [...r.notes, ...r.rep.notes],
     noteItems: ({ r }) => notesJson([...r.notes, ...r.rep.notes]),
     caution: QC_CAUTION,
   };
@@ -243,7 +243,7 @@ export function replicatesPresenter(o: ReplicatesCli): RowPresenter<ReplicateRes
         `  ${r.level} % confidence interval (t = ${r.t.toFixed(3)}, ${r.df} df): ${r.reported}`,
       ].join('\n');
     },
-    notes: ({ r }) => r.notes.map((n) => n.message),
+    notes: ({ r }) => r.notes,
     noteItems: ({ r }) => notesJson(r.notes),
   };
 }

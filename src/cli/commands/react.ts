@@ -54,7 +54,7 @@ export function reactPresenter(o: ReactCliOptions): Presenter<ReactResult> {
       if (r.percentYield) lines.push(`percent yield of ${r.percentYield.species}: ${r.percentYield.percent.figure} %`);
       return lines.join('\n');
     },
-    notes: (r) => r.notes.map((n) => n.message),
+    notes: (r) => r.notes,
     noteItems: (r) => r.notes,
     caution: BENCH_CAUTION,
   };

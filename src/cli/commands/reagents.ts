@@ -169,7 +169,7 @@ export function reagentsPresenter(o: ReagentsCliOptions): Presenter<ReagentRow> 
           },
         }
       : { table: { head: HEAD, row: (r: ReagentRow) => cellsOf(r), align: ALIGN } }),
-    notes: (r) => rowNotes(r, r.input === firstInput).map((n) => n.message),
+    notes: (r) => rowNotes(r, r.input === firstInput),
     noteItems: (r) => rowNotes(r, r.input === firstInput),
     caution,
   };

@@ -1,4 +1,20 @@
+import type { LibraryFunction } from '../../errors/issue.js';
 import type { Cell } from './format.js';
+
+/**
+ * A remark as a presenter hands it to the writers: its words in the library's naming and the
+ * options and functions they name, which the writers show as flags and commands (`noteText`).
+ */
+export interface NoteWords {
+  message: string;
+  options?: readonly string[];
+  functions?: readonly LibraryFunction[];
+}
+
+/** A remark with its code, for the CSV/TSV `notes` column. */
+export interface CodedNote extends NoteWords {
+  code: string;
+}
 
 /**
  * How one command turns inputs into results and results into each output
@@ -28,16 +44,16 @@ export interface Presenter<R> {
    */
   delimited?: {
     columns(first: R[]): string[];
-    rows(result: R, columns: string[]): { rows: Cell[][]; notes: { code: string; message: string }[] };
+    rows(result: R, columns: string[]): { rows: Cell[][]; notes: readonly CodedNote[] };
   };
   /** Row-style table: header and cells. */
   table?: { head: string[]; row(result: R): Cell[]; align?: ('left' | 'right')[] };
   /** Block-style table output: a block of text per result. */
   block?(result: R): string;
-  /** Remarks to print under the table for a result. */
-  notes?(result: R): string[];
+  /** Remarks to print under the table for a result (the writer names their options by flag). */
+  notes?(result: R): readonly NoteWords[];
   /** Optional: the remarks with their codes, for the CSV/TSV `notes` column (`CODE: message`); else `notes` is used. */
-  noteItems?(result: R): { code: string; message: string }[];
+  noteItems?(result: R): readonly CodedNote[];
   /** Counts a result toward a closing tally ('3 of 4 compounds pass'), with the words for it. */
   tally?: { count(result: R): boolean; words: string };
   /** A caution printed once after table output (results someone will act on). */

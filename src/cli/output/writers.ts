@@ -4,12 +4,15 @@
  */
 import type { ChalkInstance } from 'chalk';
 import { errorRowFields, FLAG_NAMING, renderError } from '../../errors/render.js';
-import { messageFor } from '../../errors/message.js';
+import { messageFor, noteText } from '../../errors/message.js';
 import type { PondusError } from '../../errors/pondus-error.js';
 import type { InputItem } from '../input/inputs.js';
 import { delimitedCell, guardCell, notesCell, visibleControls, type Cell, type OutputFormat } from './format.js';
 import { columnWidths, fitWidths, ruleLine, rowLine, textWidth, type Align } from './box-table.js';
-import type { Presenter } from './presenter.js';
+import type { CodedNote, Presenter } from './presenter.js';
+
+/** A remark for the CSV/TSV `notes` cell, its options and functions named as the command line names them. */
+const flagWords = (n: CodedNote): { code: string; message: string } => ({ code: n.code, message: noteText(n, FLAG_NAMING) });
 
 /**
  * An input that identifies itself in a failed row by other fields than its text: a sheet row gives
@@ -138,12 +141,13 @@ class DelimitedWriter<R> implements ResultWriter<R> {
     this.start(this.header!);
   }
   private resultRow(result: R): void {
-    const items = [...(this.p.noteItems?.(result) ?? (this.p.notes?.(result) ?? []).map((message) => ({ code: '', message })))];
+    const given = this.p.noteItems?.(result) ?? (this.p.notes?.(result) ?? []).map((n) => ({ ...n, code: '' }));
+    const items = given.map(flagWords);
     let rows: Cell[][];
     if (this.p.delimited) {
       const made = this.p.delimited.rows(result, this.header!);
       rows = made.rows;
-      items.push(...made.notes);
+      items.push(...made.notes.map(flagWords));
     } else rows = [this.p.cells(result)];
     // a caution goes with every row: in a spreadsheet each row may be read alone
     if (this.p.caution) items.push({ code: 'CAUTION', message: this.p.caution });
@@ -216,7 +220,7 @@ class TableWriter<R> implements ResultWriter<R> {
     const where = this.ctx.numbered ? `line ${item.line}: ` : '';
     for (const n of this.p.notes?.(result) ?? []) {
       // notes are printed under the table; past a bound they are counted, so memory stays flat
-      if (this.notes.length < MAX_TABLE_NOTES) this.notes.push(`${where}${n}`);
+      if (this.notes.length < MAX_TABLE_NOTES) this.notes.push(`${where}${noteText(n, FLAG_NAMING)}`);
       else this.moreNotes++;
     }
     if (this.p.block) this.blocks.push(this.p.block(result));
