@@ -1,11 +1,13 @@
 // The serialisers of `pondus prepare`: the CLI's JSON row is exactly the library's serialiser fed
-// the plain result and the amounts as given (plus the writer's `line`), and it validates against
-// the schema.
+// the plain result and the amounts as given (plus the writer's `line`; the notes name flags, as the
+// command line writes them), and it validates against the schema.
 import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { Ajv2020 } from 'ajv/dist/2020.js';
 import { describe, expect, it } from 'vitest';
 import * as api from '../../src/index.js';
+import { withNaming } from '../../src/errors/message.js';
+import { FLAG_NAMING } from '../../src/errors/render.js';
 import { jsonLines, pondus } from '../cli/run-cli.js';
 
 const SCHEMAS = fileURLToPath(new URL('../../schemas/', import.meta.url));
@@ -30,7 +32,7 @@ describe('the JSON rows of prepare', () => {
     ]) {
       const args = ['CuSO4·5H2O', ...Object.entries(given).flatMap(([k, v]) => [`--${k}`, v])];
       const r = api.prepareSolution('CuSO4·5H2O', given);
-      expect(cliRow(args)).toBe(`${JSON.stringify({ line: 1, ...api.solutionJson(r, given) })}\n`);
+      expect(cliRow(args)).toBe(`${JSON.stringify({ line: 1, ...withNaming(FLAG_NAMING, () => api.solutionJson(r, given)) })}\n`);
     }
     const row = api.solutionJson(api.prepareSolution('NaCl', { concentration: '0.100 M', volume: '250.0 mL' }), { concentration: ' 0.100 M', volume: '250.0 mL ' });
     expect(row.mass?.display).toBe('1.461 g');
@@ -38,11 +40,15 @@ describe('the JSON rows of prepare', () => {
   });
   it('a form weighed in place of another, and a concentrated reagent to measure by volume', () => {
     const s = api.substituteForm('CuSO4·5H2O', 'CuSO4', '10.00 g');
-    expect(cliRow(['CuSO4·5H2O', '--replace', 'CuSO4=10.00 g'])).toBe(`${JSON.stringify({ line: 1, ...api.substituteJson(s, '10.00 g') })}\n`);
+    expect(cliRow(['CuSO4·5H2O', '--replace', 'CuSO4=10.00 g'])).toBe(`${JSON.stringify({ line: 1, ...withNaming(FLAG_NAMING, () => api.substituteJson(s, '10.00 g')) })}\n`);
     const given = { fraction: '37 %', concentration: '1.00 M', volume: '500.0 mL' };
     const c = api.concentratedReagent('HCl', given);
-    expect(cliRow(['HCl', '--fraction', '37 %', '--concentration', '1.00 M', '--volume', '500.0 mL'])).toBe(`${JSON.stringify({ line: 1, ...api.concentratedJson(c, given) })}\n`);
+    expect(cliRow(['HCl', '--fraction', '37 %', '--concentration', '1.00 M', '--volume', '500.0 mL'])).toBe(`${JSON.stringify({ line: 1, ...withNaming(FLAG_NAMING, () => api.concentratedJson(c, given)) })}\n`);
     expect(api.concentratedJson(c, given).density).toBe('1.19 g/mL');
+    // the library names the option, the command line its flag
+    const note = (row: { notes: { code: string; message: string }[] }) => row.notes.find((n) => n.code === 'DENSITY_FROM_TABLE')?.message;
+    expect(note(api.concentratedJson(c, given))).toMatch(/\(give `density`\)$/);
+    expect(note(withNaming(FLAG_NAMING, () => api.concentratedJson(c, given)))).toMatch(/\(give --density\)$/);
   });
   it('refuses a value that is not the result it writes', () => {
     expect(() => api.solutionJson({} as never, {})).toThrow(/solutionJson: argument 1 must be a solution result/);
