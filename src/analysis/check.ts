@@ -23,7 +23,7 @@ import { SOLVENTS } from './solvents.js';
 import { readNumber } from '../sigfig/read-number.js';
 import { solventByName } from './solvents.js';
 import { continuousAmount, solvateSearch, type MassVector } from './solvate-fit.js';
-import { reportFormula } from './report-formula.js';
+import { reportFormulaOf } from './report-formula.js';
 
 export interface AnalysisOptions extends MassOptions {
   /** Allowed |found − calculated| in percentage points (default 0.4, the common journal rule). */
@@ -133,7 +133,7 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
   }
   const symbols = hillOrder(found.keys());
   const textOf = new Map(symbols.map((s) => [s, found.get(s)!.toFixed(Math.max(2, decimalsOf(read.text.get(s)!)))]));
-  const written = reportFormula(base.tree);
+  const written = reportFormulaOf(base);
   const own = ownFigures(base, symbols, found);
   const bare = evaluateFit(written, base, [], symbols, found, tolerance, textOf, rounding, own);
   const notes: Note[] = [...base.notes, ...read.notes, ...impossibleNotes(base, partners, partnerMasses, symbols, found, tolerance, options, own)];
@@ -264,7 +264,7 @@ function partnerOf(given: string, options: MassOptions): Partner {
   const formulaText = named ? named.formula : given;
   try {
     const m = formulaMassDetail(formulaText, options);
-    return { given, formula: m.formula, written: reportFormula(m.tree), name: named ? named.name : null, salt: SALT_ACIDS.has(m.formula) };
+    return { given, formula: m.formula, written: reportFormulaOf(m), name: named ? named.name : null, salt: SALT_ACIDS.has(m.formula) };
   } catch (e) {
     if (e instanceof PondusError && !named) {
       throw fail({ code: 'BAD_OPTION', message: `unknown solvent '${given}': give a name (water, DCM, chloroform, MeOH, EtOH, EtOAc, ether, THF, acetone, MeCN, DMF, DMSO, toluene, hexane, HCl, TFA, …) or a formula` }, given);

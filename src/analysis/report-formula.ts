@@ -5,9 +5,11 @@
  * H2O4S, CuO4S), the way inorganic formulas are printed (common practice; IUPAC Red Book 2005
  * IR-4.4 puts the electropositive part first, which is how such formulas are usually written).
  */
-import { flattenFormula } from '../formula/flatten.js';
-import { hillFormula, hillOrder } from '../formula/hill.js';
+import { ATOMS } from '../elements/atom-data.js';
+import { flattenFormula, type AtomVector } from '../formula/flatten.js';
+import { formatFormula, hillFormula, hillOrder } from '../formula/hill.js';
 import type { FormulaTree } from '../formula-parser/tree.js';
+import type { MassDetail } from '../mass/formula-mass.js';
 
 const hasCarbon = (keys: Iterable<string>) => {
   for (const k of keys) if (/^[0-9]*C$/.test(k)) return true;
@@ -41,4 +43,28 @@ export function reportFormula(tree: FormulaTree): string {
       return m + componentText(one);
     })
     .join('·');
+}
+
+/** Text that is one component with no multiplier: it starts with a capital and has only letters, digits and brackets. */
+const ONE_COMPONENT = /^\s*[A-Z][A-Za-z0-9()[\]{}]*\s*$/;
+
+/**
+ * The report formula of a detailed mass result. A formula of one component with no multiplier is
+ * written from its atom totals (Hill order with carbon, the order of first appearance without),
+ * with no tree needed; any other goes through {@link reportFormula}.
+ *
+ * @example
+ * reportFormulaOf(formulaMassDetail('H2SO4'))             // 'H2SO4'
+ * reportFormulaOf(formulaMassDetail('C17H19NO3·HCl·3H2O')) // 'C17H19NO3·HCl·3H2O'
+ */
+export function reportFormulaOf(m: MassDetail): string {
+  if (m.charge !== 0 || !ONE_COMPONENT.test(m.input)) return reportFormula(m.tree);
+  return vectorText(m.vector);
+}
+
+function vectorText(v: AtomVector): string {
+  const carbon = v.ids.some((id) => ATOMS.data[id].symbol === 'C');
+  const order = carbon ? v.ids : v.seen;
+  const at = carbon ? v.counts : v.seen.map((id) => v.counts[v.ids.indexOf(id)]);
+  return formatFormula(order.map((id) => ATOMS.data[id].label), at, 0);
 }
