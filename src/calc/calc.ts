@@ -137,9 +137,11 @@ export interface CalcJson {
  */
 export function calcJson(r: CalcResult): CalcJson {
   const notes = notesJson(r.notes);
-  const o: Omit<CalcJson, 'notes'> = { input: r.input, value: finite(r.value.toNumber()), rounded: finite(r.rounded.toNumber()), display: r.display, sigFigs: r.sigFigs, unit: r.unit };
-  if (r.uncertainty) o.uncertainty = finite(r.uncertainty.toNumber());
-  return { ...o, notes };
+  const value = finite(r.value.toNumber());
+  const rounded = finite(r.rounded.toNumber());
+  // object literals, not a spread with fields after it (which V8 builds slowly)
+  if (r.uncertainty) return { input: r.input, value, rounded, display: r.display, sigFigs: r.sigFigs, unit: r.unit, uncertainty: finite(r.uncertainty.toNumber()), notes };
+  return { input: r.input, value, rounded, display: r.display, sigFigs: r.sigFigs, unit: r.unit, notes };
 }
 
 /** A number JSON can carry: calc refuses results beyond 1e±300, so this never fails on its own results. */
