@@ -1,3 +1,4 @@
+import { keysFirst } from '../exact/json-row.js';
 import { notesJson } from '../errors/note-json.js';
 import type { AnalysisResult, Fit } from './check.js';
 
@@ -22,8 +23,7 @@ const fitJson = (f: Fit) => ({
  * analysisJson(analysis('C6H6', 'C=92.26,H=7.74')).pass // true
  */
 export function analysisJson(r: AnalysisResult, extra: Record<string, unknown> = {}) {
-  return {
-    ...extra,
+  return keysFirst(extra, {
     input: r.input,
     formula: r.formula,
     reportFormula: r.reportFormula,
@@ -37,5 +37,5 @@ export function analysisJson(r: AnalysisResult, extra: Record<string, unknown> =
     fits: r.fits.map(fitJson),
     continuous: r.continuous.map((c) => ({ formula: c.formula, written: c.written, name: c.name, amount: c.amount, maxDeviation: c.maxDeviation })),
     notes: notesJson(r.notes),
-  };
+  });
 }

@@ -1,3 +1,4 @@
+import { keysFirst } from '../exact/json-row.js';
 import { notesJson } from '../errors/note-json.js';
 import { Decimal } from '../exact/decimal.js';
 import type { IonResult } from './ion-mass.js';
@@ -36,8 +37,7 @@ export interface IonJson {
  * ionJson(ionMass('C15H15NO2', '[M+H]+', { found: '242.1172' })).errorPpm // -1.5
  */
 export function ionJson(r: IonResult, extra: Record<string, unknown> = {}): IonJson & Record<string, unknown> {
-  return {
-    ...extra,
+  return keysFirst(extra, {
     input: r.input,
     formula: r.formula,
     ion: r.notation,
@@ -56,5 +56,5 @@ export function ionJson(r: IonResult, extra: Record<string, unknown> = {}): IonJ
     errorMDa: r.found ? new Decimal(r.found.mDaExact).toDecimalPlaces(1).toNumber() : null,
     reportLine: r.reportLine,
     notes: notesJson(r.notes),
-  };
+  });
 }

@@ -1,3 +1,4 @@
+import { keysFirst } from '../exact/json-row.js';
 import { notesJson, type NoteJson } from '../errors/note-json.js';
 import { Decimal } from '../exact/decimal.js';
 import type { PatternResult } from './pattern.js';
@@ -20,8 +21,7 @@ export type PatternJson = Omit<PatternResult, 'peaks' | 'allPeaks' | 'notes'> & 
  * patternJson(isotopePattern('Br2')).peaks[1].relative // 100
  */
 export function patternJson(r: PatternResult, extra: Record<string, unknown> = {}): PatternJson & Record<string, unknown> {
-  return {
-    ...extra,
+  return keysFirst(extra, {
     input: r.input,
     formula: r.formula,
     ion: r.ion,
@@ -42,5 +42,5 @@ export function patternJson(r: PatternResult, extra: Record<string, unknown> = {
       return o;
     }),
     notes: notesJson(r.notes),
-  };
+  });
 }

@@ -155,7 +155,7 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
           },
         }
       : undefined,
-    json: (row) => ({ ...analysisJson(row.result, row.id !== null ? { id: row.id } : {}), rounding: opts.rounding }),
+    json: (row) => Object.assign(analysisJson(row.result, row.id !== null ? { id: row.id } : {}), { rounding: opts.rounding }),
     columns: ['input', 'id', 'formula', 'reportFormula', ...CSV_ELEMENTS.flatMap((e) => [`${e}_calculated`, `${e}_found`, `${e}_deviation`]), 'maxDeviation', 'pass', 'bestFit', 'bestFitMaxDeviation'],
     cells: ({ result: r, id }) => {
       const best = r.fits[0];

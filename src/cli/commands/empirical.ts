@@ -1,3 +1,4 @@
+import { keysFirst } from '../../exact/json-row.js';
 import type { Command } from 'commander';
 import { checkRun, joinPairArgs, joinedNote, joinUnitWords, pairRuns, takeJoinedNote } from '../input/key-value-args.js';
 import { fail } from '../../errors/pondus-error.js';
@@ -68,7 +69,7 @@ export function empiricalPresenter(o: EmpiricalCliOptions): Presenter<EmpiricalR
       if (joined) r.notes.unshift({ code: 'JOINED_ARGUMENTS', message: joined });
       return r;
     },
-    json: (r) => (r.id !== undefined ? { id: r.id, ...empiricalJson(r) } : empiricalJson(r)),
+    json: (r) => (r.id !== undefined ? keysFirst({ id: r.id }, empiricalJson(r)) : empiricalJson(r)),
     columns: ['input', 'id', 'empirical', 'molecular', 'multiple', 'empiricalMass', 'largestResidual', 'alternative_1', 'alternative_2', 'alternative_3'],
     cells: (r) => {
       const largest = Object.values(r.fit.residuals).reduce((a, x) => (Math.abs(x) > Math.abs(a) ? x : a), 0);

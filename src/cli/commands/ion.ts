@@ -60,7 +60,7 @@ export function ionPresenter(o: IonCliOptions): Presenter<IonRow> {
       const result = ionMass(f.formula, f.ion, { ...opts, found: f.found });
       return { result, id: f.id, input: o.sheetRows?.[input] ? result.input : input };
     },
-    json: ({ result, id, input }) => ({ ...ionJson(result, id !== null ? { id } : {}), input }),
+    json: ({ result, id, input }) => Object.assign(ionJson(result, id !== null ? { id } : {}), { input }),
     columns: ['input', 'id', 'formula', 'ion', 'ionFormula', 'charge', 'mz', 'calculated', 'found', 'errorPpm', 'errorMDa', 'reportLine'],
     cells: ({ result: r, id, input }) => [input, id ?? '', r.formula, r.notation ?? '', r.ionFormula, r.charge, new Decimal(r.mzExact).toDecimalPlaces(12).toFixed(), r.calculatedText, r.found?.text ?? '', ppm(r), mda(r), r.reportLine ?? ''],
     block: ({ result: r, id }) => {

@@ -87,7 +87,7 @@ export function patternPresenter(o: PatternCliOptions): Presenter<PatternResult>
       }
       return r;
     },
-    json: (r) => ({ ...patternJson(r), input: raw.get(r) ?? r.input }),
+    json: (r) => Object.assign(patternJson(r), { input: raw.get(r) ?? r.input }),
     columns: ['input', 'formula', 'ion', 'speciesFormula', 'charge', 'kind', 'resolvingPower', 'coverage', 'monoisotopicMz', 'averageMz', ...peakColumns],
     cells: (r) => [raw.get(r) ?? r.input, r.formula, r.ion ?? '', r.speciesFormula, r.charge, r.kind, r.resolvingPower ?? '', r.coverage, new Decimal(r.monoisotopicMzExact).toDecimalPlaces(12).toFixed(), r.averageMz, ...csvPeaks(r)],
     block: (r) => {
