@@ -8,7 +8,6 @@
  * loads no other command's code).
  */
 import { Command, CommanderError } from 'commander';
-import type { Writable } from 'node:stream';
 import { PondusError } from '../errors/pondus-error.js';
 import { FLAG_NAMING, renderError } from '../errors/render.js';
 import { messageFor } from '../errors/message.js';
@@ -19,6 +18,7 @@ import type { CommandName, CommandOptions, PresenterTable } from './commands/reg
 import type { Presenter } from './output/presenter.js';
 import { fixedBatch, inputBatches } from './input/inputs.js';
 import { Sink } from './output/sink.js';
+import type { OutStream } from './output/fd-writer.js';
 import { visibleControls } from './output/format.js';
 import { styleFor } from './output/style.js';
 import { finishProgram } from './program-setup.js';
@@ -32,8 +32,8 @@ const REPEATABLE: Record<string, string[]> = { react: ['--amount', '--fix', '--c
 export interface CliIo {
   /** Standard input, asked for only when an input is `-` (opening it costs start-up time). */
   stdin: () => AsyncIterable<string | Buffer>;
-  stdout: Writable & { isTTY?: boolean };
-  stderr: Writable & { isTTY?: boolean };
+  stdout: OutStream;
+  stderr: OutStream;
 }
 
 /** Commands to build a program from: how to add them to it, and the presenters their actions run. */

@@ -2,6 +2,7 @@
  * Starts the command line in this process: the streams, an interrupt, a closed pipe, and the exit
  * status. Each bundle of the command line (src/cli/bundles/) calls {@link start} with its commands.
  */
+import { FdWriter, plainOutput, type OutStream } from './output/fd-writer.js';
 import { flushSinksNow, outputFailure } from './output/sink.js';
 import { runProgram, type CommandSet } from './program.js';
 
@@ -27,7 +28,17 @@ function onOutputError(e: NodeJS.ErrnoException): void {
  * start(ALL_COMMANDS)
  */
 export function start(commands: CommandSet): void {
-  process.stdout.on('error', onOutputError);
+  // a file, a pipe or /dev/null takes plain writes; a terminal (or a write that would wait) Node's stream
+  const stream = (fd: 1 | 2): OutStream => {
+    const node = (): OutStream => {
+      const s = fd === 1 ? process.stdout : process.stderr;
+      if (fd === 1) s.on('error', onOutputError);
+      return s;
+    };
+    return plainOutput(fd) ? new FdWriter(fd, node, onOutputError) : node();
+  };
+  const stdout = stream(1);
+  const stderr = stream(2);
 
   // an interrupt keeps the results computed before it: they are written, then pondus stops
   for (const [signal, status] of [['SIGINT', 130], ['SIGTERM', 143]] as const) {
@@ -40,14 +51,14 @@ export function start(commands: CommandSet): void {
     });
   }
 
-  runProgram(process.argv.slice(2), { stdin: () => process.stdin, stdout: process.stdout, stderr: process.stderr }, commands).then(
+  runProgram(process.argv.slice(2), { stdin: () => process.stdin, stdout, stderr }, commands).then(
     (status) => {
       process.exitCode = status;
     },
     (e: unknown) => {
       const code = (e as NodeJS.ErrnoException | null)?.code;
       if (typeof code === 'string' && /^E[A-Z]+$/.test(code)) return onOutputError(e as NodeJS.ErrnoException);
-      process.stderr.write(`pondus: internal error (please report it): ${e instanceof Error ? e.message : String(e)}\n`);
+      stderr.write(`pondus: internal error (please report it): ${e instanceof Error ? e.message : String(e)}\n`);
       process.exitCode = 2;
     },
   );

@@ -1,5 +1,5 @@
-import { once } from 'node:events';
-import type { Writable } from 'node:stream';
+import { once, type EventEmitter } from 'node:events';
+import { FdWriter, type OutStream } from './fd-writer.js';
 
 /** Bytes held before a write even while input keeps coming. */
 const BLOCK = 65536;
@@ -11,7 +11,7 @@ const PENDING = 4096;
 const POOL = 4;
 
 /** The sinks writing to the process's own stdout and stderr, for {@link flushSinksNow}. */
-const processSinks = new Map<Writable, Sink>();
+const processSinks = new Map<OutStream, Sink>();
 
 /**
  * Buffered text output with back-pressure. While input keeps coming, writes accumulate in memory
@@ -39,8 +39,9 @@ export class Sink {
   /** Buffers written out and free again (only for streams known not to keep a chunk after writing it). */
   private readonly free: Buffer[] | null;
 
-  constructor(private readonly stream: Writable) {
-    const own = typeof process !== 'undefined' && (stream === process.stdout || stream === process.stderr);
+  constructor(private readonly stream: OutStream) {
+    // (an FdWriter is the process's own: asking for process.stdout would open Node's stream)
+    const own = stream instanceof FdWriter || (typeof process !== 'undefined' && (stream === process.stdout || stream === process.stderr));
     if (own) processSinks.set(stream, this);
     this.free = own ? [] : null;
   }
@@ -104,7 +105,7 @@ export class Sink {
   async flush(force = false): Promise<void> {
     const held = this.used + this.pending.length;
     if (held >= BLOCK || (force && held > 0)) this.push();
-    if (this.stream.writableNeedDrain) await once(this.stream, 'drain');
+    if (this.stream.writableNeedDrain) await once(this.stream as unknown as EventEmitter, 'drain');
   }
 }
 
