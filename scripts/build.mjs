@@ -77,10 +77,11 @@ const plainSupportsColor = {
   },
 };
 
-// The formula grammar (Chevrotain's tokens and parser class) is built at start-up by any module
-// that imports it, though the fast readers take most inputs: in the command-line bundles the full
-// parser loads it on first use. esbuild wraps a module reached only through require() in a lazy
-// initialiser, so chevrotain and the grammar run when the first formula needs them.
+// The formula and calculator grammars (Chevrotain's tokens and parser classes) are built at
+// start-up by any module that imports them, though the fast readers take most inputs: in the
+// command-line bundles each full parser loads its grammar on first use. esbuild wraps a module
+// reached only through require() in a lazy initialiser, so chevrotain and a grammar run when the
+// first formula or expression needs them.
 const lazyGrammar = {
   name: 'lazy-grammar',
   setup(b) {
@@ -88,6 +89,11 @@ const lazyGrammar = {
       contents: "let full;\nexport function fullGrammar() { return (full ??= require('./full-grammar.ts')); }\n",
       loader: 'ts',
       resolveDir: `${root}src/formula-parser`,
+    }));
+    b.onLoad({ filter: /calc[\\/]grammar-loader\.ts$/ }, () => ({
+      contents: "let full;\nexport function calcFullGrammar() { return (full ??= require('./full-grammar.ts')); }\n",
+      loader: 'ts',
+      resolveDir: `${root}src/calc`,
     }));
   },
 };

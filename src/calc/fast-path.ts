@@ -10,7 +10,7 @@
  * tests/calc/fast-path.test.ts checks that the two agree.
  */
 import { MAX_OPERATIONS } from './parse-expression.js';
-import { CALC_UNIT_SPELLINGS, matchFormulaMass } from './tokens.js';
+import { CALC_UNIT_SPELLINGS, matchFormulaMass } from './spellings.js';
 import type { CalcTree, ExprNode } from './tree.js';
 import { MAX_POWER } from './visitor.js';
 

@@ -7,8 +7,7 @@ import { PondusError } from '../errors/pondus-error.js';
 import { typedIssue } from '../errors/message.js';
 import { columnOf } from '../formula-parser/prescan.js';
 import { fastParseExpression } from './fast-path.js';
-import { calcGrammar } from './grammar.js';
-import { calcLexer } from './tokens.js';
+import { calcFullGrammar } from './grammar-loader.js';
 import type { CalcTree } from './tree.js';
 import { ExprBuilder } from './visitor.js';
 
@@ -53,6 +52,7 @@ export function parseExpression(input: string): CalcTree {
 export function parseWithGrammar(input: string): CalcTree {
   const pre = prescanExpression(input);
   if (pre) throw new PondusError([pre], input);
+  const { calcLexer, calcGrammar } = calcFullGrammar();
   const lexed = calcLexer().tokenize(input);
   if (lexed.errors.length > 0) {
     const o = lexed.errors[0].offset;

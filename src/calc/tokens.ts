@@ -2,28 +2,10 @@
  * Tokens of the calculator's expression language. Patterns only.
  */
 import { createToken, Lexer, type TokenType } from 'chevrotain';
-import { UNIT_SPELLINGS } from '../sigfig/units.js';
+import { CALC_UNIT_SPELLINGS, matchFormulaMass } from './spellings.js';
 
-/** `M(CuSO4·5H2O)`: the molar mass of a formula, brackets inside it balanced. */
-export function matchFormulaMass(text: string, offset: number): RegExpExecArray | null {
-  if (text[offset] !== 'M' || text[offset + 1] !== '(') return null;
-  let depth = 0;
-  for (let i = offset + 1; i < text.length; i++) {
-    const ch = text[i];
-    if (ch === '(') depth++;
-    else if (ch === ')') {
-      depth--;
-      if (depth === 0) return [text.slice(offset, i + 1)] as unknown as RegExpExecArray;
-    }
-  }
-  return null;
-}
+export { CALC_UNIT_SPELLINGS, matchFormulaMass };
 
-/**
- * Every spelling the unit table accepts except the ones with symbols the calculator uses as
- * operators, longest first: the order in which the Unit token tries them.
- */
-export const CALC_UNIT_SPELLINGS: readonly string[] = [...new Set(UNIT_SPELLINGS)].filter((s) => !/[·⁻¹]/.test(s)).sort((a, b) => b.length - a.length);
 const unitSpellings = CALC_UNIT_SPELLINGS.map((s) => s.replace(/[.*+?^${}()|[\]\\/%]/g, (c) => `\\${c}`));
 
 export const WhiteSpace = createToken({ name: 'WhiteSpace', pattern: /[ \t\u00a0]+/, group: Lexer.SKIPPED });

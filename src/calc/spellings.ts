@@ -1,0 +1,31 @@
+/**
+ * What the calculator's tokens match that its fast reader needs too, without the parser library:
+ * the molar mass of a formula, `M(…)`, and the unit spellings, longest first.
+ */
+import { UNIT_SPELLINGS } from '../sigfig/units.js';
+
+/**
+ * `M(CuSO4·5H2O)`: the molar mass of a formula, brackets inside it balanced.
+ *
+ * @example
+ * matchFormulaMass('2 * M(Ca(OH)2)', 4)?.[0] // 'M(Ca(OH)2)'
+ */
+export function matchFormulaMass(text: string, offset: number): RegExpExecArray | null {
+  if (text[offset] !== 'M' || text[offset + 1] !== '(') return null;
+  let depth = 0;
+  for (let i = offset + 1; i < text.length; i++) {
+    const ch = text[i];
+    if (ch === '(') depth++;
+    else if (ch === ')') {
+      depth--;
+      if (depth === 0) return [text.slice(offset, i + 1)] as unknown as RegExpExecArray;
+    }
+  }
+  return null;
+}
+
+/**
+ * Every spelling the unit table accepts except the ones with symbols the calculator uses as
+ * operators, longest first: the order in which the Unit token tries them.
+ */
+export const CALC_UNIT_SPELLINGS: readonly string[] = [...new Set(UNIT_SPELLINGS)].filter((s) => !/[·⁻¹]/.test(s)).sort((a, b) => b.length - a.length);
