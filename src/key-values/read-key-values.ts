@@ -48,13 +48,12 @@ export function readKeyValues(text: string, options: KeyValueOptions = {}): KeyV
   const example = options.example ?? 'C=40.00 H=6.71 O=53.29';
   const trimmed = text.trim();
   if (options.json && trimmed.startsWith('{')) return jsonEntries(text, code);
-  const sep = options.colon ? '[=:]' : '=';
-  const keyChars = options.colon ? '[^\\s=:,;]' : '[^\\s=,;]';
+  const { startRe, pairRe } = options.colon ? COLON_PATTERNS : EQUALS_PATTERNS;
   // a new entry starts at the text start, after , or ;, or after white space followed by KEY=
   const starts: number[] = [];
   // white space starts an entry only at the first space of a run (the rest of the run would fail the same way),
   // so a long run of spaces is tried once, not once per space
-  const startRe = new RegExp(`(^|[,;]|(?<!\\s)\\s)\\s*(${keyChars}+\\s*${sep})`, 'g');
+  startRe.lastIndex = 0;
   let m: RegExpExecArray | null;
   while ((m = startRe.exec(text)) !== null) {
     starts.push(m.index + m[0].length - m[2].length);
@@ -71,7 +70,6 @@ export function readKeyValues(text: string, options: KeyValueOptions = {}): KeyV
   };
   for (const s of starts) if (s > from) cut(s);
   cut(text.length);
-  const pairRe = new RegExp(`^(${keyChars}+)\\s*${sep}\\s*(.*)$`, 's');
   for (const piece of pieces) {
     const lead = piece.text.length - piece.text.trimStart().length;
     const body = piece.text.trim();
@@ -88,6 +86,19 @@ export function readKeyValues(text: string, options: KeyValueOptions = {}): KeyV
   if (out.length === 0) throw fail({ code, message: `nothing to read: write the values as ${example}` }, text);
   return out;
 }
+
+/**
+ * The patterns of a set, made once: where an entry starts (at the text start, after , or ;, or
+ * after white space followed by KEY=; white space only at the first space of a run, so a long run
+ * of spaces is tried once, not once per space), and one entry, KEY=VALUE.
+ */
+function patterns(colon: boolean): { startRe: RegExp; pairRe: RegExp } {
+  const sep = colon ? '[=:]' : '=';
+  const keyChars = colon ? '[^\\s=:,;]' : '[^\\s=,;]';
+  return { startRe: new RegExp(`(^|[,;]|(?<!\\s)\\s)\\s*(${keyChars}+\\s*${sep})`, 'g'), pairRe: new RegExp(`^(${keyChars}+)\\s*${sep}\\s*(.*)$`, 's') };
+}
+const COLON_PATTERNS = patterns(true);
+const EQUALS_PATTERNS = patterns(false);
 
 function splitCommas(chunk: string, at: number): { text: string; at: number }[] {
   const out: { text: string; at: number }[] = [];
