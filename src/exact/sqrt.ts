@@ -22,6 +22,9 @@ export function sqrtDecimal(x: Decimal): Decimal {
   const text = x.toExponential();
   const e = text.indexOf('e');
   const digits = text.charCodeAt(1) === 46 ? text[0] + text.slice(2, e) : text.slice(0, e);
+  // (a Decimal made from a long text keeps all its digits: past a few hundred, the float start
+  // below would overflow, and Decimal's own root is taken)
+  if (digits.length > 250) return x.sqrt();
   const q = Number(text.slice(e + 1)) - (digits.length - 1);
   // scale to a whole number N of at least 2 × (precision + 1) digits, by an even power of ten overall
   let t = Math.max(0, 2 * (precision + 1) - digits.length);

@@ -35,5 +35,9 @@ describe('the square root of a decimal', () => {
     // source: from memory (√2 = 1.41421356237309504880168872420969807856967187537694…)
     expect(sqrtDecimal(new Decimal(2)).toString()).toBe('1.4142135623730950488016887242096980785696718753769');
     expect(sqrtDecimal(new Decimal('0.0049')).toString()).toBe('0.07');
+    // a Decimal made from a long text keeps its digits: the root is still Decimal's own
+    for (const long of ['2'.repeat(300), `1.${'7'.repeat(400)}`, `9${'0'.repeat(260)}1e-500`]) {
+      expect(sqrtDecimal(new Decimal(long)).toString()).toBe(new Decimal(long).sqrt().toString());
+    }
   });
 });
