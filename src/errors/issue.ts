@@ -335,6 +335,8 @@ export type NoteCode =
   | 'AMMONIA_AS_NH3'
   | 'AMMONIA_AS_NH4OH'
   | 'PERCENT_AS_V_V'
+  | 'NON_ELECTROLYTE'
+  | 'ANHYDROUS_DEXTROSE'
   // the caution of a result that will be acted on, as a CSV notes item
   | 'CAUTION';
 
