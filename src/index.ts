@@ -376,7 +376,8 @@ export const readEquivalents = /* @__PURE__ */ guarded('readEquivalents', readEq
 export const safeMilliequivalents = /* @__PURE__ */ safely(milliequivalents);
 import { meqJson as meqJson_ } from './pharmacy/milliequivalents-json.js';
 export const meqJson = /* @__PURE__ */ guarded('meqJson', meqJson_, ['milliequivalentResult', 'text', 'rounding?']);
-export { MAX_COMPONENTS, type OsmolarityResult, type OsmolarityOptions, type IonTotal } from './pharmacy/osmolarity.js';
+export { MAX_COMPONENTS, type OsmolarityResult, type OsmolarityOptions, type OsmolarityComponent, type SaltComponent, type NonElectrolyteComponent, type IonTotal } from './pharmacy/osmolarity.js';
+export { type NonElectrolyteResult } from './pharmacy/non-electrolyte.js';
 import { osmolarity as osmolarity_ } from './pharmacy/osmolarity.js';
 export const osmolarity = /* @__PURE__ */ guarded('osmolarity', osmolarity_, ['text', 'options?']);
 export const safeOsmolarity = /* @__PURE__ */ safely(osmolarity);

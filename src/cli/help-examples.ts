@@ -31,7 +31,7 @@ export const HELP_EXAMPLES: Readonly<Record<string, readonly string[]>> = {
   'sample-basis': ["pondus sample-basis '99.1 %' --to dried --loss '0.50 %'", "pondus sample-basis '98.7 %' --to anhydrous --water '0.32 %'"],
   replicates: ["pondus replicates '99.42 99.61 99.38 99.55 99.47 99.50 %'", "pondus replicates --json '3.080 3.094 3.107 3.056 3.112 g'"],
   meq: ["pondus meq KCl --meq '20 mEq'", "pondus meq KCl --concentration '10 %'"],
-  osmolarity: ["pondus osmolarity 'NaCl=0.9 %'", "pondus osmolarity 'NaCl=0.45 %, KCl=0.15 %'"],
+  osmolarity: ["pondus osmolarity 'NaCl=0.9 %'", "pondus osmolarity 'NaCl=0.45 %, KCl=0.15 %'", "pondus osmolarity 'C6H12O6·H2O=5 %, NaCl=0.45 %'"],
   alligation: ["pondus alligation '10 %' --higher '20 %' --lower '5 %' --total '300 g'", "pondus alligation '70 %' --higher '95 %' --lower '0 %' --total '500 mL'"],
   ion: ["pondus ion C15H15NO2 --adduct '[M+H]+' --found 242.1172", "pondus ion C6H12O6 --adduct '[M+Na]+'"],
   pattern: ['pondus pattern Br2', 'pondus pattern --json CH2Cl2'],

@@ -85,7 +85,7 @@ interface IssueBase {
  * The library functions a message or note may point to (for another way to reach the result), each
  * with a command-line form in `FLAG_NAMING`.
  */
-export type LibraryFunction = 'candidateFormulas' | 'compositionCsvLongRows' | 'concentratedReagent' | 'diluteByMass' | 'dilutionSeries' | 'empirical';
+export type LibraryFunction = 'candidateFormulas' | 'compositionCsvLongRows' | 'concentratedReagent' | 'diluteByMass' | 'dilutionSeries' | 'empirical' | 'milliequivalents';
 
 /**
  * The machine fields of each code that has them: what a script may read without parsing the
@@ -348,6 +348,8 @@ export type NoteCode =
   | 'AMMONIA_AS_NH3'
   | 'AMMONIA_AS_NH4OH'
   | 'PERCENT_AS_V_V'
+  | 'NON_ELECTROLYTE'
+  | 'ANHYDROUS_DEXTROSE'
   // the caution of a result that will be acted on, as a CSV notes item
   | 'CAUTION';
 

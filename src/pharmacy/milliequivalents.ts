@@ -23,7 +23,8 @@ import { exact } from '../sigfig/measured.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
 import { unitOf } from '../sigfig/units.js';
 import { saltIons, type SaltIons } from './salt-ions.js';
-import { readStrength, type Strength } from './strength.js';
+import type { Strength } from './strength.js';
+import { molarStrength } from './molar-strength.js';
 import { atWorkingPrecision, noteFewFigures } from './working-precision.js';
 
 export interface MilliequivalentOptions extends MassOptions {
@@ -117,16 +118,9 @@ export function milliequivalents(saltText: string, o: MilliequivalentOptions): M
     moles = divide(mass, M);
   } else if (o.concentration !== undefined) {
     mode = 'strength';
-    strength = readStrength(o.concentration, 'w/v', notes, 'the strength');
-    if (strength.percent === 'w/w' || strength.percent === 'v/v') throw fail({ code: 'BAD_AMOUNT', message: `a % ${strength.percent} strength needs the solution's density to give mEq per mL; give it as % w/v, g/L or M` }, o.concentration);
-    const q = strength.value;
-    const perL = q.dims[1] === 1 ? q : divide(q.dims[0] === 0 ? multiply(q, quantity(exact(1000), unitOf('g/L'))) : q, M);
-    moles = o.measured ? perL : atWorkingPrecision(perL);
-    notes.push(
-      o.measured
-        ? { code: 'MEASURED_STRENGTH', message: 'the strength is a measured value: the results keep its significant figures' }
-        : { code: 'NOMINAL_STRENGTH', message: `the strength '${o.concentration.trim()}' is read as a label's nominal value, taken as exact; results keep working precision (4 figures); use \`measured: true\` for a measured strength`, options: ['measured'] },
-    );
+    const m = molarStrength(o.concentration, M, o.measured, notes);
+    strength = m.strength;
+    moles = m.molarity;
   } else {
     mode = 'target';
     let target: Quantity;

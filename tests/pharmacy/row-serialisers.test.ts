@@ -17,6 +17,7 @@ describe('the CLI prints exactly the library serialiser', () => {
     ['meq for a target', ['KCl', '--meq', '20 mEq'], () => api.meqJson(api.milliequivalents('KCl', { meq: '20 mEq' }), 'KCl')],
     ['meq of a strength', ['KCl', '--concentration', '14.9 % w/v'], () => api.meqJson(api.milliequivalents('KCl', { concentration: '14.9 % w/v' }), 'KCl')],
     ['osmolarity', ['NaCl=0.9 %, KCl=0.03 %'], () => api.osmolarityJson(api.osmolarity('NaCl=0.9 %, KCl=0.03 %'), 'NaCl=0.9 %, KCl=0.03 %')],
+    ['osmolarity with a non-electrolyte', ['C6H12O6=5 %, NaCl=0.45 %'], () => api.osmolarityJson(api.osmolarity('C6H12O6=5 %, NaCl=0.45 %'), 'C6H12O6=5 %, NaCl=0.45 %')],
     ['alligation', ['10 %', '--higher', '20 %', '--lower', '5 %', '--total', '300 g'], () => api.alligationJson(api.alligation('10 %', { higher: '20 %', lower: '5 %', total: '300 g' }), '10 %')],
     ['potency', ['98.5 %', '--need', '250 mg'], () => api.potencyJson(api.potency('98.5 %', { need: '250 mg' }), '98.5 %', 'half-even', '250 mg')],
     ['strength', ['1:750'], () => api.strengthJson(api.strengthForms('1:750'), '1:750')],

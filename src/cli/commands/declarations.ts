@@ -394,8 +394,8 @@ export function declarePharmacy(program: Command): { meq: Command; osmolarity: C
     withFormulaOptions(
       program
         .command('osmolarity')
-        .description('mOsm/L and mEq/L of a solution of salts (complete dissociation)')
-        .argument('[solutions...]', "salts and strengths: 'NaCl=0.9 %' or 'NaCl=0.6 %, KCl=0.03 %'; - reads one solution per line")
+        .description('mOsm/L and mEq/L of a solution of salts (complete dissociation) and non-electrolytes such as dextrose (one particle per molecule)')
+        .argument('[solutions...]', "solutes and strengths: 'NaCl=0.9 %', 'NaCl=0.6 %, KCl=0.03 %' or 'C6H12O6·H2O=5 %, NaCl=0.45 %'; - reads one solution per line")
         .option('--measured', 'the strengths are measured (keep their significant figures), not nominal label values'),
     ),
   );

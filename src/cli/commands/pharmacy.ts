@@ -1,7 +1,7 @@
 /**
  * The compounding commands: `meq` (mmol, mEq and mOsm of a salt from a mass,
  * a target or a strength), `osmolarity` (mOsm/L and mEq/L of a solution of
- * salts) and `alligation` (two strengths mixed to a target).
+ * salts and non-electrolytes) and `alligation` (two strengths mixed to a target).
  */
 import { hillAside, speciesText } from '../../preparation/species.js';
 import type { Command } from 'commander';
@@ -84,11 +84,14 @@ export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityRe
     compute: numbered((input) => osmolarity(input, opts)),
     json: ({ input, r }) => osmolarityJson(r, input, rounding),
     // one column per ion of the table (wide form): an ion a solution does not hold is left empty
-    columns: ['input', 'line', 'mOsm_per_L', ...TABLE_IONS.map((i) => `${i}_mEq_per_L`)],
+    // the total, its parts from salts and from non-electrolytes (empty when there is none), then by ion
+    columns: ['input', 'line', 'mOsm_per_L', 'salt_mOsm_per_L', 'nonelectrolyte_mOsm_per_L', ...TABLE_IONS.map((i) => `${i}_mEq_per_L`)],
     cells: ({ input, line, r }) => [
       input,
       line,
       reportedIn(r.osmolarity, 'mM', rounding).reported,
+      r.saltOsmolarity ? reportedIn(r.saltOsmolarity, 'mM', rounding).reported : '',
+      r.nonElectrolyteOsmolarity ? reportedIn(r.nonElectrolyteOsmolarity, 'mM', rounding).reported : '',
       ...TABLE_IONS.map((f) => {
         const ion = r.ions.find((i) => i.ion.replace(/\^.*$/, '') === f);
         return ion ? reportedIn(ion.equivalents, 'mM', rounding).reported : '';
@@ -96,9 +99,10 @@ export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityRe
     ],
     block: ({ input, r }) => {
       const lines = [`${input}`];
-      for (const c of r.components) lines.push(`  ${c.salt} ${c.strength}: ${qtext(c.result.moles, 'mM', rounding, 'mmol/L')} × ${c.result.ions.particles} = ${qtext(c.result.osmoles, 'mM', rounding, 'mOsm/L')}`);
-      lines.push(`  osmolarity ${qtext(r.osmolarity, 'mM', rounding, 'mOsm/L')} (ideal, complete dissociation)`);
-      lines.push(`  mEq/L: ${r.ions.map((i) => `${i.ion} ${qtext(i.equivalents, 'mM', rounding, '')}`.trimEnd()).join(', ')}`);
+      for (const c of r.components) lines.push(`  ${c.solute} ${c.strength}: ${qtext(c.result.moles, 'mM', rounding, 'mmol/L')} × ${c.particles} = ${qtext(c.result.osmoles, 'mM', rounding, 'mOsm/L')}${c.kind === 'salt' ? '' : ' (non-electrolyte)'}`);
+      const basis = !r.nonElectrolyteOsmolarity ? 'complete dissociation' : !r.saltOsmolarity ? 'one particle per molecule' : 'complete dissociation of the salts';
+      lines.push(`  osmolarity ${qtext(r.osmolarity, 'mM', rounding, 'mOsm/L')} (ideal, ${basis})`);
+      lines.push(`  mEq/L: ${r.ions.length === 0 ? 'none (no salt)' : r.ions.map((i) => `${i.ion} ${qtext(i.equivalents, 'mM', rounding, '')}`.trimEnd()).join(', ')}`);
       return lines.join('\n');
     },
     notes: ({ r }) => r.notes,

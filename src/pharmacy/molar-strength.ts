@@ -1,0 +1,50 @@
+/**
+ * A label strength as an amount concentration (mol/L) of a solute of known
+ * molar mass: '0.9 %' (read as % w/v), '84 g/L', '0.154 M'. The one step
+ * that `meq --concentration` and each solute of `osmolarity` share. A label's
+ * nominal strength is taken as exact and the result kept at working
+ * precision (noted); a measured strength keeps its significant figures.
+ */
+import type { Note } from '../errors/issue.js';
+import { fail } from '../errors/pondus-error.js';
+import { exact } from '../sigfig/measured.js';
+import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
+import { unitOf } from '../sigfig/units.js';
+import { readStrength, type Strength } from './strength.js';
+import { atWorkingPrecision } from './working-precision.js';
+
+/** A strength read, and the solute's amount concentration it gives. */
+export interface MolarStrength {
+  strength: Strength;
+  /** The solute's amount concentration, mol/L (at working precision unless measured). */
+  molarity: Quantity;
+}
+
+/**
+ * The amount concentration of a solute from a strength, with the NOMINAL_STRENGTH or MEASURED_STRENGTH note.
+ *
+ * @param text - the strength as written: '5 %', '50 g/L', '0.278 M'.
+ * @param molarMass - the solute's molar mass, a Quantity in g/mol.
+ * @param measured - true for a measured strength (its figures are kept), else a nominal label value.
+ * @param notes - where the notes of the reading are added.
+ * @returns the strength and the amount concentration, mol/L.
+ * @throws PondusError: BAD_AMOUNT for a strength without a unit, a % w/w or v/v strength (it needs a density), or one that is not positive; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
+ * @example
+ * const notes = []
+ * const m = molarStrength('0.9 %', quantity(exact('58.44'), unitOf('g/mol')), false, notes)
+ * displayQuantity(m.molarity, 'mM').text // '154.0 mM'
+ * notes.map((n) => n.code) // ['PERCENT_AS_W_V', 'NOMINAL_STRENGTH']
+ */
+export function molarStrength(text: string, molarMass: Quantity, measured: boolean | undefined, notes: Note[]): MolarStrength {
+  const strength = readStrength(text, 'w/v', notes, 'the strength');
+  if (strength.percent === 'w/w' || strength.percent === 'v/v') throw fail({ code: 'BAD_AMOUNT', message: `a % ${strength.percent} strength needs the solution's density to give mmol per mL; give it as % w/v, g/L or M` }, text);
+  const q = strength.value;
+  // an amount concentration as it is; a percent w/v (a pure fraction of g per mL) as g/L; a mass concentration over M
+  const perL = q.dims[1] === 1 ? q : divide(q.dims[0] === 0 ? multiply(q, quantity(exact(1000), unitOf('g/L'))) : q, molarMass);
+  notes.push(
+    measured
+      ? { code: 'MEASURED_STRENGTH', message: 'the strength is a measured value: the results keep its significant figures' }
+      : { code: 'NOMINAL_STRENGTH', message: `the strength '${text.trim()}' is read as a label's nominal value, taken as exact; results keep working precision (4 figures); use \`measured: true\` for a measured strength`, options: ['measured'] },
+  );
+  return { strength, molarity: measured ? perL : atWorkingPrecision(perL) };
+}
