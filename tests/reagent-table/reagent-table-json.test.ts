@@ -38,6 +38,20 @@ describe('the JSON rows of reagents', () => {
     expect(api.reagentRowJson(table.rows[1]).notes.map((n) => n.code)).toEqual(table.rows[1].notes.map((n) => n.code));
     expect(first.caution).toBe(api.TABLE_CAUTION);
   });
+  it('a first row that fails does not take the table notes with it: the first row with a result carries them', () => {
+    const procedure = `role,reagent,formula,amount\nequation,${EQUATION},,\nreagent,Qq,,3.0 equiv\nreference,salicylic acid,C7H6O3,2.00 g\nproduct,aspirin,C9H8O4,\n`;
+    const table = api.reagentTable([SPECS[0], SPECS[2]], { equation: EQUATION });
+    const codes = table.notes.map((n) => n.code);
+    expect(codes.length).toBeGreaterThan(0);
+    const run = pondus(['reagents', '--json', '--procedure', '-'], procedure);
+    const rows = jsonLines(run.stdout);
+    expect(rows[0]).toHaveProperty('error');
+    expect(rows[1].notes.map((n: { code: string }) => n.code).slice(0, codes.length)).toEqual(codes);
+    expect(rows[2].notes.map((n: { code: string }) => n.code)).not.toContain(codes[0]);
+    // and in the table's own output
+    const text = pondus(['reagents', '--procedure', '-'], procedure).stdout;
+    expect(text).toContain(table.notes[0].message);
+  });
   it('refuses a value that is not the result it writes', () => {
     const table = api.reagentTable(SPECS);
     expect(() => api.reagentRowJson({} as never)).toThrow(/reagentRowJson: argument 1 must be a reagent-table row/);

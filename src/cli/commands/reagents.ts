@@ -118,7 +118,8 @@ export function reagentsPresenter(o: ReagentsCliOptions): Presenter<ReagentRow> 
   const tableNotes: Note[] = ctx ? ctx.notes : [];
   const caution = tableCautions(ok).join('; ');
   const rowNotes = (r: ReagentRow, first: boolean): Note[] => [...(first ? tableNotes : []), ...r.notes.filter((n) => n.code !== 'CAUTION')];
-  const firstInput = plan[0]?.input;
+  // the table's notes go with the first row that has a result, so that a row that fails cannot drop them
+  const firstInput = plan.find((p) => !(results.get(p.input) instanceof PondusError))?.input;
   const lastInput = plan[plan.length - 1]?.input;
   let mdHeader = false;
   return {
