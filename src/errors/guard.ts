@@ -38,6 +38,14 @@ const SHAPES = {
   solutionResult: { name: 'a solution result (from prepareSolution)', fields: { reagent: 'massDetail', target: 'object', volume: 'quantity', purity: 'quantity|null', moles: 'instruction|null', mass: 'instruction|null', made: 'quantity|null', unit: 'text', notes: 'array' } },
   substituteResult: { name: 'a substitution result (from substituteForm)', fields: { use: 'massDetail', instead: 'massDetail', asked: 'quantity', moles: 'instruction', mass: 'instruction', purity: 'quantity|null', notes: 'array' } },
   concentratedResult: { name: 'a concentrated-reagent result (from concentratedReagent)', fields: { reagent: 'massDetail', fraction: 'quantity', density: 'quantity', densitySource: 'text', molarity: 'quantity', textbookSigFigs: 'number', massConcentration: 'quantity', take: 'instruction|null', factor: 'decimal|null', notes: 'array' } },
+  note: { name: 'a note ({ code, message })', fields: { code: 'text', message: 'text' } },
+  dilutionResult: { name: 'a dilution result (from dilute)', fields: { stock: 'quantity', target: 'quantity|null', finalVolume: 'quantity', stockVolume: 'instruction|null', solventVolume: 'instruction|null', factor: 'quantity', made: 'quantity|null', written: 'object', notes: 'array' } },
+  seriesResult: { name: 'a serial dilution plan (from dilutionSeries)', fields: { factor: 'decimal', stock: 'quantity|null', volume: 'quantity', minTransfer: 'quantity', maxStep: 'decimal', steps: 'array', written: 'object', notes: 'array' } },
+  massDilutionResult: { name: 'a dilution by mass (from diluteByMass)', fields: { stock: 'quantity', target: 'quantity', total: 'quantity', take: 'instruction', diluent: 'instruction', factor: 'quantity', written: 'object', notes: 'array' } },
+  saltFactorResult: { name: 'a salt/parent factor (from saltFactor)', fields: { salt: 'massDetail', parent: 'massDetail', form: 'text', metalSalt: 'object|null', factor: 'decimal', reported: 'measured', saltMass: 'instruction|null', parentMass: 'quantity|null', notes: 'array' } },
+  prepSheetRow: { name: 'a prep-sheet row (from readPrepSheet)', fields: { line: 'number', raw: 'text', id: 'text', reagent: 'text', formula: 'text', purity: 'text', density: 'text', as: 'text', target: 'text', volume: 'text', weighed: 'text', taken: 'text' } },
+  prepRowResult: { name: 'a prep-sheet row result (from prepRow)', fields: { row: 'prepSheetRow', kind: 'text', solution: 'solutionResult?', concentrated: 'concentratedResult?' } },
+  molarMassUncertainty: { name: 'a molar-mass uncertainty (from molarMassUncertainty)', fields: { value: 'decimal', standardUncertainty: 'decimal', terms: 'array' } },
   milliequivalentResult: { name: 'a milliequivalents result (from milliequivalents)', fields: { salt: 'massDetail', ions: 'object', mode: 'text', mass: 'quantity|null', moles: 'quantity', equivalents: 'quantity', osmoles: 'quantity', perIon: 'array', notes: 'array' } },
   osmolarityResult: { name: 'an osmolarity result (from osmolarity)', fields: { components: 'array', osmolarity: 'quantity', ions: 'array', notes: 'array' } },
   potencyResult: { name: 'a potency result (from potency)', fields: { given: 'quantity', basis: 'text', asIs: 'quantity', weigh: 'instruction|null', notes: 'array' } },
@@ -70,7 +78,7 @@ type ShapeName = keyof typeof SHAPES;
 
 /** The plain kinds: `text` a string; `tree` a string or a parsed formula; and so on (see {@link ParamKind}). */
 type PlainKind = 'text' | 'tree' | 'numeric' | 'notation' | 'number' | 'posint' | 'rounding' | 'decimal' | 'object' | 'options' | 'array' | 'map' | 'function' | 'bigint' | 'iterable' | 'error' | 'unit' | 'isotopeKey' | 'atomKeys';
-type ArrayKind = `${'text' | 'measured' | 'compositionResult' | 'reagentRow' | 'peak'}[]`;
+type ArrayKind = `${'text' | 'measured' | 'compositionResult' | 'reagentRow' | 'peak' | 'prepSheetRow' | 'note'}[]`;
 
 /**
  * The kind of value a public function's parameter takes, checked at the public API's boundary:

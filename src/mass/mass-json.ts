@@ -9,6 +9,7 @@ import { noteText as noteWords } from '../errors/message.js';
 import { notesJson, type NoteJson } from '../errors/note-json.js';
 import { jsonNumber } from '../exact/json-number.js';
 import type { MassResult } from './formula-mass.js';
+import type { MolarMassUncertainty } from './uncertainty.js';
 
 /** A note as it appears in JSON rows. */
 
@@ -44,6 +45,48 @@ export function massJson(r: MassResult): MassJson {
     nominalMass: r.nominalMass,
     charge: r.charge,
     notes: notesJson(r.notes),
+  };
+}
+
+/** How the uncertainty of `mass --uncertainty` is obtained, said wherever it is shown (table, JSON, CSV). */
+export const UNCERTAINTY_BASIS =
+  'u from the CIAAW atomic-weight intervals and uncertainties read as rectangular distributions (van der Veen et al., Pure Appl. Chem. 93 (2021) 629); the value is the centre of those distributions, not the molar mass from the conventional weights';
+
+/** The stable JSON shape of a mass result with the uncertainty of its molar mass (`mass --uncertainty --json`). */
+export interface MassUncertaintyJson extends MassJson {
+  molarMassUncertainty: {
+    /** The centre of the atomic-weight distributions, g/mol. */
+    value: number;
+    /** The standard uncertainty, g/mol (k = 1). */
+    standardUncertainty: number;
+  };
+  /** How the uncertainty was obtained ({@link UNCERTAINTY_BASIS}). */
+  caution: string;
+}
+
+/**
+ * The JSON object `pondus mass --uncertainty --json` writes for one result: the mass row, the
+ * molar mass's standard uncertainty and the basis of it.
+ *
+ * @param r - a mass result (from formulaMass, or plainMass of a detailed result).
+ * @param u - the uncertainty of the same formula's molar mass (from molarMassUncertainty).
+ * @returns the fields of {@link massJson}, then `molarMassUncertainty` (the centre value and the standard uncertainty, g/mol) and the basis as `caution`.
+ * @throws PondusError: BAD_ARGUMENT when `r` is not a mass result or `u` not a molar-mass uncertainty.
+ * @example
+ * const d = formulaMassDetail('H2O')
+ * massUncertaintyJson(plainMass(d), molarMassUncertainty(d)).molarMassUncertainty.standardUncertainty // 0.000264…
+ */
+export function massUncertaintyJson(r: MassResult, u: MolarMassUncertainty): MassUncertaintyJson {
+  return {
+    input: r.input,
+    formula: r.formula,
+    molarMass: r.molarMass,
+    monoisotopicMass: r.monoisotopicMass,
+    nominalMass: r.nominalMass,
+    charge: r.charge,
+    notes: notesJson(r.notes),
+    molarMassUncertainty: { value: u.value.toNumber(), standardUncertainty: u.standardUncertainty.toNumber() },
+    caution: UNCERTAINTY_BASIS,
   };
 }
 

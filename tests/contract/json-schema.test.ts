@@ -40,7 +40,7 @@ const sheet = (name: string, text: string) => {
 };
 const ionSheet = sheet('ions.csv', 'id,formula,ion,found\nA1,C6H12O6,[M+Na]+,203.0526\nA2,Qq,[M+H]+,100\n');
 const eaSheet = sheet('ea.csv', 'id,formula,C,H,N\nX1,C20H25N3O,72.30,7.91,12.60\nX2,Qq,1,1,1\n');
-const prepSheet = sheet('prep.csv', 'id,reagent,form,purity,density,target,volume,weighed,taken\nP-01,sodium chloride,NaCl,99.5 %,,0.100 M,250.0 mL,,\nP-02,unknown,Qq,98.5 %,,0.100 M,250.0 mL,,\n');
+const prepSheet = sheet('prep.csv', 'id,reagent,form,purity,density,target,volume,weighed,taken\nP-01,sodium chloride,NaCl,99.5 %,,0.100 M,250.0 mL,,\nP-02,unknown,Qq,98.5 %,,0.100 M,250.0 mL,,\nP-03,sodium chloride,NaCl,,,,250.0 mL,1.461 g,\n');
 const measSheet = sheet('measurements.csv', 'id,C,H,O\nS1,40.00,6.71,53.29\nS2,abc,6.71,53.29\n');
 
 /**
@@ -71,6 +71,8 @@ const MORE: Record<string, [string, boolean | null, string?][]> = {
     ["pondus dilute abc --to '0.100 M' --volume '250.0 mL'", true],
     ["pondus dilute '1:1000' --series --volume '10.00 mL'", false],
     ["pondus dilute '1.00 M' --to '1.00 mM' --series --volume '10.00 mL'", false],
+    ["pondus dilute '10 % w/w' --to '2.5 % w/w' --mass '60.0 g'", false],
+    ["pondus dilute - --to '2.5 mg/g' --mass '60.0 g'", null, '10 % w/w\nabc\n5 mg/g\n'],
   ],
   gravimetric: [['pondus gravimetric Qq --weighed Fe2O3', true]],
   basis: [['pondus basis Qq --to P', true]],

@@ -5,11 +5,13 @@ import { convertBasis, type BasisResult } from '../../preparation/basis.js';
 import type { ConversionFactor } from '../../preparation/conversion-factor.js';
 import { BENCH_CAUTION, DOSE_CAUTION } from '../../preparation/caution.js';
 import { dilute, type DilutionResult } from '../../preparation/dilution.js';
+import { dilutionJson } from '../../preparation/dilution-json.js';
 import { gravimetric, type GravimetricResult } from '../../preparation/gravimetric.js';
 import { gravimetricJson } from '../../preparation/gravimetric-json.js';
 import { basisJson } from '../../preparation/basis-json.js';
-import { displayInstruction, displayResult, instruction, instructionJson, resultJson, volumeUnitFor, type Instruction } from '../../sigfig/instruction.js';
+import { displayInstruction, displayResult, instruction, volumeUnitFor, type Instruction } from '../../sigfig/instruction.js';
 import { saltFactor, type SaltFactorResult } from '../../preparation/salt-factor.js';
+import { saltFactorJson } from '../../preparation/salt-factor-json.js';
 import type { Quantity } from '../../sigfig/quantity.js';
 import { displayMeasured, type RoundingMode } from '../../sigfig/round.js';
 import { speciesText } from '../../preparation/species.js';
@@ -52,18 +54,7 @@ function oneStepPresenter(o: DiluteCliOptions): Presenter<DilutionResult> {
   const vUnit = (r: DilutionResult) => (r.stockVolume ? volumeUnitFor(r.stockVolume.quantity, r.finalVolume.unit) : undefined);
   return {
     compute: (stock) => dilute(stock, o.to, o.volume!, o.taken),
-    json: (r) => ({
-      input: r.written.stock,
-      target: r.written.target,
-      finalVolume: r.written.volume,
-      stockVolume: r.stockVolume ? instructionJson(r.stockVolume, vUnit(r), rounding) : null,
-      solventVolume: r.solventVolume ? instructionJson(r.solventVolume, r.finalVolume.unit?.symbol, rounding) : null,
-      factor: r.factor.value.toNumber(),
-      taken: r.written.taken,
-      made: r.made ? resultJson(r.made, r.stock.unit?.symbol, rounding) : null,
-      notes: notesJson(r.notes),
-      caution: BENCH_CAUTION,
-    }),
+    json: (r) => dilutionJson(r, rounding),
     columns: ['input', 'target', 'finalVolume', 'stockVolume', 'display', 'made'],
     cells: (r) => [r.written.stock, r.written.target, r.written.volume, r.stockVolume ? r.stockVolume.quantity.value.toFixed() : '', ins(r.stockVolume, vUnit(r)), text(r.made)],
     block: (r) => {
@@ -150,25 +141,10 @@ interface SaltCliOptions extends OutputOptions, RoundingOptions {
 export function saltPresenter(o: SaltCliOptions): Presenter<SaltFactorResult> {
   const rounding = roundingOf(o);
   const { text, ins } = shows(rounding);
+  const given = { parentMass: o.dose, saltMass: o.saltMass };
   return {
-    compute: (salt) => saltFactor(salt, o.parent!, { parentMass: o.dose, saltMass: o.saltMass }),
-    json: (r) => ({
-      input: r.salt.input,
-      salt: speciesText(r.salt),
-      parent: speciesText(r.parent),
-      saltHill: r.salt.formula,
-      parentHill: r.parent.formula,
-      form: r.form,
-      metalSalt: r.metalSalt,
-      factor: r.factor.toNumber(),
-      factorDisplay: displayMeasured(r.reported, rounding).text,
-      dose: o.dose?.trim() ?? null,
-      saltMass: r.saltMass ? instructionJson(r.saltMass, r.saltMass.quantity.unit?.symbol, rounding) : null,
-      saltGiven: o.saltMass?.trim() ?? null,
-      parentMass: r.parentMass ? resultJson(r.parentMass, r.parentMass.unit?.symbol, rounding) : null,
-      notes: notesJson(r.notes),
-      caution: DOSE_CAUTION,
-    }),
+    compute: (salt) => saltFactor(salt, o.parent!, given),
+    json: (r) => saltFactorJson(r, given, rounding),
     columns: ['salt', 'parent', 'factor', 'saltMass', 'parentMass', 'saltHill', 'parentHill'],
     cells: (r) => [speciesText(r.salt), speciesText(r.parent), r.factor.toFixed(), ins(r.saltMass), text(r.parentMass), r.salt.formula, r.parent.formula],
     block: (r) => {

@@ -7,7 +7,8 @@ import { fail } from '../../errors/pondus-error.js';
 import { BENCH_CAUTION } from '../../preparation/caution.js';
 import { dilutionSeries, MAX_SERIES_STEPS, type SeriesResult } from '../../preparation/dilution-series.js';
 import { diluteByMass, type MassDilutionResult } from '../../preparation/mass-dilution.js';
-import { displayInstruction, instructionJson, massUnitFor, volumeUnitFor, type Instruction } from '../../sigfig/instruction.js';
+import { massDilutionJson, seriesJson } from '../../preparation/dilution-json.js';
+import { displayInstruction, massUnitFor, volumeUnitFor, type Instruction } from '../../sigfig/instruction.js';
 import type { RoundingMode } from '../../sigfig/round.js';
 import type { Presenter } from '../output/presenter.js';
 import { conflict, given, roundingOf, type OutputOptions, type RoundingOptions } from './common.js';
@@ -59,24 +60,7 @@ export function seriesPresenter(o: DilutePlanCliOptions): Presenter<SeriesResult
   for (let k = 1; k <= MAX_SERIES_STEPS; k++) stepCols.push(`step${k}_factor`, `step${k}_take_L`, `step${k}_take`);
   return {
     compute: (input) => (o.to !== undefined ? dilutionSeries({ stock: input, target: o.to, volume: o.volume!, minTransfer: o.minTransfer, maxStep: o.maxStep }) : dilutionSeries({ factor: input, volume: o.volume!, minTransfer: o.minTransfer, maxStep: o.maxStep })),
-    json: (r) => ({
-      input: r.written.stock ?? r.written.factor,
-      target: r.written.target,
-      factor: r.factor.toNumber(),
-      volume: r.written.volume,
-      minTransfer: instructionJson({ kind: 'instruction', quantity: r.minTransfer, textbookSigFigs: null, inputs: [] }, 'µL', rounding).display,
-      maxStep: r.maxStep.toNumber(),
-      steps: r.steps.map((s) => ({
-        step: s.step,
-        factor: s.factor.toNumber(),
-        take: instructionJson(s.take, vu(r, s.take), rounding),
-        diluent: instructionJson(s.diluent, r.volume.unit?.symbol, rounding),
-        concentration: s.concentration ? instructionJson(s.concentration, r.stock?.unit?.symbol, rounding) : null,
-        cumulative: s.cumulative.toNumber(),
-      })),
-      notes: notesJson(r.notes),
-      caution: BENCH_CAUTION,
-    }),
+    json: (r) => seriesJson(r, rounding),
     columns: ['input', 'target', 'factor', 'volume', 'steps', ...stepCols],
     cells: (r) => {
       const cells: (string | number)[] = [r.written.stock ?? r.written.factor ?? '', r.written.target ?? '', r.factor.toFixed(), r.written.volume, r.steps.length];
@@ -109,16 +93,7 @@ export function massDilutionPresenter(o: DilutePlanCliOptions): Presenter<MassDi
   const mu = (r: MassDilutionResult) => massUnitFor(r.take.quantity);
   return {
     compute: (input) => diluteByMass(input, o.to!, o.mass!),
-    json: (r) => ({
-      input: r.written.stock,
-      target: r.written.target,
-      total: r.written.total,
-      take: instructionJson(r.take, mu(r), rounding),
-      diluent: instructionJson(r.diluent, massUnitFor(r.diluent.quantity), rounding),
-      factor: r.factor.value.toNumber(),
-      notes: notesJson(r.notes),
-      caution: BENCH_CAUTION,
-    }),
+    json: (r) => massDilutionJson(r, rounding),
     columns: ['input', 'target', 'total', 'take_g', 'take', 'diluent_g', 'diluent'],
     cells: (r) => [r.written.stock, r.written.target, r.written.total, r.take.quantity.value.toFixed(), w(r.take, mu(r)), r.diluent.quantity.value.toFixed(), w(r.diluent, massUnitFor(r.diluent.quantity))],
     block: (r) =>

@@ -1,7 +1,7 @@
 import type { Command } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
 import { formulaMass, formulaMassDetail, plainMass, type MassDetail } from '../../mass/formula-mass.js';
-import { MASS_COLUMNS, massCells, massJson, massJsonLine } from '../../mass/mass-json.js';
+import { MASS_COLUMNS, massCells, massJson, massJsonLine, massUncertaintyJson, UNCERTAINTY_BASIS } from '../../mass/mass-json.js';
 import { formatWithUncertainty, molarMassUncertainty, type MolarMassUncertainty } from '../../mass/uncertainty.js';
 import { chargeLabel, displayMolarMass, displayMonoisotopic } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
@@ -46,9 +46,6 @@ function plainPresenter(o: MassCliOptions): Presenter<MassDetail> {
   };
 }
 
-/** How the uncertainty is obtained, said wherever it is shown (table, JSON, CSV). */
-const UNCERTAINTY_BASIS = 'u from the CIAAW atomic-weight intervals and uncertainties read as rectangular distributions (van der Veen et al., Pure Appl. Chem. 93 (2021) 629); the value is the centre of those distributions, not the molar mass from the conventional weights';
-
 function uncertaintyPresenter(o: MassCliOptions): Presenter<MassRow> {
   const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations };
   return {
@@ -56,7 +53,7 @@ function uncertaintyPresenter(o: MassCliOptions): Presenter<MassRow> {
       const mass = formulaMassDetail(input, opts);
       return { mass, u: molarMassUncertainty(mass) };
     },
-    json: (r) => ({ ...massJson(plainMass(r.mass)), molarMassUncertainty: { value: r.u!.value.toNumber(), standardUncertainty: r.u!.standardUncertainty.toNumber() }, caution: UNCERTAINTY_BASIS }),
+    json: (r) => massUncertaintyJson(plainMass(r.mass), r.u!),
     columns: [...columns, 'uncertaintyValue', 'standardUncertainty'],
     cells: (r) => [...cells(r.mass), r.u!.value.toFixed(), r.u!.standardUncertainty.toFixed()],
     table: {

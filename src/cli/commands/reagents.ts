@@ -1,11 +1,10 @@
-import { notesJson } from '../../errors/note-json.js';
 import type { Command } from 'commander';
 import { fail, PondusError } from '../../errors/pondus-error.js';
 import type { Note } from '../../errors/issue.js';
 import { readProcedure, type ProcedureRow } from '../../reagent-table/procedure.js';
 import { reagentRowJson } from '../../reagent-table/reagent-table-json.js';
 import { readRowText } from '../../reagent-table/row-text.js';
-import { reagentRow, solventRow, TABLE_CAUTION, tableCautions, tableContext, type ReagentRole, type ReagentRow, type ReagentSpec, type ReagentTableOptions, type TableContext } from '../../reagent-table/table.js';
+import { reagentRow, solventRow, tableCautions, tableContext, type ReagentRole, type ReagentRow, type ReagentSpec, type ReagentTableOptions, type TableContext } from '../../reagent-table/table.js';
 import { readSheetText } from '../input/sheet-file.js';
 import type { Cell } from '../output/format.js';
 import type { Presenter } from '../output/presenter.js';
@@ -119,7 +118,8 @@ export function reagentsPresenter(o: ReagentsCliOptions): Presenter<ReagentRow> 
   const tableNotes: Note[] = ctx ? ctx.notes : [];
   const caution = tableCautions(ok).join('; ');
   const rowNotes = (r: ReagentRow, first: boolean): Note[] => [...(first ? tableNotes : []), ...r.notes.filter((n) => n.code !== 'CAUTION')];
-  const firstInput = plan[0]?.input;
+  // the table's notes go with the first row that has a result, so that a row that fails cannot drop them
+  const firstInput = plan.find((p) => !(results.get(p.input) instanceof PondusError))?.input;
   const lastInput = plan[plan.length - 1]?.input;
   let mdHeader = false;
   return {
@@ -129,7 +129,7 @@ export function reagentsPresenter(o: ReagentsCliOptions): Presenter<ReagentRow> 
       if (r instanceof PondusError) throw r;
       return r;
     },
-    json: (r) => ({ ...reagentRowJson(r), notes: notesJson([...(r.input === firstInput ? tableNotes : []), ...r.notes]), caution: TABLE_CAUTION }),
+    json: (r) => reagentRowJson(r, r.input === firstInput ? tableNotes : undefined),
     // the written columns first (a procedure file reads them back), then what was computed
     columns: ['input', 'role', 'reagent', 'formula', 'amount', 'purity', 'density', 'solution', 'form', 'actual', 'equation', 'name', 'hill_formula', 'M_g_per_mol', 'equiv', 'n_mmol', 'mass', 'mass_unit', 'volume', 'volume_unit', 'percent_yield'],
     cells: (r): Cell[] => [
