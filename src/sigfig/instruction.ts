@@ -217,6 +217,10 @@ export interface AmountJson {
   sigFigs: number | null;
   /** For an instruction: the figures the textbook rules would give. */
   textbookSigFigs?: number | null;
+  /** The number shown, without its unit: '1.461' (the figure as reported, rounded once). */
+  figure: string;
+  /** The unit shown in `display`: 'mg', 'mL', 'M', '%' ('' for a pure number). */
+  displayUnit: string;
 }
 
 /**
@@ -225,14 +229,14 @@ export interface AmountJson {
  * @param ins - an instruction (a mass to weigh, a volume to take).
  * @param wanted - the unit of the display text, as a symbol or a unit; by default its own unit, else the base unit.
  * @param rounding - 'half-even' (default) or 'half-up'.
- * @returns `{ kind: 'instruction', value, unit, display, sigFigs, textbookSigFigs }`, the value unrounded in the base unit.
+ * @returns `{ kind: 'instruction', value, unit, display, sigFigs, textbookSigFigs, figure, displayUnit }`, the value unrounded in the base unit.
  * @throws PondusError: UNKNOWN_UNIT for an unknown symbol; INCOMPATIBLE_UNITS when `wanted` is of another dimension; BAD_ARGUMENT when `ins` is not an instruction, `wanted` not a unit, a string or null, or `rounding` not a rounding mode.
  * @example
  * instructionJson(instruction(measure('0.1 M * 250 mL * 58.44 g/mol'), []), 'g').display // '1.461 g'
  */
 export function instructionJson(ins: Instruction, wanted?: string | Unit | null, rounding: RoundingMode = 'half-even'): AmountJson {
   const d = displayInstruction(ins, wanted, rounding);
-  return { kind: 'instruction', value: ins.quantity.value.toNumber(), unit: baseUnitText(ins.quantity.dims), display: d.text, sigFigs: d.sigFigs, textbookSigFigs: ins.textbookSigFigs };
+  return { kind: 'instruction', value: ins.quantity.value.toNumber(), unit: baseUnitText(ins.quantity.dims), display: d.text, sigFigs: d.sigFigs, textbookSigFigs: ins.textbookSigFigs, figure: d.figure, displayUnit: d.unit };
 }
 
 /**
@@ -241,12 +245,12 @@ export function instructionJson(ins: Instruction, wanted?: string | Unit | null,
  * @param q - a quantity computed from measurements.
  * @param wanted - the unit of the display text, as a symbol or a unit; by default its own unit, else the base unit.
  * @param rounding - 'half-even' (default) or 'half-up'.
- * @returns `{ kind: 'result', value, unit, display, sigFigs }`, the value unrounded in the base unit.
+ * @returns `{ kind: 'result', value, unit, display, sigFigs, figure, displayUnit }`, the value unrounded in the base unit.
  * @throws PondusError: UNKNOWN_UNIT for an unknown symbol; INCOMPATIBLE_UNITS when `wanted` is of another dimension; BAD_ARGUMENT when `q` is not a Quantity, `wanted` not a unit, a string or null, or `rounding` not a rounding mode.
  * @example
  * resultJson(measure('1.4587 g / 58.44 g/mol / 250.0 mL'), 'M').display // '0.09984 M'
  */
 export function resultJson(q: Quantity, wanted?: string | Unit | null, rounding: RoundingMode = 'half-even'): AmountJson {
   const d = displayResult(q, wanted, rounding);
-  return { kind: 'result', value: q.value.toNumber(), unit: baseUnitText(q.dims), display: d.text, sigFigs: d.sigFigs };
+  return { kind: 'result', value: q.value.toNumber(), unit: baseUnitText(q.dims), display: d.text, sigFigs: d.sigFigs, figure: d.figure, displayUnit: d.unit };
 }

@@ -108,7 +108,7 @@ describe('instructions at working precision, results with textbook figures', () 
 
   it('JSON carries the instruction and the unrounded value, clearly named', () => {
     const [j] = jsonLines(pondus(['prepare', '--json', 'NaCl', '--concentration', '0.1 M', '--volume', '250 mL']).stdout);
-    expect(j.mass).toEqual({ kind: 'instruction', value: 1.460994232, unit: 'g', display: '1.461 g', sigFigs: 4, textbookSigFigs: 1 });
+    expect(j.mass).toEqual({ kind: 'instruction', value: 1.460994232, unit: 'g', display: '1.461 g', sigFigs: 4, textbookSigFigs: 1, figure: '1.461', displayUnit: 'g' });
     expect(codes(j)).toEqual(['MEASUREMENT', 'WORKING_PRECISION']);
     expect(j.caution).toMatch(/lab's procedures/);
   });
