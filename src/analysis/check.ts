@@ -210,10 +210,10 @@ function decimalsOf(written: string): number {
   return dot < 0 ? 0 : written.length - dot - 1;
 }
 
-const solventShares = new Map<string, Map<string, { share: Decimal; name: string }>>();
+const solventShares = new Map<string, Map<string, { share: Decimal; percentNumber: number; name: string }>>();
 
 /** The largest mass share of each element among the common solvents and salt partners (cached per weight table). */
-function commonPartnerShares(options: MassOptions): Map<string, { share: Decimal; name: string }> {
+function commonPartnerShares(options: MassOptions): Map<string, { share: Decimal; percentNumber: number; name: string }> {
   const key = options.weights ?? 'standard';
   let out = solventShares.get(key);
   if (out) return out;
@@ -223,7 +223,7 @@ function commonPartnerShares(options: MassOptions): Map<string, { share: Decimal
     for (const s of m.atoms.keys()) {
       const share = exactMass(m, s).div(m.molarMass);
       const prev = out.get(s);
-      if (!prev || share.gt(prev.share)) out.set(s, { share, name });
+      if (!prev || share.gt(prev.share)) out.set(s, { share, percentNumber: share.times(100).toNumber(), name });
     }
   }
   solventShares.set(key, out);
@@ -241,7 +241,14 @@ function impossibleNotes(base: MassDetail, partners: Partner[], partnerMasses: M
     const s = symbols[i];
     const v = found.get(s)!;
     // well within the tolerance in floating point: no exact quotient needed
-    if (figures.foundNumbers[i] - (figures.massNumbers[i] / figures.molarNumber) * 100 - tol < -1e-9) continue;
+    const ownNumber = (figures.massNumbers[i] / figures.molarNumber) * 100;
+    if (figures.foundNumbers[i] - ownNumber - tol < -1e-9) continue;
+    // without partners, a common solvent or salt partner that holds more of the element, well
+    // beyond the value, explains it too (floating point decides all but a near tie)
+    if (partners.length === 0) {
+      const common = commonPartnerShares(options).get(s);
+      if (common && figures.foundNumbers[i] - Math.max(ownNumber, common.percentNumber) - tol < -1e-9) continue;
+    }
     const ownMass = figures.masses()[i];
     const own = ownMass.div(base.molarMass).times(100);
     if (v.minus(own).lte(tolerance)) continue;
