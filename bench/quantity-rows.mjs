@@ -63,7 +63,8 @@ export async function quantityRows({ quick = false } = {}) {
     ['prepare, options fixed', ['prepare', ...prepareOptions, '--json', '-'], await dataFile('reagents', 10_000, generateReagents), 5],
     ['empirical', ['empirical', '--json', '-'], await dataFile('measurements', 3_000, (n) => generateMeasurementSets(n, lib)), 20],
   ];
-  const reps = quick ? 3 : 5;
+  // 9 rounds of these short runs: on a shared machine a row moved by ±1 between runs of 5
+  const reps = quick ? 3 : 9;
   const bare = new Map(rows.map((r) => [r[2], []]));
   const times = rows.map(() => []);
   for (let i = 0; i < reps; i++) {

@@ -73,7 +73,8 @@ function dataFile(name, n, gen) {
 const plain300 = dataFile('formulas', 300_000, generateFormulas);
 const plain30 = dataFile('formulas', 30_000, generateFormulas);
 const mixed300 = dataFile('mixed', 300_000, generateMixedFormulas);
-const reps = quick ? 3 : 5;
+// 7 rounds: on a shared machine a row moves by ±0.5 between runs of 5
+const reps = quick ? 3 : 7;
 const bareLoop = `${root}bench/bare-loop.mjs`;
 const echoLoop = `${root}bench/echo-loop.mjs`;
 // the best plain JavaScript can do for mass --json on plain formulas: the same bytes, no pondus code
