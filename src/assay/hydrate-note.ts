@@ -22,12 +22,24 @@ import type { ComponentNode } from '../formula-parser/tree.js';
 export function hydrateWater(m: MassDetail): number {
   let water = 0;
   m.tree.components.slice(1).forEach((c: ComponentNode) => {
-    const counts = flattenFormula({ kind: 'formula', input: '', components: [c], charge: 0, notes: [] });
-    const h = counts.get('H');
-    const o = counts.get('O');
-    if (counts.size === 2 && h !== undefined && o !== undefined && toDecimal(h).eq(toDecimal(o).times(2))) water += toDecimal(o).toNumber();
+    water += waterIn(c);
   });
   return water;
+}
+
+/**
+ * The moles of water a component of a formula is, with its multiplier (5 for `5H2O`), or 0 when it
+ * is not water.
+ *
+ * @example
+ * waterIn(parseFormula('CuSO4·5H2O').components[1]) // 5
+ * waterIn(parseFormula('CuSO4·5H2O').components[0]) // 0
+ */
+export function waterIn(c: ComponentNode): number {
+  const counts = flattenFormula({ kind: 'formula', input: '', components: [c], charge: 0, notes: [] });
+  const h = counts.get('H');
+  const o = counts.get('O');
+  return counts.size === 2 && h !== undefined && o !== undefined && toDecimal(h).eq(toDecimal(o).times(2)) ? toDecimal(o).toNumber() : 0;
 }
 
 /**

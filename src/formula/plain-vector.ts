@@ -14,6 +14,7 @@ import { mayStartCharge, plainSymbol, readEndCharge } from '../formula-parser/fa
 import { isCaseTrap } from '../formula-parser/hints.js';
 import { MAX_FORMULA_LENGTH, MAX_NESTING } from '../formula-parser/prescan.js';
 import { mayNeedSettling } from '../formula-parser/readings.js';
+import type { ParseOptions } from '../formula-parser/parse.js';
 import { MAX_COUNT_DIGITS } from '../formula-parser/visitor.js';
 import { hillIds, MAX_ATOMS, type AtomVector } from './flatten.js';
 
@@ -243,4 +244,17 @@ export function plainVector(input: string): PlainVector | null {
   }
   if (tooMany) return null;
   return { vector: { ids, counts, whole: true, seen }, charge };
+}
+
+/**
+ * {@link plainVector} for a text read with reading options: null also where the options ask for
+ * what the plain reader does not do (every abbreviation read, or a shorter length limit).
+ *
+ * @example
+ * plainVectorFor('H2O', {})?.vector.counts                  // [2, 1]
+ * plainVectorFor('H2O', { abbreviations: true })            // null
+ */
+export function plainVectorFor(input: string, options: ParseOptions): PlainVector | null {
+  if (options.abbreviations === true || (options.maxLength !== undefined && input.length > options.maxLength)) return null;
+  return plainVector(input);
 }

@@ -21,7 +21,7 @@ import { smallNumberText } from '../exact/json-number.js';
 import { bigScaledToString, fromScaled, scaledToString, SCALE_DIGITS } from '../exact/scaled.js';
 import { amountText, toDecimal, type Amount } from '../formula/amount.js';
 import { atomVector, countsMap, type AtomCounts, type AtomVector } from '../formula/flatten.js';
-import { plainVector } from '../formula/plain-vector.js';
+import { plainVectorFor } from '../formula/plain-vector.js';
 import { chargeText } from '../formula/hill.js';
 import { parseFormula, type ParseOptions } from '../formula-parser/parse.js';
 import type { FormulaTree } from '../formula-parser/tree.js';
@@ -124,10 +124,8 @@ export interface MassCore {
 
 /** The core of a formula given as text: plain formulas go straight to their atom totals, the rest through the tree. */
 function coreOfText(input: string, options: MassOptions): MassCore {
-  if (options.abbreviations !== true && (options.maxLength === undefined || input.length <= options.maxLength)) {
-    const plain = plainVector(input);
-    if (plain) return sums(input, plain.charge, NO_NOTES, plain.vector, null, options);
-  }
+  const plain = plainVectorFor(input, options);
+  if (plain) return sums(input, plain.charge, NO_NOTES, plain.vector, null, options);
   const tree = parseFormula(input, options);
   return sums(input, tree.charge, tree.notes, atomVector(tree), tree, options);
 }

@@ -77,17 +77,10 @@ export interface MassUncertaintyJson extends MassJson {
  * massUncertaintyJson(plainMass(d), molarMassUncertainty(d)).molarMassUncertainty.standardUncertainty // 0.000264…
  */
 export function massUncertaintyJson(r: MassResult, u: MolarMassUncertainty): MassUncertaintyJson {
-  return {
-    input: r.input,
-    formula: r.formula,
-    molarMass: r.molarMass,
-    monoisotopicMass: r.monoisotopicMass,
-    nominalMass: r.nominalMass,
-    charge: r.charge,
-    notes: notesJson(r.notes),
+  return Object.assign(massJson(r), {
     molarMassUncertainty: { value: u.value.toNumber(), standardUncertainty: u.standardUncertainty.toNumber() },
     caution: UNCERTAINTY_BASIS,
-  };
+  });
 }
 
 /**

@@ -8,10 +8,7 @@
  * ions (an amine hydrochloride is an electrolyte), and the caller refuses it.
  */
 import type { Note } from '../errors/issue.js';
-import type { ComponentNode } from '../formula-parser/tree.js';
-import { toDecimal } from '../formula/amount.js';
-import { flattenFormula } from '../formula/flatten.js';
-import { hydrateWater, noteHydrateWater } from '../assay/hydrate-note.js';
+import { hydrateWater, noteHydrateWater, waterIn } from '../assay/hydrate-note.js';
 import { formulaMassDetail, type MassDetail, type MassOptions } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { displayMeasured } from '../sigfig/round.js';
@@ -45,12 +42,6 @@ const ORGANIC = new Set(['C', 'H', 'N', 'O']);
 
 const list = (xs: string[]) => (xs.length === 1 ? xs[0] : `${xs.slice(0, -1).join(', ')} and ${xs[xs.length - 1]}`);
 
-function isWater(c: ComponentNode): boolean {
-  const counts = flattenFormula({ kind: 'formula', input: '', components: [{ ...c, multiplier: null }], charge: 0, notes: [] });
-  const h = counts.get('H');
-  const o = counts.get('O');
-  return counts.size === 2 && h !== undefined && o !== undefined && toDecimal(h).eq(toDecimal(o).times(2));
-}
 
 /**
  * Why a neutral formula that does not split into known ions is not counted as a non-electrolyte,
@@ -76,7 +67,7 @@ export function notNonElectrolyte(m: MassDetail): string | null {
   if (others.length > 0) return `it contains ${list(others)}, and pondus counts one particle per molecule only for a compound of C, H, N and O: it cannot tell whether this one gives ions`;
   if (!symbols.includes('C')) return 'it has no carbon, and pondus counts one particle per molecule only for a carbon compound of C, H, N and O';
   const [first, ...rest] = m.tree.components;
-  if (rest.some((c) => !isWater(c))) return "it is written in parts joined by '·' besides water of crystallisation, which pondus does not count as one particle (give each solute on its own)";
+  if (rest.some((c) => waterIn(c) === 0)) return "it is written in parts joined by '·' besides water of crystallisation, which pondus does not count as one particle (give each solute on its own)";
   if (first.multiplier !== null && first.multiplier.text !== '1') return "it is written with a count in front (give one molecule's formula)";
   return null;
 }

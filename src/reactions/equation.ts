@@ -8,7 +8,7 @@ import { fail, PondusError } from '../errors/pondus-error.js';
 import { ATOMS } from '../elements/atom-data.js';
 import { countsMap, flattenFormula, type AtomCounts } from '../formula/flatten.js';
 import { formatFormula, hillFormula } from '../formula/hill.js';
-import { plainVector } from '../formula/plain-vector.js';
+import { plainVectorFor } from '../formula/plain-vector.js';
 import { parseFormula, type ParseOptions } from '../formula-parser/parse.js';
 import { columnOf } from '../formula-parser/prescan.js';
 
@@ -57,7 +57,7 @@ const NO_NOTES: readonly Note[] = Object.freeze([]);
  * speciesFormula('Ca3(PO4)2', {}).formula // 'Ca3O8P2'
  */
 export function speciesFormula(body: string, options: ParseOptions): { formula: string; atoms: AtomCounts; charge: number; notes: readonly Note[] } {
-  const plain = options.abbreviations !== true && (options.maxLength === undefined || body.length <= options.maxLength) ? plainVector(body) : null;
+  const plain = plainVectorFor(body, options);
   if (plain) {
     const { ids, counts } = plain.vector;
     return { formula: formatFormula(ids.map((id) => ATOMS.data[id].label), counts, plain.charge), atoms: countsMap(plain.vector), charge: plain.charge, notes: NO_NOTES };

@@ -181,13 +181,21 @@ export function nullSpace(matrix: Rational[][], columns: number): Rational[][] {
  */
 export function rationalNullSpace(matrix: readonly Rational[][], columns: number): Rational[][] {
   const { m, pivots } = reducedRowEchelon(matrix, columns);
+  return basisOf(columns, pivots, (i, f) => m[i][f].neg());
+}
+
+/**
+ * The null space's basis from a reduced matrix: one vector for each free column, set to 1, with
+ * the entry of each pivot column from `entry(row, free column)`.
+ */
+function basisOf(columns: number, pivots: readonly number[], entry: (row: number, free: number) => Rational): Rational[][] {
   const free: number[] = [];
   for (let c = 0; c < columns; c++) if (!pivots.includes(c)) free.push(c);
   return free.map((f) => {
     const v = new Array<Rational>(columns).fill(Rational.ZERO);
     v[f] = Rational.ONE;
     pivots.forEach((pc, i) => {
-      v[pc] = m[i][f].neg();
+      v[pc] = entry(i, f);
     });
     return v;
   });
@@ -238,29 +246,15 @@ export function wholeNullSpace(matrix: readonly Rational[][], columns: number): 
         // each product below 2^53 is exact (and one that is not computes as 2^53 or more)
         if (!(Math.abs(a * row[j]) < EXACT && Math.abs(b * pivot[j]) < EXACT && Math.abs(x) < SMALL_ENTRY)) return null;
         row[j] = x;
-        g = wholeGcd(g, x < 0 ? -x : x);
+        g = gcdOf(g, x);
       }
       if (g > 1) for (let j = 0; j < columns; j++) row[j] /= g;
     }
     pivots.push(c);
     r++;
   }
-  const free: number[] = [];
-  for (let c = 0; c < columns; c++) if (!pivots.includes(c)) free.push(c);
-  return free.map((f) => {
-    const v = new Array<Rational>(columns).fill(Rational.ZERO);
-    v[f] = Rational.ONE;
-    pivots.forEach((pc, i) => {
-      const x = m[i][f];
-      v[pc] = x === 0 ? Rational.ZERO : Rational.of(BigInt(-x), BigInt(m[i][pc]));
-    });
-    return v;
-  });
-}
-
-function wholeGcd(a: number, b: number): number {
-  while (b !== 0) [a, b] = [b, a % b];
-  return a;
+  // each pivot row is the reduced row-echelon form's row times its pivot entry
+  return basisOf(columns, pivots, (i, f) => (m[i][f] === 0 ? Rational.ZERO : Rational.of(BigInt(-m[i][f]), BigInt(m[i][pivots[i]]))));
 }
 
 /**
