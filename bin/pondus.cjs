@@ -10,7 +10,9 @@
 // A bundle starts from V8's code cache when one is beside it (dist/cli/<name>.cache), which saves
 // compiling it; any problem with the cache falls back to a plain compile. The cache is valid for
 // one Node build only, so the package does not ship it: it is written on the first run of each
-// bundle (or when V8 rejects it, after a Node upgrade), where the folder is writable.
+// bundle (or when V8 rejects it, after a Node upgrade), where the folder is writable. The formula
+// and calculator grammars, with their parser library, are a file of their own
+// (dist/cli/grammars.cjs), which a bundle loads the same way when an input first needs them.
 const BUNDLE = {
   mass: 'mass',
   composition: 'composition',
@@ -71,29 +73,33 @@ if (args.length === 1 && (first === '--version' || first === '-V')) {
 } else if (texts !== undefined && typeof texts[helpOf] === 'string') {
   writeNow(texts[helpOf]);
 } else {
-  const name = Object.hasOwn(BUNDLE, first) ? BUNDLE[first] : 'help';
   const { readFileSync, writeFileSync } = require('node:fs');
   const Module = require('node:module');
   const { join } = require('node:path');
   const { Script } = require('node:vm');
   const dir = join(__dirname, '..', 'dist', 'cli');
-  const file = join(dir, `${name}.cjs`);
-  const cacheFile = join(dir, `${name}.cache`);
-  let cachedData;
-  try {
-    cachedData = readFileSync(cacheFile);
-  } catch {
-    cachedData = undefined;
-  }
-  let script;
-  try {
-    script = new Script(Module.wrap(readFileSync(file, 'utf8')), { filename: file, cachedData });
-  } catch {
-    script = undefined;
-  }
-  if (script) {
+  // Runs dist/cli/<name>.cjs as a CommonJS module, from its code cache where there is one, and
+  // returns its exports. A bundle's require of './grammars.cjs' (the grammars, on first use) comes
+  // here too, so that file starts from its own cache.
+  const load = (name) => {
+    const file = join(dir, `${name}.cjs`);
+    const cacheFile = join(dir, `${name}.cache`);
+    let cachedData;
+    try {
+      cachedData = readFileSync(cacheFile);
+    } catch {
+      cachedData = undefined;
+    }
+    let script;
+    try {
+      script = new Script(Module.wrap(readFileSync(file, 'utf8')), { filename: file, cachedData });
+    } catch {
+      return require(file);
+    }
     const mod = { exports: {}, filename: file, id: file, loaded: false };
-    script.runInThisContext()(mod.exports, Module.createRequire(file), mod, file, dir);
+    const req = Module.createRequire(file);
+    const bundleRequire = (id) => (id === './grammars.cjs' ? load('grammars') : req(id));
+    script.runInThisContext()(mod.exports, bundleRequire, mod, file, dir);
     if (cachedData === undefined || script.cachedDataRejected || process.env.PONDUS_WRITE_CODE_CACHE) {
       process.on('exit', () => {
         try {
@@ -103,7 +109,7 @@ if (args.length === 1 && (first === '--version' || first === '-V')) {
         }
       });
     }
-  } else {
-    require(file);
-  }
+    return mod.exports;
+  };
+  load(Object.hasOwn(BUNDLE, first) ? BUNDLE[first] : 'help');
 }

@@ -79,21 +79,20 @@ const plainSupportsColor = {
 
 // The formula and calculator grammars (Chevrotain's tokens and parser classes) are built at
 // start-up by any module that imports them, though the fast readers take most inputs: in the
-// command-line bundles each full parser loads its grammar on first use. esbuild wraps a module
-// reached only through require() in a lazy initialiser, so chevrotain and a grammar run when the
-// first formula or expression needs them.
+// command-line bundles each full parser loads its grammar on first use, from a file of its own
+// (dist/cli/grammars.cjs, built from src/cli/grammar-chunk.ts), so the parser library, about 40 %
+// of a bundle, is neither read nor compiled by a command whose inputs the fast readers take.
 const lazyGrammar = {
   name: 'lazy-grammar',
   setup(b) {
+    b.onResolve({ filter: /^\.\/grammars\.cjs$/ }, () => ({ path: './grammars.cjs', external: true }));
     b.onLoad({ filter: /formula-parser[\\/]grammar-loader\.ts$/ }, () => ({
-      contents: "let full;\nexport function fullGrammar() { return (full ??= require('./full-grammar.ts')); }\n",
+      contents: "let full;\nexport function fullGrammar() { return (full ??= require('./grammars.cjs').formula); }\n",
       loader: 'ts',
-      resolveDir: `${root}src/formula-parser`,
     }));
     b.onLoad({ filter: /calc[\\/]grammar-loader\.ts$/ }, () => ({
-      contents: "let full;\nexport function calcFullGrammar() { return (full ??= require('./full-grammar.ts')); }\n",
+      contents: "let full;\nexport function calcFullGrammar() { return (full ??= require('./grammars.cjs').calc); }\n",
       loader: 'ts',
-      resolveDir: `${root}src/calc`,
     }));
   },
 };
@@ -119,12 +118,31 @@ const cli = await build({
   plugins: [lazyChildProcess, plainSupportsColor, lazyNuclideTable('../data'), lazyGrammar],
   logLevel: 'warning',
 });
+// the grammars' own file, which the bundles above require on first use
+await build({
+  entryPoints: [`${root}src/cli/grammar-chunk.ts`],
+  outfile: `${root}dist/cli/grammars.cjs`,
+  bundle: true,
+  platform: 'node',
+  format: 'cjs',
+  target: 'node20',
+  minifyWhitespace: true,
+  minifySyntax: true,
+  minifyIdentifiers: !process.env.PONDUS_NO_MINIFY,
+  legalComments: 'none',
+  logLevel: 'warning',
+});
 if (process.env.PONDUS_METAFILE) writeFileSync(process.env.PONDUS_METAFILE, JSON.stringify(cli.metafile));
 // the help bundle must stay free of the chemistry: it is what `pondus --help` loads
 const helpInputs = Object.keys(cli.metafile.outputs[Object.keys(cli.metafile.outputs).find((o) => o.endsWith('/help.cjs'))].inputs);
 // (search-defaults.ts is plain data the options' defaults come from, and imports nothing)
 const heavy = helpInputs.filter((i) => !/^(src\/cli\/|src\/errors\/|src\/empirical\/search-defaults\.ts$|node_modules\/(commander|chalk)\/|pondus:)/.test(i));
 if (heavy.length) throw new Error(`the help bundle (dist/cli/help.cjs) loads code it does not need: ${heavy.join(', ')}`);
+// and no command bundle holds the parser library: the grammars' file has it, loaded on first use
+for (const [out, o] of Object.entries(cli.metafile.outputs)) {
+  const parserLibrary = Object.keys(o.inputs).filter((i) => /node_modules\/(@?chevrotain|lodash)/.test(i));
+  if (parserLibrary.length) throw new Error(`${out} holds the parser library, which belongs in dist/cli/grammars.cjs: ${parserLibrary.slice(0, 3).join(', ')}`);
+}
 
 // The same CLI with its `main(argv, io)` exported, for the fuzz harness, which runs it in a
 // worker thread it can stop when an input hangs.
@@ -175,3 +193,6 @@ for (const b of bundles) {
   const runs = b === 'help' ? [['completion', 'bash'], ['help', 'mass']] : [words(examples[first][0])];
   for (const args of runs) execFileSync(process.execPath, [`${root}bin/pondus.cjs`, ...args], { cwd: root, env: { ...process.env, PONDUS_WRITE_CODE_CACHE: '1' }, stdio: 'ignore' });
 }
+// and the grammars' file last (each run above that needed it wrote its cache): a run that reads a
+// formula and an expression through both grammars
+execFileSync(process.execPath, [`${root}bin/pondus.cjs`, 'calc', '(2.0 g + 1.0 g) / M(Ca(OH)2)'], { cwd: root, env: { ...process.env, PONDUS_WRITE_CODE_CACHE: '1' }, stdio: 'ignore' });
