@@ -53,6 +53,22 @@ const library = {
 await build({ ...library, format: 'esm', outfile: `${root}dist/lib/index.js` });
 await build({ ...library, format: 'cjs', outfile: `${root}dist/lib/index.cjs` });
 
+// esbuild writes strings in ASCII but leaves regular expressions as written, and one character
+// past ASCII ('·' in a pattern) makes Node read the whole file as a two-byte string: twice the
+// memory and a slower read and compile. Each such
+// character becomes its \uXXXX escape, which means the same in a pattern, a string or a comment.
+function asciiOnly(file) {
+  const text = readFileSync(file, 'utf8');
+  const out = text.replace(/(\\*)([^\x00-\x7f])/g, (_, slashes, c) => {
+    // an escaped character ('\·') would turn into an escaped backslash: refuse rather than guess
+    if (slashes.length % 2 === 1) throw new Error(`${file}: an escaped non-ASCII character (${JSON.stringify(slashes + c)}): write it as \\u${c.charCodeAt(0).toString(16).padStart(4, '0')} in the source`);
+    return `${slashes}\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`;
+  });
+  if (out !== text) writeFileSync(file, out);
+}
+asciiOnly(`${root}dist/lib/index.js`);
+asciiOnly(`${root}dist/lib/index.cjs`);
+
 // commander loads node:child_process at start-up but needs it only for
 // executable subcommands, which pondus does not have: load it on first use.
 const lazyChildProcess = {
@@ -133,6 +149,7 @@ await build({
   logLevel: 'warning',
 });
 if (process.env.PONDUS_METAFILE) writeFileSync(process.env.PONDUS_METAFILE, JSON.stringify(cli.metafile));
+for (const f of readdirSync(`${root}dist/cli`)) if (f.endsWith('.cjs')) asciiOnly(`${root}dist/cli/${f}`);
 // the help bundle must stay free of the chemistry: it is what `pondus --help` loads
 const helpInputs = Object.keys(cli.metafile.outputs[Object.keys(cli.metafile.outputs).find((o) => o.endsWith('/help.cjs'))].inputs);
 // (search-defaults.ts is plain data the options' defaults come from, and imports nothing)
