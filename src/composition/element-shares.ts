@@ -99,16 +99,48 @@ export function compositionDetail(input: string | FormulaTree, options: Composit
 /** What a composition is made from: a detailed mass, or the mass core the batch path reads. */
 type MassSums = Pick<MassCore, 'input' | 'formula' | 'charge' | 'vector' | 'weights' | 'notes'>;
 
+/**
+ * The exact texts of count × weight already written, by weight table, kind of atom and whole count
+ * below 4096 (a batch meets the same few hundred again and again, and writing one takes several
+ * string allocations): one array per kind of atom, indexed by count. At most 256 kinds are held;
+ * then the table starts again.
+ */
+interface MassTexts {
+  byAtom: (string[] | undefined)[];
+  kinds: number;
+}
+const ELEMENT_MASS_TEXTS: Record<'standard' | 'abridged', MassTexts> = { standard: { byAtom: [], kinds: 0 }, abridged: { byAtom: [], kinds: 0 } };
+const COUNT_LIMIT = 4096;
+const KIND_LIMIT = 256;
+
+/** The exact text of `e` (10^-12 u), the mass of `count` atoms of kind `id`, from the table above where it can. */
+function elementMassText(texts: MassTexts, id: number, count: number, e: number): string {
+  if (count >= COUNT_LIMIT || (count | 0) !== count) return scaledToString(e);
+  let byCount = texts.byAtom[id];
+  if (byCount === undefined) {
+    if (texts.kinds >= KIND_LIMIT) {
+      texts.byAtom = [];
+      texts.kinds = 0;
+    }
+    texts.byAtom[id] = byCount = new Array<string>(COUNT_LIMIT);
+    texts.kinds++;
+  }
+  return (byCount[count] ??= scaledToString(e));
+}
+
 /** The composition from exact integer sums in 10^-12 u (each count × weight is exact while the total is). */
 function exactResult(m: MassSums, total: number): CompositionResult {
   const { ids, counts } = m.vector;
   const n = ids.length;
   const elements = new Array<ElementShare>(n);
-  const avg = m.weights === 'standard' ? ATOMS.standardScaled : ATOMS.abridgedScaled;
+  const standard = m.weights === 'standard';
+  const avg = standard ? ATOMS.standardScaled : ATOMS.abridgedScaled;
+  const texts = standard ? ELEMENT_MASS_TEXTS.standard : ELEMENT_MASS_TEXTS.abridged;
   for (let i = 0; i < n; i++) {
     const c = counts[i] as number;
-    const e = c * avg[ids[i]];
-    elements[i] = { symbol: ATOMS.data[ids[i]].label, count: c, mass: e / SCALE, massExact: scaledToString(e), massPercent: total === 0 ? 0 : scaledRatio(e, total, 100) };
+    const id = ids[i];
+    const e = c * avg[id];
+    elements[i] = { symbol: ATOMS.data[id].label, count: c, mass: e / SCALE, massExact: elementMassText(texts, id, c, e), massPercent: total === 0 ? 0 : scaledRatio(e, total, 100) };
   }
   return { input: m.input, formula: m.formula, molarMass: total / SCALE, molarMassExact: scaledToString(total), charge: m.charge, elements, part: null, notes: m.notes.slice() };
 }

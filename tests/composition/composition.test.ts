@@ -2,6 +2,10 @@ import { describe, expect, it } from 'vitest';
 import { composition } from '../../src/composition/element-shares.js';
 import { compositionJson } from '../../src/composition/composition-json.js';
 import { PondusError } from '../../src/errors/pondus-error.js';
+import fc from 'fast-check';
+import { Decimal } from '../../src/exact/decimal.js';
+import { getAtomData } from '../../src/elements/atom-data.js';
+import { ELEMENTS } from '../../src/elements/element-table.js';
 
 const pct = (f: string, o = {}) => Object.fromEntries(composition(f, o).elements.map((e) => [e.symbol, e.massPercent.toFixed(2)]));
 
@@ -59,5 +63,33 @@ describe('fraction of a fragment', () => {
     expect(Object.keys(j)).toEqual(['input', 'formula', 'molarMass', 'elements', 'notes']);
     expect(Object.keys(j.elements[0])).toEqual(['symbol', 'count', 'mass', 'massPercent']);
     expect(j.elements[0]).toMatchObject({ symbol: 'H', count: 2, mass: 2.016 });
+  });
+});
+
+describe('each element mass as exact text', () => {
+  // the texts of count × weight are kept for reuse (composition/element-shares.ts); a kept text must
+  // be the one for its own table, kind of atom and count, past the count limit and after the table
+  // of kinds starts again
+  const exactText = (count: number, weight: string) => new Decimal(count).times(weight).toFixed();
+  it('is count × the tabulated weight, for both tables, counts past 4096, and more than 256 kinds of atom', () => {
+    const symbols = ['C', 'H', 'N', 'O', 'S', 'Cl', 'Na', 'Fe', 'Br'];
+    // every nuclide of the first 40 elements with a mass number within ±8 of twice Z: several hundred kinds
+    const nuclides: string[] = [];
+    for (let z = 1; z <= 40; z++) {
+      const symbol = ELEMENTS[z - 1].symbol;
+      for (let a = Math.max(z, 2 * z - 8); a <= 2 * z + 8; a++) if (getAtomData(symbol, a)) nuclides.push(`[${a}${symbol}]`);
+    }
+    expect(nuclides.length).toBeGreaterThan(300);
+    fc.assert(
+      fc.property(fc.constantFrom(...symbols, ...nuclides), fc.constantFrom(...symbols), fc.integer({ min: 1, max: 5000 }), fc.constantFrom('standard' as const, 'abridged' as const), (a, b, n, weights) => {
+        const r = composition(`${a}${n}${b}${(n % 7) + 1}`, { weights });
+        for (const e of r.elements) {
+          const m = /^\[?([0-9]*)([A-Z][a-z]?)\]?$/.exec(e.symbol === 'D' ? '[2H]' : e.symbol === 'T' ? '[3H]' : e.symbol)!;
+          const d = getAtomData(m[2], m[1] ? Number(m[1]) : null)!;
+          expect(e.massExact).toBe(exactText(e.count, d.average[weights].text));
+        }
+      }),
+      { numRuns: 3000 },
+    );
   });
 });
