@@ -38,42 +38,43 @@ export function fromScaled(n: number): Decimal {
   return new Decimal(n).div(SCALE);
 }
 
-const ZEROS = ['', '0', '00', '000', '0000', '00000'];
-/** Digits of a small integer (below 10^6) left-padded with zeros to `width`. */
-const padded = (n: number, width: number): string => {
-  const t = '' + n;
-  return ZEROS[width - t.length] + t;
-};
+/** The texts of 0 to 999 as three digits ('007'), and the same without trailing zeros ('07' for 70, '' for 0). */
+const GROUPS: string[] = [];
+const GROUPS_TRIMMED: string[] = [];
+for (let i = 0; i < 1000; i++) {
+  const g = String(i).padStart(3, '0');
+  GROUPS.push(g);
+  GROUPS_TRIMMED.push(g.replace(/0+$/, ''));
+}
+/** The texts of whole numbers below 10,000 (the integer part of most masses), each made on first use. */
+const INTEGERS: (string | undefined)[] = new Array(10000);
 
 /**
  * Formats scaled integer units as a plain decimal string without trailing zeros, exactly.
- * Works in two six-digit halves of the fraction, which stay small integers (their text is
- * quick to make), with the trailing zeros taken off as numbers rather than characters.
+ * The fraction is cut into four groups of three digits, each written from a table, so a mass's
+ * text takes two to four joins of short strings and no number-to-text conversion.
  *
  * @example
  * scaledToString(18015000000000) // '18.015'
+ * scaledToString(-1500000) // '-0.0000015'
  */
 export function scaledToString(n: number): string {
   const abs = n < 0 ? -n : n;
   const int = Math.floor(abs / 1e12);
   const frac = abs - int * 1e12; // exact: both are integers below 2^53
-  const sign = n < 0 ? '-' : '';
-  if (frac === 0) return sign + int;
-  let hi = Math.floor(frac / 1e6);
-  let lo = frac - hi * 1e6;
-  let width = 6;
-  if (lo === 0) {
-    while (hi % 10 === 0) {
-      hi /= 10;
-      width--;
-    }
-    return sign + int + '.' + padded(hi, width);
-  }
-  while (lo % 10 === 0) {
-    lo /= 10;
-    width--;
-  }
-  return sign + int + '.' + padded(hi, 6) + padded(lo, width);
+  const digits = int < 10000 ? (INTEGERS[int] ??= String(int)) : String(int);
+  const head = n < 0 ? '-' + digits : digits;
+  if (frac === 0) return head;
+  const a = Math.floor(frac / 1e9);
+  let rest = frac - a * 1e9;
+  const b = Math.floor(rest / 1e6);
+  rest -= b * 1e6;
+  const c = Math.floor(rest / 1e3);
+  const d = rest - c * 1e3;
+  if (d !== 0) return head + '.' + GROUPS[a] + GROUPS[b] + GROUPS[c] + GROUPS_TRIMMED[d];
+  if (c !== 0) return head + '.' + GROUPS[a] + GROUPS[b] + GROUPS_TRIMMED[c];
+  if (b !== 0) return head + '.' + GROUPS[a] + GROUPS_TRIMMED[b];
+  return head + '.' + GROUPS_TRIMMED[a];
 }
 
 /**

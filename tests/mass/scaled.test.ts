@@ -22,7 +22,7 @@ describe('scaled integers', () => {
   });
 
   it('print the exact decimal, without trailing zeros, for every kind of fraction', () => {
-    // fractions whose last nonzero digit falls in either six-digit half, and whole numbers, negative too
+    // fractions whose last nonzero digit falls in any of the four three-digit groups, and whole numbers, negative too
     const n = fc.oneof(
       fc.integer({ min: -Number.MAX_SAFE_INTEGER, max: Number.MAX_SAFE_INTEGER }),
       fc.tuple(fc.integer({ min: 0, max: 9_000_000 }), fc.integer({ min: 0, max: 12 })).map(([a, z]) => a * 10 ** z).filter(Number.isSafeInteger),
