@@ -25,7 +25,7 @@ export function matchFormulaMass(text: string, offset: number): RegExpExecArray 
 }
 
 /**
- * Every spelling the unit table accepts except the ones with symbols the calculator uses as
- * operators, longest first: the order in which the Unit token tries them.
+ * Every spelling the unit table accepts, longest first: the order in which the Unit token tries
+ * them, so `mol·L⁻¹` is one unit, not mol times something.
  */
-export const CALC_UNIT_SPELLINGS: readonly string[] = [...new Set(UNIT_SPELLINGS)].filter((s) => !/[·⁻¹]/.test(s)).sort((a, b) => b.length - a.length);
+export const CALC_UNIT_SPELLINGS: readonly string[] = [...new Set(UNIT_SPELLINGS)].sort((a, b) => b.length - a.length);

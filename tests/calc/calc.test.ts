@@ -168,3 +168,18 @@ describe('calc: numbers JSON cannot carry', () => {
     }
   });
 });
+
+describe('calc: units written the SI way', () => {
+  // source: BIPM SI Brochure, 9th edition (2019), Table 8 (1 L = 1 dm³) and §5.4.3 (a quotient may be
+  // written as a product with a negative power, mol·L⁻¹ or mol L⁻¹), from memory. Each figure is
+  // worked by hand: a titration's 25.00 cm³ of 0.1000 mol dm⁻³ holds 2.500 × 10⁻³ mol.
+  it.each([
+    ['0.1000 mol dm⁻³ * 25.00 cm³ to mol', '0.002500 mol'],
+    ['0.1000 mol·L⁻¹ * 25.00 mL to mmol', '2.500 mmol'],
+    ['2.500 g / 250.0 cm³ to g/L', '10.00 g/L'],
+    ['1.840 g·cm⁻³ * 10.00 mL', '18.40 g'],
+    ['4.000 g / 40.00 g·mol⁻¹', '0.1000 mol'],
+  ])('%s = %s', (expr, display) => {
+    expect(calc(expr).display).toBe(display);
+  });
+});

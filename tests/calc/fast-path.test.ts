@@ -80,6 +80,7 @@ const pieces = [
   '+', '-', '−', '*', '×', '·', '/', '÷', '^', '(', ')', ':', '±', '+-', '+/-', '+/',
   'g', 'mg', 'mL', 'ml', 'M', 'mM', 'µ', 'μ', 'µL', 'μg', 'mol', 'mol/L', 'g/100 mL', 'g/100', '%', '% w/v', '%w/v', 'ppm', 'u', 'x', 'L',
   'to', 'in', 'inch', 'tog', 'M(', 'M(NaCl)', 'M(H2O', 'NaCl', 'mLx', 'gµ', '1:1000', 'mol·L⁻¹', '¹',
+  'cm³', 'cm3', 'dm', 'mol dm⁻³', 'mol dm-3', 'g·mL⁻¹', 'g·mol⁻¹', '⁻', '³', 'mol L⁻¹',
 ];
 
 describe('the fast reader and the calculator grammar agree', () => {

@@ -29,6 +29,17 @@ describe('one unit vocabulary', () => {
     expect(unitOf('ppm').dims).toBe(PURE);
   });
 
+  it('reads the cubic decimetre as the litre and the cubic centimetre as the millilitre, and the SI product spellings', () => {
+    // source: BIPM SI Brochure, 9th edition (2019), Table 8: litre, 1 L = 1 dm³ = 10^-3 m³ (so 1 mL = 1 cm³)
+    for (const [spelling, symbol] of [['dm³', 'L'], ['dm3', 'L'], ['cm³', 'mL'], ['cm3', 'mL'], ['mol/dm³', 'mol/L'], ['mol dm⁻³', 'mol/L'], ['mol dm-3', 'mol/L'], ['mol·dm⁻³', 'mol/L'], ['g/cm³', 'g/mL'], ['g·cm⁻³', 'g/mL'], ['g/dm³', 'g/L']]) {
+      expect(unitOf(spelling).symbol, spelling).toBe(symbol);
+    }
+    // the SI way of writing a quotient, as a product with a negative power (SI Brochure §5.4.3, from memory)
+    for (const [spelling, symbol] of [['mol·L⁻¹', 'mol/L'], ['mol L⁻¹', 'mol/L'], ['mmol·L⁻¹', 'mmol/L'], ['g·L⁻¹', 'g/L'], ['mg·L⁻¹', 'mg/L'], ['g·mL⁻¹', 'g/mL'], ['mg·mL⁻¹', 'mg/mL'], ['g·mol⁻¹', 'g/mol']]) {
+      expect(unitOf(spelling).symbol, spelling).toBe(symbol);
+    }
+  });
+
   it('factors are exact powers of ten (SI prefixes, BIPM SI Brochure 9th ed. Table 7)', () => {
     // source: BIPM SI Brochure, 9th edition (2019), Table 7: milli 10^-3, micro 10^-6, nano 10^-9, kilo 10^3
     expect(unitFactor(unitOf('mg')).toString()).toBe('0.001');
