@@ -42,9 +42,9 @@ export function fromScaled(n: number): Decimal {
 const GROUPS: string[] = [];
 const GROUPS_TRIMMED: string[] = [];
 for (let i = 0; i < 1000; i++) {
-  const g = String(i).padStart(3, '0');
+  const g = (i < 10 ? '00' : i < 100 ? '0' : '') + i;
   GROUPS.push(g);
-  GROUPS_TRIMMED.push(g.replace(/0+$/, ''));
+  GROUPS_TRIMMED.push(i === 0 ? '' : i % 100 === 0 ? g.slice(0, 1) : i % 10 === 0 ? g.slice(0, 2) : g);
 }
 /** The texts of whole numbers below 10,000 (the integer part of most masses), each made on first use. */
 const INTEGERS: (string | undefined)[] = new Array(10000);
