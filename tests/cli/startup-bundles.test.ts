@@ -2,7 +2,9 @@
 // answers --version itself, and --help / <command> --help off a terminal from the help texts the
 // build wrote (dist/cli/help.json). Each way must give exactly what the whole program gives
 // (dist/test/cli-main.cjs, run in a worker by `pondus`): same text, same status.
-import { readFileSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
+import { cpSync, existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { CANDIDATE_RANGES, COMBUSTION_PRODUCTS } from '../../src/cli/commands/declarations.js';
@@ -95,5 +97,38 @@ describe('the declarations hold the same values as the library', () => {
   });
   it('the default element ranges of candidates', () => {
     expect(CANDIDATE_RANGES).toBe(DEFAULT_RANGES);
+  });
+});
+
+describe('the grammars, a file of their own', () => {
+  // dist/cli/grammars.cjs holds the formula and calculator grammars; a bundle loads it (from its
+  // own code cache) when an input first needs the full parser. A copy of the command line in a
+  // scratch folder shows the file's cache written when it is missing and a broken cache ignored.
+  const inputs = ['[13C]H4', 'CuSO4.5H2O', 'H2O'];
+  it('gives what the whole program gives, with its cache missing, written, and broken', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'pondus-grammars-'));
+    try {
+      cpSync(join(root, 'bin'), join(dir, 'bin'), { recursive: true });
+      cpSync(join(root, 'dist', 'cli'), join(dir, 'dist', 'cli'), { recursive: true });
+      cpSync(join(root, 'dist', 'data'), join(dir, 'dist', 'data'), { recursive: true });
+      cpSync(join(root, 'package.json'), join(dir, 'package.json'));
+      const cache = join(dir, 'dist', 'cli', 'grammars.cache');
+      rmSync(cache, { force: true });
+      const whole = pondus(['mass', '--json', ...inputs]);
+      const run = () => spawnSync(process.execPath, [join(dir, 'bin', 'pondus.cjs'), 'mass', '--json', ...inputs], { encoding: 'utf8', env: { ...process.env, NO_COLOR: '1' } });
+      for (const stage of ['missing', 'written', 'broken']) {
+        if (stage === 'broken') writeFileSync(cache, Buffer.alloc(4096, 7));
+        const r = run();
+        expect(r.status, stage).toBe(whole.status);
+        expect(r.stdout, stage).toBe(whole.stdout);
+        expect(r.stderr, stage).toBe(whole.stderr);
+        if (stage === 'missing') expect(existsSync(cache)).toBe(true);
+      }
+      // the formula bundle itself does not carry the parser library
+      expect(readFileSync(join(dir, 'dist', 'cli', 'mass.cjs'), 'latin1')).not.toMatch(/performSelfAnalysis/);
+      expect(readFileSync(join(dir, 'dist', 'cli', 'grammars.cjs'), 'latin1')).toMatch(/performSelfAnalysis/);
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 });
