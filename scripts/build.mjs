@@ -39,6 +39,25 @@ const lazyNuclideTable = (where) => ({
 mkdirSync(`${root}dist/data`, { recursive: true });
 copyFileSync(`${root}src/elements/data/nuclide-masses.json`, `${root}dist/data/nuclide-masses.json`);
 
+// The library builds its grammars on first use as the command line does, from inside its own
+// file: Chevrotain's tokens and parser classes are made when a formula or expression first needs
+// the full parser, not when the library is imported.
+const lazyLibraryGrammar = {
+  name: 'lazy-library-grammar',
+  setup(b) {
+    b.onLoad({ filter: /formula-parser[\\/]grammar-loader\.ts$/ }, () => ({
+      contents: "let full;\nexport function fullGrammar() { return (full ??= require('./full-grammar.ts')); }\n",
+      loader: 'ts',
+      resolveDir: `${root}src/formula-parser`,
+    }));
+    b.onLoad({ filter: /calc[\\/]grammar-loader\.ts$/ }, () => ({
+      contents: "let full;\nexport function calcFullGrammar() { return (full ??= require('./full-grammar.ts')); }\n",
+      loader: 'ts',
+      resolveDir: `${root}src/calc`,
+    }));
+  },
+};
+
 const library = {
   entryPoints: [`${root}src/index.ts`],
   bundle: true,
@@ -47,7 +66,9 @@ const library = {
   target: 'es2022',
   legalComments: 'none',
   external: ['decimal.js'],
-  plugins: [lazyNuclideTable('embedded')],
+  minifyWhitespace: true,
+  minifySyntax: true,
+  plugins: [lazyNuclideTable('embedded'), lazyLibraryGrammar],
   logLevel: 'warning',
 };
 await build({ ...library, format: 'esm', outfile: `${root}dist/lib/index.js` });
