@@ -2,8 +2,9 @@
  * A result checked against specification limits such as 98.0–102.0 %. The
  * result is first rounded to the last digit of the limits and then compared,
  * limits included (the pharmacopoeial convention: USP General Notices 7.20,
- * from memory). Rounding is half-to-even unless half-up is asked for; many
- * pharmacopoeias and house rules round half up.
+ * from memory). A 5 in the first digit dropped rounds up there, so half-up is the
+ * default here (unlike the rounding of reported results, half to even); half to even
+ * is used when it is asked for, and the note then says the convention differs.
  */
 import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
@@ -55,7 +56,7 @@ export function readLimits(text: string): Limits {
  *
  * @param result - the result, a fraction (0.99462 for 99.462 %).
  * @param limitsText - the limits in percent: '98.0-102.0'.
- * @param rounding - how the result is rounded to the limits' last place: 'half-even' (default) or 'half-up'.
+ * @param rounding - how the result is rounded to the limits' last place: 'half-up' (the default, as USP General Notices 7.20 rounds) or 'half-even'.
  * @param basisName - the basis named in the verdict.
  * @returns the limits, the result rounded as the limits are written, and whether it complies.
  * @throws PondusError: BAD_OPTION for limits that cannot be read or a lower limit above the upper; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
@@ -63,7 +64,7 @@ export function readLimits(text: string): Limits {
  * const q = measure('0.99462')
  * checkSpecification(q, '98.0-102.0').roundedText // '99.5'
  */
-export function checkSpecification(result: Quantity, limitsText: string, rounding: RoundingMode = 'half-even', basisName = 'the reported'): SpecificationCheck {
+export function checkSpecification(result: Quantity, limitsText: string, rounding: RoundingMode = 'half-up', basisName = 'the reported'): SpecificationCheck {
   const limits = readLimits(limitsText);
   const percent = result.value.times(100);
   const rounded = roundToPosition(percent, limits.lsd, rounding);
@@ -72,7 +73,10 @@ export function checkSpecification(result: Quantity, limitsText: string, roundin
   const notes: Note[] = [
     {
       code: 'LIMITS_ROUNDING',
-      message: `${basisName} result ${percent.toSignificantDigits(8).toFixed()} % is rounded ${rounding} to the last digit of the limits (${roundedText} %) before comparison with ${limits.low}–${limits.high} % (limits included; USP General Notices 7.20, from memory)`,
+      message:
+        rounding === 'half-up'
+          ? `${basisName} result ${percent.toSignificantDigits(8).toFixed()} % is rounded half-up to the last digit of the limits (${roundedText} %) before comparison with ${limits.low}–${limits.high} % (limits included; USP General Notices 7.20, from memory)`
+          : `${basisName} result ${percent.toSignificantDigits(8).toFixed()} % is rounded ${rounding}, as asked, to the last digit of the limits (${roundedText} %) before comparison with ${limits.low}–${limits.high} % (limits included); USP General Notices 7.20 rounds a 5 up (from memory), which can give another verdict`,
     },
   ];
   return { limits, rounded, roundedText, complies, rounding, notes };

@@ -64,6 +64,10 @@ describe('specification check', () => {
     expect(checkSpecification(measure('0.97951'), '98.0-102.0').complies).toBe(true); // 97.951 → 98.0
     expect(checkSpecification(measure('0.97949'), '98.0-102.0').complies).toBe(false); // 97.949 → 97.9
     expect(checkSpecification(measure('1.0204'), '98.0–102.0 %').complies).toBe(true); // 102.04 → 102.0
+    // a 5 in the first digit dropped rounds up, by default: 99.45 → 99.5 complies with 99.5–100.5
+    expect(checkSpecification(measure('0.9945'), '99.5-100.5').complies).toBe(true);
+    expect(checkSpecification(measure('0.9945'), '99.5-100.5').notes[0].message).toMatch(/rounded half-up .*USP General Notices 7.20/);
+    expect(checkSpecification(measure('0.9945'), '99.5-100.5', 'half-even').notes[0].message).toMatch(/half-even, as asked.*rounds a 5 up/);
     expect(checkSpecification(measure('1.0205'), '98.0-102.0', 'half-up').complies).toBe(false); // 102.05 → 102.1 half up
     expect(checkSpecification(measure('1.0205'), '98.0-102.0', 'half-even').complies).toBe(true); // 102.05 → 102.0 half to even
   });

@@ -51,14 +51,16 @@ describe('pondus standardise', () => {
 });
 
 describe('pondus sample-basis', () => {
-  it('converts to the dried basis and checks the limits, half-up on request', () => {
+  it('converts to the dried basis and checks the limits, half-up unless half-even is asked for', () => {
     const even = jsonLines(pondus(['sample-basis', '--json', '98.00 %', '--to', 'dried', '--loss', '0.05 %', '--limits', '98.0-102.0']).stdout)[0];
     // 98.00 / 0.9995 = 98.049 → 98.0 either way
     expect(even.specification).toMatchObject({ rounded: '98.0', complies: true, basis: 'dried' });
-    const tieEven = jsonLines(pondus(['sample-basis', '--json', '102.05 %', '--from', 'dried', '--limits', '98.0-102.0']).stdout)[0];
-    const tieUp = jsonLines(pondus(['sample-basis', '--json', '102.05 %', '--from', 'dried', '--limits', '98.0-102.0', '--rounding', 'half-up']).stdout)[0];
-    expect(tieEven.specification).toMatchObject({ rounded: '102.0', complies: true });
+    // source: USP General Notices 7.20 (a 5 in the first digit dropped rounds up), from memory
+    const tieUp = jsonLines(pondus(['sample-basis', '--json', '102.05 %', '--from', 'dried', '--limits', '98.0-102.0']).stdout)[0];
+    const tieEven = jsonLines(pondus(['sample-basis', '--json', '102.05 %', '--from', 'dried', '--limits', '98.0-102.0', '--rounding', 'half-even']).stdout)[0];
     expect(tieUp.specification).toMatchObject({ rounded: '102.1', complies: false, rounding: 'half-up' });
+    expect(tieEven.specification).toMatchObject({ rounded: '102.0', complies: true, rounding: 'half-even' });
+    expect(tieEven.notes.map((n: { message: string }) => n.message).join(' ')).toMatch(/as asked.*USP General Notices 7.20 rounds a 5 up/);
   });
 
   it('refuses a content the conversion would not use, and no --to', () => {
