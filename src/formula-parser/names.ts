@@ -122,6 +122,22 @@ export const REAGENTS: Readonly<Record<string, NamedSubstance>> = Object.freeze(
   TsOH: { formula: 'C7H8O3S', name: 'p-toluenesulfonic acid' },
   HOTs: { formula: 'C7H8O3S', name: 'p-toluenesulfonic acid' },
   IPA: { formula: 'C3H8O', name: '2-propanol' },
+  // lab names that read as element symbols just as well (KHP as K, H, P; SDS as S, D, S), from memory
+  KHP: { formula: 'C8H5KO4', name: 'potassium hydrogen phthalate' },
+  SDS: { formula: 'C12H25NaO4S', name: 'sodium dodecyl sulfate' },
+  NHS: { formula: 'C4H5NO3', name: 'N-hydroxysuccinimide' },
+  DTT: { formula: 'C4H10O2S2', name: 'dithiothreitol' },
+  PDC: { formula: 'C10H12Cr2N2O7', name: 'pyridinium dichromate' },
+  DCU: { formula: 'C13H24N2O', name: 'N,N′-dicyclohexylurea' },
+  HBTU: { formula: 'C11H16F6N5OP', name: 'O-(benzotriazol-1-yl)-N,N,N′,N′-tetramethyluronium hexafluorophosphate' },
+  TBTU: { formula: 'C11H16BF4N5O', name: 'O-(benzotriazol-1-yl)-N,N,N′,N′-tetramethyluronium tetrafluoroborate' },
+  BOP: { formula: 'C12H22F6N6OP2', name: '(benzotriazol-1-yloxy)tris(dimethylamino)phosphonium hexafluorophosphate' },
+  BPO: { formula: 'C14H10O4', name: 'benzoyl peroxide' },
+  DBN: { formula: 'C7H12N2', name: '1,5-diazabicyclo[4.3.0]non-5-ene' },
+  TBD: { formula: 'C7H13N3', name: '1,5,7-triazabicyclo[4.4.0]dec-5-ene' },
+  HFIP: { formula: 'C3H2F6O', name: '1,1,1,3,3,3-hexafluoro-2-propanol' },
+  DPPH: { formula: 'C18H12N5O6', name: '2,2-diphenyl-1-picrylhydrazyl' },
+  HOAt: { formula: 'C5H4N4O', name: '1-hydroxy-7-azabenzotriazole' },
 });
 
 /**

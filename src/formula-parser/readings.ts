@@ -17,9 +17,12 @@ const HOW_TO_ABBREVIATE = 'read abbreviations with `abbreviations: true`';
 /** Group spellings that read as element symbols and contain D or T (TBS is T, B, S): refused wherever they stand in a run. */
 const GROUP_RUNS = ['TBDPS', 'TIPS', 'TBS'];
 
+/** Reagent names in mixed case whose letters read as element symbols (HOAt as H, O, At). */
+const MIXED_CASE_RUNS = ['HOAt'];
+
 /** Letter-only names whose letters read as element symbols (THF, NBS, DBU, …), and what each stands for. */
 function nameFor(run: string): NamedSubstance | null {
-  if (Object.hasOwn(REAGENTS, run) && /^[A-Z]+$/.test(run)) return REAGENTS[run];
+  if (Object.hasOwn(REAGENTS, run) && (/^[A-Z]+$/.test(run) || MIXED_CASE_RUNS.includes(run))) return REAGENTS[run];
   if (/^[A-Z]{2,}$/.test(run) && Object.hasOwn(SOLVENTS, run.toLowerCase())) return SOLVENTS[run.toLowerCase()];
   return null;
 }
@@ -206,5 +209,5 @@ export function mayNeedSettling(text: string): boolean {
 }
 
 const NAME_TEST = new RegExp(
-  [...Object.keys(REAGENTS).filter((k) => /^[A-Z]+$/.test(k)), ...Object.keys(SOLVENTS).filter((k) => /^[a-z]+$/.test(k)).map((k) => k.toUpperCase()), ...GROUP_RUNS, 'BOC'].join('|'),
+  [...Object.keys(REAGENTS).filter((k) => /^[A-Z]+$/.test(k)), ...Object.keys(SOLVENTS).filter((k) => /^[a-z]+$/.test(k)).map((k) => k.toUpperCase()), ...GROUP_RUNS, ...MIXED_CASE_RUNS, 'BOC'].join('|'),
 );

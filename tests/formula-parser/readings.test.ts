@@ -191,6 +191,13 @@ describe('readings that must be settled', () => {
     ['TBSCl', 'tert-butyldimethylsilyl', '[3H]BS'],
     ['TIPSOTf', 'triisopropylsilyl', '[3H]IPS'],
     ['BOC2O', 'Boc', 'Boc2O'],
+    // lab names, common practice; formulas from memory (KHP, the primary standard, 204.22 g/mol)
+    ['KHP', 'potassium hydrogen phthalate', 'HKP'],
+    ['SDS', 'sodium dodecyl sulfate', 'S[2H]S'],
+    ['NHS', 'N-hydroxysuccinimide', 'HNS'],
+    ['DTT', 'dithiothreitol', '[2H][3H][3H]'],
+    ['HOAt', '1-hydroxy-7-azabenzotriazole', 'AtHO'],
+    ['HFIP', 'hexafluoro-2-propanol', 'FHIP'],
   ])('%s reads as elements but is a name: refused with both readings', (input, name, other) => {
     const i = refusal(input);
     expect(i.code).toBe('AMBIGUOUS_READING');
