@@ -5,10 +5,10 @@
  * stoichiometry; the solvent for a target concentration; the product's
  * theoretical yield and, from what was obtained, the percent yield.
  *
- * What to weigh or take (from equivalents: a target) is an instruction, shown
- * at working precision; what follows from measured amounts (the reference's
- * moles, the theoretical yield, the percent yield) is a result with the
- * figures of the measurements.
+ * What to weigh or take (from equivalents, or from an amount in moles: a target)
+ * is an instruction, shown at working precision; what follows from measured
+ * amounts (the moles of a mass or volume given, the theoretical yield, the
+ * percent yield) is a result with the figures of the measurements.
  */
 import type { Note } from '../errors/issue.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
@@ -20,11 +20,11 @@ import { exact } from '../sigfig/measured.js';
 import { displayResult, displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, volumeUnitFor, type InputFigures, type Instruction } from '../sigfig/instruction.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
 import type { RoundingMode } from '../sigfig/round.js';
-import { baseUnitText, sameDims, unitOf } from '../sigfig/units.js';
+import { AMOUNT, baseUnitText, sameDims, unitOf } from '../sigfig/units.js';
 import { Decimal } from '../exact/decimal.js';
 import { balanceParsed } from '../reactions/balance.js';
 import { parseEquation } from '../reactions/equation.js';
-import { isLiquid, materialForMoles, molesFromQuantity, readAmount, readMaterial, type Material, type MaterialSpec } from './material.js';
+import { isLiquid, materialForMoles, molesFromQuantity, readAmount, readMaterial, type Material, type MaterialAmount, type MaterialSpec } from './material.js';
 import { hazardOf, lookUpName, type Hazard } from './names.js';
 
 /** The part a row plays. Catalysts and additives are left out of the stoichiometry. */
@@ -182,6 +182,25 @@ function resolve(spec: ReagentSpec, options: ParseOptions): Resolved {
 }
 
 /**
+ * The mass and volume columns of a reagent given by its own amount. An amount in moles is a plan,
+ * so the mass to weigh and the volume to take that follow from it are instructions, at working
+ * precision, with a note when the amount has few figures; a mass or volume given was measured,
+ * and what follows from it is a result.
+ */
+function weighOrTake(got: MaterialAmount, given: Quantity, inputs: InputFigures[], mat: Material, what: string, rounding: RoundingMode, notes: Note[]): [TableAmount | null, TableAmount | null] {
+  const planned = sameDims(given.dims, AMOUNT);
+  const kind = planned ? 'instruction' : 'result';
+  const mass = got.mass ? tableAmount(got.mass, kind, inputs, massUnitFor(got.mass), rounding) : null;
+  const volume = got.volume && isLiquid(mat) ? tableAmount(got.volume, kind, inputs, volumeUnit(got.volume), rounding) : null;
+  const taken = volume && got.volume ? got.volume : got.mass;
+  if (planned && taken) {
+    const few = fewFiguresNote(instruction(taken, inputs), `the amount of ${what}`, null);
+    if (few) notes.push(few);
+  }
+  return [mass, volume];
+}
+
+/**
  * A quantity as plain data, shown as an instruction (working precision) or a result (textbook figures).
  *
  * @example
@@ -315,8 +334,7 @@ export function reagentRow(ctx: TableContext, spec: ReagentSpec): ReagentRow {
     moles = got.moles;
     equiv = quantity(exact(1), null);
     amountJson = tableAmount(moles, 'result', inputs, 'mmol', rounding);
-    if (got.mass) mass = tableAmount(got.mass, 'result', inputs, massUnitFor(got.mass), rounding);
-    if (got.volume && isLiquid(mat)) volume = tableAmount(got.volume, 'result', inputs, volumeUnit(got.volume), rounding);
+    [mass, volume] = weighOrTake(got, amount.quantity, inputs, mat, what, rounding, notes);
   } else {
     const amount = readAmount(spec.amount ?? '', what, notes);
     if (amount.kind === 'equiv') {
@@ -335,8 +353,7 @@ export function reagentRow(ctx: TableContext, spec: ReagentSpec): ReagentRow {
       moles = got.moles;
       equiv = divide(moles, nRef);
       amountJson = tableAmount(moles, 'result', [], 'mmol', rounding);
-      if (got.mass) mass = tableAmount(got.mass, 'result', [], massUnitFor(got.mass), rounding);
-      if (got.volume && isLiquid(mat)) volume = tableAmount(got.volume, 'result', [], volumeUnit(got.volume), rounding);
+      [mass, volume] = weighOrTake(got, amount.quantity, [inputFigures(`the amount of ${what}`, spec.amount ?? '', amount.quantity)], mat, what, rounding, notes);
       notes.push({ code: 'EQUIV_COMPUTED', message: `${what} is given by its own amount: ${equivText(equiv, rounding)} equiv of ${ctx.reference.spec.reagent.trim()} computed` });
     }
     if (spec.role === 'catalyst' || spec.role === 'additive') {

@@ -15,6 +15,23 @@ const aspirin: ReagentSpec[] = [
 ];
 
 describe('the reagent table', () => {
+  it('a reagent given in moles is a plan: its mass to weigh and volume to take are instructions', () => {
+    // molar mass of bromobenzene C6H5Br 157.010 g/mol (CIAAW standard weights); 5.00 mmol × 157.010 g/mol = 785.05 mg,
+    // 0.7850 g at four figures (half to even); 7.50 mmol × 101.193 g/mol = 758.9 mg (arithmetic by hand)
+    const t = reagentTable([
+      { role: 'reference', reagent: 'PhBr', amount: '5.00 mmol' },
+      { role: 'reagent', reagent: 'Et3N', amount: '7.50 mmol', density: '0.726 g/mL' },
+    ]);
+    const [ref, base] = t.rows;
+    expect(ref.mass).toMatchObject({ kind: 'instruction', display: '0.7850 g' });
+    expect(ref.amount!.kind).toBe('result');
+    expect(base.mass).toMatchObject({ kind: 'instruction', display: '0.7589 g' });
+    expect(base.volume!.kind).toBe('instruction');
+    // a mass given was weighed: what follows from it is a result
+    const weighed = reagentTable([{ role: 'reference', reagent: 'PhBr', amount: '0.785 g' }]);
+    expect(weighed.rows[0].mass).toMatchObject({ kind: 'result', display: '0.785 g' });
+  });
+
   it('the aspirin synthesis: equivalents, volume from density, a catalyst left out, the theoretical and percent yield', () => {
     // a common teaching-lab experiment (2.00 g salicylic acid, excess acetic anhydride, a drop of sulfuric acid), from memory;
     // density of acetic anhydride 1.08 g/mL, of 98 % sulfuric acid 1.84 g/mL (CRC Handbook of Chemistry and Physics, from memory)
