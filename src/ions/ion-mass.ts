@@ -99,6 +99,8 @@ export function ionMassDetail(formula: string | null, ion: string | IonNotation 
     tree = parseFormula(formula, options);
     input = formula;
   }
+  // how the formula was read (an abbreviation, a '.' between components): the ion's notes start with it
+  notes.push(...tree.notes);
   const atoms = flattenFormula(tree);
   for (const [key, n] of atoms) {
     if (!isWhole(n)) throw fail({ code: 'BAD_COUNT', message: `an ion has whole numbers of atoms; '${tree.input}' has ${n.toString()} ${key}` }, tree.input);

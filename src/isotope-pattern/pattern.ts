@@ -107,6 +107,7 @@ export function isotopePattern(formula: string | null, options: PatternOptions =
   let mono: Decimal;
   const tree = options.ion === undefined && formula !== null ? parseFormula(formula, options) : null;
   if (tree && tree.charge === 0) {
+    notes.push(...tree.notes); // how the formula was read (an abbreviation, a '.' between components)
     const counts = flattenFormula(tree);
     for (const [key, n] of counts) if (!isWhole(n)) throw fail({ code: 'BAD_COUNT', message: `an isotope pattern needs whole numbers of atoms; '${tree.input}' has ${n.toString()} ${key}` }, tree.input);
     atoms = counts as Map<string, number>;

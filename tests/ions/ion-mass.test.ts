@@ -204,3 +204,13 @@ describe('the public result is plain data', () => {
     expect(Object.getPrototypeOf(r.atoms)).toBe(Object.prototype);
   });
 });
+
+describe('how the formula was read reaches the ion', () => {
+  it('an abbreviation and a dot between components are named in the notes, as mass names them', () => {
+    for (const [formula, code] of [['Et3N', 'ABBREVIATION'], ['BocNHCH2COOH', 'ABBREVIATION'], ['CuSO4.5H2O', 'DOT_AS_ADDITION']]) {
+      const r = ionMass(formula, '[M+H]+');
+      expect(r.notes.map((n) => n.code), formula).toContain(code);
+      expect(JSON.stringify(ionJson(r)), formula).toContain(code);
+    }
+  });
+});

@@ -269,3 +269,10 @@ describe('the result is plain data', () => {
     expect(typeof r.monoisotopicMzExact).toBe('string');
   });
 });
+
+describe('how the formula was read reaches the pattern', () => {
+  it('an abbreviation and a dot between components are named in the notes', () => {
+    expect(isotopePattern('Et3N').notes.map((n) => n.code)).toContain('ABBREVIATION');
+    expect(isotopePattern('CuSO4.5H2O').notes.map((n) => n.code)).toContain('DOT_AS_ADDITION');
+  });
+});
