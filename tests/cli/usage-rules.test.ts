@@ -34,10 +34,11 @@ describe('conflicting options are refused by the declaration, with its reason', 
 
 describe('required options are refused by the declaration, with its hint', () => {
   it.each([
-    [['gravimetric', 'Fe'], 'pondus: give the weighed form: --weighed Fe2O3\n'],
+    [['gravimetric', 'Fe'], 'pondus: give the formula of the weighed form (the precipitate or residue as weighed) with --weighed\n'],
     [['basis', 'P2O5'], 'pondus: give the basis to convert to: --to P (or --to P2O5, K2O, SiO2, …)\n'],
-    [['salt', 'C17H19NO3·HCl'], 'pondus: give the parent compound: --parent C17H19NO3\n'],
-    [['gravimetric'], 'pondus: give the weighed form: --weighed Fe2O3\n'],
+    // the hint names no substance: C17H19NO3 would be another compound for most salts
+    [['salt', 'C17H19NO3·HCl'], 'pondus: give the formula of the parent compound (the free base or acid the dose is of) with --parent\n'],
+    [['gravimetric'], 'pondus: give the formula of the weighed form (the precipitate or residue as weighed) with --weighed\n'],
   ])('%j', (args, message) => {
     const r = pondus(args);
     expect(r.status).toBe(2);

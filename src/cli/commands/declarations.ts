@@ -290,9 +290,9 @@ export function declareConversions(program: Command): { dilute: Command; gravime
         .option('--salt-mass <m>', 'a mass of salt: the parent mass it carries (a result)'),
     ),
   );
-  required(gravimetric, '--weighed', 'give the weighed form: --weighed Fe2O3');
+  required(gravimetric, '--weighed', 'give the formula of the weighed form (the precipitate or residue as weighed) with --weighed');
   required(basis, '--to', 'give the basis to convert to: --to P (or --to P2O5, K2O, SiO2, …)');
-  required(salt, '--parent', 'give the parent compound: --parent C17H19NO3');
+  required(salt, '--parent', 'give the formula of the parent compound (the free base or acid the dose is of) with --parent');
   return { dilute, gravimetric, basis, salt };
 }
 
