@@ -6,7 +6,7 @@
 import type { Note } from '../errors/issue.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
 import { copyQuantity, type Quantity } from '../sigfig/quantity.js';
-import { baseUnitText, dimsName, sameDims, type Dims } from '../sigfig/units.js';
+import { baseUnitText, dimsName, sameDims, UNIT_SPELLINGS, type Dims } from '../sigfig/units.js';
 import { evaluate } from './evaluate.js';
 import { parseExpression } from './parse-expression.js';
 
@@ -33,7 +33,10 @@ export function measure(text: string, what = 'the quantity', notes?: Note[]): Qu
       const ev = evaluate(parsed);
       read = { result: ev.result, notes: ev.notes };
     } catch (e) {
-      if (e instanceof PondusError) throw new PondusError(e.issues.map((i) => ({ ...i, message: `${what}: ${i.message}` })), text);
+      if (e instanceof PondusError) {
+        const named = nameAfterAmount(text);
+        throw new PondusError(e.issues.map((i) => (named && i.code === 'UNKNOWN_UNIT' ? { ...i, message: `${what}: ${i.message}`, hint: `${what} is a number and its unit ('${named.amount}'); the name after it, '${named.name}', is not read here: give the amount alone`, length: named.name.length } : { ...i, message: `${what}: ${i.message}` })), text);
+      }
       throw e;
     }
     if (text.length <= 200) {
@@ -44,6 +47,13 @@ export function measure(text: string, what = 'the quantity', notes?: Note[]): Qu
   for (const n of read.notes) notes?.push({ code: 'MEASUREMENT', message: `${what}: ${n.message}` });
   // a copy: callers may set the unit to show, or add sensitivities
   return copyQuantity(read.result);
+}
+
+/** An amount followed by a name ('6 M HCl', '18 M H2SO4'): the amount and the name, when the amount's unit is one pondus reads. */
+function nameAfterAmount(text: string): { amount: string; name: string } | null {
+  const m = /^\s*([-+]?[0-9.]+(?:[eE][-+]?[0-9]+)?\s*([^\s0-9][^\s]*))\s+(\S.*?)\s*$/.exec(text);
+  if (!m || !UNIT_SPELLINGS.includes(m[2])) return null;
+  return { amount: m[1], name: m[3] };
 }
 
 /**

@@ -42,6 +42,9 @@ export interface DilutionResult {
   notes: Note[];
 }
 
+/** From this molarity (mol/L) a stock is taken as concentrated (concentrated HCl is about 12 M, H2SO4 18 M): common practice. */
+const CONCENTRATED_MOLARITY = 5;
+
 /**
  * The stock volume for a dilution.
  *
@@ -69,6 +72,9 @@ export function dilute(stockText: string, targetText: string | undefined, volume
   const finalVolume = measureAs(volumeText, [VOLUME], 'the final volume', notes);
   if (stock.value.lte(0) || (target && target.value.lte(0)) || finalVolume.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'concentrations and volume must be positive' });
   if (target) refuseNotWeaker(stock.value, target.value, 'the stock');
+  if (sameDims(stock.dims, MOLARITY) && stock.value.gte(CONCENTRATED_MOLARITY)) {
+    notes.push({ code: 'CONCENTRATED_STOCK', message: `the stock, ${stockText.trim()}, is concentrated: if it is an acid or a base, wear eye and hand protection, work in a fume hood, and add it slowly to most of the water (acid to water, never water to acid), cooling, before making up to volume (common practice); follow its SDS` });
+  }
 
   let stockVolume: Instruction | null = null;
   let solventVolume: Instruction | null = null;

@@ -58,3 +58,23 @@ describe('planSteps refuses what no plan can reach', () => {
     expect(planSteps(new Decimal(8), new Decimal(2)).map(String)).toEqual(['2', '2', '2']);
   });
 });
+
+describe('a concentrated stock', () => {
+  it('gets a note with the usual handling of concentrated acids and bases, in every format', () => {
+    // concentrated hydrochloric acid is about 12 M (CRC Handbook, from memory); 12 M × V = 1.000 M × 100.0 mL gives 8.333 mL
+    const r = dilute('12 M', '1.000 M', '100.0 mL');
+    expect(r.notes.map((n) => n.code)).toContain('CONCENTRATED_STOCK');
+    expect(r.notes.find((n) => n.code === 'CONCENTRATED_STOCK')!.message).toMatch(/acid to water/);
+    expect(dilute('1.0 M', '0.10 M', '100.0 mL').notes.map((n) => n.code)).not.toContain('CONCENTRATED_STOCK');
+  });
+
+  it('a name after the amount is refused with a hint to give the amount alone', () => {
+    let hint = '';
+    try {
+      dilute('6 M HCl', '0.5 M', '100 mL');
+    } catch (e) {
+      hint = (e as PondusError).issues[0].hint ?? '';
+    }
+    expect(hint).toMatch(/'6 M'.*'HCl', is not read here/);
+  });
+});
