@@ -24,8 +24,8 @@ const CLOSE_OF: Record<string, string> = { '(': ')', '[': ']', '{': '}' };
 /** Element symbols indexed by their letters' char codes, so the scanner finds a symbol without slicing the text. */
 const ONE_LETTER: (string | undefined)[] = [];
 const TWO_LETTER: (string | undefined)[] = [];
-/** Symbols whose reading must be settled by the full parser: Ac, Ts and Pr are also abbreviations, Np gets a note. */
-const SETTLE = new Set(['Ac', 'Ts', 'Pr', 'Np']);
+/** Symbols whose reading must be settled by the full parser: Ac, Ts and Pr are also abbreviations; Np, Ar and Am get a note. */
+const SETTLE = new Set(['Ac', 'Ts', 'Pr', 'Np', 'Ar', 'Am']);
 for (const e of ELEMENTS) {
   if (SETTLE.has(e.symbol)) continue;
   const a = e.symbol.charCodeAt(0) - 65;

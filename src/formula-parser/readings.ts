@@ -158,6 +158,14 @@ export function settleReadings(components: ComponentNode[], input: string): { is
       } else if (p.symbol === 'Np' && !seen.has('Np')) {
         seen.add('Np');
         notes.push({ code: 'ELEMENT_NOT_ABBREVIATION', message: "'Np' is read as the element neptunium; for naphthyl (C10H7) or neopentyl (C5H11) write the formula", column: columnOf(input, p.span.start) });
+      } else if ((p.symbol === 'Ar' || p.symbol === 'Am') && symbols.size > 1 && !seen.has(p.symbol)) {
+        // beside other atoms, Ar is often an aryl group and Am an amyl group (common practice): neither is one formula
+        seen.add(p.symbol);
+        const message =
+          p.symbol === 'Ar'
+            ? "'Ar' is read as the element argon; Ar for an aryl group stands for no one formula: write the aryl group's formula"
+            : "'Am' is read as the element americium; for an amyl (pentyl) group write the formula (C5H11)";
+        notes.push({ code: 'ELEMENT_NOT_ABBREVIATION', message, column: columnOf(input, p.span.start) });
       }
     }
     for (const run of runsOf(parts, input)) {

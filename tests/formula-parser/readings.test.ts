@@ -240,6 +240,13 @@ describe('readings that must be settled', () => {
     expect(codes('Ac')).toEqual(['ELEMENT_NOT_ABBREVIATION']);
   });
 
+  it('notes that Ar beside other atoms is argon, not an aryl group, and Am americium, not amyl', () => {
+    // Ar for aryl and Am for amyl: common practice in organic formulas
+    expect(codes('ArCl')).toEqual(['ELEMENT_NOT_ABBREVIATION']);
+    expect(codes('AmOH')).toContain('ELEMENT_NOT_ABBREVIATION');
+    expect(codes('Ar')).toEqual([]); // argon alone is argon
+  });
+
   it('names what a solvent or reagent name stands for', () => {
     expect(refusal('DMF').hint).toContain('N,N-dimethylformamide (C3H7NO)');
     expect(refusal('DMSO').hint).toContain('dimethyl sulfoxide (C2H6OS)');
