@@ -184,7 +184,7 @@ function readSet(text: string): Measurements {
     } else elements.push({ symbol: diffSymbol, value: rest, halfUnit: restSlack, byDifference: true });
   } else if (kind === 'percent') {
     if (sum.minus(100).abs().gt(slack.plus('1.0'))) {
-      throw fail({ code: 'BAD_MEASUREMENT', message: `the percents add up to ${sum.toFixed()} %, not 100 %: is an element missing (give it as X=rest)?` }, text);
+      throw fail({ code: 'BAD_MEASUREMENT', message: sum.gt(100) ? `the percents add up to ${sum.toFixed()} %, more than 100 %: check the values (one may be mistyped, or counted twice)` : `the percents add up to ${sum.toFixed()} %, not 100 %: is an element missing (give it as X=rest)?` }, text);
     }
     if (sum.gt('100.5')) notes.push({ code: 'SUM_OVER_100', message: `the percents add up to ${sum.toFixed()} %, over 100 %: the formula is fitted to the values as given; check them` });
   } else if (total && sum.gt(total.plus(slack))) {

@@ -232,3 +232,19 @@ describe('combustion: the products as keys', () => {
     expect(() => combustion({ sample: '1.000 g', collected: null as never })).toThrow(PondusError);
   });
 });
+
+describe('percents that do not add up to 100', () => {
+  const message = (text: string) => {
+    try {
+      empirical(text);
+    } catch (e) {
+      return (e as Error).message;
+    }
+    return '';
+  };
+  it('asks for a missing element below 100 %, and for a check of the values above it', () => {
+    expect(message('C=40.0 H=6.7 O=43.3')).toMatch(/90 %.*is an element missing/);
+    expect(message('C=40.0 H=6.7 O=53.3 N=5.0')).toMatch(/105 %, more than 100 %: check the values/);
+    expect(message('C=40.0 H=6.7 O=53.3 N=5.0')).not.toMatch(/missing/);
+  });
+});
