@@ -100,6 +100,19 @@ export function unknownElementHint(text: string, issue: Issue, mode: 'elements' 
   return unknownSymbolHint(text.slice(offset, offset + (issue.length ?? 1)), true);
 }
 
+/**
+ * The hint for an alkyl prefix written with a hyphen (n-Bu, t-Bu, s-Bu, i-Pr), which a formula
+ * writes without it (nBu, tBu): the formula re-written that way, when it then reads.
+ *
+ * @example
+ * alkylPrefixHint('n-BuLi', () => true) // 'write the alkyl prefix without the hyphen: nBuLi'
+ */
+export function alkylPrefixHint(text: string, parses: (s: string) => boolean): string | undefined {
+  if (!/(?:^|[^A-Za-z])[nsti]-[A-Z]/.test(text)) return undefined;
+  const joined = text.replace(/(^|[^A-Za-z])([nsti])-(?=[A-Z])/g, '$1$2');
+  return joined !== text && parses(joined) ? `write the alkyl prefix without the hyphen: ${joined}` : undefined;
+}
+
 /** UTF-16 offset of a 1-based code-point column. */
 function offsetOfColumn(text: string, column: number): number {
   let col = 1;

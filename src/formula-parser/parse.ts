@@ -10,7 +10,7 @@ import { isElementSymbol } from '../elements/element-table.js';
 import type { Note } from '../errors/issue.js';
 import { ABBREVIATIONS, REFUSED_ABBREVIATIONS } from './abbreviations.js';
 import { fastParse } from './fast-path.js';
-import { unknownElementHint } from './hints.js';
+import { alkylPrefixHint, unknownElementHint } from './hints.js';
 import { fullGrammar } from './grammar-loader.js';
 import { REAGENTS } from './names.js';
 import { columnOf, MAX_FORMULA_LENGTH, prescanAll } from './prescan.js';
@@ -86,7 +86,17 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
   const cst = grammar.formula() as FormulaCstNode;
   if (grammar.errors.length > 0) {
     // the grammar stops at its first error; the words that are no element symbol are found in the tokens
-    throw new PondusError(byColumn([syntaxIssue(text, grammar.errors[0], lexed.tokens), ...unknownWords(text, lexed.tokens)]), input);
+    const issues = byColumn([syntaxIssue(text, grammar.errors[0], lexed.tokens), ...unknownWords(text, lexed.tokens)]);
+    if (hintDepth === 0) {
+      hintDepth++;
+      try {
+        const prefix = alkylPrefixHint(text, (s) => safeParseFormula(s, options).success);
+        if (prefix) issues[0] = { ...issues[0], hint: prefix };
+      } finally {
+        hintDepth--;
+      }
+    }
+    throw new PondusError(issues, input);
   }
 
   const built = buildTree(cst, text, expandAbbreviation);

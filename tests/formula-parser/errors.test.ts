@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { PondusError } from '../../src/errors/pondus-error.js';
 import { renderError } from '../../src/errors/render.js';
-import { parseFormula } from '../../src/formula-parser/parse.js';
+import { parseFormula, safeParseFormula } from '../../src/formula-parser/parse.js';
 
 function issue(input: string, options = {}) {
   try {
@@ -66,5 +66,17 @@ describe('parse errors name the problem and the column', () => {
 
   it('counts columns in characters, not UTF-16 units', () => {
     expect(issue('H₂O₂Xx').column).toBe(5);
+  });
+});
+
+describe('an alkyl prefix written with a hyphen', () => {
+  it('is refused with the formula written without it, the same substance', () => {
+    // n-BuLi, t-BuOK: the names as chemists write them; in a formula the prefix goes without the hyphen (common practice)
+    for (const [written, joined] of [['n-BuLi', 'nBuLi'], ['t-BuOK', 'tBuOK']]) {
+      const r = safeParseFormula(written);
+      expect(r.success).toBe(false);
+      if (!r.success) expect(r.error.issues[0].hint).toBe(`write the alkyl prefix without the hyphen: ${joined}`);
+      expect(safeParseFormula(joined).success).toBe(true);
+    }
   });
 });
