@@ -12,7 +12,7 @@ import { Decimal } from '../exact/decimal.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type InputFigures, type Instruction } from '../sigfig/instruction.js';
 import { readPurity } from './purity.js';
 import { CONCENTRATED_GRADES } from './concentrated-grades.js';
-import { smallMassWarning } from './warnings.js';
+import { reagentHandlingNote, smallMassWarning } from './warnings.js';
 import { partShare } from '../composition/part-share.js';
 import { toDecimal } from '../formula/amount.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
@@ -177,6 +177,7 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   const read = reagentMass(reagentText, options);
   const reagent = read.detail;
   refuseConcentrated(reagent);
+  const handling = reagentHandlingNote(reagent.formula);
   if (options.concentration === undefined && options.weighed === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the target concentration, or the mass weighed (or both)' });
   const target = options.concentration !== undefined ? readConcentration(options.concentration, notes) : null;
   const conc = target?.conc ?? null;
@@ -279,5 +280,6 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   }
   const unit = target?.unit ?? 'M';
   notes.unshift(...formulaNotes(reagent, options.as !== undefined), ...(asMass ? formulaNotes(asMass, true) : []));
+  if (handling) notes.push(handling);
   return { reagent, target: { formula: targetFormula, written: targetName.trim().replace(/\s+/g, ' '), perReagent: toDecimal(perReagent.value).toFixed(), molarMass: targetM }, concentration: conc, volume, purity, purityBasis: basis, targetMoles, moles, pureMass, mass, weighed, made, unit, notes };
 }

@@ -74,3 +74,27 @@ export function over100Warning(percent: Decimal, what: string, check: string): N
   if (percent.lte(100)) return null;
   return { code: 'RESULT_OVER_100', message: `${what} is ${percent.toSignificantDigits(4).toFixed()} %, more than 100 %: ${check}` };
 }
+
+/** Hill formulas of the chromium(VI) salts and oxide a lab weighs out (dichromates, chromates, CrO3). */
+const CHROMIUM_VI = new Set(['Cr2K2O7', 'Cr2Na2O7', 'Cr2H8N2O7', 'CrK2O4', 'CrNa2O4', 'CrO3']);
+/** Hill formulas of the hydroxides that take up water and carbon dioxide from the air. */
+const HYGROSCOPIC_BASES = new Set(['HNaO', 'HKO']);
+
+/**
+ * A note on handling the reagent weighed, where the usual caution is not enough: sodium and
+ * potassium hydroxide (a solution made by weighing them is only approximate), and chromium(VI)
+ * compounds (toxic and carcinogenic: IARC Group 1, from memory). Null for anything else.
+ *
+ * @example
+ * reagentHandlingNote('HNaO')?.code // 'REAGENT_HANDLING'
+ * reagentHandlingNote('ClNa') // null
+ */
+export function reagentHandlingNote(hill: string): Note | null {
+  if (HYGROSCOPIC_BASES.has(hill)) {
+    return { code: 'REAGENT_HANDLING', message: `${hill === 'HNaO' ? 'NaOH' : 'KOH'} takes up water and carbon dioxide from the air, so a solution made by weighing it is only approximate: standardise it (against potassium hydrogen phthalate, for example) before using it as a titrant; it is corrosive: wear eye protection (common practice)` };
+  }
+  if (CHROMIUM_VI.has(hill)) {
+    return { code: 'REAGENT_HANDLING', message: 'a chromium(VI) compound: toxic and a carcinogen (IARC Group 1, from memory); weigh it in a fume hood or ventilated enclosure with gloves, and collect the waste as hazardous; follow its SDS' };
+  }
+  return null;
+}

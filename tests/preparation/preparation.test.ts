@@ -267,3 +267,14 @@ describe('salt and parent', () => {
     expect(() => saltFactor('C17H20ClNO3', 'C17H19NO3')).toThrow(/neither written as C17H19NO3·acid/);
   });
 });
+
+describe('reagents that need more than the usual caution', () => {
+  it('sodium hydroxide: standardise the solution; chromium(VI): a carcinogen; sodium chloride: nothing more', () => {
+    // NaOH takes up water and CO2, so NaOH solutions are standardised (common practice); Cr(VI) compounds are IARC Group 1 (from memory)
+    const codes = (f: string, c: string) => prepareSolution(f, { concentration: c, volume: '1.000 L' }).notes.map((n) => n.code);
+    expect(codes('NaOH', '0.1000 M')).toContain('REAGENT_HANDLING');
+    expect(codes('KOH', '0.1000 M')).toContain('REAGENT_HANDLING');
+    expect(codes('K2Cr2O7', '0.01667 M')).toContain('REAGENT_HANDLING');
+    expect(codes('NaCl', '0.1000 M')).not.toContain('REAGENT_HANDLING');
+  });
+});
