@@ -183,3 +183,16 @@ describe('calc: units written the SI way', () => {
     expect(calc(expr).display).toBe(display);
   });
 });
+
+describe('readers of amounts: a comma in a number', () => {
+  it('is refused with both readings, thousands separator and decimal comma', () => {
+    let hint = '';
+    try {
+      measure('1,000 mL', 'the volume');
+    } catch (e) {
+      hint = (e as { issues: { hint?: string }[] }).issues[0].hint ?? '';
+    }
+    expect(hint).toContain('write 1000 mL');
+    expect(hint).toContain('write 1.000 mL');
+  });
+});
