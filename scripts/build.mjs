@@ -76,8 +76,8 @@ await build({ ...library, format: 'cjs', outfile: `${root}dist/lib/index.cjs` })
 
 // esbuild writes strings in ASCII but leaves regular expressions as written, and one character
 // past ASCII ('·' in a pattern) makes Node read the whole file as a two-byte string: twice the
-// memory and a slower read and compile. Each such
-// character becomes its \uXXXX escape, which means the same in a pattern, a string or a comment.
+// memory, and a slower read and compile. Each such character becomes its \uXXXX escape, which
+// means the same in a pattern, a string or a comment.
 function asciiOnly(file) {
   const text = readFileSync(file, 'utf8');
   const out = text.replace(/(\\*)([^\x00-\x7f])/g, (_, slashes, c) => {
