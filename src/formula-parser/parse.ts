@@ -14,7 +14,7 @@ import { alkylPrefixHint, unknownElementHint } from './hints.js';
 import { fullGrammar } from './grammar-loader.js';
 import { REAGENTS } from './names.js';
 import { columnOf, MAX_FORMULA_LENGTH, prescanAll } from './prescan.js';
-import { settleReadings } from './readings.js';
+import { mixtureRefusals, settleReadings } from './readings.js';
 import { end, type ComponentNode, type FormulaTree, type GroupNode, type PartNode, type Span } from './tree.js';
 import type { FormulaCstNode } from './cst.js';
 import { buildTree, unknownElement, type ReadingMode } from './visitor.js';
@@ -125,6 +125,9 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
     const settled = settleReadings(built.components, text);
     if (settled.issues.length > 0) throw new PondusError(settled.issues, input);
     notes.push(...settled.notes);
+  } else if (mode === 'abbreviations') {
+    const mixtures = mixtureRefusals(built.components, text);
+    if (mixtures.length > 0) throw new PondusError(mixtures, input);
   }
   if (state) notes.push({ code: 'STATE_SYMBOL', message: `'${state.symbol}' is a state symbol (${STATES[state.letters]}) and is set aside`, column: columnOf(input, state.offset) });
   return { kind: 'formula', input, components: built.components, charge: built.charge, notes };

@@ -20,6 +20,51 @@ const GROUP_RUNS = ['TBDPS', 'TIPS', 'TBS'];
 /** Reagent names in mixed case whose letters read as element symbols (HOAt as H, O, At). */
 const MIXED_CASE_RUNS = ['HOAt'];
 
+/**
+ * Names of buffers, media and polymers whose letters read as element symbols (PBS as P, B, S):
+ * each is a mixture or a polymer, with no one formula to offer (common practice).
+ */
+const MIXTURE_RUNS: Readonly<Record<string, string>> = Object.freeze({
+  PBS: 'phosphate-buffered saline, a buffer mixture',
+  DPBS: "Dulbecco's phosphate-buffered saline, a buffer mixture",
+  PBST: 'phosphate-buffered saline with Tween, a buffer mixture',
+  TBST: 'Tris-buffered saline with Tween, a buffer mixture',
+  HBSS: "Hanks' balanced salt solution, a mixture",
+  BSS: 'a balanced salt solution, a mixture',
+  SSC: 'saline-sodium citrate buffer, a mixture',
+  PVP: 'polyvinylpyrrolidone, a polymer',
+});
+
+/** The refusal of a run that spells the name of a mixture or polymer. */
+function mixtureIssue(run: Run, input: string): Issue {
+  const elements = run.atoms.map((a) => written(input, a)).join(', ');
+  const hasIsotope = /[DT]/.test(run.text);
+  const other = hasIsotope ? asElementsText(run.text) : [...run.atoms.map((a) => written(input, a))].sort().join('');
+  return {
+    code: 'AMBIGUOUS_READING',
+    message: `'${run.text}' reads as the elements ${elements}, but ${run.text} is also the name of ${MIXTURE_RUNS[run.text]}, which has no one formula`,
+    column: columnOf(input, run.start),
+    length: run.text.length,
+    hint: `for a component of it, write that component's formula; for the elements, write ${other}${hasIsotope ? ' (hydrogen isotopes in brackets)' : ' (another order)'}`,
+  };
+}
+
+/**
+ * The refusals of runs that spell a mixture's or polymer's name (PBS, HBSS, PVP), for a formula
+ * read with abbreviations, where the other readings are settled already: no reading gives such a
+ * name a formula.
+ *
+ * @example
+ * mixtureRefusals(parseFormula('H2O').components, 'H2O') // []
+ */
+export function mixtureRefusals(components: ComponentNode[], input: string): Issue[] {
+  const issues: Issue[] = [];
+  eachLevel(components, (parts) => {
+    for (const run of runsOf(parts, input)) if (!run.counted && Object.hasOwn(MIXTURE_RUNS, run.text)) issues.push(mixtureIssue(run, input));
+  });
+  return issues;
+}
+
 /** Letter-only names whose letters read as element symbols (THF, NBS, DBU, …), and what each stands for. */
 function nameFor(run: string): NamedSubstance | null {
   if (Object.hasOwn(REAGENTS, run) && (/^[A-Z]+$/.test(run) || MIXED_CASE_RUNS.includes(run))) return REAGENTS[run];
@@ -170,6 +215,11 @@ export function settleReadings(components: ComponentNode[], input: string): { is
     }
     for (const run of runsOf(parts, input)) {
       const hasIsotope = /[DT]/.test(run.text);
+      if (!run.counted && Object.hasOwn(MIXTURE_RUNS, run.text)) {
+        const m = mixtureIssue(run, input);
+        refuse(`run:${run.text}`, run.start, run.text.length, () => m.message, () => m.hint!);
+        continue;
+      }
       const name = run.counted ? null : nameFor(run.text);
       if (name && name.formula !== run.text) {
         const elements = run.atoms.map((a) => written(input, a)).join(', ');
@@ -217,5 +267,5 @@ export function mayNeedSettling(text: string): boolean {
 }
 
 const NAME_TEST = new RegExp(
-  [...Object.keys(REAGENTS).filter((k) => /^[A-Z]+$/.test(k)), ...Object.keys(SOLVENTS).filter((k) => /^[a-z]+$/.test(k)).map((k) => k.toUpperCase()), ...GROUP_RUNS, ...MIXED_CASE_RUNS, 'BOC'].join('|'),
+  [...Object.keys(REAGENTS).filter((k) => /^[A-Z]+$/.test(k)), ...Object.keys(SOLVENTS).filter((k) => /^[a-z]+$/.test(k)).map((k) => k.toUpperCase()), ...GROUP_RUNS, ...MIXED_CASE_RUNS, ...Object.keys(MIXTURE_RUNS), 'BOC'].join('|'),
 );

@@ -352,3 +352,22 @@ describe('hints keep the substance', () => {
     );
   });
 });
+
+describe('names of mixtures and polymers that read as element symbols', () => {
+  it('are refused in every reading that could compute them, with no formula offered', () => {
+    // PBS (phosphate-buffered saline), HBSS, PVP: lab names, common practice; none is one substance
+    for (const name of ['PBS', 'HBSS', 'PVP', 'TBST']) {
+      const r = safeParseFormula(name);
+      expect(r.success, name).toBe(false);
+      if (!r.success) {
+        expect(r.error.issues[0].code).toBe('AMBIGUOUS_READING');
+        expect(r.error.issues[0].message).toContain('no one formula');
+      }
+      // with abbreviations read, TBST is the TBS group and tritium, with a note (TBS is an abbreviation there)
+      if (name !== 'TBST') expect(safeParseFormula(name, { abbreviations: true }).success, `${name} with abbreviations`).toBe(false);
+    }
+    // the elements themselves, written in another order, still read
+    expect(safeParseFormula('BPS').success).toBe(true);
+    expect(safeParseFormula('PBS', { abbreviations: 'none' }).success).toBe(true);
+  });
+});
