@@ -39,24 +39,28 @@ const lazyNuclideTable = (where) => ({
 mkdirSync(`${root}dist/data`, { recursive: true });
 copyFileSync(`${root}src/elements/data/nuclide-masses.json`, `${root}dist/data/nuclide-masses.json`);
 
-// The library builds its grammars on first use as the command line does, from inside its own
-// file: Chevrotain's tokens and parser classes are made when a formula or expression first needs
-// the full parser, not when the library is imported.
-const lazyLibraryGrammar = {
-  name: 'lazy-library-grammar',
+// The formula and calculator grammars (Chevrotain's tokens and parser classes) are built at
+// start-up by any module that imports them, though the fast readers take most inputs. Each build
+// swaps formula-parser/grammar-loader.ts and calc/grammar-loader.ts for modules that load their
+// grammar on first use, `where` from:
+// - 'inline' (the library): full-grammar.ts inside the same file, which esbuild wraps in a lazy
+//   initialiser, so importing the library does not make the tokens and parser classes;
+// - 'own file' (the command line): dist/cli/grammars.cjs (built from src/cli/grammar-chunk.ts),
+//   so the parser library, about 40 % of a bundle, is neither read nor compiled by a command
+//   whose inputs the fast readers take.
+const lazyGrammar = (where) => ({
+  name: 'lazy-grammar',
   setup(b) {
-    b.onLoad({ filter: /formula-parser[\\/]grammar-loader\.ts$/ }, () => ({
-      contents: "let full;\nexport function fullGrammar() { return (full ??= require('./full-grammar.ts')); }\n",
+    const loader = (fn, dir, part) => ({
+      contents: `let full;\nexport function ${fn}() { return (full ??= ${where === 'inline' ? "require('./full-grammar.ts')" : `require('./grammars.cjs').${part}`}); }\n`,
       loader: 'ts',
-      resolveDir: `${root}src/formula-parser`,
-    }));
-    b.onLoad({ filter: /calc[\\/]grammar-loader\.ts$/ }, () => ({
-      contents: "let full;\nexport function calcFullGrammar() { return (full ??= require('./full-grammar.ts')); }\n",
-      loader: 'ts',
-      resolveDir: `${root}src/calc`,
-    }));
+      resolveDir: `${root}src/${dir}`,
+    });
+    if (where !== 'inline') b.onResolve({ filter: /^\.\/grammars\.cjs$/ }, () => ({ path: './grammars.cjs', external: true }));
+    b.onLoad({ filter: /formula-parser[\\/]grammar-loader\.ts$/ }, () => loader('fullGrammar', 'formula-parser', 'formula'));
+    b.onLoad({ filter: /calc[\\/]grammar-loader\.ts$/ }, () => loader('calcFullGrammar', 'calc', 'calc'));
   },
-};
+});
 
 const library = {
   entryPoints: [`${root}src/index.ts`],
@@ -68,7 +72,7 @@ const library = {
   external: ['decimal.js'],
   minifyWhitespace: true,
   minifySyntax: true,
-  plugins: [lazyNuclideTable('embedded'), lazyLibraryGrammar],
+  plugins: [lazyNuclideTable('embedded'), lazyGrammar('inline')],
   logLevel: 'warning',
 };
 await build({ ...library, format: 'esm', outfile: `${root}dist/lib/index.js` });
@@ -114,61 +118,32 @@ const plainSupportsColor = {
   },
 };
 
-// The formula and calculator grammars (Chevrotain's tokens and parser classes) are built at
-// start-up by any module that imports them, though the fast readers take most inputs: in the
-// command-line bundles each full parser loads its grammar on first use, from a file of its own
-// (dist/cli/grammars.cjs, built from src/cli/grammar-chunk.ts), so the parser library, about 40 %
-// of a bundle, is neither read nor compiled by a command whose inputs the fast readers take.
-const lazyGrammar = {
-  name: 'lazy-grammar',
-  setup(b) {
-    b.onResolve({ filter: /^\.\/grammars\.cjs$/ }, () => ({ path: './grammars.cjs', external: true }));
-    b.onLoad({ filter: /formula-parser[\\/]grammar-loader\.ts$/ }, () => ({
-      contents: "let full;\nexport function fullGrammar() { return (full ??= require('./grammars.cjs').formula); }\n",
-      loader: 'ts',
-    }));
-    b.onLoad({ filter: /calc[\\/]grammar-loader\.ts$/ }, () => ({
-      contents: "let full;\nexport function calcFullGrammar() { return (full ??= require('./grammars.cjs').calc); }\n",
-      loader: 'ts',
-    }));
-  },
-};
-
 // The command line, in parts: one bundle per command module (src/cli/bundles/<name>.ts →
 // dist/cli/<name>.cjs), each holding only what its commands use, and `help`, with every command
 // declared and none of their code (help, completion, manual). bin/pondus.cjs picks the bundle by
 // the command's name. They share nothing: a command loads its own code and no other's.
 const bundles = readdirSync(`${root}src/cli/bundles`).filter((f) => f.endsWith('.ts')).map((f) => f.slice(0, -3));
+const cliFile = {
+  bundle: true,
+  platform: 'node',
+  format: 'cjs',
+  target: 'node20',
+  minifyWhitespace: true,
+  minifySyntax: true,
+  minifyIdentifiers: !process.env.PONDUS_NO_MINIFY,
+  legalComments: 'none',
+  logLevel: 'warning',
+};
 const cli = await build({
+  ...cliFile,
   entryPoints: bundles.map((b) => `${root}src/cli/bundles/${b}.ts`),
   outdir: `${root}dist/cli`,
   outExtension: { '.js': '.cjs' },
-  bundle: true,
-  platform: 'node',
-  format: 'cjs',
-  target: 'node20',
-  minifyWhitespace: true,
-  minifySyntax: true,
-  minifyIdentifiers: !process.env.PONDUS_NO_MINIFY,
-  legalComments: 'none',
   metafile: true,
-  plugins: [lazyChildProcess, plainSupportsColor, lazyNuclideTable('../data'), lazyGrammar],
-  logLevel: 'warning',
+  plugins: [lazyChildProcess, plainSupportsColor, lazyNuclideTable('../data'), lazyGrammar('own file')],
 });
 // the grammars' own file, which the bundles above require on first use
-await build({
-  entryPoints: [`${root}src/cli/grammar-chunk.ts`],
-  outfile: `${root}dist/cli/grammars.cjs`,
-  bundle: true,
-  platform: 'node',
-  format: 'cjs',
-  target: 'node20',
-  minifyWhitespace: true,
-  minifySyntax: true,
-  minifyIdentifiers: !process.env.PONDUS_NO_MINIFY,
-  legalComments: 'none',
-  logLevel: 'warning',
-});
+await build({ ...cliFile, entryPoints: [`${root}src/cli/grammar-chunk.ts`], outfile: `${root}dist/cli/grammars.cjs` });
 if (process.env.PONDUS_METAFILE) writeFileSync(process.env.PONDUS_METAFILE, JSON.stringify(cli.metafile));
 for (const f of readdirSync(`${root}dist/cli`)) if (f.endsWith('.cjs')) asciiOnly(`${root}dist/cli/${f}`);
 // the help bundle must stay free of the chemistry: it is what `pondus --help` loads
