@@ -3,6 +3,7 @@ import { calc, calcJson, safeCalc } from '../../src/calc/calc.js';
 import { MASS, measure, measureAs, PURE, readQuantity } from '../../src/calc/measure.js';
 import type { Note } from '../../src/errors/issue.js';
 import { displayQuantity } from '../../src/sigfig/display-quantity.js';
+import { firstIssue } from '../support/error-code.js';
 
 // Rules: OpenStax Chemistry 2e §1.5 (significant figures in calculations; exact numbers,
 // including defined quantities, never limit), from memory. Rounding: ASTM E29 (half to even),
@@ -186,12 +187,7 @@ describe('calc: units written the SI way', () => {
 
 describe('readers of amounts: a comma in a number', () => {
   it('is refused with both readings, thousands separator and decimal comma', () => {
-    let hint = '';
-    try {
-      measure('1,000 mL', 'the volume');
-    } catch (e) {
-      hint = (e as { issues: { hint?: string }[] }).issues[0].hint ?? '';
-    }
+    const hint = firstIssue(() => measure('1,000 mL', 'the volume')).hint ?? '';
     expect(hint).toContain('write 1000 mL');
     expect(hint).toContain('write 1.000 mL');
   });

@@ -2,6 +2,7 @@
 // refuses it the same way, as it refuses a target stronger than the stock.
 import { describe, expect, it } from 'vitest';
 import { Decimal, dilute, diluteByMass, dilutionSeries, planSteps, PondusError } from '../../src/index.js';
+import { firstIssue } from '../support/error-code.js';
 
 function refusal(run: () => unknown): { code: string; message: string } {
   try {
@@ -69,12 +70,7 @@ describe('a concentrated stock', () => {
   });
 
   it('a name after the amount is refused with a hint to give the amount alone', () => {
-    let hint = '';
-    try {
-      dilute('6 M HCl', '0.5 M', '100 mL');
-    } catch (e) {
-      hint = (e as PondusError).issues[0].hint ?? '';
-    }
+    const hint = firstIssue(() => dilute('6 M HCl', '0.5 M', '100 mL')).hint ?? '';
     expect(hint).toMatch(/'6 M'.*'HCl', is not read here/);
   });
 });

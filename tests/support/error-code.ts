@@ -15,3 +15,17 @@ export function errorCode(fn: () => unknown): string | null {
     return (e as PondusError).first.code;
   }
 }
+
+/**
+ * Runs `fn`, which must throw a PondusError, and returns that error's first issue (its code,
+ * message and hint): what a test of a refusal's wording reads.
+ */
+export function firstIssue(fn: () => unknown): { code: string; message: string; hint?: string } {
+  try {
+    fn();
+  } catch (e) {
+    expect(e).toBeInstanceOf(PondusError);
+    return (e as PondusError).first;
+  }
+  throw new Error('expected a PondusError, and nothing was thrown');
+}
