@@ -35,14 +35,11 @@ export function measure(text: string, what = 'the quantity', notes?: Note[]): Qu
     } catch (e) {
       if (e instanceof PondusError) {
         const named = nameAfterAmount(text);
-        const grouped = /[0-9],[0-9]{3}(?![0-9])/.test(text);
         throw new PondusError(
           e.issues.map((i) =>
             named && i.code === 'UNKNOWN_UNIT'
               ? { ...i, message: `${what}: ${i.message}`, hint: `${what} is a number and its unit ('${named.amount}'); the name after it, '${named.name}', is not read here: give the amount alone`, length: named.name.length }
-              : grouped && i.code === 'UNEXPECTED_CHARACTER'
-                ? { ...i, message: `${what}: ${i.message}`, hint: `a comma is read neither way: for a thousands separator write ${text.trim().replace(/([0-9]),(?=[0-9]{3}(?![0-9]))/g, '$1')}; for a decimal comma write ${text.trim().replace(/([0-9]),(?=[0-9]{3}(?![0-9]))/g, '$1.')}` }
-                : { ...i, message: `${what}: ${i.message}` },
+              : { ...i, message: `${what}: ${i.message}` },
           ),
           text,
         );

@@ -39,6 +39,14 @@ export function parseExpression(input: string): CalcTree {
   return parseWithGrammar(input);
 }
 
+/** A number written with a comma between digit groups ('1,000 mL', '1:10,000'): both readings, as a hint; undefined otherwise. */
+function commaHint(input: string): string | undefined {
+  const grouped = /([0-9]),(?=[0-9]{3}(?![0-9]))/g;
+  if (!grouped.test(input)) return undefined;
+  const text = input.trim();
+  return `a comma is read neither way: for a thousands separator write ${text.replace(grouped, '$1')}; for a decimal comma write ${text.replace(grouped, '$1.')}`;
+}
+
 /**
  * Parses a calculation with the Chevrotain grammar alone, after the prescan: what parseExpression
  * does for everything the fast reader (fast-path.ts) declines.
@@ -61,7 +69,8 @@ export function parseWithGrammar(input: string): CalcTree {
       throw new PondusError([typedIssue({ code: 'UNKNOWN_UNIT', unit: word[0], inExpression: true, column: columnOf(input, o), length: word[0].length, hint: 'write a molar mass as M(formula); units: g, mg, µg, kg, mol, mmol, µmol, L, mL, µL, M, mM, mol/L, g/L, mg/mL, g/100 mL, mg/dL, g/mol, %, % w/v, ppm; a ratio as 1:1000' })], input);
     }
     const ch = String.fromCodePoint(input.codePointAt(o)!);
-    throw new PondusError([{ code: 'UNEXPECTED_CHARACTER', message: `unexpected character '${ch}' at column ${columnOf(input, o)}`, column: columnOf(input, o), length: 1 }], input);
+    const hint = ch === ',' ? commaHint(input) : undefined;
+    throw new PondusError([{ code: 'UNEXPECTED_CHARACTER', message: `unexpected character '${ch}' at column ${columnOf(input, o)}`, column: columnOf(input, o), length: 1, ...(hint ? { hint } : {}) }], input);
   }
   let operations = 0;
   for (const t of lexed.tokens) {
