@@ -53,7 +53,7 @@ export function reportOnBasis(value: Quantity, from: SampleBasis, basis: SampleB
   }
   let spec: SpecificationCheck | null = null;
   if (options.limits !== undefined) {
-    spec = checkSpecification(v, options.limits, options.rounding ?? 'half-up', `the ${basis}`);
+    spec = checkSpecification(v, options.limits, options.rounding, `the ${basis}`); // its own default when none is given: half-up, as USP rounds
     notes.push(...spec.notes);
   }
   return { basis, conversion, value: v, spec, notes };
