@@ -40,6 +40,21 @@ export interface ParseOptions {
 let hintDepth = 0;
 
 /**
+ * Runs `find` (which may re-read other spellings of the formula to word a hint) unless a hint is
+ * being looked for already: a re-read needs only its success, so the search is one level deep
+ * whatever the input.
+ */
+function lookForHints(find: () => void): void {
+  if (hintDepth > 0) return;
+  hintDepth++;
+  try {
+    find();
+  } finally {
+    hintDepth--;
+  }
+}
+
+/**
  * Parses a chemical formula into a typed tree. Throws a {@link PondusError} on bad input.
  *
  * @param input - the formula text ('CuSO4·5H2O', '[Fe(CN)6]^4-', 'Ph3P').
@@ -87,37 +102,25 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
   if (grammar.errors.length > 0) {
     // the grammar stops at its first error; the words that are no element symbol are found in the tokens
     const issues = byColumn([syntaxIssue(text, grammar.errors[0], lexed.tokens), ...unknownWords(text, lexed.tokens)]);
-    if (hintDepth === 0) {
-      hintDepth++;
-      try {
-        const prefix = alkylPrefixHint(text, (s) => safeParseFormula(s, options).success);
-        if (prefix) issues[0] = { ...issues[0], hint: prefix };
-      } finally {
-        hintDepth--;
-      }
-    }
+    lookForHints(() => {
+      const prefix = alkylPrefixHint(text, (s) => safeParseFormula(s, options).success);
+      if (prefix) issues[0] = { ...issues[0], hint: prefix };
+    });
     throw new PondusError(issues, input);
   }
 
   const built = buildTree(cst, text, expandAbbreviation);
   if (built.issues.length > 0) {
     // the first few unknown symbols get a hint that looks at the whole formula; the rest keep the visitor's short one
-    // (a re-read tried for a hint needs only its success: it gets no hints of its own, so the
-    // search is one level deep whatever the input)
-    if (hintDepth === 0) {
-      hintDepth++;
-      try {
-        for (const unknown of built.issues.filter((i) => i.code === 'UNKNOWN_ELEMENT').slice(0, 3)) {
-          const hint = unknownElementHint(text, unknown, mode, (s) => safeParseFormula(s, { ...options, abbreviations: mode === 'elements' ? 'none' : false }).success);
-          if (hint) unknown.hint = hint;
-          else delete unknown.hint;
-          // the hint names the option neutrally; each reader is shown its own name for it
-          if (hint?.includes('`abbreviations')) unknown.options = ['abbreviations'];
-        }
-      } finally {
-        hintDepth--;
+    lookForHints(() => {
+      for (const unknown of built.issues.filter((i) => i.code === 'UNKNOWN_ELEMENT').slice(0, 3)) {
+        const hint = unknownElementHint(text, unknown, mode, (s) => safeParseFormula(s, { ...options, abbreviations: mode === 'elements' ? 'none' : false }).success);
+        if (hint) unknown.hint = hint;
+        else delete unknown.hint;
+        // the hint names the option neutrally; each reader is shown its own name for it
+        if (hint?.includes('`abbreviations')) unknown.options = ['abbreviations'];
       }
-    }
+    });
     throw new PondusError(built.issues, input);
   }
   const notes: Note[] = built.notes;

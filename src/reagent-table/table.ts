@@ -192,7 +192,7 @@ function weighOrTake(got: MaterialAmount, given: Quantity, inputs: InputFigures[
   const kind = planned ? 'instruction' : 'result';
   const mass = got.mass ? tableAmount(got.mass, kind, inputs, massUnitFor(got.mass), rounding) : null;
   const volume = got.volume && isLiquid(mat) ? tableAmount(got.volume, kind, inputs, volumeUnit(got.volume), rounding) : null;
-  const taken = volume && got.volume ? got.volume : got.mass;
+  const taken = volume ? got.volume : got.mass;
   if (planned && taken) {
     const few = fewFiguresNote(instruction(taken, inputs), `the amount of ${what}`, null);
     if (few) notes.push(few);
