@@ -237,6 +237,7 @@ class Scanner {
     const symbol = plainSymbol(this.text, start, end);
     if (symbol === undefined) throw GIVE_UP; // unknown symbols and long words go to the full parser
     if (end - start === 2 && isCaseTrap(symbol)) this.trap = true;
+    else if (symbol === 'I' && start > 0 && this.text.charCodeAt(start - 1) === 67) this.trap = true; // 'CI', maybe Cl mistyped
     this.pos = end;
     const count = this.count(true);
     if (++this.run >= 3) this.longRun = true;

@@ -4,7 +4,7 @@
  */
 import { getElement, isElementSymbol } from '../elements/element-table.js';
 import type { Issue, Note } from '../errors/issue.js';
-import type { AtomNode, ComponentNode } from './tree.js';
+import type { AtomNode, ComponentNode, PartNode } from './tree.js';
 import { ABBREVIATIONS } from './abbreviations.js';
 import { namedSubstance } from './names.js';
 
@@ -163,6 +163,11 @@ export function isCaseTrap(symbol: string): boolean {
  * caseTrapNotes(parseFormula('Co2').components)[0].message // "'Co' is read as cobalt; …"
  */
 export function caseTrapNotes(components: ComponentNode[]): Note[] {
+  return [...twoLetterTrapNotes(components), ...chlorineSlipNotes(components)];
+}
+
+/** The note for a two-letter symbol that may be two light atoms (Co for CO). */
+function twoLetterTrapNotes(components: ComponentNode[]): Note[] {
   const atoms: AtomNode[] = [];
   let brackets = false;
   for (const c of components) {
@@ -185,6 +190,24 @@ export function caseTrapNotes(components: ComponentNode[]): Note[] {
     notes.push({ code: 'CASE_CHECK', message: `'${t.symbol}' is read as ${getElement(t.symbol)!.name}; if you meant the two atoms, write '${CASE_TRAPS[t.symbol]}'` });
   }
   return notes;
+}
+
+/**
+ * The note for carbon written straight before iodine with no count between ('NaCI'): a capital I
+ * typed for the lower-case L of Cl is a common slip, and both read (common practice).
+ */
+function chlorineSlipNotes(components: ComponentNode[]): Note[] {
+  let found = false;
+  const visit = (parts: PartNode[]) => {
+    for (let i = 1; i < parts.length && !found; i++) {
+      const a = parts[i - 1];
+      const b = parts[i];
+      if (a.kind === 'atom' && b.kind === 'atom' && a.symbol === 'C' && a.massNumber === null && a.count === null && b.symbol === 'I' && b.massNumber === null && a.span.end === b.span.start) found = true;
+    }
+    for (const p of parts) if (!found && p.kind === 'group' && !p.abbreviation) for (const c of p.body) visit(c.parts);
+  };
+  for (const c of components) visit(c.parts);
+  return found ? [{ code: 'CASE_CHECK', message: "'CI' is read as carbon and iodine; chlorine is written Cl, with a lower-case L" }] : [];
 }
 
 /**

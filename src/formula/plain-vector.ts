@@ -171,6 +171,7 @@ export function plainVector(input: string): PlainVector | null {
         end++;
       }
       if (end - pos > 2) return null;
+      if (c === 73 && end - pos === 1 && pos > 0 && t.charCodeAt(pos - 1) === 67) return null; // 'CI' gets a note (Cl mistyped?) on the tree path
       const id = symbolId(t, pos, end);
       if (id < 0) return null;
       if (lastTrap && depth === 0) trapAtTop = true;

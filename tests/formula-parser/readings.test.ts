@@ -6,6 +6,7 @@ import { FLAG_NAMING } from '../../src/errors/render.js';
 import { ABBREVIATIONS, ABBREVIATION_CLASHES, SAFE_ABBREVIATIONS, readsAsElements } from '../../src/formula-parser/abbreviations.js';
 import { formulaReadings } from '../../src/formula-parser/hints.js';
 import { parseFormula, safeParseFormula, type ParseOptions } from '../../src/formula-parser/parse.js';
+import { formulaMass } from '../../src/mass/formula-mass.js';
 import { isElementSymbol } from '../../src/elements/element-table.js';
 import { flattenFormula } from '../../src/formula/flatten.js';
 import { hillFormula } from '../../src/formula/hill.js';
@@ -369,5 +370,16 @@ describe('names of mixtures and polymers that read as element symbols', () => {
     // the elements themselves, written in another order, still read
     expect(safeParseFormula('BPS').success).toBe(true);
     expect(safeParseFormula('PBS', { abbreviations: 'none' }).success).toBe(true);
+  });
+});
+
+describe('carbon written straight before iodine', () => {
+  it('gets a note that chlorine is Cl: NaCI is a common slip for NaCl', () => {
+    // a capital I typed for the lower-case L of Cl: common practice (the two look alike in many fonts)
+    for (const f of ['NaCI', 'CuCI2', '[Co(NH3)4CI2]', 'CI4']) {
+      expect(parseFormula(f).notes.map((n) => n.code), f).toContain('CASE_CHECK');
+      expect(formulaMass(f).notes.map((n) => n.message).join(' '), f).toContain('chlorine is written Cl');
+    }
+    for (const f of ['NaCl', 'CHI3', 'CH2ClI', 'C2I2']) expect(formulaMass(f).notes.map((n) => n.code), f).not.toContain('CASE_CHECK');
   });
 });
