@@ -30,8 +30,8 @@ describe('pondus analysis', () => {
     expect(r.stderr).toContain("line 4: error UNKNOWN_ELEMENT: unknown element symbol 'Xx'");
     const csv = pondus(['analysis', '--csv', '--sheet', '-'], 'id,formula,C,H\nA-1,C9H8O4,60.21,4.42\n');
     const [head, row] = csv.stdout.split('\n');
-    expect(head.startsWith('input,id,formula,reportFormula,C_calculated,C_found,C_deviation,H_calculated,H_found,H_deviation,N_calculated')).toBe(true);
-    expect(row.startsWith('C9H8O4,A-1,C9H8O4,C9H8O4,60.00,60.21,0.21,4.48,4.42,-0.06,,,,')).toBe(true);
+    expect(head.startsWith('input,line,id,formula,reportFormula,C_calculated,C_found,C_deviation,H_calculated,H_found,H_deviation,N_calculated')).toBe(true);
+    expect(row.startsWith('C9H8O4,2,A-1,C9H8O4,C9H8O4,60.00,60.21,0.21,4.48,4.42,-0.06,,,,')).toBe(true);
   });
 
   it('reads FORMULA and found values from each line of standard input', () => {

@@ -23,7 +23,7 @@ describe('pondus prepare --fraction: concentrated reagents', () => {
     expect(j).toMatchObject({ input: 'H2SO4', form: 'concentrated', densitySource: 'table', take: { kind: 'instruction', display: '27.76 mL' } });
     expect(noteCodes(j)).toEqual(expect.arrayContaining(['DENSITY_FROM_TABLE', 'ADD_ACID_TO_WATER']));
     const c = csvRows(pondus(['prepare', 'H2SO4', '--fraction', '96 %', '--concentration', '0.500 M', '--volume', '1.000 L', '--csv']).stdout);
-    expect(c[0]).toBe('input,formula,fraction,density_g_per_mL,molarity_M,molarity,take_L,take,notes,error,message');
+    expect(c[0]).toBe('input,line,formula,fraction,density_g_per_mL,molarity_M,molarity,take_L,take,notes,error,message');
     expect(c[1]).toContain('ADD_ACID_TO_WATER: ');
     expect(c[1]).toContain('CAUTION: concentrated acids');
   });

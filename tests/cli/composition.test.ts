@@ -27,13 +27,14 @@ describe('pondus composition', () => {
     const r = pondus(['composition', '--csv', '-'], 'H2O\nNaCl\nCuSO4.5H2O\n');
     expect(r.status).toBe(0);
     const [head, ...rows] = r.stdout.trim().split('\n');
-    expect(head).toBe('input,formula,molarMass,H_percent,Cl_percent,Cu_percent,Na_percent,O_percent,S_percent,notes,error,message');
+    expect(head).toBe('input,line,formula,molarMass,H_percent,Cl_percent,Cu_percent,Na_percent,O_percent,S_percent,notes,error,message');
     expect(rows).toHaveLength(3);
     const water = rows[0].split(',');
     // 2 × 1.008 / 18.015 and 15.999 / 18.015 (CIAAW 2021 conventional weights)
-    expect(Number(water[3]).toFixed(4)).toBe('11.1907');
-    expect(Number(water[7]).toFixed(4)).toBe('88.8093');
-    expect(water[4]).toBe('0');
+    expect(water[1]).toBe('1');
+    expect(Number(water[4]).toFixed(4)).toBe('11.1907');
+    expect(Number(water[8]).toFixed(4)).toBe('88.8093');
+    expect(water[5]).toBe('0');
     expect(rows[2]).toContain('DOT_AS_ADDITION');
   });
 
@@ -41,19 +42,19 @@ describe('pondus composition', () => {
     const lines = ['H2O', ...new Array(600).fill('H2O2'), 'NaCl'];
     const r = pondus(['composition', '--csv', '-'], lines.join('\n') + '\n');
     const rows = r.stdout.trim().split('\n');
-    expect(rows[0]).toBe('input,formula,molarMass,H_percent,O_percent,notes,error,message');
-    expect(rows[rows.length - 1]).toMatch(/^NaCl,ClNa,58\.43976928,0,0,"NO_COLUMN: no column for Cl \(60\.66/);
+    expect(rows[0]).toBe('input,line,formula,molarMass,H_percent,O_percent,notes,error,message');
+    expect(rows[rows.length - 1]).toMatch(/^NaCl,602,ClNa,58\.43976928,0,0,"NO_COLUMN: no column for Cl \(60\.66/);
     expect(rows[rows.length - 1]).toContain('--long');
   });
 
   it('writes CSV in long form with --long: one row per element', () => {
     const r = pondus(['composition', '--csv', '--long', 'H2O', 'NaCl']);
     expect(r.stdout.trim().split('\n')).toEqual([
-      'input,formula,molarMass,symbol,count,mass,massPercent,notes,error,message',
-      'H2O,H2O,18.015,H,2,2.016,11.19067443796836,,,',
-      'H2O,H2O,18.015,O,1,15.999,88.80932556203165,,,',
-      'NaCl,ClNa,58.43976928,Cl,1,35.45,60.66074598985823,,,',
-      'NaCl,ClNa,58.43976928,Na,1,22.98976928,39.33925401014177,,,',
+      'input,line,formula,molarMass,symbol,count,mass,massPercent,notes,error,message',
+      'H2O,1,H2O,18.015,H,2,2.016,11.19067443796836,,,',
+      'H2O,1,H2O,18.015,O,1,15.999,88.80932556203165,,,',
+      'NaCl,2,ClNa,58.43976928,Cl,1,35.45,60.66074598985823,,,',
+      'NaCl,2,ClNa,58.43976928,Na,1,22.98976928,39.33925401014177,,,',
     ]);
   });
 

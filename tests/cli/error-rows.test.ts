@@ -38,7 +38,7 @@ describe('JSON error rows', () => {
 describe('CSV error rows', () => {
   it('mass --csv XxQq: every code and message, joined', () => {
     const lines = pondus(['mass', '--csv', 'XxQq']).stdout.trim().split('\n');
-    expect(lines[1]).toBe("XxQq,,,,,,,UNKNOWN_ELEMENT | UNKNOWN_ELEMENT,unknown element symbol 'Xx' | unknown element symbol 'Qq'");
+    expect(lines[1]).toBe("XxQq,1,,,,,,,UNKNOWN_ELEMENT | UNKNOWN_ELEMENT,unknown element symbol 'Xx' | unknown element symbol 'Qq'");
   });
 
   it('titration --csv: a failed input fills the line column', () => {

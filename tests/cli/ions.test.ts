@@ -48,7 +48,7 @@ describe('pondus ion', () => {
     expect(out[1]).toMatchObject({ id: 'JK-2', errorPpm: 0.8, errorMDa: 0.2 });
     expect(out[2]).toMatchObject({ line: 4, error: { code: 'BAD_ION' } });
     const csv = pondus(['ion', '--sheet', sheet, '--csv']).stdout.split('\n');
-    expect(csv[0]).toBe('input,id,formula,ion,ionFormula,charge,mz,calculated,found,errorPpm,errorMDa,reportLine,notes,error,message');
+    expect(csv[0]).toBe('input,line,id,formula,ion,ionFormula,charge,mz,calculated,found,errorPpm,errorMDa,reportLine,notes,error,message');
     expect(csv[1]).toContain(',JK-1,C15H15NO2,[M+H]+,C15H16NO2^+,1,242.117555173229,242.1176,242.1172,-1.5,-0.4,');
   });
 
@@ -101,9 +101,9 @@ describe('pondus pattern', () => {
     expect(r.status).toBe(1);
     const rows = r.stdout.trim().split('\n');
     expect(rows).toHaveLength(4);
-    expect(rows[0].startsWith('input,formula,ion,speciesFormula,charge,kind,resolvingPower,coverage,monoisotopicMz,averageMz,mz1,relative1,')).toBe(true);
-    expect(rows[1]).toMatch(/^Cl2,Cl2,,Cl2,0,aggregated,,1,69\.937705388,/);
-    expect(rows[2]).toMatch(/^C6H6 \[M\+H\]\+,C6H6,\[M\+H\]\+,C6H7\^\+,1,/);
+    expect(rows[0].startsWith('input,line,formula,ion,speciesFormula,charge,kind,resolvingPower,coverage,monoisotopicMz,averageMz,mz1,relative1,')).toBe(true);
+    expect(rows[1]).toMatch(/^Cl2,1,Cl2,,Cl2,0,aggregated,,1,69\.937705388,/);
+    expect(rows[2]).toMatch(/^C6H6 \[M\+H\]\+,2,C6H6,\[M\+H\]\+,C6H7\^\+,1,/);
     expect(rows[3]).toContain('UNKNOWN_ELEMENT');
   });
 

@@ -146,7 +146,7 @@ describe('CSV and TSV carry the notes', () => {
   it('a notes column with CODE: message, joined by " | "', () => {
     const r = pondus(['empirical', '--csv', 'MgO=57.30 SiO2=42.70 O=rest']);
     const [head, row] = r.stdout.split('\n');
-    expect(head).toBe('input,id,empirical,molecular,multiple,empiricalMass,largestResidual,alternative_1,alternative_2,alternative_3,notes,error,message');
+    expect(head).toBe('input,line,id,empirical,molecular,multiple,empiricalMass,largestResidual,alternative_1,alternative_2,alternative_3,notes,error,message');
     expect(row).toContain('BY_DIFFERENCE: O by difference: 0 %');
     expect(row).toContain(' | COMPOUND_CONVERTED: ');
     expect(row).toContain(' | DIFFERENCE_ADDED: ');

@@ -54,10 +54,10 @@ describe('pondus reagents', () => {
     expect(first.status).toBe(0);
     const second = pondus(['reagents', '--procedure', '-', '--csv'], first.stdout);
     expect(second.status).toBe(0);
-    const rows = (text: string) => (parse(text, { columns: true }) as Record<string, string>[]).map(({ input: _i, ...rest }) => rest);
+    const rows = (text: string) => (parse(text, { columns: true }) as Record<string, string>[]).map(({ input: _i, line: _l, ...rest }) => rest); // the line is where each row stands in its own file
     expect(rows(second.stdout)).toEqual(rows(first.stdout));
     const header = first.stdout.split('\n')[0];
-    expect(header).toBe('input,role,reagent,formula,amount,purity,density,solution,form,actual,equation,name,hill_formula,M_g_per_mol,equiv,n_mmol,mass,mass_unit,volume,volume_unit,percent_yield,notes,error,message');
+    expect(header).toBe('input,line,role,reagent,formula,amount,purity,density,solution,form,actual,equation,name,hill_formula,M_g_per_mol,equiv,n_mmol,mass,mass_unit,volume,volume_unit,percent_yield,notes,error,message');
     expect(rows(second.stdout).at(-1)).toMatchObject({ role: 'product', equation: 'C7H7BrO + C4H9Li -> C11H16O + LiBr', mass: '1.62', percent_yield: '74.5' });
   });
 

@@ -7,6 +7,7 @@ import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Writable } from 'node:stream';
+import { parse } from 'csv-parse/sync';
 import { describe, expect, it } from 'vitest';
 import { HELP_EXAMPLES } from '../../src/cli/help-examples.js';
 import { EXIT_STATUS } from '../../src/cli/completion.js';
@@ -97,6 +98,33 @@ describe('every command --help ends with real examples', () => {
   it('the shell-word reader splits as a shell does', () => {
     expect(shellWords("pondus dilute '1.00 M' --to '0.100 M'")).toEqual(['pondus', 'dilute', '1.00 M', '--to', '0.100 M']);
     expect(shellWords('pondus manual > pondus.1 && man ./pondus.1')).toEqual(['pondus', 'manual']);
+  });
+});
+
+describe('every CSV row starts with input and line', () => {
+  // the JSON rows carry input and line; a CSV row is traced to its input the same way, also
+  // where one input gives several rows (composition --long, a dilution plan's steps)
+  const FORMAT = /^--(json|csv|tsv|markdown|svg)$/;
+  for (const name of commandNames) {
+    // --explain is for the table and JSON (a usage error with --csv)
+    const examples = HELP_EXAMPLES[name].map(shellWords).filter((w) => !w.some((a) => FORMAT.test(a) || a === '--explain') && !['completion', 'manual'].includes(name));
+    if (examples.length === 0) continue;
+    it(`${name}: input, then line, on every row of each example`, () => {
+      for (const words of examples) {
+        const r = pondus([...words.slice(1), '--csv']);
+        const [header, ...rows] = parse(r.stdout) as string[][];
+        expect(header.slice(0, 2), words.join(' ')).toEqual(['input', 'line']);
+        expect(rows.length).toBeGreaterThan(0);
+        const lines = rows.map((row) => Number(row[1]));
+        for (const n of lines) expect(Number.isInteger(n) && n >= 1, words.join(' ')).toBe(true);
+        expect([...lines].sort((a, b) => a - b)).toEqual(lines);
+      }
+    });
+  }
+  it('a failed input fills its line, between good ones', () => {
+    const [header, ...rows] = parse(pondus(['mass', '--csv', '-'], 'H2O\nXq\nNaCl\n').stdout) as string[][];
+    expect(header.slice(0, 2)).toEqual(['input', 'line']);
+    expect(rows.map((r) => [r[0], r[1], r.at(-2)])).toEqual([['H2O', '1', ''], ['Xq', '2', 'UNKNOWN_ELEMENT'], ['NaCl', '3', '']]);
   });
 });
 

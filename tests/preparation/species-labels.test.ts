@@ -15,8 +15,8 @@ describe('species named as written, the Hill formula beside', () => {
     const [row] = jsonLines(pondus(['gravimetric', 'Cu', '--weighed', 'CuCl2', '--json']).stdout);
     expect(row).toMatchObject({ input: 'Cu', analyte: 'Cu', weighed: 'CuCl2', analyteHill: 'Cu', weighedHill: 'Cl2Cu' });
     const csv = pondus(['gravimetric', 'Cu', '--weighed', 'CuCl2', '--csv']).stdout.trim().split('\n');
-    expect(csv[0].split(',').slice(0, 2)).toEqual(['analyte', 'weighed']);
-    expect(csv[1].split(',').slice(0, 2)).toEqual(['Cu', 'CuCl2']);
+    expect(csv[0].split(',').slice(0, 4)).toEqual(['input', 'line', 'analyte', 'weighed']);
+    expect(csv[1].split(',').slice(0, 4)).toEqual(['Cu', '1', 'Cu', 'CuCl2']);
     expect(csv[0].split(',')).toContain('weighedHill');
   });
 

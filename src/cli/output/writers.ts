@@ -109,23 +109,38 @@ class JsonLinesWriter<R> implements ResultWriter<R> {
 }
 
 class DelimitedWriter<R> implements ResultWriter<R> {
+  /** The presenter's columns (for its `delimited.rows`), once decided. */
+  private columns: string[] | null = null;
+  /** The header written: the presenter's columns, with a `line` column second when they have none. */
   private header: string[] | null = null;
+  /** What the writer puts before the presenter's cells of each row: `line` second, `input` first. */
+  private adds: 'nothing' | 'line' | 'input and line' = 'nothing';
   /** With columns decided from the first block: that block's rows, held until it ends. */
   private held: { item: InputItem; result?: R; error?: PondusError }[] = [];
   /** A presenter may write its own notes column (with its codes and caution); otherwise the writer adds one. */
   private readonly ownNotes: boolean;
   constructor(private readonly p: Presenter<R>, private readonly ctx: WriterContext, private readonly sep: string) {
     this.ownNotes = p.columns.includes('notes');
-    if (!p.delimited) this.header = p.columns;
+    if (!p.delimited) this.decide(p.columns);
+  }
+  /**
+   * Every row starts with the input as given and the line it came from, as the JSON rows carry
+   * them: the writer adds the `input` and `line` columns the presenter does not have.
+   */
+  private decide(columns: string[]): void {
+    this.columns = columns;
+    const hasInput = columns[0] === 'input';
+    this.adds = columns.includes('line') ? 'nothing' : hasInput ? 'line' : 'input and line';
+    this.header = this.adds === 'nothing' ? columns : hasInput ? ['input', 'line', ...columns.slice(1)] : ['input', 'line', ...columns];
+  }
+  private framed(item: InputItem, cells: Cell[]): Cell[] {
+    if (this.adds === 'line') return [cells[0], item.line, ...cells.slice(1)];
+    return this.adds === 'nothing' ? cells : [item.text, item.line, ...cells];
   }
   private write(cells: Cell[], guard: boolean): void {
     let s = '';
     for (let i = 0; i < cells.length; i++) s += (i ? this.sep : '') + delimitedCell(guard ? guardCell(cells[i]) : cells[i], this.sep);
     this.ctx.out.write(s + '\n');
-  }
-  private start(header: string[]): void {
-    this.header = header;
-    this.write([...header, ...(this.ownNotes ? [] : ['notes']), 'error', 'message'], false);
   }
   ok(item: InputItem, result: R): void {
     if (!this.header) {
@@ -133,26 +148,26 @@ class DelimitedWriter<R> implements ResultWriter<R> {
       return;
     }
     if (this.held.length === 0 && !this.headerWritten) this.begin();
-    this.resultRow(result);
+    this.resultRow(item, result);
   }
   private headerWritten = false;
   private begin(): void {
     this.headerWritten = true;
-    this.start(this.header!);
+    this.write([...this.header!, ...(this.ownNotes ? [] : ['notes']), 'error', 'message'], false);
   }
-  private resultRow(result: R): void {
+  private resultRow(item: InputItem, result: R): void {
     const given = this.p.noteItems?.(result) ?? (this.p.notes?.(result) ?? []).map((n) => ({ ...n, code: '' }));
     const items = given.map(flagWords);
     let rows: Cell[][];
     if (this.p.delimited) {
-      const made = this.p.delimited.rows(result, this.header!);
+      const made = this.p.delimited.rows(result, this.columns!);
       rows = made.rows;
       items.push(...made.notes.map(flagWords));
     } else rows = [this.p.cells(result)];
     // a caution goes with every row: in a spreadsheet each row may be read alone
     if (this.p.caution) items.push({ code: 'CAUTION', message: this.p.caution });
     const notes = this.ownNotes ? [] : [notesCell(items)];
-    for (const r of rows) this.write([...r, ...notes, '', ''], true);
+    for (const r of rows) this.write([...this.framed(item, r), ...notes, '', ''], true);
   }
   fail(item: InputItem, error: PondusError): void {
     if (!this.header) {
@@ -160,17 +175,15 @@ class DelimitedWriter<R> implements ResultWriter<R> {
       return;
     }
     if (!this.headerWritten) this.begin();
-    // the input's identification in the columns of the same names (the text in the first column
-    // when none is called input), its line in a `line` column, and every issue, joined as notes are
+    // the input's identification in the columns of the same names, its line in the `line`
+    // column, and every issue, joined as notes are
     const cells = new Array<Cell>(this.header.length + (this.ownNotes ? 0 : 1)).fill('');
     const ids = identityOf(item);
-    if (!this.header.includes('input')) cells[0] = item.text;
     for (const [k, v] of ids) {
       const at = this.header.indexOf(k);
       if (at >= 0) cells[at] = v;
     }
-    const lineAt = this.header.indexOf('line');
-    if (lineAt >= 0) cells[lineAt] = item.line;
+    cells[this.header.indexOf('line')] = item.line;
     const codes = error.issues.map((i) => i.code).join(' | ');
     const messages = error.issues.map((i) => messageFor(i, FLAG_NAMING)).join(' | ') + (error.more ? ' | … and more' : '');
     this.write([...cells, codes, messages], true);
@@ -179,14 +192,14 @@ class DelimitedWriter<R> implements ResultWriter<R> {
     if (this.header && this.headerWritten) return;
     if (!this.header) {
       const results = this.held.flatMap((h) => (h.error ? [] : [h.result as R]));
-      this.header = this.p.delimited!.columns(results);
+      this.decide(this.p.delimited!.columns(results));
     }
     this.begin();
     const held = this.held;
     this.held = [];
     for (const h of held) {
       if (h.error) this.fail(h.item, h.error);
-      else this.resultRow(h.result as R);
+      else this.resultRow(h.item, h.result as R);
     }
   }
 }
