@@ -67,11 +67,12 @@ export interface ReplicateResult {
  * @param text - the list.
  * @param notes - where the note that one unit was applied to every value is added.
  * @returns the value texts, each with its unit.
- * @throws PondusError: BAD_NUMBER for a piece that is not a number; INPUT_TOO_LONG past {@link MAX_REPLICATES} values; BAD_MEASUREMENT when some values have a unit and some do not; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
+ * @throws PondusError: BAD_NUMBER for a piece that is not a number, or a comma between digits ('99,2': a decimal comma, a thousands separator or two values); INPUT_TOO_LONG past {@link MAX_REPLICATES} values; BAD_MEASUREMENT when some values have a unit and some do not; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * splitValues('99.2, 99.5 99.1 %', []) // ['99.2 %', '99.5 %', '99.1 %']
  */
 export function splitValues(text: string, notes: Note[]): string[] {
+  refuseCommaInNumber(text);
   const tokens = text.trim().split(/[\s,;]+/).filter((t) => t !== '');
   const values: { num: string; unit: string | null }[] = [];
   for (const t of tokens) {
@@ -81,7 +82,10 @@ export function splitValues(text: string, notes: Note[]): string[] {
     } else if (values.length && values[values.length - 1].unit === null) {
       values[values.length - 1].unit = t;
     } else {
-      throw fail({ code: 'BAD_NUMBER', message: `'${t}' is not a number${values.length ? ' (or a unit after one)' : ''}`, column: text.indexOf(t) + 1 }, text);
+      // a word after a value was taken as its unit: name it, as it may be the slip ('99.2 abc %')
+      const last = values[values.length - 1];
+      const after = last ? ` (or a unit after one; '${last.unit}' was taken as the unit of ${last.num})` : '';
+      throw fail({ code: 'BAD_NUMBER', message: `'${t}' is not a number${after}`, column: text.indexOf(t) + 1 }, text);
     }
   }
   if (values.length > MAX_REPLICATES) throw fail({ code: 'INPUT_TOO_LONG', message: `more than ${MAX_REPLICATES} values in one list` }, text);
@@ -96,6 +100,24 @@ export function splitValues(text: string, notes: Note[]): string[] {
     }
   }
   return values.map((v) => (v.unit === null ? v.num : `${v.num} ${v.unit}`));
+}
+
+/**
+ * A comma between two digits ('99,2', '1,234') is read neither way: it could be a decimal comma,
+ * a thousands separator, or two values with no space between; the refusal offers each reading.
+ */
+function refuseCommaInNumber(text: string): void {
+  for (const m of text.matchAll(/[0-9]+(?:\.[0-9]+)?(?:,[0-9]+(?:\.[0-9]+)?)+/g)) {
+    const piece = m[0];
+    const parts = piece.split(',');
+    // '99.2,99.5' is two values: a comma is read two ways only between two parts with no point
+    if (!parts.some((p, i) => i > 0 && !p.includes('.') && !parts[i - 1].includes('.'))) continue;
+    const readings: string[] = [];
+    if (parts.length === 2) readings.push(`for a decimal comma write ${parts.join('.')}`);
+    if (/^[0-9]{1,3}(?:,[0-9]{3})+$/.test(piece)) readings.push(`for a thousands separator write ${parts.join('')}`);
+    readings.push(`for separate values put a space after the comma (${parts.join(', ')})`);
+    throw fail({ code: 'BAD_NUMBER', message: `'${piece}' has a comma between digits, which pondus reads neither way`, column: m.index + 1, length: piece.length, hint: readings.join('; ') }, text);
+  }
 }
 
 /**

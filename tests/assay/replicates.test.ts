@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { replicates, splitValues } from '../../src/assay/replicates.js';
+import { firstIssue } from '../support/error-code.js';
 
 describe('replicate statistics', () => {
   it("reproduces Harvey's 95 % confidence interval for seven pennies: 3.117 ± 0.047 g", () => {
@@ -50,6 +51,21 @@ describe('replicate statistics', () => {
     expect(() => replicates('99.2 abc')).toThrow();
     expect(() => replicates('1.0 g 2.0 mL')).toThrow(/value 2/);
     expect(() => splitValues('% 99', [])).toThrow(/not a number/);
+  });
+
+  it("refuses a comma between digits with each reading: '99,2' is a decimal comma or two values, never six", () => {
+    // read as separators, '99,2 99,5 99,1 %' was six values with a mean of 50.8 %
+    const decimal = firstIssue(() => replicates('99,2 99,5 99,1 %'));
+    expect(decimal.code).toBe('BAD_NUMBER');
+    expect(decimal.hint).toBe('for a decimal comma write 99.2; for separate values put a space after the comma (99, 2)');
+    expect(firstIssue(() => replicates('1,234 1,240 1,236 mg')).hint).toContain('for a thousands separator write 1234');
+    // a comma after a space, or between values with points, separates them
+    expect(replicates('99.2, 99.5, 99.1 %').n).toBe(3);
+    expect(replicates('99.2,99.5,99.1 %').meanReported).toBe('99.27');
+  });
+
+  it('names the word taken as a unit when the next one is not a number', () => {
+    expect(firstIssue(() => replicates('99.2 abc %')).message).toBe("'%' is not a number (or a unit after one; 'abc' was taken as the unit of 99.2)");
   });
 
   it('property: the mean lies between the extremes and the interval contains it', () => {
