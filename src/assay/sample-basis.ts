@@ -12,7 +12,7 @@ import { PURE } from '../calc/measure.js';
 import { exact } from '../sigfig/measured.js';
 import { displayQuantity } from '../sigfig/display-quantity.js';
 import { add, divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
-import { readPositive } from './read-quantity.js';
+import { readPositive, readShare } from './read-quantity.js';
 
 export type SampleBasis = 'as-is' | 'dried' | 'anhydrous' | 'solvent-free' | 'anhydrous-solvent-free';
 
@@ -58,6 +58,15 @@ export function readBasis(text: string): SampleBasis {
   return basis as SampleBasis;
 }
 
+/** The contents each basis removes: what converting to or from it reads. */
+export const CONTENT_FOR: Readonly<Record<SampleBasis, readonly (keyof SampleContent)[]>> = {
+  'as-is': [],
+  dried: ['loss'],
+  anhydrous: ['water'],
+  'solvent-free': ['solvent'],
+  'anhydrous-solvent-free': ['water', 'solvent'],
+};
+
 const NAMES: Record<SampleBasis, string> = { 'as-is': 'as-is', dried: 'dried', anhydrous: 'anhydrous', 'solvent-free': 'solvent-free', 'anhydrous-solvent-free': 'anhydrous and solvent-free' };
 
 /**
@@ -75,9 +84,7 @@ export function removedFraction(basis: SampleBasis, content: SampleContent, note
   const need = (key: keyof SampleContent, label: string): Quantity => {
     const text = content[key];
     if (text === undefined) throw fail({ code: 'USAGE', message: `the ${NAMES[basis]} basis needs the ${label}: give \`${key}\` (e.g. \`${key}: '0.50 %'\`)`, options: [key] });
-    const q = readPositive(text, [PURE], `the ${label}`, notes, true);
-    if (q.value.gte(1)) throw fail({ code: 'BAD_AMOUNT', message: `the ${label} must be below 100 %: '${text}'` }, text);
-    return q;
+    return readShare(text, `the ${label}`, notes, { bare: 'refuse', allowZero: true, below: true });
   };
   switch (basis) {
     case 'as-is':
@@ -93,6 +100,27 @@ export function removedFraction(basis: SampleBasis, content: SampleContent, note
   }
 }
 
+/**
+ * Reads a result given as a share of the sample (an assay, an impurity): '99.1 %', '991 mg/g'. A
+ * number with no unit is refused: '0.991' may be 0.991 % or 99.1 %.
+ *
+ * @param text - the result as written.
+ * @param notes - where the notes of the reading go.
+ * @returns the result as a fraction of 1 (it may be above 1: an assay within its method's uncertainty).
+ * @throws PondusError: BAD_AMOUNT for a number with no unit, zero or a negative result; a measurement that cannot be read (BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE).
+ * @example
+ * readResultShare('99.1 %', []).value.toString() // '0.991'
+ */
+export function readResultShare(text: string, notes: Note[]): Quantity {
+  const q = readPositive(text, [PURE], 'the result', notes);
+  if (!q.unit) {
+    const t = text.trim();
+    const asFraction = q.value.lte(1) ? `; for a fraction ${t} of 1 write '${q.value.times(100).toFixed()} %'` : '';
+    throw fail({ code: 'BAD_AMOUNT', message: `the result ${t} has no unit`, hint: `for per cent write '${t} %'${asFraction}` }, text);
+  }
+  return q;
+}
+
 const pct = (q: Quantity) => displayQuantity(q, '%').text;
 
 /**
@@ -103,15 +131,21 @@ const pct = (q: Quantity) => displayQuantity(q, '%').text;
  * @param to - the basis wanted.
  * @param content - what the other basis removes: `loss` (on drying), `water` or `solvent`, as percentages.
  * @returns the value given, the factor and the converted value (a result), with a note of the conversion.
- * @throws PondusError: a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_AMOUNT for a content of 100 % or more; USAGE when from and to are the same or the content a basis needs is not given; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
+ * @throws PondusError: a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_AMOUNT for a content of 100 % or more; USAGE when from and to are the same, the content a basis needs is not given, or a content is given that neither basis removes; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const r = convertSampleBasis('99.1 %', 'as-is', 'dried', { loss: '0.50 %' })
  * displayQuantity(r.converted, '%').text // '99.6 %'
  */
 export function convertSampleBasis(valueText: string | Quantity, from: SampleBasis, to: SampleBasis, content: SampleContent): BasisConversion {
   const notes: Note[] = [];
-  const value = typeof valueText === 'string' ? readPositive(valueText, [PURE], 'the result', notes) : valueText;
+  const value = typeof valueText === 'string' ? readResultShare(valueText, notes) : valueText;
   if (from === to) throw fail({ code: 'USAGE', message: `the result is already on the ${NAMES[to]} basis: choose another \`to\``, options: ['to'] });
+  const used = new Set([...CONTENT_FOR[from], ...CONTENT_FOR[to]]);
+  const unused = (['loss', 'water', 'solvent'] as const).filter((k) => content[k] !== undefined && !used.has(k));
+  if (unused.length) {
+    const names = unused.map((k) => `\`${k}\``).join(' and ');
+    throw fail({ code: 'USAGE', message: `${names} would be ignored converting from the ${NAMES[from]} to the ${NAMES[to]} basis: leave ${unused.length === 1 ? 'it' : 'them'} out, or give the basis ${unused.length === 1 ? 'it belongs' : 'they belong'} to`, options: [...unused] });
+  }
   const rFrom = removedFraction(from, content, notes);
   const rTo = removedFraction(to, content, notes);
   const keepFrom = rFrom ? subtract(ONE, rFrom) : ONE;

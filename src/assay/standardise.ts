@@ -7,14 +7,14 @@
  */
 import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
-import { MASS, PURE, VOLUME } from '../calc/measure.js';
+import { MASS, VOLUME } from '../calc/measure.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { displayQuantity } from '../sigfig/display-quantity.js';
 import { divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
 import { unitOf } from '../sigfig/units.js';
 import { noteHydrateWater } from './hydrate-note.js';
-import { readPositive } from './read-quantity.js';
+import { readPositive, readShare } from './read-quantity.js';
 import { readMoleRatio, type MoleRatio } from './stoichiometric-ratio.js';
 
 export interface StandardiseOptions extends MassOptions {
@@ -66,8 +66,7 @@ export function standardise(standardText: string, o: StandardiseOptions): Standa
   const blank = o.blank === undefined ? null : readPositive(o.blank, [VOLUME], 'the blank titre', notes, true);
   let purity: Quantity | null = null;
   if (o.purity !== undefined) {
-    purity = readPositive(o.purity, [PURE], 'the purity of the standard', notes);
-    if (purity.value.gt(1)) throw fail({ code: 'BAD_AMOUNT', message: `the purity must be at most 100 %: '${o.purity}'` }, o.purity);
+    purity = readShare(o.purity, 'the purity of the standard', notes, { bare: 'fraction', note: 'PURITY_AS_FRACTION' });
     notes.push({ code: 'PURITY_APPLIED', message: `the standard's assay ${displayQuantity(purity, '%').text} applied to its mass` });
   } else {
     notes.push({ code: 'PURITY_ASSUMED', message: 'the standard is taken as 100 % pure; give `purity` with its certified assay', options: ['purity'] });

@@ -27,6 +27,8 @@ export interface BatchSummary {
   failedLines: number[];
   /** How many results the presenter's tally counted. */
   tallied: number;
+  /** Whether an input failed on the options (USAGE): the exit status is then 2, not 1. */
+  usage: boolean;
 }
 
 /**
@@ -39,7 +41,7 @@ export interface BatchSummary {
  */
 export async function runBatch<R>(p: Presenter<R>, batches: AsyncIterable<InputItem[]>, format: OutputFormat, io: BatchIo, numbered: boolean): Promise<BatchSummary> {
   const writer = createWriter(format, p, { ...io, numbered });
-  const summary: BatchSummary = { total: 0, failed: 0, failedLines: [], tallied: 0 };
+  const summary: BatchSummary = { total: 0, failed: 0, failedLines: [], tallied: 0, usage: false };
   for await (const batch of batches) {
     withNaming(FLAG_NAMING, () => {
       processItems(p, batch, writer, summary);
@@ -63,7 +65,9 @@ export function processItems<R>(p: Presenter<R>, items: InputItem[], writer: Res
   const failed = (item: InputItem, e: unknown) => {
     summary.failed++;
     if (summary.failedLines.length < 10) summary.failedLines.push(item.line);
-    writer.fail(item, asPondusError(e, item.text));
+    const error = asPondusError(e, item.text);
+    if (error.issues.some((i) => i.code === 'USAGE')) summary.usage = true;
+    writer.fail(item, error);
   };
   for (const item of items) {
     summary.total++;

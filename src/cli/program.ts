@@ -88,7 +88,8 @@ export async function runProgram(args: string[], io: CliIo, commands: CommandSet
       else err.write(`pondus: ${line}`);
     }
     if (summary.failed > 0) {
-      status = 1;
+      // an input refused for the options given (a conflict only its reading shows) is a usage error
+      status = summary.usage ? 2 : 1;
       if (format !== 'table' || summary.total > 1) {
         const lines = summary.failedLines.join(', ') + (summary.failed > summary.failedLines.length ? ', …' : '');
         err.write(`pondus: ${summary.failed} of ${summary.total} input${summary.total === 1 ? '' : 's'} failed (line${summary.failed === 1 ? '' : 's'} ${lines})\n`);

@@ -40,7 +40,7 @@ export interface PotencyResult {
  * @param text - the potency: '950. µg/mg', '101.2 %'.
  * @param options - the `basis` it is given on (with `water`, `loss` or `solvent`), and `need`, an amount of active to weigh for.
  * @returns the potency as is (a result) and, with `need`, the mass to weigh (an instruction at working precision).
- * @throws PondusError: a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_AMOUNT for a potency without a unit, above 100 % as is, or above 100 % once converted; the codes of the basis conversion (USAGE, BAD_AMOUNT); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
+ * @throws PondusError: a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_AMOUNT for a potency without a unit, above 100 % as is, or above 100 % once converted; USAGE for a water, loss or solvent content the basis does not use; the codes of the basis conversion (USAGE, BAD_AMOUNT); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * displayQuantity(potency('101.2 %', { basis: 'anhydrous', water: '4.8 %' }).asIs, '%').text // '96.3 %'
  * displayInstruction(potency('950. µg/mg', { need: '500. mg' }).weigh, 'mg').text // '526.3 mg'
@@ -53,6 +53,8 @@ export function potency(text: string, options: PotencyOptions = {}): PotencyResu
   if (options.basis === undefined) notes.push({ code: 'POTENCY_AS_IS', message: `the potency ${text.trim()} is read as is (of the material as weighed); give \`basis: anhydrous\` (with \`water\`) or \`basis: dried\` (with \`loss\`) if the certificate gives it on that basis`, options: ['basis', 'water', 'loss'] });
   let asIs = given;
   if (basis === 'as-is') {
+    const unused = (['loss', 'water', 'solvent'] as const).filter((k) => options[k] !== undefined);
+    if (unused.length) throw fail({ code: 'USAGE', message: `${unused.map((k) => `\`${k}\``).join(' and ')} would be ignored for a potency as is: leave ${unused.length === 1 ? 'it' : 'them'} out, or give the \`basis\` the potency is on`, options: [...unused, 'basis'] });
     if (given.value.gt(1)) throw fail({ code: 'BAD_AMOUNT', message: `a potency as is cannot exceed 100 % (1000 µg/mg): '${text.trim()}'; if the certificate gives it on the anhydrous or dried basis, say so (\`basis: anhydrous\` \`water: …\`)`, options: ['basis', 'water'] }, text);
   } else {
     const c = convertSampleBasis(given, basis, 'as-is', options);

@@ -8,8 +8,8 @@
 import { PondusError } from '../errors/pondus-error.js';
 import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
-import { MASS_CONCENTRATION, MOLARITY, PURE, VOLUME } from '../calc/measure.js';
-import { readPositive } from '../assay/read-quantity.js';
+import { MASS_CONCENTRATION, MOLARITY, VOLUME } from '../calc/measure.js';
+import { readPositive, readShare } from '../assay/read-quantity.js';
 import { Decimal } from '../exact/decimal.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { formulaNotes } from '../mass/formula-notes.js';
@@ -84,10 +84,8 @@ function readFraction(text: string, notes: Note[]): Quantity {
   if (kind && kind[1].toLowerCase() !== 'w/w') {
     throw fail({ code: 'BAD_AMOUNT', message: `the strength of a concentrated reagent is a mass fraction (% w/w, as on the label of 37 % HCl); '${t}' is % ${kind[1].toLowerCase()}` }, text);
   }
-  const q = readPositive(t, [PURE], 'the mass fraction', notes);
-  if (q.value.gt(1)) throw fail({ code: 'BAD_AMOUNT', message: `the mass fraction must be at most 100 %: '${t}'` }, text);
-  if (!q.unit) notes.push({ code: 'FRACTION_AS_DECIMAL', message: `the mass fraction ${t} has no unit: read as a fraction of 1 (${q.value.times(100).toFixed()} % w/w)` });
-  else if (!kind && /%$/.test(t)) notes.push({ code: 'PERCENT_AS_W_W', message: `the strength ${t} of the concentrated reagent is read as % w/w (grams of solute per 100 g of reagent), as on the labels of concentrated acids and bases` });
+  const q = readShare(t, 'the mass fraction', notes, { bare: 'fraction', note: 'FRACTION_AS_DECIMAL' });
+  if (q.unit && !kind && /%$/.test(t)) notes.push({ code: 'PERCENT_AS_W_W', message: `the strength ${t} of the concentrated reagent is read as % w/w (grams of solute per 100 g of reagent), as on the labels of concentrated acids and bases` });
   return q;
 }
 

@@ -4,10 +4,22 @@ import { convertSampleBasis, readBasis } from '../../src/assay/sample-basis.js';
 import { checkSpecification, readLimits } from '../../src/assay/specification.js';
 import { measure } from '../../src/calc/measure.js';
 import { displayQuantity } from '../../src/sigfig/display-quantity.js';
+import { firstIssue } from '../support/error-code.js';
 
 const pct = (q: Parameters<typeof displayQuantity>[0], r: 'half-even' | 'half-up' = 'half-even') => displayQuantity(q, '%', r).text;
 
 describe('results on another basis of the sample', () => {
+  it("refuses a result or a content with no unit, with the per cent it may mean", () => {
+    // '0.05' read as a fraction was 5 % water, and '99.1' read as a fraction was 9910 %
+    expect(firstIssue(() => convertSampleBasis('95.00 %', 'as-is', 'anhydrous', { water: '0.05' })).hint).toBe("for 0.05 per cent write '0.05 %'; for a fraction 0.05 of 1 write '5 %'");
+    expect(firstIssue(() => convertSampleBasis('99.1', 'as-is', 'dried', { loss: '0.50 %' })).hint).toBe("for per cent write '99.1 %'");
+    expect(firstIssue(() => convertSampleBasis('0.991', 'as-is', 'dried', { loss: '0.50 %' })).hint).toBe("for per cent write '0.991 %'; for a fraction 0.991 of 1 write '99.1 %'");
+  });
+
+  it('refuses a content that neither basis removes: it would be dropped', () => {
+    expect(firstIssue(() => convertSampleBasis('98.5 %', 'as-is', 'dried', { loss: '0.8 %', water: '2.0 %' })).code).toBe('USAGE');
+  });
+
   it('as is → dried: divides by (100 % − loss on drying)', () => {
     // source: definition of "calculated on the dried basis" (USP General Notices 5.60.10 / Ph. Eur. 1.2), from memory;
     // 98.5 % as is with 0.8 % loss on drying is 98.5 / 0.992 = 99.29… %

@@ -51,6 +51,13 @@ describe('exit statuses: 0 all good, 1 some input failed, 2 usage', () => {
       expect(r.stderr).not.toMatch(/\n\s+at /); // no stack trace
     });
   }
+  it('options that conflict only once an input is read: 2, each input still answered in its place', () => {
+    // --by volume with a total that is a mass: found when the strengths are read
+    const r = pondus(['alligation', '--json', '70 %', '60 %', '--higher', '95 %', '--lower', '0 %', '--by', 'volume', '--total', '300 g']);
+    expect(r.status, r.stderr).toBe(2);
+    const rows = r.stdout.trim().split('\n').map((l) => JSON.parse(l));
+    expect(rows.map((o) => [o.line, o.error.code])).toEqual([[1, 'USAGE'], [2, 'USAGE']]);
+  });
   it('an input that fails: 1, and the other inputs still answer', () => {
     const r = pondus(['mass', '--json', 'H2O', 'Xx', 'NaCl']);
     expect(r.status).toBe(1);

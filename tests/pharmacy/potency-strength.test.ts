@@ -26,6 +26,21 @@ describe('potency as is, and the mass of powder for an amount of active', () => 
     expect(() => potency('101.2 %')).toThrow(/cannot exceed 100/);
     expect(() => potency('0.95')).toThrow(/unit/);
   });
+
+  it('refuses a water, loss or solvent content its basis does not use: it would be dropped', () => {
+    // a dropped 4.8 % water made the mass to weigh 0.2632 g where the content was meant to count
+    expect(() => potency('95.0 %', { basis: 'as-is', water: '4.8 %', need: '250.0 mg' })).toThrow("`water` would be ignored for a potency as is");
+    expect(() => potency('95.0 %', { basis: 'dried', loss: '0.5 %', water: '4.8 %' })).toThrow('`water` would be ignored converting from the dried to the as-is basis');
+    expect(() => potency('101.2 %', { basis: 'anhydrous', water: '4.8 %', loss: '0.5 %' })).toThrow('`loss` would be ignored');
+  });
+
+  it("refuses a water content with no unit: '0.05' may be 0.05 % (Karl Fischer) or 5 %", () => {
+    // read as a fraction, 0.05 made the weighing 0.1108 g where 0.05 % gives 0.1053 g
+    expect(() => potency('95.00 %', { basis: 'anhydrous', water: '0.05', need: '100.0 mg' })).toThrow('the water content 0.05 has no unit, and reads two ways');
+    const r = potency('95.00 %', { basis: 'anhydrous', water: '0.05 %', need: '100.0 mg' });
+    // worked by hand: 100.0 mg / (0.9500 × 0.9995) = 105.3 mg
+    expect(displayInstruction(r.weigh!, 'mg').text).toBe('105.3 mg');
+  });
 });
 
 describe('strengths in every form', () => {

@@ -68,7 +68,7 @@ describe('making up solutions: the mass to weigh is an instruction', () => {
     const r = prepareSolution('CuSO4·5H2O', { concentration: '0.100 M', volume: '250.0 mL', purity: '0.985' });
     expect(g(r.mass)).toBe('6.337 g');
     expect(codes(r.notes)).toContain('PURITY_AS_FRACTION');
-    expect(() => prepareSolution('NaCl', { concentration: '0.100 M', volume: '1.00 L', purity: '98.5' })).toThrow(/at most 100 %/);
+    expect(() => prepareSolution('NaCl', { concentration: '0.100 M', volume: '1.00 L', purity: '98.5' })).toThrow("the purity 98.5 has no unit: as a fraction of 1 it would be 9850 %");
   });
 
   it('refuses nonsense', () => {

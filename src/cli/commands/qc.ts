@@ -10,10 +10,8 @@ import type { Command } from 'commander';
 import type { Note } from '../../errors/issue.js';
 import { fail } from '../../errors/pondus-error.js';
 import { QC_CAUTION } from '../../assay/caution.js';
-import { readPositive } from '../../assay/read-quantity.js';
-import { PURE } from '../../calc/measure.js';
 import { replicates, type ReplicateResult } from '../../assay/replicates.js';
-import { readBasis, type SampleBasis, type SampleContent } from '../../assay/sample-basis.js';
+import { CONTENT_FOR, readBasis, readResultShare, type SampleBasis, type SampleContent } from '../../assay/sample-basis.js';
 import { readLimits, type SpecificationCheck } from '../../assay/specification.js';
 import { standardise, type StandardiseResult } from '../../assay/standardise.js';
 import { titrationAssay, type TitrationAssayResult } from '../../assay/titration-assay.js';
@@ -38,14 +36,6 @@ interface BasisCli {
   on?: string;
   rounding?: RoundingMode;
 }
-
-const CONTENT_FOR: Record<SampleBasis, (keyof SampleContent)[]> = {
-  'as-is': [],
-  dried: ['loss'],
-  anhydrous: ['water'],
-  'solvent-free': ['solvent'],
-  'anhydrous-solvent-free': ['water', 'solvent'],
-};
 
 const OPTION_OF: Record<keyof SampleContent, string> = { loss: '--loss', water: '--water', solvent: '--solvent' };
 
@@ -196,7 +186,7 @@ export function sampleBasisPresenter(o: SampleBasisCli): RowPresenter<BasisRow> 
     compute: numbered((input) => {
       const notes: Note[] = [];
       if (o.from === undefined) notes.push({ code: 'FROM_AS_IS', message: 'the result is taken as on the as-is basis; give --from otherwise' });
-      const value = readPositive(input, [PURE], 'the result', notes);
+      const value = readResultShare(input, notes);
       const rep = report(value, from, choice, o);
       return { rep, value, from, notes };
     }),
