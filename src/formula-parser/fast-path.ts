@@ -13,7 +13,8 @@
  */
 import { ELEMENTS } from '../elements/element-table.js';
 import type { Note } from '../errors/issue.js';
-import { caseTrapNotes, isCaseTrap } from './hints.js';
+import { caseTrapNotes, isCapitalSlipAt, isCaseTrap } from './hints.js';
+import { isMassNumberOf } from './leading-number.js';
 import { columnOf, MAX_FORMULA_LENGTH, MAX_NESTING } from './prescan.js';
 import { mayNeedSettling } from './readings.js';
 import type { AtomNode, ComponentNode, CountNode, FormulaTree, GroupNode, PartNode } from './tree.js';
@@ -148,6 +149,9 @@ export function mayStartCharge(t: string, pos: number): boolean {
   return c === 94 || c === 43 || c === 45 || c === SUPER_PLUS || c === SUPER_MINUS || SUPERSCRIPT_DIGIT.has(c);
 }
 
+/** '(', '[' or '{'. */
+const isOpening = (c: number) => c === 40 || c === 91 || c === 123;
+
 class Scanner {
   pos = 0;
   /** Set when three atoms stand next to each other with no count between them (a run such as THF or NBS). */
@@ -158,10 +162,10 @@ class Scanner {
   private readonly countNotes: Note[] = [];
   constructor(
     private readonly text: string,
-    start: number,
+    private readonly first: number,
     private readonly limit: number,
   ) {
-    this.pos = start;
+    this.pos = first;
   }
 
   body(depth: number, close: string): ComponentNode[] {
@@ -222,6 +226,9 @@ class Scanner {
       else break;
     }
     if (parts.length === 0) throw GIVE_UP;
+    // a number first in the formula or a bracket that is a mass number of the atom after it (13CO2, [13C6]): the tree refuses it
+    const atom = parts[0];
+    if (multiplier && atom.kind === 'atom' && atom.massNumber === null && (start === this.first || isOpening(this.text.charCodeAt(start - 1))) && isMassNumberOf(atom.symbol, Number(multiplier.text))) throw GIVE_UP;
     return { kind: 'component', multiplier, parts, span: { start: multiplier ? start : parts[0].span.start, end: parts[parts.length - 1].span.end } };
   }
 
@@ -237,7 +244,7 @@ class Scanner {
     const symbol = plainSymbol(this.text, start, end);
     if (symbol === undefined) throw GIVE_UP; // unknown symbols and long words go to the full parser
     if (end - start === 2 && isCaseTrap(symbol)) this.trap = true;
-    else if (symbol === 'I' && start > 0 && this.text.charCodeAt(start - 1) === 67) this.trap = true; // 'CI', maybe Cl mistyped
+    else if (end - start === 1 && isCapitalSlipAt(this.text, start)) this.trap = true; // 'CI', 'CU': maybe Cl, Cu
     this.pos = end;
     const count = this.count(true);
     if (++this.run >= 3) this.longRun = true;

@@ -143,6 +143,57 @@ const CASE_TRAPS: Readonly<Record<string, string>> = Object.freeze({
 
 const ORGANIC = new Set(['C', 'H', 'N', 'O', 'S', 'P', 'F', 'Cl', 'Br', 'I']);
 
+/** Case traps that are synthetic elements, never in a bench formula: noted wherever they stand (NaNo3). */
+const SYNTHETIC_TRAPS = new Set(['No', 'Nh', 'Hs', 'Cn']);
+
+/**
+ * Two capitals that read as two one-letter elements, where the same letters with the second in
+ * lower case are a common element: CUSO4 is C, U, S, O4, and copper is Cu (common practice). 'CI'
+ * is the capital I typed for the lower-case L of Cl.
+ */
+const CAPITAL_SLIPS: Readonly<Record<string, string>> = Object.freeze({
+  CI: 'Cl',
+  CU: 'Cu',
+  SI: 'Si',
+  PB: 'Pb',
+  YB: 'Yb',
+  NB: 'Nb',
+  IN: 'In',
+  PU: 'Pu',
+  BI: 'Bi',
+  NI: 'Ni',
+  SN: 'Sn',
+});
+
+const SLIP_PAIRS = new Uint8Array(26 * 26);
+for (const pair of Object.keys(CAPITAL_SLIPS)) SLIP_PAIRS[(pair.charCodeAt(0) - 65) * 26 + pair.charCodeAt(1) - 65] = 1;
+
+/**
+ * True when the capital at `i` and the capital before it are one of the pairs checked for a slip
+ * of case (CU for Cu, CI for Cl): what the fast readers test before leaving a formula to the tree.
+ *
+ * @example
+ * isCapitalSlipAt('CUSO4', 1) // true
+ * isCapitalSlipAt('CO2', 1) // false
+ */
+export function isCapitalSlipAt(text: string, i: number): boolean {
+  if (i < 1) return false;
+  const a = text.charCodeAt(i - 1) - 65;
+  const b = text.charCodeAt(i) - 65;
+  return a >= 0 && a < 26 && b >= 0 && b < 26 && SLIP_PAIRS[a * 26 + b] === 1;
+}
+
+/**
+ * True when a case trap is a synthetic element (No, Nh, Hs, Cn), noted wherever it stands.
+ *
+ * @example
+ * isSyntheticTrap('No') // true
+ * isSyntheticTrap('Co') // false
+ */
+export function isSyntheticTrap(symbol: string): boolean {
+  return SYNTHETIC_TRAPS.has(symbol);
+}
+
 /**
  * True when a symbol is one of the two-letter symbols checked for a slip of case.
  *
@@ -163,7 +214,7 @@ export function isCaseTrap(symbol: string): boolean {
  * caseTrapNotes(parseFormula('Co2').components)[0].message // "'Co' is read as cobalt; …"
  */
 export function caseTrapNotes(components: ComponentNode[]): Note[] {
-  return [...twoLetterTrapNotes(components), ...chlorineSlipNotes(components)];
+  return [...twoLetterTrapNotes(components), ...capitalSlipNotes(components)];
 }
 
 /** The note for a two-letter symbol that may be two light atoms (Co for CO). */
@@ -181,10 +232,12 @@ function twoLetterTrapNotes(components: ComponentNode[]): Note[] {
   const symbols = new Set(atoms.map((a) => a.symbol));
   const lone = symbols.size === 1 && components.length === 1 && atoms.length === 1 && atoms[0].count !== null && !brackets;
   const organic = !brackets && components.length === 1 && symbols.has('C') && [...symbols].every((s) => ORGANIC.has(s) || isCaseTrap(s));
-  if (!lone && !organic) return [];
+  // elsewhere: a synthetic element (NaNo3), or the same symbol twice in a row (CoCo3, surely CoCO3)
+  const doubled = (t: AtomNode) => atoms.some((a, i) => i + 1 < atoms.length && atoms[i + 1] === t && a.symbol === t.symbol && a.count === null && a.span.end === t.span.start);
+  const noted = lone || organic ? traps : traps.filter((t) => SYNTHETIC_TRAPS.has(t.symbol) || doubled(t));
   const seen = new Set<string>();
   const notes: Note[] = [];
-  for (const t of traps) {
+  for (const t of noted) {
     if (seen.has(t.symbol)) continue;
     seen.add(t.symbol);
     notes.push({ code: 'CASE_CHECK', message: `'${t.symbol}' is read as ${getElement(t.symbol)!.name}; if you meant the two atoms, write '${CASE_TRAPS[t.symbol]}'` });
@@ -193,21 +246,29 @@ function twoLetterTrapNotes(components: ComponentNode[]): Note[] {
 }
 
 /**
- * The note for carbon written straight before iodine with no count between ('NaCI'): a capital I
- * typed for the lower-case L of Cl is a common slip, and both read (common practice).
+ * The notes for two capitals read as two one-letter elements where the pair, second letter in
+ * lower case, is a common element ('CUSO4' as C, U, S, O4; 'NaCI' with a capital I for the L of
+ * Cl). Both readings are real formulas (CI4, NI3), so the formula is computed, with a note.
  */
-function chlorineSlipNotes(components: ComponentNode[]): Note[] {
-  let found = false;
+function capitalSlipNotes(components: ComponentNode[]): Note[] {
+  const found = new Set<string>();
   const visit = (parts: PartNode[]) => {
-    for (let i = 1; i < parts.length && !found; i++) {
+    for (let i = 1; i < parts.length; i++) {
       const a = parts[i - 1];
       const b = parts[i];
-      if (a.kind === 'atom' && b.kind === 'atom' && a.symbol === 'C' && a.massNumber === null && a.count === null && b.symbol === 'I' && b.massNumber === null && a.span.end === b.span.start) found = true;
+      if (a.kind !== 'atom' || b.kind !== 'atom' || a.massNumber !== null || b.massNumber !== null || a.count !== null || a.span.end !== b.span.start) continue;
+      const pair = a.symbol + b.symbol;
+      if (Object.hasOwn(CAPITAL_SLIPS, pair)) found.add(pair);
     }
-    for (const p of parts) if (!found && p.kind === 'group' && !p.abbreviation) for (const c of p.body) visit(c.parts);
+    for (const p of parts) if (p.kind === 'group' && !p.abbreviation) for (const c of p.body) visit(c.parts);
   };
   for (const c of components) visit(c.parts);
-  return found ? [{ code: 'CASE_CHECK', message: "'CI' is read as carbon and iodine; chlorine is written Cl, with a lower-case L" }] : [];
+  return [...found].map((pair) => {
+    const meant = CAPITAL_SLIPS[pair];
+    const read = `'${pair}' is read as ${getElement(pair[0])!.name} and ${getElement(pair[1])!.name}`;
+    if (pair === 'CI') return { code: 'CASE_CHECK', message: `${read}; chlorine is written Cl, with a lower-case L` };
+    return { code: 'CASE_CHECK', message: `${read}; ${getElement(meant)!.name} is written ${meant}` };
+  });
 }
 
 /**

@@ -14,6 +14,7 @@ import { alkylPrefixHint, unknownElementHint } from './hints.js';
 import { fullGrammar } from './grammar-loader.js';
 import { REAGENTS } from './names.js';
 import { columnOf, MAX_FORMULA_LENGTH, prescanAll } from './prescan.js';
+import { leadingNumberIssues } from './leading-number.js';
 import { mixtureRefusals, settleReadings } from './readings.js';
 import { end, type ComponentNode, type FormulaTree, type GroupNode, type PartNode, type Span } from './tree.js';
 import type { FormulaCstNode } from './cst.js';
@@ -123,6 +124,8 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
     });
     throw new PondusError(built.issues, input);
   }
+  const leading = leadingNumberIssues(built.components, text);
+  if (leading.length > 0) throw new PondusError(leading, input);
   const notes: Note[] = built.notes;
   if (mode === 'plain') {
     const settled = settleReadings(built.components, text);

@@ -11,7 +11,8 @@
  */
 import { atomId } from '../elements/atom-data.js';
 import { mayStartCharge, plainSymbol, readEndCharge } from '../formula-parser/fast-path.js';
-import { isCaseTrap } from '../formula-parser/hints.js';
+import { isCapitalSlipAt, isCaseTrap, isSyntheticTrap } from '../formula-parser/hints.js';
+import { isMassNumberOf } from '../formula-parser/leading-number.js';
 import { MAX_FORMULA_LENGTH, MAX_NESTING } from '../formula-parser/prescan.js';
 import { mayNeedSettling } from '../formula-parser/readings.js';
 import type { ParseOptions } from '../formula-parser/parse.js';
@@ -106,13 +107,18 @@ function readCount(t: string, pos: number, limit: number, afterPart: boolean): n
   return v;
 }
 
+/** The number written first in the formula or a bracket, at each depth (0 when none): it may be a mass number. */
+const leadingNumber = new Float64Array(MAX_NESTING + 2);
+
 /**
  * Starts a component at `pos` at this depth: reads its multiplier (1 when none is written) and
  * marks where its atoms begin. False when the multiplier needs the tree path. Sets countEnd.
  */
-function startComponent(t: string, pos: number, limit: number, depth: number, sp: number): boolean {
+function startComponent(t: string, pos: number, limit: number, depth: number, sp: number, first: boolean): boolean {
   const m = readCount(t, pos, limit, false);
   if (m === GIVE_UP) return false;
+  // a number first in the formula or a bracket may be a mass number (13CO2, [13C6]): checked at its atom
+  leadingNumber[depth] = first ? m : 0;
   componentStart[depth] = sp;
   componentMultiplier[depth] = m === 0 ? 1 : m;
   componentParts[depth] = 0;
@@ -157,9 +163,11 @@ export function plainVector(input: string): PlainVector | null {
   let charge = 0;
   // a case trap among the top level's atoms may get a note when the top level is one component with no brackets
   let trapAtTop = false;
+  /** Where the last atom read ends when it has no count (-1 when it has one). */
+  let lastAtomEnd = -1;
   let bracketAtTop = false;
   let componentsAtTop = 1;
-  if (!startComponent(t, pos, limit, 0, 0)) return null;
+  if (!startComponent(t, pos, limit, 0, 0, true)) return null;
   pos = countEnd;
   for (;;) {
     const c = pos < limit ? t.charCodeAt(pos) : -1;
@@ -171,12 +179,18 @@ export function plainVector(input: string): PlainVector | null {
         end++;
       }
       if (end - pos > 2) return null;
-      if (c === 73 && end - pos === 1 && pos > 0 && t.charCodeAt(pos - 1) === 67) return null; // 'CI' gets a note (Cl mistyped?) on the tree path
+      if (end - pos === 1 && isCapitalSlipAt(t, pos)) return null; // 'CI', 'CU' get a note (Cl, Cu?) on the tree path
       const id = symbolId(t, pos, end);
       if (id < 0) return null;
-      if (lastTrap && depth === 0) trapAtTop = true;
+      if (leadingNumber[depth] !== 0 && componentParts[depth] === 0 && (c !== 68 && c !== 84 || end - pos > 1) && isMassNumberOf(t.slice(pos, end), leadingNumber[depth])) return null;
+      if (lastTrap && depth === 0) {
+        trapAtTop = true;
+        // noted in any formula: a synthetic element (NaNo3), or the same symbol twice in a row (CoCo3)
+        if (isSyntheticTrap(t.slice(pos, end)) || (sp > 0 && entryId[sp - 1] === id && lastAtomEnd === pos)) return null;
+      }
       const k = readCount(t, end, limit, true);
       if (k === GIVE_UP) return null;
+      lastAtomEnd = k === 0 ? end : -1;
       pos = countEnd;
       if (++run >= 3) longRun = true;
       if (k !== 0) run = 0;
@@ -194,7 +208,7 @@ export function plainVector(input: string): PlainVector | null {
       depth++;
       groupStart[depth] = sp;
       closeOf[depth] = c === 40 ? 41 : c + 2;
-      if (!startComponent(t, pos + 1, limit, depth, sp)) return null;
+      if (!startComponent(t, pos + 1, limit, depth, sp, true)) return null;
       pos = countEnd;
       continue;
     }
@@ -203,7 +217,7 @@ export function plainVector(input: string): PlainVector | null {
     if (!scale(componentStart[depth], sp, componentMultiplier[depth])) return null;
     if (c === 0xb7 || c === 42) {
       if (depth === 0) componentsAtTop++;
-      if (!startComponent(t, pos + 1, limit, depth, sp)) return null;
+      if (!startComponent(t, pos + 1, limit, depth, sp, false)) return null;
       pos = countEnd;
       continue;
     }

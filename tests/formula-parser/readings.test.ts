@@ -383,3 +383,61 @@ describe('carbon written straight before iodine', () => {
     for (const f of ['NaCl', 'CHI3', 'CH2ClI', 'C2I2']) expect(formulaMass(f).notes.map((n) => n.code), f).not.toContain('CASE_CHECK');
   });
 });
+
+describe('two capitals where the pair is a common element', () => {
+  it('CUSO4, SIO2, PB: computed as written, with a note naming the element the pair would be', () => {
+    // an upper-case second letter reads as another element (C and U for Cu): common practice
+    const cases: [string, string, string][] = [
+      ['CUSO4', 'CO4SU', "'CU' is read as carbon and uranium; copper is written Cu"],
+      ['SIO2', 'IO2S', "'SI' is read as sulfur and iodine; silicon is written Si"],
+      ['PB', 'BP', "'PB' is read as phosphorus and boron; lead is written Pb"],
+      ['CUCl2', 'CCl2U', "'CU' is read as carbon and uranium; copper is written Cu"],
+      ['YBCl3', 'BCl3Y', "'YB' is read as yttrium and boron; ytterbium is written Yb"],
+    ];
+    for (const [f, hill, note] of cases) {
+      const m = formulaMass(f);
+      expect(m.formula, f).toBe(hill);
+      expect(m.notes.map((n) => n.message), f).toContain(note);
+    }
+    for (const f of ['CuSO4', 'SiO2', 'PbO', 'CO2', 'CS2', 'HF', 'CH3SCN', 'BCl3']) expect(formulaMass(f).notes.map((n) => n.code), f).not.toContain('CASE_CHECK');
+  });
+
+  it('a synthetic element beside other atoms, or a metal written twice in a row, gets the case note', () => {
+    // NaNo3 is NaNO3 mistyped (nobelium is never in a bench formula); CoCo3 is CoCO3 (from memory)
+    expect(formulaMass('NaNo3').notes.map((n) => n.message)).toContain("'No' is read as nobelium; if you meant the two atoms, write 'NO'");
+    expect(formulaMass('CoCo3').notes.map((n) => n.message)).toContain("'Co' is read as cobalt; if you meant the two atoms, write 'CO'");
+    for (const f of ['CoCl2', 'CoSO4', 'NaNO3', 'Co2(CO)8']) expect(formulaMass(f).notes.map((n) => n.code), f).not.toContain('CASE_CHECK');
+  });
+});
+
+describe('a number first in a formula that is also a mass number', () => {
+  it('13CO2, 2H2O, [13C6]H12O6 are refused with both readings', () => {
+    // 13CO2 is how carbon-13 dioxide is often typed; read as a multiplier it was C13O26, 572 g/mol
+    const cases: [string, string][] = [
+      ['13CO2', 'for carbon-13 write [13C]O2; for 13 × CO2 write (CO2)13'],
+      ['2H2O', 'for hydrogen-2 (deuterium) write [2H]2O; for 2 × H2O write (H2O)2'],
+      ['[13C6]H12O6', 'for carbon-13 write [13C]6H12O6; for 13 × C6 write (C6)13H12O6'],
+      ['15NH3', 'for nitrogen-15 write [15N]H3; for 15 × NH3 write (NH3)15'],
+      ['14CO2', 'for carbon-14 write [14C]O2; for 14 × CO2 write (CO2)14'],
+      ['13C', 'for carbon-13 write [13C]; for 13 × C write C13'],
+    ];
+    for (const [f, hint] of cases) {
+      const r = safeParseFormula(f);
+      expect(r.success, f).toBe(false);
+      if (!r.success) {
+        expect(r.error.issues[0].code, f).toBe('AMBIGUOUS_READING');
+        expect(r.error.issues[0].hint, f).toBe(hint);
+      }
+      expect(() => formulaMass(f), f).toThrow(PondusError);
+    }
+    // the readings offered compute: [13C]O2 is 45.001 g/mol by AME2020's 13.003354835 u (from the project's data)
+    expect(formulaMass('[13C]O2').molarMass.toFixed(3)).toBe('45.001');
+    expect(formulaMass('(CO2)13').formula).toBe('C13O26');
+  });
+
+  it('a multiplier that is no mass number of the atom after it, or after the addition dot, reads as written', () => {
+    for (const [f, hill] of [['2CaSO4·H2O', 'Ca2H2O9S2'], ['CaSO4·2H2O', 'CaH4O6S'], ['3O2', 'O6'], ['2(H2O)', 'H4O2'], ['2D2O', 'D4O2']]) {
+      expect(formulaMass(f).formula, f).toBe(hill);
+    }
+  });
+});
