@@ -14,6 +14,7 @@ const lineJson = (l: SpeciesLine) => ({
   molesDisplay: l.moles ? l.moles.figure : '',
   mass: l.mass ? l.mass.value : null,
   massDisplay: l.mass ? l.mass.figure : '',
+  take: l.take ? { volume: l.take.volume ? l.take.volume.value : null, volumeDisplay: l.take.volume ? l.take.volume.display : '', mass: l.take.mass ? l.take.mass.value : null, massDisplay: l.take.mass ? l.take.mass.display : '', of: l.take.of } : null,
 });
 
 /**

@@ -15,9 +15,9 @@ import { divide, multiply, quantity, subtract, type Quantity } from '../sigfig/q
 import type { RoundingMode } from '../sigfig/round.js';
 import { sameDims, unitOf } from '../sigfig/units.js';
 import { Decimal } from '../exact/decimal.js';
-import { materialForMoles, molesFromQuantity, readAmount, readMaterial } from '../reagent-table/material.js';
+import { materialForMoles, molesFromQuantity, readAmount, readMaterial, type Material } from '../reagent-table/material.js';
 import { readRowText } from '../reagent-table/row-text.js';
-import { tableAmount, type TableAmount } from '../reagent-table/table.js';
+import { tableAmount, weighOrTake, type TableAmount } from '../reagent-table/table.js';
 import { balanceParsed, type BalanceOptions, type BalanceResult } from './balance.js';
 import { parseEquation, type Species } from './equation.js';
 import type { Rational } from './rational.js';
@@ -46,6 +46,12 @@ export interface SpeciesLine {
   moles: TableAmount | null;
   /** Mass given or produced. */
   mass: TableAmount | null;
+  /**
+   * For a reactant given in mol or equivalents as a solution, a liquid by density, or at a purity:
+   * what to take of it (instructions at working precision), the volume for a liquid or solution,
+   * the mass of the material as it is; null otherwise.
+   */
+  take: { mass: TableAmount | null; volume: TableAmount | null; of: string } | null;
 }
 
 export interface ReactResult {
@@ -134,14 +140,15 @@ export function react(equation: string, options: ReactOptions): ReactResult {
     return [{ a, s, spec, amount }];
   });
   const given = new Map<Species, Quantity>();
+  // the material of each reactant (a solution, a density, a purity), read for every amount given
+  const materials = new Map<Species, Material>(read.map(({ s, spec }) => [s, readMaterial(spec, s.text, notes)]));
   let reference: Species | null = null;
-  for (const { a, s, spec, amount } of read) {
+  for (const { a, s, amount } of read) {
     if (given.has(s)) throw fail({ code: 'BAD_AMOUNT', message: `${s.text} is given twice` }, a);
     if (amount.kind !== 'quantity') continue;
     const m = molarMassOf(s, options);
     if (sameDims(amount.quantity.dims, MASS) && !m) throw fail({ code: 'BAD_AMOUNT', message: 'electrons have no molar mass here: give their amount in mol' }, a);
-    const mat = readMaterial(spec, s.text, notes);
-    given.set(s, molesFromQuantity(amount.quantity, m, mat, s.text).moles);
+    given.set(s, molesFromQuantity(amount.quantity, m, materials.get(s)!, s.text).moles);
     reference ??= s;
   }
   for (const { a, s, amount } of read) {
@@ -167,6 +174,17 @@ export function react(equation: string, options: ReactOptions): ReactResult {
   }
   const nu = (s: Species) => ratioQuantity(coef.get(s)!);
   const amt = (q: Quantity | null, unit: string) => (q ? tableAmount(q, 'result', [], unit, rounding) : null);
+  // what to take of a reactant planned in mol or equivalents that is not the pure substance as weighed
+  const planned = new Set(read.filter(({ amount }) => amount.kind === 'equiv' || sameDims(amount.quantity.dims, AMOUNT)).map(({ s }) => s));
+  const takeOf = (s: Species, moles: Quantity | null, mm: Quantity | null): SpeciesLine['take'] => {
+    const mat = materials.get(s);
+    if (!moles || !mat || !planned.has(s) || (!mat.molarity && !mat.density && !mat.purity && !mat.massFraction)) return null;
+    const [mass, volume] = weighOrTake({ moles, ...materialForMoles(moles, mm, mat) }, moles, [], mat, s.text, rounding, notes);
+    const spec = read.find((x) => x.s === s)!.spec;
+    const details = [spec.solution?.trim(), spec.density && `density ${spec.density.trim()}`, spec.purity && `purity ${spec.purity.trim()}`].filter((x) => x).join('; ');
+    const of = `${mat.molarity || mat.massFraction ? 'the solution' : mat.density ? 'the liquid' : 'the reagent'} (${details})`;
+    return mass || volume ? { mass, volume, of } : null;
+  };
   const line = (s: Species, moles: Quantity | null): SpeciesLine => {
     const mm = molarMassOf(s, options);
     const c = coef.get(s)!;
@@ -178,6 +196,7 @@ export function react(equation: string, options: ReactOptions): ReactResult {
       molarMass: mm ? mm.value.toNumber() : null,
       moles: amt(moles, 'mol'),
       mass: amt(moles && mm ? multiply(moles, mm) : null, 'g'),
+      take: s.side === 'reactant' ? takeOf(s, moles, mm) : null,
     };
   };
   const productMoles = new Map<Species, Quantity>(eq.products.map((s) => [s, multiply(extent!, nu(s))]));

@@ -187,7 +187,16 @@ function resolve(spec: ReagentSpec, options: ParseOptions): Resolved {
  * precision, with a note when the amount has few figures; a mass or volume given was measured,
  * and what follows from it is a result.
  */
-function weighOrTake(got: MaterialAmount, given: Quantity, inputs: InputFigures[], mat: Material, what: string, rounding: RoundingMode, notes: Note[]): [TableAmount | null, TableAmount | null] {
+/**
+ * The mass and volume of a material for an amount, as shown in a table: instructions (working
+ * precision, with the few-figures note) when the amount was planned in moles or equivalents,
+ * results when it was measured; the volume only for a liquid or solution.
+ *
+ * @example
+ * const solution = { purity: null, density: null, molarity: measure('2.5 M'), massFraction: null, solvent: null }
+ * weighOrTake({ moles: measure('5.50 mmol'), mass: null, volume: measure('2.20 mL') }, measure('5.50 mmol'), [], solution, 'nBuLi', 'half-even', [])[1]?.display // '2.200 mL'
+ */
+export function weighOrTake(got: MaterialAmount, given: Quantity, inputs: InputFigures[], mat: Material, what: string, rounding: RoundingMode, notes: Note[]): [TableAmount | null, TableAmount | null] {
   const planned = sameDims(given.dims, AMOUNT);
   const kind = planned ? 'instruction' : 'result';
   const mass = got.mass ? tableAmount(got.mass, kind, inputs, massUnitFor(got.mass), rounding) : null;

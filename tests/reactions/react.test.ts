@@ -66,6 +66,22 @@ describe('react on the reagent-table engine', () => {
     expect(() => react('C7H6O3 + C4H6O3 -> C9H8O4 + C2H4O2', { amounts: ['C4H6O3=1.5 equiv'] })).toThrow(/no reactant is given by its own amount/);
   });
 
+  it('a reactant in equiv or mol as a solution, a liquid or at a purity: what to take of it, at working precision', () => {
+    // solution=, density= and purity= on an amount in equiv or mol were dropped: only the neat mass was shown
+    const lithiation = 'C6H5Br + C4H9Li -> C6H5Li + C4H9Br';
+    const r = react(lithiation, { amounts: ['C6H5Br=5.00 mmol', 'C4H9Li=1.1 equiv, solution=2.5 M in hexanes'] });
+    const buli = r.reactants[1];
+    // worked by hand: 5.00 mmol × 1.1 = 5.50 mmol; 5.50 mmol / 2.5 mol/L = 2.200 mL
+    expect(buli.take).toMatchObject({ volume: { kind: 'instruction', display: '2.200 mL' }, of: 'the solution (2.5 M in hexanes)' });
+    expect(r.reactants[0].take).toBeNull();
+    // worked by hand: 3.0 × 2.00 g / 138.121 g/mol × 102.089 g/mol = 4.435 g; / 1.08 g/mL = 4.106 mL
+    const aspirin = react('C7H6O3 + C4H6O3 -> C9H8O4 + C2H4O2', { amounts: ['C7H6O3=2.00 g', 'C4H6O3=3.0 equiv, density=1.08 g/mL'] });
+    expect(aspirin.reactants[1].take?.volume?.display).toBe('4.106 mL');
+    expect(aspirin.reactants[1].take?.mass?.display).toBe('4.435 g');
+    // a bad solution on an amount in equiv is refused, not dropped
+    expect(() => react(lithiation, { amounts: ['C6H5Br=5.00 mmol', 'C4H9Li=1.1 equiv, solution=fast'] })).toThrow();
+  });
+
   it('percent yield of copper from copper(II) sulfate and excess zinc', () => {
     // source: OpenStax Chemistry 2e §4.4 (Reaction Yields), worked example on percent yield (1.274 g CuSO4, 0.392 g Cu obtained, 77.3 %), from memory
     const r = react('CuSO4 + Zn -> Cu + ZnSO4', { amounts: ['CuSO4=1.274 g'], actual: 'Cu=0.392 g' });

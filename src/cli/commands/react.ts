@@ -49,6 +49,11 @@ export function reactPresenter(o: ReactCliOptions): Presenter<ReactResult> {
           ['left', 'right', 'left', 'right', 'right'],
         ),
       );
+      for (const l of r.reactants) {
+        if (!l.take) continue;
+        const what = [l.take.volume?.display, l.take.mass?.display].filter((x) => x).join(' (') + (l.take.volume && l.take.mass ? ')' : '');
+        lines.push(`take ${l.species}: ${what} of ${l.take.of}`);
+      }
       lines.push(`limiting reagent: ${r.limiting}`);
       for (const e of r.excess) lines.push(`left over: ${e.species} ${e.moles.figure} mol${e.mass ? ` (${e.mass.figure} g)` : ''}`);
       if (r.percentYield) lines.push(`percent yield of ${r.percentYield.species}: ${r.percentYield.percent.figure} %`);
