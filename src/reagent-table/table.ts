@@ -231,12 +231,15 @@ function equivText(e: Quantity, rounding: RoundingMode): string {
 }
 
 /**
- * Reads the reference row and the table's shared data; throws a PondusError for a bad reference.
+ * Reads the reference row and the table's shared data; throws a PondusError for a bad reference,
+ * or (USAGE) for an amount obtained with no product row.
  *
  * @example
  * tableContext([{ role: 'reference', reagent: 'C7H6O3', amount: '2.00 g' }], {}).reference.moles.value.toFixed(5) // '0.01448'
  */
 export function tableContext(specs: readonly ReagentSpec[], options: ReagentTableOptions = {}): TableContext {
+  // an amount obtained with no product row would be dropped
+  if (options.actual !== undefined && !specs.some((s) => s.role === 'product')) throw fail({ code: 'USAGE', message: `the amount obtained (${options.actual}) is of a product: give the product row with \`product\``, options: ['actual', 'product'] });
   const refs = specs.filter((s) => s.role === 'reference');
   if (refs.length === 0) throw fail({ code: 'BAD_RECORD', message: 'no reference reagent: give one row as the reference (the limiting reagent), with its amount' });
   if (refs.length > 1) throw fail({ code: 'BAD_RECORD', message: `${refs.length} reference reagents (${refs.map((r) => r.reagent).join(', ')}): give exactly one` });
