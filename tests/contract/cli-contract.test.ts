@@ -42,6 +42,8 @@ describe('exit statuses: 0 all good, 1 some input failed, 2 usage', () => {
     ['a choice not offered', ['mass', 'H2O', '--weights', 'old']],
     ['no inputs', ['mass']],
     ['a shell not offered', ['completion', 'tcsh']],
+    ['--rounding where JSON carries every digit', ['mass', 'H2O', '--json', '--rounding', 'half-up']],
+    ['--rounding where CSV carries every digit', ['composition', 'H2O', '--csv', '--rounding', 'half-up']],
   ];
   for (const [what, args] of usage) {
     it(`${what}: 2`, () => {

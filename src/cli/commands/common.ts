@@ -71,6 +71,19 @@ export function roundingOf(o: RoundingOptions): RoundingMode {
 }
 
 /**
+ * Refuses `--rounding` where it would be ignored: a command whose JSON and CSV carry every digit,
+ * with no figure rounded for display (mass, composition of a formula).
+ *
+ * @example
+ * refuseUnusedRounding({ json: true }) // no refusal without --rounding
+ */
+export function refuseUnusedRounding(o: RoundingOptions & OutputOptions): void {
+  if (o.rounding !== undefined && (o.json || o.csv || o.tsv)) {
+    throw fail({ code: 'USAGE', message: `--rounding sets how the table rounds its figures; ${o.json ? '--json' : o.csv ? '--csv' : '--tsv'} carries every digit, unrounded: drop --rounding, or the format for the table` });
+  }
+}
+
+/**
  * Makes every option of a command that takes one value refuse to be given twice
  * (`dilute --to A --to B` would otherwise silently use B): a usage error
  * (exit status 2) naming the option. Options listed in `repeatable` (those

@@ -8,7 +8,7 @@ import { displayElementMass, displayElementPercent, displayMolarMass, displayPer
 import type { Presenter } from '../output/presenter.js';
 import { fail } from '../../errors/pondus-error.js';
 import { joinPairArgs, takeJoinedNote } from '../input/key-value-args.js';
-import { outputFormat, type FormulaOptions, type OutputOptions, type RoundingOptions } from './common.js';
+import { outputFormat, refuseUnusedRounding, type FormulaOptions, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 import { declareComposition } from './declarations.js';
 
@@ -55,6 +55,7 @@ export function compositionPresenter(o: CompositionCliOptions): Presenter<Compos
 }
 
 function formulaPresenter(o: CompositionCliOptions): Presenter<CompositionDetail> {
+  refuseUnusedRounding(o);
   const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations, part: o.part };
   const rounding = o.rounding ?? 'half-even';
   const withPart = o.part !== undefined;

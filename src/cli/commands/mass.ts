@@ -5,7 +5,7 @@ import { MASS_COLUMNS, massCells, massJson, massJsonLine, massUncertaintyJson, U
 import { formatWithUncertainty, molarMassUncertainty, type MolarMassUncertainty } from '../../mass/uncertainty.js';
 import { chargeLabel, displayMolarMass, displayMonoisotopic } from '../output/display.js';
 import type { Presenter } from '../output/presenter.js';
-import type { FormulaOptions, RoundingOptions } from './common.js';
+import { refuseUnusedRounding, type FormulaOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 import { declareMass } from './declarations.js';
 
@@ -28,6 +28,7 @@ const rowWith = (rounding: 'half-even' | 'half-up') => (r: MassDetail) => [r.inp
 /** The presenter for `pondus mass` (with --uncertainty, {@link uncertaintyPresenter}). */
 export function massPresenter(o: MassCliOptions): Presenter<MassDetail> | Presenter<MassRow> {
   if (o.uncertainty && o.weights === 'abridged') throw fail({ code: 'USAGE', message: '--uncertainty comes from the standard atomic weights and their intervals, not from the abridged table: drop --weights abridged or --uncertainty' });
+  refuseUnusedRounding(o);
   return o.uncertainty ? uncertaintyPresenter(o) : plainPresenter(o);
 }
 
