@@ -353,7 +353,8 @@ export type NoteCode =
   | 'NON_ELECTROLYTE'
   | 'ANHYDROUS_DEXTROSE'
   // the caution of a result that will be acted on, as a CSV notes item
-  | 'CAUTION';
+  | 'CAUTION'
+  | 'WEIGHTS_ABRIDGED';
 
 /** A remark attached to a successful result (an assumption made, a value flagged). */
 export interface Note {

@@ -103,6 +103,7 @@ export interface MassDetail {
 }
 
 const SCALE = 10 ** SCALE_DIGITS;
+const ABRIDGED_NOTE: Note = Object.freeze({ code: 'WEIGHTS_ABRIDGED', message: 'atomic weights from the abridged table (CIAAW 2021, five significant figures; Prohaska et al. 2022), not the standard atomic weights' });
 const NO_NOTES: Note[] = Object.freeze([]) as unknown as Note[];
 
 /** The sums and notes of one formula: the shared core of both result shapes. */
@@ -184,6 +185,11 @@ function sums(input: string, charge: number, treeNotes: Note[], vector: AtomVect
   let nominal: number | null = exact ? nominalSum : null;
   if (charge !== 0) formula += chargeText(charge);
   if (nominal !== null && !Number.isSafeInteger(nominal)) nominal = null;
+  if (weights === 'abridged') {
+    // the table used goes with every result, so a row read alone says which weights it has
+    if (notes === NO_NOTES) notes = [];
+    notes.push(ABRIDGED_NOTE);
+  }
   if (fractional) {
     if (notes === NO_NOTES) notes = [];
     notes.push({ code: 'NON_INTEGER_COUNTS', message: 'the formula has non-integer counts; the nominal mass is not defined' });

@@ -34,6 +34,9 @@ describe('molar mass', () => {
   it('switches to the abridged table on request', () => {
     // source: CIAAW 2021 abridged table: Na 22.990, Cl 35.45
     expect(molarMass('NaCl', { weights: 'abridged' }).toString()).toBe('58.44');
+    // the table used goes with the result, in every format
+    expect(formulaMass('NaCl', { weights: 'abridged' }).notes.map((n) => n.code)).toEqual(['WEIGHTS_ABRIDGED']);
+    expect(formulaMass('NaCl').notes).toEqual([]);
   });
 
   it('uses AME2020 nuclide masses for isotope labels', () => {
