@@ -9,7 +9,7 @@ import { displayInstruction, instructionJson, massUnitFor, resultJson, volumeUni
 import type { Quantity } from '../sigfig/quantity.js';
 import type { RoundingMode } from '../sigfig/round.js';
 import { BENCH_CAUTION, CONCENTRATED_CAUTION } from './caution.js';
-import type { PrepRowResult, PrepSheetRow } from './prep-sheet.js';
+import { isConcentratedRow, type PrepRowResult, type PrepSheetRow } from './prep-sheet.js';
 
 /** What a row tells the person at the bench to do, and the amount with the unit it is shown in. */
 export function prepRowAmount(p: PrepRowResult): { ins: Instruction | null; unit: string; verb: 'weigh' | 'take' } {
@@ -36,11 +36,14 @@ export function prepRowNotes(p: PrepRowResult): Note[] {
 export function prepRowInstruction(p: PrepRowResult, rounding: RoundingMode): string {
   const { ins, unit, verb } = prepRowAmount(p);
   const r = p.row;
-  const label = r.reagent !== r.formula ? `${r.reagent} (${r.formula})` : r.formula;
+  // the formula of what is weighed or measured first, then the row's name for it: 'Na2CO3·10H2O (sodium carbonate)'
+  const name = r.reagent !== r.formula ? r.reagent : null;
+  const aside = (...xs: (string | null)[]) => (xs.some((x) => x) ? ` (${xs.filter((x) => x).join('; ')})` : '');
   if (!ins) return '';
   const amount = displayInstruction(ins, unit, rounding).text;
-  if (p.kind === 'solid') return `weigh ${amount} of ${label}${r.purity ? ` (assay ${r.purity})` : ''}, dissolve, and make up to ${r.volume}`;
-  return `${verb} ${amount} of ${r.purity} ${label} (d ${r.density}), add it slowly to about half the water${p.concentrated.acid ? ' (acid to water)' : ''}, cool, and make up to ${r.volume}`;
+  if (p.kind === 'solid') return `weigh ${amount} of ${r.formula}${aside(name, r.purity ? `assay ${r.purity}` : null)}, dissolve, and make up to ${r.volume}`;
+  const density = r.density !== '' ? r.density : `${p.concentrated.density.value.div(1000).toFixed()} g/mL, from the table of common grades`;
+  return `${verb} ${amount} of ${r.purity} ${r.formula}${aside(name, `d ${density}`)}, add it slowly to about half the water${p.concentrated.acid ? ' (acid to water)' : ''}, cool, and make up to ${r.volume}`;
 }
 
 /**
@@ -55,7 +58,7 @@ export function prepRowInstruction(p: PrepRowResult, rounding: RoundingMode): st
  * prepSheetCaution(readPrepSheet('reagent,purity,density,target,volume\nHCl,37 %,1.19 g/mL,1.00 M,500.0 mL\n')) // 'concentrated acids and bases…'
  */
 export function prepSheetCaution(rows: readonly PrepSheetRow[]): string {
-  return rows.some((r) => r.density !== '') ? `${CONCENTRATED_CAUTION}; check each reagent label (formula, hydrate form, assay)` : BENCH_CAUTION;
+  return rows.some((r) => isConcentratedRow(r)) ? `${CONCENTRATED_CAUTION}; check each reagent label (formula, hydrate form, assay)` : BENCH_CAUTION;
 }
 
 /** The JSON row of a prep sheet's row. */
@@ -94,7 +97,7 @@ export interface PrepRowJson {
  * @throws PondusError BAD_ARGUMENT (from the public API) when `p` is not a prep-sheet row result, `caution` not a string or `rounding` not a rounding mode.
  * @example
  * const rows = readPrepSheet('reagent,form,purity,target,volume\ncopper sulfate,CuSO4·5H2O,98.5 %,0.100 M,250.0 mL\n')
- * prepRowJson(prepRow(rows[0]), prepSheetCaution(rows)).instruction // 'weigh 6.337 g of copper sulfate (CuSO4·5H2O) (assay 98.5 %), dissolve, and make up to 250.0 mL'
+ * prepRowJson(prepRow(rows[0]), prepSheetCaution(rows)).instruction // 'weigh 6.337 g of CuSO4·5H2O (copper sulfate; assay 98.5 %), dissolve, and make up to 250.0 mL'
  */
 export function prepRowJson(p: PrepRowResult, caution: string, rounding: RoundingMode = 'half-even'): PrepRowJson {
   const { ins, unit, verb } = prepRowAmount(p);

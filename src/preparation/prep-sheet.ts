@@ -14,7 +14,8 @@
  */
 import { fail } from '../errors/pondus-error.js';
 import { readCsvSheet } from '../sheets/read-sheet.js';
-import type { MassOptions } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassOptions } from '../mass/formula-mass.js';
+import { CONCENTRATED_GRADES } from './concentrated-grades.js';
 import { concentratedReagent, type ConcentratedResult } from './concentrated.js';
 import { prepareSolution, type SolutionResult } from './solution.js';
 
@@ -103,11 +104,32 @@ export function readPrepSheet(text: string): PrepSheetRow[] {
 const opt = (s: string) => (s === '' ? undefined : s);
 
 /**
+ * True for a row that is a concentrated liquid, measured by volume: it gives a density, or its
+ * reagent is a grade in the table of common concentrated reagents (37 % HCl, 96 % H2SO4, …)
+ * with its mass fraction in the purity column, whose density the table then gives.
+ *
+ * @example
+ * isConcentratedRow(readPrepSheet('reagent,purity,target,volume\nHCl,37 %,1.00 M,500.0 mL\n')[0]) // true
+ * isConcentratedRow(readPrepSheet('reagent,purity,target,volume\nNaCl,99.5 %,0.100 M,1.000 L\n')[0]) // false
+ */
+export function isConcentratedRow(row: PrepSheetRow, options: MassOptions = {}): boolean {
+  if (row.density !== '') return true;
+  if (row.purity === '' || row.formula === '') return false;
+  let hill: string;
+  try {
+    hill = formulaMassDetail(row.formula, options).formula;
+  } catch {
+    return false; // the row's own reading reports the formula
+  }
+  return CONCENTRATED_GRADES.some((g) => g.formula === hill);
+}
+
+/**
  * The instruction for one row of a prep sheet, computed as `prepare` computes it.
  *
  * @param row - a row of {@link readPrepSheet}.
  * @param options - the mass options.
- * @returns the row with the result of {@link concentratedReagent} when a density is given, else of {@link prepareSolution}.
+ * @returns the row with the result of {@link concentratedReagent} for a concentrated liquid ({@link isConcentratedRow}), else of {@link prepareSolution}.
  * @throws PondusError: BAD_RECORD for a row with no reagent, no volume or no target (nor mass weighed or volume taken), a concentrated liquid without a purity or with a mass weighed or 'as', or a volume taken for a solid; the codes of {@link concentratedReagent} or {@link prepareSolution}; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const [row] = readPrepSheet('reagent,form,purity,target,volume\ncopper sulfate,CuSO4·5H2O,98.5 %,0.100 M,250.0 mL\n')
@@ -117,11 +139,11 @@ export function prepRow(row: PrepSheetRow, options: MassOptions = {}): PrepRowRe
   if (row.formula === '') throw fail({ code: 'BAD_RECORD', message: `the row names no reagent` });
   if (row.volume === '') throw fail({ code: 'BAD_RECORD', message: `the row gives no volume` });
   if (row.target === '' && row.weighed === '' && row.taken === '') throw fail({ code: 'BAD_RECORD', message: `the row gives no target (nor a mass weighed or volume taken)` });
-  if (row.density !== '') {
+  if (isConcentratedRow(row, options)) {
     if (row.purity === '') throw fail({ code: 'BAD_RECORD', message: `a concentrated liquid (a density is given) needs its mass fraction in the purity column ('37 %')` });
     if (row.weighed !== '') throw fail({ code: 'BAD_RECORD', message: `a concentrated liquid is measured by volume: give the volume taken ('taken'), not a mass weighed` });
     if (row.as !== '') throw fail({ code: 'BAD_RECORD', message: `'as' applies to a solid reagent, not to a concentrated liquid` });
-    return { row, kind: 'concentrated', concentrated: concentratedReagent(row.formula, { ...options, fraction: row.purity, density: row.density, concentration: opt(row.target), volume: row.volume, taken: opt(row.taken) }) };
+    return { row, kind: 'concentrated', concentrated: concentratedReagent(row.formula, { ...options, fraction: row.purity, density: opt(row.density), concentration: opt(row.target), volume: row.volume, taken: opt(row.taken) }) };
   }
   if (row.taken !== '') throw fail({ code: 'BAD_RECORD', message: `a volume taken applies to a concentrated liquid (give its density); a solid is weighed ('weighed')` });
   return { row, kind: 'solid', solution: prepareSolution(row.formula, { ...options, concentration: opt(row.target), volume: row.volume, purity: opt(row.purity), as: opt(row.as), weighed: opt(row.weighed) }) };

@@ -95,9 +95,21 @@ describe('pondus prepare --sheet', () => {
   it('gives one printable instruction per row, in order, with the concentration made', () => {
     const r = pondus(['prepare', '--sheet', SHEET]);
     expect(r.status).toBe(0);
-    expect(r.stdout).toContain('weigh 6.337 g of copper(II) sulfate (CuSO4·5H2O) (assay 98.5 %)');
-    expect(r.stdout).toContain('take 41.40 mL of 37 % hydrochloric acid (HCl)');
+    expect(r.stdout).toContain('weigh 6.337 g of CuSO4·5H2O (copper(II) sulfate; assay 98.5 %)');
+    expect(r.stdout).toContain('take 41.40 mL of 37 % HCl (hydrochloric acid; d 1.19 g/mL)');
     expect(r.stdout).toContain('made: 2.0437 g weighed gives 0.1000 M');
+  });
+
+  it('a hydrate row names the form to weigh first; a concentrated grade with no density takes the table density, as prepare does', () => {
+    // 'weigh 7.153 g of Na2CO3 (Na2CO3·10H2O)' could be read as 7.153 g of the anhydrous salt (0.270 M, not 0.1000 M)
+    const sheet = 'id,reagent,form,purity,density,target,volume\nA,Na2CO3,Na2CO3·10H2O,,,0.1000 M,250.0 mL\nB,hydrochloric acid,HCl,37 %,,1.000 M,500.0 mL\n';
+    const r = pondus(['prepare', '--sheet', '-'], sheet);
+    expect(r.status, r.stderr).toBe(0);
+    // worked by hand: 0.1000 mol/L × 0.2500 L × 286.14 g/mol = 7.153 g of the decahydrate
+    expect(r.stdout).toContain('weigh 7.153 g of Na2CO3·10H2O (Na2CO3), dissolve');
+    // the same as prepare HCl --fraction '37 %': 41.40 mL, with the table's density named
+    expect(r.stdout).toContain('take 41.40 mL of 37 % HCl (hydrochloric acid; d 1.19 g/mL, from the table of common grades)');
+    expect(r.stdout).toContain('density 1.19 g/mL for 37 % hydrochloric acid');
   });
 
   it('each row matches prepare for the same reagent, purity, target and volume', () => {

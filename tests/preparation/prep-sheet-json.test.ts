@@ -46,7 +46,7 @@ describe('the JSON rows of a prep sheet', () => {
     // source: CIAAW 2021 standard atomic weights: 0.100 M × 0.2500 L × 249.68 g/mol / 0.985 = 6.337 g (arithmetic by hand)
     const row = api.prepRowJson(api.prepRow(rows[0]), caution);
     expect([row.action, row.amount?.display]).toEqual(['weigh', '6.337 g']);
-    expect(row.instruction).toBe('weigh 6.337 g of copper sulfate (CuSO4·5H2O) (assay 98.5 %), dissolve, and make up to 250.0 mL');
+    expect(row.instruction).toBe('weigh 6.337 g of CuSO4·5H2O (copper sulfate; assay 98.5 %), dissolve, and make up to 250.0 mL');
     // a row with only the mass weighed: no target, no purity, no amount to weigh, the concentration made
     // source: 1.461 g / 58.44 g/mol / 0.2500 L = 0.1000 M (arithmetic by hand)
     const made = api.prepRowJson(api.prepRow(rows[3]), caution);
