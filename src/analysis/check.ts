@@ -132,7 +132,8 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
     }
   }
   const symbols = hillOrder(found.keys());
-  const textOf = new Map(symbols.map((s) => [s, found.get(s)!.toFixed(Math.max(2, decimalsOf(read.text.get(s)!)))]));
+  // found values are measurements: reported with the decimals written, never padded ('60.2' is not '60.20')
+  const textOf = new Map(symbols.map((s) => [s, found.get(s)!.toFixed(decimalsOf(read.text.get(s)!))]));
   const written = reportFormulaOf(base);
   const own = ownFigures(base, symbols, found);
   const bare = evaluateFit(written, base, [], symbols, found, tolerance, textOf, rounding, own);

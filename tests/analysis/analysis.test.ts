@@ -33,6 +33,13 @@ describe('calculated against found', () => {
     expect(analysis('C20H25N3O', 'C=72.30, H=7.91, N=12.60').reportLine).toBe('Anal. Calcd for C20H25N3O: C, 74.27; H, 7.79; N, 12.99. Found: C, 72.30; H, 7.91; N, 12.60.');
   });
 
+  it('reports the found values as measured, never padded with digits not measured', () => {
+    // found 60.2 was printed 60.20, a figure the analysis did not give
+    const r = analysis('C9H8O4', 'C=60.2, H=4.4');
+    expect(r.reportLine).toBe('Anal. Calcd for C9H8O4: C, 60.00; H, 4.48. Found: C, 60.2; H, 4.4.');
+    expect(analysis('C9H8O4', 'C=60.213, H=4.40').reportLine).toContain('Found: C, 60.213; H, 4.40.');
+  });
+
   it('finds the hemihydrate that explains a failing analysis', () => {
     const r = analysis('C20H25N3O', 'C=72.30, H=7.91, N=12.60', { solvents: ['water', 'DCM', 'EtOAc', 'MeOH'] });
     expect(r.pass).toBe(false);

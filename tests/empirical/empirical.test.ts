@@ -85,7 +85,11 @@ describe('empirical formula from measurements', () => {
           const comp = composition(counts.map(([e, k]) => `${e}${k}`).join(''));
           // at the data's own precision; at ±0.3 (the default) C17H36 and C8H17 differ by 0.05 points and the simpler is given
           const r = empirical(comp.elements.map((e) => `${e.symbol}=${e.massPercent.toFixed(2)}`).join(' '), { tolerance: 0.01 });
-          expect(r.empirical).toBe(expected);
+          // percents to 0.01 cannot tell some large hydrocarbons apart (C29H44 and C31H47 both fit
+          // 88.71/11.29 within 0.005): the formula is then the answer or one of the alternatives within the limits
+          const found = [r.empirical, ...r.alternatives.map((a) => a.hill)];
+          expect(found).toContain(expected);
+          if (c <= 12) expect(r.empirical).toBe(expected);
         },
       ),
       { numRuns: 150 },
