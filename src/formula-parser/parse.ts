@@ -15,6 +15,7 @@ import { fullGrammar } from './grammar-loader.js';
 import { REAGENTS } from './names.js';
 import { columnOf, MAX_FORMULA_LENGTH, prescanAll } from './prescan.js';
 import { leadingNumberIssues } from './leading-number.js';
+import { ligandNameIssues } from './ligand-names.js';
 import { mixtureRefusals, settleReadings } from './readings.js';
 import { end, type ComponentNode, type FormulaTree, type GroupNode, type PartNode, type Span } from './tree.js';
 import type { FormulaCstNode } from './cst.js';
@@ -126,6 +127,10 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
   }
   const leading = leadingNumberIssues(built.components, text);
   if (leading.length > 0) throw new PondusError(leading, input);
+  if (mode !== 'elements') {
+    const names = ligandNameIssues(text);
+    if (names.length > 0) throw new PondusError(names, input);
+  }
   const notes: Note[] = built.notes;
   if (mode === 'plain') {
     const settled = settleReadings(built.components, text);

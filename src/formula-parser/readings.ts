@@ -267,5 +267,5 @@ export function mayNeedSettling(text: string): boolean {
 }
 
 const NAME_TEST = new RegExp(
-  [...Object.keys(REAGENTS).filter((k) => /^[A-Z]+$/.test(k)), ...Object.keys(SOLVENTS).filter((k) => /^[a-z]+$/.test(k)).map((k) => k.toUpperCase()), ...GROUP_RUNS, ...MIXED_CASE_RUNS, ...Object.keys(MIXTURE_RUNS), 'BOC'].join('|'),
+  [...Object.keys(REAGENTS).filter((k) => /^[A-Z]+$/.test(k)), ...Object.keys(SOLVENTS).filter((k) => /^[a-z]+$/.test(k)).map((k) => k.toUpperCase()), ...GROUP_RUNS, ...MIXED_CASE_RUNS, ...Object.keys(MIXTURE_RUNS), 'BOC', 'NCS', 'SIPr', 'IMes'].join('|'),
 );

@@ -441,3 +441,21 @@ describe('a number first in a formula that is also a mass number', () => {
     }
   });
 });
+
+describe('reagent and ligand names that read as atoms', () => {
+  it('NCS alone, and the carbenes IMes, SIMes, IPr and SIPr anywhere, are refused with both readings', () => {
+    // NCS was computed as C, N, S (58.08 g/mol), SIPr as S, I, Pr, IMes as iodomesitylene: N-chlorosuccinimide
+    // is C4H4ClNO2 and IMes C21H24N2 (from memory)
+    for (const [f, formula] of [['NCS', 'C4H4ClNO2'], ['SIPr', 'C27H38N2'], ['(SIPr)CuCl', 'C27H38N2'], ['Pd(IMes)Cl2', 'C21H24N2'], ['SIMes', 'C21H26N2'], ['IPr', 'C27H36N2']]) {
+      const r = safeParseFormula(f);
+      expect(r.success, f).toBe(false);
+      if (!r.success) {
+        expect(r.error.issues[0].code, f).toBe('AMBIGUOUS_READING');
+        expect(r.error.issues[0].hint, f).toContain(formula);
+      }
+    }
+    // in brackets NCS is the thiocyanate ligand, and the atoms read in another order
+    for (const f of ['Hg(NCS)2', 'KSCN', 'CNS', 'NCS^-']) expect(safeParseFormula(f).success, f).toBe(true);
+    expect(safeParseFormula('NCS', { abbreviations: 'none' }).success).toBe(true);
+  });
+});
