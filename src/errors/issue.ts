@@ -85,7 +85,7 @@ interface IssueBase {
  * The library functions a message or note may point to (for another way to reach the result), each
  * with a command-line form in `FLAG_NAMING`.
  */
-export type LibraryFunction = 'candidateFormulas' | 'compositionCsvLongRows' | 'concentratedReagent' | 'diluteByMass' | 'dilutionSeries' | 'empirical' | 'milliequivalents';
+export type LibraryFunction = 'candidateFormulas' | 'compositionCsvLongRows' | 'concentratedReagent' | 'diluteByMass' | 'dilutionSeries' | 'empirical' | 'formulaMass' | 'milliequivalents';
 
 /**
  * The machine fields of each code that has them: what a script may read without parsing the
@@ -354,7 +354,8 @@ export type NoteCode =
   | 'ANHYDROUS_DEXTROSE'
   // the caution of a result that will be acted on, as a CSV notes item
   | 'CAUTION'
-  | 'WEIGHTS_ABRIDGED';
+  | 'WEIGHTS_ABRIDGED'
+  | 'PATTERN_AVERAGE';
 
 /** A remark attached to a successful result (an assumption made, a value flagged). */
 export interface Note {

@@ -13,6 +13,7 @@ const COMMANDS: { [F in LibraryFunction]: string } = {
   diluteByMass: 'dilute --mass',
   dilutionSeries: 'dilute --series',
   empirical: 'empirical',
+  formulaMass: 'pondus mass',
   milliequivalents: 'meq',
 };
 

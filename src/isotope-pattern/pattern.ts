@@ -179,6 +179,7 @@ export function isotopePattern(formula: string | null, options: PatternOptions =
   let average = 0;
   for (const [key, n] of atoms) average += n * isotopeAverage(atomIsotopes(key));
   const peaks = all.filter((p) => p.relative >= minRelative);
+  notes.push({ code: 'PATTERN_AVERAGE', message: "the average m/z is the pattern's own mean, from the isotopic compositions of ICE 2013 (one representative sample of each element), not the molar mass from the standard atomic weights; the two differ in the second or third decimal (`formulaMass` gives the molar mass)", functions: ['formulaMass'] });
   const monoShown = peaks.some((p) => p.shift === 0);
   if (!monoShown) notes.push({ code: 'MONOISOTOPIC_NOT_SHOWN', message: `the monoisotopic peak (m/z ${mono.toFixed(4)}) is below ${minRelative} % of the largest peak and is not listed` });
   return {

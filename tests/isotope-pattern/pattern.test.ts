@@ -258,6 +258,13 @@ describe('properties', () => {
     };
     expect(r.isotopeAverageMz).toBeCloseTo(2 * avg('C') + 6 * avg('H') + avg('O'), 10);
   });
+
+  it('says its average is not the molar mass: CH2Cl2 averages 84.933 here, and its molar mass is 84.927 g/mol', () => {
+    // source: CIAAW 2021 standard weights (C 12.011, H 1.008, Cl 35.45) give 84.927; ICE 2013 compositions give more
+    const r = isotopePattern('CH2Cl2');
+    expect(r.averageMz.toFixed(3)).toBe('84.933');
+    expect(r.notes.map((n) => n.code)).toContain('PATTERN_AVERAGE');
+  });
 });
 
 describe('the result is plain data', () => {
