@@ -255,3 +255,20 @@ describe('shell completion and the manual page', () => {
     expect(pkg.man).toEqual(['./dist/pondus.1']);
   });
 });
+
+describe('CSV numbers', () => {
+  it('a quotient that does not end is the number JSON gives, not 50 digits; an exact sum stays exact', () => {
+    // the gravimetric factor Fe/Fe2O3 was written 0.69943076142704165022825903173082342332187341486784
+    const csv = parse(pondus(['gravimetric', 'Fe', '--weighed', 'Fe2O3', '--csv']).stdout, { columns: true }) as Record<string, string>[];
+    const json = JSON.parse(pondus(['gravimetric', 'Fe', '--weighed', 'Fe2O3', '--json']).stdout);
+    expect(csv[0].factor).toBe(String(json.factor));
+    const mass = parse(pondus(['mass', 'C6H12O6', '--csv']).stdout, { columns: true }) as Record<string, string>[];
+    expect(mass[0].molarMass).toBe('180.156'); // source: CIAAW 2021: 6 × 12.011 + 12 × 1.008 + 6 × 15.999
+  });
+
+  it('the prep sheet says the unit of its amount_base column', () => {
+    const sheet = 'reagent,form,purity,density,target,volume\nsodium chloride,NaCl,,,0.100 M,250.0 mL\nhydrochloric acid,HCl,37 %,1.19 g/mL,1.00 M,500.0 mL\n';
+    const rows = parse(pondus(['prepare', '--sheet', '-', '--csv'], sheet).stdout, { columns: true }) as Record<string, string>[];
+    expect(rows.map((r) => r.base_unit)).toEqual(['g', 'L']);
+  });
+});

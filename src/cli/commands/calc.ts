@@ -2,6 +2,7 @@ import type { Command } from 'commander';
 import { calc, calcJson, type CalcResult } from '../../calc/calc.js';
 import type { RoundingMode } from '../../sigfig/round.js';
 import type { Presenter } from '../output/presenter.js';
+import { decimalCell } from '../output/format.js';
 import { roundingOf, type OutputOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 import { declareCalc } from './declarations.js';
@@ -17,7 +18,7 @@ export function calcPresenter(o: CalcCliOptions): Presenter<CalcResult> {
     compute: (input) => calc(input, opts),
     json: (r) => (o.explain ? { ...calcJson(r), steps: r.steps, rounding: opts.rounding } : calcJson(r)),
     columns: ['input', 'value', 'display', 'sigFigs', 'unit', 'uncertainty'],
-    cells: (r) => [r.input, r.value.toFixed(), r.display, r.sigFigs, r.unit, r.uncertainty?.toFixed() ?? ''],
+    cells: (r) => [r.input, decimalCell(r.value), r.display, r.sigFigs, r.unit, r.uncertainty ? decimalCell(r.uncertainty) : ''],
     block: (r) => {
       const sf = r.sigFigs === null ? (r.uncertainty ? 'standard uncertainty, k = 1' : 'exact') : `${r.sigFigs} significant figure${r.sigFigs === 1 ? '' : 's'}`;
       const lines = [`${r.input}  =  ${r.display}   (${sf})`];

@@ -22,6 +22,7 @@ import { checkDilutePlanOptions, massDilutionPresenter, seriesPresenter, type Di
 import type { SeriesResult } from '../../preparation/dilution-series.js';
 import type { MassDilutionResult } from '../../preparation/mass-dilution.js';
 import { declareConversions } from './declarations.js';
+import { decimalCell } from '../output/format.js';
 
 const factorText = (f: ConversionFactor) => `${f.a === 1n ? '' : `${f.a} × `}M(${speciesText(f.sought)}) / ${f.b === 1n ? `M(${speciesText(f.given)})` : `(${f.b} × M(${speciesText(f.given)}))`}`;
 
@@ -56,7 +57,7 @@ function oneStepPresenter(o: DiluteCliOptions): Presenter<DilutionResult> {
     compute: (stock) => dilute(stock, o.to, o.volume!, o.taken),
     json: (r) => dilutionJson(r, rounding),
     columns: ['input', 'target', 'finalVolume', 'stockVolume', 'display', 'made'],
-    cells: (r) => [r.written.stock, r.written.target, r.written.volume, r.stockVolume ? r.stockVolume.quantity.value.toFixed() : '', ins(r.stockVolume, vUnit(r)), text(r.made)],
+    cells: (r) => [r.written.stock, r.written.target, r.written.volume, r.stockVolume ? decimalCell(r.stockVolume.quantity.value) : '', ins(r.stockVolume, vUnit(r)), text(r.made)],
     block: (r) => {
       const lines: string[] = [];
       if (r.target && r.stockVolume) {
@@ -90,7 +91,7 @@ export function gravimetricPresenter(o: GravimetricCliOptions): Presenter<Gravim
     compute: (analyte) => gravimetric(analyte, o.weighed!, { element: o.element, weighedMass: o.mass, sampleMass: o.sample }),
     json: (r) => gravimetricJson(r, rounding),
     columns: ['analyte', 'weighed', 'factor', 'analyteMass', 'massPercent', 'analyteHill', 'weighedHill'],
-    cells: (r) => [speciesText(r.factor.sought), speciesText(r.factor.given), r.factor.factor.toFixed(), r.analyteMass ? displayResult(r.analyteMass, 'g', rounding).figure : '', r.massPercent ? displayResult(r.massPercent, null, rounding).figure : '', r.factor.sought.formula, r.factor.given.formula],
+    cells: (r) => [speciesText(r.factor.sought), speciesText(r.factor.given), decimalCell(r.factor.factor), r.analyteMass ? displayResult(r.analyteMass, 'g', rounding).figure : '', r.massPercent ? displayResult(r.massPercent, null, rounding).figure : '', r.factor.sought.formula, r.factor.given.formula],
     block: (r) => {
       const lines = [`gravimetric factor for ${r.factor.sought.input} weighed as ${r.factor.given.input}: ${factorText(r.factor)} = ${factor(r.factor)}`];
       if (r.analyteMass) lines.push(`  ${r.factor.sought.input} in the weighed form: ${text(r.analyteMass, 'g')}`);
@@ -118,7 +119,7 @@ export function basisPresenter(o: BasisCliOptions): Presenter<BasisResult> {
     compute: (from) => convertBasis(from, o.to!, { element: o.element, value: o.value }),
     json: (r) => basisJson(r, rounding),
     columns: ['from', 'to', 'factor', 'converted', 'fromHill', 'toHill'],
-    cells: (r) => [speciesText(r.factor.given), speciesText(r.factor.sought), r.factor.factor.toFixed(), r.converted ? text(r.converted) : '', r.factor.given.formula, r.factor.sought.formula],
+    cells: (r) => [speciesText(r.factor.given), speciesText(r.factor.sought), decimalCell(r.factor.factor), r.converted ? text(r.converted) : '', r.factor.given.formula, r.factor.sought.formula],
     block: (r) => {
       const lines = [`${r.factor.given.input} → ${r.factor.sought.input}: × ${factor(r.factor)}   (${factorText(r.factor)})`];
       if (r.converted) lines.push(`  ${text(r.value)} ${r.factor.given.input} = ${text(r.converted)} ${r.factor.sought.input}`);
@@ -146,7 +147,7 @@ export function saltPresenter(o: SaltCliOptions): Presenter<SaltFactorResult> {
     compute: (salt) => saltFactor(salt, o.parent!, given),
     json: (r) => saltFactorJson(r, given, rounding),
     columns: ['salt', 'parent', 'factor', 'saltMass', 'parentMass', 'saltHill', 'parentHill'],
-    cells: (r) => [speciesText(r.salt), speciesText(r.parent), r.factor.toFixed(), ins(r.saltMass), text(r.parentMass), r.salt.formula, r.parent.formula],
+    cells: (r) => [speciesText(r.salt), speciesText(r.parent), decimalCell(r.factor), ins(r.saltMass), text(r.parentMass), r.salt.formula, r.parent.formula],
     block: (r) => {
       const lines = [`${r.salt.input} / ${r.parent.input}: ${displayMeasured(r.reported, rounding).text} g of salt per g of parent${r.perSalt.eq(1) ? '' : ` (${r.perSalt.toFixed()} parent units per salt unit)`}`];
       if (r.saltMass) lines.push(`  ${o.dose!.trim()} of parent is carried by ${ins(r.saltMass)} of the salt`);

@@ -12,6 +12,7 @@ import { displayInstruction, massUnitFor, volumeUnitFor, type Instruction } from
 import type { RoundingMode } from '../../sigfig/round.js';
 import type { Presenter } from '../output/presenter.js';
 import { conflict, given, roundingOf, type OutputOptions, type RoundingOptions } from './common.js';
+import { decimalCell } from '../output/format.js';
 
 export interface DilutePlanCliOptions extends OutputOptions, RoundingOptions {
   to?: string;
@@ -63,10 +64,10 @@ export function seriesPresenter(o: DilutePlanCliOptions): Presenter<SeriesResult
     json: (r) => seriesJson(r, rounding),
     columns: ['input', 'target', 'factor', 'volume', 'steps', ...stepCols],
     cells: (r) => {
-      const cells: (string | number)[] = [r.written.stock ?? r.written.factor ?? '', r.written.target ?? '', r.factor.toFixed(), r.written.volume, r.steps.length];
+      const cells: (string | number)[] = [r.written.stock ?? r.written.factor ?? '', r.written.target ?? '', decimalCell(r.factor), r.written.volume, r.steps.length];
       for (let k = 0; k < MAX_SERIES_STEPS; k++) {
         const s = r.steps[k];
-        cells.push(s ? s.factor.toFixed() : '', s ? s.take.quantity.value.toFixed() : '', s ? w(s.take, vu(r, s.take)) : '');
+        cells.push(s ? decimalCell(s.factor) : '', s ? decimalCell(s.take.quantity.value) : '', s ? w(s.take, vu(r, s.take)) : '');
       }
       return cells;
     },
@@ -95,7 +96,7 @@ export function massDilutionPresenter(o: DilutePlanCliOptions): Presenter<MassDi
     compute: (input) => diluteByMass(input, o.to!, o.mass!),
     json: (r) => massDilutionJson(r, rounding),
     columns: ['input', 'target', 'total', 'take_g', 'take', 'diluent_g', 'diluent'],
-    cells: (r) => [r.written.stock, r.written.target, r.written.total, r.take.quantity.value.toFixed(), w(r.take, mu(r)), r.diluent.quantity.value.toFixed(), w(r.diluent, massUnitFor(r.diluent.quantity))],
+    cells: (r) => [r.written.stock, r.written.target, r.written.total, decimalCell(r.take.quantity.value), w(r.take, mu(r)), decimalCell(r.diluent.quantity.value), w(r.diluent, massUnitFor(r.diluent.quantity))],
     block: (r) =>
       [
         `by mass: ${r.written.stock} → ${r.written.target}, ${r.written.total} in all (dilution 1:${r.factor.value.toSignificantDigits(6).toFixed()})`,

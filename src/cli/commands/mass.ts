@@ -8,6 +8,7 @@ import type { Presenter } from '../output/presenter.js';
 import { refuseUnusedRounding, type FormulaOptions, type RoundingOptions } from './common.js';
 import type { CommandRunner } from './runner.js';
 import { declareMass } from './declarations.js';
+import { decimalCell } from '../output/format.js';
 
 interface MassCliOptions extends FormulaOptions, RoundingOptions {
   uncertainty?: boolean;
@@ -56,7 +57,7 @@ function uncertaintyPresenter(o: MassCliOptions): Presenter<MassRow> {
     },
     json: (r) => massUncertaintyJson(plainMass(r.mass), r.u!),
     columns: [...columns, 'uncertaintyValue', 'standardUncertainty'],
-    cells: (r) => [...cells(r.mass), r.u!.value.toFixed(), r.u!.standardUncertainty.toFixed()],
+    cells: (r) => [...cells(r.mass), decimalCell(r.u!.value), decimalCell(r.u!.standardUncertainty)],
     table: {
       head: [...head, 'M ± u g/mol (k = 1)'],
       align: [...align, 'right'],

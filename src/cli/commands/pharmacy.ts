@@ -27,6 +27,7 @@ import { CONTENT_FOR, readBasis } from '../../assay/sample-basis.js';
 import { displayInstruction, massUnitFor } from '../../sigfig/instruction.js';
 import type { CommandRunner } from './runner.js';
 import { declarePharmacy } from './declarations.js';
+import { decimalCell } from '../output/format.js';
 
 // --- meq --------------------------------------------------------------------------
 
@@ -189,7 +190,7 @@ export function potencyPresenter(o: PotencyCli): RowPresenter<PotencyResult> {
     compute: numbered((input) => potency(input, { basis, water: o.water, loss: o.loss, solvent: o.solvent, need: o.need })),
     json: ({ input, r }) => potencyJson(r, input, rounding, o.need ?? null),
     columns: ['input', 'line', 'basis', 'as_is', 'as_is_also', 'weigh_g', 'weigh'],
-    cells: ({ input, line, r }) => [input, line, r.basis, qtext(r.asIs, unitOfGiven(r), rounding), qtext(r.asIs, alt(r), rounding), r.weigh ? r.weigh.quantity.value.toFixed() : '', r.weigh ? displayInstruction(r.weigh, massUnitFor(r.weigh.quantity), rounding).text : ''],
+    cells: ({ input, line, r }) => [input, line, r.basis, qtext(r.asIs, unitOfGiven(r), rounding), qtext(r.asIs, alt(r), rounding), r.weigh ? decimalCell(r.weigh.quantity.value) : '', r.weigh ? displayInstruction(r.weigh, massUnitFor(r.weigh.quantity), rounding).text : ''],
     block: ({ input, r }) => {
       const lines = [`potency ${input}${r.basis === 'as-is' ? ' (as is)' : ` (${r.basis} basis)`}: ${qtext(r.asIs, unitOfGiven(r), rounding)} as is (${qtext(r.asIs, alt(r), rounding)})`];
       if (r.weigh) lines.push(`  for ${o.need!.trim()} of active: weigh ${displayInstruction(r.weigh, massUnitFor(r.weigh.quantity), rounding).text} of the material`);

@@ -9,6 +9,8 @@ import { displayInstruction, displayResult } from '../../sigfig/instruction.js';
 import type { Presenter } from '../output/presenter.js';
 import { roundingOf, type RoundingOptions } from './common.js';
 import type { SheetOptions } from './sheet-runner.js';
+import { decimalCell } from '../output/format.js';
+import { baseUnitText } from '../../sigfig/units.js';
 
 export interface PrepSheetCliOptions extends SheetOptions<PrepSheetRow>, RoundingOptions {
   abbreviations?: boolean;
@@ -31,11 +33,11 @@ export function prepSheetPresenter(o: PrepSheetCliOptions): Presenter<PrepRowRes
       return prepRow(row, options);
     },
     json: (p) => prepRowJson(p, caution, rounding),
-    columns: ['input', 'id', 'reagent', 'formula', 'form', 'target', 'volume', 'action', 'amount_base', 'amount', 'instruction', 'made'],
+    columns: ['input', 'id', 'reagent', 'formula', 'form', 'target', 'volume', 'action', 'amount_base', 'base_unit', 'amount', 'instruction', 'made'],
     cells: (p) => {
       const { ins, unit, verb } = prepRowAmount(p);
       const m = prepRowMade(p);
-      return [p.row.raw, p.row.id, p.row.reagent, p.kind === 'solid' ? p.solution.reagent.formula : p.concentrated.reagent.formula, p.kind, p.row.target, p.row.volume, verb, ins ? ins.quantity.value.toFixed() : '', ins ? displayInstruction(ins, unit, rounding).text : '', prepRowInstruction(p, rounding), m ? displayResult(m.q, m.unit, rounding).text : ''];
+      return [p.row.raw, p.row.id, p.row.reagent, p.kind === 'solid' ? p.solution.reagent.formula : p.concentrated.reagent.formula, p.kind, p.row.target, p.row.volume, verb, ins ? decimalCell(ins.quantity.value) : '', ins ? baseUnitText(ins.quantity.dims) : '', ins ? displayInstruction(ins, unit, rounding).text : '', prepRowInstruction(p, rounding), m ? displayResult(m.q, m.unit, rounding).text : ''];
     },
     block: (p) => {
       const m = prepRowMade(p);

@@ -18,6 +18,7 @@ import { prepSheetPresenter, readPrepSheet, type PrepSheetCliOptions } from './p
 import type { PrepRowResult } from '../../preparation/prep-sheet.js';
 import { runWithSheet } from './sheet-runner.js';
 import { declarePrepare } from './declarations.js';
+import { decimalCell } from '../output/format.js';
 
 interface PrepareCliOptions extends OutputOptions, RoundingOptions, PrepSheetCliOptions {
   concentration?: string;
@@ -95,10 +96,10 @@ function oneSolutionPresenter(o: PrepareCliOptions): Presenter<Prepared> {
     columns: concentrated ? ['input', 'formula', 'fraction', 'density_g_per_mL', 'molarity_M', 'molarity', 'take_L', 'take'] : ['input', 'formula', 'mass', 'display', 'made'],
     cells: (p) =>
       p.kind === 'concentrated'
-        ? [p.r.reagent.input, p.r.reagent.formula, o.fraction!.trim(), p.r.density.value.div(1000).toFixed(), p.r.molarity.value.toNumber(), res(p.r.molarity, 'M'), p.r.take ? p.r.take.quantity.value.toFixed() : '', takeText(p.r)]
+        ? [p.r.reagent.input, p.r.reagent.formula, o.fraction!.trim(), p.r.density.value.div(1000).toFixed(), p.r.molarity.value.toNumber(), res(p.r.molarity, 'M'), p.r.take ? decimalCell(p.r.take.quantity.value) : '', takeText(p.r)]
         : p.kind === 'solution'
-        ? [p.r.reagent.input, p.r.reagent.formula, p.r.mass ? p.r.mass.quantity.value.toFixed() : '', p.r.mass ? wm(p.r.mass) : '', p.r.made ? res(p.r.made, p.r.unit) : '']
-        : [p.r.use.input, p.r.use.formula, p.r.mass.quantity.value.toFixed(), wm(p.r.mass), ''],
+        ? [p.r.reagent.input, p.r.reagent.formula, p.r.mass ? decimalCell(p.r.mass.quantity.value) : '', p.r.mass ? wm(p.r.mass) : '', p.r.made ? res(p.r.made, p.r.unit) : '']
+        : [p.r.use.input, p.r.use.formula, decimalCell(p.r.mass.quantity.value), wm(p.r.mass), ''],
     block: (p) => {
       if (p.kind === 'concentrated') {
         const r = p.r;

@@ -1,8 +1,22 @@
+import type { Decimal } from '../../exact/decimal.js';
 /** Output formats every command offers. */
 export type OutputFormat = 'table' | 'json' | 'csv' | 'tsv';
 
 /** A cell value for CSV/TSV and tables. */
 export type Cell = string | number | null | undefined;
+
+/**
+ * A CSV/TSV cell for an exact decimal: as written when it has at most 17 significant digits (what
+ * a double holds), else the number JSON gives for it, so a quotient such as a gravimetric factor
+ * is not 50 digits in one format and 16 in the other.
+ *
+ * @example
+ * decimalCell(new Decimal('18.015')) // '18.015'
+ * decimalCell(new Decimal(2).div(3)) // '0.6666666666666666'
+ */
+export function decimalCell(d: Decimal): string {
+  return d.sd() <= 17 ? d.toFixed() : String(d.toNumber());
+}
 
 /**
  * Quotes a CSV/TSV cell where needed (RFC 4180 for CSV; TSV cells lose tabs and newlines).
