@@ -243,8 +243,9 @@ export function settleReadings(components: ComponentNode[], input: string): { is
     }
   });
   if (issues.length === 0) {
-    // a formula made of abbreviations alone (Ph3, Bn) may be a slip of case for the elements (PH3, BN)
-    const onlyGroups = components.length === 1 && components[0].parts.every((p) => p.kind === 'group' && p.abbreviation);
+    // one abbreviation alone (Ph3, Bn) may be a slip of case for the elements (PH3, BN); several
+    // (PhBpin) spell no formula anyone means in capitals
+    const onlyGroups = components.length === 1 && components[0].parts.length === 1 && components[0].parts.every((p) => p.kind === 'group' && p.abbreviation);
     const upper = input.trim().toUpperCase();
     const capitalised = /^[A-Z]/.test(input.trim()) && !/[DT]/.test(upper); // not thf → THF (tritium), cod → COD
     if (onlyGroups && capitalised && upper !== input.trim() && /^[A-Z0-9]+$/.test(upper) && readsAsElements(upper.replace(/[0-9]+/g, ''))) {

@@ -459,3 +459,10 @@ describe('reagent and ligand names that read as atoms', () => {
     expect(safeParseFormula('NCS', { abbreviations: 'none' }).success).toBe(true);
   });
 });
+
+describe('a formula of abbreviations only', () => {
+  it('one abbreviation may be a slip of case for the elements (Ph3 for PH3); several get no such note (PhBpin is no PHBPIN)', () => {
+    expect(formulaMass('Ph3').notes.map((n) => n.message)).toContain("'Ph3' is read as abbreviations only; if you meant the elements, write 'PH3'");
+    expect(formulaMass('PhBpin').notes.map((n) => n.code)).not.toContain('CASE_CHECK');
+  });
+});
