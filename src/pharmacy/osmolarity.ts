@@ -111,11 +111,17 @@ export function osmolarity(text: string, o: OsmolarityOptions = {}): OsmolarityR
   if (list.length > MAX_COMPONENTS) throw fail({ code: 'INPUT_TOO_LONG', message: `more than ${MAX_COMPONENTS} solutes in one solution` }, text);
   const notes: Note[] = [];
   const components: OsmolarityComponent[] = [];
+  const seen = new Set<string>();
   for (const { piece, column } of list) {
     const pair = readKeyValuePair(piece);
     if (!pair || pair.keyText === '') throw fail({ code: 'BAD_RECORD', message: `each solute is written SOLUTE=STRENGTH, e.g. 'NaCl=0.9 %'; got '${piece}'`, column }, text);
     const solute = pair.key;
     const strength = pair.value;
+    // the same solute twice is a slip or two forms to add up: refused, as pondus would not add them silently
+    if (seen.has(solute)) {
+      throw fail({ code: 'BAD_RECORD', message: `${solute} is given twice: give each solute once, at its total strength`, column }, text);
+    }
+    seen.add(solute);
     const own = (e: unknown): never => {
       if (e instanceof PondusError && e.first.code !== 'USAGE') {
         const hint = e.first.code === 'UNKNOWN_ELEMENT' && NAME_LIKE.test(solute) ? 'write the solute as its formula (NaCl, C6H12O6·H2O); pondus reads no name here but dextrose with its form' : e.first.hint;

@@ -29,6 +29,11 @@ describe('osmolarity and mEq/L of a solution', () => {
     expect(Math.round(eq['C3H5O3^-'])).toBe(28);
   });
 
+  it('refuses a solute given twice, rather than adding the two strengths', () => {
+    // 'NaCl=0.9 %, NaCl=0.45 %' was 462.0 mOsm/L with no word
+    expect(() => osmolarity('NaCl=0.9 %, NaCl=0.45 %')).toThrow('NaCl is given twice');
+  });
+
   it('says it assumes complete dissociation, and reads % as w/v', () => {
     const codes = osmolarity('NaCl=0.9 %').notes.map((n) => n.code);
     expect(codes).toContain('COMPLETE_DISSOCIATION');
