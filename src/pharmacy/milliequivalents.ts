@@ -137,7 +137,8 @@ export function milliequivalents(saltText: string, o: MilliequivalentOptions): M
     }
     noteFewFigures(target, text, 'the target', notes);
     mass = atWorkingPrecision(multiply(moles, M));
-    if (o.meq !== undefined) moles = atWorkingPrecision(moles);
+    // the amount for a target is a specification too: at working precision ('10 mmol' is 10.00 mmol, not 1 × 10¹)
+    moles = atWorkingPrecision(moles);
   }
   const fix = mode === 'mass' || (mode === 'strength' && o.measured) ? (q: Quantity) => q : atWorkingPrecision;
   const equivalents = fix(multiply(moles, eqPer));

@@ -7,6 +7,13 @@ const meqPerMl = (salt: string, c: string) => displayQuantity(milliequivalents(s
 const codes = (notes: { code: string }[]) => notes.map((n) => n.code);
 
 describe('milliequivalents of a strength (handbook values)', () => {
+  it("a target in mmol is a specification: its amount at working precision ('10 mmol' is 10.00 mmol, not 1 × 10¹)", () => {
+    const r = milliequivalents('K2HPO4', { mmol: '10 mmol' });
+    expect(r.moles.lsd).toBe(-5); // 0.01000 mol: four figures
+    // worked by hand: 10.00 mmol × 174.174 g/mol = 1.742 g
+    expect(r.mass!.value.toFixed(5)).toBe('1.74174');
+  });
+
   it('10 % potassium chloride is 1.34 mEq/mL', () => {
     // source: the usual handbook figure for KCl concentrate (e.g. hospital formularies: "10 % KCl = 1.34 mmol/mL"), from memory
     expect(meqPerMl('KCl', '10 % w/v')).toBeCloseTo(1.34, 2);

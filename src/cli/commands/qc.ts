@@ -40,7 +40,7 @@ interface BasisCli {
 const OPTION_OF: Record<keyof SampleContent, string> = { loss: '--loss', water: '--water', solvent: '--solvent' };
 
 /** Which basis to report on: --on, or the one basis the content given implies; unused content is a usage error. */
-function chooseBasis(o: BasisCli, from: SampleBasis): { basis: SampleBasis; inferred: boolean } {
+function chooseBasis(o: BasisCli, from: SampleBasis, flag: '--on' | '--to'): { basis: SampleBasis; inferred: boolean } {
   const given = (['loss', 'water', 'solvent'] as const).filter((k) => o[k] !== undefined);
   let basis: SampleBasis;
   let inferred = false;
@@ -49,17 +49,17 @@ function chooseBasis(o: BasisCli, from: SampleBasis): { basis: SampleBasis; infe
   else if (given.length === 1) {
     basis = given[0] === 'loss' ? 'dried' : given[0] === 'water' ? 'anhydrous' : 'solvent-free';
     inferred = true;
-  } else throw fail({ code: 'USAGE', message: `${given.map((k) => OPTION_OF[k]).join(' and ')} given: say which basis to report on with --on (dried, anhydrous, solvent-free, anhydrous-solvent-free)` });
+  } else throw fail({ code: 'USAGE', message: `${given.map((k) => OPTION_OF[k]).join(' and ')} given: say which basis to report on with ${flag} (dried, anhydrous, solvent-free, anhydrous-solvent-free)` });
   const used = new Set<keyof SampleContent>(basis === from ? [] : [...CONTENT_FOR[from], ...CONTENT_FOR[basis]]);
   const unused = given.filter((k) => !used.has(k));
-  if (unused.length) throw fail({ code: 'USAGE', message: `${unused.map((k) => OPTION_OF[k]).join(' and ')} would be ignored converting from ${from} to ${basis}: leave ${unused.length === 1 ? 'it' : 'them'} out or choose another --on` });
+  if (unused.length) throw fail({ code: 'USAGE', message: `${unused.map((k) => OPTION_OF[k]).join(' and ')} would be ignored converting from ${from} to ${basis}: leave ${unused.length === 1 ? 'it' : 'them'} out or choose another ${flag}` });
   const lacking = basis === from ? [] : [...used].filter((k) => o[k] === undefined);
   if (lacking.length) throw fail({ code: 'USAGE', message: `converting from ${from} to ${basis} needs ${lacking.map((k) => OPTION_OF[k]).join(' and ')} (e.g. ${OPTION_OF[lacking[0]]} '0.50 %')` });
   return { basis, inferred };
 }
 
-function validateBasisOptions(o: BasisCli, from: SampleBasis): { basis: SampleBasis; inferred: boolean } {
-  const b = chooseBasis(o, from);
+function validateBasisOptions(o: BasisCli, from: SampleBasis, flag: '--on' | '--to' = '--on'): { basis: SampleBasis; inferred: boolean } {
+  const b = chooseBasis(o, from, flag);
   if (o.limits !== undefined) readLimits(o.limits);
   return b;
 }
@@ -68,7 +68,8 @@ function report(value: Quantity, from: SampleBasis, choice: { basis: SampleBasis
   return reportOnBasis(value, from, choice.basis, { loss: o.loss, water: o.water, solvent: o.solvent, limits: o.limits, rounding: o.rounding, inferred: choice.inferred });
 }
 
-const verdict = (s: SpecificationCheck, basis: SampleBasis) => `specification ${s.limits.low}–${s.limits.high} % on the ${basis} basis: ${s.roundedText} % ${s.complies ? 'complies' : 'does NOT comply'}`;
+// the figure compared is the result rounded to the limits' last digit, which may have more digits than the result reported
+const verdict = (s: SpecificationCheck, basis: SampleBasis) => `specification ${s.limits.low}–${s.limits.high} % on the ${basis} basis: ${s.roundedText} % (the result rounded to the limits' last digit) ${s.complies ? 'complies' : 'does NOT comply'}`;
 
 // --- titration ------------------------------------------------------------------
 
@@ -180,7 +181,8 @@ export function sampleBasisPresenter(o: SampleBasisCli): RowPresenter<BasisRow> 
   const from = o.from === undefined ? 'as-is' : readBasis(o.from);
   const to = o.to ?? o.on;
   if (to === undefined && o.limits === undefined) throw fail({ code: 'USAGE', message: "give --to (dried, anhydrous, solvent-free, anhydrous-solvent-free, as-is) and the content it needs, e.g. --to dried --loss '0.50 %'" });
-  const choice = validateBasisOptions({ ...o, on: to }, from);
+  if (to !== undefined && readBasis(to) === from && o.limits === undefined) throw fail({ code: 'USAGE', message: `the result is already on the ${from} basis: choose another --to` });
+  const choice = validateBasisOptions({ ...o, on: to }, from, '--to');
   if (choice.basis === from && o.limits === undefined) throw fail({ code: 'USAGE', message: `the result is already on the ${from} basis: choose another --to` });
   return {
     compute: numbered((input) => {
