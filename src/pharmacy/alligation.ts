@@ -71,7 +71,7 @@ export function alligation(targetText: string, o: AlligationOptions): Alligation
   const kind: PercentKind = by === 'mass' ? 'w/w' : 'w/v';
   const target = readStrength(targetText, kind, notes, 'the target strength');
   const higher = readStrength(o.higher, kind, notes, 'the higher strength');
-  const lower = readStrengthOrZero(o.lower, kind, notes, target.value);
+  const lower = readStrengthOrZero(o.lower, kind, notes, target);
   for (const [name, s] of [['target', target], ['higher', higher], ['lower', lower]] as const) {
     if (!sameDims(s.value.dims, target.value.dims)) {
       throw fail(typedIssue({ code: 'INCOMPATIBLE_UNITS', operation: 'mix', first: 'target', firstDimension: baseUnitText(target.value.dims) || null, second: name, secondDimension: baseUnitText(s.value.dims) || null }));
@@ -95,19 +95,20 @@ export function alligation(targetText: string, o: AlligationOptions): Alligation
     const t = asExact(total);
     higherAmount = atWorkingPrecision(divide(multiply(t, asExact(higherParts)), asExact(spread)));
     lowerAmount = atWorkingPrecision(subtract(t, { ...higherAmount, lsd: null }));
-    const unit = total.unit?.symbol;
-    notes.push({ code: 'ALLIGATION_PARTS', message: `parts: ${displayQuantity(asExact(higherParts), target.value.unit?.symbol).figure} of the higher to ${displayQuantity(asExact(lowerParts), target.value.unit?.symbol).figure} of the lower, scaled to ${displayQuantity(total, unit).text}` });
+    notes.push({ code: 'ALLIGATION_PARTS', message: `parts: ${displayQuantity(asExact(higherParts), target.value.unit?.symbol).figure} of the higher to ${displayQuantity(asExact(lowerParts), target.value.unit?.symbol).figure} of the lower, scaled to ${o.total!.trim()}` });
   }
   return { by, target, higher, lower, higherParts, lowerParts, higherFraction, total, higherAmount, lowerAmount, notes };
 }
 
-function readStrengthOrZero(text: string, kind: PercentKind, notes: Note[], like: Quantity): Strength {
+/** A lower strength of 0 is a diluent: any kind fits it, and a bare '0 %' takes the target's kind (% v/v for '70 % v/v'). */
+function readStrengthOrZero(text: string, kind: PercentKind, notes: Note[], target: Strength): Strength {
+  const like = target.value;
   const t = text.trim();
   if (/^0+(?:\.0*)?(?:\s*[^\d.\s].*)?$/.test(t)) {
     const m = /(w\/v|w\/w|v\/v)\s*$/i.exec(t);
     notes.push({ code: 'DILUENT', message: 'the lower strength is 0: a diluent or base with none of the ingredient' });
     const isPercent = /%/.test(t);
-    return { value: { ...quantity(exact(0), null), dims: like.dims, unit: like.unit }, percent: isPercent ? (m ? (m[1].toLowerCase() as PercentKind) : kind) : null, defaulted: isPercent && !m };
+    return { value: { ...quantity(exact(0), null), dims: like.dims, unit: like.unit }, percent: isPercent ? (m ? (m[1].toLowerCase() as PercentKind) : (target.percent ?? kind)) : null, defaulted: isPercent && !m && !target.percent };
   }
   return readStrength(text, kind, notes, 'the lower strength');
 }

@@ -8,7 +8,6 @@ import type { Command } from 'commander';
 import { fail } from '../../errors/pondus-error.js';
 import { alligation, type AlligationResult } from '../../pharmacy/alligation.js';
 import { PHARMACY_CAUTION, POTENCY_CAUTION } from '../../pharmacy/caution.js';
-import { atWorkingPrecision } from '../../pharmacy/working-precision.js';
 import { milliequivalents, type MilliequivalentOptions, type MilliequivalentResult } from '../../pharmacy/milliequivalents.js';
 import { osmolarity, type OsmolarityResult } from '../../pharmacy/osmolarity.js';
 import { meqJson } from '../../pharmacy/milliequivalents-json.js';
@@ -158,7 +157,7 @@ export function alligationPresenter(o: AlligationCli): RowPresenter<AlligationRe
       const lines = [`${o.higher} and ${o.lower} to ${input}, by ${r.by}: ${parts(hp)} of ${o.higher} to ${parts(lp)} of ${o.lower}`];
       if (r.total && r.higherAmount && r.lowerAmount) {
         const unit = amountUnit(r);
-        lines.push(`  for ${qtext(atWorkingPrecision({ ...r.total, lsd: null }), unit, rounding)}: take ${qtext(r.higherAmount, unit, rounding)} of ${o.higher} and ${qtext(r.lowerAmount, unit, rounding)} of ${o.lower}`);
+        lines.push(`  for ${o.total!.trim()}: take ${qtext(r.higherAmount, unit, rounding)} of ${o.higher} and ${qtext(r.lowerAmount, unit, rounding)} of ${o.lower}`);
       }
       return lines.join('\n');
     },
