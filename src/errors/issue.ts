@@ -355,7 +355,8 @@ export type NoteCode =
   // the caution of a result that will be acted on, as a CSV notes item
   | 'CAUTION'
   | 'WEIGHTS_ABRIDGED'
-  | 'PATTERN_AVERAGE';
+  | 'PATTERN_AVERAGE'
+  | 'PERCENT_PER_VOLUME';
 
 /** A remark attached to a successful result (an assumption made, a value flagged). */
 export interface Note {

@@ -45,6 +45,29 @@ export interface DilutionResult {
 /** From this molarity (mol/L) a stock is taken as concentrated (concentrated HCl is about 12 M, H2SO4 18 M): common practice. */
 const CONCENTRATED_MOLARITY = 5;
 
+const PERCENT_KIND = /%\s*(w\/v|v\/v)?\s*$/i;
+
+/**
+ * A strength in % with no kind is read as per volume (% w/v or % v/v, one kind for both): a
+ * C1·V1 = C2·V2 dilution needs that, and a label strength by mass (37 % HCl is % w/w) is not it.
+ * Two kinds written that differ are refused.
+ */
+function percentReading(stockText: string, targetText: string | undefined, notes: Note[]): void {
+  const kinds = [stockText, targetText].map((t) => (t === undefined ? undefined : PERCENT_KIND.exec(t.trim())));
+  const [s, t] = kinds;
+  if (s?.[1] && t?.[1] && s[1].toLowerCase() !== t[1].toLowerCase()) {
+    throw fail({ code: 'INCOMPATIBLE_UNITS', message: `the stock is % ${s[1].toLowerCase()} and the target % ${t[1].toLowerCase()}: a dilution needs one kind for both` }, stockText);
+  }
+  const bare = [s, t].filter((k) => k && !k[1]);
+  if (bare.length === 0) return;
+  const kind = s?.[1] ?? t?.[1];
+  notes.push({
+    code: 'PERCENT_PER_VOLUME',
+    message: `% is read as ${kind ? `% ${kind.toLowerCase()}, as the other strength is written` : 'a strength per volume (% w/v or % v/v, the same for stock and target)'}, as C1·V1 = C2·V2 needs; a label strength by mass, such as 37 % HCl (% w/w), is not one: use \`concentratedReagent\` with its density, or \`diluteByMass\``,
+    functions: ['concentratedReagent', 'diluteByMass'],
+  });
+}
+
 /**
  * The stock volume for a dilution.
  *
@@ -66,6 +89,7 @@ export function dilute(stockText: string, targetText: string | undefined, volume
     }
   }
   const stock = measureAs(stockText, kinds, 'the stock concentration', notes);
+  percentReading(stockText, targetText, notes);
   if (targetText === undefined && takenText === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the target concentration, or the volume of stock taken (or both)' });
   const target = targetText !== undefined ? measureAs(targetText, kinds, 'the target concentration', notes) : null;
   if (target && !sameDims(stock.dims, target.dims)) throw fail(kindsDiffer(stock, target));

@@ -153,6 +153,14 @@ describe('replacing one form by another', () => {
 });
 
 describe('dilution', () => {
+  it("a bare % is read as per volume, with a note naming the reading: '37 %' may be a label strength by mass", () => {
+    // 37 % HCl is 37 % w/w (1.19 g/mL): 10.0 % w/v from it needs 22.71 mL (worked by hand), not the 27.03 mL of C1·V1 = C2·V2
+    const r = dilute('37 %', '10.0 %', '100.0 mL');
+    expect(r.notes.map((n) => n.code)).toContain('PERCENT_PER_VOLUME');
+    expect(dilute('1.00 M', '0.100 M', '100.0 mL').notes.map((n) => n.code)).not.toContain('PERCENT_PER_VOLUME');
+    expect(() => dilute('70 % v/v', '10 % w/v', '100.0 mL')).toThrow('a dilution needs one kind for both');
+  });
+
   it('volume of 1.59 M KOH for 5.00 L of 0.100 M: 0.314 L, taken as 0.3145 L', () => {
     // source: OpenStax Chemistry 2e §3.3, volume of a concentrated solution needed for dilution: 0.314 L (from memory)
     const r = dilute('1.59 M', '0.100 M', '5.00 L');
