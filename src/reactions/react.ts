@@ -47,9 +47,9 @@ export interface SpeciesLine {
   /** Mass given or produced. */
   mass: TableAmount | null;
   /**
-   * For a reactant given in mol or equivalents as a solution, a liquid by density, or at a purity:
-   * what to take of it (instructions at working precision), the volume for a liquid or solution,
-   * the mass of the material as it is; null otherwise.
+   * For a reactant planned in mol or equivalents: what to take of it (instructions at working
+   * precision), the mass of the material as it is (at its purity), and the volume for a liquid or
+   * solution; null for a reactant given by mass or volume, or with no amount.
    */
   take: { mass: TableAmount | null; volume: TableAmount | null; of: string } | null;
 }
@@ -178,11 +178,11 @@ export function react(equation: string, options: ReactOptions): ReactResult {
   const planned = new Set(read.filter(({ amount }) => amount.kind === 'equiv' || sameDims(amount.quantity.dims, AMOUNT)).map(({ s }) => s));
   const takeOf = (s: Species, moles: Quantity | null, mm: Quantity | null): SpeciesLine['take'] => {
     const mat = materials.get(s);
-    if (!moles || !mat || !planned.has(s) || (!mat.molarity && !mat.density && !mat.purity && !mat.massFraction)) return null;
+    if (!moles || !mat || !planned.has(s) || (!mm && !mat.molarity)) return null;
     const [mass, volume] = weighOrTake({ moles, ...materialForMoles(moles, mm, mat) }, moles, [], mat, s.text, rounding, notes);
     const spec = read.find((x) => x.s === s)!.spec;
     const details = [spec.solution?.trim(), spec.density && `density ${spec.density.trim()}`, spec.purity && `purity ${spec.purity.trim()}`].filter((x) => x).join('; ');
-    const of = `${mat.molarity || mat.massFraction ? 'the solution' : mat.density ? 'the liquid' : 'the reagent'} (${details})`;
+    const of = `${mat.molarity || mat.massFraction ? 'the solution' : mat.density ? 'the liquid' : 'the reagent'}${details ? ` (${details})` : ''}`;
     return mass || volume ? { mass, volume, of } : null;
   };
   const line = (s: Species, moles: Quantity | null): SpeciesLine => {

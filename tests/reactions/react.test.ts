@@ -73,11 +73,14 @@ describe('react on the reagent-table engine', () => {
     const buli = r.reactants[1];
     // worked by hand: 5.00 mmol × 1.1 = 5.50 mmol; 5.50 mmol / 2.5 mol/L = 2.200 mL
     expect(buli.take).toMatchObject({ volume: { kind: 'instruction', display: '2.200 mL' }, of: 'the solution (2.5 M in hexanes)' });
-    expect(r.reactants[0].take).toBeNull();
+    // a neat reactant planned in mmol: its mass to weigh, at working precision (5.00 mmol × 157.010 g/mol, rounded half to even)
+    expect(r.reactants[0].take?.mass?.display).toBe('0.7850 g');
     // worked by hand: 3.0 × 2.00 g / 138.121 g/mol × 102.089 g/mol = 4.435 g; / 1.08 g/mL = 4.106 mL
     const aspirin = react('C7H6O3 + C4H6O3 -> C9H8O4 + C2H4O2', { amounts: ['C7H6O3=2.00 g', 'C4H6O3=3.0 equiv, density=1.08 g/mL'] });
     expect(aspirin.reactants[1].take?.volume?.display).toBe('4.106 mL');
     expect(aspirin.reactants[1].take?.mass?.display).toBe('4.435 g');
+    // a reactant given by mass is what was weighed: nothing to take
+    expect(aspirin.reactants[0].take).toBeNull();
     // a bad solution on an amount in equiv is refused, not dropped
     expect(() => react(lithiation, { amounts: ['C6H5Br=5.00 mmol', 'C4H9Li=1.1 equiv, solution=fast'] })).toThrow();
   });
