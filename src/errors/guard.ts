@@ -1,6 +1,7 @@
 import { Decimal } from '../exact/decimal.js';
 import { getAtomData } from '../elements/atom-data.js';
 import { asPondusError, PondusError, toSafe, type SafeResult } from './pondus-error.js';
+import { OPTION_KINDS } from './option-kinds.js';
 
 /**
  * The shapes of the library's own values and of the options objects with required fields, as the
@@ -259,7 +260,46 @@ const OPTION_VALUES: readonly (readonly [string, readonly string[]])[] = [
   ['rounding', ['half-even', 'half-up']],
 ];
 
+/** The kind of a value as the option table names kinds. */
+function optionKindOf(v: unknown): string {
+  if (v === null) return 'null';
+  if (Array.isArray(v)) return 'array';
+  return typeof v;
+}
+
+/** The closest known option to a misspelt one (one edit, a swap, or a letter case apart), if any. */
+function nearestOption(key: string, known: readonly string[]): string | undefined {
+  const k = key.toLowerCase();
+  const close = (a: string, b: string): boolean => {
+    if (a === b) return true;
+    if (Math.abs(a.length - b.length) > 1) return false;
+    let i = 0;
+    while (i < a.length && i < b.length && a[i] === b[i]) i++;
+    const [ra, rb] = [a.slice(i), b.slice(i)];
+    return ra.slice(1) === rb.slice(1) || ra.slice(1) === rb || ra === rb.slice(1) || (ra[0] === rb[1] && ra[1] === rb[0] && ra.slice(2) === rb.slice(2));
+  };
+  return known.find((o) => close(k, o.toLowerCase()));
+}
+
 function checkOptions(name: string, i: number, o: Record<string, unknown>): void {
+  // an option the function does not take, or of the wrong kind, would be ignored or misread: refused
+  const kinds = Object.hasOwn(OPTION_KINDS, name) ? OPTION_KINDS[name] : null;
+  if (kinds) {
+    for (const [key, kind] of Object.entries(kinds)) {
+      if (kind.endsWith('!') && o[key] === undefined) throw new PondusError([{ code: 'BAD_ARGUMENT', message: `${name}: option ${key} (argument ${i + 1}) is required` }]);
+    }
+    for (const key of Object.keys(o)) {
+      const v = o[key];
+      if (!Object.hasOwn(kinds, key)) {
+        const known = Object.keys(kinds);
+        const near = nearestOption(key, known);
+        throw new PondusError([{ code: 'BAD_ARGUMENT', message: `${name}: '${key}' (argument ${i + 1}) is not an option of ${name}${near ? `; did you mean '${near}'?` : ''} (its options: ${known.join(', ') || 'none'})` }]);
+      }
+      const wanted = kinds[key].replace('!', '');
+      if (v === undefined || wanted === 'any' || wanted.split('|').includes(optionKindOf(v))) continue;
+      throw new PondusError([{ code: 'BAD_ARGUMENT', message: `${name}: option ${key} (argument ${i + 1}) must be ${wanted.split('|').map((w) => (w === 'array' ? 'an array' : w === 'object' ? 'an object' : `a ${w}`)).join(' or ')}, not ${describe(v)}` }]);
+    }
+  }
   for (const [key, values] of OPTION_VALUES) {
     const v = o[key];
     if (v === undefined || (typeof v === 'string' && values.includes(v))) continue;

@@ -55,7 +55,7 @@ const CASES: [string, () => unknown, string, string][] = [
   ],
   [
     'a back-titration with neither the excess nor a blank',
-    () => titrationAssay('NaOH', { sample: '0.5 g', titrant: '0.1 M', volume: '20 mL', back: '10 mL' }),
+    () => titrationAssay('NaOH', { sample: '0.5 g', titrant: '0.1 M', volume: '20 mL', back: true }),
     'a back-titration needs `added` (the excess reagent, e.g. `added: "50.00 mL of 0.5000 M"`) or `blank` (the titre of the reagent alone)',
     'a back-titration needs --added (the excess reagent, e.g. --added "50.00 mL of 0.5000 M") or --blank (the titre of the reagent alone)',
   ],
