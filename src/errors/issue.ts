@@ -356,7 +356,9 @@ export type NoteCode =
   | 'CAUTION'
   | 'WEIGHTS_ABRIDGED'
   | 'PATTERN_AVERAGE'
-  | 'PERCENT_PER_VOLUME';
+  | 'PERCENT_PER_VOLUME'
+  | 'EQUILIBRIUM_ARROW'
+  | 'STOICHIOMETRIC_AMOUNTS';
 
 /** A remark attached to a successful result (an assumption made, a value flagged). */
 export interface Note {

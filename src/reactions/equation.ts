@@ -117,6 +117,8 @@ export function parseEquation(input: string, options: ParseOptions = {}): Equati
   const left = input.slice(0, a.index);
   const right = input.slice(a.index! + a[0].length);
   const notes: Note[] = [];
+  // an equilibrium arrow: balanced as the forward reaction, which it says (the coefficients are the same both ways)
+  if (/^(<=>|<->|⇌|⇄)$/.test(a[0])) notes.push({ code: 'EQUILIBRIUM_ARROW', message: `'${a[0]}' (an equilibrium) is read as the reaction left to right; the balanced coefficients are the same both ways`, column: columnOf(input, a.index!) });
   const states = new Set<string>();
   const read = (side: string, base: number, which: Species['side']): Species[] => {
     const parts = splitSide(side, base);

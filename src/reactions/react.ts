@@ -202,13 +202,20 @@ export function react(equation: string, options: ReactOptions): ReactResult {
   const productMoles = new Map<Species, Quantity>(eq.products.map((s) => [s, multiply(extent!, nu(s))]));
   const reactants = eq.reactants.map((s) => line(s, given.get(s) ?? null));
   const products = eq.products.map((s) => line(s, productMoles.get(s)!));
+  const givenMass = new Map(read.filter(({ s, amount }) => amount.kind === 'quantity' && sameDims(amount.quantity.dims, MASS) && !materials.get(s)!.purity && !materials.get(s)!.massFraction).map(({ s, amount }) => [s, (amount as { quantity: Quantity }).quantity]));
   const excess = eq.reactants
     .filter((s) => given.has(s) && s !== limiting)
     .map((s) => {
-      const left = subtract(given.get(s)!, multiply(extent!, nu(s)));
+      const used = multiply(extent!, nu(s));
+      const left = subtract(given.get(s)!, used);
       const mm = molarMassOf(s, options);
-      return { species: s.text, moles: amt(left, 'mol')!, mass: amt(mm ? multiply(left, mm) : null, 'g') };
+      // a reactant weighed: the mass left is the mass given less the mass used, to the decimals of the masses (2.80 g − 1.05 g = 1.75 g)
+      const weighed = givenMass.get(s);
+      const massLeft = weighed && mm ? subtract(weighed, multiply(used, mm)) : mm ? multiply(left, mm) : null;
+      return { species: s.text, moles: amt(left, 'mol')!, mass: amt(massLeft, 'g') };
     });
+  const together = excess.filter((e) => e.moles.value === 0).map((e) => e.species);
+  if (together.length) notes.push({ code: 'STOICHIOMETRIC_AMOUNTS', message: `${[limiting!.text, ...together].join(' and ')} are in the ratio of the equation: all are used up (${limiting!.text} is named the limiting reagent as the first)` });
   const catalysts: ReactResult['catalysts'] = eq.catalysts.map((c) => {
     const given = catalystAmounts.find((x) => x.s === c);
     const mm = molarMassOf(c, options);

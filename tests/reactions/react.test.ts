@@ -17,6 +17,8 @@ describe('limiting reagent, yields and excess', () => {
     expect(r.products[0].moles!.display).toBe('1.00 mol');
     expect(r.products[0].mass!.display).toBe('18.0 g');
     expect(r.excess[0].moles.display).toBe('0.98 mol');
+    // the mass left of a reactant weighed is the mass given less the mass used, to the masses' decimals: 4.00 g − 2.02 g (worked by hand)
+    expect(r.excess[0].mass!.display).toBe('1.98 g');
     expect(r.percentYield!.percent.figure).toBe('83.3');
   });
 
@@ -83,6 +85,12 @@ describe('react on the reagent-table engine', () => {
     expect(aspirin.reactants[0].take).toBeNull();
     // a bad solution on an amount in equiv is refused, not dropped
     expect(() => react(lithiation, { amounts: ['C6H5Br=5.00 mmol', 'C4H9Li=1.1 equiv, solution=fast'] })).toThrow();
+  });
+
+  it('amounts in the ratio of the equation: a note that all are used up; an equilibrium arrow is named', () => {
+    const r = react('N2 + H2 -> NH3', { amounts: ['N2=1.000 mol', 'H2=3.000 mol'] });
+    expect(r.notes.map((n) => n.code)).toContain('STOICHIOMETRIC_AMOUNTS');
+    expect(react('N2 + 3H2 ⇌ 2NH3', { amounts: ['N2=1.000 mol'] }).notes.map((n) => n.code)).toContain('EQUILIBRIUM_ARROW');
   });
 
   it('percent yield of copper from copper(II) sulfate and excess zinc', () => {
