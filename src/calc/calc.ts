@@ -49,6 +49,18 @@ export interface CalcResult {
   notes: Note[];
 }
 
+const SUPERSCRIPT: Readonly<Record<string, string>> = { '2': '²', '3': '³', '-': '⁻' };
+
+/**
+ * The unit asked for after `to`, in the spelling asked: '5 mL to cm3' is 5 cm³, not 5 mL (the
+ * two are one unit; a power is written as a superscript).
+ */
+function spelledAsAsked(unit: ReturnType<typeof reportUnit>, asked: string | undefined): ReturnType<typeof reportUnit> {
+  if (!unit || asked === undefined) return unit;
+  const spelled = asked.trim().replace(/([a-zA-Zµμ])(-?)([23])(?![0-9])/g, (_m, l: string, minus: string, d: string) => l + (minus ? SUPERSCRIPT['-'] : '') + SUPERSCRIPT[d]);
+  return spelled === unit.symbol ? unit : { ...unit, symbol: spelled };
+}
+
 /**
  * Evaluates a calculation with significant figures, units and formula masses.
  *
@@ -69,7 +81,7 @@ export function calc(input: string, options: CalcOptions = {}): CalcResult {
   if (!q.value.isZero() && (q.value.e >= 300 || q.value.e < -300) && (q.value.abs().gt(MAX_RESULT) || q.value.abs().lt(MIN_RESULT))) {
     throw fail(typedIssue({ code: 'NUMBER_OUT_OF_RANGE', value: q.value.toSignificantDigits(3).toExponential(), exponentLimit: 300, reading: 'result', what: null }), input);
   }
-  const unit = reportUnit(q, tree.target ? tree.target.unit : null);
+  const unit = spelledAsAsked(reportUnit(q, tree.target ? tree.target.unit : null), tree.target?.unit);
   const shown = displayQuantity(q, unit, options.rounding);
   const uncertainty = ev.inputs.size > 0 ? inUnitOf(standardUncertainty(q, ev.inputs), unit) : null;
   const value = shown.value;

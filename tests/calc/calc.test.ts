@@ -192,3 +192,13 @@ describe('readers of amounts: a comma in a number', () => {
     expect(hint).toContain('write 1.000 mL');
   });
 });
+
+describe('the unit asked for after to', () => {
+  it('is shown in the spelling asked: cm³ and dm³ are mL and L, written as asked', () => {
+    // '5 mL to cm3' was shown as 5 mL: the spelling asked for was dropped
+    expect(calc('5 mL to cm3').display).toBe('5 cm³');
+    expect(calc('5.0 mL to dm3').display).toBe('0.0050 dm³');
+    expect(calc('2.50 g/mL to g/cm3').display).toBe('2.50 g/cm³');
+    expect(calc('2.0 g to mg').display).toBe('2.0 × 10³ mg');
+  });
+});
