@@ -53,6 +53,12 @@ describe('exit statuses: 0 all good, 1 some input failed, 2 usage', () => {
       expect(r.stderr).not.toMatch(/\n\s+at /); // no stack trace
     });
   }
+  it("a negative number read as an option: 2, with the '--' that makes it an input", () => {
+    const r = pondus(['calc', '-5 g']);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain("put -- before the inputs: pondus calc -- '-5 g'");
+    expect(pondus(['calc', '--', '-5 g']).stdout).toContain('-5 g');
+  });
   it('options that conflict only once an input is read: 2, each input still answered in its place', () => {
     // --by volume with a total that is a mass: found when the strengths are read
     const r = pondus(['alligation', '--json', '70 %', '60 %', '--higher', '95 %', '--lower', '0 %', '--by', 'volume', '--total', '300 g']);
