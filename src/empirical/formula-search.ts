@@ -140,6 +140,8 @@ export interface PreparedData {
   percents: number[];
   limits: number[];
   weights: number[];
+  /** The percents and atomic weights as exact decimals: a fit's reported residuals are computed from them. */
+  exact?: { percents: Decimal[]; weights: Decimal[] };
 }
 
 /**
@@ -154,14 +156,16 @@ export function prepareData(m: Measurements, options: SearchOptions = {}): Prepa
   const symbols = m.elements.map((e) => e.symbol);
   const values = m.elements.map((e) => e.value!);
   const total = m.kind === 'percent' ? new Decimal(100) : values.reduce((a, b) => a.plus(b), new Decimal(0));
-  const percents = values.map((v) => (m.kind === 'percent' ? v.toNumber() : v.div(total).times(100).toNumber()));
+  const exactPercents = values.map((v) => (m.kind === 'percent' ? v : v.div(total).times(100)));
+  const percents = exactPercents.map((p) => p.toNumber());
   if (percents.some((p) => p <= 0)) throw fail({ code: 'BAD_MEASUREMENT', message: 'every element must be present (a value above zero)' });
   const precision = m.elements.map((e, i) => (m.kind === 'percent' ? e.halfUnit.toNumber() : e.halfUnit.div(total).times(100).toNumber() * 2) + RELATIVE_SLACK * percents[i] + ABSOLUTE_SLACK);
   const limits = precision.map((p) => Math.max(p, tolerance));
   const d = m.elements.findIndex((e) => e.byDifference);
   if (d >= 0) limits[d] = Math.max(precision[d], limits.reduce((a, l, i) => (i === d ? a : a + l), 0));
   // limits are derived figures: twelve significant digits are plenty (0.9, not 0.8999999999999999)
-  return { symbols, percents, limits: limits.map((l) => Number(l.toPrecision(12))), weights: symbols.map(weight) };
+  const exact = { percents: exactPercents, weights: symbols.map((x) => new Decimal(getAtomData(x, null)!.average.standard.text)) };
+  return { symbols, percents, limits: limits.map((l) => Number(l.toPrecision(12))), weights: symbols.map(weight), exact };
 }
 
 function makeFit(data: PreparedData, counts: ArrayLike<number>, residuals: ArrayLike<number>, worst: number, atoms: number): FormulaFit {
@@ -170,10 +174,16 @@ function makeFit(data: PreparedData, counts: ArrayLike<number>, residuals: Array
   const order = hillOrder(map.keys());
   const c: Record<string, number> = {};
   const r: Record<string, number> = {};
+  // the residuals reported are exact decimals' nearest numbers, not the search's float sums
+  let total: Decimal | null = null;
+  if (data.exact) {
+    total = new Decimal(0);
+    for (let i = 0; i < counts.length; i++) total = total.plus(data.exact.weights[i].times(counts[i]));
+  }
   for (const s of order) {
     const i = data.symbols.indexOf(s);
     c[s] = counts[i];
-    r[s] = residuals[i];
+    r[s] = total && data.exact ? data.exact.weights[i].times(counts[i] * 100).div(total).minus(data.exact.percents[i]).toNumber() : residuals[i];
   }
   return { formula: conventionalFormula(map), hill: hillFormula(map, 0, order), counts: c, residuals: r, worst, grade: gradeOf(worst), atoms };
 }

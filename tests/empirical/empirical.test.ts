@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { errorCode, firstIssue } from '../support/error-code.js';
 import { describe, expect, it } from 'vitest';
+import { Decimal } from '../../src/exact/decimal.js';
 import { candidateFormulas, rdbe } from '../../src/empirical/candidates.js';
 import { combustion, combustionDetail } from '../../src/empirical/combustion.js';
 import { empirical, empiricalJson } from '../../src/empirical/empirical-formula.js';
@@ -243,5 +244,18 @@ describe('percents that do not add up to 100', () => {
     expect(message('C=40.0 H=6.7 O=43.3')).toMatch(/90 %.*is an element missing/);
     expect(message('C=40.0 H=6.7 O=53.3 N=5.0')).toMatch(/105 %, more than 100 %: check the values/);
     expect(message('C=40.0 H=6.7 O=53.3 N=5.0')).not.toMatch(/missing/);
+  });
+});
+
+describe('reported residuals', () => {
+  it('are the exact decimals’ nearest numbers, not float sums: CH2O from C=40.00 H=6.71 O=53.29', () => {
+    // source: CIAAW 2021 conventional weights C 12.011, H 1.008, O 15.999; residual = 100 n w / M − measured
+    const r = empirical('C=40.00 H=6.71 O=53.29');
+    const M = new Decimal('12.011').plus(new Decimal('1.008').times(2)).plus('15.999');
+    expect(r.fit.residuals.C).toBe(new Decimal('1201.1').div(M).minus(40).toNumber());
+    expect(r.fit.residuals.O).toBe(new Decimal('1599.9').div(M).minus('53.29').toNumber());
+    // from masses, the percents sum to 100 and the two residuals are exact opposites
+    const m = empirical('C=1.71 g, H=0.287 g');
+    expect(m.fit.residuals.C).toBe(-m.fit.residuals.H);
   });
 });
