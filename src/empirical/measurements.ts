@@ -139,6 +139,11 @@ function readSet(text: string): Measurements {
     const m = /^([-+]?[0-9.]+(?:[eE][-+]?[0-9]+)?)\s*(%|[A-Za-zµ]+)?$/.exec(raw);
     if (!m) throw fail({ code: 'BAD_MEASUREMENT', message: `'${key}=${raw}' is not a number, a mass or 'rest'`, column: valueColumn }, text);
     const n = readNumber(m[1], valueColumn);
+    // an element symbol after a value is an element written without its value ('N=28.85 O'), not a unit
+    if (m[2] && m[2] !== '%' && isElementSymbol(m[2]) && !/^(g|mg|kg|ug|µg|ng)$/.test(m[2])) {
+      const at = valueColumn + raw.lastIndexOf(m[2]);
+      throw fail({ code: 'BAD_MEASUREMENT', message: `'${m[2]}' after ${key}=${m[1]} has no value: each element is written SYMBOL=VALUE`, column: at, length: m[2].length, hint: `for ${m[2]} by difference write ${m[2]}=rest` }, text);
+    }
     const unit = m[2] && m[2] !== '%' ? unitOf(m[2], valueColumn) : null;
     const thisKind = unit ? 'mass' : 'percent';
     if (unit && !sameDims(unit.dims, MASS)) throw fail({ code: 'BAD_MEASUREMENT', message: `${key}: give a mass (g, mg) or a percent, not ${m[2]}`, column: valueColumn }, text);

@@ -259,3 +259,12 @@ describe('reported residuals', () => {
     expect(m.fit.residuals.C).toBe(-m.fit.residuals.H);
   });
 });
+
+describe('an element written without its value', () => {
+  it("'N=28.85 O' points at the O and offers O=rest, not an unknown unit at the 28.85", () => {
+    const i = firstIssue(() => empirical('C=49.48 H=5.19 N=28.85 O'));
+    expect(i.code).toBe('BAD_MEASUREMENT');
+    expect(i.hint).toBe('for O by difference write O=rest');
+    expect(empirical('C=49.48 H=5.19 N=28.85 O=rest').empirical).toBe('C4H5N2O'); // caffeine's empirical formula (from memory)
+  });
+});
