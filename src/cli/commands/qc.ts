@@ -107,7 +107,7 @@ export function titrationPresenter(o: TitrationCli): RowPresenter<Titration> {
     cells: ({ input, line, r }) => {
       const a = reportedIn(r.t.assay, '%', rounding);
       const b = reportedIn(r.rep.value, '%', rounding);
-      return [input, line, r.t.analyte.formula, r.t.kind, r.t.ratio.text, reportedIn(r.t.moles, 'mmol', rounding).reported, a.value, a.reported, r.rep.basis, b.value, b.reported, r.rep.spec ? `${r.rep.spec.limits.low}-${r.rep.spec.limits.high}` : '', r.rep.spec ? (r.rep.spec.complies ? 'yes' : 'no') : ''];
+      return [input, line, r.t.analyte.formula, r.t.kind, r.t.ratio.text, reportedIn(r.t.moles, 'mmol', rounding).value, a.value, a.reported, r.rep.basis, b.value, b.reported, r.rep.spec ? `${r.rep.spec.limits.low}-${r.rep.spec.limits.high}` : '', r.rep.spec ? (r.rep.spec.complies ? 'yes' : 'no') : ''];
     },
     block: ({ input, r: { t, rep } }) => {
       const lines = [`${input}  (${hillAside(t.analyte)}M = ${displayMolarMass(t.analyte)} g/mol), ${t.kind === 'back' ? 'back-titration' : 'direct titration'}`];
@@ -152,7 +152,7 @@ export function standardisePresenter(o: StandardiseCli): RowPresenter<Standardis
     columns: ['input', 'line', 'standard', 'ratio', 'moles_mmol', 'molarity_M', 'molarity'],
     cells: ({ input, line, r }) => {
       const m = reportedIn(r.molarity, 'M', rounding);
-      return [input, line, r.standard.formula, r.ratio.text, reportedIn(r.moles, 'mmol', rounding).reported, m.value, m.reported];
+      return [input, line, r.standard.formula, r.ratio.text, reportedIn(r.moles, 'mmol', rounding).value, m.value, m.reported];
     },
     block: ({ input, r }) =>
       [
