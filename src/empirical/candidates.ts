@@ -1,6 +1,6 @@
 /**
  * Candidate formulas for an accurate mass (of a neutral molecule or of an ion written in the
- * notation of the trade) and/or found percents: every formula in the element ranges whose
+ * notation of the trade), checked against found percents if given: every formula in the element ranges whose
  * monoisotopic mass lies in the window, filtered by chemical plausibility and ranked by a
  * documented score. Any element may be searched (metal complexes, boronates, silanes, salts).
  *

@@ -42,6 +42,7 @@ describe('exit statuses: 0 all good, 1 some input failed, 2 usage', () => {
     ['a choice not offered', ['mass', 'H2O', '--weights', 'old']],
     ['no inputs', ['mass']],
     ['a shell not offered', ['completion', 'tcsh']],
+    ['candidates with found percents and no mass', ['candidates', '--found', 'C=40.00 H=6.71 O=53.29']],
     ['--rounding where JSON carries every digit', ['mass', 'H2O', '--json', '--rounding', 'half-up']],
     ['--rounding where CSV carries every digit', ['composition', 'H2O', '--csv', '--rounding', 'half-up']],
   ];

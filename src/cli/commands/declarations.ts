@@ -123,7 +123,7 @@ export function declareEmpirical(program: Command): { empirical: Command; combus
   const candidates = withOutputOptions(
     program
       .command('candidates')
-      .description('candidate formulas for an accurate mass or m/z and/or found percents, any element, filtered for plausibility (RDBE, SENIOR, element ratios) and ranked by score')
+      .description('candidate formulas for an accurate mass or m/z (or a molar mass), checked against found percents if given, any element, filtered for plausibility (RDBE, SENIOR, element ratios) and ranked by score')
       .argument('[masses...]', 'neutral monoisotopic masses in u, or m/z values with --ion (or molar masses with --molar-mass)')
       .option('--ppm <ppm>', 'mass tolerance in ppm', '5')
       .option('--ion <notation>', "the masses are m/z values of this ion: '[M+H]+', '[M+Na]+', '[M-H]-', '[M+2H]2+', …")

@@ -278,6 +278,7 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
     const given = (name: string) => cmd.getOptionValueSource(name) === 'cli';
     if (o.found === undefined && given('tolerance')) throw fail({ code: 'USAGE', message: '--tolerance applies to found percents: give --found too, or drop --tolerance' });
     // found values typed unquoted: --found C=40.00 H=6.71 leaves H=6.71 among the masses
+    if (inputs.length === 0 && o.found !== undefined) throw fail({ code: 'USAGE', message: "--found checks candidates near a mass: give the accurate mass or m/z (or --molar-mass); for a formula from found percents alone, use pondus empirical 'C=40.00 H=6.71 O=rest'" });
     const runs = pairRuns(inputs, false);
     if (runs.length > 0) {
       if (o.found === undefined) throw fail({ code: 'USAGE', message: `${runs[0].pairs.join(' ')}: found percents go with --found, e.g. --found 'C=40.00 H=6.71'` });
