@@ -204,6 +204,18 @@ function unexpectedCharacter(input: string, offset: number): Issue {
 
 const CHARGE_TOKENS = new Set(['CaretCharge', 'SuperscriptCharge']);
 
+/** For a charge written after the formula the way some texts do ('Ca+2', 'SO4--'): the same charge in pondus's notation. */
+function chargeWritten(input: string, at: number): string | undefined {
+  const head = input.slice(0, at);
+  const tail = input.slice(at).trim();
+  const signDigits = /^([+-])([1-9][0-9]?)$/.exec(tail);
+  const repeated = /^(\++|-+)$/.exec(tail);
+  if (!head.trim() || (!signDigits && !repeated)) return undefined;
+  const sign = signDigits ? signDigits[1] : tail[0];
+  const n = signDigits ? Number(signDigits[2]) : tail.length;
+  return `for a charge of ${n === 1 ? '' : n}${sign === '+' ? '+' : '−'}, write ${head}^${n === 1 ? '' : n}${sign}`;
+}
+
 function syntaxIssue(input: string, err: IRecognitionException, tokens: IToken[]): Issue {
   const t = err.token;
   const isEof = t.tokenType.name === 'EOF' || Number.isNaN(t.startOffset);
@@ -217,7 +229,10 @@ function syntaxIssue(input: string, err: IRecognitionException, tokens: IToken[]
   const name = t.tokenType.name;
   const prev = tokens[tokens.indexOf(t) - 1];
   if (prev && (CHARGE_TOKENS.has(prev.tokenType.name) || prev.tokenType.name === 'Sign')) {
-    return typedIssue({ code: 'MISPLACED_CHARGE', charge: prev.image, following: t.image, column: columnOf(input, prev.startOffset), length: prev.image.length });
+    const issue: Issue = typedIssue({ code: 'MISPLACED_CHARGE', charge: prev.image, following: t.image, column: columnOf(input, prev.startOffset), length: prev.image.length });
+    const written = chargeWritten(input, prev.startOffset);
+    if (written) issue.hint = written;
+    return issue;
   }
   if (CHARGE_TOKENS.has(name) || name === 'Sign') {
     return typedIssue({ code: 'MISPLACED_CHARGE', charge: t.image, following: null, column, length });

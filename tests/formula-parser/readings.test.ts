@@ -466,3 +466,16 @@ describe('a formula of abbreviations only', () => {
     expect(formulaMass('PhBpin').notes.map((n) => n.code)).not.toContain('CASE_CHECK');
   });
 });
+
+describe('a charge written after the formula in another notation', () => {
+  it("'Ca+2', 'SO4--' and 'Fe+++' are refused with the same charge written the pondus way", () => {
+    const hint = (f: string) => {
+      const r = safeParseFormula(f);
+      return r.success ? 'parsed' : r.error.issues[0].hint;
+    };
+    expect(hint('Ca+2')).toBe('for a charge of 2+, write Ca^2+');
+    expect(hint('SO4--')).toBe('for a charge of 2−, write SO4^2-');
+    expect(hint('Fe+++')).toBe('for a charge of 3+, write Fe^3+');
+    expect(safeParseFormula('Ca^2+').success).toBe(true);
+  });
+});
