@@ -176,7 +176,7 @@ export function combustionDetail(options: CombustionOptions): CombustionDetail {
   const found = elements.slice(1).reduce((acc, e) => add(acc, e.mass), elements[0].mass);
   const rest = subtract(sample, found);
   if (rest.value.isNegative() && rest.value.abs().gt(new Decimal(10).pow(rest.lsd ?? 0))) {
-    throw fail({ code: 'BAD_MEASUREMENT', message: `the elements found weigh more than the sample (${found.value.toFixed(5)} g > ${sample.value.toFixed()} g): check the masses` });
+    throw fail({ code: 'BAD_MEASUREMENT', message: `the elements found weigh more than the sample (${found.value.toFixed(5)} g > the sample's ${options.sample.trim()}): check the masses` });
   }
   if (rest.value.gt(new Decimal(10).pow(rest.lsd ?? 0))) {
     elements.push({ symbol: 'O', mass: rest, percent: multiply(divide(rest, sample), hundred), byDifference: true });
