@@ -180,6 +180,12 @@ const ALIASES: Record<string, string> = {
   'g cm⁻³': 'g/mL',
   'g/dm³': 'g/L',
   'g/dm3': 'g/L',
+  // the SI unit of density: 1 kg/m³ is 1 g/L exactly
+  'kg/m³': 'g/L',
+  'kg/m3': 'g/L',
+  'kg·m⁻³': 'g/L',
+  'kg m⁻³': 'g/L',
+  'kg m-3': 'g/L',
   'g/100mL': 'g/100 mL',
   'g/100 ml': 'g/100 mL',
   'g/100ml': 'g/100 mL',

@@ -202,3 +202,11 @@ describe('the unit asked for after to', () => {
     expect(calc('2.0 g to mg').display).toBe('2.0 × 10³ mg');
   });
 });
+
+describe('the SI unit of density', () => {
+  it('kg/m³ is g/L exactly (SI Brochure, 9th edition): 1080 kg/m3 is 1.08 g/mL', () => {
+    // source: SI Brochure 9th ed.: 1 kg/m³ = 10⁻³ g/cm³; common practice for reagent densities
+    expect(calc('1080 kg/m3 to g/mL').display).toBe('1.08 g/mL');
+    expect(calc('1.08 g/mL to kg/m³').display).toBe('1.08 × 10³ kg/m³');
+  });
+});
