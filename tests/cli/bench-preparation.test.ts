@@ -92,6 +92,15 @@ describe('pondus potency and strength', () => {
 });
 
 describe('pondus prepare --sheet', () => {
+  it('--weights abridged reaches the sheet and one reagent alike, with its note', () => {
+    // source: CIAAW 2021 abridged table: Na 22.990, Cl 35.45; 0.1000 M × 0.2500 L × 58.44 g/mol = 1.461 g
+    const one = jsonLines(pondus(['prepare', 'NaCl', '--concentration', '0.1000 M', '--volume', '250.0 mL', '--weights', 'abridged', '--json']).stdout)[0];
+    expect(one.mass.display).toBe('1.461 g');
+    expect(noteCodes(one)).toContain('WEIGHTS_ABRIDGED');
+    const sheet = jsonLines(pondus(['prepare', '--sheet', SHEET, '--weights', 'abridged', '--json']).stdout);
+    expect(sheet.every((r) => noteCodes(r).includes('WEIGHTS_ABRIDGED'))).toBe(true);
+  });
+
   it('gives one printable instruction per row, in order, with the concentration made', () => {
     const r = pondus(['prepare', '--sheet', SHEET]);
     expect(r.status).toBe(0);

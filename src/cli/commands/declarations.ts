@@ -228,6 +228,7 @@ export function declarePrepare(program: Command): Command {
         .option('--fraction <w>', "a concentrated liquid reagent by its mass fraction: '37 %' (% w/w, as on the label); gives its molarity and the volume to take")
         .option('--density <d>', "density of the concentrated reagent: '1.19 g/mL' (from the label; common grades are in a table)")
         .option('--replace <form=amount>', "weigh this reagent in place of another form: --replace 'CuSO4=10.00 g'")
+        .addOption(new Option('--weights <table>', 'atomic weights: standard (CIAAW 2021 + 2024 revisions) or abridged (five figures)').choices(['standard', 'abridged']).default('standard'))
         .option('--abbreviations', ABBREVIATIONS_HELP),
     ),
   );

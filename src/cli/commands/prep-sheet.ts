@@ -11,9 +11,11 @@ import { roundingOf, type RoundingOptions } from './common.js';
 import type { SheetOptions } from './sheet-runner.js';
 import { decimalCell } from '../output/format.js';
 import { baseUnitText } from '../../sigfig/units.js';
+import type { WeightTable } from '../../elements/atom-data.js';
 
 export interface PrepSheetCliOptions extends SheetOptions<PrepSheetRow>, RoundingOptions {
   abbreviations?: boolean;
+  weights?: WeightTable;
 }
 
 export { readPrepSheet };
@@ -25,7 +27,7 @@ export function prepSheetPresenter(o: PrepSheetCliOptions): Presenter<PrepRowRes
   if (!rows) throw fail({ code: 'USAGE', message: 'a prep sheet needs --sheet FILE' });
   const rounding = roundingOf(o);
   const caution = prepSheetCaution(Object.values(rows));
-  const options = { abbreviations: !!o.abbreviations };
+  const options = { abbreviations: !!o.abbreviations, weights: o.weights ?? 'standard' };
   return {
     compute: (input) => {
       const row = rows[input];

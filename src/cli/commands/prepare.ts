@@ -76,7 +76,7 @@ export function preparePresenter(o: PrepareCliOptions): Presenter<Prepared> | Pr
 function oneSolutionPresenter(o: PrepareCliOptions): Presenter<Prepared> {
   checkPrepareOptions(o);
   const rounding = roundingOf(o);
-  const options = { abbreviations: !!o.abbreviations };
+  const options = { abbreviations: !!o.abbreviations, weights: o.weights ?? 'standard' };
   const w = (i: Instruction, unit?: string) => displayInstruction(i, unit ?? i.quantity.unit?.symbol, rounding).text;
   const wm = (i: Instruction) => w(i, massUnitFor(i.quantity));
   const res = (q: Parameters<typeof displayResult>[0], unit?: string) => displayResult(q, unit ?? q.unit?.symbol, rounding).text;
