@@ -51,7 +51,7 @@ export type BareShare =
  * Reads a share of a whole (an assay, a purity, a water content, a mass fraction): '98.5 %',
  * '0.32 %', '985 mg/g'. A number with no unit above 1 is refused with the per cent it must mean;
  * one at most 1 is refused with both readings, or read as a fraction of 1 with a note, as the
- * caller says.
+ * caller says; a bare 0 is 0 % either way.
  *
  * @param text - the share as written.
  * @param what - what it is, for messages: 'the water content'.
@@ -71,10 +71,10 @@ export function readShare(text: string, what: string, notes: Note[], o: BareShar
   if (!q.unit) {
     const percent = q.value.times(100).toFixed();
     if (q.value.gt(1)) throw fail({ code: 'BAD_AMOUNT', message: `${what} ${t} has no unit: as a fraction of 1 it would be ${percent} %`, hint: `for per cent write '${t} %'` }, text);
-    if (o.bare === 'refuse') {
+    if (o.bare === 'refuse' && !q.value.isZero()) {
       throw fail({ code: 'BAD_AMOUNT', message: `${what} ${t} has no unit, and reads two ways`, hint: `for ${t} per cent write '${t} %'; for a fraction ${t} of 1 write '${percent} %'` }, text);
     }
-    notes.push({ code: o.note, message: `${what} ${t} has no unit: read as a fraction of 1 (${percent} %)` });
+    if (o.bare === 'fraction') notes.push({ code: o.note, message: `${what} ${t} has no unit: read as a fraction of 1 (${percent} %)` });
   }
   if (o.below ? q.value.gte(1) : q.value.gt(1)) throw fail({ code: 'BAD_AMOUNT', message: `${what} must be ${o.below ? 'below' : 'at most'} 100 %: '${t}'` }, text);
   return q;

@@ -45,11 +45,18 @@ export interface PartShare {
  */
 export function partShare(whole: MassDetail, part: string, options: MassOptions = {}): PartShare {
   if (typeof part !== 'string') throw fail({ code: 'BAD_ARGUMENT', message: `the part must be a formula written as text ('H2O'), not ${typeof part}` });
-  const frag = formulaMassDetail(part, { ...options });
+  const notes: Note[] = [];
+  // '2H2O' in a formula with no nuclide labels can only be 2 × H2O (no ²H₂O is in it): read so, and said
+  const lead = /^\s*([1-9][0-9]*)(?=[A-Z])/.exec(part);
+  let text = part;
+  if (lead && [...whole.atoms.keys()].every((k) => /^[A-Z][a-z]?$/.test(k))) {
+    text = `(${part.slice(lead[0].length).trim()})${lead[1]}`;
+    notes.push({ code: 'PART_MULTIPLIER', message: `the ${lead[1]} before the part is read as ${lead[1]} × ${part.slice(lead[0].length).trim()}: ${whole.input} has no nuclide label for it to be a mass number of` });
+  }
+  const frag = formulaMassDetail(text, { ...options });
   const fragCounts = frag.atoms;
   let count: Amount | null = countWritten(whole.tree, fragCounts);
   let countedFrom: PartShare['countedFrom'] = 'written';
-  const notes: Note[] = [];
   if (count === null) {
     count = countFromAtoms(whole.atoms, fragCounts);
     countedFrom = 'atoms';

@@ -290,6 +290,8 @@ function checkOptions(name: string, i: number, o: Record<string, unknown>): void
     }
     for (const key of Object.keys(o)) {
       const v = o[key];
+      // an absent value changes nothing ({ ...options, rounding: undefined }): only a value given is checked
+      if (v === undefined) continue;
       if (!Object.hasOwn(kinds, key)) {
         const known = Object.keys(kinds);
         const near = nearestOption(key, known);

@@ -358,7 +358,8 @@ export type NoteCode =
   | 'PATTERN_AVERAGE'
   | 'PERCENT_PER_VOLUME'
   | 'EQUILIBRIUM_ARROW'
-  | 'STOICHIOMETRIC_AMOUNTS';
+  | 'STOICHIOMETRIC_AMOUNTS'
+  | 'PART_MULTIPLIER';
 
 /** A remark attached to a successful result (an assumption made, a value flagged). */
 export interface Note {

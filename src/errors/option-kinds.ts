@@ -31,7 +31,7 @@ export const OPTION_KINDS: Readonly<Record<string, Readonly<Record<string, strin
   potency: { basis: 'string', loss: 'string', need: 'string', solvent: 'string', water: 'string' },
   prepRow: { abbreviations: 'boolean|string', maxLength: 'number', weights: 'string' },
   prepareSolution: { abbreviations: 'boolean|string', as: 'string', concentration: 'string', maxLength: 'number', purity: 'string', purityBasis: 'string', volume: 'string!', weighed: 'string', weights: 'string' },
-  react: { abbreviations: 'boolean|string', actual: 'string', amounts: 'array!', catalysts: 'array', fix: 'object|string', maxLength: 'number', rounding: 'string' },
+  react: { abbreviations: 'boolean|string', actual: 'string', amounts: 'array!', catalysts: 'array', fix: 'object|string', maxLength: 'number', rounding: 'string', weights: 'string' },
   reagentTable: { abbreviations: 'boolean|string', actual: 'string', concentration: 'string', equation: 'string', maxLength: 'number', rounding: 'string', solvent: 'string' },
   renderError: { emphasis: 'function', line: 'number', naming: 'object' },
   replicates: { level: 'number', rounding: 'string' },

@@ -217,6 +217,20 @@ export function caseTrapNotes(components: ComponentNode[]): Note[] {
   return [...twoLetterTrapNotes(components), ...capitalSlipNotes(components)];
 }
 
+/** The synthetic case traps (No, Nh, Hs, Cn) written inside brackets, first of each. */
+function bracketedSynthetic(components: ComponentNode[]): AtomNode[] {
+  const found: AtomNode[] = [];
+  const visit = (parts: PartNode[], inside: boolean) => {
+    for (const p of parts) {
+      if (p.kind === 'atom') {
+        if (inside && p.massNumber === null && SYNTHETIC_TRAPS.has(p.symbol) && !found.some((f) => f.symbol === p.symbol)) found.push(p);
+      } else if (!p.abbreviation) for (const c of p.body) visit(c.parts, true);
+    }
+  };
+  for (const c of components) visit(c.parts, false);
+  return found;
+}
+
 /** The note for a two-letter symbol that may be two light atoms (Co for CO). */
 function twoLetterTrapNotes(components: ComponentNode[]): Note[] {
   const atoms: AtomNode[] = [];
@@ -228,13 +242,16 @@ function twoLetterTrapNotes(components: ComponentNode[]): Note[] {
     }
   }
   const traps = atoms.filter((a) => a.massNumber === null && isCaseTrap(a.symbol));
-  if (traps.length === 0) return [];
+  const inBrackets = brackets ? bracketedSynthetic(components) : [];
+  if (traps.length === 0 && inBrackets.length === 0) return [];
   const symbols = new Set(atoms.map((a) => a.symbol));
   const lone = symbols.size === 1 && components.length === 1 && atoms.length === 1 && atoms[0].count !== null && !brackets;
   const organic = !brackets && components.length === 1 && symbols.has('C') && [...symbols].every((s) => ORGANIC.has(s) || isCaseTrap(s));
   // elsewhere: a synthetic element (NaNo3), or the same symbol twice in a row (CoCo3, surely CoCO3)
   const doubled = (t: AtomNode) => atoms.some((a, i) => i + 1 < atoms.length && atoms[i + 1] === t && a.symbol === t.symbol && a.count === null && a.span.end === t.span.start);
   const noted = lone || organic ? traps : traps.filter((t) => SYNTHETIC_TRAPS.has(t.symbol) || doubled(t));
+  // a synthetic element in brackets too: Ca(No3)2 is surely Ca(NO3)2
+  for (const t of inBrackets) if (!noted.some((n) => n.symbol === t.symbol)) noted.push(t);
   const seen = new Set<string>();
   const notes: Note[] = [];
   for (const t of noted) {
@@ -245,12 +262,27 @@ function twoLetterTrapNotes(components: ComponentNode[]): Note[] {
   return notes;
 }
 
+/** True for one component of atoms only, written in Hill order: C, H, then the rest alphabetically (all alphabetically without C). */
+function inHillOrder(components: ComponentNode[]): boolean {
+  if (components.length !== 1) return false;
+  const parts = components[0].parts;
+  if (parts.some((p) => p.kind !== 'atom')) return false;
+  const symbols = (parts as AtomNode[]).map((a) => a.symbol);
+  const rank = (s: string, hasC: boolean) => (hasC && s === 'C' ? '0' : hasC && s === 'H' ? '1' : `2${s}`);
+  const hasC = symbols.includes('C');
+  for (let i = 1; i < symbols.length; i++) if (rank(symbols[i - 1], hasC) >= rank(symbols[i], hasC)) return false;
+  return true;
+}
+
 /**
  * The notes for two capitals read as two one-letter elements where the pair, second letter in
  * lower case, is a common element ('CUSO4' as C, U, S, O4; 'NaCI' with a capital I for the L of
  * Cl). Both readings are real formulas (CI4, NI3), so the formula is computed, with a note.
  */
 function capitalSlipNotes(components: ComponentNode[]): Note[] {
+  // a formula written in Hill order (C6H4INO2, C6H6BIO2) has its capitals in that order on purpose:
+  // only CI (a capital I for the L of Cl) is checked there
+  const hill = inHillOrder(components);
   const found = new Set<string>();
   const visit = (parts: PartNode[]) => {
     for (let i = 1; i < parts.length; i++) {
@@ -258,7 +290,7 @@ function capitalSlipNotes(components: ComponentNode[]): Note[] {
       const b = parts[i];
       if (a.kind !== 'atom' || b.kind !== 'atom' || a.massNumber !== null || b.massNumber !== null || a.count !== null || a.span.end !== b.span.start) continue;
       const pair = a.symbol + b.symbol;
-      if (Object.hasOwn(CAPITAL_SLIPS, pair)) found.add(pair);
+      if (Object.hasOwn(CAPITAL_SLIPS, pair) && (pair === 'CI' || !hill)) found.add(pair);
     }
     for (const p of parts) if (p.kind === 'group' && !p.abbreviation) for (const c of p.body) visit(c.parts);
   };

@@ -183,10 +183,12 @@ export function plainVector(input: string): PlainVector | null {
       const id = symbolId(t, pos, end);
       if (id < 0) return null;
       if (leadingNumber[depth] !== 0 && componentParts[depth] === 0 && (c !== 68 && c !== 84 || end - pos > 1) && isMassNumberOf(t.slice(pos, end), leadingNumber[depth])) return null;
+      // noted in any formula, at any depth: a synthetic element (NaNo3, Ca(No3)2)
+      if (lastTrap && isSyntheticTrap(t.slice(pos, end))) return null;
       if (lastTrap && depth === 0) {
         trapAtTop = true;
-        // noted in any formula: a synthetic element (NaNo3), or the same symbol twice in a row (CoCo3)
-        if (isSyntheticTrap(t.slice(pos, end)) || (sp > 0 && entryId[sp - 1] === id && lastAtomEnd === pos)) return null;
+        // noted in any formula: the same symbol twice in a row (CoCo3)
+        if (sp > 0 && entryId[sp - 1] === id && lastAtomEnd === pos) return null;
       }
       const k = readCount(t, end, limit, true);
       if (k === GIVE_UP) return null;

@@ -61,6 +61,10 @@ function percentReading(stockText: string, targetText: string | undefined, notes
   const bare = [s, t].filter((k) => k && !k[1]);
   if (bare.length === 0) return;
   const kind = s?.[1] ?? t?.[1];
+  // % w/v is a mass per volume, a bare % a share: the two cannot be set against each other
+  if (kind && kind.toLowerCase() === 'w/v') {
+    throw fail({ code: 'INCOMPATIBLE_UNITS', message: `one strength is % w/v and the other a bare %: write % w/v after both (or % v/v after both)` }, stockText);
+  }
   notes.push({
     code: 'PERCENT_PER_VOLUME',
     message: `% is read as ${kind ? `% ${kind.toLowerCase()}, as the other strength is written` : 'a strength per volume (% w/v or % v/v, the same for stock and target)'}, as C1·V1 = C2·V2 needs; a label strength by mass, such as 37 % HCl (% w/w), is not one: use \`concentratedReagent\` with its density, or \`diluteByMass\``,

@@ -8,7 +8,7 @@
 import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
 import { AMOUNT, MASS, measureAs } from '../calc/measure.js';
-import { formulaMassDetail } from '../mass/formula-mass.js';
+import { formulaMassDetail, type MassOptions } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { exact } from '../sigfig/measured.js';
 import { divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
@@ -24,6 +24,8 @@ import type { Rational } from './rational.js';
 import { readKeyValuePair } from '../key-values/read-key-values.js';
 
 export interface ReactOptions extends BalanceOptions {
+  /** The atomic-weight table of the molar masses: 'standard' (the default) or 'abridged'. */
+  weights?: MassOptions['weights'];
   /**
    * Amounts of reactants: 'H2=4.00 g', 'HCl=25.0 mL of 0.100 M', 'O2=0.500 mol',
    * 'Ac2O=2.00 mL, density=1.08 g/mL', 'Ac2O=1.5 equiv', with purity=, solution= as in a reagent table.

@@ -160,6 +160,12 @@ export function molesFromQuantity(q: Quantity, molarMass: Quantity | null, m: Ma
     return { moles: q, ...materialForMoles(q, molarMass, m) };
   }
   if (sameDims(q.dims, MASS)) {
+    // a mass of a solution given by its molarity: its volume from the density, then n = c·V
+    if (m.molarity) {
+      if (!m.density) throw fail({ code: 'BAD_AMOUNT', message: `a mass of ${what} as a solution by molarity needs the solution's density ('density=1.016 g/mL'), or give the volume taken` });
+      const volume = divide(q, m.density);
+      return { moles: multiply(volume, m.molarity), mass: q, volume };
+    }
     const pure = share ? multiply(q, share) : q;
     const moles = divide(pure, needM());
     return { moles, mass: q, volume: m.density ? divide(q, m.density) : m.molarity ? divide(moles, m.molarity) : null };

@@ -16,6 +16,10 @@ describe('results on another basis of the sample', () => {
     expect(firstIssue(() => convertSampleBasis('0.991', 'as-is', 'dried', { loss: '0.50 %' })).hint).toBe("for per cent write '0.991 %'; for a fraction 0.991 of 1 write '99.1 %'");
   });
 
+  it('a bare 0 content is 0 % either way, and is read', () => {
+    expect(pct(convertSampleBasis('99.1 %', 'as-is', 'dried', { loss: '0' }).converted)).toBe('99.1 %');
+  });
+
   it('refuses a content that neither basis removes: it would be dropped', () => {
     expect(firstIssue(() => convertSampleBasis('98.5 %', 'as-is', 'dried', { loss: '0.8 %', water: '2.0 %' })).code).toBe('USAGE');
   });

@@ -85,9 +85,9 @@ describe('pondus potency and strength', () => {
   it('ratio strengths and the other forms, one flat CSV column each', () => {
     const r = pondus(['strength', '1:1000', '0.02 % w/v', '--csv']);
     const [head, a, b] = csvRows(r.stdout);
-    expect(head).toBe('input,line,kind,ratio,percent_w_per_v,mg_per_mL,mg_per_dL,g_per_L,percent_w_per_w,mg_per_g,mg_per_kg,percent_v_per_v,notes,error,message');
-    expect(a.startsWith('1:1000,1,w/v,1:1000,0.1,1,100,1,')).toBe(true);
-    expect(b.startsWith('0.02 % w/v,2,w/v,1:5000,0.02,0.2,20,0.2,')).toBe(true);
+    expect(head).toBe('input,line,kind,ratio,percent_w_per_v,mg_per_mL,mg_per_dL,percent_w_per_w,mg_per_g,mg_per_kg,percent_v_per_v,g_per_L,notes,error,message');
+    expect(a.startsWith('1:1000,1,w/v,1:1000,0.1,1,100,')).toBe(true);
+    expect(b.startsWith('0.02 % w/v,2,w/v,1:5000,0.02,0.2,20,')).toBe(true);
   });
 });
 

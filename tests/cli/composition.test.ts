@@ -17,6 +17,14 @@ describe('pondus composition', () => {
     expect(j.elements.map((e: { symbol: string }) => e.symbol)).toEqual(['Cu', 'H', 'O', 'S']);
   });
 
+  it("--part 2H2O in a formula with no nuclide label is 2 × H2O, with a note", () => {
+    // source: CIAAW 2021 weights: 2 × 18.015 / 172.164 = 20.93 % (CaSO4·2H2O)
+    const r = pondus(['composition', 'CaSO4·2H2O', '--part', '2H2O']);
+    expect(r.status).toBe(0);
+    expect(r.stdout).toContain('20.93 % by mass');
+    expect(r.stdout).toContain('read as 2 × H2O');
+  });
+
   it('fails cleanly for a fragment that is not there', () => {
     const r = pondus(['composition', '--part', 'NaCl', 'H2O']);
     expect(r.status).toBe(1);

@@ -57,7 +57,7 @@ describe('exit statuses: 0 all good, 1 some input failed, 2 usage', () => {
   it("a negative number read as an option: 2, with the '--' that makes it an input", () => {
     const r = pondus(['calc', '-5 g']);
     expect(r.status).toBe(2);
-    expect(r.stderr).toContain("put -- before the inputs: pondus calc -- '-5 g'");
+    expect(r.stderr).toContain("put -- after the options and before all the inputs");
     expect(pondus(['calc', '--', '-5 g']).stdout).toContain('-5 g');
   });
   it('options that conflict only once an input is read: 2, each input still answered in its place', () => {

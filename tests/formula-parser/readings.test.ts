@@ -479,3 +479,16 @@ describe('a charge written after the formula in another notation', () => {
     expect(safeParseFormula('Ca^2+').success).toBe(true);
   });
 });
+
+describe('the capital-slip and nobelium notes, where they do not and do belong', () => {
+  it('a formula in Hill order keeps its capitals without a note (C6H4INO2, C6H6BIO2); CUSO4 and CI4 still get theirs', () => {
+    // Hill order puts I before N and B before I: pondus's own output must read back without a note
+    for (const f of ['C6H4INO2', 'C6H6BIO2', 'C5H4IN']) expect(formulaMass(f).notes.map((n) => n.code), f).not.toContain('CASE_CHECK');
+    expect(formulaMass('CUSO4').notes.map((n) => n.code)).toContain('CASE_CHECK');
+    expect(formulaMass('CI4').notes.map((n) => n.code)).toContain('CASE_CHECK');
+  });
+  it('nobelium in brackets gets the note too: Ca(No3)2 is surely Ca(NO3)2', () => {
+    expect(formulaMass('Ca(No3)2').notes.map((n) => n.message)).toContain("'No' is read as nobelium; if you meant the two atoms, write 'NO'");
+    expect(formulaMass('Cu(No3)2·3H2O').notes.map((n) => n.code)).toContain('CASE_CHECK');
+  });
+});

@@ -93,6 +93,13 @@ describe('react on the reagent-table engine', () => {
     expect(react('N2 + 3H2 ⇌ 2NH3', { amounts: ['N2=1.000 mol'] }).notes.map((n) => n.code)).toContain('EQUILIBRIUM_ARROW');
   });
 
+  it('a mass of a solution given by its molarity: its volume from the density, then n = c·V', () => {
+    // 30.00 g of 1.000 M HCl at 1.016 g/mL is 29.53 mL, 0.02953 mol (worked by hand); it was read as 30.00 g of HCl, 0.8229 mol
+    const r = react('NaOH + HCl -> NaCl + H2O', { amounts: ['NaOH=1.000 g', 'HCl=30.00 g, solution=1.000 M, density=1.016 g/mL'] });
+    expect(r.reactants[1].moles!.value).toBeCloseTo(0.02953, 5);
+    expect(() => react('NaOH + HCl -> NaCl + H2O', { amounts: ['NaOH=1.000 g', 'HCl=30.00 g, solution=1.000 M'] })).toThrow("needs the solution's density");
+  });
+
   it('percent yield of copper from copper(II) sulfate and excess zinc', () => {
     // source: OpenStax Chemistry 2e §4.4 (Reaction Yields), worked example on percent yield (1.274 g CuSO4, 0.392 g Cu obtained, 77.3 %), from memory
     const r = react('CuSO4 + Zn -> Cu + ZnSO4', { amounts: ['CuSO4=1.274 g'], actual: 'Cu=0.392 g' });

@@ -188,7 +188,7 @@ export function required(cmd: Command, flag: string, hint: string): Command {
 export function usageMessage(cmd: Command, message: string): string {
   // a negative number looks like an option to the shell's reader: '--' before it says it is an input
   const negative = /^error: unknown option '(-[0-9.][^']*)'/.exec(message);
-  if (negative) return `error: '${negative[1]}' starts with a minus sign and is read as an option; put -- before the inputs: pondus ${cmd.name()} -- '${negative[1]}'`;
+  if (negative) return `error: '${negative[1]}' starts with a minus sign and is read as an option; put -- after the options and before all the inputs: pondus ${cmd.name()} [options] -- … '${negative[1]}'`;
   const rules = RULES.get(cmd);
   if (!rules) return message;
   const conflict = /^error: option '(?:-\w, )?(--[a-z0-9-]+)[^']*' cannot be used with option '(?:-\w, )?(--[a-z0-9-]+)/.exec(message);

@@ -212,8 +212,8 @@ export function strengthPresenter(o: StrengthCli): RowPresenter<StrengthForms> {
   const rounding = o.rounding ?? 'half-even';
   const ratioText = strengthRatioText;
   const shown = strengthFormsShown;
-  // every form the table shows has its column (g/L too)
-  const cols = ['% w/v', 'mg/mL', 'mg/dL', 'g/L', '% w/w', 'mg/g', 'mg/kg', '% v/v'];
+  // every form the table shows has its column (g/L last: the older columns keep their places)
+  const cols = ['% w/v', 'mg/mL', 'mg/dL', '% w/w', 'mg/g', 'mg/kg', '% v/v', 'g/L'];
   return {
     compute: numbered((input) => strengthForms(input)),
     json: ({ input, r }) => strengthJson(r, input, rounding),
