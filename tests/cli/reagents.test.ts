@@ -73,7 +73,10 @@ describe('pondus reagents', () => {
   it('refuses a missing reference or conflicting options (exit 2), and reports a bad row in place (exit 1)', () => {
     expect(pondus(['reagents', '--reagent', 'Ac2O=1 equiv']).status).toBe(2);
     // an amount obtained with no product row would be dropped
-    expect(pondus(['reagents', '--reference', 'C6H5Br=5.00 mmol', '--actual', '0.5 g']).status).toBe(2);
+    const noProduct = pondus(['reagents', '--reference', 'C6H5Br=5.00 mmol', '--reagent', 'C4H9Li=1.1 equiv', '--actual', '0.5 g']);
+    expect(noProduct.status).toBe(2);
+    // one usage message, not a refusal on every row
+    expect(noProduct.stderr.trim().split('\n')).toEqual(['pondus: the amount obtained (0.5 g) is of a product: give the product row with --product']);
     expect(pondus(['reagents', '--procedure', example, '--markdown', '--json']).status).toBe(2);
     expect(pondus(['reagents', '--procedure', example, '--reference', 'C7H6O3=2.00 g']).status).toBe(2);
     const r = pondus(['reagents', '--reference', 'C7H6O3=2.00 g', '--reagent', 'Ac2O=1.5 equiv, colour=red', '--reagent', 'Et3N=2.0 equiv, density=0.726 g/mL', '--json']);

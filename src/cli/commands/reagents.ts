@@ -95,6 +95,8 @@ export function reagentsPresenter(o: ReagentsCliOptions): Presenter<ReagentRow> 
     ctx = tableContext(specs, options);
   } catch (e) {
     if (!(e instanceof PondusError)) throw e;
+    // options that do not go together are one usage error, not a refusal on every row
+    if (e.first.code === 'USAGE') throw e;
     ctxError = e;
   }
   const results = new Map<string, ReagentRow | PondusError>();
