@@ -67,6 +67,19 @@ export const CONTENT_FOR: Readonly<Record<SampleBasis, readonly (keyof SampleCon
   'anhydrous-solvent-free': ['water', 'solvent'],
 };
 
+/**
+ * The contents given that none of the bases removes: what a conversion between them would ignore.
+ *
+ * @param content - the loss on drying, water and solvent contents given.
+ * @param bases - the bases converted between (none for a value as is).
+ * @returns the keys of the contents given and not used, in the order loss, water, solvent.
+ * @example
+ * unusedContents({ loss: '0.5 %', water: '4.8 %' }, 'as-is', 'dried') // ['water']
+ */
+export function unusedContents(content: SampleContent, ...bases: SampleBasis[]): (keyof SampleContent)[] {
+  return (['loss', 'water', 'solvent'] as const).filter((k) => content[k] !== undefined && !bases.some((b) => CONTENT_FOR[b].includes(k)));
+}
+
 const NAMES: Record<SampleBasis, string> = { 'as-is': 'as-is', dried: 'dried', anhydrous: 'anhydrous', 'solvent-free': 'solvent-free', 'anhydrous-solvent-free': 'anhydrous and solvent-free' };
 
 /**
@@ -140,8 +153,7 @@ export function convertSampleBasis(valueText: string | Quantity, from: SampleBas
   const notes: Note[] = [];
   const value = typeof valueText === 'string' ? readResultShare(valueText, notes) : valueText;
   if (from === to) throw fail({ code: 'USAGE', message: `the result is already on the ${NAMES[to]} basis: choose another \`to\``, options: ['to'] });
-  const used = new Set([...CONTENT_FOR[from], ...CONTENT_FOR[to]]);
-  const unused = (['loss', 'water', 'solvent'] as const).filter((k) => content[k] !== undefined && !used.has(k));
+  const unused = unusedContents(content, from, to);
   if (unused.length) {
     const names = unused.map((k) => `\`${k}\``).join(' and ');
     throw fail({ code: 'USAGE', message: `${names} would be ignored converting from the ${NAMES[from]} to the ${NAMES[to]} basis: leave ${unused.length === 1 ? 'it' : 'them'} out, or give the basis ${unused.length === 1 ? 'it belongs' : 'they belong'} to`, options: [...unused] });

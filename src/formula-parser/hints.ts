@@ -248,8 +248,13 @@ function twoLetterTrapNotes(components: ComponentNode[]): Note[] {
   const lone = symbols.size === 1 && components.length === 1 && atoms.length === 1 && atoms[0].count !== null && !brackets;
   const organic = !brackets && components.length === 1 && symbols.has('C') && [...symbols].every((s) => ORGANIC.has(s) || isCaseTrap(s));
   // elsewhere: a synthetic element (NaNo3), or the same symbol twice in a row (CoCo3, surely CoCO3)
-  const doubled = (t: AtomNode) => atoms.some((a, i) => i + 1 < atoms.length && atoms[i + 1] === t && a.symbol === t.symbol && a.count === null && a.span.end === t.span.start);
-  const noted = lone || organic ? traps : traps.filter((t) => SYNTHETIC_TRAPS.has(t.symbol) || doubled(t));
+  // the atoms that repeat the atom just before them, written with no count between (one pass)
+  const doubled = new Set<AtomNode>();
+  for (let i = 1; i < atoms.length; i++) {
+    const [a, t] = [atoms[i - 1], atoms[i]];
+    if (a.symbol === t.symbol && a.count === null && a.span.end === t.span.start) doubled.add(t);
+  }
+  const noted = lone || organic ? traps : traps.filter((t) => SYNTHETIC_TRAPS.has(t.symbol) || doubled.has(t));
   // a synthetic element in brackets too: Ca(No3)2 is surely Ca(NO3)2
   for (const t of inBrackets) if (!noted.some((n) => n.symbol === t.symbol)) noted.push(t);
   const seen = new Set<string>();

@@ -39,10 +39,12 @@ const totals = new Float64Array(TOTALS_SIZE);
 
 /** Dense-table ids by letters (first × 27 + second, or first × 27 + 26 for one letter); -2 not looked up yet, -1 declined. */
 const idByLetters = new Int32Array(26 * 27).fill(-2);
-/** 1 for the symbols that may be a slip of case (Co for CO), which get a note in some formulas. */
+/** 1 for the symbols that may be a slip of case (Co for CO), which get a note in some formulas; 2 for those that are synthetic elements. */
 const trapByLetters = new Uint8Array(26 * 27);
 /** Set by symbolId: whether the symbol just looked up is a case trap. */
 let lastTrap = false;
+/** Set by symbolId: whether that trap is a synthetic element (No, Nh, Hs, Cn), noted wherever it stands. */
+let lastSynthetic = false;
 
 function symbolId(text: string, start: number, end: number): number {
   const first = text.charCodeAt(start) - 65;
@@ -52,14 +54,15 @@ function symbolId(text: string, start: number, end: number): number {
     const symbol = plainSymbol(text, start, end);
     if (symbol === undefined) id = -1;
     else {
-      if (end - start === 2 && isCaseTrap(symbol)) trapByLetters[k] = 1;
+      if (end - start === 2 && isCaseTrap(symbol)) trapByLetters[k] = isSyntheticTrap(symbol) ? 2 : 1;
       const letter = text[start];
       id = end - start === 1 && (letter === 'D' || letter === 'T') ? atomId('H', letter === 'D' ? 2 : 3) : atomId(symbol, null);
       if (id >= TOTALS_SIZE) id = -1;
     }
     idByLetters[k] = id;
   }
-  lastTrap = trapByLetters[k] === 1;
+  lastTrap = trapByLetters[k] !== 0;
+  lastSynthetic = trapByLetters[k] === 2;
   return id;
 }
 
@@ -184,7 +187,7 @@ export function plainVector(input: string): PlainVector | null {
       if (id < 0) return null;
       if (leadingNumber[depth] !== 0 && componentParts[depth] === 0 && (c !== 68 && c !== 84 || end - pos > 1) && isMassNumberOf(t.slice(pos, end), leadingNumber[depth])) return null;
       // noted in any formula, at any depth: a synthetic element (NaNo3, Ca(No3)2)
-      if (lastTrap && isSyntheticTrap(t.slice(pos, end))) return null;
+      if (lastSynthetic) return null;
       if (lastTrap && depth === 0) {
         trapAtTop = true;
         // noted in any formula: the same symbol twice in a row (CoCo3)

@@ -9,7 +9,7 @@ import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
 import { MASS, PURE } from '../calc/measure.js';
 import { readPositive } from '../assay/read-quantity.js';
-import { convertSampleBasis, type SampleBasis, type SampleContent } from '../assay/sample-basis.js';
+import { unusedContents, convertSampleBasis, type SampleBasis, type SampleContent } from '../assay/sample-basis.js';
 import { divide, type Quantity } from '../sigfig/quantity.js';
 import { fewFiguresNote, inputFigures, instruction, type Instruction } from '../sigfig/instruction.js';
 import { smallMassWarning } from '../preparation/warnings.js';
@@ -53,7 +53,7 @@ export function potency(text: string, options: PotencyOptions = {}): PotencyResu
   if (options.basis === undefined) notes.push({ code: 'POTENCY_AS_IS', message: `the potency ${text.trim()} is read as is (of the material as weighed); give \`basis: anhydrous\` (with \`water\`) or \`basis: dried\` (with \`loss\`) if the certificate gives it on that basis`, options: ['basis', 'water', 'loss'] });
   let asIs = given;
   if (basis === 'as-is') {
-    const unused = (['loss', 'water', 'solvent'] as const).filter((k) => options[k] !== undefined);
+    const unused = unusedContents(options);
     if (unused.length) throw fail({ code: 'USAGE', message: `${unused.map((k) => `\`${k}\``).join(' and ')} would be ignored for a potency as is: leave ${unused.length === 1 ? 'it' : 'them'} out, or give the \`basis\` the potency is on`, options: [...unused, 'basis'] });
     if (given.value.gt(1)) throw fail({ code: 'BAD_AMOUNT', message: `a potency as is cannot exceed 100 % (1000 µg/mg): '${text.trim()}'; if the certificate gives it on the anhydrous or dried basis, say so (\`basis: anhydrous\` \`water: …\`)`, options: ['basis', 'water'] }, text);
   } else {

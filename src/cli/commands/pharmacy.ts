@@ -22,7 +22,7 @@ import { notesJson, numbered, qtext, reportedIn, type RowPresenter } from './qc-
 import { ANIONS, CATIONS } from '../../pharmacy/ions.js';
 import { potency, type PotencyOptions, type PotencyResult } from '../../pharmacy/potency.js';
 import { strengthForms, type StrengthForms } from '../../pharmacy/ratio-strength.js';
-import { CONTENT_FOR, readBasis } from '../../assay/sample-basis.js';
+import { readBasis, unusedContents } from '../../assay/sample-basis.js';
 import { displayInstruction, massUnitFor } from '../../sigfig/instruction.js';
 import type { CommandRunner } from './runner.js';
 import { declarePharmacy } from './declarations.js';
@@ -181,7 +181,7 @@ export function potencyPresenter(o: PotencyCli): RowPresenter<PotencyResult> {
   if (basis === undefined && (o.water !== undefined || o.loss !== undefined || o.solvent !== undefined)) {
     throw fail({ code: 'USAGE', message: '--water, --loss and --solvent convert a potency given on another basis: say which with --basis anhydrous, dried or solvent-free' });
   }
-  const unused = basis === undefined ? [] : (['loss', 'water', 'solvent'] as const).filter((k) => o[k] !== undefined && !CONTENT_FOR[basis].includes(k));
+  const unused = basis === undefined ? [] : unusedContents(o, basis);
   if (unused.length) throw fail({ code: 'USAGE', message: `${unused.map((k) => `--${k}`).join(' and ')} would be ignored for a potency on the ${basis} basis: leave ${unused.length === 1 ? 'it' : 'them'} out, or give the --basis ${unused.length === 1 ? 'it belongs' : 'they belong'} to` });
   const unitOfGiven = (r: PotencyResult) => r.given.unit?.symbol ?? '%';
   const alt = (r: PotencyResult) => (unitOfGiven(r) === '%' ? 'µg/mg' : '%');

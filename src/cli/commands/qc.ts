@@ -11,7 +11,7 @@ import type { Note } from '../../errors/issue.js';
 import { fail } from '../../errors/pondus-error.js';
 import { QC_CAUTION } from '../../assay/caution.js';
 import { replicates, type ReplicateResult } from '../../assay/replicates.js';
-import { CONTENT_FOR, readBasis, readResultShare, type SampleBasis, type SampleContent } from '../../assay/sample-basis.js';
+import { CONTENT_FOR, readBasis, readResultShare, unusedContents, type SampleBasis, type SampleContent } from '../../assay/sample-basis.js';
 import { readLimits, type SpecificationCheck } from '../../assay/specification.js';
 import { standardise, type StandardiseResult } from '../../assay/standardise.js';
 import { titrationAssay, type TitrationAssayResult } from '../../assay/titration-assay.js';
@@ -50,10 +50,9 @@ function chooseBasis(o: BasisCli, from: SampleBasis, flag: '--on' | '--to'): { b
     basis = given[0] === 'loss' ? 'dried' : given[0] === 'water' ? 'anhydrous' : 'solvent-free';
     inferred = true;
   } else throw fail({ code: 'USAGE', message: `${given.map((k) => OPTION_OF[k]).join(' and ')} given: say which basis to report on with ${flag} (dried, anhydrous, solvent-free, anhydrous-solvent-free)` });
-  const used = new Set<keyof SampleContent>(basis === from ? [] : [...CONTENT_FOR[from], ...CONTENT_FOR[basis]]);
-  const unused = given.filter((k) => !used.has(k));
+  const unused = basis === from ? given : unusedContents(o, from, basis);
   if (unused.length) throw fail({ code: 'USAGE', message: `${unused.map((k) => OPTION_OF[k]).join(' and ')} would be ignored converting from ${from} to ${basis}: leave ${unused.length === 1 ? 'it' : 'them'} out or choose another ${flag}` });
-  const lacking = basis === from ? [] : [...used].filter((k) => o[k] === undefined);
+  const lacking = basis === from ? [] : [...new Set([...CONTENT_FOR[from], ...CONTENT_FOR[basis]])].filter((k) => o[k] === undefined);
   if (lacking.length) throw fail({ code: 'USAGE', message: `converting from ${from} to ${basis} needs ${lacking.map((k) => OPTION_OF[k]).join(' and ')} (e.g. ${OPTION_OF[lacking[0]]} '0.50 %')` });
   return { basis, inferred };
 }
