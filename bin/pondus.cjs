@@ -74,7 +74,7 @@ if (args.length === 1 && (first === '--version' || first === '-V')) {
   writeNow(texts[helpOf]);
 } else {
   const { readFileSync, writeFileSync } = require('node:fs');
-  const Module = require('node:module');
+  const { createRequire } = require('node:module');
   const { join } = require('node:path');
   const { Script } = require('node:vm');
   const dir = join(__dirname, '..', 'dist', 'cli');
@@ -90,14 +90,17 @@ if (args.length === 1 && (first === '--version' || first === '-V')) {
     } catch {
       cachedData = undefined;
     }
+    // the file is the function CommonJS would wrap a module in (the build writes it so), in ASCII
+    const text = readFileSync(file, 'latin1');
     let script;
     try {
-      script = new Script(Module.wrap(readFileSync(file, 'utf8')), { filename: file, cachedData });
+      script = new Script(text, { filename: file, cachedData });
     } catch {
-      return require(file);
+      cachedData = undefined; // a cache V8 cannot even read: compile afresh (and write it anew)
+      script = new Script(text, { filename: file });
     }
     const mod = { exports: {}, filename: file, id: file, loaded: false };
-    const req = Module.createRequire(file);
+    const req = createRequire(file);
     const bundleRequire = (id) => (id === './grammars.cjs' ? load('grammars') : req(id));
     script.runInThisContext()(mod.exports, bundleRequire, mod, file, dir);
     if (cachedData === undefined || script.cachedDataRejected || process.env.PONDUS_WRITE_CODE_CACHE) {
