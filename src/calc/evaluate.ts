@@ -14,7 +14,7 @@ import { dividedBy, sigFigsOf, type Measured } from '../sigfig/measured.js';
 import { add, divide, multiply, negate, power, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
 import { readNumber } from '../sigfig/read-number.js';
 import { displayMeasured } from '../sigfig/round.js';
-import { isPercent, unitFactor, unitOf } from '../sigfig/units.js';
+import { isPercent, MASS, sameDims, unitFactor, unitOf, VOLUME } from '../sigfig/units.js';
 import type { CalcTree, ExprNode } from './tree.js';
 import type { Note } from '../errors/issue.js';
 
@@ -105,7 +105,7 @@ function evalNode(n: ExprNode, ctx: Ctx): Quantity {
     }
     case 'binary': {
       const a = evalNode(n.left, ctx);
-      const b = evalNode(n.right, ctx);
+      const b = perReference(n) ? referenceAmount(n, ctx) : evalNode(n.right, ctx);
       const r = n.op === '+' ? add(a, b, col(ctx, n.opStart)) : n.op === '-' ? subtract(a, b, col(ctx, n.opStart)) : n.op === '*' ? multiply(a, b) : divide(a, b, col(ctx, n.opStart));
       ctx.steps.push({ text: `${src(ctx, n.left)} ${n.op === '*' ? '×' : n.op === '/' ? '÷' : n.op} ${src(ctx, n.right)}`, rule: ruleFor(n, a, b, ctx) });
       return r;
@@ -126,7 +126,37 @@ function ruleFor(n: Extract<ExprNode, { kind: 'binary' }>, a: Quantity, b: Quant
   return `a ${n.op === '*' ? 'product' : 'quotient'} keeps the fewest significant figures: ${lim}, set by ${src(ctx, name)}${exactNote}`;
 }
 
-function literal(n: Extract<ExprNode, { kind: 'number' }>, ctx: Ctx): Quantity {
+type NumberNode = Extract<ExprNode, { kind: 'number' }>;
+
+/**
+ * Whether a quotient is written as a strength "per N unit" (`125 mg/5 mL`,
+ * `2.00 g / 100 g`): a number with a unit divided by a whole number, with no
+ * decimal point or ±, of a mass or a volume. That N is the reference amount the
+ * strength is stated for, defined rather than measured (like the 100 of
+ * g/100 mL), so it does not limit the figures.
+ */
+function perReference(n: Extract<ExprNode, { kind: 'binary' }>): n is Extract<ExprNode, { kind: 'binary' }> & { left: NumberNode; right: NumberNode } {
+  if (n.op !== '/' || n.left.kind !== 'number' || n.right.kind !== 'number') return false;
+  const r = n.right;
+  if (n.left.unit === null || r.unit === null || r.plusMinus !== null || !/^[0-9]+$/.test(r.text) || /^0+$/.test(r.text)) return false;
+  const u = unitOf(r.unit);
+  return sameDims(u.dims, MASS) || sameDims(u.dims, VOLUME);
+}
+
+/** The divisor of a "per N unit" strength, read as exact, with a note naming the reading and how to write the other. */
+function referenceAmount(n: Extract<ExprNode, { kind: 'binary' }> & { left: NumberNode; right: NumberNode }, ctx: Ctx): Quantity {
+  const r = n.right;
+  const column = col(ctx, r.start);
+  const unit = unitOf(r.unit as string, column);
+  const figures = r.text.replace(/^0+/, '').length;
+  ctx.notes.push({
+    code: 'EXACT_NUMBER',
+    message: `${src(ctx, n)} is read as a strength: ${src(ctx, n.left)} per exactly ${r.text} ${unit.symbol} (a stated reference amount, it does not limit the figures); for a measured ${sameDims(unit.dims, MASS) ? 'mass' : 'volume'} write ${r.text}. ${unit.symbol} (${figures} significant figure${figures === 1 ? '' : 's'})`,
+  });
+  return quantity({ value: readNumber(r.text, column).value, lsd: null }, unit);
+}
+
+function literal(n: NumberNode, ctx: Ctx): Quantity {
   const column = col(ctx, n.start);
   const num = readNumber(n.text, column);
   const unit = n.unit ? unitOf(n.unit, column) : null;

@@ -210,3 +210,35 @@ describe('the SI unit of density', () => {
     expect(calc('1.08 g/mL to kg/m³').display).toBe('1.08 × 10³ kg/m³');
   });
 });
+
+// A strength is written "per N unit": 125 mg/5 mL on an oral liquid's label, 2.00 g/100 g. The N is
+// the reference amount the strength is stated for (common practice in labelling; like the defined
+// 100 of g/100 mL), so it is exact and the measured amount alone sets the figures.
+describe('calc: a strength per a stated amount', () => {
+  it.each([
+    // [expression, display, significant figures]; worked by hand: 125 mg / 5 mL = 25.0 mg/mL = 25.0 g/L
+    ['125 mg/5 mL', '25.0 g/L', 3],
+    ['125 mg / 5 mL', '25.0 g/L', 3],
+    ['2.00 g / 100 mL', '20.0 g/L', 3], // spaced reads as unspaced g/100 mL does: 3 figures
+    ['2.00 g/100 g', '0.0200', 3],
+    ['8.80 g / 2 mL to g/mL', '4.40 g/mL', 3],
+  ])('%s = %s, with a note naming the reading', (expr, display, sf) => {
+    const r = calc(expr);
+    expect(r.display).toBe(display);
+    expect(r.sigFigs).toBe(sf);
+    expect(messages(r)).toMatch(/read as a strength: .* per exactly \d+ (mL|g)/);
+    expect(messages(r)).not.toContain('trailing zeros of 100');
+  });
+
+  it('a divisor with a decimal point is a measured amount and limits the figures', () => {
+    // 125 mg / 5. mL: 5. has 1 significant figure, so 25 mg/mL rounds to 2 × 10¹ g/L
+    const r = calc('125 mg / 5. mL');
+    expect(r.sigFigs).toBe(1);
+    expect(messages(r)).not.toContain('read as a strength');
+  });
+
+  it('a quotient of a unitless number, or by an amount of substance, is not a strength', () => {
+    expect(messages(calc('125 / 5'))).not.toContain('strength');
+    expect(calc('1.00 mol / 2 mol').sigFigs).toBe(1);
+  });
+});
