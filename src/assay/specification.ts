@@ -33,6 +33,11 @@ export interface SpecificationCheck {
   notes: Note[];
 }
 
+/** The place of a last digit in words: 1, 0.1, 10. */
+function place(lsd: number): string {
+  return new Decimal(10).pow(lsd).toFixed();
+}
+
 /**
  * Reads limits written `98.0-102.0` (an en dash or `to` also do; a trailing % is optional).
  *
@@ -79,5 +84,16 @@ export function checkSpecification(result: Quantity, limitsText: string, roundin
           : `${basisName} result ${percent.toSignificantDigits(8).toFixed()} % is rounded ${rounding}, as asked, to the last digit of the limits (${roundedText} %) before comparison with ${limits.low}–${limits.high} % (limits included); USP General Notices 7.20 rounds a 5 up (from memory), which can give another verdict`,
     },
   ];
+  // the result's own last significant digit, in percent. One place coarser than the limits is the
+  // ordinary case of three figures just above 100 % (100. % against 102.0 %), and the limits' digit
+  // is then a guard digit (common practice); two or more places coarser, the verdict reads digits
+  // the data do not give, so it is said beside the verdict
+  const resultLsd = result.lsd === null ? null : result.lsd + 2;
+  if (resultLsd !== null && resultLsd > limits.lsd + 1) {
+    notes.push({
+      code: 'RESULT_COARSER_THAN_LIMITS',
+      message: `${basisName} result is known only to the nearest ${place(resultLsd)} % (its significant figures), while the limits ${limits.low}–${limits.high} % are written to ${place(limits.lsd)} %: the verdict compares ${roundedText} %, a digit the data do not give; give the measurements to more figures for a verdict they support`,
+    });
+  }
   return { limits, rounded, roundedText, complies, rounding, notes };
 }

@@ -97,6 +97,22 @@ describe('specification check', () => {
     expect(pct(r.converted)).toBe('98.1 %');
   });
 
+  it('says so when the result has fewer figures than the limits are written to', () => {
+    // 98.7 % as is with 5 % water: 98.7 × 100 / (100 − 5) = 103.89…; 100 − 5 has its last digit at 1 %
+    // (2 figures), so the quotient keeps 2 figures, 1.0 × 10² %: the verdict at 0.1 % reads a digit the
+    // data do not give (OpenStax Chemistry 2e §1.5 rules, from memory; USP General Notices 7.20, from memory)
+    const r = convertSampleBasis('98.7 %', 'as-is', 'anhydrous', { water: '5 %' });
+    expect(pct(r.converted)).toBe('1.0 × 10² %');
+    const s = checkSpecification(r.converted, '98.0-102.0', 'half-up', 'the anhydrous');
+    expect(s.roundedText).toBe('103.9');
+    expect(s.notes.map((n) => n.code)).toContain('RESULT_COARSER_THAN_LIMITS');
+    expect(s.notes.find((n) => n.code === 'RESULT_COARSER_THAN_LIMITS')?.message).toContain('nearest 10 %');
+    // with the water to 0.1 % the result has 3 figures (104 %), one place coarser than the limits: the
+    // limits' digit is then an ordinary guard digit, and no such note
+    const fine = convertSampleBasis('98.7 %', 'as-is', 'anhydrous', { water: '5.0 %' });
+    expect(checkSpecification(fine.converted, '98.0-102.0').notes.map((n) => n.code)).not.toContain('RESULT_COARSER_THAN_LIMITS');
+  });
+
   it('reads the limits and refuses them backwards', () => {
     expect(readLimits('99 to 101')).toEqual({ low: '99', high: '101', lsd: 0 });
     expect(() => readLimits('102.0-98.0')).toThrow(/above the upper/);
