@@ -62,6 +62,20 @@ const HALOGENS = new Set(['F', 'Cl', 'Br', 'I', 'At', 'Ts']);
 // and group 14–15's metalloids, by the usual classification (common practice)
 const NONMETALS = new Set(['F', 'Cl', 'Br', 'I', 'At', 'O', 'S', 'Se', 'Te', 'H', 'N', 'P', 'As', 'Sb', 'C', 'Si', 'Ge', 'B', 'He', 'Ne', 'Ar', 'Kr', 'Xe', 'Rn']);
 
+/**
+ * Whether an element is a metal, by the usual classification (the non-metals and metalloids are
+ * H, B, C, N, O, F, Si, P, S, Cl, Ge, As, Se, Br, Sb, Te, I, At and the noble gases; common practice).
+ *
+ * @param symbol - an element symbol: 'Pb', 'Cl'.
+ * @returns true for a metal.
+ * @example
+ * isMetal('Pb') // true
+ * isMetal('Cl') // false
+ */
+export function isMetal(symbol: string): boolean {
+  return !NONMETALS.has(symbol) && POSITION.has(symbol);
+}
+
 /** The element symbol of a count key ('13C' → 'C', 'D' and 'T' → 'H'). */
 function symbolOf(key: string): string {
   const m = /^[0-9]*([A-Za-z]+)$/.exec(key);

@@ -6,7 +6,7 @@
  */
 import { formulaNotes } from '../mass/formula-notes.js';
 import type { Note } from '../errors/issue.js';
-import { fail } from '../errors/pondus-error.js';
+import { fail, PondusError } from '../errors/pondus-error.js';
 import { MASS, MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
 import { Decimal } from '../exact/decimal.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type InputFigures, type Instruction } from '../sigfig/instruction.js';
@@ -15,6 +15,7 @@ import { CONCENTRATED_GRADES } from './concentrated-grades.js';
 import { reagentHandlingNote, smallMassWarning } from './warnings.js';
 import { partShare } from '../composition/part-share.js';
 import { toDecimal } from '../formula/amount.js';
+import { isMetal } from '../formula/written-order.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { exact, type Measured } from '../sigfig/measured.js';
@@ -104,6 +105,21 @@ function readConcentration(text: string, notes: Note[]): { conc: Quantity; unit:
   return { conc, unit };
 }
 
+/** The target concentration; a name written after it ('1000 ppm Ni') gets the hint of `as`, which says what the concentration is of. */
+function readTarget(text: string, notes: Note[]): { conc: Quantity; unit: string } {
+  try {
+    return readConcentration(text, notes);
+  } catch (e) {
+    if (e instanceof PondusError && e.issues.some((i) => i.code === 'UNKNOWN_UNIT' && i.hint?.includes('the name after it'))) {
+      throw new PondusError(
+        e.issues.map((i) => (i.code === 'UNKNOWN_UNIT' && i.hint ? { ...i, hint: `${i.hint}; for a concentration of an element or ion the reagent holds (1000 ppm of Ni from NiCl2·6H2O), name it with \`as\``, options: [...(i.options ?? []), 'as'] } : i)),
+        e.input,
+      );
+    }
+    throw e;
+  }
+}
+
 /**
  * Reagents that come as a concentrated solution (or a gas): a mass of the solute is not
  * something anyone can weigh out, so the instruction must be a volume of the concentrated reagent.
@@ -158,6 +174,32 @@ function reagentMass(text: string, options: MassOptions): ReagentMass {
   return read;
 }
 
+/** The units in which a concentration is usually of an element (a metal standard for AAS or ICP: 1000 ppm Pb). */
+const TRACE_UNITS = /(ppm|ppb|mg\/L|µg\/L|ug\/L|µg\/mL|ug\/mL|ng\/mL)\s*$/;
+
+/**
+ * A concentration such as 1000 ppm of a metal salt is often meant of the metal (an element
+ * standard) rather than of the salt: the reading taken is named, with the mass for each metal
+ * the salt holds, so the other reading is one option away.
+ */
+function ofTheElementNote(reagentText: string, reagent: MassDetail, target: { conc: Quantity; unit: string }, options: SolutionOptions, shown: string): Note | null {
+  if (sameDims(target.conc.dims, MOLARITY) || !TRACE_UNITS.test(options.concentration!.trim())) return null;
+  const symbols = [...new Set(reagent.contributions.map((c) => c.symbol))];
+  if (symbols.length < 2) return null;
+  const metals = symbols.filter(isMetal).slice(0, 3);
+  if (metals.length === 0) return null;
+  const written = options.concentration!.trim();
+  const each = metals.map((m) => {
+    const r = prepareSolution(reagentText, { ...options, as: m, weighed: undefined });
+    return `${written} of ${m}, give \`as: ${m}\` (weigh ${r.mass ? displayInstruction(r.mass, massUnitFor(r.mass.quantity)).text : '…'})`;
+  });
+  return {
+    code: 'CONCENTRATION_OF_REAGENT',
+    message: `${written} is read as the concentration of ${reagent.input.trim()} itself (weigh ${shown}); for a standard of ${each.join('; for ')}`,
+    options: ['as'],
+  };
+}
+
 const pct = (d: Decimal) => `${d.times(100).toSignificantDigits(4).toFixed()} %`;
 
 /**
@@ -179,7 +221,7 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   refuseConcentrated(reagent);
   const handling = reagentHandlingNote(reagent.formula);
   if (options.concentration === undefined && options.weighed === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the target concentration, or the mass weighed (or both)' });
-  const target = options.concentration !== undefined ? readConcentration(options.concentration, notes) : null;
+  const target = options.concentration !== undefined ? readTarget(options.concentration, notes) : null;
   const conc = target?.conc ?? null;
   const volume = measureAs(options.volume, [VOLUME], 'the volume', notes);
   if (volume.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the volume must be positive' });
@@ -279,6 +321,10 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
     notes.push({ code: 'MADE_FROM_WEIGHED', message: `the concentration made is computed from the mass weighed, ${options.weighed.trim()}, and the volume, ${options.volume.trim()}: a result, with the figures of those measurements` });
   }
   const unit = target?.unit ?? 'M';
+  if (target && options.as === undefined && mass) {
+    const elementReading = ofTheElementNote(reagentText, reagent, target, options, displayInstruction(mass, massUnitFor(mass.quantity)).text);
+    if (elementReading) notes.push(elementReading);
+  }
   notes.unshift(...formulaNotes(reagent, options.as !== undefined), ...(asMass ? formulaNotes(asMass, true) : []));
   if (handling) notes.push(handling);
   return { reagent, target: { formula: targetFormula, written: targetName.trim().replace(/\s+/g, ' '), perReagent: toDecimal(perReagent.value).toFixed(), molarMass: targetM }, concentration: conc, volume, purity, purityBasis: basis, targetMoles, moles, pureMass, mass, weighed, made, unit, notes };

@@ -1,0 +1,64 @@
+// A concentration in ppm or mg/L of a metal salt is often meant of the metal (an element
+// standard for AAS or ICP): the reading taken is named, with the mass each other reading needs.
+import { describe, expect, it } from 'vitest';
+import { prepareSolution } from '../../src/preparation/solution.js';
+import { displayInstruction } from '../../src/sigfig/instruction.js';
+import { PondusError } from '../../src/errors/pondus-error.js';
+
+const g = (i: Parameters<typeof displayInstruction>[0] | null) => displayInstruction(i!, 'g').text;
+
+describe('a trace concentration of a metal salt names the reading it took', () => {
+  it('1000 ppm Pb(NO3)2 in 1 L: weigh 1.000 g of the salt, and the note gives 1.598 g for 1000 ppm of Pb', () => {
+    // source: CIAAW 2021 standard atomic weights, Pb 207.2, N 14.007, O 15.999 → Pb(NO3)2 331.2 g/mol;
+    // 1.000 g × 331.2 / 207.2 = 1.598 g (the usual lead nitrate weighing for a 1000 mg/L Pb standard, from memory)
+    const r = prepareSolution('Pb(NO3)2', { concentration: '1000. ppm', volume: '1.000 L' });
+    expect(g(r.mass)).toBe('1.000 g');
+    const note = r.notes.find((n) => n.code === 'CONCENTRATION_OF_REAGENT')!;
+    expect(note.message).toContain('read as the concentration of Pb(NO3)2 itself');
+    expect(note.message).toContain('`as: Pb` (weigh 1.598 g)');
+    expect(note.options).toEqual(['as']);
+  });
+
+  it('the metal reading, when asked for with as, matches the figure the note offered', () => {
+    const r = prepareSolution('Pb(NO3)2', { concentration: '1000. ppm', volume: '1.000 L', as: 'Pb' });
+    expect(g(r.mass)).toBe('1.598 g');
+    expect(r.notes.some((n) => n.code === 'CONCENTRATION_OF_REAGENT')).toBe(false);
+  });
+
+  it('K2Cr2O7 at 1000 mg/L in 100 mL names both metals: Cr 0.2829 g, K 0.3762 g', () => {
+    // source: CIAAW 2021, K 39.098, Cr 51.996, O 15.999 → K2Cr2O7 294.18 g/mol;
+    // Cr: 0.1000 g × 294.18 / (2 × 51.996) = 0.2829 g; K: 0.1000 g × 294.18 / (2 × 39.098) = 0.3762 g
+    const r = prepareSolution('K2Cr2O7', { concentration: '1000. mg/L', volume: '100.0 mL' });
+    const note = r.notes.find((n) => n.code === 'CONCENTRATION_OF_REAGENT')!;
+    expect(note.message).toContain('`as: Cr` (weigh 0.2829 g)');
+    expect(note.message).toContain('`as: K` (weigh 0.3762 g)');
+  });
+
+  it('a hydrate: NiCl2·6H2O for 1000 ppm of Ni in 100 mL is 0.4050 g', () => {
+    // source: CIAAW 2021, Ni 58.693, Cl 35.45, H 1.008, O 15.999 → NiCl2·6H2O 237.69 g/mol;
+    // 0.1000 g × 237.69 / 58.693 = 0.4050 g
+    const r = prepareSolution('NiCl2·6H2O', { concentration: '1000. ppm', volume: '100.0 mL' });
+    expect(r.notes.find((n) => n.code === 'CONCENTRATION_OF_REAGENT')!.message).toContain('`as: Ni` (weigh 0.4050 g)');
+  });
+
+  it('no such note for a molar target, for a salt with no metal, or for a single element', () => {
+    const has = (formula: string, concentration: string) =>
+      prepareSolution(formula, { concentration, volume: '100.0 mL' }).notes.some((n) => n.code === 'CONCENTRATION_OF_REAGENT');
+    expect(has('Pb(NO3)2', '0.100 M')).toBe(false);
+    expect(has('Pb(NO3)2', '10.0 g/L')).toBe(false);
+    expect(has('NH4NO3', '1000. ppm')).toBe(false);
+    expect(has('C6H12O6', '1000. mg/L')).toBe(false);
+  });
+
+  it('a name written after the concentration is refused, with the hint to use as', () => {
+    try {
+      prepareSolution('NiCl2·6H2O', { concentration: '1000 ppm Ni', volume: '100.0 mL' });
+      expect.unreachable('a name after the concentration must be refused');
+    } catch (e) {
+      expect(e).toBeInstanceOf(PondusError);
+      const issue = (e as PondusError).issues.find((i) => i.code === 'UNKNOWN_UNIT')!;
+      expect(issue.hint).toContain('name it with `as`');
+      expect(issue.options).toContain('as');
+    }
+  });
+});
