@@ -105,14 +105,25 @@ function readConcentration(text: string, notes: Note[]): { conc: Quantity; unit:
   return { conc, unit };
 }
 
-/** The target concentration; a name written after it ('1000 ppm Ni') gets the hint of `as`, which says what the concentration is of. */
-function readTarget(text: string, notes: Note[]): { conc: Quantity; unit: string } {
+/**
+ * The target concentration; a name written after it ('1000 ppm Ni') gets the hint of `as`, which
+ * says what the concentration is of: with that very name when the reagent holds it, in general
+ * words otherwise (the hint never names a species the reagent does not hold).
+ */
+function readTarget(text: string, notes: Note[], reagent: MassDetail): { conc: Quantity; unit: string } {
   try {
     return readConcentration(text, notes);
   } catch (e) {
     if (e instanceof PondusError && e.issues.some((i) => i.code === 'UNKNOWN_UNIT' && i.hint?.includes('the name after it'))) {
+      const held = new Set(reagent.contributions.map((c) => c.symbol));
+      const more = (hint: string) => {
+        const name = /the name after it, '([^']+)'/.exec(hint)?.[1];
+        return name !== undefined && held.has(name)
+          ? `${hint}; for a concentration of ${name} itself, which the reagent holds, give \`as: ${name}\``
+          : `${hint}; for a concentration of an element or ion the reagent holds, name it with \`as\``;
+      };
       throw new PondusError(
-        e.issues.map((i) => (i.code === 'UNKNOWN_UNIT' && i.hint ? { ...i, hint: `${i.hint}; for a concentration of an element or ion the reagent holds (1000 ppm of Ni from NiCl2·6H2O), name it with \`as\``, options: [...(i.options ?? []), 'as'] } : i)),
+        e.issues.map((i) => (i.code === 'UNKNOWN_UNIT' && i.hint ? { ...i, hint: more(i.hint), options: [...(i.options ?? []), 'as'] } : i)),
         e.input,
       );
     }
@@ -182,16 +193,19 @@ const TRACE_UNITS = /(ppm|ppb|mg\/L|µg\/L|ug\/L|µg\/mL|ug\/mL|ng\/mL)\s*$/;
  * standard) rather than of the salt: the reading taken is named, with the mass for each metal
  * the salt holds, so the other reading is one option away.
  */
-function ofTheElementNote(reagentText: string, reagent: MassDetail, target: { conc: Quantity; unit: string }, options: SolutionOptions, shown: string): Note | null {
+function ofTheElementNote(reagentText: string, reagent: MassDetail, target: { conc: Quantity; unit: string }, options: SolutionOptions, mass: Instruction): Note | null {
   if (sameDims(target.conc.dims, MOLARITY) || !TRACE_UNITS.test(options.concentration!.trim())) return null;
   const symbols = [...new Set(reagent.contributions.map((c) => c.symbol))];
   if (symbols.length < 2) return null;
   const metals = symbols.filter(isMetal).slice(0, 3);
   if (metals.length === 0) return null;
   const written = options.concentration!.trim();
+  // every mass in the note in the unit of the mass to weigh, so they compare at a glance
+  const unit = massUnitFor(mass.quantity);
+  const shown = displayInstruction(mass, unit).text;
   const each = metals.map((m) => {
     const r = prepareSolution(reagentText, { ...options, as: m, weighed: undefined });
-    return `${written} of ${m}, give \`as: ${m}\` (weigh ${r.mass ? displayInstruction(r.mass, massUnitFor(r.mass.quantity)).text : '…'})`;
+    return `${written} of ${m}, give \`as: ${m}\` (weigh ${r.mass ? displayInstruction(r.mass, unit).text : '…'})`;
   });
   return {
     code: 'CONCENTRATION_OF_REAGENT',
@@ -221,7 +235,7 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   refuseConcentrated(reagent);
   const handling = reagentHandlingNote(reagent.formula);
   if (options.concentration === undefined && options.weighed === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the target concentration, or the mass weighed (or both)' });
-  const target = options.concentration !== undefined ? readTarget(options.concentration, notes) : null;
+  const target = options.concentration !== undefined ? readTarget(options.concentration, notes, reagent) : null;
   const conc = target?.conc ?? null;
   const volume = measureAs(options.volume, [VOLUME], 'the volume', notes);
   if (volume.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the volume must be positive' });
@@ -322,7 +336,7 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   }
   const unit = target?.unit ?? 'M';
   if (target && options.as === undefined && mass) {
-    const elementReading = ofTheElementNote(reagentText, reagent, target, options, displayInstruction(mass, massUnitFor(mass.quantity)).text);
+    const elementReading = ofTheElementNote(reagentText, reagent, target, options, mass);
     if (elementReading) notes.push(elementReading);
   }
   notes.unshift(...formulaNotes(reagent, options.as !== undefined), ...(asMass ? formulaNotes(asMass, true) : []));

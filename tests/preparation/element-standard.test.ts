@@ -41,6 +41,22 @@ describe('a trace concentration of a metal salt names the reading it took', () =
     expect(r.notes.find((n) => n.code === 'CONCENTRATION_OF_REAGENT')!.message).toContain('`as: Ni` (weigh 0.4050 g)');
   });
 
+  it('a word after the concentration that the reagent does not hold gets the general hint, naming no species', () => {
+    try {
+      prepareSolution('NiCl2·6H2O', { concentration: '1000 ppm solution', volume: '100.0 mL' });
+      expect.unreachable('a word after the concentration must be refused');
+    } catch (e) {
+      const issue = (e as PondusError).issues.find((i) => i.code === 'UNKNOWN_UNIT')!;
+      expect(issue.hint).toContain('for a concentration of an element or ion the reagent holds, name it with `as`');
+      expect(issue.hint).not.toContain('as: ');
+    }
+  });
+
+  it('every mass in the note is in the unit of the mass to weigh', () => {
+    const r = prepareSolution('Pb(NO3)2', { concentration: '1000. ppm', volume: '100.0 mL' });
+    expect(r.notes.find((n) => n.code === 'CONCENTRATION_OF_REAGENT')!.message).toMatch(/weigh 100\.0 mg\).*`as: Pb` \(weigh 159\.8 mg\)/);
+  });
+
   it('no such note for a molar target, for a salt with no metal, or for a single element', () => {
     const has = (formula: string, concentration: string) =>
       prepareSolution(formula, { concentration, volume: '100.0 mL' }).notes.some((n) => n.code === 'CONCENTRATION_OF_REAGENT');
@@ -57,7 +73,7 @@ describe('a trace concentration of a metal salt names the reading it took', () =
     } catch (e) {
       expect(e).toBeInstanceOf(PondusError);
       const issue = (e as PondusError).issues.find((i) => i.code === 'UNKNOWN_UNIT')!;
-      expect(issue.hint).toContain('name it with `as`');
+      expect(issue.hint).toContain('for a concentration of Ni itself, which the reagent holds, give `as: Ni`');
       expect(issue.options).toContain('as');
     }
   });
