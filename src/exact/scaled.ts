@@ -8,7 +8,8 @@ import { Decimal } from './decimal.js';
  * (up to about 9000 g/mol); beyond that callers fall back to Decimal.
  */
 export const SCALE_DIGITS = 12;
-const SCALE = new Decimal(10).pow(SCALE_DIGITS);
+/** 10^12 as a Decimal, made on first use (start-up makes no Decimal it does not need). */
+let SCALE: Decimal | undefined;
 
 /**
  * Converts a plain decimal string with at most 12 decimals to scaled integer units.
@@ -35,30 +36,69 @@ export function toScaled(text: string): number {
  * fromScaled(18015000000000).toString() // '18.015'
  */
 export function fromScaled(n: number): Decimal {
-  return new Decimal(n).div(SCALE);
+  return new Decimal(n).div((SCALE ??= new Decimal(10).pow(SCALE_DIGITS)));
 }
 
-/** The texts of 0 to 999 as three digits ('007'), and the same without trailing zeros ('07' for 70, '' for 0). */
-const GROUPS: string[] = [];
-const GROUPS_TRIMMED: string[] = [];
-for (let i = 0; i < 1000; i++) {
-  const g = (i < 10 ? '00' : i < 100 ? '0' : '') + i;
-  GROUPS.push(g);
-  GROUPS_TRIMMED.push(i === 0 ? '' : i % 100 === 0 ? g.slice(0, 1) : i % 10 === 0 ? g.slice(0, 2) : g);
+/**
+ * The tables {@link scaledToString} writes from once a run has formatted enough masses to be a
+ * batch: the texts of 0 to 999 as three digits ('007') and the same without trailing zeros ('07'
+ * for 70, '' for 0), and the texts of whole numbers below 10,000 (the integer part of most
+ * masses), each made on first use. A command that formats a few masses never builds them: the
+ * 2,000 strings and the 10,000-slot array were a third of what start-up allocated.
+ */
+interface DigitTables {
+  groups: string[];
+  trimmed: string[];
+  integers: (string | undefined)[];
 }
-/** The texts of whole numbers below 10,000 (the integer part of most masses), each made on first use. */
-const INTEGERS: (string | undefined)[] = new Array(10000);
+let tables: DigitTables | undefined;
+/** Masses formatted without the tables; past {@link TABLES_AFTER}, the tables are built. */
+let untabled = 0;
+const TABLES_AFTER = 64;
+
+function buildTables(): DigitTables {
+  const groups: string[] = [];
+  const trimmed: string[] = [];
+  for (let i = 0; i < 1000; i++) {
+    const g = (i < 10 ? '00' : i < 100 ? '0' : '') + i;
+    groups.push(g);
+    trimmed.push(i === 0 ? '' : i % 100 === 0 ? g.slice(0, 1) : i % 10 === 0 ? g.slice(0, 2) : g);
+  }
+  return { groups, trimmed, integers: new Array(10000) };
+}
+
+/** {@link scaledToString} without the tables: the twelve-digit fraction, its trailing zeros cut. */
+function untabledToString(n: number): string {
+  const abs = n < 0 ? -n : n;
+  const int = Math.floor(abs / 1e12);
+  const frac = abs - int * 1e12; // exact: both are integers below 2^53
+  const head = (n < 0 ? '-' : '') + String(int);
+  if (frac === 0) return head;
+  const digits = String(frac).padStart(SCALE_DIGITS, '0');
+  let end = SCALE_DIGITS;
+  while (digits.charCodeAt(end - 1) === 48) end--;
+  return head + '.' + digits.slice(0, end);
+}
 
 /**
  * Formats scaled integer units as a plain decimal string without trailing zeros, exactly.
- * The fraction is cut into four groups of three digits, each written from a table, so a mass's
- * text takes two to four joins of short strings and no number-to-text conversion.
+ * In a batch, the fraction is cut into four groups of three digits, each written from a table, so
+ * a mass's text takes two to four joins of short strings and no number-to-text conversion; the
+ * first few masses of a run are written directly, which gives the same text without the tables.
  *
  * @example
  * scaledToString(18015000000000) // '18.015'
  * scaledToString(-1500000) // '-0.0000015'
  */
 export function scaledToString(n: number): string {
+  if (tables === undefined) {
+    if (untabled < TABLES_AFTER) {
+      untabled++;
+      return untabledToString(n);
+    }
+    tables = buildTables();
+  }
+  const { groups: GROUPS, trimmed: GROUPS_TRIMMED, integers: INTEGERS } = tables;
   const abs = n < 0 ? -n : n;
   const int = Math.floor(abs / 1e12);
   const frac = abs - int * 1e12; // exact: both are integers below 2^53
