@@ -12,7 +12,8 @@
 // one Node build only, so the package does not ship it: it is written on the first run of each
 // bundle (or when V8 rejects it, after a Node upgrade), where the folder is writable. The formula
 // and calculator grammars, with their parser library, are a file of their own
-// (dist/cli/grammars.cjs), which a bundle loads the same way when an input first needs them.
+// (dist/cli/grammars.cjs), which a bundle loads the same way when an input first needs them; so is
+// the CSV reader of sheets (dist/cli/sheet-reader.cjs), loaded when a sheet is first read.
 const BUNDLE = {
   mass: 'mass',
   composition: 'composition',
@@ -79,8 +80,9 @@ if (args.length === 1 && (first === '--version' || first === '-V')) {
   const { Script } = require('node:vm');
   const dir = join(__dirname, '..', 'dist', 'cli');
   // Runs dist/cli/<name>.cjs as a CommonJS module, from its code cache where there is one, and
-  // returns its exports. A bundle's require of './grammars.cjs' (the grammars, on first use) comes
-  // here too, so that file starts from its own cache.
+  // returns its exports. A bundle's require of './grammars.cjs' (the grammars, on first use) or of
+  // './sheet-reader.cjs' (the CSV reader, when a sheet is first read) comes here too, so that file
+  // starts from its own cache.
   const load = (name) => {
     const file = join(dir, `${name}.cjs`);
     const cacheFile = join(dir, `${name}.cache`);
@@ -101,7 +103,7 @@ if (args.length === 1 && (first === '--version' || first === '-V')) {
     }
     const mod = { exports: {}, filename: file, id: file, loaded: false };
     const req = createRequire(file);
-    const bundleRequire = (id) => (id === './grammars.cjs' ? load('grammars') : req(id));
+    const bundleRequire = (id) => (id === './grammars.cjs' ? load('grammars') : id === './sheet-reader.cjs' ? load('sheet-reader') : req(id));
     script.runInThisContext()(mod.exports, bundleRequire, mod, file, dir);
     if (cachedData === undefined || script.cachedDataRejected || process.env.PONDUS_WRITE_CODE_CACHE) {
       process.on('exit', () => {

@@ -62,6 +62,21 @@ const lazyGrammar = (where) => ({
   },
 });
 
+// The same for the CSV reader of sheets in the command line: a bundle requires
+// './sheet-reader.cjs' when a sheet is first read (about 28 kB a command given no sheet does not
+// compile at start-up).
+const lazySheetReader = {
+  name: 'lazy-sheet-reader',
+  setup(b) {
+    b.onResolve({ filter: /^\.\/sheet-reader\.cjs$/ }, () => ({ path: './sheet-reader.cjs', external: true }));
+    b.onResolve({ filter: /^csv-parse\/sync$/ }, (args) => (/sheets[\\/]read-sheet\.ts$/.test(args.importer) ? { path: 'lazy-sheet-reader', namespace: 'pondus-sheet' } : undefined));
+    b.onLoad({ filter: /.*/, namespace: 'pondus-sheet' }, () => ({
+      contents: "let m;\nexport function parse(text, options) { return (m ??= require('./sheet-reader.cjs')).parse(text, options); }\n",
+      loader: 'js',
+    }));
+  },
+};
+
 const library = {
   entryPoints: [`${root}src/index.ts`],
   bundle: true,
@@ -140,10 +155,12 @@ const cli = await build({
   outdir: `${root}dist/cli`,
   outExtension: { '.js': '.cjs' },
   metafile: true,
-  plugins: [lazyChildProcess, plainSupportsColor, lazyNuclideTable('../data'), lazyGrammar('own file')],
+  plugins: [lazyChildProcess, plainSupportsColor, lazyNuclideTable('../data'), lazyGrammar('own file'), lazySheetReader],
 });
 // the grammars' own file, which the bundles above require on first use
 await build({ ...cliFile, entryPoints: [`${root}src/cli/grammar-chunk.ts`], outfile: `${root}dist/cli/grammars.cjs` });
+// and the sheet reader's
+await build({ ...cliFile, entryPoints: [`${root}src/cli/sheet-reader-chunk.ts`], outfile: `${root}dist/cli/sheet-reader.cjs` });
 if (process.env.PONDUS_METAFILE) writeFileSync(process.env.PONDUS_METAFILE, JSON.stringify(cli.metafile));
 for (const f of readdirSync(`${root}dist/cli`)) if (f.endsWith('.cjs')) asciiOnly(`${root}dist/cli/${f}`);
 // Each bundle is written as the function CommonJS would wrap it in, so that bin/pondus.cjs compiles
@@ -164,6 +181,8 @@ if (heavy.length) throw new Error(`the help bundle (dist/cli/help.cjs) loads cod
 for (const [out, o] of Object.entries(cli.metafile.outputs)) {
   const parserLibrary = Object.keys(o.inputs).filter((i) => /node_modules\/(@?chevrotain|lodash)/.test(i));
   if (parserLibrary.length) throw new Error(`${out} holds the parser library, which belongs in dist/cli/grammars.cjs: ${parserLibrary.slice(0, 3).join(', ')}`);
+  const sheetReader = Object.keys(o.inputs).filter((i) => /node_modules\/csv-parse/.test(i));
+  if (sheetReader.length) throw new Error(`${out} holds the CSV reader, which belongs in dist/cli/sheet-reader.cjs: ${sheetReader.slice(0, 3).join(', ')}`);
 }
 
 // The same CLI with its `main(argv, io)` exported, for the fuzz harness, which runs it in a
@@ -218,3 +237,5 @@ for (const b of bundles) {
 // and the grammars' file last (each run above that needed it wrote its cache): a run that reads a
 // formula and an expression through both grammars
 execFileSync(process.execPath, [`${root}bin/pondus.cjs`, 'calc', '(2.0 g + 1.0 g) / M(Ca(OH)2)'], { cwd: root, env: { ...process.env, PONDUS_WRITE_CODE_CACHE: '1' }, stdio: 'ignore' });
+// and the sheet reader's: a run that reads the example lab sheet
+execFileSync(process.execPath, [`${root}bin/pondus.cjs`, 'analysis', '--sheet', `${root}examples/ea-lab-sheet.csv`, '--json'], { cwd: root, env: { ...process.env, PONDUS_WRITE_CODE_CACHE: '1' }, stdio: 'ignore' });
