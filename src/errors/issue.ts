@@ -51,6 +51,8 @@ export type IssueCode =
   | 'BAD_OPTION'
   | 'AMBIGUOUS_PURITY'
   | 'CONCENTRATED_REAGENT'
+  // one form of a reagent weighed in place of another that is a different substance (NaCl for Na2CO3)
+  | 'FORMS_UNRELATED'
   | 'BAD_RECORD'
   | 'USAGE'
   // a public function called with an argument of the wrong kind (a number for a formula, null options)

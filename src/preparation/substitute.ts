@@ -12,6 +12,7 @@ import { readPurity } from './purity.js';
 import { smallMassWarning } from './warnings.js';
 import { partShare } from '../composition/part-share.js';
 import { toDecimal } from '../formula/amount.js';
+import { Decimal } from '../exact/decimal.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
@@ -58,6 +59,11 @@ function core(m: MassDetail, options: MassOptions): Map<string, string> {
   return out;
 }
 
+/** True when every atom of `a` (past water) is in `b` as often or more: `b` is `a` with something added, as a salt is its free base with the acid. */
+function within(a: Map<string, string>, b: Map<string, string>): boolean {
+  return [...a].every(([k, v]) => b.has(k) && new Decimal(b.get(k)!).gte(v));
+}
+
 /**
  * How much of `use` to weigh in place of an amount of `instead` (an
  * instruction, at working precision). An assay given is that of `use`, the
@@ -68,7 +74,7 @@ function core(m: MassDetail, options: MassOptions): Map<string, string> {
  * @param amount - the amount of pure `instead` wanted, as a mass or in moles ('24.65 g').
  * @param options - the purity (assay) of the form in hand, and the mass options.
  * @returns the mass of `use` to weigh (an instruction at working precision), the moles asked for, and the notes.
- * @throws PondusError: a formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …); BAD_AMOUNT for an amount that is not positive or a purity not above 0 and at most 100 %; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
+ * @throws PondusError: a formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …); FORMS_UNRELATED when neither form, past its water of crystallisation, holds the other (NaCl for Na2CO3·10H2O); BAD_AMOUNT for an amount that is not positive or a purity not above 0 and at most 100 %; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * displayInstruction(substituteForm('MgSO4', 'MgSO4·7H2O', '24.65 g', { purity: '98.0 %' }).mass, 'g').text // '12.28 g'
  */
@@ -98,6 +104,13 @@ export function substituteForm(use: string, instead: string, amount: string, opt
   const a = core(u, options);
   const b = core(i, options);
   const same = a.size === b.size && [...a].every(([k, v]) => b.get(k) === v);
+  if (!same && !within(a, b) && !within(b, a)) {
+    throw fail({
+      code: 'FORMS_UNRELATED',
+      message: `${speciesText(u)} is not a form of ${speciesText(i)}: past water of crystallisation, neither formula holds the other (as a salt holds its free base), so weighing one in place of the other is a different substance, not a different form`,
+      hint: `weigh ${i.input.trim()} itself, or one of its hydrates`,
+    });
+  }
   if (!same) notes.push({ code: 'FORMS_DIFFER', message: `${speciesText(u)} and ${speciesText(i)} differ by more than water of crystallisation; the substitution keeps equal amounts of formula units` });
   notes.unshift(...formulaNotes(u, true), ...formulaNotes(i, true));
   return { use: u, instead: i, asked, moles, purity, pureMass, mass, notes };

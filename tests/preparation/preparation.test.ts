@@ -140,7 +140,19 @@ describe('replacing one form by another', () => {
     const r = substituteForm('CuSO4·5H2O', 'CuSO4', '10.00 g');
     expect(g(r.mass)).toBe('15.64 g');
     expect(r.notes).toEqual([]);
-    expect(codes(substituteForm('Na2CO3', 'NaHCO3', '1.00 g').notes)).toEqual(['FORMS_DIFFER']);
+  });
+
+  it('a salt for its free base keeps equal formula units, with a note that the forms differ by more than water', () => {
+    // C17H19NO3 285.34 and C17H19NO3·HCl·3H2O 375.85 g/mol (CIAAW 2021 standard atomic weights): 1.000 g × 375.85 / 285.34 = 1.317 g
+    const r = substituteForm('C17H19NO3·HCl·3H2O', 'C17H19NO3', '1.000 g');
+    expect(g(r.mass)).toBe('1.317 g');
+    expect(codes(r.notes)).toEqual(['FORMS_DIFFER']);
+  });
+
+  it('refuses a different substance: NaCl in place of Na2CO3·10H2O, NaHCO3 for Na2CO3, one phosphate for another', () => {
+    for (const [use, instead] of [['Na2CO3·10H2O', 'NaCl'], ['Na2CO3', 'NaHCO3'], ['Na2HPO4·7H2O', 'NaH2PO4']]) {
+      expect(() => substituteForm(use, instead, '1.000 g'), `${use} for ${instead}`).toThrow(expect.objectContaining({ issues: [expect.objectContaining({ code: 'FORMS_UNRELATED', hint: `weigh ${instead} itself, or one of its hydrates` })] }));
+    }
   });
 
   it('allows for the assay of the form weighed: 24.65 g of MgSO4·7H2O is 12.28 g of 98.0 % MgSO4', () => {
