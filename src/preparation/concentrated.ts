@@ -5,6 +5,7 @@
  * always a volume of the concentrated reagent, never a mass of the solute: a
  * bottle of hydrochloric acid holds a solution, not HCl to weigh.
  */
+import { reagentHandlingNote } from './warnings.js';
 import { PondusError } from '../errors/pondus-error.js';
 import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
@@ -154,6 +155,8 @@ export function concentratedReagent(reagentText: string, options: ConcentratedOp
   } else if (BASES.has(reagent.formula)) {
     notes.push({ code: 'ADD_SLOWLY', message: 'add the concentrated reagent slowly to most of the water, in a fume hood (common practice); make up to the mark only when the solution is back at room temperature' });
   }
+  const handling = reagentHandlingNote(reagent.formula);
+  if (handling) notes.push(handling);
 
   let target: Quantity | null = null;
   let volume: Quantity | null = null;

@@ -81,20 +81,41 @@ const CHROMIUM_VI = new Set(['Cr2K2O7', 'Cr2Na2O7', 'Cr2H8N2O7', 'CrK2O4', 'CrNa
 const HYGROSCOPIC_BASES = new Set(['HNaO', 'HKO']);
 
 /**
- * A note on handling the reagent weighed, where the usual caution is not enough: sodium and
- * potassium hydroxide (a solution made by weighing them is only approximate), and chromium(VI)
- * compounds (toxic and carcinogenic: IARC Group 1, from memory). Null for anything else.
+ * A note on handling the reagent, where the usual caution is not enough: sodium and potassium
+ * hydroxide (a solution made by weighing them is only approximate), hydrofluoric acid (plastic
+ * ware, calcium gluconate at hand) and chromium(VI) compounds (toxic and carcinogenic: IARC
+ * Group 1, from memory). Null for anything else.
  *
  * @example
  * reagentHandlingNote('HNaO')?.code // 'REAGENT_HANDLING'
+ * reagentHandlingNote('FH')?.message.includes('calcium gluconate') // true
  * reagentHandlingNote('ClNa') // null
  */
 export function reagentHandlingNote(hill: string): Note | null {
   if (HYGROSCOPIC_BASES.has(hill)) {
     return { code: 'REAGENT_HANDLING', message: `${hill === 'HNaO' ? 'NaOH' : 'KOH'} takes up water and carbon dioxide from the air, so a solution made by weighing it is only approximate: standardise it (against potassium hydrogen phthalate, for example) before using it as a titrant; it is corrosive: wear eye protection (common practice)` };
   }
+  if (hill === 'FH') {
+    return {
+      code: 'REAGENT_HANDLING',
+      message:
+        'hydrofluoric acid: it etches glass, so measure, dilute and store it in plastic ware (polypropylene, PTFE), not a glass flask or pipette; it passes through skin and a burn from it may not hurt until hours later, and even a small burn can be life-threatening: have calcium gluconate gel at hand before opening the bottle, wear HF-rated gloves, a face shield and an apron, work in a fume hood, and get medical help after any contact (from memory); follow its SDS and your lab\'s HF procedure',
+    };
+  }
   if (CHROMIUM_VI.has(hill)) {
     return { code: 'REAGENT_HANDLING', message: 'a chromium(VI) compound: toxic and a carcinogen (IARC Group 1, from memory); weigh it in a fume hood or ventilated enclosure with gloves, and collect the waste as hazardous; follow its SDS' };
   }
   return null;
+}
+
+/**
+ * The vessel a concentrated reagent is diluted in: a plastic one for hydrofluoric acid, which
+ * etches glass (from memory), the usual volumetric flask for anything else.
+ *
+ * @example
+ * flaskFor('FH') // 'plastic (polypropylene or PTFE) volumetric flask'
+ * flaskFor('ClH') // 'flask'
+ */
+export function flaskFor(hill: string): string {
+  return hill === 'FH' ? 'plastic (polypropylene or PTFE) volumetric flask' : 'flask';
 }

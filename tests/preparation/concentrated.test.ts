@@ -74,3 +74,19 @@ describe('a concentrated reagent is never weighed', () => {
     }
   });
 });
+
+describe('hydrofluoric acid gets its own handling note', () => {
+  it('48 % HF, d 1.15: 27.6 M, with plastic ware and calcium gluconate named', () => {
+    // source: w·ρ/M = 0.48 × 1150 g/L ÷ 20.006 g/mol (CIAAW 2021: H 1.008, F 18.998) = 27.59 M;
+    // HF etches glass and its burns are treated with calcium gluconate gel (from memory)
+    const r = concentratedReagent('HF', { fraction: '48 %', density: '1.15 g/mL' });
+    expect(displayResult(r.molarity, 'M').text).toBe('27.59 M');
+    const note = r.notes.find((n) => n.code === 'REAGENT_HANDLING')!;
+    expect(note.message).toContain('plastic ware');
+    expect(note.message).toContain('calcium gluconate');
+  });
+
+  it('no such note for hydrochloric acid', () => {
+    expect(codes(concentratedReagent('HCl', { fraction: '37 %' }).notes)).not.toContain('REAGENT_HANDLING');
+  });
+});

@@ -1,3 +1,4 @@
+import { flaskFor } from '../../preparation/warnings.js';
 import { notesJson } from '../../errors/note-json.js';
 import { hillAside, speciesText } from '../../preparation/species.js';
 import type { Command } from 'commander';
@@ -112,7 +113,7 @@ function oneSolutionPresenter(o: PrepareCliOptions): Presenter<Prepared> {
           lines.push(`  for ${o.concentration!.trim()} in ${o.volume!.trim()}: take ${takeText(r)} of the concentrated reagent (measure it by volume; do not weigh the solute)`);
           lines.push(
             r.acid
-              ? `  put about half of the water in the flask first, add the acid slowly with swirling, let it cool, then make up to ${o.volume!.trim()}`
+              ? `  put about half of the water in the ${flaskFor(r.reagent.formula)} first, add the acid slowly with swirling, let it cool, then make up to ${o.volume!.trim()}`
               : `  put most of the water in the flask first, add the reagent slowly, let it reach room temperature, then make up to ${o.volume!.trim()}`,
           );
         }
