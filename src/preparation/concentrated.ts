@@ -132,7 +132,7 @@ export function concentratedReagent(reagentText: string, options: ConcentratedOp
     const known = CONCENTRATED_GRADES.filter((g) => g.formula === reagent.formula).map((g) => `${g.percent} % (${g.density} g/mL)`);
     throw fail({
       code: 'BAD_OPTION',
-      message: `give the density of the concentrated reagent (\`density: '1.19 g/mL'\`, from its label or certificate)${known.length ? `; the table of common grades has ${reagent.input} at ${known.join(', ')} only` : ''}`,
+      message: `give the density of ${reagent.input.trim()} at ${options.fraction.trim()}, from the label or certificate of the bottle (\`density: '… g/mL'\`)${known.length ? `; the table of common grades has ${reagent.input} at ${known.join(', ')} only` : ''}`,
       options: ['density'],
     });
   }

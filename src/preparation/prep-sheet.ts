@@ -143,7 +143,16 @@ export function prepRow(row: PrepSheetRow, options: MassOptions = {}): PrepRowRe
     if (row.purity === '') throw fail({ code: 'BAD_RECORD', message: `a concentrated liquid (a density is given) needs its mass fraction in the purity column ('37 %')` });
     if (row.weighed !== '') throw fail({ code: 'BAD_RECORD', message: `a concentrated liquid is measured by volume: give the volume taken ('taken'), not a mass weighed` });
     if (row.as !== '') throw fail({ code: 'BAD_RECORD', message: `'as' applies to a solid reagent, not to a concentrated liquid` });
-    return { row, kind: 'concentrated', concentrated: concentratedReagent(row.formula, { ...options, fraction: row.purity, density: opt(row.density), concentration: opt(row.target), volume: row.volume, taken: opt(row.taken) }) };
+    const concentrated = concentratedReagent(row.formula, { ...options, fraction: row.purity, density: opt(row.density), concentration: opt(row.target), volume: row.volume, taken: opt(row.taken) });
+    // the purity column is an assay for a solid and a mass fraction for a liquid: a density decides,
+    // which is worth saying where the reagent is not one of the common concentrated grades
+    if (row.density !== '' && !CONCENTRATED_GRADES.some((g) => g.formula === concentrated.reagent.formula)) {
+      concentrated.notes.push({
+        code: 'PURITY_AS_MASS_FRACTION',
+        message: `the row gives a density, so ${row.formula.trim()} is read as a liquid reagent (a solution) of ${row.purity.trim()} w/w, measured by volume; for a solid weighed with an assay of ${row.purity.trim()}, leave the density empty`,
+      });
+    }
+    return { row, kind: 'concentrated', concentrated };
   }
   if (row.taken !== '') throw fail({ code: 'BAD_RECORD', message: `a volume taken applies to a concentrated liquid (give its density); a solid is weighed ('weighed')` });
   return { row, kind: 'solid', solution: prepareSolution(row.formula, { ...options, concentration: opt(row.target), volume: row.volume, purity: opt(row.purity), as: opt(row.as), weighed: opt(row.weighed) }) };
