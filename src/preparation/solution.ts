@@ -16,6 +16,7 @@ import { reagentHandlingNote, smallMassWarning } from './warnings.js';
 import { partShare } from '../composition/part-share.js';
 import { toDecimal } from '../formula/amount.js';
 import { isMetal } from '../formula/written-order.js';
+import { solubilityWarning } from './solubility.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { exact, type Measured } from '../sigfig/measured.js';
@@ -214,6 +215,9 @@ function ofTheElementNote(reagentText: string, reagent: MassDetail, target: { co
   };
 }
 
+/** 1 mol/L in base units, for a concentration in M. */
+const ONE_MOLAR = quantity(exact(1), unitOf('M'));
+
 const pct = (d: Decimal) => `${d.times(100).toSignificantDigits(4).toFixed()} %`;
 
 /**
@@ -312,6 +316,9 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
       pureMass = instruction(pm, inputs);
       mass = instruction(purity ? divide(pm, purity) : pm, inputs);
     }
+    const perLitre = divide(divide(tm, perReagent), volume).value.div(ONE_MOLAR.value);
+    const insoluble = solubilityWarning(reagent, perLitre, options);
+    if (insoluble) notes.push(insoluble);
     const few = fewFiguresNote(mass, 'the mass to weigh', `the solution made is ${options.concentration!.trim()}`);
     if (few) notes.push(few);
     const shown = displayInstruction(mass, massUnitFor(mass.quantity)).text;

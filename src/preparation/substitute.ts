@@ -10,8 +10,7 @@ import { AMOUNT, MASS, measureAs } from '../calc/measure.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnitFor, type InputFigures, type Instruction } from '../sigfig/instruction.js';
 import { readPurity } from './purity.js';
 import { smallMassWarning } from './warnings.js';
-import { partShare } from '../composition/part-share.js';
-import { toDecimal } from '../formula/amount.js';
+import { atomsPastWater } from './past-water.js';
 import { Decimal } from '../exact/decimal.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
@@ -40,23 +39,6 @@ export interface SubstituteResult {
 export interface SubstituteOptions extends MassOptions {
   /** The assay of the form in hand, the one weighed: '98.0 %'. The amount asked for is of the pure form named. */
   purity?: string;
-}
-
-/** Atoms other than the water written in the formula (water of crystallisation). */
-function core(m: MassDetail, options: MassOptions): Map<string, string> {
-  let water = 0;
-  try {
-    const w = partShare(m, 'H2O', options);
-    if (w.countedFrom === 'written') water = toDecimal(w.count).toNumber();
-  } catch {
-    water = 0;
-  }
-  const out = new Map<string, string>();
-  for (const [k, n] of m.atoms) {
-    const left = toDecimal(n).minus(k === 'H' ? 2 * water : k === 'O' ? water : 0);
-    if (!left.isZero()) out.set(k, left.toFixed());
-  }
-  return out;
 }
 
 /** True when every atom of `a` (past water) is in `b` as often or more: `b` is `a` with something added, as a salt is its free base with the acid. */
@@ -101,8 +83,8 @@ export function substituteForm(use: string, instead: string, amount: string, opt
   if (few) notes.push(few);
   const small = smallMassWarning(mass.quantity, `the mass to weigh, ${displayInstruction(mass, massUnitFor(mass.quantity)).text},`, 'weigh a larger batch, or make a stock solution');
   if (small) notes.push(small);
-  const a = core(u, options);
-  const b = core(i, options);
+  const a = atomsPastWater(u, options);
+  const b = atomsPastWater(i, options);
   const same = a.size === b.size && [...a].every(([k, v]) => b.get(k) === v);
   if (!same && !within(a, b) && !within(b, a)) {
     throw fail({

@@ -1,0 +1,94 @@
+/**
+ * The solubility in water of common laboratory salts and solids, to catch a target no solution
+ * can hold (7 M NaCl is 409 g/L; water dissolves about 36 g per 100 g at 20 °C).
+ *
+ * The figures are grams of the anhydrous compound per 100 g of water at 20 °C, typed from memory
+ * of the CRC Handbook of Chemistry and Physics table of aqueous solubility of inorganic
+ * compounds (and for the organic solids, of its physical-constants tables). They are used only
+ * with a wide margin (see {@link solubilityWarning}), so a figure a few per cent off changes
+ * nothing the user sees.
+ */
+import type { Note } from '../errors/issue.js';
+import { Decimal } from '../exact/decimal.js';
+import { formulaMassDetail, type MassDetail, type MassOptions } from '../mass/formula-mass.js';
+import { atomsPastWater } from './past-water.js';
+
+/** Solubility, g of anhydrous compound per 100 g of water at 20 °C (from memory, CRC Handbook). */
+const SOLUBILITY_20C: readonly (readonly [formula: string, name: string, gPer100g: string])[] = [
+  ['NaCl', 'sodium chloride', '35.9'],
+  ['KCl', 'potassium chloride', '34.2'],
+  ['NH4Cl', 'ammonium chloride', '37.2'],
+  ['KBr', 'potassium bromide', '65.3'],
+  ['KI', 'potassium iodide', '144'],
+  ['KNO3', 'potassium nitrate', '31.6'],
+  ['NaNO3', 'sodium nitrate', '87.6'],
+  ['AgNO3', 'silver nitrate', '216'],
+  ['NaHCO3', 'sodium hydrogen carbonate', '9.6'],
+  ['Na2CO3', 'sodium carbonate', '21.5'],
+  ['Na2SO4', 'sodium sulfate', '19.5'],
+  ['MgSO4', 'magnesium sulfate', '33.7'],
+  ['CuSO4', 'copper(II) sulfate', '20.7'],
+  ['CaSO4', 'calcium sulfate', '0.21'],
+  ['BaCl2', 'barium chloride', '35.8'],
+  ['CaCl2', 'calcium chloride', '74.5'],
+  ['KMnO4', 'potassium permanganate', '6.4'],
+  ['K2Cr2O7', 'potassium dichromate', '12'],
+  ['KH2PO4', 'potassium dihydrogen phosphate', '22.6'],
+  ['Na2HPO4', 'disodium hydrogen phosphate', '7.7'],
+  ['Na2S2O3', 'sodium thiosulfate', '70'],
+  ['Ca(OH)2', 'calcium hydroxide', '0.17'],
+  ['Ba(OH)2', 'barium hydroxide', '3.9'],
+  ['NaOH', 'sodium hydroxide', '109'],
+  ['KOH', 'potassium hydroxide', '112'],
+  ['C8H5KO4', 'potassium hydrogen phthalate', '8'],
+  ['C6H12O6', 'glucose', '91'],
+  ['C12H22O11', 'sucrose', '200'],
+];
+
+interface Entry {
+  key: string;
+  name: string;
+  formula: string;
+  molarMass: Decimal;
+  gPer100g: Decimal;
+}
+let entries: Entry[] | undefined;
+
+/** A key of atom counts, the same for every way of writing one compound. */
+const keyOf = (atoms: Map<string, string>) => [...atoms].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)).map(([k, v]) => `${k}${v}`).join(' ');
+
+function table(): Entry[] {
+  return (entries ??= SOLUBILITY_20C.map(([formula, name, s]) => {
+    const d = formulaMassDetail(formula);
+    return { key: keyOf(atomsPastWater(d)), name, formula, molarMass: new Decimal(d.molarMass.toString()), gPer100g: new Decimal(s) };
+  }));
+}
+
+/**
+ * A warning when a solution would hold more of a reagent than water can dissolve at 20 °C, or
+ * null (also for a reagent not in the table). The test is generous: the anhydrous compound per
+ * litre of solution is compared with what a whole kilogram of water dissolves, more water than a
+ * litre of any such solution holds, so the warning means the target cannot be made as written.
+ *
+ * @param reagent - the reagent weighed, as read by formulaMassDetail (a hydrate counts as its anhydrous salt).
+ * @param molesPerLitre - formula units of the reagent per litre of solution.
+ * @param options - the mass options the reagent was read with.
+ * @returns a SOLUBILITY_EXCEEDED note, or null.
+ * @example
+ * solubilityWarning(formulaMassDetail('NaCl'), new Decimal(7))?.code // 'SOLUBILITY_EXCEEDED'
+ * solubilityWarning(formulaMassDetail('NaCl'), new Decimal(1)) // null
+ * solubilityWarning(formulaMassDetail('CuSO4·5H2O'), new Decimal('0.100')) // null
+ */
+export function solubilityWarning(reagent: MassDetail, molesPerLitre: Decimal, options: MassOptions = {}): Note | null {
+  const key = keyOf(atomsPastWater(reagent, options));
+  const e = table().find((x) => x.key === key);
+  if (!e) return null;
+  const gPerL = molesPerLitre.times(e.molarMass);
+  const limit = e.gPer100g.times(10); // g per kg of water
+  if (gPerL.lte(limit)) return null;
+  const hydrate = reagent.formula !== formulaMassDetail(e.formula).formula ? ` (as anhydrous ${e.formula})` : '';
+  return {
+    code: 'SOLUBILITY_EXCEEDED',
+    message: `the target is ${gPerL.toSignificantDigits(4).toFixed()} g of ${e.name} per litre${hydrate}, more than a kilogram of water dissolves at 20 °C (about ${e.gPer100g.toFixed()} g per 100 g of water, from memory of the CRC Handbook): no such solution can be made; check the target and its unit`,
+  };
+}
