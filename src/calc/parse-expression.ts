@@ -6,6 +6,7 @@ import type { Issue } from '../errors/issue.js';
 import { PondusError } from '../errors/pondus-error.js';
 import { typedIssue } from '../errors/message.js';
 import { columnOf } from '../formula-parser/prescan.js';
+import { notReadHint, UNIT_SYMBOLS } from '../sigfig/units.js';
 import { fastParseExpression } from './fast-path.js';
 import { calcFullGrammar } from './grammar-loader.js';
 import type { CalcTree } from './tree.js';
@@ -66,7 +67,7 @@ export function parseWithGrammar(input: string): CalcTree {
     const o = lexed.errors[0].offset;
     const word = /^[A-Za-zµμ/%]+/.exec(input.slice(o));
     if (word) {
-      throw new PondusError([typedIssue({ code: 'UNKNOWN_UNIT', unit: word[0], inExpression: true, column: columnOf(input, o), length: word[0].length, hint: 'write a molar mass as M(formula); units: g, mg, µg, kg, mol, mmol, µmol, L, mL, µL, M, mM, mol/L, g/L, mg/mL, g/100 mL, mg/dL, g/mol, %, % w/v, ppm; a ratio as 1:1000' })], input);
+      throw new PondusError([typedIssue({ code: 'UNKNOWN_UNIT', unit: word[0], inExpression: true, column: columnOf(input, o), length: word[0].length, hint: notReadHint(word[0]) ?? 'write a molar mass as M(formula); units: g, mg, µg, kg, mol, mmol, µmol, L, mL, µL, M, mM, mol/L, g/L, mg/L, mg/mL, g/100 mL, mg/dL, g/mol, %, % w/v, ppm; a ratio as 1:1000' })], input);
     }
     const ch = String.fromCodePoint(input.codePointAt(o)!);
     const hint = ch === ',' ? commaHint(input) : undefined;
@@ -126,6 +127,13 @@ function syntaxIssue(input: string, err: IRecognitionException): Issue {
   }
   const column = columnOf(input, t.startOffset);
   if (t.tokenType.name === 'Unit') {
+    // a unit after a unit ('mmol/mL', 'mol L-1') is a compound unit the table does not have
+    const before = /([A-Za-zµμ%]+)(\s*\/\s*|\s+)$/.exec(input.slice(0, t.startOffset));
+    if (before) {
+      const written = input.slice(t.startOffset - before[0].length, t.startOffset + t.image.length);
+      const at = t.startOffset - before[0].length;
+      return typedIssue({ code: 'UNKNOWN_UNIT', unit: written, inExpression: true, column: columnOf(input, at), length: written.length, hint: notReadHint(written.replace(/\s+/g, '')) ?? `a unit made of two is read only when it is one of the units pondus knows: ${UNIT_SYMBOLS.join(', ')}` });
+    }
     return { code: 'BAD_EXPRESSION', message: `unit '${t.image}' at column ${column} must follow a number`, column, length: t.image.length };
   }
   if (t.tokenType.name === 'NumberLiteral') {

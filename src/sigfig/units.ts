@@ -109,10 +109,13 @@ const TABLE: Unit[] = [
   { symbol: 'M', exp10: 0, dims: MOLARITY, name: 'mole per litre' },
   { symbol: 'mM', exp10: -3, dims: MOLARITY, name: 'millimole per litre' },
   { symbol: 'µM', exp10: -6, dims: MOLARITY, name: 'micromole per litre' },
+  { symbol: 'nM', exp10: -9, dims: MOLARITY, name: 'nanomole per litre' },
   { symbol: 'mol/L', exp10: 0, dims: MOLARITY, name: 'mole per litre' },
   { symbol: 'mmol/L', exp10: -3, dims: MOLARITY, name: 'millimole per litre' },
   { symbol: 'g/L', exp10: 0, dims: MASS_CONCENTRATION, name: 'gram per litre' },
   { symbol: 'mg/L', exp10: -3, dims: MASS_CONCENTRATION, name: 'milligram per litre' },
+  { symbol: 'µg/L', exp10: -6, dims: MASS_CONCENTRATION, name: 'microgram per litre' },
+  { symbol: 'ng/mL', exp10: -6, dims: MASS_CONCENTRATION, name: 'nanogram per millilitre' },
   { symbol: 'mg/mL', exp10: 0, dims: MASS_CONCENTRATION, name: 'milligram per millilitre' },
   { symbol: 'µg/mL', exp10: -3, dims: MASS_CONCENTRATION, name: 'microgram per millilitre' },
   { symbol: 'g/mL', exp10: 3, dims: MASS_CONCENTRATION, name: 'gram per millilitre' },
@@ -145,6 +148,8 @@ const ALIASES: Record<string, string> = {
   uL: 'µL',
   'μL': 'µL',
   ul: 'µL',
+  'µl': 'µL',
+  'μl': 'µL',
   ml: 'mL',
   l: 'L',
   uM: 'µM',
@@ -174,6 +179,32 @@ const ALIASES: Record<string, string> = {
   'mol dm⁻³': 'mol/L',
   'mol dm-3': 'mol/L',
   'mol L⁻¹': 'mol/L',
+  'mol L-1': 'mol/L',
+  'mol·L-1': 'mol/L',
+  'mmol L-1': 'mmol/L',
+  'mmol L⁻¹': 'mmol/L',
+  'g L-1': 'g/L',
+  'g L⁻¹': 'g/L',
+  'mg L-1': 'mg/L',
+  'mg L⁻¹': 'mg/L',
+  'g mL-1': 'g/mL',
+  'g mL⁻¹': 'g/mL',
+  'g mol-1': 'g/mol',
+  'g mol⁻¹': 'g/mol',
+  'g cm-3': 'g/mL',
+  // the same amount per a thousandth of the volume: exactly the unit a thousand times smaller
+  'mmol/mL': 'mol/L',
+  'µmol/mL': 'mmol/L',
+  'umol/mL': 'mmol/L',
+  'μmol/mL': 'mmol/L',
+  'µmol/L': 'µM',
+  'umol/L': 'µM',
+  'μmol/L': 'µM',
+  'nmol/L': 'nM',
+  'nmol/mL': 'µM',
+  'ug/L': 'µg/L',
+  'μg/L': 'µg/L',
+  'ng/ml': 'ng/mL',
   'g/cm³': 'g/mL',
   'g/cm3': 'g/mL',
   'g·cm⁻³': 'g/mL',
@@ -204,6 +235,9 @@ const ALIASES: Record<string, string> = {
   'μg/g': 'µg/g',
 };
 
+// a minus sign (U+2212) where a hyphen stands for one ('mol dm−3', as typeset texts print it)
+for (const k of Object.keys(ALIASES)) if (k.includes('-')) ALIASES[k.replace(/-/g, '\u2212')] = ALIASES[k];
+
 /** Every spelling {@link unitOf} accepts: the symbols and their aliases. */
 export const UNIT_SPELLINGS: readonly string[] = Object.freeze([...TABLE.map((u) => u.symbol), ...Object.keys(ALIASES)]);
 
@@ -220,6 +254,27 @@ export function isPercent(u: Unit): boolean {
 }
 
 const BY_SYMBOL = new Map(TABLE.map((u) => [u.symbol, u]));
+
+/** Units of the trade that pondus does not read as amounts, and why (for the hint of UNKNOWN_UNIT). */
+const NOT_READ: readonly [RegExp, string][] = [
+  [/^N$/, 'normality (N) depends on the reaction the solution is used in, so pondus does not read it: give the molarity (M) and count the equivalents of that reaction yourself'],
+  [/^(m|µ|u)?(eq|Eq)(\/[mµu]?L)?$/, "equivalents depend on the charge of the ion counted, so pondus does not read them as an amount: give the molarity or the mass concentration; the milliequivalents of a salt come from its mass or strength in the milliequivalents calculation (meq)"],
+  [/^(IU|units?|U)(\/(m?g|mL|L))?$/i, 'biological units (IU, units) are defined for each substance by its reference standard, not by its mass: pondus does not convert them'],
+  [/^(mol|mmol)\/kg$/, 'a molality (mol per kg of solvent) is not read: pondus reads molar concentrations per litre of solution (M, mol/L)'],
+];
+
+/**
+ * Why a unit of the trade is not read, for the hint of an unknown unit; undefined for a word
+ * that is not such a unit.
+ *
+ * @example
+ * notReadHint('N')?.startsWith('normality') // true
+ * notReadHint('mEq/L')?.startsWith('equivalents') // true
+ * notReadHint('foo') // undefined
+ */
+export function notReadHint(word: string): string | undefined {
+  return NOT_READ.find(([re]) => re.test(word))?.[1];
+}
 
 /** The symbols the calculator and the commands accept, for help and error messages. */
 export const UNIT_SYMBOLS: readonly string[] = Object.freeze(TABLE.map((u) => u.symbol));
@@ -238,7 +293,7 @@ export const UNIT_SYMBOLS: readonly string[] = Object.freeze(TABLE.map((u) => u.
 export function unitOf(symbol: string, column?: number): Unit {
   const u = BY_SYMBOL.get(symbol) ?? BY_SYMBOL.get(ALIASES[symbol] ?? '');
   if (!u) {
-    throw fail(typedIssue({ code: 'UNKNOWN_UNIT', unit: symbol, inExpression: false, column, hint: `units: ${UNIT_SYMBOLS.join(', ')}` }));
+    throw fail(typedIssue({ code: 'UNKNOWN_UNIT', unit: symbol, inExpression: false, column, hint: notReadHint(symbol) ?? `units: ${UNIT_SYMBOLS.join(', ')}` }));
   }
   return u;
 }

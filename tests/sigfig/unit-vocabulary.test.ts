@@ -6,6 +6,7 @@ import { measure } from '../../src/calc/measure.js';
 import { readMeasurements } from '../../src/empirical/measurements.js';
 import { sigFigsOf } from '../../src/sigfig/measured.js';
 import { readNumber } from '../../src/sigfig/read-number.js';
+import { firstIssue } from '../support/error-code.js';
 import * as units from '../../src/sigfig/units.js';
 import { AMOUNT, MASS, MASS_CONCENTRATION, MOLAR_MASS, MOLARITY, PURE, UNIT_SPELLINGS, VOLUME, pow10, sameDims, unitFactor, unitOf } from '../../src/sigfig/units.js';
 
@@ -107,5 +108,30 @@ describe('figures of a number as read', () => {
     expect(sigFigsOf(readNumber('1300'))).toBe(2);
     expect(sigFigsOf(readNumber('2.50e2'))).toBe(3);
     expect(sigFigsOf({ value: new Decimal('9.9996'), lsd: -3 })).toBe(5);
+  });
+});
+
+describe('the spellings of concentration units in print', () => {
+  // source: SI Brochure, 9th edition (BIPM 2019), §5.4.6: mol L⁻¹ and mol/L are the same unit, and
+  // 1 mmol/mL = 1 mol/L, 1 µmol/mL = 1 mmol/L, 1 ng/mL = 1 µg/L exactly (prefixes are powers of ten)
+  const inBase = (text: string) => measure(text).value.toString();
+  it('negative exponents written with a hyphen or a minus sign, and a unit over a thousandth of the volume', () => {
+    for (const [a, b] of [['0.100 mol L-1', '0.100 mol/L'], ['0.100 mol dm−3', '0.100 mol/L'], ['0.100 mmol/mL', '0.100 mol/L'], ['2.50 µmol/mL', '2.50 mmol/L'], ['5.0 ng/mL', '5.0 µg/L'], ['5.0 µg/L', '0.0050 mg/L'], ['50. nM', '0.050 µM'], ['250 µl', '250 µL'], ['250 μl', '0.250 mL'], ['1.19 g mL-1', '1.19 g/mL']]) {
+      expect(inBase(a), `${a} = ${b}`).toBe(inBase(b));
+    }
+  });
+
+  it('units of the trade that are not amounts are refused with the reason, not a list', () => {
+    const hint = (text: string) => firstIssue(() => measure(text)).hint ?? '';
+    expect(hint('0.1 N')).toMatch(/^normality \(N\) depends on the reaction/);
+    expect(hint('20 mEq/L')).toMatch(/^equivalents depend on the charge/);
+    expect(hint('5000 IU')).toMatch(/^biological units/);
+    expect(hint('2.0 mol/kg')).toMatch(/^a molality/);
+  });
+
+  it('two units side by side that make no unit of the table are one unknown unit, not a unit missing its number', () => {
+    const issue = firstIssue(() => measure('2.0 mmol/g'));
+    expect(issue.code).toBe('UNKNOWN_UNIT');
+    expect([issue.column, issue.length]).toEqual([5, 6]);
   });
 });
