@@ -125,7 +125,11 @@ export function osmolarity(text: string, o: OsmolarityOptions = {}): OsmolarityR
     const own = (e: unknown): never => {
       if (e instanceof PondusError && e.first.code !== 'USAGE') {
         const hint = e.first.code === 'UNKNOWN_ELEMENT' && NAME_LIKE.test(solute) ? 'write the solute as its formula (NaCl, C6H12O6·H2O); pondus reads no name here but dextrose with its form' : e.first.hint;
-        throw fail({ code: e.first.code, message: `${solute}: ${e.first.message}`, column, hint, options: e.first.options }, text);
+        // a column inside the solute's formula or its strength becomes a column of the whole list
+        const within = e.first.column !== undefined ? (e.input === strength ? pair.valueColumn : e.input === solute ? pair.column : undefined) : undefined;
+        const at = within !== undefined ? column + within - 1 + e.first.column! - 1 : column;
+        const message = within !== undefined ? e.first.message.replace(`at column ${e.first.column}`, `at column ${at}`) : e.first.message;
+        throw fail({ code: e.first.code, message: `${solute}: ${message}`, column: at, ...(within !== undefined && e.first.length !== undefined ? { length: e.first.length } : {}), hint, options: e.first.options }, text);
       }
       throw e;
     };

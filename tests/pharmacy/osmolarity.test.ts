@@ -244,3 +244,18 @@ describe('pondus osmolarity with non-electrolytes: the table, JSON, CSV and a ba
     expect(rows[1].error.column).toBe(1);
   });
 });
+
+describe('an error inside one solute points at its place in the whole list', () => {
+  it('a unit in the strength: the column of the unit itself, in the message, the field and the span', () => {
+    const e = failure('NaCl=0.9 %, KCl=20 mEq/L');
+    expect(e.code).toBe('UNKNOWN_UNIT');
+    expect([e.column, e.length]).toEqual([20, 5]);
+    expect(e.message).toBe("KCl: the strength: unknown unit or word 'mEq/L' at column 20");
+  });
+
+  it('an element in the formula: the column of the symbol', () => {
+    const e = failure('NaCl=0.9 %,  KXl=20 mM');
+    expect(e.code).toBe('UNKNOWN_ELEMENT');
+    expect(e.column).toBe(15);
+  });
+});
