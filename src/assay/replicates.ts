@@ -96,7 +96,15 @@ export function splitValues(text: string, notes: Note[]): string[] {
       notes.push({ code: 'UNIT_APPLIED_TO_ALL', message: `the unit written after the last value (${last.unit}) is taken for every value` });
       for (const v of values) v.unit = last.unit;
     } else {
-      throw fail({ code: 'BAD_MEASUREMENT', message: 'some values have a unit and some do not: write the unit after each value, or once after the last' }, text);
+      const units = [...new Set(withUnit.map((v) => v.unit))];
+      const bare = values.filter((v) => v.unit === null).map((v) => v.num);
+      const which = `${bare.join(', ')} ${bare.length === 1 ? 'has' : 'have'} no unit`;
+      throw fail({
+        code: 'BAD_MEASUREMENT',
+        message: units.length > 1
+          ? `the values are in different units (${units.join(', ')}) and ${which}: write each value in the one unit of the list`
+          : `some values have a unit (${units[0]}) and ${which}: write the unit after each value, or once after the last`,
+      }, text);
     }
   }
   return values.map((v) => (v.unit === null ? v.num : `${v.num} ${v.unit}`));

@@ -81,3 +81,16 @@ describe('replicate statistics', () => {
     );
   });
 });
+
+describe('a list with its units mixed says which values lack one, and which units differ', () => {
+  it('two units and a bare value: the units are named', () => {
+    const e = firstIssue(() => splitValues('99.42 99.61 mg 99.38 %'));
+    expect(e.code).toBe('BAD_MEASUREMENT');
+    expect(e.message).toBe('the values are in different units (mg, %) and 99.42 has no unit: write each value in the one unit of the list');
+  });
+
+  it('one unit on some values: the bare ones are named', () => {
+    const e = firstIssue(() => splitValues('99.42 % 99.61 99.38 % 99.50'));
+    expect(e.message).toBe('some values have a unit (%) and 99.61, 99.50 have no unit: write the unit after each value, or once after the last');
+  });
+});
