@@ -36,7 +36,10 @@ export interface MolarStrength {
  * notes.map((n) => n.code) // ['PERCENT_AS_W_V', 'NOMINAL_STRENGTH']
  */
 export function molarStrength(text: string, molarMass: Quantity, measured: boolean | undefined, notes: Note[]): MolarStrength {
-  const strength = readStrength(text, 'w/v', notes, 'the strength');
+  const read: Note[] = [];
+  const strength = readStrength(text, 'w/v', read, 'the strength');
+  // a nominal strength is exact: how many figures its zeros carry does not arise ('10 %' is not 1 figure)
+  notes.push(...(measured ? read : read.filter((n) => !/: the trailing zeros of .* are read as not significant/.test(n.message))));
   if (strength.percent === 'w/w' || strength.percent === 'v/v') throw fail({ code: 'BAD_AMOUNT', message: `a % ${strength.percent} strength needs the solution's density to give mmol per mL; give it as % w/v, g/L or M` }, text);
   const q = strength.value;
   // an amount concentration as it is; a percent w/v (a pure fraction of g per mL) as g/L; a mass concentration over M

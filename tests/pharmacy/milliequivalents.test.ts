@@ -43,10 +43,14 @@ describe('milliequivalents of a strength (handbook values)', () => {
 
   it('notes every reading: the % read as w/v, the label taken as nominal, the ions, complete dissociation', () => {
     const r = milliequivalents('KCl', { concentration: '10 %' });
-    expect(codes(r.notes)).toEqual(['IONS_READ', 'MEASUREMENT', 'PERCENT_AS_W_V', 'NOMINAL_STRENGTH', 'MEQ_PER_MMOL', 'COMPLETE_DISSOCIATION']);
+    // a nominal strength is exact: no note that the zero of 10 is not significant, beside one that it is exact
+    expect(codes(r.notes)).toEqual(['IONS_READ', 'PERCENT_AS_W_V', 'NOMINAL_STRENGTH', 'MEQ_PER_MMOL', 'COMPLETE_DISSOCIATION']);
+    expect(r.notes.some((n) => /trailing zeros/.test(n.message))).toBe(false);
     const m = milliequivalents('KCl', { concentration: '10.0 %', measured: true });
     expect(displayQuantity(m.equivalents, 'M').text).toBe('1.34 M');
     expect(codes(m.notes)).toContain('MEASURED_STRENGTH');
+    // a measured one keeps the note on its figures
+    expect(milliequivalents('KCl', { concentration: '10 %', measured: true }).notes.some((n) => /the trailing zeros of 10 are read as not significant/.test(n.message))).toBe(true);
   });
 
   it('refuses a % w/w strength (needs the density)', () => {
