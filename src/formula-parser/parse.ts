@@ -85,14 +85,21 @@ export function parseFormula(input: string, options: ParseOptions = {}): Formula
 export function parseWithGrammar(input: string, options: ParseOptions = {}): FormulaTree {
   const mode: ReadingMode = options.abbreviations === true ? 'abbreviations' : options.abbreviations === 'none' ? 'elements' : 'plain';
   const pre = prescanAll(input, options.maxLength ?? MAX_FORMULA_LENGTH);
-  if (pre.length > 0) throw new PondusError(pre, input);
-
   const state = stateSymbol(input);
   const text = state ? input.slice(0, state.offset) : input;
+  const { formulaLexer, formulaGrammar, ABBREVIATION_MODE, ELEMENTS_MODE, PLAIN_MODE } = fullGrammar();
+  const lex = () => formulaLexer().tokenize(text, mode === 'abbreviations' ? ABBREVIATION_MODE : mode === 'elements' ? ELEMENTS_MODE : PLAIN_MODE);
+  if (pre.length > 0) {
+    // brackets that do not pair up leave the words readable: those that are no element symbol are reported too
+    if (pre.every((i) => BRACKET_CODES.has(i.code))) {
+      const lexed = lex();
+      throw new PondusError(byColumn([...pre, ...lexed.errors.slice(0, MAX_ISSUES + 1).map((e) => unexpectedCharacter(input, e.offset)), ...unknownWords(text, lexed.tokens)]), input);
+    }
+    throw new PondusError(pre, input);
+  }
   if (state && text.trim() === '') throw new PondusError([typedIssue({ code: 'EMPTY_INPUT', stateSymbol: state.symbol })], input);
 
-  const { formulaLexer, formulaGrammar, ABBREVIATION_MODE, ELEMENTS_MODE, PLAIN_MODE } = fullGrammar();
-  const lexed = formulaLexer().tokenize(text, mode === 'abbreviations' ? ABBREVIATION_MODE : mode === 'elements' ? ELEMENTS_MODE : PLAIN_MODE);
+  const lexed = lex();
   if (lexed.errors.length > 0) {
     // every stray character, and every word that is no element symbol among the tokens read around them
     const found = lexed.errors.slice(0, MAX_ISSUES + 1).map((e) => unexpectedCharacter(input, e.offset));
@@ -163,6 +170,9 @@ export function safeParseFormula(input: string, options: ParseOptions = {}): Saf
 }
 
 /** Issues in the order of the input (a stable sort: issues at one column keep their order). */
+/** The problems of brackets alone, after which the rest of the text can still be read. */
+const BRACKET_CODES: ReadonlySet<string> = new Set(['UNCLOSED_GROUP', 'UNMATCHED_CLOSING', 'MISMATCHED_BRACKET', 'EMPTY_GROUP']);
+
 function byColumn(issues: Issue[]): Issue[] {
   return issues.sort((a, b) => (a.column ?? 0) - (b.column ?? 0));
 }

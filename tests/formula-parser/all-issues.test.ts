@@ -67,3 +67,17 @@ describe('the formula reader reports every problem it finds', () => {
     expect(prescanAll('x'.repeat(20_000)).map((i) => i.code)).toEqual(['INPUT_TOO_LONG']);
   });
 });
+
+describe('brackets that do not pair up do not hide the other problems', () => {
+  it('an unknown word beside two unclosed brackets: all three, in the order of the text', () => {
+    expect(found('bad((')).toEqual([['UNKNOWN_ELEMENT', 1], ['UNCLOSED_GROUP', 4], ['UNCLOSED_GROUP', 5]]);
+  });
+
+  it('an unknown symbol inside a bracket that is never closed', () => {
+    expect(found('Ca(OXq')).toEqual([['UNCLOSED_GROUP', 3], ['UNKNOWN_ELEMENT', 5]]);
+  });
+
+  it('a bracket problem alone stays alone', () => {
+    expect(found('Ca(OH2')).toEqual([['UNCLOSED_GROUP', 3]]);
+  });
+});
