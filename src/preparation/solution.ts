@@ -94,6 +94,10 @@ function readConcentration(text: string, notes: Note[]): { conc: Quantity; unit:
       conc = multiply(conc, quantity(exact(1000), unitOf('g/L'))); // 1 ppm ≈ 1 mg/L for dilute aqueous solutions
       notes.push({ code: 'PPM_AS_MG_PER_L', message: 'ppm is read as mg/L, which holds for dilute aqueous solutions (density 1.00 g/mL)' });
       unit = 'mg/L';
+    } else if (/ppb$/.test(t)) {
+      conc = multiply(conc, quantity(exact(1000), unitOf('g/L'))); // 1 ppb ≈ 1 µg/L for dilute aqueous solutions
+      notes.push({ code: 'PPB_AS_UG_PER_L', message: 'ppb is read as µg/L, which holds for dilute aqueous solutions (density 1.00 g/mL)' });
+      unit = 'µg/L';
     } else if (/%$/.test(t)) {
       conc = multiply(conc, quantity(exact(1000), unitOf('g/L')));
       notes.push({ code: 'PERCENT_AS_W_V', message: '% is read as % w/v (grams per 100 mL)' });

@@ -78,3 +78,13 @@ describe('a trace concentration of a metal salt names the reading it took', () =
     }
   });
 });
+
+describe('ppb targets', () => {
+  it('10.0 ppb is read as 10.0 µg/L, with a note, and weighs as the same target in µg/L does', () => {
+    const ppb = prepareSolution('Pb(NO3)2', { concentration: '10.0 ppb', volume: '1.000 L' });
+    const ugL = prepareSolution('Pb(NO3)2', { concentration: '10.0 µg/L', volume: '1.000 L' });
+    expect(displayInstruction(ppb.mass!, 'µg').text).toBe('10.00 µg');
+    expect(ppb.mass!.quantity.value.toString()).toBe(ugL.mass!.quantity.value.toString());
+    expect(ppb.notes.find((n) => n.code === 'PPB_AS_UG_PER_L')!.message).toContain('ppb is read as µg/L');
+  });
+});
