@@ -8,6 +8,7 @@ import { fail } from '../errors/pondus-error.js';
 import type { Decimal } from '../exact/decimal.js';
 import { typedIssue } from '../errors/message.js';
 import { MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
+import { partsPerAsMassPerVolume } from './parts-per.js';
 import { divide, multiply, subtract, type Quantity } from '../sigfig/quantity.js';
 import { baseUnitText, sameDims } from '../sigfig/units.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, volumeUnitFor, type Instruction } from '../sigfig/instruction.js';
@@ -92,10 +93,13 @@ export function dilute(stockText: string, targetText: string | undefined, volume
       throw fail({ code: 'INCOMPATIBLE_UNITS', message: `'${t.trim()}' is a content by mass: made up to a volume, a dilution needs strengths per volume (M, g/L, % w/v, % v/v) or the densities; to let down a solid or semisolid by mass, give \`mass\` (the total) instead of \`volume\``, options: ['mass', 'volume'] }, t);
     }
   }
-  const stock = measureAs(stockText, kinds, 'the stock concentration', notes);
+  let stock = measureAs(stockText, kinds, 'the stock concentration', notes);
   percentReading(stockText, targetText, notes);
   if (targetText === undefined && takenText === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the target concentration, or the volume of stock taken (or both)' });
-  const target = targetText !== undefined ? measureAs(targetText, kinds, 'the target concentration', notes) : null;
+  let target = targetText !== undefined ? measureAs(targetText, kinds, 'the target concentration', notes) : null;
+  // ppm or ppb against a mass per volume (1000 ppm to 10.0 µg/L): the fraction read as mg/L or µg/L, with its note
+  if (target && sameDims(stock.dims, PURE) && sameDims(target.dims, MASS_CONCENTRATION)) stock = partsPerAsMassPerVolume(stock, stockText, notes)?.conc ?? stock;
+  if (target && sameDims(target.dims, PURE) && sameDims(stock.dims, MASS_CONCENTRATION)) target = partsPerAsMassPerVolume(target, targetText!, notes)?.conc ?? target;
   if (target && !sameDims(stock.dims, target.dims)) throw fail(kindsDiffer(stock, target));
   const finalVolume = measureAs(volumeText, [VOLUME], 'the final volume', notes);
   if (stock.value.lte(0) || (target && target.value.lte(0)) || finalVolume.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'concentrations and volume must be positive' });

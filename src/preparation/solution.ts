@@ -17,6 +17,7 @@ import { partShare } from '../composition/part-share.js';
 import { toDecimal } from '../formula/amount.js';
 import { isMetal } from '../formula/written-order.js';
 import { solubilityWarning } from './solubility.js';
+import { partsPerAsMassPerVolume } from './parts-per.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { exact, type Measured } from '../sigfig/measured.js';
@@ -83,6 +84,7 @@ function readConcentration(text: string, notes: Note[]): { conc: Quantity; unit:
   let unit = conc.unit?.symbol ?? (sameDims(conc.dims, MOLARITY) ? 'M' : 'g/L');
   if (sameDims(conc.dims, PURE)) {
     const t = text.trim();
+    let parts: { conc: Quantity; unit: string } | null;
     const ratio = /^[0-9]+(?:\.[0-9]*)?\s*:\s*[0-9]+(?:\.[0-9]*)?$/.test(t);
     if (ratio) {
       conc = multiply(conc, quantity(exact(1000), unitOf('g/L')));
@@ -90,14 +92,9 @@ function readConcentration(text: string, notes: Note[]): { conc: Quantity; unit:
       unit = 'mg/mL';
     } else if (/%\s*(w\/w|v\/v)$/i.test(t) || /(mg\/kg|mg\/g|µg\/g|µg\/mg|ug\/g)$/.test(t)) {
       throw fail({ code: 'INCOMPATIBLE_UNITS', message: `'${t}' is a fraction by ${/v\/v$/i.test(t) ? 'volume' : 'mass'}: a solution made up to a volume needs a concentration per volume (% w/v, g/L, mg/mL, mg/dL, M), or the density of the solution; for a solid or semisolid let down by mass, use \`diluteByMass\``, functions: ['diluteByMass'] }, text);
-    } else if (/ppm$/.test(t)) {
-      conc = multiply(conc, quantity(exact(1000), unitOf('g/L'))); // 1 ppm ≈ 1 mg/L for dilute aqueous solutions
-      notes.push({ code: 'PPM_AS_MG_PER_L', message: 'ppm is read as mg/L, which holds for dilute aqueous solutions (density 1.00 g/mL)' });
-      unit = 'mg/L';
-    } else if (/ppb$/.test(t)) {
-      conc = multiply(conc, quantity(exact(1000), unitOf('g/L'))); // 1 ppb ≈ 1 µg/L for dilute aqueous solutions
-      notes.push({ code: 'PPB_AS_UG_PER_L', message: 'ppb is read as µg/L, which holds for dilute aqueous solutions (density 1.00 g/mL)' });
-      unit = 'µg/L';
+    } else if ((parts = partsPerAsMassPerVolume(conc, t, notes))) {
+      conc = parts.conc;
+      unit = parts.unit;
     } else if (/%$/.test(t)) {
       conc = multiply(conc, quantity(exact(1000), unitOf('g/L')));
       notes.push({ code: 'PERCENT_AS_W_V', message: '% is read as % w/v (grams per 100 mL)' });

@@ -4,6 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { prepareSolution } from '../../src/preparation/solution.js';
 import { displayInstruction } from '../../src/sigfig/instruction.js';
 import { PondusError } from '../../src/errors/pondus-error.js';
+import { dilute } from '../../src/preparation/dilution.js';
 
 const g = (i: Parameters<typeof displayInstruction>[0] | null) => displayInstruction(i!, 'g').text;
 
@@ -86,5 +87,21 @@ describe('ppb targets', () => {
     expect(displayInstruction(ppb.mass!, 'µg').text).toBe('10.00 µg');
     expect(ppb.mass!.quantity.value.toString()).toBe(ugL.mass!.quantity.value.toString());
     expect(ppb.notes.find((n) => n.code === 'PPB_AS_UG_PER_L')!.message).toContain('ppb is read as µg/L');
+  });
+});
+
+describe('dilution between ppm or ppb and mass per volume', () => {
+  it('1000. ppm to 10.0 µg/L in 100.0 mL: take 1.000 µL (factor 10⁵), the ppm read as mg/L with its note', () => {
+    // 1000 mg/L × V1 = 0.0100 mg/L × 100.0 mL → V1 = 1.000 µL (C1·V1 = C2·V2)
+    const r = dilute('1000. ppm', '10.0 µg/L', '100.0 mL');
+    expect(displayInstruction(r.stockVolume!, 'µL').text).toBe('1.000 µL');
+    expect(r.notes.map((n) => n.code)).toContain('PPM_AS_MG_PER_L');
+    const b = dilute('1000. mg/L', '50.0 ppb', '100.0 mL');
+    expect(displayInstruction(b.stockVolume!, 'µL').text).toBe('5.000 µL');
+    expect(b.notes.map((n) => n.code)).toContain('PPB_AS_UG_PER_L');
+  });
+
+  it('ppm against a molar concentration stays refused: it needs the molar mass', () => {
+    expect(() => dilute('1.00 M', '5 ppm', '100.0 mL')).toThrow(/same kind/);
   });
 });
