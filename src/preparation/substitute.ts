@@ -11,7 +11,8 @@ import { displayInstruction, fewFiguresNote, inputFigures, instruction, massUnit
 import { readPurity } from './purity.js';
 import { smallMassWarning } from './warnings.js';
 import { atomsPastWater } from './past-water.js';
-import { Decimal } from '../exact/decimal.js';
+import { formRelation } from './form-relation.js';
+import { exact } from '../sigfig/measured.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { reportedMolarMass } from '../mass/reported-mass.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
@@ -41,11 +42,6 @@ export interface SubstituteOptions extends MassOptions {
   purity?: string;
 }
 
-/** True when every atom of `a` (past water) is in `b` as often or more: `b` is `a` with something added, as a salt is its free base with the acid. */
-function within(a: Map<string, string>, b: Map<string, string>): boolean {
-  return [...a].every(([k, v]) => b.has(k) && new Decimal(b.get(k)!).gte(v));
-}
-
 /**
  * How much of `use` to weigh in place of an amount of `instead` (an
  * instruction, at working precision). An assay given is that of `use`, the
@@ -56,7 +52,7 @@ function within(a: Map<string, string>, b: Map<string, string>): boolean {
  * @param amount - the amount of pure `instead` wanted, as a mass or in moles ('24.65 g').
  * @param options - the purity (assay) of the form in hand, and the mass options.
  * @returns the mass of `use` to weigh (an instruction at working precision), the moles asked for, and the notes.
- * @throws PondusError: a formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …); FORMS_UNRELATED when neither form, past its water of crystallisation, holds the other (NaCl for Na2CO3·10H2O); BAD_AMOUNT for an amount that is not positive or a purity not above 0 and at most 100 %; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
+ * @throws PondusError: a formula that cannot be read (the formula language's codes: UNKNOWN_ELEMENT, UNEXPECTED_CHARACTER, UNCLOSED_GROUP, AMBIGUOUS_READING, …); FORMS_UNRELATED when the two are, past water of crystallisation, neither the same salt nor a salt and its free base with a common acid (NaCl for Na2CO3·10H2O, FeCl3 for FeCl2); BAD_AMOUNT for an amount that is not positive or a purity not above 0 and at most 100 %; a measurement that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, INCOMPATIBLE_UNITS, NUMBER_OUT_OF_RANGE); BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * displayInstruction(substituteForm('MgSO4', 'MgSO4·7H2O', '24.65 g', { purity: '98.0 %' }).mass, 'g').text // '12.28 g'
  */
@@ -68,7 +64,18 @@ export function substituteForm(use: string, instead: string, amount: string, opt
   if (asked.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the amount must be positive' });
   const gPerMol = unitOf('g/mol');
   const n = sameDims(asked.dims, MASS) ? divide(asked, quantity(reportedMolarMass(i), gPerMol)) : asked;
-  const pm = multiply(n, quantity(reportedMolarMass(u), gPerMol));
+  const relation = formRelation(atomsPastWater(u, options), atomsPastWater(i, options));
+  if (relation === null) {
+    throw fail({
+      code: 'FORMS_UNRELATED',
+      message: `${speciesText(u)} is not a form of ${speciesText(i)}: past water of crystallisation they are neither the same salt nor a salt and its free base with an acid (HCl, H2SO4, …), so weighing one in place of the other is a different substance, not a different form`,
+      hint: `weigh ${i.input.trim()} itself, or one of its hydrates`,
+    });
+  }
+  // formula units of the form in hand for one of the form asked for: a salt of k bases for k of its base, and back
+  const k = relation.kind === 'salt' ? relation.basesPerSalt : 1;
+  const nUse = k === 1 ? n : relation.kind === 'salt' && relation.salt === 'first' ? divide(n, quantity(exact(k), null)) : multiply(n, quantity(exact(k), null));
+  const pm = multiply(nUse, quantity(reportedMolarMass(u), gPerMol));
   let purity: Quantity | null = null;
   const inputs: InputFigures[] = [inputFigures(`the amount of ${instead.trim()}`, amount, asked)];
   if (options.purity !== undefined) {
@@ -83,17 +90,16 @@ export function substituteForm(use: string, instead: string, amount: string, opt
   if (few) notes.push(few);
   const small = smallMassWarning(mass.quantity, `the mass to weigh, ${displayInstruction(mass, massUnitFor(mass.quantity)).text},`, 'weigh a larger batch, or make a stock solution');
   if (small) notes.push(small);
-  const a = atomsPastWater(u, options);
-  const b = atomsPastWater(i, options);
-  const same = a.size === b.size && [...a].every(([k, v]) => b.get(k) === v);
-  if (!same && !within(a, b) && !within(b, a)) {
-    throw fail({
-      code: 'FORMS_UNRELATED',
-      message: `${speciesText(u)} is not a form of ${speciesText(i)}: past water of crystallisation, neither formula holds the other (as a salt holds its free base), so weighing one in place of the other is a different substance, not a different form`,
-      hint: `weigh ${i.input.trim()} itself, or one of its hydrates`,
+  if (relation.kind === 'salt') {
+    const [salt, base] = relation.salt === 'first' ? [u, i] : [i, u];
+    const holds = `${speciesText(salt)} is ${relation.basesPerSalt === 1 ? '' : `${relation.basesPerSalt} `}${speciesText(base)} with ${relation.acids === 1 ? '' : `${relation.acids} `}${relation.acid}`;
+    notes.push({
+      code: 'FORMS_DIFFER',
+      message: relation.basesPerSalt === 1
+        ? `${holds} (a salt and its free base): the substitution keeps equal amounts of formula units`
+        : `${holds} per formula unit: the substitution keeps equal amounts of ${speciesText(base)}, so 1 mol of ${speciesText(salt)} stands for ${relation.basesPerSalt} mol of ${speciesText(base)}`,
     });
   }
-  if (!same) notes.push({ code: 'FORMS_DIFFER', message: `${speciesText(u)} and ${speciesText(i)} differ by more than water of crystallisation; the substitution keeps equal amounts of formula units` });
   notes.unshift(...formulaNotes(u, true), ...formulaNotes(i, true));
   return { use: u, instead: i, asked, moles, purity, pureMass, mass, notes };
 }

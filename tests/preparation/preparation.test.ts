@@ -149,8 +149,17 @@ describe('replacing one form by another', () => {
     expect(codes(r.notes)).toEqual(['FORMS_DIFFER']);
   });
 
-  it('refuses a different substance: NaCl in place of Na2CO3·10H2O, NaHCO3 for Na2CO3, one phosphate for another', () => {
-    for (const [use, instead] of [['Na2CO3·10H2O', 'NaCl'], ['Na2CO3', 'NaHCO3'], ['Na2HPO4·7H2O', 'NaH2PO4']]) {
+  it('a sulfate of two bases stands for two of its base: 1.000 g of morphine is 1.330 g of the sulfate pentahydrate, and back', () => {
+    // source: morphine C17H19NO3 285.34 and morphine sulfate pentahydrate (C17H19NO3)2·H2SO4·5H2O 758.83 g/mol
+    // (CIAAW 2021 standard atomic weights); 1.000 g ÷ 285.34 ÷ 2 × 758.83 = 1.330 g; 1.000 g ÷ 758.83 × 2 × 285.34 = 0.7521 g
+    const r = substituteForm('(C17H19NO3)2·H2SO4·5H2O', 'C17H19NO3', '1.000 g');
+    expect(g(r.mass)).toBe('1.330 g');
+    expect(r.notes.find((n) => n.code === 'FORMS_DIFFER')!.message).toContain('1 mol of (C17H19NO3)2·H2SO4·5H2O stands for 2 mol of C17H19NO3');
+    expect(g(substituteForm('C17H19NO3', '(C17H19NO3)2·H2SO4·5H2O', '1.000 g').mass)).toBe('0.7521 g');
+  });
+
+  it('refuses a different substance: NaCl in place of Na2CO3·10H2O, iron(III) for iron(II), nitrate for nitrite, …', () => {
+    for (const [use, instead] of [['Na2CO3·10H2O', 'NaCl'], ['Na2CO3', 'NaHCO3'], ['Na2HPO4·7H2O', 'NaH2PO4'], ['FeCl3·6H2O', 'FeCl2'], ['NaNO3', 'NaNO2'], ['NaClO4', 'NaCl'], ['Na2C2O4', 'Na2CO3'], ['Na2S2O3·5H2O', 'Na2SO3'], ['H2O2', 'H2O'], ['Cu(NO3)2·3H2O', 'CuO']]) {
       expect(() => substituteForm(use, instead, '1.000 g'), `${use} for ${instead}`).toThrow(expect.objectContaining({ issues: [expect.objectContaining({ code: 'FORMS_UNRELATED', hint: `weigh ${instead} itself, or one of its hydrates` })] }));
     }
   });
