@@ -64,6 +64,9 @@ function table(): Entry[] {
   }));
 }
 
+/** ' (as anhydrous CuSO4)' for a hydrate, '' for the anhydrous salt itself. */
+const hydrateText = (reagent: MassDetail, e: Entry) => (reagent.formula !== formulaMassDetail(e.formula).formula ? ` (as anhydrous ${e.formula})` : '');
+
 /**
  * A warning when a solution would hold more of a reagent than water can dissolve at 20 °C, or
  * null (also for a reagent not in the table). The test is generous: the anhydrous compound per
@@ -73,9 +76,12 @@ function table(): Entry[] {
  * @param reagent - the reagent weighed, as read by formulaMassDetail (a hydrate counts as its anhydrous salt).
  * @param molesPerLitre - formula units of the reagent per litre of solution.
  * @param options - the mass options the reagent was read with.
- * @returns a SOLUBILITY_EXCEEDED note, or null.
+ * Between what a litre of saturated solution holds at the least (its mass fraction times 1000 g)
+ * and that bound, the note is SOLUBILITY_NEAR: the target may not dissolve.
+ * @returns a SOLUBILITY_EXCEEDED or SOLUBILITY_NEAR note, or null.
  * @example
  * solubilityWarning(formulaMassDetail('NaCl'), new Decimal(7))?.code // 'SOLUBILITY_EXCEEDED'
+ * solubilityWarning(formulaMassDetail('NaCl'), new Decimal(5.8))?.code // 'SOLUBILITY_NEAR'
  * solubilityWarning(formulaMassDetail('NaCl'), new Decimal(1)) // null
  * solubilityWarning(formulaMassDetail('CuSO4·5H2O'), new Decimal('0.100')) // null
  */
@@ -85,8 +91,17 @@ export function solubilityWarning(reagent: MassDetail, molesPerLitre: Decimal, o
   if (!e) return null;
   const gPerL = molesPerLitre.times(e.molarMass);
   const limit = e.gPer100g.times(10); // g per kg of water
-  if (gPerL.lte(limit)) return null;
-  const hydrate = reagent.formula !== formulaMassDetail(e.formula).formula ? ` (as anhydrous ${e.formula})` : '';
+  // a saturated solution is w = S/(100 + S) by mass; a litre of it weighs at least 1000 g (salt solutions are denser than water)
+  const w = e.gPer100g.div(e.gPer100g.plus(100));
+  const atLeast = w.times(1000);
+  if (gPerL.lte(limit)) {
+    if (gPerL.lte(atLeast)) return null;
+    return {
+      code: 'SOLUBILITY_NEAR',
+      message: `the target is ${gPerL.toSignificantDigits(4).toFixed()} g of ${e.name} per litre${hydrateText(reagent, e)}, near or above its solubility at 20 °C: a saturated solution is ${w.times(100).toSignificantDigits(3).toFixed()} % w/w (${e.gPer100g.toFixed()} g per 100 g of water, from memory of the CRC Handbook), ${atLeast.toSignificantDigits(3).toFixed()} g/L or more depending on its density; check that it all dissolves at the temperature of use before making up to volume`,
+    };
+  }
+  const hydrate = hydrateText(reagent, e);
   return {
     code: 'SOLUBILITY_EXCEEDED',
     message: `the target is ${gPerL.toSignificantDigits(4).toFixed()} g of ${e.name} per litre${hydrate}, more than a kilogram of water dissolves at 20 °C (about ${e.gPer100g.toFixed()} g per 100 g of water, from memory of the CRC Handbook): no such solution can be made; check the target and its unit`,

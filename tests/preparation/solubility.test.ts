@@ -30,9 +30,14 @@ describe('solubility', () => {
     expect(warned('NaCl', '0.9 %', '1.000 L')).toBeUndefined();
   });
 
-  it('the limit is generous: a target just under a kilogram of water’s worth is not warned about', () => {
-    // 6.00 M NaCl is 350.6 g/L, under 359 g (what 1 kg of water dissolves): no warning, by design
+  it('between the least a litre of saturated solution holds and the kilogram-of-water bound: a note that it may not dissolve', () => {
+    // saturated NaCl is 35.9 / 135.9 = 26.4 % w/w, so at least 264 g/L (its density is above 1 g/mL);
+    // 5.00 M is 292.2 g/L, 6.00 M is 350.6 g/L (both under the 359 g of a kilogram of water): near or above saturation
+    const near = prepareSolution('NaCl', { concentration: '6.00 M', volume: '1.000 L' }).notes.find((n) => n.code === 'SOLUBILITY_NEAR')!;
+    expect(near.message).toContain('350.6 g of sodium chloride per litre, near or above its solubility at 20 °C: a saturated solution is 26.4 % w/w');
     expect(warned('NaCl', '6.00 M')).toBeUndefined();
+    expect(solubilityWarning(formulaMassDetail('NaCl'), new Decimal('5.00'))?.code).toBe('SOLUBILITY_NEAR');
+    expect(solubilityWarning(formulaMassDetail('NaCl'), new Decimal('4.00'))).toBeNull(); // 233.8 g/L
     expect(solubilityWarning(formulaMassDetail('NaCl'), new Decimal('6.2'))?.code).toBe('SOLUBILITY_EXCEEDED');
   });
 
