@@ -235,8 +235,14 @@ const ALIASES: Record<string, string> = {
   'μg/g': 'µg/g',
 };
 
-// a minus sign (U+2212) where a hyphen stands for one ('mol dm−3', as typeset texts print it)
-for (const k of Object.keys(ALIASES)) if (k.includes('-')) ALIASES[k.replace(/-/g, '\u2212')] = ALIASES[k];
+// a minus sign (U+2212) where a hyphen stands for one ('mol dm−3', as typeset texts print it), and
+// the exponent written with a caret ('mol L^-1', 'g cm^-3', as plain text writes it)
+for (const k of Object.keys(ALIASES)) {
+  if (!/[a-zA-Z]-[0-9]$/.test(k)) continue;
+  ALIASES[k.replace(/-/g, '\u2212')] = ALIASES[k];
+  ALIASES[k.replace(/-([0-9])$/, '^-$1')] = ALIASES[k];
+  ALIASES[k.replace(/-([0-9])$/, '^\u2212$1')] = ALIASES[k];
+}
 
 /** Every spelling {@link unitOf} accepts: the symbols and their aliases. */
 export const UNIT_SPELLINGS: readonly string[] = Object.freeze([...TABLE.map((u) => u.symbol), ...Object.keys(ALIASES)]);

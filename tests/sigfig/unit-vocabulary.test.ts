@@ -116,7 +116,7 @@ describe('the spellings of concentration units in print', () => {
   // 1 mmol/mL = 1 mol/L, 1 µmol/mL = 1 mmol/L, 1 ng/mL = 1 µg/L exactly (prefixes are powers of ten)
   const inBase = (text: string) => measure(text).value.toString();
   it('negative exponents written with a hyphen or a minus sign, and a unit over a thousandth of the volume', () => {
-    for (const [a, b] of [['0.100 mol L-1', '0.100 mol/L'], ['0.100 mol dm−3', '0.100 mol/L'], ['0.100 mmol/mL', '0.100 mol/L'], ['2.50 µmol/mL', '2.50 mmol/L'], ['5.0 ng/mL', '5.0 µg/L'], ['5.0 µg/L', '0.0050 mg/L'], ['50. nM', '0.050 µM'], ['250 µl', '250 µL'], ['250 μl', '0.250 mL'], ['1.19 g mL-1', '1.19 g/mL']]) {
+    for (const [a, b] of [['0.100 mol L-1', '0.100 mol/L'], ['0.100 mol dm−3', '0.100 mol/L'], ['0.100 mmol/mL', '0.100 mol/L'], ['2.50 µmol/mL', '2.50 mmol/L'], ['5.0 ng/mL', '5.0 µg/L'], ['5.0 µg/L', '0.0050 mg/L'], ['50. nM', '0.050 µM'], ['250 µl', '250 µL'], ['250 μl', '0.250 mL'], ['1.19 g mL-1', '1.19 g/mL'], ['0.100 mol L^-1', '0.100 mol/L'], ['1.19 g cm^-3', '1.19 g/mL']]) {
       expect(inBase(a), `${a} = ${b}`).toBe(inBase(b));
     }
   });
