@@ -307,6 +307,7 @@ export type NoteCode =
   | 'PERCENT_AS_W_W'
   | 'PPM_AS_MG_PER_L'
   | 'PPB_AS_UG_PER_L'
+  | 'UNIT_NOT_CONVERTED'
   | 'PURITY_APPLIED'
   | 'PURITY_AS_FRACTION'
   | 'PURITY_ASSUMED'

@@ -10,7 +10,7 @@ import { typedIssue } from '../errors/message.js';
 import { MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
 import { partsPerAsMassPerVolume } from './parts-per.js';
 import { divide, multiply, subtract, type Quantity } from '../sigfig/quantity.js';
-import { baseUnitText, sameDims } from '../sigfig/units.js';
+import { baseUnitText, notReadHint, sameDims } from '../sigfig/units.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, volumeUnitFor, type Instruction } from '../sigfig/instruction.js';
 import { dilutionWarning } from './warnings.js';
 
@@ -93,10 +93,14 @@ export function dilute(stockText: string, targetText: string | undefined, volume
       throw fail({ code: 'INCOMPATIBLE_UNITS', message: `'${t.trim()}' is a content by mass: made up to a volume, a dilution needs strengths per volume (M, g/L, % w/v, % v/v) or the densities; to let down a solid or semisolid by mass, give \`mass\` (the total) instead of \`volume\``, options: ['mass', 'volume'] }, t);
     }
   }
-  let stock = measureAs(stockText, kinds, 'the stock concentration', notes);
+  const opaque = targetText !== undefined ? sameUnreadUnit(stockText, targetText) : null;
+  if (opaque) {
+    notes.push({ code: 'UNIT_NOT_CONVERTED', message: `${opaque.unit} is not a unit pondus reads, but the stock and the target are both in it: the dilution factor is their ratio, as C1·V1 = C2·V2 holds in any one unit; nothing is converted` });
+  }
+  let stock = measureAs(opaque ? opaque.stock : stockText, kinds, 'the stock concentration', notes);
   percentReading(stockText, targetText, notes);
   if (targetText === undefined && takenText === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the target concentration, or the volume of stock taken (or both)' });
-  let target = targetText !== undefined ? measureAs(targetText, kinds, 'the target concentration', notes) : null;
+  let target = targetText !== undefined ? measureAs(opaque ? opaque.target : targetText, kinds, 'the target concentration', notes) : null;
   // ppm or ppb against a mass per volume (1000 ppm to 10.0 µg/L): the fraction read as mg/L or µg/L, with its note
   if (target && sameDims(stock.dims, PURE) && sameDims(target.dims, MASS_CONCENTRATION)) stock = partsPerAsMassPerVolume(stock, stockText, notes)?.conc ?? stock;
   if (target && sameDims(target.dims, PURE) && sameDims(stock.dims, MASS_CONCENTRATION)) target = partsPerAsMassPerVolume(target, targetText!, notes)?.conc ?? target;
@@ -137,6 +141,22 @@ export function dilute(stockText: string, targetText: string | undefined, volume
   }
   const written = { stock: stockText.trim(), target: targetText?.trim() ?? null, volume: volumeText.trim(), taken: takenText?.trim() ?? null };
   return { stock, target, finalVolume, stockVolume, solventVolume, factor: factor!, taken, made, written, notes };
+}
+
+/**
+ * The numbers of a stock and a target written in one and the same unit that pondus does not read
+ * (5000 IU/mL to 100 IU/mL, 2.00 mEq/mL to 0.200 mEq/mL), or null: a dilution needs only their
+ * ratio, so the unit is carried through unconverted.
+ */
+function sameUnreadUnit(stockText: string, targetText: string): { unit: string; stock: string; target: string } | null {
+  const split = (t: string) => /^\s*([-+]?(?:[0-9]+\.?[0-9]*|\.[0-9]+)(?:[eE][-+]?[0-9]+)?)\s*([A-Za-zµμ][A-Za-zµμ/ ]*?)\s*$/.exec(t);
+  const a = split(stockText);
+  const b = split(targetText);
+  if (!a || !b || a[2] !== b[2]) return null;
+  // only the units of the trade pondus names as not read (normality, equivalents, biological units);
+  // a molality does not scale with the volume, and a slip of the keyboard is still refused
+  const unit = a[2].replace(/\s+/g, '');
+  return notReadHint(unit) !== undefined && !/\/kg$/.test(unit) ? { unit: a[2], stock: a[1], target: b[1] } : null;
 }
 
 /**

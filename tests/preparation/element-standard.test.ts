@@ -105,3 +105,19 @@ describe('dilution between ppm or ppb and mass per volume', () => {
     expect(() => dilute('1.00 M', '5 ppm', '100.0 mL')).toThrow(/same kind/);
   });
 });
+
+describe('dilution in a unit pondus does not read', () => {
+  it('5000 IU/mL to 100 IU/mL in 10.0 mL: take 200.0 µL (C1·V1 = C2·V2 in any one unit), with a note that nothing is converted', () => {
+    // 100/5000 × 10.0 mL = 0.200 mL
+    const r = dilute('5000 IU/mL', '100 IU/mL', '10.0 mL');
+    expect(displayInstruction(r.stockVolume!, 'µL').text).toBe('200.0 µL');
+    expect(r.notes.find((n) => n.code === 'UNIT_NOT_CONVERTED')!.message).toContain('IU/mL is not a unit pondus reads');
+    expect(displayInstruction(dilute('2.00 mEq/mL', '0.200 mEq/mL', '100.0 mL').stockVolume!, 'mL').text).toBe('10.00 mL');
+  });
+
+  it('two different such units, a molality, or a word that is no unit are still refused', () => {
+    expect(() => dilute('5000 IU/mL', '100 units/mL', '10.0 mL')).toThrow(/unknown unit or word 'IU\/mL'/);
+    expect(() => dilute('2.0 mol/kg', '1.0 mol/kg', '10.0 mL')).toThrow(/unknown unit or word 'mol\/kg'/);
+    expect(() => dilute('1.00 Mx', '0.100 Mx', '100.0 mL')).toThrow(/unknown unit/);
+  });
+});
