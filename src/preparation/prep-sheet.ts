@@ -14,6 +14,8 @@
  */
 import { fail } from '../errors/pondus-error.js';
 import { readCsvSheet } from '../sheets/read-sheet.js';
+import { saturatedFraction } from './solubility.js';
+import { readShare } from '../assay/read-quantity.js';
 import { formulaMassDetail, type MassOptions } from '../mass/formula-mass.js';
 import { CONCENTRATED_GRADES } from './concentrated-grades.js';
 import { concentratedReagent, type ConcentratedResult } from './concentrated.js';
@@ -125,6 +127,28 @@ export function isConcentratedRow(row: PrepSheetRow, options: MassOptions = {}):
 }
 
 /**
+ * For a row with a density whose purity is more than a saturated solution of its reagent holds:
+ * the refusal, naming the two readings (a solid's assay, or a liquid's mass fraction); else null.
+ */
+function solidReading(row: PrepSheetRow, options: MassOptions): { message: string; hint: string } | null {
+  let detail;
+  let fraction;
+  try {
+    detail = formulaMassDetail(row.formula, options);
+    fraction = readShare(row.purity, 'the purity', [], { bare: 'fraction', note: 'FRACTION_AS_DECIMAL' });
+  } catch {
+    return null; // the row's own reading reports the problem
+  }
+  const saturated = saturatedFraction(detail, options);
+  if (saturated === null || fraction.value.lte(saturated)) return null;
+  const sat = `${saturated.times(100).toSignificantDigits(3).toFixed()} % w/w`;
+  return {
+    message: `${row.formula.trim()} at ${row.purity.trim()} with a density of ${row.density.trim()} reads two ways: as a solution of ${row.purity.trim()} w/w, which no solution of it reaches (saturated at about ${sat} at 20 °C, from memory of the CRC Handbook), or as the solid with an assay of ${row.purity.trim()} (the density then being the crystal's)`,
+    hint: `for the solid, leave the density empty; for a stock solution, give its mass fraction (at most ${sat}) and the solution's density`,
+  };
+}
+
+/**
  * The instruction for one row of a prep sheet, computed as `prepare` computes it.
  *
  * @param row - a row of {@link readPrepSheet}.
@@ -143,6 +167,11 @@ export function prepRow(row: PrepSheetRow, options: MassOptions = {}): PrepRowRe
     if (row.purity === '') throw fail({ code: 'BAD_RECORD', message: `a concentrated liquid (a density is given) needs its mass fraction in the purity column ('37 %')` });
     if (row.weighed !== '') throw fail({ code: 'BAD_RECORD', message: `a concentrated liquid is measured by volume: give the volume taken ('taken'), not a mass weighed` });
     if (row.as !== '') throw fail({ code: 'BAD_RECORD', message: `'as' applies to a solid reagent, not to a concentrated liquid` });
+    // a fraction no solution of a solid reaches (99.5 % NaCl with a density) is the assay of the solid, not a mass fraction
+    if (row.density !== '') {
+      const solid = solidReading(row, options);
+      if (solid) throw fail({ code: 'BAD_RECORD', message: solid.message, hint: solid.hint });
+    }
     const concentrated = concentratedReagent(row.formula, { ...options, fraction: row.purity, density: opt(row.density), concentration: opt(row.target), volume: row.volume, taken: opt(row.taken) });
     // the purity column is an assay for a solid and a mass fraction for a liquid: a density decides,
     // which is worth saying where the reagent is not one of the common concentrated grades

@@ -107,3 +107,17 @@ export function solubilityWarning(reagent: MassDetail, molesPerLitre: Decimal, o
     message: `the target is ${gPerL.toSignificantDigits(4).toFixed()} g of ${e.name} per litre${hydrate}, more than a kilogram of water dissolves at 20 °C (about ${e.gPer100g.toFixed()} g per 100 g of water, from memory of the CRC Handbook): no such solution can be made; check the target and its unit`,
   };
 }
+
+/**
+ * The mass fraction of a saturated aqueous solution of the reagent at 20 °C (its anhydrous salt
+ * per mass of solution), or null for a reagent not in the table.
+ *
+ * @example
+ * saturatedFraction(formulaMassDetail('NaCl'))?.toSignificantDigits(3).toString() // '0.264'
+ * saturatedFraction(formulaMassDetail('C9H8O4')) // null
+ */
+export function saturatedFraction(reagent: MassDetail, options: MassOptions = {}): Decimal | null {
+  const key = keyOf(atomsPastWater(reagent, options));
+  const e = table().find((x) => x.key === key);
+  return e ? e.gPer100g.div(e.gPer100g.plus(100)) : null;
+}

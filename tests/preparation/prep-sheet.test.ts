@@ -86,6 +86,16 @@ describe('a density on a reagent that is not a common concentrated grade', () =>
     expect((h.kind === 'concentrated' ? h.concentrated.notes : []).map((n) => n.code)).not.toContain('PURITY_AS_MASS_FRACTION');
   });
 
+  it('a fraction no solution of the reagent reaches is refused with both readings: 99.5 % NaCl with a density', () => {
+    // saturated NaCl at 20 °C: 35.9 g per 100 g of water, 26.4 % w/w (CRC Handbook, from memory)
+    const [row] = readPrepSheet('reagent,purity,density,target,volume\nNaCl,99.5 %,2.16 g/mL,0.100 M,250.0 mL\n');
+    expect(() => prepRow(row)).toThrow(/reads two ways: as a solution of 99\.5 % w\/w, which no solution of it reaches \(saturated at about 26\.4 % w\/w.*or as the solid with an assay of 99\.5 %/);
+    // a brine below saturation is a liquid reagent: 20.0 % w/w, 1.148 g/mL is 3.929 M; 0.02500 mol ÷ 3.929 M = 6.363 mL
+    const [brine] = readPrepSheet('reagent,purity,density,target,volume\nNaCl,20.0 %,1.148 g/mL,0.100 M,250.0 mL\n');
+    const r = prepRow(brine);
+    expect(r.kind === 'concentrated' ? displayInstruction(r.concentrated.take!, 'mL').text : '').toBe('6.363 mL');
+  });
+
   it('a refusal for a missing density names no other substance’s density', () => {
     expect(() => concentratedReagent('H2O2', { fraction: '30 %' })).toThrow(/give the density of H2O2 at 30 %, from the label or certificate of the bottle \(`density: '… g\/mL'`\)/);
   });
