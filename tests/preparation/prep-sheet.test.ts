@@ -75,11 +75,11 @@ describe('prep sheets', () => {
 
 describe('a density on a reagent that is not a common concentrated grade', () => {
   it('names the reading: the purity column is read as a mass fraction of a liquid, not an assay', () => {
-    const [nacl, hcl] = readPrepSheet('reagent,purity,density,target,volume\nNaCl,99.5 %,1.19 g/mL,0.100 M,1.000 L\nHCl,37 %,1.19 g/mL,1.00 M,500.0 mL\n');
+    const [nacl, hcl] = readPrepSheet('reagent,purity,density,target,volume\nNaCl,20.0 %,1.148 g/mL,0.100 M,1.000 L\nHCl,37 %,1.19 g/mL,1.00 M,500.0 mL\n');
     const r = prepRow(nacl);
     expect(r.kind).toBe('concentrated');
     const note = (r.kind === 'concentrated' ? r.concentrated.notes : []).find((n) => n.code === 'PURITY_AS_MASS_FRACTION')!;
-    expect(note.message).toContain('NaCl is read as a liquid reagent (a solution) of 99.5 % w/w');
+    expect(note.message).toContain('NaCl is read as a liquid reagent (a solution) of 20.0 % w/w');
     expect(note.message).toContain('leave the density empty');
     // 37 % HCl is a grade of the table: its reading as a liquid needs no such note
     const h = prepRow(hcl);
