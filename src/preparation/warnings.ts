@@ -75,6 +75,15 @@ export function over100Warning(percent: Decimal, what: string, check: string): N
   return { code: 'RESULT_OVER_100', message: `${what} is ${percent.toSignificantDigits(4).toFixed()} %, more than 100 %: ${check}` };
 }
 
+/** Elements whose compounds a lab weighs out as standards and that are toxic in any form, with the hazard to name. */
+const TOXIC_METALS: readonly [symbol: string, name: string, hazard: string][] = [
+  ['Pb', 'lead', 'a cumulative poison and a reproductive toxicant'],
+  ['Hg', 'mercury', 'a cumulative poison, absorbed through the skin'],
+  ['Cd', 'cadmium', 'a carcinogen, IARC Group 1'],
+  ['Tl', 'thallium', 'a cumulative poison, absorbed through the skin'],
+  ['As', 'arsenic', 'a carcinogen, IARC Group 1'],
+];
+
 /** Hill formulas of the chromium(VI) salts and oxide a lab weighs out (dichromates, chromates, CrO3). */
 const CHROMIUM_VI = new Set(['Cr2K2O7', 'Cr2Na2O7', 'Cr2H8N2O7', 'CrK2O4', 'CrNa2O4', 'CrO3']);
 /** Hill formulas of the hydroxides that take up water and carbon dioxide from the air. */
@@ -89,6 +98,7 @@ const HYGROSCOPIC_BASES = new Set(['HNaO', 'HKO']);
  * @example
  * reagentHandlingNote('HNaO')?.code // 'REAGENT_HANDLING'
  * reagentHandlingNote('FH')?.message.includes('calcium gluconate') // true
+ * reagentHandlingNote('N2O6Pb')?.message.startsWith('a lead compound') // true
  * reagentHandlingNote('ClNa') // null
  */
 export function reagentHandlingNote(hill: string): Note | null {
@@ -101,6 +111,10 @@ export function reagentHandlingNote(hill: string): Note | null {
       message:
         'hydrofluoric acid: it etches glass, so measure, dilute and store it in plastic ware (polypropylene, PTFE), not a glass flask or pipette; it passes through skin and a burn from it may not hurt until hours later, and even a small burn can be life-threatening: have calcium gluconate gel at hand before opening the bottle, wear HF-rated gloves, a face shield and an apron, work in a fume hood, and get medical help after any contact (from memory); follow its SDS and your lab\'s HF procedure',
     };
+  }
+  const toxic = TOXIC_METALS.find(([symbol]) => new RegExp(`${symbol}(?![a-z])`).test(hill));
+  if (toxic) {
+    return { code: 'REAGENT_HANDLING', message: `a ${toxic[1]} compound: toxic (${toxic[2]}, from memory); weigh it with gloves, avoid raising dust, keep its solutions labelled, and collect all waste, rinses included, as hazardous; follow its SDS` };
   }
   if (CHROMIUM_VI.has(hill)) {
     return { code: 'REAGENT_HANDLING', message: 'a chromium(VI) compound: toxic and a carcinogen (IARC Group 1, from memory); weigh it in a fume hood or ventilated enclosure with gloves, and collect the waste as hazardous; follow its SDS' };

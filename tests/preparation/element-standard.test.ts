@@ -121,3 +121,14 @@ describe('dilution in a unit pondus does not read', () => {
     expect(() => dilute('1.00 Mx', '0.100 Mx', '100.0 mL')).toThrow(/unknown unit/);
   });
 });
+
+describe('toxic metal standards get a handling note', () => {
+  it('lead nitrate and cadmium nitrate name their hazard; sodium chloride gets none', () => {
+    // lead compounds are cumulative poisons; cadmium compounds are IARC Group 1 carcinogens (from memory)
+    const note = (f: string) => prepareSolution(f, { concentration: '1000. ppm', volume: '100.0 mL' }).notes.find((n) => n.code === 'REAGENT_HANDLING');
+    expect(note('Pb(NO3)2')!.message).toMatch(/^a lead compound: toxic/);
+    expect(note('Cd(NO3)2·4H2O')!.message).toMatch(/^a cadmium compound: toxic \(a carcinogen, IARC Group 1/);
+    expect(note('NaCl')).toBeUndefined();
+    expect(note('CsCl')).toBeUndefined();
+  });
+});
