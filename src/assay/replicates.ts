@@ -179,7 +179,10 @@ export function replicates(text: string, o: ReplicateOptions = {}): ReplicateRes
     const pos = msd(halfWidthRounded) - 1;
     decimals = Math.max(0, -pos);
     meanRounded = roundToPosition(mean.value, pos, rounding);
-    if (mean.lsd !== null && pos < mean.lsd) notes.push({ code: 'INTERVAL_FINER_THAN_DATA', message: 'the interval is narrower than the last digit of the data; the reported value keeps the digit the interval supports' });
+    if (mean.lsd !== null && pos < mean.lsd) {
+      const digit = (p: number) => `${new Decimal(10).pow(p).toFixed()}${unit ? ` ${unit}` : ''}`;
+      notes.push({ code: 'INTERVAL_FINER_THAN_DATA', message: `the interval, at two significant figures, is written to ${digit(pos)}, finer than the mean's last significant digit (${digit(mean.lsd)}); the reported value keeps the digit the interval supports` });
+    }
   }
   notes.push({ code: 'REPORTED_TO_UNCERTAINTY', message: `reported value: the half-width rounded ${rounding} to two significant figures (GUM §7.2.6), the mean to the same decimal place` });
   notes.push({ code: 'NO_OUTLIER_TEST', message: 'every value is used; no outlier test is applied' });

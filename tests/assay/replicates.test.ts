@@ -94,3 +94,11 @@ describe('a list with its units mixed says which values lack one, and which unit
     expect(e.message).toBe('some values have a unit (%) and 99.61, 99.50 have no unit: write the unit after each value, or once after the last');
   });
 });
+
+describe('the note when the interval is written finer than the mean', () => {
+  it('names both digits, in the unit of the list', () => {
+    // mean of 10.1, 10.2, 10.2 mg is 10.2 mg at the figures of the sum (30.5 mg, 3 figures); the half-width 0.14 mg is written to 0.01 mg
+    const r = replicates('10.1 mg 10.2 mg 0.0102 g');
+    expect(r.notes.find((n) => n.code === 'INTERVAL_FINER_THAN_DATA')!.message).toBe("the interval, at two significant figures, is written to 0.01 mg, finer than the mean's last significant digit (0.1 mg); the reported value keeps the digit the interval supports");
+  });
+});
