@@ -7,7 +7,7 @@
 import { jsonNumber, numberText, smallNumberText } from '../exact/json-number.js';
 import { alphabeticalRank } from '../elements/atom-data.js';
 import type { Note } from '../errors/issue.js';
-import { jsonString, notesJson, notesLine, type NoteJson } from '../mass/mass-json.js';
+import { jsonInner, jsonString, notesJson, notesLine, type NoteJson } from '../mass/mass-json.js';
 import type { CompositionResult } from './element-shares.js';
 
 /** The stable JSON shape of a composition result (the `composition --json` contract, before the shared writer's `line`). */
@@ -57,18 +57,46 @@ export function compositionJson(r: CompositionResult): CompositionJson {
  * compositionJsonLine(composition('H2')) // '{"input":"H2","formula":"H2","molarMass":2.016,"elements":[{"symbol":"H","count":2,"mass":2.016,"massPercent":100}],"notes":[]}'
  */
 export function compositionJsonLine(r: CompositionResult, line?: number): string {
-  let s = `{${line === undefined ? '' : `"line":${line},`}"input":${jsonString(r.input)},"formula":"${r.formula}","molarMass":${jsonNumber(r.molarMass, r.molarMassExact)},"elements":[`;
+  // every piece joined is a node the output's flattening walks later: constant runs are kept whole
+  // (an element's key texts with its symbol, a count with the key after it, the usual end)
+  let s = `${line === undefined ? '{"input":"' : `{"line":${line},"input":"`}${jsonInner(r.input)}","formula":"${r.formula}","molarMass":${jsonNumber(r.molarMass, r.molarMassExact)}`;
   const els = r.elements;
   for (let i = 0; i < els.length; i++) {
     const e = els[i];
-    s += `${i ? ',' : ''}{"symbol":"${e.symbol}","count":${smallNumberText(e.count)},"mass":${jsonNumber(e.mass, e.massExact)},"massPercent":${numberText(e.massPercent)}}`;
+    s += `${elementHead(e.symbol, i === 0)}${countText(e.count)}${jsonNumber(e.mass, e.massExact)},"massPercent":${numberText(e.massPercent)}`;
   }
-  s += ']';
+  s += els.length === 0 ? ',"elements":[]' : '}]';
   if (r.part) {
     const p = r.part;
     s += `,"part":{"part":${jsonString(p.part)},"formula":"${p.formula}","count":${numberText(p.count)},"mass":${numberText(p.mass)},"massPercent":${numberText(p.massPercent)},"countedFrom":"${p.countedFrom}"}`;
   }
-  return `${s},"notes":${notesLine(r.notes)}}`;
+  return r.notes.length === 0 ? s + ',"notes":[]}' : `${s},"notes":${notesLine(r.notes)}}`;
+}
+
+// the opening of an element's object up to its count, by symbol: first in the list, and after another
+const firstHeads = new Map<string, string>();
+const nextHeads = new Map<string, string>();
+
+/** `,"elements":[{"symbol":"C","count":` for the first element, `},{"symbol":"C","count":` after one. */
+function elementHead(symbol: string, first: boolean): string {
+  const heads = first ? firstHeads : nextHeads;
+  let h = heads.get(symbol);
+  if (h === undefined) {
+    h = `${first ? ',"elements":[' : '},'}{"symbol":"${symbol}","count":`;
+    if (heads.size >= 512) heads.clear();
+    heads.set(symbol, h);
+  }
+  return h;
+}
+
+/** The texts of whole counts below COUNT_TEXTS with the key after them (`12,"mass":`), each made on first use. */
+const COUNT_TEXTS = 4096;
+const countTexts: (string | undefined)[] = new Array(COUNT_TEXTS).fill(undefined);
+
+/** A count's JSON text and the `mass` key after it. */
+function countText(count: number): string {
+  if (count >= 0 && count < COUNT_TEXTS && (count | 0) === count) return (countTexts[count] ??= `${smallNumberText(count)},"mass":`);
+  return `${smallNumberText(count)},"mass":`;
 }
 
 /** Cells of one CSV/TSV row. */

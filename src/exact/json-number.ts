@@ -15,13 +15,13 @@
  * jsonNumber(0.1 + 0.2, '0.30000000000000004') // '0.30000000000000004'
  */
 export function jsonNumber(value: number, exact: string): string {
-  // at least 1 (no leading zeros, no exponent form below 1e-6) and below 1e15
-  const c = exact.charCodeAt(0);
-  if (c >= 49 && c <= 57) {
-    const dot = exact.indexOf('.');
-    const digits = dot < 0 ? exact.length : exact.length - 1;
-    if (digits <= 15 && (dot < 0 ? exact.length : dot) <= 15) return exact;
-  }
+  // at least 1 (no leading zeros, no exponent form below 1e-6), at most 15 significant digits and
+  // below 1e15, told from the value and the text's length alone: the text is often a rope of short
+  // pieces (exact/scaled.ts), which reading a character of it would flatten here, ahead of the output.
+  // A decimal below 1 of at most 16 characters ('0.' and 14 digits) has a nearest double below 1;
+  // of 16 characters, the text has a '.' (15 digits) exactly when the value is below 1e15.
+  const n = exact.length;
+  if (value >= 1 && (n <= 15 || (n === 16 && value < 1e15))) return exact;
   return numberText(value);
 }
 

@@ -70,6 +70,8 @@ export function scaledRatio(a: number, b: number, k: number): number {
   if (a === 0) return 0;
   twoProduct(k, a, x);
   let q = x[0] / b;
+  // k·a held exactly in one double: the division itself is correctly rounded (IEEE 754, ties to even)
+  if (x[1] === 0) return q;
   let r = residual(q, b, x);
   if (r === 0) return q;
   // step towards the exact quotient while that brings the residual down (at most an ulp or two)

@@ -50,6 +50,8 @@ interface DigitTables {
   groups: string[];
   trimmed: string[];
   integers: (string | undefined)[];
+  /** The same with the decimal point after them ('18.'): one join less for a mass with a fraction. */
+  pointed: (string | undefined)[];
 }
 let tables: DigitTables | undefined;
 /** Masses formatted without the tables; past {@link TABLES_AFTER}, the tables are built. */
@@ -64,7 +66,7 @@ function buildTables(): DigitTables {
     groups.push(g);
     trimmed.push(i === 0 ? '' : i % 100 === 0 ? g.slice(0, 1) : i % 10 === 0 ? g.slice(0, 2) : g);
   }
-  return { groups, trimmed, integers: new Array(10000) };
+  return { groups, trimmed, integers: new Array(10000), pointed: new Array(10000) };
 }
 
 /** {@link scaledToString} without the tables: the twelve-digit fraction, its trailing zeros cut. */
@@ -98,23 +100,25 @@ export function scaledToString(n: number): string {
     }
     tables = buildTables();
   }
-  const { groups: GROUPS, trimmed: GROUPS_TRIMMED, integers: INTEGERS } = tables;
+  const { groups: GROUPS, trimmed: GROUPS_TRIMMED, integers: INTEGERS, pointed: POINTED } = tables;
   const abs = n < 0 ? -n : n;
   const int = Math.floor(abs / 1e12);
   const frac = abs - int * 1e12; // exact: both are integers below 2^53
-  const digits = int < 10000 ? (INTEGERS[int] ??= String(int)) : String(int);
-  const head = n < 0 ? '-' + digits : digits;
-  if (frac === 0) return head;
+  if (frac === 0) {
+    const digits = int < 10000 ? (INTEGERS[int] ??= String(int)) : String(int);
+    return n < 0 ? '-' + digits : digits;
+  }
+  const head = n >= 0 && int < 10000 ? (POINTED[int] ??= String(int) + '.') : (n < 0 ? '-' : '') + String(int) + '.';
   const a = Math.floor(frac / 1e9);
   let rest = frac - a * 1e9;
   const b = Math.floor(rest / 1e6);
   rest -= b * 1e6;
   const c = Math.floor(rest / 1e3);
   const d = rest - c * 1e3;
-  if (d !== 0) return head + '.' + GROUPS[a] + GROUPS[b] + GROUPS[c] + GROUPS_TRIMMED[d];
-  if (c !== 0) return head + '.' + GROUPS[a] + GROUPS[b] + GROUPS_TRIMMED[c];
-  if (b !== 0) return head + '.' + GROUPS[a] + GROUPS_TRIMMED[b];
-  return head + '.' + GROUPS_TRIMMED[a];
+  if (d !== 0) return head + GROUPS[a] + GROUPS[b] + GROUPS[c] + GROUPS_TRIMMED[d];
+  if (c !== 0) return head + GROUPS[a] + GROUPS[b] + GROUPS_TRIMMED[c];
+  if (b !== 0) return head + GROUPS[a] + GROUPS_TRIMMED[b];
+  return head + GROUPS_TRIMMED[a];
 }
 
 /**

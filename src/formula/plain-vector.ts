@@ -35,6 +35,8 @@ const componentMultiplier = new Float64Array(MAX_NESTING + 1);
 const componentParts = new Int32Array(MAX_NESTING + 1);
 const closeOf = new Int32Array(MAX_NESTING + 1);
 const TOTALS_SIZE = 8192;
+/** The kinds of atom of the formula being read, in order of first appearance. */
+const firstIds = new Int32Array(MAX_FORMULA_LENGTH);
 const totals = new Float64Array(TOTALS_SIZE);
 
 /** Dense-table ids by letters (first × 27 + second, or first × 27 + 26 for one letter); -2 not looked up yet, -1 declined. */
@@ -245,17 +247,19 @@ export function plainVector(input: string): PlainVector | null {
   if (longRun && mayNeedSettling(input)) return null;
   if (trapAtTop && !bracketAtTop && componentsAtTop === 1) return null; // the tree path decides on the note
 
-  // totals per kind of atom, in order of first appearance
-  const seen: number[] = [];
+  // totals per kind of atom, in order of first appearance (gathered in scratch space, then one
+  // array of the right length: no array grown by pushing for each formula)
+  let n = 0;
   let tooMany = false;
   for (let i = 0; i < sp; i++) {
     const id = entryId[i];
-    if (totals[id] === 0) seen.push(id);
+    if (totals[id] === 0) firstIds[n++] = id;
     const s = totals[id] + entryCount[i];
     if (s > MAX_ATOMS) tooMany = true;
     totals[id] = s;
   }
-  const n = seen.length;
+  const seen = new Array<number>(n);
+  for (let i = 0; i < n; i++) seen[i] = firstIds[i];
   const ids = hillIds(seen);
   const counts = new Array<number>(n);
   for (let i = 0; i < n; i++) {

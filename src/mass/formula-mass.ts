@@ -165,7 +165,7 @@ function sums(input: string, charge: number, treeNotes: Note[], vector: AtomVect
     const c = counts[i];
     const d = ATOMS.data[id];
     if (typeof c === 'number') {
-      formula += c === 1 ? d.label : d.label + smallNumberText(c);
+      formula += c === 1 ? d.label : labelWithCount(id, d.label, c);
       molarSum += c * avg[id];
       monoSum += c * monoTable[id];
       nominalSum += c * nominalTable[id];
@@ -204,6 +204,27 @@ function sums(input: string, charge: number, treeNotes: Note[], vector: AtomVect
     });
   }
   return { input, charge, tree, options, vector, weights, formula, molarScaled: molar, monoScaled: mono, nominal, notes };
+}
+
+/**
+ * The Hill formula's piece for `count` atoms of kind `id` ('H65'), kept by kind and whole count
+ * below 4096 (a batch meets the same few hundred again and again): one join less per element. At
+ * most 256 kinds are held; then the table starts again.
+ */
+const labelTexts: { byAtom: (string[] | undefined)[]; kinds: number } = { byAtom: [], kinds: 0 };
+
+function labelWithCount(id: number, label: string, count: number): string {
+  if (count >= 4096 || (count | 0) !== count || count < 0) return label + smallNumberText(count);
+  let byCount = labelTexts.byAtom[id];
+  if (byCount === undefined) {
+    if (labelTexts.kinds >= 256) {
+      labelTexts.byAtom = [];
+      labelTexts.kinds = 0;
+    }
+    labelTexts.byAtom[id] = byCount = new Array<string>(4096);
+    labelTexts.kinds++;
+  }
+  return (byCount[count] ??= label + smallNumberText(count));
 }
 
 function decimalSum(core: MassCore, value: (d: AtomData) => string): Decimal {

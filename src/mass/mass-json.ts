@@ -96,9 +96,17 @@ export function massUncertaintyJson(r: MassResult, u: MolarMassUncertainty): Mas
  * massJsonLine(formulaMass('H2O')) // '{"input":"H2O","formula":"H2O","molarMass":18.015,…}'
  */
 export function massJsonLine(r: MassResult, line?: number): string {
-  // Hill formulas hold only letters, digits, brackets, '.', '^', '+' and '-': nothing to escape
-  return `{${line === undefined ? '' : `"line":${line},`}"input":${jsonString(r.input)},"formula":"${r.formula}","molarMass":${jsonNumber(r.molarMass, r.molarMassExact)},"monoisotopicMass":${jsonNumber(r.monoisotopicMass, r.monoisotopicMassExact)},"nominalMass":${r.nominalMass},"charge":${r.charge},"notes":${notesLine(r.notes)}}`;
+  // Hill formulas hold only letters, digits, brackets, '.', '^', '+' and '-': nothing to escape.
+  // Every piece joined is a node the output's flattening walks later, so constant runs are kept
+  // whole: the input's quotes go with the keys, and the usual end (a small charge, no notes) is one string.
+  const charge = r.charge;
+  const tail = r.notes.length === 0 && charge > -TAILS && charge < TAILS && (charge | 0) === charge ? (plainTails[charge + TAILS] ??= `,"charge":${charge},"notes":[]}`) : `,"charge":${charge},"notes":${notesLine(r.notes)}}`;
+  return `${line === undefined ? '{"input":"' : `{"line":${line},"input":"`}${jsonInner(r.input)}","formula":"${r.formula}","molarMass":${jsonNumber(r.molarMass, r.molarMassExact)},"monoisotopicMass":${jsonNumber(r.monoisotopicMass, r.monoisotopicMassExact)},"nominalMass":${r.nominalMass}${tail}`;
 }
+
+/** Charges below this size (either sign) have their row end, with no notes, kept. */
+const TAILS = 16;
+const plainTails: (string | undefined)[] = new Array(2 * TAILS).fill(undefined);
 
 /** The CSV/TSV columns of `pondus mass` (the shared writer adds notes, error and message). */
 export const MASS_COLUMNS = ['input', 'formula', 'molarMass', 'monoisotopicMass', 'nominalMass', 'charge'] as const;
@@ -127,6 +135,16 @@ export const NEEDS_ESCAPE = /["\\\u0000-\u001f\u2028\u2029\ud800-\udfff]/;
  */
 export function jsonString(s: string): string {
   return NEEDS_ESCAPE.test(s) ? JSON.stringify(s) : `"${s}"`;
+}
+
+/**
+ * {@link jsonString} without its quotes: the text to put between two quotes a row already holds.
+ *
+ * @example
+ * jsonInner('a"b') // 'a\\"b'
+ */
+export function jsonInner(s: string): string {
+  return NEEDS_ESCAPE.test(s) ? JSON.stringify(s).slice(1, -1) : s;
 }
 
 /**
