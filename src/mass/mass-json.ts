@@ -98,15 +98,23 @@ export function massUncertaintyJson(r: MassResult, u: MolarMassUncertainty): Mas
 export function massJsonLine(r: MassResult, line?: number): string {
   // Hill formulas hold only letters, digits, brackets, '.', '^', '+' and '-': nothing to escape.
   // Every piece joined is a node the output's flattening walks later, so constant runs are kept
-  // whole: the input's quotes go with the keys, and the usual end (a small charge, no notes) is one string.
-  const charge = r.charge;
-  const tail = r.notes.length === 0 && charge > -TAILS && charge < TAILS && (charge | 0) === charge ? (plainTails[charge + TAILS] ??= `,"charge":${charge},"notes":[]}`) : `,"charge":${charge},"notes":${notesLine(r.notes)}}`;
-  return `${line === undefined ? '{"input":"' : `{"line":${line},"input":"`}${jsonInner(r.input)}","formula":"${r.formula}","molarMass":${jsonNumber(r.molarMass, r.molarMassExact)},"monoisotopicMass":${jsonNumber(r.monoisotopicMass, r.monoisotopicMassExact)},"nominalMass":${r.nominalMass}${tail}`;
+  // whole: the input's quotes go with the keys, and the usual end (a neutral formula's nominal mass,
+  // charge and empty notes) is one string.
+  return `${line === undefined ? '{"input":"' : `{"line":${line},"input":"`}${jsonInner(r.input)}","formula":"${r.formula}","molarMass":${jsonNumber(r.molarMass, r.molarMassExact)},"monoisotopicMass":${jsonNumber(r.monoisotopicMass, r.monoisotopicMassExact)}${rowEnd(r)}`;
 }
 
-/** Charges below this size (either sign) have their row end, with no notes, kept. */
-const TAILS = 16;
-const plainTails: (string | undefined)[] = new Array(2 * TAILS).fill(undefined);
+/** Nominal masses below this have the row end of a neutral formula with no notes kept. */
+const ENDS = 8192;
+const neutralEnds: (string | undefined)[] = new Array(ENDS).fill(undefined);
+
+/** The row from the nominal mass on: `,"nominalMass":18,"charge":0,"notes":[]}`. */
+function rowEnd(r: MassResult): string {
+  const nominal = r.nominalMass;
+  if (r.charge === 0 && r.notes.length === 0 && nominal !== null && nominal >= 0 && nominal < ENDS && (nominal | 0) === nominal) {
+    return (neutralEnds[nominal] ??= `,"nominalMass":${nominal},"charge":0,"notes":[]}`);
+  }
+  return `,"nominalMass":${nominal},"charge":${r.charge},"notes":${notesLine(r.notes)}}`;
+}
 
 /** The CSV/TSV columns of `pondus mass` (the shared writer adds notes, error and message). */
 export const MASS_COLUMNS = ['input', 'formula', 'molarMass', 'monoisotopicMass', 'nominalMass', 'charge'] as const;
