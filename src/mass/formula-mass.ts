@@ -176,7 +176,7 @@ function sums(input: string, charge: number, treeNotes: Note[], vector: AtomVect
     }
     if (d.noStandardWeight) {
       if (notes === NO_NOTES) notes = [];
-      notes.push({ code: 'NO_STANDARD_WEIGHT', message: `${d.element.name} (${d.symbol}) has no standard atomic weight; the mass number of its longest-lived isotope, ${d.average.standard.text}, stands in for it` });
+      notes.push((noWeightNotes[id] ??= Object.freeze({ code: 'NO_STANDARD_WEIGHT', message: `${d.element.name} (${d.symbol}) has no standard atomic weight; the mass number of its longest-lived isotope, ${d.average.standard.text}, stands in for it` })));
     }
   }
   // a partial sum past the safe integers makes the total inexact too: the totals only grow
@@ -192,16 +192,11 @@ function sums(input: string, charge: number, treeNotes: Note[], vector: AtomVect
   }
   if (fractional) {
     if (notes === NO_NOTES) notes = [];
-    notes.push({ code: 'NON_INTEGER_COUNTS', message: 'the formula has non-integer counts; the nominal mass is not defined' });
+    notes.push(NON_INTEGER_NOTE);
   }
   if (charge !== 0) {
     if (notes === NO_NOTES) notes = [];
-    const z = Math.abs(charge);
-    const e = (Number(ELECTRON_MASS) * z).toPrecision(2);
-    notes.push({
-      code: 'ION_MOLAR_MASS',
-      message: `the molar mass is the sum of the atomic weights (neutral atoms): the ${z} electron${z === 1 ? '' : 's'} ${charge > 0 ? 'missing from' : 'added to'} the ion (${e} g/mol) ${z === 1 ? 'is' : 'are'} not counted (common practice for molar masses); the monoisotopic mass counts ${z === 1 ? 'it' : 'them'}`,
-    });
+    notes.push(ionNote(charge));
   }
   return { input, charge, tree, options, vector, weights, formula, molarScaled: molar, monoScaled: mono, nominal, notes };
 }
@@ -225,6 +220,29 @@ function labelWithCount(id: number, label: string, count: number): string {
     labelTexts.kinds++;
   }
   return (byCount[count] ??= label + smallNumberText(count));
+}
+
+// The notes that depend only on the kind of atom or the charge are made once and shared (frozen,
+// as ABRIDGED_NOTE is): a batch of ions or of decimal counts writes the same few again and again,
+// and their JSON text is then kept by the serialisers.
+const NON_INTEGER_NOTE: Note = Object.freeze({ code: 'NON_INTEGER_COUNTS', message: 'the formula has non-integer counts; the nominal mass is not defined' });
+/** NO_STANDARD_WEIGHT by dense-table id. */
+const noWeightNotes: (Note | undefined)[] = [];
+/** ION_MOLAR_MASS by charge (at most 256 charges held). */
+const ionNotes = new Map<number, Note>();
+
+function ionNote(charge: number): Note {
+  let note = ionNotes.get(charge);
+  if (note === undefined) {
+    const z = Math.abs(charge);
+    const e = (Number(ELECTRON_MASS) * z).toPrecision(2);
+    note = Object.freeze({
+      code: 'ION_MOLAR_MASS',
+      message: `the molar mass is the sum of the atomic weights (neutral atoms): the ${z} electron${z === 1 ? '' : 's'} ${charge > 0 ? 'missing from' : 'added to'} the ion (${e} g/mol) ${z === 1 ? 'is' : 'are'} not counted (common practice for molar masses); the monoisotopic mass counts ${z === 1 ? 'it' : 'them'}`,
+    });
+    if (ionNotes.size < 256) ionNotes.set(charge, note);
+  }
+  return note;
 }
 
 function decimalSum(core: MassCore, value: (d: AtomData) => string): Decimal {

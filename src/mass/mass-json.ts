@@ -171,8 +171,16 @@ export function notesLine(notes: readonly { code: string; message: string; optio
 // the same few notes recur through a batch (an ion's electrons, non-integer counts): their JSON is kept
 const noteTexts = new Map<string, string>();
 
+// a frozen note that names no option or function has one text whatever the naming: kept by the note itself
+const frozenNoteTexts = new Map<object, string>();
+
 /** A note's JSON text, its options named as notesJson names them. */
 function noteText(n: { code: string; message: string; options?: readonly string[]; functions?: readonly LibraryFunction[] }): string {
+  const plain = n.options === undefined && n.functions === undefined && Object.isFrozen(n);
+  if (plain) {
+    const t = frozenNoteTexts.get(n);
+    if (t !== undefined) return t;
+  }
   const message = noteWords(n);
   const key = `${n.code}\u0000${message}`;
   let t = noteTexts.get(key);
@@ -180,6 +188,10 @@ function noteText(n: { code: string; message: string; options?: readonly string[
     t = JSON.stringify({ code: n.code, message });
     if (noteTexts.size >= 512) noteTexts.clear();
     noteTexts.set(key, t);
+  }
+  if (plain) {
+    if (frozenNoteTexts.size >= 512) frozenNoteTexts.clear();
+    frozenNoteTexts.set(n, t);
   }
   return t;
 }
