@@ -263,7 +263,10 @@ export function plainVector(input: string): PlainVector | null {
   const ids = hillIds(seen);
   const counts = new Array<number>(n);
   for (let i = 0; i < n; i++) {
-    counts[i] = totals[ids[i]];
+    // whole counts up to 2^30 as small integers, as the tree path holds them: one kind of array
+    // for the readers of counts (sums, the serialisers) whichever path a formula took
+    const v = totals[ids[i]];
+    counts[i] = v < 0x40000000 ? v | 0 : v;
     totals[ids[i]] = 0;
   }
   if (tooMany) return null;
