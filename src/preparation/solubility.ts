@@ -52,17 +52,44 @@ interface Entry {
   molarMass: Decimal;
   gPer100g: Decimal;
 }
-let entries: Entry[] | undefined;
 
 /** A key of atom counts, the same for every way of writing one compound. */
 const keyOf = (atoms: Map<string, string>) => [...atoms].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)).map(([k, v]) => `${k}${v}`).join(' ');
 
-function table(): Entry[] {
-  return (entries ??= SOLUBILITY_20C.map(([formula, name, s]) => {
-    const d = formulaMassDetail(formula);
-    return { key: keyOf(atomsPastWater(d)), name, formula, molarMass: new Decimal(d.molarMass.toString()), gPer100g: new Decimal(s) };
-  }));
+/** The elements of a compound other than H and O, which water of crystallisation cannot remove: a cheap first test. */
+const elementsOf = (atoms: Iterable<string>) => [...atoms].filter((e) => e !== 'H' && e !== 'O').sort().join(' ');
+let byElements: Map<string, Entry[]> | undefined;
+
+/** The entries whose elements (past H and O) are those of the reagent; most reagents have none. */
+function candidates(reagent: MassDetail): Entry[] {
+  if (!byElements) {
+    byElements = new Map();
+    for (const [formula, name, s] of SOLUBILITY_20C) {
+      const d = formulaMassDetail(formula);
+      const e: Entry = { key: keyOf(atomsPastWater(d)), name, formula, molarMass: new Decimal(d.molarMass.toString()), gPer100g: new Decimal(s) };
+      const k = elementsOf(d.atoms.keys());
+      byElements.set(k, [...(byElements.get(k) ?? []), e]);
+    }
+  }
+  return byElements.get(elementsOf(reagent.atoms.keys())) ?? [];
 }
+
+/** The table's entry for the reagent (a hydrate matching its anhydrous salt), or undefined. */
+function entryFor(reagent: MassDetail, options: MassOptions): Entry | undefined {
+  const near = candidates(reagent);
+  if (near.length === 0) return undefined;
+  // a batch names the same few salts again and again: their entries are remembered (bounded)
+  const id = `${reagent.formula}|${reagent.input}`;
+  const seen = ENTRY_OF.get(id);
+  if (seen !== undefined) return seen ?? undefined;
+  const key = keyOf(atomsPastWater(reagent, options));
+  const e = near.find((x) => x.key === key);
+  if (ENTRY_OF.size >= 1024) ENTRY_OF.clear();
+  ENTRY_OF.set(id, e ?? null);
+  return e;
+}
+/** The entry found for each reagent text lately (null for none); the table does not depend on the mass options. */
+const ENTRY_OF = new Map<string, Entry | null>();
 
 /** ' (as anhydrous CuSO4)' for a hydrate, '' for the anhydrous salt itself. */
 const hydrateText = (reagent: MassDetail, e: Entry) => (reagent.formula !== formulaMassDetail(e.formula).formula ? ` (as anhydrous ${e.formula})` : '');
@@ -74,7 +101,7 @@ const hydrateText = (reagent: MassDetail, e: Entry) => (reagent.formula !== form
  * litre of any such solution holds, so the warning means the target cannot be made as written.
  *
  * @param reagent - the reagent weighed, as read by formulaMassDetail (a hydrate counts as its anhydrous salt).
- * @param molesPerLitre - formula units of the reagent per litre of solution.
+ * @param molesPerLitre - formula units of the reagent per litre of solution (or a function giving them, called only for a reagent in the table).
  * @param options - the mass options the reagent was read with.
  * Between what a litre of saturated solution holds at the least (its mass fraction times 1000 g)
  * and that bound, the note is SOLUBILITY_NEAR: the target may not dissolve.
@@ -85,10 +112,10 @@ const hydrateText = (reagent: MassDetail, e: Entry) => (reagent.formula !== form
  * solubilityWarning(formulaMassDetail('NaCl'), new Decimal(1)) // null
  * solubilityWarning(formulaMassDetail('CuSO4·5H2O'), new Decimal('0.100')) // null
  */
-export function solubilityWarning(reagent: MassDetail, molesPerLitre: Decimal, options: MassOptions = {}): Note | null {
-  const key = keyOf(atomsPastWater(reagent, options));
-  const e = table().find((x) => x.key === key);
+export function solubilityWarning(reagent: MassDetail, molesPerLitre: Decimal | (() => Decimal), options: MassOptions = {}): Note | null {
+  const e = entryFor(reagent, options);
   if (!e) return null;
+  if (typeof molesPerLitre === 'function') molesPerLitre = molesPerLitre();
   const gPerL = molesPerLitre.times(e.molarMass);
   const limit = e.gPer100g.times(10); // g per kg of water
   // a saturated solution is w = S/(100 + S) by mass; a litre of it weighs at least 1000 g (salt solutions are denser than water)
@@ -117,7 +144,6 @@ export function solubilityWarning(reagent: MassDetail, molesPerLitre: Decimal, o
  * saturatedFraction(formulaMassDetail('C9H8O4')) // null
  */
 export function saturatedFraction(reagent: MassDetail, options: MassOptions = {}): Decimal | null {
-  const key = keyOf(atomsPastWater(reagent, options));
-  const e = table().find((x) => x.key === key);
+  const e = entryFor(reagent, options);
   return e ? e.gPer100g.div(e.gPer100g.plus(100)) : null;
 }

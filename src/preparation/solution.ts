@@ -317,8 +317,7 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
       pureMass = instruction(pm, inputs);
       mass = instruction(purity ? divide(pm, purity) : pm, inputs);
     }
-    const perLitre = divide(divide(tm, perReagent), volume).value.div(ONE_MOLAR.value);
-    const insoluble = solubilityWarning(reagent, perLitre, options);
+    const insoluble = solubilityWarning(reagent, () => tm.value.div(perReagent.value).div(volume.value).div(ONE_MOLAR.value), options);
     if (insoluble) notes.push(insoluble);
     const few = fewFiguresNote(mass, 'the mass to weigh', `the solution made is ${options.concentration!.trim()}`);
     if (few) notes.push(few);

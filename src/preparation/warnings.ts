@@ -76,12 +76,12 @@ export function over100Warning(percent: Decimal, what: string, check: string): N
 }
 
 /** Elements whose compounds a lab weighs out as standards and that are toxic in any form, with the hazard to name. */
-const TOXIC_METALS: readonly [symbol: string, name: string, hazard: string][] = [
-  ['Pb', 'lead', 'a cumulative poison and a reproductive toxicant'],
-  ['Hg', 'mercury', 'a cumulative poison, absorbed through the skin'],
-  ['Cd', 'cadmium', 'a carcinogen, IARC Group 1'],
-  ['Tl', 'thallium', 'a cumulative poison, absorbed through the skin'],
-  ['As', 'arsenic', 'a carcinogen, IARC Group 1'],
+const TOXIC_METALS: readonly [symbol: string, name: string, hazard: string, pattern: RegExp][] = [
+  ['Pb', 'lead', 'a cumulative poison and a reproductive toxicant', /Pb(?![a-z])/],
+  ['Hg', 'mercury', 'a cumulative poison, absorbed through the skin', /Hg(?![a-z])/],
+  ['Cd', 'cadmium', 'a carcinogen, IARC Group 1', /Cd(?![a-z])/],
+  ['Tl', 'thallium', 'a cumulative poison, absorbed through the skin', /Tl(?![a-z])/],
+  ['As', 'arsenic', 'a carcinogen, IARC Group 1', /As(?![a-z])/],
 ];
 
 /** Hill formulas of the chromium(VI) salts and oxide a lab weighs out (dichromates, chromates, CrO3). */
@@ -112,7 +112,7 @@ export function reagentHandlingNote(hill: string): Note | null {
         'hydrofluoric acid: it etches glass, so measure, dilute and store it in plastic ware (polypropylene, PTFE), not a glass flask or pipette; it passes through skin and a burn from it may not hurt until hours later, and even a small burn can be life-threatening: have calcium gluconate gel at hand before opening the bottle, wear HF-rated gloves, a face shield and an apron, work in a fume hood, and get medical help after any contact (from memory); follow its SDS and your lab\'s HF procedure',
     };
   }
-  const toxic = TOXIC_METALS.find(([symbol]) => new RegExp(`${symbol}(?![a-z])`).test(hill));
+  const toxic = TOXIC_METALS.find(([, , , pattern]) => pattern.test(hill));
   if (toxic) {
     return { code: 'REAGENT_HANDLING', message: `a ${toxic[1]} compound: toxic (${toxic[2]}, from memory); weigh it with gloves, avoid raising dust, keep its solutions labelled, and collect all waste, rinses included, as hazardous; follow its SDS` };
   }
