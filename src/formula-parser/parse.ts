@@ -87,8 +87,11 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
   const pre = prescanAll(input, options.maxLength ?? MAX_FORMULA_LENGTH);
   const state = stateSymbol(input);
   const text = state ? input.slice(0, state.offset) : input;
-  const { formulaLexer, formulaGrammar, ABBREVIATION_MODE, ELEMENTS_MODE, PLAIN_MODE } = fullGrammar();
-  const lex = () => formulaLexer().tokenize(text, mode === 'abbreviations' ? ABBREVIATION_MODE : mode === 'elements' ? ELEMENTS_MODE : PLAIN_MODE);
+  // the grammars are loaded only for what needs them: not for an empty, overlong or hostile input
+  const lex = () => {
+    const { formulaLexer, ABBREVIATION_MODE, ELEMENTS_MODE, PLAIN_MODE } = fullGrammar();
+    return formulaLexer().tokenize(text, mode === 'abbreviations' ? ABBREVIATION_MODE : mode === 'elements' ? ELEMENTS_MODE : PLAIN_MODE);
+  };
   if (pre.length > 0) {
     // brackets that do not pair up leave the words readable: those that are no element symbol are reported too
     if (pre.every((i) => BRACKET_CODES.has(i.code))) {
@@ -105,7 +108,7 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
     const found = lexed.errors.slice(0, MAX_ISSUES + 1).map((e) => unexpectedCharacter(input, e.offset));
     throw new PondusError(byColumn([...found, ...unknownWords(text, lexed.tokens)]), input);
   }
-  const grammar = formulaGrammar();
+  const grammar = fullGrammar().formulaGrammar();
   grammar.input = lexed.tokens;
   const cst = grammar.formula() as FormulaCstNode;
   if (grammar.errors.length > 0) {
@@ -169,10 +172,10 @@ export function safeParseFormula(input: string, options: ParseOptions = {}): Saf
   return toSafe(() => parseFormula(input, options));
 }
 
-/** Issues in the order of the input (a stable sort: issues at one column keep their order). */
 /** The problems of brackets alone, after which the rest of the text can still be read. */
 const BRACKET_CODES: ReadonlySet<string> = new Set(['UNCLOSED_GROUP', 'UNMATCHED_CLOSING', 'MISMATCHED_BRACKET', 'EMPTY_GROUP']);
 
+/** Issues in the order of the input (a stable sort: issues at one column keep their order). */
 function byColumn(issues: Issue[]): Issue[] {
   return issues.sort((a, b) => (a.column ?? 0) - (b.column ?? 0));
 }

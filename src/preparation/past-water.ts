@@ -19,11 +19,13 @@ import type { MassDetail, MassOptions } from '../mass/formula-mass.js';
 export function atomsPastWater(m: MassDetail, options: MassOptions = {}): Map<string, string> {
   let water = 0;
   // water of crystallisation is written after a joining dot ('·', '*', '.'): without one there is none to look for
-  if (/[·*.∙•⋅]/.test(m.input)) try {
-    const w = partShare(m, 'H2O', options);
-    if (w.countedFrom === 'written') water = toDecimal(w.count).toNumber();
-  } catch {
-    water = 0;
+  if (/[·*.∙•⋅]/.test(m.input)) {
+    try {
+      const w = partShare(m, 'H2O', options);
+      if (w.countedFrom === 'written') water = toDecimal(w.count).toNumber();
+    } catch {
+      water = 0;
+    }
   }
   const out = new Map<string, string>();
   for (const [k, n] of m.atoms) {

@@ -118,14 +118,13 @@ function readTarget(text: string, notes: Note[], reagent: MassDetail): { conc: Q
   } catch (e) {
     if (e instanceof PondusError && e.issues.some((i) => i.code === 'UNKNOWN_UNIT' && i.hint?.includes('the name after it'))) {
       const held = new Set(reagent.contributions.map((c) => c.symbol));
-      const more = (hint: string) => {
-        const name = /the name after it, '([^']+)'/.exec(hint)?.[1];
-        return name !== undefined && held.has(name)
+      // the unknown word is the issue's own field; it is the whole name written after the amount when the span covers just it
+      const more = (hint: string, name: unknown, length: number | undefined) =>
+        typeof name === 'string' && name.length === length && held.has(name)
           ? `${hint}; for a concentration of ${name} itself, which the reagent holds, give \`as: ${name}\``
           : `${hint}; for a concentration of an element or ion the reagent holds, name it with \`as\``;
-      };
       throw new PondusError(
-        e.issues.map((i) => (i.code === 'UNKNOWN_UNIT' && i.hint ? { ...i, hint: more(i.hint), options: [...(i.options ?? []), 'as'] } : i)),
+        e.issues.map((i) => (i.code === 'UNKNOWN_UNIT' && i.hint ? { ...i, hint: more(i.hint, 'unit' in i ? i.unit : undefined, i.length), options: [...(i.options ?? []), 'as'] } : i)),
         e.input,
       );
     }
