@@ -3,6 +3,7 @@
  * instruction at working precision), the instruction line ready to print, and the concentration
  * made from a mass weighed or a volume taken (a result).
  */
+import { flaskFor } from './warnings.js';
 import { notesJson, type NoteJson } from '../errors/note-json.js';
 import type { Note } from '../errors/issue.js';
 import { displayInstruction, instructionJson, massUnitFor, resultJson, volumeUnitFor, type AmountJson, type Instruction } from '../sigfig/instruction.js';
@@ -43,7 +44,7 @@ export function prepRowInstruction(p: PrepRowResult, rounding: RoundingMode): st
   const amount = displayInstruction(ins, unit, rounding).text;
   if (p.kind === 'solid') return `weigh ${amount} of ${r.formula}${aside(name, r.purity ? `assay ${r.purity}` : null)}, dissolve, and make up to ${r.volume}`;
   const density = r.density !== '' ? r.density : `${p.concentrated.density.value.div(1000).toFixed()} g/mL, from the table of common grades`;
-  return `${verb} ${amount} of ${r.purity} ${r.formula}${aside(name, `d ${density}`)}, add it slowly to about half the water${p.concentrated.acid ? ' (acid to water)' : ''}${p.concentrated.reagent.formula === 'FH' ? ' in a plastic (polypropylene or PTFE) volumetric flask, not glass' : ''}, cool, and make up to ${r.volume}`;
+  return `${verb} ${amount} of ${r.purity} ${r.formula}${aside(name, `d ${density}`)}, add it slowly to about half the water${p.concentrated.acid ? ' (acid to water)' : ''}${p.concentrated.reagent.formula === 'FH' ? ` in a ${flaskFor('FH')}, not glass` : ''}, cool, and make up to ${r.volume}`;
 }
 
 /**
