@@ -24,7 +24,7 @@ import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js
 import { unitOf } from '../sigfig/units.js';
 import { saltIons, type SaltIons } from './salt-ions.js';
 import type { Strength } from './strength.js';
-import { molarStrength } from './molar-strength.js';
+import { equivalentStrength, molarStrength } from './molar-strength.js';
 import { atWorkingPrecision, noteFewFigures } from './working-precision.js';
 
 export interface MilliequivalentOptions extends MassOptions {
@@ -34,7 +34,7 @@ export interface MilliequivalentOptions extends MassOptions {
   meq?: string;
   /** A target in millimoles: '10 mmol'. */
   mmol?: string;
-  /** A solution strength: '10 % w/v', '2 mg/mL', '0.154 M'. */
+  /** A solution strength: '10 % w/v', '2 mg/mL', '0.154 M', or in equivalents: '2 mEq/mL'. */
   concentration?: string;
   /** The strength was measured (keep its significant figures) rather than a label's nominal value. */
   measured?: boolean;
@@ -118,7 +118,7 @@ export function milliequivalents(saltText: string, o: MilliequivalentOptions): M
     moles = divide(mass, M);
   } else if (o.concentration !== undefined) {
     mode = 'strength';
-    const m = molarStrength(o.concentration, M, o.measured, notes);
+    const m = equivalentStrength(o.concentration, salt.input, ions.equivalentsPerMole, o.measured, notes) ?? molarStrength(o.concentration, M, o.measured, notes);
     strength = m.strength;
     moles = m.molarity;
   } else {

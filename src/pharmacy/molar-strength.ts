@@ -51,3 +51,66 @@ export function molarStrength(text: string, molarMass: Quantity, measured: boole
   );
   return { strength, molarity: measured ? perL : atWorkingPrecision(perL) };
 }
+
+/** A strength in equivalents per something: the number, mEq or Eq, and the unit after the slash. */
+const EQUIVALENTS_PER_VOLUME = /^(.*?)\s*(mEq|Eq)\s*\/\s*(\S+)$/;
+/** The volume units an equivalents strength is read per. */
+const VOLUME_UNIT = /^(?:L|l|dL|dl|mL|ml|µL|μL|µl|uL)$/;
+
+/**
+ * Whether a strength is written in equivalents (mEq or Eq per something): what a salt's strength
+ * may be given in, and a non-electrolyte's may not.
+ *
+ * @example
+ * isEquivalentsStrength('20 mEq/L') // true
+ * isEquivalentsStrength('0.9 %') // false
+ */
+export function isEquivalentsStrength(text: string): boolean {
+  return EQUIVALENTS_PER_VOLUME.test(text.trim());
+}
+
+/**
+ * The amount concentration of a salt from a strength written in equivalents per volume ('20
+ * mEq/L', '2 mEq/mL', as electrolyte solutions are labelled): the strength in mmol of charge per
+ * volume over the salt's mEq per mmol, with a note naming that reading and the NOMINAL_STRENGTH
+ * or MEASURED_STRENGTH note. A neutral salt carries as many equivalents of cation as of anion, so
+ * the one number of mEq per mmol settles it. Null when the text is not in equivalents.
+ *
+ * @param text - the strength as written: '20 mEq/L'.
+ * @param salt - the salt's formula as given, for the note.
+ * @param equivalentsPerMole - the salt's mEq per mmol (its cations' total charge per formula unit).
+ * @param measured - true for a measured strength (its figures are kept), else a nominal label value.
+ * @param notes - where the notes of the reading are added.
+ * @returns the strength (as an amount concentration of charge) and the salt's amount concentration, mol/L; null for a text not in mEq or Eq per volume.
+ * @throws PondusError: BAD_AMOUNT for equivalents per something other than a volume of solution, or a value that is not positive; a number that cannot be read (BAD_AMOUNT, BAD_EXPRESSION, UNKNOWN_UNIT, NUMBER_OUT_OF_RANGE).
+ * @example
+ * const notes = []
+ * const m = equivalentStrength('40 mEq/L', 'CaCl2', 2, false, notes)
+ * displayQuantity(m.molarity, 'mM').text // '20.00 mM'
+ * notes.map((n) => n.code) // ['EQUIVALENTS_STRENGTH', 'NOMINAL_STRENGTH']
+ * equivalentStrength('0.9 %', 'NaCl', 1, false, []) // null
+ */
+export function equivalentStrength(text: string, salt: string, equivalentsPerMole: number, measured: boolean | undefined, notes: Note[]): MolarStrength | null {
+  const m = EQUIVALENTS_PER_VOLUME.exec(text.trim());
+  if (!m) return null;
+  if (!VOLUME_UNIT.test(m[3])) throw fail({ code: 'BAD_AMOUNT', message: `a strength in equivalents is written per volume of solution, like '20 mEq/L' or '2 mEq/mL'; got '${text.trim()}'` }, text);
+  const read: Note[] = [];
+  const charge = readStrength(`${m[1]} ${m[2] === 'mEq' ? 'mmol' : 'mol'}/${m[3]}`, 'w/v', read, 'the strength');
+  const q = charge.value;
+  if (charge.percent !== null || q.dims[0] !== 0 || q.dims[1] !== 1 || q.dims[2] !== -1) {
+    throw fail({ code: 'BAD_AMOUNT', message: `a strength in equivalents is written per volume, like '20 mEq/L' or '2 mEq/mL'; got '${text.trim()}'` }, text);
+  }
+  if (measured) notes.push(...read);
+  const eq = `${equivalentsPerMole} mEq per mmol`;
+  notes.push({
+    code: 'EQUIVALENTS_STRENGTH',
+    message: `the strength '${text.trim()}' is read as ${m[2]} of either ion of ${salt} per ${m[3]} (a neutral salt carries as many of its cation as of its anion): at ${eq}, the salt's amount concentration is the strength${equivalentsPerMole === 1 ? '' : ` divided by ${equivalentsPerMole}`}`,
+  });
+  const perL = divide(q, quantity(exact(equivalentsPerMole), null));
+  notes.push(
+    measured
+      ? { code: 'MEASURED_STRENGTH', message: 'the strength is a measured value: the results keep its significant figures' }
+      : { code: 'NOMINAL_STRENGTH', message: `the strength '${text.trim()}' is read as a label's nominal value, taken as exact; results keep working precision (4 figures); use \`measured: true\` for a measured strength`, options: ['measured'] },
+  );
+  return { strength: charge, molarity: measured ? perL : atWorkingPrecision(perL) };
+}

@@ -18,6 +18,7 @@ import { Decimal } from '../exact/decimal.js';
 import { formulaMassDetail, type MassOptions } from '../mass/formula-mass.js';
 import { add, type Quantity } from '../sigfig/quantity.js';
 import { milliequivalents, type MilliequivalentResult } from './milliequivalents.js';
+import { isEquivalentsStrength } from './molar-strength.js';
 import { nonElectrolyte, notNonElectrolyte, type NonElectrolyteResult } from './non-electrolyte.js';
 import { soluteName } from './solute-names.js';
 import { atWorkingPrecision } from './working-precision.js';
@@ -159,9 +160,12 @@ export function osmolarity(text: string, o: OsmolarityOptions = {}): OsmolarityR
       if (why !== null) {
         throw fail({ code: 'BAD_RECORD', message: `${solute}: pondus cannot count it here: it does not split into a cation and an anion pondus knows, and it is not counted as a non-electrolyte (one particle per molecule) because ${why}; work a salt on its own with \`milliequivalents\` and \`ions\``, column, options: ['ions'], functions: ['milliequivalents'] }, text);
       }
+      if (isEquivalentsStrength(strength)) {
+        throw fail({ code: 'BAD_AMOUNT', message: `${solute} is counted as a non-electrolyte, which has no ions, so a strength in equivalents ('${strength.trim()}') does not apply: give it as % w/v, g/L or mmol/L`, column: column + pair.valueColumn - 1 }, text);
+      }
       r = nonElectrolyte(detail, strength, o, named !== null);
     } catch (e) {
-      if (e instanceof PondusError && e.first.code === 'BAD_RECORD') throw e;
+      if (e instanceof PondusError && (e.first.code === 'BAD_RECORD' || (e.first.code === 'BAD_AMOUNT' && e.input === text))) throw e;
       own(e);
     }
     for (const n of r!.notes) if (n.code !== 'NOMINAL_STRENGTH' && n.code !== 'MEASURED_STRENGTH') notes.push(prefix(n));

@@ -247,10 +247,10 @@ describe('pondus osmolarity with non-electrolytes: the table, JSON, CSV and a ba
 
 describe('an error inside one solute points at its place in the whole list', () => {
   it('a unit in the strength: the column of the unit itself, in the message, the field and the span', () => {
-    const e = failure('NaCl=0.9 %, KCl=20 mEq/L');
+    const e = failure('NaCl=0.9 %, KCl=20 IU/L');
     expect(e.code).toBe('UNKNOWN_UNIT');
-    expect([e.column, e.length]).toEqual([20, 5]);
-    expect(e.message).toBe("KCl: the strength: unknown unit or word 'mEq/L' at column 20");
+    expect([e.column, e.length]).toEqual([20, 4]);
+    expect(e.message).toBe("KCl: the strength: unknown unit or word 'IU/L' at column 20");
   });
 
   it('an element in the formula: the column of the symbol', () => {
@@ -258,4 +258,38 @@ describe('an error inside one solute points at its place in the whole list', () 
     expect(e.code).toBe('UNKNOWN_ELEMENT');
     expect(e.column).toBe(15);
   });
+
+  describe('strengths in milliequivalents per volume', () => {
+    it('KCl 20 mEq/L is 20 mmol/L and 40 mOsm/L; CaCl2 40 mEq/L is 20 mmol/L and 60 mOsm/L', () => {
+      // source: mEq = mmol × valence (total charge of the cation per formula unit), the definition used in
+      // pharmaceutical calculations (Ansel's Pharmaceutical Calculations, milliequivalents chapter), from memory
+      const k = osmolarity('KCl=20 mEq/L');
+      expect(displayQuantity(k.osmolarity, 'mM').figure).toBe('40.00');
+      expect(k.notes.map((n) => n.code)).toContain('EQUIVALENTS_STRENGTH');
+      const ca = osmolarity('CaCl2=40 mEq/L');
+      expect(displayQuantity(ca.osmolarity, 'mM').figure).toBe('60.00');
+      const eq = Object.fromEntries(ca.ions.map((i) => [i.ion, displayQuantity(i.equivalents, 'mM').figure]));
+      expect(eq).toEqual({ 'Ca^2+': '40.00', 'Cl^-': '40.00' });
+    });
+
+    it('8.4 % sodium bicarbonate and 1 mEq/mL give the same osmolarity', () => {
+      // source: 8.4 % Sodium Bicarbonate Injection is labelled 1 mEq/mL (84 mg/mL; M = 84.007 g/mol), from memory
+      const byPercent = displayQuantity(osmolarity('NaHCO3=8.4 %').osmolarity, 'mM').value.toNumber();
+      const byEq = displayQuantity(osmolarity('NaHCO3=1 mEq/mL').osmolarity, 'mM').value.toNumber();
+      expect(Math.abs(byPercent - byEq) / byEq).toBeLessThan(1e-4);
+    });
+
+    it('refuses equivalents for a non-electrolyte and per mass, naming the problem', () => {
+      const dextrose = toSafe(() => osmolarity('C6H12O6=20 mEq/L'));
+      expect(dextrose.success).toBe(false);
+      if (!dextrose.success) {
+        expect(dextrose.error.first.code).toBe('BAD_AMOUNT');
+        expect(dextrose.error.first.message).toMatch(/non-electrolyte.*no ions/);
+      }
+      const perKg = toSafe(() => osmolarity('KCl=20 mEq/kg'));
+      expect(perKg.success).toBe(false);
+      if (!perKg.success) expect(perKg.error.first.message).toMatch(/per volume of solution/);
+    });
+  });
 });
+

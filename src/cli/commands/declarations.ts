@@ -386,7 +386,7 @@ export function declarePharmacy(program: Command): { meq: Command; osmolarity: C
         .option('--mass <m>', "a weighed mass: '1.500 g'")
         .option('--meq <n>', "a target: '20 mEq' (gives the mass to weigh)")
         .option('--mmol <n>', "a target: '10 mmol' (gives the mass to weigh)")
-        .option('--concentration <c>', "a strength: '10 % w/v', '84 g/L', '0.154 M' (gives mEq/mL, mEq/L, mOsm/L)")
+        .option('--concentration <c>', "a strength: '10 % w/v', '84 g/L', '0.154 M', '2 mEq/mL' (gives mEq/mL, mEq/L, mOsm/L)")
         .option('--measured', 'the strength is measured (keep its significant figures), not a nominal label value')
         .option('--ions <list>', "the ions, when not read from the formula: '2K^+,HPO4^2-'"),
     ),
@@ -396,7 +396,7 @@ export function declarePharmacy(program: Command): { meq: Command; osmolarity: C
       program
         .command('osmolarity')
         .description('mOsm/L and mEq/L of a solution of salts (complete dissociation) and non-electrolytes such as dextrose (one particle per molecule)')
-        .argument('[solutions...]', "solutes and strengths: 'NaCl=0.9 %', 'NaCl=0.6 %, KCl=0.03 %' or 'C6H12O6·H2O=5 %, NaCl=0.45 %'; - reads one solution per line")
+        .argument('[solutions...]', "solutes and strengths: 'NaCl=0.9 %', 'NaCl=0.6 %, KCl=0.03 %' or 'C6H12O6·H2O=5 %, NaCl=0.45 %'; a salt also in mEq: 'KCl=20 mEq/L'; - reads one solution per line")
         .option('--measured', 'the strengths are measured (keep their significant figures), not nominal label values'),
     ),
   );
