@@ -19,6 +19,35 @@ export interface BatchIo {
   errStyle: ChalkInstance;
   /** The terminal's width when standard output is a terminal (tables fit it). */
   columns?: number;
+  /** The command's option values, each with its flag ('0.100 M' → '--concentration'): see {@link OptionValueError}. */
+  optionFlags?: ReadonlyMap<string, string>;
+}
+
+/** Codes of a text that cannot be read at all, whatever it is used for: an option value with one is wrong for every input. */
+const UNREADABLE = new Set(['UNKNOWN_UNIT', 'BAD_EXPRESSION', 'NUMBER_OUT_OF_RANGE', 'UNEXPECTED_CHARACTER']);
+
+/**
+ * The first input failed because an option's value cannot be read (an unknown unit, a malformed
+ * number): every other input would fail the same way, so the command stops before them and says
+ * it once, naming the option, as a usage error (exit 2).
+ */
+export class OptionValueError extends Error {
+  constructor(readonly flag: string, readonly value: string, readonly error: PondusError) {
+    super(`${flag} '${value}': ${error.message}`);
+    this.name = 'OptionValueError';
+  }
+}
+
+/**
+ * The option whose value an error is about, when the error is that the value cannot be read:
+ * the error's text is not the input's but an option's value, and its code is one of reading.
+ *
+ * @example
+ * optionValueFailure(fail({ code: 'UNKNOWN_UNIT', message: 'x' }, 'abc'), 'NaCl', new Map([['abc', '--volume']])) // '--volume'
+ */
+export function optionValueFailure(error: PondusError, input: string, flags: ReadonlyMap<string, string> | undefined): string | null {
+  if (!flags || error.input === undefined || error.input === input || !UNREADABLE.has(error.first.code)) return null;
+  return flags.get(error.input) ?? null;
 }
 
 export interface BatchSummary {
@@ -44,7 +73,7 @@ export async function runBatch<R>(p: Presenter<R>, batches: AsyncIterable<InputI
   const summary: BatchSummary = { total: 0, failed: 0, failedLines: [], tallied: 0, usage: false };
   for await (const batch of batches) {
     withNaming(FLAG_NAMING, () => {
-      processItems(p, batch, writer, summary);
+      processItems(p, batch, writer, summary, io.optionFlags);
       writer.endBatch(false);
     });
     await io.out.flush();
@@ -60,12 +89,17 @@ export async function runBatch<R>(p: Presenter<R>, batches: AsyncIterable<InputI
  * @example
  * processItems(massPresenter({}), [{ text: 'H2O', line: 1 }], writer, summary)
  */
-export function processItems<R>(p: Presenter<R>, items: InputItem[], writer: ResultWriter<R>, summary: BatchSummary): void {
+export function processItems<R>(p: Presenter<R>, items: InputItem[], writer: ResultWriter<R>, summary: BatchSummary, optionFlags?: ReadonlyMap<string, string>): void {
   const row = writer.okRow && p.jsonRow && !p.tally ? p.jsonRow : null;
   const failed = (item: InputItem, e: unknown) => {
+    const error = asPondusError(e, item.text);
+    // the first input refused for an option's value that cannot be read: said once, for the option
+    if (summary.total === 1) {
+      const flag = optionValueFailure(error, item.text, optionFlags);
+      if (flag !== null) throw new OptionValueError(flag, error.input!, error);
+    }
     summary.failed++;
     if (summary.failedLines.length < 10) summary.failedLines.push(item.line);
-    const error = asPondusError(e, item.text);
     if (error.issues.some((i) => i.code === 'USAGE')) summary.usage = true;
     writer.fail(item, error);
   };

@@ -11,7 +11,7 @@ import { Command, CommanderError } from 'commander';
 import { PondusError } from '../errors/pondus-error.js';
 import { FLAG_NAMING, renderError } from '../errors/render.js';
 import { messageFor } from '../errors/message.js';
-import { runBatch } from './batch.js';
+import { OptionValueError, runBatch } from './batch.js';
 import { outputFormat, refuseRepeatedOptions, withUsageMessages } from './commands/common.js';
 import type { CommandRunner } from './commands/runner.js';
 import type { CommandName, CommandOptions, PresenterTable } from './commands/registry.js';
@@ -59,6 +59,26 @@ export function presenterIn<K extends CommandName>(table: PresenterTable, comman
 }
 
 /**
+ * The command's option values that are texts, each with its flag, for naming an option whose value
+ * cannot be read (a value given to two options is named by both).
+ *
+ * @example
+ * optionFlags({ concentration: '0.1 M', volume: '250 mL', json: true }).get('250 mL') // '--volume'
+ */
+export function optionFlags(options: object): Map<string, string> {
+  const flags = new Map<string, string>();
+  for (const [key, value] of Object.entries(options)) {
+    const flag = '--' + key.replace(/[A-Z]/g, (c) => '-' + c.toLowerCase());
+    for (const v of Array.isArray(value) ? value : [value]) {
+      if (typeof v !== 'string') continue;
+      const had = flags.get(v);
+      flags.set(v, had ? `${had} or ${flag}` : flag);
+    }
+  }
+  return flags;
+}
+
+/**
  * Runs pondus with the given arguments (without `node` and the script path) over a set of commands,
  * and returns the exit status.
  *
@@ -81,7 +101,7 @@ export async function runProgram(args: string[], io: CliIo, commands: CommandSet
     const numbered = inputs.includes('-') || inputs.length > 1;
     const batches = source ?? (lineNumbers ? fixedBatch(inputs, lineNumbers) : inputBatches(inputs, io.stdin));
     const columns = io.stdout.isTTY ? (io.stdout as { columns?: number }).columns : undefined;
-    const summary = await runBatch(presenter, batches, format, { out, err, outStyle, errStyle, columns }, numbered || !!lineNumbers || !!source);
+    const summary = await runBatch(presenter, batches, format, { out, err, outStyle, errStyle, columns, optionFlags: optionFlags(options) }, numbered || !!lineNumbers || !!source);
     if (presenter.tally) {
       const line = `${summary.tallied} of ${summary.total} ${presenter.tally.words}\n`;
       if (format === 'table') out.write(line);
@@ -126,6 +146,9 @@ export async function runProgram(args: string[], io: CliIo, commands: CommandSet
   } catch (e) {
     if (e instanceof CommanderError) {
       status = e.exitCode === 0 ? 0 : 2;
+    } else if (e instanceof OptionValueError) {
+      err.write(`pondus: ${e.flag} '${visibleControls(e.value)}' cannot be read, so no input was worked:\n${renderError(e.error, { emphasis: errStyle.red, naming: FLAG_NAMING })}\n`);
+      status = 2;
     } else if (e instanceof PondusError && e.first.code === 'USAGE') {
       err.write(`pondus: ${messageFor(e.first, FLAG_NAMING)}\n`);
       status = 2;

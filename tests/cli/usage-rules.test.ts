@@ -65,3 +65,37 @@ describe("commander's other messages keep its wording, in the same style", () =>
     expect(r.stderr).toMatch(/^pondus: option '--weights <table>' argument 'old' is invalid\. Allowed choices are standard, abridged\./);
   });
 });
+
+describe('an option value that cannot be read is said once, for the option (exit 2)', () => {
+  // common practice: a command line with a malformed option is a usage error, reported before any input is worked
+  it('a batch with an unreadable --concentration: one message naming the option, no rows', () => {
+    const r = pondus(['prepare', '--concentration', 'abc', '--volume', '250 mL', '--json', '-'], 'NaCl\nKCl\n');
+    expect(r.status).toBe(2);
+    expect(r.stdout).toBe('');
+    expect(r.stderr).toContain("pondus: --concentration 'abc' cannot be read");
+    expect(r.stderr.match(/UNKNOWN_UNIT/g)).toHaveLength(1);
+  });
+
+  it('a malformed --mass of meq is named, with its column in the value', () => {
+    const r = pondus(['meq', 'NaCl', '--mass', '1..0 g']);
+    expect(r.status).toBe(2);
+    expect(r.stderr).toContain("--mass '1..0 g' cannot be read");
+    expect(r.stderr).toContain('BAD_EXPRESSION');
+  });
+
+  it('an input of its own that fails first does not stop the batch; the later inputs get their results', () => {
+    const r = pondus(['prepare', '--concentration', '0.100 M', '--volume', '250.0 mL', '--json', '-'], 'Xq\nNaCl\n');
+    expect(r.status).toBe(1);
+    const rows = r.stdout.trim().split('\n').map((l) => JSON.parse(l));
+    expect(rows.map((x) => x.line)).toEqual([1, 2]);
+    expect(rows[0].error.code).toBe('UNKNOWN_ELEMENT');
+    expect(rows[1].error).toBeUndefined();
+  });
+
+  it('a value read only for some inputs but refused for what it means (not for how it is written) stays per row', () => {
+    // a % w/w strength needs a density: a refusal of what the value means (BAD_AMOUNT), kept on each row as before
+    const r = pondus(['meq', '--concentration', '5 % w/w', '--json', '-'], 'NaCl\nKCl\n');
+    expect(r.status).toBe(1);
+    expect(r.stdout.trim().split('\n')).toHaveLength(2);
+  });
+});
