@@ -36,9 +36,14 @@ describe('JSON error rows', () => {
 });
 
 describe('CSV error rows', () => {
-  it('mass --csv XxQq: every code and message, joined', () => {
+  it('mass --csv XxQq: the first code in the error cell; every issue with its code and column in the message cell', () => {
     const lines = pondus(['mass', '--csv', 'XxQq']).stdout.trim().split('\n');
-    expect(lines[1]).toBe("XxQq,1,,,,,,,UNKNOWN_ELEMENT | UNKNOWN_ELEMENT,unknown element symbol 'Xx' | unknown element symbol 'Qq'");
+    expect(lines[1]).toBe("XxQq,1,,,,,,,UNKNOWN_ELEMENT,UNKNOWN_ELEMENT: unknown element symbol 'Xx' (column 1) | UNKNOWN_ELEMENT: unknown element symbol 'Qq' (column 3)");
+  });
+
+  it('one issue: its code alone, and its message with the column it names', () => {
+    const lines = pondus(['mass', '--csv', 'H2O', 'Ca(OH2']).stdout.trim().split('\n');
+    expect(lines[2]).toBe("Ca(OH2,2,,,,,,,UNCLOSED_GROUP,'(' at column 3 is never closed");
   });
 
   it('titration --csv: a failed input fills the line column', () => {

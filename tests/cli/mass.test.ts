@@ -49,7 +49,7 @@ describe('pondus mass', () => {
     const csv = pondus(['mass', '--csv', 'H2O', 'Q']);
     expect(csv.stdout.split('\n')[0]).toBe('input,line,formula,molarMass,monoisotopicMass,nominalMass,charge,notes,error,message');
     expect(csv.stdout.split('\n')[1]).toBe('H2O,1,H2O,18.015,18.010564683056,18,0,,,');
-    expect(csv.stdout.split('\n')[2]).toBe("Q,2,,,,,,,UNKNOWN_ELEMENT,unknown element symbol 'Q'");
+    expect(csv.stdout.split('\n')[2]).toBe("Q,2,,,,,,,UNKNOWN_ELEMENT,unknown element symbol 'Q' (column 1)");
     const tsv = pondus(['mass', '--tsv', 'NaCl']);
     expect(tsv.stdout.split('\n')[1].split('\t').slice(0, 4)).toEqual(['NaCl', '1', 'ClNa', '58.43976928']);
   });

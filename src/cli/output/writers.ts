@@ -184,9 +184,11 @@ class DelimitedWriter<R> implements ResultWriter<R> {
       if (at >= 0) cells[at] = v;
     }
     cells[this.header.indexOf('line')] = item.line;
-    const codes = error.issues.map((i) => i.code).join(' | ');
-    const messages = error.issues.map((i) => messageFor(i, FLAG_NAMING)).join(' | ') + (error.more ? ' | … and more' : '');
-    this.write([...cells, codes, messages], true);
+    // the error cell holds one code, the first (as JSON's `error`), so a sheet can filter on it; the
+    // message cell holds every issue, each with its code when there are several, and its column
+    const several = error.issues.length > 1;
+    const messages = error.issues.map((i) => `${several ? `${i.code}: ` : ''}${withColumn(messageFor(i, FLAG_NAMING), i.column)}`).join(' | ') + (error.more ? ' | … and more' : '');
+    this.write([...cells, error.first.code, messages], true);
   }
   endBatch(): void {
     if (this.header && this.headerWritten) return;
@@ -203,6 +205,9 @@ class DelimitedWriter<R> implements ResultWriter<R> {
     }
   }
 }
+
+/** A message with the column it is about, unless it names a column already. */
+const withColumn = (message: string, column: number | undefined): string => (column === undefined || /\bcolumns? \d/.test(message) ? message : `${message} (column ${column})`);
 
 const MAX_TABLE_NOTES = 1000;
 // eslint-disable-next-line no-control-regex
