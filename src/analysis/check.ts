@@ -17,7 +17,7 @@ import { fail, PondusError } from '../errors/pondus-error.js';
 import type { Note } from '../errors/issue.js';
 import { formulaMassDetail, type MassOptions, type MassDetail } from '../mass/formula-mass.js';
 import { hillOrder } from '../formula/hill.js';
-import { readFoundValues } from './found-values.js';
+import { FOUND_SCALE, readFoundValues, readPlainFound } from './found-values.js';
 import type { RoundingMode } from '../sigfig/round.js';
 import { SOLVENTS } from './solvents.js';
 import { readNumber } from '../sigfig/read-number.js';
@@ -116,11 +116,21 @@ export interface AnalysisResult {
  * analysis('C20H25N3O', 'C=72.30, H=7.91, N=12.60', { solvents: ['water'] }).fits[0].formula // 'C20H25N3O·0.5H2O'
  */
 export function analysis(formula: string, foundText: string, options: AnalysisOptions = {}): AnalysisResult {
+  return (options.solvents === undefined || options.solvents.length === 0 ? plainAnalysis(formula, foundText, options) : null) ?? exactAnalysis(formula, foundText, options);
+}
+
+/**
+ * {@link analysis} computed with Decimal throughout: the general way, which the plain way
+ * below gives way to for anything out of the ordinary (and which tests compare it with).
+ *
+ * @example
+ * exactAnalysis('C6H6', 'C=92.26,H=7.74').pass // true
+ */
+export function exactAnalysis(formula: string, foundText: string, options: AnalysisOptions = {}): AnalysisResult {
   const read = readFoundValues(foundText);
   const found = read.values;
   const rounding = options.rounding ?? 'half-even';
-  const tolerance = options.tolerance instanceof Decimal ? options.tolerance : readNumber(String(options.tolerance ?? '0.4')).value;
-  if (tolerance.isNegative() || tolerance.gt(100)) throw fail({ code: 'BAD_OPTION', message: `tolerance ${tolerance.toFixed()} is out of range` });
+  const tolerance = toleranceOf(options);
   const base = formulaMassDetail(formula, options);
   if (base.charge !== 0) throw fail({ code: 'BAD_MEASUREMENT', message: 'elemental analysis is of a neutral compound; give the whole salt, e.g. C12H14N2^2+ with its counter-ions' }, formula);
   const partners = (options.solvents ?? []).map((s) => partnerOf(s, options));
@@ -202,6 +212,135 @@ export function analysis(formula: string, foundText: string, options: AnalysisOp
     reportLine: bare.reportLine,
     fits: exactFits.map(plainFit),
     continuous,
+    notes,
+  };
+}
+
+function toleranceOf(options: AnalysisOptions): Decimal {
+  const tolerance = options.tolerance instanceof Decimal ? options.tolerance : readNumber(String(options.tolerance ?? '0.4')).value;
+  if (tolerance.isNegative() || tolerance.gt(100)) throw fail({ code: 'BAD_OPTION', message: `tolerance ${tolerance.toFixed()} is out of range` });
+  return tolerance;
+}
+
+/** A tolerance's figures for the plain way: in 10^-8 percentage points (null past 8 decimals), as a number and as text. */
+interface ToleranceFigures {
+  scaled: number | null;
+  number: number;
+  text: string;
+}
+
+/** By tolerance: a batch reads the same one (the same Decimal, remembered by readNumber) line after line. */
+const toleranceFigures = new WeakMap<Decimal, ToleranceFigures>();
+
+function figuresOf(t: Decimal): ToleranceFigures {
+  let f = toleranceFigures.get(t);
+  if (f === undefined) {
+    f = { scaled: t.decimalPlaces() <= 8 ? Number(t.times(FOUND_SCALE).toFixed()) : null, number: t.toNumber(), text: t.toFixed() };
+    toleranceFigures.set(t, f);
+  }
+  return f;
+}
+
+/** 10^-8 percentage points in a hundredth. */
+const HUNDREDTH = FOUND_SCALE / 100;
+
+/**
+ * The check without partners, in floating point where it decides and exact whole numbers
+ * (10^-8 percentage points) where the result must be exact: for a found set {@link readPlainFound}
+ * reads and a formula whose element masses are exact whole numbers of 10^-12 u. The same result as
+ * {@link exactAnalysis}, field for field; null, to go that way, for anything else: a found set
+ * read otherwise, a tolerance past 8 decimals, a percent within 10^-6 of a rounding tie, and
+ * every input the general way refuses (so that it refuses it with its own error). A found value
+ * floating point cannot clear of the IMPOSSIBLE_PERCENT note is checked by the general way's own
+ * check, on Decimal values. Solvents are not looked at: {@link analysis} comes here only without.
+ *
+ * @param formula - the compound's formula, neutral.
+ * @param foundText - the found mass percents, e.g. 'C=74.75 H=7.49 N=12.58'.
+ * @param options - as for analysis, without solvents.
+ * @returns the result analysis gives, or null where the general way must decide.
+ * @throws PondusError: the codes of formulaMassDetail for a formula that cannot be read; BAD_NUMBER or BAD_OPTION for a tolerance analysis refuses.
+ * @example
+ * plainAnalysis('C6H6', 'C=92.26 H=7.74')?.pass // true
+ * plainAnalysis('C6H6', 'C=92.26 H=+7.74')       // null
+ */
+export function plainAnalysis(formula: string, foundText: string, options: AnalysisOptions = {}): AnalysisResult | null {
+  const read = readPlainFound(foundText);
+  if (read === null) return null;
+  const tolerance = toleranceOf(options);
+  const tol = figuresOf(tolerance);
+  if (tol.scaled === null) return null;
+  const base = formulaMassDetail(formula, options);
+  if (base.charge !== 0) return null;
+  const atoms = base.atoms;
+  for (let j = 0; j < read.symbols.length; j++) if (read.scaled[j] !== 0 && !atoms.has(read.symbols[j])) return null;
+  const symbols = hillOrder(read.symbols);
+  const massScaled = elementScaled(base, symbols);
+  if (massScaled === null) return null;
+  const molarNumber = base.molarMassNumber();
+  const n = symbols.length;
+  const calculated: Record<string, number> = {};
+  const found: Record<string, number> = {};
+  const texts: Record<string, string> = {};
+  const deviation: Record<string, number> = {};
+  const within: Record<string, boolean> = {};
+  let calcd = '';
+  let given = '';
+  let maxScaled = 0;
+  let common: ReturnType<typeof commonPartnerShares> | null = null;
+  let exactNotes = false;
+  for (let i = 0; i < n; i++) {
+    const s = symbols[i];
+    const j = n === read.symbols.length && read.symbols[i] === s ? i : read.symbols.indexOf(s);
+    const text = read.texts[j];
+    const f = read.scaled[j];
+    const foundNumber = Number(text);
+    const massNumber = massScaled[i] / SCALE;
+    // as percentTo2 rounds: floating point, unless within 10^-6 of a tie
+    const x = (massNumber / molarNumber) * 10_000;
+    if (!(Number.isFinite(x) && x >= 0 && x < 1e12 && Math.abs(x - Math.floor(x) - 0.5) > 1e-6)) return null;
+    const k = Math.round(x);
+    const c = `${Math.floor(k / 100)}.${String(k % 100).padStart(2, '0')}`;
+    // as impossibleNotes decides without exact quotients; past that, the general way
+    const ownNumber = (massNumber / molarNumber) * 100;
+    if (foundNumber - ownNumber - tol.number >= -1e-9) {
+      const share = (common ??= commonPartnerShares(options)).get(s);
+      if (!(share && foundNumber - Math.max(ownNumber, share.percentNumber) - tol.number < -1e-9)) exactNotes = true;
+    }
+    // found − calculated exactly, in 10^-8 percentage points; the quotient of two exact doubles is the nearest double of the decimal
+    const d = f - k * HUNDREDTH;
+    const abs = d < 0 ? -d : d;
+    if (abs > maxScaled) maxScaled = abs;
+    calculated[s] = Number(c);
+    found[s] = foundNumber;
+    texts[s] = text;
+    deviation[s] = d / FOUND_SCALE;
+    within[s] = abs <= tol.scaled;
+    calcd += `${i ? '; ' : ''}${s}, ${c}`;
+    given += `${i ? '; ' : ''}${s}, ${text}`;
+  }
+  const written = reportFormulaOf(base);
+  let notes: Note[] = base.notes.length || read.notes.length ? [...base.notes, ...read.notes] : [];
+  if (exactNotes) {
+    // a found value floating point cannot clear: the general way's own check, on its Decimal values
+    const exact = new Map(read.symbols.map((s, j) => [s, new Decimal(read.texts[j])]));
+    notes = [...notes, ...impossibleNotes(base, [], [], symbols, exact, tolerance, options, ownFigures(base, symbols, exact))];
+  }
+  return {
+    input: formula,
+    formula: base.formula,
+    reportFormula: written,
+    calculated,
+    found,
+    foundText: texts,
+    deviation,
+    maxDeviation: maxScaled / FOUND_SCALE,
+    pass: maxScaled <= tol.scaled,
+    tolerance: tol.number,
+    toleranceText: tol.text,
+    within,
+    reportLine: `Anal. Calcd for ${written}: ${calcd}. Found: ${given}.`,
+    fits: [],
+    continuous: [],
     notes,
   };
 }

@@ -90,3 +90,95 @@ export function fromJournalForm(text: string): string {
 export function readFound(text: string): Map<string, Decimal> {
   return readFoundValues(text).values;
 }
+
+/** Found values in 10^-8 percentage points: {@link readPlainFound}'s unit. */
+export const FOUND_SCALE = 1e8;
+
+/** A set of found values read without Decimal (see {@link readPlainFound}). */
+export interface PlainFound {
+  /** The element symbols, in the order given. */
+  symbols: string[];
+  /** Each value as written ('74.75'), which is also its text to its written decimals. */
+  texts: string[];
+  /** Each value in 10^-8 percentage points, an exact whole number. */
+  scaled: number[];
+  /** Remarks, as readFoundValues makes them (a sum over 100.5 %). */
+  notes: Note[];
+}
+
+/**
+ * The usual found-value set read straight to exact whole numbers, for the batch path: element
+ * symbols, each `=` a value written 0 to 100 with at most 8 decimals and no sign, leading zero or
+ * percent sign, separated by a comma (and at most one space) or one space (`C=74.75 H=7.49`,
+ * `C=40.46,H=10.19`). Null for anything else, or for a set {@link readFoundValues} would refuse
+ * (an unknown symbol, a key twice, a value over 100 %, a sum over 105 %): those go the general
+ * way. Where it gives a set, readFoundValues gives the same values, texts and notes.
+ *
+ * @param text - found mass percents, e.g. 'C=74.75 H=7.49 N=12.58'.
+ * @returns the symbols, texts and values in 10^-8 percentage points, or null.
+ * @example
+ * readPlainFound('C=74.75 H=7.49').scaled // [7475000000, 749000000]
+ * readPlainFound('C=74.75 H=+7.49')        // null
+ */
+export function readPlainFound(text: string): PlainFound | null {
+  const symbols: string[] = [];
+  const texts: string[] = [];
+  const scaled: number[] = [];
+  const n = text.length;
+  let i = 0;
+  let sum = 0;
+  for (;;) {
+    // the key: a capital and at most one small letter, then '='
+    const k0 = i;
+    let c = i < n ? text.charCodeAt(i) : 0;
+    if (c < 65 || c > 90) return null;
+    i++;
+    c = i < n ? text.charCodeAt(i) : 0;
+    if (c >= 97 && c <= 122) c = ++i < n ? text.charCodeAt(i) : 0;
+    if (c !== 61) return null;
+    const key = text.slice(k0, i);
+    if (!isElementSymbol(key) || symbols.includes(key)) return null;
+    // the value: 0, or 1 to 3 digits without a leading zero, then at most 8 decimals
+    const v0 = ++i;
+    let whole = 0;
+    while (i < n && (c = text.charCodeAt(i)) >= 48 && c <= 57) {
+      whole = whole * 10 + (c - 48);
+      i++;
+    }
+    const intDigits = i - v0;
+    if (intDigits === 0 || intDigits > 3 || (intDigits > 1 && text.charCodeAt(v0) === 48)) return null;
+    let frac = 0;
+    let fracDigits = 0;
+    if (i < n && text.charCodeAt(i) === 46) {
+      i++;
+      while (i < n && (c = text.charCodeAt(i)) >= 48 && c <= 57) {
+        frac = frac * 10 + (c - 48);
+        fracDigits++;
+        i++;
+      }
+      if (fracDigits === 0 || fracDigits > 8) return null;
+    }
+    const value = whole * FOUND_SCALE + frac * 10 ** (8 - fracDigits);
+    if (value > 100 * FOUND_SCALE) return null;
+    symbols.push(key);
+    texts.push(text.slice(v0, i));
+    scaled.push(value);
+    sum += value;
+    if (i === n) break;
+    // the separator: ',' with at most one space after it, or one space
+    c = text.charCodeAt(i++);
+    if (c === 44) {
+      if (i < n && text.charCodeAt(i) === 32) i++;
+    } else if (c !== 32) return null;
+  }
+  if (sum > FOUND_SUM_LIMIT * FOUND_SCALE) return null;
+  const notes: Note[] = sum > FOUND_SUM_WARNING * FOUND_SCALE ? [{ code: 'SUM_OVER_100', message: `the found values add up to ${scaledText(sum)} %, over 100 %: check them` }] : [];
+  return { symbols, texts, scaled, notes };
+}
+
+/** A whole number of 10^-8 as decimal text without trailing zeros, as Decimal's toFixed() writes the exact value ('100.58', '101'). */
+function scaledText(n: number): string {
+  const whole = Math.floor(n / FOUND_SCALE);
+  const frac = n - whole * FOUND_SCALE;
+  return frac === 0 ? String(whole) : `${whole}.${String(frac).padStart(8, '0').replace(/0+$/, '')}`;
+}

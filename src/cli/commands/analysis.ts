@@ -1,6 +1,6 @@
 import type { Command } from 'commander';
 import { analysis, type AnalysisResult } from '../../analysis/check.js';
-import { analysisJson } from '../../analysis/analysis-json.js';
+import { analysisJson, analysisJsonLine } from '../../analysis/analysis-json.js';
 import { readSheet, type SheetRow } from '../../analysis/lab-sheet.js';
 import { fail } from '../../errors/pondus-error.js';
 import { runWithSheet } from './sheet-runner.js';
@@ -142,6 +142,8 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
     Object.entries(m).map(([s, v]) => `${s} ${typeof v === 'string' ? v : v.toFixed(2)}`).join(', ');
   // CSV: one column per element and quantity, for the elements analysed in practice (other elements stay in JSON, with a note)
   const CSV_ELEMENTS = ['C', 'H', 'N', 'S', 'O', 'P', 'F', 'Cl', 'Br', 'I'];
+  const json = (row: Row) => Object.assign(analysisJson(row.result, row.id !== null ? { id: row.id } : {}), { rounding: opts.rounding });
+  const roundingTail = `,"rounding":${JSON.stringify(opts.rounding)}`;
   return {
     compute,
     tally: sheet ? { count: (row) => row.result.pass, words: `compounds pass at ±${Number(opts.tolerance).toFixed(2)}` } : undefined,
@@ -155,7 +157,9 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
           },
         }
       : undefined,
-    json: (row) => Object.assign(analysisJson(row.result, row.id !== null ? { id: row.id } : {}), { rounding: opts.rounding }),
+    json,
+    // the same text as JSON.stringify(json(row)), written directly for the rows of a batch (a sheet's rows, with an id first, go the general way)
+    jsonLine: (row) => (row.id === null ? analysisJsonLine(row.result, roundingTail) : JSON.stringify(json(row))),
     columns: ['input', 'id', 'formula', 'reportFormula', ...CSV_ELEMENTS.flatMap((e) => [`${e}_calculated`, `${e}_found`, `${e}_deviation`]), 'maxDeviation', 'pass', 'bestFit', 'bestFitMaxDeviation'],
     cells: ({ result: r, id }) => {
       const best = r.fits[0];
