@@ -241,6 +241,12 @@ function figuresOf(t: Decimal): ToleranceFigures {
   return f;
 }
 
+/** A whole number of hundredths as text to two decimals ('74.27'). */
+const hundredthsText = (k: number) => `${Math.floor(k / 100)}.${String(k % 100).padStart(2, '0')}`;
+
+/** The texts of the percents 0.00 to 100.00 by hundredths, each made on first use. */
+const percentTexts: (string | undefined)[] = new Array<string | undefined>(10_001).fill(undefined);
+
 /** 10^-8 percentage points in a hundredth. */
 const HUNDREDTH = FOUND_SCALE / 100;
 
@@ -271,8 +277,14 @@ export function plainAnalysis(formula: string, foundText: string, options: Analy
   if (tol.scaled === null) return null;
   const base = formulaMassDetail(formula, options);
   if (base.charge !== 0) return null;
-  const atoms = base.atoms;
-  for (let j = 0; j < read.symbols.length; j++) if (read.scaled[j] !== 0 && !atoms.has(read.symbols[j])) return null;
+  // as base.atoms.has(symbol), without building the map: its keys are those of the vector's ids
+  const ids = base.vector.ids;
+  for (let j = 0; j < read.symbols.length; j++) {
+    if (read.scaled[j] === 0) continue;
+    let has = false;
+    for (let q = 0; q < ids.length && !has; q++) has = ATOMS.data[ids[q]].key === read.symbols[j];
+    if (!has) return null;
+  }
   const symbols = hillOrder(read.symbols);
   const massScaled = elementScaled(base, symbols);
   if (massScaled === null) return null;
@@ -293,13 +305,14 @@ export function plainAnalysis(formula: string, foundText: string, options: Analy
     const j = n === read.symbols.length && read.symbols[i] === s ? i : read.symbols.indexOf(s);
     const text = read.texts[j];
     const f = read.scaled[j];
-    const foundNumber = Number(text);
+    // an exact whole number over 10^8: the nearest double of the text, as Number(text) reads it
+    const foundNumber = f / FOUND_SCALE;
     const massNumber = massScaled[i] / SCALE;
     // as percentTo2 rounds: floating point, unless within 10^-6 of a tie
     const x = (massNumber / molarNumber) * 10_000;
     if (!(Number.isFinite(x) && x >= 0 && x < 1e12 && Math.abs(x - Math.floor(x) - 0.5) > 1e-6)) return null;
     const k = Math.round(x);
-    const c = `${Math.floor(k / 100)}.${String(k % 100).padStart(2, '0')}`;
+    const c = k <= 10_000 ? (percentTexts[k] ??= hundredthsText(k)) : hundredthsText(k);
     // as impossibleNotes decides without exact quotients; past that, the general way
     const ownNumber = (massNumber / molarNumber) * 100;
     if (foundNumber - ownNumber - tol.number >= -1e-9) {
@@ -310,7 +323,8 @@ export function plainAnalysis(formula: string, foundText: string, options: Analy
     const d = f - k * HUNDREDTH;
     const abs = d < 0 ? -d : d;
     if (abs > maxScaled) maxScaled = abs;
-    calculated[s] = Number(c);
+    // k/100 is the nearest double of the text, as Number(c) reads it
+    calculated[s] = k / 100;
     found[s] = foundNumber;
     texts[s] = text;
     deviation[s] = d / FOUND_SCALE;
