@@ -161,6 +161,8 @@ const GAS_SOLUTIONS = new Set(['BrH', 'HI', 'FH', 'H5NO']);
 interface ReagentMass {
   detail: MassDetail;
   molarMass: Measured;
+  /** The molar mass as a quantity in g/mol. */
+  molarMassQ: Quantity;
 }
 
 /**
@@ -177,7 +179,8 @@ function reagentMass(text: string, options: MassOptions): ReagentMass {
   let read = key === null ? undefined : REAGENTS.get(key);
   if (read === undefined) {
     const detail = formulaMassDetail(text, options);
-    read = { detail, molarMass: reportedMolarMass(detail) };
+    const molarMass = reportedMolarMass(detail);
+    read = { detail, molarMass, molarMassQ: quantity(molarMass, G_PER_MOL) };
     if (key !== null) {
       if (REAGENTS.size >= MAX_REAGENTS_REMEMBERED) REAGENTS.clear();
       REAGENTS.set(key, read);
@@ -233,21 +236,141 @@ const pct = (d: Decimal) => `${d.times(100).toSignificantDigits(4).toFixed()} %`
  * displayInstruction(prepareSolution('CuSO4·5H2O', { concentration: '0.100 M', volume: '250.0 mL' }).mass, 'g').text // '6.242 g'
  */
 export function prepareSolution(reagentText: string, options: SolutionOptions): SolutionResult {
+  return solve(reagentText, options, new SolutionReadings(options));
+}
+
+/**
+ * {@link prepareSolution} for a batch of reagents made up with the same options: what depends on
+ * the options alone (the target, the volume, the assay and the mass weighed as read, their
+ * figures, and for a target in M of the reagent itself, the amount in mol) is read once, on the
+ * first reagent, and every reagent gets the same result, notes and errors as prepareSolution gives
+ * it. The options are read as they are when the plan is made.
+ *
+ * @param options - as for {@link prepareSolution}.
+ * @returns a function of the reagent's formula that gives what prepareSolution gives (and throws what it throws).
+ * @example
+ * const make = solutionPlan({ concentration: '0.100 M', volume: '250.0 mL' })
+ * displayInstruction(make('NaCl').mass, 'g').text // '1.461 g'
+ * displayInstruction(make('CuSO4·5H2O').mass, 'g').text // '6.242 g'
+ */
+export function solutionPlan(options: SolutionOptions): (reagentText: string) => SolutionResult {
+  const fixed: SolutionOptions = { ...options };
+  const readings = new SolutionReadings(fixed);
+  return (reagentText) => solve(reagentText, fixed, readings);
+}
+
+/** A reading of an option and the notes reading it made (copied into each result that uses it). */
+interface Read<T> {
+  value: T;
+  notes: Note[];
+}
+
+const withNotes = <T>(notes: Note[], r: Read<T>): T => {
+  for (const n of r.notes) notes.push({ ...n });
+  return r.value;
+};
+
+/**
+ * What a solution's options say whatever the reagent: each reading is made on first use and kept
+ * once made. A reading that fails is not kept: the next reagent reads it again and meets the same
+ * error, after its own errors, in the order a single call gives them.
+ */
+class SolutionReadings {
+  private targetRead?: Read<{ conc: Quantity; unit: string }>;
+  private volumeRead?: Read<Quantity>;
+  private purityRead?: Read<Quantity>;
+  private weighedRead?: Read<Quantity>;
+  private inputsRead?: InputFigures[];
+  private molarRead?: { tm: Quantity; targetMoles: Instruction; n: Quantity; moles: Instruction; perLitre: Decimal };
+  private fewOutcome?: string;
+
+  constructor(private readonly options: SolutionOptions) {}
+
+  /** The target concentration; a reading that fails is read again with the reagent, whose error names what it holds. */
+  target(notes: Note[], reagent: MassDetail): { conc: Quantity; unit: string } {
+    if (this.targetRead === undefined) {
+      const own: Note[] = [];
+      const value = readTarget(this.options.concentration!, own, reagent);
+      this.targetRead = { value, notes: own };
+    }
+    return withNotes(notes, this.targetRead);
+  }
+
+  volume(notes: Note[]): Quantity {
+    if (this.volumeRead === undefined) {
+      const own: Note[] = [];
+      const value = measureAs(this.options.volume, [VOLUME], 'the volume', own);
+      if (value.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the volume must be positive' });
+      this.volumeRead = { value, notes: own };
+    }
+    return withNotes(notes, this.volumeRead);
+  }
+
+  purity(notes: Note[]): Quantity {
+    if (this.purityRead === undefined) {
+      const own: Note[] = [];
+      const value = readPurity(this.options.purity!, own);
+      this.purityRead = { value, notes: own };
+    }
+    return withNotes(notes, this.purityRead);
+  }
+
+  weighed(notes: Note[]): Quantity {
+    if (this.weighedRead === undefined) {
+      const own: Note[] = [];
+      const value = measureAs(this.options.weighed!, [MASS], 'the mass weighed', own);
+      if (value.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the mass weighed must be positive' });
+      this.weighedRead = { value, notes: own };
+    }
+    return withNotes(notes, this.weighedRead);
+  }
+
+  /** The inputs' figures (the same target, volume and assay for every reagent). */
+  inputs(conc: Quantity | null, volume: Quantity, purity: Quantity | null): InputFigures[] {
+    if (this.inputsRead === undefined) {
+      const inputs: InputFigures[] = [];
+      if (conc && this.options.concentration !== undefined) inputs.push(inputFigures('the target', this.options.concentration, conc));
+      inputs.push(inputFigures('the volume', this.options.volume, volume));
+      if (purity && this.options.purity !== undefined) inputs.push(inputFigures('the assay', this.options.purity, purity));
+      this.inputsRead = inputs;
+    }
+    return this.inputsRead;
+  }
+
+  /** For a target in M of the reagent itself: the amount in mol (of the target and of reagent, the same) and per litre. */
+  molar(conc: Quantity, volume: Quantity, inputs: InputFigures[], perReagent: Quantity): { tm: Quantity; targetMoles: Instruction; n: Quantity; moles: Instruction; perLitre: Decimal } {
+    if (this.molarRead === undefined) {
+      const tm = multiply(conc, volume);
+      const n = divide(tm, perReagent);
+      this.molarRead = { tm, targetMoles: instruction(tm, inputs), n, moles: instruction(n, inputs), perLitre: tm.value.div(perReagent.value).div(volume.value).div(ONE_MOLAR.value) };
+    }
+    return this.molarRead;
+  }
+
+  /** The outcome the note on a target with few figures names. */
+  outcome(): string {
+    return (this.fewOutcome ??= `the solution made is ${this.options.concentration!.trim()}`);
+  }
+}
+
+/** One formula unit of the reagent per formula unit: the target is the reagent itself. */
+const ONE_PER_REAGENT = quantity(exact(1), null);
+
+function solve(reagentText: string, options: SolutionOptions, o: SolutionReadings): SolutionResult {
   const notes: Note[] = [];
   const read = reagentMass(reagentText, options);
   const reagent = read.detail;
   refuseConcentrated(reagent);
   const handling = reagentHandlingNote(reagent.formula);
   if (options.concentration === undefined && options.weighed === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the target concentration, or the mass weighed (or both)' });
-  const target = options.concentration !== undefined ? readTarget(options.concentration, notes, reagent) : null;
+  const target = options.concentration !== undefined ? o.target(notes, reagent) : null;
   const conc = target?.conc ?? null;
-  const volume = measureAs(options.volume, [VOLUME], 'the volume', notes);
-  if (volume.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the volume must be positive' });
+  const volume = o.volume(notes);
 
-  const reagentM = quantity(read.molarMass, G_PER_MOL);
+  const reagentM = read.molarMassQ;
   let asMass: MassDetail | null = null;
   let targetM = reagentM;
-  let perReagent = quantity(exact(1), null);
+  let perReagent = ONE_PER_REAGENT;
   let targetFormula = reagent.formula;
   let targetName = reagent.input;
   if (options.as !== undefined) {
@@ -255,22 +378,23 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
     const part = reagentMass(options.as, options);
     const t = part.detail;
     asMass = t;
-    targetM = quantity(part.molarMass, G_PER_MOL);
+    targetM = part.molarMassQ;
     perReagent = quantity(exact(toDecimal(share.count)), null);
     targetFormula = t.formula;
     targetName = options.as.trim();
     notes.push(...share.notes);
   }
-  // mass fraction of the target species in the pure reagent
-  const share = perReagent.value.times(targetM.value).div(reagentM.value);
+  // mass fraction of the target species in the pure reagent (wanted only with an assay)
+  const shareOf = () => perReagent.value.times(targetM.value).div(reagentM.value);
 
   let purity: Quantity | null = null;
   let basis: PurityBasis | null = null;
   if (options.purityBasis !== undefined && options.purity === undefined) throw fail({ code: 'BAD_OPTION', message: 'a purity basis needs the purity (assay) it describes' });
   if (options.purityBasis === 'part' && options.as === undefined) throw fail({ code: 'BAD_OPTION', message: "an assay of the part needs the part: give `as` (e.g. `as: C17H19NO3` for a potency 'as base')", options: ['as'] });
   if (options.purity !== undefined) {
-    purity = readPurity(options.purity, notes);
+    purity = o.purity(notes);
     basis = options.purityBasis ?? 'reagent';
+    const share = shareOf();
     if (options.as !== undefined && options.purityBasis === undefined && purity.value.lte(share.times(POTENCY_SLACK))) {
       // both readings possible: refuse, with both
       const asReagent = prepareSolution(reagentText, { ...options, purityBasis: 'reagent', weighed: undefined });
@@ -292,10 +416,7 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
     if (basis === 'part') notes.push({ code: 'PURITY_OF_PART', message: `the assay ${options.purity.trim()} is read as the content of ${targetName} per mass of ${reagent.input} as weighed (a potency 'as ${targetName}'); the formula's own ${targetName} share is not applied again` });
   }
 
-  const inputs: InputFigures[] = [];
-  if (conc && options.concentration !== undefined) inputs.push(inputFigures('the target', options.concentration, conc));
-  inputs.push(inputFigures('the volume', options.volume, volume));
-  if (purity && options.purity !== undefined) inputs.push(inputFigures('the assay', options.purity, purity));
+  const inputs = o.inputs(conc, volume, purity);
 
   let targetMoles: Instruction | null = null;
   let moles: Instruction | null = null;
@@ -303,22 +424,38 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   let mass: Instruction | null = null;
   if (conc) {
     // amount of the target species, then of reagent
-    const tm = sameDims(conc.dims, MOLARITY) ? multiply(conc, volume) : divide(multiply(conc, volume), targetM);
-    targetMoles = instruction(tm, inputs);
-    if (basis === 'part') {
-      const partMass = multiply(tm, targetM);
-      pureMass = instruction(partMass, inputs);
-      mass = instruction(divide(partMass, purity!), inputs);
-    } else {
-      const n = divide(tm, perReagent);
-      moles = instruction(n, inputs);
-      const pm = multiply(n, reagentM);
+    let tm: Quantity;
+    let perLitre: (() => Decimal) | Decimal;
+    if (options.as === undefined && sameDims(conc.dims, MOLARITY)) {
+      // the reagent itself in M: the amount is the options' alone
+      const m = o.molar(conc, volume, inputs, perReagent);
+      tm = m.tm;
+      targetMoles = m.targetMoles;
+      moles = m.moles;
+      perLitre = m.perLitre;
+      const pm = multiply(m.n, reagentM);
       pureMass = instruction(pm, inputs);
       mass = instruction(purity ? divide(pm, purity) : pm, inputs);
+    } else {
+      const t = sameDims(conc.dims, MOLARITY) ? multiply(conc, volume) : divide(multiply(conc, volume), targetM);
+      tm = t;
+      targetMoles = instruction(tm, inputs);
+      if (basis === 'part') {
+        const partMass = multiply(tm, targetM);
+        pureMass = instruction(partMass, inputs);
+        mass = instruction(divide(partMass, purity!), inputs);
+      } else {
+        const n = divide(tm, perReagent);
+        moles = instruction(n, inputs);
+        const pm = multiply(n, reagentM);
+        pureMass = instruction(pm, inputs);
+        mass = instruction(purity ? divide(pm, purity) : pm, inputs);
+      }
+      perLitre = () => t.value.div(perReagent.value).div(volume.value).div(ONE_MOLAR.value);
     }
-    const insoluble = solubilityWarning(reagent, () => tm.value.div(perReagent.value).div(volume.value).div(ONE_MOLAR.value), options);
+    const insoluble = solubilityWarning(reagent, perLitre, options);
     if (insoluble) notes.push(insoluble);
-    const few = fewFiguresNote(mass, 'the mass to weigh', `the solution made is ${options.concentration!.trim()}`);
+    const few = fewFiguresNote(mass, 'the mass to weigh', o.outcome());
     if (few) notes.push(few);
     const shown = displayInstruction(mass, massUnitFor(mass.quantity)).text;
     const small = smallMassWarning(mass.quantity, `the mass to weigh, ${shown},`);
@@ -328,8 +465,7 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
   let weighed: Quantity | null = null;
   let made: Quantity | null = null;
   if (options.weighed !== undefined) {
-    weighed = measureAs(options.weighed, [MASS], 'the mass weighed', notes);
-    if (weighed.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the mass weighed must be positive' });
+    weighed = o.weighed(notes);
     let nTarget: Quantity;
     if (basis === 'part') nTarget = divide(multiply(weighed, purity!), targetM);
     else {
@@ -345,7 +481,12 @@ export function prepareSolution(reagentText: string, options: SolutionOptions): 
     const elementReading = ofTheElementNote(reagentText, reagent, target, options, mass);
     if (elementReading) notes.push(elementReading);
   }
-  notes.unshift(...formulaNotes(reagent, options.as !== undefined), ...(asMass ? formulaNotes(asMass, true) : []));
+  const readingNotes = formulaNotes(reagent, options.as !== undefined);
+  if (asMass) readingNotes.push(...formulaNotes(asMass, true));
+  if (readingNotes.length) notes.unshift(...readingNotes);
   if (handling) notes.push(handling);
-  return { reagent, target: { formula: targetFormula, written: targetName.trim().replace(/\s+/g, ' '), perReagent: toDecimal(perReagent.value).toFixed(), molarMass: targetM }, concentration: conc, volume, purity, purityBasis: basis, targetMoles, moles, pureMass, mass, weighed, made, unit, notes };
+  return { reagent, target: { formula: targetFormula, written: writtenName(targetName), perReagent: perReagent === ONE_PER_REAGENT ? '1' : toDecimal(perReagent.value).toFixed(), molarMass: targetM }, concentration: conc, volume, purity, purityBasis: basis, targetMoles, moles, pureMass, mass, weighed, made, unit, notes };
 }
+
+/** A name as the result writes it: trimmed, each run of spaces one space. */
+const writtenName = (name: string) => (/^\S+$/.test(name) ? name : name.trim().replace(/\s+/g, ' '));

@@ -6,7 +6,7 @@ import { fail } from '../../errors/pondus-error.js';
 import { readKeyValuePair } from '../../key-values/read-key-values.js';
 import { BENCH_CAUTION } from '../../preparation/caution.js';
 import { displayInstruction, displayResult, massUnitFor, volumeUnitFor, type Instruction } from '../../sigfig/instruction.js';
-import { prepareSolution, type PurityBasis, type SolutionResult } from '../../preparation/solution.js';
+import { solutionPlan, type PurityBasis, type SolutionResult } from '../../preparation/solution.js';
 import { concentratedJson, solutionJson, substituteJson } from '../../preparation/prepare-json.js';
 import { substituteForm, type SubstituteResult } from '../../preparation/substitute.js';
 import { concentratedReagent, type ConcentratedResult } from '../../preparation/concentrated.js';
@@ -83,13 +83,15 @@ function oneSolutionPresenter(o: PrepareCliOptions): Presenter<Prepared> {
   const res = (q: Parameters<typeof displayResult>[0], unit?: string) => displayResult(q, unit ?? q.unit?.symbol, rounding).text;
   const concentrated = o.fraction !== undefined;
   const takeText = (r: ConcentratedResult) => (r.take ? w(r.take, volumeUnitFor(r.take.quantity, r.volume!.unit)) : '');
+  // the options are the batch's: what they say alone is read once, on the first reagent
+  const solution = solutionPlan({ ...options, concentration: o.concentration, volume: o.volume!, purity: o.purity, purityBasis: o.purityBasis, as: o.as, weighed: o.weighed });
   const compute = (input: string): Prepared => {
     if (concentrated) return { kind: 'concentrated', r: concentratedReagent(input, { ...options, fraction: o.fraction!, density: o.density, concentration: o.concentration, volume: o.volume }) };
     if (o.replace !== undefined) {
       const pair = readKeyValuePair(o.replace)!;
       return { kind: 'substitute', r: substituteForm(input, pair.key, pair.valueText, { ...options, purity: o.purity }) };
     }
-    return { kind: 'solution', r: prepareSolution(input, { ...options, concentration: o.concentration, volume: o.volume!, purity: o.purity, purityBasis: o.purityBasis, as: o.as, weighed: o.weighed }) };
+    return { kind: 'solution', r: solution(input) };
   };
   return {
     compute,
