@@ -4,7 +4,9 @@
  * instructions keep working precision, results their figures (sigfig/instruction.ts).
  */
 import { notesJson, type NoteJson } from '../errors/note-json.js';
-import { displayResult, instructionJson, massUnitFor, resultJson, volumeUnitFor, type AmountJson } from '../sigfig/instruction.js';
+import { jsonNumber, numberText } from '../exact/json-number.js';
+import { jsonString, notesLine } from '../mass/mass-json.js';
+import { displayResult, instructionJson, massUnitFor, resultJson, volumeUnitFor, type AmountJson, type Instruction } from '../sigfig/instruction.js';
 import type { RoundingMode } from '../sigfig/round.js';
 import { BENCH_CAUTION, CONCENTRATED_CAUTION } from './caution.js';
 import type { ConcentratedOptions, ConcentratedResult } from './concentrated.js';
@@ -61,6 +63,50 @@ export function solutionJson(r: SolutionResult, given: Partial<SolutionOptions>,
     caution: BENCH_CAUTION,
   };
 }
+
+/**
+ * The same text as JSON.stringify(solutionJson(r, given, rounding)), written straight to one JSON
+ * line: the batch hot path, without the row object. With `line`, the row starts with the input's
+ * line number, as the CLI's JSON writer gives every row (JSON.stringify({ line, ...solutionJson(…) })).
+ *
+ * @param r - a result of `prepareSolution`.
+ * @param given - the options it was computed with: their concentration, volume and weighed mass are echoed as written.
+ * @param rounding - how reported figures are rounded ('half-even' unless given).
+ * @param line - the input's line number to put first in the row; left out by default.
+ * @returns one line of JSON text, without a newline.
+ * @example
+ * const given = { concentration: '0.100 M', volume: '250.0 mL' }
+ * solutionJsonLine(prepareSolution('NaCl', given), given, 'half-even', 3) // '{"line":3,"input":"NaCl","formula":"ClNa","molarMass":58.43976928,…'
+ */
+export function solutionJsonLine(r: SolutionResult, given: Partial<SolutionOptions>, rounding: RoundingMode = 'half-even', line?: number): string {
+  const echo = echoesOf(given);
+  const d = r.reagent;
+  return `${line === undefined ? '{"input":' : `{"line":${line},"input":`}${jsonString(d.input)},"formula":${jsonString(d.formula)},"molarMass":${jsonNumber(d.molarMassNumber(), d.molarMassText())},"target":${jsonString(r.target.written)},"targetHill":${jsonString(r.target.formula)},"concentration":${echo.concentration},"volume":${echo.volume},"purity":${r.purity ? jsonString(displayResult(r.purity, '%', rounding).text) : 'null'},"purityBasis":${r.purityBasis === null ? 'null' : jsonString(r.purityBasis)},"moles":${r.moles ? instructionText(r.moles, 'mol', rounding) : 'null'},"mass":${r.mass ? instructionText(r.mass, massUnitFor(r.mass.quantity), rounding) : 'null'},"weighed":${echo.weighed},"made":${r.made ? JSON.stringify(resultJson(r.made, r.unit, rounding)) : 'null'},"notes":${notesLine(r.notes)},"caution":${CAUTION_TEXT}}`;
+}
+
+const CAUTION_TEXT = JSON.stringify(BENCH_CAUTION);
+
+/** The amounts as given, as the row echoes them (a batch gives the same options to every row: kept by the options object). */
+const ECHOES = new WeakMap<object, { of: Partial<SolutionOptions>; concentration: string; volume: string; weighed: string }>();
+function echoesOf(given: Partial<SolutionOptions>): { concentration: string; volume: string; weighed: string } {
+  const kept = ECHOES.get(given);
+  if (kept !== undefined && kept.of.concentration === given.concentration && kept.of.volume === given.volume && kept.of.weighed === given.weighed) return kept;
+  const text = (s: string | undefined) => (s === undefined ? 'null' : jsonString(s.trim()));
+  const now = { of: { concentration: given.concentration, volume: given.volume, weighed: given.weighed }, concentration: text(given.concentration), volume: text(given.volume), weighed: text(given.weighed) };
+  ECHOES.set(given, now);
+  return now;
+}
+
+/** The JSON text of an instruction (JSON.stringify(instructionJson(…))); a batch's amount in mol is one instruction for every row, kept by it. */
+function instructionText(ins: Instruction, unit: string, rounding: RoundingMode): string {
+  const kept = AMOUNT_TEXTS.get(ins);
+  if (kept !== undefined && kept.unit === unit && kept.rounding === rounding && kept.quantity === ins.quantity && kept.value === ins.quantity.value && kept.textbookSigFigs === ins.textbookSigFigs) return kept.text;
+  const a = instructionJson(ins, unit, rounding);
+  const text = `{"kind":"instruction","value":${numberText(a.value)},"unit":${jsonString(a.unit)},"display":${jsonString(a.display)},"sigFigs":${a.sigFigs === null ? 'null' : numberText(a.sigFigs)},"textbookSigFigs":${a.textbookSigFigs == null ? 'null' : numberText(a.textbookSigFigs)},"figure":${jsonString(a.figure)},"displayUnit":${jsonString(a.displayUnit)}}`;
+  AMOUNT_TEXTS.set(ins, { unit, rounding, quantity: ins.quantity, value: ins.quantity.value, textbookSigFigs: ins.textbookSigFigs, text });
+  return text;
+}
+const AMOUNT_TEXTS = new WeakMap<Instruction, { unit: string; rounding: RoundingMode; quantity: Instruction['quantity']; value: Instruction['quantity']['value']; textbookSigFigs: number | null; text: string }>();
 
 /** The JSON row of a form weighed in place of another. */
 export interface SubstituteJson {

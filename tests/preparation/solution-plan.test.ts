@@ -4,6 +4,9 @@
 import { describe, expect, it } from 'vitest';
 import { PondusError } from '../../src/errors/pondus-error.js';
 import { prepareSolution, solutionPlan, type SolutionOptions } from '../../src/preparation/solution.js';
+import { solutionJson, solutionJsonLine } from '../../src/preparation/prepare-json.js';
+import { withNaming } from '../../src/errors/message.js';
+import { FLAG_NAMING } from '../../src/errors/render.js';
 
 const REAGENTS = ['NaCl', 'CuSO4·5H2O', 'CuSO4.5H2O', 'NaOH', 'HF', 'Pb(NO3)2', 'K2Cr2O7', 'HCl', 'CaCl2·2H2O', 'NaCl(s)', 'KHP', 'Xx', 'bad((', '', 'C12H22O11', 'Ca(OH)2', 'Na+', 'Tc'];
 
@@ -62,5 +65,38 @@ describe('solutionPlan: the options read once, each reagent as prepareSolution g
     const plan = solutionPlan(options);
     options.volume = '1.000 L';
     expect(plan('NaCl').mass!.quantity.value.toString()).toBe(prepareSolution('NaCl', { concentration: '0.100 M', volume: '250.0 mL' }).mass!.quantity.value.toString());
+  });
+});
+
+describe('solutionJsonLine: the text of JSON.stringify(solutionJson(…)), written directly', () => {
+  it('for every reagent and option set read, in both roundings and both namings, with and without a line number', () => {
+    let rows = 0;
+    for (const options of OPTION_SETS) {
+      const plan = solutionPlan(options);
+      for (const text of REAGENTS) {
+        let r;
+        try {
+          r = plan(text);
+        } catch {
+          continue;
+        }
+        for (const rounding of ['half-even', 'half-up'] as const) {
+          // the batch hands the same options object to every row: the kept echoes must follow it
+          const given = { ...options, concentration: options.concentration && ` ${options.concentration} ` };
+          expect(solutionJsonLine(r, given, rounding)).toBe(JSON.stringify(solutionJson(r, given, rounding)));
+          expect(withNaming(FLAG_NAMING, () => solutionJsonLine(r, options, rounding, 7))).toBe(JSON.stringify({ line: 7, ...withNaming(FLAG_NAMING, () => solutionJson(r, options, rounding)) }));
+          rows++;
+        }
+      }
+    }
+    expect(rows).toBeGreaterThan(100);
+  });
+
+  it('echoes the options as they are now, when the same options object is changed between rows', () => {
+    const given: Partial<SolutionOptions> = { concentration: '0.100 M', volume: '250.0 mL' };
+    const r = prepareSolution('NaCl', { concentration: '0.100 M', volume: '250.0 mL' });
+    expect(solutionJsonLine(r, given)).toContain('"volume":"250.0 mL"');
+    given.volume = '1.000 L';
+    expect(solutionJsonLine(r, given)).toBe(JSON.stringify(solutionJson(r, given)));
   });
 });

@@ -7,7 +7,7 @@ import { readKeyValuePair } from '../../key-values/read-key-values.js';
 import { BENCH_CAUTION } from '../../preparation/caution.js';
 import { displayInstruction, displayResult, massUnitFor, volumeUnitFor, type Instruction } from '../../sigfig/instruction.js';
 import { solutionPlan, type PurityBasis, type SolutionResult } from '../../preparation/solution.js';
-import { concentratedJson, solutionJson, substituteJson } from '../../preparation/prepare-json.js';
+import { concentratedJson, solutionJson, solutionJsonLine, substituteJson } from '../../preparation/prepare-json.js';
 import { substituteForm, type SubstituteResult } from '../../preparation/substitute.js';
 import { concentratedReagent, type ConcentratedResult } from '../../preparation/concentrated.js';
 import { CONCENTRATED_CAUTION } from '../../preparation/caution.js';
@@ -95,6 +95,8 @@ function oneSolutionPresenter(o: PrepareCliOptions): Presenter<Prepared> {
   };
   return {
     compute,
+    // a solution's row straight from its result, without the row object (the same text)
+    ...(concentrated || o.replace !== undefined ? {} : { jsonRow: (input: string, line: number) => solutionJsonLine(solution(input), o, rounding, line) }),
     json: (p) => (p.kind === 'solution' ? solutionJson(p.r, o, rounding) : p.kind === 'concentrated' ? concentratedJson(p.r, { ...o, fraction: o.fraction! }, rounding) : substituteJson(p.r, readKeyValuePair(o.replace!)!.value, rounding)),
     columns: concentrated ? ['input', 'formula', 'fraction', 'density_g_per_mL', 'molarity_M', 'molarity', 'take_L', 'take'] : ['input', 'formula', 'mass', 'display', 'made'],
     cells: (p) =>
