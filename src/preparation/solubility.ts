@@ -51,6 +51,12 @@ interface Entry {
   formula: string;
   molarMass: Decimal;
   gPer100g: Decimal;
+  /** What a kilogram of water dissolves, g. */
+  limit: Decimal;
+  /** The mass fraction of a saturated solution, S/(100 + S). */
+  w: Decimal;
+  /** What a litre of saturated solution holds at the least (w × 1000 g), g. */
+  atLeast: Decimal;
 }
 
 /** A key of atom counts, the same for every way of writing one compound. */
@@ -66,7 +72,10 @@ function candidates(reagent: MassDetail): Entry[] {
     byElements = new Map();
     for (const [formula, name, s] of SOLUBILITY_20C) {
       const d = formulaMassDetail(formula);
-      const e: Entry = { key: keyOf(atomsPastWater(d)), name, formula, molarMass: new Decimal(d.molarMass.toString()), gPer100g: new Decimal(s) };
+      const gPer100g = new Decimal(s);
+      // a saturated solution is w = S/(100 + S) by mass; a litre of it weighs at least 1000 g (salt solutions are denser than water)
+      const w = gPer100g.div(gPer100g.plus(100));
+      const e: Entry = { key: keyOf(atomsPastWater(d)), name, formula, molarMass: new Decimal(d.molarMass.toString()), gPer100g, limit: gPer100g.times(10), w, atLeast: w.times(1000) };
       const k = elementsOf(d.atoms.keys());
       byElements.set(k, [...(byElements.get(k) ?? []), e]);
     }
@@ -76,6 +85,15 @@ function candidates(reagent: MassDetail): Entry[] {
 
 /** The table's entry for the reagent (a hydrate matching its anhydrous salt), or undefined. */
 function entryFor(reagent: MassDetail, options: MassOptions): Entry | undefined {
+  // a batch reads each reagent once and hands its reading to every row that names it
+  const known = ENTRY_OF_READING.get(reagent);
+  if (known !== undefined) return known ?? undefined;
+  const e = lookUp(reagent, options);
+  ENTRY_OF_READING.set(reagent, e ?? null);
+  return e;
+}
+
+function lookUp(reagent: MassDetail, options: MassOptions): Entry | undefined {
   const near = candidates(reagent);
   if (near.length === 0) return undefined;
   // a batch names the same few salts again and again: their entries are remembered (bounded)
@@ -90,6 +108,8 @@ function entryFor(reagent: MassDetail, options: MassOptions): Entry | undefined 
 }
 /** The entry found for each reagent text lately (null for none); the table does not depend on the mass options. */
 const ENTRY_OF = new Map<string, Entry | null>();
+/** The entry found for each reading of a reagent (null for none), kept while the reading is. */
+const ENTRY_OF_READING = new WeakMap<MassDetail, Entry | null>();
 
 /** ' (as anhydrous CuSO4)' for a hydrate, '' for the anhydrous salt itself. */
 const hydrateText = (reagent: MassDetail, e: Entry) => (reagent.formula !== formulaMassDetail(e.formula).formula ? ` (as anhydrous ${e.formula})` : '');
@@ -117,10 +137,7 @@ export function solubilityWarning(reagent: MassDetail, molesPerLitre: Decimal | 
   if (!e) return null;
   if (typeof molesPerLitre === 'function') molesPerLitre = molesPerLitre();
   const gPerL = molesPerLitre.times(e.molarMass);
-  const limit = e.gPer100g.times(10); // g per kg of water
-  // a saturated solution is w = S/(100 + S) by mass; a litre of it weighs at least 1000 g (salt solutions are denser than water)
-  const w = e.gPer100g.div(e.gPer100g.plus(100));
-  const atLeast = w.times(1000);
+  const { limit, w, atLeast } = e;
   if (gPerL.lte(limit)) {
     if (gPerL.lte(atLeast)) return null;
     return {
@@ -145,5 +162,5 @@ export function solubilityWarning(reagent: MassDetail, molesPerLitre: Decimal | 
  */
 export function saturatedFraction(reagent: MassDetail, options: MassOptions = {}): Decimal | null {
   const e = entryFor(reagent, options);
-  return e ? e.gPer100g.div(e.gPer100g.plus(100)) : null;
+  return e ? e.w : null;
 }
