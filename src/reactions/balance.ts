@@ -14,7 +14,7 @@ import { fail, PondusError } from '../errors/pondus-error.js';
 import { amountText } from '../formula/amount.js';
 import type { ParseOptions } from '../formula-parser/parse.js';
 import { parseEquation, type Equation, type Species } from './equation.js';
-import { nullSpace, Rational, reducedRowEchelon, smallestIntegers } from './rational.js';
+import { echelonBasis, nullSpace, Rational, reducedRowEchelon, smallestIntegers, smallestWholeBalance, wholeEchelon } from './rational.js';
 
 /** Coefficients fixed by the user: `'written'` (those written in the equation) or species → coefficient text. */
 export type FixedCoefficients = 'written' | Readonly<Record<string, string | number>>;
@@ -82,6 +82,66 @@ function matrixOf(eq: Equation): Rational[][] {
     rows.push(all.map((s) => Rational.of(BigInt(s.side === 'reactant' ? s.charge : -s.charge))));
   }
   return rows;
+}
+
+/**
+ * The element-and-charge matrix of {@link matrixOf} in plain whole numbers (rows in the same
+ * order: the elements as first met, then the charge), or null when a count is not a whole number
+ * below 2^31 or a charge is not that small. `sides` holds every element of the species, in order.
+ */
+function wholeMatrixOf(all: readonly Species[], sides: ReadonlyMap<string, number>): number[][] | null {
+  const n = all.length;
+  const row = new Map<string, number>();
+  const rows: number[][] = [];
+  for (const k of sides.keys()) {
+    row.set(k, rows.length);
+    rows.push(new Array<number>(n).fill(0));
+  }
+  let charged = false;
+  for (let j = 0; j < n; j++) {
+    const s = all[j];
+    const reactant = s.side === 'reactant';
+    for (const [k, c] of s.atoms) {
+      if (typeof c !== 'number' || !Number.isInteger(c) || c >= SMALL || c <= -SMALL) return null;
+      rows[row.get(k)!][j] = reactant ? c : 0 - c;
+    }
+    if (s.charge !== 0) charged = true;
+  }
+  if (charged) {
+    const q = new Array<number>(n);
+    for (let j = 0; j < n; j++) {
+      const z = all[j].charge;
+      if (!Number.isInteger(z) || z >= SMALL || z <= -SMALL) return null;
+      q[j] = all[j].side === 'reactant' ? z : 0 - z;
+    }
+    rows.push(q);
+  }
+  return rows;
+}
+
+/** Whole entries and coefficients below this go the route of plain numbers. */
+const SMALL = 2 ** 31;
+const EXACT = 2 ** 53;
+
+/** {@link conserves} on the whole-number matrix, or null when a coefficient is not a small whole number or a sum would leave the exact integers. */
+function wholeConserves(rows: readonly number[][], c: readonly Rational[]): boolean | null {
+  const w = new Array<number>(c.length);
+  for (let j = 0; j < c.length; j++) {
+    const x = c[j];
+    if (x.den !== 1n || x.num >= 2147483648n || x.num <= -2147483648n) return null;
+    w[j] = Number(x.num);
+  }
+  let ok = true;
+  for (const row of rows) {
+    let sum = 0;
+    for (let j = 0; j < w.length; j++) {
+      const p = row[j] * w[j];
+      sum += p;
+      if (!(Math.abs(p) < EXACT && Math.abs(sum) < EXACT)) return null;
+    }
+    if (sum !== 0) ok = false;
+  }
+  return ok;
 }
 
 function writtenOf(s: Species, input: string): Rational {
@@ -248,32 +308,43 @@ function balanceReduced(eq: Equation, options: BalanceOptions): Balanced {
   const reactantTexts = eq.reactants.map((s) => s.text);
   const productTexts = eq.products.map((s) => s.text);
   const notes: Note[] = [...eq.notes];
-  // an element on one side only can never balance: say which
+  // an element on one side only can never balance: say which (the sides each element is on: 1 reactants, 2 products)
+  const sides = new Map<string, number>();
+  for (const s of all) {
+    const side = s.side === 'reactant' ? 1 : 2;
+    for (const k of s.atoms.keys()) sides.set(k, (sides.get(k) ?? 0) | side);
+  }
   for (const s of all) {
     for (const k of s.atoms.keys()) {
-      const other = all.filter((x) => x.side !== s.side && x.atoms.has(k));
-      if (other.length === 0) {
+      if (sides.get(k) !== 3) {
         throw fail({ code: 'NO_BALANCE', message: `no balance: ${k} appears only among the ${s.side === 'reactant' ? 'reactants' : 'products'}` }, input);
       }
     }
   }
-  const rows = matrixOf(eq);
-  const basis = nullSpace(rows, all.length);
-  if (basis.length === 0) {
+  // whole counts (nearly every equation) go the route of plain numbers; the fractions' matrix is made only when needed
+  const whole = wholeMatrixOf(all, sides);
+  const echelon = whole && wholeEchelon(whole.map((row) => row.slice()), all.length);
+  let rows: Rational[][] | null = null;
+  // with the whole-number route, the basis as fractions is made only when it is shown or solved for
+  let fractions: Rational[][] | null = echelon ? null : nullSpace((rows = matrixOf(eq)), all.length);
+  const basisNow = (): Rational[][] => (fractions ??= echelonBasis(echelon!, all.length));
+  /** How many independent balances: the null space's dimension. */
+  const dimension = fractions ? fractions.length : all.length - echelon!.pivots.length;
+  if (dimension === 0) {
     throw fail({ code: 'NO_BALANCE', message: 'no set of coefficients balances every element and the charge' }, input);
   }
-  const unique = basis.length === 1;
-  const shownBasis = unique ? [] : basisText(basis, reactantTexts, productTexts);
+  const unique = dimension === 1;
+  const shownBasis = unique ? [] : basisText(basisNow(), reactantTexts, productTexts);
   const written = all.map((s) => writtenOf(s, input));
   const anyWritten = all.some((s) => s.written !== null);
-  const asWritten = conserves(rows, written);
+  const asWritten = (whole && wholeConserves(whole, written)) ?? conserves(rows ?? matrixOf(eq), written);
   const basisList = shownBasis.map((s, i) => `(${i + 1}) ${s}`).join('; ');
   let coefficients: Rational[];
   let settledBy: BalanceResult['settledBy'];
 
   if (options.fix !== undefined) {
     const fixed = fixedMap(options.fix, all, input);
-    const solved = solveFixed(basis, fixed);
+    const solved = solveFixed(basisNow(), fixed);
     const names = [...fixed.keys()].map((i) => `${texts[i]}=${fixed.get(i)!.toString()}`).join(', ');
     if ('inconsistent' in solved) {
       throw fail({ code: 'NO_BALANCE', message: `no balance has the coefficients fixed (${names})${unique ? '' : `; the balances are combinations of ${basisList}`}` }, input);
@@ -289,22 +360,24 @@ function balanceReduced(eq: Equation, options: BalanceOptions): Balanced {
     settledBy = 'as written';
     if (anyWritten || !unique) notes.push({ code: 'BALANCED_AS_WRITTEN', message: 'the coefficients as written (1 where none is written) conserve every element and the charge: they are used' });
   } else if (unique) {
-    let ints = smallestIntegers(basis[0]);
-    if (ints.every((c) => c <= 0n)) ints = ints.map((c) => -c);
-    const zero = ints.findIndex((c) => c === 0n);
+    // plain numbers when the whole-number route took it and they stay exact, BigInt otherwise
+    const small = echelon && smallestWholeBalance(echelon, all.length);
+    let ints: (number | bigint)[] = small ?? smallestIntegers(basisNow()[0]);
+    if (ints.every((c) => c <= 0)) ints = ints.map((c) => (typeof c === 'number' ? 0 - c : -c));
+    const zero = ints.findIndex((c) => c === 0 || c === 0n);
     if (zero >= 0) throw fail({ code: 'NO_BALANCE', message: `no balance in which every species takes part: ${texts[zero]} would get a coefficient of 0` }, input);
-    const negative = ints.findIndex((c) => c < 0n);
+    const negative = ints.findIndex((c) => c < 0);
     if (negative >= 0) {
       const s = all[negative];
       throw fail({ code: 'NO_BALANCE', message: `no balance as written: ${s.text} would have to be on the other side (${s.side === 'reactant' ? 'a product' : 'a reactant'})` }, input);
     }
-    coefficients = ints.map((c) => Rational.of(c));
+    coefficients = ints.map((c) => (typeof c === 'number' ? Rational.whole(c) : Rational.of(c)));
     settledBy = 'computed';
     if (anyWritten) notes.push({ code: 'COEFFICIENTS_REPLACED', message: 'the coefficients written in the equation do not balance it; the balanced ones are computed' });
   } else {
     throw fail({
       code: 'NOT_UNIQUE',
-      message: `more than one independent balance (${basis.length}); any combination of these balances it: ${basisList}. ${anyWritten ? 'The coefficients as written do not balance it. ' : ''}Write the coefficients in the equation, or fix those of chosen species`,
+      message: `more than one independent balance (${dimension}); any combination of these balances it: ${basisList}. ${anyWritten ? 'The coefficients as written do not balance it. ' : ''}Write the coefficients in the equation, or fix those of chosen species`,
     }, input);
   }
   const bad = coefficients.findIndex((c) => c.sign() <= 0);
@@ -312,7 +385,7 @@ function balanceReduced(eq: Equation, options: BalanceOptions): Balanced {
     throw fail({ code: 'NO_BALANCE', message: `no balance with the coefficients fixed in which every species takes part: ${texts[bad]} would get a coefficient of ${coefficients[bad].toString()}` }, input);
   }
   if (!unique) {
-    notes.push({ code: 'NOT_UNIQUE_FROM_ATOMS', message: `not unique from atoms alone: ${basis.length} independent balances (${basisList}); the coefficients ${settledBy === 'fixed' ? 'fixed' : 'as written'} choose one` });
+    notes.push({ code: 'NOT_UNIQUE_FROM_ATOMS', message: `not unique from atoms alone: ${dimension} independent balances (${basisList}); the coefficients ${settledBy === 'fixed' ? 'fixed' : 'as written'} choose one` });
   }
   const exactTexts = coefficients.map(coefficientText);
   const result: BalanceResult = {
@@ -325,7 +398,7 @@ function balanceReduced(eq: Equation, options: BalanceOptions): Balanced {
     exactCoefficients: exactTexts,
     balancedAsWritten: asWritten,
     unique,
-    independentBalances: basis.length,
+    independentBalances: dimension,
     basis: shownBasis,
     settledBy,
     catalysts: eq.catalysts.map((c) => c.text),

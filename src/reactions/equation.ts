@@ -6,6 +6,7 @@
 import type { Note } from '../errors/issue.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
 import { ATOMS } from '../elements/atom-data.js';
+import type { Amount } from '../formula/amount.js';
 import { countsMap, flattenFormula, type AtomCounts } from '../formula/flatten.js';
 import { formatFormula, hillFormula } from '../formula/hill.js';
 import { plainVectorFor } from '../formula/plain-vector.js';
@@ -50,6 +51,14 @@ const STATE_AFTER = /^\((?:s|l|g|aq)\)(?:$|\s|\+)/;
 const NO_NOTES: readonly Note[] = Object.freeze([]);
 
 /**
+ * The plain species read so far (a batch names O2, H2O and CO2 again and again), by their text:
+ * what the plain reader gave, which depends on the text alone; each species gets its own map.
+ * Bounded: emptied when full.
+ */
+const plainSpecies = new Map<string, { formula: string; atoms: [string, Amount][]; charge: number }>();
+const PLAIN_SPECIES_KEPT = 4096;
+
+/**
  * The atoms of one species' formula: a plain formula (no note, nothing to settle) straight from
  * its text, the rest through the formula tree.
  *
@@ -57,14 +66,28 @@ const NO_NOTES: readonly Note[] = Object.freeze([]);
  * speciesFormula('Ca3(PO4)2', {}).formula // 'Ca3O8P2'
  */
 export function speciesFormula(body: string, options: ParseOptions): { formula: string; atoms: AtomCounts; charge: number; notes: readonly Note[] } {
+  const plainOptions = options.abbreviations !== true && (options.maxLength === undefined || body.length <= options.maxLength);
+  const known = plainOptions ? plainSpecies.get(body) : undefined;
+  if (known) return { formula: known.formula, atoms: new Map(known.atoms), charge: known.charge, notes: NO_NOTES };
   const plain = plainVectorFor(body, options);
   if (plain) {
     const { ids, counts } = plain.vector;
-    return { formula: formatFormula(ids.map((id) => ATOMS.data[id].label), counts, plain.charge), atoms: countsMap(plain.vector), charge: plain.charge, notes: NO_NOTES };
+    const read = { formula: formatFormula(ids.map((id) => ATOMS.data[id].label), counts, plain.charge), atoms: countsMap(plain.vector), charge: plain.charge, notes: NO_NOTES };
+    if (plainOptions) {
+      if (plainSpecies.size >= PLAIN_SPECIES_KEPT) plainSpecies.clear();
+      plainSpecies.set(body, { formula: read.formula, atoms: [...read.atoms], charge: read.charge });
+    }
+    return read;
   }
   const tree = parseFormula(body, options);
   const atoms = flattenFormula(tree);
   return { formula: hillFormula(atoms, tree.charge), atoms, charge: tree.charge, notes: tree.notes };
+}
+
+/** Whether a UTF-16 unit is white space as `\s` in a pattern reads it (what {@link splitSide} asks of one character). */
+function isSpace(c: number): boolean {
+  if (c < 128) return c === 32 || (c >= 9 && c <= 13);
+  return c === 0xa0 || c === 0x1680 || (c >= 0x2000 && c <= 0x200a) || c === 0x2028 || c === 0x2029 || c === 0x202f || c === 0x205f || c === 0x3000 || c === 0xfeff;
 }
 
 /** Splits one side into species texts with their offsets. */
@@ -79,7 +102,7 @@ function splitSide(side: string, base: number): { text: string; start: number }[
     else if (ch === '+') {
       const before = side[i - 1];
       const after = side[i + 1];
-      if (spaced) split = /\s/.test(before ?? '') && /\s/.test(after ?? '');
+      if (spaced) split = before !== undefined && after !== undefined && isSpace(before.charCodeAt(0)) && isSpace(after.charCodeAt(0));
       // unspaced: a '+' before the start of a species separates; '^+', and a sign before another sign, do not ('Na++Cl-')
       // nor a charge before a state symbol ('Fe^2+(aq)')
       else split = before !== '^' && after !== undefined && /[A-Za-z0-9([{¹²³⁴⁵⁶⁷⁸⁹⁰]/.test(after) && !STATE_AFTER.test(side.slice(i + 1));
@@ -140,7 +163,7 @@ export function parseEquation(input: string, options: ParseOptions = {}): Equati
       }
       try {
         const read = speciesFormula(body, options);
-        const shift = columnOf(input, offset) - 1;
+        const shift = read.notes.length > 0 ? columnOf(input, offset) - 1 : 0;
         for (const n of read.notes) {
           if (n.code === 'STATE_SYMBOL') states.add(body.slice(body.lastIndexOf('(')));
           else if (!notes.some((m) => m.code === n.code && m.message === `${body}: ${n.message}`)) notes.push({ ...n, message: `${body}: ${n.message}`, ...(n.column !== undefined ? { column: n.column + shift } : {}) }); // a species written twice is read once

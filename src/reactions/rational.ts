@@ -61,6 +61,17 @@ export class Rational {
     return Rational.of(BigInt(num.toFixed()), BigInt(den.toFixed()));
   }
 
+  /**
+   * A whole number given as a plain safe integer.
+   *
+   * @example
+   * Rational.whole(3).toString() // '3'
+   */
+  static whole(n: number): Rational {
+    if (!Number.isSafeInteger(n)) throw fail({ code: 'BAD_NUMBER', message: `a whole number must be a safe integer (got ${String(n)})` });
+    return new Rational(BigInt(n), 1n);
+  }
+
   static readonly ZERO = new Rational(0n, 1n);
   static readonly ONE = new Rational(1n, 1n);
 
@@ -227,14 +238,46 @@ export function wholeNullSpace(matrix: readonly Rational[][], columns: number): 
     }
     m.push(out);
   }
+  return integerNullSpace(m, columns);
+}
+
+/**
+ * {@link wholeNullSpace} on a matrix of plain whole numbers, each below 2^31 in size (the rows
+ * are reduced in place): the same basis as {@link nullSpace}, or null when a step would leave the
+ * safe integers.
+ *
+ * @example
+ * integerNullSpace([[2, 0, -2], [0, 2, -1]], 3)?.map((v) => v.map(String)) // [['1', '1/2', '1']]
+ */
+export function integerNullSpace(m: number[][], columns: number): Rational[][] | null {
+  const e = wholeEchelon(m, columns);
+  return e && echelonBasis(e, columns);
+}
+
+/** A whole-number matrix reduced by {@link wholeEchelon}: each pivot row is the reduced row-echelon form's row times its pivot entry. */
+export interface WholeEchelon {
+  m: number[][];
+  /** The pivot column of each leading row, in row order. */
+  pivots: number[];
+}
+
+/**
+ * The fraction-free elimination of {@link wholeNullSpace} on a matrix of plain whole numbers,
+ * each below 2^31 in size, reduced in place; null when a step would leave the safe integers.
+ *
+ * @example
+ * wholeEchelon([[2, 0, -2], [0, 2, -1]], 3)?.pivots // [0, 1]
+ */
+export function wholeEchelon(m: number[][], columns: number): WholeEchelon | null {
   const pivots: number[] = [];
   let r = 0;
   for (let c = 0; c < columns && r < m.length; c++) {
     let p = r;
     while (p < m.length && m[p][c] === 0) p++;
     if (p === m.length) continue;
-    [m[r], m[p]] = [m[p], m[r]];
-    const pivot = m[r];
+    const pivot = m[p];
+    m[p] = m[r];
+    m[r] = pivot;
     const a = pivot[c];
     for (let i = 0; i < m.length; i++) {
       const row = m[i];
@@ -246,15 +289,82 @@ export function wholeNullSpace(matrix: readonly Rational[][], columns: number): 
         // each product below 2^53 is exact (and one that is not computes as 2^53 or more)
         if (!(Math.abs(a * row[j]) < EXACT && Math.abs(b * pivot[j]) < EXACT && Math.abs(x) < SMALL_ENTRY)) return null;
         row[j] = x;
-        g = gcdOf(g, x);
+        g = smallGcd(g, x);
       }
       if (g > 1) for (let j = 0; j < columns; j++) row[j] /= g;
     }
     pivots.push(c);
     r++;
   }
-  // each pivot row is the reduced row-echelon form's row times its pivot entry
+  return { m, pivots };
+}
+
+/**
+ * The null space's basis from a reduced whole-number matrix, as fractions (what {@link nullSpace} gives).
+ *
+ * @example
+ * const e = wholeEchelon([[2, 0, -2], [0, 2, -1]], 3)
+ * echelonBasis(e, 3).map((v) => v.map(String)) // [['1', '1/2', '1']]
+ */
+export function echelonBasis({ m, pivots }: WholeEchelon, columns: number): Rational[][] {
   return basisOf(columns, pivots, (i, f) => (m[i][f] === 0 ? Rational.ZERO : Rational.of(BigInt(-m[i][f]), BigInt(m[i][pivots[i]]))));
+}
+
+/**
+ * When the null space has one dimension: its basis vector scaled to the smallest whole numbers,
+ * as plain numbers (what {@link smallestIntegers} gives for it); null when it has not one
+ * dimension, or a step would leave the safe integers.
+ *
+ * @example
+ * const e = wholeEchelon([[2, 0, -2], [0, 2, -1]], 3)
+ * smallestWholeBalance(e, 3) // [2, 1, 2]
+ */
+export function smallestWholeBalance({ m, pivots }: WholeEchelon, columns: number): number[] | null {
+  if (columns - pivots.length !== 1) return null;
+  let f = 0;
+  while (f < pivots.length && pivots[f] === f) f++;
+  const num = new Array<number>(columns).fill(0);
+  const den = new Array<number>(columns).fill(1);
+  num[f] = 1;
+  let l = 1;
+  for (let i = 0; i < pivots.length; i++) {
+    let a = -m[i][f];
+    let b = m[i][pivots[i]];
+    if (a === 0) continue;
+    if (b < 0) {
+      a = -a;
+      b = -b;
+    }
+    const g = smallGcd(a, b);
+    a /= g;
+    b /= g;
+    num[pivots[i]] = a;
+    den[pivots[i]] = b;
+    l = (l / smallGcd(l, b)) * b;
+    if (!(l < EXACT)) return null;
+  }
+  const out = new Array<number>(columns);
+  let g = 0;
+  for (let j = 0; j < columns; j++) {
+    const x = num[j] * (l / den[j]);
+    if (!(Math.abs(x) < EXACT)) return null;
+    out[j] = x;
+    g = smallGcd(g, x);
+  }
+  if (g > 1) for (let j = 0; j < columns; j++) out[j] /= g;
+  return out;
+}
+
+/** Greatest common divisor of two safe integers (signs ignored), on plain numbers. */
+function smallGcd(a: number, b: number): number {
+  let x = a < 0 ? -a : a;
+  let y = b < 0 ? -b : b;
+  while (y !== 0) {
+    const t = x % y;
+    x = y;
+    y = t;
+  }
+  return x;
 }
 
 /**

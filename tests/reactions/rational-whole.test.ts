@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { Decimal } from '../../src/exact/decimal.js';
-import { nullSpace, Rational, rationalNullSpace, wholeNullSpace } from '../../src/reactions/rational.js';
+import { nullSpace, Rational, rationalNullSpace, smallestIntegers, smallestWholeBalance, wholeEchelon, wholeNullSpace } from '../../src/reactions/rational.js';
 
 describe('whole numbers as fractions', () => {
   it('the short way for whole numbers agrees with the fraction of the decimal', () => {
@@ -68,5 +68,24 @@ describe('the null space on plain numbers', () => {
     expect(text(nullSpace([[r(big), r(big - 1), r(5)], [r(big - 7), r(3), r(big)]], 3))).toEqual(text(rationalNullSpace([[r(big), r(big - 1), r(5)], [r(big - 7), r(3), r(big)]], 3)));
     // source: from memory (2 H2 + O2 -> 2 H2O: rows H and O, the products negative)
     expect(text(nullSpace([[r(2), r(0), r(-2)], [r(0), r(2), r(-1)]], 3))).toEqual([['1', '1/2', '1']]);
+  });
+  it('scales a one-dimensional null space to the smallest whole numbers as the fractions do', () => {
+    const entry = fc.oneof({ weight: 6, arbitrary: fc.integer({ min: -12, max: 12 }) }, { weight: 1, arbitrary: fc.integer({ min: -(2 ** 20), max: 2 ** 20 }) }, { weight: 3, arbitrary: fc.constant(0) });
+    let compared = 0;
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 7 }), fc.integer({ min: 1, max: 9 }), fc.array(entry, { minLength: 63, maxLength: 63 }), (rows, cols, xs) => {
+        const plain = Array.from({ length: rows }, (_, i) => Array.from({ length: cols }, (_, j) => xs[i * 9 + j]));
+        const exact = rationalNullSpace(plain.map((row) => row.map(r)), cols);
+        const e = wholeEchelon(plain.map((row) => row.slice()), cols);
+        const small = e && smallestWholeBalance(e, cols);
+        if (exact.length !== 1) expect(small).toBeNull();
+        else if (small !== null) {
+          compared++;
+          expect(small.map(String)).toEqual(smallestIntegers(exact[0]).map(String));
+        }
+      }),
+      { numRuns: 3000 },
+    );
+    expect(compared).toBeGreaterThan(100);
   });
 });

@@ -41,4 +41,17 @@ describe('the atoms of a species', () => {
     expect(eq.reactants.map((s) => s.formula)).toEqual(['Ca3O8P2', 'O2Si', 'C']);
     expect([...eq.reactants[0].atoms]).toEqual([['Ca', 3], ['P', 2], ['O', 8]]);
   });
+  it('are read again the same way for a species met before, each species with its own atoms', () => {
+    // source: from memory (the atoms of water and of carbon dioxide)
+    const first = parseEquation('CH4 + O2 -> CO2 + H2O');
+    first.products[1].atoms.set('H', 99);
+    const again = parseEquation('C2H6 + O2 -> CO2 + H2O');
+    expect([...again.products[1].atoms]).toEqual([['H', 2], ['O', 1]]);
+    expect(again.products[0].formula).toBe('CO2');
+    // a text read plainly before is still read with the abbreviations when they are asked for
+    // source: from memory (propyl, C3H7, beside praseodymium, Pr)
+    expect(speciesFormula('Pr', {}).formula).toBe('Pr');
+    expect(speciesFormula('Pr', { abbreviations: true }).formula).toBe('C3H7');
+  });
 });
+
