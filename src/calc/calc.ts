@@ -15,6 +15,10 @@ import type { Note } from '../errors/issue.js';
 import { evaluate, type CalcStep } from './evaluate.js';
 import { parseExpression } from './parse-expression.js';
 import { inUnitOf, pow10 } from '../sigfig/units.js';
+import { jsonString, notesLine } from '../mass/mass-json.js';
+import { decimalToNumber } from './to-number.js';
+
+const NO_STEPS = { steps: false };
 
 /** The largest and smallest sizes of a result pondus reports. */
 const MAX_RESULT = new Decimal('1e300');
@@ -23,6 +27,8 @@ const MIN_RESULT = new Decimal('1e-300');
 export interface CalcOptions {
   /** Rounding for the reported figure: half-to-even (default; ASTM E29, ISO 80000-1 Annex B rule A) or half-up. */
   rounding?: RoundingMode;
+  /** Write down the steps (default true); false leaves `steps` empty, for a batch that does not show them. */
+  steps?: boolean;
 }
 
 export interface CalcResult {
@@ -75,7 +81,7 @@ function spelledAsAsked(unit: ReturnType<typeof reportUnit>, asked: string | und
  */
 export function calc(input: string, options: CalcOptions = {}): CalcResult {
   const tree = parseExpression(input);
-  const ev = evaluate(tree);
+  const ev = evaluate(tree, options.steps === false ? NO_STEPS : {});
   const q = ev.result;
   // only a value with its leading digit at 10^300 or beyond (or below 10^-300) can be out of range
   if (!q.value.isZero() && (q.value.e >= 300 || q.value.e < -300) && (q.value.abs().gt(MAX_RESULT) || q.value.abs().lt(MIN_RESULT))) {
@@ -149,11 +155,29 @@ export interface CalcJson {
  */
 export function calcJson(r: CalcResult): CalcJson {
   const notes = notesJson(r.notes);
-  const value = finite(r.value.toNumber());
-  const rounded = finite(r.rounded.toNumber());
+  const value = finite(decimalToNumber(r.value));
+  const rounded = finite(decimalToNumber(r.rounded));
   // object literals, not a spread with fields after it (which V8 builds slowly)
-  if (r.uncertainty) return { input: r.input, value, rounded, display: r.display, sigFigs: r.sigFigs, unit: r.unit, uncertainty: finite(r.uncertainty.toNumber()), notes };
+  if (r.uncertainty) return { input: r.input, value, rounded, display: r.display, sigFigs: r.sigFigs, unit: r.unit, uncertainty: finite(decimalToNumber(r.uncertainty)), notes };
   return { input: r.input, value, rounded, display: r.display, sigFigs: r.sigFigs, unit: r.unit, notes };
+}
+
+/**
+ * The JSON text of {@link calcJson}'s object, written directly (the same text as
+ * `JSON.stringify(calcJson(r))`), with the line number first when one is given.
+ *
+ * @param r - a calculator result (from calc).
+ * @param line - the input's line number, written first as `"line"` (for a batch row), or none.
+ * @returns one JSON object, without a line end.
+ * @throws PondusError: NUMBER_OUT_OF_RANGE when a value cannot be written as a finite number (never for a result of calc).
+ * @example
+ * calcJsonLine(calc('8.80 g + 2.1 g')) // '{"input":"8.80 g + 2.1 g","value":10.9,"rounded":10.9,"display":"10.9 g","sigFigs":3,"unit":"g","notes":[]}'
+ */
+export function calcJsonLine(r: CalcResult, line?: number): string {
+  const value = finite(decimalToNumber(r.value));
+  const rounded = finite(decimalToNumber(r.rounded));
+  const uncertainty = r.uncertainty ? `,"uncertainty":${finite(decimalToNumber(r.uncertainty))}` : '';
+  return `${line === undefined ? '{"input":' : `{"line":${line},"input":`}${jsonString(r.input)},"value":${value},"rounded":${rounded},"display":${jsonString(r.display)},"sigFigs":${r.sigFigs},"unit":${jsonString(r.unit)}${uncertainty},"notes":${notesLine(r.notes)}}`;
 }
 
 /** A number JSON can carry: calc refuses results beyond 1e±300, so this never fails on its own results. */

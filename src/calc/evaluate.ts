@@ -39,8 +39,16 @@ interface Ctx {
   input: string;
   inputs: Map<number, Decimal>;
   steps: CalcStep[];
+  /** Whether the steps are written down (false: a batch that does not show them). */
+  record: boolean;
   notes: Note[];
   uncertain: boolean;
+}
+
+/** What {@link evaluate} may leave out. */
+export interface EvaluateOptions {
+  /** Write down the steps (default true); false leaves `steps` empty, for a caller that does not show them. */
+  steps?: boolean;
 }
 
 /**
@@ -48,9 +56,10 @@ interface Ctx {
  *
  * @example
  * evaluate(parseExpression('8.80 g + 2.1 g')).result.lsd // -1
+ * evaluate(parseExpression('8.80 g + 2.1 g'), { steps: false }).steps // []
  */
-export function evaluate(tree: CalcTree): Evaluation {
-  const ctx: Ctx = { input: tree.input, inputs: new Map(), steps: [], notes: [], uncertain: hasPlusMinus(tree.expr) };
+export function evaluate(tree: CalcTree, options: EvaluateOptions = {}): Evaluation {
+  const ctx: Ctx = { input: tree.input, inputs: new Map(), steps: [], record: options.steps !== false, notes: [], uncertain: hasPlusMinus(tree.expr) };
   const result = withInput(ctx, () => evalNode(tree.expr, ctx));
   // the same remark about a number written twice is said once
   const seen = new Set<string>();
@@ -100,14 +109,14 @@ function evalNode(n: ExprNode, ctx: Ctx): Quantity {
     case 'power': {
       const b = evalNode(n.base, ctx);
       const r = power(b, n.exponent, col(ctx, n.start));
-      ctx.steps.push({ text: `(${src(ctx, n.base)})^${n.exponent}`, rule: b.lsd === null ? 'exact' : `a power keeps the significant figures of its base (${sigFigsOf(b)})` });
+      if (ctx.record) ctx.steps.push({ text: `(${src(ctx, n.base)})^${n.exponent}`, rule: b.lsd === null ? 'exact' : `a power keeps the significant figures of its base (${sigFigsOf(b)})` });
       return r;
     }
     case 'binary': {
       const a = evalNode(n.left, ctx);
       const b = perReference(n) ? referenceAmount(n, ctx) : evalNode(n.right, ctx);
       const r = n.op === '+' ? add(a, b, col(ctx, n.opStart)) : n.op === '-' ? subtract(a, b, col(ctx, n.opStart)) : n.op === '*' ? multiply(a, b) : divide(a, b, col(ctx, n.opStart));
-      ctx.steps.push({ text: `${src(ctx, n.left)} ${n.op === '*' ? '×' : n.op === '/' ? '÷' : n.op} ${src(ctx, n.right)}`, rule: ruleFor(n, a, b, ctx) });
+      if (ctx.record) ctx.steps.push({ text: `${src(ctx, n.left)} ${n.op === '*' ? '×' : n.op === '/' ? '÷' : n.op} ${src(ctx, n.right)}`, rule: ruleFor(n, a, b, ctx) });
       return r;
     }
   }
@@ -199,7 +208,7 @@ function ratio(n: Extract<ExprNode, { kind: 'ratio' }>, ctx: Ctx): Quantity {
   const exact = a.lsd === null && b.lsd === null;
   const shown = `${displayMeasured(value).text}${unit ? ` ${unit.symbol}` : ''}`;
   const wv = unit ? '' : `; for a solid in a liquid (${n.parts} g in ${n.whole} mL) write ${n.parts}:${n.whole} g/mL`;
-  ctx.steps.push({ text: `${n.text} = ${n.parts} ÷ ${n.whole}`, rule: exact ? 'a ratio of whole numbers is defined: exact' : `a quotient keeps the fewest significant figures: ${sigFigsOf(value)}` });
+  if (ctx.record) ctx.steps.push({ text: `${n.text} = ${n.parts} ÷ ${n.whole}`, rule: exact ? 'a ratio of whole numbers is defined: exact' : `a quotient keeps the fewest significant figures: ${sigFigsOf(value)}` });
   ctx.notes.push({ code: 'RATIO', message: `${n.text} is read as the ratio ${n.parts}/${n.whole} = ${shown}, ${exact ? 'exact (the numbers of a ratio are defined)' : 'with the figures of its measured part'}${wv}` });
   return q;
 }

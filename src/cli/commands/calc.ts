@@ -1,5 +1,5 @@
 import type { Command } from 'commander';
-import { calc, calcJson, type CalcResult } from '../../calc/calc.js';
+import { calc, calcJson, calcJsonLine, type CalcResult } from '../../calc/calc.js';
 import type { RoundingMode } from '../../sigfig/round.js';
 import type { Presenter } from '../output/presenter.js';
 import { decimalCell } from '../output/format.js';
@@ -13,10 +13,12 @@ interface CalcCliOptions extends OutputOptions, RoundingOptions {
 
 /** The presenter for `pondus calc`. */
 export function calcPresenter(o: CalcCliOptions): Presenter<CalcResult> {
-  const opts: { rounding: RoundingMode } = { rounding: roundingOf(o) };
+  // the steps are shown only with --explain: without it they are not written down
+  const opts: { rounding: RoundingMode; steps: boolean } = { rounding: roundingOf(o), steps: !!o.explain };
   return {
     compute: (input) => calc(input, opts),
     json: (r) => (o.explain ? { ...calcJson(r), steps: r.steps, rounding: opts.rounding } : calcJson(r)),
+    ...(o.explain ? {} : { jsonLine: (r: CalcResult) => calcJsonLine(r), jsonRow: (input: string, line: number) => calcJsonLine(calc(input, opts), line) }),
     columns: ['input', 'value', 'display', 'sigFigs', 'unit', 'uncertainty'],
     cells: (r) => [r.input, decimalCell(r.value), r.display, r.sigFigs, r.unit, r.uncertainty ? decimalCell(r.uncertainty) : ''],
     block: (r) => {
