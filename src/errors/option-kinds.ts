@@ -5,7 +5,7 @@ export const OPTION_KINDS: Readonly<Record<string, Readonly<Record<string, strin
   analysis: { abbreviations: 'boolean|string', max: 'number', maxLength: 'number', rounding: 'string', saltStep: 'number', solvents: 'array', step: 'number', tolerance: 'number|object|string', top: 'number', weights: 'string' },
   balance: { abbreviations: 'boolean|string', catalysts: 'array', fix: 'object|string', maxLength: 'number' },
   balanceParsed: { abbreviations: 'boolean|string', catalysts: 'array', fix: 'object|string', maxLength: 'number' },
-  calc: { rounding: 'string' },
+  calc: { rounding: 'string', steps: 'boolean' },
   candidateFormulas: { elements: 'string', found: 'string', ion: 'string', limit: 'number', mass: 'string', molarMass: 'string', molarMassTolerance: 'number', onProgress: 'function', pattern: 'string', ppm: 'number', ratios: 'boolean|string', tolerance: 'number' },
   combustion: { collected: 'object!', rounding: 'string', sample: 'string!' },
   composition: { abbreviations: 'boolean|string', maxLength: 'number', part: 'string', weights: 'string' },

@@ -23,7 +23,7 @@ describe('the options of each public function', () => {
 
   it('a misspelt option is refused with the nearest name, not ignored', () => {
     // calc('1.25 g * 1.0', { roundng: 'half-up' }) rounded half to even, with no word
-    expect(code(() => calc('1.25 g * 1.0', { roundng: 'half-up' } as never))).toBe("BAD_ARGUMENT: calc: 'roundng' (argument 2) is not an option of calc; did you mean 'rounding'? (its options: rounding)");
+    expect(code(() => calc('1.25 g * 1.0', { roundng: 'half-up' } as never))).toBe("BAD_ARGUMENT: calc: 'roundng' (argument 2) is not an option of calc; did you mean 'rounding'? (its options: rounding, steps)");
     expect(code(() => formulaMass('H2O', { wieghts: 'abridged' } as never))).toContain("did you mean 'weights'?");
     expect(code(() => balance('H2 + O2 -> H2O', { fixx: 'written' } as never))).toContain("did you mean 'fix'?");
   });
