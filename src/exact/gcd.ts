@@ -23,13 +23,27 @@ export function gcd(a: number | bigint, b: number | bigint): number | bigint {
     while (y !== 0n) [x, y] = [y, x % y];
     return x;
   }
-  if (typeof a === 'number' && typeof b === 'number' && Number.isSafeInteger(a) && Number.isSafeInteger(b)) {
-    let x = Math.abs(a);
-    let y = Math.abs(b);
-    while (y !== 0) [x, y] = [y, x % y];
-    return x;
-  }
+  if (typeof a === 'number' && typeof b === 'number' && Number.isSafeInteger(a) && Number.isSafeInteger(b)) return wholeGcd(a, b);
   throw fail({ code: 'BAD_NUMBER', message: 'gcd takes two safe integers or two BigInts' });
+}
+
+/**
+ * {@link gcd} of two safe integers the caller has already checked, on plain numbers with no
+ * check and nothing allocated: for the inner loops of exact elimination.
+ *
+ * @example
+ * wholeGcd(-12, 18) // 6
+ * wholeGcd(0, 0)    // 0
+ */
+export function wholeGcd(a: number, b: number): number {
+  let x = a < 0 ? -a : a;
+  let y = b < 0 ? -b : b;
+  while (y !== 0) {
+    const t = x % y;
+    x = y;
+    y = t;
+  }
+  return x;
 }
 
 /**

@@ -9,7 +9,7 @@ import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
 import { exact } from '../sigfig/measured.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
-import { unitOf } from '../sigfig/units.js';
+import { unitOf, VOLUME } from '../sigfig/units.js';
 import { readStrength, type Strength } from './strength.js';
 import { atWorkingPrecision } from './working-precision.js';
 
@@ -44,18 +44,28 @@ export function molarStrength(text: string, molarMass: Quantity, measured: boole
   const q = strength.value;
   // an amount concentration as it is; a percent w/v (a pure fraction of g per mL) as g/L; a mass concentration over M
   const perL = q.dims[1] === 1 ? q : divide(q.dims[0] === 0 ? multiply(q, quantity(exact(1000), unitOf('g/L'))) : q, molarMass);
-  notes.push(
-    measured
-      ? { code: 'MEASURED_STRENGTH', message: 'the strength is a measured value: the results keep its significant figures' }
-      : { code: 'NOMINAL_STRENGTH', message: `the strength '${text.trim()}' is read as a label's nominal value, taken as exact; results keep working precision (4 figures); use \`measured: true\` for a measured strength`, options: ['measured'] },
-  );
+  notes.push(strengthKindNote(text, measured));
   return { strength, molarity: measured ? perL : atWorkingPrecision(perL) };
+}
+
+/** The note saying how a strength is taken: a label's nominal value (exact), or a measured one. */
+function strengthKindNote(text: string, measured: boolean | undefined): Note {
+  return measured
+    ? { code: 'MEASURED_STRENGTH', message: 'the strength is a measured value: the results keep its significant figures' }
+    : { code: 'NOMINAL_STRENGTH', message: `the strength '${text.trim()}' is read as a label's nominal value, taken as exact; results keep working precision (4 figures); use \`measured: true\` for a measured strength`, options: ['measured'] };
 }
 
 /** A strength in equivalents per something: the number, mEq or Eq, and the unit after the slash. */
 const EQUIVALENTS_PER_VOLUME = /^(.*?)\s*(mEq|Eq)\s*\/\s*(\S+)$/;
-/** The volume units an equivalents strength is read per. */
-const VOLUME_UNIT = /^(?:L|l|dL|dl|mL|ml|µL|μL|µl|uL)$/;
+/** Whether a unit is one of volume, by the one unit vocabulary. */
+function isVolumeUnit(symbol: string): boolean {
+  try {
+    const d = unitOf(symbol).dims;
+    return d[0] === VOLUME[0] && d[1] === VOLUME[1] && d[2] === VOLUME[2];
+  } catch {
+    return false;
+  }
+}
 
 /**
  * Whether a strength is written in equivalents (mEq or Eq per something): what a salt's strength
@@ -93,7 +103,7 @@ export function isEquivalentsStrength(text: string): boolean {
 export function equivalentStrength(text: string, salt: string, equivalentsPerMole: number, measured: boolean | undefined, notes: Note[]): MolarStrength | null {
   const m = EQUIVALENTS_PER_VOLUME.exec(text.trim());
   if (!m) return null;
-  if (!VOLUME_UNIT.test(m[3])) throw fail({ code: 'BAD_AMOUNT', message: `a strength in equivalents is written per volume of solution, like '20 mEq/L' or '2 mEq/mL'; got '${text.trim()}'` }, text);
+  if (!isVolumeUnit(m[3])) throw fail({ code: 'BAD_AMOUNT', message: `a strength in equivalents is written per volume of solution, like '20 mEq/L' or '2 mEq/mL'; got '${text.trim()}'` }, text);
   const read: Note[] = [];
   const charge = readStrength(`${m[1]} ${m[2] === 'mEq' ? 'mmol' : 'mol'}/${m[3]}`, 'w/v', read, 'the strength');
   const q = charge.value;
@@ -107,10 +117,6 @@ export function equivalentStrength(text: string, salt: string, equivalentsPerMol
     message: `the strength '${text.trim()}' is read as ${m[2]} of either ion of ${salt} per ${m[3]} (a neutral salt carries as many of its cation as of its anion): at ${eq}, the salt's amount concentration is the strength${equivalentsPerMole === 1 ? '' : ` divided by ${equivalentsPerMole}`}`,
   });
   const perL = divide(q, quantity(exact(equivalentsPerMole), null));
-  notes.push(
-    measured
-      ? { code: 'MEASURED_STRENGTH', message: 'the strength is a measured value: the results keep its significant figures' }
-      : { code: 'NOMINAL_STRENGTH', message: `the strength '${text.trim()}' is read as a label's nominal value, taken as exact; results keep working precision (4 figures); use \`measured: true\` for a measured strength`, options: ['measured'] },
-  );
+  notes.push(strengthKindNote(text, measured));
   return { strength: charge, molarity: measured ? perL : atWorkingPrecision(perL) };
 }

@@ -4,7 +4,7 @@
 import { Decimal } from '../exact/decimal.js';
 import { fail } from '../errors/pondus-error.js';
 import { typedIssue } from '../errors/message.js';
-import { gcd as gcdOf } from '../exact/gcd.js';
+import { gcd as gcdOf, wholeGcd } from '../exact/gcd.js';
 
 const WHOLE = /^[+-]?[0-9]{1,15}$/;
 const SAFE = BigInt(Number.MAX_SAFE_INTEGER);
@@ -289,7 +289,7 @@ export function wholeEchelon(m: number[][], columns: number): WholeEchelon | nul
         // each product below 2^53 is exact (and one that is not computes as 2^53 or more)
         if (!(Math.abs(a * row[j]) < EXACT && Math.abs(b * pivot[j]) < EXACT && Math.abs(x) < SMALL_ENTRY)) return null;
         row[j] = x;
-        g = smallGcd(g, x);
+        g = wholeGcd(g, x);
       }
       if (g > 1) for (let j = 0; j < columns; j++) row[j] /= g;
     }
@@ -335,12 +335,12 @@ export function smallestWholeBalance({ m, pivots }: WholeEchelon, columns: numbe
       a = -a;
       b = -b;
     }
-    const g = smallGcd(a, b);
+    const g = wholeGcd(a, b);
     a /= g;
     b /= g;
     num[pivots[i]] = a;
     den[pivots[i]] = b;
-    l = (l / smallGcd(l, b)) * b;
+    l = (l / wholeGcd(l, b)) * b;
     if (!(l < EXACT)) return null;
   }
   const out = new Array<number>(columns);
@@ -349,22 +349,10 @@ export function smallestWholeBalance({ m, pivots }: WholeEchelon, columns: numbe
     const x = num[j] * (l / den[j]);
     if (!(Math.abs(x) < EXACT)) return null;
     out[j] = x;
-    g = smallGcd(g, x);
+    g = wholeGcd(g, x);
   }
   if (g > 1) for (let j = 0; j < columns; j++) out[j] /= g;
   return out;
-}
-
-/** Greatest common divisor of two safe integers (signs ignored), on plain numbers. */
-function smallGcd(a: number, b: number): number {
-  let x = a < 0 ? -a : a;
-  let y = b < 0 ? -b : b;
-  while (y !== 0) {
-    const t = x % y;
-    x = y;
-    y = t;
-  }
-  return x;
 }
 
 /**
