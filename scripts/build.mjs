@@ -124,15 +124,6 @@ const lazyChildProcess = {
   },
 };
 
-// chalk's terminal detection loads node:tty at start-up; pondus decides the
-// colour level itself (styleFor), so the dependency-free variant is enough.
-const plainSupportsColor = {
-  name: 'plain-supports-color',
-  setup(b) {
-    b.onResolve({ filter: /^#supports-color$/ }, () => ({ path: `${root}node_modules/chalk/source/vendor/supports-color/browser.js` }));
-  },
-};
-
 // The command line, in parts: one bundle per command module (src/cli/bundles/<name>.ts →
 // dist/cli/<name>.cjs), each holding only what its commands use, and `help`, with every command
 // declared and none of their code (help, completion, manual). bin/pondus.cjs picks the bundle by
@@ -143,7 +134,7 @@ const cliFile = {
   platform: 'node',
   format: 'cjs',
   target: 'node20',
-  minifyWhitespace: true,
+  minifyWhitespace: !process.env.PONDUS_NO_MINIFY, // PONDUS_NO_MINIFY=1 keeps names and layout, for profiles
   minifySyntax: true,
   minifyIdentifiers: !process.env.PONDUS_NO_MINIFY,
   legalComments: 'none',
@@ -155,7 +146,7 @@ const cli = await build({
   outdir: `${root}dist/cli`,
   outExtension: { '.js': '.cjs' },
   metafile: true,
-  plugins: [lazyChildProcess, plainSupportsColor, lazyNuclideTable('../data'), lazyGrammar('own file'), lazySheetReader],
+  plugins: [lazyChildProcess, lazyNuclideTable('../data'), lazyGrammar('own file'), lazySheetReader],
 });
 // the grammars' own file, which the bundles above require on first use
 await build({ ...cliFile, entryPoints: [`${root}src/cli/grammar-chunk.ts`], outfile: `${root}dist/cli/grammars.cjs` });
@@ -175,7 +166,7 @@ for (const f of readdirSync(`${root}dist/cli`)) {
 // the help bundle must stay free of the chemistry: it is what `pondus --help` loads
 const helpInputs = Object.keys(cli.metafile.outputs[Object.keys(cli.metafile.outputs).find((o) => o.endsWith('/help.cjs'))].inputs);
 // (search-defaults.ts is plain data the options' defaults come from, and imports nothing)
-const heavy = helpInputs.filter((i) => !/^(src\/cli\/|src\/errors\/|src\/empirical\/search-defaults\.ts$|node_modules\/(commander|chalk)\/|pondus:)/.test(i));
+const heavy = helpInputs.filter((i) => !/^(src\/cli\/|src\/errors\/|src\/empirical\/search-defaults\.ts$|node_modules\/commander\/|pondus:)/.test(i));
 if (heavy.length) throw new Error(`the help bundle (dist/cli/help.cjs) loads code it does not need: ${heavy.join(', ')}`);
 // and no command bundle holds the parser library: the grammars' file has it, loaded on first use
 for (const [out, o] of Object.entries(cli.metafile.outputs)) {

@@ -10,13 +10,13 @@ import type { OutputFormat } from './output/format.js';
 import type { Presenter } from './output/presenter.js';
 import { createWriter, type ResultWriter } from './output/writers.js';
 import type { Sink } from './output/sink.js';
-import type { ChalkInstance } from 'chalk';
+import type { Style } from './output/style.js';
 
 export interface BatchIo {
   out: Sink;
   err: Sink;
-  outStyle: ChalkInstance;
-  errStyle: ChalkInstance;
+  outStyle: Style;
+  errStyle: Style;
   /** The terminal's width when standard output is a terminal (tables fit it). */
   columns?: number;
   /** The command's option values, each with its flag ('0.100 M' → '--concentration'): see {@link OptionValueError}. */

@@ -39,9 +39,15 @@ export function numberText(value: number): string {
   return JSON.stringify(value);
 }
 
-/** The texts of the whole numbers below TABLE_SIZE, each made on first use. */
+/**
+ * The texts of the whole numbers below TABLE_SIZE, each made on first use; the table itself is
+ * made once a run has asked for {@link TABLE_AFTER} of them, so a command writing a few numbers
+ * never allocates it.
+ */
 const TABLE_SIZE = 4096;
-const smallTexts: (string | undefined)[] = new Array(TABLE_SIZE).fill(undefined);
+let smallTexts: (string | undefined)[] | undefined;
+let untabled = 0;
+const TABLE_AFTER = 64;
 
 /**
  * The text JSON.stringify gives a number, from a table for whole numbers from 0 to 4095 (atom
@@ -55,6 +61,10 @@ const smallTexts: (string | undefined)[] = new Array(TABLE_SIZE).fill(undefined)
  */
 export function smallNumberText(value: number): string {
   if (value >= 0 && value < TABLE_SIZE && (value | 0) === value) {
+    if (smallTexts === undefined) {
+      if (++untabled < TABLE_AFTER) return String(value);
+      smallTexts = new Array(TABLE_SIZE).fill(undefined);
+    }
     return (smallTexts[value] ??= String(value));
   }
   return numberText(value);

@@ -206,12 +206,17 @@ function sums(input: string, charge: number, treeNotes: Note[], vector: AtomVect
  * below 4096 (a batch meets the same few hundred again and again): one join less per element. At
  * most 256 kinds are held; then the table starts again.
  */
-const labelTexts: { byAtom: (string[] | undefined)[]; kinds: number } = { byAtom: [], kinds: 0 };
+const labelTexts: { byAtom: (string[] | undefined)[]; kinds: number; untabled: number } = { byAtom: [], kinds: 0, untabled: 0 };
 
 function labelWithCount(id: number, label: string, count: number): string {
   if (count >= 4096 || (count | 0) !== count || count < 0) return label + smallNumberText(count);
   let byCount = labelTexts.byAtom[id];
   if (byCount === undefined) {
+    // a command writing a few formulas joins them: the 4,096-slot tables are for batches
+    if (labelTexts.untabled < 64) {
+      labelTexts.untabled++;
+      return label + smallNumberText(count);
+    }
     if (labelTexts.kinds >= 256) {
       labelTexts.byAtom = [];
       labelTexts.kinds = 0;

@@ -14,7 +14,7 @@ import { formulaMassDetail, type MassDetail, type MassOptions } from '../mass/fo
 import { atomsPastWater } from './past-water.js';
 
 /** Solubility, g of anhydrous compound per 100 g of water at 20 °C (from memory, CRC Handbook). */
-const SOLUBILITY_20C: readonly (readonly [formula: string, name: string, gPer100g: string])[] = [
+export const SOLUBILITY_20C: readonly (readonly [formula: string, name: string, gPer100g: string])[] = [
   ['NaCl', 'sodium chloride', '35.9'],
   ['KCl', 'potassium chloride', '34.2'],
   ['NH4Cl', 'ammonium chloride', '37.2'],
@@ -64,23 +64,42 @@ const keyOf = (atoms: Map<string, string>) => [...atoms].sort(([a], [b]) => (a <
 
 /** The elements of a compound other than H and O, which water of crystallisation cannot remove: a cheap first test. */
 const elementsOf = (atoms: Iterable<string>) => [...atoms].filter((e) => e !== 'H' && e !== 'O').sort().join(' ');
-let byElements: Map<string, Entry[]> | undefined;
+/**
+ * The table's rows by the elements their formulas name (past H and O), read from the symbols in
+ * the text: the table's formulas are plain (symbols, counts, brackets), so a row's symbols are its
+ * elements. A row is read as a formula only when a reagent with those elements is looked up.
+ */
+let rowsByElements: Map<string, (typeof SOLUBILITY_20C)[number][]> | undefined;
+/** The entries made so far, by the same key (at most one per row of the table). */
+const entriesByElements = new Map<string, Entry[]>();
+const NO_ENTRIES: Entry[] = [];
+
+function entryOf([formula, name, s]: (typeof SOLUBILITY_20C)[number]): Entry {
+  const d = formulaMassDetail(formula);
+  const gPer100g = new Decimal(s);
+  // a saturated solution is w = S/(100 + S) by mass; a litre of it weighs at least 1000 g (salt solutions are denser than water)
+  const w = gPer100g.div(gPer100g.plus(100));
+  return { key: keyOf(atomsPastWater(d)), name, formula, molarMass: new Decimal(d.molarMass.toString()), gPer100g, limit: gPer100g.times(10), w, atLeast: w.times(1000) };
+}
 
 /** The entries whose elements (past H and O) are those of the reagent; most reagents have none. */
 function candidates(reagent: MassDetail): Entry[] {
-  if (!byElements) {
-    byElements = new Map();
-    for (const [formula, name, s] of SOLUBILITY_20C) {
-      const d = formulaMassDetail(formula);
-      const gPer100g = new Decimal(s);
-      // a saturated solution is w = S/(100 + S) by mass; a litre of it weighs at least 1000 g (salt solutions are denser than water)
-      const w = gPer100g.div(gPer100g.plus(100));
-      const e: Entry = { key: keyOf(atomsPastWater(d)), name, formula, molarMass: new Decimal(d.molarMass.toString()), gPer100g, limit: gPer100g.times(10), w, atLeast: w.times(1000) };
-      const k = elementsOf(d.atoms.keys());
-      byElements.set(k, [...(byElements.get(k) ?? []), e]);
+  if (!rowsByElements) {
+    rowsByElements = new Map();
+    for (const row of SOLUBILITY_20C) {
+      const k = elementsOf(new Set(row[0].match(/[A-Z][a-z]?/g)));
+      rowsByElements.set(k, [...(rowsByElements.get(k) ?? []), row]);
     }
   }
-  return byElements.get(elementsOf(reagent.atoms.keys())) ?? [];
+  const k = elementsOf(reagent.atoms.keys());
+  const rows = rowsByElements.get(k);
+  if (rows === undefined) return NO_ENTRIES;
+  let entries = entriesByElements.get(k);
+  if (entries === undefined) {
+    entries = rows.map(entryOf);
+    entriesByElements.set(k, entries);
+  }
+  return entries;
 }
 
 /** The table's entry for the reagent (a hydrate matching its anhydrous salt), or undefined. */

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { Chalk } from 'chalk';
+import { styleAt } from '../../src/cli/output/style.js';
 import { jsonLines, pondus } from './run-cli.js';
 import { massPresenter } from '../../src/cli/commands/mass.js';
 import { createWriter } from '../../src/cli/output/writers.js';
@@ -94,7 +94,7 @@ describe('the table writer', () => {
   const run = (columns: number | undefined, inputs: string[]) => {
     let out = '';
     const sink = { write: (s: string) => void (out += s) };
-    const style = new Chalk({ level: 0 });
+    const style = styleAt(0);
     const p = massPresenter({}) as Presenter<unknown>;
     const w = createWriter('table', p, { out: sink, err: sink, outStyle: style, errStyle: style, numbered: true, columns });
     inputs.forEach((text, i) => w.ok({ text, line: i + 1 }, p.compute(text)));

@@ -45,3 +45,15 @@ describe('solubility', () => {
     expect(solubilityWarning(formulaMassDetail('C9H8O4'), new Decimal(100))).toBeNull();
   });
 });
+
+describe('solubility table', () => {
+  it('finds every row of its table: far past its solubility, each compound is warned about', async () => {
+    const { SOLUBILITY_20C } = await import('../../src/preparation/solubility.js');
+    for (const [formula, name] of SOLUBILITY_20C) {
+      // 1000 mol/L is past any solubility in the table (sucrose: 200 g per 100 g of water is about 5.8 mol per kg)
+      const note = solubilityWarning(formulaMassDetail(formula), new Decimal(1000));
+      expect(note?.code, formula).toBe('SOLUBILITY_EXCEEDED');
+      expect(note?.message, formula).toContain(name);
+    }
+  });
+});

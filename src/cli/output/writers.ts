@@ -2,7 +2,7 @@
  * Result writers for each output format. Each input gets exactly one result
  * (or error) in order; nothing is dropped.
  */
-import type { ChalkInstance } from 'chalk';
+import type { Style } from './style.js';
 import { errorRowFields, FLAG_NAMING, renderError } from '../../errors/render.js';
 import { messageFor, noteText } from '../../errors/message.js';
 import type { PondusError } from '../../errors/pondus-error.js';
@@ -58,8 +58,8 @@ export interface TextOut {
 export interface WriterContext {
   out: TextOut;
   err: TextOut;
-  errStyle: ChalkInstance;
-  outStyle: ChalkInstance;
+  errStyle: Style;
+  outStyle: Style;
   /** True when inputs came from standard input or there are several: errors then say which line. */
   numbered: boolean;
   /** The terminal's width when output goes to a terminal: tables are fitted to it. */
