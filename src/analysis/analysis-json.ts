@@ -1,6 +1,7 @@
 import { keysFirst } from '../exact/json-row.js';
 import { notesJson } from '../errors/note-json.js';
 import type { AnalysisResult, Fit } from './check.js';
+import { LazyTexts } from '../exact/lazy-texts.js';
 
 const fitJson = (f: Fit) => ({
   formula: f.formula,
@@ -45,13 +46,13 @@ export function analysisJson(r: AnalysisResult, extra: Record<string, unknown> =
  * use: percents and deviations to two decimals are most of an analysis row's numbers, and a
  * table entry is found for far less than a double is written.
  */
-const HUNDREDTHS: (string | undefined)[] = new Array<string | undefined>(20_001).fill(undefined);
+const HUNDREDTHS = new LazyTexts(20_001);
 
 /** A number as JSON.stringify writes it. */
 function num(n: number): string {
   const k = Math.round(n * 100);
   // the same double as k/100: the same text
-  if (k / 100 === n && k >= -10_000 && k <= 10_000) return (HUNDREDTHS[k + 10_000] ??= String(n));
+  if (k / 100 === n && k >= -10_000 && k <= 10_000) return HUNDREDTHS.get(k + 10_000) ?? HUNDREDTHS.keep(k + 10_000, String(n));
   return Number.isFinite(n) ? String(n) : 'null';
 }
 

@@ -24,6 +24,7 @@ import { readNumber } from '../sigfig/read-number.js';
 import { solventByName } from './solvents.js';
 import { continuousAmount, solvateSearch, type MassVector } from './solvate-fit.js';
 import { reportFormulaOf } from './report-formula.js';
+import { LazyTexts } from '../exact/lazy-texts.js';
 
 export interface AnalysisOptions extends MassOptions {
   /** Allowed |found − calculated| in percentage points (default 0.4, the common journal rule). */
@@ -245,7 +246,7 @@ function figuresOf(t: Decimal): ToleranceFigures {
 const hundredthsText = (k: number) => `${Math.floor(k / 100)}.${String(k % 100).padStart(2, '0')}`;
 
 /** The texts of the percents 0.00 to 100.00 by hundredths, each made on first use. */
-const percentTexts: (string | undefined)[] = new Array<string | undefined>(10_001).fill(undefined);
+const percentTexts = new LazyTexts(10_001);
 
 /** 10^-8 percentage points in a hundredth. */
 const HUNDREDTH = FOUND_SCALE / 100;
@@ -312,7 +313,7 @@ export function plainAnalysis(formula: string, foundText: string, options: Analy
     const x = (massNumber / molarNumber) * 10_000;
     if (!(Number.isFinite(x) && x >= 0 && x < 1e12 && Math.abs(x - Math.floor(x) - 0.5) > 1e-6)) return null;
     const k = Math.round(x);
-    const c = k <= 10_000 ? (percentTexts[k] ??= hundredthsText(k)) : hundredthsText(k);
+    const c = k <= 10_000 ? (percentTexts.get(k) ?? percentTexts.keep(k, hundredthsText(k))) : hundredthsText(k);
     // as impossibleNotes decides without exact quotients; past that, the general way
     const ownNumber = (massNumber / molarNumber) * 100;
     if (foundNumber - ownNumber - tol.number >= -1e-9) {

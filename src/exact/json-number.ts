@@ -3,6 +3,7 @@
  * nearest double, which for values of at most 15 significant digits is the exact
  * decimal itself, so the digits need not be generated again.
  */
+import { LazyTexts } from './lazy-texts.js';
 
 /**
  * The JSON text of `value`, the nearest double to the exact decimal `exact`.
@@ -39,15 +40,9 @@ export function numberText(value: number): string {
   return JSON.stringify(value);
 }
 
-/**
- * The texts of the whole numbers below TABLE_SIZE, each made on first use; the table itself is
- * made once a run has asked for {@link TABLE_AFTER} of them, so a command writing a few numbers
- * never allocates it.
- */
+/** The texts of the whole numbers below TABLE_SIZE, each made on first use. */
 const TABLE_SIZE = 4096;
-let smallTexts: (string | undefined)[] | undefined;
-let untabled = 0;
-const TABLE_AFTER = 64;
+const smallTexts = new LazyTexts(TABLE_SIZE);
 
 /**
  * The text JSON.stringify gives a number, from a table for whole numbers from 0 to 4095 (atom
@@ -61,11 +56,7 @@ const TABLE_AFTER = 64;
  */
 export function smallNumberText(value: number): string {
   if (value >= 0 && value < TABLE_SIZE && (value | 0) === value) {
-    if (smallTexts === undefined) {
-      if (++untabled < TABLE_AFTER) return String(value);
-      smallTexts = new Array(TABLE_SIZE).fill(undefined);
-    }
-    return (smallTexts[value] ??= String(value));
+    return smallTexts.get(value) ?? smallTexts.keep(value, String(value));
   }
   return numberText(value);
 }

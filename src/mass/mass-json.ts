@@ -10,6 +10,7 @@ import { notesJson, type NoteJson } from '../errors/note-json.js';
 import { jsonNumber } from '../exact/json-number.js';
 import type { MassResult } from './formula-mass.js';
 import type { MolarMassUncertainty } from './uncertainty.js';
+import { LazyTexts } from '../exact/lazy-texts.js';
 
 /** A note as it appears in JSON rows. */
 
@@ -105,20 +106,13 @@ export function massJsonLine(r: MassResult, line?: number): string {
 
 /** Nominal masses below this have the row end of a neutral formula with no notes kept. */
 const ENDS = 8192;
-/** Made once a run has written {@link TABLE_AFTER} such row ends: a command writing a few rows never allocates its 8,192 slots. */
-let neutralEnds: (string | undefined)[] | undefined;
-let endsUntabled = 0;
-const TABLE_AFTER = 64;
+const neutralEnds = new LazyTexts(ENDS);
 
 /** The row from the nominal mass on: `,"nominalMass":18,"charge":0,"notes":[]}`. */
 function rowEnd(r: MassResult): string {
   const nominal = r.nominalMass;
   if (r.charge === 0 && r.notes.length === 0 && nominal !== null && nominal >= 0 && nominal < ENDS && (nominal | 0) === nominal) {
-    if (neutralEnds === undefined) {
-      if (++endsUntabled < TABLE_AFTER) return `,"nominalMass":${nominal},"charge":0,"notes":[]}`;
-      neutralEnds = new Array(ENDS).fill(undefined);
-    }
-    return (neutralEnds[nominal] ??= `,"nominalMass":${nominal},"charge":0,"notes":[]}`);
+    return neutralEnds.get(nominal) ?? neutralEnds.keep(nominal, `,"nominalMass":${nominal},"charge":0,"notes":[]}`);
   }
   return `,"nominalMass":${nominal},"charge":${r.charge},"notes":${notesLine(r.notes)}}`;
 }
