@@ -17,6 +17,7 @@ import { registerPharmacy } from './commands/pharmacy.js';
 import { registerIonCommands } from './commands/ion.js';
 import { PRESENTERS } from './commands/registry.js';
 import { runProgram, type CliIo, type CommandSet } from './program.js';
+import { finishProgram } from './program-setup.js';
 
 export { VERSION, type CliIo } from './program.js';
 export { HELP_EXAMPLES } from './help-examples.js';
@@ -39,6 +40,7 @@ export const ALL_COMMANDS: CommandSet = {
     registerIonCommands(program, run, stdin);
   },
   presenters: PRESENTERS,
+  finish: finishProgram,
 };
 
 /**

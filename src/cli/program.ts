@@ -21,7 +21,7 @@ import { Sink } from './output/sink.js';
 import type { OutStream } from './output/fd-writer.js';
 import { visibleControls } from './output/format.js';
 import { styleFor } from './output/style.js';
-import { finishProgram } from './program-setup.js';
+import { addHelpExamples } from './help-examples.js';
 
 export const VERSION = '0.1.0';
 
@@ -42,6 +42,8 @@ export interface CommandSet {
   register(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void;
   /** The presenters of the commands added. */
   presenters: PresenterTable;
+  /** For a set that is the whole program (main.ts, the help bundle): adds the commands generated from it (finishProgram: completion, manual). */
+  finish?(program: Command, write: (s: string) => void, version: string): void;
 }
 
 /**
@@ -134,8 +136,9 @@ export async function runProgram(args: string[], io: CliIo, commands: CommandSet
   // an option that takes one value is never silently overridden by a second one (exit 2), and
   // commander's usage errors say what the command declared (a conflict's reason, a required option's hint)
   for (const cmd of program.commands) withUsageMessages(refuseRepeatedOptions(cmd, REPEATABLE[cmd.name()] ?? []));
-  // completion and manual commands, the examples at the end of every --help
-  finishProgram(program, (s) => out.write(s), VERSION);
+  // for the whole program, the completion and manual commands; then the examples at the end of every --help
+  commands.finish?.(program, (s) => out.write(s), VERSION);
+  addHelpExamples(program);
 
   try {
     // bare `pondus`: its help, once, on standard output, and the usage status

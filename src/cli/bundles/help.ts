@@ -1,6 +1,7 @@
 // The command line's bundle for `pondus --help`, `help`, `completion`, `manual` and anything that
 // names no command: every command declared (names, descriptions, options), none of their code.
 import { declareAnalysis, declareBalance, declareCalc, declareComposition, declareConversions, declareEmpirical, declareIon, declareMass, declarePharmacy, declarePrepare, declareQc, declareReact, declareReagents } from '../commands/declarations.js';
+import { finishProgram } from '../program-setup.js';
 import { start } from '../start.js';
 
 start({
@@ -21,4 +22,5 @@ start({
     declareIon(program);
   },
   presenters: {},
+  finish: finishProgram,
 });
