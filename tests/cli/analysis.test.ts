@@ -63,3 +63,18 @@ describe('pondus analysis: report lines as written', () => {
     expect(rows[1].pass).toBe(true);
   });
 });
+
+describe('pondus analysis: the order of solvate fits', () => {
+  // invented found values (a demo compound), chosen so that one- and two-partner fits interleave
+  const args = ['analysis', 'C20H25N3O', '--found', 'C=72.10 H=7.80 N=12.40', '--solvents', 'H2O,CH2Cl2'];
+
+  it('lists the fits by largest deviation plus 0.05 per partner, and says so', () => {
+    const [r] = jsonLines(pondus([...args, '--json']).stdout) as { fits: { maxDeviation: number; solvates: unknown[] }[] }[];
+    const scores = r.fits.map((f) => Math.round((f.maxDeviation + 0.05 * f.solvates.length) * 100));
+    expect(scores.length).toBeGreaterThan(2);
+    expect([...scores].sort((a, b) => a - b)).toEqual(scores);
+    // the raw deviations alone are not in order here: the heading must say how the list is ranked
+    expect(r.fits.map((f) => f.maxDeviation)).not.toEqual([...r.fits.map((f) => f.maxDeviation)].sort((a, b) => a - b));
+    expect(pondus(args).stdout).toContain('best first: ranked by the largest deviation plus 0.05 per partner');
+  });
+});

@@ -1,5 +1,6 @@
 import type { Command } from 'commander';
 import { analysis, type AnalysisResult } from '../../analysis/check.js';
+import { PARTNER_PENALTY } from '../../analysis/solvate-fit.js';
 import { analysisJson, analysisJsonLine } from '../../analysis/analysis-json.js';
 import { readSheet, type SheetRow } from '../../analysis/lab-sheet.js';
 import { fail } from '../../errors/pondus-error.js';
@@ -176,7 +177,7 @@ export function analysisPresenter(o: AnalysisCliOptions): Presenter<Row> {
       lines.push(`verdict: ${verdict(r)} (largest deviation ${r.maxDeviation.toFixed(2)})`);
       lines.push(r.reportLine);
       if (r.fits.length > 0) {
-        lines.push('fits with solvates or salt partners, best first:');
+        lines.push(`fits with solvates or salt partners, best first: ranked by the largest deviation plus ${PARTNER_PENALTY} per partner, so a fit with one partner more must be better by that much`);
         for (const f of r.fits) lines.push(`  ${f.formula.padEnd(40)} largest deviation ${f.maxDeviation.toFixed(2)}  ${f.pass ? 'passes' : 'fails'}`);
         const best = r.fits.find((f) => f.pass && f.solvates.length > 0);
         if (best && !r.pass) lines.push(`  ${best.reportLine}`);
