@@ -244,6 +244,16 @@ for (const k of Object.keys(ALIASES)) {
   ALIASES[k.replace(/-([0-9])$/, '^\u2212$1')] = ALIASES[k];
 }
 
+// a litre written with a lower-case l after the slash ('mmol/l', 'µg/ml', 'g/100 ml'), as 'mol/l' and 'g/l'
+// are: every per-litre or per-millilitre spelling is read with l as with L (SI Brochure, 9th edition,
+// table 8: both l and L are symbols of the litre)
+for (const k of [...TABLE.map((u) => u.symbol), ...Object.keys(ALIASES)]) {
+  const m = /^(.*\/(?:100 ?)?[mµuμd]?)L$/.exec(k);
+  if (!m || !/[a-zA-Zµμ%]/.test(m[1])) continue;
+  const lower = `${m[1]}l`;
+  if (ALIASES[lower] === undefined && !TABLE.some((u) => u.symbol === lower)) ALIASES[lower] = ALIASES[k] ?? k;
+}
+
 /** Every spelling {@link unitOf} accepts: the symbols and their aliases. */
 export const UNIT_SPELLINGS: readonly string[] = Object.freeze([...TABLE.map((u) => u.symbol), ...Object.keys(ALIASES)]);
 
@@ -264,7 +274,7 @@ const BY_SYMBOL = new Map(TABLE.map((u) => [u.symbol, u]));
 /** Units of the trade that pondus does not read as amounts, and why (for the hint of UNKNOWN_UNIT). */
 const NOT_READ: readonly [RegExp, string][] = [
   [/^N$/, 'normality (N) depends on the reaction the solution is used in, so pondus does not read it: give the molarity (M) and count the equivalents of that reaction yourself'],
-  [/^(m|µ|u)?(eq|Eq)(\/[mµu]?L)?$/, "equivalents depend on the charge of the ion counted, so pondus does not read them as an amount: give the molarity or the mass concentration; the milliequivalents of a salt come from its mass or strength in the milliequivalents calculation (meq)"],
+  [/^(m|µ|u)?(eq|Eq)(\/[mµu]?[Ll])?$/, "equivalents depend on the charge of the ion counted, so pondus does not read them as an amount: give the molarity or the mass concentration; a salt's strength in equivalents is read by the milliequivalents calculation (meq) and osmolarity, and a dilution takes equivalents on both sides"],
   [/^(IU|units?|U)(\/(m?g|mL|L))?$/i, 'biological units (IU, units) are defined for each substance by its reference standard, not by its mass: pondus does not convert them'],
   [/^(mol|mmol)\/kg$/, 'a molality (mol per kg of solvent) is not read: pondus reads molar concentrations per litre of solution (M, mol/L)'],
 ];

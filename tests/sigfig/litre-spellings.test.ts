@@ -1,0 +1,22 @@
+import { describe, expect, it } from 'vitest';
+import { UNIT_SPELLINGS, unitOf } from '../../src/sigfig/units.js';
+
+describe('a litre written l after the slash', () => {
+  // source: SI Brochure, 9th edition, table 8 (l and L are both symbols of the litre)
+  it('reads every per-litre and per-millilitre spelling with l as with L', () => {
+    for (const s of UNIT_SPELLINGS) {
+      const m = /^(.*\/(?:100 ?)?[mµuμd]?)L$/.exec(s);
+      if (!m) continue;
+      const lower = unitOf(`${m[1]}l`);
+      const upper = unitOf(s);
+      expect([lower.symbol, lower.exp10]).toEqual([upper.symbol, upper.exp10]);
+    }
+  });
+
+  it('reads mmol/l and mmol/ml as mmol/L and mol/L', () => {
+    expect(unitOf('mmol/l').symbol).toBe('mmol/L');
+    expect(unitOf('mmol/ml').symbol).toBe('mol/L');
+    expect(unitOf('µmol/l').symbol).toBe('µM');
+    expect(unitOf('µg/ml').symbol).toBe('µg/mL');
+  });
+});
