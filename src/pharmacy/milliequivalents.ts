@@ -13,7 +13,7 @@
  *   precision, unless the strength is marked as measured.
  */
 import type { Note } from '../errors/issue.js';
-import { fail } from '../errors/pondus-error.js';
+import { fail, PondusError } from '../errors/pondus-error.js';
 import { AMOUNT, MASS } from '../calc/measure.js';
 import { readPositive } from '../assay/read-quantity.js';
 import { noteHydrateWater } from '../assay/hydrate-note.js';
@@ -24,7 +24,8 @@ import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js
 import { unitOf } from '../sigfig/units.js';
 import { saltIons, type SaltIons } from './salt-ions.js';
 import type { Strength } from './strength.js';
-import { equivalentStrength, molarStrength } from './molar-strength.js';
+import { equivalentStrength, molarStrength, type MolarStrength } from './molar-strength.js';
+import { EQUIVALENTS_UNITS, readChargeAmount } from './equivalents-unit.js';
 import { atWorkingPrecision, noteFewFigures } from './working-precision.js';
 
 export interface MilliequivalentOptions extends MassOptions {
@@ -79,12 +80,20 @@ export interface MilliequivalentResult {
  * readEquivalents('20 mEq', []).value.toString() // '0.02'
  */
 export function readEquivalents(text: string, notes: Note[]): Quantity {
-  const m = /^(.*?)\s*(mEq|Eq)\s*$/.exec(text.trim());
-  if (!m) throw fail({ code: 'BAD_AMOUNT', message: `a milliequivalent target is written like '20 mEq'; got '${text}'` }, text);
-  return readPositive(`${m[1]} ${m[2] === 'mEq' ? 'mmol' : 'mol'}`, [AMOUNT], 'the target', notes);
+  return readChargeAmount(text, 'the target', notes);
 }
 
 const G_PER_MOL = unitOf('g/mol');
+
+/** A salt's strength not in equivalents; an unknown unit's hint names the equivalents units too, as a salt may be given in them. */
+function saltStrength(text: string, M: Quantity, measured: boolean | undefined, notes: Note[]): MolarStrength {
+  try {
+    return molarStrength(text, M, measured, notes);
+  } catch (e) {
+    if (!(e instanceof PondusError) || e.first.code !== 'UNKNOWN_UNIT') throw e;
+    throw new PondusError(e.issues.map((i, k) => (k === 0 ? { ...i, hint: `${i.hint ? `${i.hint}; ` : ''}a salt's strength also in equivalents: ${EQUIVALENTS_UNITS}` } : i)), e.input);
+  }
+}
 
 /**
  * mmol, mEq and mOsm of a salt from a mass, a target, or a strength.
@@ -118,7 +127,7 @@ export function milliequivalents(saltText: string, o: MilliequivalentOptions): M
     moles = divide(mass, M);
   } else if (o.concentration !== undefined) {
     mode = 'strength';
-    const m = equivalentStrength(o.concentration, salt.input, ions.equivalentsPerMole, o.measured, notes) ?? molarStrength(o.concentration, M, o.measured, notes);
+    const m = equivalentStrength(o.concentration, salt.input, ions.equivalentsPerMole, o.measured, notes) ?? saltStrength(o.concentration, M, o.measured, notes);
     strength = m.strength;
     moles = m.molarity;
   } else {

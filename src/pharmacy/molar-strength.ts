@@ -9,7 +9,8 @@ import type { Note } from '../errors/issue.js';
 import { fail } from '../errors/pondus-error.js';
 import { exact } from '../sigfig/measured.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
-import { unitOf, VOLUME } from '../sigfig/units.js';
+import { unitOf } from '../sigfig/units.js';
+import { isChargePerVolume, readChargePerVolume } from './equivalents-unit.js';
 import { readStrength, type Strength } from './strength.js';
 import { atWorkingPrecision } from './working-precision.js';
 
@@ -55,18 +56,6 @@ function strengthKindNote(text: string, measured: boolean | undefined): Note {
     : { code: 'NOMINAL_STRENGTH', message: `the strength '${text.trim()}' is read as a label's nominal value, taken as exact; results keep working precision (4 figures); use \`measured: true\` for a measured strength`, options: ['measured'] };
 }
 
-/** A strength in equivalents per something: the number, mEq or Eq, and the unit after the slash. */
-const EQUIVALENTS_PER_VOLUME = /^(.*?)\s*(mEq|Eq)\s*\/\s*(\S+)$/;
-/** Whether a unit is one of volume, by the one unit vocabulary. */
-function isVolumeUnit(symbol: string): boolean {
-  try {
-    const d = unitOf(symbol).dims;
-    return d[0] === VOLUME[0] && d[1] === VOLUME[1] && d[2] === VOLUME[2];
-  } catch {
-    return false;
-  }
-}
-
 /**
  * Whether a strength is written in equivalents (mEq or Eq per something): what a salt's strength
  * may be given in, and a non-electrolyte's may not.
@@ -76,7 +65,7 @@ function isVolumeUnit(symbol: string): boolean {
  * isEquivalentsStrength('0.9 %') // false
  */
 export function isEquivalentsStrength(text: string): boolean {
-  return EQUIVALENTS_PER_VOLUME.test(text.trim());
+  return isChargePerVolume(text);
 }
 
 /**
@@ -101,20 +90,16 @@ export function isEquivalentsStrength(text: string): boolean {
  * equivalentStrength('0.9 %', 'NaCl', 1, false, []) // null
  */
 export function equivalentStrength(text: string, salt: string, equivalentsPerMole: number, measured: boolean | undefined, notes: Note[]): MolarStrength | null {
-  const m = EQUIVALENTS_PER_VOLUME.exec(text.trim());
-  if (!m) return null;
-  if (!isVolumeUnit(m[3])) throw fail({ code: 'BAD_AMOUNT', message: `a strength in equivalents is written per volume of solution, like '20 mEq/L' or '2 mEq/mL'; got '${text.trim()}'` }, text);
   const read: Note[] = [];
-  const charge = readStrength(`${m[1]} ${m[2] === 'mEq' ? 'mmol' : 'mol'}/${m[3]}`, 'w/v', read, 'the strength');
-  const q = charge.value;
-  if (charge.percent !== null || q.dims[0] !== 0 || q.dims[1] !== 1 || q.dims[2] !== -1) {
-    throw fail({ code: 'BAD_AMOUNT', message: `a strength in equivalents is written per volume, like '20 mEq/L' or '2 mEq/mL'; got '${text.trim()}'` }, text);
-  }
+  const m = readChargePerVolume(text, 'the strength', read);
+  if (!m) return null;
+  const q = m.value;
+  const charge: Strength = { value: q, percent: null, defaulted: false };
   if (measured) notes.push(...read);
   const eq = `${equivalentsPerMole} mEq per mmol`;
   notes.push({
     code: 'EQUIVALENTS_STRENGTH',
-    message: `the strength '${text.trim()}' is read as ${m[2]} of either ion of ${salt} per ${m[3]} (a neutral salt carries as many of its cation as of its anion): at ${eq}, the salt's amount concentration is the strength${equivalentsPerMole === 1 ? '' : ` divided by ${equivalentsPerMole}`}`,
+    message: `the strength '${text.trim()}' is read as ${m.eq} of either ion of ${salt} per ${m.per} (a neutral salt carries as many of its cation as of its anion): at ${eq}, the salt's amount concentration is the strength${equivalentsPerMole === 1 ? '' : ` divided by ${equivalentsPerMole}`}`,
   });
   const perL = divide(q, quantity(exact(equivalentsPerMole), null));
   notes.push(strengthKindNote(text, measured));
