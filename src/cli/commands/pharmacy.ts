@@ -27,6 +27,13 @@ import { displayInstruction, massUnitFor } from '../../sigfig/instruction.js';
 import type { CommandRunner } from './runner.js';
 import { declarePharmacy } from './declarations.js';
 import { decimalCell } from '../output/format.js';
+import { inUnitOf, unitOf } from '../../sigfig/units.js';
+import type { Quantity } from '../../sigfig/quantity.js';
+
+/** A number cell of CSV/TSV: the exact decimal of the value in the column's unit (the README's CSV rule), not the display text. */
+function numberCell(q: Quantity, unit: string): string {
+  return decimalCell(inUnitOf(q.value, unitOf(unit)));
+}
 
 // --- meq --------------------------------------------------------------------------
 
@@ -48,8 +55,8 @@ export function meqPresenter(o: MeqCli): RowPresenter<MilliequivalentResult> {
     columns: strength ? ['input', 'line', 'salt', 'mmol_per_mL', 'mEq_per_mL', 'mEq_per_L', 'mOsm_per_L', 'saltHill'] : ['input', 'line', 'salt', 'mass_g', 'mmol', 'mEq', 'mOsm', 'saltHill'],
     cells: ({ input, line, r }) =>
       strength
-        ? [input, line, speciesText(r.salt), reportedIn(r.moles, 'M', rounding).reported, reportedIn(r.equivalents, 'M', rounding).reported, reportedIn(r.equivalents, 'mM', rounding).reported, reportedIn(r.osmoles, 'mM', rounding).reported, r.salt.formula]
-        : [input, line, speciesText(r.salt), reportedIn(r.mass!, 'g', rounding).reported, reportedIn(r.moles, 'mmol', rounding).reported, reportedIn(r.equivalents, 'mmol', rounding).reported, reportedIn(r.osmoles, 'mmol', rounding).reported, r.salt.formula],
+        ? [input, line, speciesText(r.salt), numberCell(r.moles, 'M'), numberCell(r.equivalents, 'M'), numberCell(r.equivalents, 'mM'), numberCell(r.osmoles, 'mM'), r.salt.formula]
+        : [input, line, speciesText(r.salt), numberCell(r.mass!, 'g'), numberCell(r.moles, 'mmol'), numberCell(r.equivalents, 'mmol'), numberCell(r.osmoles, 'mmol'), r.salt.formula],
     block: ({ input, r }) => {
       const head = `${input}  (${hillAside(r.salt)}M = ${displayMolarMass(r.salt)} g/mol): 1 mmol = ${r.ions.equivalentsPerMole} mEq = ${r.ions.particles} mOsm`;
       const ions = r.perIon.map((i) => `${i.ion} ${strength ? qtext(i.equivalents, 'mM', rounding, 'mEq/L') : qtext(i.equivalents, 'mmol', rounding, 'mEq')}`).join(', ');
@@ -89,12 +96,12 @@ export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityRe
     cells: ({ input, line, r }) => [
       input,
       line,
-      reportedIn(r.osmolarity, 'mM', rounding).reported,
-      r.saltOsmolarity ? reportedIn(r.saltOsmolarity, 'mM', rounding).reported : '',
-      r.nonElectrolyteOsmolarity ? reportedIn(r.nonElectrolyteOsmolarity, 'mM', rounding).reported : '',
+      numberCell(r.osmolarity, 'mM'),
+      r.saltOsmolarity ? numberCell(r.saltOsmolarity, 'mM') : '',
+      r.nonElectrolyteOsmolarity ? numberCell(r.nonElectrolyteOsmolarity, 'mM') : '',
       ...TABLE_IONS.map((f) => {
         const ion = r.ions.find((i) => i.ion.replace(/\^.*$/, '') === f);
-        return ion ? reportedIn(ion.equivalents, 'mM', rounding).reported : '';
+        return ion ? numberCell(ion.equivalents, 'mM') : '';
       }),
     ],
     block: ({ input, r }) => {
