@@ -9,8 +9,10 @@ import type { Decimal } from '../exact/decimal.js';
 import { typedIssue } from '../errors/message.js';
 import { MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
 import { partsPerAsMassPerVolume } from './parts-per.js';
-import { divide, multiply, subtract, type Quantity } from '../sigfig/quantity.js';
-import { baseUnitText, notReadHint, sameDims } from '../sigfig/units.js';
+import { divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
+import { baseUnitText, notReadHint, pow10, sameDims, unitOf } from '../sigfig/units.js';
+import { exact } from '../sigfig/measured.js';
+import { isChargePerVolume, readChargePerVolume } from '../pharmacy/equivalents-unit.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, volumeUnitFor, type Instruction } from '../sigfig/instruction.js';
 import { dilutionWarning } from './warnings.js';
 
@@ -97,10 +99,12 @@ export function dilute(stockText: string, targetText: string | undefined, volume
   if (opaque) {
     notes.push({ code: 'UNIT_NOT_CONVERTED', message: `${opaque.unit} is not a unit pondus reads, but the stock and the target are both in it: the dilution factor is their ratio, as C1·V1 = C2·V2 holds in any one unit; nothing is converted` });
   }
-  let stock = measureAs(opaque ? opaque.stock : stockText, kinds, 'the stock concentration', notes);
+  // equivalents per volume (2 mEq/mL to 20 mEq/L): like strengths, read as amounts of charge per volume
+  const charge = opaque ? null : chargeStrengths(stockText, targetText, notes);
+  let stock = charge ? charge.stock : measureAs(opaque ? opaque.stock : stockText, kinds, 'the stock concentration', notes);
   percentReading(stockText, targetText, notes);
   if (targetText === undefined && takenText === undefined) throw fail({ code: 'BAD_OPTION', message: 'give the target concentration, or the volume of stock taken (or both)' });
-  let target = targetText !== undefined ? measureAs(opaque ? opaque.target : targetText, kinds, 'the target concentration', notes) : null;
+  let target = charge ? charge.target : targetText !== undefined ? measureAs(opaque ? opaque.target : targetText, kinds, 'the target concentration', notes) : null;
   // ppm or ppb against a mass per volume (1000 ppm to 10.0 µg/L): the fraction read as mg/L or µg/L, with its note
   if (target && sameDims(stock.dims, PURE) && sameDims(target.dims, MASS_CONCENTRATION)) stock = partsPerAsMassPerVolume(stock, stockText, notes)?.conc ?? stock;
   if (target && sameDims(target.dims, PURE) && sameDims(stock.dims, MASS_CONCENTRATION)) target = partsPerAsMassPerVolume(target, targetText!, notes)?.conc ?? target;
@@ -108,7 +112,7 @@ export function dilute(stockText: string, targetText: string | undefined, volume
   const finalVolume = measureAs(volumeText, [VOLUME], 'the final volume', notes);
   if (stock.value.lte(0) || (target && target.value.lte(0)) || finalVolume.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'concentrations and volume must be positive' });
   if (target) refuseNotWeaker(stock.value, target.value, 'the stock');
-  if (sameDims(stock.dims, MOLARITY) && stock.value.gte(CONCENTRATED_MOLARITY)) {
+  if (!charge && sameDims(stock.dims, MOLARITY) && stock.value.gte(CONCENTRATED_MOLARITY)) {
     notes.push({ code: 'CONCENTRATED_STOCK', message: `the stock, ${stockText.trim()}, is concentrated: if it is an acid or a base, wear eye and hand protection, work in a fume hood, and add it slowly to most of the water (acid to water, never water to acid), cooling, before making up to volume (common practice); follow its SDS` });
   }
 
@@ -136,11 +140,36 @@ export function dilute(stockText: string, targetText: string | undefined, volume
     if (taken.value.gt(finalVolume.value)) throw fail({ code: 'BAD_AMOUNT', message: 'the volume taken is more than the final volume' });
     made = divide(multiply(stock, taken), finalVolume);
     made.unit = stock.unit;
+    // in equivalents: the number in the stock's unit as written, as for a unit carried through unconverted
+    if (charge) {
+      made = multiply(made, quantity(exact(pow10(-charge.stockExp10)), null));
+      made.unit = null;
+    }
     if (!factor) factor = divide(finalVolume, taken);
     notes.push({ code: 'MADE_FROM_TAKEN', message: `the concentration made is computed from the volume taken, ${takenText.trim()}: a result, with the figures of the measurements` });
   }
   const written = { stock: stockText.trim(), target: targetText?.trim() ?? null, volume: volumeText.trim(), taken: takenText?.trim() ?? null };
   return { stock, target, finalVolume, stockVolume, solventVolume, factor: factor!, taken, made, written, notes };
+}
+
+/**
+ * A stock and a target in equivalents per volume ('2 mEq/mL' to '20 mEq/L', '20 meq/l'), read as
+ * amounts of charge per volume (held in mol/L) with a note; null when neither is in equivalents.
+ * One in equivalents and the other in mol or g is refused: the conversion needs the salt's charge.
+ */
+function chargeStrengths(stockText: string, targetText: string | undefined, notes: Note[]): { stock: Quantity; target: Quantity | null; stockExp10: number } | null {
+  const s = isChargePerVolume(stockText);
+  const t = targetText !== undefined && isChargePerVolume(targetText);
+  if (!s && !t) return null;
+  if (targetText !== undefined && s !== t) {
+    const [eq, other] = s ? [stockText, targetText] : [targetText, stockText];
+    throw fail({ code: 'INCOMPATIBLE_UNITS', message: `the ${s ? 'stock' : 'target'}, '${eq.trim()}', is in equivalents and the ${s ? 'target' : 'stock'}, '${other.trim()}', is not: equivalents and moles or grams convert only through the salt's charge (mEq per mmol); give both in equivalents, or convert one first with \`milliequivalents\``, functions: ['milliequivalents'] }, s ? targetText : stockText);
+  }
+  const stock = readChargePerVolume(stockText, 'the stock concentration', notes)!;
+  const target = targetText !== undefined ? readChargePerVolume(targetText, 'the target concentration', notes)! : null;
+  notes.push({ code: 'EQUIVALENTS_DILUTED', message: `the stock${target ? ' and the target are' : ' is'} read in equivalents per volume (${stock.eq}/${stock.per}${target ? `, ${target.eq}/${target.per}` : ''}): the dilution factor is the ratio of the two amounts of charge per volume, for whatever salt it is` });
+  const stockExp10 = unitOf(`${stock.eq.replace(/[Ee]q$/, '')}mol`).exp10 - unitOf(stock.per).exp10;
+  return { stock: stock.value, target: target?.value ?? null, stockExp10 };
 }
 
 /**
