@@ -116,7 +116,7 @@ const MESSAGES: { [C in TypedCode]: Render<C> } = {
   },
   COUNT_TOO_LARGE: (f) => `count ${f.count} is too large; counts go up to ${grouped(f.limit)}`,
   BAD_CHARGE: (f) => (Number(f.charge) === 0 ? 'a charge of zero; leave it out' : `charge ${f.charge} is out of range (at most ${f.limit})`),
-  AMBIGUOUS_CHARGE: (f) => `the '${f.written}' after '${f.digits}' could mean a charge of 1${f.sign} or of ${f.digits}${f.sign}`,
+  AMBIGUOUS_CHARGE: (f) => `the '${f.written}' after '${f.digits}' leaves unclear which of the digits are a count and which a charge`,
   MISPLACED_CHARGE: (f, c) =>
     f.following === null
       ? `a charge must come at the end of the formula, after a symbol, count or bracket; unexpected '${f.charge}'${at(c)}`
@@ -190,6 +190,29 @@ export function messageFor(issue: Issue, naming: OptionNaming = LIBRARY_NAMING):
 }
 
 /**
+ * An issue in one line, as a CSV or TSV message cell writes it: the message with the column it is
+ * about once, at its end (`(column N)`; a message made from its fields is made without its own
+ * "at column N" for that, one reworded or written by hand keeps its words and gets none when it
+ * names a column already), then the hint, when there is one (`; hint: …`).
+ *
+ * @example
+ * issueLine(typedIssue({ code: 'UNCLOSED_GROUP', bracket: '(', column: 3, length: 1 })) // "'(' is never closed (column 3)"
+ * issueLine({ code: 'BAD_OPTION', message: 'no such form', hint: 'give `density`', options: ['density'] }) // 'no such form; hint: give `density`'
+ */
+export function issueLine(issue: Issue, naming: OptionNaming = LIBRARY_NAMING): string {
+  const column = issue.column;
+  let text: string;
+  if (column !== undefined && hasFields(issue) && issue.message === (MESSAGES[issue.code] as Render<TypedCode>)(issue as IssueFields[TypedCode], column)) {
+    text = `${nameOptions((MESSAGES[issue.code] as Render<TypedCode>)(issue as IssueFields[TypedCode], undefined), issue, naming)} (column ${column})`;
+  } else {
+    const message = messageFor(issue, naming);
+    text = column === undefined || /\bcolumns? \d/.test(message) ? message : `${message} (column ${column})`;
+  }
+  const hint = hintFor(issue, naming);
+  return hint === undefined ? text : `${text}; hint: ${hint}`;
+}
+
+/**
  * An issue's hint with the options it names named by `naming`, or undefined when it has none.
  *
  * @example
@@ -197,6 +220,26 @@ export function messageFor(issue: Issue, naming: OptionNaming = LIBRARY_NAMING):
  */
 export function hintFor(issue: Issue, naming: OptionNaming = LIBRARY_NAMING): string | undefined {
   return issue.hint === undefined ? undefined : nameOptions(issue.hint, issue, naming);
+}
+
+/**
+ * The hint for a bare sign after digits (AMBIGUOUS_CHARGE): the same text written each way its
+ * digits split into a count and a charge, in the order given (the likeliest first), each with its
+ * reading. `head` is the formula before the digits; a reading's `count` is '' for none, its
+ * `charge` '' for a charge of 1. It offers only readings of the text as written, never another
+ * formula.
+ *
+ * @example
+ * chargeReadingsHint('SO', '-', [{ count: '4', charge: '2' }, { count: '42', charge: '' }, { count: '', charge: '42' }])
+ * // 'write SO4^2- (count 4, charge 2-), SO42^- (count 42, charge 1-) or SO^42- (charge 42-)'
+ */
+export function chargeReadingsHint(head: string, sign: '+' | '-', readings: readonly { count: string; charge: string }[]): string {
+  const each = readings.map((r) => {
+    const how = `${r.count === '' ? '' : `count ${r.count}, `}charge ${r.charge === '' ? '1' : r.charge}${sign}`;
+    return `${head}${r.count}^${r.charge}${sign} (${how})`;
+  });
+  const listed = each.length <= 1 ? each.join('') : `${each.slice(0, -1).join(', ')} or ${each[each.length - 1]}`;
+  return `write ${listed}`;
 }
 
 /**

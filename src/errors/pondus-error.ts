@@ -1,4 +1,4 @@
-import type { Issue } from './issue.js';
+import type { Issue, Note } from './issue.js';
 
 /**
  * Most issues one error carries. A reader that finds more keeps the first ones (in the order of
@@ -21,14 +21,20 @@ export class PondusError extends Error {
   readonly input: string | undefined;
   /** True when the input had more issues than {@link MAX_ISSUES} and only the first are kept. */
   readonly more: boolean;
+  /**
+   * What was noted about the input before it failed (a `.` read as the addition dot, an
+   * abbreviation expanded): a failed row carries these as an ok row carries its notes.
+   */
+  readonly notes: readonly Note[];
 
-  constructor(issues: Issue[], input?: string) {
+  constructor(issues: Issue[], input?: string, notes: readonly Note[] = []) {
     const kept = issues.length > MAX_ISSUES ? issues.slice(0, MAX_ISSUES) : issues;
     super(kept.map((i) => i.message).join('; '));
     this.name = 'PondusError';
     this.issues = kept;
     this.input = input;
     this.more = kept !== issues;
+    this.notes = notes;
   }
 
   /** The first issue, the one shown when only one is shown. */

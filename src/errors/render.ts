@@ -1,5 +1,5 @@
 import type { Issue, LibraryFunction } from './issue.js';
-import { hintFor, LIBRARY_NAMING, messageFor, type OptionNaming } from './message.js';
+import { hintFor, LIBRARY_NAMING, messageFor, noteText, type OptionNaming } from './message.js';
 import { PondusError } from './pondus-error.js';
 
 /** Options whose flag is not their name in kebab case: `amounts` (a list) is given one `--amount` at a time. */
@@ -168,15 +168,25 @@ function issueJson(i: Issue, naming: OptionNaming): IssueJson {
 
 /**
  * The fields of a failed row after its identification: `error` (the first issue, as before there
- * was a list), `errors` (every issue), and `errorsTruncated: true` when the input had more than
- * are kept. The one place the error part of a JSON row is made.
+ * was a list), `errors` (every issue), `errorsTruncated: true` when the input had more than
+ * are kept, and `notes` (what was noted about the input before it failed; `[]` when nothing was),
+ * as every row carries them. The one place the error part of a JSON row is made.
  *
  * @example
- * Object.keys(errorRowFields(safeParseFormula('XxQq').error)) // ['error', 'errors']
+ * Object.keys(errorRowFields(safeParseFormula('XxQq').error)) // ['error', 'errors', 'notes']
  */
-export function errorRowFields(error: PondusError, naming: OptionNaming = LIBRARY_NAMING): { error: IssueJson; errors: IssueJson[]; errorsTruncated?: true } {
+export function errorRowFields(error: PondusError, naming: OptionNaming = LIBRARY_NAMING): ErrorRowFields {
   const errors = errorsJson(error, naming);
-  const o: { error: IssueJson; errors: IssueJson[]; errorsTruncated?: true } = { error: errors[0], errors };
-  if (error.more) o.errorsTruncated = true;
-  return o;
+  // notes last, as in an ok row: every row carries them, [] when there are none
+  const notes = error.notes.map((n) => ({ code: n.code, message: noteText(n, naming) }));
+  return error.more ? { error: errors[0], errors, errorsTruncated: true, notes } : { error: errors[0], errors, notes };
+}
+
+/** The error part of a failed JSON row: the first issue, every issue, and the notes made before the input failed. */
+export interface ErrorRowFields {
+  error: IssueJson;
+  errors: IssueJson[];
+  errorsTruncated?: true;
+  /** What was noted about the input before it failed, as an ok row's notes ([] when nothing). */
+  notes: { code: string; message: string }[];
 }

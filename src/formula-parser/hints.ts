@@ -389,3 +389,41 @@ export function formulaReadings(input: string, parses: (s: string) => boolean): 
   if (first >= 0) candidates.add(build((i) => (i === first ? options[i][1] : options[i][0])));
   return [...candidates].filter((c) => c !== input && parses(c)).slice(0, 2);
 }
+
+/** One way to split the digits before a bare sign: the count they end with ('' for none) and the charge's digits ('' for 1). */
+export interface ChargeReading {
+  count: string;
+  charge: string;
+}
+
+/**
+ * Every way the digits written before a bare sign split into a count and a charge (`SO42-`: count
+ * 4 and charge 2-, count 42 and charge 1-, or charge 42-), the likeliest first, and only the
+ * splits the formula language reads (no leading zero, a charge of at most `maxCharge`, a count
+ * after a decimal point). The order is common practice: with two or more digits the last is the
+ * charge and the rest the count (SO4^2-, Hg2^2+, Fe(CN)6^4-); with one digit after a lone atom it
+ * is the charge (Fe^3+, N^3-), after anything longer the count (NH4^+, NO3^-). Then the count of
+ * every digit with a charge of 1, then the other splits, longer counts first; a charge of all the
+ * digits comes last.
+ *
+ * @param digits - the digits between the last symbol or bracket and the sign.
+ * @param loneAtom - true when the formula is one atom with these digits as its count.
+ * @param afterPoint - true when the digits follow a decimal point (the count cannot be empty).
+ * @example
+ * chargeReadings('42', false, false, 99) // [{ count: '4', charge: '2' }, { count: '42', charge: '' }, { count: '', charge: '42' }]
+ * chargeReadings('3', true, false, 99)   // [{ count: '', charge: '3' }, { count: '3', charge: '' }]
+ */
+export function chargeReadings(digits: string, loneAtom: boolean, afterPoint: boolean, maxCharge: number): ChargeReading[] {
+  const all: ChargeReading[] = [];
+  for (let k = digits.length; k >= 0; k--) {
+    const count = digits.slice(0, k);
+    const charge = digits.slice(k);
+    if (count === '' && afterPoint) continue;
+    if (count !== '' && (count[0] === '0' || /^0+$/.test(count))) continue;
+    if (charge !== '' && (charge[0] === '0' || charge.length > 2 || Number(charge) > maxCharge)) continue;
+    all.push({ count, charge });
+  }
+  // all: the count of every digit first, then longer counts first, the charge of every digit last
+  const first = digits.length >= 2 ? all.find((r) => r.charge.length === 1 && r.count !== '') : loneAtom ? all.find((r) => r.count === '') : all[0];
+  return first === undefined ? all : [first, ...all.filter((r) => r !== first)];
+}

@@ -122,6 +122,8 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
   }
 
   const built = buildTree(cst, text, expandAbbreviation);
+  // what a failed reading carries: the notes made so far, and the state symbol set aside
+  const noted = (more: Note[] = []): Note[] => (state ? [...built.notes, ...more, stateNote(input, state)] : [...built.notes, ...more]);
   if (built.issues.length > 0) {
     // the first few unknown symbols get a hint that looks at the whole formula; the rest keep the visitor's short one
     lookForHints(() => {
@@ -133,28 +135,33 @@ export function parseWithGrammar(input: string, options: ParseOptions = {}): For
         if (hint?.includes('`abbreviations')) unknown.options = ['abbreviations'];
       }
     });
-    throw new PondusError(built.issues, input);
+    throw new PondusError(built.issues, input, noted());
   }
   const leading = leadingNumberIssues(built.components, text);
-  if (leading.length > 0) throw new PondusError(leading, input);
+  if (leading.length > 0) throw new PondusError(leading, input, noted());
   if (mode !== 'elements') {
     const names = ligandNameIssues(text);
-    if (names.length > 0) throw new PondusError(names, input);
+    if (names.length > 0) throw new PondusError(names, input, noted());
   }
   const notes: Note[] = built.notes;
   if (mode === 'plain') {
     const settled = settleReadings(built.components, text);
-    if (settled.issues.length > 0) throw new PondusError(settled.issues, input);
+    if (settled.issues.length > 0) throw new PondusError(settled.issues, input, noted(settled.notes));
     notes.push(...settled.notes);
   } else if (mode === 'abbreviations') {
     const mixtures = mixtureRefusals(built.components, text);
-    if (mixtures.length > 0) throw new PondusError(mixtures, input);
+    if (mixtures.length > 0) throw new PondusError(mixtures, input, noted());
   }
-  if (state) notes.push({ code: 'STATE_SYMBOL', message: `'${state.symbol}' is a state symbol (${STATES[state.letters]}) and is set aside`, column: columnOf(input, state.offset) });
+  if (state) notes.push(stateNote(input, state));
   return { kind: 'formula', input, components: built.components, charge: built.charge, notes };
 }
 
 const STATES: Record<string, string> = { s: 'solid', l: 'liquid', g: 'gas', aq: 'aqueous solution' };
+
+/** The note that a trailing state symbol is set aside. */
+function stateNote(input: string, state: { offset: number; symbol: string; letters: string }): Note {
+  return { code: 'STATE_SYMBOL', message: `'${state.symbol}' is a state symbol (${STATES[state.letters]}) and is set aside`, column: columnOf(input, state.offset) };
+}
 
 /** A trailing state symbol, `(s)`, `(l)`, `(g)` or `(aq)`, in lower case (`(S)` is sulfur). */
 function stateSymbol(input: string): { offset: number; symbol: string; letters: string } | null {

@@ -5,13 +5,13 @@
 import type { IToken } from 'chevrotain';
 import type { AtomCstNode, BodyCstNode, ChargeCstNode, ComponentCstNode, CountCstNode, FormulaCstNode, GroupCstNode, PartCstNode } from './cst.js';
 import type { Issue, Note, TypedIssue } from '../errors/issue.js';
-import { typedIssue } from '../errors/message.js';
+import { chargeReadingsHint, typedIssue } from '../errors/message.js';
 import { lcm } from '../exact/gcd.js';
 import { getElement, isElementSymbol } from '../elements/element-table.js';
 import { ABBREVIATION_CLASHES, ABBREVIATIONS, REFUSED_ABBREVIATIONS } from './abbreviations.js';
 import { REAGENTS } from './names.js';
 import { getNuclide } from '../elements/nuclides.js';
-import { caseTrapNotes, unknownSymbolHint } from './hints.js';
+import { caseTrapNotes, chargeReadings, unknownSymbolHint } from './hints.js';
 import { columnOf } from './prescan.js';
 import { end as endOf, type AtomNode, type ComponentNode, type CountNode, type GroupNode, type PartNode, type Span } from './tree.js';
 
@@ -108,7 +108,7 @@ function formula(b: Build, node: FormulaCstNode): { components: ComponentNode[];
   const ch = node.children;
   const components = body(b, ch.body[0]);
   const c = ch.charge?.[0];
-  return { components, charge: c ? charge(b, c) : 0 };
+  return { components, charge: c ? charge(b, c, components) : 0 };
 }
 
 function body(b: Build, node: BodyCstNode): ComponentNode[] {
@@ -322,7 +322,7 @@ function countOf(b: Build, text: string, t: IToken): CountNode {
   return { text: normal ? `${int}.${normal}` : int, integer: normal === '', span };
 }
 
-function charge(b: Build, node: ChargeCstNode): number {
+function charge(b: Build, node: ChargeCstNode, components: ComponentNode[]): number {
   const ch = node.children;
   const t = (ch.CaretCharge ?? ch.SuperscriptCharge ?? ch.Sign)![0];
   const len = endOf(t) - t.startOffset;
@@ -332,8 +332,13 @@ function charge(b: Build, node: ChargeCstNode): number {
     if (digits) {
       const head = before.slice(0, before.length - digits[0].length);
       const sign = t.image === '+' ? '+' : '-';
-      typed(b, { code: 'AMBIGUOUS_CHARGE', written: t.image, digits: digits[0], sign }, t.startOffset, 1,
-        `write ${head}${digits[0]}^${sign} for a charge of 1${sign}, or ${head}^${digits[0]}${sign} for ${digits[0]}${sign}`);
+      // every split of the digits into a count and a charge, the likeliest first (SO4^2- for SO42-)
+      const parts = components.length === 1 ? components[0].parts : [];
+      const loneAtom = parts.length === 1 && parts[0].kind === 'atom';
+      // after a decimal point the count is the whole decimal (C2.53+: 2.5 and 3+, or 2.53 and 1+)
+      const point = /[0-9]+\.$/.exec(head)?.[0] ?? '';
+      const readings = chargeReadings(digits[0], loneAtom, point !== '', MAX_CHARGE).map((r) => ({ ...r, count: point + r.count }));
+      typed(b, { code: 'AMBIGUOUS_CHARGE', written: t.image, digits: digits[0], sign }, t.startOffset, 1, chargeReadingsHint(head.slice(0, head.length - point.length), sign, readings));
       return 0;
     }
   }

@@ -21,11 +21,22 @@ describe('JSON error rows', () => {
     const r = pondus(['mass', '--json', 'XxQq']);
     expect(r.status).toBe(1);
     const [row] = jsonLines(r.stdout);
-    expect(Object.keys(row)).toEqual(['line', 'input', 'error', 'errors']);
+    expect(Object.keys(row)).toEqual(['line', 'input', 'error', 'errors', 'notes']);
+    expect(row.notes).toEqual([]);
     expect(row.line).toBe(1);
     expect(row.input).toBe('XxQq');
     expect(row.error).toEqual({ code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Xx'", column: 1 });
     expect(row.errors.map((e: { code: string; column: number }) => [e.code, e.column])).toEqual([['UNKNOWN_ELEMENT', 1], ['UNKNOWN_ELEMENT', 3]]);
+  });
+
+  it('a failed row keeps the notes made before it failed: the dot read as the addition dot', () => {
+    // source: PRODUCT.md's rule that every row carries its notes; the dot is read as in Na2CO3·10H2O (common practice)
+    const [row] = jsonLines(pondus(['mass', '--json', 'Na2CO3.10H2O.Xx']).stdout);
+    expect(row.error.code).toBe('UNKNOWN_ELEMENT');
+    expect(row.notes.map((n: { code: string }) => n.code)).toEqual(['DOT_AS_ADDITION']);
+    expect(row.notes[0].message).toContain("'.' at column 7 is read as the addition dot");
+    const [state] = jsonLines(pondus(['mass', '--json', 'Xx(aq)']).stdout);
+    expect(state.notes.map((n: { code: string }) => n.code)).toEqual(['STATE_SYMBOL']);
   });
 
   it('ok and error rows of one batch start with line alike', () => {
@@ -41,9 +52,30 @@ describe('CSV error rows', () => {
     expect(lines[1]).toBe("XxQq,1,,,,,,,UNKNOWN_ELEMENT,UNKNOWN_ELEMENT: unknown element symbol 'Xx' (column 1) | UNKNOWN_ELEMENT: unknown element symbol 'Qq' (column 3)");
   });
 
-  it('one issue: its code alone, and its message with the column it names', () => {
+  it('one issue: its code alone, and its message with its column once, at the end', () => {
     const lines = pondus(['mass', '--csv', 'H2O', 'Ca(OH2']).stdout.trim().split('\n');
-    expect(lines[2]).toBe("Ca(OH2,2,,,,,,,UNCLOSED_GROUP,'(' at column 3 is never closed");
+    expect(lines[2]).toBe("Ca(OH2,2,,,,,,,UNCLOSED_GROUP,'(' is never closed (column 3)");
+  });
+
+  it('several issues: each with its column once, at the end of its message', () => {
+    const lines = pondus(['mass', '--csv', 'Xy(Qq']).stdout.trim().split('\n');
+    expect(lines[1]).toBe("Xy(Qq,1,,,,,,,UNKNOWN_ELEMENT,UNKNOWN_ELEMENT: unknown element symbol 'Xy' (column 1) | UNCLOSED_GROUP: '(' is never closed (column 3) | UNKNOWN_ELEMENT: unknown element symbol 'Qq' (column 4)");
+    const mismatched = pondus(['mass', '--csv', 'K4[Fe(CN)6)']).stdout.trim().split('\n')[1];
+    expect(mismatched.endsWith("')' closes '[' from column 3; expected ']' (column 11)")).toBe(true);
+  });
+
+  it('the hint follows the message, in CSV and TSV, its options named as flags', () => {
+    const [, acoh, so4] = pondus(['mass', '--csv', 'AcOH', 'SO4-2']).stdout.trim().split('\n');
+    expect(acoh).toContain('(column 1); hint: to read Ac as acetyl, read abbreviations with --abbreviations;');
+    expect(so4).toContain('(column 4); hint: for a charge of 2−, write SO4^2-');
+    const tsv = pondus(['mass', '--tsv', 'SO42-']).stdout.trim().split('\n')[1].split('\t');
+    expect(tsv[tsv.length - 1]).toContain('; hint: write SO4^2- (count 4, charge 2-)');
+  });
+
+  it('a failed row keeps its notes in the notes column', () => {
+    const [head, row] = pondus(['mass', '--tsv', 'Na2CO3.10H2O.Xx']).stdout.trim().split('\n').map((l) => l.split('\t'));
+    expect(row[head.indexOf('notes')]).toMatch(/^DOT_AS_ADDITION: '\.' at column 7 is read as the addition dot/);
+    expect(row[head.indexOf('error')]).toBe('UNKNOWN_ELEMENT');
   });
 
   it('titration --csv: a failed input fills the line column', () => {
@@ -68,7 +100,7 @@ describe('sheet error rows are named as the ok rows of the same sheet are', () =
   it.each(SHEETS)('%s --sheet: line, then the same identifying keys', (command, file, keys) => {
     const [ok, bad] = jsonLines(pondus([command, '--sheet', file, '--json']).stdout);
     expect(Object.keys(ok).slice(0, keys.length + 1)).toEqual(['line', ...keys]);
-    expect(Object.keys(bad)).toEqual(['line', ...keys, 'error', 'errors']);
+    expect(Object.keys(bad)).toEqual(['line', ...keys, 'error', 'errors', 'notes']);
     expect(bad.line).toBe(3);
     expect(bad.id).toMatch(/^[A-Z]-?[0-9]+$/);
     expect(bad.id.slice(0, 1)).toBe(ok.id.slice(0, 1));

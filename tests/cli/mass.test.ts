@@ -34,7 +34,7 @@ describe('pondus mass', () => {
     expect(out).toHaveLength(5);
     expect(out.map((o) => o.input)).toEqual(['H2O', 'NaCl', 'Xx2', '', 'C6H12O6']);
     const xx = { code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Xx'", column: 1 };
-    expect(out[2]).toEqual({ line: 3, input: 'Xx2', error: xx, errors: [xx] });
+    expect(out[2]).toEqual({ line: 3, input: 'Xx2', error: xx, errors: [xx], notes: [] });
     expect(out[3].error.code).toBe('EMPTY_INPUT');
     expect(out[4].molarMass).toBe(180.156);
     expect(r.stderr).toContain('2 of 5 inputs failed (lines 3, 4)');

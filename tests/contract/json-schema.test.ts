@@ -142,12 +142,17 @@ describe('the schemas reject rows that break the contract', () => {
   it('accepts a good row and an error row', () => {
     expect(v()(good)).toBe(true);
     const qq = { code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Qq'", column: 1 };
-    expect(v()({ line: 2, input: 'Qq', error: qq, errors: [qq] })).toBe(true);
+    expect(v()({ line: 2, input: 'Qq', error: qq, errors: [qq], notes: [] })).toBe(true);
+  });
+  it('requires the notes of an error row, as of every row', () => {
+    const qq = { code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Qq'", column: 1 };
+    expect(v()({ line: 2, input: 'Qq', error: qq, errors: [qq] })).toBe(false);
+    expect(v()({ line: 2, input: 'Qq.H2O', error: qq, errors: [qq], notes: [{ code: 'DOT_AS_ADDITION', message: 'read as the addition dot' }] })).toBe(true);
   });
   it('requires every issue of an error row in errors', () => {
     const qq = { code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Qq'", column: 1 };
-    expect(v()({ line: 2, input: 'Qq', error: qq })).toBe(false);
-    expect(v()({ line: 2, input: 'Qq', error: qq, errors: [] })).toBe(false);
+    expect(v()({ line: 2, input: 'Qq', error: qq, notes: [] })).toBe(false);
+    expect(v()({ line: 2, input: 'Qq', error: qq, errors: [], notes: [] })).toBe(false);
   });
   it.each([
     ['notes missing', { ...good, notes: undefined }],

@@ -2,7 +2,7 @@
 // them alone by messageFor (the codes and wording are pondus's own).
 import { describe, expect, it } from 'vitest';
 import { hasFields, type Issue, type TypedCode } from '../../src/errors/issue.js';
-import { hintFor, messageFor, typedIssue } from '../../src/errors/message.js';
+import { hintFor, issueLine, messageFor, typedIssue } from '../../src/errors/message.js';
 import { PondusError } from '../../src/errors/pondus-error.js';
 import { FLAG_NAMING } from '../../src/errors/render.js';
 import { parseFormula } from '../../src/formula-parser/parse.js';
@@ -84,5 +84,21 @@ describe('typed issues of the formula reader', () => {
     expect(hintFor(i, FLAG_NAMING)).toBe('read with --abbreviations');
     // a name not listed in options is left alone
     expect(messageFor({ code: 'BAD_OPTION', message: 'see `density`' }, FLAG_NAMING)).toBe('see `density`');
+  });
+});
+
+describe('an issue in one line, as a CSV message cell has it', () => {
+  it('gives the column once, at the end, whether or not the message names it', () => {
+    // common practice of this contract: one form for every issue, the column never twice
+    expect(issueLine(issuesOf('Ca(OH2')[0])).toBe("'(' is never closed (column 3)");
+    expect(issueLine(issuesOf('Xx2')[0])).toBe("unknown element symbol 'Xx' (column 1)");
+    expect(issueLine({ code: 'BAD_RECORD', message: 'a bad cell at column 4', column: 4 })).toBe('a bad cell at column 4');
+    expect(issueLine({ code: 'BAD_RECORD', message: 'a bad cell', column: 4 })).toBe('a bad cell (column 4)');
+  });
+
+  it('adds the hint, its options named as the reader names them', () => {
+    const flags = { option: (n: string) => `--${n}`, command: (f: string) => f };
+    expect(issueLine({ code: 'BAD_OPTION', message: 'no form', hint: 'give `density`', options: ['density'] }, flags)).toBe('no form; hint: give --density');
+    expect(issueLine(issuesOf('SO42-')[0])).toBe("the '-' after '42' leaves unclear which of the digits are a count and which a charge (column 5); hint: write SO4^2- (count 4, charge 2-), SO42^- (count 42, charge 1-) or SO^42- (charge 42-)");
   });
 });

@@ -29,7 +29,9 @@ describe('error rendering', () => {
     expect(errorJson(e)).toEqual({ code: 'UNKNOWN_ELEMENT', message: "unknown element symbol 'Xx'", column: 1 });
     expect(errorsJson(e).map((i) => i.column)).toEqual([1, 3]);
     const fields = errorRowFields(e);
-    expect(Object.keys(fields)).toEqual(['error', 'errors']);
+    // every row carries notes, a failed one too: [] when nothing was noted (common practice of this contract)
+    expect(Object.keys(fields)).toEqual(['error', 'errors', 'notes']);
+    expect(fields.notes).toEqual([]);
     expect(fields.errors[0]).toEqual(fields.error);
     expect(errorRowFields(errorOf('Xx'.repeat(100))).errorsTruncated).toBe(true);
   });

@@ -59,9 +59,10 @@ describe('parse errors name the problem and the column', () => {
     expect(issue('DMF').hint).toContain('N,N-dimethylformamide (C3H7NO)');
   });
 
-  it('offers both readings of an ambiguous charge', () => {
+  it('offers every reading of an ambiguous charge, ammonium first', () => {
+    // source: NH4^+ is the ammonium ion (IUPAC Red Book, from memory); NH^4+ is the other split of the same text
     const i = issue('NH4+');
-    expect(i.hint).toBe('write NH4^+ for a charge of 1+, or NH^4+ for 4+');
+    expect(i.hint).toBe('write NH4^+ (count 4, charge 1+) or NH^4+ (charge 4+)');
   });
 
   it('counts columns in characters, not UTF-16 units', () => {
@@ -78,5 +79,20 @@ describe('an alkyl prefix written with a hyphen', () => {
       if (!r.success) expect(r.error.issues[0].hint).toBe(`write the alkyl prefix without the hyphen: ${joined}`);
       expect(safeParseFormula(joined).success).toBe(true);
     }
+  });
+});
+
+describe('a refused formula keeps what was noted before it failed', () => {
+  it('the addition dot, the state symbol set aside; none for a plain failure', () => {
+    // common practice: '.' between two formulas is the addition dot (Na2CO3·10H2O)
+    const dot = safeParseFormula('Na2CO3.10H2O.Xx');
+    expect(dot.success).toBe(false);
+    if (!dot.success) expect(dot.error.notes.map((n) => n.code)).toEqual(['DOT_AS_ADDITION']);
+    const state = safeParseFormula('Xx(aq)');
+    if (!state.success) expect(state.error.notes.map((n) => n.code)).toEqual(['STATE_SYMBOL']);
+    expect(state.success).toBe(false);
+    const plain = safeParseFormula('Xx2');
+    if (!plain.success) expect(plain.error.notes).toEqual([]);
+    expect(plain.success).toBe(false);
   });
 });

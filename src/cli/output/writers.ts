@@ -4,7 +4,7 @@
  */
 import type { Style } from './style.js';
 import { errorRowFields, FLAG_NAMING, renderError } from '../../errors/render.js';
-import { messageFor, noteText } from '../../errors/message.js';
+import { issueLine, noteText } from '../../errors/message.js';
 import type { PondusError } from '../../errors/pondus-error.js';
 import type { InputItem } from '../input/inputs.js';
 import { delimitedCell, guardCell, notesCell, visibleControls, type Cell, type OutputFormat } from './format.js';
@@ -178,6 +178,8 @@ class DelimitedWriter<R> implements ResultWriter<R> {
     // the input's identification in the columns of the same names, its line in the `line`
     // column, and every issue, joined as notes are
     const cells = new Array<Cell>(this.header.length + (this.ownNotes ? 0 : 1)).fill('');
+    // the notes made before the input failed, in the notes column, as an ok row has them
+    cells[this.ownNotes ? this.header.indexOf('notes') : this.header.length] = notesCell(error.notes.map(flagWords));
     const ids = identityOf(item);
     for (const [k, v] of ids) {
       const at = this.header.indexOf(k);
@@ -185,9 +187,10 @@ class DelimitedWriter<R> implements ResultWriter<R> {
     }
     cells[this.header.indexOf('line')] = item.line;
     // the error cell holds one code, the first (as JSON's `error`), so a sheet can filter on it; the
-    // message cell holds every issue, each with its code when there are several, and its column
+    // message cell holds every issue, each with its code when there are several, its column once
+    // and its hint
     const several = error.issues.length > 1;
-    const messages = error.issues.map((i) => `${several ? `${i.code}: ` : ''}${withColumn(messageFor(i, FLAG_NAMING), i.column)}`).join(' | ') + (error.more ? ' | … and more' : '');
+    const messages = error.issues.map((i) => `${several ? `${i.code}: ` : ''}${issueLine(i, FLAG_NAMING)}`).join(' | ') + (error.more ? ' | … and more' : '');
     this.write([...cells, error.first.code, messages], true);
   }
   endBatch(): void {
@@ -206,8 +209,6 @@ class DelimitedWriter<R> implements ResultWriter<R> {
   }
 }
 
-/** A message with the column it is about, unless it names a column already. */
-const withColumn = (message: string, column: number | undefined): string => (column === undefined || /\bcolumns? \d/.test(message) ? message : `${message} (column ${column})`);
 
 const MAX_TABLE_NOTES = 1000;
 // eslint-disable-next-line no-control-regex
