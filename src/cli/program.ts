@@ -109,7 +109,12 @@ export async function runProgram(args: string[], io: CliIo, commands: CommandSet
       if (format === 'table') out.write(line);
       else err.write(`pondus: ${line}`);
     }
-    if (summary.failed > 0) {
+    if (summary.total === 0) {
+      // an empty file piped in gives no row at all: said, and the usage status, as for no arguments
+      const where = source ? 'the sheet has no rows' : 'standard input was empty';
+      err.write(`pondus: no inputs: ${where}, so nothing was read\n`);
+      status = 2;
+    } else if (summary.failed > 0) {
       // an input refused for the options given (a conflict only its reading shows) is a usage error
       status = summary.usage ? 2 : 1;
       if (format !== 'table' || summary.total > 1) {

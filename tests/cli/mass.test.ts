@@ -40,6 +40,20 @@ describe('pondus mass', () => {
     expect(r.stderr).toContain('2 of 5 inputs failed (lines 3, 4)');
   });
 
+  it('empty standard input is said and is a usage error (exit 2), as no arguments are; a blank line is an input', () => {
+    // source: README "Exit status" (2: no inputs); common practice for a batch, where an empty file piped in must not pass for success
+    for (const format of ['--json', '--csv']) {
+      const r = pondus(['mass', format, '-'], '');
+      expect(r.status).toBe(2);
+      expect(r.stderr).toContain('pondus: no inputs: standard input was empty, so nothing was read');
+      expect(r.stdout).not.toContain('{');
+    }
+    const withArgument = pondus(['mass', '--json', 'H2O', '-'], '');
+    expect(withArgument.status).toBe(0);
+    expect(jsonLines(withArgument.stdout)).toHaveLength(1);
+    expect(pondus(['mass', '--json', '-'], '\n').status).toBe(1);
+  });
+
   it('handles CRLF line ends and a byte-order mark', () => {
     const r = pondus(['mass', '--json', '-'], '\ufeffH2O\r\nNaCl\r\n');
     expect(jsonLines(r.stdout).map((o) => o.formula)).toEqual(['H2O', 'ClNa']);
