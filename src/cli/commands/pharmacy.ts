@@ -5,11 +5,12 @@
  */
 import { hillAside, speciesText } from '../../preparation/species.js';
 import type { Command } from 'commander';
-import { fail } from '../../errors/pondus-error.js';
+import { fail, PondusError } from '../../errors/pondus-error.js';
+import type { Issue } from '../../errors/issue.js';
 import { alligation, type AlligationResult } from '../../pharmacy/alligation.js';
 import { PHARMACY_CAUTION, POTENCY_CAUTION } from '../../pharmacy/caution.js';
 import { milliequivalents, type MilliequivalentOptions, type MilliequivalentResult } from '../../pharmacy/milliequivalents.js';
-import { osmolarity, type OsmolarityResult } from '../../pharmacy/osmolarity.js';
+import { osmolarity, type OsmolarityOptions, type OsmolarityResult } from '../../pharmacy/osmolarity.js';
 import { meqJson } from '../../pharmacy/milliequivalents-json.js';
 import { osmolarityJson } from '../../pharmacy/osmolarity-json.js';
 import { alligationJson, alligationUnit } from '../../pharmacy/alligation-json.js';
@@ -83,12 +84,48 @@ export interface OsmolarityCli extends FormulaOptions {
   rounding?: RoundingMode;
 }
 
+/**
+ * The osmolarity of a solution, or, when it fails, every solute's problem: the library stops at the
+ * first solute that cannot be worked, so each later solute is worked on its own too, and its
+ * problem (its first issue, its column made a column of the whole list) joins the first. What only
+ * the whole list shows (a solute given twice) is the first problem when it is, and is not looked
+ * for past it.
+ *
+ * @example
+ * solutionOrEveryProblem('Xx=1 %, KCl=abc', {}) // throws UNKNOWN_ELEMENT (column 1) and UNKNOWN_UNIT (column 13)
+ */
+export function solutionOrEveryProblem(text: string, opts: OsmolarityOptions): OsmolarityResult {
+  try {
+    return osmolarity(text, opts);
+  } catch (e) {
+    if (!(e instanceof PondusError) || e.input !== text || e.first.column === undefined || e.first.code === 'USAGE') throw e;
+    const issues: Issue[] = [e.first];
+    // the pieces as the solution list is cut: at commas and semicolons, each trimmed
+    for (const m of text.matchAll(/[^;,]+/g)) {
+      const piece = m[0].trim();
+      const column = m.index + (m[0].length - m[0].trimStart().length) + 1;
+      if (piece === '' || column <= e.first.column) continue;
+      try {
+        osmolarity(piece, opts);
+      } catch (alone) {
+        if (!(alone instanceof PondusError) || alone.first.code === 'USAGE') continue;
+        const i = alone.first;
+        const at = i.column === undefined ? column : column + i.column - 1;
+        const message = i.column === undefined ? i.message : i.message.replace(`at column ${i.column}`, `at column ${at}`);
+        issues.push({ ...i, message, column: at });
+      }
+    }
+    if (issues.length === 1) throw e;
+    throw new PondusError(issues, text, e.notes);
+  }
+}
+
 /** The presenter for `pondus osmolarity`. */
 export function osmolarityPresenter(o: OsmolarityCli): RowPresenter<OsmolarityResult> {
   const rounding = o.rounding ?? 'half-even';
   const opts = { weights: o.weights ?? 'standard', abbreviations: !!o.abbreviations, measured: o.measured };
   return {
-    compute: numbered((input) => osmolarity(input, opts)),
+    compute: numbered((input) => solutionOrEveryProblem(input, opts)),
     json: ({ input, r }) => osmolarityJson(r, input, rounding),
     // one column per ion of the table (wide form): an ion a solution does not hold is left empty
     // the total, its parts from salts and from non-electrolytes (empty when there is none), then by ion
