@@ -9,8 +9,9 @@
  * full parser, so every message comes from one place.
  * tests/calc/fast-path.test.ts checks that the two agree.
  */
+import { symbolToEnd } from '../sigfig/units.js';
 import { MAX_OPERATIONS } from './parse-expression.js';
-import { CALC_UNIT_SPELLINGS, matchFormulaMass } from './spellings.js';
+import { calcUnitSpellings, matchFormulaMass } from './spellings.js';
 import type { CalcTree, ExprNode } from './tree.js';
 import { MAX_POWER } from './visitor.js';
 
@@ -31,11 +32,19 @@ const enum T {
 }
 
 /** The unit spellings by their first character, longest first as the Unit token tries them. */
-const UNITS_BY_FIRST = new Map<string, string[]>();
-for (const s of CALC_UNIT_SPELLINGS) {
-  const list = UNITS_BY_FIRST.get(s[0]);
-  if (list) list.push(s);
-  else UNITS_BY_FIRST.set(s[0], [s]);
+let unitsByFirst: Map<string, string[]> | undefined;
+
+/** The unit spellings by their first character, longest first (made on first use). */
+function unitsStartingWith(ch: string): string[] | undefined {
+  if (unitsByFirst === undefined) {
+    unitsByFirst = new Map();
+    for (const s of calcUnitSpellings()) {
+      const list = unitsByFirst.get(s[0]);
+      if (list) list.push(s);
+      else unitsByFirst.set(s[0], [s]);
+    }
+  }
+  return unitsByFirst.get(ch);
 }
 
 const isDigit = (c: number) => c >= 48 && c <= 57;
@@ -147,7 +156,11 @@ class Reader {
 
   /** The unit spelling the Unit token would match at i, or null. */
   private unitAt(i: number): string | null {
-    const list = UNITS_BY_FIRST.get(this.text[i]);
+    // a unit's symbol that ends the text is the longest spelling that can match there (any longer
+    // one runs past the end): found without the table of every spelling ('0.100 M', '250.0 mL')
+    const last = symbolToEnd(this.text, i);
+    if (last !== null) return last;
+    const list = unitsStartingWith(this.text[i]);
     if (list === undefined) return null;
     for (const u of list) {
       if (this.text.startsWith(u, i) && !isUnitLetter(this.text.charCodeAt(i + u.length))) return u;

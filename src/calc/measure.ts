@@ -6,7 +6,7 @@
 import type { Note } from '../errors/issue.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
 import { copyQuantity, type Quantity } from '../sigfig/quantity.js';
-import { baseUnitText, dimsName, sameDims, UNIT_SPELLINGS, type Dims } from '../sigfig/units.js';
+import { baseUnitText, dimsName, sameDims, unitSpellings, type Dims } from '../sigfig/units.js';
 import { evaluate } from './evaluate.js';
 import { parseExpression } from './parse-expression.js';
 
@@ -59,7 +59,7 @@ export function measure(text: string, what = 'the quantity', notes?: Note[]): Qu
 /** An amount followed by a name ('6 M HCl', '18 M H2SO4'): the amount and the name, when the amount's unit is one pondus reads. */
 function nameAfterAmount(text: string): { amount: string; name: string } | null {
   const m = /^\s*([-+]?[0-9.]+(?:[eE][-+]?[0-9]+)?\s*([^\s0-9][^\s]*))\s+(\S.*?)\s*$/.exec(text);
-  if (!m || !UNIT_SPELLINGS.includes(m[2])) return null;
+  if (!m || !unitSpellings().includes(m[2])) return null;
   return { amount: m[1], name: m[3] };
 }
 

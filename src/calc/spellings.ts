@@ -2,7 +2,7 @@
  * What the calculator's tokens match that its fast reader needs too, without the parser library:
  * the molar mass of a formula, `M(…)`, and the unit spellings, longest first.
  */
-import { UNIT_SPELLINGS } from '../sigfig/units.js';
+import { unitSpellings } from '../sigfig/units.js';
 
 /**
  * `M(CuSO4·5H2O)`: the molar mass of a formula, brackets inside it balanced.
@@ -24,8 +24,15 @@ export function matchFormulaMass(text: string, offset: number): RegExpExecArray 
   return null;
 }
 
+let sorted: readonly string[] | undefined;
+
 /**
  * Every spelling the unit table accepts, longest first: the order in which the Unit token tries
- * them, so `mol·L⁻¹` is one unit, not mol times something.
+ * them, so `mol·L⁻¹` is one unit, not mol times something. Made on first use.
+ *
+ * @example
+ * calcUnitSpellings().indexOf('mol·L⁻¹') < calcUnitSpellings().indexOf('mol') // true
  */
-export const CALC_UNIT_SPELLINGS: readonly string[] = [...new Set(UNIT_SPELLINGS)].sort((a, b) => b.length - a.length);
+export function calcUnitSpellings(): readonly string[] {
+  return (sorted ??= [...new Set(unitSpellings())].sort((a, b) => b.length - a.length));
+}

@@ -2,11 +2,11 @@
  * Tokens of the calculator's expression language. Patterns only.
  */
 import { createToken, Lexer, type TokenType } from 'chevrotain';
-import { CALC_UNIT_SPELLINGS, matchFormulaMass } from './spellings.js';
+import { calcUnitSpellings, matchFormulaMass } from './spellings.js';
 
-export { CALC_UNIT_SPELLINGS, matchFormulaMass };
+export { calcUnitSpellings, matchFormulaMass };
 
-const unitSpellings = CALC_UNIT_SPELLINGS.map((s) => s.replace(/[.*+?^${}()|[\]\\/%]/g, (c) => `\\${c}`));
+const unitSpellings = calcUnitSpellings().map((s) => s.replace(/[.*+?^${}()|[\]\\/%]/g, (c) => `\\${c}`));
 
 export const WhiteSpace = createToken({ name: 'WhiteSpace', pattern: /[ \t\u00a0]+/, group: Lexer.SKIPPED });
 export const FormulaMass = createToken({ name: 'FormulaMass', pattern: { exec: matchFormulaMass }, line_breaks: false, start_chars_hint: ['M'] });

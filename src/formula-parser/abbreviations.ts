@@ -101,8 +101,19 @@ export const ABBREVIATIONS: Readonly<Record<string, Abbreviation>> = Object.free
  * readsAsElements('Ph') // false
  */
 export function readsAsElements(text: string): boolean {
-  const words = text.match(/[A-Z][a-z]*|[^A-Z]+/g);
-  return words !== null && words.every((w) => w === 'D' || w === 'T' || (w.length <= 2 && isElementSymbol(w)));
+  if (text.length === 0) return false;
+  // words of a capital and its lower-case letters, read without a match array (this runs for
+  // every abbreviation at start-up); anything else in the text is no symbol
+  for (let i = 0; i < text.length; ) {
+    const c = text.charCodeAt(i);
+    if (c < 65 || c > 90) return false;
+    let j = i + 1;
+    while (j < text.length && text.charCodeAt(j) >= 97 && text.charCodeAt(j) <= 122) j++;
+    const one = j - i === 1;
+    if (!((one && (c === 68 || c === 84)) || (j - i <= 2 && isElementSymbol(one ? text[i] : text.slice(i, j))))) return false;
+    i = j;
+  }
+  return true;
 }
 
 /** Abbreviations refused whatever the option says, with the reason. */
@@ -118,6 +129,7 @@ export const REFUSED_ABBREVIATIONS: Readonly<Record<string, string>> = Object.fr
  * ABBREVIATION_CLASHES.includes('Ac') // true
  */
 export const ABBREVIATION_CLASHES: readonly string[] = Object.freeze(Object.keys(ABBREVIATIONS).filter(readsAsElements));
+const CLASHES: ReadonlySet<string> = new Set(ABBREVIATION_CLASHES);
 
 /**
  * Abbreviations read by default: none of them can be read as element symbols.
@@ -125,7 +137,7 @@ export const ABBREVIATION_CLASHES: readonly string[] = Object.freeze(Object.keys
  * @example
  * SAFE_ABBREVIATIONS.includes('Ph') // true
  */
-export const SAFE_ABBREVIATIONS: readonly string[] = Object.freeze(Object.keys(ABBREVIATIONS).filter((k) => !readsAsElements(k) && !Object.hasOwn(REFUSED_ABBREVIATIONS, k)));
+export const SAFE_ABBREVIATIONS: readonly string[] = Object.freeze(Object.keys(ABBREVIATIONS).filter((k) => !CLASHES.has(k) && !Object.hasOwn(REFUSED_ABBREVIATIONS, k)));
 
 function escape(s: string): string {
   return s.replace(/[*]/g, '\\*');

@@ -235,27 +235,48 @@ const ALIASES: Record<string, string> = {
   'μg/g': 'µg/g',
 };
 
-// a minus sign (U+2212) where a hyphen stands for one ('mol dm−3', as typeset texts print it), and
-// the exponent written with a caret ('mol L^-1', 'g cm^-3', as plain text writes it)
-for (const k of Object.keys(ALIASES)) {
-  if (!/[a-zA-Z]-[0-9]$/.test(k)) continue;
-  ALIASES[k.replace(/-/g, '\u2212')] = ALIASES[k];
-  ALIASES[k.replace(/-([0-9])$/, '^-$1')] = ALIASES[k];
-  ALIASES[k.replace(/-([0-9])$/, '^\u2212$1')] = ALIASES[k];
+let derived = false;
+
+/**
+ * The aliases with the spellings derived from them, made on first use: a unit written as its
+ * symbol ('mL', 'M') is found without them, and making them was a tenth of what a command's
+ * start-up allocated.
+ */
+function aliasTable(): Record<string, string> {
+  if (derived) return ALIASES;
+  derived = true;
+  // a minus sign (U+2212) where a hyphen stands for one ('mol dm−3', as typeset texts print it), and
+  // the exponent written with a caret ('mol L^-1', 'g cm^-3', as plain text writes it)
+  for (const k of Object.keys(ALIASES)) {
+    if (!/[a-zA-Z]-[0-9]$/.test(k)) continue;
+    ALIASES[k.replace(/-/g, '\u2212')] = ALIASES[k];
+    ALIASES[k.replace(/-([0-9])$/, '^-$1')] = ALIASES[k];
+    ALIASES[k.replace(/-([0-9])$/, '^\u2212$1')] = ALIASES[k];
+  }
+  // a litre written with a lower-case l after the slash ('mmol/l', 'µg/ml', 'g/100 ml'), as 'mol/l' and 'g/l'
+  // are: every per-litre or per-millilitre spelling is read with l as with L (SI Brochure, 9th edition,
+  // table 8: both l and L are symbols of the litre)
+  for (const k of [...TABLE.map((u) => u.symbol), ...Object.keys(ALIASES)]) {
+    const m = /^(.*\/(?:100 ?)?[mµuμd]?)L$/.exec(k);
+    if (!m || !/[a-zA-Zµμ%]/.test(m[1])) continue;
+    const lower = `${m[1]}l`;
+    if (ALIASES[lower] === undefined && !TABLE.some((u) => u.symbol === lower)) ALIASES[lower] = ALIASES[k] ?? k;
+  }
+  return ALIASES;
 }
 
-// a litre written with a lower-case l after the slash ('mmol/l', 'µg/ml', 'g/100 ml'), as 'mol/l' and 'g/l'
-// are: every per-litre or per-millilitre spelling is read with l as with L (SI Brochure, 9th edition,
-// table 8: both l and L are symbols of the litre)
-for (const k of [...TABLE.map((u) => u.symbol), ...Object.keys(ALIASES)]) {
-  const m = /^(.*\/(?:100 ?)?[mµuμd]?)L$/.exec(k);
-  if (!m || !/[a-zA-Zµμ%]/.test(m[1])) continue;
-  const lower = `${m[1]}l`;
-  if (ALIASES[lower] === undefined && !TABLE.some((u) => u.symbol === lower)) ALIASES[lower] = ALIASES[k] ?? k;
-}
+let spellings: readonly string[] | undefined;
 
-/** Every spelling {@link unitOf} accepts: the symbols and their aliases. */
-export const UNIT_SPELLINGS: readonly string[] = Object.freeze([...TABLE.map((u) => u.symbol), ...Object.keys(ALIASES)]);
+/**
+ * Every spelling {@link unitOf} accepts: the symbols and their aliases.
+ *
+ * @example
+ * unitSpellings().includes('mmol/l') // true
+ * unitSpellings().includes('mL') // true
+ */
+export function unitSpellings(): readonly string[] {
+  return (spellings ??= Object.freeze([...TABLE.map((u) => u.symbol), ...Object.keys(aliasTable())]));
+}
 
 /**
  * True for the percent units (%, % w/w, % v/v): a fraction of a whole, where
@@ -307,11 +328,28 @@ export const UNIT_SYMBOLS: readonly string[] = Object.freeze(TABLE.map((u) => u.
  * unitOf('ug').symbol // 'µg'
  */
 export function unitOf(symbol: string, column?: number): Unit {
-  const u = BY_SYMBOL.get(symbol) ?? BY_SYMBOL.get(ALIASES[symbol] ?? '');
+  const u = BY_SYMBOL.get(symbol) ?? BY_SYMBOL.get(aliasTable()[symbol] ?? '');
   if (!u) {
     throw fail(typedIssue({ code: 'UNKNOWN_UNIT', unit: symbol, inExpression: false, column, hint: notReadHint(symbol) ?? `units: ${UNIT_SYMBOLS.join(', ')}` }));
   }
   return u;
+}
+
+const LONGEST_SYMBOL = Math.max(...TABLE.map((u) => u.symbol.length));
+
+/**
+ * The rest of `text` from `start` when it is a unit's own symbol ('mL', 'M', 'g/mol'; not an
+ * alias), else null: a look-up that needs none of the derived spellings.
+ *
+ * @example
+ * symbolToEnd('250.0 mL', 6) // 'mL'
+ * symbolToEnd('250.0 ml', 6) // null (an alias of mL)
+ * symbolToEnd('2 g / 4 mL', 2) // null (the text goes on)
+ */
+export function symbolToEnd(text: string, start: number): string | null {
+  if (text.length - start > LONGEST_SYMBOL) return null;
+  const rest = text.slice(start);
+  return BY_SYMBOL.has(rest) ? rest : null;
 }
 
 /** True when two dimension vectors are equal. */

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { fastParseExpression } from '../../src/calc/fast-path.js';
 import { parseExpression, parseWithGrammar } from '../../src/calc/parse-expression.js';
-import { CALC_UNIT_SPELLINGS } from '../../src/calc/tokens.js';
+import { calcUnitSpellings } from '../../src/calc/tokens.js';
 import { toSafe } from '../../src/errors/pondus-error.js';
 // @ts-expect-error: a plain JavaScript module of the benchmark, without types
 import { generateCalc } from '../../bench/generate-quantities.mjs';
@@ -48,7 +48,7 @@ const numberText = fc.oneof(
   fc.tuple(digits, digits, fc.constantFrom('e', 'E-'), fc.integer({ min: 0, max: 30 })).map(([a, b, e, x]) => `${a}.${b}${e}${x}`),
   fc.constantFrom('0', '100', '1300', '0.00340', '250.', '8.80', '1e3', '2.50e2'),
 );
-const unit = fc.constantFrom(...CALC_UNIT_SPELLINGS);
+const unit = fc.constantFrom(...calcUnitSpellings());
 const plusMinus = fc.constantFrom('±', '+/-', '+-');
 const formula = fc.constantFrom('NaCl', 'CuSO4·5H2O', 'KAl(SO4)2·12H2O', 'H2O', 'C6H12O6', 'Ca(OH)2', 'Xy', '(CH3)2CO', 'Na2CO3*10H2O');
 const quantityText = fc

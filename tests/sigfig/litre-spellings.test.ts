@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { UNIT_SPELLINGS, unitOf } from '../../src/sigfig/units.js';
+import { unitSpellings, unitOf } from '../../src/sigfig/units.js';
 
 describe('a litre written l after the slash', () => {
   // source: SI Brochure, 9th edition, table 8 (l and L are both symbols of the litre)
   it('reads every per-litre and per-millilitre spelling with l as with L', () => {
-    for (const s of UNIT_SPELLINGS) {
+    for (const s of unitSpellings()) {
       const m = /^(.*\/(?:100 ?)?[mµuμd]?)L$/.exec(s);
       if (!m) continue;
       const lower = unitOf(`${m[1]}l`);
