@@ -39,7 +39,7 @@ export interface CliIo {
 /** Commands to build a program from: how to add them to it, and the presenters their actions run. */
 export interface CommandSet {
   /** Adds the commands (declared in commands/declarations.ts) with their actions, or declared only. */
-  register(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void;
+  register(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>, only?: string): void;
   /** The presenters of the commands added. */
   presenters: PresenterTable;
   /** For a set that is the whole program (main.ts, the help bundle): adds the commands generated from it (finishProgram: completion, manual). */
@@ -136,7 +136,9 @@ export async function runProgram(args: string[], io: CliIo, commands: CommandSet
       // one message style: commander's own usage errors start 'pondus:' like every other message
       outputError: (s, write) => write(errStyle.red(s.split('\n').map((l) => visibleControls(l)).join('\n').replace(/^error: /, 'pondus: '))),
     });
-  commands.register(program, run, io.stdin);
+  // a command's own bundle declares only the command run (of a module's several), not its siblings;
+  // the whole program (help, completion, the manual) declares every command
+  commands.register(program, run, io.stdin, commands.finish ? undefined : args[0]);
 
   // an option that takes one value is never silently overridden by a second one (exit 2), and
   // commander's usage errors say what the command declared (a conflict's reason, a required option's hint)

@@ -2,4 +2,4 @@
 import { registerConversions, basisPresenter, dilutePresenter, gravimetricPresenter, saltPresenter } from '../commands/conversions.js';
 import { start } from '../start.js';
 
-start({ register: (program, run) => registerConversions(program, run), presenters: { dilute: dilutePresenter, gravimetric: gravimetricPresenter, basis: basisPresenter, salt: saltPresenter } });
+start({ register: (program, run, _stdin, only) => registerConversions(program, run, only), presenters: { dilute: dilutePresenter, gravimetric: gravimetricPresenter, basis: basisPresenter, salt: saltPresenter } });

@@ -2,4 +2,4 @@
 import { registerPharmacy, PHARMACY_PRESENTERS } from '../commands/pharmacy.js';
 import { start } from '../start.js';
 
-start({ register: (program, run) => registerPharmacy(program, run), presenters: PHARMACY_PRESENTERS });
+start({ register: (program, run, _stdin, only) => registerPharmacy(program, run, only), presenters: PHARMACY_PRESENTERS });

@@ -2,4 +2,4 @@
 import { registerQc, QC_PRESENTERS } from '../commands/qc.js';
 import { start } from '../start.js';
 
-start({ register: (program, run) => registerQc(program, run), presenters: QC_PRESENTERS });
+start({ register: (program, run, _stdin, only) => registerQc(program, run, only), presenters: QC_PRESENTERS });

@@ -161,11 +161,11 @@ export function saltPresenter(o: SaltCliOptions): Presenter<SaltFactorResult> {
 }
 
 /** Registers `pondus dilute`, `gravimetric`, `basis` and `salt`. */
-export function registerConversions(program: Command, run: CommandRunner): void {
-  const c = declareConversions(program);
-  c.dilute.action((inputs: string[], o: DiluteCliOptions) => run('dilute', inputs, o));
-  c.gravimetric.action((inputs: string[], o: GravimetricCliOptions) => run('gravimetric', inputs, o));
-  c.basis.action((inputs: string[], o: BasisCliOptions) => run('basis', inputs, o));
-  c.salt.action((inputs: string[], o: SaltCliOptions) => run('salt', inputs, o));
+export function registerConversions(program: Command, run: CommandRunner, only?: string): void {
+  const c = declareConversions(program, only);
+  c.dilute?.action((inputs: string[], o: DiluteCliOptions) => run('dilute', inputs, o));
+  c.gravimetric?.action((inputs: string[], o: GravimetricCliOptions) => run('gravimetric', inputs, o));
+  c.basis?.action((inputs: string[], o: BasisCliOptions) => run('basis', inputs, o));
+  c.salt?.action((inputs: string[], o: SaltCliOptions) => run('salt', inputs, o));
 }
 

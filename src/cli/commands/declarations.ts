@@ -13,6 +13,15 @@ import { conflicting, required, withFormulaOptions, withOutputOptions, withRound
 
 const ABBREVIATIONS_HELP = 'also read the abbreviations that need the reading settled: Ac (acetyl, OAc), Pr (propyl), Ts (tosyl) and reagent names such as THF, COD, TBS (Me, Et, Ph, Boc, Cp*, py and the like are read by default)';
 
+/**
+ * Which of a module's commands to declare: every one, or only `only` when it is one of them (a
+ * command's own bundle declares just the command it runs, not its siblings' options).
+ */
+function wanted(names: readonly string[], only: string | undefined): (name: string) => boolean {
+  const all = only === undefined || !names.includes(only);
+  return (name) => all || name === only;
+}
+
 /** Collects the values of an option given more than once. */
 const collect = (v: string, prev: string[] = []) => [...prev, v];
 
@@ -102,10 +111,11 @@ export const CANDIDATE_RANGES = DEFAULT_RANGES;
  * Declares `pondus empirical`, `combustion` and `candidates`.
  *
  * @example
- * declareEmpirical(program).combustion.name() // 'combustion'
+ * declareEmpirical(program).combustion?.name() // 'combustion'
  */
-export function declareEmpirical(program: Command): { empirical: Command; combustion: Command; candidates: Command } {
-  const empirical = withOutputOptions(
+export function declareEmpirical(program: Command, only?: string): Partial<{ empirical: Command; combustion: Command; candidates: Command }> {
+  const want = wanted(['empirical', 'combustion', 'candidates'], only);
+  const empirical = !want('empirical') ? undefined : withOutputOptions(
     program
       .command('empirical')
       .description('empirical (and molecular) formula from mass percents or element masses')
@@ -114,13 +124,16 @@ export function declareEmpirical(program: Command): { empirical: Command; combus
       .option('--tolerance <points>', 'how far a calculated percent may be from the measured one, in percentage points (default 0.3, what combustion analysis is good to)')
       .option('--sheet <file>', "a CSV of measurements: element columns (C, H, N, …), optional id, 'sample' and 'molar mass' columns; - reads it from standard input"),
   );
-  const combustionCmd = program
-    .command('combustion')
-    .description('combustion analysis: element percents and the empirical formula from the masses collected')
-    .argument('[sample...]', "sample mass, e.g. '0.1000 g'");
-  for (const [key, p] of Object.entries(COMBUSTION_PRODUCTS)) combustionCmd.option(`--${key} <mass>`, `mass of ${p.formula} collected (gives ${p.element})`);
-  const combustion = withRoundingOption(withOutputOptions(combustionCmd));
-  const candidates = withOutputOptions(
+  let combustion: Command | undefined;
+  if (want('combustion')) {
+    const combustionCmd = program
+      .command('combustion')
+      .description('combustion analysis: element percents and the empirical formula from the masses collected')
+      .argument('[sample...]', "sample mass, e.g. '0.1000 g'");
+    for (const [key, p] of Object.entries(COMBUSTION_PRODUCTS)) combustionCmd.option(`--${key} <mass>`, `mass of ${p.formula} collected (gives ${p.element})`);
+    combustion = withRoundingOption(withOutputOptions(combustionCmd));
+  }
+  const candidates = !want('candidates') ? undefined : withOutputOptions(
     program
       .command('candidates')
       .description('candidate formulas for an accurate mass or m/z (or a molar mass), checked against found percents if given, any element, filtered for plausibility (RDBE, SENIOR, element ratios) and ranked by score')
@@ -136,8 +149,8 @@ export function declareEmpirical(program: Command): { empirical: Command; combus
       .option('--no-ratios', 'do not apply the element-ratio limits (as --ratios none)')
       .option('--limit <n>', 'most candidates to list', '50'),
   );
-  conflicting(candidates, '--molar-mass', ['--ppm'], '--ppm sets the window of an accurate (monoisotopic) mass; with --molar-mass the window is ±0.5 g/mol: drop one');
-  conflicting(candidates, '--molar-mass', ['--ion'], '--ion says the masses are m/z values of that ion; --molar-mass says they are average molar masses of the neutral compound: drop one');
+  if (candidates) conflicting(candidates, '--molar-mass', ['--ppm'], '--ppm sets the window of an accurate (monoisotopic) mass; with --molar-mass the window is ±0.5 g/mol: drop one');
+  if (candidates) conflicting(candidates, '--molar-mass', ['--ion'], '--ion says the masses are m/z values of that ion; --molar-mass says they are average molar masses of the neutral compound: drop one');
   return { empirical, combustion, candidates };
 }
 
@@ -239,10 +252,11 @@ export function declarePrepare(program: Command): Command {
  * Declares `pondus dilute`, `gravimetric`, `basis` and `salt`.
  *
  * @example
- * declareConversions(program).salt.name() // 'salt'
+ * declareConversions(program).salt?.name() // 'salt'
  */
-export function declareConversions(program: Command): { dilute: Command; gravimetric: Command; basis: Command; salt: Command } {
-  const dilute = withRoundingOption(
+export function declareConversions(program: Command, only?: string): Partial<{ dilute: Command; gravimetric: Command; basis: Command; salt: Command }> {
+  const want = wanted(['dilute', 'gravimetric', 'basis', 'salt'], only);
+  const dilute = !want('dilute') ? undefined : withRoundingOption(
     withOutputOptions(
       program
         .command('dilute')
@@ -257,7 +271,7 @@ export function declareConversions(program: Command): { dilute: Command; gravime
         .option('--mass <m>', "dilute a solid or semisolid by mass to this total: --mass '60.0 g' (the input and --to in % w/w, mg/g, mg/kg)"),
     ),
   );
-  const gravimetric = withRoundingOption(
+  const gravimetric = !want('gravimetric') ? undefined : withRoundingOption(
     withOutputOptions(
       program
         .command('gravimetric')
@@ -269,7 +283,7 @@ export function declareConversions(program: Command): { dilute: Command; gravime
         .option('--element <symbol>', 'the element the factor rests on, when the two share several'),
     ),
   );
-  const basis = withRoundingOption(
+  const basis = !want('basis') ? undefined : withRoundingOption(
     withOutputOptions(
       program
         .command('basis')
@@ -280,7 +294,7 @@ export function declareConversions(program: Command): { dilute: Command; gravime
         .option('--element <symbol>', 'the element the conversion rests on, when the two share several'),
     ),
   );
-  const salt = withRoundingOption(
+  const salt = !want('salt') ? undefined : withRoundingOption(
     withOutputOptions(
       program
         .command('salt')
@@ -291,9 +305,9 @@ export function declareConversions(program: Command): { dilute: Command; gravime
         .option('--salt-mass <m>', 'a mass of salt: the parent mass it carries (a result)'),
     ),
   );
-  required(gravimetric, '--weighed', 'give the formula of the weighed form (the precipitate or residue as weighed) with --weighed');
-  required(basis, '--to', 'give the basis to convert to: --to P (or --to P2O5, K2O, SiO2, …)');
-  required(salt, '--parent', 'give the formula of the parent compound (the free base or acid the dose is of) with --parent');
+  if (gravimetric) required(gravimetric, '--weighed', 'give the formula of the weighed form (the precipitate or residue as weighed) with --weighed');
+  if (basis) required(basis, '--to', 'give the basis to convert to: --to P (or --to P2O5, K2O, SiO2, …)');
+  if (salt) required(salt, '--parent', 'give the formula of the parent compound (the free base or acid the dose is of) with --parent');
   return { dilute, gravimetric, basis, salt };
 }
 
@@ -310,10 +324,11 @@ function withBasisOptions(cmd: Command): Command {
  * Declares `pondus titration`, `standardise`, `sample-basis` and `replicates`.
  *
  * @example
- * declareQc(program).replicates.name() // 'replicates'
+ * declareQc(program).replicates?.name() // 'replicates'
  */
-export function declareQc(program: Command): { titration: Command; standardise: Command; sampleBasis: Command; replicates: Command } {
-  const titration = withRoundingOption(
+export function declareQc(program: Command, only?: string): Partial<{ titration: Command; standardise: Command; sampleBasis: Command; replicates: Command }> {
+  const want = wanted(['titration', 'standardise', 'sample-basis', 'replicates'], only);
+  const titration = !want('titration') ? undefined : withRoundingOption(
     withBasisOptions(
       withFormulaOptions(
         program
@@ -331,7 +346,7 @@ export function declareQc(program: Command): { titration: Command; standardise: 
       ),
     ).option('--on <basis>', 'report on: as-is, dried, anhydrous, solvent-free, anhydrous-solvent-free'),
   );
-  const standardise = withRoundingOption(
+  const standardise = !want('standardise') ? undefined : withRoundingOption(
     withFormulaOptions(
       program
         .command('standardise')
@@ -344,7 +359,7 @@ export function declareQc(program: Command): { titration: Command; standardise: 
         .option('--purity <p>', "certified assay of the standard: '99.95 %'"),
     ),
   );
-  const sampleBasis = withRoundingOption(
+  const sampleBasis = !want('sample-basis') ? undefined : withRoundingOption(
     withBasisOptions(
       withOutputOptions(
         program
@@ -356,7 +371,7 @@ export function declareQc(program: Command): { titration: Command; standardise: 
       ),
     ).option('--on <basis>', 'same as --to'),
   );
-  const replicates = withRoundingOption(
+  const replicates = !want('replicates') ? undefined : withRoundingOption(
     withOutputOptions(
       program
         .command('replicates')
@@ -365,8 +380,8 @@ export function declareQc(program: Command): { titration: Command; standardise: 
         .option('--level <percent>', 'confidence level: 90, 95 (default) or 99'),
     ),
   );
-  conflicting(titration, '--added', ['--blank'], 'a back-titration takes either --added (the excess reagent) or --blank (the titre of the reagent alone), not both');
-  conflicting(sampleBasis, '--on', ['--to'], '--to and --on say the same thing: give one');
+  if (titration) conflicting(titration, '--added', ['--blank'], 'a back-titration takes either --added (the excess reagent) or --blank (the titre of the reagent alone), not both');
+  if (sampleBasis) conflicting(sampleBasis, '--on', ['--to'], '--to and --on say the same thing: give one');
   return { titration, standardise, sampleBasis, replicates };
 }
 
@@ -374,10 +389,11 @@ export function declareQc(program: Command): { titration: Command; standardise: 
  * Declares `pondus meq`, `osmolarity`, `alligation`, `potency` and `strength`.
  *
  * @example
- * declarePharmacy(program).meq.name() // 'meq'
+ * declarePharmacy(program).meq?.name() // 'meq'
  */
-export function declarePharmacy(program: Command): { meq: Command; osmolarity: Command; alligation: Command; potency: Command; strength: Command } {
-  const meq = withRoundingOption(
+export function declarePharmacy(program: Command, only?: string): Partial<{ meq: Command; osmolarity: Command; alligation: Command; potency: Command; strength: Command }> {
+  const want = wanted(['meq', 'osmolarity', 'alligation', 'potency', 'strength'], only);
+  const meq = !want('meq') ? undefined : withRoundingOption(
     withFormulaOptions(
       program
         .command('meq')
@@ -391,7 +407,7 @@ export function declarePharmacy(program: Command): { meq: Command; osmolarity: C
         .option('--ions <list>', "the ions, when not read from the formula: '2K^+,HPO4^2-'"),
     ),
   );
-  const osmolarity = withRoundingOption(
+  const osmolarity = !want('osmolarity') ? undefined : withRoundingOption(
     withFormulaOptions(
       program
         .command('osmolarity')
@@ -400,7 +416,7 @@ export function declarePharmacy(program: Command): { meq: Command; osmolarity: C
         .option('--measured', 'the strengths are measured (keep their significant figures), not nominal label values'),
     ),
   );
-  const alligation = withRoundingOption(
+  const alligation = !want('alligation') ? undefined : withRoundingOption(
     withOutputOptions(
       program
         .command('alligation')
@@ -412,7 +428,7 @@ export function declarePharmacy(program: Command): { meq: Command; osmolarity: C
         .option('--by <how>', 'mass or volume, for parts only (no total)'),
     ),
   );
-  const potency = withRoundingOption(
+  const potency = !want('potency') ? undefined : withRoundingOption(
     withOutputOptions(
       program
         .command('potency')
@@ -425,7 +441,7 @@ export function declarePharmacy(program: Command): { meq: Command; osmolarity: C
         .option('--need <m>', "the mass of active needed: '500 mg' (gives the mass to weigh)"),
     ),
   );
-  const strength = withRoundingOption(
+  const strength = !want('strength') ? undefined : withRoundingOption(
     withOutputOptions(
       program
         .command('strength')
@@ -440,10 +456,11 @@ export function declarePharmacy(program: Command): { meq: Command; osmolarity: C
  * Declares `pondus ion` and `pattern`.
  *
  * @example
- * declareIon(program).pattern.name() // 'pattern'
+ * declareIon(program).pattern?.name() // 'pattern'
  */
-export function declareIon(program: Command): { ion: Command; pattern: Command } {
-  const ion = withOutputOptions(
+export function declareIon(program: Command, only?: string): Partial<{ ion: Command; pattern: Command }> {
+  const want = wanted(['ion', 'pattern'], only);
+  const ion = !want('ion') ? undefined : withOutputOptions(
     program
       .command('ion')
       .description('m/z of an ion ([M+H]+, [M+Na]+, [M-H]-, [M+2H]2+, [2M+Na]+, M+•) with the electron mass, the error against a found m/z, the HRMS report line')
@@ -455,7 +472,7 @@ export function declareIon(program: Command): { ion: Command; pattern: Command }
       .option('--abbreviations', ABBREVIATIONS_HELP)
       .option('--sheet <file>', 'a lab sheet (CSV with columns id, formula, ion, found); - reads it from standard input'),
   );
-  const pattern = withOutputOptions(
+  const pattern = !want('pattern') ? undefined : withOutputOptions(
     program
       .command('pattern')
       .description('isotope pattern of a formula or an ion: aggregated (nominal-mass peaks) or fine structure at a resolving power, as a terminal picture or SVG')
@@ -468,6 +485,6 @@ export function declareIon(program: Command): { ion: Command; pattern: Command }
       .option('--svg <file>', 'also draw the pattern as an SVG picture (one input)')
       .option('--abbreviations', ABBREVIATIONS_HELP),
   );
-  conflicting(pattern, '--fine', ['--resolution'], '--fine shows every isotopologue apart and --resolution merges them as an instrument would: choose one');
+  if (pattern) conflicting(pattern, '--fine', ['--resolution'], '--fine shows every isotopologue apart and --resolution merges them as an instrument would: choose one');
   return { ion, pattern };
 }

@@ -253,15 +253,15 @@ export function candidatesPresenter(o: CandidatesCliOptions): Presenter<Candidat
 }
 
 /** Registers `pondus empirical`, `combustion` and `candidates`. */
-export function registerEmpirical(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void {
-  const c = declareEmpirical(program);
-  c.empirical.action((inputs: string[], o: EmpiricalCliOptions) => {
+export function registerEmpirical(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>, only?: string): void {
+  const c = declareEmpirical(program, only);
+  c.empirical?.action((inputs: string[], o: EmpiricalCliOptions) => {
     if (o.sheet !== undefined) return runWithSheet(run, 'empirical', inputs, o, stdin, readMeasurementSheet);
     const { inputs: sets, joined } = joinPairArgs(inputs, { what: 'measurement set', units: true });
     const options: EmpiricalCliOptions = { ...o, joined };
     return run('empirical', sets, options);
   });
-  c.combustion.action((inputs: string[], o: CombustionCliOptions, cmd: Command) => {
+  c.combustion?.action((inputs: string[], o: CombustionCliOptions, cmd: Command) => {
     // masses typed without quotes: `0.1000 g --co2 0.2000 g` leaves the units among the samples
     if (inputs.some((a) => /^[A-Za-zµμ]+$/.test(a))) {
       const raw = (cmd.parent as (Command & { rawArgs?: string[] }) | null)?.rawArgs ?? [];
@@ -274,7 +274,7 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
     }
     return run('combustion', inputs, o);
   });
-  c.candidates.action((inputs: string[], o: CandidatesCliOptions, cmd: Command) => {
+  c.candidates?.action((inputs: string[], o: CandidatesCliOptions, cmd: Command) => {
     const given = (name: string) => cmd.getOptionValueSource(name) === 'cli';
     if (o.found === undefined && given('tolerance')) throw fail({ code: 'USAGE', message: '--tolerance applies to found percents: give --found too, or drop --tolerance' });
     // found values typed unquoted: --found C=40.00 H=6.71 leaves H=6.71 among the masses

@@ -81,13 +81,13 @@ export function ionPresenter(o: IonCliOptions): Presenter<IonRow> {
  * @example
  * registerIonCommands(program, run, () => process.stdin)
  */
-export function registerIonCommands(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void {
-  const c = declareIon(program);
-  c.ion.action((inputs: string[], o: IonCliOptions) => {
+export function registerIonCommands(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>, only?: string): void {
+  const c = declareIon(program, only);
+  c.ion?.action((inputs: string[], o: IonCliOptions) => {
     if (o.found !== undefined && (inputs.length > 1 || inputs.includes('-') || o.sheet !== undefined)) {
       throw fail({ code: 'USAGE', message: '--found goes with one input; in a batch, give the found m/z on each line (FORMULA ION FOUND)' });
     }
     return runWithSheet(run, 'ion', inputs, o, stdin, readIonSheet);
   });
-  attachPattern(c.pattern, run);
+  if (c.pattern) attachPattern(c.pattern, run);
 }

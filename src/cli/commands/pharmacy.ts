@@ -276,13 +276,13 @@ export function strengthPresenter(o: StrengthCli): RowPresenter<StrengthForms> {
 // --- registration -----------------------------------------------------------------
 
 /** Registers `meq`, `osmolarity` and `alligation`. */
-export function registerPharmacy(program: Command, run: CommandRunner): void {
-  const c = declarePharmacy(program);
-  c.meq.action((inputs: string[], o: MeqCli) => run('meq', inputs, o));
-  c.osmolarity.action((inputs: string[], o: OsmolarityCli) => run('osmolarity', inputs, o));
-  c.alligation.action((inputs: string[], o: AlligationCli) => run('alligation', inputs, o));
-  c.potency.action((inputs: string[], o: PotencyCli) => run('potency', inputs, o));
-  c.strength.action((inputs: string[], o: StrengthCli) => run('strength', inputs, o));
+export function registerPharmacy(program: Command, run: CommandRunner, only?: string): void {
+  const c = declarePharmacy(program, only);
+  c.meq?.action((inputs: string[], o: MeqCli) => run('meq', inputs, o));
+  c.osmolarity?.action((inputs: string[], o: OsmolarityCli) => run('osmolarity', inputs, o));
+  c.alligation?.action((inputs: string[], o: AlligationCli) => run('alligation', inputs, o));
+  c.potency?.action((inputs: string[], o: PotencyCli) => run('potency', inputs, o));
+  c.strength?.action((inputs: string[], o: StrengthCli) => run('strength', inputs, o));
 }
 
 /** Presenters of the compounding commands, by name. */

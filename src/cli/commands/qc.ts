@@ -242,12 +242,12 @@ export function replicatesPresenter(o: ReplicatesCli): RowPresenter<ReplicateRes
 // --- registration -----------------------------------------------------------------
 
 /** Registers `titration`, `standardise`, `sample-basis` and `replicates`. */
-export function registerQc(program: Command, run: CommandRunner): void {
-  const c = declareQc(program);
-  c.titration.action((inputs: string[], o: TitrationCli) => run('titration', inputs, o));
-  c.standardise.action((inputs: string[], o: StandardiseCli) => run('standardise', inputs, o));
-  c.sampleBasis.action((inputs: string[], o: SampleBasisCli) => run('sample-basis', inputs, o));
-  c.replicates.action((inputs: string[], o: ReplicatesCli) => run('replicates', inputs, o));
+export function registerQc(program: Command, run: CommandRunner, only?: string): void {
+  const c = declareQc(program, only);
+  c.titration?.action((inputs: string[], o: TitrationCli) => run('titration', inputs, o));
+  c.standardise?.action((inputs: string[], o: StandardiseCli) => run('standardise', inputs, o));
+  c.sampleBasis?.action((inputs: string[], o: SampleBasisCli) => run('sample-basis', inputs, o));
+  c.replicates?.action((inputs: string[], o: ReplicatesCli) => run('replicates', inputs, o));
 }
 
 /** Presenters of the QC commands, by name. */
