@@ -50,7 +50,7 @@ const POW10 = new Map<number, Decimal>();
 export function pow10(n: number): Decimal {
   let d = POW10.get(n);
   if (d === undefined) {
-    d = new Decimal(10).pow(n);
+    d = new Decimal(`1e${n}`); // exact: the same value as 10^n, read instead of multiplied out
     if (POW10.size < 4096) POW10.set(n, d);
   }
   return d;
