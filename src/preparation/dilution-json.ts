@@ -9,6 +9,7 @@ import { instructionJson, massUnitFor, resultJson, volumeUnitFor, type AmountJso
 import type { RoundingMode } from '../sigfig/round.js';
 import { BENCH_CAUTION } from './caution.js';
 import type { DilutionResult } from './dilution.js';
+import type { Quantity } from '../sigfig/quantity.js';
 import type { SeriesResult, SeriesStep } from './dilution-series.js';
 import type { MassDilutionResult } from './mass-dilution.js';
 
@@ -45,6 +46,12 @@ export interface DilutionJson {
  * dilutionJson(dilute('1.00 M', '0.100 M', '250.0 mL')).stockVolume.display // '25.00 mL'
  * dilutionJson(dilute('1.00 M', undefined, '250.0 mL', '25.00 mL')).made.display // '0.100 M'
  */
+/** The concentration made, in the stock's unit; in equivalents, the number with the unit as written. */
+function madeJson(r: DilutionResult, made: Quantity, rounding: RoundingMode): AmountJson {
+  const j = resultJson(made, r.madeUnit === null ? r.stock.unit?.symbol : null, rounding);
+  return r.madeUnit === null ? j : { ...j, unit: r.madeUnit, display: `${j.display} ${r.madeUnit}`, displayUnit: r.madeUnit };
+}
+
 export function dilutionJson(r: DilutionResult, rounding: RoundingMode = 'half-even'): DilutionJson {
   return {
     input: r.written.stock,
@@ -54,7 +61,7 @@ export function dilutionJson(r: DilutionResult, rounding: RoundingMode = 'half-e
     solventVolume: r.solventVolume ? instructionJson(r.solventVolume, r.finalVolume.unit?.symbol, rounding) : null,
     factor: r.factor.value.toNumber(),
     taken: r.written.taken,
-    made: r.made ? resultJson(r.made, r.stock.unit?.symbol, rounding) : null,
+    made: r.made ? madeJson(r, r.made, rounding) : null,
     notes: notesJson(r.notes),
     caution: BENCH_CAUTION,
   };

@@ -40,6 +40,11 @@ export interface DilutionResult {
   taken: Quantity | null;
   /** The concentration made from the volume taken (a result). */
   made: Quantity | null;
+  /**
+   * The unit `made` is stated in when the vocabulary has none for it: the stock's equivalents unit
+   * as written ('mEq/mL'), `made` then being the number in that unit; null otherwise.
+   */
+  madeUnit: string | null;
   /** The inputs as written. */
   written: { stock: string; target: string | null; volume: string; taken: string | null };
   notes: Note[];
@@ -134,6 +139,7 @@ export function dilute(stockText: string, targetText: string | undefined, volume
   }
   let taken: Quantity | null = null;
   let made: Quantity | null = null;
+  let madeUnit: string | null = null;
   if (takenText !== undefined) {
     taken = measureAs(takenText, [VOLUME], 'the volume taken', notes);
     if (taken.value.lte(0)) throw fail({ code: 'BAD_AMOUNT', message: 'the volume taken must be positive' });
@@ -143,13 +149,15 @@ export function dilute(stockText: string, targetText: string | undefined, volume
     // in equivalents: the number in the stock's unit as written, as for a unit carried through unconverted
     if (charge) {
       made = multiply(made, quantity(exact(pow10(-charge.stockExp10)), null));
-      made.unit = null;
+      // a number in the stock's equivalents unit, which only the written unit names: not a molarity
+      made = { ...made, dims: PURE, unit: null };
+      madeUnit = charge.unitText;
     }
     if (!factor) factor = divide(finalVolume, taken);
     notes.push({ code: 'MADE_FROM_TAKEN', message: `the concentration made is computed from the volume taken, ${takenText.trim()}: a result, with the figures of the measurements` });
   }
   const written = { stock: stockText.trim(), target: targetText?.trim() ?? null, volume: volumeText.trim(), taken: takenText?.trim() ?? null };
-  return { stock, target, finalVolume, stockVolume, solventVolume, factor: factor!, taken, made, written, notes };
+  return { stock, target, finalVolume, stockVolume, solventVolume, factor: factor!, taken, made, madeUnit, written, notes };
 }
 
 /**
@@ -157,7 +165,7 @@ export function dilute(stockText: string, targetText: string | undefined, volume
  * amounts of charge per volume (held in mol/L) with a note; null when neither is in equivalents.
  * One in equivalents and the other in mol or g is refused: the conversion needs the salt's charge.
  */
-function chargeStrengths(stockText: string, targetText: string | undefined, notes: Note[]): { stock: Quantity; target: Quantity | null; stockExp10: number } | null {
+function chargeStrengths(stockText: string, targetText: string | undefined, notes: Note[]): { stock: Quantity; target: Quantity | null; stockExp10: number; unitText: string } | null {
   const s = isChargePerVolume(stockText);
   const t = targetText !== undefined && isChargePerVolume(targetText);
   if (!s && !t) return null;
@@ -169,7 +177,7 @@ function chargeStrengths(stockText: string, targetText: string | undefined, note
   const target = targetText !== undefined ? readChargePerVolume(targetText, 'the target concentration', notes)! : null;
   notes.push({ code: 'EQUIVALENTS_DILUTED', message: `the stock${target ? ' and the target are' : ' is'} read in equivalents per volume (${stock.eq}/${stock.per}${target ? `, ${target.eq}/${target.per}` : ''}): the dilution factor is the ratio of the two amounts of charge per volume, for whatever salt it is` });
   const stockExp10 = unitOf(`${stock.eq.replace(/[Ee]q$/, '')}mol`).exp10 - unitOf(stock.per).exp10;
-  return { stock: stock.value, target: target?.value ?? null, stockExp10 };
+  return { stock: stock.value, target: target?.value ?? null, stockExp10, unitText: `${stock.eq}/${stock.per}` };
 }
 
 /**

@@ -42,4 +42,13 @@ describe('equivalents and lower-case litres on the command line', () => {
     expect(bad.status).toBe(1);
     expect(bad.stderr).toContain("salt's charge");
   });
+
+  it('gives the concentration made from a volume taken in the stock unit, in the table, JSON and CSV', () => {
+    // from memory: C2 = C1·V1/V2; 10.00 mL of 2 mEq/L made up to 100.0 mL is 0.2 mEq/L
+    const args = ['dilute', '2 mEq/L', '--taken', '10.00 mL', '--volume', '100.0 mL'];
+    expect(pondus(args).stdout).toContain('gives 0.2 mEq/L');
+    expect(pondus(args).stdout).not.toMatch(/gives [0-9.]+ M\b/);
+    expect(JSON.parse(pondus([...args, '--json']).stdout).made.display).toBe('0.2 mEq/L');
+    expect(pondus([...args, '--csv']).stdout).toContain(',0.2 mEq/L,');
+  });
 });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { dilute } from '../../src/preparation/dilution.js';
+import { dilutionJson } from '../../src/preparation/dilution-json.js';
 import { displayInstruction } from '../../src/sigfig/instruction.js';
 
 describe('dilute in equivalents', () => {
@@ -18,6 +19,14 @@ describe('dilute in equivalents', () => {
     const r = dilute('2 mEq/mL', undefined, '1.000 L', '10.00 mL');
     expect(r.made!.value.toString()).toBe('0.02');
     expect(r.made!.unit).toBeNull();
+    expect(r.madeUnit).toBe('mEq/mL');
+    // the number is not a molarity: only the unit as written names it
+    const json = dilutionJson(r);
+    expect(json.made).toMatchObject({ value: 0.02, unit: 'mEq/mL', display: '0.02 mEq/mL' });
+    // 10.00 mL of 2 mEq/L in 100.0 mL: 0.2 mEq/L, not 0.2 M
+    expect(dilutionJson(dilute('2 mEq/L', undefined, '100.0 mL', '10.00 mL')).made?.display).toBe('0.2 mEq/L');
+    expect(dilutionJson(dilute('2 µEq/mL', undefined, '100.0 mL', '10.00 mL')).made?.display).toBe('0.2 µEq/mL');
+    expect(dilute('1.00 M', undefined, '250.0 mL', '25.00 mL').madeUnit).toBeNull();
   });
 
   it('refuses mEq against mol, since that needs the salt', () => {

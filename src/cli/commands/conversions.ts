@@ -52,19 +52,21 @@ function oneStepPresenter(o: DiluteCliOptions): Presenter<DilutionResult> {
   }
   const rounding = roundingOf(o);
   const { text, ins } = shows(rounding);
+  // in equivalents the concentration made is a number in the stock's unit as written
+  const madeText = (r: DilutionResult) => (r.made && r.madeUnit !== null ? `${text(r.made)} ${r.madeUnit}` : text(r.made));
   const vUnit = (r: DilutionResult) => (r.stockVolume ? volumeUnitFor(r.stockVolume.quantity, r.finalVolume.unit) : undefined);
   return {
     compute: (stock) => dilute(stock, o.to, o.volume!, o.taken),
     json: (r) => dilutionJson(r, rounding),
     columns: ['input', 'target', 'finalVolume', 'stockVolume', 'display', 'made'],
-    cells: (r) => [r.written.stock, r.written.target, r.written.volume, r.stockVolume ? decimalCell(r.stockVolume.quantity.value) : '', ins(r.stockVolume, vUnit(r)), text(r.made)],
+    cells: (r) => [r.written.stock, r.written.target, r.written.volume, r.stockVolume ? decimalCell(r.stockVolume.quantity.value) : '', ins(r.stockVolume, vUnit(r)), madeText(r)],
     block: (r) => {
       const lines: string[] = [];
       if (r.target && r.stockVolume) {
         lines.push(`C1·V1 = C2·V2: ${r.written.stock} → ${r.written.target} in ${r.written.volume} (dilution factor ${displayInstruction(instruction(r.factor, []), null, rounding).figure})`);
         lines.push(`  take ${ins(r.stockVolume, vUnit(r))} of the stock and make up to ${r.written.volume} (about ${ins(r.solventVolume)} of solvent; volumes need not add up exactly)`);
       }
-      if (r.made) lines.push(`${lines.length ? '  ' : ''}made: ${r.written.taken} of ${r.written.stock} made up to ${r.written.volume} gives ${text(r.made)}`);
+      if (r.made) lines.push(`${lines.length ? '  ' : ''}made: ${r.written.taken} of ${r.written.stock} made up to ${r.written.volume} gives ${madeText(r)}`);
       return lines.join('\n');
     },
     notes: (r) => r.notes,
