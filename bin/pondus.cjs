@@ -97,7 +97,15 @@ if (args.length === 1 && (first === '--version' || first === '-V')) {
       cacheFd = undefined; // no cache yet
     }
     const textSize = fstatSync(textFd).size;
-    const cacheSize = cacheFd === undefined ? 0 : fstatSync(cacheFd).size;
+    let cacheSize = 0;
+    if (cacheFd !== undefined) {
+      const stat = fstatSync(cacheFd);
+      if (stat.isFile()) cacheSize = stat.size;
+      else {
+        closeSync(cacheFd); // not a file (a folder in its place): start without a cache
+        cacheFd = undefined;
+      }
+    }
     const buf = Buffer.allocUnsafeSlow(Math.max(textSize, cacheSize));
     const readAll = (fd, size) => {
       let at = 0;
@@ -110,7 +118,12 @@ if (args.length === 1 && (first === '--version' || first === '-V')) {
       return at;
     };
     const text = buf.latin1Slice(0, readAll(textFd, textSize));
-    let cachedData = cacheFd === undefined ? undefined : buf.subarray(0, readAll(cacheFd, cacheSize));
+    let cachedData;
+    try {
+      cachedData = cacheFd === undefined ? undefined : buf.subarray(0, readAll(cacheFd, cacheSize));
+    } catch {
+      cachedData = undefined; // a cache that cannot be read: compile afresh
+    }
     let script;
     try {
       script = new Script(text, { filename: file, cachedData });

@@ -14,8 +14,11 @@ describe('a table of texts made after some look-ups', () => {
     expect(t.get(6)).toBeUndefined();
   });
 
-  it('gives the same texts a plain conversion gives, with or without the table', () => {
+  it('holds each text at its own key once made, and every key of its size', () => {
     const t = new LazyTexts(4096);
     for (let round = 0; round < 3; round++) for (let k = 0; k < 4096; k += 7) expect(t.get(k) ?? t.keep(k, String(k))).toBe(String(k));
+    // past the first 64 look-ups every key asked again is found, with its own text
+    for (let k = 0; k < 4096; k += 7) expect(t.get(k)).toBe(String(k));
+    expect(t.get(4095)).toBeUndefined();
   });
 });
