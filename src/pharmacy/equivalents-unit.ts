@@ -52,6 +52,18 @@ function prefixExp10(prefix: string | undefined): number {
   return unitOf(`${prefix ?? ''}mol`).exp10;
 }
 
+/**
+ * Refuses a prefix pondus does not read on Eq ('MEq/mL', 'kEq', 'M Eq/L'), quoting the unit as
+ * typed from its first letter: the letters before Eq are no number's unit.
+ */
+function refuseUnknownPrefix(text: string, t: string, before: string, lead: number): void {
+  const glued = /[A-Za-zµμ]+$/.exec(before);
+  if (glued === null) return;
+  const at = before.length - glued[0].length;
+  const unit = t.slice(at).replace(/\s+$/, '');
+  throw fail({ code: 'UNKNOWN_UNIT', message: `unknown unit '${unit}' at column ${lead + at + 1}`, column: lead + at + 1, length: unit.length, hint: `equivalents are written ${EQUIVALENTS_UNITS}` }, text);
+}
+
 /** Refuses a bare lower-case 'eq': it reads two ways. */
 function refuseBareEq(text: string, prefix: string | undefined, eq: string, column: number): void {
   if (prefix === undefined && eq === 'eq') {
@@ -105,6 +117,7 @@ export function readChargePerVolume(text: string, what: string, notes: Note[]): 
   const m = PER_VOLUME.exec(t);
   if (!m) return null;
   const perColumn = lead + t.length - m[4].length + 1;
+  if (m[2] === undefined) refuseUnknownPrefix(text, t, m[1], lead);
   refuseBareEq(text, m[2], m[3], lead + t.slice(0, t.length - m[4].length).lastIndexOf(m[3]) + 1);
   let volume;
   try {
@@ -140,6 +153,7 @@ export function readChargeAmount(text: string, what: string, notes: Note[]): Qua
   const lead = text.length - text.trimStart().length;
   const m = AMOUNT_OF_CHARGE.exec(t);
   if (!m) throw fail({ code: 'BAD_AMOUNT', message: `a milliequivalent target is written like '20 mEq'; got '${text}'` }, text);
+  if (m[2] === undefined) refuseUnknownPrefix(text, t, m[1], lead);
   refuseBareEq(text, m[2], m[3], lead + t.length - m[3].length + 1);
   const n = readNumber(text, m[1], lead, what, notes);
   const amount = multiply(n, quantity(exact(pow10(prefixExp10(m[2]))), null));

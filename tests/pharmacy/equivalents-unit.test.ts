@@ -45,7 +45,7 @@ describe('equivalents as written', () => {
     expect(number.first.message).not.toMatch(/mmol/);
     const micro = thrown(() => readChargePerVolume('20 µ Eq/mL', 'the strength', []));
     expect(micro.input).toBe('20 µ Eq/mL');
-    expect(micro.first.message).toContain("'µ' at column 4");
+    expect(micro.first.message).toContain("unknown unit 'µ Eq/mL' at column 4");
   });
 
   // common practice: KCl concentrate for infusion is labelled 2 mEq/mL (2 mmol/mL of KCl)
@@ -63,5 +63,23 @@ describe('equivalents as written', () => {
     // 20 mEq/l of KCl: 20 mmol/L, 40 mOsm/L (from memory: 2 particles per formula unit)
     const r = osmolarity('KCl=20 mEq/l');
     expect(displayQuantity(r.osmolarity, 'mM').text).toBe('40.00 mM');
+  });
+});
+
+describe('a prefix of Eq that is not read', () => {
+  it('is refused, quoting the unit as typed at its column', async () => {
+    const { readChargePerVolume, readChargeAmount } = await import('../../src/pharmacy/equivalents-unit.js');
+    const err = (f: () => unknown) => {
+      try {
+        f();
+      } catch (e) {
+        return (e as { first: { code: string; message: string; column?: number } }).first;
+      }
+      throw new Error('not refused');
+    };
+    expect(err(() => readChargePerVolume('2 MEq/mL', 'the strength', []))).toMatchObject({ code: 'UNKNOWN_UNIT', column: 3, message: "unknown unit 'MEq/mL' at column 3" });
+    expect(err(() => readChargeAmount('20 kEq', 'the target', []))).toMatchObject({ code: 'UNKNOWN_UNIT', column: 4, message: "unknown unit 'kEq' at column 4" });
+    // the prefixes read are those of mol (SI Brochure, 9th edition, table 7): m and µ
+    expect(readChargePerVolume('2 mEq/mL', 'the strength', [])?.eq).toBe('mEq');
   });
 });
