@@ -404,7 +404,7 @@ export interface ChargeReading {
  * charge and the rest the count (SO4^2-, Hg2^2+, Fe(CN)6^4-); with one digit after a lone atom it
  * is the charge (Fe^3+, N^3-), after anything longer the count (NH4^+, NO3^-). Then the count of
  * every digit with a charge of 1, then the other splits, longer counts first; a charge of all the
- * digits comes last.
+ * digits comes last. A split with a count of 1 is never the first: nobody writes that count.
  *
  * @param digits - the digits between the last symbol or bracket and the sign.
  * @param loneAtom - true when the formula is one atom with these digits as its count.
@@ -412,6 +412,7 @@ export interface ChargeReading {
  * @example
  * chargeReadings('42', false, false, 99) // [{ count: '4', charge: '2' }, { count: '42', charge: '' }, { count: '', charge: '42' }]
  * chargeReadings('3', true, false, 99)   // [{ count: '', charge: '3' }, { count: '3', charge: '' }]
+ * chargeReadings('12', true, false, 99)  // [{ count: '12', charge: '' }, { count: '1', charge: '2' }, { count: '', charge: '12' }]
  */
 export function chargeReadings(digits: string, loneAtom: boolean, afterPoint: boolean, maxCharge: number): ChargeReading[] {
   const all: ChargeReading[] = [];
@@ -424,6 +425,8 @@ export function chargeReadings(digits: string, loneAtom: boolean, afterPoint: bo
     all.push({ count, charge });
   }
   // all: the count of every digit first, then longer counts first, the charge of every digit last
-  const first = digits.length >= 2 ? all.find((r) => r.charge.length === 1 && r.count !== '') : loneAtom ? all.find((r) => r.count === '') : all[0];
+  let first = digits.length >= 2 ? all.find((r) => r.charge.length === 1 && r.count !== '') : loneAtom ? all.find((r) => r.count === '') : all[0];
+  // a count of 1 is not written (C1^2- for C12-): such a split is not the likeliest
+  if (first?.count === '1') first = all.find((r) => r.count !== '1') ?? first;
   return first === undefined ? all : [first, ...all.filter((r) => r !== first)];
 }

@@ -38,6 +38,12 @@ describe('the readings of a bare sign after digits', () => {
     expect(offered(i.hint!)).toEqual(readings);
   });
 
+  it('never offers a count of 1 first: nobody writes that count (common practice)', () => {
+    expect(chargeReadings('12', true, false, 99)[0]).toEqual({ count: '12', charge: '' });
+    expect(chargeReadings('12', false, false, 99)[0]).toEqual({ count: '12', charge: '' });
+    expect(chargeReadings('22', false, false, 99)[0]).toEqual({ count: '2', charge: '2' }); // Hg2^2+
+  });
+
   it('says what each reading means', () => {
     expect(refusal('SO42-').hint).toBe('write SO4^2- (count 4, charge 2-), SO42^- (count 42, charge 1-) or SO^42- (charge 42-)');
     expect(refusal('Fe3+').hint).toBe('write Fe^3+ (charge 3+) or Fe3^+ (count 3, charge 1+)');
