@@ -262,6 +262,13 @@ function aliasTable(): Record<string, string> {
     const lower = `${m[1]}l`;
     if (ALIASES[lower] === undefined && !TABLE.some((u) => u.symbol === lower)) ALIASES[lower] = ALIASES[k] ?? k;
   }
+  // the Greek small letter mu (U+03BC) where the micro sign (U+00B5) stands, as keyboards and fonts
+  // give it: every spelling with µ is read with μ too ('μg/mL', 'μmol/l')
+  for (const k of [...TABLE.map((u) => u.symbol), ...Object.keys(ALIASES)]) {
+    if (!k.includes('\u00b5')) continue;
+    const greek = k.replaceAll('\u00b5', '\u03bc');
+    if (ALIASES[greek] === undefined) ALIASES[greek] = ALIASES[k] ?? k;
+  }
   return ALIASES;
 }
 

@@ -20,3 +20,17 @@ describe('a litre written l after the slash', () => {
     expect(unitOf('µg/ml').symbol).toBe('µg/mL');
   });
 });
+
+describe('micro written with the Greek letter mu', () => {
+  // source: Unicode 15.0, U+00B5 MICRO SIGN and U+03BC GREEK SMALL LETTER MU (the SI prefix micro
+  // is the Greek letter; keyboards give either)
+  it('reads every spelling with the micro sign with the Greek mu as well', () => {
+    for (const s of unitSpellings()) {
+      if (!s.includes('\u00b5')) continue;
+      const greek = unitOf(s.replaceAll('\u00b5', '\u03bc'));
+      const micro = unitOf(s);
+      expect([greek.symbol, greek.exp10]).toEqual([micro.symbol, micro.exp10]);
+    }
+    expect(unitOf('\u03bcg/mL').symbol).toBe('µg/mL');
+  });
+});
