@@ -420,7 +420,7 @@ export function chargeReadings(digits: string, loneAtom: boolean, afterPoint: bo
     const count = digits.slice(0, k);
     const charge = digits.slice(k);
     if (count === '' && afterPoint) continue;
-    if (count !== '' && (count[0] === '0' || /^0+$/.test(count))) continue;
+    if (count !== '' && count[0] === '0') continue;
     if (charge !== '' && (charge[0] === '0' || charge.length > 2 || Number(charge) > maxCharge)) continue;
     all.push({ count, charge });
   }

@@ -34,6 +34,8 @@ export interface ChargePerVolume {
   eq: string;
   /** The volume unit as written: 'L', 'ml'. */
   per: string;
+  /** The power of ten from Eq/L to the unit as written: the number in that unit is the value times 10^toWritten. */
+  toWritten: number;
 }
 
 /**
@@ -57,9 +59,9 @@ function prefixExp10(prefix: string | undefined): number {
  * typed from its first letter: the letters before Eq are no number's unit.
  */
 function refuseUnknownPrefix(text: string, t: string, before: string, lead: number): void {
-  const glued = /[A-Za-zµμ]+$/.exec(before);
-  if (glued === null) return;
-  const at = before.length - glued[0].length;
+  const letters = /[A-Za-zµμ]+$/.exec(before);
+  if (letters === null) return;
+  const at = before.length - letters[0].length;
   const unit = t.slice(at).replace(/\s+$/, '');
   throw fail({ code: 'UNKNOWN_UNIT', message: `unknown unit '${unit}' at column ${lead + at + 1}`, column: lead + at + 1, length: unit.length, hint: `equivalents are written ${EQUIVALENTS_UNITS}` }, text);
 }
@@ -132,9 +134,10 @@ export function readChargePerVolume(text: string, what: string, notes: Note[]): 
   }
   const n = readNumber(text, m[1], lead, what, notes);
   // n mol of charge (the number as written) per 10^(volume − prefix) L: the prefix of Eq is that of mol
-  const value = divide(n, quantity(exact(pow10(volume.exp10 - prefixExp10(m[2]))), unitOf('L')));
+  const toWritten = volume.exp10 - prefixExp10(m[2]);
+  const value = divide(n, quantity(exact(pow10(toWritten)), unitOf('L')));
   value.unit = unitOf('M');
-  return { value, eq: `${m[2] ?? ''}${m[3]}`, per: m[4] };
+  return { value, eq: `${m[2] ?? ''}${m[3]}`, per: m[4], toWritten };
 }
 
 /**

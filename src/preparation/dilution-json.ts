@@ -35,6 +35,12 @@ export interface DilutionJson {
   caution: string;
 }
 
+/** The concentration made, in the stock's unit; in equivalents, the number with the unit as written. */
+function madeJson(r: DilutionResult, made: Quantity, rounding: RoundingMode): AmountJson {
+  const j = resultJson(made, r.madeUnit === null ? r.stock.unit?.symbol : null, rounding);
+  return r.madeUnit === null ? j : { ...j, unit: r.madeUnit, display: `${j.display} ${r.madeUnit}`, displayUnit: r.madeUnit };
+}
+
 /**
  * The JSON row of a one-step dilution (`pondus dilute STOCK --to … --volume … --json`, or `--taken`).
  *
@@ -46,12 +52,6 @@ export interface DilutionJson {
  * dilutionJson(dilute('1.00 M', '0.100 M', '250.0 mL')).stockVolume.display // '25.00 mL'
  * dilutionJson(dilute('1.00 M', undefined, '250.0 mL', '25.00 mL')).made.display // '0.100 M'
  */
-/** The concentration made, in the stock's unit; in equivalents, the number with the unit as written. */
-function madeJson(r: DilutionResult, made: Quantity, rounding: RoundingMode): AmountJson {
-  const j = resultJson(made, r.madeUnit === null ? r.stock.unit?.symbol : null, rounding);
-  return r.madeUnit === null ? j : { ...j, unit: r.madeUnit, display: `${j.display} ${r.madeUnit}`, displayUnit: r.madeUnit };
-}
-
 export function dilutionJson(r: DilutionResult, rounding: RoundingMode = 'half-even'): DilutionJson {
   return {
     input: r.written.stock,

@@ -10,7 +10,7 @@ import { typedIssue } from '../errors/message.js';
 import { MASS_CONCENTRATION, MOLARITY, PURE, VOLUME, measureAs } from '../calc/measure.js';
 import { partsPerAsMassPerVolume } from './parts-per.js';
 import { divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
-import { baseUnitText, notReadHint, pow10, sameDims, unitOf } from '../sigfig/units.js';
+import { baseUnitText, notReadHint, pow10, sameDims } from '../sigfig/units.js';
 import { exact } from '../sigfig/measured.js';
 import { isChargePerVolume, readChargePerVolume } from '../pharmacy/equivalents-unit.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, volumeUnitFor, type Instruction } from '../sigfig/instruction.js';
@@ -148,7 +148,7 @@ export function dilute(stockText: string, targetText: string | undefined, volume
     made.unit = stock.unit;
     // in equivalents: the number in the stock's unit as written, as for a unit carried through unconverted
     if (charge) {
-      made = multiply(made, quantity(exact(pow10(-charge.stockExp10)), null));
+      made = multiply(made, quantity(exact(pow10(charge.toWritten)), null));
       // a number in the stock's equivalents unit, which only the written unit names: not a molarity
       made = { ...made, dims: PURE, unit: null };
       madeUnit = charge.unitText;
@@ -165,7 +165,7 @@ export function dilute(stockText: string, targetText: string | undefined, volume
  * amounts of charge per volume (held in mol/L) with a note; null when neither is in equivalents.
  * One in equivalents and the other in mol or g is refused: the conversion needs the salt's charge.
  */
-function chargeStrengths(stockText: string, targetText: string | undefined, notes: Note[]): { stock: Quantity; target: Quantity | null; stockExp10: number; unitText: string } | null {
+function chargeStrengths(stockText: string, targetText: string | undefined, notes: Note[]): { stock: Quantity; target: Quantity | null; toWritten: number; unitText: string } | null {
   const s = isChargePerVolume(stockText);
   const t = targetText !== undefined && isChargePerVolume(targetText);
   if (!s && !t) return null;
@@ -176,8 +176,7 @@ function chargeStrengths(stockText: string, targetText: string | undefined, note
   const stock = readChargePerVolume(stockText, 'the stock concentration', notes)!;
   const target = targetText !== undefined ? readChargePerVolume(targetText, 'the target concentration', notes)! : null;
   notes.push({ code: 'EQUIVALENTS_DILUTED', message: `the stock${target ? ' and the target are' : ' is'} read in equivalents per volume (${stock.eq}/${stock.per}${target ? `, ${target.eq}/${target.per}` : ''}): the dilution factor is the ratio of the two amounts of charge per volume, for whatever salt it is` });
-  const stockExp10 = unitOf(`${stock.eq.replace(/[Ee]q$/, '')}mol`).exp10 - unitOf(stock.per).exp10;
-  return { stock: stock.value, target: target?.value ?? null, stockExp10, unitText: `${stock.eq}/${stock.per}` };
+  return { stock: stock.value, target: target?.value ?? null, toWritten: stock.toWritten, unitText: `${stock.eq}/${stock.per}` };
 }
 
 /**

@@ -260,7 +260,7 @@ function aliasTable(): Record<string, string> {
     const m = /^(.*\/(?:100 ?)?[mµuμd]?)L$/.exec(k);
     if (!m || !/[a-zA-Zµμ%]/.test(m[1])) continue;
     const lower = `${m[1]}l`;
-    if (ALIASES[lower] === undefined && !TABLE.some((u) => u.symbol === lower)) ALIASES[lower] = ALIASES[k] ?? k;
+    if (ALIASES[lower] === undefined && !BY_SYMBOL.has(lower)) ALIASES[lower] = ALIASES[k] ?? k;
   }
   // the Greek small letter mu (U+03BC) where the micro sign (U+00B5) stands, as keyboards and fonts
   // give it: every spelling with µ is read with μ too ('μg/mL', 'μmol/l')
