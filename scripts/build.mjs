@@ -36,6 +36,20 @@ const lazyNuclideTable = (where) => ({
     }));
   },
 });
+// The other data tables (atomic weights, natural isotopes, constants) are read at start-up, but as
+// JSON text parsed then, not as object literals: V8 puts every string a literal names (each
+// abundance, mass and name, some 1,400 of them) in its table of internalized strings, and a bundle
+// that takes that table past its size at Node's own start-up pays some 2 ms to grow it. The values
+// JSON.parse makes are plain strings; only the text itself is internalized.
+const dataAsJsonText = {
+  name: 'data-as-json-text',
+  setup(b) {
+    b.onLoad({ filter: /elements[\\/]data[\\/](atomic-weights|isotopes|constants)\.json$/ }, (args) => {
+      const compact = JSON.stringify(JSON.parse(readFileSync(args.path, 'utf8')));
+      return { contents: `export default JSON.parse('${compact.replace(/\\/g, '\\\\').replace(/'/g, "\\'")}');`, loader: 'js' };
+    });
+  },
+};
 mkdirSync(`${root}dist/data`, { recursive: true });
 copyFileSync(`${root}src/elements/data/nuclide-masses.json`, `${root}dist/data/nuclide-masses.json`);
 
@@ -87,7 +101,7 @@ const library = {
   external: ['decimal.js'],
   minifyWhitespace: true,
   minifySyntax: true,
-  plugins: [lazyNuclideTable('embedded'), lazyGrammar('inline')],
+  plugins: [lazyNuclideTable('embedded'), dataAsJsonText, lazyGrammar('inline')],
   logLevel: 'warning',
 };
 await build({ ...library, format: 'esm', outfile: `${root}dist/lib/index.js` });
@@ -146,7 +160,7 @@ const cli = await build({
   outdir: `${root}dist/cli`,
   outExtension: { '.js': '.cjs' },
   metafile: true,
-  plugins: [lazyChildProcess, lazyNuclideTable('../data'), lazyGrammar('own file'), lazySheetReader],
+  plugins: [lazyChildProcess, lazyNuclideTable('../data'), dataAsJsonText, lazyGrammar('own file'), lazySheetReader],
 });
 // the grammars' own file, which the bundles above require on first use
 await build({ ...cliFile, entryPoints: [`${root}src/cli/grammar-chunk.ts`], outfile: `${root}dist/cli/grammars.cjs` });
@@ -185,7 +199,7 @@ await build({
   platform: 'node',
   format: 'cjs',
   target: 'node20',
-  plugins: [lazyNuclideTable('../data')],
+  plugins: [lazyNuclideTable('../data'), dataAsJsonText],
   logLevel: 'warning',
 });
 

@@ -1,5 +1,5 @@
 import { toScaled } from '../exact/scaled.js';
-import { ELEMENTS, getElement, type ElementData } from './element-table.js';
+import { atomicNumber, ELEMENT_SYMBOLS, getElement, type ElementData } from './element-table.js';
 import { getNuclide, principalIsotope } from './nuclides.js';
 
 /** Which atomic weights to use for average molar mass. */
@@ -52,11 +52,12 @@ export const ATOMS = {
 };
 let nextNuclideId = 119;
 
-const SYMBOL_RANK = new Map(
-  ELEMENTS.map((e) => e.symbol)
-    .sort((a, b) => (a < b ? -1 : a > b ? 1 : 0))
-    .map((s, i) => [s, i] as const),
-);
+/** Each element's place in alphabetical order of the symbols, by atomic number (0 for Ac). */
+const RANK_OF_Z = new Int16Array(ELEMENT_SYMBOLS.length + 1);
+{
+  const order = ELEMENT_SYMBOLS.map((_, i) => i).sort((a, b) => (ELEMENT_SYMBOLS[a] < ELEMENT_SYMBOLS[b] ? -1 : 1));
+  for (let r = 0; r < order.length; r++) RANK_OF_Z[order[r] + 1] = r;
+}
 
 /**
  * Position of an element symbol in alphabetical order (0 for Ac): the Hill order of the elements
@@ -66,7 +67,8 @@ const SYMBOL_RANK = new Map(
  * alphabeticalRank('Ag') < alphabeticalRank('Al') // true
  */
 export function alphabeticalRank(symbol: string): number {
-  return SYMBOL_RANK.get(symbol) ?? 999;
+  const z = atomicNumber(symbol);
+  return z === undefined ? 999 : RANK_OF_Z[z];
 }
 
 function register(d: AtomData): void {
@@ -82,8 +84,6 @@ function register(d: AtomData): void {
   ATOMS.rankOrganic[i] = d.symbol === 'C' ? mass - 2000 : d.symbol === 'H' ? mass - 1000 : plain;
 }
 
-const Z_OF = new Map(ELEMENTS.map((e) => [e.symbol, e.z]));
-
 /**
  * The dense-table index of an atom (registering its data on first use), or -1 for an unknown
  * symbol or a nuclide AME2020 does not list.
@@ -93,7 +93,7 @@ const Z_OF = new Map(ELEMENTS.map((e) => [e.symbol, e.z]));
  */
 export function atomId(symbol: string, massNumber: number | null): number {
   if (massNumber === null) {
-    const z = Z_OF.get(symbol);
+    const z = atomicNumber(symbol);
     if (z === undefined) return -1;
     if (ATOMS.data[z] === undefined) getAtomData(symbol, null);
     return z;

@@ -51,13 +51,39 @@ function toElement(r: RawElement): ElementData {
   };
 }
 
+const RAW = data.elements as RawElement[];
+
+/**
+ * The 118 symbols in order of atomic number (index 0 is H): what the readers index their own
+ * tables by. The element records are made from the data only when one is asked for, as a
+ * command needs the few its formulas name, and the young heap is what start-up pays for.
+ */
+export const ELEMENT_SYMBOLS: readonly string[] = RAW.map((r) => r.symbol);
+
+/** Each symbol's atomic number, made with no pair arrays (start-up pays for every object made). */
+const Z_OF_SYMBOL = new Map<string, number>();
+for (let i = 0; i < RAW.length; i++) Z_OF_SYMBOL.set(RAW[i].symbol, i + 1);
+
+/** The records made so far, by atomic number: one object per element, however it is reached. */
+const MADE: ElementData[] = [];
+const elementOfZ = (z: number): ElementData => (MADE[z] ??= toElement(RAW[z - 1]));
+
 /** All 118 elements in order of atomic number. */
-export const ELEMENTS: readonly ElementData[] = Object.freeze((data.elements as RawElement[]).map(toElement));
+export const ELEMENTS: readonly ElementData[] = /* @__PURE__ */ Object.freeze(/* @__PURE__ */ RAW.map((r) => elementOfZ(r.z)));
 
 /** Where the element data come from, as stated in the data file. */
-export const ATOMIC_WEIGHT_PROVENANCE: Readonly<Record<string, string>> = Object.freeze({ ...data.provenance });
+export const ATOMIC_WEIGHT_PROVENANCE: Readonly<Record<string, string>> = /* @__PURE__ */ Object.freeze({ ...data.provenance });
 
-const BY_SYMBOL: ReadonlyMap<string, ElementData> = new Map(ELEMENTS.map((e) => [e.symbol, e]));
+/**
+ * The atomic number of an element symbol (case-sensitive), or undefined for anything else.
+ *
+ * @example
+ * atomicNumber('Fe') // 26
+ * atomicNumber('FE') // undefined
+ */
+export function atomicNumber(symbol: string): number | undefined {
+  return Z_OF_SYMBOL.get(symbol);
+}
 
 /**
  * Looks up an element by its symbol (case-sensitive, as symbols are).
@@ -69,7 +95,8 @@ const BY_SYMBOL: ReadonlyMap<string, ElementData> = new Map(ELEMENTS.map((e) => 
  * getElement('Fe')?.name // 'iron'
  */
 export function getElement(symbol: string): ElementData | undefined {
-  return BY_SYMBOL.get(symbol);
+  const z = Z_OF_SYMBOL.get(symbol);
+  return z === undefined ? undefined : elementOfZ(z);
 }
 
 /**
@@ -83,5 +110,5 @@ export function getElement(symbol: string): ElementData | undefined {
  * isElementSymbol('CO') // false
  */
 export function isElementSymbol(symbol: string): boolean {
-  return BY_SYMBOL.has(symbol);
+  return Z_OF_SYMBOL.has(symbol);
 }

@@ -11,7 +11,7 @@
  * then handles the input, so every message comes from one place.
  * tests/formula-parser/fast-path.test.ts checks the two agree.
  */
-import { ELEMENTS } from '../elements/element-table.js';
+import { ELEMENT_SYMBOLS } from '../elements/element-table.js';
 import type { Note } from '../errors/issue.js';
 import { caseTrapNotes, isCapitalSlipAt, isCaseTrap } from './hints.js';
 import { isMassNumberOf } from './leading-number.js';
@@ -27,11 +27,11 @@ const ONE_LETTER: (string | undefined)[] = [];
 const TWO_LETTER: (string | undefined)[] = [];
 /** Symbols whose reading must be settled by the full parser: Ac, Ts and Pr are also abbreviations; Np, Ar and Am get a note. */
 const SETTLE = new Set(['Ac', 'Ts', 'Pr', 'Np', 'Ar', 'Am']);
-for (const e of ELEMENTS) {
-  if (SETTLE.has(e.symbol)) continue;
-  const a = e.symbol.charCodeAt(0) - 65;
-  if (e.symbol.length === 1) ONE_LETTER[a] = e.symbol;
-  else TWO_LETTER[a * 26 + e.symbol.charCodeAt(1) - 97] = e.symbol;
+for (const symbol of ELEMENT_SYMBOLS) {
+  if (SETTLE.has(symbol)) continue;
+  const a = symbol.charCodeAt(0) - 65;
+  if (symbol.length === 1) ONE_LETTER[a] = symbol;
+  else TWO_LETTER[a * 26 + symbol.charCodeAt(1) - 97] = symbol;
 }
 /** D and T: hydrogen-2 and hydrogen-3. */
 const NUCLIDE_LETTER: (number | undefined)[] = [];

@@ -56,7 +56,8 @@ export const TABLE_VI_SEQUENCE: readonly string[] = [
   ...['He', 'Ne', 'Ar', 'Kr', 'Xe', 'Rn', 'Og'], // 18
 ];
 
-const POSITION = new Map(TABLE_VI_SEQUENCE.map((s, i) => [s, i] as const));
+/** An element's place in the sequence, -1 for a symbol that is none (a scan: a formula has few elements, and start-up pays for every table made). */
+const positionOf = (symbol: string): number => TABLE_VI_SEQUENCE.indexOf(symbol);
 const HALOGENS = new Set(['F', 'Cl', 'Br', 'I', 'At', 'Ts']);
 // the non-metals (and metalloids) of the sequence: everything up to and including group 13's boron
 // and group 14–15's metalloids, by the usual classification (common practice)
@@ -73,7 +74,7 @@ const NONMETALS = new Set(['F', 'Cl', 'Br', 'I', 'At', 'O', 'S', 'Se', 'Te', 'H'
  * isMetal('Cl') // false
  */
 export function isMetal(symbol: string): boolean {
-  return !NONMETALS.has(symbol) && POSITION.has(symbol);
+  return !NONMETALS.has(symbol) && positionOf(symbol) >= 0;
 }
 
 /** The element symbol of a count key ('13C' → 'C', 'D' and 'T' → 'H'). */
@@ -110,12 +111,12 @@ export function writtenOrder(keys: Iterable<string>, options: WrittenOrderOption
   const halogenCentral = conventional && [...symbols].every((s) => s === 'O' || s === 'H' || HALOGENS.has(s) || !NONMETALS.has(s));
   const rank = (key: string): number => {
     const s = symbolOf(key);
-    const p = POSITION.get(s);
-    if (p === undefined) return -1; // unknown: last
+    const p = positionOf(s);
+    if (p < 0) return -1; // unknown: last
     // H after the metals, before every non-metal of the anion
     if (conventional && s === 'H') return lowestMetalRank(symbols) - 0.5;
     // a halogen as the central atom of its oxoanion, just before O
-    if (halogenCentral && HALOGENS.has(s)) return POSITION.get('O')! + 0.5 - p / 100;
+    if (halogenCentral && HALOGENS.has(s)) return positionOf('O') + 0.5 - p / 100;
     return p;
   };
   return list
@@ -127,10 +128,13 @@ export function writtenOrder(keys: Iterable<string>, options: WrittenOrderOption
 /** The rank just below the least electropositive metal present (or above every non-metal when there is none). */
 function lowestMetalRank(symbols: Set<string>): number {
   let lowest = Infinity;
-  for (const s of symbols) if (!NONMETALS.has(s)) lowest = Math.min(lowest, POSITION.get(s) ?? Infinity);
+  for (const s of symbols) {
+    const p = NONMETALS.has(s) ? -1 : positionOf(s);
+    if (p >= 0) lowest = Math.min(lowest, p);
+  }
   if (lowest !== Infinity) return lowest;
   let highest = -1;
-  for (const s of symbols) if (s !== 'H') highest = Math.max(highest, POSITION.get(s) ?? -1);
+  for (const s of symbols) if (s !== 'H') highest = Math.max(highest, positionOf(s));
   return highest + 1;
 }
 
@@ -167,7 +171,7 @@ function hydroxideText(counts: AtomCounts, charge: number): string | null {
   const h = counts.get('H');
   if (typeof o !== 'number' || typeof h !== 'number' || o !== h) return null;
   const metals = [...counts.keys()].filter((k) => k !== 'O' && k !== 'H');
-  if (metals.length === 0 || metals.some((k) => !POSITION.has(k) || NONMETALS.has(k))) return null;
+  if (metals.length === 0 || metals.some((k) => positionOf(k) < 0 || NONMETALS.has(k))) return null;
   const order = writtenOrder(metals, { strict: true });
   const head = formatFormula(labels(order), order.map((k) => counts.get(k)! as Amount), 0);
   const group = o === 1 ? 'OH' : `(OH)${amountText(o)}`;

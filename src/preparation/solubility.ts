@@ -64,13 +64,28 @@ const keyOf = (atoms: Map<string, string>) => [...atoms].sort(([a], [b]) => (a <
 
 /** The elements of a compound other than H and O, which water of crystallisation cannot remove: a cheap first test. */
 const elementsOf = (atoms: Iterable<string>) => [...atoms].filter((e) => e !== 'H' && e !== 'O').sort().join(' ');
+
+const isLower = (c: number) => c >= 97 && c <= 122;
 /**
- * The table's rows by the elements their formulas name (past H and O), read from the symbols in
- * the text: the table's formulas are plain (symbols, counts, brackets), so a row's symbols are its
- * elements. A row is read as a formula only when a reagent with those elements is looked up.
+ * Whether a row's formula names exactly these elements past H and O, read from the symbols in its
+ * text: the table's formulas are plain (symbols, counts, brackets), so a row's symbols are its
+ * elements. A scan of the text, with no string or array made: start-up pays for every object.
  */
-let rowsByElements: Map<string, (typeof SOLUBILITY_20C)[number][]> | undefined;
-/** The entries made so far, by the same key (at most one per row of the table). */
+function namesExactly(formula: string, wanted: readonly string[]): boolean {
+  let seen = 0;
+  for (let i = 0; i < formula.length; i++) {
+    const c = formula.charCodeAt(i);
+    if (c < 65 || c > 90) continue;
+    const two = i + 1 < formula.length && isLower(formula.charCodeAt(i + 1));
+    if (!two && (c === 72 || c === 79)) continue; // H, O
+    const at = wanted.findIndex((w) => w.charCodeAt(0) === c && (two ? w.length === 2 && w.charCodeAt(1) === formula.charCodeAt(i + 1) : w.length === 1));
+    if (at < 0) return false;
+    seen |= 1 << at;
+  }
+  return seen === 2 ** wanted.length - 1;
+}
+
+/** The entries made so far, by the elements their formulas name past H and O (at most one per row of the table). */
 const entriesByElements = new Map<string, Entry[]>();
 const NO_ENTRIES: Entry[] = [];
 
@@ -82,21 +97,19 @@ function entryOf([formula, name, s]: (typeof SOLUBILITY_20C)[number]): Entry {
   return { key: keyOf(atomsPastWater(d)), name, formula, molarMass: new Decimal(d.molarMass.toString()), gPer100g, limit: gPer100g.times(10), w, atLeast: w.times(1000) };
 }
 
-/** The entries whose elements (past H and O) are those of the reagent; most reagents have none. */
+/**
+ * The entries whose elements (past H and O) are those of the reagent; most reagents have none.
+ * A row is read as a formula only when a reagent with its elements is looked up.
+ */
 function candidates(reagent: MassDetail): Entry[] {
-  if (!rowsByElements) {
-    rowsByElements = new Map();
-    for (const row of SOLUBILITY_20C) {
-      const k = elementsOf(new Set(row[0].match(/[A-Z][a-z]?/g)));
-      rowsByElements.set(k, [...(rowsByElements.get(k) ?? []), row]);
-    }
-  }
   const k = elementsOf(reagent.atoms.keys());
-  const rows = rowsByElements.get(k);
-  if (rows === undefined) return NO_ENTRIES;
   let entries = entriesByElements.get(k);
   if (entries === undefined) {
-    entries = rows.map(entryOf);
+    const wanted = k === '' ? [] : k.split(' ');
+    const rows = wanted.length > 30 ? [] : SOLUBILITY_20C.filter((row) => namesExactly(row[0], wanted));
+    entries = rows.length === 0 ? NO_ENTRIES : rows.map(entryOf);
+    // a batch of many compounds names many sets of elements: the remembered ones are bounded
+    if (entriesByElements.size >= 1024) entriesByElements.clear();
     entriesByElements.set(k, entries);
   }
   return entries;

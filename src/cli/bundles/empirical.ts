@@ -1,5 +1,6 @@
-// The command line's bundle for `pondus empirical`, `pondus combustion`, `pondus candidates`: only their own code is loaded.
-import { registerEmpirical, candidatesPresenter, combustionPresenter, empiricalPresenter } from '../commands/empirical.js';
+// The command line's bundle for `pondus empirical`: only its own code is loaded (combustion and
+// candidates have bundles of their own).
+import { empiricalPresenter, registerEmpiricalCommand } from '../commands/empirical.js';
 import { start } from '../start.js';
 
-start({ register: registerEmpirical, presenters: { empirical: empiricalPresenter, combustion: combustionPresenter, candidates: candidatesPresenter } });
+start({ register: (program, run, stdin) => registerEmpiricalCommand(program, run, stdin), presenters: { empirical: empiricalPresenter } });

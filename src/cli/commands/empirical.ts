@@ -252,16 +252,26 @@ export function candidatesPresenter(o: CandidatesCliOptions): Presenter<Candidat
   };
 }
 
-/** Registers `pondus empirical`, `combustion` and `candidates`. */
+/** Registers `pondus empirical`, `combustion` and `candidates` (or the one named by `only`). */
 export function registerEmpirical(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>, only?: string): void {
-  const c = declareEmpirical(program, only);
-  c.empirical?.action((inputs: string[], o: EmpiricalCliOptions) => {
+  if (only === undefined || only === 'empirical') registerEmpiricalCommand(program, run, stdin);
+  if (only === undefined || only === 'combustion') registerCombustion(program, run);
+  if (only === undefined || only === 'candidates') registerCandidates(program, run);
+}
+
+/** Registers `pondus empirical` alone: its bundle holds none of the other two commands' code. */
+export function registerEmpiricalCommand(program: Command, run: CommandRunner, stdin: () => AsyncIterable<string | Buffer>): void {
+  declareEmpirical(program, 'empirical').empirical?.action((inputs: string[], o: EmpiricalCliOptions) => {
     if (o.sheet !== undefined) return runWithSheet(run, 'empirical', inputs, o, stdin, readMeasurementSheet);
     const { inputs: sets, joined } = joinPairArgs(inputs, { what: 'measurement set', units: true });
     const options: EmpiricalCliOptions = { ...o, joined };
     return run('empirical', sets, options);
   });
-  c.combustion?.action((inputs: string[], o: CombustionCliOptions, cmd: Command) => {
+}
+
+/** Registers `pondus combustion` alone. */
+export function registerCombustion(program: Command, run: CommandRunner): void {
+  declareEmpirical(program, 'combustion').combustion?.action((inputs: string[], o: CombustionCliOptions, cmd: Command) => {
     // masses typed without quotes: `0.1000 g --co2 0.2000 g` leaves the units among the samples
     if (inputs.some((a) => /^[A-Za-zµμ]+$/.test(a))) {
       const raw = (cmd.parent as (Command & { rawArgs?: string[] }) | null)?.rawArgs ?? [];
@@ -274,7 +284,11 @@ export function registerEmpirical(program: Command, run: CommandRunner, stdin: (
     }
     return run('combustion', inputs, o);
   });
-  c.candidates?.action((inputs: string[], o: CandidatesCliOptions, cmd: Command) => {
+}
+
+/** Registers `pondus candidates` alone. */
+export function registerCandidates(program: Command, run: CommandRunner): void {
+  declareEmpirical(program, 'candidates').candidates?.action((inputs: string[], o: CandidatesCliOptions, cmd: Command) => {
     const given = (name: string) => cmd.getOptionValueSource(name) === 'cli';
     if (o.found === undefined && given('tolerance')) throw fail({ code: 'USAGE', message: '--tolerance applies to found percents: give --found too, or drop --tolerance' });
     // found values typed unquoted: --found C=40.00 H=6.71 leaves H=6.71 among the masses
