@@ -11,6 +11,7 @@ import type { Presenter } from './output/presenter.js';
 import { createWriter, type ResultWriter } from './output/writers.js';
 import type { Sink } from './output/sink.js';
 import type { Style } from './output/style.js';
+import { holdYoungHeap } from './young-heap.js';
 
 export interface BatchIo {
   out: Sink;
@@ -71,6 +72,7 @@ export interface BatchSummary {
 export async function runBatch<R>(p: Presenter<R>, batches: AsyncIterable<InputItem[]>, format: OutputFormat, io: BatchIo, numbered: boolean): Promise<BatchSummary> {
   const writer = createWriter(format, p, { ...io, numbered });
   const summary: BatchSummary = { total: 0, failed: 0, failedLines: [], tallied: 0, usage: false };
+  let written = 0;
   for await (const batch of batches) {
     withNaming(FLAG_NAMING, () => {
       processItems(p, batch, writer, summary, io.optionFlags);
@@ -78,6 +80,7 @@ export async function runBatch<R>(p: Presenter<R>, batches: AsyncIterable<InputI
     });
     await io.out.flush();
     await io.err.flush();
+    holdYoungHeap(++written);
   }
   withNaming(FLAG_NAMING, () => writer.endBatch(true));
   return summary;
