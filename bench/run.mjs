@@ -14,11 +14,14 @@
 //   quantity:  calc, balance, analysis, prepare, empirical and candidates
 //              batches against the bare loop, and the peak memory of mass --json
 //              up to 10⁷ lines (bench/quantity-rows.mjs)
+//   long:      each command's slowest answer to a long input or option value
+//              (goal < 1 s; bench/long-inputs.mjs)
 //   `--quick` runs fewer repetitions and start-up for a few commands only.
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { generateFormulas, generateMixedFormulas } from './generate-formulas.mjs';
+import { longInputRows } from './long-inputs.mjs';
 import { quantityRows } from './quantity-rows.mjs';
 import { median, timeBatch } from './time-batch.mjs';
 
@@ -38,7 +41,8 @@ function timeSpawn(args) {
   if (r.status !== 0 && r.status !== 1) throw new Error(`${args.join(' ')} exited ${r.status}`);
   return ms(t0);
 }
-const runs = quick ? 7 : 15;
+// start-up differences are a few milliseconds on a ~100 ms process: 31 alternating rounds give a steady median
+const runs = quick ? 7 : 31;
 const startCommands = quick
   ? [['mass', 'H2O'], ['composition', 'H2O'], ['calc', '2.00 g / 4.0 mL'], ['--version'], ['--help']]
   : [
@@ -46,7 +50,7 @@ const startCommands = quick
       ['analysis', 'C6H12O6', '--found', 'C=40.00,H=6.71'], ['empirical', 'C=40.00 H=6.71 O=53.29'],
       ['prepare', 'NaCl', '--concentration', '0.100 M', '--volume', '250.0 mL'], ['--version'], ['--help'],
     ];
-timeSpawn([bin, 'mass', 'H2O']); // warm the file cache
+for (const c of startCommands) timeSpawn([bin, ...c]); // warm the file cache (and each bundle's code cache)
 const node0 = [];
 const starts = startCommands.map(() => []);
 for (let i = 0; i < runs; i++) {
@@ -147,3 +151,4 @@ for (const r of await candidatesGrowth({ quick })) {
 }
 console.log(`memory    peak ${peakSmall ? f(peakSmall) : 'n/a'} MB for 30,000 lines, ${peakBig ? f(peakBig) : 'n/a'} MB for 300,000 lines (mass --json)`);
 for (const line of await quantityRows({ quick })) console.log(line);
+for (const line of longInputRows({ quick })) console.log(line);

@@ -10,6 +10,7 @@ import { DEFAULT_TOLERANCE, prepareData, searchFormula, searchMolecular, type Fo
 import { hillOrder } from '../formula/hill.js';
 import { conventionalFormulaOf } from './written.js';
 import { checkInputLength } from './input-length.js';
+import { gcd } from '../exact/gcd.js';
 
 /** An empirical formula with more atoms than this gets a note: such a fit says more about the data's precision than about the compound. */
 export const LARGE_EMPIRICAL = 60;
@@ -67,18 +68,38 @@ function reduceFit(f: FormulaFit): { formula: string; hill: string; multiple: nu
   return { formula: conventionalFormulaOf(counts), hill: formulaMassDetail(Object.entries(counts).map(([s, c]) => `${s}${c}`).join(''), { abbreviations: 'none' }).formula, multiple: g };
 }
 
-const gcd = (a: number, b: number): number => (b ? gcd(b, a % b) : a);
+const MOLAR_MASS_VALUE = /^[0-9]+(\.[0-9]+)?(\s*g\/mol)?$/;
+const MOLAR_MASS_RANGE = /^([0-9.]+)\s*(?:-|–|\.\.)\s*([0-9.]+)$/;
+
+/**
+ * How a molar mass given for the molecular formula is written: one value ('180.16', '180.16
+ * g/mol'), a range ('170-190', '170–190', '170..190') with its two ends, or null for neither. The
+ * text is trimmed and at most 64 characters are read, with one run of spaces at most between its
+ * parts, so no text costs more than one pass.
+ *
+ * @example
+ * molarMassForm(' 180.16 g/mol ') // { kind: 'value' }
+ * molarMassForm('170-190') // { kind: 'range', lo: '170', hi: '190' }
+ * molarMassForm('heavy') // null
+ */
+export function molarMassForm(text: string): { kind: 'value' } | { kind: 'range'; lo: string; hi: string } | null {
+  const t = text.trim();
+  if (t.length > 64) return null;
+  if (MOLAR_MASS_VALUE.test(t)) return { kind: 'value' };
+  const range = MOLAR_MASS_RANGE.exec(t);
+  return range ? { kind: 'range', lo: range[1], hi: range[2] } : null;
+}
 
 /** Reads --molar-mass: one value (searched within ±1 %) or a range. */
 function molarWindow(text: string): { lo: number; hi: number; text: string } {
-  const range = /^\s*([0-9.]+)\s*(?:-|–|\.\.)\s*([0-9.]+)\s*$/.exec(text);
-  if (range) {
-    const lo = Number(range[1]);
-    const hi = Number(range[2]);
+  const form = molarMassForm(text);
+  if (form?.kind === 'range') {
+    const lo = Number(form.lo);
+    const hi = Number(form.hi);
     if (!(lo > 0 && hi > lo && hi <= 100_000)) throw fail({ code: 'BAD_OPTION', message: `\`molarMass: ${text}\`: a range goes from the lower to the higher molar mass, both above zero`, options: ['molarMass'] });
-    return { lo, hi, text: `${range[1]}–${range[2]} g/mol` };
+    return { lo, hi, text: `${form.lo}–${form.hi} g/mol` };
   }
-  if (!/^\s*[0-9]+(\.[0-9]+)?\s*(g\/mol)?\s*$/.test(text)) throw fail({ code: 'BAD_OPTION', message: `\`molarMass\` takes a number of g/mol or a range such as 170-190, not '${text}'`, options: ['molarMass'] });
+  if (form === null) throw fail({ code: 'BAD_OPTION', message: `\`molarMass\` takes a number of g/mol or a range such as 170-190, not '${text}'`, options: ['molarMass'] });
   const M = Number(text.replace(/g\/mol/, '').trim());
   if (!(M > 0 && M <= 100_000)) throw fail({ code: 'BAD_OPTION', message: 'the molar mass must be positive (at most 100000 g/mol)' });
   return { lo: M * (1 - MOLAR_MASS_WINDOW), hi: M * (1 + MOLAR_MASS_WINDOW), text: `${text.replace(/g\/mol/, '').trim()} g/mol ± 1 %` };

@@ -149,9 +149,32 @@ export function isSinglePair(text: string): boolean {
  * splitTrailingValues('C20H25N3O  C=72.30 H=7.91') // ['C20H25N3O', 'C=72.30 H=7.91']
  */
 export function splitTrailingValues(line: string): [string, string] | null {
-  const m = /^(.*?)[\s;,]+((?:[A-Z][a-z]?\s*[=:]\s*[-+]?[0-9.]+\s*%?[\s,;]*)+)$/.exec(line.trim());
-  return m ? [m[1].trim(), m[2].trim()] : null;
+  // The entries run from the first of them to the end, each from its capital to the next one's:
+  // read backwards, the line is scanned once (a pattern `^(.*?)[\s;,]+(entries)$` tried every
+  // start of the entries against every run of spaces, quadratic in a long line of them).
+  const t = line.trim();
+  const runsToEnd = new Uint8Array(t.length + 1);
+  runsToEnd[t.length] = 1;
+  let first = -1;
+  for (let i = t.length - 1; i > 0; i--) {
+    const c = t.charCodeAt(i);
+    if (c < 65 || c > 90) continue;
+    ENTRY.lastIndex = i;
+    if (ENTRY.test(t) && runsToEnd[ENTRY.lastIndex] === 1) {
+      runsToEnd[i] = 1;
+      if (isSeparator(t.charCodeAt(i - 1))) first = i;
+    }
+  }
+  if (first < 0) return null;
+  let end = first;
+  while (end > 0 && isSeparator(t.charCodeAt(end - 1))) end--;
+  return [t.slice(0, end).trim(), t.slice(first).trim()];
 }
+
+/** One `El=value` entry with what follows it up to the next (a sticky pattern: it matches where it is put). */
+const ENTRY = /[A-Z][a-z]?\s*[=:]\s*[-+]?[0-9.]+\s*%?[\s,;]*/y;
+/** A space, tab, ';' or ',': what may stand between a formula and its entries. */
+const isSeparator = (c: number) => c === 59 || c === 44 || /\s/.test(String.fromCharCode(c));
 
 /** One KEY=VALUE pair split at its first `=`, as written and trimmed. */
 export interface KeyValuePair extends KeyValue {

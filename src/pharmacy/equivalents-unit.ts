@@ -10,6 +10,7 @@ import type { Note } from '../errors/issue.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
 import { inRange } from '../assay/read-quantity.js';
 import { measure } from '../calc/measure.js';
+import { MAX_EXPRESSION_LENGTH } from '../calc/parse-expression.js';
 import { exact } from '../sigfig/measured.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
 import { AMOUNT, pow10, sameDims, UNIT_SYMBOLS, unitOf, VOLUME } from '../sigfig/units.js';
@@ -20,8 +21,12 @@ import { AMOUNT, pow10, sameDims, UNIT_SYMBOLS, unitOf, VOLUME } from '../sigfig
  * is also the molar equivalents of a reagent in a synthesis (a ratio, not a charge).
  */
 const EQ = '([mµμu])?(Eq|eq)';
-const PER_VOLUME = new RegExp(`^(.*?)\\s*${EQ}\\s*\\/\\s*(\\S+)$`);
-const AMOUNT_OF_CHARGE = new RegExp(`^(.*?)\\s*${EQ}$`);
+// the number's text is empty or ends in a non-space, so the spaces before the unit are tried once:
+// `(.*?)\s*` tried them again from every start, quadratic in a long run of spaces
+const PER_VOLUME = new RegExp(`^(|.*?\\S)\\s*${EQ}\\s*\\/\\s*(\\S+)$`);
+const AMOUNT_OF_CHARGE = new RegExp(`^(|.*?\\S)\\s*${EQ}$`);
+/** A text longer than any expression is no strength in equivalents (the common reader then refuses it, INPUT_TOO_LONG). */
+const tooLong = (t: string) => t.length > MAX_EXPRESSION_LENGTH;
 
 /** The equivalents units read (for hints): per volume, with l and ml read as L and mL. */
 export const EQUIVALENTS_UNITS = 'Eq/L, mEq/L, mEq/mL, µEq/mL (meq for mEq; l and ml for L and mL)';
@@ -46,7 +51,8 @@ export interface ChargePerVolume {
  * isChargePerVolume('0.9 %') // false
  */
 export function isChargePerVolume(text: string): boolean {
-  return PER_VOLUME.test(text.trim());
+  const t = text.trim();
+  return !tooLong(t) && PER_VOLUME.test(t);
 }
 
 /** The vocabulary's factor of a prefix of Eq: that of the same prefix of mol ('m' → mmol, -3). */
@@ -116,7 +122,7 @@ function readNumber(text: string, numberText: string, lead: number, what: string
 export function readChargePerVolume(text: string, what: string, notes: Note[]): ChargePerVolume | null {
   const t = text.trim();
   const lead = text.length - text.trimStart().length;
-  const m = PER_VOLUME.exec(t);
+  const m = tooLong(t) ? null : PER_VOLUME.exec(t);
   if (!m) return null;
   const perColumn = lead + t.length - m[4].length + 1;
   if (m[2] === undefined) refuseUnknownPrefix(text, t, m[1], lead);
@@ -154,7 +160,7 @@ export function readChargePerVolume(text: string, what: string, notes: Note[]): 
 export function readChargeAmount(text: string, what: string, notes: Note[]): Quantity {
   const t = text.trim();
   const lead = text.length - text.trimStart().length;
-  const m = AMOUNT_OF_CHARGE.exec(t);
+  const m = tooLong(t) ? null : AMOUNT_OF_CHARGE.exec(t);
   if (!m) throw fail({ code: 'BAD_AMOUNT', message: `a milliequivalent target is written like '20 mEq'; got '${text}'` }, text);
   if (m[2] === undefined) refuseUnknownPrefix(text, t, m[1], lead);
   refuseBareEq(text, m[2], m[3], lead + t.length - m[3].length + 1);

@@ -40,7 +40,8 @@ const W_W_UNITS: [string, number][] = [['% w/w', -2], ['mg/g', -3], ['mg/kg', -6
 export function strengthForms(text: string): StrengthForms {
   const notes: Note[] = [];
   const t = text.trim();
-  const m = /^(.*?)\s*(w\/v|w\/w|v\/v)$/i.exec(t);
+  // the body is empty or ends in a non-space, so the spaces before the kind are tried once (linear)
+  const m = /^(|.*?\S)\s*(w\/v|w\/w|v\/v)$/i.exec(t);
   const body = m ? m[1] : t;
   const isRatio = /^[0-9.]+\s*:\s*[0-9.]+$/.test(body);
   const isPercent = /%$/.test(body);

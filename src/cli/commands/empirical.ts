@@ -9,7 +9,7 @@ import { readPeaks } from '../../empirical/pattern-match.js';
 import { readFound } from '../../analysis/found-values.js';
 import { PondusError } from '../../errors/pondus-error.js';
 import { combustion, combustionJson, PRODUCTS, type CombustionResult } from '../../empirical/combustion.js';
-import { empirical, empiricalJson, type EmpiricalResult } from '../../empirical/empirical-formula.js';
+import { empirical, empiricalJson, molarMassForm, type EmpiricalResult } from '../../empirical/empirical-formula.js';
 import { readMeasurementSheet, type MeasurementRow } from '../../empirical/measurement-sheet.js';
 import { runWithSheet } from './sheet-runner.js';
 import { hillOrder } from '../../formula/hill.js';
@@ -49,12 +49,13 @@ interface EmpiricalRow extends EmpiricalResult {
 
 /** The presenter for `pondus empirical`. */
 export function empiricalPresenter(o: EmpiricalCliOptions): Presenter<EmpiricalRow> {
-  if (o.molarMass !== undefined && !/^\s*[0-9]+(\.[0-9]+)?\s*(g\/mol)?\s*$|^\s*([0-9.]+)\s*(?:-|–|\.\.)\s*([0-9.]+)\s*$/.test(o.molarMass)) {
-    throw fail({ code: 'USAGE', message: `--molar-mass takes a number of g/mol or a range such as 170-190, not '${o.molarMass}'` });
+  const form = o.molarMass === undefined ? undefined : molarMassForm(o.molarMass);
+  if (form === null) {
+    const shown = o.molarMass!.length > 40 ? `${o.molarMass!.slice(0, 40)}…` : o.molarMass;
+    throw fail({ code: 'USAGE', message: `--molar-mass takes a number of g/mol or a range such as 170-190, not '${shown}'` });
   }
-  const range = o.molarMass === undefined ? null : /^\s*([0-9.]+)\s*(?:-|–|\.\.)\s*([0-9.]+)\s*$/.exec(o.molarMass);
-  if (range && !(Number(range[1]) > 0 && Number(range[1]) < Number(range[2]))) throw fail({ code: 'USAGE', message: `--molar-mass ${o.molarMass}: a range goes from the lower to the higher molar mass, both above zero` });
-  if (o.molarMass !== undefined && !range && !(parseFloat(o.molarMass) > 0)) throw fail({ code: 'USAGE', message: 'the molar mass must be positive' });
+  if (form?.kind === 'range' && !(Number(form.lo) > 0 && Number(form.lo) < Number(form.hi))) throw fail({ code: 'USAGE', message: `--molar-mass ${o.molarMass}: a range goes from the lower to the higher molar mass, both above zero` });
+  if (o.molarMass !== undefined && form?.kind === 'value' && !(parseFloat(o.molarMass) > 0)) throw fail({ code: 'USAGE', message: 'the molar mass must be positive' });
   if (o.molarMass !== undefined && o.sheetRows && Object.values(o.sheetRows).some((r) => r.molarMass !== undefined)) {
     throw fail({ code: 'USAGE', message: "the sheet has a molar-mass column and --molar-mass was given too: use one (the column for each row, or --molar-mass for all)" });
   }
