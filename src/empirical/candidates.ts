@@ -43,7 +43,7 @@ import { readNumber } from '../sigfig/read-number.js';
 import { readIonNotation } from '../ions/read-ion-notation.js';
 import type { IonNotation } from '../ions/ion-notation.js';
 import { patternSimilarity, readPeaks, type MeasuredPeak } from './pattern-match.js';
-import { checkInputLength } from './input-length.js';
+import { checkInputLength } from '../errors/input-length.js';
 
 /**
  * Formulas a search may visit (the inner carbon-and-hydrogen steps plus the branches above them):

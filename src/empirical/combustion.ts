@@ -24,7 +24,7 @@ import { exact } from '../sigfig/measured.js';
 import { add, divide, multiply, quantity, subtract, type Quantity } from '../sigfig/quantity.js';
 import { searchFormula, type FormulaFit } from './formula-search.js';
 import type { Measurements } from './measurements.js';
-import { checkInputLength } from './input-length.js';
+import { checkInputLength } from '../errors/input-length.js';
 import { PRODUCTS } from './search-defaults.js';
 import { displayQuantity } from '../sigfig/display-quantity.js';
 import type { RoundingMode } from '../sigfig/round.js';

@@ -9,7 +9,7 @@ import { readMeasurements } from './measurements.js';
 import { DEFAULT_TOLERANCE, prepareData, searchFormula, searchMolecular, type FormulaFit } from './formula-search.js';
 import { hillOrder } from '../formula/hill.js';
 import { conventionalFormulaOf } from './written.js';
-import { checkInputLength } from './input-length.js';
+import { checkInputLength } from '../errors/input-length.js';
 import { gcd } from '../exact/gcd.js';
 
 /** An empirical formula with more atoms than this gets a note: such a fit says more about the data's precision than about the compound. */

@@ -11,6 +11,7 @@
  * (solute-names.ts). Label strengths are taken as nominal (exact) and results
  * kept at working precision unless the strengths are marked measured.
  */
+import { checkInputLength } from '../errors/input-length.js';
 import type { Note } from '../errors/issue.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
 import { readKeyValuePair } from '../key-values/read-key-values.js';
@@ -97,7 +98,7 @@ const NAME_LIKE = /[a-z]{3,}|\s/;
  * @param text - the solutes and their strengths: 'NaCl=0.45 %, KCl=0.15 %', 'C6H12O6·H2O=5 %, NaCl=0.45 %'.
  * @param o - `measured` for measured strengths (their figures are kept), atomic-weight options.
  * @returns each component with its kind (salt or non-electrolyte), particles and mOsm/L (a salt with its ions and mEq); the total (complete dissociation of the salts, one particle per molecule of a non-electrolyte), its parts from salts and from non-electrolytes, and the mmol/L and mEq/L of each ion.
- * @throws PondusError: EMPTY_INPUT for no solute; INPUT_TOO_LONG past {@link MAX_COMPONENTS} solutes; BAD_RECORD for a piece not written solute=strength, e.g. NaCl=0.9 % (with its column), or a solute that neither splits into known ions nor is a neutral compound of C, H, N and O (an amine hydrochloride, a metal salt of unknown ions); AMBIGUOUS_READING for 'dextrose' or 'glucose' without its form (the monohydrate or anhydrous); a solute's own error (its formula, its strength, its ions) with the solute named and its column; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
+ * @throws PondusError: EMPTY_INPUT for no solute; INPUT_TOO_LONG past {@link MAX_COMPONENTS} solutes or 10,000 characters; BAD_RECORD for a piece not written solute=strength, e.g. NaCl=0.9 % (with its column), or a solute that neither splits into known ions nor is a neutral compound of C, H, N and O (an amine hydrochloride, a metal salt of unknown ions); AMBIGUOUS_READING for 'dextrose' or 'glucose' without its form (the monohydrate or anhydrous); a solute's own error (its formula, its strength, its ions) with the solute named and its column; BAD_ARGUMENT for an argument of the wrong kind (from the public API's boundary).
  * @example
  * const r = osmolarity('NaCl=0.9 %')
  * displayQuantity(r.osmolarity, 'mM').figure // '308.0'
@@ -107,6 +108,7 @@ const NAME_LIKE = /[a-z]{3,}|\s/;
  * displayQuantity(d.nonElectrolyteOsmolarity, 'mM').figure // '252.3'
  */
 export function osmolarity(text: string, o: OsmolarityOptions = {}): OsmolarityResult {
+  checkInputLength(text, 'the solution');
   const list = pieces(text);
   if (list.length === 0) throw fail({ code: 'EMPTY_INPUT', message: "give the solutes and their strengths: 'NaCl=0.9 %'" }, text);
   if (list.length > MAX_COMPONENTS) throw fail({ code: 'INPUT_TOO_LONG', message: `more than ${MAX_COMPONENTS} solutes in one solution` }, text);

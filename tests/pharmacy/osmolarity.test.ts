@@ -191,6 +191,13 @@ describe('the solution list', () => {
     // 'Cl=1 %' is also the end of 'KCl=1 %'
     expect(failure('KCl=1 %, Cl=1 %').column).toBe(10);
   });
+
+  it('a text past the limit is refused before it is read, without being quoted back', () => {
+    const long = `NaCl=0.9 %, ${'ab c '.repeat(4000)}`;
+    const e = failure(long);
+    expect(e.code).toBe('INPUT_TOO_LONG');
+    expect(e.message).toBe('the solution is 20,012 characters long; the limit is 10,000');
+  });
 });
 
 describe('pondus osmolarity with non-electrolytes: the table, JSON, CSV and a batch', () => {

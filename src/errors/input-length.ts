@@ -1,10 +1,10 @@
 /**
- * The length check every reader of the formula-from-measurement commands makes before any work:
- * a measurement set, a sample or product mass, found percents or a measured pattern longer than
- * the limit is refused at once (INPUT_TOO_LONG), so no reader is ever run on megabytes of text.
+ * The length check a reader makes before any work: a measurement set, a sample or product mass,
+ * found percents, a measured pattern or a solution of solutes longer than the limit is refused at
+ * once (INPUT_TOO_LONG), so no reader is ever run on megabytes of text.
  */
-import type { Issue } from '../errors/issue.js';
-import { fail } from '../errors/pondus-error.js';
+import type { Issue } from './issue.js';
+import { fail } from './pondus-error.js';
 
 /** Longest text read as one measurement set, mass or list of found values (the formula limit too). */
 export const MAX_INPUT_LENGTH = 10_000;
