@@ -192,6 +192,11 @@ const ALIASES: Record<string, string> = {
   'g mol-1': 'g/mol',
   'g mol⁻¹': 'g/mol',
   'g cm-3': 'g/mL',
+  // a density in kilograms per litre is the same number in grams per millilitre, exactly
+  'kg/L': 'g/mL',
+  'kg L-1': 'g/mL',
+  'kg L⁻¹': 'g/mL',
+  'kg·L⁻¹': 'g/mL',
   // the same amount per a thousandth of the volume: exactly the unit a thousand times smaller
   'mmol/mL': 'mol/L',
   'µmol/mL': 'mmol/L',
@@ -245,6 +250,15 @@ let derived = false;
 function aliasTable(): Record<string, string> {
   if (derived) return ALIASES;
   derived = true;
+  // a litre written with a lower-case l ('mmol/l', 'µg/ml', 'g/100 ml', 'mol l-1', 'g ml⁻¹'), as 'mol/l'
+  // and 'g/l' are: every per-litre or per-millilitre spelling is read with l as with L (SI Brochure,
+  // 9th edition, table 8: both l and L are symbols of the litre)
+  for (const k of [...TABLE.map((u) => u.symbol), ...Object.keys(ALIASES)]) {
+    const m = /^(.*\/(?:100 ?)?[mµuμd]?)L$|^(.*[ ·][mµuμd]?)L(-1|\u207b\u00b9)$/.exec(k);
+    if (!m || !/[a-zA-Zµμ%]/.test(m[1] ?? m[2])) continue;
+    const lower = m[1] !== undefined ? `${m[1]}l` : `${m[2]}l${m[3]}`;
+    if (ALIASES[lower] === undefined && !BY_SYMBOL.has(lower)) ALIASES[lower] = ALIASES[k] ?? k;
+  }
   // a minus sign (U+2212) where a hyphen stands for one ('mol dm−3', as typeset texts print it), and
   // the exponent written with a caret ('mol L^-1', 'g cm^-3', as plain text writes it)
   for (const k of Object.keys(ALIASES)) {
@@ -252,15 +266,6 @@ function aliasTable(): Record<string, string> {
     ALIASES[k.replace(/-/g, '\u2212')] = ALIASES[k];
     ALIASES[k.replace(/-([0-9])$/, '^-$1')] = ALIASES[k];
     ALIASES[k.replace(/-([0-9])$/, '^\u2212$1')] = ALIASES[k];
-  }
-  // a litre written with a lower-case l after the slash ('mmol/l', 'µg/ml', 'g/100 ml'), as 'mol/l' and 'g/l'
-  // are: every per-litre or per-millilitre spelling is read with l as with L (SI Brochure, 9th edition,
-  // table 8: both l and L are symbols of the litre)
-  for (const k of [...TABLE.map((u) => u.symbol), ...Object.keys(ALIASES)]) {
-    const m = /^(.*\/(?:100 ?)?[mµuμd]?)L$/.exec(k);
-    if (!m || !/[a-zA-Zµμ%]/.test(m[1])) continue;
-    const lower = `${m[1]}l`;
-    if (ALIASES[lower] === undefined && !BY_SYMBOL.has(lower)) ALIASES[lower] = ALIASES[k] ?? k;
   }
   // the Greek small letter mu (U+03BC) where the micro sign (U+00B5) stands, as keyboards and fonts
   // give it: every spelling with µ is read with μ too ('μg/mL', 'μmol/l')
