@@ -10,6 +10,7 @@ import type { Note } from '../errors/issue.js';
 import { fail, PondusError } from '../errors/pondus-error.js';
 import { inRange } from '../assay/read-quantity.js';
 import { measure } from '../calc/measure.js';
+import { checkInputLength } from '../errors/input-length.js';
 import { MAX_EXPRESSION_LENGTH } from '../calc/parse-expression.js';
 import { exact } from '../sigfig/measured.js';
 import { divide, multiply, quantity, type Quantity } from '../sigfig/quantity.js';
@@ -25,7 +26,7 @@ const EQ = '([mµμu])?(Eq|eq)';
 // `(.*?)\s*` tried them again from every start, quadratic in a long run of spaces
 const PER_VOLUME = new RegExp(`^(|.*?\\S)\\s*${EQ}\\s*\\/\\s*(\\S+)$`);
 const AMOUNT_OF_CHARGE = new RegExp(`^(|.*?\\S)\\s*${EQ}$`);
-/** A text longer than any expression is no strength in equivalents (the common reader then refuses it, INPUT_TOO_LONG). */
+/** A text longer than any expression is not looked at as a strength in equivalents (its reader refuses it, INPUT_TOO_LONG). */
 const tooLong = (t: string) => t.length > MAX_EXPRESSION_LENGTH;
 
 /** The equivalents units read (for hints): per volume, with l and ml read as L and mL. */
@@ -115,14 +116,15 @@ function readNumber(text: string, numberText: string, lead: number, what: string
  * @param what - what it is, for messages: 'the strength'.
  * @param notes - where the notes of reading the number go.
  * @returns the strength (held in mol/L), the equivalents unit and the volume unit as written; null when not in equivalents.
- * @throws PondusError, quoting `text`: AMBIGUOUS_READING for a bare 'eq'; UNKNOWN_UNIT for a volume unit pondus does not know; BAD_AMOUNT for equivalents per something other than a volume, no number, or one that is not positive; the codes of reading the number (BAD_EXPRESSION, UNKNOWN_UNIT, NUMBER_OUT_OF_RANGE).
+ * @throws PondusError, quoting `text`: INPUT_TOO_LONG past 10,000 characters; AMBIGUOUS_READING for a bare 'eq'; UNKNOWN_UNIT for a volume unit pondus does not know; BAD_AMOUNT for equivalents per something other than a volume, no number, or one that is not positive; the codes of reading the number (BAD_EXPRESSION, UNKNOWN_UNIT, NUMBER_OUT_OF_RANGE).
  * @example
  * readChargePerVolume('2 mEq/ml', 'the strength', []).value.value.toString() // '2' (Eq/L)
  */
 export function readChargePerVolume(text: string, what: string, notes: Note[]): ChargePerVolume | null {
+  checkInputLength(text, what, MAX_EXPRESSION_LENGTH);
   const t = text.trim();
   const lead = text.length - text.trimStart().length;
-  const m = tooLong(t) ? null : PER_VOLUME.exec(t);
+  const m = PER_VOLUME.exec(t);
   if (!m) return null;
   const perColumn = lead + t.length - m[4].length + 1;
   if (m[2] === undefined) refuseUnknownPrefix(text, t, m[1], lead);
@@ -153,14 +155,15 @@ export function readChargePerVolume(text: string, what: string, notes: Note[]): 
  * @param what - what it is, for messages: 'the target'.
  * @param notes - where the notes of reading the number go.
  * @returns the amount of charge, held in mol (Eq).
- * @throws PondusError, quoting `text`: BAD_AMOUNT for a text not written in equivalents, no number, or one that is not positive; AMBIGUOUS_READING for a bare 'eq'; the codes of reading the number.
+ * @throws PondusError, quoting `text`: INPUT_TOO_LONG past 10,000 characters; BAD_AMOUNT for a text not written in equivalents, no number, or one that is not positive; AMBIGUOUS_READING for a bare 'eq'; the codes of reading the number.
  * @example
  * readChargeAmount('20 mEq', 'the target', []).value.toString() // '0.02'
  */
 export function readChargeAmount(text: string, what: string, notes: Note[]): Quantity {
+  checkInputLength(text, what, MAX_EXPRESSION_LENGTH);
   const t = text.trim();
   const lead = text.length - text.trimStart().length;
-  const m = tooLong(t) ? null : AMOUNT_OF_CHARGE.exec(t);
+  const m = AMOUNT_OF_CHARGE.exec(t);
   if (!m) throw fail({ code: 'BAD_AMOUNT', message: `a milliequivalent target is written like '20 mEq'; got '${text}'` }, text);
   if (m[2] === undefined) refuseUnknownPrefix(text, t, m[1], lead);
   refuseBareEq(text, m[2], m[3], lead + t.length - m[3].length + 1);

@@ -13,6 +13,8 @@ import { divide, multiply, quantity, subtract, type Quantity } from '../sigfig/q
 import { baseUnitText, notReadHint, pow10, sameDims } from '../sigfig/units.js';
 import { exact } from '../sigfig/measured.js';
 import { isChargePerVolume, readChargePerVolume } from '../pharmacy/equivalents-unit.js';
+import { checkInputLength } from '../errors/input-length.js';
+import { MAX_EXPRESSION_LENGTH } from '../calc/parse-expression.js';
 import { displayInstruction, fewFiguresNote, inputFigures, instruction, volumeUnitFor, type Instruction } from '../sigfig/instruction.js';
 import { dilutionWarning } from './warnings.js';
 
@@ -166,6 +168,9 @@ export function dilute(stockText: string, targetText: string | undefined, volume
  * One in equivalents and the other in mol or g is refused: the conversion needs the salt's charge.
  */
 function chargeStrengths(stockText: string, targetText: string | undefined, notes: Note[]): { stock: Quantity; target: Quantity | null; toWritten: number; unitText: string } | null {
+  // a text past the limit is refused before either is looked at, naming which it is
+  checkInputLength(stockText, 'the stock concentration', MAX_EXPRESSION_LENGTH);
+  if (targetText !== undefined) checkInputLength(targetText, 'the target concentration', MAX_EXPRESSION_LENGTH);
   const s = isChargePerVolume(stockText);
   const t = targetText !== undefined && isChargePerVolume(targetText);
   if (!s && !t) return null;
