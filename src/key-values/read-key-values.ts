@@ -152,16 +152,17 @@ export function splitTrailingValues(line: string): [string, string] | null {
   // The entries run from the first of them to the end, each from its capital to the next one's:
   // read backwards, the line is scanned once (a pattern `^(.*?)[\s;,]+(entries)$` tried every
   // start of the entries against every run of spaces, quadratic in a long line of them).
+  // An entry holds no capital past its own first letter, so the one that can continue a run to
+  // the end is the one that ends where the nearest run found so far starts.
   const t = line.trim();
-  const runsToEnd = new Uint8Array(t.length + 1);
-  runsToEnd[t.length] = 1;
+  let run = t.length;
   let first = -1;
   for (let i = t.length - 1; i > 0; i--) {
     const c = t.charCodeAt(i);
     if (c < 65 || c > 90) continue;
     ENTRY.lastIndex = i;
-    if (ENTRY.test(t) && runsToEnd[ENTRY.lastIndex] === 1) {
-      runsToEnd[i] = 1;
+    if (ENTRY.test(t) && ENTRY.lastIndex === run) {
+      run = i;
       if (isSeparator(t.charCodeAt(i - 1))) first = i;
     }
   }
